@@ -1,0 +1,65 @@
+package com.stagewise.cli;
+
+import com.stagewise.circuit.InvalidInputException;
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The root of the command line: {@code stagewise <command> …}. */
+@Command(
+    name = "stagewise",
+    mixinStandardHelpOptions = true,
+    versionProvider = StagewiseCommand.Version.class,
+    description = "Bench tool for diagnosing op-amp stages and keeping the repair history.",
+    subcommands = {CommandLine.HelpCommand.class})
+public final class StagewiseCommand implements Runnable {
+
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public void run() {
+    throw new CommandLine.ParameterException(spec.commandLine(), "Name a command, e.g. 'solve'.");
+  }
+
+  /**
+   * Runs the command line and returns the process exit code.
+   *
+   * <p>Bad input (unknown option, a bad file) prints one message and returns {@link
+   * ExitCode#BAD_INPUT}; any other failure prints a short message and returns {@link
+   * ExitCode#INTERNAL_ERROR}. Stack traces are never printed for bad input.
+   */
+  public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+    CommandLine line = new CommandLine(new StagewiseCommand());
+    line.setOut(out);
+    line.setErr(err);
+    line.setParameterExceptionHandler(
+        (ex, argv) -> {
+          err.println("stagewise: " + ex.getMessage());
+          err.flush();
+          return ExitCode.BAD_INPUT;
+        });
+    line.setExecutionExceptionHandler(
+        (ex, cmd, parseResult) -> {
+          if (ex instanceof InvalidInputException) {
+            err.println("stagewise: " + ex.getMessage());
+          } else {
+            err.println("stagewise: internal error: " + ex);
+          }
+          err.flush();
+          return ex instanceof InvalidInputException ? ExitCode.BAD_INPUT : ExitCode.INTERNAL_ERROR;
+        });
+    int code = line.execute(args);
+    out.flush();
+    err.flush();
+    return code;
+  }
+
+  /** Prints the version recorded in the jar's manifest. */
+  static final class Version implements CommandLine.IVersionProvider {
+    @Override
+    public String[] getVersion() {
+      String version = StagewiseCommand.class.getPackage().getImplementationVersion();
+      return new String[] {"stagewise " + (version == null ? "development build" : version)};
+    }
+  }
+}
