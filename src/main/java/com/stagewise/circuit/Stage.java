@@ -1,0 +1,190 @@
+package com.stagewise.circuit;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.function.UnaryOperator;
+
+/**
+ * One op-amp circuit with its parts, rails and test inputs: what a stage sheet holds.
+ *
+ * <p>Nets are named strings. The ground net is the reference at 0 V; rails and inputs are driven
+ * nets; every other net is solved for. The record is immutable; the {@code with…} methods return
+ * modified copies (the diagnosis uses them to apply a fault).
+ *
+ * @param title a short description, e.g. "Input buffer, left channel"
+ * @param board the board model the stage belongs to (may be empty)
+ * @param ground the reference net
+ * @param rails the supply rails
+ * @param inputs the test inputs
+ * @param parts resistors and capacitors
+ * @param amplifiers op-amp sections
+ */
+public record Stage(
+    String title,
+    String board,
+    String ground,
+    List<Rail> rails,
+    List<TestInput> inputs,
+    List<Part> parts,
+    List<Amplifier> amplifiers) {
+
+  /** Copies the lists; see the record description. */
+  public Stage {
+    title = title == null ? "" : title;
+    board = board == null ? "" : board;
+    Part.requireName(ground, "ground");
+    rails = List.copyOf(Objects.requireNonNull(rails, "rails"));
+    inputs = List.copyOf(Objects.requireNonNull(inputs, "inputs"));
+    parts = List.copyOf(Objects.requireNonNull(parts, "parts"));
+    amplifiers = List.copyOf(Objects.requireNonNull(amplifiers, "amplifiers"));
+  }
+
+  /** Returns every net of the stage, ground first, then in order of first mention. */
+  public Set<String> nets() {
+    Set<String> nets = new LinkedHashSet<>();
+    nets.add(ground);
+    rails.forEach(rail -> nets.add(rail.net()));
+    inputs.forEach(input -> nets.add(input.net()));
+    for (Part part : parts) {
+      nets.add(part.netA());
+      nets.add(part.netB());
+    }
+    for (Amplifier amp : amplifiers) {
+      for (Terminal terminal : Terminal.values()) {
+        nets.add(amp.net(terminal));
+      }
+    }
+    return nets;
+  }
+
+  /** Returns whether the net is ground, a rail or a test input. */
+  public boolean isDriven(String net) {
+    return net.equals(ground) || rail(net).isPresent() || input(net).isPresent();
+  }
+
+  /** Returns the rail on a net, if the net is a rail. */
+  public Optional<Rail> rail(String net) {
+    return rails.stream().filter(r -> r.net().equals(net)).findFirst();
+  }
+
+  /** Returns the test input on a net, if any. */
+  public Optional<TestInput> input(String net) {
+    return inputs.stream().filter(i -> i.net().equals(net)).findFirst();
+  }
+
+  /** Returns the part with this designator, if any. */
+  public Optional<Part> part(String ref) {
+    return parts.stream().filter(p -> p.ref().equals(ref)).findFirst();
+  }
+
+  /** Returns the section with this designator, if any. */
+  public Optional<Amplifier> amplifier(String ref) {
+    return amplifiers.stream().filter(a -> a.ref().equals(ref)).findFirst();
+  }
+
+  /**
+   * Returns the nominal voltage of every driven net: ground at 0, rails at their volts, inputs at
+   * their DC level.
+   */
+  public Map<String, Double> drivenVolts() {
+    Map<String, Double> volts = new LinkedHashMap<>();
+    volts.put(ground, 0.0);
+    rails.forEach(rail -> volts.put(rail.net(), rail.volts()));
+    inputs.forEach(input -> volts.put(input.net(), input.dc()));
+    return volts;
+  }
+
+  /** Returns the package designators in order of first mention, e.g. {@code [U1, U2]}. */
+  public List<String> packages() {
+    List<String> refs = new ArrayList<>();
+    for (Amplifier amp : amplifiers) {
+      if (!refs.contains(amp.packageRef())) {
+        refs.add(amp.packageRef());
+      }
+    }
+    return refs;
+  }
+
+  /** Returns the package type of a package designator, if the stage has that package. */
+  public Optional<PackageType> packageType(String packageRef) {
+    return amplifiers.stream()
+        .filter(a -> a.packageRef().equals(packageRef))
+        .map(Amplifier::packageType)
+        .findFirst();
+  }
+
+  /**
+   * Returns the net on every used package pin, keyed {@code PACKAGE.PIN} (e.g. {@code U1.6}), in
+   * package then pin order. A pin is used when a section of the stage has a terminal on it.
+   */
+  public Map<String, String> pinNets() {
+    Map<String, String> pins = new LinkedHashMap<>();
+    for (String pkg : packages()) {
+      Map<Integer, String> byPin = new TreeMap<>();
+      for (Amplifier amp : amplifiers) {
+        if (amp.packageRef().equals(pkg)) {
+          for (Terminal terminal : Terminal.values()) {
+            byPin.putIfAbsent(amp.pin(terminal), amp.net(terminal));
+          }
+        }
+      }
+      byPin.forEach((pin, net) -> pins.put(pkg + "." + pin, net));
+    }
+    return pins;
+  }
+
+  /** Returns the sections that sit in one package. */
+  public List<Amplifier> sectionsOf(String packageRef) {
+    return amplifiers.stream().filter(a -> a.packageRef().equals(packageRef)).toList();
+  }
+
+  /** Returns a copy with the parts replaced. */
+  public Stage withParts(List<Part> newParts) {
+    return new Stage(title, board, ground, rails, inputs, newParts, amplifiers);
+  }
+
+  /** Returns a copy with the sections replaced. */
+  public Stage withAmplifiers(List<Amplifier> newAmplifiers) {
+    return new Stage(title, board, ground, rails, inputs, parts, newAmplifiers);
+  }
+
+  /** Returns a copy with the rails replaced. */
+  public Stage withRails(List<Rail> newRails) {
+    return new Stage(title, board, ground, newRails, inputs, parts, amplifiers);
+  }
+
+  /** Returns a copy with the inputs replaced. */
+  public Stage withInputs(List<TestInput> newInputs) {
+    return new Stage(title, board, ground, rails, newInputs, parts, amplifiers);
+  }
+
+  /** Returns a copy with the part of this designator changed by {@code change}. */
+  public Stage withPart(String ref, UnaryOperator<Part> change) {
+    return withParts(parts.stream().map(p -> p.ref().equals(ref) ? change.apply(p) : p).toList());
+  }
+
+  /** Returns a copy with one more part. */
+  public Stage plusPart(Part part) {
+    List<Part> more = new ArrayList<>(parts);
+    more.add(part);
+    return withParts(more);
+  }
+
+  /** Returns a copy without the part of this designator. */
+  public Stage minusPart(String ref) {
+    return withParts(parts.stream().filter(p -> !p.ref().equals(ref)).toList());
+  }
+
+  /** Returns a copy with the section of this designator changed by {@code change}. */
+  public Stage withAmplifier(String ref, UnaryOperator<Amplifier> change) {
+    return withAmplifiers(
+        amplifiers.stream().map(a -> a.ref().equals(ref) ? change.apply(a) : a).toList());
+  }
+}

@@ -1,0 +1,44 @@
+package com.stagewise.circuit;
+
+/**
+ * A test input applied to a net: a DC level and optionally an AC amplitude at one frequency.
+ *
+ * @param net the driven net
+ * @param dc the DC level in volts
+ * @param ac the AC amplitude in volts (peak or RMS, as the readings use it); 0 when none
+ * @param hz the AC frequency in hertz; 0 when there is no AC
+ */
+public record TestInput(String net, double dc, double ac, double hz) {
+
+  /** Checks the fields; see the record description. */
+  public TestInput {
+    Part.requireName(net, "net");
+    if (!Double.isFinite(dc)) {
+      throw new InvalidInputException("", "dc", "input " + net + " dc (" + dc + ") must be a finite number");
+    }
+    if (!Double.isFinite(ac) || ac < 0) {
+      throw new InvalidInputException("", "ac", "input " + net + " ac (" + ac + ") must be 0 or more");
+    }
+    if (!Double.isFinite(hz) || hz < 0) {
+      throw new InvalidInputException("", "hz", "input " + net + " hz (" + hz + ") must be 0 or more");
+    }
+    if (ac > 0 && hz <= 0) {
+      throw new InvalidInputException("", "hz", "input " + net + " has an ac amplitude, so hz must be above 0");
+    }
+  }
+
+  /** Returns a DC-only input. */
+  public static TestInput dc(String net, double volts) {
+    return new TestInput(net, volts, 0, 0);
+  }
+
+  /** Returns whether the input carries an AC amplitude. */
+  public boolean hasAc() {
+    return ac > 0;
+  }
+
+  /** Returns a copy with another DC level. */
+  public TestInput withDc(double volts) {
+    return new TestInput(net, volts, ac, hz);
+  }
+}
