@@ -15,14 +15,58 @@ final class DenseLu {
   private DenseLu() {}
 
   /**
-   * Solves {@code a·x = b} in place and returns x, or null when the matrix is singular.
-   *
-   * <p>Both arrays are overwritten.
+   * An LU factorisation of a real matrix with partial pivoting, for solving with several right-hand
+   * sides.
    */
-  static double[] solve(double[][] a, double[] b) {
-    int n = b.length;
+  static final class Factors {
+    private final double[][] lu;
+    private final int[] order;
+
+    private Factors(double[][] lu, int[] order) {
+      this.lu = lu;
+      this.order = order;
+    }
+
+    /** Returns x with {@code a·x = b} for the factorised a; b is not changed. */
+    double[] solve(double[] b) {
+      int n = order.length;
+      double[] y = new double[n];
+      for (int i = 0; i < n; i++) {
+        double sum = b[order[i]];
+        double[] row = lu[i];
+        for (int j = 0; j < i; j++) {
+          sum -= row[j] * y[j];
+        }
+        y[i] = sum;
+      }
+      for (int i = n - 1; i >= 0; i--) {
+        double sum = y[i];
+        double[] row = lu[i];
+        for (int j = i + 1; j < n; j++) {
+          sum -= row[j] * y[j];
+        }
+        y[i] = sum / row[i];
+      }
+      return y;
+    }
+
+    /** Returns entry (k, k) of the inverse matrix. */
+    double inverseDiagonal(int k) {
+      double[] unit = new double[order.length];
+      unit[k] = 1;
+      return solve(unit)[k];
+    }
+  }
+
+  /**
+   * Factorises {@code a} in place and returns the factors, or null when the matrix is singular.
+   */
+  static Factors factor(double[][] a) {
+    int n = a.length;
     double[] rowScale = new double[n];
+    int[] order = new int[n];
     for (int i = 0; i < n; i++) {
+      order[i] = i;
       double max = 0;
       for (int j = 0; j < n; j++) {
         max = Math.max(max, Math.abs(a[i][j]));
@@ -45,28 +89,30 @@ final class DenseLu {
       if (best < SINGULAR) {
         return null;
       }
-      swap(a, b, rowScale, col, pivot);
+      if (pivot != col) {
+        double[] r = a[col];
+        a[col] = a[pivot];
+        a[pivot] = r;
+        double t = rowScale[col];
+        rowScale[col] = rowScale[pivot];
+        rowScale[pivot] = t;
+        int o = order[col];
+        order[col] = order[pivot];
+        order[pivot] = o;
+      }
       double[] pivotRow = a[col];
       for (int row = col + 1; row < n; row++) {
-        double factor = a[row][col] / pivotRow[col];
+        double[] target = a[row];
+        double factor = target[col] / pivotRow[col];
+        target[col] = factor;
         if (factor != 0) {
-          double[] target = a[row];
-          for (int j = col; j < n; j++) {
+          for (int j = col + 1; j < n; j++) {
             target[j] -= factor * pivotRow[j];
           }
-          b[row] -= factor * b[col];
         }
       }
     }
-    double[] x = new double[n];
-    for (int row = n - 1; row >= 0; row--) {
-      double sum = b[row];
-      for (int j = row + 1; j < n; j++) {
-        sum -= a[row][j] * x[j];
-      }
-      x[row] = sum / a[row][row];
-    }
-    return x;
+    return new Factors(a, order);
   }
 
   /**

@@ -108,12 +108,13 @@ final class Network {
   }
 
   /**
-   * Solves the DC system with every section in the given state; returns null when singular.
+   * Solves the DC system with every section in the given state; returns null when singular (a
+   * floating net, or a loop gain of exactly 1).
    *
    * @param states one state per section; forced sections must carry their forced state
    * @param collapsedHint per section, whether to use the mid-supply clamp for HIGH/LOW rows
    */
-  double[] solveDc(SectionState[] states, boolean[] collapsedHint) {
+  DcSystem solveDc(SectionState[] states, boolean[] collapsedHint) {
     double[][] a = new double[size][size];
     double[] b = new double[size];
     for (Part part : stage.parts()) {
@@ -134,7 +135,25 @@ final class Network {
         writeSectionRow(a, b, k, states[k], collapsedHint[k], true);
       }
     }
-    return DenseLu.solve(a, b);
+    DenseLu.Factors factors = DenseLu.factor(a);
+    return factors == null ? null : new DcSystem(factors.solve(b), factors);
+  }
+
+  /**
+   * A solved DC system: the unknowns and the factorised matrix, kept for cheap follow-up solves.
+   *
+   * @param x the unknowns: undriven net voltages, then section source voltages
+   * @param factors the LU factors of the system matrix
+   */
+  record DcSystem(double[] x, DenseLu.Factors factors) {
+    /**
+     * Whether section k's linear state is stable: its loop gain L is below 1. A unit disturbance
+     * added to the section's source moves the source by 1/(1 − L), which is entry (k, k) of the
+     * inverse matrix, so L &lt; 1 exactly when that entry is positive.
+     */
+    boolean stable(Network network, int k) {
+      return network.sourceNode[k] < 0 || factors.inverseDiagonal(network.sourceNode[k]) > 0;
+    }
   }
 
   /**

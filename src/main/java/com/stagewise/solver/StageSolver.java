@@ -48,23 +48,27 @@ public final class StageSolver {
    */
   public static SolveResult solve(Stage stage, Conditions conditions) {
     Network network = new Network(stage, conditions);
-    List<String> floating = floatingNets(network);
-    if (!floating.isEmpty()) {
-      return new SolveResult.Floating(floating);
-    }
     int n = network.sections.length;
     SectionState[] start = new SectionState[n];
     for (int k = 0; k < n; k++) {
       start[k] = network.forced[k] != null ? network.forced[k] : SectionState.LINEAR;
     }
-    boolean positiveFeedback = hasStrongPositiveFeedback(network, start);
-    if (!positiveFeedback) {
-      Optional<OperatingPoint> found = activeSetSearch(network, start);
-      if (found.isPresent()) {
-        return new SolveResult.Solved(List.of(found.get()));
+    Network.DcSystem first = solveConsistently(network, start);
+    if (first == null) {
+      List<String> floating = floatingNets(network);
+      if (!floating.isEmpty()) {
+        return new SolveResult.Floating(floating);
       }
+      return enumerate(network, true);
     }
-    return enumerate(network, positiveFeedback);
+    // Strong positive feedback shows as an unstable linear section at the all-linear start; such a
+    // stage may have several stable states, so every combination is tried.
+    if (!allLinearStable(network, start, first)) {
+      return enumerate(network, true);
+    }
+    Optional<OperatingPoint> found = activeSetSearch(network, start, first);
+    return found.<SolveResult>map(point -> new SolveResult.Solved(List.of(point)))
+        .orElseGet(() -> enumerate(network, true));
   }
 
   /**
@@ -122,9 +126,9 @@ public final class StageSolver {
     forEachCombination(
         network,
         states -> {
-          double[] x = solveConsistently(network, states);
-          if (x != null && isConsistent(network, states, x)) {
-            points.add(pointOf(network, states, x));
+          Network.DcSystem system = solveConsistently(network, states);
+          if (system != null && isConsistent(network, states, system.x())) {
+            points.add(pointOf(network, states, system.x()));
           }
         });
     return points;
@@ -149,20 +153,26 @@ public final class StageSolver {
   /**
    * Starting from {@code start}, moves each section whose state is inconsistent to the state its
    * demand points at, until nothing changes. Converges in a few steps for negative feedback; a
-   * repeated combination ends the search without a result.
+   * repeated combination, or an end state with an unstable linear section, ends the search without
+   * a result.
    */
-  private static Optional<OperatingPoint> activeSetSearch(Network network, SectionState[] start) {
+  private static Optional<OperatingPoint> activeSetSearch(
+      Network network, SectionState[] start, Network.DcSystem first) {
     int n = network.sections.length;
     SectionState[] states = start.clone();
     Set<String> seen = new HashSet<>();
+    Network.DcSystem system = first;
     for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
       if (!seen.add(Arrays.toString(states))) {
         return Optional.empty();
       }
-      double[] x = solveConsistently(network, states);
-      if (x == null) {
-        return Optional.empty();
+      if (system == null) {
+        system = solveConsistently(network, states);
+        if (system == null) {
+          return Optional.empty();
+        }
       }
+      double[] x = system.x();
       boolean changed = false;
       for (int k = 0; k < n; k++) {
         if (network.forced[k] != null) {
@@ -175,10 +185,22 @@ public final class StageSolver {
         }
       }
       if (!changed) {
-        return Optional.of(pointOf(network, states, x));
+        return allLinearStable(network, states, system)
+            ? Optional.of(pointOf(network, states, x))
+            : Optional.empty();
       }
+      system = null;
     }
     return Optional.empty();
+  }
+
+  private static boolean allLinearStable(Network network, SectionState[] states, Network.DcSystem system) {
+    for (int k = 0; k < states.length; k++) {
+      if (network.forced[k] == null && states[k] == SectionState.LINEAR && !system.stable(network, k)) {
+        return false;
+      }
+    }
+    return true;
   }
 
   private static SectionState preferredState(Network network, double[] x, int k, SectionState now) {
@@ -230,9 +252,9 @@ public final class StageSolver {
 
   /**
    * Solves with the given states; the choice between normal and mid-supply clamp rows is settled
-   * by re-solving once if the supply pins' voltages change it.
+   * by re-solving if the supply pins' voltages change it.
    */
-  private static double[] solveConsistently(Network network, SectionState[] states) {
+  private static Network.DcSystem solveConsistently(Network network, SectionState[] states) {
     int n = network.sections.length;
     boolean[] collapsed = new boolean[n];
     double[] guess = new double[network.size];
@@ -240,56 +262,22 @@ public final class StageSolver {
       for (int k = 0; k < n; k++) {
         collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(guess, k);
       }
-      double[] x = network.solveDc(states, collapsed);
-      if (x == null) {
+      Network.DcSystem system = network.solveDc(states, collapsed);
+      if (system == null) {
         return null;
       }
       boolean same = true;
       for (int k = 0; k < n; k++) {
-        if (network.sourceNode[k] >= 0 && network.collapsed(x, k) != collapsed[k]) {
+        if (network.sourceNode[k] >= 0 && network.collapsed(system.x(), k) != collapsed[k]) {
           same = false;
         }
       }
       if (same) {
-        return x;
+        return system;
       }
-      guess = x;
+      guess = system.x();
     }
     return null;
-  }
-
-  /**
-   * Whether some section, with the others as given, sees positive feedback strong enough that its
-   * linear state is unstable: a unit step of its internal source moves its own demand by more
-   * than one unit in the same direction.
-   */
-  private static boolean hasStrongPositiveFeedback(Network network, SectionState[] states) {
-    for (int k = 0; k < network.sections.length; k++) {
-      if (states[k] == SectionState.LINEAR && loopGain(network, states, k) > 1) {
-        return true;
-      }
-    }
-    return false;
-  }
-
-  /** The loop gain seen by section k: d(demand)/d(source) with the source made independent. */
-  private static double loopGain(Network network, SectionState[] states, int k) {
-    SectionState[] probe = states.clone();
-    // Hold section k's source at two levels by clamping it: HIGH and LOW rows are fixed offsets
-    // from the supply pins, so their difference isolates the loop's response to the source.
-    probe[k] = SectionState.HIGH;
-    boolean[] collapsed = new boolean[states.length];
-    double[] high = network.solveDc(probe, collapsed);
-    probe[k] = SectionState.LOW;
-    double[] low = network.solveDc(probe, collapsed);
-    if (high == null || low == null) {
-      return 0;
-    }
-    double step = network.source(high, k) - network.source(low, k);
-    if (Math.abs(step) < 1e-12) {
-      return 0;
-    }
-    return (network.drive(high, k) - network.drive(low, k)) / step;
   }
 
   private static SolveResult enumerate(Network network, boolean stableOnly) {
@@ -305,20 +293,14 @@ public final class StageSolver {
     forEachCombination(
         network,
         states -> {
-          double[] x = solveConsistently(network, states);
-          if (x == null || !isConsistent(network, states, x)) {
+          Network.DcSystem system = solveConsistently(network, states);
+          if (system == null || !isConsistent(network, states, system.x())) {
             return;
           }
-          if (stableOnly) {
-            for (int k = 0; k < states.length; k++) {
-              if (network.forced[k] == null
-                  && states[k] == SectionState.LINEAR
-                  && loopGain(network, states, k) > 1) {
-                return;
-              }
-            }
+          if (stableOnly && !allLinearStable(network, states, system)) {
+            return;
           }
-          points.add(pointOf(network, states, x));
+          points.add(pointOf(network, states, system.x()));
         });
     if (points.isEmpty()) {
       String section = network.sections.length > 0 ? network.sections[0].ref() : "";

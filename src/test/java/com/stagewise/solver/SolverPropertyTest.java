@@ -86,7 +86,7 @@ class SolverPropertyTest {
         Network network = new Network(stage, alone);
         SectionState[] linear = new SectionState[stage.amplifiers().size()];
         Arrays.fill(linear, SectionState.LINEAR);
-        double[] x = network.solveDc(linear, new boolean[linear.length]);
+        double[] x = network.solveDc(linear, new boolean[linear.length]).x();
         int n = 0;
         for (String net : stage.nets()) {
           sum[n++] += network.volts(x, net);
