@@ -1,0 +1,118 @@
+package com.stagewise.reference;
+
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestInput;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Stages built in code for the reference checks, beside the templates and the demo sheets: shapes
+ * that exercise the model where the library does not (a supply fed through a resistor, a quad
+ * package, a rail-to-rail part). Test data only, nothing here is demo data.
+ */
+final class HandStages {
+  private final List<Rail> rails = new ArrayList<>();
+  private final List<TestInput> inputs = new ArrayList<>();
+  private final List<Part> parts = new ArrayList<>();
+  private final List<Amplifier> amps = new ArrayList<>();
+  private final String title;
+
+  private HandStages(String title) {
+    this.title = title;
+  }
+
+  static HandStages split(String title, double volts) {
+    HandStages s = new HandStages(title);
+    s.rails.add(new Rail("VCC", volts, 0.05));
+    s.rails.add(new Rail("VEE", -volts, 0.05));
+    return s;
+  }
+
+  HandStages rail(String net, double volts) {
+    rails.add(new Rail(net, volts, 0.05));
+    return this;
+  }
+
+  HandStages input(String net, double dc, double ac, double hz) {
+    inputs.add(new TestInput(net, dc, ac, hz));
+    return this;
+  }
+
+  HandStages r(String ref, double ohms, String a, String b) {
+    parts.add(Part.resistor(ref, ohms, 0.01, a, b));
+    return this;
+  }
+
+  HandStages c(String ref, double farads, String a, String b) {
+    parts.add(Part.capacitor(ref, farads, 0.1, a, b));
+    return this;
+  }
+
+  HandStages amp(
+      String ref,
+      String pkg,
+      PackageType type,
+      String section,
+      DeviceClass cls,
+      String inPlus,
+      String inMinus,
+      String out,
+      String vPlus,
+      String vMinus) {
+    amps.add(new Amplifier(ref, pkg, type, section, cls, inPlus, inMinus, out, vPlus, vMinus));
+    return this;
+  }
+
+  Stage build() {
+    return new Stage(title, "", "GND", rails, inputs, parts, amps);
+  }
+
+  /** Returns the hand-built stages by id, in a fixed order. */
+  static Map<String, Stage> all() {
+    Map<String, Stage> stages = new LinkedHashMap<>();
+    stages.put(
+        "hand-inverting-dual",
+        split("Inverting, gain -4.7, dual package", 15)
+            .input("IN", 1.0, 0.1, 1000)
+            .r("R1", 10e3, "IN", "SUM")
+            .r("R2", 47e3, "SUM", "OUT")
+            .c("C1", 100e-12, "SUM", "OUT")
+            .amp("U1A", "U1", PackageType.DUAL_8, "A", DeviceClass.CLASSIC_BIPOLAR,
+                "GND", "SUM", "OUT", "VCC", "VEE")
+            .build());
+    stages.put(
+        "hand-two-stage-quad",
+        split("Two sections of a quad: non-inverting gain 3 then inverting -2", 12)
+            .input("IN", 0.8, 0.05, 500)
+            .r("R1", 10e3, "FB1", "GND")
+            .r("R2", 20e3, "FB1", "MID")
+            .r("R3", 10e3, "MID", "SUM")
+            .r("R4", 20e3, "SUM", "OUT")
+            .amp("U1A", "U1", PackageType.QUAD_14, "A", DeviceClass.RAIL_TO_RAIL,
+                "IN", "FB1", "MID", "VCC", "VEE")
+            .amp("U1B", "U1", PackageType.QUAD_14, "B", DeviceClass.RAIL_TO_RAIL,
+                "GND", "SUM", "OUT", "VCC", "VEE")
+            .build());
+    stages.put(
+        "hand-filtered-supply",
+        new HandStages("Non-inverting on a single supply fed through 100 R")
+            .rail("VCC", 12)
+            .input("IN", 1.5, 0.2, 2000)
+            .r("R9", 100, "VCC", "V+")
+            .r("R1", 10e3, "FB", "GND")
+            .r("R2", 47e3, "FB", "OUT")
+            .r("RL", 2.2e3, "OUT", "GND")
+            .c("C9", 10e-6, "V+", "GND")
+            .amp("U1A", "U1", PackageType.SINGLE_8, "A", DeviceClass.GROUND_SENSING,
+                "IN", "FB", "OUT", "V+", "GND")
+            .build());
+    return stages;
+  }
+}

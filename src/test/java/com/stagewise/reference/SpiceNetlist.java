@@ -1,0 +1,237 @@
+package com.stagewise.reference;
+
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.Terminal;
+import com.stagewise.reference.FlatCircuit.Branch;
+import com.stagewise.reference.FlatCircuit.Mode;
+import com.stagewise.reference.FlatCircuit.Section;
+import com.stagewise.solver.Conditions;
+import com.stagewise.solver.DeviceParams;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.OptionalDouble;
+
+/**
+ * An ngspice netlist (ngspice 39, Debian package, as reference simulator) that models a stage with
+ * exactly the op-amp model of our solver, plus which SPICE node each of our nodes became.
+ *
+ * <p>Each section is an XSPICE {@code limit} element (the ngspice manual's "limit" code model: a
+ * gain with output limits and a smoothed corner) whose input is {@code v(in+) − v(in−)} with the
+ * input offset added by a series source, whose gain is the open-loop gain and whose limits are the
+ * clamp {@code [v(v−) + headroomLow, v(v+) − headroomHigh]}, behind the output resistance to the
+ * output net. Bias currents are current sources that draw from each input's net. Resistors below
+ * 1 mΩ are written at 1 mΩ, as the solver models them.
+ *
+ * <p>The limits of a {@code limit} element are numbers, so they are computed from the supply pins'
+ * voltages: a supply pin on a driven net (a rail, ground or an input), or on a node held by a single
+ * tie to a driven net, has a known voltage. When the interval is empty both limits are the
+ * mid-supply point, written as a plain source, as the solver does. A supply pin on a solved net
+ * (a rail fed through a resistor) is modelled with a cascade of two limiters whose limits follow
+ * the pin voltages through controlled sources; that form has no mid-supply collapse, which the
+ * netlist notes in a comment.
+ *
+ * @param text the netlist, ready for {@code ngspice -b}
+ * @param spiceNodes our node name → SPICE node name ({@code 0} for ground)
+ */
+record SpiceNetlist(String text, Map<String, String> spiceNodes) {
+
+  /**
+   * Smoothing band of the limiter's corners, in volts. The output deviates from the hard clamp by
+   * at most this much, and only when the demand lies within it of a limit: far below a meter count.
+   */
+  static final double LIMIT_RANGE = 1e-6;
+
+  /** Returns the netlist of a stage with nominal parts under the given solver conditions. */
+  static SpiceNetlist of(Stage stage, Conditions conditions) {
+    return of(FlatCircuit.of(stage, conditions), stage.title());
+  }
+
+  /** Returns the netlist of a flattened (perhaps faulted) circuit. */
+  static SpiceNetlist of(FlatCircuit flat, String title) {
+    Map<String, String> names = new LinkedHashMap<>();
+    int next = 1;
+    for (String node : flat.nodes()) {
+      names.put(node, node.equals(flat.ground) ? "0" : "n" + next++);
+    }
+    Writer w = new Writer(names);
+    w.line("* " + oneLine(title) + " (Stagewise op-amp model: clamped source behind Rout)");
+    for (Map.Entry<String, String> e : names.entrySet()) {
+      w.line("* node " + e.getValue() + " = " + oneLine(e.getKey()));
+    }
+    w.line(".options reltol=1e-9 vntol=1e-12 abstol=1e-15 itl1=500");
+    int v = 0;
+    for (Map.Entry<String, Double> source : flat.driven.entrySet()) {
+      v++;
+      double ac = flat.acDrive.getOrDefault(source.getKey(), 0.0);
+      w.line("* driven " + oneLine(source.getKey()));
+      w.line("V" + v + " " + w.node(source.getKey()) + " 0 DC " + num(source.getValue())
+          + (ac > 0 ? " AC " + num(ac) : ""));
+    }
+    int r = 0;
+    int c = 0;
+    for (Branch branch : flat.branches) {
+      w.line("* " + oneLine(branch.label()));
+      if (branch.kind() == PartKind.RESISTOR) {
+        r++;
+        w.line("R" + r + " " + w.node(branch.a()) + " " + w.node(branch.b()) + " "
+            + num(Math.max(branch.value(), FlatCircuit.SHORT_OHMS)));
+      } else if (branch.value() > 0) {
+        // A 0 F capacitor is no part at all; SPICE rejects a zero capacitance.
+        c++;
+        w.line("C" + c + " " + w.node(branch.a()) + " " + w.node(branch.b()) + " " + num(branch.value()));
+      }
+    }
+    for (int k = 0; k < flat.sections.size(); k++) {
+      writeSection(w, flat, k + 1, flat.sections.get(k));
+    }
+    w.line(".control");
+    w.line("set numdgt=15");
+    w.line("echo @@op");
+    w.line("op");
+    w.line("print all");
+    if (flat.hz > 0) {
+      w.line("echo @@ac");
+      w.line("ac lin 1 " + num(flat.hz) + " " + num(flat.hz));
+      w.line("print all");
+    }
+    w.line("echo @@end");
+    // Without quit 0, ngspice 39 in batch mode exits with status 1.
+    w.line("quit 0");
+    w.line(".endc");
+    w.line(".end");
+    return new SpiceNetlist(w.text.toString(), Map.copyOf(names));
+  }
+
+  private static void writeSection(Writer w, FlatCircuit flat, int k, Section s) {
+    DeviceParams p = s.params();
+    String inPlus = w.node(s.node(Terminal.IN_PLUS));
+    String inMinus = w.node(s.node(Terminal.IN_MINUS));
+    String out = w.node(s.node(Terminal.OUT));
+    String src = "s" + k + "o";
+    w.line("* section " + oneLine(s.ref()) + " (" + s.mode().name().toLowerCase(Locale.ROOT) + ")");
+    // Bias currents leave each input's net into the section (solver convention); on a driven net
+    // they change no voltage and are left out.
+    if (p.biasPlus() != 0 && !flat.isDriven(s.node(Terminal.IN_PLUS))) {
+      w.line("Ibp" + k + " " + inPlus + " 0 DC " + num(p.biasPlus()));
+    }
+    if (p.biasMinus() != 0 && !flat.isDriven(s.node(Terminal.IN_MINUS))) {
+      w.line("Ibm" + k + " " + inMinus + " 0 DC " + num(p.biasMinus()));
+    }
+    if (s.mode() == Mode.DEAD) {
+      w.line("* dead: no source, no output resistance");
+      return;
+    }
+    w.line("Rout" + k + " " + src + " " + out + " " + num(p.outputResistance()));
+    OptionalDouble vPlus = knownVolts(flat, s.node(Terminal.V_PLUS));
+    OptionalDouble vMinus = knownVolts(flat, s.node(Terminal.V_MINUS));
+    if (vPlus.isPresent() && vMinus.isPresent()) {
+      double high = vPlus.getAsDouble() - p.headroomHigh();
+      double low = vMinus.getAsDouble() + p.headroomLow();
+      if (high < low) {
+        double mid = (vPlus.getAsDouble() + vMinus.getAsDouble()) / 2;
+        w.line("* limits collapse to mid-supply");
+        w.line("Vs" + k + " " + src + " 0 DC " + num(mid));
+        return;
+      }
+      switch (s.mode()) {
+        case STUCK_HIGH -> w.line("Vs" + k + " " + src + " 0 DC " + num(high));
+        case STUCK_LOW -> w.line("Vs" + k + " " + src + " 0 DC " + num(low));
+        default -> {
+          w.line("Voff" + k + " s" + k + "p " + inPlus + " DC " + num(p.offset()));
+          w.line("A" + k + " %vd(s" + k + "p " + inMinus + ") " + src + " lim" + k);
+          w.line(".model lim" + k + " limit(gain=" + num(p.gain()) + " out_lower_limit=" + num(low)
+              + " out_upper_limit=" + num(high) + " limit_range=" + num(LIMIT_RANGE) + ")");
+        }
+      }
+      return;
+    }
+    // Limits that follow solved supply-pin voltages: lo = v(v-) + hL, hi = v(v+) - hH.
+    w.line("* supply pins on solved nets: limits follow them (no mid-supply collapse)");
+    String lo = "s" + k + "l";
+    String hi = "s" + k + "h";
+    w.line("Elo" + k + " " + lo + "1 0 " + w.node(s.node(Terminal.V_MINUS)) + " 0 1");
+    w.line("Vlo" + k + " " + lo + " " + lo + "1 DC " + num(p.headroomLow()));
+    w.line("Ehi" + k + " " + hi + "1 0 " + w.node(s.node(Terminal.V_PLUS)) + " 0 1");
+    w.line("Vhi" + k + " " + hi + "1 " + hi + " DC " + num(p.headroomHigh()));
+    switch (s.mode()) {
+      case STUCK_HIGH -> w.line("Vs" + k + " " + src + " " + hi + " DC 0");
+      case STUCK_LOW -> w.line("Vs" + k + " " + src + " " + lo + " DC 0");
+      default -> {
+        String d = "s" + k + "d";
+        w.line("Voff" + k + " s" + k + "p " + inPlus + " DC " + num(p.offset()));
+        w.line("Ed" + k + " " + d + " 0 s" + k + "p " + inMinus + " " + num(p.gain()));
+        // y = lo + max(d - lo, 0) = max(d, lo); out = hi - max(hi - y, 0) = min(y, hi).
+        w.line("Aa" + k + " %vd(" + d + " " + lo + ") s" + k + "x pos" + k);
+        w.line("Ey" + k + " s" + k + "y " + lo + " s" + k + "x 0 1");
+        w.line("Ab" + k + " %vd(" + hi + " s" + k + "y) s" + k + "z pos" + k);
+        w.line("Eo" + k + " " + src + " " + hi + " 0 s" + k + "z 1");
+        w.line(".model pos" + k + " limit(gain=1 out_lower_limit=0 out_upper_limit=1e6 limit_range="
+            + num(LIMIT_RANGE) + ")");
+      }
+    }
+  }
+
+  /**
+   * Returns the DC voltage of a node when it is known before solving: a driven node, or a node
+   * whose only DC connections are resistors to one and the same driven node (a floating pin tied
+   * to a rail), since supply pins draw no current in the model.
+   */
+  static OptionalDouble knownVolts(FlatCircuit flat, String node) {
+    if (flat.isDriven(node)) {
+      return OptionalDouble.of(flat.drivenVolts(node));
+    }
+    String target = null;
+    for (Branch branch : flat.branches) {
+      if (branch.kind() != PartKind.RESISTOR || !(branch.a().equals(node) || branch.b().equals(node))) {
+        continue;
+      }
+      String other = branch.a().equals(node) ? branch.b() : branch.a();
+      if (!flat.isDriven(other) || (target != null && !target.equals(other))) {
+        return OptionalDouble.empty();
+      }
+      target = other;
+    }
+    for (Section s : flat.sections) {
+      boolean loads =
+          (s.mode() != Mode.DEAD && s.node(Terminal.OUT).equals(node))
+              || (s.node(Terminal.IN_PLUS).equals(node) && s.params().biasPlus() != 0)
+              || (s.node(Terminal.IN_MINUS).equals(node) && s.params().biasMinus() != 0);
+      if (loads) {
+        return OptionalDouble.empty();
+      }
+    }
+    return target == null ? OptionalDouble.empty() : OptionalDouble.of(flat.drivenVolts(target));
+  }
+
+  /** Formats a number for SPICE: plain exponent notation, never the default locale. */
+  static String num(double value) {
+    return String.format(Locale.ROOT, "%.15e", value);
+  }
+
+  private static String oneLine(String text) {
+    return text.replaceAll("[\\r\\n]+", " ");
+  }
+
+  private static final class Writer {
+    final StringBuilder text = new StringBuilder();
+    final Map<String, String> names;
+
+    Writer(Map<String, String> names) {
+      this.names = names;
+    }
+
+    String node(String node) {
+      String name = names.get(node);
+      if (name == null) {
+        throw new IllegalArgumentException("node " + node + " is not in the circuit");
+      }
+      return name;
+    }
+
+    void line(String line) {
+      text.append(line).append('\n');
+    }
+  }
+}
