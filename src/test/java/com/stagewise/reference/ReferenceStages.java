@@ -1,0 +1,53 @@
+package com.stagewise.reference;
+
+import com.stagewise.circuit.Stage;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The stages checked against the reference simulator: every template's default stage, every demo
+ * sheet in {@code data/stages/}, and the hand-built stages of {@link HandStages}.
+ */
+final class ReferenceStages {
+  private ReferenceStages() {}
+
+  /**
+   * Where a stage comes from.
+   *
+   * @param kind {@code template}, {@code sheet} or {@code hand}
+   * @param id the template id, the sheet's path from the project root, or the hand-built id
+   */
+  record Source(String kind, String id) {
+    /** Returns a file-name-safe name, e.g. {@code template-inverting}. */
+    String name() {
+      String base = id.replaceAll("^.*/", "").replace(".stage.json", "");
+      return kind.equals("hand") ? base : kind + "-" + base;
+    }
+  }
+
+  /** A stage with where it comes from. */
+  record Named(Source source, Stage stage) {}
+
+  /** Returns every stage to check, in a fixed order. */
+  static List<Named> all() {
+    List<Named> all = new ArrayList<>();
+    for (Map.Entry<String, Stage> hand : HandStages.all().entrySet()) {
+      all.add(new Named(new Source("hand", hand.getKey()), hand.getValue()));
+    }
+    return all;
+  }
+
+  /**
+   * Returns the stage a source names.
+   *
+   * @throws IllegalArgumentException if there is no such stage any more
+   */
+  static Stage resolve(Source source) {
+    return all().stream()
+        .filter(n -> n.source().equals(source))
+        .map(Named::stage)
+        .findFirst()
+        .orElseThrow(() -> new IllegalArgumentException("no stage " + source));
+  }
+}
