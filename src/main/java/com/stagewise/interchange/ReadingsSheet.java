@@ -1,0 +1,235 @@
+package com.stagewise.interchange;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.TreeSet;
+
+/**
+ * Reads and writes readings files ({@code *.readings.json}, format {@code stagewise-readings},
+ * version 1) for one stage.
+ *
+ * <p>Each reading's {@code at} is a net of the stage or a pin {@code PACKAGE.PIN} of one of its
+ * packages. {@code meter} is optional ({@link MeterSpec#DEFAULT}); so is each of its three fields,
+ * which then takes the default's figure. An {@code ac} reading without {@code hz} takes the
+ * frequency of the stage's first AC input. A value far beyond every rail (more than twice the
+ * largest rail magnitude plus 1 V) is taken for a typing mistake and refused.
+ */
+public final class ReadingsSheet {
+  /** The {@code format} of a readings file. */
+  public static final String FORMAT = "stagewise-readings";
+
+  /** The newest version this program reads and the one it writes. */
+  public static final int VERSION = 1;
+
+  /** The file name ending of readings files. */
+  public static final String SUFFIX = ".readings.json";
+
+  private static final List<String> ROOT_KEYS = List.of("format", "version", "meter", "readings");
+  private static final List<String> METER_KEYS = List.of("percent", "counts", "displayCounts");
+  private static final List<String> READING_KEYS = List.of("at", "dc", "ac", "hz", "uncertainty");
+
+  private ReadingsSheet() {}
+
+  /**
+   * Returns the readings of a file, checked against the stage they were taken on.
+   *
+   * @throws InvalidInputException naming the file, the JSON path and what was expected
+   */
+  public static ReadingSet read(Path file, Stage stage) {
+    return read(StageSheet.readText(file), file.toString(), stage);
+  }
+
+  /**
+   * Returns the readings of a text, checked against the stage they were taken on.
+   *
+   * @param source the file name or screen named in messages
+   * @throws InvalidInputException naming the source, the JSON path and what was expected
+   */
+  public static ReadingSet read(String json, String source, Stage stage) {
+    JsonField root = JsonField.parseRoot(json, source);
+    root.requireHeader(FORMAT, VERSION, "a readings file");
+    root.object("a readings file", ROOT_KEYS);
+    MeterSpec meter = root.optional("meter").map(ReadingsSheet::meter).orElse(MeterSpec.DEFAULT);
+    double limit = 2 * largestRail(stage) + 1;
+    List<Reading> readings = new ArrayList<>();
+    for (JsonField field : root.require("readings", "an array of readings").elements("readings")) {
+      readings.add(reading(field, stage, limit));
+    }
+    return new ReadingSet(meter, readings);
+  }
+
+  /** Returns the text of a readings file, ending in a newline. */
+  public static String write(ReadingSet set) {
+    Map<String, Object> fields = new LinkedHashMap<>();
+    JsonNodeFactory nodes = JsonNodeFactory.instance;
+    fields.put("format", nodes.textNode(FORMAT));
+    fields.put("version", nodes.numberNode(VERSION));
+    MeterSpec meter = set.meter();
+    fields.put(
+        "meter",
+        JsonText.object()
+            .<ObjectNode>set("percent", JsonText.number(meter.percent()))
+            .put("counts", meter.counts())
+            .put("displayCounts", meter.displayCounts()));
+    List<JsonNode> readings = new ArrayList<>();
+    for (Reading reading : set.readings()) {
+      ObjectNode node = JsonText.object().put("at", reading.at());
+      node.set(reading.kind().word(), JsonText.number(reading.value()));
+      if (reading.kind() == Reading.Kind.AC) {
+        node.set("hz", JsonText.number(reading.hz()));
+      }
+      reading.uncertainty().ifPresent(u -> node.set("uncertainty", JsonText.number(u)));
+      readings.add(node);
+    }
+    fields.put("readings", readings);
+    return JsonText.document(fields);
+  }
+
+  /**
+   * Writes readings to a file (UTF-8), replacing it.
+   *
+   * @throws InvalidInputException if the file cannot be written (naming the file)
+   */
+  public static void write(ReadingSet set, Path file) {
+    StageSheet.writeText(file, write(set));
+  }
+
+  private static MeterSpec meter(JsonField field) {
+    field.object("the meter", METER_KEYS);
+    MeterSpec base = MeterSpec.DEFAULT;
+    double percent =
+        field.optional("percent").map(f -> f.nonNegative("the meter's percent of reading, e.g. 0.5")).orElse(base.percent());
+    int counts = field.optional("counts").map(f -> f.integer("the meter's counts, e.g. 2")).orElse(base.counts());
+    Optional<JsonField> displayField = field.optional("displayCounts");
+    int display = displayField.map(f -> f.integer("the display counts, e.g. 6000")).orElse(base.displayCounts());
+    if (counts < 0) {
+      throw field.require("counts", "").error("counts (" + counts + ") must be 0 or more");
+    }
+    if (display <= 0) {
+      throw displayField.orElse(field).error("displayCounts (" + display + ") must be above 0, e.g. 6000");
+    }
+    return new MeterSpec(percent, counts, display);
+  }
+
+  private static Reading reading(JsonField field, Stage stage, double limit) {
+    field.object("a reading", READING_KEYS);
+    JsonField atField = field.require("at", "a net name or a package pin such as U1.6");
+    String at = atField.name("a net name or a package pin such as U1.6");
+    checkTestPoint(atField, at, stage);
+    Optional<JsonField> dc = field.optional("dc");
+    Optional<JsonField> ac = field.optional("ac");
+    if (dc.isPresent() == ac.isPresent()) {
+      throw field.error(
+          dc.isPresent()
+              ? "a reading has either \"dc\" or \"ac\", not both (expected one reading per entry)"
+              : "missing field \"dc\" or \"ac\" (expected the volts read at " + at + ")");
+    }
+    Reading.Kind kind = dc.isPresent() ? Reading.Kind.DC : Reading.Kind.AC;
+    JsonField valueField = dc.orElseGet(ac::get);
+    double value =
+        kind == Reading.Kind.DC
+            ? valueField.number("the DC volts read")
+            : valueField.nonNegative("the AC amplitude read, in volts");
+    if (Math.abs(value) > limit) {
+      throw valueField.error(
+          "reading (" + value + " V) is far beyond every rail of the stage (expected at most about ±"
+              + limit + " V; check the decimal point and the unit)");
+    }
+    double hz = 0;
+    Optional<JsonField> hzField = field.optional("hz");
+    if (kind == Reading.Kind.AC) {
+      if (hzField.isPresent()) {
+        hz = hzField.get().nonNegative("the frequency in hertz");
+        if (hz == 0) {
+          throw hzField.get().error("hz must be above 0 (the frequency of the ac reading in hertz)");
+        }
+      } else {
+        hz = stage.inputs().stream().filter(i -> i.hasAc()).mapToDouble(i -> i.hz()).findFirst()
+            .orElseThrow(() -> field.error(
+                "missing field \"hz\" (expected the frequency of the ac reading; the stage has no ac input to take it from)"));
+      }
+    } else if (hzField.isPresent()) {
+      throw hzField.get().error("a dc reading has no \"hz\" (expected hz only with \"ac\")");
+    }
+    OptionalDouble uncertainty = OptionalDouble.empty();
+    Optional<JsonField> uField = field.optional("uncertainty");
+    if (uField.isPresent()) {
+      double u = uField.get().nonNegative("the uncertainty in volts (half-width), e.g. 0.01");
+      if (u == 0) {
+        throw uField.get().error("uncertainty must be above 0 volts (half-width), e.g. 0.01");
+      }
+      uncertainty = OptionalDouble.of(u);
+    }
+    try {
+      return new Reading(at, kind, value, hz, uncertainty);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
+  }
+
+  /** Checks that a test point is a net of the stage or a modelled pin of one of its packages. */
+  private static void checkTestPoint(JsonField field, String at, Stage stage) {
+    if (stage.nets().contains(at)) {
+      return;
+    }
+    int dot = at.lastIndexOf('.');
+    if (dot <= 0) {
+      throw field.error(
+          "\"" + at + "\" is not a net of the stage (expected one of " + String.join(", ", stage.nets())
+              + ", or a package pin such as " + examplePin(stage) + ")");
+    }
+    String pkg = at.substring(0, dot);
+    Optional<PackageType> type = stage.packageType(pkg);
+    if (type.isEmpty()) {
+      throw field.error(
+          "package " + pkg + " is not on the stage (expected a net, or a pin of "
+              + String.join(", ", stage.packages()) + ", e.g. " + examplePin(stage) + ")");
+    }
+    String pinText = at.substring(dot + 1);
+    int pin;
+    try {
+      pin = Integer.parseInt(pinText);
+    } catch (NumberFormatException e) {
+      throw field.error("\"" + pinText + "\" is not a pin number (expected e.g. " + examplePin(stage) + ")");
+    }
+    if (pin < 1 || pin > type.get().pinCount()) {
+      throw field.error(
+          pkg + " is a " + type.get().word() + " package, which has no pin " + pin + " (expected 1 to "
+              + type.get().pinCount() + ")");
+    }
+    if (!stage.pinNets().containsKey(at)) {
+      TreeSet<Integer> used = new TreeSet<>();
+      for (String key : stage.pinNets().keySet()) {
+        if (key.startsWith(pkg + ".")) {
+          used.add(Integer.parseInt(key.substring(pkg.length() + 1)));
+        }
+      }
+      throw field.error(
+          "pin " + pin + " of " + pkg + " is not used by any section of the stage (expected one of pins " + used + ")");
+    }
+  }
+
+  private static String examplePin(Stage stage) {
+    return stage.pinNets().keySet().stream().findFirst().orElse("U1.6");
+  }
+
+  /** Returns the largest rail magnitude of a stage in volts (0 when it has no rails). */
+  static double largestRail(Stage stage) {
+    return stage.rails().stream().mapToDouble(Rail::volts).map(Math::abs).max().orElse(0);
+  }
+}

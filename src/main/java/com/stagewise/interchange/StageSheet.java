@@ -1,0 +1,337 @@
+package com.stagewise.interchange;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.StageRules;
+import com.stagewise.circuit.Terminal;
+import com.stagewise.circuit.TestInput;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads and writes stage sheets ({@code *.stage.json}, format {@code stagewise-stage}, version 1).
+ *
+ * <p>Reading is strict: an unknown key, a missing field, a wrong type, a bad or negative value, a
+ * wrong format or a newer version, a section terminal on a net nothing else touches, and every
+ * problem of {@link StageRules#problems} is an {@link InvalidInputException} that names the file,
+ * the JSON path (e.g. {@code parts[2].value}) and what was expected.
+ *
+ * <p>Values may be plain numbers or strings with an SI prefix or in RKM code ({@code 10k}, {@code
+ * 4k7}, {@code 470R}, {@code 100n}, {@code 2u2}); tolerances {@code "1%"} or {@code 0.01}. Fields
+ * that may be left out: {@code title} and {@code board} (empty), {@code ground} ({@code GND}),
+ * {@code inputs} (none), an input's {@code ac} and {@code hz}, and tolerances, which then take the
+ * values most often fitted (common practice): 5 % for resistors and rails, 10 % for capacitors.
+ *
+ * <p>Writing prints values in RKM code ({@code 4k7}, {@code 100n}, {@code 470R}) and tolerances
+ * as percentages, so that a sheet read back equals the stage written.
+ */
+public final class StageSheet {
+  /** The {@code format} of a stage sheet. */
+  public static final String FORMAT = "stagewise-stage";
+
+  /** The newest version this program reads and the one it writes. */
+  public static final int VERSION = 1;
+
+  /** The file name ending of stage sheets. */
+  public static final String SUFFIX = ".stage.json";
+
+  /** Tolerance of a resistor or rail whose sheet gives none (5 %, common practice). */
+  static final double DEFAULT_RESISTOR_TOLERANCE = 0.05;
+
+  /** Tolerance of a capacitor whose sheet gives none (10 %, common practice). */
+  static final double DEFAULT_CAPACITOR_TOLERANCE = 0.10;
+
+  private static final List<String> ROOT_KEYS =
+      List.of("format", "version", "title", "board", "ground", "rails", "inputs", "parts", "amplifiers");
+  private static final List<String> RAIL_KEYS = List.of("net", "volts", "tolerance");
+  private static final List<String> INPUT_KEYS = List.of("net", "dc", "ac", "hz");
+  private static final List<String> PART_KEYS = List.of("ref", "kind", "value", "tolerance", "nets");
+  private static final List<String> AMPLIFIER_KEYS =
+      List.of("ref", "package", "packageType", "section", "class", "inPlus", "inMinus", "out", "vPlus", "vMinus");
+
+  private StageSheet() {}
+
+  /**
+   * Returns the stage of a sheet file.
+   *
+   * @throws InvalidInputException if the file cannot be read or the sheet is not a sound stage;
+   *     the message names the file
+   */
+  public static Stage read(Path file) {
+    return read(readText(file), file.toString());
+  }
+
+  /**
+   * Returns the stage of a sheet's text.
+   *
+   * @param source the file name or screen named in messages
+   * @throws InvalidInputException if the sheet is not a sound stage
+   */
+  public static Stage read(String json, String source) {
+    JsonField root = JsonField.parseRoot(json, source);
+    root.requireHeader(FORMAT, VERSION, "a stage sheet");
+    root.object("a stage sheet", ROOT_KEYS);
+    String title = root.optional("title").map(JsonField::text).orElse("");
+    String board = root.optional("board").map(JsonField::text).orElse("");
+    String ground = root.optional("ground").map(f -> f.name("the ground net's name")).orElse("GND");
+    List<Rail> rails = new ArrayList<>();
+    for (JsonField field : root.require("rails", "an array of rails").elements("rails")) {
+      rails.add(rail(field));
+    }
+    List<TestInput> inputs = new ArrayList<>();
+    for (JsonField field : root.optional("inputs").map(f -> f.elements("inputs")).orElse(List.of())) {
+      inputs.add(input(field));
+    }
+    List<Part> parts = new ArrayList<>();
+    for (JsonField field : root.require("parts", "an array of parts").elements("parts")) {
+      parts.add(part(field));
+    }
+    List<JsonField> ampFields = root.require("amplifiers", "an array of op-amp sections").elements("op-amp sections");
+    List<Amplifier> amplifiers = new ArrayList<>();
+    for (JsonField field : ampFields) {
+      amplifiers.add(amplifier(field));
+    }
+    Stage stage;
+    try {
+      stage = new Stage(title, board, ground, rails, inputs, parts, amplifiers);
+    } catch (InvalidInputException e) {
+      throw root.rewrap(e, e.field());
+    }
+    checkTerminalNets(stage, ampFields);
+    StageRules.requireSound(stage, source);
+    return stage;
+  }
+
+  /** Returns the sheet text of a stage, ending in a newline. */
+  public static String write(Stage stage) {
+    Map<String, Object> fields = new LinkedHashMap<>();
+    JsonNodeFactory nodes = JsonNodeFactory.instance;
+    fields.put("format", nodes.textNode(FORMAT));
+    fields.put("version", nodes.numberNode(VERSION));
+    fields.put("title", nodes.textNode(stage.title()));
+    fields.put("board", nodes.textNode(stage.board()));
+    fields.put("ground", nodes.textNode(stage.ground()));
+    List<JsonNode> rails = new ArrayList<>();
+    for (Rail rail : stage.rails()) {
+      rails.add(
+          JsonText.object()
+              .put("net", rail.net())
+              .<ObjectNode>set("volts", JsonText.number(rail.volts()))
+              .put("tolerance", ValueText.formatTolerance(rail.tolerance())));
+    }
+    fields.put("rails", rails);
+    List<JsonNode> inputs = new ArrayList<>();
+    for (TestInput input : stage.inputs()) {
+      ObjectNode node = JsonText.object().put("net", input.net()).set("dc", JsonText.number(input.dc()));
+      if (input.hasAc() || input.hz() > 0) {
+        node.set("ac", JsonText.number(input.ac()));
+        node.set("hz", JsonText.number(input.hz()));
+      }
+      inputs.add(node);
+    }
+    fields.put("inputs", inputs);
+    List<JsonNode> parts = new ArrayList<>();
+    for (Part part : stage.parts()) {
+      ArrayNode nets = nodes.arrayNode().add(part.netA()).add(part.netB());
+      parts.add(
+          JsonText.object()
+              .put("ref", part.ref())
+              .put("kind", part.kind().word())
+              .put("value", ValueText.format(part.value(), part.kind() == PartKind.RESISTOR))
+              .put("tolerance", ValueText.formatTolerance(part.tolerance()))
+              .set("nets", nets));
+    }
+    fields.put("parts", parts);
+    List<JsonNode> amplifiers = new ArrayList<>();
+    for (Amplifier amp : stage.amplifiers()) {
+      amplifiers.add(
+          JsonText.object()
+              .put("ref", amp.ref())
+              .put("package", amp.packageRef())
+              .put("packageType", amp.packageType().word())
+              .put("section", amp.section())
+              .put("class", amp.deviceClass().word())
+              .put("inPlus", amp.inPlus())
+              .put("inMinus", amp.inMinus())
+              .put("out", amp.out())
+              .put("vPlus", amp.vPlus())
+              .put("vMinus", amp.vMinus()));
+    }
+    fields.put("amplifiers", amplifiers);
+    return JsonText.document(fields);
+  }
+
+  /**
+   * Writes a stage's sheet to a file (UTF-8), replacing it.
+   *
+   * @throws InvalidInputException if the file cannot be written (naming the file)
+   */
+  public static void write(Stage stage, Path file) {
+    writeText(file, write(stage));
+  }
+
+  static String readText(Path file) {
+    try {
+      return Files.readString(file, StandardCharsets.UTF_8);
+    } catch (java.nio.file.NoSuchFileException e) {
+      throw new InvalidInputException(file.toString(), "", "no such file (expected an existing file)");
+    } catch (java.nio.charset.MalformedInputException e) {
+      throw new InvalidInputException(file.toString(), "", "the file is not UTF-8 text (expected a JSON text file)");
+    } catch (IOException e) {
+      throw new InvalidInputException(file.toString(), "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+    }
+  }
+
+  static void writeText(Path file, String text) {
+    try {
+      Files.writeString(file, text, StandardCharsets.UTF_8);
+    } catch (IOException e) {
+      throw new InvalidInputException(
+          file.toString(), "", "cannot write the file (" + e.getClass().getSimpleName() + "): expected a writable path");
+    }
+  }
+
+  private static Rail rail(JsonField field) {
+    field.object("a rail", RAIL_KEYS);
+    String net = field.require("net", "the rail's net name").name("the rail's net name");
+    double volts = field.require("volts", "the rail's voltage, e.g. 15 or -15").number("the rail's voltage in volts");
+    double tolerance = field.optional("tolerance").map(JsonField::tolerance).orElse(DEFAULT_RESISTOR_TOLERANCE);
+    try {
+      return new Rail(net, volts, tolerance);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
+  }
+
+  private static TestInput input(JsonField field) {
+    field.object("a test input", INPUT_KEYS);
+    String net = field.require("net", "the input's net name").name("the input's net name");
+    double dc = field.require("dc", "the input's DC level in volts, e.g. 0").number("the DC level in volts");
+    double ac = field.optional("ac").map(f -> f.nonNegative("the AC amplitude in volts")).orElse(0.0);
+    double hz = field.optional("hz").map(f -> f.nonNegative("the AC frequency in hertz")).orElse(0.0);
+    if (ac > 0 && hz <= 0) {
+      throw field.optional("hz")
+          .orElse(field)
+          .error("an input with an ac amplitude needs \"hz\" above 0 (the frequency in hertz, e.g. 1000)");
+    }
+    try {
+      return new TestInput(net, dc, ac, hz);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
+  }
+
+  private static Part part(JsonField field) {
+    field.object("a part", PART_KEYS);
+    String ref = field.require("ref", "the designator, e.g. R1").name("the designator, e.g. R1");
+    PartKind kind;
+    JsonField kindField = field.require("kind", "resistor or capacitor");
+    try {
+      kind = PartKind.of(kindField.name("resistor or capacitor"));
+    } catch (InvalidInputException e) {
+      throw kindField.rewrap(e, "");
+    }
+    String unit = kind == PartKind.RESISTOR ? "ohms, e.g. 4k7 or 470R" : "farads, e.g. 100n or 2u2";
+    double value = field.require("value", "the value in " + unit).nonNegative("the value in " + unit);
+    double tolerance =
+        field.optional("tolerance")
+            .map(JsonField::tolerance)
+            .orElse(kind == PartKind.RESISTOR ? DEFAULT_RESISTOR_TOLERANCE : DEFAULT_CAPACITOR_TOLERANCE);
+    JsonField netsField = field.require("nets", "the two nets the part joins, e.g. [\"IN\", \"SUM\"]");
+    List<JsonField> nets = netsField.elements("two net names");
+    if (nets.size() != 2) {
+      throw netsField.error("expected exactly two net names, found " + nets.size());
+    }
+    String netA = nets.get(0).name("a net name");
+    String netB = nets.get(1).name("a net name");
+    try {
+      return new Part(ref, kind, value, tolerance, netA, netB);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
+  }
+
+  private static Amplifier amplifier(JsonField field) {
+    field.object("an op-amp section", AMPLIFIER_KEYS);
+    String ref = field.require("ref", "the section's designator, e.g. U1A").name("the section's designator");
+    String pkg = field.require("package", "the package's designator, e.g. U1").name("the package's designator");
+    JsonField typeField = field.require("packageType", "single-8, dual-8 or quad-14");
+    PackageType type;
+    try {
+      type = PackageType.of(typeField.name("single-8, dual-8 or quad-14"));
+    } catch (InvalidInputException e) {
+      throw typeField.rewrap(e, "");
+    }
+    JsonField sectionField = field.require("section", "the section letter, e.g. A");
+    String section = sectionField.name("the section letter, e.g. A");
+    if (!type.hasSection(section)) {
+      throw sectionField.error(
+          "section \"" + section + "\" is not on a " + type.word() + " package (expected one of "
+              + String.join(", ", type.sections()) + ")");
+    }
+    JsonField classField = field.require("class", "classic-bipolar, ground-sensing or rail-to-rail");
+    DeviceClass deviceClass;
+    try {
+      deviceClass = DeviceClass.of(classField.name("classic-bipolar, ground-sensing or rail-to-rail"));
+    } catch (InvalidInputException e) {
+      throw classField.rewrap(e, "");
+    }
+    Map<String, String> nets = new HashMap<>();
+    for (String key : List.of("inPlus", "inMinus", "out", "vPlus", "vMinus")) {
+      nets.put(key, field.require(key, "the net on the " + key + " pin").name("a net name"));
+    }
+    try {
+      return new Amplifier(
+          ref, pkg, type, section, deviceClass,
+          nets.get("inPlus"), nets.get("inMinus"), nets.get("out"), nets.get("vPlus"), nets.get("vMinus"));
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
+  }
+
+  /** Rejects an input or supply terminal on a net that no part, other pin, rail or input touches. */
+  private static void checkTerminalNets(Stage stage, List<JsonField> ampFields) {
+    Map<String, Integer> uses = new HashMap<>();
+    for (Part part : stage.parts()) {
+      uses.merge(part.netA(), 1, Integer::sum);
+      uses.merge(part.netB(), 1, Integer::sum);
+    }
+    for (Amplifier amp : stage.amplifiers()) {
+      for (Terminal terminal : Terminal.values()) {
+        uses.merge(amp.net(terminal), 1, Integer::sum);
+      }
+    }
+    Map<Terminal, String> keys =
+        Map.of(Terminal.IN_PLUS, "inPlus", Terminal.IN_MINUS, "inMinus", Terminal.V_PLUS, "vPlus", Terminal.V_MINUS, "vMinus");
+    for (int i = 0; i < stage.amplifiers().size(); i++) {
+      Amplifier amp = stage.amplifiers().get(i);
+      for (Terminal terminal : List.of(Terminal.IN_PLUS, Terminal.IN_MINUS, Terminal.V_PLUS, Terminal.V_MINUS)) {
+        String net = amp.net(terminal);
+        if (!stage.isDriven(net) && uses.getOrDefault(net, 0) == 1) {
+          throw new InvalidInputException(
+              ampFields.get(i).source(),
+              ampFields.get(i).path() + "." + keys.get(terminal),
+              amp.ref() + " " + terminal.words() + " is on net " + net
+                  + ", which no part, other pin, rail or input touches (expected the name of a net of the stage; misspelt?)");
+        }
+      }
+    }
+  }
+}

@@ -1,0 +1,96 @@
+package com.stagewise;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Keeps the feature packages of the design notes: dependencies point one way, {@code circuit <-
+ * solver <- diagnosis <- (history, interchange) <- ui, cli, app}, and each technology stays at its
+ * edge (JavaFX in ui/app, JDBC in history, Jackson in interchange).
+ */
+class ArchitectureTest {
+  private static JavaClasses classes;
+
+  @BeforeAll
+  static void importMainClasses() {
+    classes =
+        new ClassFileImporter()
+            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+            .importPackages("com.stagewise");
+  }
+
+  @Test
+  void javafx_onlyInUiAndApp() {
+    noClasses()
+        .that()
+        .resideOutsideOfPackages("com.stagewise.ui..", "com.stagewise.app..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("javafx..")
+        .check(classes);
+  }
+
+  @Test
+  void jdbc_onlyInHistory() {
+    noClasses()
+        .that()
+        .resideOutsideOfPackage("com.stagewise.history..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("java.sql..")
+        .check(classes);
+  }
+
+  @Test
+  void jackson_onlyInInterchange() {
+    noClasses()
+        .that()
+        .resideOutsideOfPackage("com.stagewise.interchange..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("com.fasterxml.jackson..")
+        .check(classes);
+  }
+
+  @Test
+  void featurePackages_dependOneWay() {
+    layeredArchitecture()
+        .consideringOnlyDependenciesInLayers()
+        .withOptionalLayers(true)
+        .layer("circuit").definedBy("com.stagewise.circuit..")
+        .layer("solver").definedBy("com.stagewise.solver..")
+        .layer("diagnosis").definedBy("com.stagewise.diagnosis..")
+        .layer("history").definedBy("com.stagewise.history..")
+        .layer("interchange").definedBy("com.stagewise.interchange..")
+        .layer("ui").definedBy("com.stagewise.ui..")
+        .layer("cli").definedBy("com.stagewise.cli..")
+        .layer("app").definedBy("com.stagewise.app..")
+        .whereLayer("circuit").mayNotAccessAnyLayer()
+        .whereLayer("solver").mayOnlyAccessLayers("circuit")
+        .whereLayer("diagnosis").mayOnlyAccessLayers("solver", "circuit")
+        .whereLayer("history").mayOnlyAccessLayers("diagnosis", "solver", "circuit")
+        .whereLayer("interchange").mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
+        .whereLayer("ui").mayOnlyAccessLayers("interchange", "history", "diagnosis", "solver", "circuit")
+        .whereLayer("cli").mayOnlyAccessLayers("interchange", "history", "diagnosis", "solver", "circuit")
+        .whereLayer("app")
+        .mayOnlyAccessLayers("ui", "cli", "interchange", "history", "diagnosis", "solver", "circuit")
+        .check(classes);
+  }
+
+  @Test
+  void everyClass_sitsInAFeaturePackage() {
+    noClasses()
+        .should()
+        .resideOutsideOfPackages(
+            "com.stagewise.circuit..", "com.stagewise.solver..", "com.stagewise.diagnosis..",
+            "com.stagewise.history..", "com.stagewise.interchange..", "com.stagewise.ui..",
+            "com.stagewise.cli..", "com.stagewise.app..")
+        .check(classes);
+  }
+}
