@@ -1,0 +1,211 @@
+package com.stagewise.ui.drawing;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import javafx.geometry.VPos;
+import javafx.scene.layout.Region;
+import javafx.scene.paint.Color;
+import javafx.scene.shape.Line;
+import javafx.scene.shape.Polygon;
+import javafx.scene.shape.Rectangle;
+import javafx.scene.text.Font;
+import javafx.scene.text.Text;
+
+/**
+ * A compact horizontal chart of volts at one test point: the healthy band, a large marker for the
+ * measured value and small markers where the top suspects would put the reading. Values outside
+ * the band stretch the axis; a band of zero width shows as a thin bar; a missing (NaN) reading
+ * shows "no reading".
+ */
+public final class BandChart extends Region {
+  private static final double SIDE = 22;
+  private static final double AXIS_Y = 92;
+  private static final double BAND_HALF = 13;
+  private static final double ROW = 19;
+
+  private String testPoint = "";
+  private double healthyLow = Double.NaN;
+  private double healthyHigh = Double.NaN;
+  private double measured = Double.NaN;
+  private List<Marker> markers = List.of();
+  private int labelRowCount = 1;
+
+  /** Where a suspect would put the reading: its label (e.g. "R2 open") and the volts. */
+  public record Marker(String label, double volts) {
+    /** Checks the label; the volts may be any number (a non-finite one is not drawn). */
+    public Marker {
+      Objects.requireNonNull(label, "label");
+    }
+  }
+
+  /** Creates an empty chart; {@link #show} fills it. */
+  public BandChart() {
+    getStyleClass().add("band-chart");
+    Palette.paperAndClip(this);
+    setMinHeight(140);
+  }
+
+  /**
+   * Shows the chart for one test point: the healthy band from {@code healthyLow} to
+   * {@code healthyHigh} volts (either order), the measured volts (NaN when there is no reading yet)
+   * and the suspects' markers.
+   */
+  public void show(String testPoint, double healthyLow, double healthyHigh, double measured, List<Marker> markers) {
+    this.testPoint = testPoint == null ? "" : testPoint;
+    this.healthyLow = Math.min(healthyLow, healthyHigh);
+    this.healthyHigh = Math.max(healthyLow, healthyHigh);
+    if (Double.isNaN(healthyLow) || Double.isNaN(healthyHigh)) {
+      this.healthyLow = healthyLow;
+      this.healthyHigh = healthyHigh;
+    }
+    this.measured = measured;
+    this.markers = markers == null ? List.of() : List.copyOf(markers);
+    requestLayout();
+    redraw(Math.max(getWidth(), computePrefWidth(-1)));
+  }
+
+  @Override
+  protected double computePrefWidth(double height) {
+    return 560;
+  }
+
+  @Override
+  protected double computePrefHeight(double width) {
+    return AXIS_Y + BAND_HALF + 16 + labelRowCount * ROW + 30;
+  }
+
+  @Override
+  protected void layoutChildren() {
+    redraw(getWidth());
+  }
+
+  private void redraw(double width) {
+    getChildren().clear();
+    if (width <= 2 * SIDE) {
+      return;
+    }
+    double length = width - 2 * SIDE;
+    BandScale scale =
+        BandScale.fit(healthyLow, healthyHigh, measured, markers.stream().map(Marker::volts).toList());
+    Rectangle paper = new Rectangle(width, computePrefHeight(width), Palette.PAPER);
+    getChildren().add(paper);
+
+    Text title = text(testPoint, Palette.bold(18), Palette.INK);
+    title.setX(SIDE);
+    title.setY(16);
+    boolean haveBand = Double.isFinite(healthyLow) && Double.isFinite(healthyHigh);
+    Text range =
+        text(
+            haveBand
+                ? "healthy " + VoltText.of(healthyLow) + " to " + VoltText.of(healthyHigh)
+                : "healthy band unknown",
+            Palette.font(15),
+            Palette.BAND_EDGE.darker());
+    range.setX(width - SIDE - range.getLayoutBounds().getWidth());
+    range.setY(16);
+    getChildren().addAll(title, range);
+
+    Line axis = new Line(SIDE, AXIS_Y, SIDE + length, AXIS_Y);
+    axis.setStroke(Palette.SOFT_INK);
+    axis.setStrokeWidth(1.5);
+    getChildren().add(axis);
+    if (haveBand) {
+      double x1 = SIDE + scale.position(healthyLow, length);
+      double x2 = SIDE + scale.position(healthyHigh, length);
+      // A band of zero width still shows: at least 4 px wide, centred on its value.
+      double w = Math.max(4, x2 - x1);
+      Rectangle band = new Rectangle((x1 + x2) / 2 - w / 2, AXIS_Y - BAND_HALF, w, 2 * BAND_HALF);
+      band.setFill(Palette.BAND);
+      band.setStroke(Palette.BAND_EDGE);
+      band.setStrokeWidth(1.5);
+      band.setId("healthy-band");
+      getChildren().add(band);
+    }
+
+    drawMarkers(scale, length);
+    double tickBaseline = AXIS_Y + BAND_HALF + 16 + labelRowCount * ROW + 14;
+    for (double tick : scale.ticks(6)) {
+      double x = SIDE + scale.position(tick, length);
+      Line mark = new Line(x, AXIS_Y - 4, x, AXIS_Y + 4);
+      mark.setStroke(Palette.SOFT_INK);
+      Text label = text(VoltText.tick(tick), Palette.font(12), Palette.SOFT_INK);
+      label.setX(x - label.getLayoutBounds().getWidth() / 2);
+      label.setY(tickBaseline);
+      getChildren().addAll(mark, label);
+    }
+
+    paper.setHeight(computePrefHeight(width));
+    drawMeasured(scale, length, width);
+  }
+
+  private void drawMarkers(BandScale scale, double length) {
+    List<Marker> shown = markers.stream().filter(m -> Double.isFinite(m.volts())).toList();
+    double[] centres = new double[shown.size()];
+    double[] widths = new double[shown.size()];
+    List<Text> labels = new ArrayList<>();
+    for (int i = 0; i < shown.size(); i++) {
+      Text label = text(shown.get(i).label(), Palette.font(13), Palette.SECOND);
+      labels.add(label);
+      centres[i] = SIDE + scale.position(shown.get(i).volts(), length);
+      widths[i] = label.getLayoutBounds().getWidth();
+    }
+    int[] rows = BandScale.labelRows(centres, widths, 8);
+    int rowCount = 1;
+    for (int i = 0; i < shown.size(); i++) {
+      double x = centres[i];
+      Polygon tip = new Polygon(x, AXIS_Y + 2, x - 7, AXIS_Y + BAND_HALF + 9, x + 7, AXIS_Y + BAND_HALF + 9);
+      tip.setFill(Palette.SECOND);
+      Text label = labels.get(i);
+      double left = Math.max(2, Math.min(x - widths[i] / 2, SIDE + length + SIDE - widths[i] - 2));
+      label.setX(left);
+      label.setY(AXIS_Y + BAND_HALF + 22 + rows[i] * ROW);
+      getChildren().addAll(tip, label);
+      rowCount = Math.max(rowCount, rows[i] + 1);
+    }
+    if (rowCount != labelRowCount) {
+      labelRowCount = rowCount;
+      requestLayout();
+    }
+  }
+
+  private void drawMeasured(BandScale scale, double length, double width) {
+    if (!Double.isFinite(measured)) {
+      Text none = text("no reading", Palette.bold(16), Palette.SOFT_INK);
+      none.setId("no-reading");
+      none.setX(width / 2 - none.getLayoutBounds().getWidth() / 2);
+      none.setY(48);
+      getChildren().add(none);
+      return;
+    }
+    double x = SIDE + scale.position(measured, length);
+    boolean inside =
+        Double.isFinite(healthyLow) && measured >= healthyLow - 1e-12 && measured <= healthyHigh + 1e-12;
+    Color mark = inside ? Palette.BAND_EDGE : Palette.OUTSIDE;
+    Line needle = new Line(x, AXIS_Y - BAND_HALF - 6, x, AXIS_Y + BAND_HALF + 2);
+    needle.setStroke(mark);
+    needle.setStrokeWidth(4);
+    Polygon head = new Polygon(x, AXIS_Y - BAND_HALF - 2, x - 11, AXIS_Y - BAND_HALF - 20, x + 11, AXIS_Y - BAND_HALF - 20);
+    head.setFill(mark);
+    head.setId("measured-marker");
+    Text value = text(VoltText.of(measured) + (inside ? "" : "  outside"), Palette.bold(16), Palette.MEASURED);
+    double w = value.getLayoutBounds().getWidth();
+    double left = Math.max(4, Math.min(x - w / 2, width - w - 4));
+    Rectangle pill = new Rectangle(left - 6, 36, w + 12, 24);
+    pill.setArcWidth(12);
+    pill.setArcHeight(12);
+    pill.setFill(Palette.MEASURED_FILL);
+    pill.setStroke(mark);
+    value.setX(left);
+    value.setY(48);
+    getChildren().addAll(needle, head, pill, value);
+  }
+
+  private static Text text(String value, Font font, Color colour) {
+    Text text = new Text(value);
+    text.setFont(font);
+    text.setFill(colour);
+    text.setTextOrigin(VPos.CENTER);
+    return text;
+  }
+}

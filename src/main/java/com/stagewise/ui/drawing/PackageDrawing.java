@@ -1,0 +1,204 @@
+package com.stagewise.ui.drawing;
+
+import com.stagewise.circuit.PackageType;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Objects;
+import java.util.function.IntConsumer;
+import javafx.geometry.VPos;
+import javafx.scene.Cursor;
+import javafx.scene.Group;
+import javafx.scene.shape.Arc;
+import javafx.scene.shape.ArcType;
+import javafx.scene.shape.Circle;
+import javafx.scene.shape.Rectangle;
+import javafx.scene.layout.Region;
+import javafx.scene.text.Text;
+import javafx.scene.text.TextAlignment;
+import javafx.scene.transform.Scale;
+
+/**
+ * A top view of an op-amp package (DIP, 8 or 14 pins) with numbered pins, the notch and dot at
+ * pin 1, each pin's name, an optional text per pin (a reading, a net name) and one highlighted pin
+ * to probe. Every pin is a touch target of at least 48 px at the preferred size.
+ */
+public final class PackageDrawing extends Region {
+  private final Group content = new Group();
+  private final Scale scale = new Scale(1, 1, 0, 0);
+  private final Map<Integer, String> pinText = new HashMap<>();
+  private PackageType type;
+  private String packageRef = "";
+  private Map<Integer, String> pinNames = Map.of();
+  private int highlighted;
+  private IntConsumer onPinChosen = pin -> {};
+  private PackageGeometry geometry = PackageGeometry.of(8);
+
+  /** Creates an empty drawing; {@link #show} gives it a package. */
+  public PackageDrawing() {
+    getStyleClass().add("package-drawing");
+    Palette.paperAndClip(this);
+    content.getTransforms().add(scale);
+    getChildren().add(content);
+    setMinSize(geometry.width() * 0.5, geometry.height() * 0.5);
+  }
+
+  /**
+   * Shows a package: its type, designator (e.g. "U1") and the name of every pin (e.g. "out A");
+   * pins missing from {@code pinNames} get their name from the pinout. Clears the highlight and
+   * every pin text.
+   */
+  public void show(PackageType type, String packageRef, Map<Integer, String> pinNames) {
+    this.type = Objects.requireNonNull(type, "type");
+    this.packageRef = packageRef == null ? "" : packageRef;
+    this.pinNames = pinNames == null ? Map.of() : new LinkedHashMap<>(pinNames);
+    this.geometry = PackageGeometry.of(type.pinCount());
+    this.highlighted = 0;
+    pinText.clear();
+    redraw();
+  }
+
+  /** Highlights the pin to probe (0 clears the highlight). */
+  public void highlight(int pin) {
+    highlighted = pin;
+    redraw();
+  }
+
+  /** Sets the text shown beside a pin, e.g. a reading or the net name; null or empty clears it. */
+  public void setPinText(int pin, String text) {
+    if (text == null || text.isEmpty()) {
+      pinText.remove(pin);
+    } else {
+      pinText.put(pin, text);
+    }
+    redraw();
+  }
+
+  /** Sets what happens when the user touches or clicks a pin (its pad or its text). */
+  public void setOnPinChosen(IntConsumer action) {
+    onPinChosen = action == null ? pin -> {} : action;
+  }
+
+  /** Returns the highlighted pin, 0 when none. */
+  public int highlighted() {
+    return highlighted;
+  }
+
+  @Override
+  protected double computePrefWidth(double height) {
+    return geometry.width();
+  }
+
+  @Override
+  protected double computePrefHeight(double width) {
+    return geometry.height();
+  }
+
+  @Override
+  protected void layoutChildren() {
+    double fit = Math.min(getWidth() / geometry.width(), getHeight() / geometry.height());
+    double s = Math.max(0.3, Math.min(1.6, fit));
+    scale.setX(s);
+    scale.setY(s);
+    content.setLayoutX(Math.max(0, (getWidth() - geometry.width() * s) / 2));
+    content.setLayoutY(Math.max(0, (getHeight() - geometry.height() * s) / 2));
+  }
+
+  private void redraw() {
+    content.getChildren().clear();
+    Rectangle paper = new Rectangle(geometry.width(), geometry.height(), Palette.PAPER);
+    content.getChildren().add(paper);
+    if (type == null) {
+      return;
+    }
+    Box body = geometry.body();
+    for (PackageGeometry.PinPlace place : geometry.pins()) {
+      drawPin(place);
+    }
+    Rectangle bodyShape = new Rectangle(body.x(), body.y(), body.w(), body.h());
+    bodyShape.setArcWidth(10);
+    bodyShape.setArcHeight(10);
+    bodyShape.setFill(Palette.BODY);
+    // The notch at the top edge and the dot beside pin 1 mark the pin-1 end, as on real parts.
+    Arc notch = new Arc(body.cx(), body.y(), 18, 14, 180, 180);
+    notch.setType(ArcType.ROUND);
+    notch.setFill(Palette.PAPER);
+    Circle dot = new Circle(body.x() + 24, body.y() + 26, 9, Palette.PAPER);
+    Text ref = text(packageRef, body.cx(), body.cy() - 14, Palette.bold(22));
+    ref.setFill(Palette.PAPER);
+    Text kind = text(type.word(), body.cx(), body.cy() + 14, Palette.font(15));
+    kind.setFill(Palette.PAPER);
+    Text caption = text("top view, pin 1 at the notch", geometry.width() / 2, 24, Palette.font(15));
+    caption.setFill(Palette.SOFT_INK);
+    content.getChildren().addAll(bodyShape, notch, dot, ref, kind, caption);
+    for (PackageGeometry.PinPlace place : geometry.pins()) {
+      drawPinNumber(place);
+    }
+  }
+
+  private void drawPin(PackageGeometry.PinPlace place) {
+    boolean on = place.pin() == highlighted;
+    Box pad = place.pad();
+    Group pin = new Group();
+    pin.setId("pin-" + place.pin());
+    pin.setCursor(Cursor.HAND);
+    Rectangle target = new Rectangle(pad.x(), pad.y(), pad.w(), pad.h());
+    target.setArcWidth(8);
+    target.setArcHeight(8);
+    target.setFill(on ? Palette.HIGHLIGHT : Palette.PIN_FILL);
+    target.setStroke(on ? Palette.HIGHLIGHT_RING : Palette.SOFT_INK);
+    target.setStrokeWidth(on ? 4 : 1.5);
+    Box area = place.text();
+    Rectangle textTarget = new Rectangle(area.x(), area.y(), area.w(), area.h());
+    textTarget.setArcWidth(8);
+    textTarget.setArcHeight(8);
+    textTarget.setFill(on ? Palette.HIGHLIGHT.deriveColor(0, 0.45, 1.15, 1) : Palette.PAPER);
+    textTarget.setStroke(on ? Palette.HIGHLIGHT_RING : null);
+    textTarget.setStrokeWidth(2);
+    String name = pinNames.getOrDefault(place.pin(), PackageGeometry.pinName(type, place.pin()));
+    double inner = place.left() ? area.right() - 10 : area.x() + 10;
+    Text nameText = new Text(name);
+    nameText.setFont(on ? Palette.bold(19) : Palette.font(17));
+    nameText.setFill(Palette.INK);
+    nameText.setTextOrigin(VPos.CENTER);
+    place(nameText, inner, area.y() + (pinText.containsKey(place.pin()) ? 16 : area.h() / 2), place.left());
+    pin.getChildren().addAll(target, textTarget, nameText);
+    String extra = pinText.get(place.pin());
+    if (extra != null) {
+      Text extraText = new Text(extra);
+      extraText.setFont(Palette.bold(16));
+      extraText.setFill(Palette.EXPECTED);
+      extraText.setTextOrigin(VPos.CENTER);
+      place(extraText, inner, area.y() + 37, place.left());
+      pin.getChildren().add(extraText);
+    }
+    int number = place.pin();
+    pin.setOnMouseClicked(event -> onPinChosen.accept(number));
+    content.getChildren().add(pin);
+  }
+
+  private void drawPinNumber(PackageGeometry.PinPlace place) {
+    boolean on = place.pin() == highlighted;
+    Box pad = place.pad();
+    Text number = text(Integer.toString(place.pin()), pad.cx(), pad.cy(), on ? Palette.bold(30) : Palette.bold(18));
+    number.setFill(Palette.INK);
+    number.setMouseTransparent(true);
+    content.getChildren().add(number);
+  }
+
+  private static void place(Text text, double x, double y, boolean rightAligned) {
+    double width = text.getLayoutBounds().getWidth();
+    text.setX(rightAligned ? x - width : x);
+    text.setY(y);
+  }
+
+  private static Text text(String value, double cx, double cy, javafx.scene.text.Font font) {
+    Text text = new Text(value);
+    text.setFont(font);
+    text.setTextOrigin(VPos.CENTER);
+    text.setTextAlignment(TextAlignment.CENTER);
+    text.setX(cx - text.getLayoutBounds().getWidth() / 2);
+    text.setY(cy);
+    return text;
+  }
+}

@@ -1,0 +1,116 @@
+package com.stagewise.ui.drawing;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.stagewise.circuit.PackageType;
+import java.awt.image.BufferedImage;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.atomic.AtomicInteger;
+import javafx.event.Event;
+import javafx.scene.Node;
+import javafx.scene.input.MouseButton;
+import javafx.scene.input.MouseEvent;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
+
+/** Renders the package drawing and the band chart headless and checks what came out. */
+class PackageAndBandRenderTest {
+
+  @ParameterizedTest
+  @EnumSource(PackageType.class)
+  void packageDrawing_rendersEveryPinAndReportsTheChosenOne(PackageType type) {
+    AtomicInteger chosen = new AtomicInteger();
+    BufferedImage image =
+        Fx.call(
+            () -> {
+              PackageDrawing drawing = new PackageDrawing();
+              drawing.show(type, "U1", Map.of());
+              drawing.highlight(type == PackageType.QUAD_14 ? 9 : 6);
+              drawing.setPinText(type == PackageType.QUAD_14 ? 9 : 6, "SUM  +0.02 V");
+              drawing.setPinText(1, "OUT");
+              drawing.setOnPinChosen(chosen::set);
+              BufferedImage shot = Fx.render(drawing, 640, 560);
+              for (int pin = 1; pin <= type.pinCount(); pin++) {
+                assertThat(drawing.lookup("#pin-" + pin)).as("pin %d", pin).isNotNull();
+              }
+              click(drawing.lookup("#pin-3"));
+              return shot;
+            });
+    assertThat(image.getWidth()).isEqualTo(640);
+    assertThat(image.getHeight()).isEqualTo(560);
+    assertThat(Fx.colours(image)).isGreaterThan(5);
+    assertThat(Fx.inked(image)).isBetween(0.05, 0.9);
+    assertThat(chosen.get()).isEqualTo(3);
+    Fx.keep(image, "package-" + type.word());
+  }
+
+  @Test
+  void bandChart_rendersReadingOutsideBandWithSuspects() {
+    BufferedImage image =
+        Fx.call(
+            () -> {
+              BandChart chart = new BandChart();
+              chart.show(
+                  "U1.7 (OUT)",
+                  -4.84,
+                  -4.56,
+                  13.41,
+                  List.of(
+                      new BandChart.Marker("R2 open", 13.5),
+                      new BandChart.Marker("U1B stuck high", 13.45),
+                      new BandChart.Marker("R1 short", -13.5),
+                      new BandChart.Marker("healthy", -4.7)));
+              BufferedImage shot = Fx.render(chart, 560, 180);
+              assertThat(chart.lookup("#measured-marker")).isNotNull();
+              assertThat(chart.lookup("#healthy-band")).isNotNull();
+              assertThat(chart.lookup("#no-reading")).isNull();
+              return shot;
+            });
+    assertThat(image.getWidth()).isEqualTo(560);
+    assertThat(Fx.colours(image)).isGreaterThan(5);
+    Fx.keep(image, "band-outside");
+  }
+
+  @Test
+  void bandChart_withoutReading_saysSo() {
+    BufferedImage image =
+        Fx.call(
+            () -> {
+              BandChart chart = new BandChart();
+              chart.show("SUM", 0.0, 0.0, Double.NaN, List.of(new BandChart.Marker("R3 open", 0.9)));
+              BufferedImage shot = Fx.render(chart, 560, 180);
+              assertThat(chart.lookup("#no-reading")).isNotNull();
+              assertThat(chart.lookup("#measured-marker")).isNull();
+              assertThat(chart.lookup("#healthy-band")).isNotNull();
+              return shot;
+            });
+    assertThat(Fx.inked(image)).isGreaterThan(0.01);
+    Fx.keep(image, "band-no-reading");
+  }
+
+  @Test
+  void bandChart_readingInsideBand() {
+    BufferedImage image =
+        Fx.call(
+            () -> {
+              BandChart chart = new BandChart();
+              chart.show("U1.1", 2.41, 2.59, 2.47, List.of(new BandChart.Marker("R5 low", 2.3)));
+              return Fx.render(chart, 560, 180);
+            });
+    assertThat(Fx.colours(image)).isGreaterThan(5);
+    Fx.keep(image, "band-inside");
+  }
+
+  private static void click(Node node) {
+    var bounds = node.localToScene(node.getBoundsInLocal());
+    double x = bounds.getCenterX();
+    double y = bounds.getCenterY();
+    Event.fireEvent(
+        node,
+        new MouseEvent(
+            MouseEvent.MOUSE_CLICKED, x, y, x, y, MouseButton.PRIMARY, 1,
+            false, false, false, false, true, false, false, true, false, true, null));
+  }
+}
