@@ -23,6 +23,8 @@ final class Fx {
   static final Path SHOTS = Path.of("docs", "screens", "drawings");
 
   private static boolean started;
+  // Held so the setting survives garbage collection; the toolkit warns about the class path.
+  private static final java.util.logging.Logger FX_LOG = java.util.logging.Logger.getLogger("javafx");
 
   private Fx() {}
 
@@ -30,6 +32,7 @@ final class Fx {
     if (started) {
       return;
     }
+    FX_LOG.setLevel(java.util.logging.Level.SEVERE);
     try {
       Platform.startup(() -> {});
     } catch (IllegalStateException alreadyRunning) {
