@@ -1,0 +1,423 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestInput;
+import com.stagewise.solver.Conditions;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.concurrent.ConcurrentHashMap;
+
+/**
+ * Ranks the faults that explain a set of readings on one stage and says what to probe next.
+ *
+ * <p>Built once per stage: the predictions of every hypothesis are computed on first use and kept,
+ * so re-ranking after one more reading costs only the likelihoods and the probe choice. When an
+ * input net is read and differs from the sheet, the stage is diagnosed with the measured level
+ * (the fault may be upstream), which needs predictions of its own; they are kept too. Safe to call
+ * from several threads.
+ */
+public final class Diagnoser {
+  /** Suspects listed when the caller does not ask for a number. */
+  public static final int DEFAULT_TOP = 12;
+
+  /** Two hypotheses whose evidence differs by less than this factor cannot be told apart. */
+  static final double GROUP_FACTOR = 10;
+
+  /** A hypothesis below this share of the first suspect's probability is left off the list. */
+  private static final double LIST_FLOOR = 1e-4;
+
+  /** Grid points whose spread is computed; the others borrow it from the nearest of these. */
+  private static final int SPREAD_EVERY = 4;
+
+  /** Interpolated steps between neighbouring grid points of a drifted value. */
+  private static final int SUB_STEPS = 4;
+
+  private final Stage stage;
+  private final FaultCatalogue.Entries catalogue;
+  private final Map<String, Double> priors;
+  private final Map<String, Integer> shopCounts;
+  private final TestPoints points;
+  private final Evidence evidence;
+  private final double span;
+  private final Map<Map<String, Double>, List<Hypothesis>> models = new ConcurrentHashMap<>();
+
+  private Diagnoser(Stage stage, Map<String, Integer> shopCounts) {
+    this.stage = stage;
+    this.catalogue = FaultCatalogue.of(stage);
+    Map<String, Double> published = Priors.published(stage, catalogue.faults());
+    this.priors = shopCounts.isEmpty() ? published : Priors.blend(published, shopCounts, Priors.SHOP_STRENGTH);
+    this.shopCounts = Map.copyOf(shopCounts);
+    this.points = new TestPoints(stage);
+    double max = 1;
+    for (Rail rail : stage.rails()) {
+      max = Math.max(max, Math.abs(rail.volts()));
+    }
+    this.span = max;
+    this.evidence = new Evidence(max);
+  }
+
+  /** Returns a diagnoser for a stage with the published priors. */
+  public static Diagnoser of(Stage stage) {
+    return new Diagnoser(stage, Map.of());
+  }
+
+  /**
+   * Returns a diagnoser whose priors blend the published ones with the shop's counts of confirmed
+   * faults on the stage's board model (fault id to count).
+   */
+  public static Diagnoser of(Stage stage, Map<String, Integer> shopCounts) {
+    return new Diagnoser(stage, shopCounts);
+  }
+
+  /** Returns the stage this diagnoser works on. */
+  public Stage stage() {
+    return stage;
+  }
+
+  /** Returns the fault ids of the catalogue, healthy first. */
+  public List<String> faults() {
+    return catalogue.faults().stream().map(Fault::id).toList();
+  }
+
+  /** Returns the diagnosis of a set of readings, listing {@link #DEFAULT_TOP} suspects at most. */
+  public Diagnosis diagnose(ReadingSet readings) {
+    return diagnose(readings, DEFAULT_TOP);
+  }
+
+  /**
+   * Returns the diagnosis of a set of readings.
+   *
+   * @param top the most suspects to list, 1 or more
+   * @throws InvalidInputException if a reading names no net or used pin of the stage, is not a
+   *     finite number, lies far beyond every rail, or is an AC reading the stage cannot have
+   */
+  public Diagnosis diagnose(ReadingSet readings, int top) {
+    if (top < 1) {
+      throw new InvalidInputException("", "top", "the number of suspects (" + top + ") must be 1 or more");
+    }
+    check(readings);
+    List<String> notes = new ArrayList<>();
+    Map<String, Double> inputs = measuredInputs(readings, notes);
+    List<Hypothesis> hypotheses = models.computeIfAbsent(inputs, this::build);
+    List<Evidence.Bound> bound = new ArrayList<>();
+    for (Reading r : readings.readings()) {
+      bound.add(Evidence.bind(points, readings, r));
+    }
+    Ranking ranking = rank(hypotheses, bound);
+    notes.addAll(catalogue.notes());
+    Explainer explainer = new Explainer(stage, points, span, shopCounts);
+    List<Suspect> suspects = suspects(ranking, bound, top, explainer);
+    Verdict verdict = verdict(ranking);
+    List<ProbeAdvice> probes = new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter());
+    String check = verdict == Verdict.HEALTHY ? "" : explainer.confirmingCheck(ranking.first().hypothesis.fault, ranking.first().estimate());
+    if (verdict == Verdict.HEALTHY) {
+      notes.add(
+          "Healthy by these readings. This does not mean the unit is safe: follow local codes and"
+              + " licensed practice on powered equipment.");
+    }
+    return new Diagnosis(
+        verdict,
+        explainer.observations(hypotheses.get(0), bound, readings),
+        suspects,
+        probes,
+        check,
+        notes);
+  }
+
+  /** A hypothesis with its prior and the predictions of its scenarios. */
+  static final class Hypothesis {
+    final Fault fault;
+    final double prior;
+    final List<Prediction> predictions;
+
+    Hypothesis(Fault fault, double prior, List<Prediction> predictions) {
+      this.fault = fault;
+      this.prior = prior;
+      this.predictions = predictions;
+    }
+  }
+
+  /** A hypothesis scored against the readings. */
+  static final class Scored {
+    final Hypothesis hypothesis;
+    final double logEvidence;
+    final Prediction best;
+    final double[] scenarioWeights;
+    double probability;
+
+    Scored(Hypothesis hypothesis, double logEvidence, Prediction best, double[] scenarioWeights) {
+      this.hypothesis = hypothesis;
+      this.logEvidence = logEvidence;
+      this.best = best;
+      this.scenarioWeights = scenarioWeights;
+    }
+
+    OptionalDouble estimate() {
+      return Double.isNaN(best.value()) ? OptionalDouble.empty() : OptionalDouble.of(best.value());
+    }
+  }
+
+  /** Hypotheses sorted by posterior probability, highest first. */
+  record Ranking(List<Scored> scored) {
+    Scored first() {
+      return scored.get(0);
+    }
+
+    double probability(String faultId) {
+      for (Scored s : scored) {
+        if (s.hypothesis.fault.id().equals(faultId)) {
+          return s.probability;
+        }
+      }
+      return 0;
+    }
+  }
+
+  private List<Hypothesis> build(Map<String, Double> inputs) {
+    Conditions conditions = Conditions.NOMINAL;
+    for (Map.Entry<String, Double> e : inputs.entrySet()) {
+      conditions = conditions.withDriven(e.getKey(), e.getValue());
+    }
+    Predictor predictor = new Predictor(points, stage);
+    List<Hypothesis> hypotheses = new ArrayList<>();
+    for (Fault fault : catalogue.faults()) {
+      List<Scenario> scenarios = FaultModel.scenarios(stage, conditions, fault);
+      List<Prediction> predictions = predictAll(predictor, scenarios);
+      hypotheses.add(new Hypothesis(fault, priors.get(fault.id()), predictions));
+    }
+    return hypotheses;
+  }
+
+  private static List<Prediction> predictAll(Predictor predictor, List<Scenario> scenarios) {
+    boolean grid = scenarios.size() > 1 && scenarios.stream().allMatch(Scenario::onGrid);
+    if (!grid) {
+      List<Prediction> out = new ArrayList<>();
+      for (Scenario s : scenarios) {
+        out.addAll(predictor.predict(s, true));
+      }
+      return out;
+    }
+    int n = scenarios.size();
+    List<List<Prediction>> raw = new ArrayList<>();
+    for (int i = 0; i < n; i++) {
+      boolean spread = i % SPREAD_EVERY == 0 || i == n - 1;
+      raw.add(predictor.predict(scenarios.get(i), spread));
+    }
+    // Borrow the spread of the nearest grid point that has one.
+    for (int i = 0; i < n; i++) {
+      if (i % SPREAD_EVERY == 0 || i == n - 1) {
+        continue;
+      }
+      int lower = i - i % SPREAD_EVERY;
+      int upper = Math.min(lower + SPREAD_EVERY, n - 1);
+      int from = i - lower <= upper - i ? lower : upper;
+      List<Prediction> borrowed = new ArrayList<>();
+      for (int k = 0; k < raw.get(i).size(); k++) {
+        Prediction p = raw.get(i).get(k);
+        Prediction donor = raw.get(from).get(Math.min(k, raw.get(from).size() - 1));
+        borrowed.add(new Prediction(p.weight(), p.dcMean(), donor.dcSd(), p.acMean(), donor.acSd(), p.value(), p.label(), p.states()));
+      }
+      raw.set(i, borrowed);
+    }
+    boolean simple = raw.stream().allMatch(list -> list.size() == 1);
+    List<Prediction> out = new ArrayList<>();
+    if (!simple) {
+      raw.forEach(out::addAll);
+      double total = out.stream().mapToDouble(Prediction::weight).sum();
+      return out.stream().map(p -> p.withWeight(p.weight() / total)).toList();
+    }
+    // A log-uniform prior over the drifted value: equal weight per interpolated step.
+    int steps = (n - 1) * SUB_STEPS + 1;
+    for (int i = 0; i < n - 1; i++) {
+      Prediction a = raw.get(i).get(0);
+      Prediction b = raw.get(i + 1).get(0);
+      for (int k = 0; k < SUB_STEPS; k++) {
+        double t = (double) k / SUB_STEPS;
+        double value = a.value() * Math.pow(b.value() / a.value(), t);
+        out.add(a.toward(b, t, 1.0 / steps, value));
+      }
+    }
+    out.add(raw.get(n - 1).get(0).withWeight(1.0 / steps));
+    return out;
+  }
+
+  private Ranking rank(List<Hypothesis> hypotheses, List<Evidence.Bound> bound) {
+    List<Scored> scored = new ArrayList<>(hypotheses.size());
+    double maxLog = Double.NEGATIVE_INFINITY;
+    for (Hypothesis h : hypotheses) {
+      int n = h.predictions.size();
+      double[] logs = new double[n];
+      double best = Double.NEGATIVE_INFINITY;
+      int bestIndex = 0;
+      for (int v = 0; v < n; v++) {
+        Prediction p = h.predictions.get(v);
+        double sum = Math.log(p.weight());
+        for (Evidence.Bound r : bound) {
+          sum += evidence.logLikelihood(p, r);
+        }
+        logs[v] = sum;
+        if (sum > best) {
+          best = sum;
+          bestIndex = v;
+        }
+      }
+      double total = 0;
+      for (int v = 0; v < n; v++) {
+        logs[v] = Math.exp(logs[v] - best);
+        total += logs[v];
+      }
+      for (int v = 0; v < n; v++) {
+        logs[v] /= total;
+      }
+      double logEvidence = best + Math.log(total);
+      scored.add(new Scored(h, logEvidence, h.predictions.get(bestIndex), logs));
+      maxLog = Math.max(maxLog, logEvidence + Math.log(h.prior));
+    }
+    double sum = 0;
+    for (Scored s : scored) {
+      s.probability = Math.exp(s.logEvidence + Math.log(s.hypothesis.prior) - maxLog);
+      sum += s.probability;
+    }
+    for (Scored s : scored) {
+      s.probability /= sum;
+    }
+    scored.sort(Comparator.comparingDouble((Scored s) -> -s.probability));
+    return new Ranking(scored);
+  }
+
+  private List<Suspect> suspects(Ranking ranking, List<Evidence.Bound> bound, int top, Explainer explainer) {
+    List<Scored> listed = new ArrayList<>();
+    double firstProbability = ranking.first().probability;
+    for (Scored s : ranking.scored()) {
+      if (listed.size() >= top || s.probability < LIST_FLOOR * firstProbability) {
+        break;
+      }
+      listed.add(s);
+    }
+    double total = listed.stream().mapToDouble(s -> s.probability).sum();
+    List<Suspect> suspects = new ArrayList<>();
+    for (Scored s : listed) {
+      List<String> group = new ArrayList<>();
+      for (Scored other : ranking.scored()) {
+        if (Math.abs(other.logEvidence - s.logEvidence) <= Math.log(GROUP_FACTOR)
+            && other.probability >= LIST_FLOOR * firstProbability) {
+          group.add(other.hypothesis.fault.id());
+        }
+      }
+      boolean consistent = bound.stream().allMatch(r -> Evidence.score(s.best, r) <= 3);
+      Map<String, Double> predicted = new LinkedHashMap<>();
+      for (int i = 0; i < points.size; i++) {
+        predicted.put(points.names.get(i), s.best.dcMean()[i]);
+      }
+      suspects.add(
+          new Suspect(
+              s.hypothesis.fault.id(),
+              s.probability / total,
+              consistent,
+              group,
+              explainer.why(s.hypothesis.fault, s.best, s.estimate(), bound),
+              s.estimate(),
+              predicted));
+    }
+    return suspects;
+  }
+
+  private static Verdict verdict(Ranking ranking) {
+    double healthy = ranking.probability(Fault.HEALTHY.id());
+    if (ranking.first().hypothesis.fault.kind() == FaultKind.HEALTHY && healthy >= 0.5) {
+      return Verdict.HEALTHY;
+    }
+    // A working stage is still in play: more readings are needed before naming a fault.
+    return healthy < 0.05 ? Verdict.FAULT : Verdict.INCONCLUSIVE;
+  }
+
+  private Map<String, Double> measuredInputs(ReadingSet readings, List<String> notes) {
+    Map<String, Double> measured = new HashMap<>();
+    for (Reading r : readings.readings()) {
+      if (r.kind() != Reading.Kind.DC) {
+        continue;
+      }
+      String net = points.netOf.get(points.index.get(r.at()));
+      TestInput input = stage.input(net).orElse(null);
+      if (input == null) {
+        continue;
+      }
+      double u = readings.uncertainty(r);
+      // Off by more than the meter's uncertainty plus 1 % of the level and 2 mV.
+      if (Math.abs(r.value() - input.dc()) > u + 0.01 * Math.abs(input.dc()) + 2e-3) {
+        measured.put(net, r.value());
+        notes.add(
+            String.format(
+                java.util.Locale.ROOT,
+                "Input %s reads %.3f V where the stage sheet says %.3f V: the stage is judged with the"
+                    + " measured level, and the fault may be upstream of this stage.",
+                net,
+                r.value(),
+                input.dc()));
+      }
+    }
+    return measured;
+  }
+
+  private void check(ReadingSet readings) {
+    boolean hasAc = stage.inputs().stream().anyMatch(TestInput::hasAc);
+    double acHz = stage.inputs().stream().filter(TestInput::hasAc).mapToDouble(TestInput::hz).findFirst().orElse(0);
+    List<Reading> list = readings.readings();
+    for (int i = 0; i < list.size(); i++) {
+      Reading r = list.get(i);
+      String field = "readings[" + i + "]";
+      if (!points.index.containsKey(r.at())) {
+        throw new InvalidInputException("", field + ".at", unknownPoint(r.at()));
+      }
+      if (r.kind() == Reading.Kind.DC && Math.abs(r.value()) > 2 * span + 1) {
+        throw new InvalidInputException(
+            "",
+            field + ".dc",
+            String.format(
+                java.util.Locale.ROOT,
+                "%.3f V at %s is far beyond every rail of this stage (largest %.1f V): check the value and its sign",
+                r.value(),
+                r.at(),
+                span));
+      }
+      if (r.kind() == Reading.Kind.AC && !hasAc) {
+        throw new InvalidInputException(
+            "", field + ".ac", "the stage has no AC test input, so an AC reading at " + r.at() + " cannot be judged");
+      }
+      if (r.kind() == Reading.Kind.AC && Math.abs(r.hz() - acHz) > 1e-6 * acHz) {
+        throw new InvalidInputException(
+            "",
+            field + ".hz",
+            String.format(java.util.Locale.ROOT, "the AC reading at %s is at %s Hz but the stage's test input is at %s Hz", r.at(), r.hz(), acHz));
+      }
+    }
+  }
+
+  private String unknownPoint(String at) {
+    int dot = at.lastIndexOf('.');
+    if (dot > 0) {
+      String pkg = at.substring(0, dot);
+      String pinText = at.substring(dot + 1);
+      PackageType type = stage.packageType(pkg).orElse(null);
+      if (type != null && pinText.matches("\\d+")) {
+        int pin = Integer.parseInt(pinText);
+        if (pin < 1 || pin > type.pinCount()) {
+          return at + ": a " + type.word() + " package has pins 1 to " + type.pinCount();
+        }
+        return at + ": pin " + pin + " of " + pkg + " is not used by this stage (read a used pin or a net)";
+      }
+    }
+    return "\"" + at + "\" is not a net or a used package pin of this stage (nets: "
+        + String.join(", ", stage.nets()) + "; pins like " + stage.pinNets().keySet().stream().findFirst().orElse("U1.1") + ")";
+  }
+}

@@ -1,0 +1,74 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+
+/**
+ * How well predictions fit readings: the likelihood of each reading given a prediction.
+ *
+ * <p>The core is a normal density whose variance adds the prediction's spread, the instrument's
+ * uncertainty (its half-width taken as a uniform error, so its variance is u²/3) and a small model
+ * floor. The tail is a uniform density over the whole span of the rails with weight {@link
+ * #MISREAD}: a misread or mistyped value lowers a hypothesis but never eliminates it.
+ */
+final class Evidence {
+  /** Chance that any one reading is a misread, wrong pin or typing slip (common practice). */
+  static final double MISREAD = 0.01;
+
+  /**
+   * Model error that no parameter covers (wiring resistance, leakage, meter loading), volts. A
+   * figure of common practice: half a millivolt, below a 6000-count meter's last digit on 6 V.
+   */
+  static final double FLOOR_VOLTS = 5e-4;
+
+  /** Relative model floor for AC amplitudes (flat open-loop gain, ideal parts): 1 %. */
+  static final double AC_FLOOR = 0.01;
+
+  /** One reading bound to its test point, with its uncertainty's variance. */
+  record Bound(int point, boolean ac, double value, double variance, String at) {}
+
+  private final double tailDensity;
+
+  Evidence(double span) {
+    // Uniform over [-1.2·span - 1, +1.2·span + 1] volts.
+    this.tailDensity = 1 / (2 * (1.2 * span + 1));
+  }
+
+  static Bound bind(TestPoints points, ReadingSet set, Reading reading) {
+    int point = points.index.get(reading.at());
+    double u = set.uncertainty(reading);
+    return new Bound(point, reading.kind() == Reading.Kind.AC, reading.value(), u * u / 3, reading.at());
+  }
+
+  /** Returns the variance of the prediction's error at a reading: spread, instrument and floor. */
+  static double variance(Prediction p, Bound r) {
+    double sd = r.ac() ? p.acSd()[r.point()] : p.dcSd()[r.point()];
+    double mean = mean(p, r);
+    double floor = r.ac() ? AC_FLOOR * Math.abs(mean) + FLOOR_VOLTS : FLOOR_VOLTS;
+    return sd * sd + r.variance() + floor * floor;
+  }
+
+  static double mean(Prediction p, Bound r) {
+    if (r.ac()) {
+      return p.acMean() == null ? 0 : p.acMean()[r.point()];
+    }
+    return p.dcMean()[r.point()];
+  }
+
+  /** Returns the log-likelihood of one reading under a prediction. */
+  double logLikelihood(Prediction p, Bound r) {
+    return logLikelihood(r.value(), mean(p, r), variance(p, r));
+  }
+
+  /** Returns the log-likelihood of a value given a predicted mean and total variance. */
+  double logLikelihood(double value, double mean, double variance) {
+    double d = value - mean;
+    double core = Math.exp(-d * d / (2 * variance)) / Math.sqrt(2 * Math.PI * variance);
+    return Math.log((1 - MISREAD) * core + MISREAD * tailDensity);
+  }
+
+  /** Returns how many standard deviations a reading lies from a prediction. */
+  static double score(Prediction p, Bound r) {
+    return Math.abs(r.value() - mean(p, r)) / Math.sqrt(variance(p, r));
+  }
+}

@@ -1,0 +1,266 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.Terminal;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+/** Puts a diagnosis into a technician's words: observations, whys and confirming checks. */
+final class Explainer {
+  private final Stage stage;
+  private final TestPoints points;
+  private final double span;
+  private final Map<String, Integer> shopCounts;
+
+  Explainer(Stage stage, TestPoints points, double span, Map<String, Integer> shopCounts) {
+    this.stage = stage;
+    this.points = points;
+    this.span = span;
+    this.shopCounts = shopCounts;
+  }
+
+  /** Returns what the readings show, judged against the healthy stage's prediction. */
+  List<Observation> observations(Diagnoser.Hypothesis healthy, List<Evidence.Bound> readings, ReadingSet set) {
+    Prediction expected = healthy.predictions.get(0);
+    List<Observation> out = new ArrayList<>();
+    for (Evidence.Bound r : readings) {
+      String net = points.netOf.get(r.point());
+      if (r.ac()) {
+        double mean = Evidence.mean(expected, r);
+        if (mean > 0.01 && r.value() < 0.1 * mean) {
+          out.add(new Observation(r.at(), String.format(Locale.ROOT, "no AC signal where %s is expected", volts(mean))));
+        } else if (Evidence.score(expected, r) > 4) {
+          out.add(new Observation(r.at(), String.format(Locale.ROOT, "AC amplitude %s where %s is expected", volts(r.value()), volts(mean))));
+        }
+        continue;
+      }
+      Optional<Rail> rail = stage.rail(net);
+      Optional<Amplifier> output = stage.amplifiers().stream().filter(a -> a.out().equals(net)).findFirst();
+      if (rail.isPresent()) {
+        railObservation(rail.get(), r).ifPresent(out::add);
+      } else if (output.isPresent() && !points.isPin(r.point()) || output.isPresent() && isOutputPin(output.get(), r.at())) {
+        outputObservation(output.get(), r, expected).ifPresent(out::add);
+      } else if (Evidence.score(expected, r) > 4) {
+        out.add(new Observation(r.at(), String.format(Locale.ROOT, "reads %s where %s is expected", volts(r.value()), volts(Evidence.mean(expected, r)))));
+      }
+    }
+    inputPairs(readings, expected).forEach(out::add);
+    return out;
+  }
+
+  private boolean isOutputPin(Amplifier amp, String at) {
+    return at.equals(amp.pinName(Terminal.OUT));
+  }
+
+  private Optional<Observation> railObservation(Rail rail, Evidence.Bound r) {
+    double nominal = rail.volts();
+    if (Math.abs(r.value()) < 0.1 * Math.abs(nominal)) {
+      return Optional.of(new Observation(r.at(), String.format(Locale.ROOT, "rail %s at %s: missing", rail.net(), volts(r.value()))));
+    }
+    double allowed = Math.abs(nominal) * rail.tolerance() + Math.sqrt(3 * r.variance());
+    if (Math.abs(r.value() - nominal) > allowed) {
+      String how = Math.abs(r.value()) < Math.abs(nominal) ? "low" : "high";
+      return Optional.of(
+          new Observation(r.at(), String.format(Locale.ROOT, "rail %s %s: %s where %s is expected", rail.net(), how, volts(r.value()), volts(nominal))));
+    }
+    return Optional.empty();
+  }
+
+  private Optional<Observation> outputObservation(Amplifier amp, Evidence.Bound r, Prediction expected) {
+    double vPlus = stage.drivenVolts().getOrDefault(amp.vPlus(), Double.NaN);
+    double vMinus = stage.drivenVolts().getOrDefault(amp.vMinus(), Double.NaN);
+    double v = r.value();
+    var type = amp.deviceClass();
+    if (!Double.isNaN(vPlus) && Math.abs(v - vPlus) < 0.5 * type.headroomHigh().low() + 0.01 && vPlus != 0) {
+      return Optional.of(new Observation(r.at(), "output reads the v+ rail itself: shorted or bridged to it"));
+    }
+    if (!Double.isNaN(vMinus) && Math.abs(v - vMinus) < 0.5 * type.headroomLow().low() + 0.01 && vMinus != 0) {
+      return Optional.of(new Observation(r.at(), "output reads the v- rail itself: shorted or bridged to it"));
+    }
+    if (!Double.isNaN(vPlus) && v >= vPlus - type.headroomHigh().high() - 0.05 && v < vPlus) {
+      return Optional.of(new Observation(r.at(), "output at the upper limit: saturated"));
+    }
+    if (!Double.isNaN(vMinus) && v <= vMinus + type.headroomLow().high() + 0.05 && v > vMinus) {
+      return Optional.of(new Observation(r.at(), "output at the lower limit: saturated"));
+    }
+    if (Evidence.score(expected, r) > 4) {
+      return Optional.of(
+          new Observation(r.at(), String.format(Locale.ROOT, "output reads %s where %s is expected", volts(v), volts(Evidence.mean(expected, r)))));
+    }
+    return Optional.empty();
+  }
+
+  private List<Observation> inputPairs(List<Evidence.Bound> readings, Prediction expected) {
+    List<Observation> out = new ArrayList<>();
+    for (Amplifier amp : stage.amplifiers()) {
+      Evidence.Bound plus = find(readings, amp, Terminal.IN_PLUS);
+      Evidence.Bound minus = find(readings, amp, Terminal.IN_MINUS);
+      if (plus == null || minus == null) {
+        continue;
+      }
+      double expectedGap = Math.abs(expected.dcMean()[plus.point()] - expected.dcMean()[minus.point()]);
+      double gap = Math.abs(plus.value() - minus.value());
+      String where = amp.ref() + " inputs";
+      if (expectedGap < 0.01 && gap > 0.05) {
+        out.add(new Observation(where, String.format(Locale.ROOT, "inputs of %s differ by %s: feedback lost", amp.ref(), volts(gap))));
+      } else if (expectedGap < 0.01 && gap <= 0.01) {
+        out.add(new Observation(where, String.format(Locale.ROOT, "inputs of %s within %s of each other: feedback holds", amp.ref(), volts(Math.max(gap, 1e-3)))));
+      }
+    }
+    return out;
+  }
+
+  private Evidence.Bound find(List<Evidence.Bound> readings, Amplifier amp, Terminal terminal) {
+    for (Evidence.Bound r : readings) {
+      if (!r.ac() && (r.at().equals(amp.pinName(terminal)) || r.at().equals(amp.net(terminal)) && !points.isPin(r.point()))) {
+        return r;
+      }
+    }
+    return null;
+  }
+
+  /** Returns the why of a suspect: what it is, which readings it explains and which it does not. */
+  String why(Fault fault, Prediction best, OptionalDouble estimate, List<Evidence.Bound> readings) {
+    StringBuilder text = new StringBuilder(describe(fault, estimate));
+    if (!best.label().isEmpty()) {
+      text.append(" (").append(best.label()).append(')');
+    }
+    text.append('.');
+    List<String> explains = new ArrayList<>();
+    List<String> misses = new ArrayList<>();
+    for (Evidence.Bound r : readings) {
+      String item = String.format(Locale.ROOT, "%s %s at %s (this fault gives %s)", r.ac() ? "AC" : "", volts(r.value()), r.at(), volts(Evidence.mean(best, r))).trim();
+      (Evidence.score(best, r) <= 3 ? explains : misses).add(item);
+    }
+    if (!explains.isEmpty()) {
+      text.append(" Explains ").append(String.join("; ", limit(explains))).append('.');
+    }
+    if (!misses.isEmpty()) {
+      text.append(" Does not explain ").append(String.join("; ", limit(misses))).append('.');
+    }
+    Integer seen = shopCounts.get(fault.id());
+    if (seen != null && seen > 0) {
+      text.append(" Seen ").append(seen).append(seen == 1 ? " time" : " times").append(" on this board model.");
+    }
+    return text.toString();
+  }
+
+  private static List<String> limit(List<String> items) {
+    if (items.size() <= 6) {
+      return items;
+    }
+    List<String> out = new ArrayList<>(items.subList(0, 5));
+    out.add("and " + (items.size() - 5) + " more");
+    return out;
+  }
+
+  /** Returns the fault in plain words, e.g. "R7 drifted high: reads as about 180k, marked 47k". */
+  String describe(Fault fault, OptionalDouble estimate) {
+    String s = fault.subject();
+    return switch (fault.kind()) {
+      case HEALTHY -> "No fault: the readings fit a working stage";
+      case OPEN -> s + " open (marked " + marked(s) + ")";
+      case SHORT -> s + " shorted (marked " + marked(s) + ")";
+      case HIGH, LOW -> {
+        String way = fault.kind() == FaultKind.HIGH ? "high" : "low";
+        yield estimate.isPresent()
+            ? s + " drifted " + way + ": reads as about " + value(s, estimate.getAsDouble()) + ", marked " + marked(s)
+            : s + " drifted " + way + " (marked " + marked(s) + ")";
+      }
+      case STUCK_HIGH -> s + " output stuck at its upper limit";
+      case STUCK_LOW -> s + " output stuck at its lower limit";
+      case DEAD -> s + " output dead: it no longer drives";
+      case LIFTED -> "open joint at pin " + fault.pin() + " of " + s + " (" + pinRole(s, fault.pin()) + ")";
+      case BRIDGE -> bridgeWords(fault);
+      case RAIL_MISSING -> "rail " + s + " missing at the stage";
+      case RAIL_LOW -> estimate.isPresent()
+          ? String.format(Locale.ROOT, "rail %s low: about %s where %s is expected", s, volts(estimate.getAsDouble()), volts(stage.rail(s).map(Rail::volts).orElse(0.0)))
+          : "rail " + s + " low";
+    };
+  }
+
+  private String bridgeWords(Fault fault) {
+    String pkg = fault.subject();
+    Map<String, String> pins = stage.pinNets();
+    String netA = pins.get(pkg + "." + fault.pin());
+    String netB = pins.get(pkg + "." + fault.otherPin());
+    String text = "solder bridge between pins " + fault.pin() + " and " + fault.otherPin() + " of " + pkg
+        + " (" + pinRole(pkg, fault.pin()) + " to " + pinRole(pkg, fault.otherPin()) + ", nets " + netA + " and " + netB + ")";
+    boolean railA = stage.rail(netA).isPresent();
+    boolean railB = stage.rail(netB).isPresent();
+    if (railA || railB) {
+      String rail = railA ? netA : netB;
+      String other = railA ? netB : netA;
+      boolean stiff = stage.isDriven(other);
+      text += stiff
+          ? "; it shorts rail " + rail + " to " + other + ": expect a blown fuse, a hot regulator or a supply in current limit"
+          : "; it ties " + other + " to rail " + rail + ": a section output there fights the rail and runs hot";
+    }
+    return text;
+  }
+
+  private String pinRole(String pkg, int pin) {
+    PackageType type = stage.packageType(pkg).orElse(null);
+    if (type == null) {
+      return "pin " + pin;
+    }
+    return type.role(pin)
+        .map(role -> role.terminal().words() + (role.section().isEmpty() || type.sections().size() == 1 ? "" : " " + role.section()))
+        .orElse("pin " + pin);
+  }
+
+  private String marked(String ref) {
+    return stage.part(ref).map(p -> value(ref, p.value())).orElse("?");
+  }
+
+  private String value(String ref, double value) {
+    PartKind kind = stage.part(ref).map(Part::kind).orElse(PartKind.RESISTOR);
+    return Units.format(value, kind.unit());
+  }
+
+  /** Returns how to confirm a fault at the bench, with the power off where ohms are read. */
+  String confirmingCheck(Fault fault, OptionalDouble estimate) {
+    String s = fault.subject();
+    String powerOff = "Power off, unplug the unit and discharge its capacitors; then ";
+    return switch (fault.kind()) {
+      case HEALTHY -> "";
+      case OPEN -> partKind(s) == PartKind.RESISTOR
+          ? powerOff + "lift one leg of " + s + " and read its ohms: expect " + marked(s) + "; an open part reads OL."
+          : powerOff + "lift one leg of " + s + " and check it with a capacitance meter: expect " + marked(s) + "; an open part reads near zero.";
+      case SHORT -> powerOff + "lift one leg of " + s + " and read its ohms: a short reads near 0 Ω"
+          + (partKind(s) == PartKind.CAPACITOR ? "; a good capacitor charges up towards OL." : " where " + marked(s) + " is marked.");
+      case HIGH, LOW -> powerOff + "lift one leg of " + s + " and measure it: marked " + marked(s)
+          + (estimate.isPresent() ? ", this reading suggests about " + value(s, estimate.getAsDouble()) : "") + ".";
+      case STUCK_HIGH, STUCK_LOW, DEAD -> {
+        Amplifier amp = stage.amplifier(s).orElse(null);
+        String pins = amp == null ? "its supply pins" : amp.pinName(Terminal.V_PLUS) + " and " + amp.pinName(Terminal.V_MINUS);
+        yield "With power on, first read the supply at " + pins + " against ground; if both are right, power off, lift the output pin"
+            + (amp == null ? "" : " " + amp.pinName(Terminal.OUT))
+            + " and read it again powered: a section that still sits at a limit (or floats) with its output free is faulty. Replace the whole package.";
+      }
+      case LIFTED -> powerOff + "inspect pin " + fault.pin() + " of " + s + " under magnification and read ohms from the pin itself to its pad or trace: a good joint reads near 0 Ω. Reflow it.";
+      case BRIDGE -> powerOff + "inspect pins " + fault.pin() + " and " + fault.otherPin() + " of " + s
+          + " under magnification and read ohms between them: a bridge reads near 0 Ω (compare with the nets' resistance on a good unit).";
+      case RAIL_MISSING -> "Read " + s + " at its source (regulator output or supply connector) and follow it to the package pins: fuse, series resistor, connector, trace.";
+      case RAIL_LOW -> "Read " + s + " at its source with the stage connected and with it disconnected: a rail that recovers unloaded points at the load (a shorted part downstream); one that stays low points at the supply.";
+    };
+  }
+
+  private PartKind partKind(String ref) {
+    return stage.part(ref).map(Part::kind).orElse(PartKind.RESISTOR);
+  }
+
+  private static String volts(double v) {
+    return Units.volts(v);
+  }
+}

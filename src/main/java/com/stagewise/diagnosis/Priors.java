@@ -1,0 +1,127 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Stage;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Prior probabilities of the faults of a stage, in one place.
+ *
+ * <p>Each fault's weight is the relative failure rate of the item it is on times the share of that
+ * item's failures in that mode. The mode shares follow the failure-mode distributions published in
+ * the Reliability Analysis Center's FMD-97 and reproduced in MIL-HDBK-338B (from memory; rounded):
+ * fixed film resistor open 59 %, parameter change 36 %, short 5 %; ceramic capacitor short 49 %,
+ * change of value 29 %, open 22 %; linear IC improper output 77 %, no output 23 %. The relative
+ * rates between items (a section, a resistor, a joint, a rail) and the split of drift into high and
+ * low are common practice at the repair bench, not from a published table.
+ *
+ * <p>The shop's own history is blended in by additive smoothing: each confirmed fault of a closed
+ * case on the same board model counts as one observation against {@link #SHOP_STRENGTH} pseudo
+ * observations spread as the published priors, so one case does not dominate.
+ */
+public final class Priors {
+  /** Share of the prior on "healthy": the stage is suspect, but often turns out fine (common practice). */
+  static final double HEALTHY_SHARE = 0.2;
+
+  /**
+   * Pseudo-count of the published priors when blending with the shop's counts: after 20 confirmed
+   * cases on a model, its own history weighs as much as the published figures.
+   */
+  public static final double SHOP_STRENGTH = 20;
+
+  // Relative failure rates per item (common practice, from memory): a supply rail that fails
+  // (blown fuse, dead regulator, broken connector) is the most common cause of a dead stage.
+  private static final double SECTION_RATE = 2.0;
+  private static final double RESISTOR_RATE = 1.0;
+  private static final double CAPACITOR_RATE = 1.0;
+  private static final double JOINT_RATE = 0.25;
+  private static final double BRIDGE_RATE = 0.08;
+  private static final double RAIL_RATE = 2.5;
+
+  private Priors() {}
+
+  /** Returns the published prior of every fault, normalised to sum to 1. */
+  public static Map<String, Double> published(Stage stage, List<Fault> faults) {
+    Map<String, Double> weights = new LinkedHashMap<>();
+    double faultTotal = 0;
+    for (Fault fault : faults) {
+      if (fault.kind() != FaultKind.HEALTHY) {
+        double w = weight(stage, fault);
+        weights.put(fault.id(), w);
+        faultTotal += w;
+      }
+    }
+    Map<String, Double> priors = new LinkedHashMap<>();
+    priors.put(Fault.HEALTHY.id(), HEALTHY_SHARE);
+    for (Map.Entry<String, Double> e : weights.entrySet()) {
+      priors.put(e.getKey(), (1 - HEALTHY_SHARE) * e.getValue() / faultTotal);
+    }
+    return priors;
+  }
+
+  /**
+   * Blends published priors with the shop's counts of confirmed faults on the same board model.
+   *
+   * <p>{@code p(f) = (strength · published(f) + count(f)) / (strength + total count)}, over the faults
+   * of {@code published}; counts of faults not in it are ignored.
+   *
+   * @param strength the pseudo-count of the published priors, above 0
+   */
+  public static Map<String, Double> blend(Map<String, Double> published, Map<String, Integer> counts, double strength) {
+    if (!(strength > 0)) {
+      throw new IllegalArgumentException("strength (" + strength + ") must be above 0");
+    }
+    double total = 0;
+    for (String id : published.keySet()) {
+      total += Math.max(0, counts.getOrDefault(id, 0));
+    }
+    Map<String, Double> blended = new LinkedHashMap<>();
+    for (Map.Entry<String, Double> e : published.entrySet()) {
+      double count = Math.max(0, counts.getOrDefault(e.getKey(), 0));
+      blended.put(e.getKey(), (strength * e.getValue() + count) / (strength + total));
+    }
+    return blended;
+  }
+
+  private static double weight(Stage stage, Fault fault) {
+    String s = fault.subject();
+    return switch (fault.kind()) {
+      case HEALTHY -> 0;
+      case OPEN, SHORT, HIGH, LOW -> {
+        boolean resistor = stage.part(s).map(p -> p.kind() == PartKind.RESISTOR).orElse(true);
+        yield resistor ? RESISTOR_RATE * resistorShare(fault.kind()) : CAPACITOR_RATE * capacitorShare(fault.kind());
+      }
+      // Improper output 77 % is split evenly between the two limits; no output 23 %.
+      case STUCK_HIGH, STUCK_LOW -> SECTION_RATE * 0.385;
+      case DEAD -> SECTION_RATE * 0.23;
+      case LIFTED -> JOINT_RATE;
+      case BRIDGE -> BRIDGE_RATE;
+      case RAIL_MISSING -> RAIL_RATE * 0.6;
+      case RAIL_LOW -> RAIL_RATE * 0.4;
+    };
+  }
+
+  private static double resistorShare(FaultKind kind) {
+    return switch (kind) {
+      case OPEN -> 0.59;
+      case SHORT -> 0.05;
+      // Film resistors drift upward far more often than downward (common practice): 2 to 1.
+      case HIGH -> 0.24;
+      case LOW -> 0.12;
+      default -> 0;
+    };
+  }
+
+  private static double capacitorShare(FaultKind kind) {
+    return switch (kind) {
+      case SHORT -> 0.49;
+      case OPEN -> 0.22;
+      // Ceramic capacitors lose capacitance with age and bias far more often than they gain it.
+      case LOW -> 0.2;
+      case HIGH -> 0.09;
+      default -> 0;
+    };
+  }
+}

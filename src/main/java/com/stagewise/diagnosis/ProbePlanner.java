@@ -1,0 +1,194 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestInput;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+/**
+ * Chooses the test points worth reading next by their expected information gain over the current
+ * suspect list.
+ *
+ * <p>The gain of a candidate is the mutual information between the fault and the reading it would
+ * give: the entropy of the suspect list now, less its expected entropy after the reading. The
+ * reading's distribution under each hypothesis is a mixture of its most likely scenarios, each a
+ * normal density (prediction spread plus the instrument's uncertainty); the expectation is taken by
+ * three-point Gauss–Hermite quadrature about each scenario's mean.
+ */
+final class ProbePlanner {
+  /** Hypotheses considered: enough to hold this share of the probability, at most {@link #MAX_HYPOTHESES}. */
+  private static final double MASS = 0.999;
+
+  private static final int MAX_HYPOTHESES = 24;
+  private static final int SCENARIOS_PER_HYPOTHESIS = 3;
+  private static final int LISTED = 6;
+
+  /** Gauss–Hermite nodes (in standard deviations) and weights for three points. */
+  private static final double[] NODES = {0, Math.sqrt(3), -Math.sqrt(3)};
+
+  private static final double[] NODE_WEIGHTS = {2.0 / 3, 1.0 / 6, 1.0 / 6};
+
+  private final Stage stage;
+  private final TestPoints points;
+  private final Evidence evidence;
+
+  ProbePlanner(Stage stage, TestPoints points, Evidence evidence) {
+    this.stage = stage;
+    this.points = points;
+    this.evidence = evidence;
+  }
+
+  private record Component(int hypothesis, double weight, Prediction prediction) {}
+
+  /** Returns the best probes, most informative first. */
+  List<ProbeAdvice> plan(Diagnoser.Ranking ranking, List<Evidence.Bound> read, MeterSpec meter) {
+    List<Diagnoser.Scored> top = new ArrayList<>();
+    double mass = 0;
+    for (Diagnoser.Scored s : ranking.scored()) {
+      if (mass >= MASS || top.size() >= MAX_HYPOTHESES) {
+        break;
+      }
+      top.add(s);
+      mass += s.probability;
+    }
+    double[] prior = new double[top.size()];
+    List<Component> components = new ArrayList<>();
+    for (int h = 0; h < top.size(); h++) {
+      Diagnoser.Scored s = top.get(h);
+      prior[h] = s.probability / mass;
+      Integer[] order = new Integer[s.scenarioWeights.length];
+      for (int v = 0; v < order.length; v++) {
+        order[v] = v;
+      }
+      java.util.Arrays.sort(order, Comparator.comparingDouble(v -> -s.scenarioWeights[v]));
+      double kept = 0;
+      int count = Math.min(SCENARIOS_PER_HYPOTHESIS, order.length);
+      for (int k = 0; k < count; k++) {
+        kept += s.scenarioWeights[order[k]];
+      }
+      for (int k = 0; k < count; k++) {
+        components.add(new Component(h, s.scenarioWeights[order[k]] / kept, s.hypothesis.predictions.get(order[k])));
+      }
+    }
+    double entropy = entropy(prior);
+    Set<String> taken = new HashSet<>();
+    for (Evidence.Bound r : read) {
+      taken.add((r.ac() ? "ac:" : "dc:") + r.at());
+    }
+    List<ProbeAdvice> advice = new ArrayList<>();
+    boolean ac = stage.inputs().stream().anyMatch(TestInput::hasAc);
+    double hz = stage.inputs().stream().filter(TestInput::hasAc).mapToDouble(TestInput::hz).findFirst().orElse(0);
+    for (int i = 0; i < points.size; i++) {
+      String name = points.names.get(i);
+      if (name.equals(stage.ground())) {
+        continue;
+      }
+      if (!taken.contains("dc:" + name)) {
+        double bits = gain(i, false, prior, components, entropy, meter);
+        advice.add(new ProbeAdvice(name, Reading.Kind.DC, 0, bits, why(i, false, top)));
+      }
+      if (ac && isOutput(i) && !taken.contains("ac:" + name)) {
+        double bits = gain(i, true, prior, components, entropy, meter);
+        advice.add(new ProbeAdvice(name, Reading.Kind.AC, hz, bits, why(i, true, top)));
+      }
+    }
+    // Best first; on a tie prefer a package pin (a technician probes the pins), then sheet order.
+    advice.sort(
+        Comparator.comparingDouble((ProbeAdvice a) -> -round(a.bits()))
+            .thenComparing(a -> points.isPin(points.index.get(a.at())) ? 0 : 1));
+    return advice.subList(0, Math.min(LISTED, advice.size()));
+  }
+
+  private static double round(double bits) {
+    return Math.round(bits * 1000) / 1000.0;
+  }
+
+  private boolean isOutput(int i) {
+    String net = points.netOf.get(i);
+    for (Amplifier amp : stage.amplifiers()) {
+      if (amp.out().equals(net)) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  private double gain(int point, boolean ac, double[] prior, List<Component> components, double entropy, MeterSpec meter) {
+    int n = components.size();
+    double[] mean = new double[n];
+    double[] variance = new double[n];
+    for (int c = 0; c < n; c++) {
+      Prediction p = components.get(c).prediction;
+      mean[c] = ac ? (p.acMean() == null ? 0 : p.acMean()[point]) : p.dcMean()[point];
+      double u = ac ? ReadingSet.SCOPE_PERCENT / 100 * Math.abs(mean[c]) + ReadingSet.SCOPE_FLOOR_VOLTS : meter.uncertainty(mean[c]);
+      Evidence.Bound probe = new Evidence.Bound(point, ac, mean[c], u * u / 3, points.names.get(point));
+      variance[c] = Evidence.variance(p, probe);
+    }
+    double expected = 0;
+    double[] posterior = new double[prior.length];
+    for (int c = 0; c < n; c++) {
+      Component source = components.get(c);
+      double sourceWeight = prior[source.hypothesis] * source.weight;
+      for (int q = 0; q < NODES.length; q++) {
+        double m = mean[c] + NODES[q] * Math.sqrt(variance[c]);
+        java.util.Arrays.fill(posterior, 0);
+        double max = Double.NEGATIVE_INFINITY;
+        double[] logs = new double[n];
+        for (int d = 0; d < n; d++) {
+          logs[d] = evidence.logLikelihood(m, mean[d], variance[d]);
+          max = Math.max(max, logs[d]);
+        }
+        double total = 0;
+        for (int d = 0; d < n; d++) {
+          Component other = components.get(d);
+          double w = prior[other.hypothesis] * other.weight * Math.exp(logs[d] - max);
+          posterior[other.hypothesis] += w;
+          total += w;
+        }
+        for (int h = 0; h < posterior.length; h++) {
+          posterior[h] /= total;
+        }
+        expected += sourceWeight * NODE_WEIGHTS[q] * entropy(posterior);
+      }
+    }
+    return Math.max(0, (entropy - expected) / Math.log(2));
+  }
+
+  private static double entropy(double[] p) {
+    double h = 0;
+    for (double x : p) {
+      if (x > 0) {
+        h -= x * Math.log(x);
+      }
+    }
+    return h;
+  }
+
+  private String why(int point, boolean ac, List<Diagnoser.Scored> top) {
+    List<String> parts = new ArrayList<>();
+    List<Double> seen = new ArrayList<>();
+    for (Diagnoser.Scored s : top) {
+      if (parts.size() >= 3) {
+        break;
+      }
+      double v = ac ? (s.best.acMean() == null ? 0 : s.best.acMean()[point]) : s.best.dcMean()[point];
+      boolean distinct = seen.stream().noneMatch(x -> Math.abs(x - v) < 0.02 + 0.01 * Math.abs(v));
+      if (distinct) {
+        seen.add(v);
+        parts.add(String.format(Locale.ROOT, "%s puts it at %s", s.hypothesis.fault.id(), Units.volts(v)));
+      }
+    }
+    if (parts.size() < 2) {
+      return "confirms the first suspect";
+    }
+    return (ac ? "AC amplitude: " : "") + String.join(", ", parts);
+  }
+}
