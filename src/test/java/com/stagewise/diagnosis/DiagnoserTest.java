@@ -112,15 +112,4 @@ class DiagnoserTest {
     assertThatThrownBy(() -> diagnoser.diagnose(readings("NOPE", 1.0))).isInstanceOf(InvalidInputException.class).hasMessageContaining("NOPE");
     assertThatThrownBy(() -> diagnoser.diagnose(readings("OUT", 400.0))).isInstanceOf(InvalidInputException.class).hasMessageContaining("beyond every rail");
   }
-
-  @Test
-  void print() {
-    Diagnosis d = diagnoser.diagnose(readings("U1.8", 15.0, "U1.4", -15.0, "U1.1", -13.45, "U1.2", 1.0));
-    System.out.println(d.verdict());
-    d.observations().forEach(o -> System.out.println("OBS " + o));
-    d.suspects().forEach(s -> System.out.println(String.format("%-14s %.4f %s %s", s.fault(), s.probability(), s.group(), s.why())));
-    d.nextProbes().forEach(p -> System.out.println("PROBE " + p));
-    System.out.println(d.confirmingCheck());
-    d.notes().forEach(n -> System.out.println("NOTE " + n));
-  }
 }
