@@ -29,8 +29,7 @@ import java.util.OptionalDouble;
  * tie to a driven net, has a known voltage. When the interval is empty both limits are the
  * mid-supply point, written as a plain source, as the solver does. A supply pin on a solved net
  * (a rail fed through a resistor) is modelled with a cascade of two limiters whose limits follow
- * the pin voltages through controlled sources; that form has no mid-supply collapse, which the
- * netlist notes in a comment.
+ * the pin voltages through behavioural sources that apply the same mid-supply rule.
  *
  * @param text the netlist, ready for {@code ngspice -b}
  * @param spiceNodes our node name → SPICE node name ({@code 0} for ground)
@@ -43,13 +42,28 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
    */
   static final double LIMIT_RANGE = 1e-6;
 
+  /** The limiter's corner band for a second, relaxed attempt, in volts (still below a count). */
+  static final double RELAXED_LIMIT_RANGE = 1e-4;
+
   /** Returns the netlist of a stage with nominal parts under the given solver conditions. */
   static SpiceNetlist of(Stage stage, Conditions conditions) {
     return of(FlatCircuit.of(stage, conditions), stage.title());
   }
 
-  /** Returns the netlist of a flattened (perhaps faulted) circuit. */
+  /** Returns the netlist of a flattened (perhaps faulted) circuit with tight tolerances. */
   static SpiceNetlist of(FlatCircuit flat, String title) {
+    return of(flat, title, false);
+  }
+
+  /**
+   * Returns the netlist of a flattened (perhaps faulted) circuit.
+   *
+   * @param relaxed whether to use ngspice's default-like tolerances and a wider limiter corner
+   *     ({@link #RELAXED_LIMIT_RANGE}): a second attempt for a circuit whose tight run did not
+   *     converge; still far within a meter count
+   */
+  static SpiceNetlist of(FlatCircuit flat, String title, boolean relaxed) {
+    double limitRange = relaxed ? RELAXED_LIMIT_RANGE : LIMIT_RANGE;
     Map<String, String> names = new LinkedHashMap<>();
     int next = 1;
     for (String node : flat.nodes()) {
@@ -60,7 +74,9 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     for (Map.Entry<String, String> e : names.entrySet()) {
       w.line("* node " + e.getValue() + " = " + oneLine(e.getKey()));
     }
-    w.line(".options reltol=1e-9 vntol=1e-12 abstol=1e-15 itl1=500");
+    w.line(relaxed
+        ? ".options reltol=1e-6 vntol=1e-9 abstol=1e-12 itl1=1000"
+        : ".options reltol=1e-9 vntol=1e-12 abstol=1e-15 itl1=500");
     int v = 0;
     for (Map.Entry<String, Double> source : flat.driven.entrySet()) {
       v++;
@@ -84,7 +100,7 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
       }
     }
     for (int k = 0; k < flat.sections.size(); k++) {
-      writeSection(w, flat, k + 1, flat.sections.get(k));
+      writeSection(w, flat, k + 1, flat.sections.get(k), limitRange);
     }
     w.line(".control");
     w.line("set numdgt=15");
@@ -104,7 +120,7 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     return new SpiceNetlist(w.text.toString(), Map.copyOf(names));
   }
 
-  private static void writeSection(Writer w, FlatCircuit flat, int k, Section s) {
+  private static void writeSection(Writer w, FlatCircuit flat, int k, Section s, double limitRange) {
     DeviceParams p = s.params();
     String inPlus = w.node(s.node(Terminal.IN_PLUS));
     String inMinus = w.node(s.node(Terminal.IN_MINUS));
@@ -142,19 +158,22 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
           w.line("Voff" + k + " s" + k + "p " + inPlus + " DC " + num(p.offset()));
           w.line("A" + k + " %vd(s" + k + "p " + inMinus + ") " + src + " lim" + k);
           w.line(".model lim" + k + " limit(gain=" + num(p.gain()) + " out_lower_limit=" + num(low)
-              + " out_upper_limit=" + num(high) + " limit_range=" + num(LIMIT_RANGE) + ")");
+              + " out_upper_limit=" + num(high) + " limit_range=" + num(limitRange) + ")");
         }
       }
       return;
     }
-    // Limits that follow solved supply-pin voltages: lo = v(v-) + hL, hi = v(v+) - hH.
-    w.line("* supply pins on solved nets: limits follow them (no mid-supply collapse)");
+    // Limits that follow solved supply-pin voltages: lo = v(v-) + hL, hi = v(v+) - hH, both at
+    // mid-supply when that interval is empty (the solver's rule), as behavioural sources.
+    w.line("* supply pins on solved nets: limits follow them");
     String lo = "s" + k + "l";
     String hi = "s" + k + "h";
-    w.line("Elo" + k + " " + lo + "1 0 " + w.node(s.node(Terminal.V_MINUS)) + " 0 1");
-    w.line("Vlo" + k + " " + lo + " " + lo + "1 DC " + num(p.headroomLow()));
-    w.line("Ehi" + k + " " + hi + "1 0 " + w.node(s.node(Terminal.V_PLUS)) + " 0 1");
-    w.line("Vhi" + k + " " + hi + "1 " + hi + " DC " + num(p.headroomHigh()));
+    String vp = "v(" + w.node(s.node(Terminal.V_PLUS)) + ")";
+    String vm = "v(" + w.node(s.node(Terminal.V_MINUS)) + ")";
+    String empty = "(" + vp + "-" + num(p.headroomHigh()) + " < " + vm + "+" + num(p.headroomLow()) + ")";
+    String mid = "(" + vp + "+" + vm + ")/2";
+    w.line("Blo" + k + " " + lo + " 0 V = " + empty + " ? " + mid + " : " + vm + "+" + num(p.headroomLow()));
+    w.line("Bhi" + k + " " + hi + " 0 V = " + empty + " ? " + mid + " : " + vp + "-" + num(p.headroomHigh()));
     switch (s.mode()) {
       case STUCK_HIGH -> w.line("Vs" + k + " " + src + " " + hi + " DC 0");
       case STUCK_LOW -> w.line("Vs" + k + " " + src + " " + lo + " DC 0");
@@ -168,7 +187,7 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
         w.line("Ab" + k + " %vd(" + hi + " s" + k + "y) s" + k + "z pos" + k);
         w.line("Eo" + k + " " + src + " " + hi + " 0 s" + k + "z 1");
         w.line(".model pos" + k + " limit(gain=1 out_lower_limit=0 out_upper_limit=1e6 limit_range="
-            + num(LIMIT_RANGE) + ")");
+            + num(limitRange) + ")");
       }
     }
   }

@@ -1,0 +1,245 @@
+package com.stagewise.reference;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.Terminal;
+import com.stagewise.solver.AcSolution;
+import com.stagewise.solver.Conditions;
+import com.stagewise.solver.DeviceParams;
+import com.stagewise.solver.OperatingPoint;
+import com.stagewise.solver.SectionState;
+import com.stagewise.solver.SolveResult;
+import com.stagewise.solver.StageSolver;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Checks the stored fault truth set (simulated with ngspice 39, Debian package, as reference
+ * simulator): its readings lie within the meter's accuracy of the simulated values, every fault of
+ * the stage is there, and our solver, given the same unit (parts, rails, device parameters) and the
+ * same fault applied through the stage model, agrees with ngspice within 1 mV + 0.01 % at every
+ * net and pin and within 0.1 % in AC amplitude. That last check measures the solver on faulted,
+ * randomised units, far beyond the nominal stages.
+ */
+class FaultTruthTest {
+
+  static Stream<Path> truthFiles() throws IOException {
+    try (Stream<Path> files = Files.list(TruthFiles.FOLDER)) {
+      return files.filter(f -> f.toString().endsWith(".json")).sorted().toList().stream();
+    }
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("truthFiles")
+  void readings_lieWithinMeterAccuracyOfTheSimulatedValues(Path file) throws IOException {
+    JsonNode root = TruthFiles.read(file);
+    MeterModel meter =
+        new MeterModel(
+            root.path("meter").path("percent").asDouble(),
+            root.path("meter").path("counts").asInt(),
+            root.path("meter").path("displayCounts").asInt());
+    List<String> problems = new ArrayList<>();
+    for (JsonNode c : root.path("cases")) {
+      JsonNode exact = c.path("exact").path("dc");
+      int dcCount = 0;
+      for (JsonNode r : c.path("readings")) {
+        String at = r.path("at").asText();
+        if (r.has("dc")) {
+          dcCount++;
+          double truth = exact.path(at).asDouble();
+          double shown = r.path("dc").asDouble();
+          // Error within the meter's accuracy, plus half a count of rounding.
+          double allowed = meter.uncertainty(truth) + meter.resolution(shown);
+          if (Math.abs(shown - truth) > allowed) {
+            problems.add(c.path("fault").asText() + " " + at + ": shown " + shown + ", true " + truth);
+          }
+        }
+      }
+      if (dcCount != exact.size()) {
+        problems.add(c.path("fault").asText() + ": " + dcCount + " DC readings for " + exact.size() + " test points");
+      }
+    }
+    assertThat(problems).isEmpty();
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("truthFiles")
+  void everyFaultOfTheStage_hasCasesOrIsListedAsDropped(Path file) throws IOException {
+    JsonNode root = TruthFiles.read(file);
+    Stage stage = stageOf(root);
+    Set<String> present = new HashSet<>();
+    root.path("cases").forEach(c -> present.add(c.path("fault").asText()));
+    root.path("dropped").forEach(c -> present.add(c.path("fault").asText()));
+    assertThat(present).containsExactlyInAnyOrderElementsOf(FaultList.of(stage));
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("truthFiles")
+  void solver_onTheSameFaultedUnit_agreesWithNgspice(Path file) throws IOException {
+    JsonNode root = TruthFiles.read(file);
+    Stage stage = stageOf(root);
+    List<String> problems = new ArrayList<>();
+    for (JsonNode c : root.path("cases")) {
+      String fault = c.path("fault").asText();
+      Faulted faulted = faulted(stage, c);
+      SolveResult result = StageSolver.solve(faulted.stage(), faulted.conditions());
+      if (!(result instanceof SolveResult.Solved solved)) {
+        problems.add(fault + " (seed " + c.path("seed").asLong() + "): our solver gave " + result);
+        continue;
+      }
+      JsonNode exact = c.path("exact").path("dc");
+      OperatingPoint point = nearest(solved.points(), exact);
+      exact.fields().forEachRemaining(
+          e -> {
+            double ours = point.at(e.getKey());
+            double ref = e.getValue().asDouble();
+            if (Math.abs(ours - ref) > SpiceComparison.DC_VOLTS + SpiceComparison.DC_FRACTION * Math.abs(ref)) {
+              problems.add(String.format(Locale.ROOT, "%s (seed %d) DC at %s: ours %.6f, ngspice %.6f",
+                  fault, c.path("seed").asLong(), e.getKey(), ours, ref));
+            }
+          });
+      JsonNode exactAc = c.path("exact").path("ac");
+      if (exactAc.size() > 0) {
+        Optional<AcSolution> ac = StageSolver.ac(faulted.stage(), faulted.conditions(), point);
+        exactAc.fields().forEachRemaining(
+            e -> {
+              double ref = e.getValue().path("amplitude").asDouble();
+              double ours = ac.map(a -> a.nets().get(e.getKey()).amplitude()).orElse(Double.NaN);
+              // The stored amplitude has 9 significant digits: far inside 0.1 %.
+              if (!(Math.abs(ours - ref) <= SpiceComparison.AC_FRACTION * ref + SpiceComparison.AC_FLOOR_VOLTS)) {
+                problems.add(String.format(Locale.ROOT, "%s (seed %d) AC at %s: ours %.9g, ngspice %.9g",
+                    fault, c.path("seed").asLong(), e.getKey(), ours, ref));
+              }
+            });
+      }
+    }
+    assertThat(problems).as("disagreements with ngspice 39 in %s", file.getFileName()).isEmpty();
+  }
+
+  /** The stage of a truth file, from where it comes from. */
+  static Stage stageOf(JsonNode root) {
+    return ReferenceStages.resolve(
+        new ReferenceStages.Source(root.path("stage").path("kind").asText(), root.path("stage").path("id").asText()));
+  }
+
+  /** A stage and solver conditions that model one stored case. */
+  record Faulted(Stage stage, Conditions conditions) {}
+
+  /**
+   * Rebuilds a case for our solver through the stage model (independently of the netlist code
+   * that made it): the unit's values, then the fault as a change of the stage or a forced output,
+   * then the ties of floating nodes as 1 GΩ resistors.
+   */
+  static Faulted faulted(Stage stage, JsonNode c) {
+    JsonNode unit = c.path("unit");
+    Stage s = stage;
+    for (Part part : stage.parts()) {
+      double value = unit.path("parts").path(part.ref()).asDouble();
+      s = s.withPart(part.ref(), p -> p.withValue(value));
+    }
+    Conditions conditions = Conditions.NOMINAL;
+    for (var rail : stage.rails()) {
+      conditions = conditions.withDriven(rail.net(), unit.path("rails").path(rail.net()).asDouble());
+    }
+    Map<String, DeviceParams> devices = new java.util.HashMap<>();
+    for (Amplifier amp : stage.amplifiers()) {
+      JsonNode d = unit.path("devices").path(amp.ref());
+      devices.put(
+          amp.ref(),
+          new DeviceParams(
+              d.path("gain").asDouble(),
+              d.path("offset").asDouble(),
+              d.path("biasPlus").asDouble(),
+              d.path("biasMinus").asDouble(),
+              d.path("outputResistance").asDouble(),
+              d.path("headroomLow").asDouble(),
+              d.path("headroomHigh").asDouble()));
+    }
+    String fault = c.path("fault").asText();
+    if (!fault.equals("healthy")) {
+      int colon = fault.lastIndexOf(':');
+      String ref = fault.substring(0, colon);
+      String kind = fault.substring(colon + 1);
+      if (stage.rail(ref).isEmpty()) {
+        switch (kind) {
+          case "open" -> s = s.minusPart(ref);
+          case "short" -> s = s.withPart(ref, p -> new Part(p.ref(), PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
+          case "high", "low" -> {
+            double value = unit.path("faultValue").asDouble();
+            s = s.withPart(ref, p -> p.withValue(value));
+          }
+          case "stuck-high" -> conditions = conditions.withForced(ref, SectionState.HIGH);
+          case "stuck-low" -> conditions = conditions.withForced(ref, SectionState.LOW);
+          case "dead" -> conditions = conditions.withForced(ref, SectionState.DEAD);
+          case "lifted" -> {
+            for (Amplifier amp : stage.amplifiers()) {
+              for (Terminal t : Terminal.values()) {
+                if (amp.pinName(t).equals(ref)) {
+                  s = s.withAmplifier(amp.ref(), a -> a.withNet(t, "pin:" + ref));
+                }
+              }
+            }
+          }
+          case "bridge" -> {
+            String pkg = ref.substring(0, ref.lastIndexOf('.'));
+            String[] pins = ref.substring(ref.lastIndexOf('.') + 1).split("-");
+            Map<String, String> pinNets = s.pinNets();
+            s = s.plusPart(Part.resistor("BRIDGE", 0, 0, pinNets.get(pkg + "." + pins[0]), pinNets.get(pkg + "." + pins[1])));
+          }
+          default -> throw new IllegalArgumentException("unknown fault " + fault);
+        }
+      }
+    }
+    int tieCount = 0;
+    for (JsonNode tie : unit.path("ties")) {
+      s = s.plusPart(Part.resistor("TIE" + ++tieCount, FlatCircuit.TIE_OHMS, 0, tie.path("node").asText(), tie.path("to").asText()));
+      Set<String> group = new HashSet<>();
+      tie.path("group").forEach(n -> group.add(n.asText()));
+      for (Amplifier amp : s.amplifiers()) {
+        DeviceParams p = devices.get(amp.ref());
+        devices.put(
+            amp.ref(),
+            p.withBias(
+                group.contains(amp.inPlus()) ? 0 : p.biasPlus(),
+                group.contains(amp.inMinus()) ? 0 : p.biasMinus()));
+      }
+    }
+    for (Map.Entry<String, DeviceParams> d : devices.entrySet()) {
+      conditions = conditions.withDevice(d.getKey(), d.getValue());
+    }
+    return new Faulted(s, conditions);
+  }
+
+  private static OperatingPoint nearest(List<OperatingPoint> points, JsonNode exact) {
+    OperatingPoint best = null;
+    double bestDiff = Double.POSITIVE_INFINITY;
+    for (OperatingPoint p : points) {
+      double worst = 0;
+      for (var it = exact.fields(); it.hasNext(); ) {
+        var e = it.next();
+        worst = Math.max(worst, Math.abs(p.at(e.getKey()) - e.getValue().asDouble()));
+      }
+      if (worst < bestDiff) {
+        bestDiff = worst;
+        best = p;
+      }
+    }
+    return best;
+  }
+}
