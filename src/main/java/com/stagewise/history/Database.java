@@ -1,0 +1,342 @@
+package com.stagewise.history;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.util.Arrays;
+import java.util.Properties;
+import org.sqlite.SQLiteErrorCode;
+import org.sqlite.SQLiteException;
+
+/**
+ * One connection to the history file, with the settings every use needs and the transactions.
+ *
+ * <p>Settings: write-ahead log (readers never wait for the writer), foreign keys on, a busy timeout
+ * so that a second program writing the same file waits instead of failing, and {@code synchronous
+ * = FULL} so that a transaction reported committed survives a power cut (with {@code NORMAL} the
+ * last transactions before the cut may roll back). Writes take the write lock at their start
+ * ({@code BEGIN IMMEDIATE}): a transaction that reads first and upgrades later could fail with
+ * "database is locked" without waiting.
+ *
+ * <p>Not thread-safe by itself; {@link HistoryStore} serialises its use.
+ */
+final class Database implements AutoCloseable {
+  /** Marks our files in the SQLite header ("SWH1"), so that another program's database is refused. */
+  static final int APPLICATION_ID = 0x53574831;
+
+  /** How long a statement waits for another program's write lock before it reports busy. */
+  static final int BUSY_TIMEOUT_MS = 10_000;
+
+  /** Retries of a whole write transaction that still found the file busy, with growing pauses. */
+  private static final int WRITE_ATTEMPTS = 6;
+
+  private static final byte[] SQLITE_MAGIC =
+      "SQLite format 3\0".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+
+  private final Path path;
+  private final Connection connection;
+  private boolean inTransaction;
+
+  private Database(Path path, Connection connection) {
+    this.path = path;
+    this.connection = connection;
+  }
+
+  /** A unit of work inside a transaction. */
+  @FunctionalInterface
+  interface Work<T> {
+    T run(Connection connection) throws SQLException;
+  }
+
+  /**
+   * Opens (or creates) the database file at {@code path} and checks that it is one of ours.
+   *
+   * <p>Nothing is written to a file that is not an SQLite database or that belongs to another
+   * program; such a file is refused with a message that says so.
+   *
+   * @throws StorageException if the file or its folder cannot be used
+   */
+  static Database open(Path path) {
+    Path file = path.toAbsolutePath().normalize();
+    checkBeforeOpening(file);
+    Properties settings = new Properties();
+    settings.setProperty("busy_timeout", Integer.toString(BUSY_TIMEOUT_MS));
+    settings.setProperty("foreign_keys", "true");
+    settings.setProperty("synchronous", "FULL");
+    Connection connection;
+    try {
+      connection = DriverManager.getConnection("jdbc:sqlite:" + file, settings);
+    } catch (SQLException e) {
+      throw translate(file, e, "open");
+    }
+    Database database = new Database(file, connection);
+    try {
+      database.checkOwnership();
+      try (PreparedStatement wal = connection.prepareStatement("PRAGMA journal_mode = WAL");
+          ResultSet rs = wal.executeQuery()) {
+        rs.next();
+      }
+      return database;
+    } catch (SQLException | RuntimeException e) {
+      database.closeQuietly();
+      throw e instanceof StorageException se ? se : translate(file, e, "open");
+    }
+  }
+
+  private static void checkBeforeOpening(Path file) {
+    Path folder = file.getParent();
+    if (Files.isDirectory(file)) {
+      throw new StorageException("The history database " + file + " is a folder, not a file.");
+    }
+    if (!Files.exists(file)) {
+      if (folder == null || !Files.isDirectory(folder)) {
+        try {
+          Files.createDirectories(folder);
+        } catch (IOException | RuntimeException e) {
+          throw new StorageException(
+              "Cannot create the folder " + folder + " for the history database: " + e.getMessage(),
+              e);
+        }
+      }
+      if (!canCreateIn(folder)) {
+        throw new StorageException(
+            "Cannot create the history database in "
+                + folder
+                + ": the folder is not writable. Choose another file with --db or STAGEWISE_DB.");
+      }
+      return;
+    }
+    byte[] head = new byte[SQLITE_MAGIC.length];
+    int read;
+    try (InputStream in = Files.newInputStream(file)) {
+      read = in.readNBytes(head, 0, head.length);
+    } catch (IOException e) {
+      throw new StorageException("Cannot read the history database " + file + ": " + e.getMessage(), e);
+    }
+    // An empty file is what SQLite itself makes for a new database; anything else must be one.
+    if (read > 0 && (read < head.length || !Arrays.equals(head, SQLITE_MAGIC))) {
+      throw new StorageException(
+          "The file "
+              + file
+              + " is not a Stagewise history database (it is not an SQLite file). "
+              + "It was left as it is; choose another file with --db or STAGEWISE_DB.");
+    }
+    if (!Files.isWritable(file) || !canCreateIn(folder)) {
+      throw new StorageException(
+          "The history database "
+              + file
+              + " cannot be written: the file or its folder is read-only (the database needs to"
+              + " write its log file beside it). Copy it to a writable folder, or fix the permissions.");
+    }
+  }
+
+  /** Returns whether a new file can be made in {@code folder} (tries it, since root ignores modes). */
+  private static boolean canCreateIn(Path folder) {
+    if (!Files.isWritable(folder)) {
+      return false;
+    }
+    try {
+      Path probe = Files.createTempFile(folder, ".stagewise-probe", ".tmp");
+      Files.delete(probe);
+      return true;
+    } catch (IOException | RuntimeException e) {
+      return false;
+    }
+  }
+
+  private void checkOwnership() throws SQLException {
+    int applicationId = queryInt("PRAGMA application_id");
+    int objects = queryInt("SELECT count(*) FROM sqlite_master");
+    if (applicationId != APPLICATION_ID && !(applicationId == 0 && objects == 0)) {
+      throw new StorageException(
+          "The file "
+              + path
+              + " is an SQLite database, but not a Stagewise history database. It was left as it"
+              + " is; choose another file with --db or STAGEWISE_DB.");
+    }
+  }
+
+  Path path() {
+    return path;
+  }
+
+  Connection connection() {
+    return connection;
+  }
+
+  int queryInt(String sql) throws SQLException {
+    try (PreparedStatement statement = connection.prepareStatement(sql);
+        ResultSet rs = statement.executeQuery()) {
+      return rs.next() ? rs.getInt(1) : 0;
+    }
+  }
+
+  /**
+   * Runs {@code work} in one write transaction and returns its result: all of it is committed, or
+   * none of it.
+   *
+   * <p>If another program holds the write lock longer than the busy timeout, the transaction is
+   * retried a few times before the user is told that the file is busy.
+   */
+  <T> T write(String what, Work<T> work) {
+    if (inTransaction) {
+      throw new IllegalStateException("nested transaction");
+    }
+    for (int attempt = 1; ; attempt++) {
+      try {
+        return transaction("BEGIN IMMEDIATE", work);
+      } catch (SQLException e) {
+        if (!isBusy(e) || attempt >= WRITE_ATTEMPTS) {
+          throw translate(path, e, what);
+        }
+        pause(attempt);
+      }
+    }
+  }
+
+  /** Runs {@code work} in one read transaction, so that it sees one consistent state of the file. */
+  <T> T read(String what, Work<T> work) {
+    if (inTransaction) {
+      throw new IllegalStateException("nested transaction");
+    }
+    for (int attempt = 1; ; attempt++) {
+      try {
+        return transaction("BEGIN DEFERRED", work);
+      } catch (SQLException e) {
+        if (!isBusy(e) || attempt >= WRITE_ATTEMPTS) {
+          throw translate(path, e, what);
+        }
+        pause(attempt);
+      }
+    }
+  }
+
+  /**
+   * Runs {@code work} outside any transaction (for statements that cannot run inside one, such as
+   * {@code VACUUM INTO} and the online backup), retrying while the file is busy.
+   */
+  <T> T outsideTransaction(String what, Work<T> work) {
+    if (inTransaction) {
+      throw new IllegalStateException("nested transaction");
+    }
+    for (int attempt = 1; ; attempt++) {
+      try {
+        return work.run(connection);
+      } catch (SQLException e) {
+        if (!isBusy(e) || attempt >= WRITE_ATTEMPTS) {
+          throw translate(path, e, what);
+        }
+        pause(attempt);
+      }
+    }
+  }
+
+  private <T> T transaction(String begin, Work<T> work) throws SQLException {
+    execute(begin);
+    inTransaction = true;
+    boolean committed = false;
+    try {
+      T result = work.run(connection);
+      execute("COMMIT");
+      committed = true;
+      return result;
+    } finally {
+      inTransaction = false;
+      if (!committed) {
+        rollbackQuietly();
+      }
+    }
+  }
+
+  void execute(String sql) throws SQLException {
+    try (PreparedStatement statement = connection.prepareStatement(sql)) {
+      statement.execute();
+    }
+  }
+
+  private void rollbackQuietly() {
+    try {
+      execute("ROLLBACK");
+    } catch (SQLException e) {
+      // No transaction left to roll back: SQLite ends it by itself after some errors.
+    }
+  }
+
+  private static void pause(int attempt) {
+    try {
+      Thread.sleep(50L * attempt * attempt);
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      throw new StorageException("Interrupted while waiting for the history database.", e);
+    }
+  }
+
+  static boolean isBusy(SQLException e) {
+    if (e instanceof SQLiteException se) {
+      SQLiteErrorCode code = se.getResultCode();
+      return code == SQLiteErrorCode.SQLITE_BUSY
+          || code == SQLiteErrorCode.SQLITE_LOCKED
+          || code.name().startsWith("SQLITE_BUSY_")
+          || code.name().startsWith("SQLITE_LOCKED_");
+    }
+    return false;
+  }
+
+  /** Returns a storage exception whose message says in plain words what went wrong with the file. */
+  static StorageException translate(Path file, Exception e, String what) {
+    if (e instanceof StorageException se) {
+      return se;
+    }
+    String code = e instanceof SQLiteException se ? se.getResultCode().name() : "";
+    String problem;
+    if (code.startsWith("SQLITE_CORRUPT") || code.equals("SQLITE_NOTADB")) {
+      problem =
+          "the file is damaged ("
+              + plain(e)
+              + "). It was left as it is; restore a backup with 'stagewise history restore'.";
+    } else if (code.startsWith("SQLITE_BUSY") || code.startsWith("SQLITE_LOCKED")) {
+      problem =
+          "another program kept the database busy for too long. Nothing was changed; try again.";
+    } else if (code.startsWith("SQLITE_READONLY")) {
+      problem = "the file or its folder is read-only. Nothing was changed.";
+    } else if (code.startsWith("SQLITE_CANTOPEN")) {
+      problem = "the file cannot be opened (check that the folder exists and is writable).";
+    } else if (code.startsWith("SQLITE_FULL")) {
+      problem = "the disk is full. Nothing was changed.";
+    } else if (code.startsWith("SQLITE_IOERR")) {
+      problem = "the disk reported an error (" + plain(e) + "). Nothing was changed.";
+    } else {
+      problem = plain(e);
+    }
+    return new StorageException("History database " + file + ": cannot " + what + ": " + problem, e);
+  }
+
+  private static String plain(Exception e) {
+    String message = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+    // sqlite-jdbc prefixes "[SQLITE_CORRUPT] The database disk image is malformed (...)".
+    return message.replaceFirst("^\\[[A-Z_]+\\]\\s*", "");
+  }
+
+  private void closeQuietly() {
+    try {
+      connection.close();
+    } catch (SQLException e) {
+      // Closing after a failed open: the first failure is the one to report.
+    }
+  }
+
+  @Override
+  public void close() {
+    try {
+      connection.close();
+    } catch (SQLException e) {
+      throw translate(path, e, "close");
+    }
+  }
+}

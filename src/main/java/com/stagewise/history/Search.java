@@ -1,0 +1,144 @@
+package com.stagewise.history;
+
+import com.stagewise.history.record.CaseStatus;
+import com.stagewise.history.record.Outcome;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Finds cases by their unit, board model, confirmed faults, parts, status, dates and words.
+ *
+ * <p>Words are looked up in the full-text indexes of symptoms and notes (FTS5) and ranked with
+ * bm25; a case found through several texts keeps its best rank and that text's snippet. The SQL is
+ * assembled from fixed pieces; every value the user typed is a bound parameter.
+ */
+final class Search {
+  private static final String SNIPPET_OPEN = "[";
+  private static final String SNIPPET_CLOSE = "]";
+  private static final int SNIPPET_TOKENS = 12;
+
+  private Search() {}
+
+  static List<SearchHit> run(Connection connection, SearchQuery query) throws SQLException {
+    List<Object> parameters = new ArrayList<>();
+    StringBuilder sql = new StringBuilder();
+    boolean ranked = query.text().isPresent();
+    if (ranked) {
+      String match = matchExpression(query.text().get());
+      if (match.isEmpty()) {
+        return List.of();
+      }
+      String snippet =
+          "snippet(%s, 0, '" + SNIPPET_OPEN + "', '" + SNIPPET_CLOSE + "', '…', " + SNIPPET_TOKENS + ")";
+      sql.append("WITH text_hit (case_row, score, snip) AS (")
+          .append("SELECT rowid, bm25(symptom_text), ")
+          .append(String.format(java.util.Locale.ROOT, snippet, "symptom_text"))
+          .append(" FROM symptom_text WHERE symptom_text MATCH ?")
+          .append(" UNION ALL SELECT rc.row, bm25(note_text), ")
+          .append(String.format(java.util.Locale.ROOT, snippet, "note_text"))
+          .append(" FROM note_text JOIN case_note cn ON cn.row = note_text.rowid")
+          .append(" JOIN repair_case rc ON rc.id = cn.case_id WHERE note_text MATCH ?),")
+          .append(" best (case_row, score, snip) AS (SELECT case_row, min(score), snip FROM text_hit")
+          .append(" GROUP BY case_row) ");
+      parameters.add(match);
+      parameters.add(match);
+    }
+    sql.append("SELECT c.id, u.id, u.serial, m.name, c.status, c.outcome, c.opened_at, c.symptom,")
+        .append(" (SELECT group_concat(fault_id, ' ') FROM (SELECT fault_id FROM confirmed_fault f")
+        .append(" WHERE f.case_id = c.id ORDER BY position)), ")
+        .append(ranked ? "best.snip, -best.score" : "NULL, 0")
+        .append(ranked ? " FROM best JOIN repair_case c ON c.row = best.case_row" : " FROM repair_case c")
+        .append(" JOIN unit u ON u.id = c.unit_id JOIN board_model m ON m.id = u.board_model_id")
+        .append(" WHERE 1 = 1");
+    if (query.serial().isPresent()) {
+      sql.append(" AND u.serial = ? COLLATE NOCASE");
+      parameters.add(query.serial().get());
+    }
+    if (query.boardModel().isPresent()) {
+      sql.append(" AND (m.id = ? OR m.name = ? COLLATE NOCASE)");
+      parameters.add(query.boardModel().get());
+      parameters.add(query.boardModel().get());
+    }
+    if (query.faultId().isPresent()) {
+      sql.append(" AND EXISTS (SELECT 1 FROM confirmed_fault f WHERE f.case_id = c.id AND f.fault_id = ?)");
+      parameters.add(query.faultId().get());
+    }
+    if (query.part().isPresent()) {
+      sql.append(" AND EXISTS (SELECT 1 FROM case_part p WHERE p.case_id = c.id AND p.part = ?)");
+      parameters.add(query.part().get());
+    }
+    if (query.status().isPresent()) {
+      sql.append(" AND c.status = ?");
+      parameters.add(query.status().get().word());
+    }
+    if (query.openedFrom().isPresent()) {
+      sql.append(" AND c.opened_at >= ?");
+      parameters.add(query.openedFrom().get());
+    }
+    if (query.openedBefore().isPresent()) {
+      sql.append(" AND c.opened_at < ?");
+      parameters.add(query.openedBefore().get());
+    }
+    sql.append(ranked ? " ORDER BY best.score, c.opened_at DESC" : " ORDER BY c.opened_at DESC, c.id")
+        .append(" LIMIT ?");
+    parameters.add(query.limit());
+
+    List<SearchHit> hits = new ArrayList<>();
+    try (PreparedStatement statement = connection.prepareStatement(sql.toString())) {
+      Rows.bind(statement, parameters.toArray());
+      try (ResultSet rs = statement.executeQuery()) {
+        while (rs.next()) {
+          String outcome = rs.getString(6);
+          String faults = rs.getString(9);
+          String symptom = rs.getString(8);
+          String snippet = rs.getString(10);
+          hits.add(
+              new SearchHit(
+                  rs.getString(1),
+                  rs.getString(2),
+                  rs.getString(3),
+                  rs.getString(4),
+                  CaseStatus.fromWord(rs.getString(5)).orElseThrow(),
+                  outcome == null ? null : Outcome.fromWord(outcome).orElseThrow(),
+                  Instant.ofEpochMilli(rs.getLong(7)),
+                  symptom,
+                  faults == null || faults.isEmpty() ? List.of() : Arrays.asList(faults.split(" ")),
+                  snippet == null ? shortened(symptom) : snippet,
+                  rs.getDouble(11)));
+        }
+      }
+    }
+    return hits;
+  }
+
+  /**
+   * Returns an FTS5 query that finds every word of {@code text} as a word prefix, whatever
+   * characters the text holds: each word becomes a quoted string (inner quotes doubled), so that
+   * quotes, operators and column names typed by the user are searched for, not obeyed.
+   */
+  static String matchExpression(String text) {
+    StringBuilder match = new StringBuilder();
+    for (String word : text.strip().split("\\s+")) {
+      // FTS5 splits on punctuation itself; a word that is only punctuation would match nothing.
+      if (word.isEmpty() || word.codePoints().noneMatch(Character::isLetterOrDigit)) {
+        continue;
+      }
+      if (match.length() > 0) {
+        match.append(' ');
+      }
+      match.append('"').append(word.replace("\"", "\"\"")).append("\"*");
+    }
+    return match.toString();
+  }
+
+  private static String shortened(String symptom) {
+    int max = 80;
+    return symptom.length() <= max ? symptom : symptom.substring(0, max) + "…";
+  }
+}

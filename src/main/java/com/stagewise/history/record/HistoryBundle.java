@@ -1,0 +1,60 @@
+package com.stagewise.history.record;
+
+import java.time.Instant;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * A part or the whole of a shop's history, as carried between benches in one file.
+ *
+ * <p>Records refer to each other by id; a bundle holds every board model, unit and case that its
+ * other records refer to, so that it can be imported on its own.
+ *
+ * @param version the bundle format version
+ * @param exportedAt when it was exported
+ * @param programVersion the Stagewise version that exported it
+ */
+public record HistoryBundle(
+    int version,
+    Instant exportedAt,
+    String programVersion,
+    List<BoardModel> boardModels,
+    List<StageSheetRecord> stageSheets,
+    List<Unit> units,
+    List<RepairCase> cases,
+    List<StoredReading> readings,
+    List<SuspectListRecord> suspectLists,
+    List<RepairAction> actions,
+    List<CaseNote> notes) {
+
+  /** The {@code format} word of a history bundle file. */
+  public static final String FORMAT = "stagewise-history";
+
+  /** The newest bundle format version this program reads and the one it writes. */
+  public static final int CURRENT_VERSION = 1;
+
+  public HistoryBundle {
+    exportedAt = Times.millis(Objects.requireNonNull(exportedAt, "exportedAt"));
+    Times.text(programVersion, "programVersion");
+    boardModels = List.copyOf(boardModels);
+    stageSheets = List.copyOf(stageSheets);
+    units = List.copyOf(units);
+    cases = List.copyOf(cases);
+    readings = List.copyOf(readings);
+    suspectLists = List.copyOf(suspectLists);
+    actions = List.copyOf(actions);
+    notes = List.copyOf(notes);
+  }
+
+  /** Returns the number of records of every kind together. */
+  public int size() {
+    return boardModels.size()
+        + stageSheets.size()
+        + units.size()
+        + cases.size()
+        + readings.size()
+        + suspectLists.size()
+        + actions.size()
+        + notes.size();
+  }
+}
