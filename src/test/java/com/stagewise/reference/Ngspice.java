@@ -92,15 +92,26 @@ final class Ngspice {
     return parse(output, netlist.spiceNodes());
   }
 
-  /** Runs ngspice on a netlist text and returns everything it printed. */
+  /** Runs ngspice on a netlist text and returns everything it printed (stdout, then stderr). */
   static String runRaw(String text) {
+    return runFiles(Map.of("stage.cir", text), "stage.cir");
+  }
+
+  /**
+   * Writes the files into a fresh temporary folder, runs {@code ngspice -b main} there and returns
+   * everything it printed: stdout, then a line {@code @@stderr}, then stderr.
+   */
+  static String runFiles(Map<String, String> files, String main) {
     Path dir = null;
     try {
       dir = Files.createTempDirectory("stagewise-spice");
-      Path file = dir.resolve("stage.cir");
-      Files.writeString(file, text, StandardCharsets.US_ASCII);
+      for (Map.Entry<String, String> f : files.entrySet()) {
+        Files.writeString(dir.resolve(f.getKey()), f.getValue(), StandardCharsets.US_ASCII);
+      }
+      // Notes on stderr would otherwise interleave with printed values in mid-line.
+      Path errors = dir.resolve("stderr.txt");
       ProcessBuilder builder =
-          new ProcessBuilder(List.of("ngspice", "-b", file.toString())).redirectErrorStream(true);
+          new ProcessBuilder(List.of("ngspice", "-b", main)).redirectError(errors.toFile());
       builder.directory(dir.toFile());
       builder.environment().put("LC_ALL", "C");
       builder.environment().put("LANG", "C");
@@ -110,7 +121,8 @@ final class Ngspice {
         process.destroyForcibly();
         return "timed out";
       }
-      return new String(bytes, StandardCharsets.UTF_8);
+      String stderr = Files.readString(errors, StandardCharsets.UTF_8);
+      return new String(bytes, StandardCharsets.UTF_8) + "\n@@stderr\n" + stderr;
     } catch (IOException e) {
       throw new IllegalStateException(MISSING + " (" + e.getMessage() + ")", e);
     } catch (InterruptedException e) {
@@ -134,6 +146,7 @@ final class Ngspice {
         case "@@op" -> part = "op";
         case "@@ac" -> part = "ac";
         case "@@end" -> ended = true;
+        case "@@stderr" -> part = "stderr";
         default -> {
           Matcher m = VALUE.matcher(trimmed);
           if (!m.matches()) {

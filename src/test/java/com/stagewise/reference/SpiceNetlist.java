@@ -63,6 +63,46 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
    *     converge; still far within a meter count
    */
   static SpiceNetlist of(FlatCircuit flat, String title, boolean relaxed) {
+    Body body = body(flat, relaxed);
+    StringBuilder text = new StringBuilder();
+    text.append("* ").append(oneLine(title)).append(" (Stagewise op-amp model: clamped source behind Rout)\n");
+    text.append(options(relaxed)).append('\n');
+    text.append(body.lines());
+    text.append(".control\n");
+    text.append("set numdgt=15\n");
+    text.append("echo @@op\n");
+    text.append("op\n");
+    text.append("print all\n");
+    if (flat.hz > 0) {
+      text.append("echo @@ac\n");
+      text.append("ac lin 1 ").append(num(flat.hz)).append(' ').append(num(flat.hz)).append('\n');
+      text.append("print all\n");
+    }
+    text.append("echo @@end\n");
+    // Without quit 0, ngspice 39 in batch mode exits with status 1.
+    text.append("quit 0\n");
+    text.append(".endc\n");
+    text.append(".end\n");
+    return new SpiceNetlist(text.toString(), body.spiceNodes());
+  }
+
+  /** The simulator options line: tight tolerances, or ngspice's default-like ones when relaxed. */
+  static String options(boolean relaxed) {
+    return relaxed
+        ? ".options reltol=1e-6 vntol=1e-9 abstol=1e-12 itl1=1000"
+        : ".options reltol=1e-9 vntol=1e-12 abstol=1e-15 itl1=500";
+  }
+
+  /**
+   * The element lines of a circuit (sources, parts, sections) without title, options or analyses.
+   *
+   * @param lines the element lines, each ending in a newline
+   * @param spiceNodes our node name → SPICE node name ({@code 0} for ground)
+   */
+  record Body(String lines, Map<String, String> spiceNodes) {}
+
+  /** Returns the element lines of a flattened circuit; see {@link #of(FlatCircuit, String, boolean)}. */
+  static Body body(FlatCircuit flat, boolean relaxed) {
     double limitRange = relaxed ? RELAXED_LIMIT_RANGE : LIMIT_RANGE;
     Map<String, String> names = new LinkedHashMap<>();
     int next = 1;
@@ -70,13 +110,9 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
       names.put(node, node.equals(flat.ground) ? "0" : "n" + next++);
     }
     Writer w = new Writer(names);
-    w.line("* " + oneLine(title) + " (Stagewise op-amp model: clamped source behind Rout)");
     for (Map.Entry<String, String> e : names.entrySet()) {
       w.line("* node " + e.getValue() + " = " + oneLine(e.getKey()));
     }
-    w.line(relaxed
-        ? ".options reltol=1e-6 vntol=1e-9 abstol=1e-12 itl1=1000"
-        : ".options reltol=1e-9 vntol=1e-12 abstol=1e-15 itl1=500");
     int v = 0;
     for (Map.Entry<String, Double> source : flat.driven.entrySet()) {
       v++;
@@ -102,22 +138,7 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     for (int k = 0; k < flat.sections.size(); k++) {
       writeSection(w, flat, k + 1, flat.sections.get(k), limitRange);
     }
-    w.line(".control");
-    w.line("set numdgt=15");
-    w.line("echo @@op");
-    w.line("op");
-    w.line("print all");
-    if (flat.hz > 0) {
-      w.line("echo @@ac");
-      w.line("ac lin 1 " + num(flat.hz) + " " + num(flat.hz));
-      w.line("print all");
-    }
-    w.line("echo @@end");
-    // Without quit 0, ngspice 39 in batch mode exits with status 1.
-    w.line("quit 0");
-    w.line(".endc");
-    w.line(".end");
-    return new SpiceNetlist(w.text.toString(), Map.copyOf(names));
+    return new Body(w.text.toString(), Map.copyOf(names));
   }
 
   private static void writeSection(Writer w, FlatCircuit flat, int k, Section s, double limitRange) {
