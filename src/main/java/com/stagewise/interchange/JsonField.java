@@ -10,12 +10,13 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.value.SiValue;
+import com.stagewise.circuit.value.Tolerance;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.OptionalDouble;
 
 /**
  * One field of a JSON document being read strictly, with its file and JSON path, so that every
@@ -202,13 +203,11 @@ final class JsonField {
     if (node.isNumber()) {
       value = node.doubleValue();
     } else if (node.isTextual()) {
-      OptionalDouble parsed = ValueText.parse(node.asText());
-      if (parsed.isEmpty()) {
-        throw error(
-            "\"" + node.asText() + "\" is not a value (expected " + expected
-                + ": a number, optionally with an SI prefix or in RKM code, e.g. 10k, 4k7, 470R, 100n, 2u2)");
+      try {
+        value = SiValue.parse(node.asText());
+      } catch (InvalidInputException e) {
+        throw error(e.getMessage());
       }
-      value = parsed.getAsDouble();
     } else {
       throw error("expected " + expected + ", found " + describe(node));
     }
@@ -233,11 +232,11 @@ final class JsonField {
     if (node.isNumber()) {
       value = node.doubleValue();
     } else if (node.isTextual()) {
-      OptionalDouble parsed = ValueText.parseTolerance(node.asText());
-      if (parsed.isEmpty()) {
-        throw error("\"" + node.asText() + "\" is not a tolerance (expected a percentage such as \"1%\" or a fraction such as 0.01)");
+      try {
+        value = Tolerance.parse(node.asText());
+      } catch (InvalidInputException e) {
+        throw error(e.getMessage());
       }
-      value = parsed.getAsDouble();
     } else {
       throw error("expected a tolerance such as \"1%\" or 0.01, found " + describe(node));
     }

@@ -1,70 +1,21 @@
 package com.stagewise.interchange;
 
 import java.math.BigDecimal;
-import java.util.OptionalDouble;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
- * Reads and prints component values with SI prefixes and RKM code ({@code 10k}, {@code 4k7},
- * {@code 470R}, {@code 0R}, {@code 100n}, {@code 2u2}, {@code 1.5M}, {@code 22p}) and tolerances
- * ({@code "1%"} or {@code 0.01}).
+ * Prints part values in RKM code and tolerances as percentages for the files people read and edit
+ * ({@code 4k7}, {@code 100n}, {@code 470R}, {@code 1%}).
  *
- * <p>Decimal arithmetic keeps the round trip exact: printing a value and reading it back gives the
- * same double. Nothing here depends on the machine's locale.
+ * <p>Unlike the four-digit printing of {@link com.stagewise.circuit.value.SiValue}, this keeps every
+ * digit, so that a value written and read back with {@code SiValue.parse} is the same double (a
+ * stage sheet must round-trip exactly, whatever value the diagnosis or a form put in it). Decimal
+ * arithmetic; nothing here depends on the machine's locale.
  */
 final class ValueText {
   private ValueText() {}
 
-  /** RKM code: the prefix letter (or R for ×1) stands for the decimal point (IEC 60062). */
-  private static final Pattern RKM = Pattern.compile("([0-9]+)([pnuµmkKMGR])([0-9]*)");
-
-  private static final Pattern PLAIN =
-      Pattern.compile("([+-]?(?:[0-9]+\\.?[0-9]*|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?)([pnuµmkKMG]?)");
-
-  private static final Pattern NUMBER = Pattern.compile("[+-]?(?:[0-9]+\\.?[0-9]*|\\.[0-9]+)(?:[eE][+-]?[0-9]+)?");
-
   // Index 4 (no prefix) is a placeholder.
   private static final String PREFIXES = "pnum kMG";
-
-  /**
-   * Returns the value of a string such as {@code 4k7}, {@code 100n} or {@code -15}, or empty when
-   * it is not a value. A unit symbol after the value ({@code Ω}, {@code ohm}, {@code F}, {@code V},
-   * {@code Hz}) is allowed and ignored.
-   */
-  static OptionalDouble parse(String text) {
-    String s = stripUnit(text.strip());
-    Matcher rkm = RKM.matcher(s);
-    if (rkm.matches()) {
-      String digits = rkm.group(1) + "." + (rkm.group(3).isEmpty() ? "0" : rkm.group(3));
-      return OptionalDouble.of(new BigDecimal(digits).scaleByPowerOfTen(exponent(rkm.group(2))).doubleValue());
-    }
-    Matcher plain = PLAIN.matcher(s);
-    if (plain.matches()) {
-      String prefix = plain.group(2);
-      int exponent = prefix.isEmpty() ? 0 : exponent(prefix);
-      double value = new BigDecimal(plain.group(1)).scaleByPowerOfTen(exponent).doubleValue();
-      return Double.isFinite(value) ? OptionalDouble.of(value) : OptionalDouble.empty();
-    }
-    return OptionalDouble.empty();
-  }
-
-  /**
-   * Returns a tolerance as a fraction from {@code "1%"} (a percentage) or {@code "0.01"} (a
-   * fraction), or empty when the text is neither.
-   */
-  static OptionalDouble parseTolerance(String text) {
-    String s = text.strip();
-    boolean percent = s.endsWith("%");
-    if (percent) {
-      s = s.substring(0, s.length() - 1).strip();
-    }
-    if (!NUMBER.matcher(s).matches()) {
-      return OptionalDouble.empty();
-    }
-    BigDecimal number = new BigDecimal(s);
-    return OptionalDouble.of((percent ? number.scaleByPowerOfTen(-2) : number).doubleValue());
-  }
 
   /**
    * Returns a value in RKM code for a human to read: {@code 4k7}, {@code 100n}, {@code 470R},
@@ -108,28 +59,5 @@ final class ValueText {
   /** Returns a tolerance fraction as a percentage string, e.g. {@code 1%} or {@code 0.5%}. */
   static String formatTolerance(double fraction) {
     return BigDecimal.valueOf(fraction).scaleByPowerOfTen(2).stripTrailingZeros().toPlainString() + "%";
-  }
-
-  private static int exponent(String prefix) {
-    return switch (prefix) {
-      case "p" -> -12;
-      case "n" -> -9;
-      case "u", "µ" -> -6;
-      case "m" -> -3;
-      case "R" -> 0;
-      case "k", "K" -> 3;
-      case "M" -> 6;
-      case "G" -> 9;
-      default -> throw new IllegalArgumentException("prefix " + prefix);
-    };
-  }
-
-  private static String stripUnit(String s) {
-    for (String unit : new String[] {"ohms", "ohm", "Ω", "Hz", "F", "V"}) {
-      if (s.endsWith(unit) && s.length() > unit.length()) {
-        return s.substring(0, s.length() - unit.length()).strip();
-      }
-    }
-    return s;
   }
 }

@@ -140,7 +140,7 @@ class StageSheetTest {
     @Test
     void badValue_namesPathAndExpectation() {
       InvalidInputException e = badSheet(EXAMPLE.replace("\"47k\"", "\"47q\""));
-      assertThat(e.getMessage()).startsWith(FILE + ": parts[1].value: \"47q\" is not a value").contains("4k7");
+      assertThat(e.getMessage()).startsWith(FILE + ": parts[1].value: value \"47q\" is not a number").contains("4k7");
     }
 
     @Test
