@@ -148,12 +148,15 @@ final class FaultSimulation {
     exactDc.forEach((at, volts) -> readings.add(new Reading(at, "dc", meterReading(rnd, meter, volts), 0)));
     exactAc.forEach(
         (at, phasor) -> readings.add(new Reading(at, "ac", scopeReading(rnd, phasor.amplitude()), flat.hz)));
-    List<String> points = new ArrayList<>(exactDc.keySet());
-    points.removeIf(unit::isDriven);
+    // A partial set as a technician takes it: the output, then one or two package pins.
+    String output = stage.amplifiers().get(0).out();
+    List<String> pins = new ArrayList<>(flat.pinNodes.keySet());
+    pins.removeIf(pin -> stage.pinNets().get(pin).equals(output) && !flat.pinNodes.get(pin).startsWith("pin:"));
     Set<String> partial = new LinkedHashSet<>();
-    int wanted = Math.min(points.size(), 1 + rnd.nextInt(3));
+    partial.add(output);
+    int wanted = 1 + Math.min(pins.size(), 1 + rnd.nextInt(2));
     while (partial.size() < wanted) {
-      partial.add(points.get(rnd.nextInt(points.size())));
+      partial.add(pins.get(rnd.nextInt(pins.size())));
     }
     return new Case(
         fault, seed, sample, parts, rails, devices, faultValue, ties, round(exactDc), flat.hz, exactAc,

@@ -8,6 +8,7 @@ import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
+import com.stagewise.interchange.StageSheet;
 import com.stagewise.solver.AcSolution;
 import com.stagewise.solver.Conditions;
 import com.stagewise.solver.DeviceParams;
@@ -76,6 +77,14 @@ class FaultTruthTest {
       }
     }
     assertThat(problems).isEmpty();
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("truthFiles")
+  void embeddedSheet_readsBackAsTheStage(Path file) throws IOException {
+    JsonNode root = TruthFiles.read(file);
+    Stage embedded = StageSheet.read(TruthFiles.JSON.writeValueAsString(root.path("sheet")), file.toString());
+    assertThat(embedded).isEqualTo(stageOf(root));
   }
 
   @ParameterizedTest(name = "{0}")

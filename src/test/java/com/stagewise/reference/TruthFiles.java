@@ -4,11 +4,8 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import com.stagewise.circuit.Amplifier;
-import com.stagewise.circuit.Part;
-import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.TestInput;
+import com.stagewise.interchange.StageSheet;
 import com.stagewise.reference.FaultSimulation.Case;
 import com.stagewise.reference.FaultSimulation.Dropped;
 import com.stagewise.reference.FaultSimulation.Reading;
@@ -160,49 +157,12 @@ final class TruthFiles {
     return node;
   }
 
-  /** The stage in the stage-sheet shape of the design notes, values as plain numbers. */
-  static ObjectNode sheet(Stage stage) {
-    ObjectNode root = JSON.createObjectNode();
-    root.put("format", "stagewise-stage");
-    root.put("version", 1);
-    root.put("title", stage.title());
-    root.put("board", stage.board());
-    root.put("ground", stage.ground());
-    ArrayNode rails = root.putArray("rails");
-    for (Rail rail : stage.rails()) {
-      rails.addObject().put("net", rail.net()).put("volts", rail.volts()).put("tolerance", rail.tolerance());
+  /** The stage as its stage sheet (written by the project's own sheet writer). */
+  static JsonNode sheet(Stage stage) {
+    try {
+      return JSON.readTree(StageSheet.write(stage));
+    } catch (IOException e) {
+      throw new java.io.UncheckedIOException(e);
     }
-    ArrayNode inputs = root.putArray("inputs");
-    for (TestInput input : stage.inputs()) {
-      ObjectNode one = inputs.addObject().put("net", input.net()).put("dc", input.dc());
-      if (input.hasAc()) {
-        one.put("ac", input.ac()).put("hz", input.hz());
-      }
-    }
-    ArrayNode parts = root.putArray("parts");
-    for (Part part : stage.parts()) {
-      ObjectNode one =
-          parts.addObject()
-              .put("ref", part.ref())
-              .put("kind", part.kind().word())
-              .put("value", part.value())
-              .put("tolerance", part.tolerance());
-      one.putArray("nets").add(part.netA()).add(part.netB());
-    }
-    ArrayNode amps = root.putArray("amplifiers");
-    for (Amplifier amp : stage.amplifiers()) {
-      amps.addObject()
-          .put("ref", amp.ref())
-          .put("package", amp.packageRef())
-          .put("packageType", amp.packageType().word())
-          .put("section", amp.section())
-          .put("class", amp.deviceClass().word())
-          .put("inPlus", amp.inPlus())
-          .put("inMinus", amp.inMinus())
-          .put("out", amp.out())
-          .put("vPlus", amp.vPlus())
-          .put("vMinus", amp.vMinus());
-    }
-    return root;
   }
 }
