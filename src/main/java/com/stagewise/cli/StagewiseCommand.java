@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
     mixinStandardHelpOptions = true,
     versionProvider = StagewiseCommand.Version.class,
     description = "Bench tool for diagnosing op-amp stages and keeping the repair history.",
-    subcommands = {CommandLine.HelpCommand.class, SolveCommand.class, TemplateCommand.class})
+    subcommands = {CommandLine.HelpCommand.class, SolveCommand.class, DiagnoseCommand.class, TemplateCommand.class})
 public final class StagewiseCommand implements Runnable {
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

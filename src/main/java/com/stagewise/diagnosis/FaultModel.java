@@ -40,6 +40,9 @@ final class FaultModel {
    */
   static final double DRIFT_TIE_OHMS = 1e9;
 
+  /** Designator prefix of the tie that stands for a floating input's drift to a rail. */
+  static final String DRIFT_TIE = "~drift-";
+
   private FaultModel() {}
 
   /** Returns the scenarios of a fault on a base stage and base conditions, weights summing to 1. */
@@ -229,7 +232,8 @@ final class FaultModel {
     if (net.equals(to)) {
       return new Scenario(s.stage(), s.conditions(), weight, s.value(), label);
     }
-    Part tie = Part.resistor("~tie-" + net, ohms, 0, net, to);
+    String kind = ohms == DRIFT_TIE_OHMS ? DRIFT_TIE : "~meter-";
+    Part tie = Part.resistor(kind + net, ohms, 0, net, to);
     return new Scenario(s.stage().plusPart(tie), s.conditions(), weight, s.value(), label);
   }
 

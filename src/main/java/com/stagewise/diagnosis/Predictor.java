@@ -159,6 +159,7 @@ final class Predictor {
       double moved = volts * (1 + rail.tolerance() * UNIFORM_SD);
       list.add(new Perturbation(s -> s, c -> c.withDriven(rail.net(), moved)));
     }
+    boolean drifting = stage.parts().stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
     for (Amplifier amp : stage.amplifiers()) {
       DeviceParams p = conditions.device(amp);
       DeviceClass type = amp.deviceClass();
@@ -168,7 +169,11 @@ final class Predictor {
       double low = p.headroomLow() + (type.headroomLow().high() - type.headroomLow().low()) / Math.sqrt(12);
       double high = p.headroomHigh() + (type.headroomHigh().high() - type.headroomHigh().low()) / Math.sqrt(12);
       list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withOffset(offset))));
-      list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withBias(bias, bias))));
+      if (!drifting) {
+        // Where a floating input is tied to a rail to stand for its drift, the bias current is
+        // already what put it there; moving it again through the tie would be counted twice.
+        list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withBias(bias, bias))));
+      }
       list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withHeadroom(low, p.headroomHigh()))));
       list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withHeadroom(p.headroomLow(), high))));
       // Gain is spread over a decade or more; the low end of the class's range is the honest step.
