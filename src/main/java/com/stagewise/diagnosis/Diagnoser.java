@@ -37,7 +37,7 @@ public final class Diagnoser {
   private static final double LIST_FLOOR = 1e-4;
 
   /** Grid points whose spread is computed; the others borrow it from the nearest of these. */
-  private static final int SPREAD_EVERY = 4;
+  private static final int SPREAD_EVERY = 8;
 
   /** Interpolated steps between neighbouring grid points of a drifted value. */
   private static final int SUB_STEPS = 4;
@@ -347,7 +347,12 @@ public final class Diagnoser {
       if (r.kind() != Reading.Kind.DC) {
         continue;
       }
-      String net = points.netOf.get(points.index.get(r.at()));
+      int point = points.index.get(r.at());
+      // Only a reading on the input net itself counts: a pin on that net may be the lifted one.
+      if (points.isPin(point)) {
+        continue;
+      }
+      String net = points.netOf.get(point);
       TestInput input = stage.input(net).orElse(null);
       if (input == null) {
         continue;
