@@ -26,11 +26,10 @@ import picocli.CommandLine.Option;
 @Command(
     name = "solve",
     mixinStandardHelpOptions = true,
-    description = {
-      "Prints what every net and op-amp pin of a healthy stage should read: DC volts, the state of",
-      "each section and, when a test input has AC, the AC amplitude and phase. Nominal part values",
-      "and nominal device parameters."
-    })
+    description =
+        "Prints what every net and op-amp pin of a healthy stage should read: DC volts, the state of"
+            + " each section and, when a test input has AC, the AC amplitude and phase. Nominal part"
+            + " values and nominal device parameters.")
 final class SolveCommand implements Callable<Integer> {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 

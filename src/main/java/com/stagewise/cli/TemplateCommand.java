@@ -96,7 +96,7 @@ final class TemplateCommand implements Callable<Integer> {
       text.append(template.name()).append(": ").append(template.description()).append('\n');
       for (Parameter parameter : template.parameters()) {
         String value = parameter.defaultValue() + (parameter.unit().isEmpty() ? "" : " " + parameter.unit());
-        text.append(String.format(Locale.ROOT, "    %-8s %-12s %s%n", parameter.name(), value, parameter.meaning()));
+        text.append(String.format(Locale.ROOT, "    %-8s %-16s %s%n", parameter.name(), value, parameter.meaning()));
       }
       text.append('\n');
     }
