@@ -51,6 +51,15 @@ final class LabelPlacer {
       if (best != null) {
         placed.put(net, best);
         taken.add(best.box().grown(3));
+        // The leader line is in the way of later labels too: a chain of small boxes along it.
+        Box box = best.box();
+        double nx = Math.max(box.x(), Math.min(best.x(), box.right()));
+        double ny = Math.max(box.y(), Math.min(best.y(), box.bottom()));
+        double length = Math.hypot(nx - best.x(), ny - best.y());
+        for (double t = 0; t < length; t += 6) {
+          double f = t / length;
+          taken.add(Box.centred(best.x() + f * (nx - best.x()), best.y() + f * (ny - best.y()), 4, 4));
+        }
       }
     }
     return placed;

@@ -272,7 +272,26 @@ public final class SchematicDrawing extends Region {
         all = all.union(box);
       }
     }
-    extent = new Box(all.x(), all.y() - LEGEND_HEIGHT, all.w(), all.h() + LEGEND_HEIGHT);
+    extent = new Box(all.x(), all.y() - LEGEND_HEIGHT, Math.max(all.w(), legendWidth()), all.h() + LEGEND_HEIGHT);
+  }
+
+  /** Returns the width of the legend line drawn by {@link #drawLegend}. */
+  private double legendWidth() {
+    double width = 0;
+    String title = stage == null ? "" : stage.title();
+    if (!title.isEmpty()) {
+      width += measure(title, 15, true) + 24;
+    }
+    if (!first.isEmpty()) {
+      width += 19 + measure("expected", 14, false) + 18;
+    }
+    if (!second.isEmpty()) {
+      width += 19 + measure(secondCaption.isEmpty() ? "second" : secondCaption, 14, false) + 18;
+    }
+    if (!measured.isEmpty()) {
+      width += 19 + measure("measured", 14, false) + 18;
+    }
+    return width;
   }
 
   private double[] labelSize(String net) {

@@ -68,7 +68,7 @@ final class SchematicLayout {
   static final double BODY_SHORT = 18;
   static final double CAP_GAP = 10;
   static final double CAP_PLATE = 28;
-  static final double PAIR_GAP = 110;
+  static final double PAIR_GAP = 80;
   static final double BLOCK_GAP = 50;
   static final double CHANNEL = 22;
 
@@ -197,24 +197,37 @@ final class SchematicLayout {
     for (Amplifier amp : amps) {
       feeders.put(amp, feedersOf(amp));
     }
+    Map<Amplifier, Integer> rank = relax(amps, feeders);
+    if (rank == null) {
+      // A loop between sections (one feeds another that feeds it back): keep only the feeds that
+      // go forward in the stage's own order, so the loop's return is drawn with net flags.
+      for (Amplifier amp : amps) {
+        feeders.get(amp).removeIf(f -> amps.indexOf(f) >= amps.indexOf(amp));
+      }
+      rank = relax(amps, feeders);
+    }
+    return rank;
+  }
+
+  /** Returns the longest feed path to each section, or null if the feeds form a loop. */
+  private static Map<Amplifier, Integer> relax(List<Amplifier> amps, Map<Amplifier, Set<Amplifier>> feeders) {
     Map<Amplifier, Integer> rank = new HashMap<>();
     amps.forEach(a -> rank.put(a, 0));
-    // Longest path by relaxation; a loop between sections stops after as many rounds as sections.
-    for (int round = 0; round < amps.size(); round++) {
+    for (int round = 0; round <= amps.size(); round++) {
       boolean changed = false;
       for (Amplifier amp : amps) {
         for (Amplifier feeder : feeders.get(amp)) {
-          if (rank.get(feeder) + 1 > rank.get(amp) && rank.get(feeder) + 1 < amps.size()) {
+          if (rank.get(feeder) + 1 > rank.get(amp)) {
             rank.put(amp, rank.get(feeder) + 1);
             changed = true;
           }
         }
       }
       if (!changed) {
-        break;
+        return rank;
       }
     }
-    return rank;
+    return null;
   }
 
   /** Returns the sections whose output reaches this section's inputs through its input networks. */

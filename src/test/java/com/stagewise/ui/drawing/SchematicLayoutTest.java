@@ -139,7 +139,7 @@ class SchematicLayoutTest {
 
   @Test
   void instrumentation_placesInputStagesLeftOfTheDifferenceStage() {
-    Sheet sheet = layout(TestCircuits.all().get("instrumentation"));
+    Sheet sheet = layout(TestCircuits.all().get("template-instrumentation"));
     var byRef = new LinkedHashMap<String, Sheet.AmpGlyph>();
     sheet.amps().forEach(a -> byRef.put(a.amp().ref(), a));
     assertThat(byRef.get("U1A").x()).isEqualTo(byRef.get("U1B").x());
@@ -154,7 +154,7 @@ class SchematicLayoutTest {
 
   @Test
   void inverting_putsFeedbackAboveAndInputLeft() {
-    Sheet sheet = layout(TestCircuits.all().get("inverting"));
+    Sheet sheet = layout(TestCircuits.all().get("template-inverting"));
     Sheet.AmpGlyph amp = sheet.amps().get(0);
     PartGlyph r1 = part(sheet, "R1");
     PartGlyph r2 = part(sheet, "R2");

@@ -11,10 +11,18 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.Stream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import com.stagewise.circuit.template.StageTemplate;
+import com.stagewise.circuit.template.Templates;
+import com.stagewise.interchange.StageSheet;
 
 /**
- * The usual op-amp stages built in code, with the nets and designators the stage templates use,
- * for the drawing tests (textbook topologies; values are typical, nothing here is demo data).
+ * The stages the drawing tests render: every stage template, the demo library, and a few
+ * topologies no template builds (built in code here) for the fallback drawing.
  */
 final class TestCircuits {
   private final String title;
@@ -62,60 +70,45 @@ final class TestCircuits {
     return new Stage(title, "", "GND", rails, inputs, parts, amps);
   }
 
-  /** Returns every topology the stage templates build, keyed by a short file-friendly name. */
-  static Map<String, Stage> all() {
+  /** Returns the stages no template builds, to exercise the fallback drawing. */
+  static Map<String, Stage> fallbacks() {
     Map<String, Stage> all = new LinkedHashMap<>();
-    all.put("inverting", new TestCircuits("Inverting amplifier", true).in("IN", 1)
-        .r("R1", 10e3, "IN", "SUM").r("R2", 47e3, "SUM", "OUT").u1("GND", "SUM", "OUT").build());
-    all.put("non-inverting", new TestCircuits("Non-inverting amplifier", true).in("IN", 0.5)
-        .r("R1", 10e3, "FB", "GND").r("R2", 22e3, "FB", "OUT").u1("IN", "FB", "OUT").build());
-    all.put("voltage-follower", new TestCircuits("Voltage follower", true).in("IN", 2)
-        .r("R1", 10e3, "OUT", "GND").u1("IN", "OUT", "OUT").build());
-    for (int n = 2; n <= 4; n++) {
-      TestCircuits s = new TestCircuits("Summing amplifier, " + n + " inputs", true);
-      for (int i = 1; i <= n; i++) {
-        s.in("IN" + i, 0.1 * i).r("R" + i, 10e3, "IN" + i, "SUM");
-      }
-      all.put("summing-" + n, s.r("R5", 10e3, "SUM", "OUT").u1("GND", "SUM", "OUT").build());
-    }
-    all.put("difference", new TestCircuits("Difference amplifier", true).in("IN1", 1).in("IN2", 1.5)
-        .r("R1", 10e3, "IN1", "NEG").r("R2", 22e3, "NEG", "OUT").r("R3", 10e3, "IN2", "POS")
-        .r("R4", 22e3, "POS", "GND").u1("POS", "NEG", "OUT").build());
-    all.put("integrator", new TestCircuits("Integrator", true).in("IN", 0)
-        .r("R1", 10e3, "IN", "SUM").c("C1", 10e-9, "SUM", "OUT").r("R2", 1e6, "SUM", "OUT")
-        .u1("GND", "SUM", "OUT").build());
-    all.put("integrator-no-dc-path", new TestCircuits("Integrator without DC feedback", true).in("IN", 0)
-        .r("R1", 10e3, "IN", "SUM").c("C1", 10e-9, "SUM", "OUT").u1("GND", "SUM", "OUT").build());
-    all.put("differentiator", new TestCircuits("Differentiator", true).in("IN", 0)
-        .c("C1", 10e-9, "IN", "MID").r("R1", 1e3, "MID", "SUM").r("R2", 10e3, "SUM", "OUT")
-        .u1("GND", "SUM", "OUT").build());
-    all.put("differentiator-plain", new TestCircuits("Differentiator without series resistor", true).in("IN", 0)
-        .c("C1", 10e-9, "IN", "SUM").r("R2", 10e3, "SUM", "OUT").u1("GND", "SUM", "OUT").build());
-    all.put("instrumentation", new TestCircuits("Three-op-amp instrumentation amplifier", true)
-        .in("IN1", 2.5).in("IN2", 2.55)
-        .r("R1", 10e3, "OA", "GA").r("R2", 2.2e3, "GA", "GB").r("R3", 10e3, "GB", "OB")
-        .r("R4", 10e3, "OA", "DN").r("R5", 10e3, "DN", "OUT").r("R6", 10e3, "OB", "DP")
-        .r("R7", 10e3, "DP", "GND")
-        .amp("A", PackageType.QUAD_14, "IN1", "GA", "OA")
-        .amp("B", PackageType.QUAD_14, "IN2", "GB", "OB")
-        .amp("C", PackageType.QUAD_14, "DP", "DN", "OUT").build());
-    all.put("transimpedance", new TestCircuits("Transimpedance amplifier", true).in("IN", -1)
-        .r("R1", 10e6, "IN", "SUM").r("R2", 1e6, "SUM", "OUT").c("C1", 10e-12, "SUM", "OUT")
-        .u1("GND", "SUM", "OUT").build());
-    all.put("sallen-key-low-pass", new TestCircuits("Sallen-Key low-pass filter", true).in("IN", 0)
-        .r("R1", 10e3, "IN", "JCT").r("R2", 10e3, "JCT", "POS").c("C1", 22e-9, "JCT", "OUT")
-        .c("C2", 10e-9, "POS", "GND").u1("POS", "OUT", "OUT").build());
-    all.put("inverting-schmitt-trigger", new TestCircuits("Inverting Schmitt trigger", true).in("IN", 0)
-        .r("R1", 10e3, "POS", "GND").r("R2", 100e3, "POS", "OUT").u1("POS", "IN", "OUT").build());
-    all.put("single-supply-inverting", new TestCircuits("Single-supply inverting amplifier", false).in("IN", 0)
-        .c("C1", 1e-6, "IN", "AC").r("R1", 10e3, "AC", "SUM").r("R2", 47e3, "SUM", "OUT")
-        .r("R3", 100e3, "VCC", "BIAS").r("R4", 100e3, "BIAS", "GND").c("C2", 10e-6, "BIAS", "GND")
-        .u1("BIAS", "SUM", "OUT").build());
-    // Not a template: a twin-T notch, whose loop of parts fits no role and must still be drawn.
+    // A twin-T notch, whose loop of parts fits no role and must still be drawn.
     all.put("fallback-twin-t", new TestCircuits("Twin-T notch (fallback drawing)", true).in("IN", 0)
         .r("R1", 10e3, "IN", "A").r("R2", 10e3, "A", "POS").c("C3", 20e-9, "A", "GND")
         .c("C1", 10e-9, "IN", "B").c("C2", 10e-9, "B", "POS").r("R3", 5e3, "B", "GND")
         .r("R4", 10e3, "POS", "GND").u1("POS", "OUT", "OUT").build());
+    // Two cascaded sections with a feedback part from the second output back to the first input.
+    all.put("fallback-loop", new TestCircuits("Two sections in a loop (fallback drawing)", true).in("IN", 0)
+        .r("R1", 10e3, "IN", "SUMA").r("R2", 10e3, "SUMA", "OA").r("R3", 10e3, "OA", "SUMB")
+        .r("R4", 22e3, "SUMB", "OUT").r("R5", 100e3, "OUT", "SUMA")
+        .amp("A", PackageType.DUAL_8, "GND", "SUMA", "OA").amp("B", PackageType.DUAL_8, "GND", "SUMB", "OUT").build());
+    return all;
+  }
+
+  /**
+   * Returns every stage template with its default values, the variants the templates offer
+   * (summing with 2 and 4 inputs, integrator without R2, differentiator without R1), the stage
+   * sheets of the demo library and the fallbacks.
+   */
+  static Map<String, Stage> all() {
+    Map<String, Stage> all = new LinkedHashMap<>();
+    for (StageTemplate template : Templates.all()) {
+      all.put("template-" + template.name(), template.build());
+    }
+    all.put("template-summing-2", Templates.named("summing").build(Map.of("inputs", "2")));
+    all.put("template-summing-4", Templates.named("summing").build(Map.of("inputs", "4")));
+    all.put("template-integrator-no-r2", Templates.named("integrator").build(Map.of("r2", "none")));
+    all.put("template-differentiator-no-r1", Templates.named("differentiator").build(Map.of("r1", "none")));
+    try (Stream<Path> files = Files.list(Path.of("data", "stages"))) {
+      for (Path file : files.filter(f -> f.toString().endsWith(StageSheet.SUFFIX)).sorted().toList()) {
+        String name = file.getFileName().toString().replace(StageSheet.SUFFIX, "");
+        all.put("library-" + name, StageSheet.read(file));
+      }
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    all.putAll(fallbacks());
     return all;
   }
 }
