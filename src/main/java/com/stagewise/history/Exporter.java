@@ -59,7 +59,7 @@ final class Exporter {
               Rows::stageSheet,
               p),
           rows.query(Rows.UNIT + " WHERE " + units + " ORDER BY serial, id", Rows::unit, p),
-          rows.query(Rows.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.id", Rows::repairCase, p),
+          rows.query(Rows.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.row", Rows::repairCase, p),
           rows.query(Rows.READING + " WHERE " + caseIds + " ORDER BY case_id, taken_at, rowid", Rows::reading, p),
           rows.suspectLists("WHERE " + caseIds + " ORDER BY case_id, computed_at, rowid", p),
           rows.query(Rows.ACTION + " WHERE " + caseIds + " ORDER BY case_id, at, rowid", Rows::action, p),

@@ -457,7 +457,7 @@ public final class HistoryStore implements AutoCloseable {
             List<CaseFile> cases = new ArrayList<>();
             for (RepairCase rc :
                 rows.query(
-                    Rows.CASE + " WHERE c.unit_id = ? ORDER BY c.opened_at, c.id",
+                    Rows.CASE + " WHERE c.unit_id = ? ORDER BY c.opened_at, c.row",
                     Rows::repairCase,
                     unitId)) {
               cases.add(caseFile(rows, rc));

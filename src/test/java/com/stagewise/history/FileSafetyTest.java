@@ -1,0 +1,244 @@
+package com.stagewise.history;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CaseStatus;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.Unit;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.util.List;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Files that are not what they should be are refused clearly and never overwritten. */
+class FileSafetyTest {
+  @TempDir Path folder;
+
+  @Test
+  void notADatabase_isRefusedAndLeftAsItIs() throws Exception {
+    Path file = folder.resolve("notes.db");
+    byte[] text = "Bench notes, not a database.\n".repeat(200).getBytes(StandardCharsets.UTF_8);
+    Files.write(file, text);
+    assertThatThrownBy(() -> HistoryStore.open(file))
+        .isInstanceOf(StorageException.class)
+        .hasMessageContaining("is not a Stagewise history database")
+        .hasMessageContaining(file.getFileName().toString());
+    assertThat(Files.readAllBytes(file)).isEqualTo(text);
+  }
+
+  @Test
+  void anotherProgramsSqliteFile_isRefusedAndLeftAsItIs() throws Exception {
+    Path file = folder.resolve("other.db");
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+        PreparedStatement s = c.prepareStatement("CREATE TABLE parts (ref TEXT)")) {
+      s.execute();
+    }
+    byte[] before = Files.readAllBytes(file);
+    assertThatThrownBy(() -> HistoryStore.open(file))
+        .isInstanceOf(StorageException.class)
+        .hasMessageContaining("not a Stagewise history database");
+    assertThat(Files.readAllBytes(file)).isEqualTo(before);
+  }
+
+  @Test
+  void damagedFile_givesAClearMessageAndIsNotOverwritten() throws Exception {
+    Path file = folder.resolve("damaged.db");
+    try (HistoryStore store = HistoryStore.open(file)) {
+      BoardModel model = store.boardModel("PSU-30", "");
+      for (int i = 0; i < 200; i++) {
+        Unit unit = store.addUnit("U-" + i, model.id(), "");
+        store.openCase(unit.id(), "fault number " + i + " ".repeat(50));
+      }
+    }
+    byte[] bytes = Files.readAllBytes(file);
+    int page = 4096;
+    assertThat(bytes.length).isGreaterThan(8 * page);
+    // Garbage over every page but the first (which holds the header and the schema).
+    Random random = new Random(7);
+    byte[] garbage = new byte[bytes.length - page];
+    random.nextBytes(garbage);
+    System.arraycopy(garbage, 0, bytes, page, garbage.length);
+    Files.write(file, bytes);
+
+    assertThatThrownBy(
+            () -> {
+              try (HistoryStore store = HistoryStore.open(file)) {
+                store.search(SearchQuery.all());
+              }
+            })
+        .isInstanceOf(StorageException.class)
+        .hasMessageContaining("damaged")
+        .hasMessageContaining("restore a backup");
+    assertThat(Files.readAllBytes(file)).isEqualTo(bytes);
+  }
+
+  @Test
+  void newerSchema_isRefusedAndLeftAsItIs() throws Exception {
+    Path file = folder.resolve("newer.db");
+    HistoryStore.open(file).close();
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+        PreparedStatement s = c.prepareStatement("INSERT INTO schema_version VALUES (99, 0, 'V99__future.sql')")) {
+      s.execute();
+    }
+    byte[] before = Files.readAllBytes(file);
+    assertThatThrownBy(() -> HistoryStore.open(file))
+        .isInstanceOf(StorageException.class)
+        .hasMessageContaining("newer Stagewise")
+        .hasMessageContaining("99");
+    assertThat(Files.readAllBytes(file)).isEqualTo(before);
+  }
+
+  @Test
+  void unwritableFolder_givesAClearMessageAndCreatesNothing() throws Exception {
+    Path locked = folder.resolve("locked");
+    Files.createDirectory(locked);
+    Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("r-xr-xr-x"));
+    Path where = locked;
+    if (canCreate(locked)) {
+      // Running as root, which ignores folder permissions: use a folder of a file system that
+      // takes no new files at all.
+      where = Path.of("/proc/self");
+    }
+    Path file = where.resolve("history.db");
+    try {
+      assertThatThrownBy(() -> HistoryStore.open(file))
+          .isInstanceOf(StorageException.class)
+          .hasMessageContaining("Cannot create the history database in " + where)
+          .hasMessageContaining("not writable");
+      assertThat(Files.exists(file)).isFalse();
+    } finally {
+      Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("rwxr-xr-x"));
+    }
+  }
+
+  @Test
+  void folderGivenAsTheFile_isRefused() {
+    assertThatThrownBy(() -> HistoryStore.open(folder))
+        .isInstanceOf(StorageException.class)
+        .hasMessageContaining("is a folder");
+  }
+
+  @Test
+  void userText_roundTripsExactly() {
+    List<String> texts =
+        List.of(
+            "It's \"quoted\"; and semi;colons; '); DROP TABLE repair_case; --",
+            "Unicode: Ω µ ° ± ü ß 中文 עברית 🔧 e\u0301 \u200b",
+            "Lines\nand\r\nbreaks\tand tabs \\ backslashes % _ wildcards",
+            "  leading and trailing spaces  ",
+            "");
+    try (HistoryStore store = HistoryStore.open(folder.resolve("text.db"))) {
+      BoardModel model = store.boardModel("Model \"X\"; 'quoted' — Ω", "Maker; 'Ltd'");
+      Unit unit = store.addUnit("SN\"1\";'2' — µ", model.id(), "owner 'O\"Brien'; 🔧");
+      for (String text : texts) {
+        RepairCase c = store.openCase(unit.id(), text);
+        CaseNote note = store.addNote(c.id(), text);
+        assertThat(store.repairCase(c.id()).orElseThrow().symptom()).isEqualTo(text);
+        assertThat(store.caseFile(c.id()).orElseThrow().notes()).containsExactly(note);
+        assertThat(note.text()).isEqualTo(text);
+      }
+      assertThat(store.findBoardModel("model \"x\"; 'QUOTED' — Ω")).contains(model);
+      assertThat(store.unitsBySerial("SN\"1\";'2' — µ")).containsExactly(unit);
+      assertThat(store.search(SearchQuery.all().withStatus(CaseStatus.OPEN).withSerial(unit.serial()))).hasSize(texts.size());
+    }
+  }
+
+  @Test
+  void overlongText_isRefusedWithTheField() {
+    try (HistoryStore store = HistoryStore.open(folder.resolve("long.db"))) {
+      BoardModel model = store.boardModel("M", "");
+      assertThatThrownBy(() -> store.addUnit("x".repeat(Checks.MAX_SHORT + 1), model.id(), ""))
+          .isInstanceOf(InvalidInputException.class)
+          .hasMessageContaining("serial")
+          .hasMessageContaining("too long");
+    }
+  }
+
+  @Test
+  void backupAndRestore_bringBackTheSavedHistory() throws Exception {
+    Path file = folder.resolve("live.db");
+    Path backup = folder.resolve("backup.db");
+    try (HistoryStore store = HistoryStore.open(file)) {
+      BoardModel model = store.boardModel("PSU-30", "");
+      Unit kept = store.addUnit("KEPT", model.id(), "");
+      store.openCase(kept.id(), "before the backup");
+      store.backupTo(backup);
+      Unit later = store.addUnit("LATER", model.id(), "");
+      store.openCase(later.id(), "after the backup");
+      assertThatThrownBy(() -> store.backupTo(backup)).isInstanceOf(InvalidInputException.class);
+
+      Path saved = store.restoreFrom(backup);
+      assertThat(store.unitsBySerial("LATER")).isEmpty();
+      assertThat(store.unitsBySerial("KEPT")).containsExactly(kept);
+      assertThat(store.search(SearchQuery.all().withText("backup"))).extracting(SearchHit::symptom)
+          .containsExactly("before the backup");
+      assertThat(store.integrityCheck()).isEqualTo("ok");
+      // The history as it was before the restore is kept beside the file.
+      try (HistoryStore before = HistoryStore.open(saved)) {
+        assertThat(before.unitsBySerial("LATER")).hasSize(1);
+      }
+    }
+  }
+
+  @Test
+  void restore_fromAFileThatIsNoHistory_changesNothing() throws Exception {
+    Path file = folder.resolve("live.db");
+    Path junk = folder.resolve("junk.db");
+    Files.write(junk, "not a backup".getBytes(StandardCharsets.UTF_8));
+    try (HistoryStore store = HistoryStore.open(file)) {
+      store.addUnit("KEPT", store.boardModel("M", "").id(), "");
+      assertThatThrownBy(() -> store.restoreFrom(junk)).isInstanceOf(StorageException.class);
+      assertThat(store.unitsBySerial("KEPT")).hasSize(1);
+    }
+  }
+
+  @Test
+  void everyEarlierSchemaVersion_hasAFixtureThatMigratesForward() throws Exception {
+    for (int version = 1; version < HistoryStore.latestSchemaVersion(); version++) {
+      String name = "fixtures/schema-v" + version + ".db";
+      Path copy = folder.resolve("schema-v" + version + ".db");
+      try (InputStream in = FileSafetyTest.class.getResourceAsStream(name)) {
+        assertThat(in).as("fixture %s (make it with FixtureMaker)", name).isNotNull();
+        Files.copy(in, copy, StandardCopyOption.REPLACE_EXISTING);
+      }
+      try (HistoryStore store = HistoryStore.open(copy)) {
+        assertThat(store.schemaVersion()).isEqualTo(HistoryStore.latestSchemaVersion());
+        assertThat(store.integrityCheck()).isEqualTo("ok");
+        Unit unit = store.unitsBySerial("NF-8-0100").get(0);
+        UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
+        assertThat(history.cases()).hasSize(2);
+        assertThat(history.cases().get(0).repairCase().confirmedFaults()).containsExactly("U3B:dead");
+        assertThat(history.cases().get(0).notes()).extracting(CaseNote::text).containsExactly(FixtureMaker.NOTE);
+        // Text search works on what was written before the index existed.
+        assertThat(store.search(SearchQuery.all().withText("distorts"))).extracting(SearchHit::symptom)
+            .containsExactly(FixtureMaker.CLOSED_SYMPTOM);
+        assertThat(store.search(SearchQuery.all().withText("op-amp went"))).hasSize(1);
+        assertThat(store.search(SearchQuery.all().withPart("U3"))).hasSize(1);
+        // And the migrated file takes new writes.
+        store.openCase(unit.id(), "new after migration");
+      }
+    }
+  }
+
+  private static boolean canCreate(Path folder) {
+    try {
+      Files.delete(Files.createTempFile(folder, "probe", ".tmp"));
+      return true;
+    } catch (Exception e) {
+      return false;
+    }
+  }
+}
