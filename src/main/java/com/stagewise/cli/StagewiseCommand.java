@@ -1,6 +1,7 @@
 package com.stagewise.cli;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.StorageException;
 import java.io.PrintWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -11,7 +12,13 @@ import picocli.CommandLine.Command;
     mixinStandardHelpOptions = true,
     versionProvider = StagewiseCommand.Version.class,
     description = "Bench tool for diagnosing op-amp stages and keeping the repair history.",
-    subcommands = {CommandLine.HelpCommand.class, SolveCommand.class, DiagnoseCommand.class, TemplateCommand.class})
+    subcommands = {
+      CommandLine.HelpCommand.class,
+      SolveCommand.class,
+      DiagnoseCommand.class,
+      TemplateCommand.class,
+      HistoryCommand.class
+    })
 public final class StagewiseCommand implements Runnable {
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
@@ -40,7 +47,8 @@ public final class StagewiseCommand implements Runnable {
         });
     line.setExecutionExceptionHandler(
         (ex, cmd, parseResult) -> {
-          if (ex instanceof InvalidInputException) {
+          if (ex instanceof InvalidInputException || ex instanceof StorageException) {
+            // Both messages are written for the user: the file, the field or the fault, and what to do.
             err.println("stagewise: " + ex.getMessage());
           } else {
             err.println("stagewise: internal error: " + ex);

@@ -1,0 +1,138 @@
+package com.stagewise.cli;
+
+import com.stagewise.history.CaseFile;
+import com.stagewise.history.ImportReport;
+import com.stagewise.history.SearchHit;
+import com.stagewise.history.UnitHistory;
+import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.StoredSuspect;
+import com.stagewise.history.record.SuspectListRecord;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/** The readable text of the history commands (times in UTC, numbers with a decimal point). */
+final class HistoryText {
+  private static final DateTimeFormatter WHEN =
+      DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT).withZone(ZoneOffset.UTC);
+  private static final String NL = System.lineSeparator();
+
+  private HistoryText() {}
+
+  static String when(Instant time) {
+    return WHEN.format(time);
+  }
+
+  static String unitHistory(UnitHistory history) {
+    StringBuilder text = new StringBuilder();
+    text.append("Unit ").append(history.unit().serial()).append(" — ").append(history.boardModel().name());
+    if (!history.unit().owner().isEmpty()) {
+      text.append(" — ").append(history.unit().owner());
+    }
+    text.append(NL);
+    if (history.cases().isEmpty()) {
+      text.append("No cases yet.").append(NL);
+    }
+    for (CaseFile file : history.cases()) {
+      text.append(NL).append(caseFile(file)).append(NL);
+    }
+    return text.toString();
+  }
+
+  static String caseFile(CaseFile file) {
+    RepairCase c = file.repairCase();
+    StringBuilder text = new StringBuilder();
+    text.append("Case ").append(HistoryCommand.shortId(c.id())).append("  opened ").append(when(c.openedAt()));
+    if (c.closedAt() != null) {
+      text.append(", closed ").append(when(c.closedAt())).append(": ").append(c.outcome().word());
+    } else {
+      text.append(", open");
+    }
+    text.append(NL).append("  Symptom: ").append(indent(c.symptom())).append(NL);
+    if (!c.confirmedFaults().isEmpty()) {
+      text.append("  Found: ").append(String.join(", ", c.confirmedFaults())).append(NL);
+    }
+    if (!file.readings().isEmpty()) {
+      text.append("  Readings:").append(NL);
+      for (StoredReading r : file.readings()) {
+        text.append(String.format(Locale.ROOT, "    %s  %-8s %s %s V", when(r.takenAt()), r.at(), r.kind().word(), number(r.value())));
+        if (r.hz() != null) {
+          text.append(" at ").append(number(r.hz())).append(" Hz");
+        }
+        text.append(NL);
+      }
+    }
+    for (SuspectListRecord list : file.suspectLists()) {
+      text.append("  Suspects at ").append(when(list.computedAt())).append(" (Stagewise ").append(list.programVersion())
+          .append("): ").append(list.verdict()).append(NL);
+      for (StoredSuspect s : list.suspects()) {
+        text.append("  ").append(CaseReadings.suspectLine(s, Map.of())).append(NL);
+      }
+    }
+    for (RepairAction a : file.actions()) {
+      text.append("  ").append(when(a.at())).append("  ").append(a.kind().word());
+      if (!a.part().isEmpty()) {
+        text.append(' ').append(a.part());
+      }
+      if (!a.oldValue().isEmpty() || !a.newValue().isEmpty()) {
+        text.append(": ").append(a.oldValue()).append(" → ").append(a.newValue());
+      }
+      if (!a.text().isEmpty()) {
+        text.append(" — ").append(indent(a.text()));
+      }
+      text.append(NL);
+    }
+    for (CaseNote n : file.notes()) {
+      text.append("  ").append(when(n.at())).append("  note: ").append(indent(n.text())).append(NL);
+    }
+    return text.toString().stripTrailing();
+  }
+
+  static String hits(List<SearchHit> hits) {
+    if (hits.isEmpty()) {
+      return "No cases found." + NL;
+    }
+    StringBuilder text = new StringBuilder();
+    for (SearchHit hit : hits) {
+      text.append(HistoryCommand.shortId(hit.caseId())).append("  ").append(when(hit.openedAt())).append("  ")
+          .append(hit.serial()).append("  ").append(hit.boardModel()).append("  ").append(hit.status().word());
+      if (hit.outcome() != null) {
+        text.append(" (").append(hit.outcome().word()).append(')');
+      }
+      if (!hit.confirmedFaults().isEmpty()) {
+        text.append("  ").append(String.join(", ", hit.confirmedFaults()));
+      }
+      text.append(NL).append("    ").append(hit.snippet().replace('\n', ' ')).append(NL);
+    }
+    return text.toString();
+  }
+
+  static String importReport(ImportReport report) {
+    StringBuilder text = new StringBuilder();
+    text.append(String.format(Locale.ROOT, "Imported: %d added, %d updated, %d already here, %d conflicts.",
+        report.added(), report.updated(), report.unchanged(), report.conflicts().size())).append(NL);
+    for (String match : report.matched()) {
+      text.append("  matched: ").append(match).append(NL);
+    }
+    for (ImportReport.Conflict conflict : report.conflicts()) {
+      text.append("  conflict: ").append(conflict.kind()).append(' ').append(conflict.id()).append(": ")
+          .append(conflict.reason()).append(NL);
+    }
+    return text.toString();
+  }
+
+  /** Returns a number as typed, without trailing zeros or exponent, independent of the locale. */
+  static String number(double value) {
+    return java.math.BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
+  }
+
+  private static String indent(String text) {
+    return text.replace("\n", NL + "    ");
+  }
+}
