@@ -1,6 +1,7 @@
 package com.stagewise.diagnosis;
 
 import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.Connectivity;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
@@ -8,8 +9,6 @@ import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
 import com.stagewise.solver.Conditions;
 import com.stagewise.solver.SectionState;
-import com.stagewise.solver.SolveResult;
-import com.stagewise.solver.StageSolver;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -183,13 +182,13 @@ final class FaultModel {
    * ones drift to the first section's v- rail.
    */
   private static List<Scenario> tieFloating(Scenario scenario) {
-    SolveResult result = StageSolver.solve(scenario.stage(), scenario.conditions());
-    if (!(result instanceof SolveResult.Floating floating)) {
+    List<String> floatingNets = floatingNets(scenario);
+    if (floatingNets.isEmpty()) {
       return List.of(scenario);
     }
     List<Scenario> out = List.of(scenario);
     int split = 0;
-    for (String net : floating.nets()) {
+    for (String net : floatingNets) {
       Amplifier reader = inputReader(scenario.stage(), net);
       List<Scenario> next = new ArrayList<>();
       for (Scenario s : out) {
@@ -210,9 +209,10 @@ final class FaultModel {
     // A tie to a supply pin that itself floats (a lifted supply pin) is settled by a second pass.
     List<Scenario> settled = new ArrayList<>();
     for (Scenario s : out) {
-      if (StageSolver.solve(s.stage(), s.conditions()) instanceof SolveResult.Floating f) {
+      List<String> still = floatingNets(s);
+      if (!still.isEmpty()) {
         Scenario grounded = s;
-        for (String net : f.nets()) {
+        for (String net : still) {
           grounded = withTie(grounded, net, grounded.stage().ground(), METER_OHMS, grounded.weight(), grounded.label());
         }
         settled.add(grounded);
@@ -221,6 +221,20 @@ final class FaultModel {
       }
     }
     return settled;
+  }
+
+  /** The nets of a scenario with no DC path to a driven net; a dead output drives nothing. */
+  private static List<String> floatingNets(Scenario scenario) {
+    Stage check = scenario.stage();
+    for (Map.Entry<String, SectionState> e : scenario.conditions().forced().entrySet()) {
+      if (e.getValue() == SectionState.DEAD) {
+        String isolated = "\u0000dead-" + e.getKey();
+        check = check.withAmplifier(e.getKey(), a -> a.withNet(Terminal.OUT, isolated));
+      }
+    }
+    List<String> floating = new ArrayList<>(Connectivity.floatingNets(check));
+    floating.removeIf(net -> net.startsWith("\u0000"));
+    return floating;
   }
 
   private static Amplifier inputReader(Stage stage, String net) {

@@ -5,17 +5,14 @@ import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
-import com.stagewise.solver.AcSolution;
-import com.stagewise.solver.Conditions;
+import com.stagewise.solver.CompiledStage;
 import com.stagewise.solver.DeviceParams;
-import com.stagewise.solver.OperatingPoint;
-import com.stagewise.solver.Phasor;
 import com.stagewise.solver.SectionState;
-import com.stagewise.solver.SolveResult;
-import com.stagewise.solver.StageSolver;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.function.UnaryOperator;
+import java.util.Map;
 
 /**
  * Predicts what every test point reads under one scenario, with its spread.
@@ -27,7 +24,8 @@ import java.util.function.UnaryOperator;
  * tolerance, rails within tolerance, offset, bias current, headroom and gain within the class's
  * ranges) is moved by one standard deviation and the solve repeated; the changes add in quadrature.
  * A move that crosses a limit shows up as a large change, which widens the spread where a reading
- * sits near a saturation edge: the honest answer there.
+ * sits near a saturation edge: the honest answer there. The stage is compiled once per scenario and
+ * only numbers change between the solves.
  */
 final class Predictor {
   /** Standard deviation of a uniform distribution over ±1, in units of the half-width. */
@@ -35,6 +33,7 @@ final class Predictor {
 
   private final TestPoints points;
   private final double span;
+  private final Map<List<Amplifier>, Map<String, String>> pinCache = new java.util.IdentityHashMap<>();
 
   Predictor(TestPoints points, Stage base) {
     this.points = points;
@@ -53,161 +52,224 @@ final class Predictor {
    */
   List<Prediction> predict(Scenario scenario, boolean withSpread) {
     Stage stage = scenario.stage();
-    Conditions conditions = scenario.conditions();
-    SolveResult result = StageSolver.solve(stage, conditions);
-    if (!(result instanceof SolveResult.Solved solved)) {
+    CompiledStage cs = CompiledStage.of(stage, scenario.conditions());
+    int[] at = pointNets(stage, cs);
+    CompiledStage.Outcome outcome = cs.solve();
+    if (!(outcome instanceof CompiledStage.Settled settled)) {
       return List.of(unpredictable(scenario));
     }
     List<Outcome> outcomes = new ArrayList<>();
-    if (solved.points().size() > 1) {
-      for (OperatingPoint point : solved.points()) {
-        outcomes.add(new Outcome(point, conditions, scenario.weight() / solved.points().size(), "settles " + describe(point)));
+    if (settled.states().size() > 1) {
+      for (CompiledStage.State state : settled.states()) {
+        outcomes.add(new Outcome(state, -1, 0, scenario.weight() / settled.states().size(), "settles " + describe(stage, state)));
       }
+    } else if (withSpread || !scenario.onGrid()) {
+      outcomes.addAll(offsetCorners(stage, cs, settled.states().get(0), scenario.weight()));
     } else {
-      outcomes.addAll(offsetCorners(stage, conditions, solved.primary(), scenario.weight()));
+      outcomes.add(new Outcome(settled.states().get(0), -1, 0, scenario.weight(), ""));
     }
+    boolean ac = cs.acHz() > 0;
+    List<Perturbation> perturbations = withSpread ? perturbations(stage, cs) : List.of();
     List<Prediction> predictions = new ArrayList<>();
-    boolean ac = stage.inputs().stream().anyMatch(i -> i.hasAc());
-    for (Outcome outcome : outcomes) {
-      double[] dcMean = dcValues(outcome.point);
-      double[] acMean = ac ? acValues(stage, outcome.conditions, outcome.point) : null;
+    for (Outcome o : outcomes) {
+      DeviceParams saved = o.section >= 0 ? cs.device(o.section) : null;
+      if (o.section >= 0) {
+        cs.setDevice(o.section, saved.withOffset(o.offset));
+      }
+      double[] dcMean = pick(o.state.volts(), at);
+      double[] acMean = ac ? acValues(cs, o.state, at) : null;
       double[] dcVar = new double[points.size];
       double[] acVar = ac ? new double[points.size] : null;
-      if (withSpread) {
-        for (Perturbation p : perturbations(stage, outcome.conditions)) {
-          Stage s = p.stage.apply(stage);
-          Conditions c = p.conditions.apply(outcome.conditions);
-          SolveResult r = StageSolver.solve(s, c);
-          if (!(r instanceof SolveResult.Solved moved)) {
-            continue;
-          }
-          OperatingPoint near = matching(moved, outcome.point);
-          addSquares(dcVar, dcValues(near), dcMean);
-          if (ac) {
-            addSquares(acVar, acValues(s, c, near), acMean);
+      CompiledStage.Linearization linear = perturbations.isEmpty() ? null : cs.linearize(o.state);
+      for (Perturbation p : perturbations) {
+        p.apply(cs);
+        CompiledStage.State near = linear == null ? null : linear.step();
+        if (near == null) {
+          // A section changes state within one standard deviation: solve in full.
+          CompiledStage.Outcome moved = cs.solve();
+          near = moved instanceof CompiledStage.Settled m ? matching(m, o.state) : null;
+        }
+        if (near != null) {
+          addSquares(dcVar, pick(near.volts(), at), dcMean);
+          // Only part values and gain move the small-signal response of a settled state.
+          if (ac && p.movesAc) {
+            addSquares(acVar, acValues(cs, near, at), acMean);
           }
         }
+        p.undo(cs);
       }
-      String label = join(scenario.label(), outcome.label);
+      if (o.section >= 0) {
+        cs.setDevice(o.section, saved);
+      }
       predictions.add(
           new Prediction(
-              outcome.weight,
+              o.weight,
               dcMean,
               sqrt(dcVar),
               acMean,
               ac ? sqrt(acVar) : null,
               scenario.value(),
-              label,
-              outcome.point.states()));
+              join(scenario.label(), o.label),
+              states(stage, o.state)));
     }
     return predictions;
   }
 
-  private record Outcome(OperatingPoint point, Conditions conditions, double weight, String label) {}
+  /**
+   * One outcome of a scenario: a settled state, and the section whose offset was set to reach it
+   * (-1 when none).
+   */
+  private record Outcome(CompiledStage.State state, int section, double offset, double weight, String label) {}
 
-  private record Perturbation(UnaryOperator<Stage> stage, UnaryOperator<Conditions> conditions) {}
+  /** A change of one number of a compiled stage by one standard deviation, and its undoing. */
+  private static final class Perturbation {
+    private final java.util.function.Consumer<CompiledStage> apply;
+    private final java.util.function.Consumer<CompiledStage> undo;
+    private final boolean movesAc;
 
-  private List<Outcome> offsetCorners(Stage stage, Conditions conditions, OperatingPoint nominal, double weight) {
-    for (Amplifier amp : stage.amplifiers()) {
-      if (conditions.forcedState(amp.ref()).isPresent()) {
+    Perturbation(
+        java.util.function.Consumer<CompiledStage> apply,
+        java.util.function.Consumer<CompiledStage> undo,
+        boolean movesAc) {
+      this.apply = apply;
+      this.undo = undo;
+      this.movesAc = movesAc;
+    }
+
+    void apply(CompiledStage cs) {
+      apply.accept(cs);
+    }
+
+    void undo(CompiledStage cs) {
+      undo.accept(cs);
+    }
+  }
+
+  /** Maps each test point to the scenario's net index (a lifted pin reads its own net). */
+  private int[] pointNets(Stage stage, CompiledStage cs) {
+    // Scenarios of one fault share their sections (a drift grid changes only a value), so the pin
+    // map is kept per list of sections.
+    Map<String, String> pins = pinCache.computeIfAbsent(stage.amplifiers(), amps -> stage.pinNets());
+    int[] at = new int[points.size];
+    for (int i = 0; i < points.size; i++) {
+      String name = points.names.get(i);
+      String net = points.isPin(i) ? pins.getOrDefault(name, points.netOf.get(i)) : name;
+      at[i] = cs.net(net);
+    }
+    return at;
+  }
+
+  private List<Outcome> offsetCorners(Stage stage, CompiledStage cs, CompiledStage.State nominal, double weight) {
+    for (int k = 0; k < cs.sectionCount(); k++) {
+      if (cs.isForced(k)) {
         continue;
       }
-      DeviceParams params = conditions.device(amp);
-      double max = amp.deviceClass().offset().high();
-      Conditions plus = conditions.withDevice(amp.ref(), params.withOffset(params.offset() + max));
-      Conditions minus = conditions.withDevice(amp.ref(), params.withOffset(params.offset() - max));
-      OperatingPoint up = primary(StageSolver.solve(stage, plus));
-      OperatingPoint down = primary(StageSolver.solve(stage, minus));
+      DeviceParams params = cs.device(k);
+      double max = stage.amplifiers().get(k).deviceClass().offset().high();
+      cs.setDevice(k, params.withOffset(params.offset() + max));
+      CompiledStage.State up = first(cs.solve());
+      cs.setDevice(k, params.withOffset(params.offset() - max));
+      CompiledStage.State down = first(cs.solve());
+      cs.setDevice(k, params);
       if (up == null || down == null) {
         continue;
       }
-      SectionState now = nominal.states().get(amp.ref());
-      SectionState upState = up.states().get(amp.ref());
-      SectionState downState = down.states().get(amp.ref());
+      SectionState now = nominal.states()[k];
+      SectionState upState = up.states()[k];
+      SectionState downState = down.states()[k];
       if (upState != downState && (upState != now || downState != now)) {
+        String ref = stage.amplifiers().get(k).ref();
         return List.of(
-            new Outcome(up, plus, weight / 2, amp.ref() + " offset positive"),
-            new Outcome(down, minus, weight / 2, amp.ref() + " offset negative"));
+            new Outcome(up, k, params.offset() + max, weight / 2, ref + " offset positive"),
+            new Outcome(down, k, params.offset() - max, weight / 2, ref + " offset negative"));
       }
     }
-    return List.of(new Outcome(nominal, conditions, weight, ""));
+    return List.of(new Outcome(nominal, -1, 0, weight, ""));
   }
 
-  private static OperatingPoint primary(SolveResult result) {
-    return result instanceof SolveResult.Solved s ? s.primary() : null;
+  private static CompiledStage.State first(CompiledStage.Outcome outcome) {
+    return outcome instanceof CompiledStage.Settled s ? s.states().get(0) : null;
   }
 
-  private static OperatingPoint matching(SolveResult.Solved solved, OperatingPoint target) {
-    for (OperatingPoint point : solved.points()) {
-      if (point.states().equals(target.states())) {
-        return point;
+  private static CompiledStage.State matching(CompiledStage.Settled settled, CompiledStage.State target) {
+    for (CompiledStage.State state : settled.states()) {
+      if (Arrays.equals(state.states(), target.states())) {
+        return state;
       }
     }
-    return solved.primary();
+    return settled.states().get(0);
   }
 
-  private List<Perturbation> perturbations(Stage stage, Conditions conditions) {
+  private List<Perturbation> perturbations(Stage stage, CompiledStage cs) {
     List<Perturbation> list = new ArrayList<>();
-    for (Part part : stage.parts()) {
+    List<Part> parts = stage.parts();
+    for (int p = 0; p < parts.size(); p++) {
+      Part part = parts.get(p);
       if (part.tolerance() > 0 && !part.ref().startsWith("~")) {
-        double value = part.value() * (1 + part.tolerance() * UNIFORM_SD);
-        list.add(new Perturbation(s -> s.withPart(part.ref(), p -> p.withValue(value)), c -> c));
+        int index = p;
+        double nominal = cs.partValue(p);
+        double moved = nominal * (1 + part.tolerance() * UNIFORM_SD);
+        list.add(new Perturbation(c -> c.setPartValue(index, moved), c -> c.setPartValue(index, nominal), true));
       }
     }
     for (Rail rail : stage.rails()) {
-      double volts = conditions.driven().getOrDefault(rail.net(), rail.volts());
+      int net = cs.net(rail.net());
+      double volts = cs.drivenVolts(net);
       double moved = volts * (1 + rail.tolerance() * UNIFORM_SD);
-      list.add(new Perturbation(s -> s, c -> c.withDriven(rail.net(), moved)));
+      list.add(new Perturbation(c -> c.setDrivenVolts(net, moved), c -> c.setDrivenVolts(net, volts), false));
     }
-    boolean drifting = stage.parts().stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
-    for (Amplifier amp : stage.amplifiers()) {
-      DeviceParams p = conditions.device(amp);
+    boolean drifting = parts.stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
+    for (int k = 0; k < cs.sectionCount(); k++) {
+      Amplifier amp = stage.amplifiers().get(k);
       DeviceClass type = amp.deviceClass();
-      String ref = amp.ref();
-      double offset = p.offset() + type.offset().high() * UNIFORM_SD;
+      int section = k;
+      double offsetStep = type.offset().high() * UNIFORM_SD;
       double bias = type.biasCurrent().high() * UNIFORM_SD;
-      double low = p.headroomLow() + (type.headroomLow().high() - type.headroomLow().low()) / Math.sqrt(12);
-      double high = p.headroomHigh() + (type.headroomHigh().high() - type.headroomHigh().low()) / Math.sqrt(12);
-      list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withOffset(offset))));
+      double lowStep = (type.headroomLow().high() - type.headroomLow().low()) / Math.sqrt(12);
+      double highStep = (type.headroomHigh().high() - type.headroomHigh().low()) / Math.sqrt(12);
+      list.add(device(section, p -> p.withOffset(p.offset() + offsetStep), false));
       if (!drifting) {
         // Where a floating input is tied to a rail to stand for its drift, the bias current is
-        // already what put it there; moving it again through the tie would be counted twice.
-        list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withBias(bias, bias))));
+        // already what put it there; moving it again through the tie would count it twice.
+        list.add(device(section, p -> p.withBias(bias, bias), false));
       }
-      list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withHeadroom(low, p.headroomHigh()))));
-      list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withHeadroom(p.headroomLow(), high))));
+      list.add(device(section, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
+      list.add(device(section, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
       // Gain is spread over a decade or more; the low end of the class's range is the honest step.
-      list.add(new Perturbation(s -> s, c -> c.withDevice(ref, c.device(amp).withGain(type.openLoopGain().low()))));
+      double lowGain = type.openLoopGain().low();
+      list.add(device(section, p -> p.withGain(lowGain), true));
     }
     return list;
   }
 
-  private double[] dcValues(OperatingPoint point) {
+  private static Perturbation device(int k, java.util.function.UnaryOperator<DeviceParams> change, boolean movesAc) {
+    DeviceParams[] saved = new DeviceParams[1];
+    return new Perturbation(
+        c -> {
+          saved[0] = c.device(k);
+          c.setDevice(k, change.apply(saved[0]));
+        },
+        c -> c.setDevice(k, saved[0]),
+        movesAc);
+  }
+
+  private double[] pick(double[] volts, int[] at) {
     double[] values = new double[points.size];
     for (int i = 0; i < points.size; i++) {
-      String name = points.names.get(i);
-      Double v = points.isPin(i) ? point.pins().get(name) : point.nets().get(name);
-      if (v == null && points.isPin(i)) {
-        v = point.nets().get(points.netOf.get(i));
-      }
       // A net that the fault took every part away from reads like a bare pad: about 0 V.
-      values[i] = v == null ? 0 : v;
+      values[i] = at[i] < 0 ? 0 : volts[at[i]];
     }
     return values;
   }
 
-  private double[] acValues(Stage stage, Conditions conditions, OperatingPoint point) {
+  private double[] acValues(CompiledStage cs, CompiledStage.State state, int[] at) {
+    double[][] ac = cs.ac(state);
     double[] values = new double[points.size];
-    AcSolution ac = StageSolver.ac(stage, conditions, point).orElse(null);
     if (ac == null) {
       return values;
     }
-    java.util.Map<String, String> pinNets = stage.pinNets();
     for (int i = 0; i < points.size; i++) {
-      String name = points.names.get(i);
-      String net = points.isPin(i) ? pinNets.getOrDefault(name, points.netOf.get(i)) : name;
-      Phasor phasor = ac.nets().get(net);
-      values[i] = phasor == null ? 0 : phasor.amplitude();
+      values[i] = at[i] < 0 ? 0 : ac[0][at[i]];
     }
     return values;
   }
@@ -216,13 +278,21 @@ final class Predictor {
     // No consistent state (e.g. the fault makes the stage oscillate): any reading within the rails.
     double[] mean = new double[points.size];
     double[] sd = new double[points.size];
-    java.util.Arrays.fill(sd, span);
-    return new Prediction(scenario.weight(), mean, sd, mean.clone(), sd.clone(), scenario.value(), join(scenario.label(), "no steady state"), java.util.Map.of());
+    Arrays.fill(sd, span);
+    return new Prediction(scenario.weight(), mean, sd, mean.clone(), sd.clone(), scenario.value(), join(scenario.label(), "no steady state"), Map.of());
   }
 
-  private static String describe(OperatingPoint point) {
+  private static Map<String, SectionState> states(Stage stage, CompiledStage.State state) {
+    Map<String, SectionState> map = new LinkedHashMap<>();
+    for (int k = 0; k < state.states().length; k++) {
+      map.put(stage.amplifiers().get(k).ref(), state.states()[k]);
+    }
+    return map;
+  }
+
+  private static String describe(Stage stage, CompiledStage.State state) {
     List<String> parts = new ArrayList<>();
-    point.states().forEach((ref, state) -> parts.add(ref + " " + state.word()));
+    states(stage, state).forEach((ref, s) -> parts.add(ref + " " + s.word()));
     return String.join(", ", parts);
   }
 

@@ -125,7 +125,7 @@ final class DenseLu {
     for (int i = 0; i < n; i++) {
       double max = 0;
       for (int j = 0; j < n; j++) {
-        max = Math.max(max, Math.hypot(ar[i][j], ai[i][j]));
+        max = Math.max(max, Math.abs(ar[i][j]) + Math.abs(ai[i][j]));
       }
       if (max == 0) {
         return null;
@@ -134,9 +134,9 @@ final class DenseLu {
     }
     for (int col = 0; col < n; col++) {
       int pivot = col;
-      double best = Math.hypot(ar[col][col], ai[col][col]) * rowScale[col];
+      double best = (Math.abs(ar[col][col]) + Math.abs(ai[col][col])) * rowScale[col];
       for (int row = col + 1; row < n; row++) {
-        double size = Math.hypot(ar[row][col], ai[row][col]) * rowScale[row];
+        double size = (Math.abs(ar[row][col]) + Math.abs(ai[row][col])) * rowScale[row];
         if (size > best) {
           best = size;
           pivot = row;

@@ -4,14 +4,15 @@ import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.TestInput;
+import java.util.Arrays;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
 /**
- * A stage compiled for modified nodal analysis under given conditions.
+ * A stage compiled for modified nodal analysis: nets, parts and sections as index arrays, with the
+ * numbers (part values, driven voltages, device parameters) held apart so that they can be changed
+ * and the stage solved again without compiling it anew.
  *
  * <p>Unknowns are the voltages of the undriven nets, then one internal source node per section
  * that drives (not dead). Each section's internal node connects to its output net through the
@@ -26,63 +27,118 @@ final class Network {
   static final double MIN_OHMS = 1e-3;
 
   final Stage stage;
-  final Conditions conditions;
-  final List<String> nets;
-  final Map<String, Double> drivenVolts = new HashMap<>();
-  final Map<String, Integer> unknown = new HashMap<>();
+  final String[] nets;
+  final Map<String, Integer> netIndex = new HashMap<>();
+  /** Per net: its index among the unknowns, or -1 for a driven net. */
+  final int[] unknownOf;
+  /** Per net: the volts of a driven net, NaN for an undriven one. */
+  final double[] driven;
+
+  final String[] partRefs;
+  final int[] partA;
+  final int[] partB;
+  final boolean[] capacitor;
+  final double[] value;
+
   final Amplifier[] sections;
+  final int[] inPlus;
+  final int[] inMinus;
+  final int[] out;
+  final int[] vPlus;
+  final int[] vMinus;
   final DeviceParams[] params;
   final SectionState[] forced;
   /** Index of each section's internal node among the unknowns, or -1 for a dead section. */
   final int[] sourceNode;
   final int size;
 
+  /** Per net: the AC amplitude applied there (inputs at the analysis frequency), else 0. */
+  final double[] acSource;
+  /** The AC analysis frequency: the first input with an AC amplitude; 0 when none. */
+  final double acHz;
+
   Network(Stage stage, Conditions conditions) {
     this.stage = stage;
-    this.conditions = conditions;
-    this.nets = List.copyOf(stage.nets());
-    drivenVolts.putAll(stage.drivenVolts());
-    conditions.driven().forEach(
-        (net, volts) -> {
-          if (drivenVolts.containsKey(net)) {
-            drivenVolts.put(net, volts);
-          }
-        });
+    List<String> netList = List.copyOf(stage.nets());
+    nets = netList.toArray(new String[0]);
+    unknownOf = new int[nets.length];
+    driven = new double[nets.length];
+    Map<String, Double> drivenVolts = stage.drivenVolts();
     int next = 0;
-    for (String net : nets) {
-      if (!drivenVolts.containsKey(net)) {
-        unknown.put(net, next++);
+    for (int i = 0; i < nets.length; i++) {
+      netIndex.put(nets[i], i);
+      Double volts = drivenVolts.get(nets[i]);
+      if (volts == null) {
+        unknownOf[i] = next++;
+        driven[i] = Double.NaN;
+      } else {
+        unknownOf[i] = -1;
+        driven[i] = conditions.driven().getOrDefault(nets[i], volts);
       }
     }
-    List<Amplifier> amps = stage.amplifiers();
-    sections = amps.toArray(new Amplifier[0]);
-    params = new DeviceParams[sections.length];
-    forced = new SectionState[sections.length];
-    sourceNode = new int[sections.length];
-    for (int k = 0; k < sections.length; k++) {
-      params[k] = conditions.device(sections[k]);
-      forced[k] = conditions.forcedState(sections[k].ref()).orElse(null);
+    List<Part> parts = stage.parts();
+    partRefs = new String[parts.size()];
+    partA = new int[parts.size()];
+    partB = new int[parts.size()];
+    capacitor = new boolean[parts.size()];
+    value = new double[parts.size()];
+    for (int p = 0; p < parts.size(); p++) {
+      Part part = parts.get(p);
+      partRefs[p] = part.ref();
+      partA[p] = netIndex.get(part.netA());
+      partB[p] = netIndex.get(part.netB());
+      capacitor[p] = part.kind() == PartKind.CAPACITOR;
+      value[p] = part.value();
+    }
+    sections = stage.amplifiers().toArray(new Amplifier[0]);
+    int n = sections.length;
+    inPlus = new int[n];
+    inMinus = new int[n];
+    out = new int[n];
+    vPlus = new int[n];
+    vMinus = new int[n];
+    params = new DeviceParams[n];
+    forced = new SectionState[n];
+    sourceNode = new int[n];
+    for (int k = 0; k < n; k++) {
+      Amplifier amp = sections[k];
+      inPlus[k] = netIndex.get(amp.inPlus());
+      inMinus[k] = netIndex.get(amp.inMinus());
+      out[k] = netIndex.get(amp.out());
+      vPlus[k] = netIndex.get(amp.vPlus());
+      vMinus[k] = netIndex.get(amp.vMinus());
+      params[k] = conditions.device(amp);
+      forced[k] = conditions.forcedState(amp.ref()).orElse(null);
       sourceNode[k] = forced[k] == SectionState.DEAD ? -1 : next++;
     }
     size = next;
+    acSource = new double[nets.length];
+    double hz = 0;
+    for (var input : stage.inputs()) {
+      if (input.hasAc() && (hz == 0 || input.hz() == hz)) {
+        hz = input.hz();
+        acSource[netIndex.get(input.net())] = input.ac();
+      }
+    }
+    acHz = hz;
   }
 
-  /** Returns the voltage of a net in a solution vector. */
-  double volts(double[] x, String net) {
-    Integer index = unknown.get(net);
-    return index == null ? drivenVolts.get(net) : x[index];
+  /** Returns the voltage of net i in a solution vector. */
+  double volts(double[] x, int net) {
+    int u = unknownOf[net];
+    return u < 0 ? driven[net] : x[u];
   }
 
   /** The output limits of section k given the supply-pin voltages in x: {@code {low, high}}. */
   double[] limits(double[] x, int k) {
-    double vPlus = volts(x, sections[k].vPlus());
-    double vMinus = volts(x, sections[k].vMinus());
-    double high = vPlus - params[k].headroomHigh();
-    double low = vMinus + params[k].headroomLow();
+    double plus = volts(x, vPlus[k]);
+    double minus = volts(x, vMinus[k]);
+    double high = plus - params[k].headroomHigh();
+    double low = minus + params[k].headroomLow();
     if (high < low) {
       // Too little supply for any swing (a missing rail on a single-supply part): the output
       // sits between its supply pins. Common practice for an unpowered output, as a model.
-      double mid = (vPlus + vMinus) / 2;
+      double mid = (plus + minus) / 2;
       return new double[] {mid, mid};
     }
     return new double[] {low, high};
@@ -90,15 +146,12 @@ final class Network {
 
   /** Whether the limits of section k have collapsed to the mid-supply point at x. */
   boolean collapsed(double[] x, int k) {
-    double[] lim = limits(x, k);
-    return lim[0] == lim[1]
-        && volts(x, sections[k].vPlus()) - params[k].headroomHigh()
-            < volts(x, sections[k].vMinus()) + params[k].headroomLow();
+    return volts(x, vPlus[k]) - params[k].headroomHigh() < volts(x, vMinus[k]) + params[k].headroomLow();
   }
 
   /** The internal source's demanded value {@code A·(v+ − v− + offset)} of section k at x. */
   double drive(double[] x, int k) {
-    double vd = volts(x, sections[k].inPlus()) - volts(x, sections[k].inMinus());
+    double vd = volts(x, inPlus[k]) - volts(x, inMinus[k]);
     return params[k].gain() * (vd + params[k].offset());
   }
 
@@ -117,26 +170,69 @@ final class Network {
   DcSystem solveDc(SectionState[] states, boolean[] collapsedHint) {
     double[][] a = new double[size][size];
     double[] b = new double[size];
-    for (Part part : stage.parts()) {
-      if (part.kind() == PartKind.RESISTOR) {
-        stampConductance(a, b, part.netA(), part.netB(), 1 / Math.max(part.value(), MIN_OHMS));
+    for (int p = 0; p < value.length; p++) {
+      if (!capacitor[p]) {
+        stamp(a, b, partA[p], partB[p], 1 / Math.max(value[p], MIN_OHMS));
       }
     }
     for (int k = 0; k < sections.length; k++) {
       if (sourceNode[k] >= 0) {
-        stampConductanceToNode(a, b, sections[k].out(), sourceNode[k], 1 / params[k].outputResistance());
+        stampToSource(a, b, out[k], sourceNode[k], 1 / params[k].outputResistance());
       }
       // Bias currents leave each input's net into the section.
-      inject(b, sections[k].inPlus(), -params[k].biasPlus());
-      inject(b, sections[k].inMinus(), -params[k].biasMinus());
+      inject(b, inPlus[k], -params[k].biasPlus());
+      inject(b, inMinus[k], -params[k].biasMinus());
     }
     for (int k = 0; k < sections.length; k++) {
       if (sourceNode[k] >= 0) {
-        writeSectionRow(a, b, k, states[k], collapsedHint[k], true);
+        writeSectionRow(a, b, k, states[k], collapsedHint[k]);
       }
     }
     DenseLu.Factors factors = DenseLu.factor(a);
     return factors == null ? null : new DcSystem(factors.solve(b), factors);
+  }
+
+  /**
+   * Returns the residual {@code b − M·x} of the DC system for the given states at x, computed from
+   * the elements without building the matrix. Rows of section sources hold the residual of their
+   * state's equation.
+   */
+  double[] residual(SectionState[] states, boolean[] collapsed, double[] x) {
+    double[] r = new double[size];
+    for (int p = 0; p < value.length; p++) {
+      if (capacitor[p]) {
+        continue;
+      }
+      double current = (volts(x, partA[p]) - volts(x, partB[p])) / Math.max(value[p], MIN_OHMS);
+      int i = unknownOf[partA[p]];
+      int j = unknownOf[partB[p]];
+      if (i >= 0) {
+        r[i] -= current;
+      }
+      if (j >= 0) {
+        r[j] += current;
+      }
+    }
+    for (int k = 0; k < sections.length; k++) {
+      inject(r, inPlus[k], -params[k].biasPlus());
+      inject(r, inMinus[k], -params[k].biasMinus());
+      int s = sourceNode[k];
+      if (s < 0) {
+        continue;
+      }
+      int o = unknownOf[out[k]];
+      if (o >= 0) {
+        r[o] -= (x[o] - x[s]) / params[k].outputResistance();
+      }
+      double[] coefficients = new double[3];
+      int[] terms = sectionTerms(k, states[k], collapsed[k], coefficients);
+      double target = sectionConstant(k, states[k], collapsed[k]);
+      for (int t = 0; t < terms.length; t++) {
+        target += coefficients[t] * volts(x, terms[t]);
+      }
+      r[s] = target - x[s];
+    }
+    return r;
   }
 
   /**
@@ -157,44 +253,23 @@ final class Network {
   }
 
   /**
-   * Solves the small-signal AC system about a DC state at {@code hz}; returns {@code {re, im}} or
-   * null when singular. Inputs whose AC is at another frequency are taken as AC ground.
+   * Solves the small-signal AC system about a DC state at {@link #acHz}; returns {@code {re, im}}
+   * per unknown, or null when singular. Inputs whose AC is at another frequency are AC ground.
    */
-  double[][] solveAc(SectionState[] states, boolean[] collapsedHint, double hz) {
+  double[][] solveAc(SectionState[] states, boolean[] collapsedHint) {
     double[][] ar = new double[size][size];
     double[][] ai = new double[size][size];
     double[] br = new double[size];
     double[] bi = new double[size];
-    Map<String, Double> acSource = new HashMap<>();
-    for (TestInput input : stage.inputs()) {
-      if (input.hasAc() && input.hz() == hz) {
-        acSource.put(input.net(), input.ac());
-      }
-    }
-    double omega = 2 * Math.PI * hz;
-    for (Part part : stage.parts()) {
-      double g = 0;
-      double bSus = 0;
-      if (part.kind() == PartKind.RESISTOR) {
-        g = 1 / Math.max(part.value(), MIN_OHMS);
-      } else {
-        bSus = omega * part.value();
-      }
-      stampComplex(ar, ai, br, bi, acSource, part.netA(), part.netB(), g, bSus);
+    double omega = 2 * Math.PI * acHz;
+    for (int p = 0; p < value.length; p++) {
+      double g = capacitor[p] ? 0 : 1 / Math.max(value[p], MIN_OHMS);
+      double susceptance = capacitor[p] ? omega * value[p] : 0;
+      stampComplex(ar, ai, br, bi, partA[p], partB[p], g, susceptance);
     }
     for (int k = 0; k < sections.length; k++) {
       if (sourceNode[k] >= 0) {
-        double g = 1 / params[k].outputResistance();
-        Integer out = unknown.get(sections[k].out());
-        int s = sourceNode[k];
-        ar[s][s] += g;
-        if (out != null) {
-          ar[out][out] += g;
-          ar[out][s] -= g;
-          ar[s][out] -= g;
-        } else {
-          br[s] += g * acSource.getOrDefault(sections[k].out(), 0.0);
-        }
+        stampComplex(ar, ai, br, bi, out[k], -1 - sourceNode[k], 1 / params[k].outputResistance(), 0);
       }
     }
     for (int k = 0; k < sections.length; k++) {
@@ -202,43 +277,47 @@ final class Network {
         continue;
       }
       int row = sourceNode[k];
-      java.util.Arrays.fill(ar[row], 0);
-      java.util.Arrays.fill(ai[row], 0);
+      Arrays.fill(ar[row], 0);
+      Arrays.fill(ai[row], 0);
       br[row] = 0;
       bi[row] = 0;
       ar[row][row] = 1;
-      for (Map.Entry<String, Double> term : sectionTerms(k, states[k], collapsedHint[k]).entrySet()) {
-        Integer col = unknown.get(term.getKey());
-        if (col != null) {
-          ar[row][col] -= term.getValue();
+      double[] coefficients = new double[3];
+      int[] terms = sectionTerms(k, states[k], collapsedHint[k], coefficients);
+      for (int t = 0; t < terms.length; t++) {
+        int col = unknownOf[terms[t]];
+        if (col >= 0) {
+          ar[row][col] -= coefficients[t];
         } else {
-          br[row] += term.getValue() * acSource.getOrDefault(term.getKey(), 0.0);
+          br[row] += coefficients[t] * acSource[terms[t]];
         }
       }
     }
     return DenseLu.solveComplex(ar, ai, br, bi);
   }
 
-  /** Net coefficients c in {@code v_source = Σ c·v(net) + constant} for a state. */
-  private Map<String, Double> sectionTerms(int k, SectionState state, boolean collapsed) {
-    Map<String, Double> terms = new LinkedHashMap<>();
-    Amplifier amp = sections[k];
+  /**
+   * The nets and coefficients c in {@code v_source = Σ c·v(net) + constant} for a state; the
+   * coefficients are written into {@code coefficients}, the nets returned.
+   */
+  private int[] sectionTerms(int k, SectionState state, boolean collapsed, double[] coefficients) {
     switch (state) {
       case LINEAR -> {
-        terms.merge(amp.inPlus(), params[k].gain(), Double::sum);
-        terms.merge(amp.inMinus(), -params[k].gain(), Double::sum);
+        coefficients[0] = params[k].gain();
+        coefficients[1] = -params[k].gain();
+        return new int[] {inPlus[k], inMinus[k]};
       }
       case HIGH, LOW -> {
         if (collapsed) {
-          terms.merge(amp.vPlus(), 0.5, Double::sum);
-          terms.merge(amp.vMinus(), 0.5, Double::sum);
-        } else {
-          terms.merge(state == SectionState.HIGH ? amp.vPlus() : amp.vMinus(), 1.0, Double::sum);
+          coefficients[0] = 0.5;
+          coefficients[1] = 0.5;
+          return new int[] {vPlus[k], vMinus[k]};
         }
+        coefficients[0] = 1;
+        return new int[] {state == SectionState.HIGH ? vPlus[k] : vMinus[k]};
       }
-      case DEAD -> throw new IllegalStateException("a dead section has no source row");
+      default -> throw new IllegalStateException("a dead section has no source row");
     }
-    return terms;
   }
 
   private double sectionConstant(int k, SectionState state, boolean collapsed) {
@@ -250,96 +329,93 @@ final class Network {
     };
   }
 
-  private void writeSectionRow(
-      double[][] a, double[] b, int k, SectionState state, boolean collapsed, boolean dc) {
+  private void writeSectionRow(double[][] a, double[] b, int k, SectionState state, boolean collapsed) {
     int row = sourceNode[k];
-    java.util.Arrays.fill(a[row], 0);
+    Arrays.fill(a[row], 0);
     a[row][row] = 1;
-    b[row] = dc ? sectionConstant(k, state, collapsed) : 0;
-    for (Map.Entry<String, Double> term : sectionTerms(k, state, collapsed).entrySet()) {
-      Integer col = unknown.get(term.getKey());
-      if (col != null) {
-        a[row][col] -= term.getValue();
-      } else if (dc) {
-        b[row] += term.getValue() * drivenVolts.get(term.getKey());
+    b[row] = sectionConstant(k, state, collapsed);
+    double[] coefficients = new double[3];
+    int[] terms = sectionTerms(k, state, collapsed, coefficients);
+    for (int t = 0; t < terms.length; t++) {
+      int col = unknownOf[terms[t]];
+      if (col >= 0) {
+        a[row][col] -= coefficients[t];
+      } else {
+        b[row] += coefficients[t] * driven[terms[t]];
       }
     }
   }
 
-  private void stampConductance(double[][] a, double[] b, String netA, String netB, double g) {
-    Integer i = unknown.get(netA);
-    Integer j = unknown.get(netB);
-    if (i != null) {
+  private void stamp(double[][] a, double[] b, int netA, int netB, double g) {
+    int i = unknownOf[netA];
+    int j = unknownOf[netB];
+    if (i >= 0) {
       a[i][i] += g;
-      if (j != null) {
+      if (j >= 0) {
         a[i][j] -= g;
       } else {
-        b[i] += g * drivenVolts.get(netB);
+        b[i] += g * driven[netB];
       }
     }
-    if (j != null) {
+    if (j >= 0) {
       a[j][j] += g;
-      if (i != null) {
+      if (i >= 0) {
         a[j][i] -= g;
       } else {
-        b[j] += g * drivenVolts.get(netA);
+        b[j] += g * driven[netA];
       }
     }
   }
 
-  private void stampConductanceToNode(double[][] a, double[] b, String net, int node, double g) {
-    Integer i = unknown.get(net);
+  private void stampToSource(double[][] a, double[] b, int net, int node, double g) {
+    int i = unknownOf[net];
     a[node][node] += g;
-    if (i != null) {
+    if (i >= 0) {
       a[i][i] += g;
       a[i][node] -= g;
       a[node][i] -= g;
     } else {
-      b[node] += g * drivenVolts.get(net);
+      b[node] += g * driven[net];
     }
   }
 
-  private void inject(double[] b, String net, double amps) {
-    Integer i = unknown.get(net);
-    if (i != null) {
+  private void inject(double[] b, int net, double amps) {
+    int i = unknownOf[net];
+    if (i >= 0) {
       b[i] += amps;
     }
   }
 
+  /**
+   * Stamps an admittance g + j·susceptance between net A and B (a negative B of {@code -1 - u}
+   * names the unknown u directly: a section's internal node).
+   */
   private void stampComplex(
-      double[][] ar,
-      double[][] ai,
-      double[] br,
-      double[] bi,
-      Map<String, Double> acSource,
-      String netA,
-      String netB,
-      double g,
-      double bSus) {
-    Integer i = unknown.get(netA);
-    Integer j = unknown.get(netB);
-    if (i != null) {
+      double[][] ar, double[][] ai, double[] br, double[] bi, int netA, int netB, double g, double susceptance) {
+    int i = unknownOf[netA];
+    int j = netB < 0 ? -1 - netB : unknownOf[netB];
+    double sourceB = netB < 0 ? 0 : acSource[netB];
+    double sourceA = acSource[netA];
+    if (i >= 0) {
       ar[i][i] += g;
-      ai[i][i] += bSus;
-      if (j != null) {
+      ai[i][i] += susceptance;
+      if (j >= 0) {
         ar[i][j] -= g;
-        ai[i][j] -= bSus;
+        ai[i][j] -= susceptance;
       } else {
-        double v = acSource.getOrDefault(netB, 0.0);
-        br[i] += g * v;
-        bi[i] += bSus * v;
+        br[i] += g * sourceB;
+        bi[i] += susceptance * sourceB;
       }
     }
-    if (j != null) {
+    if (j >= 0) {
       ar[j][j] += g;
-      ai[j][j] += bSus;
-      if (i != null) {
+      ai[j][j] += susceptance;
+      if (i >= 0) {
         ar[j][i] -= g;
-        ai[j][i] -= bSus;
+        ai[j][i] -= susceptance;
       } else {
-        double v = acSource.getOrDefault(netA, 0.0);
-        br[j] += g * v;
-        bi[j] += bSus * v;
+        br[j] += g * sourceA;
+        bi[j] += susceptance * sourceA;
       }
     }
   }

@@ -1,17 +1,11 @@
 package com.stagewise.solver;
 
-import com.stagewise.circuit.Amplifier;
-import com.stagewise.circuit.Connectivity;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.TestInput;
 import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 
 /**
  * Says what every net and package pin of a stage should read: modified nodal analysis at DC with
@@ -22,17 +16,12 @@ import java.util.Set;
  * high or clamped low; the limits follow the actual voltages at the section's own supply pins, so a
  * missing rail needs no special case. A consistent state is one where every linear section's source
  * lies within its limits and every clamped section's demand lies beyond the limit it is clamped at.
+ * The search starts with every section linear and moves each inconsistent one towards the limit its
+ * demand points at; where strong positive feedback is present (or the search cycles) every
+ * combination of states is tried and the stable consistent ones are kept. See {@link CompiledStage}
+ * for the fast form used by the diagnosis.
  */
 public final class StageSolver {
-  /** Consistency slack in volts, far below any meter's resolution. */
-  private static final double SLACK = 1e-9;
-
-  /** Iterations of the active-set search before falling back to enumeration. */
-  private static final int MAX_ITERATIONS = 40;
-
-  /** Above this many free sections, enumeration of every state combination is refused. */
-  private static final int MAX_ENUMERATED_SECTIONS = 9;
-
   private StageSolver() {}
 
   /** Solves a stage with nominal parts and nominal device parameters. */
@@ -47,28 +36,19 @@ public final class StageSolver {
    *     consistent state; never NaN voltages
    */
   public static SolveResult solve(Stage stage, Conditions conditions) {
-    Network network = new Network(stage, conditions);
-    int n = network.sections.length;
-    SectionState[] start = new SectionState[n];
-    for (int k = 0; k < n; k++) {
-      start[k] = network.forced[k] != null ? network.forced[k] : SectionState.LINEAR;
+    CompiledStage compiled = CompiledStage.of(stage, conditions);
+    CompiledStage.Outcome outcome = compiled.solve();
+    if (outcome instanceof CompiledStage.Floats f) {
+      return new SolveResult.Floating(f.nets());
     }
-    Network.DcSystem first = solveConsistently(network, start);
-    if (first == null) {
-      List<String> floating = floatingNets(network);
-      if (!floating.isEmpty()) {
-        return new SolveResult.Floating(floating);
-      }
-      return enumerate(network, true);
+    if (outcome instanceof CompiledStage.Unsettled u) {
+      return new SolveResult.NoConsistentState(u.section(), u.reason());
     }
-    // Strong positive feedback shows as an unstable linear section at the all-linear start; such a
-    // stage may have several stable states, so every combination is tried.
-    if (!allLinearStable(network, start, first)) {
-      return enumerate(network, true);
+    List<OperatingPoint> points = new ArrayList<>();
+    for (CompiledStage.State state : ((CompiledStage.Settled) outcome).states()) {
+      points.add(pointOf(stage, compiled, state));
     }
-    Optional<OperatingPoint> found = activeSetSearch(network, start, first);
-    return found.<SolveResult>map(point -> new SolveResult.Solved(List.of(point)))
-        .orElseGet(() -> enumerate(network, true));
+    return new SolveResult.Solved(points);
   }
 
   /**
@@ -84,36 +64,29 @@ public final class StageSolver {
 
   /** As {@link #ac(Stage, OperatingPoint)}, under the given conditions. */
   public static Optional<AcSolution> ac(Stage stage, Conditions conditions, OperatingPoint point) {
-    Optional<TestInput> source = stage.inputs().stream().filter(TestInput::hasAc).findFirst();
-    if (source.isEmpty()) {
+    CompiledStage compiled = CompiledStage.of(stage, conditions);
+    if (compiled.acHz() == 0) {
       return Optional.empty();
     }
-    double hz = source.get().hz();
-    Network network = new Network(stage, conditions);
-    int n = network.sections.length;
-    SectionState[] states = new SectionState[n];
-    boolean[] collapsed = new boolean[n];
-    double[] x = vectorOf(network, point);
-    for (int k = 0; k < n; k++) {
-      states[k] = point.states().get(network.sections[k].ref());
-      collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(x, k);
+    List<String> nets = compiled.nets();
+    double[] volts = new double[nets.size()];
+    for (int i = 0; i < volts.length; i++) {
+      volts[i] = point.nets().get(nets.get(i));
     }
-    double[][] solution = network.solveAc(states, collapsed, hz);
-    if (solution == null) {
+    String[] refs = compiled.sectionRefs();
+    SectionState[] states = new SectionState[refs.length];
+    for (int k = 0; k < refs.length; k++) {
+      states[k] = point.states().get(refs[k]);
+    }
+    double[][] ac = compiled.ac(new CompiledStage.State(volts, states));
+    if (ac == null) {
       return Optional.empty();
     }
-    Map<String, Phasor> nets = new LinkedHashMap<>();
-    for (String net : network.nets) {
-      Integer index = network.unknown.get(net);
-      if (index != null) {
-        nets.put(net, Phasor.of(solution[0][index], solution[1][index]));
-      } else {
-        double amplitude =
-            stage.input(net).filter(i -> i.hasAc() && i.hz() == hz).map(TestInput::ac).orElse(0.0);
-        nets.put(net, new Phasor(amplitude, 0));
-      }
+    Map<String, Phasor> phasors = new LinkedHashMap<>();
+    for (int i = 0; i < volts.length; i++) {
+      phasors.put(nets.get(i), new Phasor(ac[0][i], ac[1][i]));
     }
-    return Optional.of(new AcSolution(hz, nets));
+    return Optional.of(new AcSolution(compiled.acHz(), phasors));
   }
 
   /**
@@ -121,235 +94,27 @@ public final class StageSolver {
    * no stability filter. Exposed for cross-checks of the search; slow for many sections.
    */
   public static List<OperatingPoint> enumerateConsistent(Stage stage, Conditions conditions) {
-    Network network = new Network(stage, conditions);
+    CompiledStage compiled = CompiledStage.of(stage, conditions);
     List<OperatingPoint> points = new ArrayList<>();
-    forEachCombination(
-        network,
-        states -> {
-          Network.DcSystem system = solveConsistently(network, states);
-          if (system != null && isConsistent(network, states, system.x())) {
-            points.add(pointOf(network, states, system.x()));
-          }
-        });
+    for (CompiledStage.State state : compiled.enumerateConsistent()) {
+      points.add(pointOf(stage, compiled, state));
+    }
     return points;
   }
 
-  private static List<String> floatingNets(Network network) {
-    Stage stage = network.stage;
-    // A dead output no longer ties its net to anything: model that for the connectivity check.
-    Stage check = stage;
-    for (int k = 0; k < network.sections.length; k++) {
-      if (network.sourceNode[k] < 0) {
-        Amplifier amp = network.sections[k];
-        String isolated = "\u0000dead-" + amp.ref();
-        check = check.withAmplifier(amp.ref(), a -> a.withNet(com.stagewise.circuit.Terminal.OUT, isolated));
-      }
-    }
-    List<String> floating = new ArrayList<>(Connectivity.floatingNets(check));
-    floating.removeIf(net -> net.startsWith("\u0000"));
-    return floating;
-  }
-
-  /**
-   * Starting from {@code start}, moves each section whose state is inconsistent to the state its
-   * demand points at, until nothing changes. Converges in a few steps for negative feedback; a
-   * repeated combination, or an end state with an unstable linear section, ends the search without
-   * a result.
-   */
-  private static Optional<OperatingPoint> activeSetSearch(
-      Network network, SectionState[] start, Network.DcSystem first) {
-    int n = network.sections.length;
-    SectionState[] states = start.clone();
-    Set<String> seen = new HashSet<>();
-    Network.DcSystem system = first;
-    for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-      if (!seen.add(Arrays.toString(states))) {
-        return Optional.empty();
-      }
-      if (system == null) {
-        system = solveConsistently(network, states);
-        if (system == null) {
-          return Optional.empty();
-        }
-      }
-      double[] x = system.x();
-      boolean changed = false;
-      for (int k = 0; k < n; k++) {
-        if (network.forced[k] != null) {
-          continue;
-        }
-        SectionState next = preferredState(network, x, k, states[k]);
-        if (next != states[k]) {
-          states[k] = next;
-          changed = true;
-        }
-      }
-      if (!changed) {
-        return allLinearStable(network, states, system)
-            ? Optional.of(pointOf(network, states, x))
-            : Optional.empty();
-      }
-      system = null;
-    }
-    return Optional.empty();
-  }
-
-  private static boolean allLinearStable(Network network, SectionState[] states, Network.DcSystem system) {
-    for (int k = 0; k < states.length; k++) {
-      if (network.forced[k] == null && states[k] == SectionState.LINEAR && !system.stable(network, k)) {
-        return false;
-      }
-    }
-    return true;
-  }
-
-  private static SectionState preferredState(Network network, double[] x, int k, SectionState now) {
-    double[] limits = network.limits(x, k);
-    double demand = network.drive(x, k);
-    if (now == SectionState.LINEAR) {
-      double source = network.source(x, k);
-      if (source > limits[1] + SLACK) {
-        return SectionState.HIGH;
-      }
-      if (source < limits[0] - SLACK) {
-        return SectionState.LOW;
-      }
-      return now;
-    }
-    if (now == SectionState.HIGH && demand < limits[1] - SLACK) {
-      return demand < limits[0] - SLACK ? SectionState.LOW : SectionState.LINEAR;
-    }
-    if (now == SectionState.LOW && demand > limits[0] + SLACK) {
-      return demand > limits[1] + SLACK ? SectionState.HIGH : SectionState.LINEAR;
-    }
-    return now;
-  }
-
-  private static boolean isConsistent(Network network, SectionState[] states, double[] x) {
-    for (int k = 0; k < network.sections.length; k++) {
-      if (network.forced[k] != null) {
-        continue;
-      }
-      double[] limits = network.limits(x, k);
-      double demand = network.drive(x, k);
-      double scale = SLACK * Math.max(1, Math.abs(limits[1]) + Math.abs(limits[0]));
-      boolean ok =
-          switch (states[k]) {
-            case LINEAR -> {
-              double source = network.source(x, k);
-              yield source >= limits[0] - scale && source <= limits[1] + scale;
-            }
-            case HIGH -> demand >= limits[1] - scale;
-            case LOW -> demand <= limits[0] + scale;
-            case DEAD -> false;
-          };
-      if (!ok) {
-        return false;
-      }
-    }
-    return true;
-  }
-
-  /**
-   * Solves with the given states; the choice between normal and mid-supply clamp rows is settled
-   * by re-solving if the supply pins' voltages change it.
-   */
-  private static Network.DcSystem solveConsistently(Network network, SectionState[] states) {
-    int n = network.sections.length;
-    boolean[] collapsed = new boolean[n];
-    double[] guess = new double[network.size];
-    for (int round = 0; round < 3; round++) {
-      for (int k = 0; k < n; k++) {
-        collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(guess, k);
-      }
-      Network.DcSystem system = network.solveDc(states, collapsed);
-      if (system == null) {
-        return null;
-      }
-      boolean same = true;
-      for (int k = 0; k < n; k++) {
-        if (network.sourceNode[k] >= 0 && network.collapsed(system.x(), k) != collapsed[k]) {
-          same = false;
-        }
-      }
-      if (same) {
-        return system;
-      }
-      guess = system.x();
-    }
-    return null;
-  }
-
-  private static SolveResult enumerate(Network network, boolean stableOnly) {
-    int free = 0;
-    for (SectionState forced : network.forced) {
-      free += forced == null ? 1 : 0;
-    }
-    if (free > MAX_ENUMERATED_SECTIONS) {
-      return new SolveResult.NoConsistentState(
-          "", "the saturation search did not settle and the stage has too many sections to try every state");
-    }
-    List<OperatingPoint> points = new ArrayList<>();
-    forEachCombination(
-        network,
-        states -> {
-          Network.DcSystem system = solveConsistently(network, states);
-          if (system == null || !isConsistent(network, states, system.x())) {
-            return;
-          }
-          if (stableOnly && !allLinearStable(network, states, system)) {
-            return;
-          }
-          points.add(pointOf(network, states, system.x()));
-        });
-    if (points.isEmpty()) {
-      String section = network.sections.length > 0 ? network.sections[0].ref() : "";
-      return new SolveResult.NoConsistentState(
-          section, "no combination of linear and clamped outputs satisfies every section");
-    }
-    return new SolveResult.Solved(points);
-  }
-
-  /** Calls {@code action} with every combination of states of the free sections (HIGH first). */
-  private static void forEachCombination(
-      Network network, java.util.function.Consumer<SectionState[]> action) {
-    int n = network.sections.length;
-    SectionState[] choices = {SectionState.HIGH, SectionState.LOW, SectionState.LINEAR};
-    int[] digit = new int[n];
-    while (true) {
-      SectionState[] states = new SectionState[n];
-      for (int k = 0; k < n; k++) {
-        states[k] = network.forced[k] != null ? network.forced[k] : choices[digit[k]];
-      }
-      action.accept(states);
-      int k = 0;
-      while (k < n && (network.forced[k] != null || ++digit[k] == choices.length)) {
-        digit[k] = 0;
-        k++;
-      }
-      if (k == n) {
-        return;
-      }
-    }
-  }
-
-  private static OperatingPoint pointOf(Network network, SectionState[] states, double[] x) {
+  private static OperatingPoint pointOf(Stage stage, CompiledStage compiled, CompiledStage.State state) {
     Map<String, Double> nets = new LinkedHashMap<>();
-    for (String net : network.nets) {
-      nets.put(net, network.volts(x, net));
+    List<String> names = compiled.nets();
+    for (int i = 0; i < names.size(); i++) {
+      nets.put(names.get(i), state.volts()[i]);
     }
     Map<String, Double> pins = new LinkedHashMap<>();
-    network.stage.pinNets().forEach((pin, net) -> pins.put(pin, nets.get(net)));
+    stage.pinNets().forEach((pin, net) -> pins.put(pin, nets.get(net)));
     Map<String, SectionState> sectionStates = new LinkedHashMap<>();
-    for (int k = 0; k < network.sections.length; k++) {
-      sectionStates.put(network.sections[k].ref(), states[k]);
+    String[] refs = compiled.sectionRefs();
+    for (int k = 0; k < refs.length; k++) {
+      sectionStates.put(refs[k], state.states()[k]);
     }
     return new OperatingPoint(nets, pins, sectionStates);
-  }
-
-  private static double[] vectorOf(Network network, OperatingPoint point) {
-    double[] x = new double[network.size];
-    network.unknown.forEach((net, index) -> x[index] = point.nets().get(net));
-    return x;
   }
 }
