@@ -1,12 +1,30 @@
 package com.stagewise.app;
 
+import com.stagewise.ui.Overlays;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+import java.util.Locale;
 import javafx.application.Application;
+import javafx.application.Platform;
+import javafx.geometry.Pos;
 import javafx.scene.Scene;
 import javafx.scene.control.Label;
+import javafx.scene.control.ProgressIndicator;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
 
-/** Starts the JavaFX desktop app (a placeholder window until the bench app lands). */
+/**
+ * Starts the bench app: shows a window at once, opens the history in the background (filling the
+ * demo data with {@code --demo}), then shows the unit screen.
+ *
+ * <p>With {@code -Dstagewise.timing=true} it prints one line when the first window is shown, with
+ * the milliseconds since the process started ({@code scripts/time-to-window.sh} reads it).
+ */
 public final class DesktopLauncher extends Application {
+  private BenchApp app;
+  private Workshop workshop;
 
   static void open(String[] args) {
     Application.launch(DesktopLauncher.class, args);
@@ -14,8 +32,76 @@ public final class DesktopLauncher extends Application {
 
   @Override
   public void start(Stage window) {
-    window.setTitle("Stagewise");
-    window.setScene(new Scene(new Label("Stagewise"), 640, 400));
+    AppOptions options = AppOptions.parse(getParameters().getRaw());
+    DataFolder folder = options.folder(System.getenv(), System.getProperty("user.home"));
+    window.setTitle("Stagewise — bench");
+    window.setMinWidth(1024);
+    window.setMinHeight(700);
+    Label opening = new Label("Opening the repair history …");
+    opening.setStyle("-fx-font-size: 22px;");
+    VBox splash = new VBox(18, new ProgressIndicator(), opening);
+    splash.setAlignment(Pos.CENTER);
+    window.setScene(new Scene(new StackPane(splash), BenchApp.WIDTH, BenchApp.HEIGHT));
+    window.setOnShown(e -> reportTiming());
     window.show();
+    Path stages = Path.of(System.getProperty("stagewise.stages", "data/stages"));
+    Thread opener =
+        new Thread(
+            () -> {
+              try {
+                Workshop opened = Workshop.open(folder, options.demo(), stages);
+                Platform.runLater(() -> showBench(window, opened));
+              } catch (RuntimeException e) {
+                Platform.runLater(() -> cannotOpen(window, folder, e));
+              }
+            },
+            "stagewise-open");
+    opener.setDaemon(true);
+    opener.start();
+  }
+
+  private void showBench(Stage window, Workshop opened) {
+    workshop = opened;
+    app = BenchApp.build(opened);
+    Overlays overlays = app.overlays();
+    Thread.setDefaultUncaughtExceptionHandler(
+        (thread, e) ->
+            overlays.show(
+                "Something went wrong inside Stagewise",
+                String.valueOf(e),
+                "Your readings so far are saved in the history. Go back to the Unit screen and resume the case."
+                    + " If it happens again, write down what you did and tell whoever looks after Stagewise."));
+    window.setScene(app.scene());
+    app.cautionOnFirstRun();
+  }
+
+  private static void cannotOpen(Stage window, DataFolder folder, RuntimeException e) {
+    Overlays overlays = new Overlays();
+    StackPane root = new StackPane(overlays.layer());
+    root.getStylesheets().add(Overlays.class.getResource("bench.css").toExternalForm());
+    window.setScene(new Scene(root, BenchApp.WIDTH, BenchApp.HEIGHT));
+    overlays.show(
+        "Could not open the repair history",
+        "The file " + folder.database() + " could not be opened: " + e.getMessage(),
+        "Check that the disk is not full and the folder can be written. To use another file, start with --db FILE."
+            + " Close this window and start Stagewise again.");
+  }
+
+  private static void reportTiming() {
+    if (Boolean.getBoolean("stagewise.timing")) {
+      Instant started = ProcessHandle.current().info().startInstant().orElse(Instant.now());
+      long millis = Duration.between(started, Instant.now()).toMillis();
+      System.out.println(String.format(Locale.ROOT, "stagewise: first window shown %d ms after start", millis));
+    }
+  }
+
+  @Override
+  public void stop() {
+    if (app != null) {
+      app.close();
+    }
+    if (workshop != null) {
+      workshop.close();
+    }
   }
 }

@@ -4,13 +4,16 @@ import com.stagewise.cli.StagewiseCommand;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 
-/** Starts the desktop app with no arguments (or {@code --demo}), else the command line. */
+/**
+ * Starts the desktop app when given no arguments or only its own ({@code --demo}, {@code --db
+ * FILE}), else the command line.
+ */
 public final class Main {
   private Main() {}
 
   /** The program's entry point. */
   public static void main(String[] args) {
-    if (args.length == 0 || (args.length == 1 && args[0].equals("--demo"))) {
+    if (AppOptions.isDesktop(args)) {
       DesktopLauncher.open(args);
       return;
     }

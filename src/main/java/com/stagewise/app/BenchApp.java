@@ -1,0 +1,78 @@
+package com.stagewise.app;
+
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.BenchWindow;
+import com.stagewise.ui.FxTasks;
+import com.stagewise.ui.Overlays;
+import com.stagewise.ui.SafetyCaution;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.start.StartView;
+import com.stagewise.ui.start.StartViewModel;
+import javafx.scene.Scene;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+
+/** Wires the bench app's screens to a workshop and puts them in a scene. */
+public final class BenchApp {
+  /** The smallest window the screens are laid out for. */
+  public static final double WIDTH = 1280;
+
+  /** The smallest window the screens are laid out for. */
+  public static final double HEIGHT = 800;
+
+  private final Workshop workshop;
+  private final Overlays overlays = new Overlays();
+  private final FxTasks tasks = new FxTasks();
+  private final Bench bench;
+  private final BenchWindow window;
+  private final Scene scene;
+
+  private BenchApp(Workshop workshop) {
+    this.workshop = workshop;
+    bench = new Bench(workshop.store(), tasks, overlays, overlays, workshop.boardFlags(), workshop.resume());
+    window = new BenchWindow(bench, overlays, tasks.pendingProperty(), tasks.currentProperty());
+    StartViewModel start = new StartViewModel(bench);
+    StartView startView = new StartView(start);
+    window.screen(Step.UNIT, startView::root);
+    scene = new Scene(window.root(), WIDTH, HEIGHT);
+    window.addShortcuts(scene);
+    scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN), () -> {
+      bench.go(Step.UNIT);
+      startView.focusSearch();
+    });
+    start.search();
+  }
+
+  /** Builds the app on an opened workshop. Call on the JavaFX thread. */
+  static BenchApp build(Workshop workshop) {
+    return new BenchApp(workshop);
+  }
+
+  /** Returns the scene with every screen. */
+  public Scene scene() {
+    return scene;
+  }
+
+  /** Returns the bench (for tests and the screenshot tool). */
+  public Bench bench() {
+    return bench;
+  }
+
+  /** Returns the overlay layer (caution and problems). */
+  public Overlays overlays() {
+    return overlays;
+  }
+
+  /** Shows the safety caution if it was never acknowledged on this machine. */
+  void cautionOnFirstRun() {
+    if (!workshop.settings().cautionAcknowledged()) {
+      overlays.show(SafetyCaution.Reason.FIRST_RUN, () -> workshop.settings().acknowledgeCaution());
+    }
+  }
+
+  /** Stops the background thread. */
+  void close() {
+    tasks.close();
+  }
+}

@@ -1,0 +1,50 @@
+package com.stagewise.app;
+
+import com.stagewise.circuit.Stage;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.interchange.StageSheet;
+import com.stagewise.ui.BoardFlags;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+
+/** Fills an empty history with the demo data: the demo stage library and the demo shop. */
+final class DemoSetup {
+  private DemoSetup() {}
+
+  /**
+   * Adds every stage sheet in {@code stages} to its board model's library (the model is made when
+   * new), then the demo units and cases.
+   */
+  static void fill(HistoryStore store, BoardFlags flags, Path stages) {
+    for (Path file : sheets(stages)) {
+      String json;
+      try {
+        json = Files.readString(file, StandardCharsets.UTF_8);
+      } catch (IOException e) {
+        throw new UncheckedIOException("could not read the demo stage sheet " + file, e);
+      }
+      Stage stage = StageSheet.read(json, file.toString());
+      String board = stage.board().isBlank() ? "Demo boards" : stage.board();
+      BoardModel model = store.boardModel(board, "");
+      store.addStageSheet(model.id(), stage.title(), json);
+    }
+  }
+
+  /** Returns the stage sheets of a folder, by file name; none when the folder is missing. */
+  static List<Path> sheets(Path stages) {
+    if (stages == null || !Files.isDirectory(stages)) {
+      return List.of();
+    }
+    try (Stream<Path> files = Files.list(stages)) {
+      return files.filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX)).sorted().toList();
+    } catch (IOException e) {
+      throw new UncheckedIOException("could not list the demo stage sheets in " + stages, e);
+    }
+  }
+}

@@ -1,0 +1,177 @@
+package com.stagewise.ui;
+
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.Stage;
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.Unit;
+import java.util.Objects;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.BooleanBinding;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+
+/**
+ * What the bench is working on right now: the unit, its open case, the stage, the readings taken
+ * and the latest diagnosis, and the screen shown. Every screen's view model shares one bench.
+ *
+ * <p>Plain Java with JavaFX properties (no nodes); it changes only on the screen's thread.
+ */
+public final class Bench {
+  private final HistoryStore store;
+  private final Tasks tasks;
+  private final Problems problems;
+  private final Caution caution;
+  private final BoardFlags boardFlags;
+  private final CaseResume resume;
+
+  private final ObjectProperty<Step> step = new SimpleObjectProperty<>(Step.UNIT);
+  private final ObjectProperty<Unit> unit = new SimpleObjectProperty<>();
+  private final ObjectProperty<BoardModel> boardModel = new SimpleObjectProperty<>();
+  private final BooleanProperty mainsPowered = new SimpleBooleanProperty();
+  private final ObjectProperty<RepairCase> openCase = new SimpleObjectProperty<>();
+  private final ObjectProperty<Stage> stage = new SimpleObjectProperty<>();
+  private final ObservableList<Reading> readings = FXCollections.observableArrayList();
+  private final ObjectProperty<Diagnosis> diagnosis = new SimpleObjectProperty<>();
+
+  /**
+   * Creates a bench.
+   *
+   * @param store the shop's history
+   * @param tasks runs slow work off the screen's thread
+   * @param problems shows problems to the technician
+   * @param caution shows the safety caution
+   * @param boardFlags which board models are mains-powered
+   * @param resume keeps where an open case was left
+   */
+  public Bench(
+      HistoryStore store,
+      Tasks tasks,
+      Problems problems,
+      Caution caution,
+      BoardFlags boardFlags,
+      CaseResume resume) {
+    this.store = Objects.requireNonNull(store, "store");
+    this.tasks = Objects.requireNonNull(tasks, "tasks");
+    this.problems = Objects.requireNonNull(problems, "problems");
+    this.caution = Objects.requireNonNull(caution, "caution");
+    this.boardFlags = Objects.requireNonNull(boardFlags, "boardFlags");
+    this.resume = Objects.requireNonNull(resume, "resume");
+  }
+
+  public HistoryStore store() {
+    return store;
+  }
+
+  public Tasks tasks() {
+    return tasks;
+  }
+
+  public Problems problems() {
+    return problems;
+  }
+
+  public Caution caution() {
+    return caution;
+  }
+
+  public BoardFlags boardFlags() {
+    return boardFlags;
+  }
+
+  public CaseResume resume() {
+    return resume;
+  }
+
+  public ObjectProperty<Step> stepProperty() {
+    return step;
+  }
+
+  public ObjectProperty<Unit> unitProperty() {
+    return unit;
+  }
+
+  public ObjectProperty<BoardModel> boardModelProperty() {
+    return boardModel;
+  }
+
+  public BooleanProperty mainsPoweredProperty() {
+    return mainsPowered;
+  }
+
+  public ObjectProperty<RepairCase> openCaseProperty() {
+    return openCase;
+  }
+
+  public ObjectProperty<Stage> stageProperty() {
+    return stage;
+  }
+
+  public ObservableList<Reading> readings() {
+    return readings;
+  }
+
+  public ObjectProperty<Diagnosis> diagnosisProperty() {
+    return diagnosis;
+  }
+
+  /** Returns true while a case is open on the bench. */
+  public BooleanBinding hasCase() {
+    return Bindings.isNotNull(openCase);
+  }
+
+  /** Returns true once a stage is chosen for the open case. */
+  public BooleanBinding hasStage() {
+    return Bindings.isNotNull(openCase).and(Bindings.isNotNull(stage));
+  }
+
+  /**
+   * Moves to a screen. A screen of a case is refused while no case is open (the step stays), and
+   * readings and suspects need a stage.
+   *
+   * @return whether the screen changed
+   */
+  public boolean go(Step target) {
+    if (target.needsCase() && openCase.get() == null) {
+      return false;
+    }
+    if ((target == Step.READINGS || target == Step.SUSPECTS) && stage.get() == null) {
+      return false;
+    }
+    step.set(target);
+    if (openCase.get() != null && target.needsCase()) {
+      resume.saveStep(openCase.get().id(), target);
+    }
+    return true;
+  }
+
+  /** Puts a unit and its board model on the bench, without a case. */
+  public void showUnit(Unit newUnit, BoardModel model) {
+    if (unit.get() == null || !unit.get().id().equals(newUnit.id())) {
+      clearCase();
+    }
+    unit.set(newUnit);
+    boardModel.set(model);
+    mainsPowered.set(boardFlags.isMainsPowered(model.id()));
+  }
+
+  /** Starts working on a case of the unit on the bench, with no stage and no readings yet. */
+  public void startCase(RepairCase repairCase) {
+    clearCase();
+    openCase.set(repairCase);
+  }
+
+  /** Clears the case, stage, readings and diagnosis from the bench (the unit stays). */
+  public void clearCase() {
+    openCase.set(null);
+    stage.set(null);
+    readings.clear();
+    diagnosis.set(null);
+  }
+}

@@ -1,0 +1,202 @@
+package com.stagewise.ui;
+
+import java.util.EnumMap;
+import java.util.Map;
+import java.util.function.Supplier;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Pane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+
+/**
+ * The window's content: the steps of a repair on top, the unit and case in a line below, the
+ * screen in the middle, a progress line at the bottom, and the overlays over all of it.
+ *
+ * <p>Shortcuts: Ctrl+1 … Ctrl+6 open the screens in order.
+ */
+public final class BenchWindow {
+  private final Bench bench;
+  private final StackPane root = new StackPane();
+  private final StackPane content = new StackPane();
+  private final Map<Step, Supplier<Node>> makers = new EnumMap<>(Step.class);
+  private final Map<Step, Node> screens = new EnumMap<>(Step.class);
+  private final Map<Step, ToggleButton> stepButtons = new EnumMap<>(Step.class);
+
+  /**
+   * Builds the window's content.
+   *
+   * @param bench what the bench works on
+   * @param overlays the caution and problem layer
+   * @param pending how many background tasks run (the progress line shows while above 0)
+   * @param working what the current background task does
+   */
+  public BenchWindow(
+      Bench bench,
+      Overlays overlays,
+      javafx.beans.value.ObservableIntegerValue pending,
+      javafx.beans.value.ObservableStringValue working) {
+    this.bench = bench;
+    BorderPane frame = new BorderPane();
+    frame.setTop(new VBox(topBar(), caseLine()));
+    frame.setCenter(content);
+    frame.setBottom(statusBar(pending, working));
+    root.getChildren().addAll(frame, overlays.layer());
+    root.getStylesheets().add(BenchWindow.class.getResource("bench.css").toExternalForm());
+    bench.stepProperty().addListener((o, was, now) -> show(now));
+  }
+
+  /** Registers the screen of a step; it is built the first time it is shown. */
+  public void screen(Step step, Supplier<Node> maker) {
+    makers.put(step, maker);
+    if (bench.stepProperty().get() == step) {
+      show(step);
+    }
+  }
+
+  /** Returns the root node for the scene. */
+  public Parent root() {
+    return root;
+  }
+
+  /** Adds the Ctrl+1 … Ctrl+6 shortcuts to the scene. */
+  public void addShortcuts(javafx.scene.Scene scene) {
+    KeyCode[] digits = {KeyCode.DIGIT1, KeyCode.DIGIT2, KeyCode.DIGIT3, KeyCode.DIGIT4, KeyCode.DIGIT5, KeyCode.DIGIT6};
+    for (Step step : Step.values()) {
+      scene
+          .getAccelerators()
+          .put(new KeyCodeCombination(digits[step.ordinal()], KeyCombination.SHORTCUT_DOWN), () -> bench.go(step));
+    }
+  }
+
+  private void show(Step step) {
+    Node screen = screens.get(step);
+    if (screen == null) {
+      Supplier<Node> maker = makers.get(step);
+      if (maker == null) {
+        return;
+      }
+      screen = maker.get();
+      screens.put(step, screen);
+    }
+    content.getChildren().setAll(screen);
+    ToggleButton button = stepButtons.get(step);
+    if (button != null) {
+      button.setSelected(true);
+    }
+  }
+
+  private HBox topBar() {
+    HBox bar = new HBox();
+    bar.getStyleClass().add("top-bar");
+    bar.setAlignment(Pos.CENTER_LEFT);
+    Label name = new Label("Stagewise");
+    name.getStyleClass().add("app-name");
+    bar.getChildren().add(name);
+    ToggleGroup group = new ToggleGroup();
+    for (Step step : Step.values()) {
+      ToggleButton button = new ToggleButton((step.ordinal() + 1) + "  " + step.title());
+      button.setId("step-" + step.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+      button.setToggleGroup(group);
+      button.setSelected(bench.stepProperty().get() == step);
+      button.setOnAction(
+          e -> {
+            if (!bench.go(step)) {
+              bench
+                  .problems()
+                  .show(
+                      step.title() + " needs an open case",
+                      step == Step.READINGS || step == Step.SUSPECTS
+                          ? "There is no case with a chosen stage on the bench."
+                          : "There is no open case on the bench.",
+                      step == Step.READINGS || step == Step.SUSPECTS
+                          ? "Open or resume a case on the Unit screen, then choose its stage."
+                          : "Open or resume a case on the Unit screen.");
+            }
+            button.setSelected(bench.stepProperty().get() == step);
+            stepButtons.get(bench.stepProperty().get()).setSelected(true);
+          });
+      if (step.needsCase()) {
+        button.disableProperty().bind(bench.hasCase().not());
+      }
+      if (step == Step.READINGS || step == Step.SUSPECTS) {
+        button.disableProperty().unbind();
+        button.disableProperty().bind(bench.hasStage().not());
+      }
+      stepButtons.put(step, button);
+      bar.getChildren().add(button);
+    }
+    return bar;
+  }
+
+  private HBox caseLine() {
+    HBox line = new HBox(18);
+    line.getStyleClass().add("case-line");
+    line.setAlignment(Pos.CENTER_LEFT);
+    Label what = new Label();
+    what.setId("case-line");
+    what.textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () -> {
+                  if (bench.unitProperty().get() == null) {
+                    return bench.stepProperty().get().purpose() + ".";
+                  }
+                  String text =
+                      "Unit " + bench.unitProperty().get().serial() + " (" + bench.boardModelProperty().get().name() + ")";
+                  if (bench.openCaseProperty().get() != null) {
+                    text += "   ·   Case: " + bench.openCaseProperty().get().symptom();
+                  }
+                  if (bench.stageProperty().get() != null && bench.openCaseProperty().get() != null) {
+                    text += "   ·   Stage: " + bench.stageProperty().get().title();
+                  }
+                  return text;
+                },
+                bench.unitProperty(),
+                bench.openCaseProperty(),
+                bench.stageProperty(),
+                bench.stepProperty()));
+    Label mains = new Label("Mains-powered unit: lethal voltages");
+    mains.getStyleClass().add("mains");
+    mains.visibleProperty().bind(bench.mainsPoweredProperty().and(bench.unitProperty().isNotNull()));
+    mains.managedProperty().bind(mains.visibleProperty());
+    Region spring = new Region();
+    HBox.setHgrow(spring, Priority.ALWAYS);
+    line.getChildren().addAll(what, spring, mains);
+    return line;
+  }
+
+  private HBox statusBar(
+      javafx.beans.value.ObservableIntegerValue pending, javafx.beans.value.ObservableStringValue working) {
+    HBox bar = new HBox();
+    bar.getStyleClass().add("status-bar");
+    bar.setAlignment(Pos.CENTER_LEFT);
+    ProgressBar progress = new ProgressBar(ProgressBar.INDETERMINATE_PROGRESS);
+    progress.setPrefWidth(160);
+    Label text = new Label();
+    text.setId("working");
+    var busy = Bindings.createBooleanBinding(() -> pending.get() > 0, pending);
+    progress.visibleProperty().bind(busy);
+    text.textProperty()
+        .bind(Bindings.createStringBinding(() -> pending.get() > 0 ? working.get() + " …" : "Ready.", pending, working));
+    Pane spring = new Pane();
+    HBox.setHgrow(spring, Priority.ALWAYS);
+    Label keys = new Label("Keys: Ctrl+1 … Ctrl+6 switch screens, Enter confirms");
+    keys.getStyleClass().add("hint");
+    bar.getChildren().addAll(progress, text, spring, keys);
+    return bar;
+  }
+}

@@ -1,0 +1,24 @@
+package com.stagewise.ui;
+
+/**
+ * Tells the technician about a problem in plain words: what happened and what to do about it.
+ *
+ * <p>The app shows a dialog; tests collect the messages.
+ */
+public interface Problems {
+
+  /**
+   * Shows a problem.
+   *
+   * @param title a few words, e.g. "Could not save the case"
+   * @param what what happened, in a technician's words
+   * @param todo what to do now
+   */
+  void show(String title, String what, String todo);
+
+  /** Shows a failed piece of work with the exception's message as "what happened". */
+  default void failed(String title, Exception e, String todo) {
+    String message = e.getMessage() == null || e.getMessage().isBlank() ? e.toString() : e.getMessage();
+    show(title, message, todo);
+  }
+}

@@ -1,0 +1,124 @@
+package com.stagewise.ui;
+
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.TextField;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.VBox;
+
+/** The value pad's view: a display that also takes typing, and large keys. */
+public final class ValuePad extends VBox {
+  private final ValuePadModel model;
+  private final TextField display = new TextField();
+  private final GridPane keys = new GridPane();
+  private final Button enter;
+
+  /**
+   * Creates the pad.
+   *
+   * @param model the pad's model
+   * @param idPrefix prefix of the node ids (tests and shortcuts find keys by id)
+   * @param enterLabel the label of the enter key, e.g. "Add reading"
+   * @param onEnter what the enter key does
+   */
+  public ValuePad(ValuePadModel model, String idPrefix, String enterLabel, Runnable onEnter) {
+    this.model = model;
+    setSpacing(8);
+    display.getStyleClass().add("value-display");
+    display.setId(idPrefix + "-display");
+    display.textProperty().bindBidirectional(model.textProperty());
+    display.setOnAction(e -> onEnter.run());
+    display.setPrefColumnCount(9);
+    Label reading = new Label();
+    reading.textProperty().bind(model.readingProperty());
+    reading.getStyleClass().add("value-message");
+    Label problem = new Label();
+    problem.textProperty().bind(model.problemProperty());
+    problem.getStyleClass().addAll("value-message", "bad");
+    problem.setWrapText(true);
+    Label hint = new Label();
+    hint.textProperty().bind(model.hintProperty());
+    hint.getStyleClass().add("hint");
+    hint.setWrapText(true);
+    keys.setHgap(6);
+    keys.setVgap(6);
+    keys.setId(idPrefix + "-keys");
+    enter = new Button(enterLabel);
+    enter.setId(idPrefix + "-enter");
+    enter.getStyleClass().add("primary");
+    enter.setMaxWidth(Double.MAX_VALUE);
+    enter.setOnAction(e -> onEnter.run());
+    enter.disableProperty().bind(model.valueProperty().isNull());
+    layoutKeys(idPrefix);
+    model.quantityProperty().addListener((o, a, b) -> layoutKeys(idPrefix));
+    getChildren().addAll(display, new HBox(12, reading, problem), hint, keys, enter);
+  }
+
+  /** Returns the display field (to focus it). */
+  public TextField display() {
+    return display;
+  }
+
+  private void layoutKeys(String idPrefix) {
+    keys.getChildren().clear();
+    String[][] digits = {{"7", "8", "9"}, {"4", "5", "6"}, {"1", "2", "3"}, {".", "0", null}};
+    for (int row = 0; row < digits.length; row++) {
+      for (int col = 0; col < 3; col++) {
+        String key = digits[row][col];
+        if (key == null) {
+          key = model.quantityProperty().get() == ValuePadModel.Quantity.VOLTS ? ValuePadModel.SIGN : null;
+        }
+        if (key != null) {
+          keys.add(key(idPrefix, key, key), col, row);
+        }
+      }
+    }
+    int col = 3;
+    int row = 0;
+    for (String prefix : model.quantityProperty().get().prefixKeys()) {
+      keys.add(key(idPrefix, prefix, prefixLabel(prefix)), col, row++);
+    }
+    keys.add(key(idPrefix, ValuePadModel.BACK, ValuePadModel.BACK), 4, 0);
+    Button clear = key(idPrefix, ValuePadModel.CLEAR, ValuePadModel.CLEAR);
+    keys.add(clear, 4, 1);
+  }
+
+  private static String prefixLabel(String prefix) {
+    return switch (prefix) {
+      case "R" -> "R (Ω)";
+      case "k" -> "k (kilo)";
+      case "M" -> "M (mega)";
+      case "p" -> "p (pico)";
+      case "n" -> "n (nano)";
+      case "u" -> "µ (micro)";
+      case "m" -> "m (milli)";
+      default -> prefix;
+    };
+  }
+
+  private Button key(String idPrefix, String key, String label) {
+    Button button = new Button(label);
+    button.getStyleClass().add("key");
+    if (label.length() > 2) {
+      button.getStyleClass().add("wide");
+    }
+    button.setFocusTraversable(false);
+    button.setId(idPrefix + "-key-" + keyId(key));
+    button.setOnAction(e -> model.press(key));
+    return button;
+  }
+
+  /** Returns the id suffix of a key: the key itself, or a word for symbols. */
+  public static String keyId(String key) {
+    return switch (key) {
+      case "." -> "point";
+      case ValuePadModel.BACK -> "back";
+      case ValuePadModel.CLEAR -> "clear";
+      case ValuePadModel.SIGN -> "sign";
+      case "M" -> "mega";
+      case "m" -> "milli";
+      default -> key;
+    };
+  }
+}

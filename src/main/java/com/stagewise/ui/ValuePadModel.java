@@ -1,0 +1,191 @@
+package com.stagewise.ui;
+
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.value.ESeries;
+import com.stagewise.circuit.value.SiValue;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+
+/**
+ * The on-screen value pad: digits, a decimal point, SI prefixes and the RKM code ({@code 4k7}),
+ * with the value read back as it is typed and, for parts, the nearest preferred value.
+ */
+public final class ValuePadModel {
+  /** Key that deletes the last character. */
+  public static final String BACK = "⌫";
+
+  /** Key that clears the entry. */
+  public static final String CLEAR = "Clear";
+
+  /** Key that changes the sign (volts only). */
+  public static final String SIGN = "±";
+
+  /** What the pad is for: it sets the unit, the prefixes offered and the hint. */
+  public enum Quantity {
+    OHMS("Ω", "R"),
+    FARADS("F", ""),
+    VOLTS("V", "");
+
+    private final String unit;
+    private final String rkmLetter;
+
+    Quantity(String unit, String rkmLetter) {
+      this.unit = unit;
+      this.rkmLetter = rkmLetter;
+    }
+
+    /** Returns the unit symbol. */
+    public String unit() {
+      return unit;
+    }
+
+    /** Returns the prefix keys for this quantity, smallest first. */
+    public java.util.List<String> prefixKeys() {
+      return switch (this) {
+        case OHMS -> java.util.List.of("R", "k", "M");
+        case FARADS -> java.util.List.of("p", "n", "u");
+        case VOLTS -> java.util.List.of("u", "m");
+      };
+    }
+
+    String rkmLetter() {
+      return rkmLetter;
+    }
+  }
+
+  private final StringProperty text = new SimpleStringProperty("");
+  private final ObjectProperty<Quantity> quantity = new SimpleObjectProperty<>(Quantity.VOLTS);
+  private final ReadOnlyObjectWrapper<Double> value = new ReadOnlyObjectWrapper<>();
+  private final ReadOnlyStringWrapper reading = new ReadOnlyStringWrapper("");
+  private final ReadOnlyStringWrapper hint = new ReadOnlyStringWrapper("");
+  private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
+
+  /** Creates an empty pad for volts. */
+  public ValuePadModel() {
+    text.addListener((obs, old, now) -> update());
+    quantity.addListener((obs, old, now) -> update());
+  }
+
+  /** Creates an empty pad for a quantity. */
+  public ValuePadModel(Quantity quantity) {
+    this();
+    this.quantity.set(quantity);
+  }
+
+  public StringProperty textProperty() {
+    return text;
+  }
+
+  public ObjectProperty<Quantity> quantityProperty() {
+    return quantity;
+  }
+
+  /** Returns the value typed, in SI units, or null while the entry is empty or not a value. */
+  public ReadOnlyObjectProperty<Double> valueProperty() {
+    return value.getReadOnlyProperty();
+  }
+
+  /** Returns the value read back with its unit, e.g. "= 4.7 kΩ" (empty when not a value). */
+  public ReadOnlyStringProperty readingProperty() {
+    return reading.getReadOnlyProperty();
+  }
+
+  /** Returns the nearest preferred value for a part, e.g. "Nearest E24 value: 4.7 kΩ". */
+  public ReadOnlyStringProperty hintProperty() {
+    return hint.getReadOnlyProperty();
+  }
+
+  /** Returns why the entry is not a value yet (empty when it is, or when nothing is typed). */
+  public ReadOnlyStringProperty problemProperty() {
+    return problem.getReadOnlyProperty();
+  }
+
+  /** Returns whether the entry is a value. */
+  public boolean hasValue() {
+    return value.get() != null;
+  }
+
+  /** Applies one key of the pad: a digit, ".", a prefix letter, {@link #BACK}, {@link #CLEAR}, {@link #SIGN}. */
+  public void press(String key) {
+    String now = text.get() == null ? "" : text.get();
+    switch (key) {
+      case BACK -> text.set(now.isEmpty() ? "" : now.substring(0, now.length() - 1));
+      case CLEAR -> text.set("");
+      case SIGN -> text.set(now.startsWith("-") ? now.substring(1) : "-" + now);
+      default -> text.set(now + key);
+    }
+  }
+
+  /** Sets the entry to a value (e.g. from the colour-code decoder). */
+  public void setValue(double si) {
+    text.set(quantity.get() == Quantity.OHMS ? SiValue.rkm(si) : plain(SiValue.format(si, "")));
+  }
+
+  private static String plain(String formatted) {
+    return formatted.replace(" ", "").replace("µ", "u");
+  }
+
+  private void update() {
+    String now = text.get() == null ? "" : text.get().strip();
+    if (now.isEmpty()) {
+      value.set(null);
+      reading.set("");
+      hint.set("");
+      problem.set("");
+      return;
+    }
+    double parsed;
+    try {
+      parsed = SiValue.parse(now);
+    } catch (InvalidInputException e) {
+      value.set(null);
+      reading.set("");
+      hint.set("");
+      problem.set("Not a value yet. Examples: " + examples());
+      return;
+    }
+    Quantity q = quantity.get();
+    if (q != Quantity.VOLTS && parsed < 0) {
+      value.set(null);
+      reading.set("");
+      hint.set("");
+      problem.set("A part value cannot be negative.");
+      return;
+    }
+    value.set(parsed);
+    problem.set("");
+    reading.set("= " + SiValue.format(parsed, q.unit()));
+    hint.set(preferredHint(q, parsed));
+  }
+
+  private String examples() {
+    return switch (quantity.get()) {
+      case OHMS -> "4k7, 470R, 10k, 1M5";
+      case FARADS -> "100n, 2u2, 47p";
+      case VOLTS -> "14.96, -0.62, 350m";
+    };
+  }
+
+  /** Returns the nearest E24 (resistors) or E12 (capacitors) value when the value is not one. */
+  static String preferredHint(Quantity q, double parsed) {
+    if (q == Quantity.VOLTS || parsed <= 0) {
+      return "";
+    }
+    ESeries series = q == Quantity.OHMS ? ESeries.E24 : ESeries.E12;
+    if (series.isPreferred(parsed)) {
+      return "A preferred " + series.name() + " value.";
+    }
+    double nearest = series.nearest(parsed);
+    String text = "Nearest " + series.name() + " value: " + SiValue.format(nearest, q.unit());
+    if (q == Quantity.OHMS) {
+      text += " (E96: " + SiValue.format(ESeries.E96.nearest(parsed), q.unit()) + ")";
+    }
+    return text;
+  }
+}

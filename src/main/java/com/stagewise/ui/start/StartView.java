@@ -1,0 +1,233 @@
+package com.stagewise.ui.start;
+
+import com.stagewise.ui.Keypad;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TextField;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+
+/** The unit screen: the serial search with its keypad, the unit's history and the case buttons. */
+public final class StartView {
+  private final StartViewModel model;
+  private final HBox root = new HBox(16);
+  private final TextField serialField = new TextField();
+
+  /** Builds the screen bound to its model. */
+  public StartView(StartViewModel model) {
+    this.model = model;
+    root.getStyleClass().add("screen");
+    root.setId("screen-unit");
+    VBox left = findPanel();
+    StackPane right = new StackPane();
+    VBox glance = glancePanel();
+    VBox add = addPanel();
+    add.setVisible(false);
+    right.getChildren().addAll(glance, add);
+    Button addButton = new Button("Add a new unit…");
+    addButton.setId("add-unit-show");
+    addButton.setOnAction(
+        e -> {
+          add.setVisible(true);
+          glance.setVisible(false);
+          model.loadBoardModels();
+        });
+    Button back = (Button) add.lookup("#add-unit-cancel");
+    back.setOnAction(e -> { add.setVisible(false); glance.setVisible(true); });
+    Button save = (Button) add.lookup("#add-unit-save");
+    save.setOnAction(
+        e -> {
+          model.addUnit();
+          add.setVisible(false);
+          glance.setVisible(true);
+        });
+    left.getChildren().add(addButton);
+    HBox.setHgrow(right, Priority.ALWAYS);
+    left.setPrefWidth(640);
+    left.setMinWidth(600);
+    root.getChildren().addAll(left, right);
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return root;
+  }
+
+  /** Puts the caret in the serial field (Ctrl+F). */
+  public void focusSearch() {
+    serialField.requestFocus();
+  }
+
+  private VBox findPanel() {
+    VBox box = new VBox(10);
+    box.getStyleClass().add("panel");
+    Label title = new Label("Find the unit by its serial number");
+    title.getStyleClass().add("section-title");
+    serialField.setId("serial");
+    serialField.getStyleClass().add("big-field");
+    serialField.setPromptText("Serial, e.g. AM-2041");
+    serialField.textProperty().bindBidirectional(model.serialProperty());
+    serialField.setOnAction(e -> model.search());
+    HBox.setHgrow(serialField, Priority.ALWAYS);
+    Button search = new Button("Search");
+    search.setId("serial-search");
+    search.getStyleClass().add("primary");
+    search.setMinHeight(60);
+    search.setOnAction(e -> model.search());
+    Keypad keypad = new Keypad(model.serialProperty(), "serial");
+    keypad.follow(serialField);
+    ListView<StartViewModel.UnitRow> list = new ListView<>(model.matches());
+    list.setId("unit-matches");
+    list.setPrefHeight(170);
+    list.setCellFactory(
+        v -> new ListCell<>() {
+          @Override
+          protected void updateItem(StartViewModel.UnitRow row, boolean empty) {
+            super.updateItem(row, empty);
+            setText(empty || row == null ? null : row.line());
+          }
+        });
+    list.getSelectionModel()
+        .selectedItemProperty()
+        .addListener((o, was, row) -> {
+          if (row != null) {
+            model.select(row);
+          }
+        });
+    Label note = new Label();
+    note.setId("unit-matches-note");
+    note.getStyleClass().add("hint");
+    note.textProperty().bind(model.matchesNoteProperty());
+    box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, list, note);
+    return box;
+  }
+
+  private VBox glancePanel() {
+    VBox box = new VBox(10);
+    box.getStyleClass().add("panel");
+    Label title = new Label();
+    title.setId("unit-title");
+    title.getStyleClass().add("section-title");
+    title.setWrapText(true);
+    title.textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    model.selectedProperty().get() == null
+                        ? "No unit chosen yet"
+                        : "Unit " + model.selectedProperty().get().unit().serial() + " — "
+                            + model.selectedProperty().get().boardModel().name(),
+                model.selectedProperty()));
+    Label owner = new Label();
+    owner.getStyleClass().add("hint");
+    owner.textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () -> {
+                  var unit = model.selectedProperty().get();
+                  if (unit == null) {
+                    return "Search for a serial on the left, or add a new unit.";
+                  }
+                  String who = unit.unit().owner().isEmpty() ? "" : "Owner: " + unit.unit().owner() + ".  ";
+                  int cases = unit.cases().size();
+                  return who + (cases == 0 ? "No earlier cases." : cases == 1 ? "1 case so far." : cases + " cases so far.");
+                },
+                model.selectedProperty()));
+    ListView<StartViewModel.CaseLine> cases = new ListView<>(model.glance());
+    cases.setId("unit-cases");
+    VBox.setVgrow(cases, Priority.ALWAYS);
+    cases.setCellFactory(
+        v -> new ListCell<>() {
+          @Override
+          protected void updateItem(StartViewModel.CaseLine line, boolean empty) {
+            super.updateItem(line, empty);
+            if (empty || line == null) {
+              setText(null);
+              return;
+            }
+            StringBuilder text = new StringBuilder(line.opened() + "   " + line.symptom());
+            text.append("\n").append(line.open() ? "Still open" : "Outcome: " + line.outcome());
+            if (!line.faults().isEmpty()) {
+              text.append("   Found: ").append(line.faults());
+            }
+            if (!line.replaced().isEmpty()) {
+              text.append("\nDone: ").append(line.replaced());
+            }
+            setText(text.toString());
+            setWrapText(true);
+          }
+        });
+    Button resume = new Button("Resume this open case");
+    resume.setId("resume-case");
+    resume.disableProperty()
+        .bind(
+            Bindings.createBooleanBinding(
+                () -> {
+                  var line = cases.getSelectionModel().getSelectedItem();
+                  return line == null || !line.open();
+                },
+                cases.getSelectionModel().selectedItemProperty()));
+    resume.setOnAction(e -> model.resumeCase(cases.getSelectionModel().getSelectedItem().caseId()));
+    Label symptomTitle = new Label("Open a new case: what is wrong, as reported?");
+    symptomTitle.getStyleClass().add("section-title");
+    TextField symptom = new TextField();
+    symptom.setId("symptom");
+    symptom.setPromptText("e.g. no sound from the left channel");
+    symptom.textProperty().bindBidirectional(model.symptomProperty());
+    symptom.setOnAction(e -> model.openCase());
+    HBox.setHgrow(symptom, Priority.ALWAYS);
+    Button open = new Button("Open case");
+    open.setId("open-case");
+    open.getStyleClass().add("primary");
+    open.disableProperty().bind(model.selectedProperty().isNull());
+    open.setOnAction(e -> model.openCase());
+    symptom.disableProperty().bind(model.selectedProperty().isNull());
+    HBox openRow = new HBox(8, symptom, open);
+    openRow.setAlignment(Pos.CENTER_LEFT);
+    box.getChildren().addAll(title, owner, cases, resume, symptomTitle, openRow);
+    return box;
+  }
+
+  private VBox addPanel() {
+    VBox box = new VBox(10);
+    box.getStyleClass().add("panel");
+    Label title = new Label("Add a new unit");
+    title.getStyleClass().add("section-title");
+    TextField serial = new TextField();
+    serial.setId("new-serial");
+    serial.setPromptText("Serial as written on the unit");
+    serial.textProperty().bindBidirectional(model.newSerialProperty());
+    ComboBox<String> boardModel = new ComboBox<>(model.boardModelNames());
+    boardModel.setId("new-board-model");
+    boardModel.setEditable(true);
+    boardModel.setPromptText("Board model (choose or type a new one)");
+    boardModel.setMaxWidth(Double.MAX_VALUE);
+    boardModel.valueProperty().bindBidirectional(model.newBoardModelProperty());
+    TextField owner = new TextField();
+    owner.setId("new-owner");
+    owner.setPromptText("Owner or job reference (may be left empty)");
+    owner.textProperty().bindBidirectional(model.newOwnerProperty());
+    CheckBox mains = new CheckBox("Units of this board model are mains-powered");
+    mains.setId("new-mains");
+    mains.selectedProperty().bindBidirectional(model.newMainsProperty());
+    Button save = new Button("Add unit");
+    save.setId("add-unit-save");
+    save.getStyleClass().add("primary");
+    Button cancel = new Button("Back");
+    cancel.setId("add-unit-cancel");
+    Label help = new Label("The keypad on the left types into the serial and owner fields too.");
+    help.getStyleClass().add("hint");
+    help.setWrapText(true);
+    box.getChildren().addAll(title, serial, boardModel, owner, mains, new HBox(8, save, cancel), help);
+    return box;
+  }
+}

@@ -1,0 +1,376 @@
+package com.stagewise.ui.start;
+
+import com.stagewise.history.CaseFile;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.UnitHistory;
+import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.CaseStatus;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.Unit;
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.CaseResume;
+import com.stagewise.ui.SafetyCaution;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.Words;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+
+/**
+ * The unit screen: find a unit by its serial (or add one), see its history at a glance, and open a
+ * case with the reported symptom or resume an open one.
+ */
+public final class StartViewModel {
+  /** The most units listed for one search. */
+  static final int MAX_MATCHES = 30;
+
+  private final Bench bench;
+  private final StringProperty serial = new SimpleStringProperty("");
+  private final ObservableList<UnitRow> matches = FXCollections.observableArrayList();
+  private final StringProperty matchesNote = new SimpleStringProperty("");
+  private final ObjectProperty<UnitHistory> selected = new SimpleObjectProperty<>();
+  private final ObservableList<CaseLine> glance = FXCollections.observableArrayList();
+  private final StringProperty symptom = new SimpleStringProperty("");
+  private final ObservableList<String> boardModelNames = FXCollections.observableArrayList();
+  private final StringProperty newSerial = new SimpleStringProperty("");
+  private final StringProperty newBoardModel = new SimpleStringProperty("");
+  private final StringProperty newOwner = new SimpleStringProperty("");
+  private final BooleanProperty newMains = new SimpleBooleanProperty(false);
+
+  /** Creates the unit screen's model on a bench. */
+  public StartViewModel(Bench bench) {
+    this.bench = bench;
+  }
+
+  /**
+   * A unit found by a search.
+   *
+   * @param unit the unit
+   * @param boardModel its board model's name
+   * @param openCases how many of its cases are open
+   */
+  public record UnitRow(Unit unit, String boardModel, int openCases) {
+    /** Returns the row as one line of text. */
+    public String line() {
+      return unit.serial() + "  —  " + boardModel + (openCases > 0 ? "  (case open)" : "");
+    }
+  }
+
+  /**
+   * One earlier case of the selected unit, for the glance.
+   *
+   * @param caseId the case's id
+   * @param opened when it was opened, as a date
+   * @param symptom the reported symptom
+   * @param outcome "open", or how it ended
+   * @param faults the faults found, comma-separated (may be empty)
+   * @param replaced the parts replaced with their new values, comma-separated (may be empty)
+   * @param open whether the case is still open
+   */
+  public record CaseLine(
+      String caseId, String opened, String symptom, String outcome, String faults, String replaced, boolean open) {}
+
+  public StringProperty serialProperty() {
+    return serial;
+  }
+
+  public ObservableList<UnitRow> matches() {
+    return matches;
+  }
+
+  public StringProperty matchesNoteProperty() {
+    return matchesNote;
+  }
+
+  public ObjectProperty<UnitHistory> selectedProperty() {
+    return selected;
+  }
+
+  public ObservableList<CaseLine> glance() {
+    return glance;
+  }
+
+  public StringProperty symptomProperty() {
+    return symptom;
+  }
+
+  public ObservableList<String> boardModelNames() {
+    return boardModelNames;
+  }
+
+  public StringProperty newSerialProperty() {
+    return newSerial;
+  }
+
+  public StringProperty newBoardModelProperty() {
+    return newBoardModel;
+  }
+
+  public StringProperty newOwnerProperty() {
+    return newOwner;
+  }
+
+  public BooleanProperty newMainsProperty() {
+    return newMains;
+  }
+
+  /** Loads the board model names for the "add a unit" form. */
+  public void loadBoardModels() {
+    bench
+        .tasks()
+        .run(
+            "Reading the board models",
+            () -> bench.store().boardModels().stream().map(BoardModel::name).toList(),
+            boardModelNames::setAll,
+            e -> bench.problems().failed("Could not read the board models", e, Words.CHECK_DATABASE));
+  }
+
+  /**
+   * Lists the units whose serial contains what is typed (letter case, blanks and dashes ignored);
+   * an empty search lists the units with open cases first, then the rest.
+   */
+  public void search() {
+    String wanted = normal(serial.get());
+    bench
+        .tasks()
+        .run(
+            "Looking for the unit",
+            () -> findUnits(bench.store(), wanted),
+            rows -> {
+              matches.setAll(rows.size() > MAX_MATCHES ? rows.subList(0, MAX_MATCHES) : rows);
+              if (rows.isEmpty()) {
+                matchesNote.set(
+                    wanted.isEmpty()
+                        ? "No units yet. Add the first one below."
+                        : "No unit has a serial like \"" + serial.get().strip() + "\". Check it, or add the unit.");
+              } else if (rows.size() > MAX_MATCHES) {
+                matchesNote.set(
+                    rows.size() + " units match; the first " + MAX_MATCHES + " are shown. Type more of the serial.");
+              } else {
+                matchesNote.set(rows.size() == 1 ? "1 unit found." : rows.size() + " units found.");
+              }
+              if (rows.size() == 1) {
+                select(rows.get(0));
+              }
+            },
+            e -> bench.problems().failed("Could not search the units", e, Words.CHECK_DATABASE));
+  }
+
+  private static List<UnitRow> findUnits(HistoryStore store, String wanted) {
+    Map<String, String> modelNames = new HashMap<>();
+    for (BoardModel model : store.boardModels()) {
+      modelNames.put(model.id(), model.name());
+    }
+    List<UnitRow> rows = new ArrayList<>();
+    for (Unit unit : store.units(null)) {
+      if (wanted.isEmpty() || normal(unit.serial()).contains(wanted)) {
+        int open = 0;
+        for (var hit :
+            store.search(
+                com.stagewise.history.SearchQuery.all()
+                    .withSerial(unit.serial())
+                    .withStatus(CaseStatus.OPEN))) {
+          if (hit.unitId().equals(unit.id())) {
+            open++;
+          }
+        }
+        rows.add(new UnitRow(unit, modelNames.getOrDefault(unit.boardModelId(), "?"), open));
+      }
+    }
+    // Exact serials first, then units with a case open, then by serial.
+    rows.sort(
+        (a, b) -> {
+          boolean exactA = normal(a.unit().serial()).equals(wanted);
+          boolean exactB = normal(b.unit().serial()).equals(wanted);
+          if (exactA != exactB) {
+            return exactA ? -1 : 1;
+          }
+          if ((a.openCases() > 0) != (b.openCases() > 0)) {
+            return a.openCases() > 0 ? -1 : 1;
+          }
+          return a.unit().serial().compareToIgnoreCase(b.unit().serial());
+        });
+    return rows;
+  }
+
+  static String normal(String text) {
+    return text == null ? "" : text.toUpperCase(Locale.ROOT).replaceAll("[\\s\\-_/]", "");
+  }
+
+  /** Shows one unit's history at a glance and puts it on the bench. */
+  public void select(UnitRow row) {
+    bench
+        .tasks()
+        .run(
+            "Reading the unit's history",
+            () -> bench.store().unitHistory(row.unit().id()).orElseThrow(),
+            history -> {
+              selected.set(history);
+              glance.setAll(glanceOf(history));
+              bench.showUnit(history.unit(), history.boardModel());
+            },
+            e -> bench.problems().failed("Could not read the unit's history", e, Words.CHECK_DATABASE));
+  }
+
+  static List<CaseLine> glanceOf(UnitHistory history) {
+    List<CaseLine> lines = new ArrayList<>();
+    for (CaseFile file : history.cases()) {
+      RepairCase rc = file.repairCase();
+      List<String> replaced = new ArrayList<>();
+      for (RepairAction action : file.actions()) {
+        if (action.kind() == ActionKind.PART_REPLACED) {
+          replaced.add(action.part() + (action.newValue().isEmpty() ? "" : " → " + action.newValue()));
+        } else if (action.kind() == ActionKind.REFLOW) {
+          replaced.add("reflow" + (action.part().isEmpty() ? "" : " " + action.part()));
+        }
+      }
+      boolean open = rc.status() == CaseStatus.OPEN;
+      lines.add(
+          new CaseLine(
+              rc.id(),
+              Words.date(rc.openedAt()),
+              rc.symptom(),
+              open ? "open" : Words.outcome(rc.outcome()),
+              String.join(", ", rc.confirmedFaults()),
+              String.join(", ", replaced),
+              open));
+    }
+    // Newest first, as a technician reads a history.
+    java.util.Collections.reverse(lines);
+    return lines;
+  }
+
+  /**
+   * Adds a unit (and its board model if new) and selects it.
+   *
+   * <p>The serial and the board model are needed; a problem says so when they are missing.
+   */
+  public void addUnit() {
+    String serialText = newSerial.get() == null ? "" : newSerial.get().strip();
+    String modelText = newBoardModel.get() == null ? "" : newBoardModel.get().strip();
+    if (serialText.isEmpty() || modelText.isEmpty()) {
+      bench
+          .problems()
+          .show(
+              "The unit needs a serial and a board model",
+              "A unit is known by its serial number and the board model it is built to.",
+              "Type the serial as written on the unit, and choose or type the board model.");
+      return;
+    }
+    String owner = newOwner.get() == null ? "" : newOwner.get().strip();
+    boolean mains = newMains.get();
+    bench
+        .tasks()
+        .run(
+            "Adding the unit",
+            () -> {
+              BoardModel model = bench.store().boardModel(modelText, "");
+              if (mains) {
+                bench.boardFlags().setMainsPowered(model.id(), true);
+              }
+              Unit unit = bench.store().addUnit(serialText, model.id(), owner);
+              return new UnitRow(unit, model.name(), 0);
+            },
+            row -> {
+              newSerial.set("");
+              newOwner.set("");
+              newMains.set(false);
+              serial.set(row.unit().serial());
+              matches.setAll(List.of(row));
+              matchesNote.set("Unit added.");
+              select(row);
+              loadBoardModels();
+            },
+            e -> bench.problems().failed("Could not add the unit", e, "Check the serial and the board model, then try again."));
+  }
+
+  /** Opens a case for the selected unit with the typed symptom and moves on to the stage. */
+  public void openCase() {
+    UnitHistory history = selected.get();
+    if (history == null) {
+      bench.problems().show("Choose a unit first", "No unit is chosen.", "Find the unit by its serial, or add it.");
+      return;
+    }
+    String text = symptom.get() == null ? "" : symptom.get().strip();
+    if (text.isEmpty()) {
+      bench
+          .problems()
+          .show(
+              "Say what is wrong",
+              "A case starts with the symptom as the owner reported it.",
+              "Type the symptom, e.g. \"no sound from left channel\".");
+      return;
+    }
+    bench
+        .tasks()
+        .run(
+            "Opening the case",
+            () -> bench.store().openCase(history.unit().id(), text),
+            opened -> {
+              symptom.set("");
+              bench.showUnit(history.unit(), history.boardModel());
+              bench.startCase(opened);
+              afterCaution(() -> bench.go(Step.STAGE));
+            },
+            e -> bench.problems().failed("Could not open the case", e, Words.CHECK_DATABASE));
+  }
+
+  /** Resumes an open case of the selected unit where it was left. */
+  public void resumeCase(String caseId) {
+    UnitHistory history = selected.get();
+    if (history == null) {
+      return;
+    }
+    Optional<CaseFile> file = history.cases().stream().filter(c -> c.repairCase().id().equals(caseId)).findFirst();
+    if (file.isEmpty() || file.get().repairCase().status() != CaseStatus.OPEN) {
+      bench.problems().show("This case is closed", "Only an open case can be resumed.", "Open a new case for the unit.");
+      return;
+    }
+    CaseResume resume = bench.resume();
+    bench
+        .tasks()
+        .run(
+            "Resuming the case",
+            () -> resume.load(caseId),
+            saved -> {
+              bench.showUnit(history.unit(), history.boardModel());
+              bench.startCase(file.get().repairCase());
+              Step step = Step.STAGE;
+              if (saved.isPresent() && saved.get().stage().isPresent()) {
+                bench.stageProperty().set(saved.get().stage().get());
+                for (var stored : file.get().readings()) {
+                  bench.readings().add(Words.reading(stored));
+                }
+                step = saved.get().step();
+              }
+              Step target = step;
+              afterCaution(() -> {
+                if (!bench.go(target)) {
+                  bench.go(Step.STAGE);
+                }
+              });
+            },
+            e -> bench.problems().failed("Could not resume the case", e, Words.CHECK_DATABASE));
+  }
+
+  private void afterCaution(Runnable then) {
+    if (bench.mainsPoweredProperty().get()) {
+      bench.caution().show(SafetyCaution.Reason.MAINS, then);
+    } else {
+      then.run();
+    }
+  }
+}
