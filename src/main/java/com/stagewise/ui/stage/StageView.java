@@ -1,0 +1,269 @@
+package com.stagewise.ui.stage;
+
+import com.stagewise.ui.ExpectedVolts;
+import com.stagewise.ui.ValuePad;
+import com.stagewise.ui.Words;
+import java.util.Map;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+
+/** The stage screen: library, expected voltages, parts, and the value pad with the decoders. */
+public final class StageView {
+  private final StageViewModel model;
+  private final HBox root = new HBox(12);
+  private final VBox expectedBox = new VBox(4);
+
+  /** Builds the screen bound to its model. */
+  public StageView(StageViewModel model) {
+    this.model = model;
+    root.getStyleClass().add("screen");
+    root.setId("screen-stage");
+    VBox library = libraryPanel();
+    library.setPrefWidth(290);
+    library.setMinWidth(260);
+    VBox middle = middlePanel();
+    HBox.setHgrow(middle, Priority.ALWAYS);
+    VBox editor = editorPanel();
+    editor.setPrefWidth(380);
+    editor.setMinWidth(360);
+    root.getChildren().addAll(library, middle, editor);
+    model.expectedProperty().addListener((o, was, now) -> showExpected(now));
+    root.sceneProperty().addListener((o, was, now) -> {
+      if (now != null) {
+        model.loadLibrary();
+      }
+    });
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return root;
+  }
+
+  /** Reloads the library (when the screen is shown again for another unit). */
+  public void refresh() {
+    model.loadLibrary();
+  }
+
+  private VBox libraryPanel() {
+    VBox box = new VBox(10);
+    box.getStyleClass().add("panel");
+    Label title = new Label("Stages of this board");
+    title.getStyleClass().add("section-title");
+    ListView<StageViewModel.LibraryEntry> list = new ListView<>(model.library());
+    list.setId("stage-library");
+    VBox.setVgrow(list, Priority.ALWAYS);
+    list.setCellFactory(v -> new ListCell<>() {
+      @Override
+      protected void updateItem(StageViewModel.LibraryEntry entry, boolean empty) {
+        super.updateItem(entry, empty);
+        setText(empty || entry == null ? null : entry.title());
+        setWrapText(true);
+      }
+    });
+    list.getSelectionModel().selectedItemProperty().addListener((o, was, entry) -> {
+      if (entry != null) {
+        model.choose(entry.stage());
+      }
+    });
+    Label note = new Label();
+    note.getStyleClass().add("hint");
+    note.setWrapText(true);
+    note.textProperty().bind(model.libraryNoteProperty());
+    box.getChildren().addAll(title, list, note);
+    return box;
+  }
+
+  private VBox middlePanel() {
+    VBox box = new VBox(10);
+    Label title = new Label();
+    title.setId("stage-title");
+    title.getStyleClass().add("screen-title");
+    title.setWrapText(true);
+    title.textProperty().bind(Bindings.createStringBinding(
+        () -> model.stageProperty().get() == null ? "Choose the stage you are working on" : model.stageProperty().get().title(),
+        model.stageProperty()));
+    VBox drawing = new VBox(6);
+    drawing.getStyleClass().addAll("panel", "placeholder");
+    drawing.setId("stage-drawing");
+    Label drawingTitle = new Label("What a healthy stage reads (nominal, and the range the tolerances allow)");
+    drawingTitle.getStyleClass().add("section-title");
+    drawingTitle.setWrapText(true);
+    drawing.getChildren().addAll(drawingTitle, expectedBox);
+    VBox.setVgrow(drawing, Priority.ALWAYS);
+    Label partsTitle = new Label("Parts — tap one to check or change its value");
+    partsTitle.getStyleClass().add("section-title");
+    ListView<StageViewModel.PartRow> parts = new ListView<>(model.parts());
+    parts.setId("stage-parts");
+    parts.setPrefHeight(200);
+    parts.setCellFactory(v -> new ListCell<>() {
+      @Override
+      protected void updateItem(StageViewModel.PartRow row, boolean empty) {
+        super.updateItem(row, empty);
+        setText(empty || row == null ? null : row.line());
+      }
+    });
+    parts.getSelectionModel().selectedItemProperty().addListener((o, was, row) -> {
+      if (row != null && row != model.selectedPartProperty().get()) {
+        model.selectedPartProperty().set(row);
+      }
+    });
+    model.selectedPartProperty().addListener((o, was, row) -> {
+      if (row != null && parts.getSelectionModel().getSelectedItem() != row) {
+        parts.getSelectionModel().select(row);
+      }
+    });
+    Button use = new Button("Use this stage — go to readings");
+    use.setId("use-stage");
+    use.getStyleClass().add("primary");
+    use.setMaxWidth(Double.MAX_VALUE);
+    use.disableProperty().bind(model.stageProperty().isNull());
+    use.setOnAction(e -> model.useStage());
+    box.getChildren().addAll(title, drawing, partsTitle, parts, use);
+    return box;
+  }
+
+  private void showExpected(ExpectedVolts expected) {
+    expectedBox.getChildren().clear();
+    if (expected == null) {
+      return;
+    }
+    if (!expected.solved()) {
+      Label problem = new Label("Cannot work out this stage: " + expected.problem());
+      problem.setWrapText(true);
+      expectedBox.getChildren().add(problem);
+      return;
+    }
+    FlowPane nets = new FlowPane(18, 6);
+    for (Map.Entry<String, Double> net : expected.nominal().entrySet()) {
+      if (net.getKey().contains(".")) {
+        continue;
+      }
+      Label label = new Label(net.getKey() + "  " + Words.voltsShort(net.getValue()));
+      label.setStyle("-fx-font-size: 19px; -fx-font-family: 'DejaVu Sans Mono', monospace;");
+      label.setPadding(new Insets(2, 10, 2, 10));
+      label.setStyle(label.getStyle() + "-fx-background-color: #e4e9ed;");
+      nets.getChildren().add(label);
+    }
+    StringBuilder states = new StringBuilder();
+    expected.states().forEach((ref, state) -> states.append(ref).append(": ")
+        .append(state.equals("linear") ? "working normally (linear)" : "output at its " + (state.equals("high") ? "upper" : "lower") + " limit")
+        .append("   "));
+    Label stateLine = new Label(states.toString().strip());
+    stateLine.getStyleClass().add("hint");
+    expectedBox.getChildren().addAll(nets, stateLine);
+  }
+
+  private VBox editorPanel() {
+    VBox box = new VBox(10);
+    box.getStyleClass().add("panel");
+    Label title = new Label();
+    title.getStyleClass().add("section-title");
+    title.textProperty().bind(Bindings.createStringBinding(
+        () -> model.selectedPartProperty().get() == null ? "No part chosen" : "Part " + model.selectedPartProperty().get().part().ref(),
+        model.selectedPartProperty()));
+    TextField designator = new TextField();
+    designator.setId("part-designator");
+    designator.setPrefColumnCount(6);
+    designator.textProperty().bindBidirectional(model.designatorProperty());
+    designator.setOnAction(e -> model.applyDesignator());
+    Button rename = new Button("Rename");
+    rename.setId("part-rename");
+    rename.setOnAction(e -> model.applyDesignator());
+    HBox renameRow = new HBox(8, new Label("Designator"), designator, rename);
+    renameRow.setAlignment(Pos.CENTER_LEFT);
+    ToggleGroup mode = new ToggleGroup();
+    ToggleButton padTab = new ToggleButton("Value pad");
+    padTab.setId("tab-pad");
+    ToggleButton bandsTab = new ToggleButton("Colour bands / SMD");
+    bandsTab.setId("tab-decoder");
+    padTab.setToggleGroup(mode);
+    bandsTab.setToggleGroup(mode);
+    padTab.setSelected(true);
+    ValuePad pad = new ValuePad(model.pad(), "part", "Set value", model::applyValue);
+    VBox decoder = decoderPanel(() -> padTab.setSelected(true));
+    decoder.visibleProperty().bind(bandsTab.selectedProperty());
+    pad.visibleProperty().bind(bandsTab.selectedProperty().not());
+    StackPane modes = new StackPane(pad, decoder);
+    modes.setAlignment(Pos.TOP_LEFT);
+    // Keep one tab selected: a second tap on the selected tab would otherwise clear both.
+    mode.selectedToggleProperty().addListener((o, was, now) -> {
+      if (now == null) {
+        was.setSelected(true);
+      }
+    });
+    VBox editing = new VBox(10, renameRow, new HBox(8, padTab, bandsTab), modes);
+    editing.disableProperty().bind(model.selectedPartProperty().isNull());
+    box.getChildren().addAll(title, editing);
+    return box;
+  }
+
+  private VBox decoderPanel(Runnable backToPad) {
+    DecoderModel decoder = model.decoder();
+    VBox box = new VBox(8);
+    FlowPane colours = new FlowPane(5, 5);
+    for (String colour : DecoderModel.COLOURS) {
+      Button band = new Button(colour);
+      band.setId("band-" + colour);
+      band.setFocusTraversable(false);
+      band.setStyle(bandStyle(colour));
+      band.setOnAction(e -> decoder.addBand(colour));
+      colours.getChildren().add(band);
+    }
+    Button undo = new Button("Remove last band");
+    undo.setOnAction(e -> decoder.removeBand());
+    TextField smd = new TextField();
+    smd.setId("smd-code");
+    smd.setPromptText("SMD code, e.g. 472 or 01C");
+    smd.textProperty().bindBidirectional(decoder.smdProperty());
+    Label result = new Label();
+    result.setId("decoder-result");
+    result.setWrapText(true);
+    result.textProperty().bind(decoder.resultProperty());
+    Button use = new Button("Use this value");
+    use.setId("decoder-use");
+    use.getStyleClass().add("primary");
+    use.disableProperty().bind(decoder.ohmsProperty().isNull());
+    use.setOnAction(e -> {
+      model.pad().setValue(decoder.ohmsProperty().get());
+      decoder.clear();
+      backToPad.run();
+    });
+    Button clear = new Button("Clear");
+    clear.setOnAction(e -> decoder.clear());
+    box.getChildren().addAll(colours, new HBox(8, undo, clear), smd, result, use);
+    return box;
+  }
+
+  private static String bandStyle(String colour) {
+    String[] fillInk = switch (colour) {
+      case "black" -> new String[] {"#111111", "#ffffff"};
+      case "brown" -> new String[] {"#6b3a1e", "#ffffff"};
+      case "red" -> new String[] {"#c62828", "#ffffff"};
+      case "orange" -> new String[] {"#ef7d00", "#111111"};
+      case "yellow" -> new String[] {"#f5d000", "#111111"};
+      case "green" -> new String[] {"#2e7d32", "#ffffff"};
+      case "blue" -> new String[] {"#1e4fc2", "#ffffff"};
+      case "violet" -> new String[] {"#7b3fa8", "#ffffff"};
+      case "grey" -> new String[] {"#8c8c8c", "#111111"};
+      case "white" -> new String[] {"#ffffff", "#111111"};
+      case "gold" -> new String[] {"#c9a227", "#111111"};
+      default -> new String[] {"#c0c0c0", "#111111"};
+    };
+    return "-fx-background-color: #444444, " + fillInk[0] + "; -fx-text-fill: " + fillInk[1] + "; -fx-font-size: 14px; -fx-min-width: 72px;";
+  }
+}

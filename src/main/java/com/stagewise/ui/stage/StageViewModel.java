@@ -1,0 +1,266 @@
+package com.stagewise.ui.stage;
+
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.value.SiValue;
+import com.stagewise.circuit.value.Tolerance;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.interchange.StageSheet;
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.ExpectedVolts;
+import com.stagewise.ui.SafetyCaution;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.ValuePadModel;
+import com.stagewise.ui.Words;
+import java.util.ArrayList;
+import java.util.List;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+
+/**
+ * The stage screen: choose the stage from the board model's library, check and edit its part
+ * values and designators, see what a healthy stage reads at each net, and take it to the readings.
+ */
+public final class StageViewModel {
+  private final Bench bench;
+  private final ObservableList<LibraryEntry> library = FXCollections.observableArrayList();
+  private final StringProperty libraryNote = new SimpleStringProperty("");
+  private final ObjectProperty<Stage> stage = new SimpleObjectProperty<>();
+  private final ObservableList<PartRow> parts = FXCollections.observableArrayList();
+  private final ObjectProperty<PartRow> selectedPart = new SimpleObjectProperty<>();
+  private final StringProperty designator = new SimpleStringProperty("");
+  private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
+  private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
+  private final DecoderModel decoder = new DecoderModel();
+
+  /** Creates the stage screen's model on a bench. */
+  public StageViewModel(Bench bench) {
+    this.bench = bench;
+    selectedPart.addListener((o, was, row) -> {
+      if (row != null) {
+        designator.set(row.part().ref());
+        pad.quantityProperty().set(row.part().kind() == PartKind.CAPACITOR ? ValuePadModel.Quantity.FARADS : ValuePadModel.Quantity.OHMS);
+        pad.setValue(row.part().value());
+      }
+    });
+    bench.stageProperty().addListener((o, was, now) -> {
+      if (now != null && now != stage.get()) {
+        setStage(now);
+      }
+    });
+    bench.boardModelProperty().addListener((o, was, now) -> library.clear());
+  }
+
+  /**
+   * One stage of the board model's library.
+   *
+   * @param title its title
+   * @param stage the stage
+   */
+  public record LibraryEntry(String title, Stage stage) {}
+
+  /**
+   * One part of the stage as listed.
+   *
+   * @param part the part
+   * @param value its value with unit, e.g. "4.7 kΩ"
+   * @param tolerance its tolerance, e.g. "1 %"
+   * @param nets the nets it joins, e.g. "IN – SUM"
+   */
+  public record PartRow(Part part, String value, String tolerance, String nets) {
+    /** Returns the row as one line. */
+    public String line() {
+      return part.ref() + "   " + value + "  ±" + tolerance + "   (" + nets + ")";
+    }
+  }
+
+  public ObservableList<LibraryEntry> library() {
+    return library;
+  }
+
+  public StringProperty libraryNoteProperty() {
+    return libraryNote;
+  }
+
+  public ObjectProperty<Stage> stageProperty() {
+    return stage;
+  }
+
+  public ObservableList<PartRow> parts() {
+    return parts;
+  }
+
+  public ObjectProperty<PartRow> selectedPartProperty() {
+    return selectedPart;
+  }
+
+  public StringProperty designatorProperty() {
+    return designator;
+  }
+
+  public ValuePadModel pad() {
+    return pad;
+  }
+
+  public DecoderModel decoder() {
+    return decoder;
+  }
+
+  public ObjectProperty<ExpectedVolts> expectedProperty() {
+    return expected;
+  }
+
+  /** Loads the library of the board model on the bench. */
+  public void loadLibrary() {
+    BoardModel model = bench.boardModelProperty().get();
+    if (model == null) {
+      library.clear();
+      libraryNote.set("Choose a unit first.");
+      return;
+    }
+    bench
+        .tasks()
+        .run(
+            "Reading the stage library",
+            () -> {
+              List<LibraryEntry> entries = new ArrayList<>();
+              for (StageSheetRecord sheet : bench.store().stageSheets(model.id())) {
+                Stage s = StageSheet.read(sheet.sheetJson(), "stage library: " + sheet.title());
+                entries.add(new LibraryEntry(s.title().isEmpty() ? sheet.title() : s.title(), s));
+              }
+              return entries;
+            },
+            entries -> {
+              library.setAll(entries);
+              libraryNote.set(
+                  entries.isEmpty()
+                      ? "No stages for " + model.name() + " yet. Build one from a template."
+                      : entries.size() + " stage" + (entries.size() == 1 ? "" : "s") + " of " + model.name() + ".");
+            },
+            e -> bench.problems().failed("Could not read the stage library", e, Words.CHECK_DATABASE));
+  }
+
+  /** Takes a stage to work on (from the library or a template); its parts become editable. */
+  public void choose(Stage chosen) {
+    setStage(chosen);
+  }
+
+  private void setStage(Stage chosen) {
+    stage.set(chosen);
+    refreshParts();
+    selectedPart.set(null);
+    solve();
+  }
+
+  private void refreshParts() {
+    Stage s = stage.get();
+    List<PartRow> rows = new ArrayList<>();
+    if (s != null) {
+      for (Part part : s.parts()) {
+        String unit = part.kind() == PartKind.CAPACITOR ? "F" : "Ω";
+        rows.add(new PartRow(part, SiValue.format(part.value(), unit), Tolerance.format(part.tolerance()), part.netA() + " – " + part.netB()));
+      }
+    }
+    parts.setAll(rows);
+  }
+
+  private void solve() {
+    Stage s = stage.get();
+    if (s == null) {
+      expected.set(null);
+      return;
+    }
+    bench
+        .tasks()
+        .run(
+            "Working out the expected voltages",
+            () -> ExpectedVolts.of(s),
+            result -> {
+              if (stage.get() == s) {
+                expected.set(result);
+              }
+            },
+            e -> bench.problems().failed("Could not work out the expected voltages", e, "Check the part values of the stage."));
+  }
+
+  /** Sets the selected part's value to what the pad shows. */
+  public void applyValue() {
+    PartRow row = selectedPart.get();
+    Double value = pad.valueProperty().get();
+    if (row == null || value == null) {
+      bench.problems().show("No value to set", "Choose a part, then type its value on the pad.", "Tap a part in the list, then type e.g. 4k7.");
+      return;
+    }
+    String ref = row.part().ref();
+    edit(stage.get().withPart(ref, p -> p.withValue(value)), ref);
+  }
+
+  /** Renames the selected part to the designator typed (designators follow the board's legend). */
+  public void applyDesignator() {
+    PartRow row = selectedPart.get();
+    String newRef = designator.get() == null ? "" : designator.get().strip();
+    if (row == null) {
+      return;
+    }
+    if (newRef.isEmpty() || !newRef.matches("[A-Za-z][A-Za-z0-9_]*")) {
+      bench.problems().show("Not a designator", "\"" + newRef + "\" is not a designator.", "Type it as printed on the board, e.g. R12 or C3.");
+      return;
+    }
+    Stage s = stage.get();
+    if (!newRef.equals(row.part().ref()) && s.part(newRef).isPresent()) {
+      bench.problems().show("Designator already used", newRef + " is already a part of this stage.", "Choose another designator.");
+      return;
+    }
+    Part p = row.part();
+    Part renamed = new Part(newRef, p.kind(), p.value(), p.tolerance(), p.netA(), p.netB());
+    edit(s.withPart(p.ref(), old -> renamed), newRef);
+  }
+
+  private void edit(Stage edited, String selectRef) {
+    try {
+      stage.set(edited);
+    } catch (InvalidInputException e) {
+      bench.problems().show("The stage cannot take this", e.getMessage(), "Check the value and try again.");
+      return;
+    }
+    refreshParts();
+    parts.stream().filter(r -> r.part().ref().equals(selectRef)).findFirst().ifPresent(selectedPart::set);
+    solve();
+  }
+
+  /**
+   * Puts the stage on the bench for the readings. A stage with a rail above 50 V brings up the
+   * safety caution first.
+   */
+  public void useStage() {
+    Stage s = stage.get();
+    if (s == null) {
+      bench.problems().show("Choose a stage first", "No stage is chosen.", "Tap a stage in the library.");
+      return;
+    }
+    Runnable go = () -> {
+      boolean changed = bench.stageProperty().get() == null || !bench.stageProperty().get().equals(s);
+      bench.stageProperty().set(s);
+      if (changed) {
+        bench.readings().clear();
+        bench.diagnosisProperty().set(null);
+      }
+      String caseId = bench.openCaseProperty().get().id();
+      bench.tasks().run("Saving the case's stage", () -> { bench.resume().saveStage(caseId, s); return null; },
+          ok -> {}, e -> bench.problems().failed("Could not keep the stage for this case", e, Words.CHECK_DATABASE));
+      bench.go(Step.READINGS);
+    };
+    if (SafetyCaution.hasHighRails(s)) {
+      bench.caution().show(SafetyCaution.Reason.HIGH_RAILS, go);
+    } else {
+      go.run();
+    }
+  }
+}
