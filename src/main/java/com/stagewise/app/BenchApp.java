@@ -6,8 +6,18 @@ import com.stagewise.ui.FxTasks;
 import com.stagewise.ui.Overlays;
 import com.stagewise.ui.SafetyCaution;
 import com.stagewise.ui.Step;
+import com.stagewise.ui.closeout.CloseOutView;
+import com.stagewise.ui.closeout.CloseOutViewModel;
+import com.stagewise.ui.history.HistoryView;
+import com.stagewise.ui.history.HistoryViewModel;
+import com.stagewise.ui.readings.ReadingsView;
+import com.stagewise.ui.readings.ReadingsViewModel;
+import com.stagewise.ui.stage.StageView;
+import com.stagewise.ui.stage.StageViewModel;
 import com.stagewise.ui.start.StartView;
 import com.stagewise.ui.start.StartViewModel;
+import com.stagewise.ui.suspects.SuspectsView;
+import com.stagewise.ui.suspects.SuspectsViewModel;
 import javafx.scene.Scene;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyCodeCombination;
@@ -35,6 +45,33 @@ public final class BenchApp {
     StartViewModel start = new StartViewModel(bench);
     StartView startView = new StartView(start);
     window.screen(Step.UNIT, startView::root);
+    StageViewModel stage = new StageViewModel(bench);
+    window.screen(Step.STAGE, () -> new StageView(stage).root());
+    ReadingsViewModel readings = new ReadingsViewModel(bench);
+    window.screen(Step.READINGS, () -> new ReadingsView(readings, bench).root());
+    SuspectsViewModel suspects = new SuspectsViewModel(bench);
+    window.screen(Step.SUSPECTS, () -> new SuspectsView(suspects).root());
+    CloseOutViewModel closeOut = new CloseOutViewModel(bench);
+    window.screen(Step.CLOSE_OUT, () -> new CloseOutView(closeOut).root());
+    HistoryViewModel history = new HistoryViewModel(bench);
+    window.screen(Step.HISTORY, () -> new HistoryView(history).root());
+    suspects.chosenForCloseOutProperty().addListener((o, was, now) -> closeOut.prepareFor(now));
+    closeOut.setAfterClose(caseId -> {
+      history.queryProperty().set("");
+      history.search();
+      history.show(caseId);
+      bench.go(Step.HISTORY);
+      start.search();
+    });
+    bench.stepProperty().addListener((o, was, now) -> {
+      if (now == Step.STAGE) {
+        stage.loadLibrary();
+      } else if (now == Step.HISTORY && history.hits().isEmpty()) {
+        history.search();
+      } else if (now == Step.UNIT && was != Step.UNIT) {
+        start.search();
+      }
+    });
     scene = new Scene(window.root(), WIDTH, HEIGHT);
     window.addShortcuts(scene);
     scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN), () -> {

@@ -1,7 +1,9 @@
 package com.stagewise.ui;
 
 import com.stagewise.circuit.Reading;
+import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.StoredReading;
 import java.time.Instant;
@@ -72,6 +74,72 @@ public final class Words {
       return "<1 %";
     }
     return String.format(Locale.ROOT, "%.0f %%", p);
+  }
+
+  /**
+   * Returns a fault id in a technician's words: {@code R2:open} gives "R2 open", {@code
+   * U1.6-7:bridge} gives "Solder bridge U1 pins 6–7".
+   */
+  public static String fault(String id) {
+    if (id == null || id.isEmpty()) {
+      return "";
+    }
+    if (id.equals("healthy")) {
+      return "Nothing wrong (healthy stage)";
+    }
+    int colon = id.lastIndexOf(':');
+    if (colon < 0) {
+      return id;
+    }
+    String what = id.substring(0, colon);
+    String kind = id.substring(colon + 1);
+    return switch (kind) {
+      case "open" -> what + " open";
+      case "short" -> what + " shorted";
+      case "high" -> what + " drifted high";
+      case "low" -> what.matches("[A-Za-z]+\\d*[A-Za-z]*") && !what.matches("[RC]\\d+.*") ? "Rail " + what + " low" : what + " drifted low";
+      case "stuck-high" -> what + " output stuck high";
+      case "stuck-low" -> what + " output stuck low";
+      case "dead" -> what + " output dead (not driving)";
+      case "lifted" -> pin(what) + " lifted (open joint)";
+      case "bridge" -> "Solder bridge " + pin(what).replace("pin ", "pins ").replace("-", "–");
+      case "missing" -> "Rail " + what + " missing";
+      default -> what + " " + kind;
+    };
+  }
+
+  /** Returns a test point in words: {@code U1.8} gives "U1 pin 8", a net gives its name. */
+  public static String pin(String at) {
+    int dot = at.lastIndexOf('.');
+    if (dot > 0 && dot < at.length() - 1 && Character.isDigit(at.charAt(dot + 1))) {
+      return at.substring(0, dot) + " pin " + at.substring(dot + 1);
+    }
+    return at;
+  }
+
+  /** Returns an action in one line, e.g. "Replaced R2: open → 4.7 kΩ". */
+  public static String actionLine(RepairAction a) {
+    StringBuilder line = new StringBuilder(actionKind(a.kind()));
+    if (!a.part().isEmpty()) {
+      line.append(' ').append(a.part());
+    }
+    if (!a.oldValue().isEmpty() || !a.newValue().isEmpty()) {
+      line.append(": ").append(a.oldValue().isEmpty() ? "?" : a.oldValue()).append(" → ").append(a.newValue().isEmpty() ? "?" : a.newValue());
+    }
+    if (!a.text().isEmpty()) {
+      line.append(" — ").append(a.text());
+    }
+    return line.toString();
+  }
+
+  /** Returns the kind of an action in a word. */
+  public static String actionKind(ActionKind kind) {
+    return switch (kind) {
+      case PART_REPLACED -> "Replaced";
+      case REFLOW -> "Reflow";
+      case ADJUSTMENT -> "Adjusted";
+      case OTHER -> "Other";
+    };
   }
 
   /** Returns the reading a stored reading stands for. */

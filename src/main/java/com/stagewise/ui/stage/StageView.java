@@ -42,11 +42,6 @@ public final class StageView {
     editor.setMinWidth(360);
     root.getChildren().addAll(library, middle, editor);
     model.expectedProperty().addListener((o, was, now) -> showExpected(now));
-    root.sceneProperty().addListener((o, was, now) -> {
-      if (now != null) {
-        model.loadLibrary();
-      }
-    });
   }
 
   /** Returns the screen's root node. */

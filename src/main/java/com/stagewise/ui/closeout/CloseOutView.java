@@ -1,0 +1,189 @@
+package com.stagewise.ui.closeout;
+
+import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.ui.Keypad;
+import com.stagewise.ui.Words;
+import java.util.Locale;
+import javafx.collections.ListChangeListener;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TextArea;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+
+/** The close-out screen: actions, faults found, outcome, notes. */
+public final class CloseOutView {
+  private final CloseOutViewModel model;
+  private final HBox root = new HBox(12);
+  private final VBox faultsBox = new VBox(4);
+
+  /** Builds the screen bound to its model. */
+  public CloseOutView(CloseOutViewModel model) {
+    this.model = model;
+    root.getStyleClass().add("screen");
+    root.setId("screen-close-out");
+    VBox left = actionsPanel();
+    left.setPrefWidth(620);
+    HBox.setHgrow(left, Priority.ALWAYS);
+    VBox right = endPanel();
+    right.setPrefWidth(560);
+    root.getChildren().addAll(left, right);
+    model.faultChoices().addListener((ListChangeListener<String>) c -> showFaults());
+    model.confirmedFaults().addListener((ListChangeListener<String>) c -> showFaults());
+    showFaults();
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return root;
+  }
+
+  private VBox actionsPanel() {
+    VBox box = new VBox(8);
+    box.getStyleClass().add("panel");
+    Label title = new Label("What was done");
+    title.getStyleClass().add("section-title");
+    ToggleGroup kinds = new ToggleGroup();
+    HBox kindRow = new HBox(6);
+    for (ActionKind kind : ActionKind.values()) {
+      ToggleButton button = new ToggleButton(Words.actionKind(kind));
+      button.setId("action-" + kind.word());
+      button.setToggleGroup(kinds);
+      button.setUserData(kind);
+      button.setSelected(model.actionKindProperty().get() == kind);
+      kindRow.getChildren().add(button);
+    }
+    kinds.selectedToggleProperty().addListener((o, was, now) -> {
+      if (now == null) {
+        was.setSelected(true);
+      } else {
+        model.actionKindProperty().set((ActionKind) now.getUserData());
+      }
+    });
+    model.actionKindProperty().addListener((o, was, now) ->
+        kinds.getToggles().stream().filter(t -> t.getUserData() == now).findFirst().ifPresent(t -> t.setSelected(true)));
+    TextField part = field("action-part", "e.g. R2 or U1", model.actionPartProperty());
+    TextField oldValue = field("action-old", "e.g. open, or measured 18 kΩ", model.actionOldProperty());
+    TextField newValue = field("action-new", "e.g. 4.7 kΩ 1 %, or TL072", model.actionNewProperty());
+    TextField text = field("action-text", "e.g. reflowed all pins of U1", model.actionTextProperty());
+    GridPane form = new GridPane();
+    form.setHgap(8);
+    form.setVgap(6);
+    form.addRow(0, new Label("Part"), part);
+    form.addRow(1, new Label("Old value"), oldValue);
+    form.addRow(2, new Label("New value"), newValue);
+    form.addRow(3, new Label("Details"), text);
+    GridPane.setHgrow(part, Priority.ALWAYS);
+    Button add = new Button("Add to the case");
+    add.setId("action-add");
+    add.getStyleClass().add("primary");
+    add.setOnAction(e -> model.addAction());
+    Keypad keypad = new Keypad(model.actionPartProperty(), "action");
+    keypad.follow(part);
+    keypad.follow(oldValue);
+    keypad.follow(newValue);
+    keypad.follow(text);
+    ListView<RepairAction> list = new ListView<>(model.actions());
+    list.setId("action-list");
+    list.setPrefHeight(120);
+    VBox.setVgrow(list, Priority.ALWAYS);
+    list.setCellFactory(v -> new ListCell<>() {
+      @Override
+      protected void updateItem(RepairAction a, boolean empty) {
+        super.updateItem(a, empty);
+        setText(empty || a == null ? null : Words.actionLine(a));
+      }
+    });
+    Label recorded = new Label("Recorded in this case");
+    recorded.setStyle("-fx-font-weight: bold;");
+    box.getChildren().addAll(title, kindRow, form, add, keypad, recorded, list);
+    return box;
+  }
+
+  private static TextField field(String id, String prompt, javafx.beans.property.StringProperty property) {
+    TextField field = new TextField();
+    field.setId(id);
+    field.setPromptText(prompt);
+    field.textProperty().bindBidirectional(property);
+    return field;
+  }
+
+  private VBox endPanel() {
+    VBox box = new VBox(8);
+    box.getStyleClass().add("panel");
+    Label faultsTitle = new Label("Faults found (tick what was really wrong)");
+    faultsTitle.getStyleClass().add("section-title");
+    faultsBox.setId("close-faults");
+    Label outcomeTitle = new Label("Outcome");
+    outcomeTitle.getStyleClass().add("section-title");
+    ToggleGroup outcomes = new ToggleGroup();
+    HBox outcomeRow = new HBox(6);
+    for (Outcome o : Outcome.values()) {
+      ToggleButton button = new ToggleButton(Words.outcome(o).substring(0, 1).toUpperCase(Locale.ROOT) + Words.outcome(o).substring(1));
+      button.setId("outcome-" + o.word());
+      button.setToggleGroup(outcomes);
+      button.setUserData(o);
+      outcomeRow.getChildren().add(button);
+    }
+    outcomes.selectedToggleProperty().addListener((o, was, now) -> model.outcomeProperty().set(now == null ? null : (Outcome) now.getUserData()));
+    model.outcomeProperty().addListener((o, was, now) -> {
+      if (now == null) {
+        outcomes.selectToggle(null);
+      }
+    });
+    Label notesTitle = new Label("Notes");
+    notesTitle.getStyleClass().add("section-title");
+    TextArea notes = new TextArea();
+    notes.setId("close-notes");
+    notes.setPromptText("Anything the next technician should know");
+    notes.setWrapText(true);
+    notes.setPrefRowCount(4);
+    notes.textProperty().bindBidirectional(model.notesProperty());
+    VBox.setVgrow(notes, Priority.ALWAYS);
+    Button close = new Button("Close the case");
+    close.setId("close-case");
+    close.getStyleClass().add("primary");
+    close.disableProperty().bind(model.outcomeProperty().isNull());
+    close.setOnAction(e -> model.closeCase());
+    Button leave = new Button("Leave open for later");
+    leave.setId("leave-open");
+    leave.setOnAction(e -> model.leaveOpen());
+    HBox buttons = new HBox(10, close, leave);
+    buttons.setAlignment(Pos.CENTER_LEFT);
+    box.getChildren().addAll(faultsTitle, faultsBox, outcomeTitle, outcomeRow, notesTitle, notes, buttons);
+    return box;
+  }
+
+  private void showFaults() {
+    faultsBox.getChildren().clear();
+    if (model.faultChoices().isEmpty()) {
+      Label none = new Label("No suspects yet: take readings, or describe the repair on the left.");
+      none.getStyleClass().add("hint");
+      none.setWrapText(true);
+      faultsBox.getChildren().add(none);
+    }
+    int shown = 0;
+    for (String id : model.faultChoices()) {
+      if (shown++ >= 6 && !model.confirmedFaults().contains(id)) {
+        continue;
+      }
+      CheckBox box = new CheckBox(Words.fault(id));
+      box.setId("fault-" + id.replaceAll("[^A-Za-z0-9]", "_"));
+      box.setSelected(model.confirmedFaults().contains(id));
+      box.selectedProperty().addListener((o, was, now) -> model.toggleFault(id, now));
+      faultsBox.getChildren().add(box);
+    }
+  }
+}

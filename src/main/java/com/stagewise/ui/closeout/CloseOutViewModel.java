@@ -1,0 +1,280 @@
+package com.stagewise.ui.closeout;
+
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.value.SiValue;
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.diagnosis.Suspect;
+import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.Words;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Consumer;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+
+/**
+ * The close-out: what was done (parts replaced with their values, reflow, other), which faults were
+ * found, the outcome and notes; saved to the history, where the shop's memory learns from it. A
+ * case can also be left open and resumed later.
+ */
+public final class CloseOutViewModel {
+  private final Bench bench;
+  private final ObservableList<RepairAction> actions = FXCollections.observableArrayList();
+  private final ObjectProperty<ActionKind> actionKind = new SimpleObjectProperty<>(ActionKind.PART_REPLACED);
+  private final StringProperty actionPart = new SimpleStringProperty("");
+  private final StringProperty actionOld = new SimpleStringProperty("");
+  private final StringProperty actionNew = new SimpleStringProperty("");
+  private final StringProperty actionText = new SimpleStringProperty("");
+  private final ObservableList<String> faultChoices = FXCollections.observableArrayList();
+  private final ObservableList<String> confirmedFaults = FXCollections.observableArrayList();
+  private final ObjectProperty<Outcome> outcome = new SimpleObjectProperty<>();
+  private final StringProperty notes = new SimpleStringProperty("");
+  private Consumer<String> afterClose = caseId -> {};
+
+  /** Creates the close-out's model on a bench. */
+  public CloseOutViewModel(Bench bench) {
+    this.bench = bench;
+    bench.openCaseProperty().addListener((o, was, now) -> reset());
+    bench.diagnosisProperty().addListener((o, was, now) -> choices(now));
+  }
+
+  public ObservableList<RepairAction> actions() {
+    return actions;
+  }
+
+  public ObjectProperty<ActionKind> actionKindProperty() {
+    return actionKind;
+  }
+
+  public StringProperty actionPartProperty() {
+    return actionPart;
+  }
+
+  public StringProperty actionOldProperty() {
+    return actionOld;
+  }
+
+  public StringProperty actionNewProperty() {
+    return actionNew;
+  }
+
+  public StringProperty actionTextProperty() {
+    return actionText;
+  }
+
+  /** Returns the fault ids offered (the current suspects), first suspect first. */
+  public ObservableList<String> faultChoices() {
+    return faultChoices;
+  }
+
+  /** Returns the fault ids ticked as found. */
+  public ObservableList<String> confirmedFaults() {
+    return confirmedFaults;
+  }
+
+  public ObjectProperty<Outcome> outcomeProperty() {
+    return outcome;
+  }
+
+  public StringProperty notesProperty() {
+    return notes;
+  }
+
+  /** Sets what happens after a case is closed (the app shows it in the history). */
+  public void setAfterClose(Consumer<String> action) {
+    afterClose = action;
+  }
+
+  private void reset() {
+    actions.clear();
+    confirmedFaults.clear();
+    outcome.set(null);
+    notes.set("");
+    clearForm();
+    RepairCase rc = bench.openCaseProperty().get();
+    if (rc != null) {
+      bench.tasks().run("Reading the case", () -> bench.store().caseFile(rc.id()).map(f -> f.actions()).orElse(List.of()),
+          stored -> {
+            if (bench.openCaseProperty().get() == rc) {
+              actions.setAll(stored);
+            }
+          },
+          e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
+    }
+    choices(bench.diagnosisProperty().get());
+  }
+
+  private void choices(Diagnosis diagnosis) {
+    List<String> ids = new ArrayList<>();
+    if (diagnosis != null) {
+      for (Suspect s : diagnosis.suspects()) {
+        if (!s.fault().equals("healthy")) {
+          ids.add(s.fault());
+        }
+      }
+    }
+    for (String ticked : confirmedFaults) {
+      if (!ids.contains(ticked)) {
+        ids.add(ticked);
+      }
+    }
+    faultChoices.setAll(ids);
+  }
+
+  /**
+   * Prepares the close-out for the suspect the technician settled on: ticks its fault and fills
+   * the action form with the likely repair (replace the part with its marked value, or reflow the
+   * joint).
+   */
+  public void prepareFor(Suspect suspect) {
+    if (suspect == null || suspect.fault().equals("healthy")) {
+      return;
+    }
+    if (!faultChoices.contains(suspect.fault())) {
+      faultChoices.add(0, suspect.fault());
+    }
+    if (!confirmedFaults.contains(suspect.fault())) {
+      confirmedFaults.add(suspect.fault());
+    }
+    String what = suspect.fault().substring(0, suspect.fault().lastIndexOf(':'));
+    String kind = suspect.fault().substring(suspect.fault().lastIndexOf(':') + 1);
+    Stage stage = bench.stageProperty().get();
+    Optional<Part> part = stage == null ? Optional.empty() : stage.part(what);
+    clearForm();
+    if (part.isPresent()) {
+      String unit = part.get().kind() == PartKind.CAPACITOR ? "F" : "Ω";
+      actionKind.set(ActionKind.PART_REPLACED);
+      actionPart.set(part.get().ref());
+      actionOld.set(suspect.estimatedValue().isPresent()
+          ? "measured " + SiValue.format(suspect.estimatedValue().getAsDouble(), unit, 2)
+          : kind.equals("open") ? "open" : kind.equals("short") ? "shorted" : "");
+      actionNew.set(SiValue.format(part.get().value(), unit));
+    } else if (kind.equals("lifted") || kind.equals("bridge")) {
+      actionKind.set(ActionKind.REFLOW);
+      actionPart.set(what.contains(".") ? what.substring(0, what.indexOf('.')) : what);
+      actionText.set(kind.equals("bridge") ? "Removed the solder bridge at " + Words.pin(what) : "Reflowed " + Words.pin(what));
+    } else if (stage != null && stage.amplifier(what).isPresent()) {
+      actionKind.set(ActionKind.PART_REPLACED);
+      actionPart.set(stage.amplifier(what).get().packageRef());
+    } else {
+      actionKind.set(ActionKind.OTHER);
+      actionText.set(Words.fault(suspect.fault()));
+    }
+  }
+
+  private void clearForm() {
+    actionPart.set("");
+    actionOld.set("");
+    actionNew.set("");
+    actionText.set("");
+  }
+
+  /** Ticks or unticks a fault as found. */
+  public void toggleFault(String faultId, boolean found) {
+    if (found && !confirmedFaults.contains(faultId)) {
+      confirmedFaults.add(faultId);
+    } else if (!found) {
+      confirmedFaults.remove(faultId);
+    }
+  }
+
+  /** Records the action in the form in the case at once (so it is kept if the case is left open). */
+  public void addAction() {
+    RepairCase rc = bench.openCaseProperty().get();
+    if (rc == null) {
+      return;
+    }
+    ActionKind kind = actionKind.get();
+    String part = text(actionPart);
+    if (kind == ActionKind.PART_REPLACED && part.isEmpty()) {
+      bench.problems().show("Which part was replaced?", "A replaced part needs its designator.", "Type the designator, e.g. R2 or U1.");
+      return;
+    }
+    if (kind == ActionKind.OTHER && text(actionText).isEmpty()) {
+      bench.problems().show("Say what was done", "An \"other\" action needs a few words.", "Type what was done, e.g. \"cleaned the edge connector\".");
+      return;
+    }
+    String oldValue = text(actionOld);
+    String newValue = text(actionNew);
+    String words = text(actionText);
+    bench.tasks().run("Recording the action", () -> bench.store().addAction(rc.id(), kind, part, oldValue, newValue, words),
+        stored -> {
+          actions.add(stored);
+          clearForm();
+        },
+        e -> bench.problems().failed("Could not record the action", e, Words.CHECK_DATABASE));
+  }
+
+  /** Closes the case with the outcome, the faults found and the notes, and shows it in the history. */
+  public void closeCase() {
+    RepairCase rc = bench.openCaseProperty().get();
+    Outcome chosen = outcome.get();
+    if (rc == null) {
+      return;
+    }
+    if (chosen == null) {
+      bench.problems().show("How did it end?", "A case closes with an outcome.", "Tap Fixed, Not fixed or Returned unrepaired.");
+      return;
+    }
+    if (chosen == Outcome.FIXED && confirmedFaults.isEmpty() && actions.isEmpty()) {
+      bench.problems().show("What fixed it?", "A fixed case needs the fault found or the action taken, so the shop can learn from it.",
+          "Tick the fault that was found, or add what was done.");
+      return;
+    }
+    List<String> faults = chosen == Outcome.FIXED || chosen == Outcome.NOT_FIXED ? List.copyOf(confirmedFaults) : List.of();
+    String note = text(notes);
+    bench.tasks().run("Closing the case",
+        () -> {
+          if (!note.isEmpty()) {
+            bench.store().addNote(rc.id(), note);
+          }
+          RepairCase closed = bench.store().closeCase(rc.id(), chosen, faults);
+          bench.resume().forget(rc.id());
+          return closed;
+        },
+        closed -> {
+          bench.clearCase();
+          afterClose.accept(closed.id());
+        },
+        e -> bench.problems().failed("Could not close the case", e, Words.CHECK_DATABASE));
+  }
+
+  /** Keeps the case open (with its notes) to resume later, and goes back to the unit screen. */
+  public void leaveOpen() {
+    RepairCase rc = bench.openCaseProperty().get();
+    if (rc == null) {
+      return;
+    }
+    String note = text(notes);
+    bench.resume().saveStep(rc.id(), Step.CLOSE_OUT);
+    bench.tasks().run("Keeping the case open",
+        () -> {
+          if (!note.isEmpty()) {
+            bench.store().addNote(rc.id(), note);
+          }
+          return null;
+        },
+        ok -> {
+          notes.set("");
+          bench.clearCase();
+          bench.go(Step.UNIT);
+        },
+        e -> bench.problems().failed("Could not save the note", e, Words.CHECK_DATABASE));
+  }
+
+  private static String text(StringProperty p) {
+    return p.get() == null ? "" : p.get().strip();
+  }
+}

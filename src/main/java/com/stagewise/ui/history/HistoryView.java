@@ -1,0 +1,162 @@
+package com.stagewise.ui.history;
+
+import com.stagewise.history.SearchHit;
+import com.stagewise.ui.Keypad;
+import com.stagewise.ui.Words;
+import java.util.List;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+
+/** The history screen: search, results, and the chosen case as it was with its unit's timeline. */
+public final class HistoryView {
+  private final HistoryViewModel model;
+  private final HBox root = new HBox(12);
+  private final VBox caseBox = new VBox(6);
+  private final ListView<SearchHit> list;
+
+  /** Builds the screen bound to its model. */
+  public HistoryView(HistoryViewModel model) {
+    this.model = model;
+    root.getStyleClass().add("screen");
+    root.setId("screen-history");
+    list = new ListView<>(model.hits());
+    VBox left = searchPanel();
+    left.setPrefWidth(600);
+    left.setMinWidth(560);
+    VBox right = new VBox(8);
+    right.getStyleClass().add("panel");
+    caseBox.setId("history-case");
+    ScrollPane scroll = new ScrollPane(caseBox);
+    scroll.setFitToWidth(true);
+    VBox.setVgrow(scroll, Priority.ALWAYS);
+    right.getChildren().add(scroll);
+    HBox.setHgrow(right, Priority.ALWAYS);
+    root.getChildren().addAll(left, right);
+    model.shownProperty().addListener((o, was, now) -> showCase(now));
+    model.timeline().addListener((javafx.collections.ListChangeListener<String>) c -> showCase(model.shownProperty().get()));
+    showCase(null);
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return root;
+  }
+
+  private VBox searchPanel() {
+    VBox box = new VBox(8);
+    box.getStyleClass().add("panel");
+    Label title = new Label("Search the repair history");
+    title.getStyleClass().add("section-title");
+    TextField field = new TextField();
+    field.setId("history-query");
+    field.getStyleClass().add("big-field");
+    field.setPromptText("Serial, board, fault, part or words");
+    field.textProperty().bindBidirectional(model.queryProperty());
+    field.setOnAction(e -> model.search());
+    HBox.setHgrow(field, Priority.ALWAYS);
+    Button search = new Button("Search");
+    search.setId("history-search");
+    search.getStyleClass().add("primary");
+    search.setMinHeight(60);
+    search.setOnAction(e -> model.search());
+    ToggleGroup fields = new ToggleGroup();
+    HBox fieldRow = new HBox(6);
+    fieldRow.setAlignment(Pos.CENTER_LEFT);
+    fieldRow.getChildren().add(new Label("In:"));
+    for (HistoryViewModel.Field f : HistoryViewModel.Field.values()) {
+      ToggleButton b = new ToggleButton(f.label());
+      b.setId("history-field-" + f.name().toLowerCase(java.util.Locale.ROOT));
+      b.setToggleGroup(fields);
+      b.setUserData(f);
+      b.setSelected(model.fieldProperty().get() == f);
+      fieldRow.getChildren().add(b);
+    }
+    fields.selectedToggleProperty().addListener((o, was, now) -> {
+      if (now == null) {
+        was.setSelected(true);
+      } else {
+        model.fieldProperty().set((HistoryViewModel.Field) now.getUserData());
+      }
+    });
+    Keypad keypad = new Keypad(model.queryProperty(), "history");
+    keypad.follow(field);
+    list.setId("history-hits");
+    VBox.setVgrow(list, Priority.ALWAYS);
+    list.setCellFactory(v -> new ListCell<>() {
+      @Override
+      protected void updateItem(SearchHit hit, boolean empty) {
+        super.updateItem(hit, empty);
+        if (empty || hit == null) {
+          setText(null);
+          return;
+        }
+        String end = hit.outcome() == null ? "open" : Words.outcome(hit.outcome());
+        String found = hit.confirmedFaults().isEmpty() ? "" : "  · " + String.join(", ", hit.confirmedFaults());
+        setText(Words.date(hit.openedAt()) + "  " + hit.serial() + " (" + hit.boardModel() + ")  · " + end + found + "\n" + hit.symptom());
+      }
+    });
+    list.getSelectionModel().selectedItemProperty().addListener((o, was, hit) -> {
+      if (hit != null) {
+        model.show(hit.caseId());
+      }
+    });
+    Label note = new Label();
+    note.setId("history-note");
+    note.getStyleClass().add("hint");
+    note.textProperty().bind(model.hitsNoteProperty());
+    box.getChildren().addAll(title, new HBox(8, field, search), fieldRow, keypad, list, note);
+    return box;
+  }
+
+  private void showCase(HistoryViewModel.CaseView view) {
+    caseBox.getChildren().clear();
+    if (view == null) {
+      Label none = new Label("Choose a case on the left to see it as it was.");
+      none.getStyleClass().add("hint");
+      caseBox.getChildren().add(none);
+      return;
+    }
+    Label title = new Label(view.title());
+    title.getStyleClass().add("section-title");
+    title.setWrapText(true);
+    Label symptom = new Label("Reported: " + view.symptom());
+    symptom.setWrapText(true);
+    symptom.setStyle("-fx-font-weight: bold;");
+    Label status = new Label(view.status() + (view.faults().isEmpty() ? "" : " — found: " + view.faults()));
+    status.setId("history-case-status");
+    status.setWrapText(true);
+    caseBox.getChildren().addAll(title, symptom, status);
+    section("Readings", view.readings(), "No readings.");
+    section("Suspects at the time", view.suspects(), "No suspect list was computed.");
+    section("What was done", view.actions(), "Nothing recorded.");
+    section("Notes", view.notes(), "No notes.");
+    section("This unit's cases", model.timeline(), "");
+  }
+
+  private void section(String heading, List<String> lines, String empty) {
+    Label head = new Label(heading);
+    head.setStyle("-fx-font-weight: bold; -fx-text-fill: #0d4f6c; -fx-padding: 8 0 0 0;");
+    caseBox.getChildren().add(head);
+    if (lines.isEmpty() && !empty.isEmpty()) {
+      Label none = new Label(empty);
+      none.getStyleClass().add("hint");
+      caseBox.getChildren().add(none);
+    }
+    for (String line : lines) {
+      Label l = new Label(line);
+      l.setWrapText(true);
+      caseBox.getChildren().add(l);
+    }
+  }
+}

@@ -1,0 +1,251 @@
+package com.stagewise.ui.readings;
+
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.Stage;
+import com.stagewise.diagnosis.Suspect;
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.ValuePad;
+import com.stagewise.ui.Words;
+import com.stagewise.ui.drawing.BandChart;
+import com.stagewise.ui.drawing.PackageDrawing;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import javafx.beans.binding.Bindings;
+import javafx.collections.ListChangeListener;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.ProgressIndicator;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+
+/** The readings screen: the pin to probe on the package, the value pad, and what the readings show. */
+public final class ReadingsView {
+  private final ReadingsViewModel model;
+  private final Bench bench;
+  private final HBox root = new HBox(12);
+  private final PackageDrawing drawing = new PackageDrawing();
+  private final VBox suspectsBox = new VBox(6);
+  private String shownPackage = "";
+
+  /** Builds the screen bound to its model. */
+  public ReadingsView(ReadingsViewModel model, Bench bench) {
+    this.model = model;
+    this.bench = bench;
+    root.getStyleClass().add("screen");
+    root.setId("screen-readings");
+    VBox probe = probePanel();
+    probe.setPrefWidth(430);
+    probe.setMinWidth(400);
+    VBox pad = new VBox(10);
+    pad.getStyleClass().add("panel");
+    Label padTitle = new Label("What does the meter show?");
+    padTitle.getStyleClass().add("section-title");
+    ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
+    pad.getChildren().addAll(padTitle, valuePad);
+    pad.setMinWidth(330);
+    VBox results = resultsPanel();
+    HBox.setHgrow(results, Priority.ALWAYS);
+    root.getChildren().addAll(probe, pad, results);
+    model.probeProperty().addListener((o, was, now) -> showProbe(now));
+    bench.readings().addListener((ListChangeListener<Reading>) c -> showPinTexts());
+    model.topSuspects().addListener((ListChangeListener<Suspect>) c -> showSuspects());
+    showProbe(model.probeProperty().get());
+    showSuspects();
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return root;
+  }
+
+  private VBox probePanel() {
+    VBox box = new VBox(8);
+    box.getStyleClass().add("panel");
+    Label heading = new Label("Next probe");
+    heading.getStyleClass().add("section-title");
+    Label call = new Label();
+    call.setId("probe-call");
+    call.getStyleClass().add("probe-call");
+    call.setWrapText(true);
+    call.textProperty().bind(Bindings.createStringBinding(
+        () -> model.probeProperty().get() == null
+            ? (bench.readings().isEmpty() ? "Choose a test point" : "No further probe needed")
+            : model.probeProperty().get().call(),
+        model.probeProperty()));
+    Label title = new Label();
+    title.setId("probe-title");
+    title.setWrapText(true);
+    title.setStyle("-fx-font-weight: bold;");
+    title.textProperty().bind(Bindings.createStringBinding(
+        () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().title(), model.probeProperty()));
+    Label why = new Label();
+    why.setId("probe-why");
+    why.getStyleClass().add("probe-why");
+    why.setWrapText(true);
+    why.textProperty().bind(Bindings.createStringBinding(
+        () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().why(), model.probeProperty()));
+    drawing.setId("package-drawing");
+    drawing.setOnPinChosen(pin -> model.choose(shownPackage + "." + pin));
+    drawing.setMaxWidth(Double.MAX_VALUE);
+    StackPane drawingHolder = new StackPane(drawing);
+    drawingHolder.setMinHeight(230);
+    VBox.setVgrow(drawingHolder, Priority.ALWAYS);
+    ComboBox<ProbePoint> other = new ComboBox<>(model.testPoints());
+    other.setId("other-point");
+    other.setPromptText("Or probe another point …");
+    other.setMaxWidth(Double.MAX_VALUE);
+    other.setCellFactory(v -> new ListCell<>() {
+      @Override
+      protected void updateItem(ProbePoint p, boolean empty) {
+        super.updateItem(p, empty);
+        setText(empty || p == null ? null : p.title());
+      }
+    });
+    other.setButtonCell(other.getCellFactory().call(null));
+    other.setOnAction(e -> {
+      ProbePoint p = other.getValue();
+      if (p != null) {
+        model.choose(p.at());
+        other.getSelectionModel().clearSelection();
+      }
+    });
+    Button suggested = new Button("Back to the suggested probe");
+    suggested.setId("probe-suggested");
+    suggested.setOnAction(e -> model.followSuggestion());
+    box.getChildren().addAll(heading, call, title, why, drawingHolder, other, suggested);
+    return box;
+  }
+
+  private void showProbe(ProbePoint p) {
+    Stage stage = bench.stageProperty().get();
+    if (stage == null) {
+      return;
+    }
+    String pkg = p != null && p.isPin() ? p.packageRef() : stage.packages().isEmpty() ? "" : stage.packages().get(0);
+    if (!pkg.isEmpty() && (!pkg.equals(shownPackage) || drawing.highlighted() == 0 && p != null && p.isPin())) {
+      drawing.show(stage.packageType(pkg).orElseThrow(), pkg, null);
+      shownPackage = pkg;
+      showPinTexts();
+    }
+    drawing.highlight(p != null && p.isPin() ? p.pin() : 0);
+  }
+
+  private void showPinTexts() {
+    Stage stage = bench.stageProperty().get();
+    if (stage == null || shownPackage.isEmpty()) {
+      return;
+    }
+    Map<String, String> pins = stage.pinNets();
+    for (Map.Entry<String, String> pin : pins.entrySet()) {
+      if (!pin.getKey().startsWith(shownPackage + ".")) {
+        continue;
+      }
+      int number = Integer.parseInt(pin.getKey().substring(shownPackage.length() + 1));
+      String text = pin.getValue();
+      for (Reading r : bench.readings()) {
+        if (r.at().equals(pin.getKey()) && r.kind() == Reading.Kind.DC) {
+          text = pin.getValue() + " " + Words.voltsShort(r.value());
+        }
+      }
+      drawing.setPinText(number, text);
+    }
+  }
+
+  private VBox resultsPanel() {
+    VBox box = new VBox(8);
+    box.getStyleClass().add("panel");
+    Label heading = new Label("What the readings show");
+    heading.getStyleClass().add("section-title");
+    ProgressIndicator thinking = new ProgressIndicator();
+    thinking.setPrefSize(28, 28);
+    thinking.visibleProperty().bind(model.thinkingProperty());
+    HBox head = new HBox(10, heading, thinking);
+    head.setAlignment(Pos.CENTER_LEFT);
+    Label verdict = new Label();
+    verdict.setId("readings-verdict");
+    verdict.getStyleClass().add("verdict");
+    verdict.setWrapText(true);
+    verdict.textProperty().bind(model.verdictProperty());
+    suspectsBox.setId("readings-suspects");
+    ListView<ReadingsViewModel.ReadingRow> list = new ListView<>(model.rows());
+    list.setId("readings-list");
+    VBox.setVgrow(list, Priority.ALWAYS);
+    list.setCellFactory(v -> new ReadingCell());
+    Button all = new Button("See all suspects");
+    all.setId("show-suspects");
+    all.getStyleClass().add("primary");
+    all.setMaxWidth(Double.MAX_VALUE);
+    all.disableProperty().bind(Bindings.isEmpty(bench.readings()));
+    all.setOnAction(e -> model.showSuspects());
+    box.getChildren().addAll(head, verdict, suspectsBox, list, all);
+    return box;
+  }
+
+  private void showSuspects() {
+    suspectsBox.getChildren().clear();
+    int rank = 1;
+    for (Suspect s : model.topSuspects()) {
+      Label name = new Label(rank++ + ".  " + Words.fault(s.fault()));
+      name.setStyle("-fx-font-weight: bold;");
+      Region bar = new Region();
+      bar.getStyleClass().add("suspect-bar");
+      bar.setPrefWidth(Math.max(2, 140 * s.probability()));
+      bar.setMinWidth(Region.USE_PREF_SIZE);
+      Region track = new Region();
+      track.getStyleClass().add("suspect-bar-track");
+      track.setPrefWidth(140 * (1 - s.probability()));
+      track.setMinWidth(Region.USE_PREF_SIZE);
+      HBox barRow = new HBox(0, bar, track);
+      barRow.setAlignment(Pos.CENTER_LEFT);
+      Label pct = new Label(Words.percent(s.probability()));
+      pct.setMinWidth(54);
+      Region spring = new Region();
+      HBox.setHgrow(spring, Priority.ALWAYS);
+      HBox row = new HBox(10, name, spring, barRow, pct);
+      row.setAlignment(Pos.CENTER_LEFT);
+      suspectsBox.getChildren().add(row);
+    }
+  }
+
+  /** One reading: its point, its value, and its band chart. */
+  private static final class ReadingCell extends ListCell<ReadingsViewModel.ReadingRow> {
+    private final BandChart chart = new BandChart();
+    private final Label title = new Label();
+    private final VBox box = new VBox(2, title, chart);
+
+    ReadingCell() {
+      title.setWrapText(true);
+      chart.setMaxWidth(Double.MAX_VALUE);
+      chart.setPrefHeight(140);
+      setPrefWidth(0);
+    }
+
+    @Override
+    protected void updateItem(ReadingsViewModel.ReadingRow row, boolean empty) {
+      super.updateItem(row, empty);
+      if (empty || row == null) {
+        setGraphic(null);
+        setText(null);
+        return;
+      }
+      Reading r = row.reading();
+      String value = r.kind() == Reading.Kind.AC ? Words.voltsShort(r.value()) + " AC" : Words.voltsShort(r.value());
+      String state = Double.isNaN(row.healthyLow()) ? "" : row.healthy() ? "  — in the healthy range" : "  — outside the healthy range";
+      title.setText(row.title() + ":  " + value + state);
+      List<BandChart.Marker> markers = new ArrayList<>();
+      row.predictions().forEach((label, volts) -> markers.add(new BandChart.Marker(label, volts)));
+      chart.show(Words.pin(r.at()), row.healthyLow(), row.healthyHigh(), r.value(), markers);
+      setText(null);
+      setGraphic(box);
+    }
+  }
+}

@@ -1,0 +1,349 @@
+package com.stagewise.ui.readings;
+
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.diagnosis.Diagnoser;
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.diagnosis.ProbeAdvice;
+import com.stagewise.diagnosis.Suspect;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.record.ReadingKind;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.StoredSuspect;
+import com.stagewise.history.record.SuspectListRecord;
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.ExpectedVolts;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.ValuePadModel;
+import com.stagewise.ui.Words;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+
+/**
+ * The readings screen: which pin to probe next (rails first, then where the diagnosis learns
+ * most), the value pad for what the meter shows, and after each reading the suspect list and the
+ * next probe, computed in the background.
+ */
+public final class ReadingsViewModel {
+  /** Suspects shown on this screen and marked on the band charts. */
+  public static final int TOP = 3;
+
+  private final Bench bench;
+  private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+  private final ObjectProperty<ProbePoint> probe = new SimpleObjectProperty<>();
+  private final ObservableList<ProbePoint> testPoints = FXCollections.observableArrayList();
+  private final ObservableList<ReadingRow> rows = FXCollections.observableArrayList();
+  private final ObservableList<Suspect> topSuspects = FXCollections.observableArrayList();
+  private final StringProperty verdict = new SimpleStringProperty("");
+  private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
+  private final BooleanProperty thinking = new SimpleBooleanProperty(false);
+  private Diagnoser diagnoser;
+  private Stage diagnoserStage;
+  private boolean probeChosenByHand;
+
+  /** Creates the readings screen's model on a bench. */
+  public ReadingsViewModel(Bench bench) {
+    this.bench = bench;
+    bench.stageProperty().addListener((o, was, now) -> stageChanged(now));
+    if (bench.stageProperty().get() != null) {
+      stageChanged(bench.stageProperty().get());
+    }
+  }
+
+  /**
+   * One reading as listed, with what a healthy stage and the top suspects would read there.
+   *
+   * @param reading the reading
+   * @param title the test point in words
+   * @param healthyLow the low end of the healthy range (NaN when unknown)
+   * @param healthyHigh the high end of the healthy range (NaN when unknown)
+   * @param predictions where the top suspects put this reading: label to volts
+   */
+  public record ReadingRow(Reading reading, String title, double healthyLow, double healthyHigh, Map<String, Double> predictions) {
+    /** Returns whether the reading lies in the healthy range (false when the range is unknown). */
+    public boolean healthy() {
+      return reading.value() >= healthyLow && reading.value() <= healthyHigh;
+    }
+  }
+
+  public ValuePadModel pad() {
+    return pad;
+  }
+
+  public ObjectProperty<ProbePoint> probeProperty() {
+    return probe;
+  }
+
+  public ObservableList<ProbePoint> testPoints() {
+    return testPoints;
+  }
+
+  public ObservableList<ReadingRow> rows() {
+    return rows;
+  }
+
+  public ObservableList<Suspect> topSuspects() {
+    return topSuspects;
+  }
+
+  public StringProperty verdictProperty() {
+    return verdict;
+  }
+
+  public ObjectProperty<ExpectedVolts> expectedProperty() {
+    return expected;
+  }
+
+  /** Returns true while the diagnosis runs. */
+  public BooleanProperty thinkingProperty() {
+    return thinking;
+  }
+
+  private void stageChanged(Stage stage) {
+    diagnoser = null;
+    diagnoserStage = null;
+    probeChosenByHand = false;
+    rows.clear();
+    topSuspects.clear();
+    verdict.set("");
+    expected.set(null);
+    if (stage == null) {
+      testPoints.clear();
+      probe.set(null);
+      return;
+    }
+    testPoints.setAll(ProbePoint.all(stage));
+    probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
+    String boardModel = bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
+    HistoryStore store = bench.store();
+    List<Reading> taken = List.copyOf(bench.readings());
+    bench.tasks().run(
+        "Working out the expected voltages and the fault list",
+        () -> {
+          ExpectedVolts volts = ExpectedVolts.of(stage);
+          Map<String, Integer> counts = boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel);
+          Diagnoser d = Diagnoser.of(stage, counts);
+          Diagnosis diagnosis = taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
+          return new Prepared(stage, volts, d, diagnosis);
+        },
+        prepared -> {
+          if (prepared.stage() != bench.stageProperty().get()) {
+            return;
+          }
+          expected.set(prepared.volts());
+          diagnoser = prepared.diagnoser();
+          diagnoserStage = prepared.stage();
+          if (prepared.diagnosis() != null) {
+            bench.diagnosisProperty().set(prepared.diagnosis());
+          }
+          refresh();
+        },
+        e -> bench.problems().failed("Could not prepare the diagnosis", e, "Check the stage's parts and rails on the Stage screen."));
+  }
+
+  private record Prepared(Stage stage, ExpectedVolts volts, Diagnoser diagnoser, Diagnosis diagnosis) {}
+
+  /** Makes the technician's choice the point to probe (a pin tapped on the drawing, or from the list). */
+  public void choose(String at) {
+    Stage stage = bench.stageProperty().get();
+    if (stage == null) {
+      return;
+    }
+    ProbePoint.of(stage, at, Reading.Kind.DC, 0).ifPresent(p -> {
+      probeChosenByHand = true;
+      probe.set(p.because("Chosen by you."));
+    });
+  }
+
+  /** Returns to the suggested probe after a hand-picked one. */
+  public void followSuggestion() {
+    probeChosenByHand = false;
+    Stage stage = bench.stageProperty().get();
+    if (stage != null) {
+      probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
+    }
+  }
+
+  /**
+   * Adds what the pad shows as a reading at the probe point, then re-ranks the suspects and picks
+   * the next probe in the background, and stores both in the case.
+   */
+  public void addReading() {
+    ProbePoint at = probe.get();
+    Double value = pad.valueProperty().get();
+    Stage stage = bench.stageProperty().get();
+    if (at == null || stage == null) {
+      bench.problems().show("Nothing to probe", "There is no test point chosen.", "Tap a pin on the package, or choose a test point from the list.");
+      return;
+    }
+    if (value == null) {
+      bench.problems().show("Type the reading first", "The pad shows no value.", "Type what the meter shows, e.g. 14.96 or -0.62, then tap Add reading.");
+      return;
+    }
+    Reading reading;
+    try {
+      reading = at.kind() == Reading.Kind.AC ? Reading.ac(at.at(), Math.abs(value), at.hz()) : Reading.dc(at.at(), value);
+    } catch (InvalidInputException e) {
+      bench.problems().show("Not a reading", e.getMessage(), "Check the value on the meter and type it again.");
+      return;
+    }
+    bench.readings().add(reading);
+    pad.press(ValuePadModel.CLEAR);
+    probeChosenByHand = false;
+    diagnoseAndStore(stage, reading);
+  }
+
+  private void diagnoseAndStore(Stage stage, Reading added) {
+    List<Reading> taken = List.copyOf(bench.readings());
+    String caseId = bench.openCaseProperty().get().id();
+    Diagnoser ready = diagnoserStage == stage ? diagnoser : null;
+    String boardModel = bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
+    HistoryStore store = bench.store();
+    thinking.set(true);
+    bench.tasks().run(
+        "Ranking the suspects",
+        () -> {
+          Diagnoser d = ready != null ? ready : Diagnoser.of(stage, boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel));
+          Diagnosis diagnosis = d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
+          Instant now = Instant.now();
+          StoredReading stored = new StoredReading(HistoryStore.newId(), caseId, added.at(),
+              added.kind() == Reading.Kind.AC ? ReadingKind.AC : ReadingKind.DC, added.value(),
+              added.kind() == Reading.Kind.AC ? added.hz() : null, null, meterText(), now);
+          store.addReadings(caseId, List.of(stored), suspectList(caseId, now, diagnosis));
+          return diagnosis;
+        },
+        diagnosis -> {
+          thinking.set(false);
+          if (bench.stageProperty().get() == stage) {
+            bench.diagnosisProperty().set(diagnosis);
+            refresh();
+          }
+        },
+        e -> {
+          thinking.set(false);
+          bench.readings().remove(added);
+          refresh();
+          bench.problems().failed("Could not take this reading", e,
+              "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
+        });
+  }
+
+  private static String meterText() {
+    MeterSpec m = MeterSpec.DEFAULT;
+    return String.format(Locale.ROOT, "±(%s %% + %d counts), %d counts", trimNumber(m.percent()), m.counts(), m.displayCounts());
+  }
+
+  private static String trimNumber(double v) {
+    return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+  }
+
+  /** Returns the suspect list as the history keeps it. */
+  static SuspectListRecord suspectList(String caseId, Instant at, Diagnosis diagnosis) {
+    List<StoredSuspect> suspects = new ArrayList<>();
+    int rank = 1;
+    for (Suspect s : diagnosis.suspects()) {
+      suspects.add(new StoredSuspect(s.fault(), s.probability(), s.group(), s.why(), rank++));
+    }
+    StringBuilder probes = new StringBuilder();
+    for (ProbeAdvice p : diagnosis.nextProbes()) {
+      if (probes.length() > 0) {
+        probes.append('\n');
+      }
+      probes.append(p.at()).append(' ').append(p.kind().word())
+          .append(String.format(Locale.ROOT, " %.2f bits", p.bits())).append(": ").append(p.why());
+    }
+    String version = ReadingsViewModel.class.getPackage().getImplementationVersion();
+    return new SuspectListRecord(HistoryStore.newId(), caseId, at, version == null ? "development build" : version,
+        diagnosis.verdict().word(), suspects, probes.toString());
+  }
+
+  /** Rebuilds the rows, the top suspects and the next probe from the bench. */
+  void refresh() {
+    Stage stage = bench.stageProperty().get();
+    Diagnosis diagnosis = bench.diagnosisProperty().get();
+    ExpectedVolts volts = expected.get();
+    List<Suspect> top = diagnosis == null ? List.of() : diagnosis.suspects().stream().limit(TOP).toList();
+    topSuspects.setAll(top);
+    verdict.set(diagnosis == null || bench.readings().isEmpty() ? "" : verdictLine(diagnosis));
+    List<ReadingRow> list = new ArrayList<>();
+    for (Reading r : bench.readings()) {
+      double low = Double.NaN;
+      double high = Double.NaN;
+      if (volts != null && volts.solved() && r.kind() == Reading.Kind.DC && volts.nominal().containsKey(r.at())) {
+        low = volts.low().get(r.at());
+        high = volts.high().get(r.at());
+      }
+      Map<String, Double> predictions = new java.util.LinkedHashMap<>();
+      for (Suspect s : top) {
+        Double v = s.predicted().get(r.at());
+        if (v != null && !s.fault().equals("healthy")) {
+          predictions.put(Words.fault(s.fault()), v);
+        }
+      }
+      String title = stage == null ? r.at() : ProbePoint.of(stage, r.at(), r.kind(), r.hz()).map(ProbePoint::title).orElse(r.at());
+      list.add(new ReadingRow(r, title, low, high, predictions));
+    }
+    // Newest first: the reading just taken is where the eye goes.
+    java.util.Collections.reverse(list);
+    rows.setAll(list);
+    if (stage != null && !probeChosenByHand) {
+      probe.set(nextProbe(stage, diagnosis));
+    }
+  }
+
+  static String verdictLine(Diagnosis diagnosis) {
+    return switch (diagnosis.verdict()) {
+      case HEALTHY -> "The readings fit a healthy stage.";
+      case FAULT -> diagnosis.suspects().isEmpty()
+          ? "The readings show a fault."
+          : "Most likely: " + Words.fault(diagnosis.suspects().get(0).fault()) + " (" + Words.percent(diagnosis.suspects().get(0).probability()) + ")";
+      case INCONCLUSIVE -> "Not clear yet: take the next probe.";
+    };
+  }
+
+  /**
+   * Returns the point to probe next: the first supply pin not yet read, then the diagnosis's best
+   * probe, else null when there is nothing more worth probing.
+   */
+  ProbePoint nextProbe(Stage stage, Diagnosis diagnosis) {
+    for (ProbePoint rail : ProbePoint.rails(stage)) {
+      if (!isRead(rail.at(), Reading.Kind.DC)) {
+        return rail;
+      }
+    }
+    if (diagnosis == null || bench.readings().isEmpty()) {
+      return null;
+    }
+    for (ProbeAdvice advice : diagnosis.nextProbes()) {
+      Optional<ProbePoint> point = ProbePoint.of(stage, advice.at(), advice.kind(), advice.hz());
+      if (point.isPresent()) {
+        return point.get().because(advice.why());
+      }
+    }
+    return null;
+  }
+
+  private boolean isRead(String at, Reading.Kind kind) {
+    return bench.readings().stream().anyMatch(r -> r.at().equals(at) && r.kind() == kind);
+  }
+
+  /** Goes on to the suspects screen. */
+  public void showSuspects() {
+    bench.go(Step.SUSPECTS);
+  }
+}

@@ -1,0 +1,201 @@
+package com.stagewise.ui.suspects;
+
+import com.stagewise.ui.Words;
+import javafx.beans.binding.Bindings;
+import javafx.collections.ListChangeListener;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/** The suspects screen: the ranked list, and the chosen suspect's voltages beside the measured ones. */
+public final class SuspectsView {
+  private final SuspectsViewModel model;
+  private final HBox root = new HBox(12);
+  private final GridPane table = new GridPane();
+
+  /** Builds the screen bound to its model. */
+  public SuspectsView(SuspectsViewModel model) {
+    this.model = model;
+    root.getStyleClass().add("screen");
+    root.setId("screen-suspects");
+    VBox left = listPanel();
+    left.setPrefWidth(640);
+    HBox.setHgrow(left, Priority.ALWAYS);
+    VBox right = detailPanel();
+    right.setPrefWidth(560);
+    right.setMinWidth(500);
+    root.getChildren().addAll(left, right);
+    model.comparison().addListener((ListChangeListener<SuspectsViewModel.PointRow>) c -> showTable());
+    model.selectedProperty().addListener((o, was, now) -> showTable());
+    showTable();
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return root;
+  }
+
+  private VBox listPanel() {
+    VBox box = new VBox(8);
+    box.getStyleClass().add("panel");
+    Label title = new Label("Suspects, most likely first");
+    title.getStyleClass().add("section-title");
+    Label verdict = new Label();
+    verdict.setId("suspects-verdict");
+    verdict.getStyleClass().add("verdict");
+    verdict.setWrapText(true);
+    verdict.textProperty().bind(model.verdictProperty());
+    ListView<SuspectsViewModel.SuspectRow> list = new ListView<>(model.suspects());
+    list.setId("suspect-list");
+    VBox.setVgrow(list, Priority.ALWAYS);
+    list.setCellFactory(v -> new SuspectCell());
+    list.getSelectionModel().selectedItemProperty().addListener((o, was, row) -> {
+      if (row != null && row != model.selectedProperty().get()) {
+        model.selectedProperty().set(row);
+      }
+    });
+    model.selectedProperty().addListener((o, was, row) -> {
+      if (row != null && list.getSelectionModel().getSelectedItem() != row) {
+        list.getSelectionModel().select(row);
+      }
+    });
+    Label findings = new Label();
+    findings.setId("suspects-findings");
+    findings.setWrapText(true);
+    findings.getStyleClass().add("hint");
+    findings.textProperty().bind(model.findingsProperty());
+    box.getChildren().addAll(title, verdict, list, findings);
+    return box;
+  }
+
+  private VBox detailPanel() {
+    VBox box = new VBox(10);
+    box.getStyleClass().add("panel");
+    Label title = new Label();
+    title.setId("suspect-chosen");
+    title.getStyleClass().add("section-title");
+    title.setWrapText(true);
+    title.textProperty().bind(Bindings.createStringBinding(
+        () -> model.selectedProperty().get() == null ? "Volts at each test point" : "If it is " + model.selectedProperty().get().title() + ":",
+        model.selectedProperty()));
+    table.setId("suspect-volts");
+    table.setHgap(18);
+    table.setVgap(4);
+    ScrollPane scroll = new ScrollPane(table);
+    scroll.setFitToWidth(true);
+    VBox.setVgrow(scroll, Priority.ALWAYS);
+    Label checkTitle = new Label("To confirm the first suspect");
+    checkTitle.getStyleClass().add("section-title");
+    Label check = new Label();
+    check.setId("confirming-check");
+    check.setWrapText(true);
+    check.textProperty().bind(model.confirmingCheckProperty());
+    Label caution = new Label("Unplug the unit and discharge the capacitors before any ohms check.");
+    caution.setWrapText(true);
+    caution.setStyle("-fx-text-fill: #8a4b00; -fx-font-weight: bold;");
+    Button back = new Button("More readings");
+    back.setId("suspects-more");
+    back.setOnAction(e -> model.moreReadings());
+    Button close = new Button("Close out with this fault");
+    close.setId("suspects-close-out");
+    close.getStyleClass().add("primary");
+    close.disableProperty().bind(model.selectedProperty().isNull());
+    close.setOnAction(e -> model.closeOutWithSelected());
+    box.getChildren().addAll(title, scroll, checkTitle, check, caution, new HBox(10, back, close));
+    return box;
+  }
+
+  private void showTable() {
+    table.getChildren().clear();
+    String[] heads = {"Test point", "Healthy", "Measured", model.selectedProperty().get() == null ? "Suspect" : "If this suspect"};
+    for (int c = 0; c < heads.length; c++) {
+      Label head = new Label(heads[c]);
+      head.setStyle("-fx-font-weight: bold;");
+      table.add(head, c, 0);
+    }
+    int row = 1;
+    for (SuspectsViewModel.PointRow p : model.comparison()) {
+      table.add(new Label(Words.pin(p.at())), 0, row);
+      table.add(mono(Words.voltsShort(p.healthy())), 1, row);
+      Label measured = mono(Double.isNaN(p.measured()) ? "not read" : Words.voltsShort(p.measured()));
+      if (!Double.isNaN(p.measured())) {
+        measured.setStyle(measured.getStyle() + "-fx-font-weight: bold;");
+      }
+      table.add(measured, 2, row);
+      Label predicted = mono(Words.voltsShort(p.predicted()));
+      predicted.setStyle(predicted.getStyle() + "-fx-text-fill: #0d4f6c;");
+      table.add(predicted, 3, row);
+      row++;
+    }
+  }
+
+  private static Label mono(String text) {
+    Label label = new Label(text);
+    label.setStyle("-fx-font-family: 'DejaVu Sans Mono', monospace;");
+    return label;
+  }
+
+  /** One suspect: rank, name, probability bar, why, group, estimate. */
+  private static final class SuspectCell extends ListCell<SuspectsViewModel.SuspectRow> {
+    SuspectCell() {
+      setPrefWidth(0);
+    }
+
+    @Override
+    protected void updateItem(SuspectsViewModel.SuspectRow row, boolean empty) {
+      super.updateItem(row, empty);
+      if (empty || row == null) {
+        setGraphic(null);
+        setText(null);
+        return;
+      }
+      Label name = new Label(row.rank() + ".  " + row.title());
+      name.getStyleClass().add("suspect-name");
+      Region bar = new Region();
+      bar.getStyleClass().add("suspect-bar");
+      bar.setPrefWidth(Math.max(2, 200 * row.suspect().probability()));
+      bar.setMinWidth(Region.USE_PREF_SIZE);
+      Region track = new Region();
+      track.getStyleClass().add("suspect-bar-track");
+      track.setPrefWidth(200 * (1 - row.suspect().probability()));
+      track.setMinWidth(Region.USE_PREF_SIZE);
+      Label pct = new Label(Words.percent(row.suspect().probability()));
+      pct.setStyle("-fx-font-weight: bold;");
+      Region spring = new Region();
+      HBox.setHgrow(spring, Priority.ALWAYS);
+      HBox head = new HBox(8, name, spring, new HBox(0, bar, track), pct);
+      head.setAlignment(Pos.CENTER_LEFT);
+      VBox box = new VBox(3, head);
+      Label why = new Label(row.suspect().why());
+      why.setWrapText(true);
+      box.getChildren().add(why);
+      if (!row.group().isEmpty()) {
+        Label group = new Label("Cannot yet be told apart from: " + row.group());
+        group.setWrapText(true);
+        group.setStyle("-fx-font-style: italic;");
+        box.getChildren().add(group);
+      }
+      if (!row.estimate().isEmpty()) {
+        Label estimate = new Label(row.estimate());
+        estimate.setStyle("-fx-font-weight: bold;");
+        box.getChildren().add(estimate);
+      }
+      if (!row.suspect().consistent()) {
+        Label off = new Label("Does not explain every reading.");
+        off.getStyleClass().add("hint");
+        box.getChildren().add(off);
+      }
+      setText(null);
+      setGraphic(box);
+    }
+  }
+}
