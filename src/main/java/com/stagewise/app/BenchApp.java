@@ -108,6 +108,11 @@ public final class BenchApp {
     }
   }
 
+  /** Returns true when no background work is queued or running (call on the FX thread). */
+  boolean idle() {
+    return tasks.pendingProperty().get() == 0;
+  }
+
   /** Stops the background thread. */
   void close() {
     tasks.close();

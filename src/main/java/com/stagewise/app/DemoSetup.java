@@ -2,6 +2,7 @@ package com.stagewise.app;
 
 import com.stagewise.circuit.Stage;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.demo.DemoHistory;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.interchange.StageSheet;
 import com.stagewise.ui.BoardFlags;
@@ -18,10 +19,16 @@ final class DemoSetup {
   private DemoSetup() {}
 
   /**
-   * Adds every stage sheet in {@code stages} to its board model's library (the model is made when
-   * new), then the demo units and cases.
+   * Fills an empty history with the demo shop (board models, units, cases), marks its board
+   * models mains-powered (a mixing desk and a bench supply both plug into the mains), then adds
+   * every stage sheet in {@code stages} that its board model's library lacks (the model is made
+   * when new).
    */
   static void fill(HistoryStore store, BoardFlags flags, Path stages) {
+    DemoHistory.fill(store);
+    for (String model : List.of(DemoHistory.MIXER, DemoHistory.SUPPLY)) {
+      store.findBoardModel(model).ifPresent(m -> flags.setMainsPowered(m.id(), true));
+    }
     for (Path file : sheets(stages)) {
       String json;
       try {
@@ -32,7 +39,10 @@ final class DemoSetup {
       Stage stage = StageSheet.read(json, file.toString());
       String board = stage.board().isBlank() ? "Demo boards" : stage.board();
       BoardModel model = store.boardModel(board, "");
-      store.addStageSheet(model.id(), stage.title(), json);
+      boolean known = store.stageSheets(model.id()).stream().anyMatch(sheet -> sheet.title().equals(stage.title()));
+      if (!known) {
+        store.addStageSheet(model.id(), stage.title(), json);
+      }
     }
   }
 

@@ -156,9 +156,9 @@ public final class Bench {
     if (unit.get() == null || !unit.get().id().equals(newUnit.id())) {
       clearCase();
     }
-    unit.set(newUnit);
     boardModel.set(model);
     mainsPowered.set(boardFlags.isMainsPowered(model.id()));
+    unit.set(newUnit);
   }
 
   /** Starts working on a case of the unit on the bench, with no stage and no readings yet. */

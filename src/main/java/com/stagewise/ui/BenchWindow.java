@@ -166,6 +166,7 @@ public final class BenchWindow {
                   return text;
                 },
                 bench.unitProperty(),
+                bench.boardModelProperty(),
                 bench.openCaseProperty(),
                 bench.stageProperty(),
                 bench.stepProperty()));
@@ -190,6 +191,7 @@ public final class BenchWindow {
     text.setId("working");
     var busy = Bindings.createBooleanBinding(() -> pending.get() > 0, pending);
     progress.visibleProperty().bind(busy);
+    progress.managedProperty().bind(busy);
     text.textProperty()
         .bind(Bindings.createStringBinding(() -> pending.get() > 0 ? working.get() + " …" : "Ready.", pending, working));
     Pane spring = new Pane();

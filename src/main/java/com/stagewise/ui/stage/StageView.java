@@ -33,13 +33,13 @@ public final class StageView {
     root.getStyleClass().add("screen");
     root.setId("screen-stage");
     VBox library = libraryPanel();
-    library.setPrefWidth(290);
-    library.setMinWidth(260);
+    library.setPrefWidth(250);
+    library.setMinWidth(230);
     VBox middle = middlePanel();
     HBox.setHgrow(middle, Priority.ALWAYS);
     VBox editor = editorPanel();
-    editor.setPrefWidth(380);
-    editor.setMinWidth(360);
+    editor.setPrefWidth(430);
+    editor.setMinWidth(430);
     root.getChildren().addAll(library, middle, editor);
     model.expectedProperty().addListener((o, was, now) -> showExpected(now));
   }
@@ -148,7 +148,10 @@ public final class StageView {
       if (net.getKey().contains(".")) {
         continue;
       }
-      Label label = new Label(net.getKey() + "  " + Words.voltsShort(net.getValue()));
+      double low = expected.low().getOrDefault(net.getKey(), net.getValue());
+      double high = expected.high().getOrDefault(net.getKey(), net.getValue());
+      String range = high - low < 0.0105 ? "" : "  (" + Words.voltsShort(low).replace(" V", "") + " … " + Words.voltsShort(high) + ")";
+      Label label = new Label(net.getKey() + "  " + Words.voltsShort(net.getValue()) + range);
       label.setStyle("-fx-font-size: 19px; -fx-font-family: 'DejaVu Sans Mono', monospace;");
       label.setPadding(new Insets(2, 10, 2, 10));
       label.setStyle(label.getStyle() + "-fx-background-color: #e4e9ed;");

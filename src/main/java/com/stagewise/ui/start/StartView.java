@@ -147,6 +147,11 @@ public final class StartView {
     VBox.setVgrow(cases, Priority.ALWAYS);
     cases.setCellFactory(
         v -> new ListCell<>() {
+          {
+            // A cell no wider than the list, so long symptoms wrap instead of scrolling sideways.
+            setPrefWidth(0);
+          }
+
           @Override
           protected void updateItem(StartViewModel.CaseLine line, boolean empty) {
             super.updateItem(line, empty);

@@ -244,7 +244,7 @@ public final class StartViewModel {
               Words.date(rc.openedAt()),
               rc.symptom(),
               open ? "open" : Words.outcome(rc.outcome()),
-              String.join(", ", rc.confirmedFaults()),
+              String.join(", ", rc.confirmedFaults().stream().map(Words::fault).toList()),
               String.join(", ", replaced),
               open));
     }
