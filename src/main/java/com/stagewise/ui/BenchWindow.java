@@ -158,10 +158,10 @@ public final class BenchWindow {
                   String text =
                       "Unit " + bench.unitProperty().get().serial() + " (" + bench.boardModelProperty().get().name() + ")";
                   if (bench.openCaseProperty().get() != null) {
-                    text += "   ·   Case: " + bench.openCaseProperty().get().symptom();
+                    text += "  ·  Case: " + bench.openCaseProperty().get().symptom();
                   }
                   if (bench.stageProperty().get() != null && bench.openCaseProperty().get() != null) {
-                    text += "   ·   Stage: " + bench.stageProperty().get().title();
+                    text += "  ·  Stage: " + bench.stageProperty().get().title();
                   }
                   return text;
                 },
@@ -170,8 +170,10 @@ public final class BenchWindow {
                 bench.openCaseProperty(),
                 bench.stageProperty(),
                 bench.stepProperty()));
-    Label mains = new Label("Mains-powered unit: lethal voltages");
+    Label mains = new Label("Mains-powered: lethal voltages");
     mains.getStyleClass().add("mains");
+    mains.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+    what.setMinWidth(0);
     mains.visibleProperty().bind(bench.mainsPoweredProperty().and(bench.unitProperty().isNotNull()));
     mains.managedProperty().bind(mains.visibleProperty());
     Region spring = new Region();

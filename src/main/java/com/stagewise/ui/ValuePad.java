@@ -55,7 +55,12 @@ public final class ValuePad extends VBox {
     enter.disableProperty().bind(model.valueProperty().isNull());
     layoutKeys(idPrefix);
     model.quantityProperty().addListener((o, a, b) -> layoutKeys(idPrefix));
-    getChildren().addAll(display, new HBox(12, reading, problem), hint, keys, enter);
+    Label legend = new Label();
+    legend.getStyleClass().add("hint");
+    legend.setWrapText(true);
+    legend.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(
+        () -> legend(model.quantityProperty().get()), model.quantityProperty()));
+    getChildren().addAll(display, new HBox(12, reading, problem), hint, keys, legend, enter);
   }
 
   /** Returns the display field (to focus it). */
@@ -88,15 +93,15 @@ public final class ValuePad extends VBox {
   }
 
   private static String prefixLabel(String prefix) {
-    return switch (prefix) {
-      case "R" -> "R (Ω)";
-      case "k" -> "k (kilo)";
-      case "M" -> "M (mega)";
-      case "p" -> "p (pico)";
-      case "n" -> "n (nano)";
-      case "u" -> "µ (micro)";
-      case "m" -> "m (milli)";
-      default -> prefix;
+    return prefix.equals("u") ? "µ" : prefix;
+  }
+
+  /** Returns the line that says what the letter keys mean. */
+  static String legend(ValuePadModel.Quantity quantity) {
+    return switch (quantity) {
+      case OHMS -> "R marks the point in ohms (4R7 = 4.7 Ω), k = kilo (4k7 = 4.7 kΩ), M = mega.";
+      case FARADS -> "p = pico, n = nano, µ = micro (100n = 100 nF, 2u2 = 2.2 µF).";
+      case VOLTS -> "m = milli (350m = 0.35 V), µ = micro, ± changes the sign.";
     };
   }
 

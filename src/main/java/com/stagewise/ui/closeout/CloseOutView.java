@@ -91,6 +91,10 @@ public final class CloseOutView {
     add.getStyleClass().add("primary");
     add.setOnAction(e -> model.addAction());
     Keypad keypad = new Keypad(model.actionPartProperty(), "action");
+    ToggleButton showKeys = new ToggleButton("Keypad");
+    showKeys.setId("action-keypad");
+    keypad.visibleProperty().bind(showKeys.selectedProperty());
+    keypad.managedProperty().bind(showKeys.selectedProperty());
     keypad.follow(part);
     keypad.follow(oldValue);
     keypad.follow(newValue);
@@ -108,7 +112,8 @@ public final class CloseOutView {
     });
     Label recorded = new Label("Recorded in this case");
     recorded.setStyle("-fx-font-weight: bold;");
-    box.getChildren().addAll(title, kindRow, form, add, keypad, recorded, list);
+    HBox addRow = new HBox(8, add, showKeys);
+    box.getChildren().addAll(title, kindRow, form, addRow, keypad, recorded, list);
     return box;
   }
 

@@ -32,8 +32,8 @@ public final class HistoryView {
     root.setId("screen-history");
     list = new ListView<>(model.hits());
     VBox left = searchPanel();
-    left.setPrefWidth(600);
-    left.setMinWidth(560);
+    left.setPrefWidth(640);
+    left.setMinWidth(640);
     VBox right = new VBox(8);
     right.getStyleClass().add("panel");
     caseBox.setId("history-case");
@@ -94,6 +94,11 @@ public final class HistoryView {
     list.setId("history-hits");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new ListCell<>() {
+      {
+        setPrefWidth(0);
+        setWrapText(true);
+      }
+
       @Override
       protected void updateItem(SearchHit hit, boolean empty) {
         super.updateItem(hit, empty);
@@ -102,7 +107,7 @@ public final class HistoryView {
           return;
         }
         String end = hit.outcome() == null ? "open" : Words.outcome(hit.outcome());
-        String found = hit.confirmedFaults().isEmpty() ? "" : "  · " + String.join(", ", hit.confirmedFaults());
+        String found = hit.confirmedFaults().isEmpty() ? "" : ": " + String.join(", ", hit.confirmedFaults().stream().map(Words::fault).toList());
         setText(Words.date(hit.openedAt()) + "  " + hit.serial() + " (" + hit.boardModel() + ")  · " + end + found + "\n" + hit.symptom());
       }
     });

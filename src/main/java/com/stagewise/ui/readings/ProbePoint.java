@@ -55,9 +55,31 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
       return Optional.of(new ProbePoint(at, kind, hz, pkg, pin, pinTitle(stage, pkg, pin, pins.get(at)), ""));
     }
     if (stage.nets().contains(at)) {
-      return Optional.of(new ProbePoint(at, kind, hz, "", 0, "Net " + at, ""));
+      return Optional.of(new ProbePoint(at, kind, hz, "", 0, netTitle(stage, at, pins), ""));
     }
     return Optional.empty();
+  }
+
+  /** Returns where a net can be found: "Net SUM — at R1, R2 and U1 pin 2". */
+  private static String netTitle(Stage stage, String net, Map<String, String> pins) {
+    List<String> places = new ArrayList<>();
+    stage.parts().stream().filter(p -> p.touches(net)).forEach(p -> places.add(p.ref()));
+    pins.forEach((pin, n) -> {
+      if (n.equals(net)) {
+        places.add(Words.pin(pin));
+      }
+    });
+    if (stage.rail(net).isPresent()) {
+      places.add(0, "the supply rail");
+    } else if (stage.input(net).isPresent()) {
+      places.add(0, "the stage's input");
+    }
+    if (places.isEmpty()) {
+      return "Net " + net;
+    }
+    String list = places.size() == 1 ? places.get(0)
+        : String.join(", ", places.subList(0, places.size() - 1)) + " and " + places.get(places.size() - 1);
+    return "Net " + net + " — at " + list;
   }
 
   private static String pinTitle(Stage stage, String pkg, int pin, String net) {

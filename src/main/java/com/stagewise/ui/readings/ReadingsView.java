@@ -43,8 +43,8 @@ public final class ReadingsView {
     root.getStyleClass().add("screen");
     root.setId("screen-readings");
     VBox probe = probePanel();
-    probe.setPrefWidth(430);
-    probe.setMinWidth(400);
+    probe.setPrefWidth(370);
+    probe.setMinWidth(360);
     VBox pad = new VBox(10);
     pad.getStyleClass().add("panel");
     Label padTitle = new Label("What does the meter show?");
@@ -196,13 +196,14 @@ public final class ReadingsView {
     for (Suspect s : model.topSuspects()) {
       Label name = new Label(rank++ + ".  " + Words.fault(s.fault()));
       name.setStyle("-fx-font-weight: bold;");
+      name.setMinWidth(0);
       Region bar = new Region();
       bar.getStyleClass().add("suspect-bar");
-      bar.setPrefWidth(Math.max(2, 140 * s.probability()));
+      bar.setPrefWidth(Math.max(2, 90 * s.probability()));
       bar.setMinWidth(Region.USE_PREF_SIZE);
       Region track = new Region();
       track.getStyleClass().add("suspect-bar-track");
-      track.setPrefWidth(140 * (1 - s.probability()));
+      track.setPrefWidth(90 * (1 - s.probability()));
       track.setMinWidth(Region.USE_PREF_SIZE);
       HBox barRow = new HBox(0, bar, track);
       barRow.setAlignment(Pos.CENTER_LEFT);

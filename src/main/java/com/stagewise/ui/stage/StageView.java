@@ -57,7 +57,7 @@ public final class StageView {
   private VBox libraryPanel() {
     VBox box = new VBox(10);
     box.getStyleClass().add("panel");
-    Label title = new Label("Stages of this board");
+    Label title = new Label("Stage library");
     title.getStyleClass().add("section-title");
     ListView<StageViewModel.LibraryEntry> list = new ListView<>(model.library());
     list.setId("stage-library");

@@ -68,6 +68,9 @@ public final class SuspectsView {
         list.getSelectionModel().select(row);
       }
     });
+    if (model.selectedProperty().get() != null) {
+      list.getSelectionModel().select(model.selectedProperty().get());
+    }
     Label findings = new Label();
     findings.setId("suspects-findings");
     findings.setWrapText(true);
