@@ -12,6 +12,7 @@ import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
@@ -57,12 +58,27 @@ public final class StageView {
   private VBox libraryPanel() {
     VBox box = new VBox(10);
     box.getStyleClass().add("panel");
-    Label title = new Label("Stage library");
-    title.getStyleClass().add("section-title");
+    ToggleGroup source = new ToggleGroup();
+    ToggleButton fromLibrary = new ToggleButton("Library");
+    fromLibrary.setId("stage-from-library");
+    ToggleButton fromTemplate = new ToggleButton("Template");
+    fromTemplate.setId("stage-from-template");
+    fromLibrary.setToggleGroup(source);
+    fromTemplate.setToggleGroup(source);
+    fromLibrary.setSelected(true);
+    source.selectedToggleProperty().addListener((o, was, now) -> {
+      if (now == null) {
+        was.setSelected(true);
+      }
+    });
     ListView<StageViewModel.LibraryEntry> list = new ListView<>(model.library());
     list.setId("stage-library");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new ListCell<>() {
+      {
+        setPrefWidth(0);
+      }
+
       @Override
       protected void updateItem(StageViewModel.LibraryEntry entry, boolean empty) {
         super.updateItem(entry, empty);
@@ -79,8 +95,66 @@ public final class StageView {
     note.getStyleClass().add("hint");
     note.setWrapText(true);
     note.textProperty().bind(model.libraryNoteProperty());
-    box.getChildren().addAll(title, list, note);
+    VBox libraryBox = new VBox(8, list, note);
+    VBox.setVgrow(libraryBox, Priority.ALWAYS);
+    VBox templateBox = templatePanel();
+    VBox.setVgrow(templateBox, Priority.ALWAYS);
+    libraryBox.visibleProperty().bind(fromLibrary.selectedProperty());
+    libraryBox.managedProperty().bind(fromLibrary.selectedProperty());
+    templateBox.visibleProperty().bind(fromTemplate.selectedProperty());
+    templateBox.managedProperty().bind(fromTemplate.selectedProperty());
+    box.getChildren().addAll(new HBox(6, fromLibrary, fromTemplate), libraryBox, templateBox);
     return box;
+  }
+
+  private VBox templatePanel() {
+    ListView<com.stagewise.circuit.template.StageTemplate> templates = new ListView<>(model.templates());
+    templates.setId("stage-templates");
+    templates.setPrefHeight(220);
+    templates.setCellFactory(v -> new ListCell<>() {
+      {
+        setPrefWidth(0);
+      }
+
+      @Override
+      protected void updateItem(com.stagewise.circuit.template.StageTemplate t, boolean empty) {
+        super.updateItem(t, empty);
+        setText(empty || t == null ? null : t.title());
+        setWrapText(true);
+      }
+    });
+    templates.getSelectionModel().selectedItemProperty().addListener((o, was, t) -> model.templateProperty().set(t));
+    VBox form = new VBox(4);
+    form.setId("template-form");
+    model.parameters().addListener((javafx.collections.ListChangeListener<StageViewModel.ParameterEntry>) c -> {
+      form.getChildren().clear();
+      var t = model.templateProperty().get();
+      if (t != null) {
+        Label about = new Label(t.description());
+        about.getStyleClass().add("hint");
+        about.setWrapText(true);
+        form.getChildren().add(about);
+      }
+      for (StageViewModel.ParameterEntry entry : model.parameters()) {
+        Label label = new Label(entry.label());
+        label.setWrapText(true);
+        label.setStyle("-fx-font-size: 15px;");
+        TextField field = new TextField();
+        field.setId("template-" + entry.parameter().name());
+        field.textProperty().bindBidirectional(entry.value());
+        form.getChildren().addAll(label, field);
+      }
+    });
+    ScrollPane scroll = new ScrollPane(form);
+    scroll.setFitToWidth(true);
+    VBox.setVgrow(scroll, Priority.ALWAYS);
+    Button build = new Button("Build the stage");
+    build.setId("template-build");
+    build.getStyleClass().add("primary");
+    build.setMaxWidth(Double.MAX_VALUE);
+    build.disableProperty().bind(model.templateProperty().isNull());
+    build.setOnAction(e -> model.buildFromTemplate());
+    return new VBox(8, templates, scroll, build);
   }
 
   private VBox middlePanel() {

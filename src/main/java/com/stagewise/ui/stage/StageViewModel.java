@@ -4,6 +4,9 @@ import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.template.Parameter;
+import com.stagewise.circuit.template.StageTemplate;
+import com.stagewise.circuit.template.Templates;
 import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
 import com.stagewise.history.record.BoardModel;
@@ -16,6 +19,8 @@ import com.stagewise.ui.Step;
 import com.stagewise.ui.ValuePadModel;
 import com.stagewise.ui.Words;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.List;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
@@ -39,6 +44,10 @@ public final class StageViewModel {
   private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
   private final DecoderModel decoder = new DecoderModel();
+  private final ObservableList<StageTemplate> templates = FXCollections.observableArrayList(Templates.all());
+  private final ObjectProperty<StageTemplate> template = new SimpleObjectProperty<>();
+  private final ObservableList<ParameterEntry> parameters = FXCollections.observableArrayList();
+  private boolean builtFromTemplate;
 
   /** Creates the stage screen's model on a bench. */
   public StageViewModel(Bench bench) {
@@ -56,6 +65,69 @@ public final class StageViewModel {
       }
     });
     bench.boardModelProperty().addListener((o, was, now) -> library.clear());
+    template.addListener((o, was, now) -> {
+      List<ParameterEntry> entries = new ArrayList<>();
+      if (now != null) {
+        for (Parameter p : now.parameters()) {
+          entries.add(new ParameterEntry(p, new SimpleStringProperty(p.defaultValue())));
+        }
+      }
+      parameters.setAll(entries);
+    });
+  }
+
+  /**
+   * One parameter of the chosen template with the value typed for it.
+   *
+   * @param parameter the parameter
+   * @param value the value text, as in stage sheets ({@code 4k7}); starts at the default
+   */
+  public record ParameterEntry(Parameter parameter, StringProperty value) {
+    /** Returns the label shown beside the field, e.g. "Rf — feedback resistor (Ω)". */
+    public String label() {
+      return parameter.name() + " — " + parameter.meaning() + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
+    }
+  }
+
+  public ObservableList<StageTemplate> templates() {
+    return templates;
+  }
+
+  public ObjectProperty<StageTemplate> templateProperty() {
+    return template;
+  }
+
+  public ObservableList<ParameterEntry> parameters() {
+    return parameters;
+  }
+
+  /**
+   * Builds a stage from the chosen template and the values typed, for the board model on the
+   * bench; it joins the board model's library when it is used.
+   */
+  public void buildFromTemplate() {
+    StageTemplate chosen = template.get();
+    if (chosen == null) {
+      bench.problems().show("Choose a template first", "No template is chosen.", "Tap the kind of stage in the list, e.g. an inverting amplifier.");
+      return;
+    }
+    Map<String, String> values = new LinkedHashMap<>();
+    for (ParameterEntry entry : parameters) {
+      String text = entry.value().get() == null ? "" : entry.value().get().strip();
+      if (!text.isEmpty()) {
+        values.put(entry.parameter().name(), text);
+      }
+    }
+    Stage built;
+    try {
+      built = chosen.build(values);
+    } catch (InvalidInputException e) {
+      bench.problems().show("The template cannot take these values", e.getMessage(), "Check the value named, e.g. 4k7 for 4.7 kΩ, then build again.");
+      return;
+    }
+    String board = bench.boardModelProperty().get() == null ? built.board() : bench.boardModelProperty().get().name();
+    setStage(new Stage(built.title(), board, built.ground(), built.rails(), built.inputs(), built.parts(), built.amplifiers()));
+    builtFromTemplate = true;
   }
 
   /**
@@ -150,6 +222,7 @@ public final class StageViewModel {
   /** Takes a stage to work on (from the library or a template); its parts become editable. */
   public void choose(Stage chosen) {
     setStage(chosen);
+    builtFromTemplate = false;
   }
 
   private void setStage(Stage chosen) {
@@ -253,7 +326,17 @@ public final class StageViewModel {
         bench.diagnosisProperty().set(null);
       }
       String caseId = bench.openCaseProperty().get().id();
-      bench.tasks().run("Saving the case's stage", () -> { bench.resume().saveStage(caseId, s); return null; },
+      BoardModel model = bench.boardModelProperty().get();
+      boolean addToLibrary = builtFromTemplate && model != null;
+      builtFromTemplate = false;
+      bench.tasks().run("Saving the case's stage", () -> {
+            bench.resume().saveStage(caseId, s);
+            if (addToLibrary) {
+              // A stage built here joins the board model's library, so the next unit finds it.
+              bench.store().addStageSheet(model.id(), s.title(), StageSheet.write(s));
+            }
+            return null;
+          },
           ok -> {}, e -> bench.problems().failed("Could not keep the stage for this case", e, Words.CHECK_DATABASE));
       bench.go(Step.READINGS);
     };

@@ -1,0 +1,93 @@
+package com.stagewise.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import org.junit.jupiter.api.Test;
+
+class ValuePadModelTest {
+
+  @Test
+  void press_rkmCode_readsBackAsValue() {
+    // IEC 60062 RKM code: 4k7 is 4.7 kΩ.
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
+    for (String key : new String[] {"4", "k", "7"}) {
+      pad.press(key);
+    }
+    assertThat(pad.valueProperty().get()).isEqualTo(4700.0);
+    assertThat(pad.readingProperty().get()).isEqualTo("= 4.7 kΩ");
+    assertThat(pad.hintProperty().get()).isEqualTo("A preferred E24 value.");
+  }
+
+  @Test
+  void hint_offSeriesResistor_namesNearestE24AndE96() {
+    // IEC 60063: E24 has 4.7 next to 5.1; E96 has 4.75 and 4.87 around 4.8.
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
+    pad.textProperty().set("4k8");
+    assertThat(pad.hintProperty().get()).isEqualTo("Nearest E24 value: 4.7 kΩ (E96: 4.75 kΩ)");
+  }
+
+  @Test
+  void press_backAndClear_editTheEntry() {
+    ValuePadModel pad = new ValuePadModel();
+    pad.press("1");
+    pad.press("2");
+    pad.press(ValuePadModel.BACK);
+    assertThat(pad.textProperty().get()).isEqualTo("1");
+    pad.press(ValuePadModel.CLEAR);
+    assertThat(pad.textProperty().get()).isEmpty();
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).isEmpty();
+  }
+
+  @Test
+  void press_sign_makesVoltsNegative() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+    pad.press("1");
+    pad.press("4");
+    pad.press(".");
+    pad.press("9");
+    pad.press(ValuePadModel.SIGN);
+    assertThat(pad.valueProperty().get()).isEqualTo(-14.9);
+    pad.press(ValuePadModel.SIGN);
+    assertThat(pad.valueProperty().get()).isEqualTo(14.9);
+  }
+
+  @Test
+  void text_milliVolts_readsAsFractionOfAVolt() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+    pad.textProperty().set("350m");
+    assertThat(pad.valueProperty().get()).isEqualTo(0.35);
+  }
+
+  @Test
+  void text_decimalComma_isRefusedWithExamples() {
+    // The suite runs in a decimal-comma locale: the pad must still refuse "4,7".
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+    pad.textProperty().set("4,7");
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).startsWith("Not a value yet");
+  }
+
+  @Test
+  void text_negativePart_isRefused() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.FARADS);
+    pad.textProperty().set("-100n");
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).contains("cannot be negative");
+  }
+
+  @Test
+  void setValue_resistor_writesRkmCode() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
+    pad.setValue(47_000);
+    assertThat(pad.textProperty().get()).isEqualTo("47K");
+    assertThat(pad.valueProperty().get()).isEqualTo(47_000.0);
+  }
+
+  @Test
+  void setValue_capacitor_readsBack() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.FARADS);
+    pad.setValue(2.2e-6);
+    assertThat(pad.valueProperty().get()).isEqualTo(2.2e-6);
+  }
+}

@@ -1,0 +1,107 @@
+package com.stagewise.ui.stage;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.template.Templates;
+import com.stagewise.interchange.StageSheet;
+import com.stagewise.ui.SafetyCaution;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.TestBench;
+import java.nio.file.Path;
+import java.util.List;
+import org.assertj.core.data.Offset;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class StageViewModelTest {
+  @TempDir Path temp;
+  private TestBench t;
+  private StageViewModel model;
+  private String boardId;
+
+  @BeforeEach
+  void setUp() {
+    t = TestBench.open(temp);
+    var board = t.store.boardModel("Test amp board", "");
+    boardId = board.id();
+    t.store.addStageSheet(board.id(), "Inverting amplifier, test", StageSheet.write(TestBench.invertingStage(board.name())));
+    var unit = t.store.addUnit("TA-1", board.id(), "");
+    t.bench.showUnit(unit, board);
+    t.bench.startCase(t.store.openCase(unit.id(), "Dead"));
+    t.bench.go(Step.STAGE);
+    model = new StageViewModel(t.bench);
+    model.loadLibrary();
+  }
+
+  @AfterEach
+  void tearDown() {
+    t.close();
+  }
+
+  @Test
+  void loadLibrary_listsTheBoardModelsStages() {
+    assertThat(model.library()).extracting(StageViewModel.LibraryEntry::title).containsExactly("Inverting amplifier, test");
+    assertThat(model.libraryNoteProperty().get()).isEqualTo("1 stage of Test amp board.");
+  }
+
+  @Test
+  void choose_showsPartsAndExpectedVoltsWithTheirRange() {
+    model.choose(model.library().get(0).stage());
+    assertThat(model.parts()).extracting(StageViewModel.PartRow::line)
+        .containsExactly("R1   10 kΩ  ±1%   (IN – SUM)", "R2   47 kΩ  ±1%   (SUM – OUT)");
+    var expected = model.expectedProperty().get();
+    // Textbook inverting gain -Rf/Rin = -4.7 for 1 V in; 1 % parts move it by about 1 % each way.
+    assertThat(expected.at("OUT")).isCloseTo(-4.7, Offset.offset(1e-3));
+    assertThat(expected.low().get("OUT")).isCloseTo(-4.7 * 1.01 - 0.005, Offset.offset(2e-3));
+    assertThat(expected.high().get("OUT")).isCloseTo(-4.7 * 0.99 + 0.005, Offset.offset(2e-3));
+  }
+
+  @Test
+  void applyValue_changesThePartAndTheExpectedOutput() {
+    model.choose(model.library().get(0).stage());
+    model.selectedPartProperty().set(model.parts().get(1));
+    assertThat(model.pad().textProperty().get()).isEqualTo("47K");
+    model.pad().textProperty().set("22k");
+    model.applyValue();
+    assertThat(model.stageProperty().get().part("R2").orElseThrow().value()).isEqualTo(22_000.0);
+    assertThat(model.expectedProperty().get().at("OUT")).isCloseTo(-2.2, Offset.offset(1e-3));
+  }
+
+  @Test
+  void applyDesignator_renamesThePart_andRefusesADuplicate() {
+    model.choose(model.library().get(0).stage());
+    model.selectedPartProperty().set(model.parts().get(1));
+    model.designatorProperty().set("R15");
+    model.applyDesignator();
+    assertThat(model.stageProperty().get().part("R15")).isPresent();
+    model.designatorProperty().set("R1");
+    model.applyDesignator();
+    assertThat(t.problems).containsExactly("Designator already used");
+  }
+
+  @Test
+  void buildFromTemplate_usesItAndAddsItToTheLibrary() {
+    var template = Templates.all().get(0);
+    model.templateProperty().set(template);
+    assertThat(model.parameters()).hasSize(template.parameters().size());
+    model.buildFromTemplate();
+    assertThat(model.stageProperty().get().board()).isEqualTo("Test amp board");
+    model.useStage();
+    assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
+    assertThat(t.store.stageSheets(boardId)).hasSize(2);
+  }
+
+  @Test
+  void useStage_railAboveFiftyVolts_showsTheCautionFirst() {
+    Stage base = model.library().get(0).stage();
+    model.choose(base.withRails(List.of(new Rail("VCC", 60, 0.05), new Rail("VEE", -60, 0.05))));
+    model.useStage();
+    assertThat(t.cautions).containsExactly(SafetyCaution.Reason.HIGH_RAILS);
+    assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
+    assertThat(t.resume.load(t.bench.openCaseProperty().get().id()).orElseThrow().stage()).isPresent();
+  }
+}
