@@ -3,9 +3,9 @@ package com.stagewise.ui.stage;
 import com.stagewise.ui.ExpectedVolts;
 import com.stagewise.ui.ValuePad;
 import com.stagewise.ui.Words;
+import com.stagewise.ui.drawing.SchematicDrawing;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
-import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
@@ -27,6 +27,7 @@ public final class StageView {
   private final StageViewModel model;
   private final HBox root = new HBox(12);
   private final VBox expectedBox = new VBox(4);
+  private final SchematicDrawing schematic = new SchematicDrawing();
 
   /** Builds the screen bound to its model. */
   public StageView(StageViewModel model) {
@@ -66,6 +67,8 @@ public final class StageView {
     fromLibrary.setToggleGroup(source);
     fromTemplate.setToggleGroup(source);
     fromLibrary.setSelected(true);
+    fromLibrary.setStyle("-fx-padding: 8 10 8 10;");
+    fromTemplate.setStyle("-fx-padding: 8 10 8 10;");
     source.selectedToggleProperty().addListener((o, was, now) -> {
       if (now == null) {
         was.setSelected(true);
@@ -166,14 +169,20 @@ public final class StageView {
     title.textProperty().bind(Bindings.createStringBinding(
         () -> model.stageProperty().get() == null ? "Choose the stage you are working on" : model.stageProperty().get().title(),
         model.stageProperty()));
-    VBox drawing = new VBox(6);
-    drawing.getStyleClass().addAll("panel", "placeholder");
+    VBox drawing = new VBox(4);
+    drawing.getStyleClass().add("panel");
     drawing.setId("stage-drawing");
-    Label drawingTitle = new Label("What a healthy stage reads (nominal, and the range the tolerances allow)");
-    drawingTitle.getStyleClass().add("section-title");
-    drawingTitle.setWrapText(true);
-    drawing.getChildren().addAll(drawingTitle, expectedBox);
+    schematic.setId("stage-schematic");
+    VBox.setVgrow(schematic, Priority.ALWAYS);
+    Label drawingTitle = new Label("Blue: what a healthy stage reads at each net");
+    drawingTitle.getStyleClass().add("hint");
+    drawing.getChildren().addAll(drawingTitle, schematic, expectedBox);
     VBox.setVgrow(drawing, Priority.ALWAYS);
+    model.stageProperty().addListener((o, was, now) -> {
+      if (now != null) {
+        schematic.show(now);
+      }
+    });
     Label partsTitle = new Label("Parts — tap one to check or change its value");
     partsTitle.getStyleClass().add("section-title");
     ListView<StageViewModel.PartRow> parts = new ListView<>(model.parts());
@@ -212,25 +221,29 @@ public final class StageView {
       return;
     }
     if (!expected.solved()) {
+      schematic.setNetLabels(Map.of());
       Label problem = new Label("Cannot work out this stage: " + expected.problem());
       problem.setWrapText(true);
       expectedBox.getChildren().add(problem);
       return;
     }
-    FlowPane nets = new FlowPane(18, 6);
+    Map<String, String> labels = new java.util.LinkedHashMap<>();
+    StringBuilder ranges = new StringBuilder();
     for (Map.Entry<String, Double> net : expected.nominal().entrySet()) {
       if (net.getKey().contains(".")) {
         continue;
       }
+      labels.put(net.getKey(), Words.voltsShort(net.getValue()));
       double low = expected.low().getOrDefault(net.getKey(), net.getValue());
       double high = expected.high().getOrDefault(net.getKey(), net.getValue());
-      String range = high - low < 0.0105 ? "" : "  (" + Words.voltsShort(low).replace(" V", "") + " … " + Words.voltsShort(high) + ")";
-      Label label = new Label(net.getKey() + "  " + Words.voltsShort(net.getValue()) + range);
-      label.setStyle("-fx-font-size: 19px; -fx-font-family: 'DejaVu Sans Mono', monospace;");
-      label.setPadding(new Insets(2, 10, 2, 10));
-      label.setStyle(label.getStyle() + "-fx-background-color: #e4e9ed;");
-      nets.getChildren().add(label);
+      if (high - low >= 0.0105 && !model.stageProperty().get().isDriven(net.getKey())) {
+        ranges.append(ranges.length() == 0 ? "Healthy range: " : ",  ")
+            .append(net.getKey()).append(' ').append(Words.voltsShort(low).replace(" V", "")).append(" … ").append(Words.voltsShort(high));
+      }
     }
+    schematic.setNetLabels(labels);
+    Label nets = new Label(ranges.toString());
+    nets.setWrapText(true);
     StringBuilder states = new StringBuilder();
     expected.states().forEach((ref, state) -> states.append(ref).append(": ")
         .append(state.equals("linear") ? "working normally (linear)" : "output at its " + (state.equals("high") ? "upper" : "lower") + " limit")

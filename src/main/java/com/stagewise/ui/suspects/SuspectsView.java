@@ -1,6 +1,12 @@
 package com.stagewise.ui.suspects;
 
 import com.stagewise.ui.Words;
+import com.stagewise.ui.drawing.SchematicDrawing;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.StackPane;
 import javafx.beans.binding.Bindings;
 import javafx.collections.ListChangeListener;
 import javafx.geometry.Pos;
@@ -21,6 +27,7 @@ public final class SuspectsView {
   private final SuspectsViewModel model;
   private final HBox root = new HBox(12);
   private final GridPane table = new GridPane();
+  private final SchematicDrawing schematic = new SchematicDrawing();
 
   /** Builds the screen bound to its model. */
   public SuspectsView(SuspectsViewModel model) {
@@ -95,16 +102,37 @@ public final class SuspectsView {
     table.setVgap(4);
     ScrollPane scroll = new ScrollPane(table);
     scroll.setFitToWidth(true);
-    VBox.setVgrow(scroll, Priority.ALWAYS);
+    schematic.setId("suspect-schematic");
+    ToggleGroup views = new ToggleGroup();
+    ToggleButton asDrawing = new ToggleButton("Schematic");
+    asDrawing.setId("suspect-as-schematic");
+    ToggleButton asTable = new ToggleButton("Table");
+    asTable.setId("suspect-as-table");
+    asDrawing.setToggleGroup(views);
+    asTable.setToggleGroup(views);
+    asDrawing.setSelected(true);
+    views.selectedToggleProperty().addListener((o, was, now) -> {
+      if (now == null) {
+        was.setSelected(true);
+      }
+    });
+    schematic.visibleProperty().bind(asDrawing.selectedProperty());
+    scroll.visibleProperty().bind(asTable.selectedProperty());
+    StackPane shown = new StackPane(schematic, scroll);
+    VBox.setVgrow(shown, Priority.ALWAYS);
+    HBox viewRow = new HBox(8, asDrawing, asTable);
+    viewRow.setAlignment(Pos.CENTER_LEFT);
     Label checkTitle = new Label("To confirm the first suspect");
     checkTitle.getStyleClass().add("section-title");
     Label check = new Label();
     check.setId("confirming-check");
     check.setWrapText(true);
     check.textProperty().bind(model.confirmingCheckProperty());
+    check.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     Label caution = new Label("Unplug the unit and discharge the capacitors before any ohms check.");
     caution.setWrapText(true);
     caution.setStyle("-fx-text-fill: #8a4b00; -fx-font-weight: bold;");
+    caution.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     Button back = new Button("More readings");
     back.setId("suspects-more");
     back.setOnAction(e -> model.moreReadings());
@@ -113,11 +141,47 @@ public final class SuspectsView {
     close.getStyleClass().add("primary");
     close.disableProperty().bind(model.selectedProperty().isNull());
     close.setOnAction(e -> model.closeOutWithSelected());
-    box.getChildren().addAll(title, scroll, checkTitle, check, caution, new HBox(10, back, close));
+    box.getChildren().addAll(title, viewRow, shown, checkTitle, check, caution, new HBox(10, back, close));
     return box;
   }
 
+  private void showDrawing() {
+    var stage = model.stageProperty().get();
+    if (stage == null) {
+      return;
+    }
+    if (stage != shownStage) {
+      schematic.show(stage);
+      shownStage = stage;
+    }
+    Map<String, String> pins = stage.pinNets();
+    Map<String, String> healthy = new LinkedHashMap<>();
+    Map<String, String> predicted = new LinkedHashMap<>();
+    Map<String, String> measured = new LinkedHashMap<>();
+    var selected = model.selectedProperty().get();
+    var expected = model.expectedProperty().get();
+    for (String net : stage.nets()) {
+      if (expected != null && expected.solved() && expected.nominal().containsKey(net)) {
+        healthy.put(net, Words.voltsShort(expected.at(net)));
+      }
+      if (selected != null && selected.suspect().predicted().containsKey(net)) {
+        predicted.put(net, Words.voltsShort(selected.suspect().predicted().get(net)));
+      }
+    }
+    for (SuspectsViewModel.PointRow p : model.comparison()) {
+      if (!Double.isNaN(p.measured())) {
+        measured.put(pins.getOrDefault(p.at(), p.at()), Words.voltsShort(p.measured()));
+      }
+    }
+    schematic.setNetLabels(healthy);
+    schematic.setSecondLabels(predicted, selected == null ? "" : "if " + selected.title());
+    schematic.setMeasured(measured);
+  }
+
+  private com.stagewise.circuit.Stage shownStage;
+
   private void showTable() {
+    showDrawing();
     table.getChildren().clear();
     String[] heads = {"Test point", "Healthy", "Measured", model.selectedProperty().get() == null ? "Suspect" : "If this suspect"};
     for (int c = 0; c < heads.length; c++) {

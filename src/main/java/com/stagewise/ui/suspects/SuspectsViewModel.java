@@ -99,6 +99,11 @@ public final class SuspectsViewModel {
     return expected;
   }
 
+  /** Returns the stage on the bench. */
+  public javafx.beans.value.ObservableObjectValue<Stage> stageProperty() {
+    return bench.stageProperty();
+  }
+
   /** Returns the suspect taken to the close-out (null when none). */
   public ObjectProperty<Suspect> chosenForCloseOutProperty() {
     return chosenForCloseOut;
