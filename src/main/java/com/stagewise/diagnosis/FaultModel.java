@@ -48,8 +48,11 @@ final class FaultModel {
   static List<Scenario> scenarios(Stage base, Conditions conditions, Fault fault) {
     List<Scenario> raw = applied(base, conditions, fault);
     List<Scenario> tied = new ArrayList<>();
+    // The points of a grid differ only in one value, never in which nets float: check once.
+    boolean grid = raw.size() > 1 && raw.stream().allMatch(Scenario::onGrid);
+    List<String> gridFloating = grid ? floatingNets(raw.get(0)) : null;
     for (Scenario scenario : raw) {
-      tied.addAll(tieFloating(scenario));
+      tied.addAll(tieFloating(scenario, grid ? gridFloating : floatingNets(scenario)));
     }
     double total = tied.stream().mapToDouble(Scenario::weight).sum();
     return tied.stream().map(s -> s.withWeight(s.weight() / total)).toList();
@@ -181,8 +184,7 @@ final class FaultModel {
    * scenarios), anything else to ground through the meter. At most two inputs are split; further
    * ones drift to the first section's v- rail.
    */
-  private static List<Scenario> tieFloating(Scenario scenario) {
-    List<String> floatingNets = floatingNets(scenario);
+  private static List<Scenario> tieFloating(Scenario scenario, List<String> floatingNets) {
     if (floatingNets.isEmpty()) {
       return List.of(scenario);
     }

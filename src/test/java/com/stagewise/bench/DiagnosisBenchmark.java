@@ -1,0 +1,88 @@
+package com.stagewise.bench;
+
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.template.Templates;
+import com.stagewise.diagnosis.Diagnoser;
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.reference.SpiceBatch;
+import com.stagewise.solver.OperatingPoint;
+import com.stagewise.solver.SolveResult;
+import com.stagewise.solver.StageSolver;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Threads;
+import org.openjdk.jmh.annotations.Warmup;
+
+/**
+ * Speed of the diagnosis on the largest template, the three-section instrumentation amplifier with
+ * every net and used pin read, beside ngspice computing the same fault dictionary in one batch.
+ *
+ * <p>Run with {@code scripts/bench-diagnosis.sh}; see DEVELOPERS.md for the figures. The readings
+ * are the solver's nominal values with the output section stuck high, so that the ranking has real
+ * work to do.
+ */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.SampleTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Warmup(iterations = 3, time = 2)
+@Measurement(iterations = 5, time = 2)
+@Fork(1)
+@Threads(1)
+public class DiagnosisBenchmark {
+  private Stage stage;
+  private ReadingSet allPins;
+  private ReadingSet allButOne;
+  private Diagnoser warm;
+
+  @Setup(Level.Trial)
+  public void setUp() {
+    stage = Templates.named("instrumentation").build();
+    SolveResult.Solved solved = (SolveResult.Solved) StageSolver.solve(
+        stage,
+        com.stagewise.solver.Conditions.NOMINAL.withForced(stage.amplifiers().get(2).ref(), com.stagewise.solver.SectionState.HIGH));
+    OperatingPoint point = solved.primary();
+    List<Reading> readings = new ArrayList<>();
+    point.nets().forEach((net, volts) -> readings.add(Reading.dc(net, volts)));
+    point.pins().forEach((pin, volts) -> readings.add(Reading.dc(pin, volts)));
+    allPins = new ReadingSet(MeterSpec.DEFAULT, readings);
+    allButOne = new ReadingSet(MeterSpec.DEFAULT, readings.subList(0, readings.size() - 1));
+    warm = Diagnoser.of(stage);
+    warm.diagnose(allButOne);
+  }
+
+  /** A fresh diagnoser: builds every hypothesis's predictions, ranks, chooses the next probe. */
+  @Benchmark
+  public Diagnosis fullDiagnosis() {
+    return Diagnoser.of(stage).diagnose(allPins);
+  }
+
+  /** One more reading on a diagnoser that has seen the stage: ranking and next probe only. */
+  @Benchmark
+  public Diagnosis rerankAfterOneMoreReading() {
+    return warm.diagnose(allPins);
+  }
+
+  /** ngspice 39 solving the same fault dictionary (every fault, nominal parts) in one batch. */
+  @Benchmark
+  @BenchmarkMode(Mode.SingleShotTime)
+  @Warmup(iterations = 1)
+  @Measurement(iterations = 5)
+  public Duration ngspiceFaultDictionary() {
+    return SpiceBatch.timeFaultDictionary(stage);
+  }
+}
