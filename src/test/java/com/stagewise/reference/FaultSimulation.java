@@ -89,7 +89,8 @@ final class FaultSimulation {
       Map<String, Phasor> exactAc,
       List<Reading> readings,
       List<String> partial,
-      boolean relaxed) {}
+      String start,
+      String solvedBy) {}
 
   /** A case ngspice could not solve. */
   record Dropped(String fault, long seed, int sample, String reason) {}
@@ -124,14 +125,17 @@ final class FaultSimulation {
     for (Rail rail : stage.rails()) {
       rails.put(rail.net(), flat.driven.get(rail.net()));
     }
-    boolean relaxed = false;
-    Ngspice.Outcome outcome = Ngspice.run(SpiceNetlist.of(flat, stage.title(), false));
-    if (!(outcome instanceof Ngspice.Solved)) {
-      relaxed = true;
-      outcome = Ngspice.run(SpiceNetlist.of(flat, stage.title(), true));
+    // Each section starts high or low at random, as a real unit powers up in either state of a
+    // Schmitt trigger; a stage with one stable state ends there whatever the start.
+    boolean[] start = new boolean[flat.sections.size()];
+    StringBuilder startWords = new StringBuilder();
+    for (int k = 0; k < start.length; k++) {
+      start[k] = rnd.nextBoolean();
+      startWords.append(k == 0 ? "" : " ").append(flat.sections.get(k).ref()).append(start[k] ? ":high" : ":low");
     }
-    if (!(outcome instanceof Ngspice.Solved solved)) {
-      return new Dropped(fault, seed, sample, ((Ngspice.Failed) outcome).reason());
+    SpiceSolve.Attempt attempt = SpiceSolve.attempt(flat, stage.title(), start);
+    if (!(attempt.outcome() instanceof Ngspice.Solved solved)) {
+      return new Dropped(fault, seed, sample, ((Ngspice.Failed) attempt.outcome()).reason());
     }
     Map<String, Double> exactDc = new LinkedHashMap<>();
     for (String net : flat.nets) {
@@ -160,7 +164,7 @@ final class FaultSimulation {
     }
     return new Case(
         fault, seed, sample, parts, rails, devices, faultValue, ties, round(exactDc), flat.hz, exactAc,
-        readings, List.copyOf(partial), relaxed);
+        readings, List.copyOf(partial), startWords.toString(), attempt.how());
   }
 
   /** Device parameters drawn uniformly within the class's ranges (bias currents independently). */

@@ -161,6 +161,18 @@ final class FlatCircuit {
     return flat;
   }
 
+  /** Returns an independent copy (the lists and maps are copied; their elements are immutable). */
+  FlatCircuit copy() {
+    FlatCircuit copy = new FlatCircuit(ground, nets);
+    copy.driven.putAll(driven);
+    copy.acDrive.putAll(acDrive);
+    copy.hz = hz;
+    copy.branches.addAll(branches);
+    copy.sections.addAll(sections);
+    copy.pinNodes.putAll(pinNodes);
+    return copy;
+  }
+
   /** Returns whether a node is held by a source (ground included). */
   boolean isDriven(String node) {
     return node.equals(ground) || driven.containsKey(node);

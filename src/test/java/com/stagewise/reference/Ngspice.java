@@ -40,7 +40,8 @@ final class Ngspice {
    * @param acRe real part of the AC phasor by our node name (empty without AC)
    * @param acIm imaginary part of the AC phasor by our node name
    */
-  record Solved(Map<String, Double> dc, Map<String, Double> acRe, Map<String, Double> acIm)
+  record Solved(
+      Map<String, Double> dc, Map<String, Double> acRe, Map<String, Double> acIm, Map<String, Double> printed)
       implements Outcome {
     /** Returns the AC amplitude at a node. */
     double acAmplitude(String node) {
@@ -191,7 +192,13 @@ final class Ngspice {
     if (!ended) {
       return new Failed(tail(output));
     }
-    return new Solved(ourDc, ourRe, ourIm);
+    Map<String, Double> printed = new HashMap<>();
+    dc.forEach((name, volts) -> {
+      if (!name.contains("#")) {
+        printed.put(name, volts);
+      }
+    });
+    return new Solved(ourDc, ourRe, ourIm, printed);
   }
 
   private static String tail(String output) {

@@ -8,7 +8,9 @@ import com.stagewise.solver.Phasor;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -40,11 +42,11 @@ final class ReferenceFiles {
     stage.put("kind", source.kind());
     stage.put("id", source.id());
     stage.put("title", title);
-    ObjectNode dc = root.putObject("dc");
-    ObjectNode nets = dc.putObject("nets");
-    e.nets().forEach(nets::put);
-    ObjectNode pins = dc.putObject("pins");
-    e.pins().forEach(pins::put);
+    writeState(root.putObject("dc"), e.states().get(0));
+    if (e.states().size() > 1) {
+      var others = root.putArray("otherStates");
+      e.states().stream().skip(1).forEach(state -> writeState(others.addObject(), state));
+    }
     if (e.hz() > 0) {
       ObjectNode ac = root.putObject("ac");
       ac.put("hz", e.hz());
@@ -59,6 +61,17 @@ final class ReferenceFiles {
     return root;
   }
 
+  private static void writeState(ObjectNode node, SpiceComparison.DcState state) {
+    ObjectNode nets = node.putObject("nets");
+    state.nets().forEach(nets::put);
+    ObjectNode pins = node.putObject("pins");
+    state.pins().forEach(pins::put);
+  }
+
+  private static SpiceComparison.DcState readState(JsonNode node) {
+    return new SpiceComparison.DcState(doubles(node.path("nets")), doubles(node.path("pins")));
+  }
+
   static Stored read(Path file) throws IOException {
     JsonNode root = JSON.readTree(file.toFile());
     if (!FORMAT.equals(root.path("format").asText())) {
@@ -66,13 +79,14 @@ final class ReferenceFiles {
     }
     ReferenceStages.Source source =
         new ReferenceStages.Source(root.path("stage").path("kind").asText(), root.path("stage").path("id").asText());
-    Map<String, Double> nets = doubles(root.path("dc").path("nets"));
-    Map<String, Double> pins = doubles(root.path("dc").path("pins"));
+    List<SpiceComparison.DcState> states = new ArrayList<>();
+    states.add(readState(root.path("dc")));
+    root.path("otherStates").forEach(state -> states.add(readState(state)));
     double hz = root.path("ac").path("hz").asDouble(0);
     Map<String, Phasor> ac = new LinkedHashMap<>();
     root.path("ac").path("nets").fields().forEachRemaining(
         f -> ac.put(f.getKey(), new Phasor(f.getValue().path("amplitude").asDouble(), f.getValue().path("phaseDegrees").asDouble())));
-    return new Stored(source, new SpiceComparison.Expected(nets, pins, hz, ac));
+    return new Stored(source, new SpiceComparison.Expected(states, hz, ac));
   }
 
   static void write(Path file, ObjectNode json) throws IOException {

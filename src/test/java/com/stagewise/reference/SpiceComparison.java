@@ -35,37 +35,48 @@ final class SpiceComparison {
   private SpiceComparison() {}
 
   /**
-   * What the reference simulator says about one stage.
+   * The DC voltages of one state.
    *
    * @param nets DC volts per net
    * @param pins DC volts per used package pin
+   */
+  record DcState(Map<String, Double> nets, Map<String, Double> pins) {}
+
+  /**
+   * What the reference simulator says about one stage.
+   *
+   * @param states the stable DC states ngspice found (one, or two for a Schmitt trigger); the AC
+   *     answer is about the first
    * @param hz the AC frequency, 0 without AC
    * @param ac amplitude and phase per net (empty without AC)
    */
-  record Expected(
-      Map<String, Double> nets, Map<String, Double> pins, double hz, Map<String, Phasor> ac) {}
+  record Expected(List<DcState> states, double hz, Map<String, Phasor> ac) {}
 
-  /** Returns the expected values read from a converged ngspice run of a flattened stage. */
-  static Expected of(FlatCircuit flat, Ngspice.Solved solved) {
-    Map<String, Double> nets = new LinkedHashMap<>();
-    for (String net : flat.nets) {
-      nets.put(net, solved.dc().get(net));
+  /** Returns the expected values read from converged ngspice runs of a flattened stage. */
+  static Expected of(FlatCircuit flat, List<Ngspice.Solved> solved) {
+    List<DcState> states = new ArrayList<>();
+    for (Ngspice.Solved one : solved) {
+      Map<String, Double> nets = new LinkedHashMap<>();
+      for (String net : flat.nets) {
+        nets.put(net, one.dc().get(net));
+      }
+      Map<String, Double> pins = new LinkedHashMap<>();
+      flat.pinNodes.forEach((pin, node) -> pins.put(pin, one.dc().get(node)));
+      states.add(new DcState(nets, pins));
     }
-    Map<String, Double> pins = new LinkedHashMap<>();
-    flat.pinNodes.forEach((pin, node) -> pins.put(pin, solved.dc().get(node)));
     Map<String, Phasor> ac = new LinkedHashMap<>();
     if (flat.hz > 0) {
       for (String net : flat.nets) {
-        ac.put(net, new Phasor(solved.acAmplitude(net), solved.acPhaseDegrees(net)));
+        ac.put(net, new Phasor(solved.get(0).acAmplitude(net), solved.get(0).acPhaseDegrees(net)));
       }
     }
-    return new Expected(nets, pins, flat.hz, ac);
+    return new Expected(states, flat.hz, ac);
   }
 
   /**
    * Returns every disagreement between our solver and the expected values, empty when they agree.
-   * With several stable operating points (a Schmitt trigger), the one nearest the reference's is
-   * compared: ngspice settles in one of them.
+   * Each state ngspice found is compared with the nearest of our stable operating points (a
+   * Schmitt trigger has two), and ngspice must not find more states than we do.
    */
   static List<String> mismatches(Stage stage, Expected expected) {
     List<String> problems = new ArrayList<>();
@@ -74,9 +85,18 @@ final class SpiceComparison {
       problems.add("our solver gave " + result);
       return problems;
     }
-    OperatingPoint point = nearest(solved.points(), expected.nets());
-    compareDc(problems, "net", expected.nets(), point.nets());
-    compareDc(problems, "pin", expected.pins(), point.pins());
+    if (expected.states().size() > solved.points().size()) {
+      problems.add("ngspice found " + expected.states().size() + " stable states, our solver "
+          + solved.points().size());
+    }
+    OperatingPoint first = null;
+    for (DcState state : expected.states()) {
+      OperatingPoint point = nearest(solved.points(), state.nets());
+      first = first == null ? point : first;
+      compareDc(problems, "net", state.nets(), point.nets());
+      compareDc(problems, "pin", state.pins(), point.pins());
+    }
+    OperatingPoint point = first;
     if (expected.hz() > 0) {
       Optional<AcSolution> ac = StageSolver.ac(stage, point);
       if (ac.isEmpty()) {

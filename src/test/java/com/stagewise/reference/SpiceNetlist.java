@@ -63,11 +63,24 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
    *     converge; still far within a meter count
    */
   static SpiceNetlist of(FlatCircuit flat, String title, boolean relaxed) {
+    return of(flat, title, relaxed, Map.of());
+  }
+
+  /**
+   * Returns the netlist of a flattened circuit whose DC solution starts from the given node
+   * voltages ({@code .nodeset}, keyed by SPICE node name): ngspice holds the nodes there for its
+   * first iterations, then lets them go and converges to a true solution nearby. Used to start a
+   * stage with positive feedback in one of its stable states rather than at its unstable middle.
+   */
+  static SpiceNetlist of(FlatCircuit flat, String title, boolean relaxed, Map<String, Double> nodeset) {
     Body body = body(flat, relaxed);
     StringBuilder text = new StringBuilder();
     text.append("* ").append(oneLine(title)).append(" (Stagewise op-amp model: clamped source behind Rout)\n");
     text.append(options(relaxed)).append('\n');
     text.append(body.lines());
+    for (Map.Entry<String, Double> e : nodeset.entrySet()) {
+      text.append(".nodeset v(").append(e.getKey()).append(")=").append(num(e.getValue())).append('\n');
+    }
     text.append(".control\n");
     text.append("set numdgt=15\n");
     text.append("echo @@op\n");

@@ -27,10 +27,9 @@ public final class SpiceReference {
     int failed = 0;
     for (ReferenceStages.Named named : ReferenceStages.all()) {
       FlatCircuit flat = FlatCircuit.of(named.stage(), Conditions.NOMINAL);
-      SpiceNetlist netlist = SpiceNetlist.of(flat, named.stage().title());
-      Ngspice.Outcome outcome = Ngspice.run(netlist);
-      if (!(outcome instanceof Ngspice.Solved solved)) {
-        System.err.println(named.source().name() + ": ngspice failed: " + outcome);
+      List<Ngspice.Solved> solved = SpiceSolve.states(flat, named.stage().title());
+      if (solved.isEmpty()) {
+        System.err.println(named.source().name() + ": ngspice found no solution");
         failed++;
         continue;
       }

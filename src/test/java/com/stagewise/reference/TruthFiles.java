@@ -139,8 +139,9 @@ final class TruthFiles {
         t.group().forEach(tie.putArray("group")::add);
       }
     }
-    if (c.relaxed()) {
-      node.put("relaxedTolerances", true);
+    node.put("start", c.start());
+    if (!c.solvedBy().equals("start")) {
+      node.put("solvedBy", c.solvedBy());
     }
     return node;
   }
