@@ -20,9 +20,9 @@ import javafx.scene.text.Text;
  */
 public final class BandChart extends Region {
   private static final double SIDE = 22;
-  private static final double AXIS_Y = 92;
-  private static final double BAND_HALF = 13;
-  private static final double ROW = 19;
+  private static final double AXIS_Y = 74;
+  private static final double BAND_HALF = 11;
+  private static final double ROW = 17;
 
   private String testPoint = "";
   private double healthyLow = Double.NaN;
@@ -43,7 +43,7 @@ public final class BandChart extends Region {
   public BandChart() {
     getStyleClass().add("band-chart");
     Palette.paperAndClip(this);
-    setMinHeight(140);
+    setMinHeight(130);
   }
 
   /**
@@ -72,7 +72,7 @@ public final class BandChart extends Region {
 
   @Override
   protected double computePrefHeight(double width) {
-    return AXIS_Y + BAND_HALF + 16 + labelRowCount * ROW + 30;
+    return AXIS_Y + BAND_HALF + 12 + labelRowCount * ROW + 22;
   }
 
   @Override
@@ -93,7 +93,7 @@ public final class BandChart extends Region {
 
     Text title = text(testPoint, Palette.bold(18), Palette.INK);
     title.setX(SIDE);
-    title.setY(16);
+    title.setY(12);
     boolean haveBand = Double.isFinite(healthyLow) && Double.isFinite(healthyHigh);
     Text range =
         text(
@@ -103,7 +103,7 @@ public final class BandChart extends Region {
             Palette.font(15),
             Palette.BAND_EDGE.darker());
     range.setX(width - SIDE - range.getLayoutBounds().getWidth());
-    range.setY(16);
+    range.setY(12);
     getChildren().addAll(title, range);
 
     Line axis = new Line(SIDE, AXIS_Y, SIDE + length, AXIS_Y);
@@ -124,15 +124,19 @@ public final class BandChart extends Region {
     }
 
     drawMarkers(scale, length);
-    double tickBaseline = AXIS_Y + BAND_HALF + 16 + labelRowCount * ROW + 14;
+    double tickBaseline = AXIS_Y + BAND_HALF + 12 + labelRowCount * ROW + 10;
     for (double tick : scale.ticks(6)) {
       double x = SIDE + scale.position(tick, length);
       Line mark = new Line(x, AXIS_Y - 4, x, AXIS_Y + 4);
       mark.setStroke(Palette.SOFT_INK);
-      Text label = text(VoltText.tick(tick), Palette.font(12), Palette.SOFT_INK);
-      label.setX(x - label.getLayoutBounds().getWidth() / 2);
-      label.setY(tickBaseline);
-      getChildren().addAll(mark, label);
+      getChildren().add(mark);
+      // Tick values go below the suspects' labels, when the chart is tall enough for them.
+      if (getHeight() <= 0 || tickBaseline + 6 <= getHeight()) {
+        Text label = text(VoltText.tick(tick), Palette.font(12), Palette.SOFT_INK);
+        label.setX(x - label.getLayoutBounds().getWidth() / 2);
+        label.setY(tickBaseline);
+        getChildren().add(label);
+      }
     }
 
     paper.setHeight(computePrefHeight(width));
@@ -154,12 +158,12 @@ public final class BandChart extends Region {
     int rowCount = 1;
     for (int i = 0; i < shown.size(); i++) {
       double x = centres[i];
-      Polygon tip = new Polygon(x, AXIS_Y + 2, x - 7, AXIS_Y + BAND_HALF + 9, x + 7, AXIS_Y + BAND_HALF + 9);
+      Polygon tip = new Polygon(x, AXIS_Y + 2, x - 6, AXIS_Y + BAND_HALF + 7, x + 6, AXIS_Y + BAND_HALF + 7);
       tip.setFill(Palette.SECOND);
       Text label = labels.get(i);
       double left = Math.max(2, Math.min(x - widths[i] / 2, SIDE + length + SIDE - widths[i] - 2));
       label.setX(left);
-      label.setY(AXIS_Y + BAND_HALF + 22 + rows[i] * ROW);
+      label.setY(AXIS_Y + BAND_HALF + 17 + rows[i] * ROW);
       getChildren().addAll(tip, label);
       rowCount = Math.max(rowCount, rows[i] + 1);
     }
@@ -174,7 +178,7 @@ public final class BandChart extends Region {
       Text none = text("no reading", Palette.bold(16), Palette.SOFT_INK);
       none.setId("no-reading");
       none.setX(width / 2 - none.getLayoutBounds().getWidth() / 2);
-      none.setY(48);
+      none.setY(37);
       getChildren().add(none);
       return;
     }
@@ -182,22 +186,22 @@ public final class BandChart extends Region {
     boolean inside =
         Double.isFinite(healthyLow) && measured >= healthyLow - 1e-12 && measured <= healthyHigh + 1e-12;
     Color mark = inside ? Palette.BAND_EDGE : Palette.OUTSIDE;
-    Line needle = new Line(x, AXIS_Y - BAND_HALF - 6, x, AXIS_Y + BAND_HALF + 2);
+    Line needle = new Line(x, AXIS_Y - BAND_HALF - 4, x, AXIS_Y + BAND_HALF + 2);
     needle.setStroke(mark);
     needle.setStrokeWidth(4);
-    Polygon head = new Polygon(x, AXIS_Y - BAND_HALF - 2, x - 11, AXIS_Y - BAND_HALF - 20, x + 11, AXIS_Y - BAND_HALF - 20);
+    Polygon head = new Polygon(x, AXIS_Y - BAND_HALF - 1, x - 9, AXIS_Y - BAND_HALF - 13, x + 9, AXIS_Y - BAND_HALF - 13);
     head.setFill(mark);
     head.setId("measured-marker");
     Text value = text(VoltText.of(measured) + (inside ? "" : "  outside"), Palette.bold(16), Palette.MEASURED);
     double w = value.getLayoutBounds().getWidth();
     double left = Math.max(4, Math.min(x - w / 2, width - w - 4));
-    Rectangle pill = new Rectangle(left - 6, 36, w + 12, 24);
+    Rectangle pill = new Rectangle(left - 6, 25, w + 12, 24);
     pill.setArcWidth(12);
     pill.setArcHeight(12);
     pill.setFill(Palette.MEASURED_FILL);
     pill.setStroke(mark);
     value.setX(left);
-    value.setY(48);
+    value.setY(37);
     getChildren().addAll(needle, head, pill, value);
   }
 

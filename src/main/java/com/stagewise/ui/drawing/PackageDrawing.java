@@ -40,7 +40,7 @@ public final class PackageDrawing extends Region {
     Palette.paperAndClip(this);
     content.getTransforms().add(scale);
     getChildren().add(content);
-    setMinSize(geometry.width() * 0.5, geometry.height() * 0.5);
+    setMinSize(USE_PREF_SIZE, USE_PREF_SIZE);
   }
 
   /**
@@ -52,7 +52,7 @@ public final class PackageDrawing extends Region {
     this.type = Objects.requireNonNull(type, "type");
     this.packageRef = packageRef == null ? "" : packageRef;
     this.pinNames = pinNames == null ? Map.of() : new LinkedHashMap<>(pinNames);
-    this.geometry = PackageGeometry.of(type.pinCount());
+    this.geometry = PackageGeometry.of(type.pinCount(), Math.max(getWidth(), 1), Math.max(getHeight(), 1));
     this.highlighted = 0;
     pinText.clear();
     redraw();
@@ -86,18 +86,38 @@ public final class PackageDrawing extends Region {
 
   @Override
   protected double computePrefWidth(double height) {
-    return geometry.width();
+    return PackageGeometry.of(pinCount(), PackageGeometry.PREFERRED_WIDTH, 10_000).width();
   }
 
   @Override
   protected double computePrefHeight(double width) {
-    return geometry.height();
+    return PackageGeometry.of(pinCount(), PackageGeometry.PREFERRED_WIDTH, 10_000).height();
+  }
+
+  @Override
+  protected double computeMinWidth(double height) {
+    return PackageGeometry.of(pinCount(), 0, 0).width();
+  }
+
+  @Override
+  protected double computeMinHeight(double width) {
+    return PackageGeometry.of(pinCount(), 0, 0).height();
+  }
+
+  private int pinCount() {
+    return type == null ? 8 : type.pinCount();
   }
 
   @Override
   protected void layoutChildren() {
+    PackageGeometry fitted = PackageGeometry.of(pinCount(), getWidth(), getHeight());
+    if (fitted.width() != geometry.width() || fitted.height() != geometry.height()) {
+      geometry = fitted;
+      redraw();
+    }
+    // Scale down only when the room is smaller than the smallest layout with 48 px targets.
     double fit = Math.min(getWidth() / geometry.width(), getHeight() / geometry.height());
-    double s = Math.max(0.3, Math.min(1.6, fit));
+    double s = Math.max(0.3, Math.min(1.0, fit));
     scale.setX(s);
     scale.setY(s);
     content.setLayoutX(Math.max(0, (getWidth() - geometry.width() * s) / 2));
@@ -128,12 +148,32 @@ public final class PackageDrawing extends Region {
     ref.setFill(Palette.PAPER);
     Text kind = text(type.word(), body.cx(), body.cy() + 14, Palette.font(15));
     kind.setFill(Palette.PAPER);
-    Text caption = text("top view, pin 1 at the notch", geometry.width() / 2, 24, Palette.font(15));
+    Text caption = text("top view, pin 1 at the notch", geometry.width() / 2, body.bottom() + 16, Palette.font(14));
     caption.setFill(Palette.SOFT_INK);
+    // The pin to probe, spelled out above the package where it has the whole width.
+    Text probe = new Text(probeLine());
+    probe.setId("probe-line");
+    probe.setFont(Palette.bold(17));
+    probe.setFill(Palette.INK);
+    probe.setTextOrigin(VPos.CENTER);
+    fit(probe, geometry.width() - 16, true);
+    probe.setX((geometry.width() - probe.getLayoutBounds().getWidth()) / 2);
+    probe.setY(19);
+    content.getChildren().add(probe);
     content.getChildren().addAll(bodyShape, notch, dot, ref, kind, caption);
     for (PackageGeometry.PinPlace place : geometry.pins()) {
       drawPinNumber(place);
     }
+  }
+
+  /** Returns e.g. "pin 6 · in− B · SUM +0.02 V" for the highlighted pin, or nothing. */
+  private String probeLine() {
+    if (highlighted < 1 || highlighted > geometry.pinCount()) {
+      return "";
+    }
+    String name = pinNames.getOrDefault(highlighted, PackageGeometry.pinName(type, highlighted));
+    String extra = pinText.get(highlighted);
+    return "pin " + highlighted + " \u00b7 " + name + (extra == null ? "" : " \u00b7 " + extra);
   }
 
   private void drawPin(PackageGeometry.PinPlace place) {
@@ -159,6 +199,7 @@ public final class PackageDrawing extends Region {
     double inner = place.left() ? area.right() - 10 : area.x() + 10;
     Text nameText = new Text(name);
     nameText.setFont(on ? Palette.bold(19) : Palette.font(17));
+    fit(nameText, area.w() - 14, on);
     nameText.setFill(Palette.INK);
     nameText.setTextOrigin(VPos.CENTER);
     place(nameText, inner, area.y() + (pinText.containsKey(place.pin()) ? 16 : area.h() / 2), place.left());
@@ -167,6 +208,7 @@ public final class PackageDrawing extends Region {
     if (extra != null) {
       Text extraText = new Text(extra);
       extraText.setFont(Palette.bold(16));
+      fit(extraText, area.w() - 14, true);
       extraText.setFill(Palette.EXPECTED);
       extraText.setTextOrigin(VPos.CENTER);
       place(extraText, inner, area.y() + 37, place.left());
@@ -184,6 +226,24 @@ public final class PackageDrawing extends Region {
     number.setFill(Palette.INK);
     number.setMouseTransparent(true);
     content.getChildren().add(number);
+  }
+
+  /**
+   * Shrinks the text's font until the text fits the width, down to 12 px, then shortens it with an
+   * ellipsis.
+   */
+  private static void fit(Text text, double width, boolean bold) {
+    double size = text.getFont().getSize();
+    while (size > 12 && text.getLayoutBounds().getWidth() > width) {
+      size -= 1;
+      text.setFont(bold ? Palette.bold(size) : Palette.font(size));
+    }
+    String full = text.getText();
+    int keep = full.length();
+    while (keep > 1 && text.getLayoutBounds().getWidth() > width) {
+      keep--;
+      text.setText(full.substring(0, keep).stripTrailing() + "\u2026");
+    }
   }
 
   private static void place(Text text, double x, double y, boolean rightAligned) {

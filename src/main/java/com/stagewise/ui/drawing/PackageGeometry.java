@@ -12,20 +12,27 @@ import java.util.Optional;
  * side), as every DIP data sheet draws it (common practice).
  */
 final class PackageGeometry {
-  /** Side of a pin's touch target; at least 48 px, about 9 mm on a laptop (common practice). */
+  /** Largest side of a pin's touch target. */
   static final double PAD = 52;
-  /** Distance between neighbouring pins on one side. */
-  static final double PITCH = 62;
-  /** Width of the text column beside each side (pin name above, pin text below). */
-  static final double TEXT_COLUMN = 176;
-  static final double BODY_WIDTH = 150;
-  static final double TOP = 56;
-  static final double BOTTOM = 24;
-  static final double MARGIN = 12;
+  /** Smallest side of a touch target: 48 px, about 9 mm on a laptop (common practice). */
+  static final double MIN_PAD = 48;
+  static final double MIN_PITCH = 52;
+  static final double MAX_PITCH = 62;
+  static final double MIN_TEXT_COLUMN = 72;
+  static final double MAX_TEXT_COLUMN = 176;
+  static final double MIN_BODY = 84;
+  static final double MAX_BODY = 150;
+  static final double TOP = 40;
+  static final double BOTTOM = 30;
+  static final double MARGIN = 8;
+  /** The size drawn when nothing constrains it. */
+  static final double PREFERRED_WIDTH = 2 * (MARGIN + MAX_TEXT_COLUMN + PAD) + MAX_BODY;
 
   private final int pinCount;
   private final Box body;
   private final List<PinPlace> pins;
+  private final double width;
+  private final double height;
 
   /**
    * Where one pin goes.
@@ -37,29 +44,53 @@ final class PackageGeometry {
    */
   record PinPlace(int pin, boolean left, Box pad, Box text) {}
 
-  private PackageGeometry(int pinCount) {
+  private PackageGeometry(int pinCount, double roomWidth, double roomHeight) {
     if (pinCount < 2 || pinCount % 2 != 0) {
       throw new IllegalArgumentException("pin count (" + pinCount + ") must be even and at least 2");
     }
     this.pinCount = pinCount;
     int perSide = pinCount / 2;
-    double bodyX = MARGIN + TEXT_COLUMN + PAD;
-    body = new Box(bodyX, TOP, BODY_WIDTH, perSide * PITCH);
+    // Fit the room: the pitch and text columns shrink down to their minimums, never the pads
+    // below 48 px; a room smaller than that is handled by scaling the whole drawing.
+    double pitch = clamp((roomHeight - TOP - BOTTOM) / perSide, MIN_PITCH, MAX_PITCH);
+    double pad = Math.min(PAD, pitch - 4);
+    double besideBody = 2 * (MARGIN + MIN_TEXT_COLUMN + 8 + pad - 6);
+    double bodyWidth = clamp(Math.min(roomWidth * 0.26, roomWidth - besideBody), MIN_BODY, MAX_BODY);
+    double column = clamp((roomWidth - bodyWidth - 2 * pad - 2 * MARGIN) / 2 - 8, MIN_TEXT_COLUMN, MAX_TEXT_COLUMN);
+    double bodyX = MARGIN + column + 8 + pad - 6;
+    body = new Box(bodyX, TOP, bodyWidth, perSide * pitch);
     List<PinPlace> places = new ArrayList<>();
     for (int pin = 1; pin <= pinCount; pin++) {
       boolean left = pin <= perSide;
       int row = left ? pin - 1 : pinCount - pin;
-      double cy = TOP + PITCH / 2 + row * PITCH;
+      double cy = TOP + pitch / 2 + row * pitch;
       // The pads overlap the body edge by a few pixels so that they read as legs of the package.
-      double padX = left ? bodyX - PAD + 6 : bodyX + BODY_WIDTH - 6;
-      Box pad = new Box(padX, cy - PAD / 2, PAD, PAD);
+      double padX = left ? bodyX - pad + 6 : bodyX + bodyWidth - 6;
+      Box padBox = new Box(padX, cy - pad / 2, pad, pad);
       Box text =
           left
-              ? new Box(MARGIN, cy - PAD / 2, TEXT_COLUMN - 8, PAD)
-              : new Box(padX + PAD + 8, cy - PAD / 2, TEXT_COLUMN - 8, PAD);
-      places.add(new PinPlace(pin, left, pad, text));
+              ? new Box(MARGIN, cy - pad / 2, column, pad)
+              : new Box(padX + pad + 8, cy - pad / 2, column, pad);
+      places.add(new PinPlace(pin, left, padBox, text));
     }
     pins = List.copyOf(places);
+    width = 2 * (MARGIN + column + 8 + pad - 6) + bodyWidth;
+    height = body.bottom() + BOTTOM;
+  }
+
+  private static double clamp(double value, double min, double max) {
+    return Math.max(min, Math.min(max, value));
+  }
+
+  /**
+   * Returns the geometry of a package with this many pins for a room of the given size in pixels:
+   * as large as fits, down to touch targets of 48 px; {@link #width()} and {@link #height()} may
+   * then exceed the room.
+   *
+   * @throws IllegalArgumentException if the count is odd or below 2
+   */
+  static PackageGeometry of(int pinCount, double roomWidth, double roomHeight) {
+    return new PackageGeometry(pinCount, roomWidth, roomHeight);
   }
 
   /**
@@ -68,7 +99,7 @@ final class PackageGeometry {
    * @throws IllegalArgumentException if the count is odd or below 2
    */
   static PackageGeometry of(int pinCount) {
-    return new PackageGeometry(pinCount);
+    return new PackageGeometry(pinCount, PREFERRED_WIDTH, 10_000);
   }
 
   int pinCount() {
@@ -99,11 +130,11 @@ final class PackageGeometry {
   }
 
   double width() {
-    return 2 * (MARGIN + TEXT_COLUMN + PAD) + BODY_WIDTH;
+    return width;
   }
 
   double height() {
-    return body.bottom() + BOTTOM;
+    return height;
   }
 
   /**

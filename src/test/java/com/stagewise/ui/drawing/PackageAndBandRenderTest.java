@@ -46,6 +46,34 @@ class PackageAndBandRenderTest {
     Fx.keep(image, "package-" + type.word());
   }
 
+  @ParameterizedTest
+  @EnumSource(PackageType.class)
+  void packageDrawing_inANarrowPanel_keepsFingerSizedPins(PackageType type) {
+    double height = type.pinCount() == 14 ? 470 : 320;
+    BufferedImage image =
+        Fx.call(
+            () -> {
+              PackageDrawing drawing = new PackageDrawing();
+              drawing.show(type, "U2", Map.of());
+              drawing.highlight(2);
+              drawing.setPinText(2, "FB  \u22120.003 V measured");
+              BufferedImage shot = Fx.render(drawing, 370, height);
+              for (int pin = 1; pin <= type.pinCount(); pin++) {
+                Node node = drawing.lookup("#pin-" + pin);
+                var pad = ((javafx.scene.Group) node).getChildren().get(0);
+                var bounds = pad.localToScene(pad.getBoundsInLocal());
+                // Stroke included, so a 48 px pad measures a little more.
+                assertThat(bounds.getWidth()).as("pin %d width", pin).isGreaterThanOrEqualTo(48);
+                assertThat(bounds.getHeight()).as("pin %d height", pin).isGreaterThanOrEqualTo(48);
+                assertThat(bounds.getMinX()).isGreaterThanOrEqualTo(0);
+                assertThat(bounds.getMaxX()).isLessThanOrEqualTo(370);
+              }
+              return shot;
+            });
+    assertThat(Fx.colours(image)).isGreaterThan(5);
+    Fx.keep(image, "package-narrow-" + type.word());
+  }
+
   @Test
   void bandChart_rendersReadingOutsideBandWithSuspects() {
     BufferedImage image =
@@ -62,7 +90,7 @@ class PackageAndBandRenderTest {
                       new BandChart.Marker("U1B stuck high", 13.45),
                       new BandChart.Marker("R1 short", -13.5),
                       new BandChart.Marker("healthy", -4.7)));
-              BufferedImage shot = Fx.render(chart, 560, 180);
+              BufferedImage shot = Fx.render(chart, 560, 140);
               assertThat(chart.lookup("#measured-marker")).isNotNull();
               assertThat(chart.lookup("#healthy-band")).isNotNull();
               assertThat(chart.lookup("#no-reading")).isNull();
@@ -80,7 +108,7 @@ class PackageAndBandRenderTest {
             () -> {
               BandChart chart = new BandChart();
               chart.show("SUM", 0.0, 0.0, Double.NaN, List.of(new BandChart.Marker("R3 open", 0.9)));
-              BufferedImage shot = Fx.render(chart, 560, 180);
+              BufferedImage shot = Fx.render(chart, 560, 140);
               assertThat(chart.lookup("#no-reading")).isNotNull();
               assertThat(chart.lookup("#measured-marker")).isNull();
               assertThat(chart.lookup("#healthy-band")).isNotNull();
@@ -97,7 +125,7 @@ class PackageAndBandRenderTest {
             () -> {
               BandChart chart = new BandChart();
               chart.show("U1.1", 2.41, 2.59, 2.47, List.of(new BandChart.Marker("R5 low", 2.3)));
-              return Fx.render(chart, 560, 180);
+              return Fx.render(chart, 560, 140);
             });
     assertThat(Fx.colours(image)).isGreaterThan(5);
     Fx.keep(image, "band-inside");

@@ -3,6 +3,7 @@ package com.stagewise.ui.drawing;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.circuit.PackageType;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.EnumSource;
@@ -46,6 +47,27 @@ class PackageGeometryTest {
       }
     }
     assertThat(g.pinAt(g.body().cx(), g.body().cy())).isEmpty();
+  }
+
+  @ParameterizedTest
+  @CsvSource({"8, 370, 330", "14, 370, 480", "14, 350, 440", "8, 900, 700"})
+  void fittedToARoom_keepsTargetsAt48PixelsAndFitsWhereItCan(int pins, double width, double height) {
+    PackageGeometry g = PackageGeometry.of(pins, width, height);
+    assertThat(g.width()).isLessThanOrEqualTo(width);
+    assertThat(g.height()).isLessThanOrEqualTo(height);
+    for (PackageGeometry.PinPlace place : g.pins()) {
+      assertThat(place.pad().w()).isGreaterThanOrEqualTo(48);
+      assertThat(place.pad().right()).isLessThanOrEqualTo(g.width());
+      assertThat(place.text().x()).isGreaterThanOrEqualTo(0);
+      assertThat(place.text().right()).isLessThanOrEqualTo(g.width());
+    }
+  }
+
+  @Test
+  void tooSmallARoom_stillKeeps48PixelTargets() {
+    PackageGeometry g = PackageGeometry.of(14, 100, 100);
+    assertThat(g.pins()).allMatch(p -> p.pad().w() >= 48 && p.pad().h() >= 48);
+    assertThat(g.width()).isGreaterThan(100);
   }
 
   @ParameterizedTest
