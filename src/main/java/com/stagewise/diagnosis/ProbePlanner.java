@@ -92,23 +92,24 @@ final class ProbePlanner {
         continue;
       }
       if (!taken.contains("dc:" + name)) {
-        double bits = gain(i, false, prior, components, entropy, meter);
+        double bits = round(gain(i, false, prior, components, entropy, meter));
         advice.add(new ProbeAdvice(name, Reading.Kind.DC, 0, bits, why(i, false, top)));
       }
       if (ac && isOutput(i) && !taken.contains("ac:" + name)) {
-        double bits = gain(i, true, prior, components, entropy, meter);
+        double bits = round(gain(i, true, prior, components, entropy, meter));
         advice.add(new ProbeAdvice(name, Reading.Kind.AC, hz, bits, why(i, true, top)));
       }
     }
     // Best first; on a tie prefer a package pin (a technician probes the pins), then sheet order.
     advice.sort(
-        Comparator.comparingDouble((ProbeAdvice a) -> -round(a.bits()))
+        Comparator.comparingDouble((ProbeAdvice a) -> -a.bits())
             .thenComparing(a -> points.isPin(points.index.get(a.at())) ? 0 : 1));
     return advice.subList(0, Math.min(LISTED, advice.size()));
   }
 
+  /** Bits to 1/10000: finer differences are quadrature noise, and equal figures should tie. */
   private static double round(double bits) {
-    return Math.round(bits * 1000) / 1000.0;
+    return Math.round(bits * 10000) / 10000.0;
   }
 
   private boolean isOutput(int i) {

@@ -112,4 +112,25 @@ class DiagnoserTest {
     assertThatThrownBy(() -> diagnoser.diagnose(readings("NOPE", 1.0))).isInstanceOf(InvalidInputException.class).hasMessageContaining("NOPE");
     assertThatThrownBy(() -> diagnoser.diagnose(readings("OUT", 400.0))).isInstanceOf(InvalidInputException.class).hasMessageContaining("beyond every rail");
   }
+
+  @Test
+  void outputBridgedToPositiveRail_readsTheRailItself() {
+    // Common practice: a solder bridge from an output to v+ reads the rail itself, not the rail
+    // less the headroom. Section B of a dual-8 has its output on pin 7, beside v+ on pin 8.
+    Stage follower =
+        new Stage(
+            "test follower, section B",
+            "",
+            "GND",
+            List.of(new Rail("VCC", 15, 0.05), new Rail("VEE", -15, 0.05)),
+            List.of(TestInput.dc("IN", 2.0)),
+            List.of(Part.resistor("RL", 10e3, 0.01, "OUT", "GND")),
+            List.of(
+                new Amplifier("U1B", "U1", PackageType.DUAL_8, "B", DeviceClass.CLASSIC_BIPOLAR, "IN", "OUT", "OUT", "VCC", "VEE")));
+    Diagnosis d = Diagnoser.of(follower).diagnose(readings("U1.8", 15.0, "U1.4", -15.0, "U1.7", 15.0, "U1.5", 2.0));
+    assertThat(d.suspects().get(0).group()).contains("U1.7-8:bridge");
+    assertThat(d.observations()).anySatisfy(o -> assertThat(o.text()).contains("v+ rail itself"));
+    // Stuck high would sit 1.5 V below the rail: the readings tell the two apart.
+    assertThat(d.suspects().get(0).group()).doesNotContain("U1B:stuck-high");
+  }
 }
