@@ -10,7 +10,6 @@ import javafx.application.Platform;
 import javafx.geometry.Pos;
 import javafx.scene.Scene;
 import javafx.scene.control.Label;
-import javafx.scene.control.ProgressIndicator;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
@@ -39,7 +38,8 @@ public final class DesktopLauncher extends Application {
     window.setMinHeight(700);
     Label opening = new Label("Opening the repair history …");
     opening.setStyle("-fx-font-size: 22px;");
-    VBox splash = new VBox(18, new ProgressIndicator(), opening);
+    // Only a label: the first window must come up fast; the screens follow when the history is open.
+    VBox splash = new VBox(18, opening);
     splash.setAlignment(Pos.CENTER);
     window.setScene(new Scene(new StackPane(splash), BenchApp.WIDTH, BenchApp.HEIGHT));
     window.setOnShown(e -> reportTiming());

@@ -32,7 +32,7 @@ public final class ValuePad extends VBox {
     display.setId(idPrefix + "-display");
     display.textProperty().bindBidirectional(model.textProperty());
     display.setOnAction(e -> onEnter.run());
-    display.setPrefColumnCount(9);
+    display.setPrefColumnCount(6);
     Label reading = new Label();
     reading.textProperty().bind(model.readingProperty());
     reading.getStyleClass().add("value-message");

@@ -108,7 +108,7 @@ public final class HistoryView {
         }
         String end = hit.outcome() == null ? "open" : Words.outcome(hit.outcome());
         String found = hit.confirmedFaults().isEmpty() ? "" : ": " + String.join(", ", hit.confirmedFaults().stream().map(Words::fault).toList());
-        setText(Words.date(hit.openedAt()) + "  " + hit.serial() + " (" + hit.boardModel() + ")  · " + end + found + "\n" + hit.symptom());
+        setText(Words.date(hit.openedAt()) + "  " + hit.serial() + "  —  " + hit.symptom() + "\n" + hit.boardModel() + "  ·  " + end + found);
       }
     });
     list.getSelectionModel().selectedItemProperty().addListener((o, was, hit) -> {

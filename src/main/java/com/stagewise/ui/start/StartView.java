@@ -21,6 +21,7 @@ public final class StartView {
   private final StartViewModel model;
   private final HBox root = new HBox(16);
   private final TextField serialField = new TextField();
+  private Keypad keypad;
 
   /** Builds the screen bound to its model. */
   public StartView(StartViewModel model) {
@@ -83,7 +84,7 @@ public final class StartView {
     search.getStyleClass().add("primary");
     search.setMinHeight(60);
     search.setOnAction(e -> model.search());
-    Keypad keypad = new Keypad(model.serialProperty(), "serial");
+    keypad = new Keypad(model.serialProperty(), "serial");
     keypad.follow(serialField);
     ListView<StartViewModel.UnitRow> list = new ListView<>(model.matches());
     list.setId("unit-matches");
@@ -142,6 +143,8 @@ public final class StartView {
                   return who + (cases == 0 ? "No earlier cases." : cases == 1 ? "1 case so far." : cases + " cases so far.");
                 },
                 model.selectedProperty()));
+    Label earlier = new Label("Earlier cases, newest first — tap an open one to resume it");
+    earlier.setStyle("-fx-font-weight: bold;");
     ListView<StartViewModel.CaseLine> cases = new ListView<>(model.glance());
     cases.setId("unit-cases");
     VBox.setVgrow(cases, Priority.ALWAYS);
@@ -198,7 +201,8 @@ public final class StartView {
     symptom.disableProperty().bind(model.selectedProperty().isNull());
     HBox openRow = new HBox(8, symptom, open);
     openRow.setAlignment(Pos.CENTER_LEFT);
-    box.getChildren().addAll(title, owner, cases, resume, symptomTitle, openRow);
+    keypad.follow(symptom);
+    box.getChildren().addAll(title, owner, earlier, cases, resume, symptomTitle, openRow);
     return box;
   }
 
@@ -232,6 +236,9 @@ public final class StartView {
     Label help = new Label("The keypad on the left types into the serial and owner fields too.");
     help.getStyleClass().add("hint");
     help.setWrapText(true);
+    keypad.follow(serial);
+    keypad.follow(owner);
+    keypad.follow(boardModel.getEditor());
     box.getChildren().addAll(title, serial, boardModel, owner, mains, new HBox(8, save, cancel), help);
     return box;
   }
