@@ -26,11 +26,13 @@ public final class DesktopLauncher extends Application {
   private Workshop workshop;
 
   static void open(String[] args) {
+    mark("main");
     Application.launch(DesktopLauncher.class, args);
   }
 
   @Override
   public void start(Stage window) {
+    mark("toolkit up");
     AppOptions options = AppOptions.parse(getParameters().getRaw());
     DataFolder folder = options.folder(System.getenv(), System.getProperty("user.home"));
     window.setTitle("Stagewise — bench");
@@ -73,6 +75,7 @@ public final class DesktopLauncher extends Application {
                     + " If it happens again, write down what you did and tell whoever looks after Stagewise."));
     window.setScene(app.scene());
     app.cautionOnFirstRun();
+    mark("unit screen shown");
   }
 
   private static void cannotOpen(Stage window, DataFolder folder, RuntimeException e) {
@@ -88,10 +91,15 @@ public final class DesktopLauncher extends Application {
   }
 
   private static void reportTiming() {
+    mark("first window shown");
+  }
+
+  /** With -Dstagewise.timing=true, prints the milliseconds since the process started. */
+  static void mark(String what) {
     if (Boolean.getBoolean("stagewise.timing")) {
       Instant started = ProcessHandle.current().info().startInstant().orElse(Instant.now());
       long millis = Duration.between(started, Instant.now()).toMillis();
-      System.out.println(String.format(Locale.ROOT, "stagewise: first window shown %d ms after start", millis));
+      System.out.println(String.format(Locale.ROOT, "stagewise: %s %d ms after start", what, millis));
     }
   }
 
