@@ -135,6 +135,7 @@ class BenchFlowTest {
 
     // Readings: rails first, as a technician checks them (common practice).
     assertThat(text("#probe-call")).isEqualTo("Probe U1 pin 8");
+    shoot("05-readings-first-probe");
     typeReading(VCC);
     assertThat(text("#probe-call")).isEqualTo("Probe U1 pin 4");
     typeReading(VEE);
@@ -151,7 +152,7 @@ class BenchFlowTest {
         break;
       }
     }
-    shoot("05-readings");
+    shoot("06-readings");
     Diagnosis diagnosis = fx(() -> app.bench().diagnosisProperty().get());
     Suspect first = diagnosis.suspects().get(0);
     // Textbook: with the feedback resistor open the inverting stage runs open-loop, so the output
@@ -164,7 +165,7 @@ class BenchFlowTest {
     robot.clickOn("#show-suspects");
     settle();
     assertThat(text("#confirming-check")).isNotBlank();
-    shoot("06-suspects");
+    shoot("07-suspects");
     robot.clickOn("#suspects-close-out");
     settle();
     assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.CLOSE_OUT);
@@ -173,7 +174,7 @@ class BenchFlowTest {
     settle();
     robot.clickOn("#outcome-fixed");
     robot.clickOn("#close-notes").write("Replaced and checked the output swings both ways.");
-    shoot("07-close-out");
+    shoot("08-close-out");
     robot.clickOn("#close-case");
     settle();
 
@@ -184,7 +185,7 @@ class BenchFlowTest {
     robot.clickOn("#history-query").write(SERIAL);
     robot.clickOn("#history-search");
     settle();
-    shoot("08-history");
+    shoot("09-history");
     var hits = workshop.store().search(SearchQuery.all().withSerial(SERIAL).withStatus(CaseStatus.CLOSED));
     assertThat(hits).anySatisfy(hit -> {
       assertThat(hit.symptom()).startsWith("Channel 1 output pinned negative");

@@ -86,11 +86,13 @@ public final class ReadingsView {
     title.setId("probe-title");
     title.setWrapText(true);
     title.setStyle("-fx-font-weight: bold;");
+    title.setMinHeight(Region.USE_PREF_SIZE);
     title.textProperty().bind(Bindings.createStringBinding(
         () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().title(), model.probeProperty()));
     Label why = new Label();
     why.setId("probe-why");
     why.getStyleClass().add("probe-why");
+    why.setMinHeight(Region.USE_PREF_SIZE);
     why.setWrapText(true);
     why.textProperty().bind(Bindings.createStringBinding(
         () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().why(), model.probeProperty()));
@@ -181,6 +183,12 @@ public final class ReadingsView {
     list.setId("readings-list");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new ReadingCell());
+    Label empty = new Label("No readings yet. Put the probe where the left side says, type what the meter shows"
+        + " on the pad and tap Add reading. The suspects and the next probe follow each reading.");
+    empty.setWrapText(true);
+    empty.getStyleClass().add("hint");
+    empty.setPadding(new javafx.geometry.Insets(12));
+    list.setPlaceholder(empty);
     Button all = new Button("See all suspects");
     all.setId("show-suspects");
     all.getStyleClass().add("primary");
