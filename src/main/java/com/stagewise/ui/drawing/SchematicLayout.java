@@ -61,9 +61,9 @@ final class SchematicLayout {
   static final double LANE_STEP = 62;
   static final double BUS = 24;
   static final double SUPPLY_X = 55;
-  static final double PART_FONT = 13;
+  static final double PART_FONT = 14;
   static final double NET_FONT = 14;
-  static final double PIN_FONT = 12;
+  static final double PIN_FONT = 13;
   static final double BODY_LONG = 56;
   static final double BODY_SHORT = 18;
   static final double CAP_GAP = 10;
@@ -472,10 +472,12 @@ final class SchematicLayout {
     b.caption(ref, 38 - width(ref, PART_FONT, true) / 2 + 4, -line(PART_FONT) / 2, PART_FONT, true, CaptionKind.AMP_REF);
     // Supply pins: short stubs from the triangle's top and bottom edges, each ending in its rail.
     double edge = AmpGlyph.HALF_HEIGHT * (1 - SUPPLY_X / AmpGlyph.WIDTH);
-    b.wire(amp.vPlus(), SUPPLY_X, -edge, SUPPLY_X, -edge - 20);
-    b.supplySymbol(amp.vPlus(), SUPPLY_X, -edge - 20, Direction.UP);
-    b.wire(amp.vMinus(), SUPPLY_X, edge, SUPPLY_X, edge + 20);
-    b.supplySymbol(amp.vMinus(), SUPPLY_X, edge + 20, Direction.DOWN);
+    // Long enough for the pin number to sit beside the stub, clear of the rail's bar.
+    double stub = line(PIN_FONT) + 8;
+    b.wire(amp.vPlus(), SUPPLY_X, -edge, SUPPLY_X, -edge - stub);
+    b.supplySymbol(amp.vPlus(), SUPPLY_X, -edge - stub, Direction.UP);
+    b.wire(amp.vMinus(), SUPPLY_X, edge, SUPPLY_X, edge + stub);
+    b.supplySymbol(amp.vMinus(), SUPPLY_X, edge + stub, Direction.DOWN);
     String vp = Integer.toString(amp.pin(Terminal.V_PLUS));
     String vm = Integer.toString(amp.pin(Terminal.V_MINUS));
     b.caption(vp, SUPPLY_X + 11, -edge - 3 - line(PIN_FONT), PIN_FONT, false, CaptionKind.PIN_NUMBER);
