@@ -351,7 +351,7 @@ final class SchematicLayout {
   record Uplink(double x, double y, int d) {}
 
   private Block section(Amplifier amp, boolean flipped) {
-    Block b = new Block(amp, flipped);
+    Block b = new Block();
     double mY = flipped ? AmpGlyph.PIN_OFFSET : -AmpGlyph.PIN_OFFSET;
     double pY = -mY;
     int dM = flipped ? 1 : -1;
@@ -722,8 +722,6 @@ final class SchematicLayout {
 
   /** One section drawn in its own frame: triangle's left edge at x = 0, output at y = 0. */
   private final class Block extends Canvas {
-    final Amplifier section;
-    final boolean flipped;
     final List<Pending> inputs = new ArrayList<>();
     final List<Pending> routes = new ArrayList<>();
     final List<Uplink> uplinks = new ArrayList<>();
@@ -736,10 +734,6 @@ final class SchematicLayout {
     double minY;
     double maxY;
 
-    Block(Amplifier section, boolean flipped) {
-      this.section = section;
-      this.flipped = flipped;
-    }
 
     /** Joins the input symbols on one line at the block's left edge and measures the block. */
     void finish() {

@@ -142,10 +142,12 @@ record Sheet(
 
     /** Returns whether the point lies on the wire strictly between its ends. */
     boolean hasInside(double x, double y) {
+      // A point a rounding error away from an end is that end, not inside.
+      double e = 1e-6;
       if (horizontal()) {
-        return y == y1 && x > Math.min(x1, x2) && x < Math.max(x1, x2);
+        return Math.abs(y - y1) < e && x > Math.min(x1, x2) + e && x < Math.max(x1, x2) - e;
       }
-      return x == x1 && y > Math.min(y1, y2) && y < Math.max(y1, y2);
+      return Math.abs(x - x1) < e && y > Math.min(y1, y2) + e && y < Math.max(y1, y2) - e;
     }
   }
 
