@@ -15,7 +15,7 @@ import java.util.Map;
  */
 final class LabelPlacer {
   private static final double GAP = 4;
-  private static final double[] ALONG = {0.5, 0.3, 0.7, 0.15, 0.85, 0.0, 1.0};
+  private static final double[] ALONG = {0.5, 0.3, 0.7, 0.15, 0.85};
 
   private LabelPlacer() {}
 
