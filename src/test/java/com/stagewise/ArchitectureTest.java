@@ -11,8 +11,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Keeps the feature packages of the design notes: dependencies point one way, {@code circuit <-
- * solver <- diagnosis <- (history, interchange) <- ui, cli, app}, and each technology stays at its
- * edge (JavaFX in ui/app, JDBC in history, Jackson in interchange).
+ * solver <- diagnosis <- (history, interchange) <- report <- ui, cli, app}, and each technology
+ * stays at its edge (JavaFX in ui/app, JDBC in history, Jackson in interchange, PDFBox in report).
  */
 class ArchitectureTest {
   private static JavaClasses classes;
@@ -59,6 +59,17 @@ class ArchitectureTest {
   }
 
   @Test
+  void pdfbox_onlyInReport() {
+    noClasses()
+        .that()
+        .resideOutsideOfPackage("com.stagewise.report..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("org.apache.pdfbox..", "org.apache.fontbox..")
+        .check(classes);
+  }
+
+  @Test
   void featurePackages_dependOneWay() {
     layeredArchitecture()
         .consideringOnlyDependenciesInLayers()
@@ -68,6 +79,7 @@ class ArchitectureTest {
         .layer("diagnosis").definedBy("com.stagewise.diagnosis..")
         .layer("history").definedBy("com.stagewise.history..")
         .layer("interchange").definedBy("com.stagewise.interchange..")
+        .layer("report").definedBy("com.stagewise.report..")
         .layer("ui").definedBy("com.stagewise.ui..")
         .layer("cli").definedBy("com.stagewise.cli..")
         .layer("app").definedBy("com.stagewise.app..")
@@ -76,10 +88,12 @@ class ArchitectureTest {
         .whereLayer("diagnosis").mayOnlyAccessLayers("solver", "circuit")
         .whereLayer("history").mayOnlyAccessLayers("diagnosis", "solver", "circuit")
         .whereLayer("interchange").mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
-        .whereLayer("ui").mayOnlyAccessLayers("interchange", "history", "diagnosis", "solver", "circuit")
-        .whereLayer("cli").mayOnlyAccessLayers("interchange", "history", "diagnosis", "solver", "circuit")
+        .whereLayer("report").mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
+        .whereLayer("report").mayOnlyBeAccessedByLayers("ui", "cli", "app")
+        .whereLayer("ui").mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
+        .whereLayer("cli").mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("app")
-        .mayOnlyAccessLayers("ui", "cli", "interchange", "history", "diagnosis", "solver", "circuit")
+        .mayOnlyAccessLayers("ui", "cli", "report", "interchange", "history", "diagnosis", "solver", "circuit")
         .check(classes);
   }
 
@@ -89,7 +103,8 @@ class ArchitectureTest {
         .should()
         .resideOutsideOfPackages(
             "com.stagewise.circuit..", "com.stagewise.solver..", "com.stagewise.diagnosis..",
-            "com.stagewise.history..", "com.stagewise.interchange..", "com.stagewise.ui..",
+            "com.stagewise.history..", "com.stagewise.interchange..", "com.stagewise.report..",
+            "com.stagewise.ui..",
             "com.stagewise.cli..", "com.stagewise.app..")
         .check(classes);
   }

@@ -17,7 +17,8 @@ import picocli.CommandLine.Command;
       SolveCommand.class,
       DiagnoseCommand.class,
       TemplateCommand.class,
-      HistoryCommand.class
+      HistoryCommand.class,
+      ReportCommand.class
     })
 public final class StagewiseCommand implements Runnable {
 
