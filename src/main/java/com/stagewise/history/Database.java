@@ -33,6 +33,9 @@ final class Database implements AutoCloseable {
   /** How long a statement waits for another program's write lock before it reports busy. */
   static final int BUSY_TIMEOUT_MS = 10_000;
 
+  /** The page cache per connection, in KiB. */
+  static final int CACHE_KIB = 65_536;
+
   /** Retries of a whole write transaction that still found the file busy, with growing pauses. */
   private static final int WRITE_ATTEMPTS = 6;
 
@@ -82,6 +85,9 @@ final class Database implements AutoCloseable {
           ResultSet rs = wal.executeQuery()) {
         rs.next();
       }
+      // A page cache of 64 MiB (default 2 MiB): an import of thousands of cases touches index pages
+      // all over the file (ids are random), and a small cache spills them to the log mid-transaction.
+      database.execute("PRAGMA cache_size = -" + CACHE_KIB);
       return database;
     } catch (SQLException | RuntimeException e) {
       database.closeQuietly();

@@ -260,11 +260,12 @@ final class Importer {
     for (StageSheetRecord s0 : b.stageSheets()) {
       StageSheetRecord s =
           new StageSheetRecord(s0.id(), mapped(s0.boardModelId()), s0.title(), s0.sheetJson(), s0.updatedAt());
-      Optional<StageSheetRecord> local = rows.first(Rows.STAGE_SHEET + " WHERE id = ?", Rows::stageSheet, s.id());
-      if (local.isEmpty()) {
-        rows.insert(s);
+      // New records are the common case: try the insert first, and look at the local copy only
+      // when there is one.
+      if (rows.tryInsert(s)) {
         added++;
       } else {
+        Optional<StageSheetRecord> local = rows.first(Rows.STAGE_SHEET + " WHERE id = ?", Rows::stageSheet, s.id());
         settle(STAGE_SHEET, s.id(), s, local.get(), s.updatedAt(), local.get().updatedAt(), () -> rows.replace(s));
       }
     }
@@ -298,50 +299,47 @@ final class Importer {
           new RepairCase(
               c0.id(), mapped(c0.unitId()), c0.openedAt(), c0.symptom(), c0.status(), c0.closedAt(),
               c0.outcome(), c0.confirmedFaults(), c0.updatedAt());
-      Optional<RepairCase> local = rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, c.id());
-      if (local.isEmpty()) {
-        rows.insert(c);
+      if (rows.tryInsert(c)) {
         added++;
         touchedCases.add(c.id());
-      } else if (settle(CASE, c.id(), c, local.get(), c.updatedAt(), local.get().updatedAt(), () -> rows.replace(c))) {
+        continue;
+      }
+      Optional<RepairCase> local = rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, c.id());
+      if (settle(CASE, c.id(), c, local.get(), c.updatedAt(), local.get().updatedAt(), () -> rows.replace(c))) {
         touchedCases.add(c.id());
       }
     }
     for (StoredReading r : b.readings()) {
-      Optional<StoredReading> local = rows.first(Rows.READING + " WHERE id = ?", Rows::reading, r.id());
-      if (local.isEmpty()) {
-        rows.insert(r);
+      if (rows.tryInsert(r)) {
         added++;
       } else {
-        settleFixed(READING, r.id(), r, local.get());
+        settleFixed(READING, r.id(), r, rows.first(Rows.READING + " WHERE id = ?", Rows::reading, r.id()).orElseThrow());
       }
     }
     for (SuspectListRecord s : b.suspectLists()) {
-      List<SuspectListRecord> local = rows.suspectLists("WHERE id = ?", s.id());
-      if (local.isEmpty()) {
-        rows.insert(s);
+      if (rows.tryInsert(s)) {
         added++;
       } else {
-        settleFixed(SUSPECT_LIST, s.id(), s, local.get(0));
+        settleFixed(SUSPECT_LIST, s.id(), s, rows.suspectLists("WHERE id = ?", s.id()).get(0));
       }
     }
     for (RepairAction a : b.actions()) {
-      Optional<RepairAction> local = rows.first(Rows.ACTION + " WHERE id = ?", Rows::action, a.id());
-      if (local.isEmpty()) {
-        rows.insert(a);
+      if (rows.tryInsert(a)) {
         added++;
         touchedCases.add(a.caseId());
-      } else if (settle(ACTION, a.id(), a, local.get(), a.updatedAt(), local.get().updatedAt(), () -> rows.replace(a))) {
+        continue;
+      }
+      Optional<RepairAction> local = rows.first(Rows.ACTION + " WHERE id = ?", Rows::action, a.id());
+      if (settle(ACTION, a.id(), a, local.get(), a.updatedAt(), local.get().updatedAt(), () -> rows.replace(a))) {
         touchedCases.add(a.caseId());
         touchedCases.add(local.get().caseId());
       }
     }
     for (CaseNote n : b.notes()) {
-      Optional<CaseNote> local = rows.first(Rows.NOTE + " WHERE id = ?", Rows::note, n.id());
-      if (local.isEmpty()) {
-        rows.insert(n);
+      if (rows.tryInsert(n)) {
         added++;
       } else {
+        Optional<CaseNote> local = rows.first(Rows.NOTE + " WHERE id = ?", Rows::note, n.id());
         settle(NOTE, n.id(), n, local.get(), n.updatedAt(), local.get().updatedAt(), () -> rows.replace(n));
       }
     }

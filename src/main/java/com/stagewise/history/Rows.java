@@ -241,11 +241,40 @@ final class Rows implements AutoCloseable {
   }
 
   // ---- writing records ------------------------------------------------------------------------
+  // tryInsert adds a record unless one with its id is there already (then it returns false and
+  // changes nothing); insert expects a new id.
 
-  void insert(BoardModel m) throws SQLException {
-    update(
-        "INSERT INTO board_model (id, name, maker, notes, updated_at) VALUES (?, ?, ?, ?, ?)",
+  <T> void insert(T record) throws SQLException {
+    boolean inserted;
+    if (record instanceof BoardModel m) {
+      inserted = tryInsert(m);
+    } else if (record instanceof StageSheetRecord s) {
+      inserted = tryInsert(s);
+    } else if (record instanceof Unit u) {
+      inserted = tryInsert(u);
+    } else if (record instanceof RepairCase c) {
+      inserted = tryInsert(c);
+    } else if (record instanceof StoredReading r) {
+      inserted = tryInsert(r);
+    } else if (record instanceof SuspectListRecord l) {
+      inserted = tryInsert(l);
+    } else if (record instanceof RepairAction a) {
+      inserted = tryInsert(a);
+    } else if (record instanceof CaseNote n) {
+      inserted = tryInsert(n);
+    } else {
+      throw new IllegalArgumentException("not a history record: " + record.getClass());
+    }
+    if (!inserted) {
+      throw new IllegalStateException("a record with this id exists already");
+    }
+  }
+
+  boolean tryInsert(BoardModel m) throws SQLException {
+    int inserted = update(
+        "INSERT INTO board_model (id, name, maker, notes, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         m.id(), m.name(), m.maker(), m.notes(), m.updatedAt());
+    return inserted == 1;
   }
 
   void replace(BoardModel m) throws SQLException {
@@ -254,11 +283,12 @@ final class Rows implements AutoCloseable {
         m.name(), m.maker(), m.notes(), m.updatedAt(), m.id());
   }
 
-  void insert(StageSheetRecord s) throws SQLException {
-    update(
+  boolean tryInsert(StageSheetRecord s) throws SQLException {
+    int inserted = update(
         "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
-            + " VALUES (?, ?, ?, ?, ?)",
+            + " VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         s.id(), s.boardModelId(), s.title(), s.sheetJson(), s.updatedAt());
+    return inserted == 1;
   }
 
   void replace(StageSheetRecord s) throws SQLException {
@@ -268,10 +298,11 @@ final class Rows implements AutoCloseable {
         s.boardModelId(), s.title(), s.sheetJson(), s.updatedAt(), s.id());
   }
 
-  void insert(Unit u) throws SQLException {
-    update(
-        "INSERT INTO unit (id, serial, board_model_id, owner, updated_at) VALUES (?, ?, ?, ?, ?)",
+  boolean tryInsert(Unit u) throws SQLException {
+    int inserted = update(
+        "INSERT INTO unit (id, serial, board_model_id, owner, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         u.id(), u.serial(), u.boardModelId(), u.owner(), u.updatedAt());
+    return inserted == 1;
   }
 
   void replace(Unit u) throws SQLException {
@@ -280,10 +311,10 @@ final class Rows implements AutoCloseable {
         u.serial(), u.boardModelId(), u.owner(), u.updatedAt(), u.id());
   }
 
-  void insert(RepairCase c) throws SQLException {
-    update(
+  boolean tryInsert(RepairCase c) throws SQLException {
+    int inserted = update(
         "INSERT INTO repair_case (id, unit_id, opened_at, symptom, status, closed_at, outcome,"
-            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?)",
+            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         c.id(),
         c.unitId(),
         c.openedAt(),
@@ -292,7 +323,10 @@ final class Rows implements AutoCloseable {
         c.closedAt(),
         c.outcome() == null ? null : c.outcome().word(),
         c.updatedAt());
-    writeFaults(c);
+    if (inserted == 1) {
+      writeFaults(c);
+    }
+    return inserted == 1;
   }
 
   void replace(RepairCase c) throws SQLException {
@@ -320,10 +354,10 @@ final class Rows implements AutoCloseable {
     }
   }
 
-  void insert(StoredReading r) throws SQLException {
-    update(
+  boolean tryInsert(StoredReading r) throws SQLException {
+    int inserted = update(
         "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at)"
-            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)",
+            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         r.id(),
         r.caseId(),
         r.at(),
@@ -333,18 +367,22 @@ final class Rows implements AutoCloseable {
         r.uncertainty(),
         r.meterText(),
         r.takenAt());
+    return inserted == 1;
   }
 
-  void insert(SuspectListRecord list) throws SQLException {
-    update(
+  boolean tryInsert(SuspectListRecord list) throws SQLException {
+    int inserted = update(
         "INSERT INTO suspect_list (id, case_id, computed_at, program_version, verdict,"
-            + " next_probes) VALUES (?, ?, ?, ?, ?, ?)",
+            + " next_probes) VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         list.id(),
         list.caseId(),
         list.computedAt(),
         list.programVersion(),
         list.verdict(),
         list.nextProbes());
+    if (inserted == 0) {
+      return false;
+    }
     for (StoredSuspect s : list.suspects()) {
       update(
           "INSERT INTO suspect (suspect_list_id, rank, fault_id, probability, fault_group, why)"
@@ -356,12 +394,13 @@ final class Rows implements AutoCloseable {
           String.join(" ", s.group()),
           s.why());
     }
+    return true;
   }
 
-  void insert(RepairAction a) throws SQLException {
-    update(
+  boolean tryInsert(RepairAction a) throws SQLException {
+    int inserted = update(
         "INSERT INTO repair_action (id, case_id, at, kind, part, old_value, new_value, text,"
-            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)",
+            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         a.id(),
         a.caseId(),
         a.at(),
@@ -371,6 +410,7 @@ final class Rows implements AutoCloseable {
         a.newValue(),
         a.text(),
         a.updatedAt());
+    return inserted == 1;
   }
 
   void replace(RepairAction a) throws SQLException {
@@ -388,10 +428,11 @@ final class Rows implements AutoCloseable {
         a.id());
   }
 
-  void insert(CaseNote n) throws SQLException {
-    update(
-        "INSERT INTO case_note (id, case_id, at, text, updated_at) VALUES (?, ?, ?, ?, ?)",
+  boolean tryInsert(CaseNote n) throws SQLException {
+    int inserted = update(
+        "INSERT INTO case_note (id, case_id, at, text, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
         n.id(), n.caseId(), n.at(), n.text(), n.updatedAt());
+    return inserted == 1;
   }
 
   void replace(CaseNote n) throws SQLException {

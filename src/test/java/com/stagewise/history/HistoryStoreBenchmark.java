@@ -1,0 +1,89 @@
+package com.stagewise.history;
+
+import com.stagewise.history.demo.SyntheticHistory;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Random;
+import java.util.concurrent.TimeUnit;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
+import org.openjdk.jmh.annotations.Warmup;
+
+/**
+ * Lookups in a large history: 100,000 cases with 10 readings each (1,000,000 readings), one note
+ * each, 25,000 units of 50 board models (generated, {@link SyntheticHistory}).
+ *
+ * <p>The database is {@code -Dstagewise.bench.db=FILE} (default {@code
+ * target/bench/history-100k.db}); it is generated on first use, or beforehand with {@code
+ * stagewise history make-test-data --db FILE} (see DEVELOPERS.md, "History store"). Sample time:
+ * the median is the {@code p0.50} line of JMH's report.
+ */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.SampleTime)
+@OutputTimeUnit(TimeUnit.MICROSECONDS)
+@Warmup(iterations = 3, time = 2)
+@Measurement(iterations = 5, time = 2)
+@Fork(1)
+public class HistoryStoreBenchmark {
+  static final int CASES = 100_000;
+  static final int READINGS_PER_CASE = 10;
+
+  private HistoryStore store;
+  private List<String> unitIds;
+  private final Random random = new Random(42);
+
+  @Setup(Level.Trial)
+  public void open() throws Exception {
+    Path file = Path.of(System.getProperty("stagewise.bench.db", "target/bench/history-100k.db"));
+    boolean fresh = !Files.exists(file);
+    store = HistoryStore.open(file);
+    if (fresh) {
+      SyntheticHistory.fill(store, CASES, READINGS_PER_CASE, 1, 2_000);
+    }
+    unitIds = store.units(null).stream().map(u -> u.id()).toList();
+  }
+
+  @TearDown(Level.Trial)
+  public void close() {
+    store.close();
+  }
+
+  @Benchmark
+  public List<SearchHit> searchBySerial() {
+    int unit = random.nextInt(SyntheticHistory.unitsFor(CASES));
+    return store.search(SearchQuery.all().withSerial(SyntheticHistory.serial(unit)));
+  }
+
+  /** One word of the generator's small vocabulary: each matches about a fifth of all texts. */
+  @Benchmark
+  public List<SearchHit> fullTextOneCommonWord() {
+    return store.search(SearchQuery.all().withText(SyntheticHistory.word(random)).withLimit(20));
+  }
+
+  @Benchmark
+  public List<SearchHit> fullTextTwoWords() {
+    return store.search(
+        SearchQuery.all().withText(SyntheticHistory.word(random) + " " + SyntheticHistory.word(random)).withLimit(20));
+  }
+
+  @Benchmark
+  public List<SearchHit> fullTextRareWord() {
+    // A word in none of the generated texts but one: the usual case of a specific symptom.
+    return store.search(SearchQuery.all().withText("motorboating squeal").withLimit(20));
+  }
+
+  @Benchmark
+  public UnitHistory unitHistory() {
+    return store.unitHistory(unitIds.get(random.nextInt(unitIds.size()))).orElseThrow();
+  }
+}
