@@ -34,17 +34,14 @@ final class Search {
       if (match.isEmpty()) {
         return List.of();
       }
-      String snippet =
-          "snippet(%s, 0, '" + SNIPPET_OPEN + "', '" + SNIPPET_CLOSE + "', '…', " + SNIPPET_TOKENS + ")";
-      sql.append("WITH text_hit (case_row, score, snip) AS (")
-          .append("SELECT rowid, bm25(symptom_text), ")
-          .append(String.format(java.util.Locale.ROOT, snippet, "symptom_text"))
-          .append(" FROM symptom_text WHERE symptom_text MATCH ?")
-          .append(" UNION ALL SELECT rc.row, bm25(note_text), ")
-          .append(String.format(java.util.Locale.ROOT, snippet, "note_text"))
+      // Rank every matching case by its best text, without snippets: snippets are made for the
+      // returned hits only (making one for each of thousands of matches costs far more).
+      sql.append("WITH text_hit (case_row, score) AS (")
+          .append("SELECT rowid, bm25(symptom_text) FROM symptom_text WHERE symptom_text MATCH ?")
+          .append(" UNION ALL SELECT rc.row, bm25(note_text)")
           .append(" FROM note_text JOIN case_note cn ON cn.row = note_text.rowid")
           .append(" JOIN repair_case rc ON rc.id = cn.case_id WHERE note_text MATCH ?),")
-          .append(" best (case_row, score, snip) AS (SELECT case_row, min(score), snip FROM text_hit")
+          .append(" best (case_row, score) AS (SELECT case_row, min(score) FROM text_hit")
           .append(" GROUP BY case_row) ");
       parameters.add(match);
       parameters.add(match);
@@ -52,7 +49,7 @@ final class Search {
     sql.append("SELECT c.id, u.id, u.serial, m.name, c.status, c.outcome, c.opened_at, c.symptom,")
         .append(" (SELECT group_concat(fault_id, ' ') FROM (SELECT fault_id FROM confirmed_fault f")
         .append(" WHERE f.case_id = c.id ORDER BY position)), ")
-        .append(ranked ? "best.snip, -best.score" : "NULL, 0")
+        .append(ranked ? "NULL, -best.score" : "NULL, 0")
         .append(ranked ? " FROM best JOIN repair_case c ON c.row = best.case_row" : " FROM repair_case c")
         .append(" JOIN unit u ON u.id = c.unit_id JOIN board_model m ON m.id = u.board_model_id")
         .append(" WHERE 1 = 1");
@@ -114,7 +111,42 @@ final class Search {
         }
       }
     }
+    if (ranked) {
+      String match = matchExpression(query.text().get());
+      List<SearchHit> withSnippets = new ArrayList<>(hits.size());
+      for (SearchHit hit : hits) {
+        String snippet = snippet(connection, match, hit.caseId());
+        withSnippets.add(
+            new SearchHit(hit.caseId(), hit.unitId(), hit.serial(), hit.boardModel(), hit.status(), hit.outcome(),
+                hit.openedAt(), hit.symptom(), hit.confirmedFaults(), snippet == null ? hit.snippet() : snippet,
+                hit.score()));
+      }
+      return withSnippets;
+    }
     return hits;
+  }
+
+  /** Returns the matching words of a case's symptom in context, else of its best-matching note. */
+  private static String snippet(Connection connection, String match, String caseId) throws SQLException {
+    String format = "snippet(%s, 0, '" + SNIPPET_OPEN + "', '" + SNIPPET_CLOSE + "', '…', " + SNIPPET_TOKENS + ")";
+    String symptom =
+        "SELECT " + String.format(java.util.Locale.ROOT, format, "symptom_text") + " FROM symptom_text"
+            + " WHERE symptom_text MATCH ? AND rowid = (SELECT row FROM repair_case WHERE id = ?)";
+    String note =
+        "SELECT " + String.format(java.util.Locale.ROOT, format, "note_text") + " FROM note_text"
+            + " WHERE note_text MATCH ? AND rowid IN (SELECT row FROM case_note WHERE case_id = ?)"
+            + " ORDER BY rank LIMIT 1";
+    for (String sql : List.of(symptom, note)) {
+      try (PreparedStatement statement = connection.prepareStatement(sql)) {
+        Rows.bind(statement, match, caseId);
+        try (ResultSet rs = statement.executeQuery()) {
+          if (rs.next()) {
+            return rs.getString(1);
+          }
+        }
+      }
+    }
+    return null;
   }
 
   /**

@@ -23,7 +23,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * Lookups in a large history: 100,000 cases with 10 readings each (1,000,000 readings), one note
  * each, 25,000 units of 50 board models (generated, {@link SyntheticHistory}).
  *
- * <p>The database is {@code -Dstagewise.bench.db=FILE} (default {@code
+ * <p>Full-text queries return the default 50 best hits with snippets. The database is {@code -Dstagewise.bench.db=FILE} (default {@code
  * target/bench/history-100k.db}); it is generated on first use, or beforehand with {@code
  * stagewise history make-test-data --db FILE} (see DEVELOPERS.md, "History store"). Sample time:
  * the median is the {@code p0.50} line of JMH's report.
@@ -64,22 +64,22 @@ public class HistoryStoreBenchmark {
     return store.search(SearchQuery.all().withSerial(SyntheticHistory.serial(unit)));
   }
 
-  /** One word of the generator's small vocabulary: each matches about a fifth of all texts. */
+  /** A word picked uniformly from the vocabulary: a specific word, in few texts (typical query). */
   @Benchmark
-  public List<SearchHit> fullTextOneCommonWord() {
-    return store.search(SearchQuery.all().withText(SyntheticHistory.word(random)).withLimit(20));
+  public List<SearchHit> fullTextSpecificWord() {
+    return store.search(SearchQuery.all().withText(SyntheticHistory.word(random.nextInt(SyntheticHistory.VOCABULARY))));
   }
 
+  /** Two words drawn as they occur in the texts (so often common ones), both required. */
   @Benchmark
-  public List<SearchHit> fullTextTwoWords() {
-    return store.search(
-        SearchQuery.all().withText(SyntheticHistory.word(random) + " " + SyntheticHistory.word(random)).withLimit(20));
+  public List<SearchHit> fullTextTwoUsualWords() {
+    return store.search(SearchQuery.all().withText(SyntheticHistory.textWord(random) + " " + SyntheticHistory.textWord(random)));
   }
 
+  /** The most frequent word, in about a third of all texts: the worst case. */
   @Benchmark
-  public List<SearchHit> fullTextRareWord() {
-    // A word in none of the generated texts but one: the usual case of a specific symptom.
-    return store.search(SearchQuery.all().withText("motorboating squeal").withLimit(20));
+  public List<SearchHit> fullTextMostCommonWord() {
+    return store.search(SearchQuery.all().withText(SyntheticHistory.word(0)));
   }
 
   @Benchmark

@@ -53,9 +53,32 @@ public final class SyntheticHistory {
     return Math.max(1, cases / CASES_PER_UNIT);
   }
 
-  /** Returns a random word of the generator's vocabulary, for full-text queries. */
-  public static String word(Random random) {
-    return WORDS[random.nextInt(WORDS.length)];
+  /** Words in the generated texts: the trade words above, then made-up words. */
+  public static final int VOCABULARY = 5_000;
+
+  private static final String[] SYLLABLES = {
+    "ka", "lo", "mi", "ne", "ru", "sa", "te", "vo", "zi", "pa", "bu", "de", "fo", "gi", "ha", "jo", "ku", "li", "mo", "nu"};
+
+  /**
+   * Returns the word of rank {@code rank} (0 is the most frequent): the trade words first, then
+   * made-up words of three syllables.
+   */
+  public static String word(int rank) {
+    if (rank < WORDS.length) {
+      return WORDS[rank];
+    }
+    int i = rank - WORDS.length;
+    return SYLLABLES[i % 20] + SYLLABLES[(i / 20) % 20] + SYLLABLES[(i / 400) % 20] + (i / 8000 == 0 ? "" : "x");
+  }
+
+  /**
+   * Returns a word drawn as in natural text (Zipf's law, frequency about 1/rank): a few words are
+   * in many texts, most words in few.
+   */
+  public static String textWord(Random random) {
+    // Inverse of the continuous 1/r distribution on [1, VOCABULARY + 1).
+    int rank = (int) Math.floor(Math.pow(VOCABULARY + 1, random.nextDouble())) - 1;
+    return word(Math.min(rank, VOCABULARY - 1));
   }
 
   /**
@@ -144,7 +167,7 @@ public final class SyntheticHistory {
       if (w > 0) {
         text.append(' ');
       }
-      text.append(word(random));
+      text.append(textWord(random));
     }
     return text.toString();
   }
