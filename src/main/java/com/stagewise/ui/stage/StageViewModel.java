@@ -64,6 +64,12 @@ public final class StageViewModel {
         setStage(now);
       }
     });
+    // A new case starts with no stage chosen, not with the last case's.
+    bench.openCaseProperty().addListener((o, was, now) -> {
+      if (bench.stageProperty().get() == null) {
+        setStage(null);
+      }
+    });
     bench.boardModelProperty().addListener((o, was, now) -> library.clear());
     template.addListener((o, was, now) -> {
       List<ParameterEntry> entries = new ArrayList<>();

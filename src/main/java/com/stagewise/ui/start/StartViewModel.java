@@ -350,10 +350,11 @@ public final class StartViewModel {
               bench.startCase(file.get().repairCase());
               Step step = Step.STAGE;
               if (saved.isPresent() && saved.get().stage().isPresent()) {
-                bench.stageProperty().set(saved.get().stage().get());
+                // Readings first: the stage's arrival starts the diagnosis of what is on the bench.
                 for (var stored : file.get().readings()) {
                   bench.readings().add(Words.reading(stored));
                 }
+                bench.stageProperty().set(saved.get().stage().get());
                 step = saved.get().step();
               }
               Step target = step;

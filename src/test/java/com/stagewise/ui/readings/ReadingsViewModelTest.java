@@ -107,4 +107,15 @@ class ReadingsViewModelTest {
     // Inverting amplifier: Vout = -(Rf/Rin) Vin = -4.7 V (textbook closed form).
     assertThat(model.expectedProperty().get().at("OUT")).isCloseTo(-4.7, org.assertj.core.data.Offset.offset(1e-3));
   }
+
+  @Test
+  void stage_arrivingAfterReadings_asOnResume_diagnosesThemAtOnce() {
+    var again = new ReadingsViewModel(t.bench);
+    t.bench.stageProperty().set(null);
+    t.bench.readings().setAll(Reading.dc("U1.8", 14.96), Reading.dc("U1.4", -14.97), Reading.dc("U1.1", -13.47));
+    t.bench.stageProperty().set(TestBench.invertingStage("Test amp board"));
+    assertThat(t.bench.diagnosisProperty().get()).isNotNull();
+    assertThat(again.rows()).hasSize(3);
+    assertThat(again.probeProperty().get().at()).isNotIn("U1.8", "U1.4");
+  }
 }
