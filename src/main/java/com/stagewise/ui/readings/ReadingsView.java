@@ -43,8 +43,8 @@ public final class ReadingsView {
     root.getStyleClass().add("screen");
     root.setId("screen-readings");
     VBox probe = probePanel();
-    probe.setPrefWidth(340);
-    probe.setMinWidth(330);
+    probe.setPrefWidth(380);
+    probe.setMinWidth(380);
     VBox pad = new VBox(10);
     pad.getStyleClass().add("panel");
     Label padTitle = new Label("What does the meter show?");
@@ -99,8 +99,11 @@ public final class ReadingsView {
     drawing.setId("package-drawing");
     drawing.setOnPinChosen(pin -> model.choose(shownPackage + "." + pin));
     drawing.setMaxWidth(Double.MAX_VALUE);
+    // The drawing's own smallest layout keeps 48 px pins; below that height it scales to fit
+    // rather than being cut off (a 14-pin package on a 800 px high window).
+    drawing.setMinSize(Region.USE_COMPUTED_SIZE, 0);
     StackPane drawingHolder = new StackPane(drawing);
-    drawingHolder.setMinHeight(230);
+    drawingHolder.setMinHeight(200);
     VBox.setVgrow(drawingHolder, Priority.ALWAYS);
     ComboBox<ProbePoint> other = new ComboBox<>(model.testPoints());
     other.setId("other-point");
@@ -156,7 +159,8 @@ public final class ReadingsView {
       String text = pin.getValue();
       for (Reading r : bench.readings()) {
         if (r.at().equals(pin.getKey()) && r.kind() == Reading.Kind.DC) {
-          text = pin.getValue() + " " + Words.voltsShort(r.value());
+          // Only the value: the pin's role and net are already beside it, and the column is narrow.
+          text = Words.voltsShort(r.value());
         }
       }
       drawing.setPinText(number, text);
@@ -235,7 +239,6 @@ public final class ReadingsView {
     ReadingCell() {
       title.setWrapText(true);
       chart.setMaxWidth(Double.MAX_VALUE);
-      chart.setPrefHeight(140);
       setPrefWidth(0);
     }
 
