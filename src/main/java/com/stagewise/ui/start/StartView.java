@@ -145,6 +145,7 @@ public final class StartView {
                 model.selectedProperty()));
     Label earlier = new Label("Earlier cases, newest first — tap an open one to resume it");
     earlier.setStyle("-fx-font-weight: bold;");
+    earlier.visibleProperty().bind(model.selectedProperty().isNotNull());
     ListView<StartViewModel.CaseLine> cases = new ListView<>(model.glance());
     cases.setId("unit-cases");
     VBox.setVgrow(cases, Priority.ALWAYS);
