@@ -10,6 +10,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Finds cases by their unit, board model, confirmed faults, parts, status, dates and words.
@@ -111,11 +112,11 @@ final class Search {
         }
       }
     }
-    if (ranked) {
-      String match = matchExpression(query.text().get());
+    if (ranked && !hits.isEmpty()) {
+      Map<String, String> snippets = snippets(connection, matchExpression(query.text().get()), hits);
       List<SearchHit> withSnippets = new ArrayList<>(hits.size());
       for (SearchHit hit : hits) {
-        String snippet = snippet(connection, match, hit.caseId());
+        String snippet = snippets.get(hit.caseId());
         withSnippets.add(
             new SearchHit(hit.caseId(), hit.unitId(), hit.serial(), hit.boardModel(), hit.status(), hit.outcome(),
                 hit.openedAt(), hit.symptom(), hit.confirmedFaults(), snippet == null ? hit.snippet() : snippet,
@@ -126,27 +127,39 @@ final class Search {
     return hits;
   }
 
-  /** Returns the matching words of a case's symptom in context, else of its best-matching note. */
-  private static String snippet(Connection connection, String match, String caseId) throws SQLException {
+  /**
+   * Returns, for each hit's case, the matching words of its symptom in context, else of its
+   * best-matching note: two queries for all hits together.
+   */
+  private static Map<String, String> snippets(Connection connection, String match, List<SearchHit> hits)
+      throws SQLException {
     String format = "snippet(%s, 0, '" + SNIPPET_OPEN + "', '" + SNIPPET_CLOSE + "', '…', " + SNIPPET_TOKENS + ")";
-    String symptom =
-        "SELECT " + String.format(java.util.Locale.ROOT, format, "symptom_text") + " FROM symptom_text"
-            + " WHERE symptom_text MATCH ? AND rowid = (SELECT row FROM repair_case WHERE id = ?)";
-    String note =
-        "SELECT " + String.format(java.util.Locale.ROOT, format, "note_text") + " FROM note_text"
-            + " WHERE note_text MATCH ? AND rowid IN (SELECT row FROM case_note WHERE case_id = ?)"
-            + " ORDER BY rank LIMIT 1";
-    for (String sql : List.of(symptom, note)) {
+    String marks = String.join(", ", java.util.Collections.nCopies(hits.size(), "?"));
+    Object[] parameters = new Object[hits.size() + 1];
+    parameters[0] = match;
+    for (int i = 0; i < hits.size(); i++) {
+      parameters[i + 1] = hits.get(i).caseId();
+    }
+    String symptoms =
+        "SELECT c.id, " + String.format(java.util.Locale.ROOT, format, "symptom_text")
+            + " FROM symptom_text JOIN repair_case c ON c.row = symptom_text.rowid"
+            + " WHERE symptom_text MATCH ? AND c.id IN (" + marks + ")";
+    String notes =
+        "SELECT cn.case_id, " + String.format(java.util.Locale.ROOT, format, "note_text")
+            + " FROM note_text JOIN case_note cn ON cn.row = note_text.rowid"
+            + " WHERE note_text MATCH ? AND cn.case_id IN (" + marks + ") ORDER BY rank";
+    Map<String, String> snippets = new java.util.HashMap<>();
+    for (String sql : List.of(symptoms, notes)) {
       try (PreparedStatement statement = connection.prepareStatement(sql)) {
-        Rows.bind(statement, match, caseId);
+        Rows.bind(statement, parameters);
         try (ResultSet rs = statement.executeQuery()) {
-          if (rs.next()) {
-            return rs.getString(1);
+          while (rs.next()) {
+            snippets.putIfAbsent(rs.getString(1), rs.getString(2));
           }
         }
       }
     }
-    return null;
+    return snippets;
   }
 
   /**
