@@ -24,6 +24,9 @@ final class Search {
   private static final String SNIPPET_CLOSE = "]";
   private static final int SNIPPET_TOKENS = 12;
 
+  /** Matching notes per case assumed when only the best notes are ranked (see {@link #run}). */
+  static final int NOTES_PER_CASE = 50;
+
   private Search() {}
 
   static List<SearchHit> run(Connection connection, SearchQuery query) throws SQLException {
@@ -37,15 +40,30 @@ final class Search {
       }
       // Rank every matching case by its best text, without snippets: snippets are made for the
       // returned hits only (making one for each of thousands of matches costs far more).
+      // With words only (no other criterion), only the best texts of each index can make the
+      // first hits: a case among the first n has its best symptom among the first n symptoms, and
+      // its best note among the first n · NOTES_PER_CASE notes unless the cases above it hold
+      // more matching notes than that. Taking just those (FTS5 keeps the top of a rank-ordered
+      // LIMIT without sorting every match) spares joining and grouping every match of a common word.
+      boolean wordsOnly = query.serial().isEmpty() && query.boardModel().isEmpty() && query.faultId().isEmpty()
+          && query.part().isEmpty() && query.status().isEmpty() && query.openedFrom().isEmpty()
+          && query.openedBefore().isEmpty();
+      String cap = wordsOnly ? " ORDER BY rank LIMIT ?" : "";
       sql.append("WITH text_hit (case_row, score) AS (")
-          .append("SELECT rowid, bm25(symptom_text) FROM symptom_text WHERE symptom_text MATCH ?")
-          .append(" UNION ALL SELECT rc.row, bm25(note_text)")
-          .append(" FROM note_text JOIN case_note cn ON cn.row = note_text.rowid")
-          .append(" JOIN repair_case rc ON rc.id = cn.case_id WHERE note_text MATCH ?),")
+          .append("SELECT * FROM (SELECT rowid, rank FROM symptom_text WHERE symptom_text MATCH ?").append(cap).append(")")
+          .append(" UNION ALL SELECT rc.row, n.score FROM (SELECT rowid AS note_row, rank AS score FROM note_text")
+          .append(" WHERE note_text MATCH ?").append(cap).append(") n")
+          .append(" JOIN case_note cn ON cn.row = n.note_row JOIN repair_case rc ON rc.id = cn.case_id),")
           .append(" best (case_row, score) AS (SELECT case_row, min(score) FROM text_hit")
           .append(" GROUP BY case_row) ");
       parameters.add(match);
+      if (wordsOnly) {
+        parameters.add(query.limit());
+      }
       parameters.add(match);
+      if (wordsOnly) {
+        parameters.add((long) query.limit() * NOTES_PER_CASE);
+      }
     }
     sql.append("SELECT c.id, u.id, u.serial, m.name, c.status, c.outcome, c.opened_at, c.symptom,")
         .append(" (SELECT group_concat(fault_id, ' ') FROM (SELECT fault_id FROM confirmed_fault f")
