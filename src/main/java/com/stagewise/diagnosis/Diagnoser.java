@@ -121,6 +121,13 @@ public final class Diagnoser {
     List<ProbeAdvice> probes = new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter());
     String check = verdict == Verdict.HEALTHY ? "" : explainer.confirmingCheck(ranking.first().hypothesis.fault, ranking.first().estimate());
     if (verdict == Verdict.HEALTHY) {
+      List<String> unseen = suspects.get(0).group().stream().filter(f -> !f.equals(Fault.HEALTHY.id())).toList();
+      if (!unseen.isEmpty()) {
+        notes.add(
+            "These readings cannot rule out: " + String.join(", ", unseen.subList(0, Math.min(8, unseen.size())))
+                + (unseen.size() > 8 ? " and " + (unseen.size() - 8) + " more" : "")
+                + ". The next probe, or the symptom itself, may tell them apart.");
+      }
       notes.add(
           "Healthy by these readings. This does not mean the unit is safe: follow local codes and"
               + " licensed practice on powered equipment.");
@@ -185,6 +192,17 @@ public final class Diagnoser {
 
   private List<Hypothesis> build(Map<String, Double> inputs) {
     Conditions conditions = Conditions.NOMINAL;
+    // Predictions start from the middle of each class's ranges (bias current, headroom), where a
+    // random working part is most likely to sit; the solver's nominal takes bias as zero.
+    for (com.stagewise.circuit.Amplifier amp : stage.amplifiers()) {
+      com.stagewise.circuit.DeviceClass type = amp.deviceClass();
+      double bias = mid(type.biasCurrent());
+      conditions = conditions.withDevice(
+          amp.ref(),
+          com.stagewise.solver.DeviceParams.nominal(type)
+              .withBias(bias, bias)
+              .withHeadroom(mid(type.headroomLow()), mid(type.headroomHigh())));
+    }
     for (Map.Entry<String, Double> e : inputs.entrySet()) {
       conditions = conditions.withDriven(e.getKey(), e.getValue());
     }
@@ -196,6 +214,10 @@ public final class Diagnoser {
       hypotheses.add(new Hypothesis(fault, priors.get(fault.id()), predictions));
     }
     return hypotheses;
+  }
+
+  private static double mid(com.stagewise.circuit.Range range) {
+    return (range.low() + range.high()) / 2;
   }
 
   private static List<Prediction> predictAll(Predictor predictor, List<Scenario> scenarios) {
@@ -253,6 +275,7 @@ public final class Diagnoser {
 
   private Ranking rank(List<Hypothesis> hypotheses, List<Evidence.Bound> bound) {
     List<Scored> scored = new ArrayList<>(hypotheses.size());
+    double[] weight = readingWeights(bound);
     double maxLog = Double.NEGATIVE_INFINITY;
     for (Hypothesis h : hypotheses) {
       int n = h.predictions.size();
@@ -262,8 +285,8 @@ public final class Diagnoser {
       for (int v = 0; v < n; v++) {
         Prediction p = h.predictions.get(v);
         double sum = Math.log(p.weight());
-        for (Evidence.Bound r : bound) {
-          sum += evidence.logLikelihood(p, r);
+        for (int i = 0; i < bound.size(); i++) {
+          sum += weight[i] * evidence.logLikelihood(p, bound.get(i));
         }
         logs[v] = sum;
         if (sum > best) {
@@ -293,6 +316,25 @@ public final class Diagnoser {
     }
     scored.sort(Comparator.comparingDouble((Scored s) -> -s.probability));
     return new Ranking(scored);
+  }
+
+  /**
+   * Weights of the readings in the evidence: readings of one kind on one net of the working stage
+   * (the net by name and its package pins) share a weight of 1. Where no pin is lifted they read
+   * the same node, so counting each in full would count one node's evidence twice or thrice; where
+   * a pin is lifted they still differ by volts, which even half a weight makes plain.
+   */
+  private double[] readingWeights(List<Evidence.Bound> bound) {
+    Map<String, Integer> perNode = new HashMap<>();
+    for (Evidence.Bound r : bound) {
+      perNode.merge((r.ac() ? "ac:" : "dc:") + points.netOf.get(r.point()), 1, Integer::sum);
+    }
+    double[] weight = new double[bound.size()];
+    for (int i = 0; i < weight.length; i++) {
+      Evidence.Bound r = bound.get(i);
+      weight[i] = 1.0 / perNode.get((r.ac() ? "ac:" : "dc:") + points.netOf.get(r.point()));
+    }
+    return weight;
   }
 
   private List<Suspect> suspects(Ranking ranking, List<Evidence.Bound> bound, int top, Explainer explainer) {
@@ -334,7 +376,9 @@ public final class Diagnoser {
 
   private static Verdict verdict(Ranking ranking) {
     double healthy = ranking.probability(Fault.HEALTHY.id());
-    if (ranking.first().hypothesis.fault.kind() == FaultKind.HEALTHY && healthy >= 0.5) {
+    // Healthy when a working stage explains the readings best: faults that fit as well sit in its
+    // group, and the notes name them, since these readings cannot rule them out.
+    if (ranking.first().hypothesis.fault.kind() == FaultKind.HEALTHY) {
       return Verdict.HEALTHY;
     }
     // A working stage is still in play: more readings are needed before naming a fault.

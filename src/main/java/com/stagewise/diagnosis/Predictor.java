@@ -53,6 +53,13 @@ final class Predictor {
   List<Prediction> predict(Scenario scenario, boolean withSpread) {
     Stage stage = scenario.stage();
     CompiledStage cs = CompiledStage.of(stage, scenario.conditions());
+    if (drifting(stage)) {
+      // A floating input tied to a rail stands for its bias current's drift; the current itself,
+      // pushed through the tie, would move the node by hundreds of volts.
+      for (int k = 0; k < cs.sectionCount(); k++) {
+        cs.setDevice(k, cs.device(k).withBias(0, 0));
+      }
+    }
     int[] at = pointNets(stage, cs);
     CompiledStage.Outcome outcome = cs.solve();
     if (!(outcome instanceof CompiledStage.Settled settled)) {
@@ -218,20 +225,21 @@ final class Predictor {
       double moved = volts * (1 + rail.tolerance() * UNIFORM_SD);
       list.add(new Perturbation(c -> c.setDrivenVolts(net, moved), c -> c.setDrivenVolts(net, volts), false));
     }
-    boolean drifting = parts.stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
+    boolean drifting = drifting(stage);
     for (int k = 0; k < cs.sectionCount(); k++) {
       Amplifier amp = stage.amplifiers().get(k);
       DeviceClass type = amp.deviceClass();
       int section = k;
       double offsetStep = type.offset().high() * UNIFORM_SD;
-      double bias = type.biasCurrent().high() * UNIFORM_SD;
+      // Uniform over the class's range: its standard deviation is the width over √12.
+      double biasStep = (type.biasCurrent().high() - type.biasCurrent().low()) / Math.sqrt(12);
       double lowStep = (type.headroomLow().high() - type.headroomLow().low()) / Math.sqrt(12);
       double highStep = (type.headroomHigh().high() - type.headroomHigh().low()) / Math.sqrt(12);
       list.add(device(section, p -> p.withOffset(p.offset() + offsetStep), false));
       if (!drifting) {
         // Where a floating input is tied to a rail to stand for its drift, the bias current is
         // already what put it there; moving it again through the tie would count it twice.
-        list.add(device(section, p -> p.withBias(bias, bias), false));
+        list.add(device(section, p -> p.withBias(p.biasPlus() + biasStep, p.biasMinus() + biasStep), false));
       }
       list.add(device(section, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
       list.add(device(section, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
@@ -240,6 +248,10 @@ final class Predictor {
       list.add(device(section, p -> p.withGain(lowGain), true));
     }
     return list;
+  }
+
+  private static boolean drifting(Stage stage) {
+    return stage.parts().stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
   }
 
   private static Perturbation device(int k, java.util.function.UnaryOperator<DeviceParams> change, boolean movesAc) {
