@@ -62,27 +62,65 @@ public final class Priors {
   }
 
   /**
-   * Blends published priors with the shop's counts of confirmed faults on the same board model.
+   * Returns the published priors blended with the shop's counts by additive (Dirichlet, or
+   * Laplace) smoothing: {@code p(f) = (strength · q(f) + n(f)) / (strength + N)}, where {@code q}
+   * is the published prior normalised to sum to 1, {@code n(f)} the shop's count for fault {@code
+   * f} and {@code N} the sum of the counts over the published faults. The published priors act as
+   * {@code strength} imaginary cases, so one real case shifts the priors only a little, and many
+   * cases come to dominate.
    *
-   * <p>{@code p(f) = (strength · published(f) + count(f)) / (strength + total count)}, over the faults
-   * of {@code published}; counts of faults not in it are ignored.
+   * <p>The result has exactly the keys of {@code publishedPriors} and sums to 1. Counts for faults
+   * that are not among the published priors are ignored (the diagnosis cannot rank a fault it does
+   * not know). Priors that are all zero are taken as uniform.
    *
-   * @param strength the pseudo-count of the published priors, above 0
+   * @param publishedPriors relative prior weights per fault id (not negative, finite; they need
+   *     not sum to 1)
+   * @param counts confirmed cases per fault id (not negative)
+   * @param strength the weight of the published priors in cases (positive, finite)
+   * @throws IllegalArgumentException for an empty prior map, a negative or non-finite weight, a
+   *     negative count or a strength that is not positive
    */
-  public static Map<String, Double> blend(Map<String, Double> published, Map<String, Integer> counts, double strength) {
-    if (!(strength > 0)) {
-      throw new IllegalArgumentException("strength (" + strength + ") must be above 0");
+  public static Map<String, Double> blend(
+      Map<String, Double> publishedPriors, Map<String, Integer> counts, double strength) {
+    if (publishedPriors.isEmpty()) {
+      throw new IllegalArgumentException("publishedPriors must name at least one fault");
+    }
+    if (!(strength > 0) || !Double.isFinite(strength)) {
+      throw new IllegalArgumentException("strength (" + strength + ") must be positive and finite");
     }
     double total = 0;
-    for (String id : published.keySet()) {
-      total += Math.max(0, counts.getOrDefault(id, 0));
+    for (Map.Entry<String, Double> prior : publishedPriors.entrySet()) {
+      double weight = prior.getValue();
+      if (!(weight >= 0) || !Double.isFinite(weight)) {
+        throw new IllegalArgumentException(
+            "prior of " + prior.getKey() + " (" + weight + ") must be a finite number >= 0");
+      }
+      total += weight;
     }
+    long seen = 0;
+    for (Map.Entry<String, Integer> count : counts.entrySet()) {
+      if (count.getValue() < 0) {
+        throw new IllegalArgumentException(
+            "count of " + count.getKey() + " (" + count.getValue() + ") must be >= 0");
+      }
+      if (publishedPriors.containsKey(count.getKey())) {
+        seen += count.getValue();
+      }
+    }
+    int faults = publishedPriors.size();
     Map<String, Double> blended = new LinkedHashMap<>();
-    for (Map.Entry<String, Double> e : published.entrySet()) {
-      double count = Math.max(0, counts.getOrDefault(e.getKey(), 0));
-      blended.put(e.getKey(), (strength * e.getValue() + count) / (strength + total));
+    for (Map.Entry<String, Double> prior : publishedPriors.entrySet()) {
+      double q = total > 0 ? prior.getValue() / total : 1.0 / faults;
+      int n = counts.getOrDefault(prior.getKey(), 0);
+      blended.put(prior.getKey(), (strength * q + n) / (strength + seen));
     }
     return blended;
+  }
+
+  /** Returns {@link #blend} with {@link #SHOP_STRENGTH}. */
+  public static Map<String, Double> blend(
+      Map<String, Double> publishedPriors, Map<String, Integer> counts) {
+    return blend(publishedPriors, counts, SHOP_STRENGTH);
   }
 
   private static double weight(Stage stage, Fault fault) {
