@@ -74,26 +74,45 @@ class ArchitectureTest {
     layeredArchitecture()
         .consideringOnlyDependenciesInLayers()
         .withOptionalLayers(true)
-        .layer("circuit").definedBy("com.stagewise.circuit..")
-        .layer("solver").definedBy("com.stagewise.solver..")
-        .layer("diagnosis").definedBy("com.stagewise.diagnosis..")
-        .layer("history").definedBy("com.stagewise.history..")
-        .layer("interchange").definedBy("com.stagewise.interchange..")
-        .layer("report").definedBy("com.stagewise.report..")
-        .layer("ui").definedBy("com.stagewise.ui..")
-        .layer("cli").definedBy("com.stagewise.cli..")
-        .layer("app").definedBy("com.stagewise.app..")
-        .whereLayer("circuit").mayNotAccessAnyLayer()
-        .whereLayer("solver").mayOnlyAccessLayers("circuit")
-        .whereLayer("diagnosis").mayOnlyAccessLayers("solver", "circuit")
-        .whereLayer("history").mayOnlyAccessLayers("diagnosis", "solver", "circuit")
-        .whereLayer("interchange").mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
-        .whereLayer("report").mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
-        .whereLayer("report").mayOnlyBeAccessedByLayers("ui", "cli", "app")
-        .whereLayer("ui").mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
-        .whereLayer("cli").mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
+        .layer("circuit")
+        .definedBy("com.stagewise.circuit..")
+        .layer("solver")
+        .definedBy("com.stagewise.solver..")
+        .layer("diagnosis")
+        .definedBy("com.stagewise.diagnosis..")
+        .layer("history")
+        .definedBy("com.stagewise.history..")
+        .layer("interchange")
+        .definedBy("com.stagewise.interchange..")
+        .layer("report")
+        .definedBy("com.stagewise.report..")
+        .layer("ui")
+        .definedBy("com.stagewise.ui..")
+        .layer("cli")
+        .definedBy("com.stagewise.cli..")
+        .layer("app")
+        .definedBy("com.stagewise.app..")
+        .whereLayer("circuit")
+        .mayNotAccessAnyLayer()
+        .whereLayer("solver")
+        .mayOnlyAccessLayers("circuit")
+        .whereLayer("diagnosis")
+        .mayOnlyAccessLayers("solver", "circuit")
+        .whereLayer("history")
+        .mayOnlyAccessLayers("diagnosis", "solver", "circuit")
+        .whereLayer("interchange")
+        .mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
+        .whereLayer("report")
+        .mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
+        .whereLayer("report")
+        .mayOnlyBeAccessedByLayers("ui", "cli", "app")
+        .whereLayer("ui")
+        .mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
+        .whereLayer("cli")
+        .mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("app")
-        .mayOnlyAccessLayers("ui", "cli", "report", "interchange", "history", "diagnosis", "solver", "circuit")
+        .mayOnlyAccessLayers(
+            "ui", "cli", "report", "interchange", "history", "diagnosis", "solver", "circuit")
         .check(classes);
   }
 
@@ -102,10 +121,15 @@ class ArchitectureTest {
     noClasses()
         .should()
         .resideOutsideOfPackages(
-            "com.stagewise.circuit..", "com.stagewise.solver..", "com.stagewise.diagnosis..",
-            "com.stagewise.history..", "com.stagewise.interchange..", "com.stagewise.report..",
+            "com.stagewise.circuit..",
+            "com.stagewise.solver..",
+            "com.stagewise.diagnosis..",
+            "com.stagewise.history..",
+            "com.stagewise.interchange..",
+            "com.stagewise.report..",
             "com.stagewise.ui..",
-            "com.stagewise.cli..", "com.stagewise.app..")
+            "com.stagewise.cli..",
+            "com.stagewise.app..")
         .check(classes);
   }
 }

@@ -13,7 +13,10 @@ import java.util.Map;
  */
 record AppOptions(boolean demo, Path db) {
 
-  /** Returns whether every argument is a desktop-app option (so the app, not the command line, starts). */
+  /**
+   * Returns whether every argument is a desktop-app option (so the app, not the command line,
+   * starts).
+   */
   static boolean isDesktop(String[] args) {
     try {
       parse(List.of(args));
@@ -59,7 +62,8 @@ record AppOptions(boolean demo, Path db) {
     Path file;
     if (db != null) {
       file = db;
-    } else if (environment.get("STAGEWISE_DB") != null && !environment.get("STAGEWISE_DB").isBlank()) {
+    } else if (environment.get("STAGEWISE_DB") != null
+        && !environment.get("STAGEWISE_DB").isBlank()) {
       file = Path.of(environment.get("STAGEWISE_DB"));
     } else if (demo) {
       file = data.resolve("demo").resolve("stagewise-demo.db");

@@ -40,7 +40,9 @@ public final class BenchApp {
 
   private BenchApp(Workshop workshop) {
     this.workshop = workshop;
-    bench = new Bench(workshop.store(), tasks, overlays, overlays, workshop.boardFlags(), workshop.resume());
+    bench =
+        new Bench(
+            workshop.store(), tasks, overlays, overlays, workshop.boardFlags(), workshop.resume());
     window = new BenchWindow(bench, overlays, tasks.pendingProperty(), tasks.currentProperty());
     StartViewModel start = new StartViewModel(bench);
     StartView startView = new StartView(start);
@@ -56,28 +58,36 @@ public final class BenchApp {
     HistoryViewModel history = new HistoryViewModel(bench);
     window.screen(Step.HISTORY, () -> new HistoryView(history).root());
     suspects.chosenForCloseOutProperty().addListener((o, was, now) -> closeOut.prepareFor(now));
-    closeOut.setAfterClose(caseId -> {
-      history.queryProperty().set("");
-      history.search();
-      history.show(caseId);
-      bench.go(Step.HISTORY);
-      start.search();
-    });
-    bench.stepProperty().addListener((o, was, now) -> {
-      if (now == Step.STAGE) {
-        stage.loadLibrary();
-      } else if (now == Step.HISTORY && history.hits().isEmpty()) {
-        history.search();
-      } else if (now == Step.UNIT && was != Step.UNIT) {
-        start.search();
-      }
-    });
+    closeOut.setAfterClose(
+        caseId -> {
+          history.queryProperty().set("");
+          history.search();
+          history.show(caseId);
+          bench.go(Step.HISTORY);
+          start.search();
+        });
+    bench
+        .stepProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == Step.STAGE) {
+                stage.loadLibrary();
+              } else if (now == Step.HISTORY && history.hits().isEmpty()) {
+                history.search();
+              } else if (now == Step.UNIT && was != Step.UNIT) {
+                start.search();
+              }
+            });
     scene = new Scene(window.root(), WIDTH, HEIGHT);
     window.addShortcuts(scene);
-    scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN), () -> {
-      bench.go(Step.UNIT);
-      startView.focusSearch();
-    });
+    scene
+        .getAccelerators()
+        .put(
+            new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN),
+            () -> {
+              bench.go(Step.UNIT);
+              startView.focusSearch();
+            });
     start.search();
   }
 

@@ -19,10 +19,10 @@ final class DemoSetup {
   private DemoSetup() {}
 
   /**
-   * Fills an empty history with the demo shop (board models, units, cases), marks its board
-   * models mains-powered (a mixing desk and a bench supply both plug into the mains), then adds
-   * every stage sheet in {@code stages} that its board model's library lacks (the model is made
-   * when new).
+   * Fills an empty history with the demo shop (board models, units, cases), marks its board models
+   * mains-powered (a mixing desk and a bench supply both plug into the mains), then adds every
+   * stage sheet in {@code stages} that its board model's library lacks (the model is made when
+   * new).
    */
   static void fill(HistoryStore store, BoardFlags flags, Path stages) {
     DemoHistory.fill(store);
@@ -39,7 +39,9 @@ final class DemoSetup {
       Stage stage = StageSheet.read(json, file.toString());
       String board = stage.board().isBlank() ? "Demo boards" : stage.board();
       BoardModel model = store.boardModel(board, "");
-      boolean known = store.stageSheets(model.id()).stream().anyMatch(sheet -> sheet.title().equals(stage.title()));
+      boolean known =
+          store.stageSheets(model.id()).stream()
+              .anyMatch(sheet -> sheet.title().equals(stage.title()));
       if (!known) {
         store.addStageSheet(model.id(), stage.title(), json);
       }
@@ -52,7 +54,10 @@ final class DemoSetup {
       return List.of();
     }
     try (Stream<Path> files = Files.list(stages)) {
-      return files.filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX)).sorted().toList();
+      return files
+          .filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX))
+          .sorted()
+          .toList();
     } catch (IOException e) {
       throw new UncheckedIOException("could not list the demo stage sheets in " + stages, e);
     }

@@ -40,7 +40,8 @@ public final class DesktopLauncher extends Application {
     window.setMinHeight(700);
     Label opening = new Label("Opening the repair history …");
     opening.setStyle("-fx-font-size: 22px;");
-    // Only a label: the first window must come up fast; the screens follow when the history is open.
+    // Only a label: the first window must come up fast; the screens follow when the history is
+    // open.
     VBox splash = new VBox(18, opening);
     splash.setAlignment(Pos.CENTER);
     window.setScene(new Scene(new StackPane(splash), BenchApp.WIDTH, BenchApp.HEIGHT));
@@ -99,7 +100,8 @@ public final class DesktopLauncher extends Application {
     if (Boolean.getBoolean("stagewise.timing")) {
       Instant started = ProcessHandle.current().info().startInstant().orElse(Instant.now());
       long millis = Duration.between(started, Instant.now()).toMillis();
-      System.out.println(String.format(Locale.ROOT, "stagewise: %s %d ms after start", what, millis));
+      System.out.println(
+          String.format(Locale.ROOT, "stagewise: %s %d ms after start", what, millis));
     }
   }
 

@@ -14,7 +14,12 @@ import java.nio.file.Path;
  * @param boardFlags which board models are mains-powered
  * @param resume where open cases were left
  */
-record Workshop(DataFolder folder, HistoryStore store, Settings settings, BoardFlags boardFlags, CaseResume resume)
+record Workshop(
+    DataFolder folder,
+    HistoryStore store,
+    Settings settings,
+    BoardFlags boardFlags,
+    CaseResume resume)
     implements AutoCloseable {
 
   /**
@@ -24,12 +29,22 @@ record Workshop(DataFolder folder, HistoryStore store, Settings settings, BoardF
   static Workshop open(DataFolder folder, boolean demo, Path stages) {
     HistoryStore store = HistoryStore.open(folder.database());
     try {
-      FileBoardFlags flags = new FileBoardFlags(folder.database().toAbsolutePath().getParent()
-          .resolve(folder.database().getFileName() + ".flags.properties"));
+      FileBoardFlags flags =
+          new FileBoardFlags(
+              folder
+                  .database()
+                  .toAbsolutePath()
+                  .getParent()
+                  .resolve(folder.database().getFileName() + ".flags.properties"));
       if (demo && store.isEmpty()) {
         DemoSetup.fill(store, flags, stages);
       }
-      return new Workshop(folder, store, new Settings(folder.settings()), flags, new CaseResume(folder.openCases()));
+      return new Workshop(
+          folder,
+          store,
+          new Settings(folder.settings()),
+          flags,
+          new CaseResume(folder.openCases()));
     } catch (RuntimeException e) {
       store.close();
       throw e;

@@ -39,8 +39,14 @@ public record Amplifier(
       throw new InvalidInputException(
           "",
           "section",
-          ref + " section \"" + section + "\" is not on a " + packageType.word()
-              + " package (expected one of " + String.join(", ", packageType.sections()) + ")");
+          ref
+              + " section \""
+              + section
+              + "\" is not on a "
+              + packageType.word()
+              + " package (expected one of "
+              + String.join(", ", packageType.sections())
+              + ")");
     }
     Part.requireName(inPlus, "inPlus");
     Part.requireName(inMinus, "inMinus");

@@ -3,8 +3,8 @@ package com.stagewise.circuit;
 import java.util.Locale;
 
 /**
- * The classes of op-amp Stagewise models, with typical parameters and the ranges a working part
- * may show.
+ * The classes of op-amp Stagewise models, with typical parameters and the ranges a working part may
+ * show.
  *
  * <p>The figures are typical values from memory and common practice for each family of parts, not
  * taken from any one data sheet. Headroom is how close the output can swing to the voltage at the
@@ -117,6 +117,8 @@ public enum DeviceClass {
     throw new InvalidInputException(
         "",
         "class",
-        "\"" + word + "\" is not a device class (expected classic-bipolar, ground-sensing or rail-to-rail)");
+        "\""
+            + word
+            + "\" is not a device class (expected classic-bipolar, ground-sensing or rail-to-rail)");
   }
 }

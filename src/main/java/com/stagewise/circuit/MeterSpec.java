@@ -29,14 +29,18 @@ public record MeterSpec(double percent, int counts, int displayCounts) {
   /** Checks the fields; see the record description. */
   public MeterSpec {
     if (!Double.isFinite(percent) || percent < 0) {
-      throw new InvalidInputException("", "percent", "meter percent (" + percent + ") must be 0 or more");
+      throw new InvalidInputException(
+          "", "percent", "meter percent (" + percent + ") must be 0 or more");
     }
     if (counts < 0) {
-      throw new InvalidInputException("", "counts", "meter counts (" + counts + ") must be 0 or more");
+      throw new InvalidInputException(
+          "", "counts", "meter counts (" + counts + ") must be 0 or more");
     }
     if (displayCounts <= 0) {
       throw new InvalidInputException(
-          "", "displayCounts", "meter displayCounts (" + displayCounts + ") must be above 0, e.g. 6000");
+          "",
+          "displayCounts",
+          "meter displayCounts (" + displayCounts + ") must be above 0, e.g. 6000");
     }
   }
 

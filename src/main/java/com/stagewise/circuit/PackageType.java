@@ -11,8 +11,8 @@ import java.util.Optional;
  * The op-amp packages Stagewise knows, with their industry-standard pinouts (top view, pins counted
  * counter-clockwise from pin 1).
  *
- * <p>Supply pins are shared by every section of a package. Adjacent pins (solder-bridge
- * candidates) are neighbours on the same side of the package only.
+ * <p>Supply pins are shared by every section of a package. Adjacent pins (solder-bridge candidates)
+ * are neighbours on the same side of the package only.
  */
 public enum PackageType {
   /** One section: 1 offset, 2 in-, 3 in+, 4 v-, 5 offset, 6 out, 7 v+, 8 n/c. */
@@ -127,8 +127,8 @@ public enum PackageType {
   }
 
   /**
-   * Returns the pairs of adjacent pins on the same side, lower pin first (for 8 pins 1-2, 2-3,
-   * 3-4, 5-6, 6-7, 7-8; for 14 pins 1-2 … 6-7 and 8-9 … 13-14).
+   * Returns the pairs of adjacent pins on the same side, lower pin first (for 8 pins 1-2, 2-3, 3-4,
+   * 5-6, 6-7, 7-8; for 14 pins 1-2 … 6-7 and 8-9 … 13-14).
    */
   public List<int[]> adjacentPairs() {
     List<int[]> pairs = new ArrayList<>();
@@ -153,7 +153,9 @@ public enum PackageType {
       }
     }
     throw new InvalidInputException(
-        "", "packageType", "\"" + word + "\" is not a package type (expected single-8, dual-8 or quad-14)");
+        "",
+        "packageType",
+        "\"" + word + "\" is not a package type (expected single-8, dual-8 or quad-14)");
   }
 
   /**

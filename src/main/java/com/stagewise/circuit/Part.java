@@ -12,7 +12,8 @@ import java.util.Objects;
  * @param netA the first net
  * @param netB the second net
  */
-public record Part(String ref, PartKind kind, double value, double tolerance, String netA, String netB) {
+public record Part(
+    String ref, PartKind kind, double value, double tolerance, String netA, String netB) {
 
   /** Checks the fields; see the record description. */
   public Part {
@@ -21,7 +22,8 @@ public record Part(String ref, PartKind kind, double value, double tolerance, St
     requireName(netA, "nets[0]");
     requireName(netB, "nets[1]");
     if (!Double.isFinite(value) || value < 0) {
-      throw new InvalidInputException("", "value", ref + " value (" + value + ") must be a finite number, 0 or more");
+      throw new InvalidInputException(
+          "", "value", ref + " value (" + value + ") must be a finite number, 0 or more");
     }
     if (!Double.isFinite(tolerance) || tolerance < 0 || tolerance >= 1) {
       throw new InvalidInputException(
@@ -35,7 +37,8 @@ public record Part(String ref, PartKind kind, double value, double tolerance, St
   }
 
   /** Returns a capacitor with the given value in farads. */
-  public static Part capacitor(String ref, double farads, double tolerance, String netA, String netB) {
+  public static Part capacitor(
+      String ref, double farads, double tolerance, String netA, String netB) {
     return new Part(ref, PartKind.CAPACITOR, farads, tolerance, netA, netB);
   }
 

@@ -13,11 +13,14 @@ public record Rail(String net, double volts, double tolerance) {
   public Rail {
     Part.requireName(net, "net");
     if (!Double.isFinite(volts)) {
-      throw new InvalidInputException("", "volts", "rail " + net + " volts (" + volts + ") must be a finite number");
+      throw new InvalidInputException(
+          "", "volts", "rail " + net + " volts (" + volts + ") must be a finite number");
     }
     if (!Double.isFinite(tolerance) || tolerance < 0 || tolerance >= 1) {
       throw new InvalidInputException(
-          "", "tolerance", "rail " + net + " tolerance (" + tolerance + ") must be between 0 and 1");
+          "",
+          "tolerance",
+          "rail " + net + " tolerance (" + tolerance + ") must be between 0 and 1");
     }
   }
 }

@@ -13,8 +13,8 @@ import java.util.OptionalDouble;
  * @param value volts: the DC level, or the AC amplitude in the same measure (peak or RMS) as the
  *     stage's test input
  * @param hz the frequency of an AC reading in hertz; 0 for a DC reading
- * @param uncertainty the half-width of the reading's uncertainty in volts, when the technician
- *     gave one; empty means "use the meter's (DC) or the scope's (AC)", see {@link
+ * @param uncertainty the half-width of the reading's uncertainty in volts, when the technician gave
+ *     one; empty means "use the meter's (DC) or the scope's (AC)", see {@link
  *     ReadingSet#uncertainty(Reading)}
  */
 public record Reading(String at, Kind kind, double value, double hz, OptionalDouble uncertainty) {
@@ -38,18 +38,33 @@ public record Reading(String at, Kind kind, double value, double hz, OptionalDou
     Objects.requireNonNull(kind, "kind");
     Objects.requireNonNull(uncertainty, "uncertainty");
     if (!Double.isFinite(value)) {
-      throw new InvalidInputException("", kind.word(), "reading at " + at + " (" + value + ") must be a finite number");
+      throw new InvalidInputException(
+          "", kind.word(), "reading at " + at + " (" + value + ") must be a finite number");
     }
     if (kind == Kind.AC && value < 0) {
-      throw new InvalidInputException("", "ac", "ac reading at " + at + " (" + value + ") must be 0 or more");
+      throw new InvalidInputException(
+          "", "ac", "ac reading at " + at + " (" + value + ") must be 0 or more");
     }
     if (kind == Kind.AC ? !(Double.isFinite(hz) && hz > 0) : hz != 0) {
       throw new InvalidInputException(
-          "", "hz", "reading at " + at + " hz (" + hz + ") must be above 0 for an ac reading and absent for dc");
+          "",
+          "hz",
+          "reading at "
+              + at
+              + " hz ("
+              + hz
+              + ") must be above 0 for an ac reading and absent for dc");
     }
-    if (uncertainty.isPresent() && !(Double.isFinite(uncertainty.getAsDouble()) && uncertainty.getAsDouble() > 0)) {
+    if (uncertainty.isPresent()
+        && !(Double.isFinite(uncertainty.getAsDouble()) && uncertainty.getAsDouble() > 0)) {
       throw new InvalidInputException(
-          "", "uncertainty", "reading at " + at + " uncertainty (" + uncertainty.getAsDouble() + ") must be above 0 volts");
+          "",
+          "uncertainty",
+          "reading at "
+              + at
+              + " uncertainty ("
+              + uncertainty.getAsDouble()
+              + ") must be above 0 volts");
     }
   }
 

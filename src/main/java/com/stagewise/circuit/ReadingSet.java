@@ -17,7 +17,9 @@ public record ReadingSet(MeterSpec meter, List<Reading> readings) {
    */
   public static final double SCOPE_PERCENT = 3.0;
 
-  /** The fixed part of a scope's AC amplitude uncertainty, in volts (see {@link #SCOPE_PERCENT}). */
+  /**
+   * The fixed part of a scope's AC amplitude uncertainty, in volts (see {@link #SCOPE_PERCENT}).
+   */
   public static final double SCOPE_FLOOR_VOLTS = 1e-3;
 
   /** Copies the list; see the record description. */

@@ -34,7 +34,9 @@ public final class StageRules {
       problems.add(
           new Problem(
               "nets",
-              "net " + net + " has no DC path to ground, a rail or an input"
+              "net "
+                  + net
+                  + " has no DC path to ground, a rail or an input"
                   + " (only capacitors or op-amp inputs touch it): add the missing resistor or fix the net name"));
     }
     return problems;
@@ -50,7 +52,8 @@ public final class StageRules {
     List<Problem> problems = problems(stage);
     if (!problems.isEmpty()) {
       Problem first = problems.get(0);
-      String more = problems.size() > 1 ? " (and " + (problems.size() - 1) + " more problem(s))" : "";
+      String more =
+          problems.size() > 1 ? " (and " + (problems.size() - 1) + " more problem(s))" : "";
       throw new InvalidInputException(source, first.field(), first.message() + more);
     }
   }
@@ -61,14 +64,18 @@ public final class StageRules {
     for (int i = 0; i < stage.rails().size(); i++) {
       String net = stage.rails().get(i).net();
       if (!seen.add(net)) {
-        problems.add(new Problem("rails[" + i + "].net", "net " + net + " is already ground or another rail"));
+        problems.add(
+            new Problem(
+                "rails[" + i + "].net", "net " + net + " is already ground or another rail"));
       }
     }
     for (int i = 0; i < stage.inputs().size(); i++) {
       String net = stage.inputs().get(i).net();
       if (!seen.add(net)) {
         problems.add(
-            new Problem("inputs[" + i + "].net", "net " + net + " is already ground, a rail or another input"));
+            new Problem(
+                "inputs[" + i + "].net",
+                "net " + net + " is already ground, a rail or another input"));
       }
     }
   }
@@ -78,19 +85,24 @@ public final class StageRules {
     for (int i = 0; i < stage.parts().size(); i++) {
       Part part = stage.parts().get(i);
       if (!refs.add(part.ref())) {
-        problems.add(new Problem("parts[" + i + "].ref", "designator " + part.ref() + " is used twice"));
+        problems.add(
+            new Problem("parts[" + i + "].ref", "designator " + part.ref() + " is used twice"));
       }
       if (part.netA().equals(part.netB())) {
         problems.add(
             new Problem(
                 "parts[" + i + "].nets",
-                part.ref() + " has both ends on net " + part.netA() + " (expected two different nets)"));
+                part.ref()
+                    + " has both ends on net "
+                    + part.netA()
+                    + " (expected two different nets)"));
       }
     }
     for (int i = 0; i < stage.amplifiers().size(); i++) {
       Amplifier amp = stage.amplifiers().get(i);
       if (!refs.add(amp.ref())) {
-        problems.add(new Problem("amplifiers[" + i + "].ref", "designator " + amp.ref() + " is used twice"));
+        problems.add(
+            new Problem("amplifiers[" + i + "].ref", "designator " + amp.ref() + " is used twice"));
       }
     }
   }
@@ -105,7 +117,11 @@ public final class StageRules {
         problems.add(
             new Problem(
                 at + ".section",
-                amp.ref() + " claims section " + amp.section() + " of " + amp.packageRef()
+                amp.ref()
+                    + " claims section "
+                    + amp.section()
+                    + " of "
+                    + amp.packageRef()
                     + ", whose pins another section already uses"));
       }
       Amplifier first = firstOfPackage.putIfAbsent(amp.packageRef(), amp);
@@ -116,20 +132,34 @@ public final class StageRules {
         problems.add(
             new Problem(
                 at + ".packageType",
-                amp.ref() + " says " + amp.packageRef() + " is " + amp.packageType().word()
-                    + " but " + first.ref() + " says " + first.packageType().word()));
+                amp.ref()
+                    + " says "
+                    + amp.packageRef()
+                    + " is "
+                    + amp.packageType().word()
+                    + " but "
+                    + first.ref()
+                    + " says "
+                    + first.packageType().word()));
       } else if (!first.vPlus().equals(amp.vPlus()) || !first.vMinus().equals(amp.vMinus())) {
         problems.add(
             new Problem(
                 at + ".vPlus",
-                amp.ref() + " and " + first.ref() + " share the supply pins of " + amp.packageRef()
+                amp.ref()
+                    + " and "
+                    + first.ref()
+                    + " share the supply pins of "
+                    + amp.packageRef()
                     + ", so their vPlus and vMinus nets must be the same"));
       }
       if (first.deviceClass() != amp.deviceClass() && first.packageType() == amp.packageType()) {
         problems.add(
             new Problem(
                 at + ".class",
-                amp.ref() + " and " + first.ref() + " sit in one package, so their class must be the same"));
+                amp.ref()
+                    + " and "
+                    + first.ref()
+                    + " sit in one package, so their class must be the same"));
       }
     }
   }
@@ -149,7 +179,9 @@ public final class StageRules {
       problems.add(
           new Problem(
               "ground",
-              "ground net " + stage.ground() + " touches no part or pin (expected the stage's reference net)"));
+              "ground net "
+                  + stage.ground()
+                  + " touches no part or pin (expected the stage's reference net)"));
     }
     for (int i = 0; i < stage.parts().size(); i++) {
       Part part = stage.parts().get(i);
@@ -158,7 +190,10 @@ public final class StageRules {
           problems.add(
               new Problem(
                   "parts[" + i + "].nets",
-                  "net " + net + " of " + part.ref()
+                  "net "
+                      + net
+                      + " of "
+                      + part.ref()
                       + " touches nothing else (a misspelt net name, or a part end left open?)"));
         }
       }

@@ -14,16 +14,20 @@ public record TestInput(String net, double dc, double ac, double hz) {
   public TestInput {
     Part.requireName(net, "net");
     if (!Double.isFinite(dc)) {
-      throw new InvalidInputException("", "dc", "input " + net + " dc (" + dc + ") must be a finite number");
+      throw new InvalidInputException(
+          "", "dc", "input " + net + " dc (" + dc + ") must be a finite number");
     }
     if (!Double.isFinite(ac) || ac < 0) {
-      throw new InvalidInputException("", "ac", "input " + net + " ac (" + ac + ") must be 0 or more");
+      throw new InvalidInputException(
+          "", "ac", "input " + net + " ac (" + ac + ") must be 0 or more");
     }
     if (!Double.isFinite(hz) || hz < 0) {
-      throw new InvalidInputException("", "hz", "input " + net + " hz (" + hz + ") must be 0 or more");
+      throw new InvalidInputException(
+          "", "hz", "input " + net + " hz (" + hz + ") must be 0 or more");
     }
     if (ac > 0 && hz <= 0) {
-      throw new InvalidInputException("", "hz", "input " + net + " has an ac amplitude, so hz must be above 0");
+      throw new InvalidInputException(
+          "", "hz", "input " + net + " has an ac amplitude, so hz must be above 0");
     }
   }
 

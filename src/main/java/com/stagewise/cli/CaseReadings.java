@@ -36,18 +36,31 @@ final class CaseReadings {
       String meter = uncertainty != null ? "" : ac ? scope() : meter(set.meter());
       stored.add(
           new StoredReading(
-              HistoryStore.newId(), caseId, r.at(), ac ? ReadingKind.AC : ReadingKind.DC, r.value(), ac ? r.hz() : null,
-              uncertainty, meter, now));
+              HistoryStore.newId(),
+              caseId,
+              r.at(),
+              ac ? ReadingKind.AC : ReadingKind.DC,
+              r.value(),
+              ac ? r.hz() : null,
+              uncertainty,
+              meter,
+              now));
     }
     return stored;
   }
 
   /**
-   * Returns the suspect list for the readings, computed now with the board model's confirmed
-   * fault counts blended into the priors.
+   * Returns the suspect list for the readings, computed now with the board model's confirmed fault
+   * counts blended into the priors.
    */
   static SuspectListRecord diagnose(
-      Stage stage, ReadingSet set, Map<String, Integer> shopCounts, int top, String caseId, Instant now, String version) {
+      Stage stage,
+      ReadingSet set,
+      Map<String, Integer> shopCounts,
+      int top,
+      String caseId,
+      Instant now,
+      String version) {
     Diagnosis diagnosis = Diagnoser.of(stage, shopCounts).diagnose(set, top);
     List<StoredSuspect> suspects = new ArrayList<>();
     for (int i = 0; i < diagnosis.suspects().size(); i++) {
@@ -63,17 +76,35 @@ final class CaseReadings {
       if (probe.kind() == Reading.Kind.AC) {
         probes.append(String.format(Locale.ROOT, " %.6g Hz", probe.hz()));
       }
-      probes.append(String.format(Locale.ROOT, " (%.2f bits): ", probe.bits())).append(probe.why().replace('\n', ' '));
+      probes
+          .append(String.format(Locale.ROOT, " (%.2f bits): ", probe.bits()))
+          .append(probe.why().replace('\n', ' '));
     }
     return new SuspectListRecord(
-        HistoryStore.newId(), caseId, now, version, diagnosis.verdict().word(), suspects, probes.toString());
+        HistoryStore.newId(),
+        caseId,
+        now,
+        version,
+        diagnosis.verdict().word(),
+        suspects,
+        probes.toString());
   }
 
   /** Returns one suspect as a line of text, with the shop's hint ("seen 3 times on this model"). */
   static String suspectLine(StoredSuspect s, Map<String, Integer> shopCounts) {
     String hint = ShopMemory.hint(s.fault(), shopCounts).map(h -> "  [" + h + "]").orElse("");
-    String group = s.group().size() > 1 ? "  (cannot yet be told from " + String.join(", ", others(s)) + ")" : "";
-    return String.format(Locale.ROOT, "  %2d. %-18s %5.1f %%%s%s", s.rank(), s.fault(), 100 * s.probability(), group, hint);
+    String group =
+        s.group().size() > 1
+            ? "  (cannot yet be told from " + String.join(", ", others(s)) + ")"
+            : "";
+    return String.format(
+        Locale.ROOT,
+        "  %2d. %-18s %5.1f %%%s%s",
+        s.rank(),
+        s.fault(),
+        100 * s.probability(),
+        group,
+        hint);
   }
 
   private static List<String> others(StoredSuspect s) {
@@ -82,12 +113,19 @@ final class CaseReadings {
 
   private static String meter(MeterSpec meter) {
     return String.format(
-        Locale.ROOT, "%d-count meter, ±(%s %% + %d counts)", meter.displayCounts(), trim(meter.percent()), meter.counts());
+        Locale.ROOT,
+        "%d-count meter, ±(%s %% + %d counts)",
+        meter.displayCounts(),
+        trim(meter.percent()),
+        meter.counts());
   }
 
   private static String scope() {
     return String.format(
-        Locale.ROOT, "scope, ±(%s %% + %s mV)", trim(ReadingSet.SCOPE_PERCENT), trim(ReadingSet.SCOPE_FLOOR_VOLTS * 1000));
+        Locale.ROOT,
+        "scope, ±(%s %% + %s mV)",
+        trim(ReadingSet.SCOPE_PERCENT),
+        trim(ReadingSet.SCOPE_FLOOR_VOLTS * 1000));
   }
 
   private static String trim(double value) {

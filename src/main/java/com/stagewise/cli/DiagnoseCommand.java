@@ -27,22 +27,35 @@ import picocli.CommandLine.Spec;
 final class DiagnoseCommand implements Callable<Integer> {
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--stage", required = true, paramLabel = "FILE", description = "the stage sheet (*.stage.json)")
+  @Option(
+      names = "--stage",
+      required = true,
+      paramLabel = "FILE",
+      description = "the stage sheet (*.stage.json)")
   Path stageFile;
 
-  @Option(names = "--readings", required = true, paramLabel = "FILE", description = "the readings (*.readings.json)")
+  @Option(
+      names = "--readings",
+      required = true,
+      paramLabel = "FILE",
+      description = "the readings (*.readings.json)")
   Path readingsFile;
 
   @Option(names = "--json", description = "print the diagnosis document instead of a table")
   boolean json;
 
-  @Option(names = "--top", paramLabel = "N", defaultValue = "" + Diagnoser.DEFAULT_TOP, description = "list at most N suspects (default ${DEFAULT-VALUE})")
+  @Option(
+      names = "--top",
+      paramLabel = "N",
+      defaultValue = "" + Diagnoser.DEFAULT_TOP,
+      description = "list at most N suspects (default ${DEFAULT-VALUE})")
   int top;
 
   @Override
   public Integer call() {
     if (top < 1) {
-      throw new InvalidInputException("command line", "--top", "the number of suspects (" + top + ") must be 1 or more");
+      throw new InvalidInputException(
+          "command line", "--top", "the number of suspects (" + top + ") must be 1 or more");
     }
     Stage stage = StageSheet.read(stageFile);
     ReadingSet readings = ReadingsSheet.read(readingsFile, stage);
@@ -83,14 +96,19 @@ final class DiagnoseCommand implements Callable<Integer> {
           s.fault(),
           100 * s.probability(),
           "#".repeat(bar),
-          s.group().size() > 1 ? "  cannot yet be told apart from: " + String.join(", ", s.group().stream().filter(g -> !g.equals(s.fault())).toList()) : "");
+          s.group().size() > 1
+              ? "  cannot yet be told apart from: "
+                  + String.join(", ", s.group().stream().filter(g -> !g.equals(s.fault())).toList())
+              : "");
       out.println("      " + s.why());
     }
     if (!d.nextProbes().isEmpty()) {
       out.println();
       out.println("Probe next:");
       for (ProbeAdvice p : d.nextProbes()) {
-        String kind = p.kind().word() + (p.hz() > 0 ? String.format(Locale.ROOT, " at %s Hz", trim(p.hz())) : "");
+        String kind =
+            p.kind().word()
+                + (p.hz() > 0 ? String.format(Locale.ROOT, " at %s Hz", trim(p.hz())) : "");
         out.printf(Locale.ROOT, "  %-10s %-14s %.2f bits  %s%n", p.at(), kind, p.bits(), p.why());
       }
     }

@@ -91,7 +91,10 @@ final class HistoryCommand implements Runnable {
 
   /** The options every history subcommand has. */
   static final class Common {
-    @Option(names = "--db", paramLabel = "FILE", description = "The history database (default: $STAGEWISE_DB, else the data folder).")
+    @Option(
+        names = "--db",
+        paramLabel = "FILE",
+        description = "The history database (default: $STAGEWISE_DB, else the data folder).")
     Path db;
 
     @Option(names = "--json", description = "Print JSON instead of text.")
@@ -145,7 +148,11 @@ final class HistoryCommand implements Runnable {
       }
       for (BoardModel m : models) {
         int sheets = store.stageSheets(m.id()).size();
-        out.println(m.name() + (m.maker().isEmpty() ? "" : "  (" + m.maker() + ")") + "  " + plural(sheets, "stage sheet"));
+        out.println(
+            m.name()
+                + (m.maker().isEmpty() ? "" : "  (" + m.maker() + ")")
+                + "  "
+                + plural(sheets, "stage sheet"));
       }
     }
   }
@@ -158,7 +165,10 @@ final class HistoryCommand implements Runnable {
     @Option(names = "--maker", defaultValue = "", description = "Its maker.")
     String maker;
 
-    @Option(names = "--stage", paramLabel = "FILE", description = "A stage sheet (*.stage.json) to keep with it; repeatable.")
+    @Option(
+        names = "--stage",
+        paramLabel = "FILE",
+        description = "A stage sheet (*.stage.json) to keep with it; repeatable.")
     List<Path> stages = new ArrayList<>();
 
     @Override
@@ -177,7 +187,12 @@ final class HistoryCommand implements Runnable {
       if (json()) {
         out.println(HistoryJson.boardModels(List.of(model)));
       } else {
-        out.println("Board model " + model.name() + " (" + plural(store.stageSheets(model.id()).size(), "stage sheet") + ").");
+        out.println(
+            "Board model "
+                + model.name()
+                + " ("
+                + plural(store.stageSheets(model.id()).size(), "stage sheet")
+                + ").");
       }
     }
   }
@@ -200,14 +215,21 @@ final class HistoryCommand implements Runnable {
         out.println("No units yet. Add one with 'history add-unit --serial S --model M'.");
       }
       for (Unit u : units) {
-        out.println(u.serial() + "  " + models.get(u.boardModelId()).name() + (u.owner().isEmpty() ? "" : "  " + u.owner()));
+        out.println(
+            u.serial()
+                + "  "
+                + models.get(u.boardModelId()).name()
+                + (u.owner().isEmpty() ? "" : "  " + u.owner()));
       }
     }
   }
 
   @Command(name = "add-unit", description = "Add a unit (the board model is added too if new).")
   static final class AddUnit extends Base {
-    @Option(names = "--serial", required = true, description = "The serial number as written on the unit.")
+    @Option(
+        names = "--serial",
+        required = true,
+        description = "The serial number as written on the unit.")
     String serial;
 
     @Option(names = "--model", required = true, description = "Its board model.")
@@ -218,20 +240,28 @@ final class HistoryCommand implements Runnable {
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
-      BoardModel boardModel = store.findBoardModel(model).orElseGet(() -> store.boardModel(model, ""));
+      BoardModel boardModel =
+          store.findBoardModel(model).orElseGet(() -> store.boardModel(model, ""));
       Unit unit = store.addUnit(serial, boardModel.id(), owner);
-      out.println(json() ? HistoryJson.unit(unit, boardModel) : "Unit " + unit.serial() + " of " + boardModel.name() + " added.");
+      out.println(
+          json()
+              ? HistoryJson.unit(unit, boardModel)
+              : "Unit " + unit.serial() + " of " + boardModel.name() + " added.");
     }
   }
 
   // ---- cases ----------------------------------------------------------------------------------
 
-  @Command(name = "open-case", description = "Open a case for a unit, with the symptom as reported.")
+  @Command(
+      name = "open-case",
+      description = "Open a case for a unit, with the symptom as reported.")
   static final class OpenCase extends Base {
     @Option(names = "--serial", required = true, description = "The unit's serial number.")
     String serial;
 
-    @Option(names = "--model", description = "Its board model (needed if two models have this serial).")
+    @Option(
+        names = "--model",
+        description = "Its board model (needed if two models have this serial).")
     String model;
 
     @Option(names = "--symptom", required = true, description = "The symptom as reported.")
@@ -241,19 +271,29 @@ final class HistoryCommand implements Runnable {
     void run(HistoryStore store, PrintWriter out) {
       Unit unit = requireUnit(store, serial, model);
       RepairCase opened = store.openCase(unit.id(), symptom);
-      out.println(json() ? HistoryJson.repairCase(opened) : "Case " + shortId(opened.id()) + " opened for " + unit.serial() + ".");
+      out.println(
+          json()
+              ? HistoryJson.repairCase(opened)
+              : "Case " + shortId(opened.id()) + " opened for " + unit.serial() + ".");
     }
   }
 
   @Command(name = "close-case", description = "Close out a case: its outcome and the faults found.")
   static final class CloseCase extends Base {
-    @Option(names = "--case", required = true, paramLabel = "ID", description = "The case id (or its first characters).")
+    @Option(
+        names = "--case",
+        required = true,
+        paramLabel = "ID",
+        description = "The case id (or its first characters).")
     String caseId;
 
     @Option(names = "--outcome", required = true, description = "fixed, not-fixed or returned.")
     String outcome;
 
-    @Option(names = "--fault", paramLabel = "FAULT", description = "A fault found to be wrong, e.g. R2:open; repeatable.")
+    @Option(
+        names = "--fault",
+        paramLabel = "FAULT",
+        description = "A fault found to be wrong, e.g. R2:open; repeatable.")
     List<String> faults = new ArrayList<>();
 
     @Option(names = "--note", description = "A closing note.")
@@ -263,14 +303,26 @@ final class HistoryCommand implements Runnable {
     void run(HistoryStore store, PrintWriter out) {
       Outcome how =
           Outcome.fromWord(outcome)
-              .orElseThrow(() -> new InvalidInputException("command line", "--outcome", "expected fixed, not-fixed or returned, got '" + outcome + "'"));
+              .orElseThrow(
+                  () ->
+                      new InvalidInputException(
+                          "command line",
+                          "--outcome",
+                          "expected fixed, not-fixed or returned, got '" + outcome + "'"));
       String id = store.resolveCaseId(caseId);
       RepairCase closed = store.closeCase(id, how, faults);
       if (note != null && !note.isBlank()) {
         store.addNote(id, note);
       }
-      out.println(json() ? HistoryJson.repairCase(closed) : "Case " + shortId(id) + " closed: " + how.word()
-          + (faults.isEmpty() ? "" : ", found " + String.join(", ", faults)) + ".");
+      out.println(
+          json()
+              ? HistoryJson.repairCase(closed)
+              : "Case "
+                  + shortId(id)
+                  + " closed: "
+                  + how.word()
+                  + (faults.isEmpty() ? "" : ", found " + String.join(", ", faults))
+                  + ".");
     }
   }
 
@@ -278,19 +330,37 @@ final class HistoryCommand implements Runnable {
       name = "add-readings",
       description = "Store a readings file in a case, with the diagnosis computed from it.")
   static final class AddReadings extends Base {
-    @Option(names = "--case", required = true, paramLabel = "ID", description = "The case id (or its first characters).")
+    @Option(
+        names = "--case",
+        required = true,
+        paramLabel = "ID",
+        description = "The case id (or its first characters).")
     String caseId;
 
-    @Option(names = "--readings", required = true, paramLabel = "FILE", description = "The readings file (*.readings.json).")
+    @Option(
+        names = "--readings",
+        required = true,
+        paramLabel = "FILE",
+        description = "The readings file (*.readings.json).")
     Path readings;
 
-    @Option(names = "--stage", paramLabel = "FILE", description = "The stage sheet the readings were taken on (default: the board model's stored sheet).")
+    @Option(
+        names = "--stage",
+        paramLabel = "FILE",
+        description =
+            "The stage sheet the readings were taken on (default: the board model's stored sheet).")
     Path stageFile;
 
-    @Option(names = "--sheet", paramLabel = "TITLE", description = "Which of the board model's stored sheets, if it has several.")
+    @Option(
+        names = "--sheet",
+        paramLabel = "TITLE",
+        description = "Which of the board model's stored sheets, if it has several.")
     String sheetTitle;
 
-    @Option(names = "--top", defaultValue = "12", description = "The most suspects to keep (default ${DEFAULT-VALUE}).")
+    @Option(
+        names = "--top",
+        defaultValue = "12",
+        description = "The most suspects to keep (default ${DEFAULT-VALUE}).")
     int top;
 
     @Override
@@ -304,7 +374,8 @@ final class HistoryCommand implements Runnable {
       Instant now = Instant.now();
       List<StoredReading> stored = CaseReadings.toStored(set, id, now);
       Map<String, Integer> counts = new ShopMemory(store).faultCounts(model.id());
-      SuspectListRecord suspects = CaseReadings.diagnose(stage, set, counts, top, id, now, programVersion());
+      SuspectListRecord suspects =
+          CaseReadings.diagnose(stage, set, counts, top, id, now, programVersion());
       store.addReadings(id, stored, suspects);
       if (json()) {
         out.println(HistoryJson.storedReadings(stored, suspects));
@@ -325,25 +396,36 @@ final class HistoryCommand implements Runnable {
       }
       List<StageSheetRecord> sheets = store.stageSheets(model.id());
       if (sheetTitle != null) {
-        sheets = sheets.stream().filter(s -> s.title().equalsIgnoreCase(sheetTitle.strip())).toList();
+        sheets =
+            sheets.stream().filter(s -> s.title().equalsIgnoreCase(sheetTitle.strip())).toList();
       }
       if (sheets.size() != 1) {
         throw new InvalidInputException(
             "command line",
             sheetTitle == null ? "--stage" : "--sheet",
             sheets.isEmpty()
-                ? "board model " + model.name() + " has no stored stage sheet" + (sheetTitle == null ? "" : " titled '" + sheetTitle + "'")
+                ? "board model "
+                    + model.name()
+                    + " has no stored stage sheet"
+                    + (sheetTitle == null ? "" : " titled '" + sheetTitle + "'")
                     + "; give the stage sheet with --stage FILE"
-                : "board model " + model.name() + " has several stage sheets; choose one with --sheet TITLE");
+                : "board model "
+                    + model.name()
+                    + " has several stage sheets; choose one with --sheet TITLE");
       }
       StageSheetRecord sheet = sheets.get(0);
-      return StageSheet.read(sheet.sheetJson(), "stage sheet '" + sheet.title() + "' of " + model.name());
+      return StageSheet.read(
+          sheet.sheetJson(), "stage sheet '" + sheet.title() + "' of " + model.name());
     }
   }
 
   @Command(name = "add-note", description = "Add a time-stamped note to a case.")
   static final class AddNote extends Base {
-    @Option(names = "--case", required = true, paramLabel = "ID", description = "The case id (or its first characters).")
+    @Option(
+        names = "--case",
+        required = true,
+        paramLabel = "ID",
+        description = "The case id (or its first characters).")
     String caseId;
 
     @Option(names = "--text", required = true, description = "The note.")
@@ -352,19 +434,32 @@ final class HistoryCommand implements Runnable {
     @Override
     void run(HistoryStore store, PrintWriter out) {
       CaseNote note = store.addNote(store.resolveCaseId(caseId), text);
-      out.println(json() ? HistoryJson.note(note) : "Note added to case " + shortId(note.caseId()) + ".");
+      out.println(
+          json() ? HistoryJson.note(note) : "Note added to case " + shortId(note.caseId()) + ".");
     }
   }
 
-  @Command(name = "add-action", description = "Record what was done: a part replaced, a reflow, an adjustment.")
+  @Command(
+      name = "add-action",
+      description = "Record what was done: a part replaced, a reflow, an adjustment.")
   static final class AddAction extends Base {
-    @Option(names = "--case", required = true, paramLabel = "ID", description = "The case id (or its first characters).")
+    @Option(
+        names = "--case",
+        required = true,
+        paramLabel = "ID",
+        description = "The case id (or its first characters).")
     String caseId;
 
-    @Option(names = "--kind", required = true, description = "part-replaced, reflow, adjustment or other.")
+    @Option(
+        names = "--kind",
+        required = true,
+        description = "part-replaced, reflow, adjustment or other.")
     String kind;
 
-    @Option(names = "--part", defaultValue = "", description = "The part designator, e.g. R2 or U1.")
+    @Option(
+        names = "--part",
+        defaultValue = "",
+        description = "The part designator, e.g. R2 or U1.")
     String part;
 
     @Option(names = "--old", defaultValue = "", description = "The old value or part number.")
@@ -380,9 +475,20 @@ final class HistoryCommand implements Runnable {
     void run(HistoryStore store, PrintWriter out) {
       ActionKind what =
           ActionKind.fromWord(kind)
-              .orElseThrow(() -> new InvalidInputException("command line", "--kind", "expected part-replaced, reflow, adjustment or other, got '" + kind + "'"));
-      RepairAction action = store.addAction(store.resolveCaseId(caseId), what, part, oldValue, newValue, text);
-      out.println(json() ? HistoryJson.action(action) : "Action recorded in case " + shortId(action.caseId()) + ".");
+              .orElseThrow(
+                  () ->
+                      new InvalidInputException(
+                          "command line",
+                          "--kind",
+                          "expected part-replaced, reflow, adjustment or other, got '"
+                              + kind
+                              + "'"));
+      RepairAction action =
+          store.addAction(store.resolveCaseId(caseId), what, part, oldValue, newValue, text);
+      out.println(
+          json()
+              ? HistoryJson.action(action)
+              : "Action recorded in case " + shortId(action.caseId()) + ".");
     }
   }
 
@@ -393,16 +499,22 @@ final class HistoryCommand implements Runnable {
     @Option(names = "--serial", description = "The unit's serial number.")
     String serial;
 
-    @Option(names = "--model", description = "Its board model (needed if two models have this serial).")
+    @Option(
+        names = "--model",
+        description = "Its board model (needed if two models have this serial).")
     String model;
 
-    @Option(names = "--case", paramLabel = "ID", description = "One case (its id or first characters).")
+    @Option(
+        names = "--case",
+        paramLabel = "ID",
+        description = "One case (its id or first characters).")
     String caseId;
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
       if ((serial == null) == (caseId == null)) {
-        throw new InvalidInputException("command line", "--serial/--case", "give either --serial or --case");
+        throw new InvalidInputException(
+            "command line", "--serial/--case", "give either --serial or --case");
       }
       if (caseId != null) {
         CaseFile file = store.caseFile(store.resolveCaseId(caseId)).orElseThrow();
@@ -411,11 +523,16 @@ final class HistoryCommand implements Runnable {
       }
       Unit unit = requireUnit(store, serial, model);
       UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
-      out.print(json() ? HistoryJson.unitHistory(history) + System.lineSeparator() : HistoryText.unitHistory(history));
+      out.print(
+          json()
+              ? HistoryJson.unitHistory(history) + System.lineSeparator()
+              : HistoryText.unitHistory(history));
     }
   }
 
-  @Command(name = "search", description = "Find cases by serial, board model, fault, part, status, dates and words.")
+  @Command(
+      name = "search",
+      description = "Find cases by serial, board model, fault, part, status, dates and words.")
   static final class Search extends Base {
     @Option(names = "--serial", description = "The unit's serial number (exact, any letter case).")
     String serial;
@@ -426,28 +543,40 @@ final class HistoryCommand implements Runnable {
     @Option(names = "--fault", description = "A confirmed fault id, e.g. R2:open.")
     String fault;
 
-    @Option(names = "--part", description = "A part named by a confirmed fault or an action, e.g. R2 or U1.")
+    @Option(
+        names = "--part",
+        description = "A part named by a confirmed fault or an action, e.g. R2 or U1.")
     String part;
 
     @Option(names = "--status", description = "open or closed.")
     String status;
 
-    @Option(names = "--from", paramLabel = "DATE", description = "Opened on or after this date (2026-03-01, UTC) or time.")
+    @Option(
+        names = "--from",
+        paramLabel = "DATE",
+        description = "Opened on or after this date (2026-03-01, UTC) or time.")
     String from;
 
-    @Option(names = "--to", paramLabel = "DATE", description = "Opened on or before this date (UTC, the whole day) or before this time.")
+    @Option(
+        names = "--to",
+        paramLabel = "DATE",
+        description = "Opened on or before this date (UTC, the whole day) or before this time.")
     String to;
 
     @Option(names = "--text", description = "Words to find in symptoms and notes.")
     String text;
 
-    @Option(names = "--limit", defaultValue = "50", description = "The most cases to list (default ${DEFAULT-VALUE}).")
+    @Option(
+        names = "--limit",
+        defaultValue = "50",
+        description = "The most cases to list (default ${DEFAULT-VALUE}).")
     int limit;
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
       if (limit < 1) {
-        throw new InvalidInputException("command line", "--limit", "expected 1 or more, got " + limit);
+        throw new InvalidInputException(
+            "command line", "--limit", "expected 1 or more, got " + limit);
       }
       SearchQuery query =
           SearchQuery.all()
@@ -461,7 +590,12 @@ final class HistoryCommand implements Runnable {
         query =
             query.withStatus(
                 CaseStatus.fromWord(status)
-                    .orElseThrow(() -> new InvalidInputException("command line", "--status", "expected open or closed, got '" + status + "'")));
+                    .orElseThrow(
+                        () ->
+                            new InvalidInputException(
+                                "command line",
+                                "--status",
+                                "expected open or closed, got '" + status + "'")));
       }
       if (from != null) {
         query = query.withOpenedFrom(time("--from", from, false));
@@ -474,7 +608,9 @@ final class HistoryCommand implements Runnable {
     }
   }
 
-  @Command(name = "faults", description = "Show the faults confirmed on a board model's fixed cases (the shop's memory).")
+  @Command(
+      name = "faults",
+      description = "Show the faults confirmed on a board model's fixed cases (the shop's memory).")
   static final class Faults extends Base {
     @Option(names = "--model", required = true, description = "The board model.")
     String model;
@@ -490,7 +626,8 @@ final class HistoryCommand implements Runnable {
       if (counts.isEmpty()) {
         out.println("No fixed cases with a confirmed fault on " + boardModel.name() + " yet.");
       }
-      counts.forEach((fault, n) -> out.println(fault + "  " + ShopMemory.hint(fault, counts).orElse("")));
+      counts.forEach(
+          (fault, n) -> out.println(fault + "  " + ShopMemory.hint(fault, counts).orElse("")));
     }
   }
 
@@ -498,19 +635,31 @@ final class HistoryCommand implements Runnable {
 
   @Command(name = "export", description = "Write the history, or a part of it, to one JSON bundle.")
   static final class Export extends Base {
-    @Option(names = "--out", required = true, paramLabel = "FILE", description = "The bundle file to write.")
+    @Option(
+        names = "--out",
+        required = true,
+        paramLabel = "FILE",
+        description = "The bundle file to write.")
     Path file;
 
     @Option(names = "--serial", description = "Only this unit.")
     String serial;
 
-    @Option(names = "--model", description = "Only this board model (or, with --serial, the unit's model).")
+    @Option(
+        names = "--model",
+        description = "Only this board model (or, with --serial, the unit's model).")
     String model;
 
-    @Option(names = "--from", paramLabel = "DATE", description = "Only cases opened on or after this date (UTC).")
+    @Option(
+        names = "--from",
+        paramLabel = "DATE",
+        description = "Only cases opened on or after this date (UTC).")
     String from;
 
-    @Option(names = "--to", paramLabel = "DATE", description = "Only cases opened on or before this date (UTC).")
+    @Option(
+        names = "--to",
+        paramLabel = "DATE",
+        description = "Only cases opened on or before this date (UTC).")
     String to;
 
     @Override
@@ -531,15 +680,28 @@ final class HistoryCommand implements Runnable {
       HistoryBundle bundle = store.export(selection, programVersion());
       HistoryBundleJson.write(bundle, file);
       if (json()) {
-        out.println(HistoryJson.fields(Map.of("bundle", file.toString(), "cases", Integer.toString(bundle.cases().size()))));
+        out.println(
+            HistoryJson.fields(
+                Map.of(
+                    "bundle", file.toString(), "cases", Integer.toString(bundle.cases().size()))));
       } else {
-        out.println("Exported " + plural(bundle.cases().size(), "case") + " of " + plural(bundle.units().size(), "unit")
-            + " (" + plural(bundle.size(), "record") + ") to " + file + ".");
+        out.println(
+            "Exported "
+                + plural(bundle.cases().size(), "case")
+                + " of "
+                + plural(bundle.units().size(), "unit")
+                + " ("
+                + plural(bundle.size(), "record")
+                + ") to "
+                + file
+                + ".");
       }
     }
   }
 
-  @Command(name = "import", description = "Merge a JSON bundle into the history (all of it or nothing).")
+  @Command(
+      name = "import",
+      description = "Merge a JSON bundle into the history (all of it or nothing).")
   static final class Import extends Base {
     @CommandLine.Parameters(paramLabel = "FILE", description = "The bundle file.")
     Path file;
@@ -548,33 +710,58 @@ final class HistoryCommand implements Runnable {
     void run(HistoryStore store, PrintWriter out) {
       HistoryBundle bundle = HistoryBundleJson.read(file);
       ImportReport report = store.importBundle(bundle, file.toString());
-      out.print(json() ? HistoryJson.importReport(report) + System.lineSeparator() : HistoryText.importReport(report));
+      out.print(
+          json()
+              ? HistoryJson.importReport(report) + System.lineSeparator()
+              : HistoryText.importReport(report));
     }
   }
 
-  @Command(name = "backup", description = "Write a consistent copy of the history to a new file (safe while the app runs).")
+  @Command(
+      name = "backup",
+      description =
+          "Write a consistent copy of the history to a new file (safe while the app runs).")
   static final class Backup extends Base {
-    @Option(names = "--out", required = true, paramLabel = "FILE", description = "The backup file (must not exist).")
+    @Option(
+        names = "--out",
+        required = true,
+        paramLabel = "FILE",
+        description = "The backup file (must not exist).")
     Path file;
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
       store.backupTo(file);
-      out.println(json() ? HistoryJson.fields(Map.of("backup", file.toString())) : "Backup written to " + file + ".");
+      out.println(
+          json()
+              ? HistoryJson.fields(Map.of("backup", file.toString()))
+              : "Backup written to " + file + ".");
     }
   }
 
-  @Command(name = "restore", description = "Replace the history with a backup (the current one is saved first).")
+  @Command(
+      name = "restore",
+      description = "Replace the history with a backup (the current one is saved first).")
   static final class Restore extends Base {
-    @Option(names = "--from", required = true, paramLabel = "FILE", description = "The backup file.")
+    @Option(
+        names = "--from",
+        required = true,
+        paramLabel = "FILE",
+        description = "The backup file.")
     Path file;
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
       Path saved = store.restoreFrom(file);
-      out.println(json()
-          ? HistoryJson.fields(Map.of("restoredFrom", file.toString(), "previousSavedTo", saved.toString()))
-          : "History restored from " + file + ". The previous history was saved to " + saved + ".");
+      out.println(
+          json()
+              ? HistoryJson.fields(
+                  Map.of("restoredFrom", file.toString(), "previousSavedTo", saved.toString()))
+              : "History restored from "
+                  + file
+                  + ". The previous history was saved to "
+                  + saved
+                  + ".");
     }
   }
 
@@ -583,41 +770,73 @@ final class HistoryCommand implements Runnable {
     @Override
     void run(HistoryStore store, PrintWriter out) {
       if (!store.isEmpty()) {
-        throw new InvalidInputException("command line", "--db", "the demo data goes into an empty history only; choose a new file with --db");
+        throw new InvalidInputException(
+            "command line",
+            "--db",
+            "the demo data goes into an empty history only; choose a new file with --db");
       }
       ImportReport report = DemoHistory.fill(store);
-      out.println(json() ? HistoryJson.importReport(report) : "Demo history added (" + plural(report.added(), "record") + "); all of it is invented.");
+      out.println(
+          json()
+              ? HistoryJson.importReport(report)
+              : "Demo history added ("
+                  + plural(report.added(), "record")
+                  + "); all of it is invented.");
     }
   }
 
-  @Command(name = "make-test-data", description = "Fill a history with generated cases, for the speed benchmark.")
+  @Command(
+      name = "make-test-data",
+      description = "Fill a history with generated cases, for the speed benchmark.")
   static final class MakeTestData extends Base {
-    @Option(names = "--cases", defaultValue = "100000", description = "Cases to generate (default ${DEFAULT-VALUE}).")
+    @Option(
+        names = "--cases",
+        defaultValue = "100000",
+        description = "Cases to generate (default ${DEFAULT-VALUE}).")
     int cases;
 
-    @Option(names = "--readings-per-case", defaultValue = "10", description = "Readings per case (default ${DEFAULT-VALUE}).")
+    @Option(
+        names = "--readings-per-case",
+        defaultValue = "10",
+        description = "Readings per case (default ${DEFAULT-VALUE}).")
     int readingsPerCase;
 
-    @Option(names = "--seed", defaultValue = "1", description = "Random seed (default ${DEFAULT-VALUE}).")
+    @Option(
+        names = "--seed",
+        defaultValue = "1",
+        description = "Random seed (default ${DEFAULT-VALUE}).")
     long seed;
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
       if (cases < 1 || readingsPerCase < 0) {
-        throw new InvalidInputException("command line", "--cases", "expected 1 or more cases and 0 or more readings per case");
+        throw new InvalidInputException(
+            "command line", "--cases", "expected 1 or more cases and 0 or more readings per case");
       }
       long started = System.nanoTime();
       SyntheticHistory.fill(store, cases, readingsPerCase, seed, 2_000);
       double seconds = (System.nanoTime() - started) / 1e9;
-      out.println(String.format(java.util.Locale.ROOT, "Generated %d cases with %d readings each in %.1f s.", cases, readingsPerCase, seconds));
+      out.println(
+          String.format(
+              java.util.Locale.ROOT,
+              "Generated %d cases with %d readings each in %.1f s.",
+              cases,
+              readingsPerCase,
+              seconds));
     }
   }
 
   // ---- helpers ----------------------------------------------------------------------------------
 
   static BoardModel requireModel(HistoryStore store, String name) {
-    return store.findBoardModel(name)
-        .orElseThrow(() -> new InvalidInputException("command line", "--model", "no board model named '" + name + "' (see 'history models')"));
+    return store
+        .findBoardModel(name)
+        .orElseThrow(
+            () ->
+                new InvalidInputException(
+                    "command line",
+                    "--model",
+                    "no board model named '" + name + "' (see 'history models')"));
   }
 
   static Unit requireUnit(HistoryStore store, String serial, String model) {
@@ -627,11 +846,22 @@ final class HistoryCommand implements Runnable {
       units = units.stream().filter(u -> u.boardModelId().equals(modelId)).toList();
     }
     if (units.isEmpty()) {
-      throw new InvalidInputException("command line", "--serial", "no unit with serial '" + serial + "'" + (model == null ? "" : " of " + model)
-          + " (add it with 'history add-unit')");
+      throw new InvalidInputException(
+          "command line",
+          "--serial",
+          "no unit with serial '"
+              + serial
+              + "'"
+              + (model == null ? "" : " of " + model)
+              + " (add it with 'history add-unit')");
     }
     if (units.size() > 1) {
-      throw new InvalidInputException("command line", "--model", "several board models have a unit with serial '" + serial + "'; name the model with --model");
+      throw new InvalidInputException(
+          "command line",
+          "--model",
+          "several board models have a unit with serial '"
+              + serial
+              + "'; name the model with --model");
     }
     return units.get(0);
   }
@@ -642,7 +872,10 @@ final class HistoryCommand implements Runnable {
     return models;
   }
 
-  /** Returns a date (UTC; as an upper bound, the end of that day) or a UTC time given on the command line. */
+  /**
+   * Returns a date (UTC; as an upper bound, the end of that day) or a UTC time given on the command
+   * line.
+   */
   static Instant time(String option, String text, boolean endOfDay) {
     try {
       LocalDate date = LocalDate.parse(text.strip());
@@ -651,7 +884,12 @@ final class HistoryCommand implements Runnable {
       try {
         return Instant.parse(text.strip());
       } catch (DateTimeParseException e) {
-        throw new InvalidInputException("command line", option, "expected a date such as 2026-03-01 or a UTC time such as 2026-03-01T14:30:00Z, got '" + text + "'");
+        throw new InvalidInputException(
+            "command line",
+            option,
+            "expected a date such as 2026-03-01 or a UTC time such as 2026-03-01T14:30:00Z, got '"
+                + text
+                + "'");
       }
     }
   }
@@ -673,7 +911,8 @@ final class HistoryCommand implements Runnable {
     try {
       return Files.readString(file, StandardCharsets.UTF_8);
     } catch (IOException e) {
-      throw new InvalidInputException(file.toString(), "", "cannot read the file: " + e.getMessage());
+      throw new InvalidInputException(
+          file.toString(), "", "cannot read the file: " + e.getMessage());
     }
   }
 }

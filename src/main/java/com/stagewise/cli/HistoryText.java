@@ -31,7 +31,10 @@ final class HistoryText {
 
   static String unitHistory(UnitHistory history) {
     StringBuilder text = new StringBuilder();
-    text.append("Unit ").append(history.unit().serial()).append(" — ").append(history.boardModel().name());
+    text.append("Unit ")
+        .append(history.unit().serial())
+        .append(" — ")
+        .append(history.boardModel().name());
     if (!history.unit().owner().isEmpty()) {
       text.append(" — ").append(history.unit().owner());
     }
@@ -48,7 +51,10 @@ final class HistoryText {
   static String caseFile(CaseFile file) {
     RepairCase c = file.repairCase();
     StringBuilder text = new StringBuilder();
-    text.append("Case ").append(HistoryCommand.shortId(c.id())).append("  opened ").append(when(c.openedAt()));
+    text.append("Case ")
+        .append(HistoryCommand.shortId(c.id()))
+        .append("  opened ")
+        .append(when(c.openedAt()));
     if (c.closedAt() != null) {
       text.append(", closed ").append(when(c.closedAt())).append(": ").append(c.outcome().word());
     } else {
@@ -61,7 +67,14 @@ final class HistoryText {
     if (!file.readings().isEmpty()) {
       text.append("  Readings:").append(NL);
       for (StoredReading r : file.readings()) {
-        text.append(String.format(Locale.ROOT, "    %s  %-8s %s %s V", when(r.takenAt()), r.at(), r.kind().word(), number(r.value())));
+        text.append(
+            String.format(
+                Locale.ROOT,
+                "    %s  %-8s %s %s V",
+                when(r.takenAt()),
+                r.at(),
+                r.kind().word(),
+                number(r.value())));
         if (r.hz() != null) {
           text.append(" at ").append(number(r.hz())).append(" Hz");
         }
@@ -69,8 +82,13 @@ final class HistoryText {
       }
     }
     for (SuspectListRecord list : file.suspectLists()) {
-      text.append("  Suspects at ").append(when(list.computedAt())).append(" (Stagewise ").append(list.programVersion())
-          .append("): ").append(list.verdict()).append(NL);
+      text.append("  Suspects at ")
+          .append(when(list.computedAt()))
+          .append(" (Stagewise ")
+          .append(list.programVersion())
+          .append("): ")
+          .append(list.verdict())
+          .append(NL);
       for (StoredSuspect s : list.suspects()) {
         text.append("  ").append(CaseReadings.suspectLine(s, Map.of())).append(NL);
       }
@@ -100,8 +118,15 @@ final class HistoryText {
     }
     StringBuilder text = new StringBuilder();
     for (SearchHit hit : hits) {
-      text.append(HistoryCommand.shortId(hit.caseId())).append("  ").append(when(hit.openedAt())).append("  ")
-          .append(hit.serial()).append("  ").append(hit.boardModel()).append("  ").append(hit.status().word());
+      text.append(HistoryCommand.shortId(hit.caseId()))
+          .append("  ")
+          .append(when(hit.openedAt()))
+          .append("  ")
+          .append(hit.serial())
+          .append("  ")
+          .append(hit.boardModel())
+          .append("  ")
+          .append(hit.status().word());
       if (hit.outcome() != null) {
         text.append(" (").append(hit.outcome().word()).append(')');
       }
@@ -115,14 +140,26 @@ final class HistoryText {
 
   static String importReport(ImportReport report) {
     StringBuilder text = new StringBuilder();
-    text.append(String.format(Locale.ROOT, "Imported: %d added, %d updated, %d already here, %d conflicts.",
-        report.added(), report.updated(), report.unchanged(), report.conflicts().size())).append(NL);
+    text.append(
+            String.format(
+                Locale.ROOT,
+                "Imported: %d added, %d updated, %d already here, %d conflicts.",
+                report.added(),
+                report.updated(),
+                report.unchanged(),
+                report.conflicts().size()))
+        .append(NL);
     for (String match : report.matched()) {
       text.append("  matched: ").append(match).append(NL);
     }
     for (ImportReport.Conflict conflict : report.conflicts()) {
-      text.append("  conflict: ").append(conflict.kind()).append(' ').append(conflict.id()).append(": ")
-          .append(conflict.reason()).append(NL);
+      text.append("  conflict: ")
+          .append(conflict.kind())
+          .append(' ')
+          .append(conflict.id())
+          .append(": ")
+          .append(conflict.reason())
+          .append(NL);
     }
     return text.toString();
   }

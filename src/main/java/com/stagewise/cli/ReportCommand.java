@@ -35,16 +35,27 @@ final class ReportCommand implements Callable<Integer> {
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--case", required = true, paramLabel = "ID", description = "The case id (or its first 4 or more characters).")
+  @Option(
+      names = "--case",
+      required = true,
+      paramLabel = "ID",
+      description = "The case id (or its first 4 or more characters).")
   String caseId;
 
-  @Option(names = "--out", required = true, paramLabel = "FILE.pdf", description = "The PDF file to write; its folder must exist.")
+  @Option(
+      names = "--out",
+      required = true,
+      paramLabel = "FILE.pdf",
+      description = "The PDF file to write; its folder must exist.")
   Path out;
 
   @Option(names = "--force", description = "Replace FILE.pdf if it exists already.")
   boolean force;
 
-  @Option(names = "--db", paramLabel = "FILE", description = "The history database (default: $STAGEWISE_DB, else the data folder).")
+  @Option(
+      names = "--db",
+      paramLabel = "FILE",
+      description = "The history database (default: $STAGEWISE_DB, else the data folder).")
   Path db;
 
   /** Where the report's "generated" time comes from. */
@@ -57,16 +68,29 @@ final class ReportCommand implements Callable<Integer> {
     if (!Files.isRegularFile(database)) {
       // Opening would create an empty history; a report only reads one.
       throw new InvalidInputException(
-          database.toString(), "--db", "no history database here; give the right file with --db or STAGEWISE_DB");
+          database.toString(),
+          "--db",
+          "no history database here; give the right file with --db or STAGEWISE_DB");
     }
     CaseReport report;
     try (HistoryStore store = HistoryStore.open(database)) {
-      report = CaseReport.read(store, store.resolveCaseId(caseId), clock.instant(), HistoryCommand.programVersion());
+      report =
+          CaseReport.read(
+              store, store.resolveCaseId(caseId), clock.instant(), HistoryCommand.programVersion());
     }
     int pages = write(report, target, force);
-    spec.commandLine().getOut().println(
-        "Repair report of case " + HistoryCommand.shortId(report.caseFile().repairCase().id()) + " (unit "
-            + report.unit().serial() + ", " + HistoryCommand.plural(pages, "page") + ") written to " + target + ".");
+    spec.commandLine()
+        .getOut()
+        .println(
+            "Repair report of case "
+                + HistoryCommand.shortId(report.caseFile().repairCase().id())
+                + " (unit "
+                + report.unit().serial()
+                + ", "
+                + HistoryCommand.plural(pages, "page")
+                + ") written to "
+                + target
+                + ".");
     return ExitCode.OK;
   }
 
@@ -78,21 +102,33 @@ final class ReportCommand implements Callable<Integer> {
     Path target = file.toAbsolutePath().normalize();
     Path folder = target.getParent();
     if (folder == null || target.getFileName() == null) {
-      throw new InvalidInputException(SOURCE, "--out", "expected a file name such as report.pdf, got '" + file + "'");
+      throw new InvalidInputException(
+          SOURCE, "--out", "expected a file name such as report.pdf, got '" + file + "'");
     }
     if (!Files.isDirectory(folder)) {
       throw new InvalidInputException(
-          SOURCE, "--out", (Files.exists(folder) ? "'" + folder + "' is not a folder" : "the folder '" + folder + "' does not exist")
-              + "; create it first or choose another place for '" + target.getFileName() + "'");
+          SOURCE,
+          "--out",
+          (Files.exists(folder)
+                  ? "'" + folder + "' is not a folder"
+                  : "the folder '" + folder + "' does not exist")
+              + "; create it first or choose another place for '"
+              + target.getFileName()
+              + "'");
     }
     if (Files.isDirectory(target)) {
-      throw new InvalidInputException(SOURCE, "--out", "'" + target + "' is a folder; give a file name such as report.pdf");
+      throw new InvalidInputException(
+          SOURCE, "--out", "'" + target + "' is a folder; give a file name such as report.pdf");
     }
     if (Files.exists(target) && !force) {
-      throw new InvalidInputException(SOURCE, "--out", "'" + target + "' exists already; give --force to replace it, or choose another name");
+      throw new InvalidInputException(
+          SOURCE,
+          "--out",
+          "'" + target + "' exists already; give --force to replace it, or choose another name");
     }
     if (!Files.isWritable(folder)) {
-      throw new InvalidInputException(SOURCE, "--out", "cannot write in the folder '" + folder + "'");
+      throw new InvalidInputException(
+          SOURCE, "--out", "cannot write in the folder '" + folder + "'");
     }
     return target;
   }
@@ -103,7 +139,10 @@ final class ReportCommand implements Callable<Integer> {
     try {
       temporary = Files.createTempFile(target.getParent(), ".stagewise-report-", ".tmp");
     } catch (IOException e) {
-      throw new InvalidInputException(SOURCE, "--out", "cannot write in the folder '" + target.getParent() + "': " + e.getMessage());
+      throw new InvalidInputException(
+          SOURCE,
+          "--out",
+          "cannot write in the folder '" + target.getParent() + "': " + e.getMessage());
     }
     try {
       int pages;
@@ -126,15 +165,20 @@ final class ReportCommand implements Callable<Integer> {
   private static void moveIntoPlace(Path temporary, Path target, boolean force) throws IOException {
     if (!force) {
       try {
-        // Without REPLACE_EXISTING the move fails rather than overwrite a file that appeared meanwhile.
+        // Without REPLACE_EXISTING the move fails rather than overwrite a file that appeared
+        // meanwhile.
         Files.move(temporary, target);
       } catch (FileAlreadyExistsException e) {
-        throw new InvalidInputException(SOURCE, "--out", "'" + target + "' exists already; give --force to replace it, or choose another name");
+        throw new InvalidInputException(
+            SOURCE,
+            "--out",
+            "'" + target + "' exists already; give --force to replace it, or choose another name");
       }
       return;
     }
     try {
-      Files.move(temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+      Files.move(
+          temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
     } catch (AtomicMoveNotSupportedException e) {
       Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING);
     }

@@ -22,7 +22,10 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** {@code stagewise solve --stage FILE [--json]}: what every net and pin of a healthy stage should read. */
+/**
+ * {@code stagewise solve --stage FILE [--json]}: what every net and pin of a healthy stage should
+ * read.
+ */
 @Command(
     name = "solve",
     mixinStandardHelpOptions = true,
@@ -33,10 +36,16 @@ import picocli.CommandLine.Option;
 final class SolveCommand implements Callable<Integer> {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--stage", required = true, paramLabel = "FILE", description = "the stage sheet (*.stage.json)")
+  @Option(
+      names = "--stage",
+      required = true,
+      paramLabel = "FILE",
+      description = "the stage sheet (*.stage.json)")
   Path stageFile;
 
-  @Option(names = "--json", description = "print the solution document (format stagewise-solution) instead of a table")
+  @Option(
+      names = "--json",
+      description = "print the solution document (format stagewise-solution) instead of a table")
   boolean json;
 
   @Override
@@ -46,12 +55,19 @@ final class SolveCommand implements Callable<Integer> {
     String source = stageFile.toString();
     if (result instanceof SolveResult.Floating floating) {
       throw new InvalidInputException(
-          source, "nets", "no DC path sets the voltage of " + String.join(", ", floating.nets())
+          source,
+          "nets",
+          "no DC path sets the voltage of "
+              + String.join(", ", floating.nets())
               + " (expected a resistor or an output to tie it to ground, a rail or an input)");
     }
     if (result instanceof SolveResult.NoConsistentState none) {
       throw new InvalidInputException(
-          source, "amplifiers", (none.section().isEmpty() ? "" : none.section() + ": ") + "no consistent state: " + none.reason());
+          source,
+          "amplifiers",
+          (none.section().isEmpty() ? "" : none.section() + ": ")
+              + "no consistent state: "
+              + none.reason());
     }
     SolveResult.Solved solved = (SolveResult.Solved) result;
     Optional<AcSolution> ac = StageSolver.ac(stage, solved.primary());
@@ -69,12 +85,17 @@ final class SolveCommand implements Callable<Integer> {
   static String table(Stage stage, SolveResult.Solved solved, Optional<AcSolution> ac) {
     StringBuilder text = new StringBuilder();
     String heading = stage.title().isEmpty() ? "Stage" : stage.title();
-    text.append(heading).append(stage.board().isEmpty() ? "" : " (" + stage.board() + ")").append('\n');
+    text.append(heading)
+        .append(stage.board().isEmpty() ? "" : " (" + stage.board() + ")")
+        .append('\n');
     Map<String, List<String>> pinsOfNet = new LinkedHashMap<>();
-    stage.pinNets().forEach((pin, net) -> pinsOfNet.computeIfAbsent(net, n -> new ArrayList<>()).add(pin));
+    stage
+        .pinNets()
+        .forEach((pin, net) -> pinsOfNet.computeIfAbsent(net, n -> new ArrayList<>()).add(pin));
     List<OperatingPoint> points = solved.points();
     if (points.size() > 1) {
-      text.append("This stage has ").append(points.size())
+      text.append("This stage has ")
+          .append(points.size())
           .append(" consistent states (positive feedback): each is a correct reading.\n");
     }
     for (int i = 0; i < points.size(); i++) {
@@ -86,8 +107,15 @@ final class SolveCommand implements Callable<Integer> {
       text.append('\n');
       String format = withAc ? "%-14s %-18s %12s %14s %10s%n" : "%-14s %-18s %12s%n";
       if (withAc) {
-        text.append(String.format(Locale.ROOT, format, "net", "pins", "DC volts",
-            "AC at " + number(ac.get().hz(), 0) + " Hz", "phase"));
+        text.append(
+            String.format(
+                Locale.ROOT,
+                format,
+                "net",
+                "pins",
+                "DC volts",
+                "AC at " + number(ac.get().hz(), 0) + " Hz",
+                "phase"));
       } else {
         text.append(String.format(Locale.ROOT, format, "net", "pins", "DC volts"));
       }
@@ -97,14 +125,20 @@ final class SolveCommand implements Callable<Integer> {
         if (withAc) {
           Phasor phasor = ac.get().nets().get(net.getKey());
           String amplitude = phasor == null ? "" : number(phasor.amplitude(), 4);
-          String phase = phasor == null || phasor.amplitude() == 0 ? "" : number(phasor.phaseDegrees(), 1) + "°";
-          text.append(String.format(Locale.ROOT, format, net.getKey(), pins, volts, amplitude, phase));
+          String phase =
+              phasor == null || phasor.amplitude() == 0
+                  ? ""
+                  : number(phasor.phaseDegrees(), 1) + "°";
+          text.append(
+              String.format(Locale.ROOT, format, net.getKey(), pins, volts, amplitude, phase));
         } else {
           text.append(String.format(Locale.ROOT, format, net.getKey(), pins, volts));
         }
       }
       text.append("\nsections:");
-      point.states().forEach((ref, state) -> text.append(' ').append(ref).append(' ').append(state.word()));
+      point
+          .states()
+          .forEach((ref, state) -> text.append(' ').append(ref).append(' ').append(state.word()));
       text.append('\n');
     }
     return text.toString();

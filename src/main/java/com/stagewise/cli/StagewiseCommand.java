@@ -49,7 +49,8 @@ public final class StagewiseCommand implements Runnable {
     line.setExecutionExceptionHandler(
         (ex, cmd, parseResult) -> {
           if (ex instanceof InvalidInputException || ex instanceof StorageException) {
-            // Both messages are written for the user: the file, the field or the fault, and what to do.
+            // Both messages are written for the user: the file, the field or the fault, and what to
+            // do.
             err.println("stagewise: " + ex.getMessage());
           } else {
             err.println("stagewise: internal error: " + ex);

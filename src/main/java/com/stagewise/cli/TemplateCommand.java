@@ -32,25 +32,44 @@ import picocli.CommandLine.Parameters;
 final class TemplateCommand implements Callable<Integer> {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
-  @Parameters(index = "0", arity = "0..1", paramLabel = "NAME", description = "the template, e.g. inverting")
+  @Parameters(
+      index = "0",
+      arity = "0..1",
+      paramLabel = "NAME",
+      description = "the template, e.g. inverting")
   String name;
 
-  @Option(names = "--set", paramLabel = "NAME=VALUE", description = "a parameter value, e.g. --set r2=47k")
+  @Option(
+      names = "--set",
+      paramLabel = "NAME=VALUE",
+      description = "a parameter value, e.g. --set r2=47k")
   Map<String, String> values = new LinkedHashMap<>();
 
-  @Option(names = "--rename", paramLabel = "OLD=NEW", description = "a designator to rename, e.g. --rename R2=R15 --rename U1=U3")
+  @Option(
+      names = "--rename",
+      paramLabel = "OLD=NEW",
+      description = "a designator to rename, e.g. --rename R2=R15 --rename U1=U3")
   Map<String, String> renames = new LinkedHashMap<>();
 
-  @Option(names = "--net", paramLabel = "OLD=NEW", description = "a net to rename, e.g. --net VCC=+15V")
+  @Option(
+      names = "--net",
+      paramLabel = "OLD=NEW",
+      description = "a net to rename, e.g. --net VCC=+15V")
   Map<String, String> nets = new LinkedHashMap<>();
 
   @Option(names = "--title", paramLabel = "TEXT", description = "the stage's title")
   String title;
 
-  @Option(names = "--board", paramLabel = "TEXT", description = "the board model the stage belongs to")
+  @Option(
+      names = "--board",
+      paramLabel = "TEXT",
+      description = "the board model the stage belongs to")
   String board;
 
-  @Option(names = "--out", paramLabel = "FILE", description = "the stage sheet to write (*.stage.json)")
+  @Option(
+      names = "--out",
+      paramLabel = "FILE",
+      description = "the stage sheet to write (*.stage.json)")
   Path out;
 
   @Override
@@ -73,7 +92,9 @@ final class TemplateCommand implements Callable<Integer> {
     } catch (InvalidInputException e) {
       throw new InvalidInputException("--net", e.field(), withoutField(e));
     }
-    stage = StageEdits.titled(stage, title == null ? stage.title() : title, board == null ? stage.board() : board);
+    stage =
+        StageEdits.titled(
+            stage, title == null ? stage.title() : title, board == null ? stage.board() : board);
     if (out == null) {
       screen.print(StageSheet.write(stage));
     } else {
@@ -86,7 +107,9 @@ final class TemplateCommand implements Callable<Integer> {
 
   private static String withoutField(InvalidInputException e) {
     String prefix = e.field().isEmpty() ? "" : e.field() + ": ";
-    return e.getMessage().startsWith(prefix) ? e.getMessage().substring(prefix.length()) : e.getMessage();
+    return e.getMessage().startsWith(prefix)
+        ? e.getMessage().substring(prefix.length())
+        : e.getMessage();
   }
 
   /** Returns the list of templates with their parameters and defaults. */
@@ -95,8 +118,11 @@ final class TemplateCommand implements Callable<Integer> {
     for (StageTemplate template : Templates.all()) {
       text.append(template.name()).append(": ").append(template.description()).append('\n');
       for (Parameter parameter : template.parameters()) {
-        String value = parameter.defaultValue() + (parameter.unit().isEmpty() ? "" : " " + parameter.unit());
-        text.append(String.format(Locale.ROOT, "    %-8s %-16s %s%n", parameter.name(), value, parameter.meaning()));
+        String value =
+            parameter.defaultValue() + (parameter.unit().isEmpty() ? "" : " " + parameter.unit());
+        text.append(
+            String.format(
+                Locale.ROOT, "    %-8s %-16s %s%n", parameter.name(), value, parameter.meaning()));
       }
       text.append('\n');
     }

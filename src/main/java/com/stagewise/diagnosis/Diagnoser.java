@@ -22,9 +22,9 @@ import java.util.concurrent.ConcurrentHashMap;
  *
  * <p>Built once per stage: the predictions of every hypothesis are computed on first use and kept,
  * so re-ranking after one more reading costs only the likelihoods and the probe choice. When an
- * input net is read and differs from the sheet, the stage is diagnosed with the measured level
- * (the fault may be upstream), which needs predictions of its own; they are kept too. Safe to call
- * from several threads.
+ * input net is read and differs from the sheet, the stage is diagnosed with the measured level (the
+ * fault may be upstream), which needs predictions of its own; they are kept too. Safe to call from
+ * several threads.
  */
 public final class Diagnoser {
   /** Suspects listed when the caller does not ask for a number. */
@@ -55,7 +55,10 @@ public final class Diagnoser {
     this.stage = stage;
     this.catalogue = FaultCatalogue.of(stage);
     Map<String, Double> published = Priors.published(stage, catalogue.faults());
-    this.priors = shopCounts.isEmpty() ? published : Priors.blend(published, shopCounts, Priors.SHOP_STRENGTH);
+    this.priors =
+        shopCounts.isEmpty()
+            ? published
+            : Priors.blend(published, shopCounts, Priors.SHOP_STRENGTH);
     this.shopCounts = Map.copyOf(shopCounts);
     this.points = new TestPoints(stage);
     double max = 1;
@@ -103,7 +106,8 @@ public final class Diagnoser {
    */
   public Diagnosis diagnose(ReadingSet readings, int top) {
     if (top < 1) {
-      throw new InvalidInputException("", "top", "the number of suspects (" + top + ") must be 1 or more");
+      throw new InvalidInputException(
+          "", "top", "the number of suspects (" + top + ") must be 1 or more");
     }
     check(readings);
     List<String> notes = new ArrayList<>();
@@ -118,13 +122,20 @@ public final class Diagnoser {
     Explainer explainer = new Explainer(stage, points, span, shopCounts);
     List<Suspect> suspects = suspects(ranking, bound, top, explainer);
     Verdict verdict = verdict(ranking);
-    List<ProbeAdvice> probes = new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter());
-    String check = verdict == Verdict.HEALTHY ? "" : explainer.confirmingCheck(ranking.first().hypothesis.fault, ranking.first().estimate());
+    List<ProbeAdvice> probes =
+        new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter());
+    String check =
+        verdict == Verdict.HEALTHY
+            ? ""
+            : explainer.confirmingCheck(
+                ranking.first().hypothesis.fault, ranking.first().estimate());
     if (verdict == Verdict.HEALTHY) {
-      List<String> unseen = suspects.get(0).group().stream().filter(f -> !f.equals(Fault.HEALTHY.id())).toList();
+      List<String> unseen =
+          suspects.get(0).group().stream().filter(f -> !f.equals(Fault.HEALTHY.id())).toList();
       if (!unseen.isEmpty()) {
         notes.add(
-            "These readings cannot rule out: " + String.join(", ", unseen.subList(0, Math.min(8, unseen.size())))
+            "These readings cannot rule out: "
+                + String.join(", ", unseen.subList(0, Math.min(8, unseen.size())))
                 + (unseen.size() > 8 ? " and " + (unseen.size() - 8) + " more" : "")
                 + ". The next probe, or the symptom itself, may tell them apart.");
       }
@@ -197,11 +208,12 @@ public final class Diagnoser {
     for (com.stagewise.circuit.Amplifier amp : stage.amplifiers()) {
       com.stagewise.circuit.DeviceClass type = amp.deviceClass();
       double bias = mid(type.biasCurrent());
-      conditions = conditions.withDevice(
-          amp.ref(),
-          com.stagewise.solver.DeviceParams.nominal(type)
-              .withBias(bias, bias)
-              .withHeadroom(mid(type.headroomLow()), mid(type.headroomHigh())));
+      conditions =
+          conditions.withDevice(
+              amp.ref(),
+              com.stagewise.solver.DeviceParams.nominal(type)
+                  .withBias(bias, bias)
+                  .withHeadroom(mid(type.headroomLow()), mid(type.headroomHigh())));
     }
     for (Map.Entry<String, Double> e : inputs.entrySet()) {
       conditions = conditions.withDriven(e.getKey(), e.getValue());
@@ -247,7 +259,16 @@ public final class Diagnoser {
       for (int k = 0; k < raw.get(i).size(); k++) {
         Prediction p = raw.get(i).get(k);
         Prediction donor = raw.get(from).get(Math.min(k, raw.get(from).size() - 1));
-        borrowed.add(new Prediction(p.weight(), p.dcMean(), donor.dcSd(), p.acMean(), donor.acSd(), p.value(), p.label(), p.states()));
+        borrowed.add(
+            new Prediction(
+                p.weight(),
+                p.dcMean(),
+                donor.dcSd(),
+                p.acMean(),
+                donor.acSd(),
+                p.value(),
+                p.label(),
+                p.states()));
       }
       raw.set(i, borrowed);
     }
@@ -337,7 +358,8 @@ public final class Diagnoser {
     return weight;
   }
 
-  private List<Suspect> suspects(Ranking ranking, List<Evidence.Bound> bound, int top, Explainer explainer) {
+  private List<Suspect> suspects(
+      Ranking ranking, List<Evidence.Bound> bound, int top, Explainer explainer) {
     List<Scored> listed = new ArrayList<>();
     double firstProbability = ranking.first().probability;
     for (Scored s : ranking.scored()) {
@@ -420,7 +442,12 @@ public final class Diagnoser {
 
   private void check(ReadingSet readings) {
     boolean hasAc = stage.inputs().stream().anyMatch(TestInput::hasAc);
-    double acHz = stage.inputs().stream().filter(TestInput::hasAc).mapToDouble(TestInput::hz).findFirst().orElse(0);
+    double acHz =
+        stage.inputs().stream()
+            .filter(TestInput::hasAc)
+            .mapToDouble(TestInput::hz)
+            .findFirst()
+            .orElse(0);
     List<Reading> list = readings.readings();
     for (int i = 0; i < list.size(); i++) {
       Reading r = list.get(i);
@@ -441,13 +468,20 @@ public final class Diagnoser {
       }
       if (r.kind() == Reading.Kind.AC && !hasAc) {
         throw new InvalidInputException(
-            "", field + ".ac", "the stage has no AC test input, so an AC reading at " + r.at() + " cannot be judged");
+            "",
+            field + ".ac",
+            "the stage has no AC test input, so an AC reading at " + r.at() + " cannot be judged");
       }
       if (r.kind() == Reading.Kind.AC && Math.abs(r.hz() - acHz) > 1e-6 * acHz) {
         throw new InvalidInputException(
             "",
             field + ".hz",
-            String.format(java.util.Locale.ROOT, "the AC reading at %s is at %s Hz but the stage's test input is at %s Hz", r.at(), r.hz(), acHz));
+            String.format(
+                java.util.Locale.ROOT,
+                "the AC reading at %s is at %s Hz but the stage's test input is at %s Hz",
+                r.at(),
+                r.hz(),
+                acHz));
       }
     }
   }
@@ -463,10 +497,20 @@ public final class Diagnoser {
         if (pin < 1 || pin > type.pinCount()) {
           return at + ": a " + type.word() + " package has pins 1 to " + type.pinCount();
         }
-        return at + ": pin " + pin + " of " + pkg + " is not used by this stage (read a used pin or a net)";
+        return at
+            + ": pin "
+            + pin
+            + " of "
+            + pkg
+            + " is not used by this stage (read a used pin or a net)";
       }
     }
-    return "\"" + at + "\" is not a net or a used package pin of this stage (nets: "
-        + String.join(", ", stage.nets()) + "; pins like " + stage.pinNets().keySet().stream().findFirst().orElse("U1.1") + ")";
+    return "\""
+        + at
+        + "\" is not a net or a used package pin of this stage (nets: "
+        + String.join(", ", stage.nets())
+        + "; pins like "
+        + stage.pinNets().keySet().stream().findFirst().orElse("U1.1")
+        + ")";
   }
 }

@@ -45,7 +45,8 @@ final class Evidence {
   static Bound bind(TestPoints points, ReadingSet set, Reading reading) {
     int point = points.index.get(reading.at());
     double u = set.uncertainty(reading);
-    return new Bound(point, reading.kind() == Reading.Kind.AC, reading.value(), u * u / 3, reading.at());
+    return new Bound(
+        point, reading.kind() == Reading.Kind.AC, reading.value(), u * u / 3, reading.at());
   }
 
   /** Returns the variance of the prediction's error at a reading: spread, instrument and floor. */

@@ -30,7 +30,8 @@ final class Explainer {
   }
 
   /** Returns what the readings show, judged against the healthy stage's prediction. */
-  List<Observation> observations(Diagnoser.Hypothesis healthy, List<Evidence.Bound> readings, ReadingSet set) {
+  List<Observation> observations(
+      Diagnoser.Hypothesis healthy, List<Evidence.Bound> readings, ReadingSet set) {
     Prediction expected = healthy.predictions.get(0);
     List<Observation> out = new ArrayList<>();
     for (Evidence.Bound r : readings) {
@@ -38,20 +39,39 @@ final class Explainer {
       if (r.ac()) {
         double mean = Evidence.mean(expected, r);
         if (mean > 0.01 && r.value() < 0.1 * mean) {
-          out.add(new Observation(r.at(), String.format(Locale.ROOT, "no AC signal where %s is expected", volts(mean))));
+          out.add(
+              new Observation(
+                  r.at(),
+                  String.format(Locale.ROOT, "no AC signal where %s is expected", volts(mean))));
         } else if (Evidence.score(expected, r) > 4) {
-          out.add(new Observation(r.at(), String.format(Locale.ROOT, "AC amplitude %s where %s is expected", volts(r.value()), volts(mean))));
+          out.add(
+              new Observation(
+                  r.at(),
+                  String.format(
+                      Locale.ROOT,
+                      "AC amplitude %s where %s is expected",
+                      volts(r.value()),
+                      volts(mean))));
         }
         continue;
       }
       Optional<Rail> rail = stage.rail(net);
-      Optional<Amplifier> output = stage.amplifiers().stream().filter(a -> a.out().equals(net)).findFirst();
+      Optional<Amplifier> output =
+          stage.amplifiers().stream().filter(a -> a.out().equals(net)).findFirst();
       if (rail.isPresent()) {
         railObservation(rail.get(), r).ifPresent(out::add);
-      } else if (output.isPresent() && !points.isPin(r.point()) || output.isPresent() && isOutputPin(output.get(), r.at())) {
+      } else if (output.isPresent() && !points.isPin(r.point())
+          || output.isPresent() && isOutputPin(output.get(), r.at())) {
         outputObservation(output.get(), r, expected).ifPresent(out::add);
       } else if (Evidence.score(expected, r) > 4) {
-        out.add(new Observation(r.at(), String.format(Locale.ROOT, "reads %s where %s is expected", volts(r.value()), volts(Evidence.mean(expected, r)))));
+        out.add(
+            new Observation(
+                r.at(),
+                String.format(
+                    Locale.ROOT,
+                    "reads %s where %s is expected",
+                    volts(r.value()),
+                    volts(Evidence.mean(expected, r)))));
       }
     }
     inputPairs(readings, expected).forEach(out::add);
@@ -65,27 +85,45 @@ final class Explainer {
   private Optional<Observation> railObservation(Rail rail, Evidence.Bound r) {
     double nominal = rail.volts();
     if (Math.abs(r.value()) < 0.1 * Math.abs(nominal)) {
-      return Optional.of(new Observation(r.at(), String.format(Locale.ROOT, "rail %s at %s: missing", rail.net(), volts(r.value()))));
+      return Optional.of(
+          new Observation(
+              r.at(),
+              String.format(Locale.ROOT, "rail %s at %s: missing", rail.net(), volts(r.value()))));
     }
     double allowed = Math.abs(nominal) * rail.tolerance() + Math.sqrt(3 * r.variance());
     if (Math.abs(r.value() - nominal) > allowed) {
       String how = Math.abs(r.value()) < Math.abs(nominal) ? "low" : "high";
       return Optional.of(
-          new Observation(r.at(), String.format(Locale.ROOT, "rail %s %s: %s where %s is expected", rail.net(), how, volts(r.value()), volts(nominal))));
+          new Observation(
+              r.at(),
+              String.format(
+                  Locale.ROOT,
+                  "rail %s %s: %s where %s is expected",
+                  rail.net(),
+                  how,
+                  volts(r.value()),
+                  volts(nominal))));
     }
     return Optional.empty();
   }
 
-  private Optional<Observation> outputObservation(Amplifier amp, Evidence.Bound r, Prediction expected) {
+  private Optional<Observation> outputObservation(
+      Amplifier amp, Evidence.Bound r, Prediction expected) {
     double vPlus = stage.drivenVolts().getOrDefault(amp.vPlus(), Double.NaN);
     double vMinus = stage.drivenVolts().getOrDefault(amp.vMinus(), Double.NaN);
     double v = r.value();
     var type = amp.deviceClass();
-    if (!Double.isNaN(vPlus) && Math.abs(v - vPlus) < 0.5 * type.headroomHigh().low() + 0.01 && vPlus != 0) {
-      return Optional.of(new Observation(r.at(), "output reads the v+ rail itself: shorted or bridged to it"));
+    if (!Double.isNaN(vPlus)
+        && Math.abs(v - vPlus) < 0.5 * type.headroomHigh().low() + 0.01
+        && vPlus != 0) {
+      return Optional.of(
+          new Observation(r.at(), "output reads the v+ rail itself: shorted or bridged to it"));
     }
-    if (!Double.isNaN(vMinus) && Math.abs(v - vMinus) < 0.5 * type.headroomLow().low() + 0.01 && vMinus != 0) {
-      return Optional.of(new Observation(r.at(), "output reads the v- rail itself: shorted or bridged to it"));
+    if (!Double.isNaN(vMinus)
+        && Math.abs(v - vMinus) < 0.5 * type.headroomLow().low() + 0.01
+        && vMinus != 0) {
+      return Optional.of(
+          new Observation(r.at(), "output reads the v- rail itself: shorted or bridged to it"));
     }
     if (!Double.isNaN(vPlus) && v >= vPlus - type.headroomHigh().high() - 0.05 && v < vPlus) {
       return Optional.of(new Observation(r.at(), "output at the upper limit: saturated"));
@@ -95,7 +133,13 @@ final class Explainer {
     }
     if (Evidence.score(expected, r) > 4) {
       return Optional.of(
-          new Observation(r.at(), String.format(Locale.ROOT, "output reads %s where %s is expected", volts(v), volts(Evidence.mean(expected, r)))));
+          new Observation(
+              r.at(),
+              String.format(
+                  Locale.ROOT,
+                  "output reads %s where %s is expected",
+                  volts(v),
+                  volts(Evidence.mean(expected, r)))));
     }
     return Optional.empty();
   }
@@ -108,13 +152,28 @@ final class Explainer {
       if (plus == null || minus == null) {
         continue;
       }
-      double expectedGap = Math.abs(expected.dcMean()[plus.point()] - expected.dcMean()[minus.point()]);
+      double expectedGap =
+          Math.abs(expected.dcMean()[plus.point()] - expected.dcMean()[minus.point()]);
       double gap = Math.abs(plus.value() - minus.value());
       String where = amp.ref() + " inputs";
       if (expectedGap < 0.01 && gap > 0.05) {
-        out.add(new Observation(where, String.format(Locale.ROOT, "inputs of %s differ by %s: feedback lost", amp.ref(), volts(gap))));
+        out.add(
+            new Observation(
+                where,
+                String.format(
+                    Locale.ROOT,
+                    "inputs of %s differ by %s: feedback lost",
+                    amp.ref(),
+                    volts(gap))));
       } else if (expectedGap < 0.01 && gap <= 0.01) {
-        out.add(new Observation(where, String.format(Locale.ROOT, "inputs of %s within %s of each other: feedback holds", amp.ref(), volts(Math.max(gap, 1e-3)))));
+        out.add(
+            new Observation(
+                where,
+                String.format(
+                    Locale.ROOT,
+                    "inputs of %s within %s of each other: feedback holds",
+                    amp.ref(),
+                    volts(Math.max(gap, 1e-3)))));
       }
     }
     return out;
@@ -122,7 +181,9 @@ final class Explainer {
 
   private Evidence.Bound find(List<Evidence.Bound> readings, Amplifier amp, Terminal terminal) {
     for (Evidence.Bound r : readings) {
-      if (!r.ac() && (r.at().equals(amp.pinName(terminal)) || r.at().equals(amp.net(terminal)) && !points.isPin(r.point()))) {
+      if (!r.ac()
+          && (r.at().equals(amp.pinName(terminal))
+              || r.at().equals(amp.net(terminal)) && !points.isPin(r.point()))) {
         return r;
       }
     }
@@ -139,7 +200,15 @@ final class Explainer {
     List<String> explains = new ArrayList<>();
     List<String> misses = new ArrayList<>();
     for (Evidence.Bound r : readings) {
-      String item = String.format(Locale.ROOT, "%s %s at %s (this fault gives %s)", r.ac() ? "AC" : "", volts(r.value()), r.at(), volts(Evidence.mean(best, r))).trim();
+      String item =
+          String.format(
+                  Locale.ROOT,
+                  "%s %s at %s (this fault gives %s)",
+                  r.ac() ? "AC" : "",
+                  volts(r.value()),
+                  r.at(),
+                  volts(Evidence.mean(best, r)))
+              .trim();
       (Evidence.score(best, r) <= 3 ? explains : misses).add(item);
     }
     if (!explains.isEmpty()) {
@@ -150,7 +219,10 @@ final class Explainer {
     }
     Integer seen = shopCounts.get(fault.id());
     if (seen != null && seen > 0) {
-      text.append(" Seen ").append(seen).append(seen == 1 ? " time" : " times").append(" on this board model.");
+      text.append(" Seen ")
+          .append(seen)
+          .append(seen == 1 ? " time" : " times")
+          .append(" on this board model.");
     }
     return text.toString();
   }
@@ -174,18 +246,31 @@ final class Explainer {
       case HIGH, LOW -> {
         String way = fault.kind() == FaultKind.HIGH ? "high" : "low";
         yield estimate.isPresent()
-            ? s + " drifted " + way + ": reads as about " + value(s, estimate.getAsDouble()) + ", marked " + marked(s)
+            ? s
+                + " drifted "
+                + way
+                + ": reads as about "
+                + value(s, estimate.getAsDouble())
+                + ", marked "
+                + marked(s)
             : s + " drifted " + way + " (marked " + marked(s) + ")";
       }
       case STUCK_HIGH -> s + " output stuck at its upper limit";
       case STUCK_LOW -> s + " output stuck at its lower limit";
       case DEAD -> s + " output dead: it no longer drives";
-      case LIFTED -> "open joint at pin " + fault.pin() + " of " + s + " (" + pinRole(s, fault.pin()) + ")";
+      case LIFTED ->
+          "open joint at pin " + fault.pin() + " of " + s + " (" + pinRole(s, fault.pin()) + ")";
       case BRIDGE -> bridgeWords(fault);
       case RAIL_MISSING -> "rail " + s + " missing at the stage";
-      case RAIL_LOW -> estimate.isPresent()
-          ? String.format(Locale.ROOT, "rail %s low: about %s where %s is expected", s, volts(estimate.getAsDouble()), volts(stage.rail(s).map(Rail::volts).orElse(0.0)))
-          : "rail " + s + " low";
+      case RAIL_LOW ->
+          estimate.isPresent()
+              ? String.format(
+                  Locale.ROOT,
+                  "rail %s low: about %s where %s is expected",
+                  s,
+                  volts(estimate.getAsDouble()),
+                  volts(stage.rail(s).map(Rail::volts).orElse(0.0)))
+              : "rail " + s + " low";
     };
   }
 
@@ -194,17 +279,40 @@ final class Explainer {
     Map<String, String> pins = stage.pinNets();
     String netA = pins.get(pkg + "." + fault.pin());
     String netB = pins.get(pkg + "." + fault.otherPin());
-    String text = "solder bridge between pins " + fault.pin() + " and " + fault.otherPin() + " of " + pkg
-        + " (" + pinRole(pkg, fault.pin()) + " to " + pinRole(pkg, fault.otherPin()) + ", nets " + netA + " and " + netB + ")";
+    String text =
+        "solder bridge between pins "
+            + fault.pin()
+            + " and "
+            + fault.otherPin()
+            + " of "
+            + pkg
+            + " ("
+            + pinRole(pkg, fault.pin())
+            + " to "
+            + pinRole(pkg, fault.otherPin())
+            + ", nets "
+            + netA
+            + " and "
+            + netB
+            + ")";
     boolean railA = stage.rail(netA).isPresent();
     boolean railB = stage.rail(netB).isPresent();
     if (railA || railB) {
       String rail = railA ? netA : netB;
       String other = railA ? netB : netA;
       boolean stiff = stage.isDriven(other);
-      text += stiff
-          ? "; it shorts rail " + rail + " to " + other + ": expect a blown fuse, a hot regulator or a supply in current limit"
-          : "; it ties " + other + " to rail " + rail + ": a section output there fights the rail and runs hot";
+      text +=
+          stiff
+              ? "; it shorts rail "
+                  + rail
+                  + " to "
+                  + other
+                  + ": expect a blown fuse, a hot regulator or a supply in current limit"
+              : "; it ties "
+                  + other
+                  + " to rail "
+                  + rail
+                  + ": a section output there fights the rail and runs hot";
     }
     return text;
   }
@@ -215,7 +323,12 @@ final class Explainer {
       return "pin " + pin;
     }
     return type.role(pin)
-        .map(role -> role.terminal().words() + (role.section().isEmpty() || type.sections().size() == 1 ? "" : " " + role.section()))
+        .map(
+            role ->
+                role.terminal().words()
+                    + (role.section().isEmpty() || type.sections().size() == 1
+                        ? ""
+                        : " " + role.section()))
         .orElse("pin " + pin);
   }
 
@@ -234,25 +347,74 @@ final class Explainer {
     String powerOff = "Power off, unplug the unit and discharge its capacitors; then ";
     return switch (fault.kind()) {
       case HEALTHY -> "";
-      case OPEN -> partKind(s) == PartKind.RESISTOR
-          ? powerOff + "lift one leg of " + s + " and read its ohms: expect " + marked(s) + "; an open part reads OL."
-          : powerOff + "lift one leg of " + s + " and check it with a capacitance meter: expect " + marked(s) + "; an open part reads near zero.";
-      case SHORT -> powerOff + "lift one leg of " + s + " and read its ohms: a short reads near 0 Ω"
-          + (partKind(s) == PartKind.CAPACITOR ? "; a good capacitor charges up towards OL." : " where " + marked(s) + " is marked.");
-      case HIGH, LOW -> powerOff + "lift one leg of " + s + " and measure it: marked " + marked(s)
-          + (estimate.isPresent() ? ", this reading suggests about " + value(s, estimate.getAsDouble()) : "") + ".";
+      case OPEN ->
+          partKind(s) == PartKind.RESISTOR
+              ? powerOff
+                  + "lift one leg of "
+                  + s
+                  + " and read its ohms: expect "
+                  + marked(s)
+                  + "; an open part reads OL."
+              : powerOff
+                  + "lift one leg of "
+                  + s
+                  + " and check it with a capacitance meter: expect "
+                  + marked(s)
+                  + "; an open part reads near zero.";
+      case SHORT ->
+          powerOff
+              + "lift one leg of "
+              + s
+              + " and read its ohms: a short reads near 0 Ω"
+              + (partKind(s) == PartKind.CAPACITOR
+                  ? "; a good capacitor charges up towards OL."
+                  : " where " + marked(s) + " is marked.");
+      case HIGH, LOW ->
+          powerOff
+              + "lift one leg of "
+              + s
+              + " and measure it: marked "
+              + marked(s)
+              + (estimate.isPresent()
+                  ? ", this reading suggests about " + value(s, estimate.getAsDouble())
+                  : "")
+              + ".";
       case STUCK_HIGH, STUCK_LOW, DEAD -> {
         Amplifier amp = stage.amplifier(s).orElse(null);
-        String pins = amp == null ? "its supply pins" : amp.pinName(Terminal.V_PLUS) + " and " + amp.pinName(Terminal.V_MINUS);
-        yield "With power on, first read the supply at " + pins + " against ground; if both are right, power off, lift the output pin"
+        String pins =
+            amp == null
+                ? "its supply pins"
+                : amp.pinName(Terminal.V_PLUS) + " and " + amp.pinName(Terminal.V_MINUS);
+        yield "With power on, first read the supply at "
+            + pins
+            + " against ground; if both are right, power off, lift the output pin"
             + (amp == null ? "" : " " + amp.pinName(Terminal.OUT))
             + " and read it again powered: a section that still sits at a limit (or floats) with its output free is faulty. Replace the whole package.";
       }
-      case LIFTED -> powerOff + "inspect pin " + fault.pin() + " of " + s + " under magnification and read ohms from the pin itself to its pad or trace: a good joint reads near 0 Ω. Reflow it.";
-      case BRIDGE -> powerOff + "inspect pins " + fault.pin() + " and " + fault.otherPin() + " of " + s
-          + " under magnification and read ohms between them: a bridge reads near 0 Ω (compare with the nets' resistance on a good unit).";
-      case RAIL_MISSING -> "Read " + s + " at its source (regulator output or supply connector) and follow it to the package pins: fuse, series resistor, connector, trace.";
-      case RAIL_LOW -> "Read " + s + " at its source with the stage connected and with it disconnected: a rail that recovers unloaded points at the load (a shorted part downstream); one that stays low points at the supply.";
+      case LIFTED ->
+          powerOff
+              + "inspect pin "
+              + fault.pin()
+              + " of "
+              + s
+              + " under magnification and read ohms from the pin itself to its pad or trace: a good joint reads near 0 Ω. Reflow it.";
+      case BRIDGE ->
+          powerOff
+              + "inspect pins "
+              + fault.pin()
+              + " and "
+              + fault.otherPin()
+              + " of "
+              + s
+              + " under magnification and read ohms between them: a bridge reads near 0 Ω (compare with the nets' resistance on a good unit).";
+      case RAIL_MISSING ->
+          "Read "
+              + s
+              + " at its source (regulator output or supply connector) and follow it to the package pins: fuse, series resistor, connector, trace.";
+      case RAIL_LOW ->
+          "Read "
+              + s
+              + " at its source with the stage connected and with it disconnected: a rail that recovers unloaded points at the load (a shorted part downstream); one that stays low points at the supply.";
     };
   }
 

@@ -63,7 +63,8 @@ public record Fault(FaultKind kind, String subject, int pin, int otherPin) {
    */
   public static Fault parse(String id, java.util.Set<String> railNets) {
     if (id == null || id.isBlank()) {
-      throw new InvalidInputException("", "fault", "a fault id is required (e.g. R2:open, U1A:dead, healthy)");
+      throw new InvalidInputException(
+          "", "fault", "a fault id is required (e.g. R2:open, U1A:dead, healthy)");
     }
     String text = id.trim();
     if (text.equals("healthy")) {
@@ -71,7 +72,8 @@ public record Fault(FaultKind kind, String subject, int pin, int otherPin) {
     }
     Matcher bridge = BRIDGE.matcher(text);
     if (bridge.matches()) {
-      return bridge(bridge.group(1), Integer.parseInt(bridge.group(2)), Integer.parseInt(bridge.group(3)));
+      return bridge(
+          bridge.group(1), Integer.parseInt(bridge.group(2)), Integer.parseInt(bridge.group(3)));
     }
     Matcher lifted = LIFTED.matcher(text);
     if (lifted.matches()) {
@@ -106,7 +108,9 @@ public record Fault(FaultKind kind, String subject, int pin, int otherPin) {
     throw new InvalidInputException(
         "",
         "fault",
-        "\"" + id + "\" is not a fault id (expected e.g. healthy, R2:open, R2:high, U1A:stuck-high,"
+        "\""
+            + id
+            + "\" is not a fault id (expected e.g. healthy, R2:open, R2:high, U1A:stuck-high,"
             + " U1A:dead, U1.3:lifted, U1.6-7:bridge, VCC:missing, VCC:low)");
   }
 

@@ -31,7 +31,8 @@ public final class FaultCatalogue {
     List<String> notes = new ArrayList<>();
     faults.add(Fault.HEALTHY);
     for (Part part : stage.parts()) {
-      for (FaultKind kind : List.of(FaultKind.OPEN, FaultKind.SHORT, FaultKind.HIGH, FaultKind.LOW)) {
+      for (FaultKind kind :
+          List.of(FaultKind.OPEN, FaultKind.SHORT, FaultKind.HIGH, FaultKind.LOW)) {
         faults.add(Fault.of(part.ref(), kind));
       }
     }
@@ -55,8 +56,15 @@ public final class FaultCatalogue {
         }
         if (netA.equals(netB)) {
           notes.add(
-              "A solder bridge between pins " + pair[0] + " and " + pair[1] + " of " + pkg
-                  + " cannot be seen: both pins sit on net " + netA + ". Look at the joints instead.");
+              "A solder bridge between pins "
+                  + pair[0]
+                  + " and "
+                  + pair[1]
+                  + " of "
+                  + pkg
+                  + " cannot be seen: both pins sit on net "
+                  + netA
+                  + ". Look at the joints instead.");
         } else {
           faults.add(Fault.bridge(pkg, pair[0], pair[1]));
         }

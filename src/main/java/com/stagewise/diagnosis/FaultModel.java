@@ -17,11 +17,11 @@ import java.util.Map;
  * Turns a fault hypothesis into the concrete circuits (scenarios) that it stands for.
  *
  * <p>Opens remove the part, shorts make it 0 Ω, a bridge adds a 0 Ω link between the two pins'
- * nets, a lifted pin moves the section's terminal to a net of its own, a missing rail holds the rail
- * net at 0 V, stuck and dead outputs are forced in the solver. Drifted parts and low rails have an
- * unknown value and are tried on a grid. A net left with no DC path is tied the way it behaves on
- * the bench: an op-amp input drifts to one rail or the other (its bias current charges it), any
- * other net reads near 0 V through the meter's own input resistance.
+ * nets, a lifted pin moves the section's terminal to a net of its own, a missing rail holds the
+ * rail net at 0 V, stuck and dead outputs are forced in the solver. Drifted parts and low rails
+ * have an unknown value and are tried on a grid. A net left with no DC path is tied the way it
+ * behaves on the bench: an op-amp input drifts to one rail or the other (its bias current charges
+ * it), any other net reads near 0 V through the meter's own input resistance.
  */
 final class FaultModel {
   /** Grid points per drifted part or low rail; values between them are interpolated. */
@@ -94,7 +94,8 @@ final class FaultModel {
       case DEAD -> forced(base, conditions, s, SectionState.DEAD);
       case LIFTED -> List.of(lifted(base, conditions, s, fault.pin()));
       case BRIDGE -> bridged(base, conditions, s, fault.pin(), fault.otherPin());
-      case RAIL_MISSING -> List.of(new Scenario(base, conditions.withDriven(s, 0.0), 1, Double.NaN, ""));
+      case RAIL_MISSING ->
+          List.of(new Scenario(base, conditions.withDriven(s, 0.0), 1, Double.NaN, ""));
       case RAIL_LOW -> lowRail(base, conditions, s);
     };
   }
@@ -105,7 +106,8 @@ final class FaultModel {
     return base.withPart(ref, p -> link);
   }
 
-  private static List<Scenario> drifted(Stage base, Conditions conditions, String ref, boolean high) {
+  private static List<Scenario> drifted(
+      Stage base, Conditions conditions, String ref, boolean high) {
     Part part = base.part(ref).orElseThrow();
     List<Scenario> grid = new ArrayList<>();
     for (double factor : driftFactors(part.tolerance(), high)) {
@@ -126,7 +128,8 @@ final class FaultModel {
     return grid;
   }
 
-  private static List<Scenario> forced(Stage base, Conditions conditions, String ref, SectionState state) {
+  private static List<Scenario> forced(
+      Stage base, Conditions conditions, String ref, SectionState state) {
     return List.of(new Scenario(base, conditions.withForced(ref, state), 1, Double.NaN, ""));
   }
 
@@ -143,7 +146,8 @@ final class FaultModel {
     return new Scenario(stage, conditions, 1, Double.NaN, "");
   }
 
-  private static List<Scenario> bridged(Stage base, Conditions conditions, String pkg, int pinA, int pinB) {
+  private static List<Scenario> bridged(
+      Stage base, Conditions conditions, String pkg, int pinA, int pinB) {
     Map<String, String> pins = base.pinNets();
     String netA = pins.get(pkg + "." + pinA);
     String netB = pins.get(pkg + "." + pinB);
@@ -156,9 +160,11 @@ final class FaultModel {
       double a = volts(base, conditions, netA);
       double b = volts(base, conditions, netB);
       Conditions c = conditions;
-      if (netA.equals(base.ground()) || base.rail(netB).isPresent() && base.input(netA).isPresent()) {
+      if (netA.equals(base.ground())
+          || base.rail(netB).isPresent() && base.input(netA).isPresent()) {
         c = c.withDriven(netB, a);
-      } else if (netB.equals(base.ground()) || base.rail(netA).isPresent() && base.input(netB).isPresent()) {
+      } else if (netB.equals(base.ground())
+          || base.rail(netA).isPresent() && base.input(netB).isPresent()) {
         c = c.withDriven(netA, b);
       } else {
         double mid = (a + b) / 2;
@@ -197,8 +203,22 @@ final class FaultModel {
         if (reader == null) {
           next.add(withTie(s, net, s.stage().ground(), METER_OHMS, s.weight(), s.label()));
         } else if (split < 2) {
-          next.add(withTie(s, net, reader.vPlus(), DRIFT_TIE_OHMS, s.weight() / 2, join(s.label(), net + " drifts to v+")));
-          next.add(withTie(s, net, reader.vMinus(), DRIFT_TIE_OHMS, s.weight() / 2, join(s.label(), net + " drifts to v-")));
+          next.add(
+              withTie(
+                  s,
+                  net,
+                  reader.vPlus(),
+                  DRIFT_TIE_OHMS,
+                  s.weight() / 2,
+                  join(s.label(), net + " drifts to v+")));
+          next.add(
+              withTie(
+                  s,
+                  net,
+                  reader.vMinus(),
+                  DRIFT_TIE_OHMS,
+                  s.weight() / 2,
+                  join(s.label(), net + " drifts to v-")));
         } else {
           next.add(withTie(s, net, reader.vMinus(), DRIFT_TIE_OHMS, s.weight(), s.label()));
         }
@@ -215,7 +235,14 @@ final class FaultModel {
       if (!still.isEmpty()) {
         Scenario grounded = s;
         for (String net : still) {
-          grounded = withTie(grounded, net, grounded.stage().ground(), METER_OHMS, grounded.weight(), grounded.label());
+          grounded =
+              withTie(
+                  grounded,
+                  net,
+                  grounded.stage().ground(),
+                  METER_OHMS,
+                  grounded.weight(),
+                  grounded.label());
         }
         settled.add(grounded);
       } else {
@@ -248,7 +275,8 @@ final class FaultModel {
     return null;
   }
 
-  private static Scenario withTie(Scenario s, String net, String to, double ohms, double weight, String label) {
+  private static Scenario withTie(
+      Scenario s, String net, String to, double ohms, double weight, String label) {
     if (net.equals(to)) {
       return new Scenario(s.stage(), s.conditions(), weight, s.value(), label);
     }

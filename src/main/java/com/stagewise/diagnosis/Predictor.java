@@ -33,7 +33,8 @@ final class Predictor {
 
   private final TestPoints points;
   private final double span;
-  private final Map<List<Amplifier>, Map<String, String>> pinCache = new java.util.IdentityHashMap<>();
+  private final Map<List<Amplifier>, Map<String, String>> pinCache =
+      new java.util.IdentityHashMap<>();
 
   Predictor(TestPoints points, Stage base) {
     this.points = points;
@@ -68,7 +69,13 @@ final class Predictor {
     List<Outcome> outcomes = new ArrayList<>();
     if (settled.states().size() > 1) {
       for (CompiledStage.State state : settled.states()) {
-        outcomes.add(new Outcome(state, -1, 0, scenario.weight() / settled.states().size(), "settles " + describe(stage, state)));
+        outcomes.add(
+            new Outcome(
+                state,
+                -1,
+                0,
+                scenario.weight() / settled.states().size(),
+                "settles " + describe(stage, state)));
       }
     } else if (withSpread || !scenario.onGrid()) {
       outcomes.addAll(offsetCorners(stage, cs, settled.states().get(0), scenario.weight()));
@@ -126,7 +133,8 @@ final class Predictor {
    * One outcome of a scenario: a settled state, and the section whose offset was set to reach it
    * (-1 when none).
    */
-  private record Outcome(CompiledStage.State state, int section, double offset, double weight, String label) {}
+  private record Outcome(
+      CompiledStage.State state, int section, double offset, double weight, String label) {}
 
   /** A change of one number of a compiled stage by one standard deviation, and its undoing. */
   private static final class Perturbation {
@@ -156,7 +164,8 @@ final class Predictor {
   private int[] pointNets(Stage stage, CompiledStage cs) {
     // Scenarios of one fault share their sections (a drift grid changes only a value), so the pin
     // map is kept per list of sections.
-    Map<String, String> pins = pinCache.computeIfAbsent(stage.amplifiers(), amps -> stage.pinNets());
+    Map<String, String> pins =
+        pinCache.computeIfAbsent(stage.amplifiers(), amps -> stage.pinNets());
     int[] at = new int[points.size];
     for (int i = 0; i < points.size; i++) {
       String name = points.names.get(i);
@@ -166,7 +175,8 @@ final class Predictor {
     return at;
   }
 
-  private List<Outcome> offsetCorners(Stage stage, CompiledStage cs, CompiledStage.State nominal, double weight) {
+  private List<Outcome> offsetCorners(
+      Stage stage, CompiledStage cs, CompiledStage.State nominal, double weight) {
     for (int k = 0; k < cs.sectionCount(); k++) {
       if (cs.isForced(k)) {
         continue;
@@ -198,7 +208,8 @@ final class Predictor {
     return outcome instanceof CompiledStage.Settled s ? s.states().get(0) : null;
   }
 
-  private static CompiledStage.State matching(CompiledStage.Settled settled, CompiledStage.State target) {
+  private static CompiledStage.State matching(
+      CompiledStage.Settled settled, CompiledStage.State target) {
     for (CompiledStage.State state : settled.states()) {
       if (Arrays.equals(state.states(), target.states())) {
         return state;
@@ -216,14 +227,18 @@ final class Predictor {
         int index = p;
         double nominal = cs.partValue(p);
         double moved = nominal * (1 + part.tolerance() * UNIFORM_SD);
-        list.add(new Perturbation(c -> c.setPartValue(index, moved), c -> c.setPartValue(index, nominal), true));
+        list.add(
+            new Perturbation(
+                c -> c.setPartValue(index, moved), c -> c.setPartValue(index, nominal), true));
       }
     }
     for (Rail rail : stage.rails()) {
       int net = cs.net(rail.net());
       double volts = cs.drivenVolts(net);
       double moved = volts * (1 + rail.tolerance() * UNIFORM_SD);
-      list.add(new Perturbation(c -> c.setDrivenVolts(net, moved), c -> c.setDrivenVolts(net, volts), false));
+      list.add(
+          new Perturbation(
+              c -> c.setDrivenVolts(net, moved), c -> c.setDrivenVolts(net, volts), false));
     }
     boolean drifting = drifting(stage);
     for (int k = 0; k < cs.sectionCount(); k++) {
@@ -239,10 +254,17 @@ final class Predictor {
       if (!drifting) {
         // Where a floating input is tied to a rail to stand for its drift, the bias current is
         // already what put it there; moving it again through the tie would count it twice.
-        list.add(device(section, p -> p.withBias(p.biasPlus() + biasStep, p.biasMinus() + biasStep), false));
+        list.add(
+            device(
+                section,
+                p -> p.withBias(p.biasPlus() + biasStep, p.biasMinus() + biasStep),
+                false));
       }
-      list.add(device(section, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
-      list.add(device(section, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
+      list.add(
+          device(section, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
+      list.add(
+          device(
+              section, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
       // Gain is spread over a decade or more; the low end of the class's range is the honest step.
       double lowGain = type.openLoopGain().low();
       list.add(device(section, p -> p.withGain(lowGain), true));
@@ -254,7 +276,8 @@ final class Predictor {
     return stage.parts().stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
   }
 
-  private static Perturbation device(int k, java.util.function.UnaryOperator<DeviceParams> change, boolean movesAc) {
+  private static Perturbation device(
+      int k, java.util.function.UnaryOperator<DeviceParams> change, boolean movesAc) {
     DeviceParams[] saved = new DeviceParams[1];
     return new Perturbation(
         c -> {
@@ -291,7 +314,15 @@ final class Predictor {
     double[] mean = new double[points.size];
     double[] sd = new double[points.size];
     Arrays.fill(sd, span);
-    return new Prediction(scenario.weight(), mean, sd, mean.clone(), sd.clone(), scenario.value(), join(scenario.label(), "no steady state"), Map.of());
+    return new Prediction(
+        scenario.weight(),
+        mean,
+        sd,
+        mean.clone(),
+        sd.clone(),
+        scenario.value(),
+        join(scenario.label(), "no steady state"),
+        Map.of());
   }
 
   private static Map<String, SectionState> states(Stage stage, CompiledStage.State state) {

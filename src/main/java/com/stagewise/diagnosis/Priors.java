@@ -22,7 +22,10 @@ import java.util.Map;
  * observations spread as the published priors, so one case does not dominate.
  */
 public final class Priors {
-  /** Share of the prior on "healthy": the stage is suspect, but often turns out fine (common practice). */
+  /**
+   * Share of the prior on "healthy": the stage is suspect, but often turns out fine (common
+   * practice).
+   */
   static final double HEALTHY_SHARE = 0.2;
 
   /**
@@ -62,19 +65,19 @@ public final class Priors {
   }
 
   /**
-   * Returns the published priors blended with the shop's counts by additive (Dirichlet, or
-   * Laplace) smoothing: {@code p(f) = (strength · q(f) + n(f)) / (strength + N)}, where {@code q}
-   * is the published prior normalised to sum to 1, {@code n(f)} the shop's count for fault {@code
-   * f} and {@code N} the sum of the counts over the published faults. The published priors act as
-   * {@code strength} imaginary cases, so one real case shifts the priors only a little, and many
-   * cases come to dominate.
+   * Returns the published priors blended with the shop's counts by additive (Dirichlet, or Laplace)
+   * smoothing: {@code p(f) = (strength · q(f) + n(f)) / (strength + N)}, where {@code q} is the
+   * published prior normalised to sum to 1, {@code n(f)} the shop's count for fault {@code f} and
+   * {@code N} the sum of the counts over the published faults. The published priors act as {@code
+   * strength} imaginary cases, so one real case shifts the priors only a little, and many cases
+   * come to dominate.
    *
    * <p>The result has exactly the keys of {@code publishedPriors} and sums to 1. Counts for faults
    * that are not among the published priors are ignored (the diagnosis cannot rank a fault it does
    * not know). Priors that are all zero are taken as uniform.
    *
-   * @param publishedPriors relative prior weights per fault id (not negative, finite; they need
-   *     not sum to 1)
+   * @param publishedPriors relative prior weights per fault id (not negative, finite; they need not
+   *     sum to 1)
    * @param counts confirmed cases per fault id (not negative)
    * @param strength the weight of the published priors in cases (positive, finite)
    * @throws IllegalArgumentException for an empty prior map, a negative or non-finite weight, a
@@ -129,7 +132,9 @@ public final class Priors {
       case HEALTHY -> 0;
       case OPEN, SHORT, HIGH, LOW -> {
         boolean resistor = stage.part(s).map(p -> p.kind() == PartKind.RESISTOR).orElse(true);
-        yield resistor ? RESISTOR_RATE * resistorShare(fault.kind()) : CAPACITOR_RATE * capacitorShare(fault.kind());
+        yield resistor
+            ? RESISTOR_RATE * resistorShare(fault.kind())
+            : CAPACITOR_RATE * capacitorShare(fault.kind());
       }
       // Improper output 77 % is split evenly between the two limits; no output 23 %.
       case STUCK_HIGH, STUCK_LOW -> SECTION_RATE * 0.385;

@@ -24,7 +24,10 @@ import java.util.Set;
  * three-point Gauss–Hermite quadrature about each scenario's mean.
  */
 final class ProbePlanner {
-  /** Hypotheses considered: enough to hold this share of the probability, at most {@link #MAX_HYPOTHESES}. */
+  /**
+   * Hypotheses considered: enough to hold this share of the probability, at most {@link
+   * #MAX_HYPOTHESES}.
+   */
   private static final double MASS = 0.999;
 
   private static final int MAX_HYPOTHESES = 24;
@@ -75,7 +78,9 @@ final class ProbePlanner {
         kept += s.scenarioWeights[order[k]];
       }
       for (int k = 0; k < count; k++) {
-        components.add(new Component(h, s.scenarioWeights[order[k]] / kept, s.hypothesis.predictions.get(order[k])));
+        components.add(
+            new Component(
+                h, s.scenarioWeights[order[k]] / kept, s.hypothesis.predictions.get(order[k])));
       }
     }
     double entropy = entropy(prior);
@@ -85,7 +90,12 @@ final class ProbePlanner {
     }
     List<ProbeAdvice> advice = new ArrayList<>();
     boolean ac = stage.inputs().stream().anyMatch(TestInput::hasAc);
-    double hz = stage.inputs().stream().filter(TestInput::hasAc).mapToDouble(TestInput::hz).findFirst().orElse(0);
+    double hz =
+        stage.inputs().stream()
+            .filter(TestInput::hasAc)
+            .mapToDouble(TestInput::hz)
+            .findFirst()
+            .orElse(0);
     for (int i = 0; i < points.size; i++) {
       String name = points.names.get(i);
       if (name.equals(stage.ground())) {
@@ -122,15 +132,25 @@ final class ProbePlanner {
     return false;
   }
 
-  private double gain(int point, boolean ac, double[] prior, List<Component> components, double entropy, MeterSpec meter) {
+  private double gain(
+      int point,
+      boolean ac,
+      double[] prior,
+      List<Component> components,
+      double entropy,
+      MeterSpec meter) {
     int n = components.size();
     double[] mean = new double[n];
     double[] variance = new double[n];
     for (int c = 0; c < n; c++) {
       Prediction p = components.get(c).prediction;
       mean[c] = ac ? (p.acMean() == null ? 0 : p.acMean()[point]) : p.dcMean()[point];
-      double u = ac ? ReadingSet.SCOPE_PERCENT / 100 * Math.abs(mean[c]) + ReadingSet.SCOPE_FLOOR_VOLTS : meter.uncertainty(mean[c]);
-      Evidence.Bound probe = new Evidence.Bound(point, ac, mean[c], u * u / 3, points.names.get(point));
+      double u =
+          ac
+              ? ReadingSet.SCOPE_PERCENT / 100 * Math.abs(mean[c]) + ReadingSet.SCOPE_FLOOR_VOLTS
+              : meter.uncertainty(mean[c]);
+      Evidence.Bound probe =
+          new Evidence.Bound(point, ac, mean[c], u * u / 3, points.names.get(point));
       variance[c] = Evidence.variance(p, probe);
     }
     double expected = 0;
@@ -180,11 +200,14 @@ final class ProbePlanner {
       if (parts.size() >= 3) {
         break;
       }
-      double v = ac ? (s.best.acMean() == null ? 0 : s.best.acMean()[point]) : s.best.dcMean()[point];
+      double v =
+          ac ? (s.best.acMean() == null ? 0 : s.best.acMean()[point]) : s.best.dcMean()[point];
       boolean distinct = seen.stream().noneMatch(x -> Math.abs(x - v) < 0.02 + 0.01 * Math.abs(v));
       if (distinct) {
         seen.add(v);
-        parts.add(String.format(Locale.ROOT, "%s puts it at %s", s.hypothesis.fault.id(), Units.volts(v)));
+        parts.add(
+            String.format(
+                Locale.ROOT, "%s puts it at %s", s.hypothesis.fault.id(), Units.volts(v)));
       }
     }
     if (parts.size() < 2) {

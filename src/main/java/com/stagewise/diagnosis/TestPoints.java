@@ -13,8 +13,10 @@ import java.util.Map;
 final class TestPoints {
   final List<String> names = new ArrayList<>();
   final Map<String, Integer> index = new HashMap<>();
+
   /** For each test point, the net it sits on in the healthy stage. */
   final List<String> netOf = new ArrayList<>();
+
   final int size;
 
   TestPoints(Stage stage) {

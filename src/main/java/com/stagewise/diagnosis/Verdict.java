@@ -11,7 +11,9 @@ public enum Verdict {
   /** The readings do not yet decide; take the next probe. */
   INCONCLUSIVE;
 
-  /** Returns the word used in diagnosis files: {@code healthy}, {@code fault}, {@code inconclusive}. */
+  /**
+   * Returns the word used in diagnosis files: {@code healthy}, {@code fault}, {@code inconclusive}.
+   */
   public String word() {
     return name().toLowerCase(Locale.ROOT);
   }

@@ -98,7 +98,9 @@ final class Checks {
   static <T> List<T> list(String source, String field, List<T> values) {
     if (values.size() > MAX_LIST) {
       throw new InvalidInputException(
-          source, field, "has " + values.size() + " entries; at most " + MAX_LIST + " are accepted");
+          source,
+          field,
+          "has " + values.size() + " entries; at most " + MAX_LIST + " are accepted");
     }
     return values;
   }

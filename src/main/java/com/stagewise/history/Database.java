@@ -18,16 +18,18 @@ import org.sqlite.SQLiteException;
  * One connection to the history file, with the settings every use needs and the transactions.
  *
  * <p>Settings: write-ahead log (readers never wait for the writer), foreign keys on, a busy timeout
- * so that a second program writing the same file waits instead of failing, and {@code synchronous
- * = FULL} so that a transaction reported committed survives a power cut (with {@code NORMAL} the
- * last transactions before the cut may roll back). Writes take the write lock at their start
- * ({@code BEGIN IMMEDIATE}): a transaction that reads first and upgrades later could fail with
- * "database is locked" without waiting.
+ * so that a second program writing the same file waits instead of failing, and {@code synchronous =
+ * FULL} so that a transaction reported committed survives a power cut (with {@code NORMAL} the last
+ * transactions before the cut may roll back). Writes take the write lock at their start ({@code
+ * BEGIN IMMEDIATE}): a transaction that reads first and upgrades later could fail with "database is
+ * locked" without waiting.
  *
  * <p>Not thread-safe by itself; {@link HistoryStore} serialises its use.
  */
 final class Database implements AutoCloseable {
-  /** Marks our files in the SQLite header ("SWH1"), so that another program's database is refused. */
+  /**
+   * Marks our files in the SQLite header ("SWH1"), so that another program's database is refused.
+   */
   static final int APPLICATION_ID = 0x53574831;
 
   /** How long a statement waits for another program's write lock before it reports busy. */
@@ -86,7 +88,8 @@ final class Database implements AutoCloseable {
         rs.next();
       }
       // A page cache of 64 MiB (default 2 MiB): an import of thousands of cases touches index pages
-      // all over the file (ids are random), and a small cache spills them to the log mid-transaction.
+      // all over the file (ids are random), and a small cache spills them to the log
+      // mid-transaction.
       database.execute("PRAGMA cache_size = -" + CACHE_KIB);
       return database;
     } catch (SQLException | RuntimeException e) {
@@ -123,7 +126,8 @@ final class Database implements AutoCloseable {
     try (InputStream in = Files.newInputStream(file)) {
       read = in.readNBytes(head, 0, head.length);
     } catch (IOException e) {
-      throw new StorageException("Cannot read the history database " + file + ": " + e.getMessage(), e);
+      throw new StorageException(
+          "Cannot read the history database " + file + ": " + e.getMessage(), e);
     }
     // An empty file is what SQLite itself makes for a new database; anything else must be one.
     if (read > 0 && (read < head.length || !Arrays.equals(head, SQLITE_MAGIC))) {
@@ -142,7 +146,9 @@ final class Database implements AutoCloseable {
     }
   }
 
-  /** Returns whether a new file can be made in {@code folder} (tries it, since root ignores modes). */
+  /**
+   * Returns whether a new file can be made in {@code folder} (tries it, since root ignores modes).
+   */
   private static boolean canCreateIn(Path folder) {
     if (!Files.isWritable(folder)) {
       return false;
@@ -206,7 +212,9 @@ final class Database implements AutoCloseable {
     }
   }
 
-  /** Runs {@code work} in one read transaction, so that it sees one consistent state of the file. */
+  /**
+   * Runs {@code work} in one read transaction, so that it sees one consistent state of the file.
+   */
   <T> T read(String what, Work<T> work) {
     if (inTransaction) {
       throw new IllegalStateException("nested transaction");
@@ -294,7 +302,9 @@ final class Database implements AutoCloseable {
     return false;
   }
 
-  /** Returns a storage exception whose message says in plain words what went wrong with the file. */
+  /**
+   * Returns a storage exception whose message says in plain words what went wrong with the file.
+   */
   static StorageException translate(Path file, Exception e, String what) {
     if (e instanceof StorageException se) {
       return se;
@@ -320,7 +330,8 @@ final class Database implements AutoCloseable {
     } else {
       problem = plain(e);
     }
-    return new StorageException("History database " + file + ": cannot " + what + ": " + problem, e);
+    return new StorageException(
+        "History database " + file + ": cannot " + what + ": " + problem, e);
   }
 
   private static String plain(Exception e) {

@@ -33,7 +33,9 @@ final class Exporter {
       units = "id IN (SELECT unit_id FROM repair_case c WHERE " + cases + ")";
       models =
           "id IN (SELECT board_model_id FROM unit WHERE id IN"
-              + " (SELECT unit_id FROM repair_case c WHERE " + cases + "))";
+              + " (SELECT unit_id FROM repair_case c WHERE "
+              + cases
+              + "))";
       p = new Object[] {range.from(), range.before()};
     } else {
       cases = "1 = 1";
@@ -43,10 +45,13 @@ final class Exporter {
     }
     String caseIds = "case_id IN (SELECT c.id FROM repair_case c WHERE " + cases + ")";
     try (Rows rows = new Rows(connection)) {
-      var boardModels = rows.query(Rows.BOARD_MODEL + " WHERE " + models + " ORDER BY name", Rows::boardModel, p);
-      if (boardModels.isEmpty() && !(selection instanceof ExportSelection.All)
+      var boardModels =
+          rows.query(Rows.BOARD_MODEL + " WHERE " + models + " ORDER BY name", Rows::boardModel, p);
+      if (boardModels.isEmpty()
+          && !(selection instanceof ExportSelection.All)
           && !(selection instanceof ExportSelection.OpenedBetween)) {
-        throw new InvalidInputException("history", "export", "nothing to export: no such unit or board model");
+        throw new InvalidInputException(
+            "history", "export", "nothing to export: no such unit or board model");
       }
       return new HistoryBundle(
           HistoryBundle.CURRENT_VERSION,
@@ -54,16 +59,24 @@ final class Exporter {
           programVersion,
           boardModels,
           rows.query(
-              Rows.STAGE_SHEET + " WHERE board_model_id IN (SELECT id FROM board_model WHERE " + models
+              Rows.STAGE_SHEET
+                  + " WHERE board_model_id IN (SELECT id FROM board_model WHERE "
+                  + models
                   + ") ORDER BY updated_at, id",
               Rows::stageSheet,
               p),
           rows.query(Rows.UNIT + " WHERE " + units + " ORDER BY serial, id", Rows::unit, p),
-          rows.query(Rows.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.row", Rows::repairCase, p),
-          rows.query(Rows.READING + " WHERE " + caseIds + " ORDER BY case_id, taken_at, rowid", Rows::reading, p),
+          rows.query(
+              Rows.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.row", Rows::repairCase, p),
+          rows.query(
+              Rows.READING + " WHERE " + caseIds + " ORDER BY case_id, taken_at, rowid",
+              Rows::reading,
+              p),
           rows.suspectLists("WHERE " + caseIds + " ORDER BY case_id, computed_at, rowid", p),
-          rows.query(Rows.ACTION + " WHERE " + caseIds + " ORDER BY case_id, at, rowid", Rows::action, p),
-          rows.query(Rows.NOTE + " WHERE " + caseIds + " ORDER BY case_id, at, row", Rows::note, p));
+          rows.query(
+              Rows.ACTION + " WHERE " + caseIds + " ORDER BY case_id, at, rowid", Rows::action, p),
+          rows.query(
+              Rows.NOTE + " WHERE " + caseIds + " ORDER BY case_id, at, row", Rows::note, p));
     }
   }
 }

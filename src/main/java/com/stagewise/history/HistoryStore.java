@@ -28,8 +28,8 @@ import java.util.UUID;
 import org.sqlite.SQLiteConnection;
 
 /**
- * The shop's repair history in one SQLite file: board models, units, cases and everything
- * measured, suspected, done and noted in them.
+ * The shop's repair history in one SQLite file: board models, units, cases and everything measured,
+ * suspected, done and noted in them.
  *
  * <p>Every write is one transaction (all of it or nothing). The file may be used by several
  * programs at once: a writer waits for another's write lock (up to a timeout, then retries) instead
@@ -49,11 +49,11 @@ public final class HistoryStore implements AutoCloseable {
   }
 
   /**
-   * Opens the history file at {@code file}, creating it (and its folder) if missing, and brings
-   * its schema up to date.
+   * Opens the history file at {@code file}, creating it (and its folder) if missing, and brings its
+   * schema up to date.
    *
-   * @throws StorageException if the file is not a history database, is damaged, was made by a
-   *     newer program, or cannot be written; the file is then left as it was
+   * @throws StorageException if the file is not a history database, is damaged, was made by a newer
+   *     program, or cannot be written; the file is then left as it was
    */
   public static HistoryStore open(Path file) {
     return open(file, Clock.systemUTC());
@@ -109,7 +109,10 @@ public final class HistoryStore implements AutoCloseable {
         c -> {
           try (Rows rows = new Rows(c)) {
             Optional<BoardModel> existing =
-                rows.first(Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE", Rows::boardModel, name.strip());
+                rows.first(
+                    Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE",
+                    Rows::boardModel,
+                    name.strip());
             if (existing.isPresent()) {
               return existing.get();
             }
@@ -157,7 +160,8 @@ public final class HistoryStore implements AutoCloseable {
         c -> {
           try (Rows rows = new Rows(c)) {
             requireExists(rows, "board_model", boardModelId, "board model");
-            StageSheetRecord sheet = new StageSheetRecord(newId(), boardModelId, title, sheetJson, now);
+            StageSheetRecord sheet =
+                new StageSheetRecord(newId(), boardModelId, title, sheetJson, now);
             rows.insert(sheet);
             return sheet;
           }
@@ -183,8 +187,8 @@ public final class HistoryStore implements AutoCloseable {
   /**
    * Adds a unit of a board model and returns it.
    *
-   * @throws InvalidInputException if the serial is empty or the board model already has a unit
-   *     with this serial
+   * @throws InvalidInputException if the serial is empty or the board model already has a unit with
+   *     this serial
    */
   public synchronized Unit addUnit(String serial, String boardModelId, String owner) {
     Checks.shortText(SOURCE, "serial", serial, true);
@@ -262,7 +266,8 @@ public final class HistoryStore implements AutoCloseable {
           try (Rows rows = new Rows(c)) {
             requireExists(rows, "unit", unitId, "unit");
             RepairCase opened =
-                new RepairCase(newId(), unitId, now, symptom, CaseStatus.OPEN, null, null, List.of(), now);
+                new RepairCase(
+                    newId(), unitId, now, symptom, CaseStatus.OPEN, null, null, List.of(), now);
             rows.insert(opened);
             return opened;
           }
@@ -330,7 +335,9 @@ public final class HistoryStore implements AutoCloseable {
     String clean = prefix == null ? "" : prefix.strip().toLowerCase(java.util.Locale.ROOT);
     if (clean.length() < 4 || !clean.matches("[0-9a-f-]+")) {
       throw new InvalidInputException(
-          SOURCE, "case", "expected a case id (or its first 4 or more characters), got " + Checks.quote(prefix));
+          SOURCE,
+          "case",
+          "expected a case id (or its first 4 or more characters), got " + Checks.quote(prefix));
     }
     List<String> ids =
         database.read(
@@ -349,7 +356,9 @@ public final class HistoryStore implements AutoCloseable {
     }
     if (ids.size() > 1) {
       throw new InvalidInputException(
-          SOURCE, "case", "more than one case starts with " + Checks.quote(prefix) + "; give more of the id");
+          SOURCE,
+          "case",
+          "more than one case starts with " + Checks.quote(prefix) + "; give more of the id");
     }
     return ids.get(0);
   }
@@ -435,8 +444,11 @@ public final class HistoryStore implements AutoCloseable {
         "read a case",
         c -> {
           try (Rows rows = new Rows(c)) {
-            Optional<RepairCase> found = rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, caseId);
-            return found.isEmpty() ? Optional.<CaseFile>empty() : Optional.of(caseFile(rows, found.get()));
+            Optional<RepairCase> found =
+                rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, caseId);
+            return found.isEmpty()
+                ? Optional.<CaseFile>empty()
+                : Optional.of(caseFile(rows, found.get()));
           }
         });
   }
@@ -452,7 +464,10 @@ public final class HistoryStore implements AutoCloseable {
               return Optional.<UnitHistory>empty();
             }
             BoardModel model =
-                rows.first(Rows.BOARD_MODEL + " WHERE id = ?", Rows::boardModel, unit.get().boardModelId())
+                rows.first(
+                        Rows.BOARD_MODEL + " WHERE id = ?",
+                        Rows::boardModel,
+                        unit.get().boardModelId())
                     .orElseThrow();
             List<CaseFile> cases = new ArrayList<>();
             for (RepairCase rc :
@@ -517,8 +532,11 @@ public final class HistoryStore implements AutoCloseable {
   public synchronized boolean isEmpty() {
     return database.read(
         "count records",
-        c -> database.queryInt("SELECT (SELECT count(*) FROM board_model) + (SELECT count(*) FROM unit)"
-            + " + (SELECT count(*) FROM repair_case)") == 0);
+        c ->
+            database.queryInt(
+                    "SELECT (SELECT count(*) FROM board_model) + (SELECT count(*) FROM unit)"
+                        + " + (SELECT count(*) FROM repair_case)")
+                == 0);
   }
 
   // ---- between benches ------------------------------------------------------------------------
@@ -544,8 +562,8 @@ public final class HistoryStore implements AutoCloseable {
   }
 
   /**
-   * Writes a consistent copy of the history to {@code target} while the file stays in use
-   * ({@code VACUUM INTO}); the copy is compact and complete.
+   * Writes a consistent copy of the history to {@code target} while the file stays in use ({@code
+   * VACUUM INTO}); the copy is compact and complete.
    *
    * @throws InvalidInputException if {@code target} already exists
    */
@@ -601,15 +619,19 @@ public final class HistoryStore implements AutoCloseable {
       int version = candidate.read("read the backup", c -> Migrations.currentVersion(candidate));
       if (version == 0 || version > Migrations.LATEST) {
         throw new StorageException(
-            "The file " + source + " is not a backup of a history this program can read (schema version "
-                + version + ").");
+            "The file "
+                + source
+                + " is not a backup of a history this program can read (schema version "
+                + version
+                + ").");
       }
       String check =
           candidate.read(
               "check the backup",
               c -> {
                 try (Rows rows = new Rows(c)) {
-                  return String.join("; ", rows.query("PRAGMA integrity_check", rs -> rs.getString(1)));
+                  return String.join(
+                      "; ", rows.query("PRAGMA integrity_check", rs -> rs.getString(1)));
                 }
               });
       if (!check.equals("ok")) {
@@ -669,14 +691,16 @@ public final class HistoryStore implements AutoCloseable {
   private static void requireExists(Rows rows, String table, String id, String what)
       throws SQLException {
     if (rows.first("SELECT 1 FROM " + table + " WHERE id = ?", rs -> 1, id).isEmpty()) {
-      throw new InvalidInputException(SOURCE, what, "no " + what + " has the id " + Checks.quote(id));
+      throw new InvalidInputException(
+          SOURCE, what, "no " + what + " has the id " + Checks.quote(id));
     }
   }
 
   private static RepairCase requireCase(Rows rows, String caseId) throws SQLException {
     return rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, caseId)
         .orElseThrow(
-            () -> new InvalidInputException(SOURCE, "case", "no case has the id " + Checks.quote(caseId)));
+            () ->
+                new InvalidInputException(
+                    SOURCE, "case", "no case has the id " + Checks.quote(caseId)));
   }
-
 }

@@ -148,7 +148,11 @@ final class Importer {
     }
     // References, once every id in the bundle is known.
     for (int i = 0; i < b.stageSheets().size(); i++) {
-      refer(rows, "stageSheets[" + i + "].boardModelId", b.stageSheets().get(i).boardModelId(), BOARD_MODEL);
+      refer(
+          rows,
+          "stageSheets[" + i + "].boardModelId",
+          b.stageSheets().get(i).boardModelId(),
+          BOARD_MODEL);
     }
     for (int i = 0; i < b.units().size(); i++) {
       refer(rows, "units[" + i + "].boardModelId", b.units().get(i).boardModelId(), BOARD_MODEL);
@@ -190,7 +194,9 @@ final class Importer {
     String earlier = bundleFields.putIfAbsent(id, at);
     if (earlier != null) {
       throw new InvalidInputException(
-          source, at + ".id", "id " + id + " appears twice in the bundle (also at " + earlier + ")");
+          source,
+          at + ".id",
+          "id " + id + " appears twice in the bundle (also at " + earlier + ")");
     }
     bundleKinds.put(id, kind);
   }
@@ -203,12 +209,20 @@ final class Importer {
         throw new InvalidInputException(
             source,
             field,
-            "expected the id of a " + kind + ", but " + id + " is a " + inBundle + " in the bundle ("
-                + bundleFields.get(id) + ")");
+            "expected the id of a "
+                + kind
+                + ", but "
+                + id
+                + " is a "
+                + inBundle
+                + " in the bundle ("
+                + bundleFields.get(id)
+                + ")");
       }
       return;
     }
-    if (rows.first("SELECT 1 FROM " + PARENT_TABLES.get(kind) + " WHERE id = ?", rs -> 1, id).isPresent()) {
+    if (rows.first("SELECT 1 FROM " + PARENT_TABLES.get(kind) + " WHERE id = ?", rs -> 1, id)
+        .isPresent()) {
       return;
     }
     Optional<String> other = localKind(rows, id, kind);
@@ -216,14 +230,22 @@ final class Importer {
         source,
         field,
         other.isPresent()
-            ? "expected the id of a " + kind + ", but " + id + " is a " + other.get() + " in this history"
+            ? "expected the id of a "
+                + kind
+                + ", but "
+                + id
+                + " is a "
+                + other.get()
+                + " in this history"
             : "no " + kind + " with id " + id + " in the bundle or in this history");
   }
 
-  private static Optional<String> localKind(Rows rows, String id, String except) throws SQLException {
+  private static Optional<String> localKind(Rows rows, String id, String except)
+      throws SQLException {
     for (Map.Entry<String, String> table : PARENT_TABLES.entrySet()) {
       if (!table.getKey().equals(except)
-          && rows.first("SELECT 1 FROM " + table.getValue() + " WHERE id = ?", rs -> 1, id).isPresent()) {
+          && rows.first("SELECT 1 FROM " + table.getValue() + " WHERE id = ?", rs -> 1, id)
+              .isPresent()) {
         return Optional.of(table.getKey());
       }
     }
@@ -234,10 +256,12 @@ final class Importer {
 
   private void merge(HistoryBundle b, Rows rows) throws SQLException {
     for (BoardModel m : b.boardModels()) {
-      Optional<BoardModel> local = rows.first(Rows.BOARD_MODEL + " WHERE id = ?", Rows::boardModel, m.id());
+      Optional<BoardModel> local =
+          rows.first(Rows.BOARD_MODEL + " WHERE id = ?", Rows::boardModel, m.id());
       if (local.isEmpty()) {
         Optional<BoardModel> sameName =
-            rows.first(Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE", Rows::boardModel, m.name());
+            rows.first(
+                Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE", Rows::boardModel, m.name());
         if (sameName.isPresent()) {
           remapped.put(m.id(), sameName.get().id());
           matched.add("board model '" + m.name() + "' matched the local one of that name");
@@ -250,27 +274,52 @@ final class Importer {
       }
       Optional<BoardModel> clash =
           rows.first(
-              Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE AND id <> ?", Rows::boardModel, m.name(), m.id());
+              Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE AND id <> ?",
+              Rows::boardModel,
+              m.name(),
+              m.id());
       if (clash.isPresent()) {
-        conflict(BOARD_MODEL, m.id(), "its new name '" + m.name() + "' is taken here by another board model; kept the local copy");
+        conflict(
+            BOARD_MODEL,
+            m.id(),
+            "its new name '"
+                + m.name()
+                + "' is taken here by another board model; kept the local copy");
         continue;
       }
-      settle(BOARD_MODEL, m.id(), m, local.get(), m.updatedAt(), local.get().updatedAt(), () -> rows.replace(m));
+      settle(
+          BOARD_MODEL,
+          m.id(),
+          m,
+          local.get(),
+          m.updatedAt(),
+          local.get().updatedAt(),
+          () -> rows.replace(m));
     }
     for (StageSheetRecord s0 : b.stageSheets()) {
       StageSheetRecord s =
-          new StageSheetRecord(s0.id(), mapped(s0.boardModelId()), s0.title(), s0.sheetJson(), s0.updatedAt());
+          new StageSheetRecord(
+              s0.id(), mapped(s0.boardModelId()), s0.title(), s0.sheetJson(), s0.updatedAt());
       // New records are the common case: try the insert first, and look at the local copy only
       // when there is one.
       if (rows.tryInsert(s)) {
         added++;
       } else {
-        Optional<StageSheetRecord> local = rows.first(Rows.STAGE_SHEET + " WHERE id = ?", Rows::stageSheet, s.id());
-        settle(STAGE_SHEET, s.id(), s, local.get(), s.updatedAt(), local.get().updatedAt(), () -> rows.replace(s));
+        Optional<StageSheetRecord> local =
+            rows.first(Rows.STAGE_SHEET + " WHERE id = ?", Rows::stageSheet, s.id());
+        settle(
+            STAGE_SHEET,
+            s.id(),
+            s,
+            local.get(),
+            s.updatedAt(),
+            local.get().updatedAt(),
+            () -> rows.replace(s));
       }
     }
     for (Unit u0 : b.units()) {
-      Unit u = new Unit(u0.id(), u0.serial(), mapped(u0.boardModelId()), u0.owner(), u0.updatedAt());
+      Unit u =
+          new Unit(u0.id(), u0.serial(), mapped(u0.boardModelId()), u0.owner(), u0.updatedAt());
       Optional<Unit> local = rows.first(Rows.UNIT + " WHERE id = ?", Rows::unit, u.id());
       Optional<Unit> sameSerial =
           rows.first(
@@ -289,23 +338,48 @@ final class Importer {
         rows.insert(u);
         added++;
       } else if (sameSerial.isPresent()) {
-        conflict(UNIT, u.id(), "its serial '" + u.serial() + "' is taken here by another unit; kept the local copy");
+        conflict(
+            UNIT,
+            u.id(),
+            "its serial '" + u.serial() + "' is taken here by another unit; kept the local copy");
       } else {
-        settle(UNIT, u.id(), u, local.get(), u.updatedAt(), local.get().updatedAt(), () -> rows.replace(u));
+        settle(
+            UNIT,
+            u.id(),
+            u,
+            local.get(),
+            u.updatedAt(),
+            local.get().updatedAt(),
+            () -> rows.replace(u));
       }
     }
     for (RepairCase c0 : b.cases()) {
       RepairCase c =
           new RepairCase(
-              c0.id(), mapped(c0.unitId()), c0.openedAt(), c0.symptom(), c0.status(), c0.closedAt(),
-              c0.outcome(), c0.confirmedFaults(), c0.updatedAt());
+              c0.id(),
+              mapped(c0.unitId()),
+              c0.openedAt(),
+              c0.symptom(),
+              c0.status(),
+              c0.closedAt(),
+              c0.outcome(),
+              c0.confirmedFaults(),
+              c0.updatedAt());
       if (rows.tryInsert(c)) {
         added++;
         touchedCases.add(c.id());
         continue;
       }
-      Optional<RepairCase> local = rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, c.id());
-      if (settle(CASE, c.id(), c, local.get(), c.updatedAt(), local.get().updatedAt(), () -> rows.replace(c))) {
+      Optional<RepairCase> local =
+          rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, c.id());
+      if (settle(
+          CASE,
+          c.id(),
+          c,
+          local.get(),
+          c.updatedAt(),
+          local.get().updatedAt(),
+          () -> rows.replace(c))) {
         touchedCases.add(c.id());
       }
     }
@@ -313,7 +387,11 @@ final class Importer {
       if (rows.tryInsert(r)) {
         added++;
       } else {
-        settleFixed(READING, r.id(), r, rows.first(Rows.READING + " WHERE id = ?", Rows::reading, r.id()).orElseThrow());
+        settleFixed(
+            READING,
+            r.id(),
+            r,
+            rows.first(Rows.READING + " WHERE id = ?", Rows::reading, r.id()).orElseThrow());
       }
     }
     for (SuspectListRecord s : b.suspectLists()) {
@@ -329,8 +407,16 @@ final class Importer {
         touchedCases.add(a.caseId());
         continue;
       }
-      Optional<RepairAction> local = rows.first(Rows.ACTION + " WHERE id = ?", Rows::action, a.id());
-      if (settle(ACTION, a.id(), a, local.get(), a.updatedAt(), local.get().updatedAt(), () -> rows.replace(a))) {
+      Optional<RepairAction> local =
+          rows.first(Rows.ACTION + " WHERE id = ?", Rows::action, a.id());
+      if (settle(
+          ACTION,
+          a.id(),
+          a,
+          local.get(),
+          a.updatedAt(),
+          local.get().updatedAt(),
+          () -> rows.replace(a))) {
         touchedCases.add(a.caseId());
         touchedCases.add(local.get().caseId());
       }
@@ -340,7 +426,14 @@ final class Importer {
         added++;
       } else {
         Optional<CaseNote> local = rows.first(Rows.NOTE + " WHERE id = ?", Rows::note, n.id());
-        settle(NOTE, n.id(), n, local.get(), n.updatedAt(), local.get().updatedAt(), () -> rows.replace(n));
+        settle(
+            NOTE,
+            n.id(),
+            n,
+            local.get(),
+            n.updatedAt(),
+            local.get().updatedAt(),
+            () -> rows.replace(n));
       }
     }
     for (String caseId : touchedCases) {
@@ -360,7 +453,13 @@ final class Importer {
 
   /** Settles a record that exists on both sides; returns whether the local copy was replaced. */
   private boolean settle(
-      String kind, String id, Object incoming, Object local, Instant incomingAt, Instant localAt, Write replace)
+      String kind,
+      String id,
+      Object incoming,
+      Object local,
+      Instant incomingAt,
+      Instant localAt,
+      Write replace)
       throws SQLException {
     if (incoming.equals(local)) {
       unchanged++;
@@ -388,7 +487,10 @@ final class Importer {
     if (incoming.equals(local)) {
       unchanged++;
     } else {
-      conflict(kind, id, "differs from the local copy, which is never edited once stored; kept the local copy");
+      conflict(
+          kind,
+          id,
+          "differs from the local copy, which is never edited once stored; kept the local copy");
     }
   }
 

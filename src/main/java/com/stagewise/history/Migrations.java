@@ -31,7 +31,9 @@ final class Migrations {
     int tables =
         database.queryInt(
             "SELECT count(*) FROM sqlite_master WHERE type = 'table' AND name = 'schema_version'");
-    return tables == 0 ? 0 : database.queryInt("SELECT coalesce(max(version), 0) FROM schema_version");
+    return tables == 0
+        ? 0
+        : database.queryInt("SELECT coalesce(max(version), 0) FROM schema_version");
   }
 
   /**
@@ -41,8 +43,7 @@ final class Migrations {
    *     is then left at the last version that was applied completely)
    */
   static void migrate(Database database, int target, long nowMillis) {
-    int version =
-        database.read("read the schema version", connection -> currentVersion(database));
+    int version = database.read("read the schema version", connection -> currentVersion(database));
     if (version > LATEST) {
       throw new StorageException(
           "The history database "
@@ -118,8 +119,7 @@ final class Migrations {
       if (trimmed.isEmpty() || trimmed.startsWith("--")) {
         continue;
       }
-      if (current.length() == 0
-          && trimmed.toUpperCase(Locale.ROOT).startsWith("CREATE TRIGGER")) {
+      if (current.length() == 0 && trimmed.toUpperCase(Locale.ROOT).startsWith("CREATE TRIGGER")) {
         inTrigger = true;
       }
       current.append(line).append('\n');

@@ -83,8 +83,7 @@ final class Rows implements AutoCloseable {
     return rows;
   }
 
-  <T> Optional<T> first(String sql, RowMapper<T> mapper, Object... parameters)
-      throws SQLException {
+  <T> Optional<T> first(String sql, RowMapper<T> mapper, Object... parameters) throws SQLException {
     List<T> rows = query(sql, mapper, parameters);
     return rows.isEmpty() ? Optional.empty() : Optional.of(rows.get(0));
   }
@@ -186,7 +185,8 @@ final class Rows implements AutoCloseable {
 
   /** Returns the suspect lists selected by {@code where} (with its parameters), with suspects. */
   List<SuspectListRecord> suspectLists(String where, Object... parameters) throws SQLException {
-    record Head(String id, String caseId, Instant at, String version, String verdict, String next) {}
+    record Head(
+        String id, String caseId, Instant at, String version, String verdict, String next) {}
     List<Head> heads =
         query(
             SUSPECT_LIST + " " + where,
@@ -271,23 +271,37 @@ final class Rows implements AutoCloseable {
   }
 
   boolean tryInsert(BoardModel m) throws SQLException {
-    int inserted = update(
-        "INSERT INTO board_model (id, name, maker, notes, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        m.id(), m.name(), m.maker(), m.notes(), m.updatedAt());
+    int inserted =
+        update(
+            "INSERT INTO board_model (id, name, maker, notes, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            m.id(),
+            m.name(),
+            m.maker(),
+            m.notes(),
+            m.updatedAt());
     return inserted == 1;
   }
 
   void replace(BoardModel m) throws SQLException {
     update(
         "UPDATE board_model SET name = ?, maker = ?, notes = ?, updated_at = ? WHERE id = ?",
-        m.name(), m.maker(), m.notes(), m.updatedAt(), m.id());
+        m.name(),
+        m.maker(),
+        m.notes(),
+        m.updatedAt(),
+        m.id());
   }
 
   boolean tryInsert(StageSheetRecord s) throws SQLException {
-    int inserted = update(
-        "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
-            + " VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        s.id(), s.boardModelId(), s.title(), s.sheetJson(), s.updatedAt());
+    int inserted =
+        update(
+            "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
+                + " VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            s.id(),
+            s.boardModelId(),
+            s.title(),
+            s.sheetJson(),
+            s.updatedAt());
     return inserted == 1;
   }
 
@@ -295,34 +309,48 @@ final class Rows implements AutoCloseable {
     update(
         "UPDATE stage_sheet SET board_model_id = ?, title = ?, sheet_json = ?, updated_at = ?"
             + " WHERE id = ?",
-        s.boardModelId(), s.title(), s.sheetJson(), s.updatedAt(), s.id());
+        s.boardModelId(),
+        s.title(),
+        s.sheetJson(),
+        s.updatedAt(),
+        s.id());
   }
 
   boolean tryInsert(Unit u) throws SQLException {
-    int inserted = update(
-        "INSERT INTO unit (id, serial, board_model_id, owner, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        u.id(), u.serial(), u.boardModelId(), u.owner(), u.updatedAt());
+    int inserted =
+        update(
+            "INSERT INTO unit (id, serial, board_model_id, owner, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            u.id(),
+            u.serial(),
+            u.boardModelId(),
+            u.owner(),
+            u.updatedAt());
     return inserted == 1;
   }
 
   void replace(Unit u) throws SQLException {
     update(
         "UPDATE unit SET serial = ?, board_model_id = ?, owner = ?, updated_at = ? WHERE id = ?",
-        u.serial(), u.boardModelId(), u.owner(), u.updatedAt(), u.id());
+        u.serial(),
+        u.boardModelId(),
+        u.owner(),
+        u.updatedAt(),
+        u.id());
   }
 
   boolean tryInsert(RepairCase c) throws SQLException {
-    int inserted = update(
-        "INSERT INTO repair_case (id, unit_id, opened_at, symptom, status, closed_at, outcome,"
-            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        c.id(),
-        c.unitId(),
-        c.openedAt(),
-        c.symptom(),
-        c.status().word(),
-        c.closedAt(),
-        c.outcome() == null ? null : c.outcome().word(),
-        c.updatedAt());
+    int inserted =
+        update(
+            "INSERT INTO repair_case (id, unit_id, opened_at, symptom, status, closed_at, outcome,"
+                + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            c.id(),
+            c.unitId(),
+            c.openedAt(),
+            c.symptom(),
+            c.status().word(),
+            c.closedAt(),
+            c.outcome() == null ? null : c.outcome().word(),
+            c.updatedAt());
     if (inserted == 1) {
       writeFaults(c);
     }
@@ -350,36 +378,40 @@ final class Rows implements AutoCloseable {
     for (String fault : new LinkedHashSet<>(c.confirmedFaults())) {
       update(
           "INSERT INTO confirmed_fault (case_id, position, fault_id) VALUES (?, ?, ?)",
-          c.id(), position++, fault);
+          c.id(),
+          position++,
+          fault);
     }
   }
 
   boolean tryInsert(StoredReading r) throws SQLException {
-    int inserted = update(
-        "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at)"
-            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        r.id(),
-        r.caseId(),
-        r.at(),
-        r.kind().word(),
-        r.value(),
-        r.hz(),
-        r.uncertainty(),
-        r.meterText(),
-        r.takenAt());
+    int inserted =
+        update(
+            "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at)"
+                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            r.id(),
+            r.caseId(),
+            r.at(),
+            r.kind().word(),
+            r.value(),
+            r.hz(),
+            r.uncertainty(),
+            r.meterText(),
+            r.takenAt());
     return inserted == 1;
   }
 
   boolean tryInsert(SuspectListRecord list) throws SQLException {
-    int inserted = update(
-        "INSERT INTO suspect_list (id, case_id, computed_at, program_version, verdict,"
-            + " next_probes) VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        list.id(),
-        list.caseId(),
-        list.computedAt(),
-        list.programVersion(),
-        list.verdict(),
-        list.nextProbes());
+    int inserted =
+        update(
+            "INSERT INTO suspect_list (id, case_id, computed_at, program_version, verdict,"
+                + " next_probes) VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            list.id(),
+            list.caseId(),
+            list.computedAt(),
+            list.programVersion(),
+            list.verdict(),
+            list.nextProbes());
     if (inserted == 0) {
       return false;
     }
@@ -398,18 +430,19 @@ final class Rows implements AutoCloseable {
   }
 
   boolean tryInsert(RepairAction a) throws SQLException {
-    int inserted = update(
-        "INSERT INTO repair_action (id, case_id, at, kind, part, old_value, new_value, text,"
-            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        a.id(),
-        a.caseId(),
-        a.at(),
-        a.kind().word(),
-        a.part(),
-        a.oldValue(),
-        a.newValue(),
-        a.text(),
-        a.updatedAt());
+    int inserted =
+        update(
+            "INSERT INTO repair_action (id, case_id, at, kind, part, old_value, new_value, text,"
+                + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            a.id(),
+            a.caseId(),
+            a.at(),
+            a.kind().word(),
+            a.part(),
+            a.oldValue(),
+            a.newValue(),
+            a.text(),
+            a.updatedAt());
     return inserted == 1;
   }
 
@@ -429,16 +462,25 @@ final class Rows implements AutoCloseable {
   }
 
   boolean tryInsert(CaseNote n) throws SQLException {
-    int inserted = update(
-        "INSERT INTO case_note (id, case_id, at, text, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
-        n.id(), n.caseId(), n.at(), n.text(), n.updatedAt());
+    int inserted =
+        update(
+            "INSERT INTO case_note (id, case_id, at, text, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            n.id(),
+            n.caseId(),
+            n.at(),
+            n.text(),
+            n.updatedAt());
     return inserted == 1;
   }
 
   void replace(CaseNote n) throws SQLException {
     update(
         "UPDATE case_note SET case_id = ?, at = ?, text = ?, updated_at = ? WHERE id = ?",
-        n.caseId(), n.at(), n.text(), n.updatedAt(), n.id());
+        n.caseId(),
+        n.at(),
+        n.text(),
+        n.updatedAt(),
+        n.id());
   }
 
   /**
@@ -449,7 +491,10 @@ final class Rows implements AutoCloseable {
     update("DELETE FROM case_part WHERE case_id = ?", caseId);
     Set<String> parts = new LinkedHashSet<>();
     for (String fault :
-        query("SELECT fault_id FROM confirmed_fault WHERE case_id = ?", rs -> rs.getString(1), caseId)) {
+        query(
+            "SELECT fault_id FROM confirmed_fault WHERE case_id = ?",
+            rs -> rs.getString(1),
+            caseId)) {
       parts.addAll(Checks.parts(fault));
     }
     for (String part :

@@ -44,16 +44,28 @@ final class Search {
       // first hits: a case among the first n has its best symptom among the first n symptoms, and
       // its best note among the first n · NOTES_PER_CASE notes unless the cases above it hold
       // more matching notes than that. Taking just those (FTS5 keeps the top of a rank-ordered
-      // LIMIT without sorting every match) spares joining and grouping every match of a common word.
-      boolean wordsOnly = query.serial().isEmpty() && query.boardModel().isEmpty() && query.faultId().isEmpty()
-          && query.part().isEmpty() && query.status().isEmpty() && query.openedFrom().isEmpty()
-          && query.openedBefore().isEmpty();
+      // LIMIT without sorting every match) spares joining and grouping every match of a common
+      // word.
+      boolean wordsOnly =
+          query.serial().isEmpty()
+              && query.boardModel().isEmpty()
+              && query.faultId().isEmpty()
+              && query.part().isEmpty()
+              && query.status().isEmpty()
+              && query.openedFrom().isEmpty()
+              && query.openedBefore().isEmpty();
       String cap = wordsOnly ? " ORDER BY rank LIMIT ?" : "";
       sql.append("WITH text_hit (case_row, score) AS (")
-          .append("SELECT * FROM (SELECT rowid, rank FROM symptom_text WHERE symptom_text MATCH ?").append(cap).append(")")
-          .append(" UNION ALL SELECT rc.row, n.score FROM (SELECT rowid AS note_row, rank AS score FROM note_text")
-          .append(" WHERE note_text MATCH ?").append(cap).append(") n")
-          .append(" JOIN case_note cn ON cn.row = n.note_row JOIN repair_case rc ON rc.id = cn.case_id),")
+          .append("SELECT * FROM (SELECT rowid, rank FROM symptom_text WHERE symptom_text MATCH ?")
+          .append(cap)
+          .append(")")
+          .append(
+              " UNION ALL SELECT rc.row, n.score FROM (SELECT rowid AS note_row, rank AS score FROM note_text")
+          .append(" WHERE note_text MATCH ?")
+          .append(cap)
+          .append(") n")
+          .append(
+              " JOIN case_note cn ON cn.row = n.note_row JOIN repair_case rc ON rc.id = cn.case_id),")
           .append(" best (case_row, score) AS (SELECT case_row, min(score) FROM text_hit")
           .append(" GROUP BY case_row) ");
       parameters.add(match);
@@ -69,7 +81,10 @@ final class Search {
         .append(" (SELECT group_concat(fault_id, ' ') FROM (SELECT fault_id FROM confirmed_fault f")
         .append(" WHERE f.case_id = c.id ORDER BY position)), ")
         .append(ranked ? "NULL, -best.score" : "NULL, 0")
-        .append(ranked ? " FROM best JOIN repair_case c ON c.row = best.case_row" : " FROM repair_case c")
+        .append(
+            ranked
+                ? " FROM best JOIN repair_case c ON c.row = best.case_row"
+                : " FROM repair_case c")
         .append(" JOIN unit u ON u.id = c.unit_id JOIN board_model m ON m.id = u.board_model_id")
         .append(" WHERE 1 = 1");
     if (query.serial().isPresent()) {
@@ -82,7 +97,8 @@ final class Search {
       parameters.add(query.boardModel().get());
     }
     if (query.faultId().isPresent()) {
-      sql.append(" AND EXISTS (SELECT 1 FROM confirmed_fault f WHERE f.case_id = c.id AND f.fault_id = ?)");
+      sql.append(
+          " AND EXISTS (SELECT 1 FROM confirmed_fault f WHERE f.case_id = c.id AND f.fault_id = ?)");
       parameters.add(query.faultId().get());
     }
     if (query.part().isPresent()) {
@@ -101,7 +117,8 @@ final class Search {
       sql.append(" AND c.opened_at < ?");
       parameters.add(query.openedBefore().get());
     }
-    sql.append(ranked ? " ORDER BY best.score, c.opened_at DESC" : " ORDER BY c.opened_at DESC, c.id")
+    sql.append(
+            ranked ? " ORDER BY best.score, c.opened_at DESC" : " ORDER BY c.opened_at DESC, c.id")
         .append(" LIMIT ?");
     parameters.add(query.limit());
 
@@ -131,13 +148,23 @@ final class Search {
       }
     }
     if (ranked && !hits.isEmpty()) {
-      Map<String, String> snippets = snippets(connection, matchExpression(query.text().get()), hits);
+      Map<String, String> snippets =
+          snippets(connection, matchExpression(query.text().get()), hits);
       List<SearchHit> withSnippets = new ArrayList<>(hits.size());
       for (SearchHit hit : hits) {
         String snippet = snippets.get(hit.caseId());
         withSnippets.add(
-            new SearchHit(hit.caseId(), hit.unitId(), hit.serial(), hit.boardModel(), hit.status(), hit.outcome(),
-                hit.openedAt(), hit.symptom(), hit.confirmedFaults(), snippet == null ? hit.snippet() : snippet,
+            new SearchHit(
+                hit.caseId(),
+                hit.unitId(),
+                hit.serial(),
+                hit.boardModel(),
+                hit.status(),
+                hit.outcome(),
+                hit.openedAt(),
+                hit.symptom(),
+                hit.confirmedFaults(),
+                snippet == null ? hit.snippet() : snippet,
                 hit.score()));
       }
       return withSnippets;
@@ -149,9 +176,16 @@ final class Search {
    * Returns, for each hit's case, the matching words of its symptom in context, else of its
    * best-matching note: two queries for all hits together.
    */
-  private static Map<String, String> snippets(Connection connection, String match, List<SearchHit> hits)
-      throws SQLException {
-    String format = "snippet(%s, 0, '" + SNIPPET_OPEN + "', '" + SNIPPET_CLOSE + "', '…', " + SNIPPET_TOKENS + ")";
+  private static Map<String, String> snippets(
+      Connection connection, String match, List<SearchHit> hits) throws SQLException {
+    String format =
+        "snippet(%s, 0, '"
+            + SNIPPET_OPEN
+            + "', '"
+            + SNIPPET_CLOSE
+            + "', '…', "
+            + SNIPPET_TOKENS
+            + ")";
     String marks = String.join(", ", java.util.Collections.nCopies(hits.size(), "?"));
     Object[] parameters = new Object[hits.size() + 1];
     parameters[0] = match;
@@ -159,13 +193,19 @@ final class Search {
       parameters[i + 1] = hits.get(i).caseId();
     }
     String symptoms =
-        "SELECT c.id, " + String.format(java.util.Locale.ROOT, format, "symptom_text")
+        "SELECT c.id, "
+            + String.format(java.util.Locale.ROOT, format, "symptom_text")
             + " FROM symptom_text JOIN repair_case c ON c.row = symptom_text.rowid"
-            + " WHERE symptom_text MATCH ? AND c.id IN (" + marks + ")";
+            + " WHERE symptom_text MATCH ? AND c.id IN ("
+            + marks
+            + ")";
     String notes =
-        "SELECT cn.case_id, " + String.format(java.util.Locale.ROOT, format, "note_text")
+        "SELECT cn.case_id, "
+            + String.format(java.util.Locale.ROOT, format, "note_text")
             + " FROM note_text JOIN case_note cn ON cn.row = note_text.rowid"
-            + " WHERE note_text MATCH ? AND cn.case_id IN (" + marks + ") ORDER BY rank";
+            + " WHERE note_text MATCH ? AND cn.case_id IN ("
+            + marks
+            + ") ORDER BY rank";
     Map<String, String> snippets = new java.util.HashMap<>();
     for (String sql : List.of(symptoms, notes)) {
       try (PreparedStatement statement = connection.prepareStatement(sql)) {

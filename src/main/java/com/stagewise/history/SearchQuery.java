@@ -15,8 +15,8 @@ import java.util.Optional;
  * @param status open or closed
  * @param openedFrom cases opened at or after this time
  * @param openedBefore cases opened before this time
- * @param text words to find in the reported symptom or the notes (each word, as a prefix); the
- *     hits are then ranked by relevance, else newest first
+ * @param text words to find in the reported symptom or the notes (each word, as a prefix); the hits
+ *     are then ranked by relevance, else newest first
  * @param limit the most hits to return
  */
 public record SearchQuery(
@@ -70,30 +70,67 @@ public record SearchQuery(
 
   public SearchQuery withPart(String value) {
     return new SearchQuery(
-        serial, boardModel, faultId, blankless(value), status, openedFrom, openedBefore, text, limit);
+        serial,
+        boardModel,
+        faultId,
+        blankless(value),
+        status,
+        openedFrom,
+        openedBefore,
+        text,
+        limit);
   }
 
   public SearchQuery withStatus(CaseStatus value) {
     return new SearchQuery(
-        serial, boardModel, faultId, part, Optional.ofNullable(value), openedFrom, openedBefore,
-        text, limit);
+        serial,
+        boardModel,
+        faultId,
+        part,
+        Optional.ofNullable(value),
+        openedFrom,
+        openedBefore,
+        text,
+        limit);
   }
 
   public SearchQuery withOpenedFrom(Instant value) {
     return new SearchQuery(
-        serial, boardModel, faultId, part, status, Optional.ofNullable(value), openedBefore, text,
+        serial,
+        boardModel,
+        faultId,
+        part,
+        status,
+        Optional.ofNullable(value),
+        openedBefore,
+        text,
         limit);
   }
 
   public SearchQuery withOpenedBefore(Instant value) {
     return new SearchQuery(
-        serial, boardModel, faultId, part, status, openedFrom, Optional.ofNullable(value), text,
+        serial,
+        boardModel,
+        faultId,
+        part,
+        status,
+        openedFrom,
+        Optional.ofNullable(value),
+        text,
         limit);
   }
 
   public SearchQuery withText(String value) {
     return new SearchQuery(
-        serial, boardModel, faultId, part, status, openedFrom, openedBefore, blankless(value), limit);
+        serial,
+        boardModel,
+        faultId,
+        part,
+        status,
+        openedFrom,
+        openedBefore,
+        blankless(value),
+        limit);
   }
 
   public SearchQuery withLimit(int value) {

@@ -1,6 +1,5 @@
 package com.stagewise.history;
 
-import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;

@@ -70,7 +70,10 @@ final class JsonField {
     String where =
         e.getLocation() == null
             ? ""
-            : " at line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr();
+            : " at line "
+                + e.getLocation().getLineNr()
+                + ", column "
+                + e.getLocation().getColumnNr();
     String original = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
     if (e instanceof JsonEOFException || original.contains("end-of-input")) {
       return "the text ends too early" + where + ": a bracket, brace or quote is not closed";
@@ -78,12 +81,20 @@ final class JsonField {
     if (e instanceof JsonParseException && original.startsWith("Duplicate field '")) {
       int end = original.indexOf('\'', "Duplicate field '".length());
       String key = end > 0 ? original.substring("Duplicate field '".length(), end) : "?";
-      return "key \"" + key + "\" appears twice in one object" + where + " (expected each key once)";
+      return "key \""
+          + key
+          + "\" appears twice in one object"
+          + where
+          + " (expected each key once)";
     }
     if (original.startsWith("Trailing token")) {
-      return "there is more text after the end of the JSON object" + where + " (expected one object)";
+      return "there is more text after the end of the JSON object"
+          + where
+          + " (expected one object)";
     }
-    return "not valid JSON" + where + " (check for a missing or extra comma, quote, colon or bracket)";
+    return "not valid JSON"
+        + where
+        + " (check for a missing or extra comma, quote, colon or bracket)";
   }
 
   /** Returns an exception naming this field's file and path. */
@@ -91,7 +102,9 @@ final class JsonField {
     return new InvalidInputException(source, path, problem);
   }
 
-  /** Returns an exception for this field that carries the problem of an exception from the model. */
+  /**
+   * Returns an exception for this field that carries the problem of an exception from the model.
+   */
   InvalidInputException rewrap(InvalidInputException e, String subField) {
     String problem = e.getMessage();
     String prefix = e.field().isEmpty() ? "" : e.field() + ": ";
@@ -144,7 +157,8 @@ final class JsonField {
   JsonField require(String key, String expected) {
     JsonNode child = node.get(key);
     if (child == null) {
-      throw new InvalidInputException(source, at(key), "missing field \"" + key + "\" (expected " + expected + ")");
+      throw new InvalidInputException(
+          source, at(key), "missing field \"" + key + "\" (expected " + expected + ")");
     }
     return new JsonField(source, at(key), child);
   }
@@ -152,7 +166,9 @@ final class JsonField {
   /** Returns an optional child field; a JSON {@code null} counts as absent. */
   Optional<JsonField> optional(String key) {
     JsonNode child = node.get(key);
-    return child == null || child.isNull() ? Optional.empty() : Optional.of(new JsonField(source, at(key), child));
+    return child == null || child.isNull()
+        ? Optional.empty()
+        : Optional.of(new JsonField(source, at(key), child));
   }
 
   /** Returns the elements of this array field. */
@@ -221,7 +237,8 @@ final class JsonField {
   double nonNegative(String expected) {
     double value = number(expected);
     if (value < 0) {
-      throw error("value (" + printed(value) + ") must not be negative (expected " + expected + ")");
+      throw error(
+          "value (" + printed(value) + ") must not be negative (expected " + expected + ")");
     }
     return value;
   }
@@ -241,7 +258,8 @@ final class JsonField {
       throw error("expected a tolerance such as \"1%\" or 0.01, found " + describe(node));
     }
     if (!Double.isFinite(value) || value < 0 || value >= 1) {
-      throw error("tolerance (" + printed(value) + ") must be between 0 and 1, i.e. 0 % to below 100 %");
+      throw error(
+          "tolerance (" + printed(value) + ") must be between 0 and 1, i.e. 0 % to below 100 %");
     }
     return value;
   }
@@ -254,21 +272,32 @@ final class JsonField {
    * @param what what the document is, e.g. "a stage sheet"
    */
   void requireHeader(String format, int version, String what) {
-    String found = require("format", "\"" + format + "\" for " + what).name("the format \"" + format + "\"");
+    String found =
+        require("format", "\"" + format + "\" for " + what).name("the format \"" + format + "\"");
     if (!found.equals(format)) {
-      String hint = found.startsWith("stagewise-") ? " (this is a " + found.substring("stagewise-".length()) + " file)" : "";
+      String hint =
+          found.startsWith("stagewise-")
+              ? " (this is a " + found.substring("stagewise-".length()) + " file)"
+              : "";
       throw new InvalidInputException(
-          source, at("format"), "format is \"" + found + "\"" + hint + ", expected \"" + format + "\" for " + what);
+          source,
+          at("format"),
+          "format is \"" + found + "\"" + hint + ", expected \"" + format + "\" for " + what);
     }
     JsonField versionField = require("version", "the version number " + version);
     int foundVersion = versionField.integer("the version number " + version);
     if (foundVersion > version) {
       throw versionField.error(
-          "version " + foundVersion + " is newer than this Stagewise reads (up to " + version
-              + "): update Stagewise, or save the file as version " + version);
+          "version "
+              + foundVersion
+              + " is newer than this Stagewise reads (up to "
+              + version
+              + "): update Stagewise, or save the file as version "
+              + version);
     }
     if (foundVersion < 1) {
-      throw versionField.error("version " + foundVersion + " is not a version (expected " + version + ")");
+      throw versionField.error(
+          "version " + foundVersion + " is not a version (expected " + version + ")");
     }
   }
 
@@ -299,6 +328,8 @@ final class JsonField {
     if (Double.isNaN(value)) {
       return "NaN";
     }
-    return value == Math.rint(value) && Math.abs(value) < 1e15 ? Long.toString((long) value) : Double.toString(value);
+    return value == Math.rint(value) && Math.abs(value) < 1e15
+        ? Long.toString((long) value)
+        : Double.toString(value);
   }
 }

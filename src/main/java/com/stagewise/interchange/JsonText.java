@@ -18,7 +18,8 @@ import java.util.Map;
 
 /**
  * Prints JSON documents for people to read: top-level fields one per line, each array element on
- * its own line in a compact {@code {"key": value, …}} form, as in the contracts of the design notes.
+ * its own line in a compact {@code {"key": value, …}} form, as in the contracts of the design
+ * notes.
  */
 final class JsonText {
   private JsonText() {}
@@ -69,7 +70,8 @@ final class JsonText {
     double magnitude = Math.abs(value);
     if (magnitude >= 1e-7 && magnitude < 1e15) {
       // BigDecimal.valueOf uses the shortest decimal that reads back as the same double.
-      return JsonNodeFactory.instance.numberNode(new BigDecimal(BigDecimal.valueOf(value).toPlainString()));
+      return JsonNodeFactory.instance.numberNode(
+          new BigDecimal(BigDecimal.valueOf(value).toPlainString()));
     }
     return JsonNodeFactory.instance.numberNode(value);
   }
@@ -91,14 +93,18 @@ final class JsonText {
     StringBuilder text = new StringBuilder("{\n");
     int left = fields.size();
     for (Map.Entry<String, Object> field : fields.entrySet()) {
-      text.append("  ").append(oneLine(JsonNodeFactory.instance.textNode(field.getKey()))).append(": ");
+      text.append("  ")
+          .append(oneLine(JsonNodeFactory.instance.textNode(field.getKey())))
+          .append(": ");
       if (field.getValue() instanceof List<?> list) {
         if (list.isEmpty()) {
           text.append("[]");
         } else {
           text.append("[\n");
           for (int i = 0; i < list.size(); i++) {
-            text.append("    ").append(oneLine((JsonNode) list.get(i))).append(i + 1 < list.size() ? ",\n" : "\n");
+            text.append("    ")
+                .append(oneLine((JsonNode) list.get(i)))
+                .append(i + 1 < list.size() ? ",\n" : "\n");
           }
           text.append("  ]");
         }

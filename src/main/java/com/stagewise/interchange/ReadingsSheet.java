@@ -113,15 +113,27 @@ public final class ReadingsSheet {
     field.object("the meter", METER_KEYS);
     MeterSpec base = MeterSpec.DEFAULT;
     double percent =
-        field.optional("percent").map(f -> f.nonNegative("the meter's percent of reading, e.g. 0.5")).orElse(base.percent());
-    int counts = field.optional("counts").map(f -> f.integer("the meter's counts, e.g. 2")).orElse(base.counts());
+        field
+            .optional("percent")
+            .map(f -> f.nonNegative("the meter's percent of reading, e.g. 0.5"))
+            .orElse(base.percent());
+    int counts =
+        field
+            .optional("counts")
+            .map(f -> f.integer("the meter's counts, e.g. 2"))
+            .orElse(base.counts());
     Optional<JsonField> displayField = field.optional("displayCounts");
-    int display = displayField.map(f -> f.integer("the display counts, e.g. 6000")).orElse(base.displayCounts());
+    int display =
+        displayField
+            .map(f -> f.integer("the display counts, e.g. 6000"))
+            .orElse(base.displayCounts());
     if (counts < 0) {
       throw field.require("counts", "").error("counts (" + counts + ") must be 0 or more");
     }
     if (display <= 0) {
-      throw displayField.orElse(field).error("displayCounts (" + display + ") must be above 0, e.g. 6000");
+      throw displayField
+          .orElse(field)
+          .error("displayCounts (" + display + ") must be above 0, e.g. 6000");
     }
     return new MeterSpec(percent, counts, display);
   }
@@ -147,8 +159,11 @@ public final class ReadingsSheet {
             : valueField.nonNegative("the AC amplitude read, in volts");
     if (Math.abs(value) > limit) {
       throw valueField.error(
-          "reading (" + value + " V) is far beyond every rail of the stage (expected at most about ±"
-              + limit + " V; check the decimal point and the unit)");
+          "reading ("
+              + value
+              + " V) is far beyond every rail of the stage (expected at most about ±"
+              + limit
+              + " V; check the decimal point and the unit)");
     }
     double hz = 0;
     Optional<JsonField> hzField = field.optional("hz");
@@ -156,12 +171,20 @@ public final class ReadingsSheet {
       if (hzField.isPresent()) {
         hz = hzField.get().nonNegative("the frequency in hertz");
         if (hz == 0) {
-          throw hzField.get().error("hz must be above 0 (the frequency of the ac reading in hertz)");
+          throw hzField
+              .get()
+              .error("hz must be above 0 (the frequency of the ac reading in hertz)");
         }
       } else {
-        hz = stage.inputs().stream().filter(i -> i.hasAc()).mapToDouble(i -> i.hz()).findFirst()
-            .orElseThrow(() -> field.error(
-                "missing field \"hz\" (expected the frequency of the ac reading; the stage has no ac input to take it from)"));
+        hz =
+            stage.inputs().stream()
+                .filter(i -> i.hasAc())
+                .mapToDouble(i -> i.hz())
+                .findFirst()
+                .orElseThrow(
+                    () ->
+                        field.error(
+                            "missing field \"hz\" (expected the frequency of the ac reading; the stage has no ac input to take it from)"));
       }
     } else if (hzField.isPresent()) {
       throw hzField.get().error("a dc reading has no \"hz\" (expected hz only with \"ac\")");
@@ -190,27 +213,44 @@ public final class ReadingsSheet {
     int dot = at.lastIndexOf('.');
     if (dot <= 0) {
       throw field.error(
-          "\"" + at + "\" is not a net of the stage (expected one of " + String.join(", ", stage.nets())
-              + ", or a package pin such as " + examplePin(stage) + ")");
+          "\""
+              + at
+              + "\" is not a net of the stage (expected one of "
+              + String.join(", ", stage.nets())
+              + ", or a package pin such as "
+              + examplePin(stage)
+              + ")");
     }
     String pkg = at.substring(0, dot);
     Optional<PackageType> type = stage.packageType(pkg);
     if (type.isEmpty()) {
       throw field.error(
-          "package " + pkg + " is not on the stage (expected a net, or a pin of "
-              + String.join(", ", stage.packages()) + ", e.g. " + examplePin(stage) + ")");
+          "package "
+              + pkg
+              + " is not on the stage (expected a net, or a pin of "
+              + String.join(", ", stage.packages())
+              + ", e.g. "
+              + examplePin(stage)
+              + ")");
     }
     String pinText = at.substring(dot + 1);
     int pin;
     try {
       pin = Integer.parseInt(pinText);
     } catch (NumberFormatException e) {
-      throw field.error("\"" + pinText + "\" is not a pin number (expected e.g. " + examplePin(stage) + ")");
+      throw field.error(
+          "\"" + pinText + "\" is not a pin number (expected e.g. " + examplePin(stage) + ")");
     }
     if (pin < 1 || pin > type.get().pinCount()) {
       throw field.error(
-          pkg + " is a " + type.get().word() + " package, which has no pin " + pin + " (expected 1 to "
-              + type.get().pinCount() + ")");
+          pkg
+              + " is a "
+              + type.get().word()
+              + " package, which has no pin "
+              + pin
+              + " (expected 1 to "
+              + type.get().pinCount()
+              + ")");
     }
     if (!stage.pinNets().containsKey(at)) {
       TreeSet<Integer> used = new TreeSet<>();
@@ -220,7 +260,13 @@ public final class ReadingsSheet {
         }
       }
       throw field.error(
-          "pin " + pin + " of " + pkg + " is not used by any section of the stage (expected one of pins " + used + ")");
+          "pin "
+              + pin
+              + " of "
+              + pkg
+              + " is not used by any section of the stage (expected one of pins "
+              + used
+              + ")");
     }
   }
 

@@ -18,13 +18,13 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * Writes the solution document of {@code stagewise solve --json} (format {@code stagewise-solution},
- * version 1).
+ * Writes the solution document of {@code stagewise solve --json} (format {@code
+ * stagewise-solution}, version 1).
  *
  * <p>{@code dc} holds the volts on every net and every used package pin, {@code sections} the state
  * of every op-amp section ({@code linear}, {@code high}, {@code low}), {@code ac} the amplitude and
- * phase on every net when an input has AC. Numbers are plain JSON numbers. A stage with more than one
- * consistent state (a Schmitt trigger between its thresholds) gives the first in {@code dc} and
+ * phase on every net when an input has AC. Numbers are plain JSON numbers. A stage with more than
+ * one consistent state (a Schmitt trigger between its thresholds) gives the first in {@code dc} and
  * {@code sections} and the others in {@code alternatives}, a list of {@code {"dc": …, "sections":
  * …}} objects; readers that do not know that field can ignore it.
  */
@@ -66,12 +66,17 @@ public final class SolutionJson {
                     .<ObjectNode>set("amplitude", JsonText.number(net.getValue().amplitude()))
                     .set("phaseDegrees", JsonText.number(net.getValue().phaseDegrees())));
           }
-          root.set("ac", JsonText.object().<ObjectNode>set("hz", JsonText.number(solution.hz())).set("nets", nets));
+          root.set(
+              "ac",
+              JsonText.object()
+                  .<ObjectNode>set("hz", JsonText.number(solution.hz()))
+                  .set("nets", nets));
         });
     if (solved.points().size() > 1) {
       ArrayNode alternatives = root.putArray("alternatives");
       for (OperatingPoint point : solved.points().subList(1, solved.points().size())) {
-        alternatives.add(JsonText.object().<ObjectNode>set("dc", dc(point)).set("sections", sections(point)));
+        alternatives.add(
+            JsonText.object().<ObjectNode>set("dc", dc(point)).set("sections", sections(point)));
       }
     }
     try {
@@ -92,7 +97,8 @@ public final class SolutionJson {
   private static ArrayNode sections(OperatingPoint point) {
     ArrayNode sections = JsonNodeFactory.instance.arrayNode();
     for (Map.Entry<String, SectionState> state : point.states().entrySet()) {
-      sections.add(JsonText.object().put("ref", state.getKey()).put("state", state.getValue().word()));
+      sections.add(
+          JsonText.object().put("ref", state.getKey()).put("state", state.getValue().word()));
     }
     return sections;
   }

@@ -39,8 +39,8 @@ import java.util.Map;
  * {@code inputs} (none), an input's {@code ac} and {@code hz}, and tolerances, which then take the
  * values most often fitted (common practice): 5 % for resistors and rails, 10 % for capacitors.
  *
- * <p>Writing prints values in RKM code ({@code 4k7}, {@code 100n}, {@code 470R}) and tolerances
- * as percentages, so that a sheet read back equals the stage written.
+ * <p>Writing prints values in RKM code ({@code 4k7}, {@code 100n}, {@code 470R}) and tolerances as
+ * percentages, so that a sheet read back equals the stage written.
  */
 public final class StageSheet {
   /** The {@code format} of a stage sheet. */
@@ -59,20 +59,40 @@ public final class StageSheet {
   static final double DEFAULT_CAPACITOR_TOLERANCE = 0.10;
 
   private static final List<String> ROOT_KEYS =
-      List.of("format", "version", "title", "board", "ground", "rails", "inputs", "parts", "amplifiers");
+      List.of(
+          "format",
+          "version",
+          "title",
+          "board",
+          "ground",
+          "rails",
+          "inputs",
+          "parts",
+          "amplifiers");
   private static final List<String> RAIL_KEYS = List.of("net", "volts", "tolerance");
   private static final List<String> INPUT_KEYS = List.of("net", "dc", "ac", "hz");
-  private static final List<String> PART_KEYS = List.of("ref", "kind", "value", "tolerance", "nets");
+  private static final List<String> PART_KEYS =
+      List.of("ref", "kind", "value", "tolerance", "nets");
   private static final List<String> AMPLIFIER_KEYS =
-      List.of("ref", "package", "packageType", "section", "class", "inPlus", "inMinus", "out", "vPlus", "vMinus");
+      List.of(
+          "ref",
+          "package",
+          "packageType",
+          "section",
+          "class",
+          "inPlus",
+          "inMinus",
+          "out",
+          "vPlus",
+          "vMinus");
 
   private StageSheet() {}
 
   /**
    * Returns the stage of a sheet file.
    *
-   * @throws InvalidInputException if the file cannot be read or the sheet is not a sound stage;
-   *     the message names the file
+   * @throws InvalidInputException if the file cannot be read or the sheet is not a sound stage; the
+   *     message names the file
    */
   public static Stage read(Path file) {
     return read(readText(file), file.toString());
@@ -96,14 +116,16 @@ public final class StageSheet {
       rails.add(rail(field));
     }
     List<TestInput> inputs = new ArrayList<>();
-    for (JsonField field : root.optional("inputs").map(f -> f.elements("inputs")).orElse(List.of())) {
+    for (JsonField field :
+        root.optional("inputs").map(f -> f.elements("inputs")).orElse(List.of())) {
       inputs.add(input(field));
     }
     List<Part> parts = new ArrayList<>();
     for (JsonField field : root.require("parts", "an array of parts").elements("parts")) {
       parts.add(part(field));
     }
-    List<JsonField> ampFields = root.require("amplifiers", "an array of op-amp sections").elements("op-amp sections");
+    List<JsonField> ampFields =
+        root.require("amplifiers", "an array of op-amp sections").elements("op-amp sections");
     List<Amplifier> amplifiers = new ArrayList<>();
     for (JsonField field : ampFields) {
       amplifiers.add(amplifier(field));
@@ -139,7 +161,8 @@ public final class StageSheet {
     fields.put("rails", rails);
     List<JsonNode> inputs = new ArrayList<>();
     for (TestInput input : stage.inputs()) {
-      ObjectNode node = JsonText.object().put("net", input.net()).set("dc", JsonText.number(input.dc()));
+      ObjectNode node =
+          JsonText.object().put("net", input.net()).set("dc", JsonText.number(input.dc()));
       if (input.hasAc() || input.hz() > 0) {
         node.set("ac", JsonText.number(input.ac()));
         node.set("hz", JsonText.number(input.hz()));
@@ -191,11 +214,14 @@ public final class StageSheet {
     try {
       return Files.readString(file, StandardCharsets.UTF_8);
     } catch (java.nio.file.NoSuchFileException e) {
-      throw new InvalidInputException(file.toString(), "", "no such file (expected an existing file)");
+      throw new InvalidInputException(
+          file.toString(), "", "no such file (expected an existing file)");
     } catch (java.nio.charset.MalformedInputException e) {
-      throw new InvalidInputException(file.toString(), "", "the file is not UTF-8 text (expected a JSON text file)");
+      throw new InvalidInputException(
+          file.toString(), "", "the file is not UTF-8 text (expected a JSON text file)");
     } catch (IOException e) {
-      throw new InvalidInputException(file.toString(), "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+      throw new InvalidInputException(
+          file.toString(), "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
     }
   }
 
@@ -204,15 +230,21 @@ public final class StageSheet {
       Files.writeString(file, text, StandardCharsets.UTF_8);
     } catch (IOException e) {
       throw new InvalidInputException(
-          file.toString(), "", "cannot write the file (" + e.getClass().getSimpleName() + "): expected a writable path");
+          file.toString(),
+          "",
+          "cannot write the file (" + e.getClass().getSimpleName() + "): expected a writable path");
     }
   }
 
   private static Rail rail(JsonField field) {
     field.object("a rail", RAIL_KEYS);
     String net = field.require("net", "the rail's net name").name("the rail's net name");
-    double volts = field.require("volts", "the rail's voltage, e.g. 15 or -15").number("the rail's voltage in volts");
-    double tolerance = field.optional("tolerance").map(JsonField::tolerance).orElse(DEFAULT_RESISTOR_TOLERANCE);
+    double volts =
+        field
+            .require("volts", "the rail's voltage, e.g. 15 or -15")
+            .number("the rail's voltage in volts");
+    double tolerance =
+        field.optional("tolerance").map(JsonField::tolerance).orElse(DEFAULT_RESISTOR_TOLERANCE);
     try {
       return new Rail(net, volts, tolerance);
     } catch (InvalidInputException e) {
@@ -223,13 +255,20 @@ public final class StageSheet {
   private static TestInput input(JsonField field) {
     field.object("a test input", INPUT_KEYS);
     String net = field.require("net", "the input's net name").name("the input's net name");
-    double dc = field.require("dc", "the input's DC level in volts, e.g. 0").number("the DC level in volts");
-    double ac = field.optional("ac").map(f -> f.nonNegative("the AC amplitude in volts")).orElse(0.0);
-    double hz = field.optional("hz").map(f -> f.nonNegative("the AC frequency in hertz")).orElse(0.0);
+    double dc =
+        field
+            .require("dc", "the input's DC level in volts, e.g. 0")
+            .number("the DC level in volts");
+    double ac =
+        field.optional("ac").map(f -> f.nonNegative("the AC amplitude in volts")).orElse(0.0);
+    double hz =
+        field.optional("hz").map(f -> f.nonNegative("the AC frequency in hertz")).orElse(0.0);
     if (ac > 0 && hz <= 0) {
-      throw field.optional("hz")
+      throw field
+          .optional("hz")
           .orElse(field)
-          .error("an input with an ac amplitude needs \"hz\" above 0 (the frequency in hertz, e.g. 1000)");
+          .error(
+              "an input with an ac amplitude needs \"hz\" above 0 (the frequency in hertz, e.g. 1000)");
     }
     try {
       return new TestInput(net, dc, ac, hz);
@@ -249,12 +288,18 @@ public final class StageSheet {
       throw kindField.rewrap(e, "");
     }
     String unit = kind == PartKind.RESISTOR ? "ohms, e.g. 4k7 or 470R" : "farads, e.g. 100n or 2u2";
-    double value = field.require("value", "the value in " + unit).nonNegative("the value in " + unit);
+    double value =
+        field.require("value", "the value in " + unit).nonNegative("the value in " + unit);
     double tolerance =
-        field.optional("tolerance")
+        field
+            .optional("tolerance")
             .map(JsonField::tolerance)
-            .orElse(kind == PartKind.RESISTOR ? DEFAULT_RESISTOR_TOLERANCE : DEFAULT_CAPACITOR_TOLERANCE);
-    JsonField netsField = field.require("nets", "the two nets the part joins, e.g. [\"IN\", \"SUM\"]");
+            .orElse(
+                kind == PartKind.RESISTOR
+                    ? DEFAULT_RESISTOR_TOLERANCE
+                    : DEFAULT_CAPACITOR_TOLERANCE);
+    JsonField netsField =
+        field.require("nets", "the two nets the part joins, e.g. [\"IN\", \"SUM\"]");
     List<JsonField> nets = netsField.elements("two net names");
     if (nets.size() != 2) {
       throw netsField.error("expected exactly two net names, found " + nets.size());
@@ -270,8 +315,12 @@ public final class StageSheet {
 
   private static Amplifier amplifier(JsonField field) {
     field.object("an op-amp section", AMPLIFIER_KEYS);
-    String ref = field.require("ref", "the section's designator, e.g. U1A").name("the section's designator");
-    String pkg = field.require("package", "the package's designator, e.g. U1").name("the package's designator");
+    String ref =
+        field.require("ref", "the section's designator, e.g. U1A").name("the section's designator");
+    String pkg =
+        field
+            .require("package", "the package's designator, e.g. U1")
+            .name("the package's designator");
     JsonField typeField = field.require("packageType", "single-8, dual-8 or quad-14");
     PackageType type;
     try {
@@ -283,13 +332,20 @@ public final class StageSheet {
     String section = sectionField.name("the section letter, e.g. A");
     if (!type.hasSection(section)) {
       throw sectionField.error(
-          "section \"" + section + "\" is not on a " + type.word() + " package (expected one of "
-              + String.join(", ", type.sections()) + ")");
+          "section \""
+              + section
+              + "\" is not on a "
+              + type.word()
+              + " package (expected one of "
+              + String.join(", ", type.sections())
+              + ")");
     }
-    JsonField classField = field.require("class", "classic-bipolar, ground-sensing or rail-to-rail");
+    JsonField classField =
+        field.require("class", "classic-bipolar, ground-sensing or rail-to-rail");
     DeviceClass deviceClass;
     try {
-      deviceClass = DeviceClass.of(classField.name("classic-bipolar, ground-sensing or rail-to-rail"));
+      deviceClass =
+          DeviceClass.of(classField.name("classic-bipolar, ground-sensing or rail-to-rail"));
     } catch (InvalidInputException e) {
       throw classField.rewrap(e, "");
     }
@@ -299,14 +355,24 @@ public final class StageSheet {
     }
     try {
       return new Amplifier(
-          ref, pkg, type, section, deviceClass,
-          nets.get("inPlus"), nets.get("inMinus"), nets.get("out"), nets.get("vPlus"), nets.get("vMinus"));
+          ref,
+          pkg,
+          type,
+          section,
+          deviceClass,
+          nets.get("inPlus"),
+          nets.get("inMinus"),
+          nets.get("out"),
+          nets.get("vPlus"),
+          nets.get("vMinus"));
     } catch (InvalidInputException e) {
       throw field.rewrap(e, e.field());
     }
   }
 
-  /** Rejects an input or supply terminal on a net that no part, other pin, rail or input touches. */
+  /**
+   * Rejects an input or supply terminal on a net that no part, other pin, rail or input touches.
+   */
   private static void checkTerminalNets(Stage stage, List<JsonField> ampFields) {
     Map<String, Integer> uses = new HashMap<>();
     for (Part part : stage.parts()) {
@@ -319,16 +385,29 @@ public final class StageSheet {
       }
     }
     Map<Terminal, String> keys =
-        Map.of(Terminal.IN_PLUS, "inPlus", Terminal.IN_MINUS, "inMinus", Terminal.V_PLUS, "vPlus", Terminal.V_MINUS, "vMinus");
+        Map.of(
+            Terminal.IN_PLUS,
+            "inPlus",
+            Terminal.IN_MINUS,
+            "inMinus",
+            Terminal.V_PLUS,
+            "vPlus",
+            Terminal.V_MINUS,
+            "vMinus");
     for (int i = 0; i < stage.amplifiers().size(); i++) {
       Amplifier amp = stage.amplifiers().get(i);
-      for (Terminal terminal : List.of(Terminal.IN_PLUS, Terminal.IN_MINUS, Terminal.V_PLUS, Terminal.V_MINUS)) {
+      for (Terminal terminal :
+          List.of(Terminal.IN_PLUS, Terminal.IN_MINUS, Terminal.V_PLUS, Terminal.V_MINUS)) {
         String net = amp.net(terminal);
         if (!stage.isDriven(net) && uses.getOrDefault(net, 0) == 1) {
           throw new InvalidInputException(
               ampFields.get(i).source(),
               ampFields.get(i).path() + "." + keys.get(terminal),
-              amp.ref() + " " + terminal.words() + " is on net " + net
+              amp.ref()
+                  + " "
+                  + terminal.words()
+                  + " is on net "
+                  + net
                   + ", which no part, other pin, rail or input touches (expected the name of a net of the stage; misspelt?)");
         }
       }

@@ -6,10 +6,10 @@ import java.math.BigDecimal;
  * Prints part values in RKM code and tolerances as percentages for the files people read and edit
  * ({@code 4k7}, {@code 100n}, {@code 470R}, {@code 1%}).
  *
- * <p>Unlike the four-digit printing of {@link com.stagewise.circuit.value.SiValue}, this keeps every
- * digit, so that a value written and read back with {@code SiValue.parse} is the same double (a
- * stage sheet must round-trip exactly, whatever value the diagnosis or a form put in it). Decimal
- * arithmetic; nothing here depends on the machine's locale.
+ * <p>Unlike the four-digit printing of {@link com.stagewise.circuit.value.SiValue}, this keeps
+ * every digit, so that a value written and read back with {@code SiValue.parse} is the same double
+ * (a stage sheet must round-trip exactly, whatever value the diagnosis or a form put in it).
+ * Decimal arithmetic; nothing here depends on the machine's locale.
  */
 final class ValueText {
   private ValueText() {}
@@ -35,10 +35,13 @@ final class ValueText {
       decade = 0;
     }
     // log10 may land a hair off an exact decade; the decimal mantissa settles it.
-    if (decade < 3 && exact.scaleByPowerOfTen(-3 * decade).compareTo(BigDecimal.valueOf(1000)) >= 0) {
+    if (decade < 3
+        && exact.scaleByPowerOfTen(-3 * decade).compareTo(BigDecimal.valueOf(1000)) >= 0) {
       decade++;
     }
-    if (decade > -4 && exact.scaleByPowerOfTen(-3 * decade).compareTo(BigDecimal.ONE) < 0 && !(ohms && decade == 0)) {
+    if (decade > -4
+        && exact.scaleByPowerOfTen(-3 * decade).compareTo(BigDecimal.ONE) < 0
+        && !(ohms && decade == 0)) {
       decade--;
     }
     BigDecimal mantissa = exact.scaleByPowerOfTen(-3 * decade).stripTrailingZeros();
@@ -58,6 +61,7 @@ final class ValueText {
 
   /** Returns a tolerance fraction as a percentage string, e.g. {@code 1%} or {@code 0.5%}. */
   static String formatTolerance(double fraction) {
-    return BigDecimal.valueOf(fraction).scaleByPowerOfTen(2).stripTrailingZeros().toPlainString() + "%";
+    return BigDecimal.valueOf(fraction).scaleByPowerOfTen(2).stripTrailingZeros().toPlainString()
+        + "%";
   }
 }

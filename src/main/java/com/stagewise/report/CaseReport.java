@@ -9,8 +9,8 @@ import java.time.Instant;
 import java.util.Objects;
 
 /**
- * What a repair report shows: one case with its unit and board model, when the report was made
- * and by which program version.
+ * What a repair report shows: one case with its unit and board model, when the report was made and
+ * by which program version.
  *
  * @param unit the unit repaired
  * @param boardModel the unit's board model
@@ -19,15 +19,21 @@ import java.util.Objects;
  * @param programVersion the Stagewise version that made it
  */
 public record CaseReport(
-    Unit unit, BoardModel boardModel, CaseFile caseFile, Instant generatedAt, String programVersion) {
+    Unit unit,
+    BoardModel boardModel,
+    CaseFile caseFile,
+    Instant generatedAt,
+    String programVersion) {
   public CaseReport {
     Objects.requireNonNull(unit, "unit");
     Objects.requireNonNull(boardModel, "boardModel");
     Objects.requireNonNull(caseFile, "caseFile");
     Objects.requireNonNull(generatedAt, "generatedAt");
     Objects.requireNonNull(programVersion, "programVersion");
-    if (!caseFile.repairCase().unitId().equals(unit.id()) || !unit.boardModelId().equals(boardModel.id())) {
-      throw new IllegalArgumentException("the case, the unit and the board model do not belong together");
+    if (!caseFile.repairCase().unitId().equals(unit.id())
+        || !unit.boardModelId().equals(boardModel.id())) {
+      throw new IllegalArgumentException(
+          "the case, the unit and the board model do not belong together");
     }
   }
 
@@ -37,10 +43,15 @@ public record CaseReport(
    *
    * @throws InvalidInputException if there is no such case
    */
-  public static CaseReport read(HistoryStore store, String caseId, Instant generatedAt, String programVersion) {
+  public static CaseReport read(
+      HistoryStore store, String caseId, Instant generatedAt, String programVersion) {
     CaseFile file =
-        store.caseFile(caseId)
-            .orElseThrow(() -> new InvalidInputException("history", "case", "no case has the id '" + caseId + "'"));
+        store
+            .caseFile(caseId)
+            .orElseThrow(
+                () ->
+                    new InvalidInputException(
+                        "history", "case", "no case has the id '" + caseId + "'"));
     Unit unit = store.unit(file.repairCase().unitId()).orElseThrow();
     BoardModel model = store.findBoardModel(unit.boardModelId()).orElseThrow();
     return new CaseReport(unit, model, file, generatedAt, programVersion);

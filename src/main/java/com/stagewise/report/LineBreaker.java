@@ -22,7 +22,8 @@ final class LineBreaker {
     return lines;
   }
 
-  private static void wrapParagraph(String paragraph, Style style, double width, TextWidth measure, List<String> lines) {
+  private static void wrapParagraph(
+      String paragraph, Style style, double width, TextWidth measure, List<String> lines) {
     if (paragraph.isEmpty()) {
       lines.add("");
       return;
@@ -53,8 +54,7 @@ final class LineBreaker {
   /** Returns how many leading characters of {@code word} fit (at least one, so that it ends). */
   private static int longestFit(String word, Style style, double width, TextWidth measure) {
     int fit = 1;
-    while (fit < word.length()
-        && measure.width(style, word.substring(0, fit + 1)) <= width) {
+    while (fit < word.length() && measure.width(style, word.substring(0, fit + 1)) <= width) {
       fit++;
     }
     return fit;

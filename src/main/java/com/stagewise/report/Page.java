@@ -15,6 +15,9 @@ record Page(int number, List<PageItem> items) {
 
   /** Returns the texts on the page, top to bottom as placed. */
   List<PageItem.Text> texts() {
-    return items.stream().filter(PageItem.Text.class::isInstance).map(PageItem.Text.class::cast).toList();
+    return items.stream()
+        .filter(PageItem.Text.class::isInstance)
+        .map(PageItem.Text.class::cast)
+        .toList();
   }
 }

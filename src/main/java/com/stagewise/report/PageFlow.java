@@ -7,8 +7,8 @@ import java.util.List;
  * Flows text, fields, tables and boxes down A4 pages, starting a new page when the next thing does
  * not fit, and adds the running header and the page footers at the end.
  *
- * <p>All text passes through {@link Printable} here, so nothing placed is unprintable. Distances are
- * in points (1/72 inch); y grows downwards from the top of the page.
+ * <p>All text passes through {@link Printable} here, so nothing placed is unprintable. Distances
+ * are in points (1/72 inch); y grows downwards from the top of the page.
  */
 final class PageFlow {
   /** A4 (ISO 216: 210 mm × 297 mm) in points. */
@@ -17,8 +17,10 @@ final class PageFlow {
   static final double PAGE_HEIGHT = 841.89;
   static final double LEFT = 50;
   static final double RIGHT = PAGE_WIDTH - 50;
+
   /** The top of the body on every page (below the running header). */
   static final double TOP = 58;
+
   /** The lowest point the body may reach (above the footer). */
   static final double BOTTOM = PAGE_HEIGHT - 62;
 
@@ -26,8 +28,10 @@ final class PageFlow {
   private static final double HEADER_RULE = 40;
   private static final double FOOTER_RULE = PAGE_HEIGHT - 50;
   private static final double FOOTER_BASELINE = PAGE_HEIGHT - 36;
+
   /** Space between the text of a table cell and the next column. */
   private static final double CELL_GAP = 6;
+
   private static final double BOX_PADDING = 8;
 
   private final TextWidth measure;
@@ -64,7 +68,10 @@ final class PageFlow {
     }
   }
 
-  /** Starts a new page unless {@code height} points still fit below the cursor (or the page is empty). */
+  /**
+   * Starts a new page unless {@code height} points still fit below the cursor (or the page is
+   * empty).
+   */
   void ensure(double height) {
     if (y + height > BOTTOM && y > TOP) {
       newPage();
@@ -93,8 +100,8 @@ final class PageFlow {
   }
 
   /**
-   * Places a section heading with a rule under it, on a new page if the heading and
-   * {@code keepWithNext} points of what follows would not fit on this one.
+   * Places a section heading with a rule under it, on a new page if the heading and {@code
+   * keepWithNext} points of what follows would not fit on this one.
    */
   void heading(String text, double keepWithNext) {
     gap(12);
@@ -105,10 +112,13 @@ final class PageFlow {
     y += 4;
   }
 
-  /** Places a bold label and its wrapped value beside it, {@code labelWidth} points to the right. */
+  /**
+   * Places a bold label and its wrapped value beside it, {@code labelWidth} points to the right.
+   */
   void field(String label, String value, double labelWidth) {
     Style style = Style.BODY;
-    List<String> lines = LineBreaker.wrap(Printable.text(value), style, bodyWidth() - labelWidth, measure);
+    List<String> lines =
+        LineBreaker.wrap(Printable.text(value), style, bodyWidth() - labelWidth, measure);
     ensure(style.leading());
     place(LEFT, Style.BODY_BOLD, Printable.text(label));
     for (int i = 0; i < lines.size(); i++) {
@@ -131,11 +141,14 @@ final class PageFlow {
     List<List<List<String>>> wrapped = new ArrayList<>();
     for (List<String> row : rows) {
       if (row.size() != columns.size()) {
-        throw new IllegalArgumentException("a row has " + row.size() + " cells for " + columns.size() + " columns");
+        throw new IllegalArgumentException(
+            "a row has " + row.size() + " cells for " + columns.size() + " columns");
       }
       List<List<String>> cells = new ArrayList<>();
       for (int c = 0; c < columns.size(); c++) {
-        cells.add(LineBreaker.wrap(Printable.text(row.get(c)), style, columns.get(c).width() - CELL_GAP, measure));
+        cells.add(
+            LineBreaker.wrap(
+                Printable.text(row.get(c)), style, columns.get(c).width() - CELL_GAP, measure));
       }
       wrapped.add(cells);
     }
@@ -174,7 +187,8 @@ final class PageFlow {
   void box(String title, String text) {
     double inner = bodyWidth() - 2 * BOX_PADDING;
     List<String> lines = LineBreaker.wrap(Printable.text(text), Style.BODY, inner, measure);
-    double height = 2 * BOX_PADDING + Style.BODY_BOLD.leading() + lines.size() * Style.BODY.leading();
+    double height =
+        2 * BOX_PADDING + Style.BODY_BOLD.leading() + lines.size() * Style.BODY.leading();
     ensure(height);
     current.add(new PageItem.Frame(LEFT, y, bodyWidth(), height));
     double top = y;
@@ -200,7 +214,9 @@ final class PageFlow {
       items.add(new PageItem.Line(LEFT, FOOTER_RULE, RIGHT, FOOTER_RULE));
       items.add(new PageItem.Text(LEFT, FOOTER_BASELINE, Style.SMALL, left));
       String number = "Page " + (i + 1) + " of " + pages.size();
-      items.add(new PageItem.Text(RIGHT - measure.width(Style.SMALL, number), FOOTER_BASELINE, Style.SMALL, number));
+      items.add(
+          new PageItem.Text(
+              RIGHT - measure.width(Style.SMALL, number), FOOTER_BASELINE, Style.SMALL, number));
       result.add(new Page(i + 1, items));
     }
     return result;

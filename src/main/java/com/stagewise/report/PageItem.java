@@ -1,8 +1,8 @@
 package com.stagewise.report;
 
 /**
- * One thing drawn on a report page. Coordinates are in points from the page's top-left corner
- * (y grows downwards), as the layout thinks; the PDF writer turns them over.
+ * One thing drawn on a report page. Coordinates are in points from the page's top-left corner (y
+ * grows downwards), as the layout thinks; the PDF writer turns them over.
  */
 sealed interface PageItem {
   /** A line of text whose baseline starts at (x, y). */
@@ -11,6 +11,9 @@ sealed interface PageItem {
   /** A straight line from (x1, y1) to (x2, y2), 0.5 pt wide. */
   record Line(double x1, double y1, double x2, double y2) implements PageItem {}
 
-  /** A rectangle outline with its top-left corner at (x, y), {@code width} × {@code height}, 1 pt wide. */
+  /**
+   * A rectangle outline with its top-left corner at (x, y), {@code width} × {@code height}, 1 pt
+   * wide.
+   */
   record Frame(double x, double y, double width, double height) implements PageItem {}
 }

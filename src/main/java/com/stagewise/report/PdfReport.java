@@ -20,10 +20,10 @@ import org.apache.pdfbox.pdmodel.font.Standard14Fonts;
 /** Writes a repair report as a PDF (A4, the standard Helvetica fonts, nothing embedded). */
 public final class PdfReport {
   /**
-   * PDFBox looks for a Helvetica on this machine to draw with and notes (once per font, at
-   * warning level) when it borrows a look-alike. A written PDF never needs it (the viewer supplies
-   * the standard fonts), so its font notes are kept to real errors. Held here so that the setting
-   * is not collected with the logger.
+   * PDFBox looks for a Helvetica on this machine to draw with and notes (once per font, at warning
+   * level) when it borrows a look-alike. A written PDF never needs it (the viewer supplies the
+   * standard fonts), so its font notes are kept to real errors. Held here so that the setting is
+   * not collected with the logger.
    */
   private static final Logger FONT_NOTES = Logger.getLogger("org.apache.pdfbox.pdmodel.font");
 
@@ -43,7 +43,8 @@ public final class PdfReport {
       Fonts fonts = new Fonts();
       List<Page> pages = ReportLayout.lay(report, fonts::width);
       for (Page page : pages) {
-        PDPage pdfPage = new PDPage(new PDRectangle((float) PageFlow.PAGE_WIDTH, (float) PageFlow.PAGE_HEIGHT));
+        PDPage pdfPage =
+            new PDPage(new PDRectangle((float) PageFlow.PAGE_WIDTH, (float) PageFlow.PAGE_HEIGHT));
         document.addPage(pdfPage);
         try (PDPageContentStream content = new PDPageContentStream(document, pdfPage)) {
           for (PageItem item : page.items()) {
@@ -63,7 +64,8 @@ public final class PdfReport {
     }
   }
 
-  private static void draw(PDPageContentStream content, Fonts fonts, PageItem item) throws IOException {
+  private static void draw(PDPageContentStream content, Fonts fonts, PageItem item)
+      throws IOException {
     // The layout measures y downwards from the top; PDF measures it upwards from the bottom.
     double height = PageFlow.PAGE_HEIGHT;
     if (item instanceof PageItem.Text text) {
@@ -80,7 +82,10 @@ public final class PdfReport {
     } else if (item instanceof PageItem.Frame frame) {
       content.setLineWidth(1f);
       content.addRect(
-          (float) frame.x(), (float) (height - frame.y() - frame.height()), (float) frame.width(), (float) frame.height());
+          (float) frame.x(),
+          (float) (height - frame.y() - frame.height()),
+          (float) frame.width(),
+          (float) frame.height());
       content.stroke();
     }
   }
@@ -94,7 +99,9 @@ public final class PdfReport {
       return style.bold() ? bold : regular;
     }
 
-    /** Returns the width of {@code text} in points; the font's widths are per 1000 units of size. */
+    /**
+     * Returns the width of {@code text} in points; the font's widths are per 1000 units of size.
+     */
     double width(Style style, String text) {
       try {
         return font(style).getStringWidth(text) / 1000.0 * style.size();

@@ -4,14 +4,14 @@ import java.text.Normalizer;
 import java.util.Map;
 
 /**
- * Maps any text to characters that the PDF standard fonts can draw (the WinAnsi character set),
- * so that user text from the history never stops a report half-written.
+ * Maps any text to characters that the PDF standard fonts can draw (the WinAnsi character set), so
+ * that user text from the history never stops a report half-written.
  *
  * <p>Characters of that set are kept as they are (µ, ±, °, —, “ ”, é, ß). Common technical signs
  * outside it become plain text (Ω → "ohm", → → "->", ≤ → "<=", − → "-"); accented letters outside
  * it lose their accents (ł stays unknown, č becomes c); tabs and unusual spaces become a space;
- * control and zero-width characters are dropped; anything else becomes "?". Line breaks are kept
- * as {@code \n}.
+ * control and zero-width characters are dropped; anything else becomes "?". Line breaks are kept as
+ * {@code \n}.
  */
 final class Printable {
   /**
@@ -66,7 +66,9 @@ final class Printable {
 
   /** Returns whether the standard fonts can draw {@code c} as it is. */
   static boolean drawable(char c) {
-    return (c >= 0x20 && c <= 0x7E) || (c >= 0xA1 && c <= 0xFF && c != 0xAD) || WIN_ANSI_EXTRA.indexOf(c) >= 0;
+    return (c >= 0x20 && c <= 0x7E)
+        || (c >= 0xA1 && c <= 0xFF && c != 0xAD)
+        || WIN_ANSI_EXTRA.indexOf(c) >= 0;
   }
 
   private static void append(StringBuilder out, int cp) {
@@ -89,12 +91,18 @@ final class Printable {
       return;
     }
     int type = Character.getType(cp);
-    if (type == Character.CONTROL || type == Character.FORMAT || type == Character.NON_SPACING_MARK
-        || type == Character.ENCLOSING_MARK || type == Character.SURROGATE || cp == 0xAD) {
-      // Control characters, zero-width joiners, soft hyphens, stray combining marks: nothing to draw.
+    if (type == Character.CONTROL
+        || type == Character.FORMAT
+        || type == Character.NON_SPACING_MARK
+        || type == Character.ENCLOSING_MARK
+        || type == Character.SURROGATE
+        || cp == 0xAD) {
+      // Control characters, zero-width joiners, soft hyphens, stray combining marks: nothing to
+      // draw.
       return;
     }
-    String decomposed = Normalizer.normalize(new String(Character.toChars(cp)), Normalizer.Form.NFKD);
+    String decomposed =
+        Normalizer.normalize(new String(Character.toChars(cp)), Normalizer.Form.NFKD);
     StringBuilder base = new StringBuilder();
     for (char c : decomposed.toCharArray()) {
       if (Character.getType(c) == Character.NON_SPACING_MARK) {

@@ -42,7 +42,10 @@ final class ReportLayout {
     this.flow =
         new PageFlow(
             measure,
-            "Repair report — unit " + report.unit().serial() + " — case " + shortId(report.caseFile().repairCase().id()));
+            "Repair report — unit "
+                + report.unit().serial()
+                + " — case "
+                + shortId(report.caseFile().repairCase().id()));
   }
 
   /** Returns the pages of the report, measured with {@code measure}. */
@@ -61,9 +64,9 @@ final class ReportLayout {
   }
 
   /**
-   * Returns a number to 6 significant digits (more than any bench meter shows), without exponent
-   * or trailing zeros, with a decimal point in every locale: 14.93, -13.45 (not
-   * -13.450000000000001), 1000, 0.000023.
+   * Returns a number to 6 significant digits (more than any bench meter shows), without exponent or
+   * trailing zeros, with a decimal point in every locale: 14.93, -13.45 (not -13.450000000000001),
+   * 1000, 0.000023.
    */
   static String number(double value) {
     if (!Double.isFinite(value)) {
@@ -80,7 +83,10 @@ final class ReportLayout {
     flow.heading("Unit", Style.BODY.leading());
     flow.field("Serial number", report.unit().serial(), LABEL_WIDTH);
     String maker = report.boardModel().maker();
-    flow.field("Board model", report.boardModel().name() + (maker.isBlank() ? "" : " (" + maker + ")"), LABEL_WIDTH);
+    flow.field(
+        "Board model",
+        report.boardModel().name() + (maker.isBlank() ? "" : " (" + maker + ")"),
+        LABEL_WIDTH);
     flow.field("Owner / job", orNone(report.unit().owner(), "not recorded"), LABEL_WIDTH);
 
     flow.heading("Case", Style.BODY.leading());
@@ -88,7 +94,10 @@ final class ReportLayout {
     flow.field("Opened", whenUtc(c.openedAt()), LABEL_WIDTH);
     flow.field("Closed", c.closedAt() == null ? "not yet" : whenUtc(c.closedAt()), LABEL_WIDTH);
     flow.field("Status", c.status().word(), LABEL_WIDTH);
-    flow.field("Outcome", c.outcome() == null ? "none yet (the case is open)" : c.outcome().word(), LABEL_WIDTH);
+    flow.field(
+        "Outcome",
+        c.outcome() == null ? "none yet (the case is open)" : c.outcome().word(),
+        LABEL_WIDTH);
     flow.field("Reported symptom", orNone(c.symptom(), "not recorded"), LABEL_WIDTH);
     flow.gap(10);
     flow.box(CAUTION_TITLE, CAUTION_TEXT);
@@ -99,7 +108,10 @@ final class ReportLayout {
     confirmed(c);
     notes();
     return flow.finish(
-        "Generated " + whenUtc(report.generatedAt()) + " by Stagewise " + report.programVersion()
+        "Generated "
+            + whenUtc(report.generatedAt())
+            + " by Stagewise "
+            + report.programVersion()
             + ". Times are UTC.");
   }
 
@@ -116,21 +128,30 @@ final class ReportLayout {
       flow.paragraph(Style.BODY, "Meter: " + meters.get(0));
       flow.gap(3);
     }
-    List<Column> columns = new ArrayList<>(List.of(
-        new Column("#", 26), new Column("Test point", 84), new Column("Kind", 72), new Column("Value", 88),
-        new Column("Taken (UTC)", 80)));
+    List<Column> columns =
+        new ArrayList<>(
+            List.of(
+                new Column("#", 26),
+                new Column("Test point", 84),
+                new Column("Kind", 72),
+                new Column("Value", 88),
+                new Column("Taken (UTC)", 80)));
     if (!oneMeter) {
       columns.add(new Column("Meter", PageFlow.bodyWidth() - 350));
     }
     List<List<String>> rows = new ArrayList<>();
     for (int i = 0; i < readings.size(); i++) {
       StoredReading r = readings.get(i);
-      List<String> row = new ArrayList<>(List.of(
-          Integer.toString(i + 1),
-          r.at(),
-          r.hz() == null ? "DC" : "AC at " + number(r.hz()) + " Hz",
-          number(r.value()) + " V" + (r.uncertainty() == null ? "" : " ±" + number(r.uncertainty())),
-          when(r.takenAt())));
+      List<String> row =
+          new ArrayList<>(
+              List.of(
+                  Integer.toString(i + 1),
+                  r.at(),
+                  r.hz() == null ? "DC" : "AC at " + number(r.hz()) + " Hz",
+                  number(r.value())
+                      + " V"
+                      + (r.uncertainty() == null ? "" : " ±" + number(r.uncertainty())),
+                  when(r.takenAt())));
       if (!oneMeter) {
         row.add(r.meterText());
       }
@@ -151,23 +172,33 @@ final class ReportLayout {
       flow.ensure(Style.BODY_BOLD.leading() + 3 * Style.TABLE.leading());
       flow.paragraph(
           Style.BODY_BOLD,
-          "Computed " + whenUtc(list.computedAt()) + " by Stagewise " + list.programVersion() + "; verdict: " + list.verdict());
+          "Computed "
+              + whenUtc(list.computedAt())
+              + " by Stagewise "
+              + list.programVersion()
+              + "; verdict: "
+              + list.verdict());
       List<List<String>> rows = new ArrayList<>();
       for (StoredSuspect s : list.suspects()) {
         List<String> others = s.group().stream().filter(f -> !f.equals(s.fault())).toList();
-        rows.add(List.of(
-            Integer.toString(s.rank()),
-            s.fault(),
-            String.format(Locale.ROOT, "%.1f %%", 100 * s.probability()),
-            others.isEmpty() ? "" : String.join(", ", others),
-            s.why()));
+        rows.add(
+            List.of(
+                Integer.toString(s.rank()),
+                s.fault(),
+                String.format(Locale.ROOT, "%.1f %%", 100 * s.probability()),
+                others.isEmpty() ? "" : String.join(", ", others),
+                s.why()));
       }
       if (rows.isEmpty()) {
         flow.paragraph(Style.BODY, "No suspects were listed.");
       } else {
         flow.table(
-            List.of(new Column("#", 24), new Column("Fault", 90), new Column("Probability", 62),
-                new Column("Cannot be told from", 100), new Column("Why", PageFlow.bodyWidth() - 276)),
+            List.of(
+                new Column("#", 24),
+                new Column("Fault", 90),
+                new Column("Probability", 62),
+                new Column("Cannot be told from", 100),
+                new Column("Why", PageFlow.bodyWidth() - 276)),
             rows);
       }
       if (!list.nextProbes().isBlank()) {
@@ -186,11 +217,23 @@ final class ReportLayout {
     }
     List<List<String>> rows = new ArrayList<>();
     for (RepairAction a : actions) {
-      rows.add(List.of(when(a.at()), a.kind().word().replace('-', ' '), a.part(), a.oldValue(), a.newValue(), a.text()));
+      rows.add(
+          List.of(
+              when(a.at()),
+              a.kind().word().replace('-', ' '),
+              a.part(),
+              a.oldValue(),
+              a.newValue(),
+              a.text()));
     }
     flow.table(
-        List.of(new Column("When (UTC)", 80), new Column("What", 70), new Column("Part", 38), new Column("Old value", 85),
-            new Column("New value", 85), new Column("Details", PageFlow.bodyWidth() - 358)),
+        List.of(
+            new Column("When (UTC)", 80),
+            new Column("What", 70),
+            new Column("Part", 38),
+            new Column("Old value", 85),
+            new Column("New value", 85),
+            new Column("Details", PageFlow.bodyWidth() - 358)),
         rows);
   }
 

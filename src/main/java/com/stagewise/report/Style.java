@@ -27,7 +27,10 @@ enum Style {
     return size;
   }
 
-  /** Returns the distance from one baseline to the next, in points (1.25 times the size, common practice). */
+  /**
+   * Returns the distance from one baseline to the next, in points (1.25 times the size, common
+   * practice).
+   */
   double leading() {
     return size * 1.25;
   }

@@ -16,8 +16,8 @@ import java.util.function.Consumer;
  * solves one topology many times with changed numbers (tolerance spreads, fault grids).
  *
  * <p>Nets, parts and sections are addressed by index ({@link #net}, {@link #part}, {@link
- * #section}); part values, driven-net voltages and device parameters can be changed between
- * solves. Not safe for use by several threads at once.
+ * #section}); part values, driven-net voltages and device parameters can be changed between solves.
+ * Not safe for use by several threads at once.
  */
 public final class CompiledStage {
   /** Consistency slack in volts, far below any meter's resolution. */
@@ -165,8 +165,8 @@ public final class CompiledStage {
   }
 
   /**
-   * Returns every consistent state by trying every combination of section states, with no
-   * stability filter. For cross-checks of the search; slow for many sections.
+   * Returns every consistent state by trying every combination of section states, with no stability
+   * filter. For cross-checks of the search; slow for many sections.
    */
   public List<State> enumerateConsistent() {
     List<State> found = new ArrayList<>();
@@ -181,8 +181,8 @@ public final class CompiledStage {
   }
 
   /**
-   * A state's factorised system, for fast re-solves after small changes of the numbers: one step
-   * of x ← x + M⁻¹·(b − M'·x) with the old factors, exact to first order in the change.
+   * A state's factorised system, for fast re-solves after small changes of the numbers: one step of
+   * x ← x + M⁻¹·(b − M'·x) with the old factors, exact to first order in the change.
    */
   public final class Linearization {
     private final SectionState[] states;
@@ -198,8 +198,8 @@ public final class CompiledStage {
     }
 
     /**
-     * Returns the state after the numbers changed, to first order, if the sections stay in the
-     * same states; null when a section would change state (then solve again in full).
+     * Returns the state after the numbers changed, to first order, if the sections stay in the same
+     * states; null when a section would change state (then solve again in full).
      */
     public State step() {
       double[] dx = system.factors().solve(network.residual(states, collapsed, x));
@@ -325,7 +325,9 @@ public final class CompiledStage {
 
   private boolean allLinearStable(SectionState[] states, Network.DcSystem system) {
     for (int k = 0; k < states.length; k++) {
-      if (network.forced[k] == null && states[k] == SectionState.LINEAR && !system.stable(network, k)) {
+      if (network.forced[k] == null
+          && states[k] == SectionState.LINEAR
+          && !system.stable(network, k)) {
         return false;
       }
     }
@@ -380,8 +382,8 @@ public final class CompiledStage {
   }
 
   /**
-   * Solves with the given states; the choice between normal and mid-supply clamp rows is settled
-   * by re-solving if the supply pins' voltages change it.
+   * Solves with the given states; the choice between normal and mid-supply clamp rows is settled by
+   * re-solving if the supply pins' voltages change it.
    */
   private Network.DcSystem solveConsistently(SectionState[] states) {
     int n = network.sections.length;
@@ -416,7 +418,8 @@ public final class CompiledStage {
     }
     if (free > MAX_ENUMERATED_SECTIONS) {
       return new Unsettled(
-          "", "the saturation search did not settle and the stage has too many sections to try every state");
+          "",
+          "the saturation search did not settle and the stage has too many sections to try every state");
     }
     List<State> found = new ArrayList<>();
     forEachCombination(
@@ -432,7 +435,8 @@ public final class CompiledStage {
         });
     if (found.isEmpty()) {
       String section = network.sections.length > 0 ? network.sections[0].ref() : "";
-      return new Unsettled(section, "no combination of linear and clamped outputs satisfies every section");
+      return new Unsettled(
+          section, "no combination of linear and clamped outputs satisfies every section");
     }
     return new Settled(found);
   }

@@ -15,7 +15,9 @@ import java.util.Optional;
  * @param forced sections whose output is forced to {@code HIGH}, {@code LOW} or {@code DEAD}
  */
 public record Conditions(
-    Map<String, DeviceParams> devices, Map<String, Double> driven, Map<String, SectionState> forced) {
+    Map<String, DeviceParams> devices,
+    Map<String, Double> driven,
+    Map<String, SectionState> forced) {
 
   /** Nominal everything: the sheet's values and each class's nominal parameters. */
   public static final Conditions NOMINAL = new Conditions(Map.of(), Map.of(), Map.of());

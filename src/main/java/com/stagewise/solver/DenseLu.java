@@ -58,9 +58,7 @@ final class DenseLu {
     }
   }
 
-  /**
-   * Factorises {@code a} in place and returns the factors, or null when the matrix is singular.
-   */
+  /** Factorises {@code a} in place and returns the factors, or null when the matrix is singular. */
   static Factors factor(double[][] a) {
     int n = a.length;
     double[] rowScale = new double[n];
@@ -116,8 +114,8 @@ final class DenseLu {
   }
 
   /**
-   * Solves the complex system {@code (ar + j·ai)·x = br + j·bi} in place and returns {@code
-   * {re, im}}, or null when the matrix is singular.
+   * Solves the complex system {@code (ar + j·ai)·x = br + j·bi} in place and returns {@code {re,
+   * im}}, or null when the matrix is singular.
    */
   static double[][] solveComplex(double[][] ar, double[][] ai, double[] br, double[] bi) {
     int n = br.length;

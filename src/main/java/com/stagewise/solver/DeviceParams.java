@@ -5,9 +5,9 @@ import com.stagewise.circuit.DeviceClass;
 /**
  * The parameters of one op-amp section as the solver models it.
  *
- * <p>The output is an internal source {@code gain · (v(in+) − v(in−) + offset)}, clamped to
- * {@code [v(v−) + headroomLow, v(v+) − headroomHigh]}, behind {@code outputResistance}. Bias
- * currents flow from each input's net into the section.
+ * <p>The output is an internal source {@code gain · (v(in+) − v(in−) + offset)}, clamped to {@code
+ * [v(v−) + headroomLow, v(v+) − headroomHigh]}, behind {@code outputResistance}. Bias currents flow
+ * from each input's net into the section.
  *
  * @param gain open-loop DC gain, volts per volt, above 0
  * @param offset input offset voltage in volts, added to the differential input
@@ -58,12 +58,14 @@ public record DeviceParams(
 
   /** Returns a copy with another open-loop gain. */
   public DeviceParams withGain(double newGain) {
-    return new DeviceParams(newGain, offset, biasPlus, biasMinus, outputResistance, headroomLow, headroomHigh);
+    return new DeviceParams(
+        newGain, offset, biasPlus, biasMinus, outputResistance, headroomLow, headroomHigh);
   }
 
   /** Returns a copy with another input offset voltage. */
   public DeviceParams withOffset(double newOffset) {
-    return new DeviceParams(gain, newOffset, biasPlus, biasMinus, outputResistance, headroomLow, headroomHigh);
+    return new DeviceParams(
+        gain, newOffset, biasPlus, biasMinus, outputResistance, headroomLow, headroomHigh);
   }
 
   /** Returns a copy with other bias currents. */

@@ -14,10 +14,10 @@ import java.util.Map;
  * numbers (part values, driven voltages, device parameters) held apart so that they can be changed
  * and the stage solved again without compiling it anew.
  *
- * <p>Unknowns are the voltages of the undriven nets, then one internal source node per section
- * that drives (not dead). Each section's internal node connects to its output net through the
- * output resistance; its row holds the section's equation for its current state instead of a
- * current balance (the source's current is then whatever the balance at the output needs).
+ * <p>Unknowns are the voltages of the undriven nets, then one internal source node per section that
+ * drives (not dead). Each section's internal node connects to its output net through the output
+ * resistance; its row holds the section's equation for its current state instead of a current
+ * balance (the source's current is then whatever the balance at the output needs).
  */
 final class Network {
   /**
@@ -29,8 +29,10 @@ final class Network {
   final Stage stage;
   final String[] nets;
   final Map<String, Integer> netIndex = new HashMap<>();
+
   /** Per net: its index among the unknowns, or -1 for a driven net. */
   final int[] unknownOf;
+
   /** Per net: the volts of a driven net, NaN for an undriven one. */
   final double[] driven;
 
@@ -48,12 +50,15 @@ final class Network {
   final int[] vMinus;
   final DeviceParams[] params;
   final SectionState[] forced;
+
   /** Index of each section's internal node among the unknowns, or -1 for a dead section. */
   final int[] sourceNode;
+
   final int size;
 
   /** Per net: the AC amplitude applied there (inputs at the analysis frequency), else 0. */
   final double[] acSource;
+
   /** The AC analysis frequency: the first input with an AC amplitude; 0 when none. */
   final double acHz;
 
@@ -146,7 +151,8 @@ final class Network {
 
   /** Whether the limits of section k have collapsed to the mid-supply point at x. */
   boolean collapsed(double[] x, int k) {
-    return volts(x, vPlus[k]) - params[k].headroomHigh() < volts(x, vMinus[k]) + params[k].headroomLow();
+    return volts(x, vPlus[k]) - params[k].headroomHigh()
+        < volts(x, vMinus[k]) + params[k].headroomLow();
   }
 
   /** The internal source's demanded value {@code A·(v+ − v− + offset)} of section k at x. */
@@ -269,7 +275,8 @@ final class Network {
     }
     for (int k = 0; k < sections.length; k++) {
       if (sourceNode[k] >= 0) {
-        stampComplex(ar, ai, br, bi, out[k], -1 - sourceNode[k], 1 / params[k].outputResistance(), 0);
+        stampComplex(
+            ar, ai, br, bi, out[k], -1 - sourceNode[k], 1 / params[k].outputResistance(), 0);
       }
     }
     for (int k = 0; k < sections.length; k++) {
@@ -329,7 +336,8 @@ final class Network {
     };
   }
 
-  private void writeSectionRow(double[][] a, double[] b, int k, SectionState state, boolean collapsed) {
+  private void writeSectionRow(
+      double[][] a, double[] b, int k, SectionState state, boolean collapsed) {
     int row = sourceNode[k];
     Arrays.fill(a[row], 0);
     a[row][row] = 1;
@@ -391,7 +399,14 @@ final class Network {
    * names the unknown u directly: a section's internal node).
    */
   private void stampComplex(
-      double[][] ar, double[][] ai, double[] br, double[] bi, int netA, int netB, double g, double susceptance) {
+      double[][] ar,
+      double[][] ai,
+      double[] br,
+      double[] bi,
+      int netA,
+      int netB,
+      double g,
+      double susceptance) {
     int i = unknownOf[netA];
     int j = netB < 0 ? -1 - netB : unknownOf[netB];
     double sourceB = netB < 0 ? 0 : acSource[netB];

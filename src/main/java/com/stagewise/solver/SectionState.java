@@ -17,7 +17,10 @@ public enum SectionState {
     this.word = word;
   }
 
-  /** Returns the word used in solution files: {@code linear}, {@code high}, {@code low}, {@code dead}. */
+  /**
+   * Returns the word used in solution files: {@code linear}, {@code high}, {@code low}, {@code
+   * dead}.
+   */
   public String word() {
     return word;
   }

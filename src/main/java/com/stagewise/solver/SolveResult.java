@@ -6,7 +6,8 @@ import java.util.List;
  * The outcome of a DC solve: one or more consistent operating points, a floating net, or no
  * consistent combination of section states.
  */
-public sealed interface SolveResult permits SolveResult.Solved, SolveResult.Floating, SolveResult.NoConsistentState {
+public sealed interface SolveResult
+    permits SolveResult.Solved, SolveResult.Floating, SolveResult.NoConsistentState {
 
   /**
    * The stage has at least one consistent operating point.

@@ -8,9 +8,9 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * Says what every net and package pin of a stage should read: modified nodal analysis at DC with
- * an exact search for the saturation state of every op-amp section, and small-signal AC about the
- * DC point.
+ * Says what every net and package pin of a stage should read: modified nodal analysis at DC with an
+ * exact search for the saturation state of every op-amp section, and small-signal AC about the DC
+ * point.
  *
  * <p>Each section is linear (its internal source equals gain times the differential input), clamped
  * high or clamped low; the limits follow the actual voltages at the section's own supply pins, so a
@@ -90,8 +90,8 @@ public final class StageSolver {
   }
 
   /**
-   * Returns every consistent operating point by trying every combination of section states, with
-   * no stability filter. Exposed for cross-checks of the search; slow for many sections.
+   * Returns every consistent operating point by trying every combination of section states, with no
+   * stability filter. Exposed for cross-checks of the search; slow for many sections.
    */
   public static List<OperatingPoint> enumerateConsistent(Stage stage, Conditions conditions) {
     CompiledStage compiled = CompiledStage.of(stage, conditions);
@@ -102,7 +102,8 @@ public final class StageSolver {
     return points;
   }
 
-  private static OperatingPoint pointOf(Stage stage, CompiledStage compiled, CompiledStage.State state) {
+  private static OperatingPoint pointOf(
+      Stage stage, CompiledStage compiled, CompiledStage.State state) {
     Map<String, Double> nets = new LinkedHashMap<>();
     List<String> names = compiled.nets();
     for (int i = 0; i < names.size(); i++) {

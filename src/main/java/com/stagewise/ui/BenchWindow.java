@@ -23,8 +23,8 @@ import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 
 /**
- * The window's content: the steps of a repair on top, the unit and case in a line below, the
- * screen in the middle, a progress line at the bottom, and the overlays over all of it.
+ * The window's content: the steps of a repair on top, the unit and case in a line below, the screen
+ * in the middle, a progress line at the bottom, and the overlays over all of it.
  *
  * <p>Shortcuts: Ctrl+1 … Ctrl+6 open the screens in order.
  */
@@ -74,11 +74,15 @@ public final class BenchWindow {
 
   /** Adds the Ctrl+1 … Ctrl+6 shortcuts to the scene. */
   public void addShortcuts(javafx.scene.Scene scene) {
-    KeyCode[] digits = {KeyCode.DIGIT1, KeyCode.DIGIT2, KeyCode.DIGIT3, KeyCode.DIGIT4, KeyCode.DIGIT5, KeyCode.DIGIT6};
+    KeyCode[] digits = {
+      KeyCode.DIGIT1, KeyCode.DIGIT2, KeyCode.DIGIT3, KeyCode.DIGIT4, KeyCode.DIGIT5, KeyCode.DIGIT6
+    };
     for (Step step : Step.values()) {
       scene
           .getAccelerators()
-          .put(new KeyCodeCombination(digits[step.ordinal()], KeyCombination.SHORTCUT_DOWN), () -> bench.go(step));
+          .put(
+              new KeyCodeCombination(digits[step.ordinal()], KeyCombination.SHORTCUT_DOWN),
+              () -> bench.go(step));
     }
   }
 
@@ -156,11 +160,16 @@ public final class BenchWindow {
                     return bench.stepProperty().get().purpose() + ".";
                   }
                   String text =
-                      "Unit " + bench.unitProperty().get().serial() + " (" + bench.boardModelProperty().get().name() + ")";
+                      "Unit "
+                          + bench.unitProperty().get().serial()
+                          + " ("
+                          + bench.boardModelProperty().get().name()
+                          + ")";
                   if (bench.openCaseProperty().get() != null) {
                     text += "  ·  Case: " + bench.openCaseProperty().get().symptom();
                   }
-                  if (bench.stageProperty().get() != null && bench.openCaseProperty().get() != null) {
+                  if (bench.stageProperty().get() != null
+                      && bench.openCaseProperty().get() != null) {
                     text += "  ·  Stage: " + bench.stageProperty().get().title();
                   }
                   return text;
@@ -174,7 +183,9 @@ public final class BenchWindow {
     mains.getStyleClass().add("mains");
     mains.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
     what.setMinWidth(0);
-    mains.visibleProperty().bind(bench.mainsPoweredProperty().and(bench.unitProperty().isNotNull()));
+    mains
+        .visibleProperty()
+        .bind(bench.mainsPoweredProperty().and(bench.unitProperty().isNotNull()));
     mains.managedProperty().bind(mains.visibleProperty());
     Region spring = new Region();
     HBox.setHgrow(spring, Priority.ALWAYS);
@@ -183,7 +194,8 @@ public final class BenchWindow {
   }
 
   private HBox statusBar(
-      javafx.beans.value.ObservableIntegerValue pending, javafx.beans.value.ObservableStringValue working) {
+      javafx.beans.value.ObservableIntegerValue pending,
+      javafx.beans.value.ObservableStringValue working) {
     HBox bar = new HBox();
     bar.getStyleClass().add("status-bar");
     bar.setAlignment(Pos.CENTER_LEFT);
@@ -195,7 +207,9 @@ public final class BenchWindow {
     progress.visibleProperty().bind(busy);
     progress.managedProperty().bind(busy);
     text.textProperty()
-        .bind(Bindings.createStringBinding(() -> pending.get() > 0 ? working.get() + " …" : "Ready.", pending, working));
+        .bind(
+            Bindings.createStringBinding(
+                () -> pending.get() > 0 ? working.get() + " …" : "Ready.", pending, working));
     Pane spring = new Pane();
     HBox.setHgrow(spring, Priority.ALWAYS);
     Label keys = new Label("Keys: Ctrl+1 … Ctrl+6 switch screens, Enter confirms");

@@ -42,13 +42,18 @@ public record ExpectedVolts(
     return nominal.getOrDefault(testPoint, Double.NaN);
   }
 
-  /** Solves the stage and its tolerance corners. Slow for big stages: call off the screen's thread. */
+  /**
+   * Solves the stage and its tolerance corners. Slow for big stages: call off the screen's thread.
+   */
   public static ExpectedVolts of(Stage stage) {
     SolveResult result = StageSolver.solve(stage);
     if (!(result instanceof SolveResult.Solved solved)) {
       String why;
       if (result instanceof SolveResult.Floating f) {
-        why = "nothing sets the voltage of " + String.join(", ", f.nets()) + "; check the parts' nets";
+        why =
+            "nothing sets the voltage of "
+                + String.join(", ", f.nets())
+                + "; check the parts' nets";
       } else if (result instanceof SolveResult.NoConsistentState n) {
         why = "section " + n.section() + " has no steady state: " + n.reason();
       } else {
@@ -61,7 +66,13 @@ public record ExpectedVolts(
     nominal.putAll(point.pins());
     Map<String, Double> up = new LinkedHashMap<>();
     Map<String, Double> down = new LinkedHashMap<>();
-    nominal.keySet().forEach(k -> { up.put(k, 0.0); down.put(k, 0.0); });
+    nominal
+        .keySet()
+        .forEach(
+            k -> {
+              up.put(k, 0.0);
+              down.put(k, 0.0);
+            });
     for (Stage corner : corners(stage)) {
       if (StageSolver.solve(corner) instanceof SolveResult.Solved c) {
         OperatingPoint p = c.primary();
@@ -110,7 +121,10 @@ public record ExpectedVolts(
         for (int sign : new int[] {-1, 1}) {
           List<Rail> rails = new ArrayList<>();
           for (Rail r : stage.rails()) {
-            rails.add(r.net().equals(rail.net()) ? new Rail(r.net(), r.volts() * (1 + sign * r.tolerance()), r.tolerance()) : r);
+            rails.add(
+                r.net().equals(rail.net())
+                    ? new Rail(r.net(), r.volts() * (1 + sign * r.tolerance()), r.tolerance())
+                    : r);
           }
           corners.add(stage.withRails(rails));
         }

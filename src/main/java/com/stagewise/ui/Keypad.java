@@ -45,11 +45,14 @@ public final class Keypad extends GridPane {
 
   /** Makes the keypad type into {@code field} whenever that field has the focus. */
   public void follow(TextInputControl field) {
-    field.focusedProperty().addListener((o, was, is) -> {
-      if (is) {
-        target.set(field.textProperty());
-      }
-    });
+    field
+        .focusedProperty()
+        .addListener(
+            (o, was, is) -> {
+              if (is) {
+                target.set(field.textProperty());
+              }
+            });
   }
 
   private void type(String key) {

@@ -12,8 +12,8 @@ import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 
 /**
- * Shows the safety caution and problems as a panel over the whole window (no separate windows:
- * they stay put on a touch screen and one tap closes them). One at a time; the rest wait in turn.
+ * Shows the safety caution and problems as a panel over the whole window (no separate windows: they
+ * stay put on a touch screen and one tap closes them). One at a time; the rest wait in turn.
  */
 public final class Overlays implements Caution, Problems {
   private final StackPane layer = new StackPane();

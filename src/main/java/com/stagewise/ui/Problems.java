@@ -18,7 +18,8 @@ public interface Problems {
 
   /** Shows a failed piece of work with the exception's message as "what happened". */
   default void failed(String title, Exception e, String todo) {
-    String message = e.getMessage() == null || e.getMessage().isBlank() ? e.toString() : e.getMessage();
+    String message =
+        e.getMessage() == null || e.getMessage().isBlank() ? e.toString() : e.getMessage();
     show(title, message, todo);
   }
 }

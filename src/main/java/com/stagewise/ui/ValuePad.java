@@ -27,7 +27,8 @@ public final class ValuePad extends VBox {
     setSpacing(8);
     display.getStyleClass().add("value-display");
     // Inline, so that no text-field rule of the theme can hide the digits on the dark display.
-    display.setStyle("-fx-text-fill: #ffffff; -fx-background-color: #1d2b36; -fx-prompt-text-fill: #9fb3c2;");
+    display.setStyle(
+        "-fx-text-fill: #ffffff; -fx-background-color: #1d2b36; -fx-prompt-text-fill: #9fb3c2;");
     display.setPromptText("type or tap");
     display.setId(idPrefix + "-display");
     display.textProperty().bindBidirectional(model.textProperty());
@@ -58,8 +59,11 @@ public final class ValuePad extends VBox {
     Label legend = new Label();
     legend.getStyleClass().add("hint");
     legend.setWrapText(true);
-    legend.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(
-        () -> legend(model.quantityProperty().get()), model.quantityProperty()));
+    legend
+        .textProperty()
+        .bind(
+            javafx.beans.binding.Bindings.createStringBinding(
+                () -> legend(model.quantityProperty().get()), model.quantityProperty()));
     getChildren().addAll(display, new HBox(12, reading, problem), hint, keys, legend, enter);
   }
 
@@ -75,7 +79,10 @@ public final class ValuePad extends VBox {
       for (int col = 0; col < 3; col++) {
         String key = digits[row][col];
         if (key == null) {
-          key = model.quantityProperty().get() == ValuePadModel.Quantity.VOLTS ? ValuePadModel.SIGN : null;
+          key =
+              model.quantityProperty().get() == ValuePadModel.Quantity.VOLTS
+                  ? ValuePadModel.SIGN
+                  : null;
         }
         if (key != null) {
           keys.add(key(idPrefix, key, key), col, row);

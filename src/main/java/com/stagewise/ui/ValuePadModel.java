@@ -111,7 +111,10 @@ public final class ValuePadModel {
     return value.get() != null;
   }
 
-  /** Applies one key of the pad: a digit, ".", a prefix letter, {@link #BACK}, {@link #CLEAR}, {@link #SIGN}. */
+  /**
+   * Applies one key of the pad: a digit, ".", a prefix letter, {@link #BACK}, {@link #CLEAR},
+   * {@link #SIGN}.
+   */
   public void press(String key) {
     String now = text.get() == null ? "" : text.get();
     switch (key) {

@@ -3,8 +3,8 @@ package com.stagewise.ui;
 import com.stagewise.circuit.Reading;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.Outcome;
-import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.ReadingKind;
+import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.StoredReading;
 import java.time.Instant;
 import java.time.ZoneId;
@@ -97,7 +97,10 @@ public final class Words {
       case "open" -> what + " open";
       case "short" -> what + " shorted";
       case "high" -> what + " drifted high";
-      case "low" -> what.matches("[A-Za-z]+\\d*[A-Za-z]*") && !what.matches("[RC]\\d+.*") ? "Rail " + what + " low" : what + " drifted low";
+      case "low" ->
+          what.matches("[A-Za-z]+\\d*[A-Za-z]*") && !what.matches("[RC]\\d+.*")
+              ? "Rail " + what + " low"
+              : what + " drifted low";
       case "stuck-high" -> what + " output stuck high";
       case "stuck-low" -> what + " output stuck low";
       case "dead" -> what + " output dead (not driving)";
@@ -124,7 +127,10 @@ public final class Words {
       line.append(' ').append(a.part());
     }
     if (!a.oldValue().isEmpty() || !a.newValue().isEmpty()) {
-      line.append(": ").append(a.oldValue().isEmpty() ? "?" : a.oldValue()).append(" → ").append(a.newValue().isEmpty() ? "?" : a.newValue());
+      line.append(": ")
+          .append(a.oldValue().isEmpty() ? "?" : a.oldValue())
+          .append(" → ")
+          .append(a.newValue().isEmpty() ? "?" : a.newValue());
     }
     if (!a.text().isEmpty()) {
       line.append(" — ").append(a.text());
@@ -147,7 +153,9 @@ public final class Words {
     Reading.Kind kind = stored.kind() == ReadingKind.AC ? Reading.Kind.AC : Reading.Kind.DC;
     double hz = kind == Reading.Kind.AC && stored.hz() != null ? stored.hz() : 0;
     OptionalDouble uncertainty =
-        stored.uncertainty() == null ? OptionalDouble.empty() : OptionalDouble.of(stored.uncertainty());
+        stored.uncertainty() == null
+            ? OptionalDouble.empty()
+            : OptionalDouble.of(stored.uncertainty());
     return new Reading(stored.at(), kind, stored.value(), hz, uncertainty);
   }
 }

@@ -16,26 +16,33 @@ class AppOptionsTest {
   void folder_noOptions_isTheUsersDataFolder() {
     // DESIGN.md: the default lives in $XDG_DATA_HOME/stagewise, else ~/.local/share/stagewise.
     DataFolder folder = AppOptions.parse(List.of()).folder(Map.of(), HOME);
-    assertThat(folder.database()).isEqualTo(Path.of(HOME, ".local", "share", "stagewise", "stagewise.db"));
-    assertThat(folder.settings()).isEqualTo(Path.of(HOME, ".local", "share", "stagewise", "settings.properties"));
+    assertThat(folder.database())
+        .isEqualTo(Path.of(HOME, ".local", "share", "stagewise", "stagewise.db"));
+    assertThat(folder.settings())
+        .isEqualTo(Path.of(HOME, ".local", "share", "stagewise", "settings.properties"));
   }
 
   @Test
   void folder_demo_usesItsOwnDatabaseBesideTheRealOne() {
-    DataFolder folder = AppOptions.parse(List.of("--demo")).folder(Map.of("XDG_DATA_HOME", "/data"), HOME);
-    assertThat(folder.database()).isEqualTo(Path.of("/data", "stagewise", "demo", "stagewise-demo.db"));
+    DataFolder folder =
+        AppOptions.parse(List.of("--demo")).folder(Map.of("XDG_DATA_HOME", "/data"), HOME);
+    assertThat(folder.database())
+        .isEqualTo(Path.of("/data", "stagewise", "demo", "stagewise-demo.db"));
   }
 
   @Test
   void folder_environmentDatabase_winsOverDemo() {
-    DataFolder folder = AppOptions.parse(List.of("--demo")).folder(Map.of("STAGEWISE_DB", "/shop/history.db"), HOME);
+    DataFolder folder =
+        AppOptions.parse(List.of("--demo"))
+            .folder(Map.of("STAGEWISE_DB", "/shop/history.db"), HOME);
     assertThat(folder.database()).isEqualTo(Path.of("/shop/history.db"));
   }
 
   @Test
   void folder_dbOption_winsOverEverything() {
-    DataFolder folder = AppOptions.parse(List.of("--db", "/tmp/x.db", "--demo"))
-        .folder(Map.of("STAGEWISE_DB", "/shop/history.db"), HOME);
+    DataFolder folder =
+        AppOptions.parse(List.of("--db", "/tmp/x.db", "--demo"))
+            .folder(Map.of("STAGEWISE_DB", "/shop/history.db"), HOME);
     assertThat(folder.database()).isEqualTo(Path.of("/tmp/x.db"));
     assertThat(folder.openCases()).isEqualTo(Path.of("/tmp/x.db.open-cases"));
   }

@@ -2,7 +2,6 @@ package com.stagewise.app;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import com.stagewise.circuit.Reading;
 import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.history.SearchQuery;
@@ -34,8 +33,8 @@ import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * Walks the whole bench flow on the demo shop in a real (headless) window: find a unit, open a
- * case, pick the stage, enter the rails and pin readings, see the first suspect and the next
- * probe, close out, and find the case in the history.
+ * case, pick the stage, enter the rails and pin readings, see the first suspect and the next probe,
+ * close out, and find the case in the history.
  *
  * <p>With {@code -Dscreenshots=true} it also writes a picture of every screen to docs/screens.
  */
@@ -43,7 +42,10 @@ class BenchFlowTest {
   /** The demo unit worked on: a mixing-desk channel board with a line driver stage. */
   private static final String SERIAL = "NF8-22019";
 
-  /** Volts from a rail to the clamped output of a classic-bipolar op-amp (DESIGN.md, common practice). */
+  /**
+   * Volts from a rail to the clamped output of a classic-bipolar op-amp (DESIGN.md, common
+   * practice).
+   */
   private static final double HEADROOM = 1.5;
 
   private static final double VCC = 14.96;
@@ -69,17 +71,20 @@ class BenchFlowTest {
 
   @BeforeEach
   void open() throws Exception {
-    DataFolder folder = new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
+    DataFolder folder =
+        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
     workshop = Workshop.open(folder, true, Path.of("data", "stages"));
-    window = FxToolkit.registerStage(() -> {
-      Stage stage = new Stage();
-      app = BenchApp.build(workshop);
-      stage.setScene(app.scene());
-      stage.setTitle("Stagewise — bench");
-      stage.show();
-      app.cautionOnFirstRun();
-      return stage;
-    });
+    window =
+        FxToolkit.registerStage(
+            () -> {
+              Stage stage = new Stage();
+              app = BenchApp.build(workshop);
+              stage.setScene(app.scene());
+              stage.setTitle("Stagewise — bench");
+              stage.show();
+              app.cautionOnFirstRun();
+              return stage;
+            });
     settle();
   }
 
@@ -148,7 +153,8 @@ class BenchFlowTest {
       String at = fx(() -> app.bench().readings().isEmpty() ? "" : currentProbeAt());
       typeReading(openFeedbackResistor(at));
       Diagnosis now = fx(() -> app.bench().diagnosisProperty().get());
-      if (now.suspects().get(0).probability() > 0.8 && now.suspects().get(0).group().contains("R2:open")) {
+      if (now.suspects().get(0).probability() > 0.8
+          && now.suspects().get(0).group().contains("R2:open")) {
         break;
       }
     }
@@ -169,7 +175,8 @@ class BenchFlowTest {
     robot.clickOn("#suspects-close-out");
     settle();
     assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.CLOSE_OUT);
-    assertThat(text("#action-part")).isEqualTo(first.fault().substring(0, first.fault().indexOf(':')));
+    assertThat(text("#action-part"))
+        .isEqualTo(first.fault().substring(0, first.fault().indexOf(':')));
     robot.clickOn("#action-add");
     settle();
     robot.clickOn("#outcome-fixed");
@@ -186,45 +193,74 @@ class BenchFlowTest {
     robot.clickOn("#history-search");
     settle();
     shoot("09-history");
-    var hits = workshop.store().search(SearchQuery.all().withSerial(SERIAL).withStatus(CaseStatus.CLOSED));
-    assertThat(hits).anySatisfy(hit -> {
-      assertThat(hit.symptom()).startsWith("Channel 1 output pinned negative");
-      assertThat(hit.outcome()).isEqualTo(Outcome.FIXED);
-      assertThat(hit.confirmedFaults()).contains(first.fault());
-    });
+    var hits =
+        workshop.store().search(SearchQuery.all().withSerial(SERIAL).withStatus(CaseStatus.CLOSED));
+    assertThat(hits)
+        .anySatisfy(
+            hit -> {
+              assertThat(hit.symptom()).startsWith("Channel 1 output pinned negative");
+              assertThat(hit.outcome()).isEqualTo(Outcome.FIXED);
+              assertThat(hit.confirmedFaults()).contains(first.fault());
+            });
     assertThat(fx(() -> app.bench().openCaseProperty().get())).isNull();
-    var file = workshop.store().caseFile(hits.stream().filter(h -> h.symptom().startsWith("Channel 1 output pinned")).findFirst().orElseThrow().caseId()).orElseThrow();
+    var file =
+        workshop
+            .store()
+            .caseFile(
+                hits.stream()
+                    .filter(h -> h.symptom().startsWith("Channel 1 output pinned"))
+                    .findFirst()
+                    .orElseThrow()
+                    .caseId())
+            .orElseThrow();
     assertThat(file.readings()).hasSizeGreaterThanOrEqualTo(3);
     assertThat(file.suspectLists()).isNotEmpty();
     assertThat(file.actions()).isNotEmpty();
-    assertThat(file.notes()).extracting(n -> n.text()).contains("Replaced and checked the output swings both ways.");
+    assertThat(file.notes())
+        .extracting(n -> n.text())
+        .contains("Replaced and checked the output swings both ways.");
   }
 
   private void clickCell(String list, String startOfText) {
-    robot.clickOn(robot.lookup(list + " .list-cell")
-        .match((javafx.scene.control.ListCell<?> cell) -> cell.getText() != null && cell.getText().startsWith(startOfText))
-        .<javafx.scene.control.ListCell<?>>query());
+    robot.clickOn(
+        robot
+            .lookup(list + " .list-cell")
+            .match(
+                (javafx.scene.control.ListCell<?> cell) ->
+                    cell.getText() != null && cell.getText().startsWith(startOfText))
+            .<javafx.scene.control.ListCell<?>>query());
   }
 
   private String currentProbeAt() {
     var readings = app.bench().readings();
     // The probe shown is the view model's; read it from the label's words instead of guessing.
     String call = ((Label) robot.lookup("#probe-call").query()).getText();
-    return call.replace("Probe ", "").replace(" pin ", ".").replace("net ", "").replaceAll(" \\(AC.*", "") + (readings.isEmpty() ? "" : "");
+    return call.replace("Probe ", "")
+            .replace(" pin ", ".")
+            .replace("net ", "")
+            .replaceAll(" \\(AC.*", "")
+        + (readings.isEmpty() ? "" : "");
   }
 
   /**
    * Returns what a stage with its feedback resistor R2 open reads at a test point (textbook
-   * inverting amplifier with the loop broken: no current flows in R1, so SUM follows IN; the
-   * op-amp compares 0 V with +1 V and its output clamps 1.5 V above the negative rail).
+   * inverting amplifier with the loop broken: no current flows in R1, so SUM follows IN; the op-amp
+   * compares 0 V with +1 V and its output clamps 1.5 V above the negative rail).
    */
   private static double openFeedbackResistor(String at) {
-    Map<String, Double> dc = Map.ofEntries(
-        Map.entry("U1.8", VCC), Map.entry("VCC", VCC),
-        Map.entry("U1.4", VEE), Map.entry("VEE", VEE),
-        Map.entry("U1.1", VEE + HEADROOM), Map.entry("OUT", VEE + HEADROOM),
-        Map.entry("U1.2", 1.0), Map.entry("SUM", 1.0), Map.entry("IN", 1.0),
-        Map.entry("U1.3", 0.0), Map.entry("GND", 0.0));
+    Map<String, Double> dc =
+        Map.ofEntries(
+            Map.entry("U1.8", VCC),
+            Map.entry("VCC", VCC),
+            Map.entry("U1.4", VEE),
+            Map.entry("VEE", VEE),
+            Map.entry("U1.1", VEE + HEADROOM),
+            Map.entry("OUT", VEE + HEADROOM),
+            Map.entry("U1.2", 1.0),
+            Map.entry("SUM", 1.0),
+            Map.entry("IN", 1.0),
+            Map.entry("U1.3", 0.0),
+            Map.entry("GND", 0.0));
     Double volts = dc.get(at);
     if (volts == null) {
       throw new AssertionError("the flow asked for an unexpected test point: " + at);
@@ -245,16 +281,17 @@ class BenchFlowTest {
   }
 
   private String text(String query) throws Exception {
-    return fx(() -> {
-      var node = robot.lookup(query).query();
-      if (node instanceof javafx.scene.control.Labeled labeled) {
-        return labeled.getText();
-      }
-      if (node instanceof javafx.scene.control.TextInputControl input) {
-        return input.getText();
-      }
-      throw new AssertionError(query + " is not a text node");
-    });
+    return fx(
+        () -> {
+          var node = robot.lookup(query).query();
+          if (node instanceof javafx.scene.control.Labeled labeled) {
+            return labeled.getText();
+          }
+          if (node instanceof javafx.scene.control.TextInputControl input) {
+            return input.getText();
+          }
+          throw new AssertionError(query + " is not a text node");
+        });
   }
 
   private static <T> T fx(Callable<T> work) throws Exception {
@@ -263,10 +300,13 @@ class BenchFlowTest {
 
   /** Waits until the background work is done and the screen has caught up. */
   private void settle() throws Exception {
-    WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> {
-      WaitForAsyncUtils.waitForFxEvents();
-      return fx(() -> app.idle());
-    });
+    WaitForAsyncUtils.waitFor(
+        90,
+        TimeUnit.SECONDS,
+        () -> {
+          WaitForAsyncUtils.waitForFxEvents();
+          return fx(() -> app.idle());
+        });
     WaitForAsyncUtils.waitForFxEvents();
   }
 
@@ -274,7 +314,10 @@ class BenchFlowTest {
     WritableImage image = fx(() -> window.getScene().snapshot(null));
     BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
     assertThat(picture.getWidth()).isEqualTo((int) BenchApp.WIDTH);
-    Path folder = Boolean.getBoolean("screenshots") ? Path.of("docs", "screens") : Path.of("target", "screens");
+    Path folder =
+        Boolean.getBoolean("screenshots")
+            ? Path.of("docs", "screens")
+            : Path.of("target", "screens");
     Files.createDirectories(folder);
     try {
       ImageIO.write(picture, "png", folder.resolve(name + ".png").toFile());

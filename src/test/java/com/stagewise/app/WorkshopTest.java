@@ -21,7 +21,10 @@ class WorkshopTest {
       assertThat(w.store().units(mixer.id())).isNotEmpty();
       assertThat(w.boardFlags().isMainsPowered(mixer.id())).isTrue();
       // Every sheet of the demo library joins its board's library.
-      int sheets = w.store().boardModels().stream().mapToInt(m -> w.store().stageSheets(m.id()).size()).sum();
+      int sheets =
+          w.store().boardModels().stream()
+              .mapToInt(m -> w.store().stageSheets(m.id()).size())
+              .sum();
       assertThat(sheets).isGreaterThanOrEqualTo(DemoSetup.sheets(Path.of("data", "stages")).size());
     }
   }

@@ -1,8 +1,8 @@
 package com.stagewise.bench;
 
+import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
-import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.template.Templates;
 import com.stagewise.diagnosis.Diagnoser;
@@ -52,9 +52,12 @@ public class DiagnosisBenchmark {
   @Setup(Level.Trial)
   public void setUp() {
     stage = Templates.named("instrumentation").build();
-    SolveResult.Solved solved = (SolveResult.Solved) StageSolver.solve(
-        stage,
-        com.stagewise.solver.Conditions.NOMINAL.withForced(stage.amplifiers().get(2).ref(), com.stagewise.solver.SectionState.HIGH));
+    SolveResult.Solved solved =
+        (SolveResult.Solved)
+            StageSolver.solve(
+                stage,
+                com.stagewise.solver.Conditions.NOMINAL.withForced(
+                    stage.amplifiers().get(2).ref(), com.stagewise.solver.SectionState.HIGH));
     OperatingPoint point = solved.primary();
     List<Reading> readings = new ArrayList<>();
     point.nets().forEach((net, volts) -> readings.add(Reading.dc(net, volts)));

@@ -22,7 +22,15 @@ class DiagnoseCommandTest {
       return files
           .filter(f -> f.toString().endsWith(".readings.json"))
           .sorted()
-          .map(f -> new Path[] {Path.of("data", "stages", f.getFileName().toString().split("\\.")[0] + ".stage.json"), f})
+          .map(
+              f ->
+                  new Path[] {
+                    Path.of(
+                        "data",
+                        "stages",
+                        f.getFileName().toString().split("\\.")[0] + ".stage.json"),
+                    f
+                  })
           .toList()
           .stream();
     }
@@ -30,8 +38,18 @@ class DiagnoseCommandTest {
 
   @ParameterizedTest
   @MethodSource("demoPairs")
-  void diagnoseJson_everyDemoReading_givesTheContractDocument(Path stage, Path readings) throws Exception {
-    StagewiseCommandTest.Run run = StagewiseCommandTest.run("diagnose", "--stage", stage.toString(), "--readings", readings.toString(), "--json", "--top", "4");
+  void diagnoseJson_everyDemoReading_givesTheContractDocument(Path stage, Path readings)
+      throws Exception {
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run(
+            "diagnose",
+            "--stage",
+            stage.toString(),
+            "--readings",
+            readings.toString(),
+            "--json",
+            "--top",
+            "4");
     assertThat(run.code()).isEqualTo(ExitCode.OK);
     JsonNode doc = new ObjectMapper().readTree(run.out());
     // The contract of DESIGN.md, "Diagnosis".
@@ -62,36 +80,61 @@ class DiagnoseCommandTest {
 
   @Test
   void diagnose_readableTable_namesTheFirstSuspect() {
-    StagewiseCommandTest.Run run = StagewiseCommandTest.run(
-        "diagnose", "--stage", "data/stages/larkspur-sm8-line-driver.stage.json",
-        "--readings", "data/readings/larkspur-sm8-line-driver.no-feedback.readings.json");
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run(
+            "diagnose",
+            "--stage",
+            "data/stages/larkspur-sm8-line-driver.stage.json",
+            "--readings",
+            "data/readings/larkspur-sm8-line-driver.no-feedback.readings.json");
     assertThat(run.code()).isEqualTo(ExitCode.OK);
-    assertThat(run.out()).contains("Verdict: fault", "Suspects:", "Probe next:", "To confirm the first suspect:");
+    assertThat(run.out())
+        .contains("Verdict: fault", "Suspects:", "Probe next:", "To confirm the first suspect:");
   }
 
   @Test
   void diagnose_pinTheStageDoesNotUse_isBadInputNamingTheFile() throws IOException {
     Path readings = dir.resolve("bad.readings.json");
-    Files.writeString(readings, "{\"format\": \"stagewise-readings\", \"version\": 1, \"readings\": [{\"at\": \"U3.9\", \"dc\": 1.0}]}");
-    StagewiseCommandTest.Run run = StagewiseCommandTest.run(
-        "diagnose", "--stage", "data/stages/larkspur-sm8-line-driver.stage.json", "--readings", readings.toString());
+    Files.writeString(
+        readings,
+        "{\"format\": \"stagewise-readings\", \"version\": 1, \"readings\": [{\"at\": \"U3.9\", \"dc\": 1.0}]}");
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run(
+            "diagnose",
+            "--stage",
+            "data/stages/larkspur-sm8-line-driver.stage.json",
+            "--readings",
+            readings.toString());
     StagewiseCommandTest.assertBadInput(run, "bad.readings.json", "U3", "pin 9");
   }
 
   @Test
   void diagnose_valueFarBeyondTheRails_isBadInput() throws IOException {
     Path readings = dir.resolve("far.readings.json");
-    Files.writeString(readings, "{\"format\": \"stagewise-readings\", \"version\": 1, \"readings\": [{\"at\": \"OUT\", \"dc\": 480}]}");
-    StagewiseCommandTest.Run run = StagewiseCommandTest.run(
-        "diagnose", "--stage", "data/stages/larkspur-sm8-line-driver.stage.json", "--readings", readings.toString());
+    Files.writeString(
+        readings,
+        "{\"format\": \"stagewise-readings\", \"version\": 1, \"readings\": [{\"at\": \"OUT\", \"dc\": 480}]}");
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run(
+            "diagnose",
+            "--stage",
+            "data/stages/larkspur-sm8-line-driver.stage.json",
+            "--readings",
+            readings.toString());
     StagewiseCommandTest.assertBadInput(run, "far.readings.json", "480", "rail");
   }
 
   @Test
   void diagnose_topBelowOne_isBadInput() {
-    StagewiseCommandTest.Run run = StagewiseCommandTest.run(
-        "diagnose", "--stage", "data/stages/larkspur-sm8-line-driver.stage.json",
-        "--readings", "data/readings/larkspur-sm8-line-driver.no-feedback.readings.json", "--top", "0");
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run(
+            "diagnose",
+            "--stage",
+            "data/stages/larkspur-sm8-line-driver.stage.json",
+            "--readings",
+            "data/readings/larkspur-sm8-line-driver.no-feedback.readings.json",
+            "--top",
+            "0");
     StagewiseCommandTest.assertBadInput(run, "--top");
   }
 }

@@ -47,10 +47,32 @@ class HistoryCommandTest {
     Path db = folder.resolve("bench.db");
     Path stage = folder.resolve("driver.stage.json");
     Files.writeString(stage, DemoStage.MIXER, StandardCharsets.UTF_8);
-    assertThat(history(db, "add-model", "--name", "MX-8", "--maker", "Northfield (invented)", "--stage", stage.toString()).code())
+    assertThat(
+            history(
+                    db,
+                    "add-model",
+                    "--name",
+                    "MX-8",
+                    "--maker",
+                    "Northfield (invented)",
+                    "--stage",
+                    stage.toString())
+                .code())
         .isEqualTo(ExitCode.OK);
-    assertThat(history(db, "add-unit", "--serial", "NF8-1", "--model", "mx-8", "--owner", "job 1").out()).contains("NF8-1");
-    JsonNode opened = json(history(db, "open-case", "--serial", "NF8-1", "--symptom", "Output stuck low; no signal", "--json"));
+    assertThat(
+            history(db, "add-unit", "--serial", "NF8-1", "--model", "mx-8", "--owner", "job 1")
+                .out())
+        .contains("NF8-1");
+    JsonNode opened =
+        json(
+            history(
+                db,
+                "open-case",
+                "--serial",
+                "NF8-1",
+                "--symptom",
+                "Output stuck low; no signal",
+                "--json"));
     String caseId = opened.get("id").textValue();
     assertThat(opened.get("status").textValue()).isEqualTo("open");
 
@@ -58,12 +80,24 @@ class HistoryCommandTest {
     // sits at its lower limit, about 1.5 V above the -15 V rail for a bipolar part (DESIGN.md), and
     // the inverting input follows IN through R1 (textbook op-amp behaviour, common practice).
     Path readings = folder.resolve("case.readings.json");
-    Files.writeString(readings, """
+    Files.writeString(
+        readings,
+        """
         {"format": "stagewise-readings", "version": 1,
          "readings": [ {"at": "U1.8", "dc": 14.97}, {"at": "U1.4", "dc": -14.96},
                        {"at": "U1.1", "dc": -13.48}, {"at": "U1.2", "dc": 0.99} ]}
-        """, StandardCharsets.UTF_8);
-    JsonNode stored = json(history(db, "add-readings", "--case", caseId.substring(0, 8), "--readings", readings.toString(), "--json"));
+        """,
+        StandardCharsets.UTF_8);
+    JsonNode stored =
+        json(
+            history(
+                db,
+                "add-readings",
+                "--case",
+                caseId.substring(0, 8),
+                "--readings",
+                readings.toString(),
+                "--json"));
     assertThat(stored.get("readings")).hasSize(4);
     JsonNode list = stored.get("suspectList");
     assertThat(list.get("programVersion").textValue()).isNotEmpty();
@@ -77,20 +111,55 @@ class HistoryCommandTest {
     assertThat(faults).contains("R2:open");
     assertThat(total).isBetween(0.99, 1.01);
 
-    assertThat(history(db, "add-action", "--case", caseId, "--kind", "part-replaced", "--part", "R2", "--old", "47k", "--new", "47k").code())
+    assertThat(
+            history(
+                    db,
+                    "add-action",
+                    "--case",
+                    caseId,
+                    "--kind",
+                    "part-replaced",
+                    "--part",
+                    "R2",
+                    "--old",
+                    "47k",
+                    "--new",
+                    "47k")
+                .code())
         .isEqualTo(ExitCode.OK);
-    assertThat(history(db, "add-note", "--case", caseId, "--text", "Cracked resistor; quote \"A\"; done").code()).isEqualTo(ExitCode.OK);
-    assertThat(history(db, "close-case", "--case", caseId, "--outcome", "fixed", "--fault", "R2:open").out()).contains("closed: fixed");
+    assertThat(
+            history(
+                    db,
+                    "add-note",
+                    "--case",
+                    caseId,
+                    "--text",
+                    "Cracked resistor; quote \"A\"; done")
+                .code())
+        .isEqualTo(ExitCode.OK);
+    assertThat(
+            history(db, "close-case", "--case", caseId, "--outcome", "fixed", "--fault", "R2:open")
+                .out())
+        .contains("closed: fixed");
 
     Run show = history(db, "show", "--serial", "nf8-1");
-    assertThat(show.out()).contains("Unit NF8-1", "Found: R2:open", "part-replaced R2", "Cracked resistor; quote \"A\"; done", "U1.1", "-13.48 V");
+    assertThat(show.out())
+        .contains(
+            "Unit NF8-1",
+            "Found: R2:open",
+            "part-replaced R2",
+            "Cracked resistor; quote \"A\"; done",
+            "U1.1",
+            "-13.48 V");
     JsonNode shown = json(history(db, "show", "--case", caseId, "--json"));
     assertThat(shown.get("suspectLists")).hasSize(1);
-    assertThat(shown.get("notes").get(0).get("text").textValue()).isEqualTo("Cracked resistor; quote \"A\"; done");
+    assertThat(shown.get("notes").get(0).get("text").textValue())
+        .isEqualTo("Cracked resistor; quote \"A\"; done");
 
     assertThat(json(history(db, "search", "--part", "R2", "--json")).get("hits")).hasSize(1);
     assertThat(history(db, "search", "--text", "cracked").out()).contains("[Cracked]");
-    assertThat(history(db, "faults", "--model", "MX-8").out()).contains("R2:open", "seen once on this model");
+    assertThat(history(db, "faults", "--model", "MX-8").out())
+        .contains("R2:open", "seen once on this model");
   }
 
   @Test
@@ -99,18 +168,22 @@ class HistoryCommandTest {
     Path right = folder.resolve("right.db");
     assertThat(history(left, "demo").out()).contains("invented");
     Path bundle = folder.resolve("bundle.json");
-    assertThat(history(left, "export", "--out", bundle.toString()).out()).contains("Exported 6 cases");
+    assertThat(history(left, "export", "--out", bundle.toString()).out())
+        .contains("Exported 6 cases");
     JsonNode report = json(history(right, "import", bundle.toString(), "--json"));
     assertThat(report.get("added").intValue()).isGreaterThan(0);
     assertThat(report.get("conflicts")).isEmpty();
-    assertThat(history(right, "import", bundle.toString()).out()).contains("0 added", "0 conflicts");
+    assertThat(history(right, "import", bundle.toString()).out())
+        .contains("0 added", "0 conflicts");
     Path one = folder.resolve("one.json");
-    assertThat(history(left, "export", "--serial", "NF8-21037", "--out", one.toString()).out()).contains("2 cases of 1 unit");
+    assertThat(history(left, "export", "--serial", "NF8-21037", "--out", one.toString()).out())
+        .contains("2 cases of 1 unit");
 
     Path backup = folder.resolve("backup.db");
     assertThat(history(right, "backup", "--out", backup.toString()).code()).isEqualTo(ExitCode.OK);
     history(right, "add-unit", "--serial", "LATE-1", "--model", DemoHistory.MIXER);
-    assertThat(history(right, "restore", "--from", backup.toString()).out()).contains("previous history was saved");
+    assertThat(history(right, "restore", "--from", backup.toString()).out())
+        .contains("previous history was saved");
     assertThat(history(right, "units").out()).doesNotContain("LATE-1").contains("NF8-21037");
   }
 
@@ -120,7 +193,10 @@ class HistoryCommandTest {
     history(db, "demo");
     Run noCase = history(db, "add-note", "--case", "ffffffff", "--text", "x");
     assertThat(noCase.code()).isEqualTo(ExitCode.BAD_INPUT);
-    assertThat(noCase.err()).contains("no case has the id").doesNotContain("Exception").doesNotContain("\tat ");
+    assertThat(noCase.err())
+        .contains("no case has the id")
+        .doesNotContain("Exception")
+        .doesNotContain("\tat ");
     Run badOutcome = history(db, "close-case", "--case", "ffffffff", "--outcome", "maybe");
     assertThat(badOutcome.code()).isEqualTo(ExitCode.BAD_INPUT);
     assertThat(badOutcome.err()).contains("--outcome");
@@ -128,7 +204,8 @@ class HistoryCommandTest {
     assertThat(badDate.code()).isEqualTo(ExitCode.BAD_INPUT);
     assertThat(badDate.err()).contains("--from").contains("2026-03-01");
     Path broken = folder.resolve("broken.json");
-    Files.writeString(broken, "{\"format\": \"stagewise-history\", \"version\": 9}", StandardCharsets.UTF_8);
+    Files.writeString(
+        broken, "{\"format\": \"stagewise-history\", \"version\": 9}", StandardCharsets.UTF_8);
     Run newer = history(db, "import", broken.toString());
     assertThat(newer.code()).isEqualTo(ExitCode.BAD_INPUT);
     assertThat(newer.err()).contains(broken.toString()).contains("version");
@@ -138,11 +215,14 @@ class HistoryCommandTest {
   @Test
   void fileThatIsNoDatabase_exitsOneWithAClearMessageAndStaysAsItWas() throws Exception {
     Path file = folder.resolve("letter.txt");
-    Files.writeString(file, "Dear customer, your mixer is ready.\n".repeat(30), StandardCharsets.UTF_8);
+    Files.writeString(
+        file, "Dear customer, your mixer is ready.\n".repeat(30), StandardCharsets.UTF_8);
     byte[] before = Files.readAllBytes(file);
     Run run = history(file, "units");
     assertThat(run.code()).isEqualTo(ExitCode.INTERNAL_ERROR);
-    assertThat(run.err()).startsWith("stagewise: The file ").contains("is not a Stagewise history database")
+    assertThat(run.err())
+        .startsWith("stagewise: The file ")
+        .contains("is not a Stagewise history database")
         .doesNotContain("Exception");
     assertThat(Files.readAllBytes(file)).isEqualTo(before);
   }

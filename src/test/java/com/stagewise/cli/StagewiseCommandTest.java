@@ -69,7 +69,11 @@ class StagewiseCommandTest {
 
   @Test
   void solveTable_lineDriver_showsExpectedVoltsAndAc() {
-    Run run = run("solve", "--stage", Path.of("data", "stages", "larkspur-sm8-line-driver.stage.json").toString());
+    Run run =
+        run(
+            "solve",
+            "--stage",
+            Path.of("data", "stages", "larkspur-sm8-line-driver.stage.json").toString());
     // Closed-form ideal op-amp result: -R2/R1 x 1 V = -4.7 V; AC 0.1 V x 4.7 = 0.47 V, inverted.
     assertThat(run.out()).containsPattern("OUT +U3\\.1 +-4\\.699\\d +0\\.4700 +180\\.0°");
     assertThat(run.out()).contains("U3A linear");
@@ -77,15 +81,23 @@ class StagewiseCommandTest {
 
   @Test
   void solve_missingFile_isBadInputNamingTheFile() {
-    assertBadInput(run("solve", "--stage", dir.resolve("none.stage.json").toString()), "none.stage.json", "no such file");
+    assertBadInput(
+        run("solve", "--stage", dir.resolve("none.stage.json").toString()),
+        "none.stage.json",
+        "no such file");
   }
 
   @Test
   void solve_badSheet_isBadInputNamingFileAndPath() throws IOException {
     Path file = dir.resolve("bad.stage.json");
-    String good = Files.readString(Path.of("data", "stages", "larkspur-sm8-line-driver.stage.json"), StandardCharsets.UTF_8);
-    Files.writeString(file, good.replace("\"value\": \"47k\"", "\"value\": \"47kk\""), StandardCharsets.UTF_8);
-    assertBadInput(run("solve", "--stage", file.toString()), "bad.stage.json", "parts[1].value", "47kk");
+    String good =
+        Files.readString(
+            Path.of("data", "stages", "larkspur-sm8-line-driver.stage.json"),
+            StandardCharsets.UTF_8);
+    Files.writeString(
+        file, good.replace("\"value\": \"47k\"", "\"value\": \"47kk\""), StandardCharsets.UTF_8);
+    assertBadInput(
+        run("solve", "--stage", file.toString()), "bad.stage.json", "parts[1].value", "47kk");
   }
 
   @Test
@@ -109,15 +121,31 @@ class StagewiseCommandTest {
   void template_withoutName_listsEveryTemplate() {
     Run run = run("template");
     assertThat(run.code()).isEqualTo(ExitCode.OK);
-    assertThat(run.out()).contains("inverting:", "sallen-key-low-pass:", "single-supply-inverting:", "r2", "47k");
+    assertThat(run.out())
+        .contains("inverting:", "sallen-key-low-pass:", "single-supply-inverting:", "r2", "47k");
   }
 
   @Test
   void template_writeWithValuesAndRenames_givesASheetThatReadsBack() {
     Path file = dir.resolve("driver.stage.json");
     Run run =
-        run("template", "inverting", "--set", "r2=22k", "--rename", "R2=R15", "--rename", "U1=U3",
-            "--net", "VCC=+15V", "--title", "Line driver", "--board", "Test board", "--out", file.toString());
+        run(
+            "template",
+            "inverting",
+            "--set",
+            "r2=22k",
+            "--rename",
+            "R2=R15",
+            "--rename",
+            "U1=U3",
+            "--net",
+            "VCC=+15V",
+            "--title",
+            "Line driver",
+            "--board",
+            "Test board",
+            "--out",
+            file.toString());
     assertThat(run.code()).as(run.err()).isEqualTo(ExitCode.OK);
     Stage stage = StageSheet.read(file);
     assertThat(stage.part("R15").orElseThrow().value()).isEqualTo(22_000);

@@ -65,7 +65,8 @@ class PriorsTest {
 
   @Test
   void blend_allZeroPriors_areTakenAsUniform() {
-    Map<String, Double> blended = Priors.blend(Map.of("a:open", 0.0, "b:open", 0.0), Map.of("a:open", 2), 2);
+    Map<String, Double> blended =
+        Priors.blend(Map.of("a:open", 0.0, "b:open", 0.0), Map.of("a:open", 2), 2);
     assertThat(blended.get("a:open")).isCloseTo((2 * 0.5 + 2) / 4.0, within(TOLERANCE));
   }
 

@@ -16,19 +16,30 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * The prediction spread from sensitivities (what the diagnosis uses) against Monte Carlo sampling of
- * the same uncertain parameters: two methods, one answer, on working stages of several templates.
+ * The prediction spread from sensitivities (what the diagnosis uses) against Monte Carlo sampling
+ * of the same uncertain parameters: two methods, one answer, on working stages of several
+ * templates.
  */
 class SpreadCrossCheckTest {
   private static final int SAMPLES = 3000;
 
   @ParameterizedTest
-  @ValueSource(strings = {"inverting", "non-inverting", "summing", "difference", "instrumentation", "single-supply-inverting"})
+  @ValueSource(
+      strings = {
+        "inverting",
+        "non-inverting",
+        "summing",
+        "difference",
+        "instrumentation",
+        "single-supply-inverting"
+      })
   void sensitivitySpread_matchesMonteCarlo(String template) {
     Stage stage = Templates.named(template).build();
     TestPoints points = new TestPoints(stage);
-    Prediction p = new Predictor(points, stage)
-        .predict(new Scenario(stage, Conditions.NOMINAL, 1, Double.NaN, ""), true).get(0);
+    Prediction p =
+        new Predictor(points, stage)
+            .predict(new Scenario(stage, Conditions.NOMINAL, 1, Double.NaN, ""), true)
+            .get(0);
     double[] mc = monteCarloSd(stage, points, new Random(11));
     int compared = 0;
     for (int i = 0; i < points.size; i++) {
@@ -38,7 +49,9 @@ class SpreadCrossCheckTest {
       compared++;
       // Sampling error of a standard deviation from 3000 samples is about 1.3 %; the rest is the
       // linearisation and the one-sided gain step. Within 25 % is plenty for a likelihood.
-      assertThat(p.dcSd()[i] / mc[i]).as("%s at %s", template, points.names.get(i)).isBetween(0.75, 1.25);
+      assertThat(p.dcSd()[i] / mc[i])
+          .as("%s at %s", template, points.names.get(i))
+          .isBetween(0.75, 1.25);
     }
     assertThat(compared).isGreaterThan(0);
   }
@@ -57,19 +70,31 @@ class SpreadCrossCheckTest {
     int n = 0;
     for (int s = 0; s < SAMPLES; s++) {
       for (int p = 0; p < parts.size(); p++) {
-        cs.setPartValue(p, parts.get(p).value() * (1 + parts.get(p).tolerance() * (2 * random.nextDouble() - 1)));
+        cs.setPartValue(
+            p,
+            parts.get(p).value() * (1 + parts.get(p).tolerance() * (2 * random.nextDouble() - 1)));
       }
       for (Rail rail : stage.rails()) {
-        cs.setDrivenVolts(cs.net(rail.net()), rail.volts() * (1 + rail.tolerance() * (2 * random.nextDouble() - 1)));
+        cs.setDrivenVolts(
+            cs.net(rail.net()),
+            rail.volts() * (1 + rail.tolerance() * (2 * random.nextDouble() - 1)));
       }
       for (int k = 0; k < stage.amplifiers().size(); k++) {
         DeviceClass type = stage.amplifiers().get(k).deviceClass();
-        double gain = type.openLoopGain().low() * Math.pow(type.openLoopGain().high() / type.openLoopGain().low(), random.nextDouble());
+        double gain =
+            type.openLoopGain().low()
+                * Math.pow(
+                    type.openLoopGain().high() / type.openLoopGain().low(), random.nextDouble());
         double offset = type.offset().high() * (2 * random.nextDouble() - 1);
         double bias = type.biasCurrent().high() * (2 * random.nextDouble() - 1);
-        double low = type.headroomLow().low() + (type.headroomLow().high() - type.headroomLow().low()) * random.nextDouble();
-        double high = type.headroomHigh().low() + (type.headroomHigh().high() - type.headroomHigh().low()) * random.nextDouble();
-        cs.setDevice(k, new DeviceParams(gain, offset, bias, bias, type.outputResistance(), low, high));
+        double low =
+            type.headroomLow().low()
+                + (type.headroomLow().high() - type.headroomLow().low()) * random.nextDouble();
+        double high =
+            type.headroomHigh().low()
+                + (type.headroomHigh().high() - type.headroomHigh().low()) * random.nextDouble();
+        cs.setDevice(
+            k, new DeviceParams(gain, offset, bias, bias, type.outputResistance(), low, high));
       }
       if (cs.solve() instanceof CompiledStage.Settled settled) {
         double[] v = settled.states().get(0).volts();

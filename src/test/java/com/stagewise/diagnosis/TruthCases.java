@@ -60,9 +60,15 @@ final class TruthCases {
     try (Stream<Path> files = Files.list(FOLDER)) {
       for (Path file : files.filter(f -> f.toString().endsWith(".json")).sorted().toList()) {
         JsonNode root = mapper.readTree(file.toFile());
-        Stage stage = StageSheet.read(mapper.writeValueAsString(root.get("sheet")), file.getFileName().toString());
+        Stage stage =
+            StageSheet.read(
+                mapper.writeValueAsString(root.get("sheet")), file.getFileName().toString());
         JsonNode m = root.get("meter");
-        MeterSpec meter = new MeterSpec(m.get("percent").asDouble(), m.get("counts").asInt(), m.get("displayCounts").asInt());
+        MeterSpec meter =
+            new MeterSpec(
+                m.get("percent").asDouble(),
+                m.get("counts").asInt(),
+                m.get("displayCounts").asInt());
         List<Case> cases = new ArrayList<>();
         for (JsonNode c : root.get("cases")) {
           List<Reading> dc = new ArrayList<>();
@@ -71,7 +77,8 @@ final class TruthCases {
             if (r.has("dc")) {
               dc.add(Reading.dc(r.get("at").asText(), r.get("dc").asDouble()));
             } else {
-              ac.add(Reading.ac(r.get("at").asText(), r.get("ac").asDouble(), r.get("hz").asDouble()));
+              ac.add(
+                  Reading.ac(r.get("at").asText(), r.get("ac").asDouble(), r.get("hz").asDouble()));
             }
           }
           Set<String> partial = new HashSet<>();

@@ -90,7 +90,8 @@ class FileSafetyTest {
     Path file = folder.resolve("newer.db");
     HistoryStore.open(file).close();
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
-        PreparedStatement s = c.prepareStatement("INSERT INTO schema_version VALUES (99, 0, 'V99__future.sql')")) {
+        PreparedStatement s =
+            c.prepareStatement("INSERT INTO schema_version VALUES (99, 0, 'V99__future.sql')")) {
       s.execute();
     }
     byte[] before = Files.readAllBytes(file);
@@ -152,7 +153,9 @@ class FileSafetyTest {
       }
       assertThat(store.findBoardModel("model \"x\"; 'QUOTED' — Ω")).contains(model);
       assertThat(store.unitsBySerial("SN\"1\";'2' — µ")).containsExactly(unit);
-      assertThat(store.search(SearchQuery.all().withStatus(CaseStatus.OPEN).withSerial(unit.serial()))).hasSize(texts.size());
+      assertThat(
+              store.search(SearchQuery.all().withStatus(CaseStatus.OPEN).withSerial(unit.serial())))
+          .hasSize(texts.size());
     }
   }
 
@@ -183,7 +186,8 @@ class FileSafetyTest {
       Path saved = store.restoreFrom(backup);
       assertThat(store.unitsBySerial("LATER")).isEmpty();
       assertThat(store.unitsBySerial("KEPT")).containsExactly(kept);
-      assertThat(store.search(SearchQuery.all().withText("backup"))).extracting(SearchHit::symptom)
+      assertThat(store.search(SearchQuery.all().withText("backup")))
+          .extracting(SearchHit::symptom)
           .containsExactly("before the backup");
       assertThat(store.integrityCheck()).isEqualTo("ok");
       // The history as it was before the restore is kept beside the file.
@@ -220,10 +224,14 @@ class FileSafetyTest {
         Unit unit = store.unitsBySerial("NF-8-0100").get(0);
         UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
         assertThat(history.cases()).hasSize(2);
-        assertThat(history.cases().get(0).repairCase().confirmedFaults()).containsExactly("U3B:dead");
-        assertThat(history.cases().get(0).notes()).extracting(CaseNote::text).containsExactly(FixtureMaker.NOTE);
+        assertThat(history.cases().get(0).repairCase().confirmedFaults())
+            .containsExactly("U3B:dead");
+        assertThat(history.cases().get(0).notes())
+            .extracting(CaseNote::text)
+            .containsExactly(FixtureMaker.NOTE);
         // Text search works on what was written before the index existed.
-        assertThat(store.search(SearchQuery.all().withText("distorts"))).extracting(SearchHit::symptom)
+        assertThat(store.search(SearchQuery.all().withText("distorts")))
+            .extracting(SearchHit::symptom)
             .containsExactly(FixtureMaker.CLOSED_SYMPTOM);
         assertThat(store.search(SearchQuery.all().withText("op-amp went"))).hasSize(1);
         assertThat(store.search(SearchQuery.all().withPart("U3"))).hasSize(1);

@@ -30,7 +30,8 @@ public final class FixtureMaker {
 
   public static void main(String[] args) throws Exception {
     int version = Integer.parseInt(args[0]);
-    Path target = Path.of("src/test/resources/com/stagewise/history/fixtures/schema-v" + version + ".db");
+    Path target =
+        Path.of("src/test/resources/com/stagewise/history/fixtures/schema-v" + version + ".db");
     Files.createDirectories(target.getParent());
     Files.deleteIfExists(target);
     make(target, version);
@@ -40,11 +41,13 @@ public final class FixtureMaker {
     Clock clock = Clock.fixed(Instant.parse("2025-06-01T12:00:00Z"), ZoneOffset.UTC);
     try (HistoryStore store = HistoryStore.open(target, clock, version)) {
       BoardModel model = store.boardModel("MX-8 main board", "Northfield Audio (invented)");
-      store.addStageSheet(model.id(), "Output driver", "{\"format\": \"stagewise-stage\", \"version\": 1}");
+      store.addStageSheet(
+          model.id(), "Output driver", "{\"format\": \"stagewise-stage\", \"version\": 1}");
       Unit unit = store.addUnit("NF-8-0100", model.id(), "job 2025-117");
       RepairCase closed = store.openCase(unit.id(), CLOSED_SYMPTOM);
       store.addNote(closed.id(), NOTE);
-      store.addAction(closed.id(), ActionKind.PART_REPLACED, "U3", "dual op-amp", "dual op-amp", "");
+      store.addAction(
+          closed.id(), ActionKind.PART_REPLACED, "U3", "dual op-amp", "dual op-amp", "");
       store.closeCase(closed.id(), Outcome.FIXED, List.of("U3B:dead"));
       store.openCase(unit.id(), "Crackles when cold");
     }

@@ -23,10 +23,11 @@ import org.openjdk.jmh.annotations.Warmup;
  * Lookups in a large history: 100,000 cases with 10 readings each (1,000,000 readings), one note
  * each, 25,000 units of 50 board models (generated, {@link SyntheticHistory}).
  *
- * <p>Full-text queries return the default 50 best hits with snippets. The database is {@code -Dstagewise.bench.db=FILE} (default {@code
- * target/bench/history-100k.db}); it is generated on first use, or beforehand with {@code
- * stagewise history make-test-data --db FILE} (see DEVELOPERS.md, "History store"). Sample time:
- * the median is the {@code p0.50} line of JMH's report.
+ * <p>Full-text queries return the default 50 best hits with snippets. The database is {@code
+ * -Dstagewise.bench.db=FILE} (default {@code target/bench/history-100k.db}); it is generated on
+ * first use, or beforehand with {@code stagewise history make-test-data --db FILE} (see
+ * DEVELOPERS.md, "History store"). Sample time: the median is the {@code p0.50} line of JMH's
+ * report.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SampleTime)
@@ -67,13 +68,17 @@ public class HistoryStoreBenchmark {
   /** A word picked uniformly from the vocabulary: a specific word, in few texts (typical query). */
   @Benchmark
   public List<SearchHit> fullTextSpecificWord() {
-    return store.search(SearchQuery.all().withText(SyntheticHistory.word(random.nextInt(SyntheticHistory.VOCABULARY))));
+    return store.search(
+        SearchQuery.all()
+            .withText(SyntheticHistory.word(random.nextInt(SyntheticHistory.VOCABULARY))));
   }
 
   /** Two words drawn as they occur in the texts (so often common ones), both required. */
   @Benchmark
   public List<SearchHit> fullTextTwoUsualWords() {
-    return store.search(SearchQuery.all().withText(SyntheticHistory.textWord(random) + " " + SyntheticHistory.textWord(random)));
+    return store.search(
+        SearchQuery.all()
+            .withText(SyntheticHistory.textWord(random) + " " + SyntheticHistory.textWord(random)));
   }
 
   /** The most frequent word, in about a third of all texts: the worst case. */

@@ -29,7 +29,8 @@ import org.junit.jupiter.api.io.TempDir;
 class HistoryStoreTest {
   @TempDir Path folder;
   private HistoryStore store;
-  private final Clock clock = Clock.fixed(Instant.parse("2026-03-04T10:15:30.123Z"), ZoneOffset.UTC);
+  private final Clock clock =
+      Clock.fixed(Instant.parse("2026-03-04T10:15:30.123Z"), ZoneOffset.UTC);
 
   @BeforeEach
   void open() {
@@ -72,7 +73,14 @@ class HistoryStoreTest {
     RepairCase opened = store.openCase(unit.id(), "output stuck at +13 V");
     StoredReading reading =
         new StoredReading(
-            HistoryStore.newId(), opened.id(), "U1.1", ReadingKind.DC, 13.41, null, 0.05, "6000-count",
+            HistoryStore.newId(),
+            opened.id(),
+            "U1.1",
+            ReadingKind.DC,
+            13.41,
+            null,
+            0.05,
+            "6000-count",
             clock.instant());
     SuspectListRecord list =
         new SuspectListRecord(

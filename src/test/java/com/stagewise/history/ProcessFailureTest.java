@@ -22,8 +22,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The history file under process death and under two writers: separate JVMs write cases while
- * this test kills them at random moments or lets them write the same file at once.
+ * The history file under process death and under two writers: separate JVMs write cases while this
+ * test kills them at random moments or lets them write the same file at once.
  */
 class ProcessFailureTest {
   /** Rounds of write-and-kill; each costs a JVM start (about half a second here). */
@@ -53,7 +53,9 @@ class ProcessFailureTest {
         roundsKilledMidWrite++;
       }
     }
-    assertThat(roundsKilledMidWrite).as("rounds in which cases were written before the kill").isGreaterThan(KILL_ROUNDS / 2);
+    assertThat(roundsKilledMidWrite)
+        .as("rounds in which cases were written before the kill")
+        .isGreaterThan(KILL_ROUNDS / 2);
     assertThat(reported).isNotEmpty();
 
     try (HistoryStore store = HistoryStore.open(file)) {
@@ -64,16 +66,30 @@ class ProcessFailureTest {
       stored.addAll(strings(c, "SELECT id FROM repair_case"));
       assertThat(stored).containsAll(reported);
       // Every stored case is whole: its readings, suspect list with suspects, and notes.
-      assertThat(strings(c, "SELECT c.id FROM repair_case c WHERE (SELECT count(*) FROM reading r WHERE r.case_id = c.id) <> "
-          + WriterProcess.READINGS)).isEmpty();
-      assertThat(strings(c, "SELECT c.id FROM repair_case c WHERE (SELECT count(*) FROM case_note n WHERE n.case_id = c.id) <> "
-          + WriterProcess.NOTES)).isEmpty();
-      assertThat(strings(c, "SELECT c.id FROM repair_case c WHERE (SELECT count(*) FROM suspect s JOIN suspect_list l"
-          + " ON l.id = s.suspect_list_id WHERE l.case_id = c.id) <> " + WriterProcess.SUSPECTS)).isEmpty();
+      assertThat(
+              strings(
+                  c,
+                  "SELECT c.id FROM repair_case c WHERE (SELECT count(*) FROM reading r WHERE r.case_id = c.id) <> "
+                      + WriterProcess.READINGS))
+          .isEmpty();
+      assertThat(
+              strings(
+                  c,
+                  "SELECT c.id FROM repair_case c WHERE (SELECT count(*) FROM case_note n WHERE n.case_id = c.id) <> "
+                      + WriterProcess.NOTES))
+          .isEmpty();
+      assertThat(
+              strings(
+                  c,
+                  "SELECT c.id FROM repair_case c WHERE (SELECT count(*) FROM suspect s JOIN suspect_list l"
+                      + " ON l.id = s.suspect_list_id WHERE l.case_id = c.id) <> "
+                      + WriterProcess.SUSPECTS))
+          .isEmpty();
       // The full-text indexes hold exactly the stored symptoms and notes (FTS5 integrity-check).
       execute(c, "INSERT INTO symptom_text (symptom_text) VALUES ('integrity-check')");
       execute(c, "INSERT INTO note_text (note_text) VALUES ('integrity-check')");
-      assertThat(strings(c, "SELECT count(*) FROM symptom_text")).containsExactly(Integer.toString(stored.size()));
+      assertThat(strings(c, "SELECT count(*) FROM symptom_text"))
+          .containsExactly(Integer.toString(stored.size()));
     }
   }
 
@@ -131,7 +147,8 @@ class ProcessFailureTest {
   private static final class Reader extends Thread {
     private final Process child;
     private final Set<String> reported;
-    private final java.util.concurrent.CountDownLatch ready = new java.util.concurrent.CountDownLatch(1);
+    private final java.util.concurrent.CountDownLatch ready =
+        new java.util.concurrent.CountDownLatch(1);
     private volatile int committed;
 
     Reader(Process child, Set<String> reported) {
@@ -146,7 +163,9 @@ class ProcessFailureTest {
 
     @Override
     public void run() {
-      try (BufferedReader in = new BufferedReader(new InputStreamReader(child.getInputStream(), StandardCharsets.UTF_8))) {
+      try (BufferedReader in =
+          new BufferedReader(
+              new InputStreamReader(child.getInputStream(), StandardCharsets.UTF_8))) {
         for (String line; (line = in.readLine()) != null; ) {
           if (line.equals("ready")) {
             ready.countDown();
@@ -163,7 +182,8 @@ class ProcessFailureTest {
 
   private static List<String> strings(Connection c, String sql) throws SQLException {
     List<String> values = new ArrayList<>();
-    try (PreparedStatement s = c.prepareStatement(sql); ResultSet rs = s.executeQuery()) {
+    try (PreparedStatement s = c.prepareStatement(sql);
+        ResultSet rs = s.executeQuery()) {
       while (rs.next()) {
         values.add(rs.getString(1));
       }

@@ -58,12 +58,14 @@ class SearchTest {
 
   @Test
   void bySerial_withQuotesAndSemicolons() {
-    assertThat(ids(SearchQuery.all().withSerial("HB30/17\"A\"; drop"))).containsExactly(clipping.id());
+    assertThat(ids(SearchQuery.all().withSerial("HB30/17\"A\"; drop")))
+        .containsExactly(clipping.id());
   }
 
   @Test
   void byBoardModel_newestFirst() {
-    assertThat(ids(SearchQuery.all().withBoardModel("mx-8 MAIN board"))).containsExactly(dead.id(), hum.id());
+    assertThat(ids(SearchQuery.all().withBoardModel("mx-8 MAIN board")))
+        .containsExactly(dead.id(), hum.id());
   }
 
   @Test
@@ -105,8 +107,10 @@ class SearchTest {
     // once among many words.
     String unit = store.unitsBySerial("NF-8-0001").get(0).id();
     RepairCase passing =
-        store.openCase(unit, "Faint crackle on the aux send, only when the channel fader moves fast, "
-            + "otherwise the unit behaves normally on every output and input we tried today");
+        store.openCase(
+            unit,
+            "Faint crackle on the aux send, only when the channel fader moves fast, "
+                + "otherwise the unit behaves normally on every output and input we tried today");
     RepairCase strong = store.openCase(unit, "Crackle, loud crackle on every knob");
     List<SearchHit> hits = store.search(SearchQuery.all().withText("crackle"));
     assertThat(hits).extracting(SearchHit::caseId).containsExactly(strong.id(), passing.id());
@@ -127,8 +131,10 @@ class SearchTest {
 
   @Test
   void fullText_ignoresAccents() {
-    RepairCase accented = store.openCase(store.unitsBySerial("NF-8-0001").get(0).id(), "Grésillement au démarrage");
-    assertThat(ids(SearchQuery.all().withText("gresillement demarrage"))).containsExactly(accented.id());
+    RepairCase accented =
+        store.openCase(store.unitsBySerial("NF-8-0001").get(0).id(), "Grésillement au démarrage");
+    assertThat(ids(SearchQuery.all().withText("gresillement demarrage")))
+        .containsExactly(accented.id());
   }
 
   @Test
@@ -145,7 +151,12 @@ class SearchTest {
       }
       RepairCase c = store.openCase(unit, text.toString());
       for (int n = 0; n < random.nextInt(4); n++) {
-        store.addNote(c.id(), words[random.nextInt(words.length)] + " " + words[random.nextInt(words.length)] + " relay");
+        store.addNote(
+            c.id(),
+            words[random.nextInt(words.length)]
+                + " "
+                + words[random.nextInt(words.length)]
+                + " relay");
       }
       clock.advanceMillis(1);
     }

@@ -1,15 +1,12 @@
 package com.stagewise.history;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.assertj.core.api.Assertions.assertThatThrownBy;
-import static org.assertj.core.api.Assertions.within;
 
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.Unit;
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
@@ -20,8 +17,10 @@ class ShopMemoryTest {
 
   @Test
   void hint_saysHowOften() {
-    assertThat(ShopMemory.hint("R2:open", Map.of("R2:open", 3))).contains("seen 3 times on this model");
-    assertThat(ShopMemory.hint("R2:open", Map.of("R2:open", 1))).contains("seen once on this model");
+    assertThat(ShopMemory.hint("R2:open", Map.of("R2:open", 3)))
+        .contains("seen 3 times on this model");
+    assertThat(ShopMemory.hint("R2:open", Map.of("R2:open", 1)))
+        .contains("seen once on this model");
     assertThat(ShopMemory.hint("R1:open", Map.of("R2:open", 3))).isEmpty();
   }
 

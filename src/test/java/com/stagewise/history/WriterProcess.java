@@ -59,15 +59,26 @@ public final class WriterProcess {
     List<StoredReading> readings = new ArrayList<>();
     for (int r = 0; r < READINGS; r++) {
       readings.add(
-          new StoredReading(HistoryStore.newId(), caseId, "U1." + (r + 1), ReadingKind.DC, r * 1.5, null, null, "", now));
+          new StoredReading(
+              HistoryStore.newId(),
+              caseId,
+              "U1." + (r + 1),
+              ReadingKind.DC,
+              r * 1.5,
+              null,
+              null,
+              "",
+              now));
     }
     List<StoredSuspect> suspects = new ArrayList<>();
     for (int s = 0; s < SUSPECTS; s++) {
-      suspects.add(new StoredSuspect("R" + (s + 1) + ":open", 1.0 / SUSPECTS, List.of(), "test", s + 1));
+      suspects.add(
+          new StoredSuspect("R" + (s + 1) + ":open", 1.0 / SUSPECTS, List.of(), "test", s + 1));
     }
     List<CaseNote> notes = new ArrayList<>();
     for (int n = 0; n < NOTES; n++) {
-      notes.add(new CaseNote(HistoryStore.newId(), caseId, now, "note " + n + " of " + symptom, now));
+      notes.add(
+          new CaseNote(HistoryStore.newId(), caseId, now, "note " + n + " of " + symptom, now));
     }
     return new HistoryBundle(
         HistoryBundle.CURRENT_VERSION,
@@ -78,7 +89,9 @@ public final class WriterProcess {
         List.of(),
         List.of(repairCase),
         readings,
-        List.of(new SuspectListRecord(HistoryStore.newId(), caseId, now, "test", "fault", suspects, "")),
+        List.of(
+            new SuspectListRecord(
+                HistoryStore.newId(), caseId, now, "test", "fault", suspects, "")),
         List.of(),
         notes);
   }

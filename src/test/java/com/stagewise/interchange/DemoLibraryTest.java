@@ -16,20 +16,30 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** Keeps the shipped demo library ({@code data/stages}, {@code data/readings}) sound and in step. */
+/**
+ * Keeps the shipped demo library ({@code data/stages}, {@code data/readings}) sound and in step.
+ */
 class DemoLibraryTest {
   static final Path STAGES = Path.of("data", "stages");
   static final Path READINGS = Path.of("data", "readings");
 
   static Stream<Path> stageFiles() throws IOException {
     try (Stream<Path> files = Files.list(STAGES)) {
-      return files.filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX)).sorted().toList().stream();
+      return files
+          .filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX))
+          .sorted()
+          .toList()
+          .stream();
     }
   }
 
   static Stream<Path> readingsFiles() throws IOException {
     try (Stream<Path> files = Files.list(READINGS)) {
-      return files.filter(f -> f.getFileName().toString().endsWith(ReadingsSheet.SUFFIX)).sorted().toList().stream();
+      return files
+          .filter(f -> f.getFileName().toString().endsWith(ReadingsSheet.SUFFIX))
+          .sorted()
+          .toList()
+          .stream();
     }
   }
 

@@ -35,7 +35,9 @@ class ReadingsSheetTest {
   static InvalidInputException badReadings(String json) {
     Throwable thrown = catchThrowable(() -> ReadingsSheet.read(json, FILE, STAGE));
     assertThat(thrown).isInstanceOf(InvalidInputException.class);
-    assertThat(thrown.getMessage()).startsWith(FILE + ": ").doesNotContain("com.fasterxml", "Exception");
+    assertThat(thrown.getMessage())
+        .startsWith(FILE + ": ")
+        .doesNotContain("com.fasterxml", "Exception");
     return (InvalidInputException) thrown;
   }
 
@@ -50,8 +52,13 @@ class ReadingsSheetTest {
 
   @Test
   void writeThenRead_givesEqualReadings() {
-    ReadingSet set = ReadingsSheet.read(EXAMPLE.replace("{\"at\": \"U1.2\", \"dc\": 0.62}",
-        "{\"at\": \"U1.2\", \"dc\": 0.62, \"uncertainty\": 0.005}"), FILE, STAGE);
+    ReadingSet set =
+        ReadingsSheet.read(
+            EXAMPLE.replace(
+                "{\"at\": \"U1.2\", \"dc\": 0.62}",
+                "{\"at\": \"U1.2\", \"dc\": 0.62, \"uncertainty\": 0.005}"),
+            FILE,
+            STAGE);
     String written = ReadingsSheet.write(set);
     assertThat(ReadingsSheet.read(written, "again", STAGE)).isEqualTo(set);
     assertThat(written).contains("\"format\": \"stagewise-readings\"", "\"uncertainty\": 0.005");
@@ -73,12 +80,17 @@ class ReadingsSheetTest {
   void uncertainty_followsTheContract() {
     ReadingSet set = new ReadingSet(MeterSpec.DEFAULT, java.util.List.of());
     // 6000-count meter at ±(0.5 % + 2 counts): 13.41 V sits on the 60 V range (10 mV a count), so
-    // 0.067 05 + 0.02 V; 0.62 V on the 6 V range (1 mV a count): 0.0031 + 0.002 V (the readings contract).
-    assertThat(set.uncertainty(Reading.dc("OUT", 13.41))).isCloseTo(0.08705, org.assertj.core.data.Offset.offset(1e-12));
-    assertThat(set.uncertainty(Reading.dc("OUT", 0.62))).isCloseTo(0.0051, org.assertj.core.data.Offset.offset(1e-12));
-    assertThat(set.uncertainty(Reading.dc("OUT", 0.5))).isCloseTo(0.0025 + 0.0002, org.assertj.core.data.Offset.offset(1e-12));
+    // 0.067 05 + 0.02 V; 0.62 V on the 6 V range (1 mV a count): 0.0031 + 0.002 V (the readings
+    // contract).
+    assertThat(set.uncertainty(Reading.dc("OUT", 13.41)))
+        .isCloseTo(0.08705, org.assertj.core.data.Offset.offset(1e-12));
+    assertThat(set.uncertainty(Reading.dc("OUT", 0.62)))
+        .isCloseTo(0.0051, org.assertj.core.data.Offset.offset(1e-12));
+    assertThat(set.uncertainty(Reading.dc("OUT", 0.5)))
+        .isCloseTo(0.0025 + 0.0002, org.assertj.core.data.Offset.offset(1e-12));
     // Scope: ±(3 % of reading + 1 mV).
-    assertThat(set.uncertainty(Reading.ac("OUT", 0.47, 1000))).isCloseTo(0.0151, org.assertj.core.data.Offset.offset(1e-12));
+    assertThat(set.uncertainty(Reading.ac("OUT", 0.47, 1000)))
+        .isCloseTo(0.0151, org.assertj.core.data.Offset.offset(1e-12));
   }
 
   @Nested
@@ -99,7 +111,8 @@ class ReadingsSheetTest {
 
     @Test
     void netNotOnStage_isRefused() {
-      InvalidInputException e = badReadings(EXAMPLE.replace("\"OUT\",  \"dc\"", "\"OUTPUT\",  \"dc\""));
+      InvalidInputException e =
+          badReadings(EXAMPLE.replace("\"OUT\",  \"dc\"", "\"OUTPUT\",  \"dc\""));
       assertThat(e.field()).isEqualTo("readings[1].at");
       assertThat(e.getMessage()).contains("OUTPUT", "not a net");
     }
@@ -120,18 +133,22 @@ class ReadingsSheetTest {
     @Test
     void justWithinTwiceTheRails_isAccepted() {
       // 2 × 15 V + 1 V = 31 V is the limit.
-      assertThat(ReadingsSheet.read(EXAMPLE.replace("13.41", "30.9"), FILE, STAGE).readings()).hasSize(4);
+      assertThat(ReadingsSheet.read(EXAMPLE.replace("13.41", "30.9"), FILE, STAGE).readings())
+          .hasSize(4);
     }
 
     @Test
     void bothDcAndAc_isRefused() {
-      assertThat(badReadings(EXAMPLE.replace("\"dc\": 0.62", "\"dc\": 0.62, \"ac\": 0.1")).getMessage())
+      assertThat(
+              badReadings(EXAMPLE.replace("\"dc\": 0.62", "\"dc\": 0.62, \"ac\": 0.1"))
+                  .getMessage())
           .contains("either");
     }
 
     @Test
     void neitherDcNorAc_isRefused() {
-      assertThat(badReadings(EXAMPLE.replace(", \"dc\": 0.62", "")).field()).isEqualTo("readings[2]");
+      assertThat(badReadings(EXAMPLE.replace(", \"dc\": 0.62", "")).field())
+          .isEqualTo("readings[2]");
     }
 
     @Test
@@ -148,19 +165,24 @@ class ReadingsSheetTest {
 
     @Test
     void newerVersion_isRefused() {
-      assertThat(badReadings(EXAMPLE.replace("\"version\": 1", "\"version\": 3")).getMessage()).contains("newer");
+      assertThat(badReadings(EXAMPLE.replace("\"version\": 1", "\"version\": 3")).getMessage())
+          .contains("newer");
     }
 
     @Test
     void badMeter_isRefused() {
-      assertThat(badReadings(EXAMPLE.replace("\"displayCounts\": 6000", "\"displayCounts\": 0")).field())
+      assertThat(
+              badReadings(EXAMPLE.replace("\"displayCounts\": 6000", "\"displayCounts\": 0"))
+                  .field())
           .isEqualTo("meter.displayCounts");
-      assertThat(badReadings(EXAMPLE.replace("\"percent\": 0.5", "\"percent\": -1")).field()).isEqualTo("meter.percent");
+      assertThat(badReadings(EXAMPLE.replace("\"percent\": 0.5", "\"percent\": -1")).field())
+          .isEqualTo("meter.percent");
     }
 
     @Test
     void negativeAc_isRefused() {
-      assertThat(badReadings(EXAMPLE.replace("\"ac\": 0.0", "\"ac\": -0.1")).field()).isEqualTo("readings[3].ac");
+      assertThat(badReadings(EXAMPLE.replace("\"ac\": 0.0", "\"ac\": -0.1")).field())
+          .isEqualTo("readings[3].ac");
     }
 
     @Test

@@ -50,10 +50,13 @@ class SolutionJsonTest {
     assertThat(root.has("ac")).isEqualTo(hasAc);
     if (hasAc) {
       assertThat(root.get("ac").get("hz").isNumber()).isTrue();
-      root.get("ac").get("nets").forEach(p -> {
-        assertThat(p.get("amplitude").isNumber()).isTrue();
-        assertThat(p.get("phaseDegrees").isNumber()).isTrue();
-      });
+      root.get("ac")
+          .get("nets")
+          .forEach(
+              p -> {
+                assertThat(p.get("amplitude").isNumber()).isTrue();
+                assertThat(p.get("phaseDegrees").isNumber()).isTrue();
+              });
     }
   }
 
@@ -84,9 +87,10 @@ class SolutionJsonTest {
     assertContract(root, stage);
     assertThat(root.get("alternatives")).hasSize(1);
     JsonNode other = root.get("alternatives").get(0);
-    assertThat(other.at("/sections/0/state").asText()).isNotEqualTo(root.at("/sections/0/state").asText());
-    assertThat(other.at("/dc/nets/OUT").asDouble()).isEqualTo(-root.at("/dc/nets/OUT").asDouble(),
-        org.assertj.core.data.Offset.offset(1e-6));
+    assertThat(other.at("/sections/0/state").asText())
+        .isNotEqualTo(root.at("/sections/0/state").asText());
+    assertThat(other.at("/dc/nets/OUT").asDouble())
+        .isEqualTo(-root.at("/dc/nets/OUT").asDouble(), org.assertj.core.data.Offset.offset(1e-6));
   }
 
   @Test

@@ -44,9 +44,12 @@ class StageSheetTest {
       """;
 
   static InvalidInputException badSheet(String json) {
-    Throwable thrown = org.assertj.core.api.Assertions.catchThrowable(() -> StageSheet.read(json, FILE));
+    Throwable thrown =
+        org.assertj.core.api.Assertions.catchThrowable(() -> StageSheet.read(json, FILE));
     assertThat(thrown).isInstanceOf(InvalidInputException.class);
-    assertThat(thrown.getMessage()).startsWith(FILE + ": ").doesNotContain("com.fasterxml", "Exception");
+    assertThat(thrown.getMessage())
+        .startsWith(FILE + ": ")
+        .doesNotContain("com.fasterxml", "Exception");
     return (InvalidInputException) thrown;
   }
 
@@ -75,9 +78,14 @@ class StageSheetTest {
 
   @Test
   void write_values_areInRkmForPeople() {
-    String written = StageSheet.write(StageSheet.read(EXAMPLE.replace("\"10k\"", "\"4700\""), FILE));
+    String written =
+        StageSheet.write(StageSheet.read(EXAMPLE.replace("\"10k\"", "\"4700\""), FILE));
     assertThat(written)
-        .contains("\"value\": \"4k7\"", "\"value\": \"47k\"", "\"value\": \"100n\"", "\"tolerance\": \"1%\"")
+        .contains(
+            "\"value\": \"4k7\"",
+            "\"value\": \"47k\"",
+            "\"value\": \"100n\"",
+            "\"tolerance\": \"1%\"")
         .contains("\"volts\": 15,", "\"volts\": -15,", "\"hz\": 1000")
         .contains("\"format\": \"stagewise-stage\"", "\"version\": 1");
   }
@@ -93,7 +101,11 @@ class StageSheetTest {
   @Test
   void read_plainNumbersAndFractions_areAccepted() {
     Stage stage =
-        StageSheet.read(EXAMPLE.replace("\"10k\"", "10000").replace("\"tolerance\": \"1%\"", "\"tolerance\": 0.01"), FILE);
+        StageSheet.read(
+            EXAMPLE
+                .replace("\"10k\"", "10000")
+                .replace("\"tolerance\": \"1%\"", "\"tolerance\": 0.01"),
+            FILE);
     assertThat(stage.parts().get(0).value()).isEqualTo(10_000);
     assertThat(stage.parts().get(0).tolerance()).isEqualTo(0.01);
   }
@@ -102,15 +114,22 @@ class StageSheetTest {
   class BadInput {
     @Test
     void unknownKey_namesTheKeyAndPath() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"kind\": \"resistor\",  \"value\": \"47k\"",
-          "\"kind\": \"resistor\",  \"valeu\": \"47k\""));
+      InvalidInputException e =
+          badSheet(
+              EXAMPLE.replace(
+                  "\"kind\": \"resistor\",  \"value\": \"47k\"",
+                  "\"kind\": \"resistor\",  \"valeu\": \"47k\""));
       assertThat(e.field()).isEqualTo("parts[1].valeu");
       assertThat(e.getMessage()).contains("unknown key \"valeu\"", "value");
     }
 
     @Test
     void unknownTopLevelKey_namesTheKey() {
-      assertThat(badSheet(EXAMPLE.replace("\"ground\": \"GND\",", "\"ground\": \"GND\", \"notes\": \"x\",")).getMessage())
+      assertThat(
+              badSheet(
+                      EXAMPLE.replace(
+                          "\"ground\": \"GND\",", "\"ground\": \"GND\", \"notes\": \"x\","))
+                  .getMessage())
           .contains("notes", "unknown key");
     }
 
@@ -132,15 +151,21 @@ class StageSheetTest {
       InvalidInputException e = badSheet(EXAMPLE.replace("\"volts\": 15", "\"volts\": true"));
       assertThat(e.field()).isEqualTo("rails[0].volts");
       assertThat(e.getMessage()).contains("found true");
-      assertThat(badSheet(EXAMPLE.replace("\"parts\": [", "\"parts\": {\"a\": [").replace("]}\n  ],", "]}\n  ]},"))
-              .getMessage())
+      assertThat(
+              badSheet(
+                      EXAMPLE
+                          .replace("\"parts\": [", "\"parts\": {\"a\": [")
+                          .replace("]}\n  ],", "]}\n  ]},"))
+                  .getMessage())
           .contains("parts");
     }
 
     @Test
     void badValue_namesPathAndExpectation() {
       InvalidInputException e = badSheet(EXAMPLE.replace("\"47k\"", "\"47q\""));
-      assertThat(e.getMessage()).startsWith(FILE + ": parts[1].value: value \"47q\" is not a number").contains("4k7");
+      assertThat(e.getMessage())
+          .startsWith(FILE + ": parts[1].value: value \"47q\" is not a number")
+          .contains("4k7");
     }
 
     @Test
@@ -151,7 +176,13 @@ class StageSheetTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {"\"101%\"|parts[0].tolerance", "-0.1|parts[0].tolerance", "\"x%\"|parts[0].tolerance"})
+    @CsvSource(
+        delimiter = '|',
+        value = {
+          "\"101%\"|parts[0].tolerance",
+          "-0.1|parts[0].tolerance",
+          "\"x%\"|parts[0].tolerance"
+        })
     void badTolerance_isRefused(String tolerance, String path) {
       assertThat(badSheet(EXAMPLE.replaceFirst("\"1%\"", tolerance)).field()).isEqualTo(path);
     }
@@ -171,12 +202,14 @@ class StageSheetTest {
 
     @Test
     void missingFormat_isRefused() {
-      assertThat(badSheet(EXAMPLE.replace("\"format\": \"stagewise-stage\",", "")).field()).isEqualTo("format");
+      assertThat(badSheet(EXAMPLE.replace("\"format\": \"stagewise-stage\",", "")).field())
+          .isEqualTo("format");
     }
 
     @Test
     void amplifierTerminalOnNoNet_namesTheTerminal() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"inMinus\": \"SUM\"", "\"inMinus\": \"SUMM\""));
+      InvalidInputException e =
+          badSheet(EXAMPLE.replace("\"inMinus\": \"SUM\"", "\"inMinus\": \"SUMM\""));
       assertThat(e.field()).isEqualTo("amplifiers[0].inMinus");
       assertThat(e.getMessage()).contains("SUMM", "inverting input");
     }
@@ -201,18 +234,24 @@ class StageSheetTest {
 
     @Test
     void groundTouchingNothing_isRefused() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"inPlus\": \"GND\"", "\"inPlus\": \"VEE\""));
+      InvalidInputException e =
+          badSheet(EXAMPLE.replace("\"inPlus\": \"GND\"", "\"inPlus\": \"VEE\""));
       assertThat(e.field()).isEqualTo("ground");
     }
 
     @Test
     void netWithNoDcPath_isRefused() {
-      // R1 replaced by a capacitor: SUM is then reached only through capacitors and an op-amp input.
+      // R1 replaced by a capacitor: SUM is then reached only through capacitors and an op-amp
+      // input.
       InvalidInputException e =
-          badSheet(EXAMPLE.replace("\"ref\": \"R1\", \"kind\": \"resistor\",  \"value\": \"10k\"",
-                  "\"ref\": \"C2\", \"kind\": \"capacitor\",  \"value\": \"10n\"")
-              .replace("\"ref\": \"R2\", \"kind\": \"resistor\",  \"value\": \"47k\"",
-                  "\"ref\": \"C3\", \"kind\": \"capacitor\",  \"value\": \"10n\""));
+          badSheet(
+              EXAMPLE
+                  .replace(
+                      "\"ref\": \"R1\", \"kind\": \"resistor\",  \"value\": \"10k\"",
+                      "\"ref\": \"C2\", \"kind\": \"capacitor\",  \"value\": \"10n\"")
+                  .replace(
+                      "\"ref\": \"R2\", \"kind\": \"resistor\",  \"value\": \"47k\"",
+                      "\"ref\": \"C3\", \"kind\": \"capacitor\",  \"value\": \"10n\""));
       assertThat(e.getMessage()).contains("SUM", "no DC path");
     }
 
@@ -225,7 +264,8 @@ class StageSheetTest {
 
     @Test
     void sectionNotOnPackage_namesTheField() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"section\": \"A\"", "\"section\": \"C\""));
+      InvalidInputException e =
+          badSheet(EXAMPLE.replace("\"section\": \"A\"", "\"section\": \"C\""));
       assertThat(e.field()).isEqualTo("amplifiers[0].section");
     }
 
@@ -236,15 +276,20 @@ class StageSheetTest {
 
     @Test
     void partWithOneNet_isRefused() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"nets\": [\"IN\", \"SUM\"]", "\"nets\": [\"IN\"]"));
+      InvalidInputException e =
+          badSheet(EXAMPLE.replace("\"nets\": [\"IN\", \"SUM\"]", "\"nets\": [\"IN\"]"));
       assertThat(e.field()).isEqualTo("parts[0].nets");
       assertThat(e.getMessage()).contains("two net names");
     }
 
     @Test
     void brokenJson_saysWhereWithoutParserText() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"title\": \"Input buffer, left channel\",", "\"title\": \"x\""));
-      assertThat(e.getMessage()).contains("not valid JSON", "line").doesNotContain("Unexpected character", "code 34");
+      InvalidInputException e =
+          badSheet(
+              EXAMPLE.replace("\"title\": \"Input buffer, left channel\",", "\"title\": \"x\""));
+      assertThat(e.getMessage())
+          .contains("not valid JSON", "line")
+          .doesNotContain("Unexpected character", "code 34");
     }
 
     @Test
@@ -254,7 +299,8 @@ class StageSheetTest {
 
     @Test
     void duplicateKey_namesTheKey() {
-      assertThat(badSheet(EXAMPLE.replace("\"title\":", "\"board\": \"a\", \"board\":")).getMessage())
+      assertThat(
+              badSheet(EXAMPLE.replace("\"title\":", "\"board\": \"a\", \"board\":")).getMessage())
           .contains("\"board\" appears twice");
     }
 
@@ -270,7 +316,8 @@ class StageSheetTest {
 
     @Test
     void nanVolts_isRefused() {
-      assertThat(badSheet(EXAMPLE.replace("\"volts\": 15", "\"volts\": NaN")).field()).isEqualTo("rails[0].volts");
+      assertThat(badSheet(EXAMPLE.replace("\"volts\": 15", "\"volts\": NaN")).field())
+          .isEqualTo("rails[0].volts");
     }
 
     @Test

@@ -1,8 +1,8 @@
 package com.stagewise.reference;
 
 import com.stagewise.circuit.Amplifier;
-import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import java.util.ArrayList;
@@ -10,10 +10,10 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Every fault of the design notes' catalogue for one stage, as fault ids, built here from the
- * stage itself (not from the diagnosis code): {@code healthy}; each part open, short, high, low;
- * each section stuck high, stuck low, dead; each used package pin lifted; each pair of adjacent
- * used pins bridged (when the two pins sit on different nets); each rail missing and low.
+ * Every fault of the design notes' catalogue for one stage, as fault ids, built here from the stage
+ * itself (not from the diagnosis code): {@code healthy}; each part open, short, high, low; each
+ * section stuck high, stuck low, dead; each used package pin lifted; each pair of adjacent used
+ * pins bridged (when the two pins sit on different nets); each rail missing and low.
  */
 final class FaultList {
   private FaultList() {}
@@ -72,7 +72,9 @@ final class FaultList {
         if (!pins.containsKey(a) || !pins.containsKey(b)) {
           skipped.add(new Skipped(id, "a pin of the pair is not used by the stage"));
         } else if (pins.get(a).equals(pins.get(b))) {
-          skipped.add(new Skipped(id, "both pins sit on net " + pins.get(a) + ": a bridge changes nothing"));
+          skipped.add(
+              new Skipped(
+                  id, "both pins sit on net " + pins.get(a) + ": a bridge changes nothing"));
         }
       }
     }

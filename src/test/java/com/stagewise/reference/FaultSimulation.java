@@ -4,8 +4,8 @@ import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
-import com.stagewise.circuit.Range;
 import com.stagewise.circuit.Rail;
+import com.stagewise.circuit.Range;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
 import com.stagewise.reference.FlatCircuit.Branch;
@@ -27,8 +27,8 @@ import java.util.SplittableRandom;
 /**
  * Simulates one faulted unit of a stage with ngspice (ngspice 39, Debian package, as reference
  * simulator), independently of the diagnosis code: random in-tolerance parts, rails and device
- * parameters, the fault applied to the flattened circuit here, then meter readings with the
- * meter's error added.
+ * parameters, the fault applied to the flattened circuit here, then meter readings with the meter's
+ * error added.
  */
 final class FaultSimulation {
   /** A drifted part is off by a factor drawn uniformly from this interval (×3…×10 or ÷3…÷10). */
@@ -131,7 +131,10 @@ final class FaultSimulation {
     StringBuilder startWords = new StringBuilder();
     for (int k = 0; k < start.length; k++) {
       start[k] = rnd.nextBoolean();
-      startWords.append(k == 0 ? "" : " ").append(flat.sections.get(k).ref()).append(start[k] ? ":high" : ":low");
+      startWords
+          .append(k == 0 ? "" : " ")
+          .append(flat.sections.get(k).ref())
+          .append(start[k] ? ":high" : ":low");
     }
     SpiceSolve.Attempt attempt = SpiceSolve.attempt(flat, stage.title(), start);
     if (!(attempt.outcome() instanceof Ngspice.Solved solved)) {
@@ -145,17 +148,22 @@ final class FaultSimulation {
     Map<String, Phasor> exactAc = new LinkedHashMap<>();
     if (flat.hz > 0) {
       for (Amplifier amp : stage.amplifiers()) {
-        exactAc.put(amp.out(), new Phasor(solved.acAmplitude(amp.out()), solved.acPhaseDegrees(amp.out())));
+        exactAc.put(
+            amp.out(), new Phasor(solved.acAmplitude(amp.out()), solved.acPhaseDegrees(amp.out())));
       }
     }
     List<Reading> readings = new ArrayList<>();
-    exactDc.forEach((at, volts) -> readings.add(new Reading(at, "dc", meterReading(rnd, meter, volts), 0)));
+    exactDc.forEach(
+        (at, volts) -> readings.add(new Reading(at, "dc", meterReading(rnd, meter, volts), 0)));
     exactAc.forEach(
-        (at, phasor) -> readings.add(new Reading(at, "ac", scopeReading(rnd, phasor.amplitude()), flat.hz)));
+        (at, phasor) ->
+            readings.add(new Reading(at, "ac", scopeReading(rnd, phasor.amplitude()), flat.hz)));
     // A partial set as a technician takes it: the output, then one or two package pins.
     String output = stage.amplifiers().get(0).out();
     List<String> pins = new ArrayList<>(flat.pinNodes.keySet());
-    pins.removeIf(pin -> stage.pinNets().get(pin).equals(output) && !flat.pinNodes.get(pin).startsWith("pin:"));
+    pins.removeIf(
+        pin ->
+            stage.pinNets().get(pin).equals(output) && !flat.pinNodes.get(pin).startsWith("pin:"));
     Set<String> partial = new LinkedHashSet<>();
     partial.add(output);
     int wanted = 1 + Math.min(pins.size(), 1 + rnd.nextInt(2));
@@ -163,8 +171,21 @@ final class FaultSimulation {
       partial.add(pins.get(rnd.nextInt(pins.size())));
     }
     return new Case(
-        fault, seed, sample, parts, rails, devices, faultValue, ties, round(exactDc), flat.hz, exactAc,
-        readings, List.copyOf(partial), startWords.toString(), attempt.how());
+        fault,
+        seed,
+        sample,
+        parts,
+        rails,
+        devices,
+        faultValue,
+        ties,
+        round(exactDc),
+        flat.hz,
+        exactAc,
+        readings,
+        List.copyOf(partial),
+        startWords.toString(),
+        attempt.how());
   }
 
   /** Device parameters drawn uniformly within the class's ranges (bias currents independently). */
@@ -205,7 +226,8 @@ final class FaultSimulation {
       case "short" -> {
         int i = flat.branchIndex(ref);
         Branch b = flat.branches.get(i);
-        flat.branches.set(i, new Branch(b.label(), PartKind.RESISTOR, b.a(), b.b(), FlatCircuit.SHORT_OHMS));
+        flat.branches.set(
+            i, new Branch(b.label(), PartKind.RESISTOR, b.a(), b.b(), FlatCircuit.SHORT_OHMS));
       }
       case "high", "low" -> {
         int i = flat.branchIndex(ref);
@@ -217,7 +239,10 @@ final class FaultSimulation {
       }
       case "stuck-high", "stuck-low", "dead" -> {
         int k = flat.sectionIndex(ref);
-        Mode mode = kind.equals("dead") ? Mode.DEAD : kind.equals("stuck-high") ? Mode.STUCK_HIGH : Mode.STUCK_LOW;
+        Mode mode =
+            kind.equals("dead")
+                ? Mode.DEAD
+                : kind.equals("stuck-high") ? Mode.STUCK_HIGH : Mode.STUCK_LOW;
         flat.sections.set(k, flat.sections.get(k).withMode(mode));
       }
       case "lifted" -> {
@@ -239,7 +264,8 @@ final class FaultSimulation {
         String[] pins = ref.substring(dot + 1).split("-");
         String a = flat.pinNodes.get(pkg + "." + pins[0]);
         String b = flat.pinNodes.get(pkg + "." + pins[1]);
-        flat.branches.add(new Branch("bridge " + ref, PartKind.RESISTOR, a, b, FlatCircuit.SHORT_OHMS));
+        flat.branches.add(
+            new Branch("bridge " + ref, PartKind.RESISTOR, a, b, FlatCircuit.SHORT_OHMS));
       }
       default -> throw new IllegalArgumentException("unknown fault kind in " + fault);
     }
@@ -269,15 +295,26 @@ final class FaultSimulation {
             if (floating.contains(to)) {
               to = flat.ground;
             }
-            tie = new Tie(s.node(input), to, s.ref() + " " + input.symbol() + " bias current", List.copyOf(group));
+            tie =
+                new Tie(
+                    s.node(input),
+                    to,
+                    s.ref() + " " + input.symbol() + " bias current",
+                    List.copyOf(group));
             break;
           }
         }
       }
       if (tie == null) {
-        tie = new Tie(group.iterator().next(), flat.ground, "no source: meter and leakage pull it to ground", List.copyOf(group));
+        tie =
+            new Tie(
+                group.iterator().next(),
+                flat.ground,
+                "no source: meter and leakage pull it to ground",
+                List.copyOf(group));
       }
-      flat.branches.add(new Branch("tie", PartKind.RESISTOR, tie.node(), tie.to(), FlatCircuit.TIE_OHMS));
+      flat.branches.add(
+          new Branch("tie", PartKind.RESISTOR, tie.node(), tie.to(), FlatCircuit.TIE_OHMS));
       ties.add(tie);
       for (int k = 0; k < flat.sections.size(); k++) {
         Section s = flat.sections.get(k);
@@ -309,7 +346,10 @@ final class FaultSimulation {
   /** Rounds to a decimal resolution (1e-4, 1e-3, …) so that the result prints without noise. */
   static double roundTo(double value, double resolution) {
     BigDecimal step = new BigDecimal(resolution, new MathContext(1));
-    return new BigDecimal(value).divide(step, 0, java.math.RoundingMode.HALF_EVEN).multiply(step).doubleValue();
+    return new BigDecimal(value)
+        .divide(step, 0, java.math.RoundingMode.HALF_EVEN)
+        .multiply(step)
+        .doubleValue();
   }
 
   /** Returns the values rounded to 9 significant digits, enough for any comparison and compact. */

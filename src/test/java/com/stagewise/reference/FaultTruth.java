@@ -16,10 +16,10 @@ import java.util.stream.Stream;
 
 /**
  * Generates the fault truth set for the diagnosis accuracy test: for every checked stage, {@code
- * healthy} and every fault of {@link FaultList}, several simulated units (random in-tolerance parts,
- * rails and device parameters; the fault applied to the netlist here; ngspice 39, Debian package,
- * as reference simulator; meter error added). Seeded, so a rerun writes the same files. Run by
- * {@code scripts/spice-reference.sh truth} from the project root.
+ * healthy} and every fault of {@link FaultList}, several simulated units (random in-tolerance
+ * parts, rails and device parameters; the fault applied to the netlist here; ngspice 39, Debian
+ * package, as reference simulator; meter error added). Seeded, so a rerun writes the same files.
+ * Run by {@code scripts/spice-reference.sh truth} from the project root.
  */
 public final class FaultTruth {
   /** The master seed of the whole set. */
@@ -63,12 +63,16 @@ public final class FaultTruth {
         }
       }
     }
-    System.out.println("wrote " + total + " cases for " + written.size() + " stages to " + TruthFiles.FOLDER);
+    System.out.println(
+        "wrote " + total + " cases for " + written.size() + " stages to " + TruthFiles.FOLDER);
     System.out.println("cases per fault kind: " + perKind);
     System.out.println("dropped (ngspice did not converge): " + droppedPerKind);
   }
 
-  /** The stages of the truth set: the templates and the sheets, or the hand-built stages before they exist. */
+  /**
+   * The stages of the truth set: the templates and the sheets, or the hand-built stages before they
+   * exist.
+   */
   static List<ReferenceStages.Named> truthStages() {
     List<ReferenceStages.Named> library =
         ReferenceStages.all().stream().filter(n -> !n.source().kind().equals("hand")).toList();
@@ -92,7 +96,9 @@ public final class FaultTruth {
         .forEach(
             i -> {
               Spec s = specs.get(i);
-              results[i] = FaultSimulation.simulate(stage, s.fault(), s.seed(), s.sample(), MeterModel.HANDHELD);
+              results[i] =
+                  FaultSimulation.simulate(
+                      stage, s.fault(), s.seed(), s.sample(), MeterModel.HANDHELD);
             });
     List<Case> cases = new ArrayList<>();
     List<Dropped> dropped = new ArrayList<>();
@@ -104,10 +110,19 @@ public final class FaultTruth {
       }
     }
     return new TruthFiles.StageTruth(
-        named.source(), stage, SEED, SAMPLES_PER_FAULT, HEALTHY_SAMPLES, FaultList.skipped(stage), dropped, cases);
+        named.source(),
+        stage,
+        SEED,
+        SAMPLES_PER_FAULT,
+        HEALTHY_SAMPLES,
+        FaultList.skipped(stage),
+        dropped,
+        cases);
   }
 
-  /** A seed per case from the master seed, the stage, the fault and the sample: stable across runs. */
+  /**
+   * A seed per case from the master seed, the stage, the fault and the sample: stable across runs.
+   */
   static long caseSeed(String stage, String fault, int sample) {
     long h = SEED;
     for (char ch : (stage + "|" + fault + "|" + sample).toCharArray()) {

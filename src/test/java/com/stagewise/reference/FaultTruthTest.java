@@ -34,8 +34,8 @@ import org.junit.jupiter.params.provider.MethodSource;
  * Checks the stored fault truth set (simulated with ngspice 39, Debian package, as reference
  * simulator): its readings lie within the meter's accuracy of the simulated values, every fault of
  * the stage is there, and our solver, given the same unit (parts, rails, device parameters) and the
- * same fault applied through the stage model, agrees with ngspice within 1 mV + 0.01 % at every
- * net and pin and within 0.1 % in AC amplitude. That last check measures the solver on faulted,
+ * same fault applied through the stage model, agrees with ngspice within 1 mV + 0.01 % at every net
+ * and pin and within 0.1 % in AC amplitude. That last check measures the solver on faulted,
  * randomised units, far beyond the nominal stages.
  */
 class FaultTruthTest {
@@ -68,12 +68,19 @@ class FaultTruthTest {
           // Error within the meter's accuracy, plus half a count of rounding.
           double allowed = meter.uncertainty(truth) + meter.resolution(shown);
           if (Math.abs(shown - truth) > allowed) {
-            problems.add(c.path("fault").asText() + " " + at + ": shown " + shown + ", true " + truth);
+            problems.add(
+                c.path("fault").asText() + " " + at + ": shown " + shown + ", true " + truth);
           }
         }
       }
       if (dcCount != exact.size()) {
-        problems.add(c.path("fault").asText() + ": " + dcCount + " DC readings for " + exact.size() + " test points");
+        problems.add(
+            c.path("fault").asText()
+                + ": "
+                + dcCount
+                + " DC readings for "
+                + exact.size()
+                + " test points");
       }
     }
     assertThat(problems).isEmpty();
@@ -83,7 +90,8 @@ class FaultTruthTest {
   @MethodSource("truthFiles")
   void embeddedSheet_readsBackAsTheStage(Path file) throws IOException {
     JsonNode root = TruthFiles.read(file);
-    Stage embedded = StageSheet.read(TruthFiles.JSON.writeValueAsString(root.path("sheet")), file.toString());
+    Stage embedded =
+        StageSheet.read(TruthFiles.JSON.writeValueAsString(root.path("sheet")), file.toString());
     assertThat(embedded).isEqualTo(stageOf(root));
   }
 
@@ -114,28 +122,49 @@ class FaultTruthTest {
       }
       JsonNode exact = c.path("exact").path("dc");
       OperatingPoint point = nearest(solved.points(), exact);
-      exact.fields().forEachRemaining(
-          e -> {
-            double ours = point.at(e.getKey());
-            double ref = e.getValue().asDouble();
-            if (Math.abs(ours - ref) > SpiceComparison.DC_VOLTS + SpiceComparison.DC_FRACTION * Math.abs(ref)) {
-              problems.add(String.format(Locale.ROOT, "%s (seed %d) DC at %s: ours %.6f, ngspice %.6f",
-                  fault, c.path("seed").asLong(), e.getKey(), ours, ref));
-            }
-          });
+      exact
+          .fields()
+          .forEachRemaining(
+              e -> {
+                double ours = point.at(e.getKey());
+                double ref = e.getValue().asDouble();
+                if (Math.abs(ours - ref)
+                    > SpiceComparison.DC_VOLTS + SpiceComparison.DC_FRACTION * Math.abs(ref)) {
+                  problems.add(
+                      String.format(
+                          Locale.ROOT,
+                          "%s (seed %d) DC at %s: ours %.6f, ngspice %.6f",
+                          fault,
+                          c.path("seed").asLong(),
+                          e.getKey(),
+                          ours,
+                          ref));
+                }
+              });
       JsonNode exactAc = c.path("exact").path("ac");
       if (exactAc.size() > 0) {
         Optional<AcSolution> ac = StageSolver.ac(faulted.stage(), faulted.conditions(), point);
-        exactAc.fields().forEachRemaining(
-            e -> {
-              double ref = e.getValue().path("amplitude").asDouble();
-              double ours = ac.map(a -> a.nets().get(e.getKey()).amplitude()).orElse(Double.NaN);
-              // The stored amplitude has 9 significant digits: far inside 0.1 %.
-              if (!(Math.abs(ours - ref) <= SpiceComparison.AC_FRACTION * ref + SpiceComparison.AC_FLOOR_VOLTS)) {
-                problems.add(String.format(Locale.ROOT, "%s (seed %d) AC at %s: ours %.9g, ngspice %.9g",
-                    fault, c.path("seed").asLong(), e.getKey(), ours, ref));
-              }
-            });
+        exactAc
+            .fields()
+            .forEachRemaining(
+                e -> {
+                  double ref = e.getValue().path("amplitude").asDouble();
+                  double ours =
+                      ac.map(a -> a.nets().get(e.getKey()).amplitude()).orElse(Double.NaN);
+                  // The stored amplitude has 9 significant digits: far inside 0.1 %.
+                  if (!(Math.abs(ours - ref)
+                      <= SpiceComparison.AC_FRACTION * ref + SpiceComparison.AC_FLOOR_VOLTS)) {
+                    problems.add(
+                        String.format(
+                            Locale.ROOT,
+                            "%s (seed %d) AC at %s: ours %.9g, ngspice %.9g",
+                            fault,
+                            c.path("seed").asLong(),
+                            e.getKey(),
+                            ours,
+                            ref));
+                  }
+                });
       }
     }
     assertThat(problems).as("disagreements with ngspice 39 in %s", file.getFileName()).isEmpty();
@@ -144,16 +173,17 @@ class FaultTruthTest {
   /** The stage of a truth file, from where it comes from. */
   static Stage stageOf(JsonNode root) {
     return ReferenceStages.resolve(
-        new ReferenceStages.Source(root.path("stage").path("kind").asText(), root.path("stage").path("id").asText()));
+        new ReferenceStages.Source(
+            root.path("stage").path("kind").asText(), root.path("stage").path("id").asText()));
   }
 
   /** A stage and solver conditions that model one stored case. */
   record Faulted(Stage stage, Conditions conditions) {}
 
   /**
-   * Rebuilds a case for our solver through the stage model (independently of the netlist code
-   * that made it): the unit's values, then the fault as a change of the stage or a forced output,
-   * then the ties of floating nodes as 1 GΩ resistors.
+   * Rebuilds a case for our solver through the stage model (independently of the netlist code that
+   * made it): the unit's values, then the fault as a change of the stage or a forced output, then
+   * the ties of floating nodes as 1 GΩ resistors.
    */
   static Faulted faulted(Stage stage, JsonNode c) {
     JsonNode unit = c.path("unit");
@@ -164,7 +194,8 @@ class FaultTruthTest {
     }
     Conditions conditions = Conditions.NOMINAL;
     for (var rail : stage.rails()) {
-      conditions = conditions.withDriven(rail.net(), unit.path("rails").path(rail.net()).asDouble());
+      conditions =
+          conditions.withDriven(rail.net(), unit.path("rails").path(rail.net()).asDouble());
     }
     Map<String, DeviceParams> devices = new java.util.HashMap<>();
     for (Amplifier amp : stage.amplifiers()) {
@@ -188,7 +219,10 @@ class FaultTruthTest {
       if (stage.rail(ref).isEmpty()) {
         switch (kind) {
           case "open" -> s = s.minusPart(ref);
-          case "short" -> s = s.withPart(ref, p -> new Part(p.ref(), PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
+          case "short" ->
+              s =
+                  s.withPart(
+                      ref, p -> new Part(p.ref(), PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
           case "high", "low" -> {
             double value = unit.path("faultValue").asDouble();
             s = s.withPart(ref, p -> p.withValue(value));
@@ -209,7 +243,14 @@ class FaultTruthTest {
             String pkg = ref.substring(0, ref.lastIndexOf('.'));
             String[] pins = ref.substring(ref.lastIndexOf('.') + 1).split("-");
             Map<String, String> pinNets = s.pinNets();
-            s = s.plusPart(Part.resistor("BRIDGE", 0, 0, pinNets.get(pkg + "." + pins[0]), pinNets.get(pkg + "." + pins[1])));
+            s =
+                s.plusPart(
+                    Part.resistor(
+                        "BRIDGE",
+                        0,
+                        0,
+                        pinNets.get(pkg + "." + pins[0]),
+                        pinNets.get(pkg + "." + pins[1])));
           }
           default -> throw new IllegalArgumentException("unknown fault " + fault);
         }
@@ -217,7 +258,14 @@ class FaultTruthTest {
     }
     int tieCount = 0;
     for (JsonNode tie : unit.path("ties")) {
-      s = s.plusPart(Part.resistor("TIE" + ++tieCount, FlatCircuit.TIE_OHMS, 0, tie.path("node").asText(), tie.path("to").asText()));
+      s =
+          s.plusPart(
+              Part.resistor(
+                  "TIE" + ++tieCount,
+                  FlatCircuit.TIE_OHMS,
+                  0,
+                  tie.path("node").asText(),
+                  tie.path("to").asText()));
       Set<String> group = new HashSet<>();
       tie.path("group").forEach(n -> group.add(n.asText()));
       for (Amplifier amp : s.amplifiers()) {

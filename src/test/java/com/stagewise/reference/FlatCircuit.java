@@ -24,8 +24,8 @@ import java.util.Set;
  *
  * <p>Faults are applied here, to the elements, by the truth generator itself (not by the diagnosis
  * code): a part removed or changed, a pin's terminal moved to its own node, a bridge added, a rail
- * source changed, an output forced or disconnected. Mutable on purpose: it is built and edited
- * step by step, then written once.
+ * source changed, an output forced or disconnected. Mutable on purpose: it is built and edited step
+ * by step, then written once.
  */
 final class FlatCircuit {
   /** Resistance of a short (a shorted part or a solder bridge): the solver's own floor, 1 mΩ. */
@@ -86,16 +86,22 @@ final class FlatCircuit {
   }
 
   final String ground;
+
   /** DC volts of every driven node except ground (rails and inputs). */
   final Map<String, Double> driven = new LinkedHashMap<>();
+
   /** AC amplitude of the driven nodes that carry the analysis frequency. */
   final Map<String, Double> acDrive = new LinkedHashMap<>();
+
   /** The AC analysis frequency in hertz, or 0 for DC only. */
   double hz;
+
   final List<Branch> branches = new ArrayList<>();
   final List<Section> sections = new ArrayList<>();
+
   /** The node each used package pin sits on, keyed {@code PACKAGE.PIN}. */
   final Map<String, String> pinNodes = new LinkedHashMap<>();
+
   /** The stage's nets, in the stage's order (test points that are nets). */
   final List<String> nets;
 
@@ -117,12 +123,14 @@ final class FlatCircuit {
     for (TestInput input : stage.inputs()) {
       flat.driven.put(input.net(), input.dc());
     }
-    conditions.driven().forEach(
-        (net, volts) -> {
-          if (flat.driven.containsKey(net)) {
-            flat.driven.put(net, volts);
-          }
-        });
+    conditions
+        .driven()
+        .forEach(
+            (net, volts) -> {
+              if (flat.driven.containsKey(net)) {
+                flat.driven.put(net, volts);
+              }
+            });
     Optional<TestInput> acSource = stage.inputs().stream().filter(TestInput::hasAc).findFirst();
     if (acSource.isPresent()) {
       flat.hz = acSource.get().hz();
@@ -133,7 +141,8 @@ final class FlatCircuit {
       }
     }
     for (Part part : stage.parts()) {
-      flat.branches.add(new Branch(part.ref(), part.kind(), part.netA(), part.netB(), part.value()));
+      flat.branches.add(
+          new Branch(part.ref(), part.kind(), part.netA(), part.netB(), part.value()));
     }
     for (Amplifier amp : stage.amplifiers()) {
       Map<Terminal, String> nodes = new HashMap<>();

@@ -84,8 +84,17 @@ final class HandStages {
             .r("R1", 10e3, "IN", "SUM")
             .r("R2", 47e3, "SUM", "OUT")
             .c("C1", 100e-12, "SUM", "OUT")
-            .amp("U1A", "U1", PackageType.DUAL_8, "A", DeviceClass.CLASSIC_BIPOLAR,
-                "GND", "SUM", "OUT", "VCC", "VEE")
+            .amp(
+                "U1A",
+                "U1",
+                PackageType.DUAL_8,
+                "A",
+                DeviceClass.CLASSIC_BIPOLAR,
+                "GND",
+                "SUM",
+                "OUT",
+                "VCC",
+                "VEE")
             .build());
     stages.put(
         "hand-two-stage-quad",
@@ -95,10 +104,28 @@ final class HandStages {
             .r("R2", 20e3, "FB1", "MID")
             .r("R3", 10e3, "MID", "SUM")
             .r("R4", 20e3, "SUM", "OUT")
-            .amp("U1A", "U1", PackageType.QUAD_14, "A", DeviceClass.RAIL_TO_RAIL,
-                "IN", "FB1", "MID", "VCC", "VEE")
-            .amp("U1B", "U1", PackageType.QUAD_14, "B", DeviceClass.RAIL_TO_RAIL,
-                "GND", "SUM", "OUT", "VCC", "VEE")
+            .amp(
+                "U1A",
+                "U1",
+                PackageType.QUAD_14,
+                "A",
+                DeviceClass.RAIL_TO_RAIL,
+                "IN",
+                "FB1",
+                "MID",
+                "VCC",
+                "VEE")
+            .amp(
+                "U1B",
+                "U1",
+                PackageType.QUAD_14,
+                "B",
+                DeviceClass.RAIL_TO_RAIL,
+                "GND",
+                "SUM",
+                "OUT",
+                "VCC",
+                "VEE")
             .build());
     stages.put(
         "hand-filtered-supply",
@@ -110,8 +137,17 @@ final class HandStages {
             .r("R2", 47e3, "FB", "OUT")
             .r("RL", 2.2e3, "OUT", "GND")
             .c("C9", 10e-6, "V+", "GND")
-            .amp("U1A", "U1", PackageType.SINGLE_8, "A", DeviceClass.GROUND_SENSING,
-                "IN", "FB", "OUT", "V+", "GND")
+            .amp(
+                "U1A",
+                "U1",
+                PackageType.SINGLE_8,
+                "A",
+                DeviceClass.GROUND_SENSING,
+                "IN",
+                "FB",
+                "OUT",
+                "V+",
+                "GND")
             .build());
     return stages;
   }

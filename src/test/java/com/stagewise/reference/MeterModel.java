@@ -3,9 +3,9 @@ package com.stagewise.reference;
 /**
  * The technician's DC meter as the truth generator models it, written here from the readings
  * contract of the design notes (not taken from the main code, so that the truth stays independent):
- * ±(percent of reading + counts of the last digit), autoranging over decade ranges whose full
- * scale is {@code displayCounts} counts of 0.1 mV, 1 mV, 10 mV or 100 mV (for 6000 counts: the
- * 0.6, 6, 60 and 600 V ranges). A reading uses the smallest range that holds it.
+ * ±(percent of reading + counts of the last digit), autoranging over decade ranges whose full scale
+ * is {@code displayCounts} counts of 0.1 mV, 1 mV, 10 mV or 100 mV (for 6000 counts: the 0.6, 6, 60
+ * and 600 V ranges). A reading uses the smallest range that holds it.
  *
  * @param percent percent of the reading
  * @param counts counts of the last digit

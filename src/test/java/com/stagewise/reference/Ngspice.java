@@ -41,7 +41,10 @@ final class Ngspice {
    * @param acIm imaginary part of the AC phasor by our node name
    */
   record Solved(
-      Map<String, Double> dc, Map<String, Double> acRe, Map<String, Double> acIm, Map<String, Double> printed)
+      Map<String, Double> dc,
+      Map<String, Double> acRe,
+      Map<String, Double> acIm,
+      Map<String, Double> printed)
       implements Outcome {
     /** Returns the AC amplitude at a node. */
     double acAmplitude(String node) {
@@ -62,9 +65,7 @@ final class Ngspice {
    */
   record Failed(String reason) implements Outcome {}
 
-  /**
-   * Returns whether ngspice can be started from the PATH.
-   */
+  /** Returns whether ngspice can be started from the PATH. */
   static boolean available() {
     try {
       Process p = new ProcessBuilder("ngspice", "--version").redirectErrorStream(true).start();
@@ -193,11 +194,12 @@ final class Ngspice {
       return new Failed(tail(output));
     }
     Map<String, Double> printed = new HashMap<>();
-    dc.forEach((name, volts) -> {
-      if (!name.contains("#")) {
-        printed.put(name, volts);
-      }
-    });
+    dc.forEach(
+        (name, volts) -> {
+          if (!name.contains("#")) {
+            printed.put(name, volts);
+          }
+        });
     return new Solved(ourDc, ourRe, ourIm, printed);
   }
 

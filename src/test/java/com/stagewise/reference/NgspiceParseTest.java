@@ -40,9 +40,11 @@ class NgspiceParseTest {
     assertThat(outcome).isInstanceOf(Ngspice.Solved.class);
     Ngspice.Solved solved = (Ngspice.Solved) outcome;
     assertThat(solved.dc()).containsEntry("OUT", -4.68946620800142).containsEntry("GND", 0.0);
-    assertThat(solved.acAmplitude("OUT")).isCloseTo(0.4507440489044408, org.assertj.core.data.Offset.offset(1e-15));
+    assertThat(solved.acAmplitude("OUT"))
+        .isCloseTo(0.4507440489044408, org.assertj.core.data.Offset.offset(1e-15));
     // ngspice prints vp(n6) = 2.854450794666344 rad for this node: 163.5467°.
-    assertThat(solved.acPhaseDegrees("OUT")).isCloseTo(Math.toDegrees(2.854450794666344), org.assertj.core.data.Offset.offset(1e-9));
+    assertThat(solved.acPhaseDegrees("OUT"))
+        .isCloseTo(Math.toDegrees(2.854450794666344), org.assertj.core.data.Offset.offset(1e-9));
   }
 
   @Test

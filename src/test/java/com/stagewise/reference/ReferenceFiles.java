@@ -23,7 +23,9 @@ final class ReferenceFiles {
   static final String SIMULATOR = "ngspice 39 (Debian package), batch mode";
 
   static final ObjectMapper JSON =
-      new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS);
+      new ObjectMapper()
+          .enable(SerializationFeature.INDENT_OUTPUT)
+          .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS);
 
   /** The folder of the stored files, from the project root. */
   static final Path FOLDER = Path.of("src", "test", "resources", "reference", "spice");
@@ -33,7 +35,8 @@ final class ReferenceFiles {
   /** A stored reference: where the stage comes from and what ngspice said. */
   record Stored(ReferenceStages.Source source, SpiceComparison.Expected expected) {}
 
-  static ObjectNode toJson(ReferenceStages.Source source, String title, SpiceComparison.Expected e) {
+  static ObjectNode toJson(
+      ReferenceStages.Source source, String title, SpiceComparison.Expected e) {
     ObjectNode root = JSON.createObjectNode();
     root.put("format", FORMAT);
     root.put("version", 1);
@@ -51,12 +54,13 @@ final class ReferenceFiles {
       ObjectNode ac = root.putObject("ac");
       ac.put("hz", e.hz());
       ObjectNode acNets = ac.putObject("nets");
-      e.ac().forEach(
-          (net, p) -> {
-            ObjectNode one = acNets.putObject(net);
-            one.put("amplitude", p.amplitude());
-            one.put("phaseDegrees", p.phaseDegrees());
-          });
+      e.ac()
+          .forEach(
+              (net, p) -> {
+                ObjectNode one = acNets.putObject(net);
+                one.put("amplitude", p.amplitude());
+                one.put("phaseDegrees", p.phaseDegrees());
+              });
     }
     return root;
   }
@@ -78,14 +82,23 @@ final class ReferenceFiles {
       throw new IOException(file + ": format must be " + FORMAT);
     }
     ReferenceStages.Source source =
-        new ReferenceStages.Source(root.path("stage").path("kind").asText(), root.path("stage").path("id").asText());
+        new ReferenceStages.Source(
+            root.path("stage").path("kind").asText(), root.path("stage").path("id").asText());
     List<SpiceComparison.DcState> states = new ArrayList<>();
     states.add(readState(root.path("dc")));
     root.path("otherStates").forEach(state -> states.add(readState(state)));
     double hz = root.path("ac").path("hz").asDouble(0);
     Map<String, Phasor> ac = new LinkedHashMap<>();
-    root.path("ac").path("nets").fields().forEachRemaining(
-        f -> ac.put(f.getKey(), new Phasor(f.getValue().path("amplitude").asDouble(), f.getValue().path("phaseDegrees").asDouble())));
+    root.path("ac")
+        .path("nets")
+        .fields()
+        .forEachRemaining(
+            f ->
+                ac.put(
+                    f.getKey(),
+                    new Phasor(
+                        f.getValue().path("amplitude").asDouble(),
+                        f.getValue().path("phaseDegrees").asDouble())));
     return new Stored(source, new SpiceComparison.Expected(states, hz, ac));
   }
 

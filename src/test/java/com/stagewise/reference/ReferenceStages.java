@@ -58,7 +58,10 @@ final class ReferenceStages {
 
   private static List<Path> sheets() {
     try (Stream<Path> files = Files.list(SHEETS)) {
-      return files.filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX)).sorted().toList();
+      return files
+          .filter(f -> f.getFileName().toString().endsWith(StageSheet.SUFFIX))
+          .sorted()
+          .toList();
     } catch (IOException e) {
       throw new UncheckedIOException("cannot list the demo sheets in " + SHEETS, e);
     }

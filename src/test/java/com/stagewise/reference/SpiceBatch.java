@@ -19,11 +19,11 @@ import java.util.SplittableRandom;
  * <p>Every fault of {@link FaultList} (nominal parts and device parameters; a drifted part at ×5 or
  * ÷5; floating nodes tied as in the truth set, with a fixed seed) is one small circuit file; one
  * control script loads each in turn ({@code source}), solves it ({@code op}, and {@code ac} when
- * the stage has an AC input), prints every node and removes it ({@code remcirc}). One process
- * start for the whole dictionary, and each fault converges on its own as in a single run. (One
- * deck with every fault as a subcircuit under a single {@code op} was tried: ngspice then needs
- * gmin and source stepping for the joint Newton iteration, which is slower and can fail as a
- * whole.) {@code SpiceBatchTest} checks the batch's answers against one run per fault.
+ * the stage has an AC input), prints every node and removes it ({@code remcirc}). One process start
+ * for the whole dictionary, and each fault converges on its own as in a single run. (One deck with
+ * every fault as a subcircuit under a single {@code op} was tried: ngspice then needs gmin and
+ * source stepping for the joint Newton iteration, which is slower and can fail as a whole.) {@code
+ * SpiceBatchTest} checks the batch's answers against one run per fault.
  */
 public final class SpiceBatch {
   /** The seed for the tie directions of floating nodes in the dictionary. */
@@ -43,7 +43,10 @@ public final class SpiceBatch {
    * @param flats per fault, the flattened faulted circuit
    */
   record Deck(
-      Map<String, String> files, List<String> faults, List<Map<String, String>> nodes, List<FlatCircuit> flats) {}
+      Map<String, String> files,
+      List<String> faults,
+      List<Map<String, String>> nodes,
+      List<FlatCircuit> flats) {}
 
   /** Returns the batch run of every fault of a stage at nominal values. */
   static Deck deck(Stage stage) {
@@ -53,7 +56,10 @@ public final class SpiceBatch {
     List<FlatCircuit> flats = new ArrayList<>();
     Map<String, String> files = new LinkedHashMap<>();
     StringBuilder control = new StringBuilder();
-    control.append("* fault dictionary of ").append(stage.title().replaceAll("[\\r\\n]+", " ")).append('\n');
+    control
+        .append("* fault dictionary of ")
+        .append(stage.title().replaceAll("[\\r\\n]+", " "))
+        .append('\n');
     control.append(".control\nset numdgt=15\n");
     for (int i = 0; i < faults.size(); i++) {
       FlatCircuit flat = FlatCircuit.of(stage, Conditions.NOMINAL);
@@ -61,12 +67,24 @@ public final class SpiceBatch {
       FaultSimulation.tieFloating(flat, rnd);
       SpiceNetlist.Body body = SpiceNetlist.body(flat, false);
       String file = "f" + (i + 1) + ".cir";
-      files.put(file, "* " + faults.get(i) + "\n" + SpiceNetlist.options(false) + "\n" + body.lines() + ".end\n");
+      files.put(
+          file,
+          "* "
+              + faults.get(i)
+              + "\n"
+              + SpiceNetlist.options(false)
+              + "\n"
+              + body.lines()
+              + ".end\n");
       control.append("source ").append(file).append('\n');
       control.append("echo @@fault ").append(i + 1).append("\necho @@op\nop\nprint all\n");
       if (flat.hz > 0) {
-        control.append("echo @@ac\nac lin 1 ").append(SpiceNetlist.num(flat.hz)).append(' ')
-            .append(SpiceNetlist.num(flat.hz)).append("\nprint all\n");
+        control
+            .append("echo @@ac\nac lin 1 ")
+            .append(SpiceNetlist.num(flat.hz))
+            .append(' ')
+            .append(SpiceNetlist.num(flat.hz))
+            .append("\nprint all\n");
       }
       control.append("echo @@end\nremcirc\n");
       nodes.add(body.spiceNodes());
@@ -79,8 +97,11 @@ public final class SpiceBatch {
   }
 
   /** Applies a fault at nominal values: a drifted part is off by exactly ×5 or ÷5. */
-  private static void applyNominal(FlatCircuit flat, Stage stage, String fault, SplittableRandom rnd) {
-    if (fault.endsWith(":high") || (fault.endsWith(":low") && stage.rail(fault.substring(0, fault.length() - 4)).isEmpty())) {
+  private static void applyNominal(
+      FlatCircuit flat, Stage stage, String fault, SplittableRandom rnd) {
+    if (fault.endsWith(":high")
+        || (fault.endsWith(":low")
+            && stage.rail(fault.substring(0, fault.length() - 4)).isEmpty())) {
       String ref = fault.substring(0, fault.lastIndexOf(':'));
       int i = flat.branchIndex(ref);
       FlatCircuit.Branch b = flat.branches.get(i);
@@ -145,7 +166,9 @@ public final class SpiceBatch {
       System.exit(1);
     }
     for (ReferenceStages.Named named : ReferenceStages.all()) {
-      if (args.length > 0 && !args[0].isEmpty() && !Arrays.asList(args).contains(named.source().name())) {
+      if (args.length > 0
+          && !args[0].isEmpty()
+          && !Arrays.asList(args).contains(named.source().name())) {
         continue;
       }
       timeFaultDictionary(named.stage());
@@ -155,8 +178,11 @@ public final class SpiceBatch {
       }
       Arrays.sort(ms);
       System.out.printf(
-          Locale.ROOT, "%-40s %3d faults  ngspice %.1f ms (median of 7)%n",
-          named.source().name(), FaultList.of(named.stage()).size(), ms[3] / 1e6);
+          Locale.ROOT,
+          "%-40s %3d faults  ngspice %.1f ms (median of 7)%n",
+          named.source().name(),
+          FaultList.of(named.stage()).size(),
+          ms[3] / 1e6);
     }
   }
 }

@@ -29,7 +29,8 @@ class SpiceBatchTest {
     List<Ngspice.Outcome> batch = SpiceBatch.solve(deck);
     List<String> problems = new ArrayList<>();
     for (int i = 0; i < deck.faults().size(); i++) {
-      Ngspice.Outcome single = Ngspice.run(SpiceNetlist.of(deck.flats().get(i), deck.faults().get(i)));
+      Ngspice.Outcome single =
+          Ngspice.run(SpiceNetlist.of(deck.flats().get(i), deck.faults().get(i)));
       if (!(batch.get(i) instanceof Ngspice.Solved b) || !(single instanceof Ngspice.Solved s)) {
         problems.add(deck.faults().get(i) + ": batch " + batch.get(i) + ", single " + single);
         continue;
@@ -37,8 +38,14 @@ class SpiceBatchTest {
       for (Map.Entry<String, Double> e : s.dc().entrySet()) {
         double other = b.dc().get(e.getKey());
         if (Math.abs(other - e.getValue()) > 1e-6) {
-          problems.add(String.format(Locale.ROOT, "%s at %s: batch %.9f, single %.9f",
-              deck.faults().get(i), e.getKey(), other, e.getValue()));
+          problems.add(
+              String.format(
+                  Locale.ROOT,
+                  "%s at %s: batch %.9f, single %.9f",
+                  deck.faults().get(i),
+                  e.getKey(),
+                  other,
+                  e.getValue()));
         }
       }
     }
@@ -49,6 +56,7 @@ class SpiceBatchTest {
   @Test
   void timeFaultDictionary_measuresAPositiveWallTime() {
     // Not a speed target (those are JMH benchmarks): only that a run happened and was timed.
-    assertThat(SpiceBatch.timeFaultDictionary(ReferenceStages.all().get(0).stage()).toNanos()).isPositive();
+    assertThat(SpiceBatch.timeFaultDictionary(ReferenceStages.all().get(0).stage()).toNanos())
+        .isPositive();
   }
 }

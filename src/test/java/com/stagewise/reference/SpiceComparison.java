@@ -75,8 +75,8 @@ final class SpiceComparison {
 
   /**
    * Returns every disagreement between our solver and the expected values, empty when they agree.
-   * Each state ngspice found is compared with the nearest of our stable operating points (a
-   * Schmitt trigger has two), and ngspice must not find more states than we do.
+   * Each state ngspice found is compared with the nearest of our stable operating points (a Schmitt
+   * trigger has two), and ngspice must not find more states than we do.
    */
   static List<String> mismatches(Stage stage, Expected expected) {
     List<String> problems = new ArrayList<>();
@@ -86,8 +86,11 @@ final class SpiceComparison {
       return problems;
     }
     if (expected.states().size() > solved.points().size()) {
-      problems.add("ngspice found " + expected.states().size() + " stable states, our solver "
-          + solved.points().size());
+      problems.add(
+          "ngspice found "
+              + expected.states().size()
+              + " stable states, our solver "
+              + solved.points().size());
     }
     OperatingPoint first = null;
     for (DcState state : expected.states()) {
@@ -112,14 +115,24 @@ final class SpiceComparison {
         }
         double allowed = AC_FRACTION * ref.amplitude() + AC_FLOOR_VOLTS;
         if (Math.abs(ours.amplitude() - ref.amplitude()) > allowed) {
-          problems.add(String.format(Locale.ROOT, "AC amplitude at %s: ours %.9g V, ngspice %.9g V",
-              e.getKey(), ours.amplitude(), ref.amplitude()));
+          problems.add(
+              String.format(
+                  Locale.ROOT,
+                  "AC amplitude at %s: ours %.9g V, ngspice %.9g V",
+                  e.getKey(),
+                  ours.amplitude(),
+                  ref.amplitude()));
         } else if (ref.amplitude() > 1e-6) {
           double diff = Math.abs(ours.phaseDegrees() - ref.phaseDegrees()) % 360;
           diff = Math.min(diff, 360 - diff);
           if (diff > PHASE_DEGREES) {
-            problems.add(String.format(Locale.ROOT, "AC phase at %s: ours %.4f°, ngspice %.4f°",
-                e.getKey(), ours.phaseDegrees(), ref.phaseDegrees()));
+            problems.add(
+                String.format(
+                    Locale.ROOT,
+                    "AC phase at %s: ours %.4f°, ngspice %.4f°",
+                    e.getKey(),
+                    ours.phaseDegrees(),
+                    ref.phaseDegrees()));
           }
         }
       }
@@ -132,7 +145,8 @@ final class SpiceComparison {
     double worst = 0;
     for (Map.Entry<String, Double> e : nets.entrySet()) {
       Double ours = point.nets().get(e.getKey());
-      worst = Math.max(worst, ours == null ? Double.POSITIVE_INFINITY : Math.abs(ours - e.getValue()));
+      worst =
+          Math.max(worst, ours == null ? Double.POSITIVE_INFINITY : Math.abs(ours - e.getValue()));
     }
     return worst;
   }
@@ -157,8 +171,14 @@ final class SpiceComparison {
       }
       double allowed = DC_VOLTS + DC_FRACTION * Math.abs(e.getValue());
       if (Math.abs(mine - e.getValue()) > allowed) {
-        problems.add(String.format(Locale.ROOT, "DC at %s %s: ours %.6f V, ngspice %.6f V",
-            what, e.getKey(), mine, e.getValue()));
+        problems.add(
+            String.format(
+                Locale.ROOT,
+                "DC at %s %s: ours %.6f V, ngspice %.6f V",
+                what,
+                e.getKey(),
+                mine,
+                e.getValue()));
       }
     }
   }

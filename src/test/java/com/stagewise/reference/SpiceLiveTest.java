@@ -12,8 +12,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Our solver against ngspice run live (ngspice 39, Debian package, as reference simulator) on every
- * checked stage. ngspice must be on the PATH: without it the test fails and says how to install
- * it; it never skips.
+ * checked stage. ngspice must be on the PATH: without it the test fails and says how to install it;
+ * it never skips.
  */
 class SpiceLiveTest {
 
@@ -32,7 +32,10 @@ class SpiceLiveTest {
     FlatCircuit flat = FlatCircuit.of(named.stage(), Conditions.NOMINAL);
     List<Ngspice.Solved> states = SpiceSolve.states(flat, named.stage().title());
     assertThat(states).as("ngspice solutions of %s", named.source().name()).isNotEmpty();
-    List<String> problems = SpiceComparison.mismatches(named.stage(), SpiceComparison.of(flat, states));
-    assertThat(problems).as("disagreements with ngspice 39 for %s", named.source().name()).isEmpty();
+    List<String> problems =
+        SpiceComparison.mismatches(named.stage(), SpiceComparison.of(flat, states));
+    assertThat(problems)
+        .as("disagreements with ngspice 39 for %s", named.source().name())
+        .isEmpty();
   }
 }

@@ -21,15 +21,15 @@ import java.util.OptionalDouble;
  * gain with output limits and a smoothed corner) whose input is {@code v(in+) − v(in−)} with the
  * input offset added by a series source, whose gain is the open-loop gain and whose limits are the
  * clamp {@code [v(v−) + headroomLow, v(v+) − headroomHigh]}, behind the output resistance to the
- * output net. Bias currents are current sources that draw from each input's net. Resistors below
- * 1 mΩ are written at 1 mΩ, as the solver models them.
+ * output net. Bias currents are current sources that draw from each input's net. Resistors below 1
+ * mΩ are written at 1 mΩ, as the solver models them.
  *
  * <p>The limits of a {@code limit} element are numbers, so they are computed from the supply pins'
- * voltages: a supply pin on a driven net (a rail, ground or an input), or on a node held by a single
- * tie to a driven net, has a known voltage. When the interval is empty both limits are the
- * mid-supply point, written as a plain source, as the solver does. A supply pin on a solved net
- * (a rail fed through a resistor) is modelled with a cascade of two limiters whose limits follow
- * the pin voltages through behavioural sources that apply the same mid-supply rule.
+ * voltages: a supply pin on a driven net (a rail, ground or an input), or on a node held by a
+ * single tie to a driven net, has a known voltage. When the interval is empty both limits are the
+ * mid-supply point, written as a plain source, as the solver does. A supply pin on a solved net (a
+ * rail fed through a resistor) is modelled with a cascade of two limiters whose limits follow the
+ * pin voltages through behavioural sources that apply the same mid-supply rule.
  *
  * @param text the netlist, ready for {@code ngspice -b}
  * @param spiceNodes our node name → SPICE node name ({@code 0} for ground)
@@ -72,14 +72,21 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
    * first iterations, then lets them go and converges to a true solution nearby. Used to start a
    * stage with positive feedback in one of its stable states rather than at its unstable middle.
    */
-  static SpiceNetlist of(FlatCircuit flat, String title, boolean relaxed, Map<String, Double> nodeset) {
+  static SpiceNetlist of(
+      FlatCircuit flat, String title, boolean relaxed, Map<String, Double> nodeset) {
     Body body = body(flat, relaxed);
     StringBuilder text = new StringBuilder();
-    text.append("* ").append(oneLine(title)).append(" (Stagewise op-amp model: clamped source behind Rout)\n");
+    text.append("* ")
+        .append(oneLine(title))
+        .append(" (Stagewise op-amp model: clamped source behind Rout)\n");
     text.append(options(relaxed)).append('\n');
     text.append(body.lines());
     for (Map.Entry<String, Double> e : nodeset.entrySet()) {
-      text.append(".nodeset v(").append(e.getKey()).append(")=").append(num(e.getValue())).append('\n');
+      text.append(".nodeset v(")
+          .append(e.getKey())
+          .append(")=")
+          .append(num(e.getValue()))
+          .append('\n');
     }
     text.append(".control\n");
     text.append("set numdgt=15\n");
@@ -114,7 +121,10 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
    */
   record Body(String lines, Map<String, String> spiceNodes) {}
 
-  /** Returns the element lines of a flattened circuit; see {@link #of(FlatCircuit, String, boolean)}. */
+  /**
+   * Returns the element lines of a flattened circuit; see {@link #of(FlatCircuit, String,
+   * boolean)}.
+   */
   static Body body(FlatCircuit flat, boolean relaxed) {
     double limitRange = relaxed ? RELAXED_LIMIT_RANGE : LIMIT_RANGE;
     Map<String, String> names = new LinkedHashMap<>();
@@ -131,8 +141,14 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
       v++;
       double ac = flat.acDrive.getOrDefault(source.getKey(), 0.0);
       w.line("* driven " + oneLine(source.getKey()));
-      w.line("V" + v + " " + w.node(source.getKey()) + " 0 DC " + num(source.getValue())
-          + (ac > 0 ? " AC " + num(ac) : ""));
+      w.line(
+          "V"
+              + v
+              + " "
+              + w.node(source.getKey())
+              + " 0 DC "
+              + num(source.getValue())
+              + (ac > 0 ? " AC " + num(ac) : ""));
     }
     int r = 0;
     int c = 0;
@@ -140,12 +156,27 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
       w.line("* " + oneLine(branch.label()));
       if (branch.kind() == PartKind.RESISTOR) {
         r++;
-        w.line("R" + r + " " + w.node(branch.a()) + " " + w.node(branch.b()) + " "
-            + num(Math.max(branch.value(), FlatCircuit.SHORT_OHMS)));
+        w.line(
+            "R"
+                + r
+                + " "
+                + w.node(branch.a())
+                + " "
+                + w.node(branch.b())
+                + " "
+                + num(Math.max(branch.value(), FlatCircuit.SHORT_OHMS)));
       } else if (branch.value() > 0) {
         // A 0 F capacitor is no part at all; SPICE rejects a zero capacitance.
         c++;
-        w.line("C" + c + " " + w.node(branch.a()) + " " + w.node(branch.b()) + " " + num(branch.value()));
+        w.line(
+            "C"
+                + c
+                + " "
+                + w.node(branch.a())
+                + " "
+                + w.node(branch.b())
+                + " "
+                + num(branch.value()));
       }
     }
     for (int k = 0; k < flat.sections.size(); k++) {
@@ -154,7 +185,8 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     return new Body(w.text.toString(), Map.copyOf(names));
   }
 
-  private static void writeSection(Writer w, FlatCircuit flat, int k, Section s, double limitRange) {
+  private static void writeSection(
+      Writer w, FlatCircuit flat, int k, Section s, double limitRange) {
     DeviceParams p = s.params();
     String inPlus = w.node(s.node(Terminal.IN_PLUS));
     String inMinus = w.node(s.node(Terminal.IN_MINUS));
@@ -191,8 +223,18 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
         default -> {
           w.line("Voff" + k + " s" + k + "p " + inPlus + " DC " + num(p.offset()));
           w.line("A" + k + " %vd(s" + k + "p " + inMinus + ") " + src + " lim" + k);
-          w.line(".model lim" + k + " limit(gain=" + num(p.gain()) + " out_lower_limit=" + num(low)
-              + " out_upper_limit=" + num(high) + " limit_range=" + num(limitRange) + ")");
+          w.line(
+              ".model lim"
+                  + k
+                  + " limit(gain="
+                  + num(p.gain())
+                  + " out_lower_limit="
+                  + num(low)
+                  + " out_upper_limit="
+                  + num(high)
+                  + " limit_range="
+                  + num(limitRange)
+                  + ")");
         }
       }
       return;
@@ -204,10 +246,35 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     String hi = "s" + k + "h";
     String vp = "v(" + w.node(s.node(Terminal.V_PLUS)) + ")";
     String vm = "v(" + w.node(s.node(Terminal.V_MINUS)) + ")";
-    String empty = "(" + vp + "-" + num(p.headroomHigh()) + " < " + vm + "+" + num(p.headroomLow()) + ")";
+    String empty =
+        "(" + vp + "-" + num(p.headroomHigh()) + " < " + vm + "+" + num(p.headroomLow()) + ")";
     String mid = "(" + vp + "+" + vm + ")/2";
-    w.line("Blo" + k + " " + lo + " 0 V = " + empty + " ? " + mid + " : " + vm + "+" + num(p.headroomLow()));
-    w.line("Bhi" + k + " " + hi + " 0 V = " + empty + " ? " + mid + " : " + vp + "-" + num(p.headroomHigh()));
+    w.line(
+        "Blo"
+            + k
+            + " "
+            + lo
+            + " 0 V = "
+            + empty
+            + " ? "
+            + mid
+            + " : "
+            + vm
+            + "+"
+            + num(p.headroomLow()));
+    w.line(
+        "Bhi"
+            + k
+            + " "
+            + hi
+            + " 0 V = "
+            + empty
+            + " ? "
+            + mid
+            + " : "
+            + vp
+            + "-"
+            + num(p.headroomHigh()));
     switch (s.mode()) {
       case STUCK_HIGH -> w.line("Vs" + k + " " + src + " " + hi + " DC 0");
       case STUCK_LOW -> w.line("Vs" + k + " " + src + " " + lo + " DC 0");
@@ -220,16 +287,20 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
         w.line("Ey" + k + " s" + k + "y " + lo + " s" + k + "x 0 1");
         w.line("Ab" + k + " %vd(" + hi + " s" + k + "y) s" + k + "z pos" + k);
         w.line("Eo" + k + " " + src + " " + hi + " 0 s" + k + "z 1");
-        w.line(".model pos" + k + " limit(gain=1 out_lower_limit=0 out_upper_limit=1e6 limit_range="
-            + num(limitRange) + ")");
+        w.line(
+            ".model pos"
+                + k
+                + " limit(gain=1 out_lower_limit=0 out_upper_limit=1e6 limit_range="
+                + num(limitRange)
+                + ")");
       }
     }
   }
 
   /**
    * Returns the DC voltage of a node when it is known before solving: a driven node, or a node
-   * whose only DC connections are resistors to one and the same driven node (a floating pin tied
-   * to a rail), since supply pins draw no current in the model.
+   * whose only DC connections are resistors to one and the same driven node (a floating pin tied to
+   * a rail), since supply pins draw no current in the model.
    */
   static OptionalDouble knownVolts(FlatCircuit flat, String node) {
     if (flat.isDriven(node)) {
@@ -237,7 +308,8 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     }
     String target = null;
     for (Branch branch : flat.branches) {
-      if (branch.kind() != PartKind.RESISTOR || !(branch.a().equals(node) || branch.b().equals(node))) {
+      if (branch.kind() != PartKind.RESISTOR
+          || !(branch.a().equals(node) || branch.b().equals(node))) {
         continue;
       }
       String other = branch.a().equals(node) ? branch.b() : branch.a();

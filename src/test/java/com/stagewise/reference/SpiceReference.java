@@ -36,7 +36,8 @@ public final class SpiceReference {
       String name = named.source().name() + ".json";
       ReferenceFiles.write(
           ReferenceFiles.FOLDER.resolve(name),
-          ReferenceFiles.toJson(named.source(), named.stage().title(), SpiceComparison.of(flat, solved)));
+          ReferenceFiles.toJson(
+              named.source(), named.stage().title(), SpiceComparison.of(flat, solved)));
       written.add(name);
     }
     try (Stream<Path> files = Files.list(ReferenceFiles.FOLDER)) {

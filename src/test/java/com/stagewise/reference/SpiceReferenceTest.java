@@ -13,8 +13,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Our solver against stored answers of ngspice 39 (Debian package, as reference simulator): every
- * template's default stage, every demo sheet and the hand-built stages, DC within 1 mV + 0.01 %,
- * AC amplitudes within 0.1 %. The stored files are made by {@code scripts/spice-reference.sh}.
+ * template's default stage, every demo sheet and the hand-built stages, DC within 1 mV + 0.01 %, AC
+ * amplitudes within 0.1 %. The stored files are made by {@code scripts/spice-reference.sh}.
  */
 class SpiceReferenceTest {
 

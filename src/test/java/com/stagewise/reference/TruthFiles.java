@@ -67,7 +67,8 @@ final class TruthFiles {
     }
     ArrayNode dropped = head.putArray("dropped");
     for (Dropped d : truth.dropped()) {
-      dropped.addObject()
+      dropped
+          .addObject()
           .put("fault", d.fault())
           .put("seed", d.seed())
           .put("sample", d.sample())
@@ -115,11 +116,12 @@ final class TruthFiles {
     c.exactDc().forEach(dc::put);
     if (!c.exactAc().isEmpty()) {
       ObjectNode ac = exact.putObject("ac");
-      c.exactAc().forEach(
-          (net, p) ->
-              ac.putObject(net)
-                  .put("amplitude", FaultSimulation.significant(p.amplitude()))
-                  .put("phaseDegrees", FaultSimulation.significant(p.phaseDegrees())));
+      c.exactAc()
+          .forEach(
+              (net, p) ->
+                  ac.putObject(net)
+                      .put("amplitude", FaultSimulation.significant(p.amplitude()))
+                      .put("phaseDegrees", FaultSimulation.significant(p.phaseDegrees())));
     }
     ObjectNode unit = node.putObject("unit");
     ObjectNode parts = unit.putObject("parts");
@@ -127,15 +129,15 @@ final class TruthFiles {
     ObjectNode rails = unit.putObject("rails");
     c.rails().forEach((net, v) -> rails.put(net, FaultSimulation.significant(v)));
     ObjectNode devices = unit.putObject("devices");
-    c.devices().forEach(
-        (ref, p) -> devices.set(ref, device(p)));
+    c.devices().forEach((ref, p) -> devices.set(ref, device(p)));
     if (c.faultValue() != null) {
       unit.put("faultValue", FaultSimulation.significant(c.faultValue()));
     }
     if (!c.ties().isEmpty()) {
       ArrayNode ties = unit.putArray("ties");
       for (Tie t : c.ties()) {
-        ObjectNode tie = ties.addObject().put("node", t.node()).put("to", t.to()).put("why", t.why());
+        ObjectNode tie =
+            ties.addObject().put("node", t.node()).put("to", t.to()).put("why", t.why());
         t.group().forEach(tie.putArray("group")::add);
       }
     }

@@ -47,7 +47,8 @@ class LineBreakerTest {
       double width = 5.0 * (5 + random.nextInt(30));
       List<String> lines = LineBreaker.wrap(text.toString(), Style.BODY, width, MONO);
       lines.forEach(line -> assertThat(MONO.width(Style.BODY, line)).isLessThanOrEqualTo(width));
-      assertThat(String.join("", lines).replace(" ", "")).isEqualTo(text.toString().replace(" ", ""));
+      assertThat(String.join("", lines).replace(" ", ""))
+          .isEqualTo(text.toString().replace(" ", ""));
     }
   }
 }

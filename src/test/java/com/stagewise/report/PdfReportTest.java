@@ -26,7 +26,10 @@ import org.junit.jupiter.api.io.TempDir;
 class PdfReportTest {
   @TempDir Path folder;
 
-  /** The text of pages {@code from} to {@code to} (from 1), with every run of white space as one space. */
+  /**
+   * The text of pages {@code from} to {@code to} (from 1), with every run of white space as one
+   * space.
+   */
   private static String text(PDDocument document, int from, int to) throws IOException {
     PDFTextStripper stripper = new PDFTextStripper();
     stripper.setSortByPosition(true);
@@ -46,31 +49,55 @@ class PdfReportTest {
     CaseReport report = ReportFixture.report(folder, 12);
     String text = text(ReportFixture.pdf(report));
 
-    assertThat(text).contains("Repair report", ReportFixture.SERIAL, "Northfield MX-8 channel board", "job 1184 — Riverside Hall");
-    String opened = report.caseFile().repairCase().openedAt().toString(); // e.g. 2026-03-01T09:04:00Z
-    assertThat(text).contains(report.caseFile().repairCase().id(), "Opened " + opened.substring(0, 10) + " " + opened.substring(11, 16) + " UTC");
+    assertThat(text)
+        .contains(
+            "Repair report",
+            ReportFixture.SERIAL,
+            "Northfield MX-8 channel board",
+            "job 1184 — Riverside Hall");
+    String opened =
+        report.caseFile().repairCase().openedAt().toString(); // e.g. 2026-03-01T09:04:00Z
+    assertThat(text)
+        .contains(
+            report.caseFile().repairCase().id(),
+            "Opened " + opened.substring(0, 10) + " " + opened.substring(11, 16) + " UTC");
     assertThat(text).contains("Status closed", "Outcome fixed");
     // Characters the standard fonts lack come out as plain text: the minus sign and the ohm sign.
-    assertThat(text).contains("Channel 2 output stuck near -13 V after a power surge; 10 kohm input path looks fine");
+    assertThat(text)
+        .contains(
+            "Channel 2 output stuck near -13 V after a power surge; 10 kohm input path looks fine");
     assertThat(text).contains(ReportLayout.CAUTION_TITLE, ReportLayout.CAUTION_TEXT);
     for (int i = 1; i <= 12; i++) {
       assertThat(text).contains(String.format(java.util.Locale.ROOT, "TP-%03d", i));
     }
-    // Reading 1 is -13.48 + 0.01 V; reading 10 is an AC reading at 1 kHz given with its own uncertainty.
-    assertThat(text).contains("-13.47 V", "AC at 1000 Hz", "-13.38 V ±0.003", "±(0.5 % + 2 counts)");
-    // -13.48 + 3/100 is -13.450000000000001 in binary floating point; the report prints it as typed.
+    // Reading 1 is -13.48 + 0.01 V; reading 10 is an AC reading at 1 kHz given with its own
+    // uncertainty.
+    assertThat(text)
+        .contains("-13.47 V", "AC at 1000 Hz", "-13.38 V ±0.003", "±(0.5 % + 2 counts)");
+    // -13.48 + 3/100 is -13.450000000000001 in binary floating point; the report prints it as
+    // typed.
     assertThat(text).contains("TP-003 DC -13.45 V").doesNotContain("0000");
-    assertThat(text).contains(ReportFixture.FIRST_SUSPECT + " 78.1 %", "R2:high 13.8 %", "U1A:stuck-low 8.1 %");
-    assertThat(text).contains("by Stagewise 0.1.0; verdict: fault", "R2 open (marked 47 kohm)", "SUM dc (0.37 bits)");
-    assertThat(text).contains("part replaced R2 47k 1% (cracked) 47k 1% metal film", "reflow U1", "Reflowed pins 1–4.");
+    assertThat(text)
+        .contains(ReportFixture.FIRST_SUSPECT + " 78.1 %", "R2:high 13.8 %", "U1A:stuck-low 8.1 %");
+    assertThat(text)
+        .contains(
+            "by Stagewise 0.1.0; verdict: fault", "R2 open (marked 47 kohm)", "SUM dc (0.37 bits)");
+    assertThat(text)
+        .contains(
+            "part replaced R2 47k 1% (cracked) 47k 1% metal film",
+            "reflow U1", "Reflowed pins 1–4.");
     assertThat(text).contains("Confirmed fault R2:open");
-    assertThat(text).contains(
-        "Discharged the 4700 µF reservoir capacitors (“about 35 V”) before ohms checks -> 0.2 V. Label in Japanese: ??. ?");
-    assertThat(text).contains("Generated 2026-03-04 05:06 UTC by Stagewise test build", "Page 1 of 2", "Page 2 of 2");
+    assertThat(text)
+        .contains(
+            "Discharged the 4700 µF reservoir capacitors (“about 35 V”) before ohms checks -> 0.2 V. Label in Japanese: ??. ?");
+    assertThat(text)
+        .contains(
+            "Generated 2026-03-04 05:06 UTC by Stagewise test build", "Page 1 of 2", "Page 2 of 2");
   }
 
   @Test
-  void report_with200Readings_paginatesWithRightPageNumbersAndEveryReadingOnce() throws IOException {
+  void report_with200Readings_paginatesWithRightPageNumbersAndEveryReadingOnce()
+      throws IOException {
     byte[] pdf = ReportFixture.pdf(ReportFixture.report(folder, 200));
     try (PDDocument document = Loader.loadPDF(pdf)) {
       int pages = document.getNumberOfPages();
@@ -90,9 +117,15 @@ class PdfReportTest {
         }
       }
       for (int i = 1; i <= 200; i++) {
-        assertThat(count(all, String.format(java.util.Locale.ROOT, "TP-%03d", i))).as("reading %d", i).isEqualTo(1);
+        assertThat(count(all, String.format(java.util.Locale.ROOT, "TP-%03d", i)))
+            .as("reading %d", i)
+            .isEqualTo(1);
       }
-      assertThat(all).contains(ReportFixture.FIRST_SUSPECT + " 78.1 %", ReportLayout.CAUTION_TEXT, "Reflowed pins 1–4.");
+      assertThat(all)
+          .contains(
+              ReportFixture.FIRST_SUSPECT + " 78.1 %",
+              ReportLayout.CAUTION_TEXT,
+              "Reflowed pins 1–4.");
     }
   }
 
@@ -104,12 +137,18 @@ class PdfReportTest {
       for (Unit unit : store.units(null)) {
         UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
         for (CaseFile file : history.cases()) {
-          CaseReport report = CaseReport.read(store, file.repairCase().id(), ReportFixture.GENERATED, "test build");
+          CaseReport report =
+              CaseReport.read(store, file.repairCase().id(), ReportFixture.GENERATED, "test build");
           String text = text(ReportFixture.pdf(report));
-          assertThat(text).contains(unit.serial(), Printable.text(file.repairCase().symptom()).replaceAll("\\s+", " "));
+          assertThat(text)
+              .contains(
+                  unit.serial(),
+                  Printable.text(file.repairCase().symptom()).replaceAll("\\s+", " "));
           assertThat(text).contains(ReportLayout.CAUTION_TEXT);
           file.readings().forEach(r -> assertThat(text).contains(r.at()));
-          file.notes().forEach(n -> assertThat(text).contains(Printable.text(n.text()).replaceAll("\\s+", " ")));
+          file.notes()
+              .forEach(
+                  n -> assertThat(text).contains(Printable.text(n.text()).replaceAll("\\s+", " ")));
           serials.add(unit.serial());
         }
       }

@@ -37,11 +37,12 @@ class PrintableTest {
 
   private static void check(PDType1Font regular, PDType1Font bold, String text) {
     String printable = Printable.text(text).replace("\n", "");
-    assertThatCode(() -> {
-          regular.encode(printable);
-          bold.encode(printable);
-          regular.getStringWidth(printable);
-        })
+    assertThatCode(
+            () -> {
+              regular.encode(printable);
+              bold.encode(printable);
+              regular.getStringWidth(printable);
+            })
         .as("characters from U+%04X", text.codePointAt(0))
         .doesNotThrowAnyException();
     printable.chars().forEach(c -> assertThat(Printable.drawable((char) c)).isTrue());

@@ -32,10 +32,27 @@ class ReportLayoutTest {
     CaseNote first = notes.get(0);
     notes.add(new CaseNote("n2", first.caseId(), first.at(), "x".repeat(3000), first.updatedAt()));
     CaseFile longer =
-        new CaseFile(file.repairCase(), file.readings(),
-            List.of(new SuspectListRecord(list.id(), list.caseId(), list.computedAt(), list.programVersion(), list.verdict(), suspects, list.nextProbes())),
-            file.actions(), notes);
-    CaseReport report = new CaseReport(stored.unit(), stored.boardModel(), longer, stored.generatedAt(), stored.programVersion());
+        new CaseFile(
+            file.repairCase(),
+            file.readings(),
+            List.of(
+                new SuspectListRecord(
+                    list.id(),
+                    list.caseId(),
+                    list.computedAt(),
+                    list.programVersion(),
+                    list.verdict(),
+                    suspects,
+                    list.nextProbes())),
+            file.actions(),
+            notes);
+    CaseReport report =
+        new CaseReport(
+            stored.unit(),
+            stored.boardModel(),
+            longer,
+            stored.generatedAt(),
+            stored.programVersion());
 
     PdfReport.Fonts fonts = new PdfReport.Fonts();
     List<Page> pages = ReportLayout.lay(report, fonts::width);
@@ -44,10 +61,16 @@ class ReportLayoutTest {
     for (Page page : pages) {
       for (PageItem.Text text : page.texts()) {
         double right = text.x() + fonts.width(text.style(), text.text());
-        assertThat(text.x()).as("page %d: %s", page.number(), text.text()).isGreaterThanOrEqualTo(PageFlow.LEFT - EPSILON);
-        assertThat(right).as("page %d: %s", page.number(), text.text()).isLessThanOrEqualTo(PageFlow.RIGHT + EPSILON);
+        assertThat(text.x())
+            .as("page %d: %s", page.number(), text.text())
+            .isGreaterThanOrEqualTo(PageFlow.LEFT - EPSILON);
+        assertThat(right)
+            .as("page %d: %s", page.number(), text.text())
+            .isLessThanOrEqualTo(PageFlow.RIGHT + EPSILON);
         boolean footer = Math.abs(text.y() - FOOTER_BASELINE) < EPSILON;
-        assertThat(footer || text.y() <= PageFlow.BOTTOM).as("page %d: %s at %f", page.number(), text.text(), text.y()).isTrue();
+        assertThat(footer || text.y() <= PageFlow.BOTTOM)
+            .as("page %d: %s at %f", page.number(), text.text(), text.y())
+            .isTrue();
         words += text.text().split("Explains the reading", -1).length - 1;
       }
     }

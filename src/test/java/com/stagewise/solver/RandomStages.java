@@ -14,8 +14,8 @@ final class RandomStages {
   private RandomStages() {}
 
   /**
-   * Returns a random stage with 1 to 3 sections on ±12 V, 1 or 2 inputs, internal nets N1…N5 and
-   * 3 to 9 resistors; some have positive feedback, some saturate, some float.
+   * Returns a random stage with 1 to 3 sections on ±12 V, 1 or 2 inputs, internal nets N1…N5 and 3
+   * to 9 resistors; some have positive feedback, some saturate, some float.
    */
   static Stage next(Random random) {
     TestStages s = TestStages.splitSupply(12);

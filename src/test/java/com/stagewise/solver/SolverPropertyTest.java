@@ -96,7 +96,11 @@ class SolverPropertyTest {
       int n = 0;
       for (String net : stage.nets()) {
         double expected = full.nets().get(net);
-        assertThat(sum[n++]).as("net %s of stage %d", net, i).isCloseTo(expected, org.assertj.core.data.Offset.offset(1e-6 * Math.max(1, Math.abs(expected))));
+        assertThat(sum[n++])
+            .as("net %s of stage %d", net, i)
+            .isCloseTo(
+                expected,
+                org.assertj.core.data.Offset.offset(1e-6 * Math.max(1, Math.abs(expected))));
       }
       checked++;
     }
@@ -106,24 +110,36 @@ class SolverPropertyTest {
   @Test
   void superposition_ofTheSolverItself_overInputs() {
     // The same property through the public solve: scaling one input's level and solving again.
-    Stage base = TestStages.splitSupply(15)
-        .input("IN1", 0.4)
-        .input("IN2", -0.3)
-        .r("R1", 10e3, "IN1", "SUM")
-        .r("R2", 22e3, "IN2", "SUM")
-        .r("RF", 47e3, "SUM", "OUT")
-        .amp("U1A", "GND", "SUM", "OUT")
-        .build();
+    Stage base =
+        TestStages.splitSupply(15)
+            .input("IN1", 0.4)
+            .input("IN2", -0.3)
+            .r("R1", 10e3, "IN1", "SUM")
+            .r("R2", 22e3, "IN2", "SUM")
+            .r("RF", 47e3, "SUM", "OUT")
+            .amp("U1A", "GND", "SUM", "OUT")
+            .build();
     double both = StageSolverTest.solveOne(base).at("OUT");
-    double first = StageSolverTest.solveOne(base.withInputs(List.of(TestInput.dc("IN1", 0.4), TestInput.dc("IN2", 0)))).at("OUT");
-    double second = StageSolverTest.solveOne(base.withInputs(List.of(TestInput.dc("IN1", 0), TestInput.dc("IN2", -0.3)))).at("OUT");
+    double first =
+        StageSolverTest.solveOne(
+                base.withInputs(List.of(TestInput.dc("IN1", 0.4), TestInput.dc("IN2", 0))))
+            .at("OUT");
+    double second =
+        StageSolverTest.solveOne(
+                base.withInputs(List.of(TestInput.dc("IN1", 0), TestInput.dc("IN2", -0.3))))
+            .at("OUT");
     assertThat(first + second).isCloseTo(both, org.assertj.core.data.Offset.offset(VOLTS));
   }
 
   private static void assertSamePoint(OperatingPoint expected, OperatingPoint actual) {
     assertThat(actual.states()).isEqualTo(expected.states());
-    expected.nets().forEach(
-        (net, volts) ->
-            assertThat(actual.nets().get(net)).isCloseTo(volts, org.assertj.core.data.Offset.offset(VOLTS * Math.max(1, Math.abs(volts)))));
+    expected
+        .nets()
+        .forEach(
+            (net, volts) ->
+                assertThat(actual.nets().get(net))
+                    .isCloseTo(
+                        volts,
+                        org.assertj.core.data.Offset.offset(VOLTS * Math.max(1, Math.abs(volts)))));
   }
 }

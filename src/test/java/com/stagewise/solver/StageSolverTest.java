@@ -16,7 +16,8 @@ class StageSolverTest {
   private static final double VOLTS = 1e-4;
 
   static void assertVoltsNear(double expected, double actual, double tolerance) {
-    assertEquals(expected, actual, tolerance, () -> "expected " + expected + " V, got " + actual + " V");
+    assertEquals(
+        expected, actual, tolerance, () -> "expected " + expected + " V, got " + actual + " V");
   }
 
   static OperatingPoint solveOne(Stage stage) {
@@ -80,7 +81,11 @@ class StageSolverTest {
     void follower_outputEqualsInput() {
       // Closed-form ideal op-amp result: a follower has gain 1.
       Stage stage =
-          TestStages.splitSupply(12).input("IN", 2.5).r("RL", 10e3, "OUT", "GND").amp("U1A", "IN", "OUT", "OUT").build();
+          TestStages.splitSupply(12)
+              .input("IN", 2.5)
+              .r("RL", 10e3, "OUT", "GND")
+              .amp("U1A", "IN", "OUT", "OUT")
+              .build();
       assertVoltsNear(2.5, solveOne(stage).at("OUT"), 1e-4);
     }
 
@@ -223,7 +228,8 @@ class StageSolverTest {
           13.5 - 12.5 * 50 / 57.05e3,
           solveOne(stage, Conditions.NOMINAL.withForced("U1A", SectionState.HIGH)).at("OUT"),
           1e-6);
-      OperatingPoint dead = solveOne(stage, Conditions.NOMINAL.withForced("U1A", SectionState.DEAD));
+      OperatingPoint dead =
+          solveOne(stage, Conditions.NOMINAL.withForced("U1A", SectionState.DEAD));
       // A dead output: OUT is pulled only through R2 and R1 from IN, so it reads IN.
       assertVoltsNear(1.0, dead.at("OUT"), VOLTS);
       assertThat(dead.states()).containsEntry("U1A", SectionState.DEAD);
@@ -271,7 +277,8 @@ class StageSolverTest {
       OperatingPoint p = solveOne(stage);
       AcSolution ac = StageSolver.ac(stage, p).orElseThrow();
       assertVoltsNear(0.47, ac.nets().get("OUT").amplitude(), 1e-4);
-      assertThat(Math.abs(ac.nets().get("OUT").phaseDegrees())).isCloseTo(180, org.assertj.core.data.Offset.offset(0.01));
+      assertThat(Math.abs(ac.nets().get("OUT").phaseDegrees()))
+          .isCloseTo(180, org.assertj.core.data.Offset.offset(0.01));
     }
 
     @Test
@@ -292,7 +299,8 @@ class StageSolverTest {
       OperatingPoint p = solveOne(stage);
       assertVoltsNear(-1.0, p.at("OUT"), 1e-3);
       AcSolution ac = StageSolver.ac(stage, p).orElseThrow();
-      assertThat(ac.nets().get("OUT").amplitude() / 0.1).isCloseTo(10 / Math.sqrt(2), org.assertj.core.data.Offset.offset(1e-3));
+      assertThat(ac.nets().get("OUT").amplitude() / 0.1)
+          .isCloseTo(10 / Math.sqrt(2), org.assertj.core.data.Offset.offset(1e-3));
     }
 
     @Test
@@ -318,9 +326,11 @@ class StageSolverTest {
               .amp("U1A", "B", "OUT", "OUT")
               .build();
       AcSolution ac = StageSolver.ac(stage, solveOne(stage)).orElseThrow();
-      assertThat(ac.nets().get("OUT").amplitude()).isCloseTo(q, org.assertj.core.data.Offset.offset(1e-3));
+      assertThat(ac.nets().get("OUT").amplitude())
+          .isCloseTo(q, org.assertj.core.data.Offset.offset(1e-3));
       // At f0 a second-order low-pass lags by 90 degrees.
-      assertThat(ac.nets().get("OUT").phaseDegrees()).isCloseTo(-90, org.assertj.core.data.Offset.offset(0.1));
+      assertThat(ac.nets().get("OUT").phaseDegrees())
+          .isCloseTo(-90, org.assertj.core.data.Offset.offset(0.1));
     }
 
     @Test
@@ -336,7 +346,8 @@ class StageSolverTest {
       OperatingPoint p = solveOne(stage);
       AcSolution ac = StageSolver.ac(stage, p).orElseThrow();
       // Only the 50 Ω output resistance's share of the input's AC, through R1 + R2, remains.
-      assertThat(ac.nets().get("OUT").amplitude()).isCloseTo(0.1 * 50 / 110.05e3, org.assertj.core.data.Offset.offset(1e-9));
+      assertThat(ac.nets().get("OUT").amplitude())
+          .isCloseTo(0.1 * 50 / 110.05e3, org.assertj.core.data.Offset.offset(1e-9));
     }
   }
 }

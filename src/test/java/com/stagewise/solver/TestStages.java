@@ -54,10 +54,18 @@ final class TestStages {
   }
 
   TestStages amp(
-      String ref, DeviceClass type, String inPlus, String inMinus, String out, String vPlus, String vMinus) {
+      String ref,
+      DeviceClass type,
+      String inPlus,
+      String inMinus,
+      String out,
+      String vPlus,
+      String vMinus) {
     String pkg = "U" + (amps.size() / 4 + 1);
     String section = List.of("A", "B", "C", "D").get(amps.size() % 4);
-    amps.add(new Amplifier(ref, pkg, PackageType.QUAD_14, section, type, inPlus, inMinus, out, vPlus, vMinus));
+    amps.add(
+        new Amplifier(
+            ref, pkg, PackageType.QUAD_14, section, type, inPlus, inMinus, out, vPlus, vMinus));
     return this;
   }
 

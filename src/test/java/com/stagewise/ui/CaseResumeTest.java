@@ -34,6 +34,7 @@ class CaseResumeTest {
   @Test
   void saveStep_idWithPathCharacters_isRefused() {
     CaseResume resume = new CaseResume(temp);
-    assertThatThrownBy(() -> resume.saveStep("../x", Step.STAGE)).isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> resume.saveStep("../x", Step.STAGE))
+        .isInstanceOf(IllegalArgumentException.class);
   }
 }

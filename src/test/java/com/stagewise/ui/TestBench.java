@@ -15,8 +15,8 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * A bench for view-model tests: a real history file in a temporary folder, work run at once on
- * the test's thread, and problems and cautions recorded instead of shown.
+ * A bench for view-model tests: a real history file in a temporary folder, work run at once on the
+ * test's thread, and problems and cautions recorded instead of shown.
  */
 public final class TestBench implements AutoCloseable {
   public final HistoryStore store;
@@ -30,21 +30,23 @@ public final class TestBench implements AutoCloseable {
     store = HistoryStore.open(folder.resolve("history.db"));
     resume = new CaseResume(folder.resolve("open-cases"));
     Problems recorder = (title, what, todo) -> problems.add(title);
-    Caution caution = (reason, then) -> {
-      cautions.add(reason);
-      then.run();
-    };
-    BoardFlags flags = new BoardFlags() {
-      @Override
-      public boolean isMainsPowered(String boardModelId) {
-        return mains.getOrDefault(boardModelId, false);
-      }
+    Caution caution =
+        (reason, then) -> {
+          cautions.add(reason);
+          then.run();
+        };
+    BoardFlags flags =
+        new BoardFlags() {
+          @Override
+          public boolean isMainsPowered(String boardModelId) {
+            return mains.getOrDefault(boardModelId, false);
+          }
 
-      @Override
-      public void setMainsPowered(String boardModelId, boolean value) {
-        mains.put(boardModelId, value);
-      }
-    };
+          @Override
+          public void setMainsPowered(String boardModelId, boolean value) {
+            mains.put(boardModelId, value);
+          }
+        };
     bench = new Bench(store, Tasks.direct(), recorder, caution, flags, resume);
   }
 
@@ -69,7 +71,20 @@ public final class TestBench implements AutoCloseable {
         "GND",
         List.of(new Rail("VCC", 15, 0.05), new Rail("VEE", -15, 0.05)),
         List.of(new TestInput("IN", 1.0, 0.1, 1000)),
-        List.of(Part.resistor("R1", 10_000, 0.01, "IN", "SUM"), Part.resistor("R2", 47_000, 0.01, "SUM", "OUT")),
-        List.of(new Amplifier("U1A", "U1", PackageType.DUAL_8, "A", DeviceClass.CLASSIC_BIPOLAR, "GND", "SUM", "OUT", "VCC", "VEE")));
+        List.of(
+            Part.resistor("R1", 10_000, 0.01, "IN", "SUM"),
+            Part.resistor("R2", 47_000, 0.01, "SUM", "OUT")),
+        List.of(
+            new Amplifier(
+                "U1A",
+                "U1",
+                PackageType.DUAL_8,
+                "A",
+                DeviceClass.CLASSIC_BIPOLAR,
+                "GND",
+                "SUM",
+                "OUT",
+                "VCC",
+                "VEE")));
   }
 }

@@ -2,25 +2,28 @@ package com.stagewise.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.junit.jupiter.api.Test;
 
 class WordsTest {
 
   @ParameterizedTest
-  @CsvSource(delimiter = '|', value = {
-    "healthy|Nothing wrong (healthy stage)",
-    "R2:open|R2 open",
-    "C1:short|C1 shorted",
-    "R2:high|R2 drifted high",
-    "R1:low|R1 drifted low",
-    "VCC:low|Rail VCC low",
-    "VEE:missing|Rail VEE missing",
-    "U1A:stuck-high|U1A output stuck high",
-    "U1A:dead|U1A output dead (not driving)",
-    "U1.3:lifted|U1 pin 3 lifted (open joint)",
-    "U1.6-7:bridge|Solder bridge U1 pins 6–7"})
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "healthy|Nothing wrong (healthy stage)",
+        "R2:open|R2 open",
+        "C1:short|C1 shorted",
+        "R2:high|R2 drifted high",
+        "R1:low|R1 drifted low",
+        "VCC:low|Rail VCC low",
+        "VEE:missing|Rail VEE missing",
+        "U1A:stuck-high|U1A output stuck high",
+        "U1A:dead|U1A output dead (not driving)",
+        "U1.3:lifted|U1 pin 3 lifted (open joint)",
+        "U1.6-7:bridge|Solder bridge U1 pins 6–7"
+      })
   void fault_eachKindOfTheGrammar_readsAsWords(String id, String words) {
     // The fault id grammar of DESIGN.md, one row per kind.
     assertThat(Words.fault(id)).isEqualTo(words);

@@ -13,10 +13,15 @@ import java.util.List;
 
 /** A stage being put together by a template, part by part, from its parameter values. */
 final class Draft {
-  /** Resistor tolerance of the templates: 1 % metal film, the usual fit in signal stages (common practice). */
+  /**
+   * Resistor tolerance of the templates: 1 % metal film, the usual fit in signal stages (common
+   * practice).
+   */
   static final double RESISTOR_TOLERANCE = 0.01;
 
-  /** Capacitor tolerance of the templates: 10 %, usual for film and ceramic parts (common practice). */
+  /**
+   * Capacitor tolerance of the templates: 10 %, usual for film and ceramic parts (common practice).
+   */
   static final double CAPACITOR_TOLERANCE = 0.10;
 
   /** Rail tolerance of the templates: 5 %, usual for a regulated supply (common practice). */
@@ -47,7 +52,8 @@ final class Draft {
       throw values.error("vcc", "vcc (" + values.text("vcc") + ") must be above 0 V");
     }
     if (!(vee < 0)) {
-      throw values.error("vee", "vee (" + values.text("vee") + ") must be below 0 V for a split supply");
+      throw values.error(
+          "vee", "vee (" + values.text("vee") + ") must be below 0 V for a split supply");
     }
     rails.add(new Rail(VCC, vcc, RAIL_TOLERANCE));
     rails.add(new Rail(VEE, vee, RAIL_TOLERANCE));
@@ -94,20 +100,49 @@ final class Draft {
     return this;
   }
 
-  /** Adds section {@code section} of package {@code pkg}, supplied from VCC and the negative supply. */
+  /**
+   * Adds section {@code section} of package {@code pkg}, supplied from VCC and the negative supply.
+   */
   Draft section(
-      String pkg, PackageType type, String section, DeviceClass deviceClass, String inPlus, String inMinus, String out) {
+      String pkg,
+      PackageType type,
+      String section,
+      DeviceClass deviceClass,
+      String inPlus,
+      String inMinus,
+      String out) {
     if (!type.hasSection(section)) {
       throw new InvalidInputException(
           values.source(), "package", "a " + type.word() + " package has no section " + section);
     }
-    amplifiers.add(new Amplifier(pkg + section, pkg, type, section, deviceClass, inPlus, inMinus, out, VCC, negativeSupply));
+    amplifiers.add(
+        new Amplifier(
+            pkg + section,
+            pkg,
+            type,
+            section,
+            deviceClass,
+            inPlus,
+            inMinus,
+            out,
+            VCC,
+            negativeSupply));
     return this;
   }
 
-  /** Adds section A of package U1 of the type and class given by the {@code package} and {@code class} parameters. */
+  /**
+   * Adds section A of package U1 of the type and class given by the {@code package} and {@code
+   * class} parameters.
+   */
   Draft u1(String inPlus, String inMinus, String out) {
-    return section("U1", values.packageType("package"), "A", values.deviceClass("class"), inPlus, inMinus, out);
+    return section(
+        "U1",
+        values.packageType("package"),
+        "A",
+        values.deviceClass("class"),
+        inPlus,
+        inMinus,
+        out);
   }
 
   Stage build() {

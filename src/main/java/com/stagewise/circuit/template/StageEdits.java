@@ -32,9 +32,17 @@ public final class StageEdits {
   public static Stage rename(Stage stage, Map<String, String> renames) {
     for (Map.Entry<String, String> rename : renames.entrySet()) {
       String old = rename.getKey();
-      if (stage.part(old).isEmpty() && stage.amplifier(old).isEmpty() && !stage.packages().contains(old)) {
+      if (stage.part(old).isEmpty()
+          && stage.amplifier(old).isEmpty()
+          && !stage.packages().contains(old)) {
         throw new InvalidInputException(
-            "", old, "no part, section or package " + old + " on the stage (expected one of " + designators(stage) + ")");
+            "",
+            old,
+            "no part, section or package "
+                + old
+                + " on the stage (expected one of "
+                + designators(stage)
+                + ")");
       }
       if (rename.getValue() == null || rename.getValue().isBlank()) {
         throw new InvalidInputException("", old, "the new designator for " + old + " is empty");
@@ -43,7 +51,8 @@ public final class StageEdits {
     List<Part> parts = new ArrayList<>();
     for (Part part : stage.parts()) {
       String ref = renames.getOrDefault(part.ref(), part.ref()).strip();
-      parts.add(new Part(ref, part.kind(), part.value(), part.tolerance(), part.netA(), part.netB()));
+      parts.add(
+          new Part(ref, part.kind(), part.value(), part.tolerance(), part.netA(), part.netB()));
     }
     List<Amplifier> amplifiers = new ArrayList<>();
     for (Amplifier amp : stage.amplifiers()) {
@@ -55,13 +64,32 @@ public final class StageEdits {
         ref = pkg + amp.section();
       }
       amplifiers.add(
-          new Amplifier(ref, pkg, amp.packageType(), amp.section(), amp.deviceClass(),
-              amp.inPlus(), amp.inMinus(), amp.out(), amp.vPlus(), amp.vMinus()));
+          new Amplifier(
+              ref,
+              pkg,
+              amp.packageType(),
+              amp.section(),
+              amp.deviceClass(),
+              amp.inPlus(),
+              amp.inMinus(),
+              amp.out(),
+              amp.vPlus(),
+              amp.vMinus()));
     }
-    Stage renamed = new Stage(stage.title(), stage.board(), stage.ground(), stage.rails(), stage.inputs(), parts, amplifiers);
+    Stage renamed =
+        new Stage(
+            stage.title(),
+            stage.board(),
+            stage.ground(),
+            stage.rails(),
+            stage.inputs(),
+            parts,
+            amplifiers);
     for (StageRules.Problem problem : StageRules.problems(renamed)) {
-      if (problem.message().contains("used twice") || problem.message().contains("claims section")) {
-        throw new InvalidInputException("", problem.field(), "after renaming: " + problem.message());
+      if (problem.message().contains("used twice")
+          || problem.message().contains("claims section")) {
+        throw new InvalidInputException(
+            "", problem.field(), "after renaming: " + problem.message());
       }
     }
     return renamed;
@@ -78,37 +106,81 @@ public final class StageEdits {
     for (Map.Entry<String, String> rename : renames.entrySet()) {
       if (!stage.nets().contains(rename.getKey())) {
         throw new InvalidInputException(
-            "", rename.getKey(),
-            "no net " + rename.getKey() + " on the stage (expected one of " + String.join(", ", stage.nets()) + ")");
+            "",
+            rename.getKey(),
+            "no net "
+                + rename.getKey()
+                + " on the stage (expected one of "
+                + String.join(", ", stage.nets())
+                + ")");
       }
       String target = rename.getValue() == null ? "" : rename.getValue().strip();
       if (target.isEmpty()) {
-        throw new InvalidInputException("", rename.getKey(), "the new name for net " + rename.getKey() + " is empty");
+        throw new InvalidInputException(
+            "", rename.getKey(), "the new name for net " + rename.getKey() + " is empty");
       }
       if (stage.nets().contains(target) && !renames.containsKey(target)) {
         throw new InvalidInputException(
-            "", rename.getKey(), "net " + target + " is already on the stage (expected a new name for " + rename.getKey() + ")");
+            "",
+            rename.getKey(),
+            "net "
+                + target
+                + " is already on the stage (expected a new name for "
+                + rename.getKey()
+                + ")");
       }
     }
     java.util.function.UnaryOperator<String> net = n -> renames.getOrDefault(n, n).strip();
-    List<Rail> rails = stage.rails().stream().map(r -> new Rail(net.apply(r.net()), r.volts(), r.tolerance())).toList();
+    List<Rail> rails =
+        stage.rails().stream()
+            .map(r -> new Rail(net.apply(r.net()), r.volts(), r.tolerance()))
+            .toList();
     List<TestInput> inputs =
-        stage.inputs().stream().map(i -> new TestInput(net.apply(i.net()), i.dc(), i.ac(), i.hz())).toList();
+        stage.inputs().stream()
+            .map(i -> new TestInput(net.apply(i.net()), i.dc(), i.ac(), i.hz()))
+            .toList();
     List<Part> parts =
         stage.parts().stream()
-            .map(p -> new Part(p.ref(), p.kind(), p.value(), p.tolerance(), net.apply(p.netA()), net.apply(p.netB())))
+            .map(
+                p ->
+                    new Part(
+                        p.ref(),
+                        p.kind(),
+                        p.value(),
+                        p.tolerance(),
+                        net.apply(p.netA()),
+                        net.apply(p.netB())))
             .toList();
     List<Amplifier> amplifiers =
         stage.amplifiers().stream()
-            .map(a -> new Amplifier(a.ref(), a.packageRef(), a.packageType(), a.section(), a.deviceClass(),
-                net.apply(a.inPlus()), net.apply(a.inMinus()), net.apply(a.out()), net.apply(a.vPlus()), net.apply(a.vMinus())))
+            .map(
+                a ->
+                    new Amplifier(
+                        a.ref(),
+                        a.packageRef(),
+                        a.packageType(),
+                        a.section(),
+                        a.deviceClass(),
+                        net.apply(a.inPlus()),
+                        net.apply(a.inMinus()),
+                        net.apply(a.out()),
+                        net.apply(a.vPlus()),
+                        net.apply(a.vMinus())))
             .toList();
-    return new Stage(stage.title(), stage.board(), net.apply(stage.ground()), rails, inputs, parts, amplifiers);
+    return new Stage(
+        stage.title(), stage.board(), net.apply(stage.ground()), rails, inputs, parts, amplifiers);
   }
 
   /** Returns a copy with another title and board model. */
   public static Stage titled(Stage stage, String title, String board) {
-    return new Stage(title, board, stage.ground(), stage.rails(), stage.inputs(), stage.parts(), stage.amplifiers());
+    return new Stage(
+        title,
+        board,
+        stage.ground(),
+        stage.rails(),
+        stage.inputs(),
+        stage.parts(),
+        stage.amplifiers());
   }
 
   private static String designators(Stage stage) {

@@ -18,7 +18,11 @@ public final class StageTemplate {
   private final Function<Values, Stage> builder;
 
   StageTemplate(
-      String name, String title, String description, List<Parameter> parameters, Function<Values, Stage> builder) {
+      String name,
+      String title,
+      String description,
+      List<Parameter> parameters,
+      Function<Values, Stage> builder) {
     this.name = name;
     this.title = title;
     this.description = description;

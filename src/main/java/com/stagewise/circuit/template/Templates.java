@@ -44,8 +44,11 @@ public final class Templates {
                 new InvalidInputException(
                     "",
                     "template",
-                    "no template named \"" + name + "\" (expected one of "
-                        + String.join(", ", ALL.stream().map(StageTemplate::name).toList()) + ")"));
+                    "no template named \""
+                        + name
+                        + "\" (expected one of "
+                        + String.join(", ", ALL.stream().map(StageTemplate::name).toList())
+                        + ")"));
   }
 
   private static Parameter p(String name, String meaning, String defaultValue, String unit) {
@@ -62,8 +65,16 @@ public final class Templates {
     return List.of(
         p("vcc", "positive rail VCC", "15", "V"),
         p("vee", "negative rail VEE", "-15", "V"),
-        p("class", "op-amp class: classic-bipolar, ground-sensing or rail-to-rail", deviceClass, ""),
-        p("package", "package of U1: single-8, dual-8 or quad-14 (section A is used)", "dual-8", ""));
+        p(
+            "class",
+            "op-amp class: classic-bipolar, ground-sensing or rail-to-rail",
+            deviceClass,
+            ""),
+        p(
+            "package",
+            "package of U1: single-8, dual-8 or quad-14 (section A is used)",
+            "dual-8",
+            ""));
   }
 
   private static List<Parameter> signal(String dc, String ac, String hz) {
@@ -82,7 +93,9 @@ public final class Templates {
             "Inverting amplifier: the signal goes through R1 into the inverting input, R2 feeds the"
                 + " output back; gain is -R2/R1 and the inverting input sits at ground (virtual earth).",
             with(
-                List.of(p("r1", "input resistor R1", "10k", "Ω"), p("r2", "feedback resistor R2", "47k", "Ω")),
+                List.of(
+                    p("r1", "input resistor R1", "10k", "Ω"),
+                    p("r2", "feedback resistor R2", "47k", "Ω")),
                 with(signal("1", "0.1", "1k"), split("classic-bipolar"))),
             v ->
                 new Draft(v)
@@ -99,7 +112,8 @@ public final class Templates {
             "Non-inverting amplifier: the signal goes straight into the non-inverting input; R2 from"
                 + " the output and R1 to ground set the gain, 1 + R2/R1.",
             with(
-                List.of(p("r1", "resistor R1 from the inverting input to ground", "10k", "Ω"),
+                List.of(
+                    p("r1", "resistor R1 from the inverting input to ground", "10k", "Ω"),
                     p("r2", "feedback resistor R2", "22k", "Ω")),
                 with(signal("0.5", "0.1", "1k"), split("classic-bipolar"))),
             v ->
@@ -116,7 +130,8 @@ public final class Templates {
             "Voltage follower",
             "Voltage follower (buffer): output tied to the inverting input, so the output copies the"
                 + " input at unity gain; R1 is the load it drives.",
-            with(List.of(p("r1", "load resistor R1 from the output to ground", "10k", "Ω")),
+            with(
+                List.of(p("r1", "load resistor R1 from the output to ground", "10k", "Ω")),
                 with(signal("2", "0.5", "1k"), split("classic-bipolar"))),
             v ->
                 new Draft(v)
@@ -289,8 +304,16 @@ public final class Templates {
                     p("c1", "input coupling capacitor C1", "1u", "F"),
                     p("c2", "mid-rail decoupling capacitor C2", "10u", "F"),
                     p("vcc", "the single rail VCC", "12", "V"),
-                    p("class", "op-amp class: classic-bipolar, ground-sensing or rail-to-rail", "ground-sensing", ""),
-                    p("package", "package of U1: single-8, dual-8 or quad-14 (section A is used)", "dual-8", "")),
+                    p(
+                        "class",
+                        "op-amp class: classic-bipolar, ground-sensing or rail-to-rail",
+                        "ground-sensing",
+                        ""),
+                    p(
+                        "package",
+                        "package of U1: single-8, dual-8 or quad-14 (section A is used)",
+                        "dual-8",
+                        "")),
                 signal("0", "0.1", "1k")),
             v ->
                 new Draft(v)
@@ -311,7 +334,12 @@ public final class Templates {
     List<Parameter> own = new ArrayList<>();
     own.add(p("inputs", "number of inputs, 2 to 4", "3", ""));
     for (int i = 1; i <= 4; i++) {
-      own.add(p("r" + i, "input resistor R" + i + " from IN" + i + " (used when inputs >= " + i + ")", "10k", "Ω"));
+      own.add(
+          p(
+              "r" + i,
+              "input resistor R" + i + " from IN" + i + " (used when inputs >= " + i + ")",
+              "10k",
+              "Ω"));
     }
     own.add(p("r5", "feedback resistor R5", "10k", "Ω"));
     String[] levels = {"0.5", "0.25", "-0.1", "0.2"};
@@ -355,7 +383,11 @@ public final class Templates {
             p("hz", "frequency of the AC test signal", "100", "Hz"),
             p("vcc", "positive rail VCC", "15", "V"),
             p("vee", "negative rail VEE", "-15", "V"),
-            p("class", "op-amp class: classic-bipolar, ground-sensing or rail-to-rail", "classic-bipolar", ""));
+            p(
+                "class",
+                "op-amp class: classic-bipolar, ground-sensing or rail-to-rail",
+                "classic-bipolar",
+                ""));
     return new StageTemplate(
         "instrumentation",
         "Three-op-amp instrumentation amplifier",

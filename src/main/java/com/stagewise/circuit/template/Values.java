@@ -21,8 +21,11 @@ final class Values {
       if (template.parameters().stream().noneMatch(p -> p.name().equals(name))) {
         throw error(
             name,
-            "unknown parameter \"" + name + "\" (expected one of "
-                + String.join(", ", template.parameters().stream().map(Parameter::name).toList()) + ")");
+            "unknown parameter \""
+                + name
+                + "\" (expected one of "
+                + String.join(", ", template.parameters().stream().map(Parameter::name).toList())
+                + ")");
       }
     }
   }
@@ -49,7 +52,10 @@ final class Values {
     return template.parameters().stream()
         .filter(p -> p.name().equals(name))
         .findFirst()
-        .orElseThrow(() -> new IllegalStateException("template " + template.name() + " has no parameter " + name))
+        .orElseThrow(
+            () ->
+                new IllegalStateException(
+                    "template " + template.name() + " has no parameter " + name))
         .defaultValue();
   }
 
@@ -106,7 +112,11 @@ final class Values {
     try {
       return DeviceClass.of(text(name));
     } catch (InvalidInputException e) {
-      throw error(name, "\"" + text(name) + "\" is not a device class (expected classic-bipolar, ground-sensing or rail-to-rail)");
+      throw error(
+          name,
+          "\""
+              + text(name)
+              + "\" is not a device class (expected classic-bipolar, ground-sensing or rail-to-rail)");
     }
   }
 
@@ -114,7 +124,9 @@ final class Values {
     try {
       return PackageType.of(text(name));
     } catch (InvalidInputException e) {
-      throw error(name, "\"" + text(name) + "\" is not a package type (expected single-8, dual-8 or quad-14)");
+      throw error(
+          name,
+          "\"" + text(name) + "\" is not a package type (expected single-8, dual-8 or quad-14)");
     }
   }
 }

@@ -12,8 +12,8 @@ import java.util.function.Predicate;
 import java.util.stream.Collectors;
 
 /**
- * Reads and writes resistor colour bands per IEC 60062, in reading order (the tolerance band
- * last, usually set apart):
+ * Reads and writes resistor colour bands per IEC 60062, in reading order (the tolerance band last,
+ * usually set apart):
  *
  * <ul>
  *   <li>3 bands: 2 digits, multiplier; no tolerance band means ±20 %;
@@ -34,8 +34,8 @@ public final class ColourCode {
   private ColourCode() {}
 
   /**
-   * Returns the value, tolerance and temperature coefficient that colour bands stand for. Names
-   * are English, case ignored; grey/gray and violet/purple both work; {@code none} is a missing
+   * Returns the value, tolerance and temperature coefficient that colour bands stand for. Names are
+   * English, case ignored; grey/gray and violet/purple both work; {@code none} is a missing
    * tolerance band.
    *
    * @throws InvalidInputException if there are not 3 to 6 bands or a band's colour cannot stand in
@@ -45,7 +45,9 @@ public final class ColourCode {
     if (bands == null || bands.size() < 3 || bands.size() > 6) {
       int count = bands == null ? 0 : bands.size();
       throw new InvalidInputException(
-          "a colour code has 3 to 6 bands, but " + count + " were given"
+          "a colour code has 3 to 6 bands, but "
+              + count
+              + " were given"
               + (count == 0 ? "" : " (" + String.join(" ", bands) + ")"));
     }
     List<Colour> colours = new ArrayList<>();
@@ -152,8 +154,11 @@ public final class ColourCode {
             .orElseThrow(
                 () ->
                     new InvalidInputException(
-                        "temperature coefficient " + ppmPerKelvin + " ppm/K has no colour;"
-                            + " expected one of " + tempcoList()));
+                        "temperature coefficient "
+                            + ppmPerKelvin
+                            + " ppm/K has no colour;"
+                            + " expected one of "
+                            + tempcoList()));
     List<Colour> bands = digitsAndMultiplier(ohms, 3);
     bands.add(toleranceBand);
     bands.add(tempcoBand);
@@ -173,8 +178,12 @@ public final class ColourCode {
             .orElseThrow(
                 () ->
                     new InvalidInputException(
-                        "resistance " + Decimals.clean(ohms).toPlainString() + " Ω cannot be"
-                            + " colour-coded with " + digitCount + " digits and a multiplier from"
+                        "resistance "
+                            + Decimals.clean(ohms).toPlainString()
+                            + " Ω cannot be"
+                            + " colour-coded with "
+                            + digitCount
+                            + " digits and a multiplier from"
                             + " pink (×0.001) to white (×10^9)"));
     String digits = String.valueOf(placement.mantissa());
     digits = "0".repeat(digitCount - digits.length()) + digits;
@@ -216,7 +225,9 @@ public final class ColourCode {
       }
     }
     throw new InvalidInputException(
-        "tolerance " + tolerance + " has no colour; expected one of "
+        "tolerance "
+            + tolerance
+            + " has no colour; expected one of "
             + ALL.stream()
                 .filter(c -> c.tolerance().isPresent())
                 .map(c -> Tolerance.format(c.tolerance().getAsDouble()))
@@ -225,9 +236,9 @@ public final class ColourCode {
 
   private static String tempcoList() {
     return ALL.stream()
-        .filter(c -> c.ppmPerKelvin().isPresent())
-        .map(c -> String.valueOf(c.ppmPerKelvin().getAsInt()))
-        .collect(Collectors.joining(", "))
+            .filter(c -> c.ppmPerKelvin().isPresent())
+            .map(c -> String.valueOf(c.ppmPerKelvin().getAsInt()))
+            .collect(Collectors.joining(", "))
         + " ppm/K";
   }
 

@@ -7,8 +7,8 @@ import java.math.RoundingMode;
 /** Exact decimal helpers shared by the codes, so that 4k7 is the same double as 4700. */
 final class Decimals {
   /**
-   * Significant digits kept when a double is read back as a decimal: enough for any part value,
-   * few enough to drop the binary noise of a computed value (4.99e3 computed as 4989.999999999999).
+   * Significant digits kept when a double is read back as a decimal: enough for any part value, few
+   * enough to drop the binary noise of a computed value (4.99e3 computed as 4989.999999999999).
    */
   static final int CLEAN_DIGITS = 12;
 

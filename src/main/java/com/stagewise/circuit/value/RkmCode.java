@@ -21,12 +21,18 @@ final class RkmCode {
           "([+-]?)(\\d*)([RrF" + Prefix.LETTERS + "])(\\d*)(?:\\s*(" + SiValue.UNITS + "))?");
 
   private static final Marker[] OHMS = {
-    new Marker("R", 0), new Marker("K", 3), new Marker("M", 6), new Marker("G", 9),
+    new Marker("R", 0),
+    new Marker("K", 3),
+    new Marker("M", 6),
+    new Marker("G", 9),
     new Marker("T", 12)
   };
   // ASCII u for micro: common practice on parts lists and schematics; IEC 60062 prints µ.
   private static final Marker[] FARADS = {
-    new Marker("p", -12), new Marker("n", -9), new Marker("u", -6), new Marker("m", -3),
+    new Marker("p", -12),
+    new Marker("n", -9),
+    new Marker("u", -6),
+    new Marker("m", -3),
     new Marker("F", 0)
   };
 

@@ -16,8 +16,8 @@ import java.util.regex.Pattern;
  *   <li>a number and an SI prefix, optionally after a space: {@code 10k}, {@code 1.5M}, {@code
  *       100n}, {@code 22p}, {@code 4.7u}, {@code 4.7 µ}; prefixes f p n u/µ m k/K M G T, where
  *       {@code m} is milli and {@code M} mega;
- *   <li>the RKM code: {@code 4k7}, {@code 4K7}, {@code 4R7}, {@code R47}, {@code 470R}, {@code
- *       0R}, {@code 2u2}, {@code 1M5}, {@code 6n8}, {@code p47} (see {@link RkmCode});
+ *   <li>the RKM code: {@code 4k7}, {@code 4K7}, {@code 4R7}, {@code R47}, {@code 470R}, {@code 0R},
+ *       {@code 2u2}, {@code 1M5}, {@code 6n8}, {@code p47} (see {@link RkmCode});
  *   <li>either of these followed by a unit: Ω (or the ohm sign U+2126), {@code ohm}, {@code ohms},
  *       {@code F}, {@code V}, {@code A}, {@code Hz}, as in {@code 10kΩ}, {@code 100nF}, {@code 4k7
  *       ohm}; or a bare {@code R} after a number without prefix ({@code 4.7R}, {@code 470R}).
@@ -64,7 +64,9 @@ public final class SiValue {
     String cleaned = clean(text);
     if (cleaned.isEmpty()) {
       throw new InvalidInputException(
-          "value \"" + text + "\" is empty; expected a number with an SI prefix or RKM code "
+          "value \""
+              + text
+              + "\" is empty; expected a number with an SI prefix or RKM code "
               + EXAMPLES);
     }
     BigDecimal exact =
@@ -103,8 +105,8 @@ public final class SiValue {
    * Returns {@code value} like {@link #format(double, String)}, rounded half up to at most {@code
    * significantDigits} significant digits.
    *
-   * @throws IllegalArgumentException if {@code value} is not finite or {@code significantDigits}
-   *     is not between 1 and 15
+   * @throws IllegalArgumentException if {@code value} is not finite or {@code significantDigits} is
+   *     not between 1 and 15
    */
   public static String format(double value, String unit, int significantDigits) {
     if (!Double.isFinite(value)) {
@@ -152,10 +154,7 @@ public final class SiValue {
 
   private static String clean(String text) {
     // Unicode minus and the no-break spaces that word processors put between number and unit.
-    return text.replace('\u2212', '-')
-        .replace('\u00a0', ' ')
-        .replace('\u202f', ' ')
-        .strip();
+    return text.replace('\u2212', '-').replace('\u00a0', ' ').replace('\u202f', ' ').strip();
   }
 
   private static Optional<BigDecimal> readNumber(String text) {
@@ -175,7 +174,9 @@ public final class SiValue {
   private static InvalidInputException notAValue(String text, String cleaned) {
     if (cleaned.matches("[+-]?\\d*,\\d+.*")) {
       return new InvalidInputException(
-          "value \"" + text + "\" has a decimal comma; write a decimal point (4.7k) or the RKM"
+          "value \""
+              + text
+              + "\" has a decimal comma; write a decimal point (4.7k) or the RKM"
               + " code (4k7)");
     }
     return new InvalidInputException(

@@ -13,8 +13,7 @@ import java.util.regex.Pattern;
  *
  * <ul>
  *   <li>3-digit code: two digits and a power of ten, {@code 472} = 4.7 kΩ, {@code 100} = 10 Ω;
- *   <li>4-digit code: three digits and a power of ten, {@code 4702} = 47 kΩ, {@code 1003} = 100
- *       kΩ;
+ *   <li>4-digit code: three digits and a power of ten, {@code 4702} = 47 kΩ, {@code 1003} = 100 kΩ;
  *   <li>R as the decimal point, 3 or 4 characters: {@code 4R7} = 4.7 Ω, {@code R47} = 0.47 Ω,
  *       {@code 49R9} = 49.9 Ω;
  *   <li>EIA-96: the index 01 to 96 of the value in the E96 series and a multiplier letter, {@code
@@ -22,10 +21,10 @@ import java.util.regex.Pattern;
  *   <li>{@code 0}, {@code 000} or {@code 0000}: a zero-ohm link (common practice).
  * </ul>
  *
- * <p>A third character R after two digits is the EIA-96 letter for ×0.01 ({@code 10R} = 1.24 Ω),
- * as the EIA-96 table has it; 10 Ω is {@code 100} or {@code 10R0}. The multiplier digits 8 and 9
- * are refused: no resistor code uses them, and capacitor codes give them other meanings (×0.01
- * and ×0.1, from memory).
+ * <p>A third character R after two digits is the EIA-96 letter for ×0.01 ({@code 10R} = 1.24 Ω), as
+ * the EIA-96 table has it; 10 Ω is {@code 100} or {@code 10R0}. The multiplier digits 8 and 9 are
+ * refused: no resistor code uses them, and capacitor codes give them other meanings (×0.01 and
+ * ×0.1, from memory).
  */
 public final class SmdCode {
   /** EIA-96 multiplier letters and their powers of ten; R, S and H are alternative letters. */
@@ -95,8 +94,8 @@ public final class SmdCode {
   }
 
   /**
-   * Returns the 3-digit code of a resistance: {@code 472} for 4.7 kΩ, {@code 4R7} for 4.7 Ω,
-   * {@code R47} for 0.47 Ω, {@code 000} for 0 Ω.
+   * Returns the 3-digit code of a resistance: {@code 472} for 4.7 kΩ, {@code 4R7} for 4.7 Ω, {@code
+   * R47} for 0.47 Ω, {@code 000} for 0 Ω.
    *
    * @throws InvalidInputException if the value needs more than two significant digits, is below
    *     0.01 Ω, above 99 × 10^7 Ω, negative or not finite
@@ -117,27 +116,33 @@ public final class SmdCode {
   }
 
   /**
-   * Returns the EIA-96 code of an E96 resistance from 0.1 Ω to 97.6 MΩ, with the letters Z Y X A
-   * B C D E F: {@code 01C} for 10 kΩ, {@code 68X} for 49.9 Ω.
+   * Returns the EIA-96 code of an E96 resistance from 0.1 Ω to 97.6 MΩ, with the letters Z Y X A B
+   * C D E F: {@code 01C} for 10 kΩ, {@code 68X} for 49.9 Ω.
    *
-   * @throws InvalidInputException if the value is not an E96 value in that range (the message
-   *     names the nearest E96 value)
+   * @throws InvalidInputException if the value is not an E96 value in that range (the message names
+   *     the nearest E96 value)
    */
   public static String encodeEia96(double ohms) {
     requireResistance(ohms);
     if (ohms == 0 || !ESeries.E96.isPreferred(ohms)) {
       String nearest =
-          ohms > 0 ? "; the nearest E96 value is "
-              + SiValue.format(ESeries.E96.nearest(ohms), "Ω") : "";
+          ohms > 0
+              ? "; the nearest E96 value is " + SiValue.format(ESeries.E96.nearest(ohms), "Ω")
+              : "";
       throw new InvalidInputException(
-          "resistance " + SiValue.format(ohms, "Ω", 12) + " is not an E96 value, so it has no"
-              + " EIA-96 code" + nearest);
+          "resistance "
+              + SiValue.format(ohms, "Ω", 12)
+              + " is not an E96 value, so it has no"
+              + " EIA-96 code"
+              + nearest);
     }
     BigDecimal value = Decimals.clean(ESeries.E96.nearest(ohms));
     int power = Decimals.leadingExponent(value) - 2;
     if (power < -3 || power > 5) {
       throw new InvalidInputException(
-          "resistance " + SiValue.format(ohms, "Ω") + " is outside the EIA-96 range 0.1 Ω to"
+          "resistance "
+              + SiValue.format(ohms, "Ω")
+              + " is outside the EIA-96 range 0.1 Ω to"
               + " 97.6 MΩ");
     }
     int hundreds = value.movePointLeft(power).intValueExact();
@@ -187,8 +192,12 @@ public final class SmdCode {
 
   private static InvalidInputException tooManyDigits(double ohms, String form, int significant) {
     return new InvalidInputException(
-        "resistance " + Decimals.clean(ohms).toPlainString() + " Ω needs more than " + significant
-            + " significant digits (or is too small) for the " + form);
+        "resistance "
+            + Decimals.clean(ohms).toPlainString()
+            + " Ω needs more than "
+            + significant
+            + " significant digits (or is too small) for the "
+            + form);
   }
 
   private static InvalidInputException bad(String code, String why) {

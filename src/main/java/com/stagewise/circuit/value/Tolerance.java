@@ -6,8 +6,8 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Reads and prints tolerances as fractions: {@code "1%"}, {@code "0.5 %"}, {@code "±5%"} and
- * {@code "0.01"} all read as fractions (0.01, 0.005, 0.05, 0.01).
+ * Reads and prints tolerances as fractions: {@code "1%"}, {@code "0.5 %"}, {@code "±5%"} and {@code
+ * "0.01"} all read as fractions (0.01, 0.005, 0.05, 0.01).
  *
  * <p>A tolerance is a half-width relative to the nominal value, between 0 (inclusive) and 1
  * (exclusive): a part cannot be allowed to reach zero or twice its value.
@@ -29,7 +29,9 @@ public final class Tolerance {
   public static double parse(String text) {
     if (text == null || text.isBlank()) {
       throw new InvalidInputException(
-          "tolerance \"" + (text == null ? "" : text) + "\" is empty; expected a percentage such"
+          "tolerance \""
+              + (text == null ? "" : text)
+              + "\" is empty; expected a percentage such"
               + " as 1% or a fraction such as 0.01");
     }
     Matcher m = TEXT.matcher(text.replace('\u2212', '-').replace('\u00a0', ' ').strip());
@@ -44,7 +46,11 @@ public final class Tolerance {
     if (!(fraction >= 0 && fraction < 1)) {
       String hint = !percent && fraction >= 1 ? "; write " + m.group(1) + "% for a percentage" : "";
       throw new InvalidInputException(
-          "tolerance \"" + text + "\" (" + fraction + ") must be at least 0 and below 1 (100 %)"
+          "tolerance \""
+              + text
+              + "\" ("
+              + fraction
+              + ") must be at least 0 and below 1 (100 %)"
               + hint);
     }
     return fraction;
@@ -71,7 +77,8 @@ public final class Tolerance {
    */
   public static String format(double fraction) {
     if (!Double.isFinite(fraction)) {
-      throw new IllegalArgumentException("cannot print a tolerance that is not finite: " + fraction);
+      throw new IllegalArgumentException(
+          "cannot print a tolerance that is not finite: " + fraction);
     }
     if (fraction == 0) {
       return "0%";

@@ -1,7 +1,7 @@
 /**
  * Part values as people write and print them: SI prefixes and the RKM code ({@link SiValue}),
- * tolerances ({@link Tolerance}), resistor colour bands ({@link ColourCode}), SMD resistor
- * markings ({@link SmdCode}) and the preferred-number series ({@link ESeries}).
+ * tolerances ({@link Tolerance}), resistor colour bands ({@link ColourCode}), SMD resistor markings
+ * ({@link SmdCode}) and the preferred-number series ({@link ESeries}).
  *
  * <p>All numbers are SI units (ohms, farads, volts, hertz) as {@code double}. Parsing and printing
  * never depend on the machine's locale. Text from a user that cannot be read throws {@link

@@ -100,8 +100,13 @@ public final class DemoHistory {
   /** Returns the demo data as a bundle. */
   public static HistoryBundle bundle() {
     Builder b = new Builder();
-    BoardModel mixer = b.model(MIXER, "Northfield Audio (invented maker)", "Eight-channel mixing desk; one board per channel.");
-    BoardModel supply = b.model(SUPPLY, "Harbour Instruments (invented maker)", "Bench supply, 0-30 V 5 A.");
+    BoardModel mixer =
+        b.model(
+            MIXER,
+            "Northfield Audio (invented maker)",
+            "Eight-channel mixing desk; one board per channel.");
+    BoardModel supply =
+        b.model(SUPPLY, "Harbour Instruments (invented maker)", "Bench supply, 0-30 V 5 A.");
     b.sheet(mixer, "Channel line driver", MIXER_STAGE);
     b.sheet(supply, "Set-point amplifier", SUPPLY_STAGE);
     Unit hall = b.unit(mixer, "NF8-21037", "Riverside Community Hall (invented)");
@@ -110,33 +115,76 @@ public final class DemoHistory {
     Unit lab = b.unit(supply, "HI-3005-0412", "college electronics lab (invented)");
     Unit hobby = b.unit(supply, "HI-3005-0977", "job 1230");
 
-    RepairCase c1 = b.closedCase(hall, 0, "Channel 2 output stuck near -13 V, no signal through", 3, Outcome.FIXED, "R2:open");
+    RepairCase c1 =
+        b.closedCase(
+            hall,
+            0,
+            "Channel 2 output stuck near -13 V, no signal through",
+            3,
+            Outcome.FIXED,
+            "R2:open");
     b.dc(c1, "U1.8", 14.93);
     b.dc(c1, "U1.4", -14.97);
     b.dc(c1, "U1.2", 0.98);
     b.dc(c1, "U1.1", -13.52);
-    b.action(c1, ActionKind.PART_REPLACED, "R2", "47k 1% (cracked)", "47k 1% metal film", "Hairline crack across the body.");
-    b.note(c1, "Feedback resistor open: the stage ran open-loop and the output sat at its lower limit. Checked the other channels while the desk was open.");
+    b.action(
+        c1,
+        ActionKind.PART_REPLACED,
+        "R2",
+        "47k 1% (cracked)",
+        "47k 1% metal film",
+        "Hairline crack across the body.");
+    b.note(
+        c1,
+        "Feedback resistor open: the stage ran open-loop and the output sat at its lower limit. Checked the other channels while the desk was open.");
 
-    RepairCase c2 = b.closedCase(studio, 12, "No sound from channel 5 line out; other channels fine", 2, Outcome.FIXED, "U1A:dead");
+    RepairCase c2 =
+        b.closedCase(
+            studio,
+            12,
+            "No sound from channel 5 line out; other channels fine",
+            2,
+            Outcome.FIXED,
+            "U1A:dead");
     b.dc(c2, "U1.8", 15.02);
     b.dc(c2, "U1.4", -14.95);
     b.dc(c2, "U1.1", 0.0);
-    b.action(c2, ActionKind.PART_REPLACED, "U1", "dual op-amp (original)", "dual op-amp, same type", "Socketed the new part.");
+    b.action(
+        c2,
+        ActionKind.PART_REPLACED,
+        "U1",
+        "dual op-amp (original)",
+        "dual op-amp, same type",
+        "Socketed the new part.");
     b.note(c2, "Owner reports a speaker cable was shorted during a gig.");
 
-    RepairCase c3 = b.closedCase(school, 30, "Channel 1 dead, output sits at the negative rail", 4, Outcome.FIXED, "R2:open");
+    RepairCase c3 =
+        b.closedCase(
+            school,
+            30,
+            "Channel 1 dead, output sits at the negative rail",
+            4,
+            Outcome.FIXED,
+            "R2:open");
     b.dc(c3, "U1.1", -13.47);
     b.action(c3, ActionKind.PART_REPLACED, "R2", "47k", "47k 1% metal film", "");
     b.action(c3, ActionKind.REFLOW, "U1", "", "", "Reflowed the op-amp's pins while there.");
-    b.note(c3, "Same feedback resistor as on NF8-21037: worth checking on every MX-8 that comes in.");
+    b.note(
+        c3, "Same feedback resistor as on NF8-21037: worth checking on every MX-8 that comes in.");
 
     b.openCase(hall, 70, "Hum on the left bus after transport");
 
-    RepairCase c4 = b.closedCase(lab, 20, "Output will not rise above about 2 V", 5, Outcome.FIXED, "VCC:low");
+    RepairCase c4 =
+        b.closedCase(lab, 20, "Output will not rise above about 2 V", 5, Outcome.FIXED, "VCC:low");
     b.dc(c4, "U2.8", 9.1);
     b.dc(c4, "U2.4", -11.9);
-    b.action(c4, ActionKind.OTHER, "U5", "", "", "Replaced the +12 V regulator; the rail now reads 12.05 V.");
+    b.action(
+        c4,
+        ActionKind.OTHER,
+        "U5",
+        "",
+        "",
+        "Replaced the +12 V regulator; the rail now reads 12.05 V.");
     b.note(c4, "Mains-powered: discharged the reservoir capacitors before ohms checks.");
 
     RepairCase c5 = b.closedCase(hobby, 41, "Dead: no display, no output", 1, Outcome.RETURNED);
@@ -163,7 +211,9 @@ public final class DemoHistory {
     }
 
     void sheet(BoardModel model, String title, String json) {
-      sheets.add(new StageSheetRecord(id("sheet " + model.name() + title), model.id(), title, json, START));
+      sheets.add(
+          new StageSheetRecord(
+              id("sheet " + model.name() + title), model.id(), title, json, START));
     }
 
     Unit unit(BoardModel model, String serialNumber, String owner) {
@@ -172,31 +222,69 @@ public final class DemoHistory {
       return u;
     }
 
-    RepairCase closedCase(Unit unit, int day, String symptom, int days, Outcome outcome, String... faults) {
+    RepairCase closedCase(
+        Unit unit, int day, String symptom, int days, Outcome outcome, String... faults) {
       Instant opened = START.plus(Duration.ofDays(day));
       Instant closed = opened.plus(Duration.ofDays(days));
       RepairCase c =
-          new RepairCase(id("case " + unit.serial() + day), unit.id(), opened, symptom, CaseStatus.CLOSED, closed,
-              outcome, List.of(faults), closed);
+          new RepairCase(
+              id("case " + unit.serial() + day),
+              unit.id(),
+              opened,
+              symptom,
+              CaseStatus.CLOSED,
+              closed,
+              outcome,
+              List.of(faults),
+              closed);
       cases.add(c);
       return c;
     }
 
     void openCase(Unit unit, int day, String symptom) {
       Instant opened = START.plus(Duration.ofDays(day));
-      cases.add(new RepairCase(id("case " + unit.serial() + day), unit.id(), opened, symptom, CaseStatus.OPEN, null, null,
-          List.of(), opened));
+      cases.add(
+          new RepairCase(
+              id("case " + unit.serial() + day),
+              unit.id(),
+              opened,
+              symptom,
+              CaseStatus.OPEN,
+              null,
+              null,
+              List.of(),
+              opened));
     }
 
     void dc(RepairCase c, String at, double volts) {
       Instant taken = c.openedAt().plus(Duration.ofMinutes(30 + readings.size()));
-      readings.add(new StoredReading(id("reading " + c.id() + at), c.id(), at, ReadingKind.DC, volts, null, null,
-          "6000-count handheld, ±(0.5 % + 2 counts)", taken));
+      readings.add(
+          new StoredReading(
+              id("reading " + c.id() + at),
+              c.id(),
+              at,
+              ReadingKind.DC,
+              volts,
+              null,
+              null,
+              "6000-count handheld, ±(0.5 % + 2 counts)",
+              taken));
     }
 
-    void action(RepairCase c, ActionKind kind, String part, String oldValue, String newValue, String text) {
+    void action(
+        RepairCase c, ActionKind kind, String part, String oldValue, String newValue, String text) {
       Instant at = c.closedAt().minus(Duration.ofHours(2 + actions.size()));
-      actions.add(new RepairAction(id("action " + c.id() + (serial++)), c.id(), at, kind, part, oldValue, newValue, text, at));
+      actions.add(
+          new RepairAction(
+              id("action " + c.id() + (serial++)),
+              c.id(),
+              at,
+              kind,
+              part,
+              oldValue,
+              newValue,
+              text,
+              at));
     }
 
     void note(RepairCase c, String text) {
@@ -205,12 +293,23 @@ public final class DemoHistory {
     }
 
     HistoryBundle build() {
-      return new HistoryBundle(HistoryBundle.CURRENT_VERSION, START, "demo", models, sheets, units, cases, readings,
-          List.of(), actions, notes);
+      return new HistoryBundle(
+          HistoryBundle.CURRENT_VERSION,
+          START,
+          "demo",
+          models,
+          sheets,
+          units,
+          cases,
+          readings,
+          List.of(),
+          actions,
+          notes);
     }
 
     private static String id(String name) {
-      return UUID.nameUUIDFromBytes(("stagewise demo " + name).getBytes(StandardCharsets.UTF_8)).toString();
+      return UUID.nameUUIDFromBytes(("stagewise demo " + name).getBytes(StandardCharsets.UTF_8))
+          .toString();
     }
   }
 }

@@ -1,6 +1,7 @@
 package com.stagewise.history.demo;
 
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
@@ -11,7 +12,6 @@ import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
-import com.stagewise.history.record.ActionKind;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
@@ -19,9 +19,9 @@ import java.util.Random;
 import java.util.UUID;
 
 /**
- * Generated filler history for benchmarks: many board models, units and cases with readings,
- * notes and actions, from a seeded random generator. Not demo data and not for tests of the
- * diagnosis: its symptoms are words drawn at random.
+ * Generated filler history for benchmarks: many board models, units and cases with readings, notes
+ * and actions, from a seeded random generator. Not demo data and not for tests of the diagnosis:
+ * its symptoms are words drawn at random.
  */
 public final class SyntheticHistory {
   /** Cases per generated unit (on average). */
@@ -31,15 +31,79 @@ public final class SyntheticHistory {
   static final int BOARD_MODELS = 50;
 
   private static final String[] WORDS = {
-    "hum", "hiss", "crackle", "distortion", "dead", "intermittent", "noise", "clipping", "offset", "drift",
-    "channel", "output", "input", "left", "right", "bus", "fader", "knob", "warm", "cold", "after", "transport",
-    "gig", "rail", "supply", "fuse", "regulator", "smell", "burnt", "display", "relay", "click", "pop", "mute",
-    "phantom", "power", "meter", "needle", "stuck", "oscillates", "squeal", "motorboating", "ground", "loop",
-    "headphone", "monitor", "aux", "send", "return", "insert", "gain", "trim", "pan", "equaliser", "filter"};
+    "hum",
+    "hiss",
+    "crackle",
+    "distortion",
+    "dead",
+    "intermittent",
+    "noise",
+    "clipping",
+    "offset",
+    "drift",
+    "channel",
+    "output",
+    "input",
+    "left",
+    "right",
+    "bus",
+    "fader",
+    "knob",
+    "warm",
+    "cold",
+    "after",
+    "transport",
+    "gig",
+    "rail",
+    "supply",
+    "fuse",
+    "regulator",
+    "smell",
+    "burnt",
+    "display",
+    "relay",
+    "click",
+    "pop",
+    "mute",
+    "phantom",
+    "power",
+    "meter",
+    "needle",
+    "stuck",
+    "oscillates",
+    "squeal",
+    "motorboating",
+    "ground",
+    "loop",
+    "headphone",
+    "monitor",
+    "aux",
+    "send",
+    "return",
+    "insert",
+    "gain",
+    "trim",
+    "pan",
+    "equaliser",
+    "filter"
+  };
 
   private static final String[] FAULTS = {
-    "R1:open", "R2:open", "R2:high", "R3:low", "C1:short", "C2:open", "U1A:dead", "U1A:stuck-high",
-    "U1B:stuck-low", "U1.6-7:bridge", "U1.3:lifted", "VCC:missing", "VEE:low", "healthy"};
+    "R1:open",
+    "R2:open",
+    "R2:high",
+    "R3:low",
+    "C1:short",
+    "C2:open",
+    "U1A:dead",
+    "U1A:stuck-high",
+    "U1B:stuck-low",
+    "U1.6-7:bridge",
+    "U1.3:lifted",
+    "VCC:missing",
+    "VEE:low",
+    "healthy"
+  };
 
   private SyntheticHistory() {}
 
@@ -57,7 +121,9 @@ public final class SyntheticHistory {
   public static final int VOCABULARY = 5_000;
 
   private static final String[] SYLLABLES = {
-    "ka", "lo", "mi", "ne", "ru", "sa", "te", "vo", "zi", "pa", "bu", "de", "fo", "gi", "ha", "jo", "ku", "li", "mo", "nu"};
+    "ka", "lo", "mi", "ne", "ru", "sa", "te", "vo", "zi", "pa", "bu", "de", "fo", "gi", "ha", "jo",
+    "ku", "li", "mo", "nu"
+  };
 
   /**
    * Returns the word of rank {@code rank} (0 is the most frequent): the trade words first, then
@@ -68,7 +134,10 @@ public final class SyntheticHistory {
       return WORDS[rank];
     }
     int i = rank - WORDS.length;
-    return SYLLABLES[i % 20] + SYLLABLES[(i / 20) % 20] + SYLLABLES[(i / 400) % 20] + (i / 8000 == 0 ? "" : "x");
+    return SYLLABLES[i % 20]
+        + SYLLABLES[(i / 20) % 20]
+        + SYLLABLES[(i / 400) % 20]
+        + (i / 8000 == 0 ? "" : "x");
   }
 
   /**
@@ -85,20 +154,37 @@ public final class SyntheticHistory {
    * Adds {@code cases} generated cases with {@code readingsPerCase} readings each to the store, in
    * transactions of {@code chunk} cases (imports of generated bundles).
    */
-  public static void fill(HistoryStore store, int cases, int readingsPerCase, long seed, int chunk) {
+  public static void fill(
+      HistoryStore store, int cases, int readingsPerCase, long seed, int chunk) {
     Generator generator = new Generator(cases, seed);
-    store.importBundle(bundle(generator.models, generator.units, List.of(), List.of(), List.of(), List.of()), "generator");
+    store.importBundle(
+        bundle(generator.models, generator.units, List.of(), List.of(), List.of(), List.of()),
+        "generator");
     for (int first = 0; first < cases; first += chunk) {
-      store.importBundle(generator.cases(Math.min(chunk, cases - first), readingsPerCase), "generator");
+      store.importBundle(
+          generator.cases(Math.min(chunk, cases - first), readingsPerCase), "generator");
     }
   }
 
-  /** Returns {@code cases} generated cases with their board models, units and children as one bundle. */
+  /**
+   * Returns {@code cases} generated cases with their board models, units and children as one
+   * bundle.
+   */
   public static HistoryBundle bundle(int cases, int readingsPerCase, long seed) {
     Generator generator = new Generator(cases, seed);
     HistoryBundle children = generator.cases(cases, readingsPerCase);
-    return new HistoryBundle(HistoryBundle.CURRENT_VERSION, Instant.EPOCH, "generator", generator.models, List.of(),
-        generator.units, children.cases(), children.readings(), List.of(), children.actions(), children.notes());
+    return new HistoryBundle(
+        HistoryBundle.CURRENT_VERSION,
+        Instant.EPOCH,
+        "generator",
+        generator.models,
+        List.of(),
+        generator.units,
+        children.cases(),
+        children.readings(),
+        List.of(),
+        children.actions(),
+        children.notes());
   }
 
   /** The generator's state: its random numbers, board models and units. */
@@ -131,23 +217,52 @@ public final class SyntheticHistory {
         boolean closed = random.nextDouble() < 0.85;
         String fault = FAULTS[random.nextInt(FAULTS.length)];
         Instant closedAt = opened.plusSeconds(86_400L * (1 + random.nextInt(20)));
-        Outcome outcome = random.nextInt(10) < 8 ? Outcome.FIXED : Outcome.values()[1 + random.nextInt(2)];
+        Outcome outcome =
+            random.nextInt(10) < 8 ? Outcome.FIXED : Outcome.values()[1 + random.nextInt(2)];
         caseList.add(
-            new RepairCase(caseId, unit.id(), opened, sentence(random, 6 + random.nextInt(10)),
-                closed ? CaseStatus.CLOSED : CaseStatus.OPEN, closed ? closedAt : null, closed ? outcome : null,
-                closed ? List.of(fault) : List.of(), closed ? closedAt : opened));
+            new RepairCase(
+                caseId,
+                unit.id(),
+                opened,
+                sentence(random, 6 + random.nextInt(10)),
+                closed ? CaseStatus.CLOSED : CaseStatus.OPEN,
+                closed ? closedAt : null,
+                closed ? outcome : null,
+                closed ? List.of(fault) : List.of(),
+                closed ? closedAt : opened));
         for (int r = 0; r < readingsPerCase; r++) {
           readings.add(
-              new StoredReading(id(random), caseId, "U1." + (1 + random.nextInt(8)), ReadingKind.DC,
-                  Math.round((random.nextDouble() * 30 - 15) * 1000) / 1000.0, null, null, "6000-count",
+              new StoredReading(
+                  id(random),
+                  caseId,
+                  "U1." + (1 + random.nextInt(8)),
+                  ReadingKind.DC,
+                  Math.round((random.nextDouble() * 30 - 15) * 1000) / 1000.0,
+                  null,
+                  null,
+                  "6000-count",
                   opened.plusSeconds(60L * r)));
         }
-        notes.add(new CaseNote(id(random), caseId, opened.plusSeconds(600), sentence(random, 10 + random.nextInt(20)),
-            opened.plusSeconds(600)));
+        notes.add(
+            new CaseNote(
+                id(random),
+                caseId,
+                opened.plusSeconds(600),
+                sentence(random, 10 + random.nextInt(20)),
+                opened.plusSeconds(600)));
         if (closed && !fault.equals("healthy")) {
           String part = fault.substring(0, fault.indexOf(':'));
-          actions.add(new RepairAction(id(random), caseId, closedAt, ActionKind.PART_REPLACED, part, "old", "new", "",
-              closedAt));
+          actions.add(
+              new RepairAction(
+                  id(random),
+                  caseId,
+                  closedAt,
+                  ActionKind.PART_REPLACED,
+                  part,
+                  "old",
+                  "new",
+                  "",
+                  closedAt));
         }
       }
       return bundle(List.of(), List.of(), caseList, readings, notes, actions);
@@ -155,10 +270,24 @@ public final class SyntheticHistory {
   }
 
   private static HistoryBundle bundle(
-      List<BoardModel> models, List<Unit> units, List<RepairCase> cases, List<StoredReading> readings,
-      List<CaseNote> notes, List<RepairAction> actions) {
-    return new HistoryBundle(HistoryBundle.CURRENT_VERSION, Instant.EPOCH, "generator", models, List.of(), units, cases,
-        readings, List.of(), actions, notes);
+      List<BoardModel> models,
+      List<Unit> units,
+      List<RepairCase> cases,
+      List<StoredReading> readings,
+      List<CaseNote> notes,
+      List<RepairAction> actions) {
+    return new HistoryBundle(
+        HistoryBundle.CURRENT_VERSION,
+        Instant.EPOCH,
+        "generator",
+        models,
+        List.of(),
+        units,
+        cases,
+        readings,
+        List.of(),
+        actions,
+        notes);
   }
 
   private static String sentence(Random random, int words) {
@@ -173,7 +302,9 @@ public final class SyntheticHistory {
   }
 
   private static String id(Random random) {
-    return new UUID((random.nextLong() & ~0xF000L) | 0x4000L, (random.nextLong() & 0x3FFFFFFFFFFFFFFFL) | 0x8000000000000000L)
+    return new UUID(
+            (random.nextLong() & ~0xF000L) | 0x4000L,
+            (random.nextLong() & 0x3FFFFFFFFFFFFFFFL) | 0x8000000000000000L)
         .toString();
   }
 }

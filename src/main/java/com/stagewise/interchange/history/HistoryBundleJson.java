@@ -40,8 +40,8 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * Reads and writes a history bundle ({@code {"format": "stagewise-history", "version": 1, …}}),
- * the file that carries a shop's history between benches.
+ * Reads and writes a history bundle ({@code {"format": "stagewise-history", "version": 1, …}}), the
+ * file that carries a shop's history between benches.
  *
  * <p>Reading is strict: unknown keys, wrong types, duplicate keys, trailing data, strings longer
  * than a stage sheet may be, non-finite numbers and a newer format version are errors that name the
@@ -57,13 +57,36 @@ public final class HistoryBundleJson {
   static final int MAX_DEPTH = 16;
 
   private static final Set<String> TOP =
-      Set.of("format", "version", "exportedAt", "programVersion", "boardModels", "stageSheets", "units",
-          "cases", "readings", "suspectLists", "actions", "notes");
-  private static final Set<String> BOARD_MODEL = Set.of("id", "name", "maker", "notes", "updatedAt");
-  private static final Set<String> STAGE_SHEET = Set.of("id", "boardModelId", "title", "sheet", "updatedAt");
-  private static final Set<String> UNIT = Set.of("id", "serial", "boardModelId", "owner", "updatedAt");
+      Set.of(
+          "format",
+          "version",
+          "exportedAt",
+          "programVersion",
+          "boardModels",
+          "stageSheets",
+          "units",
+          "cases",
+          "readings",
+          "suspectLists",
+          "actions",
+          "notes");
+  private static final Set<String> BOARD_MODEL =
+      Set.of("id", "name", "maker", "notes", "updatedAt");
+  private static final Set<String> STAGE_SHEET =
+      Set.of("id", "boardModelId", "title", "sheet", "updatedAt");
+  private static final Set<String> UNIT =
+      Set.of("id", "serial", "boardModelId", "owner", "updatedAt");
   private static final Set<String> CASE =
-      Set.of("id", "unitId", "openedAt", "symptom", "status", "closedAt", "outcome", "confirmedFaults", "updatedAt");
+      Set.of(
+          "id",
+          "unitId",
+          "openedAt",
+          "symptom",
+          "status",
+          "closedAt",
+          "outcome",
+          "confirmedFaults",
+          "updatedAt");
   private static final Set<String> READING =
       Set.of("id", "caseId", "at", "kind", "value", "hz", "uncertainty", "meter", "takenAt");
   private static final Set<String> SUSPECT_LIST =
@@ -82,7 +105,10 @@ public final class HistoryBundleJson {
     JsonFactory factory =
         JsonFactory.builder()
             .streamReadConstraints(
-                StreamReadConstraints.builder().maxStringLength(MAX_STRING).maxNestingDepth(MAX_DEPTH).build())
+                StreamReadConstraints.builder()
+                    .maxStringLength(MAX_STRING)
+                    .maxNestingDepth(MAX_DEPTH)
+                    .build())
             .enable(com.fasterxml.jackson.core.StreamReadFeature.STRICT_DUPLICATE_DETECTION)
             .build();
     ObjectMapper mapper = new ObjectMapper(factory);
@@ -104,7 +130,8 @@ public final class HistoryBundleJson {
     } catch (NoSuchFileException e) {
       throw new InvalidInputException(file.toString(), "", "no such file");
     } catch (IOException e) {
-      throw new InvalidInputException(file.toString(), "", "cannot read the file: " + e.getMessage());
+      throw new InvalidInputException(
+          file.toString(), "", "cannot read the file: " + e.getMessage());
     }
   }
 
@@ -114,13 +141,19 @@ public final class HistoryBundleJson {
     try {
       root = MAPPER.readTree(in);
     } catch (StreamConstraintsException e) {
-      throw new InvalidInputException(source, "", "the bundle is outside the accepted limits: " + e.getOriginalMessage());
+      throw new InvalidInputException(
+          source, "", "the bundle is outside the accepted limits: " + e.getOriginalMessage());
     } catch (JsonProcessingException e) {
       String where =
           e.getLocation() == null
               ? ""
-              : " (line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr() + ")";
-      throw new InvalidInputException(source, "", "not valid JSON" + where + ": " + e.getOriginalMessage());
+              : " (line "
+                  + e.getLocation().getLineNr()
+                  + ", column "
+                  + e.getLocation().getColumnNr()
+                  + ")";
+      throw new InvalidInputException(
+          source, "", "not valid JSON" + where + ": " + e.getOriginalMessage());
     } catch (IOException e) {
       throw new InvalidInputException(source, "", "cannot read: " + e.getMessage());
     }
@@ -135,15 +168,24 @@ public final class HistoryBundleJson {
     String format = top.text("format");
     if (!format.equals(HistoryBundle.FORMAT)) {
       throw new InvalidInputException(
-          source, "format", "expected \"" + HistoryBundle.FORMAT + "\", got \"" + format + "\" (not a history bundle)");
+          source,
+          "format",
+          "expected \""
+              + HistoryBundle.FORMAT
+              + "\", got \""
+              + format
+              + "\" (not a history bundle)");
     }
     int version = top.integer("version");
     if (version > HistoryBundle.CURRENT_VERSION) {
       throw new InvalidInputException(
           source,
           "version",
-          "bundle format version " + version + " is newer than this program reads (up to "
-              + HistoryBundle.CURRENT_VERSION + "); use a newer Stagewise");
+          "bundle format version "
+              + version
+              + " is newer than this program reads (up to "
+              + HistoryBundle.CURRENT_VERSION
+              + "); use a newer Stagewise");
     }
     if (version < 1) {
       throw new InvalidInputException(source, "version", "expected 1 or more, got " + version);
@@ -152,19 +194,37 @@ public final class HistoryBundleJson {
     List<JsonNode> items = top.array("boardModels");
     for (int i = 0; i < items.size(); i++) {
       JsonFields f = JsonFields.object(source, "boardModels[" + i + "]", items.get(i), BOARD_MODEL);
-      models.add(new BoardModel(f.text("id"), f.text("name"), f.text("maker", ""), f.text("notes", ""), f.time("updatedAt")));
+      models.add(
+          new BoardModel(
+              f.text("id"),
+              f.text("name"),
+              f.text("maker", ""),
+              f.text("notes", ""),
+              f.time("updatedAt")));
     }
     List<StageSheetRecord> sheets = new ArrayList<>();
     items = top.array("stageSheets");
     for (int i = 0; i < items.size(); i++) {
       JsonFields f = JsonFields.object(source, "stageSheets[" + i + "]", items.get(i), STAGE_SHEET);
-      sheets.add(new StageSheetRecord(f.text("id"), f.text("boardModelId"), f.text("title", ""), f.text("sheet"), f.time("updatedAt")));
+      sheets.add(
+          new StageSheetRecord(
+              f.text("id"),
+              f.text("boardModelId"),
+              f.text("title", ""),
+              f.text("sheet"),
+              f.time("updatedAt")));
     }
     List<Unit> units = new ArrayList<>();
     items = top.array("units");
     for (int i = 0; i < items.size(); i++) {
       JsonFields f = JsonFields.object(source, "units[" + i + "]", items.get(i), UNIT);
-      units.add(new Unit(f.text("id"), f.text("serial"), f.text("boardModelId"), f.text("owner", ""), f.time("updatedAt")));
+      units.add(
+          new Unit(
+              f.text("id"),
+              f.text("serial"),
+              f.text("boardModelId"),
+              f.text("owner", ""),
+              f.time("updatedAt")));
     }
     List<RepairCase> cases = new ArrayList<>();
     items = top.array("cases");
@@ -179,7 +239,9 @@ public final class HistoryBundleJson {
               f.text("symptom", ""),
               f.word("status", CaseStatus::fromWord, "open or closed"),
               f.time("closedAt", null),
-              outcome == null ? null : f.word("outcome", Outcome::fromWord, "fixed, not-fixed or returned"),
+              outcome == null
+                  ? null
+                  : f.word("outcome", Outcome::fromWord, "fixed, not-fixed or returned"),
               f.texts("confirmedFaults"),
               f.time("updatedAt")));
     }
@@ -207,8 +269,15 @@ public final class HistoryBundleJson {
       List<StoredSuspect> suspects = new ArrayList<>();
       List<JsonNode> suspectNodes = f.array("suspects");
       for (int j = 0; j < suspectNodes.size(); j++) {
-        JsonFields s = JsonFields.object(source, at + ".suspects[" + j + "]", suspectNodes.get(j), SUSPECT);
-        suspects.add(new StoredSuspect(s.text("fault"), s.number("probability"), s.texts("group"), s.text("why", ""), j + 1));
+        JsonFields s =
+            JsonFields.object(source, at + ".suspects[" + j + "]", suspectNodes.get(j), SUSPECT);
+        suspects.add(
+            new StoredSuspect(
+                s.text("fault"),
+                s.number("probability"),
+                s.texts("group"),
+                s.text("why", ""),
+                j + 1));
       }
       lists.add(
           new SuspectListRecord(
@@ -240,7 +309,9 @@ public final class HistoryBundleJson {
     items = top.array("notes");
     for (int i = 0; i < items.size(); i++) {
       JsonFields f = JsonFields.object(source, "notes[" + i + "]", items.get(i), NOTE);
-      notes.add(new CaseNote(f.text("id"), f.text("caseId"), f.time("at"), f.text("text"), f.time("updatedAt")));
+      notes.add(
+          new CaseNote(
+              f.text("id"), f.text("caseId"), f.time("at"), f.text("text"), f.time("updatedAt")));
     }
     return new HistoryBundle(
         version,
@@ -267,13 +338,17 @@ public final class HistoryBundleJson {
         try (OutputStream out = Files.newOutputStream(temporary)) {
           write(bundle, out);
         }
-        Files.move(temporary, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
+        Files.move(
+            temporary,
+            file,
+            java.nio.file.StandardCopyOption.REPLACE_EXISTING,
             java.nio.file.StandardCopyOption.ATOMIC_MOVE);
       } finally {
         Files.deleteIfExists(temporary);
       }
     } catch (IOException e) {
-      throw new InvalidInputException(file.toString(), "", "cannot write the bundle: " + e.getMessage());
+      throw new InvalidInputException(
+          file.toString(), "", "cannot write the bundle: " + e.getMessage());
     }
   }
 
@@ -300,7 +375,10 @@ public final class HistoryBundleJson {
   }
 
   private static <T> void writeArray(
-      JsonGenerator json, String name, List<T> records, java.util.function.Function<T, ObjectNode> tree)
+      JsonGenerator json,
+      String name,
+      List<T> records,
+      java.util.function.Function<T, ObjectNode> tree)
       throws IOException {
     json.writeArrayFieldStart(name);
     for (T record : records) {
@@ -328,13 +406,19 @@ public final class HistoryBundleJson {
 
   static ObjectNode tree(StageSheetRecord s) {
     ObjectNode o = NODES.objectNode();
-    o.put("id", s.id()).put("boardModelId", s.boardModelId()).put("title", s.title()).put("sheet", s.sheetJson());
+    o.put("id", s.id())
+        .put("boardModelId", s.boardModelId())
+        .put("title", s.title())
+        .put("sheet", s.sheetJson());
     return o.put("updatedAt", s.updatedAt().toString());
   }
 
   static ObjectNode tree(Unit u) {
     ObjectNode o = NODES.objectNode();
-    o.put("id", u.id()).put("serial", u.serial()).put("boardModelId", u.boardModelId()).put("owner", u.owner());
+    o.put("id", u.id())
+        .put("serial", u.serial())
+        .put("boardModelId", u.boardModelId())
+        .put("owner", u.owner());
     return o.put("updatedAt", u.updatedAt().toString());
   }
 
@@ -383,14 +467,23 @@ public final class HistoryBundleJson {
 
   static ObjectNode tree(RepairAction a) {
     ObjectNode o = NODES.objectNode();
-    o.put("id", a.id()).put("caseId", a.caseId()).put("at", a.at().toString()).put("kind", a.kind().word());
-    o.put("part", a.part()).put("oldValue", a.oldValue()).put("newValue", a.newValue()).put("text", a.text());
+    o.put("id", a.id())
+        .put("caseId", a.caseId())
+        .put("at", a.at().toString())
+        .put("kind", a.kind().word());
+    o.put("part", a.part())
+        .put("oldValue", a.oldValue())
+        .put("newValue", a.newValue())
+        .put("text", a.text());
     return o.put("updatedAt", a.updatedAt().toString());
   }
 
   static ObjectNode tree(CaseNote n) {
     ObjectNode o = NODES.objectNode();
-    o.put("id", n.id()).put("caseId", n.caseId()).put("at", n.at().toString()).put("text", n.text());
+    o.put("id", n.id())
+        .put("caseId", n.caseId())
+        .put("at", n.at().toString())
+        .put("text", n.text());
     return o.put("updatedAt", n.updatedAt().toString());
   }
 

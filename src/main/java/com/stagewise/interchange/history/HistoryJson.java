@@ -36,7 +36,9 @@ public final class HistoryJson {
     return text(root);
   }
 
-  /** Returns {@code {"units": [...]}}, each unit with its board model's name as {@code boardModel}. */
+  /**
+   * Returns {@code {"units": [...]}}, each unit with its board model's name as {@code boardModel}.
+   */
   public static String units(List<Unit> units, Map<String, BoardModel> modelsById) {
     ObjectNode root = NODES.objectNode();
     ArrayNode array = root.putArray("units");
@@ -72,7 +74,8 @@ public final class HistoryJson {
   }
 
   /** Returns readings and the suspect list stored with them. */
-  public static String storedReadings(List<StoredReading> readings, SuspectListRecord suspectListOrNull) {
+  public static String storedReadings(
+      List<StoredReading> readings, SuspectListRecord suspectListOrNull) {
     ObjectNode root = NODES.objectNode();
     ArrayNode array = root.putArray("readings");
     readings.forEach(r -> array.add(HistoryBundleJson.tree(r)));
@@ -132,12 +135,18 @@ public final class HistoryJson {
   /** Returns what an import did. */
   public static String importReport(ImportReport report) {
     ObjectNode root = NODES.objectNode();
-    root.put("added", report.added()).put("updated", report.updated()).put("unchanged", report.unchanged());
+    root.put("added", report.added())
+        .put("updated", report.updated())
+        .put("unchanged", report.unchanged());
     ArrayNode matched = root.putArray("matched");
     report.matched().forEach(matched::add);
     ArrayNode conflicts = root.putArray("conflicts");
     for (ImportReport.Conflict conflict : report.conflicts()) {
-      conflicts.addObject().put("kind", conflict.kind()).put("id", conflict.id()).put("reason", conflict.reason());
+      conflicts
+          .addObject()
+          .put("kind", conflict.kind())
+          .put("id", conflict.id())
+          .put("reason", conflict.reason());
     }
     return text(root);
   }
@@ -160,7 +169,9 @@ public final class HistoryJson {
 
   private static String text(ObjectNode node) {
     try {
-      return HistoryBundleJson.mapperForOutput().writerWithDefaultPrettyPrinter().writeValueAsString(node);
+      return HistoryBundleJson.mapperForOutput()
+          .writerWithDefaultPrettyPrinter()
+          .writeValueAsString(node);
     } catch (JsonProcessingException e) {
       throw new UncheckedIOException(e);
     }

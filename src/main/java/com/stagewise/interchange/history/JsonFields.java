@@ -29,12 +29,18 @@ final class JsonFields {
   /** Reads {@code node} as an object at {@code path} that may hold only {@code allowed} keys. */
   static JsonFields object(String source, String path, JsonNode node, Set<String> allowed) {
     if (node == null || !node.isObject()) {
-      throw new InvalidInputException(source, path.isEmpty() ? "(top level)" : path, "expected an object, got " + kind(node));
+      throw new InvalidInputException(
+          source, path.isEmpty() ? "(top level)" : path, "expected an object, got " + kind(node));
     }
     for (Iterator<String> names = node.fieldNames(); names.hasNext(); ) {
       String name = names.next();
       if (!allowed.contains(name)) {
-        throw new InvalidInputException(source, join(path, name), "unknown key (expected one of " + String.join(", ", new java.util.TreeSet<>(allowed)) + ")");
+        throw new InvalidInputException(
+            source,
+            join(path, name),
+            "unknown key (expected one of "
+                + String.join(", ", new java.util.TreeSet<>(allowed))
+                + ")");
       }
     }
     return new JsonFields(source, path, node);
@@ -90,7 +96,8 @@ final class JsonFields {
       throw new InvalidInputException(source, field(key), "is missing (expected a whole number)");
     }
     if (!value.isIntegralNumber() || !value.canConvertToInt()) {
-      throw new InvalidInputException(source, field(key), "expected a whole number, got " + kind(value));
+      throw new InvalidInputException(
+          source, field(key), "expected a whole number, got " + kind(value));
     }
     return value.intValue();
   }
@@ -102,7 +109,9 @@ final class JsonFields {
       return fast != null ? fast : Instant.parse(text);
     } catch (DateTimeParseException e) {
       throw new InvalidInputException(
-          source, field(key), "expected a UTC time such as 2026-03-04T10:15:30Z, got '" + shorten(text) + "'");
+          source,
+          field(key),
+          "expected a UTC time such as 2026-03-04T10:15:30Z, got '" + shorten(text) + "'");
     }
   }
 
@@ -113,8 +122,12 @@ final class JsonFields {
 
   <T> T word(String key, Function<String, java.util.Optional<T>> parse, String expected) {
     String text = text(key);
-    return parse.apply(text)
-        .orElseThrow(() -> new InvalidInputException(source, field(key), "expected " + expected + ", got '" + shorten(text) + "'"));
+    return parse
+        .apply(text)
+        .orElseThrow(
+            () ->
+                new InvalidInputException(
+                    source, field(key), "expected " + expected + ", got '" + shorten(text) + "'"));
   }
 
   /** Returns the array at {@code key} (empty if absent) as a list of its elements. */
@@ -137,7 +150,8 @@ final class JsonFields {
     for (int i = 0; i < items.size(); i++) {
       JsonNode item = items.get(i);
       if (!item.isTextual()) {
-        throw new InvalidInputException(source, field(key) + "[" + i + "]", "expected a string, got " + kind(item));
+        throw new InvalidInputException(
+            source, field(key) + "[" + i + "]", "expected a string, got " + kind(item));
       }
       texts.add(item.textValue());
     }
@@ -146,14 +160,20 @@ final class JsonFields {
 
   /**
    * Returns the instant of a UTC time written as {@code Instant.toString} writes whole seconds or
-   * milliseconds ({@code 2026-03-04T10:15:30Z}, {@code 2026-03-04T10:15:30.123Z}), or null for
-   * any other shape (then {@code Instant.parse} decides). Bundles hold hundreds of thousands of
-   * times and {@code Instant.parse} costs several microseconds each.
+   * milliseconds ({@code 2026-03-04T10:15:30Z}, {@code 2026-03-04T10:15:30.123Z}), or null for any
+   * other shape (then {@code Instant.parse} decides). Bundles hold hundreds of thousands of times
+   * and {@code Instant.parse} costs several microseconds each.
    */
   static Instant fastUtc(String t) {
     int n = t.length();
-    if ((n != 20 && n != 24) || t.charAt(4) != '-' || t.charAt(7) != '-' || t.charAt(10) != 'T'
-        || t.charAt(13) != ':' || t.charAt(16) != ':' || t.charAt(n - 1) != 'Z' || (n == 24 && t.charAt(19) != '.')) {
+    if ((n != 20 && n != 24)
+        || t.charAt(4) != '-'
+        || t.charAt(7) != '-'
+        || t.charAt(10) != 'T'
+        || t.charAt(13) != ':'
+        || t.charAt(16) != ':'
+        || t.charAt(n - 1) != 'Z'
+        || (n == 24 && t.charAt(19) != '.')) {
       return null;
     }
     int year = digits(t, 0, 4);
@@ -163,8 +183,18 @@ final class JsonFields {
     int minute = digits(t, 14, 2);
     int second = digits(t, 17, 2);
     int millis = n == 24 ? digits(t, 20, 3) : 0;
-    if (year < 0 || month < 1 || month > 12 || day < 1 || day > 31 || hour < 0 || hour > 23 || minute < 0
-        || minute > 59 || second < 0 || second > 59 || millis < 0) {
+    if (year < 0
+        || month < 1
+        || month > 12
+        || day < 1
+        || day > 31
+        || hour < 0
+        || hour > 23
+        || minute < 0
+        || minute > 59
+        || second < 0
+        || second > 59
+        || millis < 0) {
       return null;
     }
     try {

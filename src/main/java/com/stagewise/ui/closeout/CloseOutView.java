@@ -65,19 +65,31 @@ public final class CloseOutView {
       button.setSelected(model.actionKindProperty().get() == kind);
       kindRow.getChildren().add(button);
     }
-    kinds.selectedToggleProperty().addListener((o, was, now) -> {
-      if (now == null) {
-        was.setSelected(true);
-      } else {
-        model.actionKindProperty().set((ActionKind) now.getUserData());
-      }
-    });
-    model.actionKindProperty().addListener((o, was, now) ->
-        kinds.getToggles().stream().filter(t -> t.getUserData() == now).findFirst().ifPresent(t -> t.setSelected(true)));
+    kinds
+        .selectedToggleProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                was.setSelected(true);
+              } else {
+                model.actionKindProperty().set((ActionKind) now.getUserData());
+              }
+            });
+    model
+        .actionKindProperty()
+        .addListener(
+            (o, was, now) ->
+                kinds.getToggles().stream()
+                    .filter(t -> t.getUserData() == now)
+                    .findFirst()
+                    .ifPresent(t -> t.setSelected(true)));
     TextField part = field("action-part", "e.g. R2 or U1", model.actionPartProperty());
-    TextField oldValue = field("action-old", "e.g. open, or measured 18 kΩ", model.actionOldProperty());
-    TextField newValue = field("action-new", "e.g. 4.7 kΩ 1 %, or TL072", model.actionNewProperty());
-    TextField text = field("action-text", "e.g. reflowed all pins of U1", model.actionTextProperty());
+    TextField oldValue =
+        field("action-old", "e.g. open, or measured 18 kΩ", model.actionOldProperty());
+    TextField newValue =
+        field("action-new", "e.g. 4.7 kΩ 1 %, or TL072", model.actionNewProperty());
+    TextField text =
+        field("action-text", "e.g. reflowed all pins of U1", model.actionTextProperty());
     GridPane form = new GridPane();
     form.setHgap(8);
     form.setVgap(6);
@@ -103,13 +115,15 @@ public final class CloseOutView {
     list.setId("action-list");
     list.setPrefHeight(120);
     VBox.setVgrow(list, Priority.ALWAYS);
-    list.setCellFactory(v -> new ListCell<>() {
-      @Override
-      protected void updateItem(RepairAction a, boolean empty) {
-        super.updateItem(a, empty);
-        setText(empty || a == null ? null : Words.actionLine(a));
-      }
-    });
+    list.setCellFactory(
+        v ->
+            new ListCell<>() {
+              @Override
+              protected void updateItem(RepairAction a, boolean empty) {
+                super.updateItem(a, empty);
+                setText(empty || a == null ? null : Words.actionLine(a));
+              }
+            });
     Label recorded = new Label("Recorded in this case");
     recorded.setStyle("-fx-font-weight: bold;");
     HBox addRow = new HBox(8, add, showKeys);
@@ -117,7 +131,8 @@ public final class CloseOutView {
     return box;
   }
 
-  private static TextField field(String id, String prompt, javafx.beans.property.StringProperty property) {
+  private static TextField field(
+      String id, String prompt, javafx.beans.property.StringProperty property) {
     TextField field = new TextField();
     field.setId(id);
     field.setPromptText(prompt);
@@ -136,18 +151,28 @@ public final class CloseOutView {
     ToggleGroup outcomes = new ToggleGroup();
     HBox outcomeRow = new HBox(6);
     for (Outcome o : Outcome.values()) {
-      ToggleButton button = new ToggleButton(Words.outcome(o).substring(0, 1).toUpperCase(Locale.ROOT) + Words.outcome(o).substring(1));
+      ToggleButton button =
+          new ToggleButton(
+              Words.outcome(o).substring(0, 1).toUpperCase(Locale.ROOT)
+                  + Words.outcome(o).substring(1));
       button.setId("outcome-" + o.word());
       button.setToggleGroup(outcomes);
       button.setUserData(o);
       outcomeRow.getChildren().add(button);
     }
-    outcomes.selectedToggleProperty().addListener((o, was, now) -> model.outcomeProperty().set(now == null ? null : (Outcome) now.getUserData()));
-    model.outcomeProperty().addListener((o, was, now) -> {
-      if (now == null) {
-        outcomes.selectToggle(null);
-      }
-    });
+    outcomes
+        .selectedToggleProperty()
+        .addListener(
+            (o, was, now) ->
+                model.outcomeProperty().set(now == null ? null : (Outcome) now.getUserData()));
+    model
+        .outcomeProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                outcomes.selectToggle(null);
+              }
+            });
     Label notesTitle = new Label("Notes");
     notesTitle.getStyleClass().add("section-title");
     TextArea notes = new TextArea();
@@ -167,7 +192,8 @@ public final class CloseOutView {
     leave.setOnAction(e -> model.leaveOpen());
     HBox buttons = new HBox(10, close, leave);
     buttons.setAlignment(Pos.CENTER_LEFT);
-    box.getChildren().addAll(faultsTitle, faultsBox, outcomeTitle, outcomeRow, notesTitle, notes, buttons);
+    box.getChildren()
+        .addAll(faultsTitle, faultsBox, outcomeTitle, outcomeRow, notesTitle, notes, buttons);
     return box;
   }
 

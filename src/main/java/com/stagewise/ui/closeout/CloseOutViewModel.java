@@ -32,7 +32,8 @@ import javafx.collections.ObservableList;
 public final class CloseOutViewModel {
   private final Bench bench;
   private final ObservableList<RepairAction> actions = FXCollections.observableArrayList();
-  private final ObjectProperty<ActionKind> actionKind = new SimpleObjectProperty<>(ActionKind.PART_REPLACED);
+  private final ObjectProperty<ActionKind> actionKind =
+      new SimpleObjectProperty<>(ActionKind.PART_REPLACED);
   private final StringProperty actionPart = new SimpleStringProperty("");
   private final StringProperty actionOld = new SimpleStringProperty("");
   private final StringProperty actionNew = new SimpleStringProperty("");
@@ -105,13 +106,17 @@ public final class CloseOutViewModel {
     clearForm();
     RepairCase rc = bench.openCaseProperty().get();
     if (rc != null) {
-      bench.tasks().run("Reading the case", () -> bench.store().caseFile(rc.id()).map(f -> f.actions()).orElse(List.of()),
-          stored -> {
-            if (bench.openCaseProperty().get() == rc) {
-              actions.setAll(stored);
-            }
-          },
-          e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
+      bench
+          .tasks()
+          .run(
+              "Reading the case",
+              () -> bench.store().caseFile(rc.id()).map(f -> f.actions()).orElse(List.of()),
+              stored -> {
+                if (bench.openCaseProperty().get() == rc) {
+                  actions.setAll(stored);
+                }
+              },
+              e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
     }
     choices(bench.diagnosisProperty().get());
   }
@@ -134,8 +139,8 @@ public final class CloseOutViewModel {
   }
 
   /**
-   * Prepares the close-out for the suspect the technician settled on: ticks its fault and fills
-   * the action form with the likely repair (replace the part with its marked value, or reflow the
+   * Prepares the close-out for the suspect the technician settled on: ticks its fault and fills the
+   * action form with the likely repair (replace the part with its marked value, or reflow the
    * joint).
    */
   public void prepareFor(Suspect suspect) {
@@ -157,14 +162,18 @@ public final class CloseOutViewModel {
       String unit = part.get().kind() == PartKind.CAPACITOR ? "F" : "Ω";
       actionKind.set(ActionKind.PART_REPLACED);
       actionPart.set(part.get().ref());
-      actionOld.set(suspect.estimatedValue().isPresent()
-          ? "measured " + SiValue.format(suspect.estimatedValue().getAsDouble(), unit, 2)
-          : kind.equals("open") ? "open" : kind.equals("short") ? "shorted" : "");
+      actionOld.set(
+          suspect.estimatedValue().isPresent()
+              ? "measured " + SiValue.format(suspect.estimatedValue().getAsDouble(), unit, 2)
+              : kind.equals("open") ? "open" : kind.equals("short") ? "shorted" : "");
       actionNew.set(SiValue.format(part.get().value(), unit));
     } else if (kind.equals("lifted") || kind.equals("bridge")) {
       actionKind.set(ActionKind.REFLOW);
       actionPart.set(what.contains(".") ? what.substring(0, what.indexOf('.')) : what);
-      actionText.set(kind.equals("bridge") ? "Removed the solder bridge at " + Words.pin(what) : "Reflowed " + Words.pin(what));
+      actionText.set(
+          kind.equals("bridge")
+              ? "Removed the solder bridge at " + Words.pin(what)
+              : "Reflowed " + Words.pin(what));
     } else if (stage != null && stage.amplifier(what).isPresent()) {
       actionKind.set(ActionKind.PART_REPLACED);
       actionPart.set(stage.amplifier(what).get().packageRef());
@@ -190,7 +199,9 @@ public final class CloseOutViewModel {
     }
   }
 
-  /** Records the action in the form in the case at once (so it is kept if the case is left open). */
+  /**
+   * Records the action in the form in the case at once (so it is kept if the case is left open).
+   */
   public void addAction() {
     RepairCase rc = bench.openCaseProperty().get();
     if (rc == null) {
@@ -199,25 +210,41 @@ public final class CloseOutViewModel {
     ActionKind kind = actionKind.get();
     String part = text(actionPart);
     if (kind == ActionKind.PART_REPLACED && part.isEmpty()) {
-      bench.problems().show("Which part was replaced?", "A replaced part needs its designator.", "Type the designator, e.g. R2 or U1.");
+      bench
+          .problems()
+          .show(
+              "Which part was replaced?",
+              "A replaced part needs its designator.",
+              "Type the designator, e.g. R2 or U1.");
       return;
     }
     if (kind == ActionKind.OTHER && text(actionText).isEmpty()) {
-      bench.problems().show("Say what was done", "An \"other\" action needs a few words.", "Type what was done, e.g. \"cleaned the edge connector\".");
+      bench
+          .problems()
+          .show(
+              "Say what was done",
+              "An \"other\" action needs a few words.",
+              "Type what was done, e.g. \"cleaned the edge connector\".");
       return;
     }
     String oldValue = text(actionOld);
     String newValue = text(actionNew);
     String words = text(actionText);
-    bench.tasks().run("Recording the action", () -> bench.store().addAction(rc.id(), kind, part, oldValue, newValue, words),
-        stored -> {
-          actions.add(stored);
-          clearForm();
-        },
-        e -> bench.problems().failed("Could not record the action", e, Words.CHECK_DATABASE));
+    bench
+        .tasks()
+        .run(
+            "Recording the action",
+            () -> bench.store().addAction(rc.id(), kind, part, oldValue, newValue, words),
+            stored -> {
+              actions.add(stored);
+              clearForm();
+            },
+            e -> bench.problems().failed("Could not record the action", e, Words.CHECK_DATABASE));
   }
 
-  /** Closes the case with the outcome, the faults found and the notes, and shows it in the history. */
+  /**
+   * Closes the case with the outcome, the faults found and the notes, and shows it in the history.
+   */
   public void closeCase() {
     RepairCase rc = bench.openCaseProperty().get();
     Outcome chosen = outcome.get();
@@ -225,30 +252,45 @@ public final class CloseOutViewModel {
       return;
     }
     if (chosen == null) {
-      bench.problems().show("How did it end?", "A case closes with an outcome.", "Tap Fixed, Not fixed or Returned unrepaired.");
+      bench
+          .problems()
+          .show(
+              "How did it end?",
+              "A case closes with an outcome.",
+              "Tap Fixed, Not fixed or Returned unrepaired.");
       return;
     }
     if (chosen == Outcome.FIXED && confirmedFaults.isEmpty() && actions.isEmpty()) {
-      bench.problems().show("What fixed it?", "A fixed case needs the fault found or the action taken, so the shop can learn from it.",
-          "Tick the fault that was found, or add what was done.");
+      bench
+          .problems()
+          .show(
+              "What fixed it?",
+              "A fixed case needs the fault found or the action taken, so the shop can learn from it.",
+              "Tick the fault that was found, or add what was done.");
       return;
     }
-    List<String> faults = chosen == Outcome.FIXED || chosen == Outcome.NOT_FIXED ? List.copyOf(confirmedFaults) : List.of();
+    List<String> faults =
+        chosen == Outcome.FIXED || chosen == Outcome.NOT_FIXED
+            ? List.copyOf(confirmedFaults)
+            : List.of();
     String note = text(notes);
-    bench.tasks().run("Closing the case",
-        () -> {
-          if (!note.isEmpty()) {
-            bench.store().addNote(rc.id(), note);
-          }
-          RepairCase closed = bench.store().closeCase(rc.id(), chosen, faults);
-          bench.resume().forget(rc.id());
-          return closed;
-        },
-        closed -> {
-          bench.clearCase();
-          afterClose.accept(closed.id());
-        },
-        e -> bench.problems().failed("Could not close the case", e, Words.CHECK_DATABASE));
+    bench
+        .tasks()
+        .run(
+            "Closing the case",
+            () -> {
+              if (!note.isEmpty()) {
+                bench.store().addNote(rc.id(), note);
+              }
+              RepairCase closed = bench.store().closeCase(rc.id(), chosen, faults);
+              bench.resume().forget(rc.id());
+              return closed;
+            },
+            closed -> {
+              bench.clearCase();
+              afterClose.accept(closed.id());
+            },
+            e -> bench.problems().failed("Could not close the case", e, Words.CHECK_DATABASE));
   }
 
   /** Keeps the case open (with its notes) to resume later, and goes back to the unit screen. */
@@ -259,19 +301,22 @@ public final class CloseOutViewModel {
     }
     String note = text(notes);
     bench.resume().saveStep(rc.id(), Step.CLOSE_OUT);
-    bench.tasks().run("Keeping the case open",
-        () -> {
-          if (!note.isEmpty()) {
-            bench.store().addNote(rc.id(), note);
-          }
-          return null;
-        },
-        ok -> {
-          notes.set("");
-          bench.clearCase();
-          bench.go(Step.UNIT);
-        },
-        e -> bench.problems().failed("Could not save the note", e, Words.CHECK_DATABASE));
+    bench
+        .tasks()
+        .run(
+            "Keeping the case open",
+            () -> {
+              if (!note.isEmpty()) {
+                bench.store().addNote(rc.id(), note);
+              }
+              return null;
+            },
+            ok -> {
+              notes.set("");
+              bench.clearCase();
+              bench.go(Step.UNIT);
+            },
+            e -> bench.problems().failed("Could not save the note", e, Words.CHECK_DATABASE));
   }
 
   private static String text(StringProperty p) {

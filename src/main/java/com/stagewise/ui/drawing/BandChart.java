@@ -14,9 +14,9 @@ import javafx.scene.text.Text;
 
 /**
  * A compact horizontal chart of volts at one test point: the healthy band, a large marker for the
- * measured value and small markers where the top suspects would put the reading. Values outside
- * the band stretch the axis; a band of zero width shows as a thin bar; a missing (NaN) reading
- * shows "no reading".
+ * measured value and small markers where the top suspects would put the reading. Values outside the
+ * band stretch the axis; a band of zero width shows as a thin bar; a missing (NaN) reading shows
+ * "no reading".
  */
 public final class BandChart extends Region {
   private static final double SIDE = 22;
@@ -47,11 +47,16 @@ public final class BandChart extends Region {
   }
 
   /**
-   * Shows the chart for one test point: the healthy band from {@code healthyLow} to
-   * {@code healthyHigh} volts (either order), the measured volts (NaN when there is no reading yet)
-   * and the suspects' markers.
+   * Shows the chart for one test point: the healthy band from {@code healthyLow} to {@code
+   * healthyHigh} volts (either order), the measured volts (NaN when there is no reading yet) and
+   * the suspects' markers.
    */
-  public void show(String testPoint, double healthyLow, double healthyHigh, double measured, List<Marker> markers) {
+  public void show(
+      String testPoint,
+      double healthyLow,
+      double healthyHigh,
+      double measured,
+      List<Marker> markers) {
     this.testPoint = testPoint == null ? "" : testPoint;
     this.healthyLow = Math.min(healthyLow, healthyHigh);
     this.healthyHigh = Math.max(healthyLow, healthyHigh);
@@ -87,7 +92,8 @@ public final class BandChart extends Region {
     }
     double length = width - 2 * SIDE;
     BandScale scale =
-        BandScale.fit(healthyLow, healthyHigh, measured, markers.stream().map(Marker::volts).toList());
+        BandScale.fit(
+            healthyLow, healthyHigh, measured, markers.stream().map(Marker::volts).toList());
     Rectangle paper = new Rectangle(width, computePrefHeight(width), Palette.PAPER);
     getChildren().add(paper);
 
@@ -158,7 +164,8 @@ public final class BandChart extends Region {
     int rowCount = 1;
     for (int i = 0; i < shown.size(); i++) {
       double x = centres[i];
-      Polygon tip = new Polygon(x, AXIS_Y + 2, x - 6, AXIS_Y + BAND_HALF + 7, x + 6, AXIS_Y + BAND_HALF + 7);
+      Polygon tip =
+          new Polygon(x, AXIS_Y + 2, x - 6, AXIS_Y + BAND_HALF + 7, x + 6, AXIS_Y + BAND_HALF + 7);
       tip.setFill(Palette.SECOND);
       Text label = labels.get(i);
       double left = Math.max(2, Math.min(x - widths[i] / 2, SIDE + length + SIDE - widths[i] - 2));
@@ -184,15 +191,28 @@ public final class BandChart extends Region {
     }
     double x = SIDE + scale.position(measured, length);
     boolean inside =
-        Double.isFinite(healthyLow) && measured >= healthyLow - 1e-12 && measured <= healthyHigh + 1e-12;
+        Double.isFinite(healthyLow)
+            && measured >= healthyLow - 1e-12
+            && measured <= healthyHigh + 1e-12;
     Color mark = inside ? Palette.BAND_EDGE : Palette.OUTSIDE;
     Line needle = new Line(x, AXIS_Y - BAND_HALF - 4, x, AXIS_Y + BAND_HALF + 2);
     needle.setStroke(mark);
     needle.setStrokeWidth(4);
-    Polygon head = new Polygon(x, AXIS_Y - BAND_HALF - 1, x - 9, AXIS_Y - BAND_HALF - 13, x + 9, AXIS_Y - BAND_HALF - 13);
+    Polygon head =
+        new Polygon(
+            x,
+            AXIS_Y - BAND_HALF - 1,
+            x - 9,
+            AXIS_Y - BAND_HALF - 13,
+            x + 9,
+            AXIS_Y - BAND_HALF - 13);
     head.setFill(mark);
     head.setId("measured-marker");
-    Text value = text(VoltText.of(measured) + (inside ? "" : "  outside"), Palette.bold(16), Palette.MEASURED);
+    Text value =
+        text(
+            VoltText.of(measured) + (inside ? "" : "  outside"),
+            Palette.bold(16),
+            Palette.MEASURED);
     double w = value.getLayoutBounds().getWidth();
     double left = Math.max(4, Math.min(x - w / 2, width - w - 4));
     Rectangle pill = new Rectangle(left - 6, 25, w + 12, 24);

@@ -4,8 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The volts axis of a band chart: a span that holds the healthy band, the reading and the
- * suspects' markers with a margin, and round tick values (1-2-5 steps).
+ * The volts axis of a band chart: a span that holds the healthy band, the reading and the suspects'
+ * markers with a margin, and round tick values (1-2-5 steps).
  *
  * @param min the volts at the left end
  * @param max the volts at the right end, above {@code min}
@@ -15,17 +15,18 @@ record BandScale(double min, double max) {
   /** Checks that the span is finite and not empty. */
   BandScale {
     if (!Double.isFinite(min) || !Double.isFinite(max) || max <= min) {
-      throw new IllegalArgumentException("axis span [" + min + ", " + max + "] must be finite and not empty");
+      throw new IllegalArgumentException(
+          "axis span [" + min + ", " + max + "] must be finite and not empty");
     }
   }
 
   /**
    * Returns an axis that shows every finite value given, with 12 % of the span spare at each end;
-   * non-finite values are ignored. A single value (or a band of zero width) gets a span of
-   * 0.5 V or 20 % of its size, whichever is more, on each side; no finite value at all gives
-   * −1 V to +1 V.
+   * non-finite values are ignored. A single value (or a band of zero width) gets a span of 0.5 V or
+   * 20 % of its size, whichever is more, on each side; no finite value at all gives −1 V to +1 V.
    */
-  static BandScale fit(double healthyLow, double healthyHigh, double measured, List<Double> markers) {
+  static BandScale fit(
+      double healthyLow, double healthyHigh, double measured, List<Double> markers) {
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
     List<Double> all = new ArrayList<>(markers);

@@ -51,7 +51,11 @@ record Box(double x, double y, double w, double h) {
   Box union(Box other) {
     double left = Math.min(x, other.x);
     double top = Math.min(y, other.y);
-    return new Box(left, top, Math.max(right(), other.right()) - left, Math.max(bottom(), other.bottom()) - top);
+    return new Box(
+        left,
+        top,
+        Math.max(right(), other.right()) - left,
+        Math.max(bottom(), other.bottom()) - top);
   }
 
   /** Returns this box grown by {@code margin} on every side. */

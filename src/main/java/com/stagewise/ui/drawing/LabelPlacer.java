@@ -9,9 +9,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Places one label block per net beside a wire or symbol of that net, where it covers nothing
- * else: no part, triangle, symbol, caption, wire or other label. Where every spot is taken, the
- * spot that covers the fewest things wins. Pure Java.
+ * Places one label block per net beside a wire or symbol of that net, where it covers nothing else:
+ * no part, triangle, symbol, caption, wire or other label. Where every spot is taken, the spot that
+ * covers the fewest things wins. Pure Java.
  */
 final class LabelPlacer {
   private static final double GAP = 4;
@@ -58,7 +58,8 @@ final class LabelPlacer {
         double length = Math.hypot(nx - best.x(), ny - best.y());
         for (double t = 0; t < length; t += 6) {
           double f = t / length;
-          taken.add(Box.centred(best.x() + f * (nx - best.x()), best.y() + f * (ny - best.y()), 4, 4));
+          taken.add(
+              Box.centred(best.x() + f * (nx - best.x()), best.y() + f * (ny - best.y()), 4, 4));
         }
       }
     }
@@ -114,13 +115,17 @@ final class LabelPlacer {
     return t0 < t1;
   }
 
-  /** Returns the spots to try for one net, best first: beside its longer wires, then its symbols. */
+  /**
+   * Returns the spots to try for one net, best first: beside its longer wires, then its symbols.
+   */
   static List<Placement> candidates(Sheet sheet, String net, double w, double h) {
     List<Placement> spots = new ArrayList<>();
     List<Wire> wires =
         sheet.wires().stream()
             .filter(wire -> wire.net().equals(net))
-            .sorted(Comparator.comparingDouble((Wire wire) -> wire.horizontal() ? 0 : 1).thenComparing(Wire::length, Comparator.reverseOrder()))
+            .sorted(
+                Comparator.comparingDouble((Wire wire) -> wire.horizontal() ? 0 : 1)
+                    .thenComparing(Wire::length, Comparator.reverseOrder()))
             .toList();
     for (Wire wire : wires) {
       for (double t : ALONG) {

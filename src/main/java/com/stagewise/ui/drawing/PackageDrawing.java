@@ -9,19 +9,19 @@ import java.util.function.IntConsumer;
 import javafx.geometry.VPos;
 import javafx.scene.Cursor;
 import javafx.scene.Group;
+import javafx.scene.layout.Region;
 import javafx.scene.shape.Arc;
 import javafx.scene.shape.ArcType;
 import javafx.scene.shape.Circle;
 import javafx.scene.shape.Rectangle;
-import javafx.scene.layout.Region;
 import javafx.scene.text.Text;
 import javafx.scene.text.TextAlignment;
 import javafx.scene.transform.Scale;
 
 /**
- * A top view of an op-amp package (DIP, 8 or 14 pins) with numbered pins, the notch and dot at
- * pin 1, each pin's name, an optional text per pin (a reading, a net name) and one highlighted pin
- * to probe. Every pin is a touch target of at least 48 px at the preferred size.
+ * A top view of an op-amp package (DIP, 8 or 14 pins) with numbered pins, the notch and dot at pin
+ * 1, each pin's name, an optional text per pin (a reading, a net name) and one highlighted pin to
+ * probe. Every pin is a touch target of at least 48 px at the preferred size.
  */
 public final class PackageDrawing extends Region {
   private final Group content = new Group();
@@ -52,7 +52,8 @@ public final class PackageDrawing extends Region {
     this.type = Objects.requireNonNull(type, "type");
     this.packageRef = packageRef == null ? "" : packageRef;
     this.pinNames = pinNames == null ? Map.of() : new LinkedHashMap<>(pinNames);
-    this.geometry = PackageGeometry.of(type.pinCount(), Math.max(getWidth(), 1), Math.max(getHeight(), 1));
+    this.geometry =
+        PackageGeometry.of(type.pinCount(), Math.max(getWidth(), 1), Math.max(getHeight(), 1));
     this.highlighted = 0;
     pinText.clear();
     redraw();
@@ -148,7 +149,12 @@ public final class PackageDrawing extends Region {
     ref.setFill(Palette.PAPER);
     Text kind = text(type.word(), body.cx(), body.cy() + 14, Palette.font(15));
     kind.setFill(Palette.PAPER);
-    Text caption = text("top view, pin 1 at the notch", geometry.width() / 2, body.bottom() + 16, Palette.font(14));
+    Text caption =
+        text(
+            "top view, pin 1 at the notch",
+            geometry.width() / 2,
+            body.bottom() + 16,
+            Palette.font(14));
     caption.setFill(Palette.SOFT_INK);
     // The pin to probe, spelled out above the package where it has the whole width.
     Text probe = new Text(probeLine());
@@ -202,7 +208,11 @@ public final class PackageDrawing extends Region {
     fit(nameText, area.w() - 14, on);
     nameText.setFill(Palette.INK);
     nameText.setTextOrigin(VPos.CENTER);
-    place(nameText, inner, area.y() + (pinText.containsKey(place.pin()) ? 16 : area.h() / 2), place.left());
+    place(
+        nameText,
+        inner,
+        area.y() + (pinText.containsKey(place.pin()) ? 16 : area.h() / 2),
+        place.left());
     pin.getChildren().addAll(target, textTarget, nameText);
     String extra = pinText.get(place.pin());
     if (extra != null) {
@@ -222,7 +232,12 @@ public final class PackageDrawing extends Region {
   private void drawPinNumber(PackageGeometry.PinPlace place) {
     boolean on = place.pin() == highlighted;
     Box pad = place.pad();
-    Text number = text(Integer.toString(place.pin()), pad.cx(), pad.cy(), on ? Palette.bold(30) : Palette.bold(18));
+    Text number =
+        text(
+            Integer.toString(place.pin()),
+            pad.cx(),
+            pad.cy(),
+            on ? Palette.bold(30) : Palette.bold(18));
     number.setFill(Palette.INK);
     number.setMouseTransparent(true);
     content.getChildren().add(number);

@@ -7,15 +7,17 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * Places the body and pins of a dual-in-line package seen from the top, in pixels: pin 1 at the
- * top left beside the notch, pins counted counter-clockwise (down the left side, then up the right
+ * Places the body and pins of a dual-in-line package seen from the top, in pixels: pin 1 at the top
+ * left beside the notch, pins counted counter-clockwise (down the left side, then up the right
  * side), as every DIP data sheet draws it (common practice).
  */
 final class PackageGeometry {
   /** Largest side of a pin's touch target. */
   static final double PAD = 52;
+
   /** Smallest side of a touch target: 48 px, about 9 mm on a laptop (common practice). */
   static final double MIN_PAD = 48;
+
   static final double MIN_PITCH = 52;
   static final double MAX_PITCH = 62;
   static final double MIN_TEXT_COLUMN = 72;
@@ -25,6 +27,7 @@ final class PackageGeometry {
   static final double TOP = 40;
   static final double BOTTOM = 30;
   static final double MARGIN = 8;
+
   /** The size drawn when nothing constrains it. */
   static final double PREFERRED_WIDTH = 2 * (MARGIN + MAX_TEXT_COLUMN + PAD) + MAX_BODY;
 
@@ -46,7 +49,8 @@ final class PackageGeometry {
 
   private PackageGeometry(int pinCount, double roomWidth, double roomHeight) {
     if (pinCount < 2 || pinCount % 2 != 0) {
-      throw new IllegalArgumentException("pin count (" + pinCount + ") must be even and at least 2");
+      throw new IllegalArgumentException(
+          "pin count (" + pinCount + ") must be even and at least 2");
     }
     this.pinCount = pinCount;
     int perSide = pinCount / 2;
@@ -55,8 +59,13 @@ final class PackageGeometry {
     double pitch = clamp((roomHeight - TOP - BOTTOM) / perSide, MIN_PITCH, MAX_PITCH);
     double pad = Math.min(PAD, pitch - 4);
     double besideBody = 2 * (MARGIN + MIN_TEXT_COLUMN + 8 + pad - 6);
-    double bodyWidth = clamp(Math.min(roomWidth * 0.26, roomWidth - besideBody), MIN_BODY, MAX_BODY);
-    double column = clamp((roomWidth - bodyWidth - 2 * pad - 2 * MARGIN) / 2 - 8, MIN_TEXT_COLUMN, MAX_TEXT_COLUMN);
+    double bodyWidth =
+        clamp(Math.min(roomWidth * 0.26, roomWidth - besideBody), MIN_BODY, MAX_BODY);
+    double column =
+        clamp(
+            (roomWidth - bodyWidth - 2 * pad - 2 * MARGIN) / 2 - 8,
+            MIN_TEXT_COLUMN,
+            MAX_TEXT_COLUMN);
     double bodyX = MARGIN + column + 8 + pad - 6;
     body = new Box(bodyX, TOP, bodyWidth, perSide * pitch);
     List<PinPlace> places = new ArrayList<>();

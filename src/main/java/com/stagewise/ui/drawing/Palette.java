@@ -34,7 +34,8 @@ final class Palette {
   static void paperAndClip(javafx.scene.layout.Region region) {
     region.setBackground(
         new javafx.scene.layout.Background(
-            new javafx.scene.layout.BackgroundFill(PAPER, javafx.scene.layout.CornerRadii.EMPTY, javafx.geometry.Insets.EMPTY)));
+            new javafx.scene.layout.BackgroundFill(
+                PAPER, javafx.scene.layout.CornerRadii.EMPTY, javafx.geometry.Insets.EMPTY)));
     javafx.scene.shape.Rectangle clip = new javafx.scene.shape.Rectangle();
     clip.widthProperty().bind(region.widthProperty());
     clip.heightProperty().bind(region.heightProperty());

@@ -28,10 +28,10 @@ import javafx.scene.transform.Scale;
 
 /**
  * A schematic of a stage, drawn from its topology (see {@link SchematicLayout}): resistors as IEC
- * rectangles, capacitors as two plates, op-amp sections as triangles with their pin numbers, and
- * a label per net with up to three values in three styles: the first (e.g. expected volts) in
- * blue, a second (e.g. what a suspect predicts) in magenta beside it, and the measured value in
- * black on amber below. It scales to fit its size, keeping proportions.
+ * rectangles, capacitors as two plates, op-amp sections as triangles with their pin numbers, and a
+ * label per net with up to three values in three styles: the first (e.g. expected volts) in blue, a
+ * second (e.g. what a suspect predicts) in magenta beside it, and the measured value in black on
+ * amber below. It scales to fit its size, keeping proportions.
  */
 public final class SchematicDrawing extends Region {
   private static final double NAME_FONT = 12;
@@ -111,7 +111,8 @@ public final class SchematicDrawing extends Region {
 
   @Override
   protected void layoutChildren() {
-    double fit = Math.min((getWidth() - 2 * MARGIN) / extent.w(), (getHeight() - 2 * MARGIN) / extent.h());
+    double fit =
+        Math.min((getWidth() - 2 * MARGIN) / extent.w(), (getHeight() - 2 * MARGIN) / extent.h());
     // Never blow a small stage up past 1.7 times: it would look coarse, not clearer.
     double s = Math.max(0.2, Math.min(1.7, fit));
     scale.setX(s);
@@ -146,7 +147,8 @@ public final class SchematicDrawing extends Region {
     }
     for (AmpGlyph amp : sheet.amps()) {
       Box box = amp.box();
-      Polygon triangle = new Polygon(box.x(), box.y(), box.x(), box.bottom(), box.right(), box.cy());
+      Polygon triangle =
+          new Polygon(box.x(), box.y(), box.x(), box.bottom(), box.right(), box.cy());
       triangle.setFill(Palette.AMP_FILL);
       triangle.setStroke(Palette.INK);
       triangle.setStrokeWidth(2.2);
@@ -187,10 +189,14 @@ public final class SchematicDrawing extends Region {
       // Two plates across the lead, 4 px in from the body box on the lead's axis.
       if (vertical) {
         group.getChildren().add(line(body.x(), body.y() + 2, body.right(), body.y() + 2, 3.2));
-        group.getChildren().add(line(body.x(), body.bottom() - 2, body.right(), body.bottom() - 2, 3.2));
+        group
+            .getChildren()
+            .add(line(body.x(), body.bottom() - 2, body.right(), body.bottom() - 2, 3.2));
       } else {
         group.getChildren().add(line(body.x() + 2, body.y(), body.x() + 2, body.bottom(), 3.2));
-        group.getChildren().add(line(body.right() - 2, body.y(), body.right() - 2, body.bottom(), 3.2));
+        group
+            .getChildren()
+            .add(line(body.right() - 2, body.y(), body.right() - 2, body.bottom(), 3.2));
       }
     } else {
       Rectangle rect = new Rectangle(body.x(), body.y(), body.w(), body.h());
@@ -213,8 +219,11 @@ public final class SchematicDrawing extends Region {
         content.getChildren().add(line(x - 3, y + 19, x + 3, y + 19, 2.4));
       }
       case RAIL -> {
-        boolean across = symbol.direction() == Sheet.Direction.UP || symbol.direction() == Sheet.Direction.DOWN;
-        content.getChildren().add(across ? line(x - 9, y, x + 9, y, 3) : line(x, y - 9, x, y + 9, 3));
+        boolean across =
+            symbol.direction() == Sheet.Direction.UP || symbol.direction() == Sheet.Direction.DOWN;
+        content
+            .getChildren()
+            .add(across ? line(x - 9, y, x + 9, y, 3) : line(x, y - 9, x, y + 9, 3));
         content.getChildren().add(caption(symbol.caption()));
       }
       case INPUT, OUTPUT -> {
@@ -272,7 +281,12 @@ public final class SchematicDrawing extends Region {
         all = all.union(box);
       }
     }
-    extent = new Box(all.x(), all.y() - LEGEND_HEIGHT, Math.max(all.w(), legendWidth()), all.h() + LEGEND_HEIGHT);
+    extent =
+        new Box(
+            all.x(),
+            all.y() - LEGEND_HEIGHT,
+            Math.max(all.w(), legendWidth()),
+            all.h() + LEGEND_HEIGHT);
   }
 
   /** Returns the width of the legend line drawn by {@link #drawLegend}. */
@@ -341,15 +355,25 @@ public final class SchematicDrawing extends Region {
     double lineHeight = Math.ceil(VALUE_FONT * 1.3);
     double x = box.x() + PAD;
     double y = box.y() + PAD;
-    Text name = text(net, Palette.bold(NAME_FONT), Palette.SOFT_INK, x, y + (lineHeight - NAME_FONT * 1.3) / 2 + 1);
+    Text name =
+        text(
+            net,
+            Palette.bold(NAME_FONT),
+            Palette.SOFT_INK,
+            x,
+            y + (lineHeight - NAME_FONT * 1.3) / 2 + 1);
     label.getChildren().add(name);
     x += measure(net, NAME_FONT, true) + 6;
     if (first.containsKey(net)) {
-      label.getChildren().add(text(first.get(net), Palette.bold(VALUE_FONT), Palette.EXPECTED, x, y));
+      label
+          .getChildren()
+          .add(text(first.get(net), Palette.bold(VALUE_FONT), Palette.EXPECTED, x, y));
       x += measure(first.get(net), VALUE_FONT, true) + 8;
     }
     if (second.containsKey(net)) {
-      label.getChildren().add(text(second.get(net), Palette.bold(VALUE_FONT), Palette.SECOND, x, y));
+      label
+          .getChildren()
+          .add(text(second.get(net), Palette.bold(VALUE_FONT), Palette.SECOND, x, y));
     }
     if (measured.containsKey(net)) {
       double my = y + lineHeight + 4;
@@ -358,7 +382,16 @@ public final class SchematicDrawing extends Region {
       pill.setArcWidth(8);
       pill.setArcHeight(8);
       pill.setFill(Palette.MEASURED_FILL);
-      label.getChildren().addAll(pill, text(measured.get(net), Palette.bold(VALUE_FONT), Palette.MEASURED, box.x() + PAD + 4, my));
+      label
+          .getChildren()
+          .addAll(
+              pill,
+              text(
+                  measured.get(net),
+                  Palette.bold(VALUE_FONT),
+                  Palette.MEASURED,
+                  box.x() + PAD + 4,
+                  my));
     }
     content.getChildren().add(label);
   }
@@ -375,7 +408,9 @@ public final class SchematicDrawing extends Region {
       x = legendEntry("expected", Palette.EXPECTED, null, x, y);
     }
     if (!second.isEmpty()) {
-      x = legendEntry(secondCaption.isEmpty() ? "second" : secondCaption, Palette.SECOND, null, x, y);
+      x =
+          legendEntry(
+              secondCaption.isEmpty() ? "second" : secondCaption, Palette.SECOND, null, x, y);
     }
     if (!measured.isEmpty()) {
       legendEntry("measured", Palette.MEASURED, Palette.MEASURED_FILL, x, y);

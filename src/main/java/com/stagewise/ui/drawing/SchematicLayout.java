@@ -36,10 +36,10 @@ import java.util.Set;
  * row, whose net grows its own tree; a part from an inner net to the output goes up around the
  * feedback lanes. Parts from the output to ground or a rail are loads hanging below the output
  * wire. Sections are placed in columns by signal order (a section fed by another's output sits to
- * its right); two sections in one column joined by a part between their inverting inputs (the
- * gain resistor of a three-op-amp instrumentation amplifier) face each other, the upper one
- * flipped, with that part between them. Whatever fits no role is drawn in a row at the bottom
- * with a net-name flag at each end.
+ * its right); two sections in one column joined by a part between their inverting inputs (the gain
+ * resistor of a three-op-amp instrumentation amplifier) face each other, the upper one flipped,
+ * with that part between them. Whatever fits no role is drawn in a row at the bottom with a
+ * net-name flag at each end.
  */
 final class SchematicLayout {
 
@@ -49,7 +49,8 @@ final class SchematicLayout {
   }
 
   /** A measure for tests and as a fallback: a generous average glyph width. */
-  static final TextMeasure APPROXIMATE = (text, size, bold) -> text.length() * size * (bold ? 0.66 : 0.6);
+  static final TextMeasure APPROXIMATE =
+      (text, size, bold) -> text.length() * size * (bold ? 0.66 : 0.6);
 
   static final double NODE = 30;
   static final double OUT_X = AmpGlyph.WIDTH + 30;
@@ -172,7 +173,8 @@ final class SchematicLayout {
     }
     for (Map.Entry<Amplifier, Part> bridge : bridgeBelow.entrySet()) {
       Amplifier upper = bridge.getKey();
-      Amplifier lower = byColumn.get(rank.get(upper)).get(byColumn.get(rank.get(upper)).indexOf(upper) + 1);
+      Amplifier lower =
+          byColumn.get(rank.get(upper)).get(byColumn.get(rank.get(upper)).indexOf(upper) + 1);
       Block a = blocks.get(upper);
       Block b = blocks.get(lower);
       double x = origin.get(upper)[0] - NODE;
@@ -210,7 +212,8 @@ final class SchematicLayout {
   }
 
   /** Returns the longest feed path to each section, or null if the feeds form a loop. */
-  private static Map<Amplifier, Integer> relax(List<Amplifier> amps, Map<Amplifier, Set<Amplifier>> feeders) {
+  private static Map<Amplifier, Integer> relax(
+      List<Amplifier> amps, Map<Amplifier, Set<Amplifier>> feeders) {
     Map<Amplifier, Integer> rank = new HashMap<>();
     amps.forEach(a -> rank.put(a, 0));
     for (int round = 0; round <= amps.size(); round++) {
@@ -260,7 +263,11 @@ final class SchematicLayout {
     return feeders;
   }
 
-  private void routes(Out out, Map<Amplifier, Block> blocks, Map<Amplifier, double[]> origin, Map<Amplifier, Integer> rank) {
+  private void routes(
+      Out out,
+      Map<Amplifier, Block> blocks,
+      Map<Amplifier, double[]> origin,
+      Map<Amplifier, Integer> rank) {
     Map<Integer, Integer> channelsUsed = new HashMap<>();
     Set<Amplifier> routedFrom = new HashSet<>();
     for (Amplifier target : stage.amplifiers()) {
@@ -294,13 +301,17 @@ final class SchematicLayout {
     for (Amplifier amp : stage.amplifiers()) {
       if (!routedFrom.contains(amp)) {
         double[] o = origin.get(amp);
-        out.symbol(SymbolKind.OUTPUT, amp.out(), o[0] + blocks.get(amp).outEndX, o[1], Direction.RIGHT);
+        out.symbol(
+            SymbolKind.OUTPUT, amp.out(), o[0] + blocks.get(amp).outEndX, o[1], Direction.RIGHT);
       }
     }
   }
 
   private double columnLeftEdge(
-      Map<Amplifier, Block> blocks, Map<Amplifier, double[]> origin, Map<Amplifier, Integer> rank, int column) {
+      Map<Amplifier, Block> blocks,
+      Map<Amplifier, double[]> origin,
+      Map<Amplifier, Integer> rank,
+      int column) {
     double left = Double.POSITIVE_INFINITY;
     for (Amplifier amp : stage.amplifiers()) {
       if (rank.get(amp) == column) {
@@ -347,7 +358,9 @@ final class SchematicLayout {
   /** A point still to be joined up once the sections have their places. */
   record Pending(String net, double x, double y) {}
 
-  /** The top of a part that runs from an inner input-side net toward the output, going {@code -d}. */
+  /**
+   * The top of a part that runs from an inner input-side net toward the output, going {@code -d}.
+   */
   record Uplink(double x, double y, int d) {}
 
   private Block section(Amplifier amp, boolean flipped) {
@@ -366,7 +379,8 @@ final class SchematicLayout {
     ampCaptions(b, amp, mY, pY);
 
     // Feedback lanes on the inverting side, positive feedback on the other.
-    List<Part> feedback = claim(p -> p.touches(minus) && p.touches(outNet) && !minus.equals(outNet));
+    List<Part> feedback =
+        claim(p -> p.touches(minus) && p.touches(outNet) && !minus.equals(outNet));
     b.minusLegEnd = mY;
     double prevLeft = mY;
     double prevRight = 0;
@@ -462,14 +476,33 @@ final class SchematicLayout {
     double bottomY = Math.max(mY, pY);
     String topPin = Integer.toString(amp.pin(mY < pY ? Terminal.IN_MINUS : Terminal.IN_PLUS));
     String bottomPin = Integer.toString(amp.pin(mY < pY ? Terminal.IN_PLUS : Terminal.IN_MINUS));
-    b.caption(topPin, -10 - width(topPin, PIN_FONT, false) / 2, topY - 3 - line(PIN_FONT), PIN_FONT, false, CaptionKind.PIN_NUMBER);
-    b.caption(bottomPin, -10 - width(bottomPin, PIN_FONT, false) / 2, bottomY + 3, PIN_FONT, false, CaptionKind.PIN_NUMBER);
+    b.caption(
+        topPin,
+        -10 - width(topPin, PIN_FONT, false) / 2,
+        topY - 3 - line(PIN_FONT),
+        PIN_FONT,
+        false,
+        CaptionKind.PIN_NUMBER);
+    b.caption(
+        bottomPin,
+        -10 - width(bottomPin, PIN_FONT, false) / 2,
+        bottomY + 3,
+        PIN_FONT,
+        false,
+        CaptionKind.PIN_NUMBER);
     String outPin = Integer.toString(amp.pin(Terminal.OUT));
-    b.caption(outPin, AmpGlyph.WIDTH + 6, -3 - line(PIN_FONT), PIN_FONT, false, CaptionKind.PIN_NUMBER);
+    b.caption(
+        outPin, AmpGlyph.WIDTH + 6, -3 - line(PIN_FONT), PIN_FONT, false, CaptionKind.PIN_NUMBER);
     b.caption("\u2212", 6, mY - line(17) / 2, 17, true, CaptionKind.PIN_SIGN);
     b.caption("+", 6, pY - line(17) / 2, 17, true, CaptionKind.PIN_SIGN);
     String ref = amp.ref();
-    b.caption(ref, 38 - width(ref, PART_FONT, true) / 2 + 4, -line(PART_FONT) / 2, PART_FONT, true, CaptionKind.AMP_REF);
+    b.caption(
+        ref,
+        38 - width(ref, PART_FONT, true) / 2 + 4,
+        -line(PART_FONT) / 2,
+        PART_FONT,
+        true,
+        CaptionKind.AMP_REF);
     // Supply pins: short stubs from the triangle's top and bottom edges, each ending in its rail.
     double edge = AmpGlyph.HALF_HEIGHT * (1 - SUPPLY_X / AmpGlyph.WIDTH);
     // Long enough for the pin number to sit beside the stub, clear of the rail's bar.
@@ -480,7 +513,8 @@ final class SchematicLayout {
     b.supplySymbol(amp.vMinus(), SUPPLY_X, edge + stub, Direction.DOWN);
     String vp = Integer.toString(amp.pin(Terminal.V_PLUS));
     String vm = Integer.toString(amp.pin(Terminal.V_MINUS));
-    b.caption(vp, SUPPLY_X + 11, -edge - 3 - line(PIN_FONT), PIN_FONT, false, CaptionKind.PIN_NUMBER);
+    b.caption(
+        vp, SUPPLY_X + 11, -edge - 3 - line(PIN_FONT), PIN_FONT, false, CaptionKind.PIN_NUMBER);
     b.caption(vm, SUPPLY_X + 11, edge + 3, PIN_FONT, false, CaptionKind.PIN_NUMBER);
   }
 
@@ -516,7 +550,8 @@ final class SchematicLayout {
    * Lays out the tree of parts hanging off {@code net}, whose node is at (x, y), growing left and
    * in direction {@code d} (+1 down, −1 up); returns the lowest (d = +1) or highest extent reached.
    */
-  private double node(Block b, String net, double x, double y, int d, boolean columnsFromNode, Amplifier amp) {
+  private double node(
+      Block b, String net, double x, double y, int d, boolean columnsFromNode, Amplifier amp) {
     List<Part> here = claim(p -> p.touches(net));
     List<Part> hangers = new ArrayList<>();
     List<Part> uplinks = new ArrayList<>();
@@ -561,7 +596,8 @@ final class SchematicLayout {
     for (int k = 0; k < rows.size(); k++) {
       Part part = rows.get(k);
       if (k > 0) {
-        double nextY = d > 0 ? Math.max(rowY + ROW, extent + 24) : Math.min(rowY - ROW, extent - 24);
+        double nextY =
+            d > 0 ? Math.max(rowY + ROW, extent + 24) : Math.min(rowY - ROW, extent - 24);
         b.wire(net, rowX, rowY, rowX, nextY);
         rowY = nextY;
       }
@@ -574,7 +610,8 @@ final class SchematicLayout {
       } else if (stage.input(far).isPresent()) {
         b.inputs.add(new Pending(far, endX, rowY));
       } else if (isSupplyOrGround(far)) {
-        b.supplySymbol(far, endX, rowY, far.equals(stage.ground()) ? Direction.DOWN : Direction.LEFT);
+        b.supplySymbol(
+            far, endX, rowY, far.equals(stage.ground()) ? Direction.DOWN : Direction.LEFT);
       } else if (stage.isDriven(far) || pinNets.contains(far) || b.visited.contains(far)) {
         b.symbol(SymbolKind.FLAG, far, endX, rowY, Direction.LEFT);
       } else {
@@ -632,7 +669,8 @@ final class SchematicLayout {
     }
 
     void caption(String text, double x, double y, double size, boolean bold, CaptionKind kind) {
-      captions.add(new Caption(text, new Box(x, y, width(text, size, bold), line(size)), size, bold, kind));
+      captions.add(
+          new Caption(text, new Box(x, y, width(text, size, bold), line(size)), size, bold, kind));
     }
 
     /** A part across (x1, y)–(x2, y); its captions go above (d = −1) or below (d = +1). */
@@ -666,7 +704,8 @@ final class SchematicLayout {
     }
 
     void supplySymbol(String net, double x, double y, Direction direction) {
-      symbol(net.equals(stage.ground()) ? SymbolKind.GROUND : SymbolKind.RAIL, net, x, y, direction);
+      symbol(
+          net.equals(stage.ground()) ? SymbolKind.GROUND : SymbolKind.RAIL, net, x, y, direction);
     }
 
     void symbol(SymbolKind kind, String net, double x, double y, Direction direction) {
@@ -710,13 +749,20 @@ final class SchematicLayout {
         }
       }
       Caption caption = new Caption(net, text, NET_FONT, true, CaptionKind.NET_NAME);
-      symbols.add(new Symbol(kind, net, x, y, direction, mark.union(text.grown(kind == SymbolKind.FLAG ? 4 : 0)), caption));
+      symbols.add(
+          new Symbol(
+              kind,
+              net,
+              x,
+              y,
+              direction,
+              mark.union(text.grown(kind == SymbolKind.FLAG ? 4 : 0)),
+              caption));
     }
 
     Box bounds() {
-      return new Sheet(parts, amps, wires, List.of(), symbols, captions).obstacles().stream()
-          .reduce(Box::union)
-          .orElse(null);
+      return new Sheet(parts, amps, wires, List.of(), symbols, captions)
+          .obstacles().stream().reduce(Box::union).orElse(null);
     }
   }
 
@@ -733,7 +779,6 @@ final class SchematicLayout {
     double maxX;
     double minY;
     double maxY;
-
 
     /** Joins the input symbols on one line at the block's left edge and measures the block. */
     void finish() {
@@ -757,7 +802,14 @@ final class SchematicLayout {
     /** Copies the block's elements into the sheet, moved by (dx, dy). */
     void emit(Out out, double dx, double dy) {
       for (PartGlyph p : parts) {
-        out.parts.add(new PartGlyph(p.part(), p.x1() + dx, p.y1() + dy, p.x2() + dx, p.y2() + dy, p.body().moved(dx, dy)));
+        out.parts.add(
+            new PartGlyph(
+                p.part(),
+                p.x1() + dx,
+                p.y1() + dy,
+                p.x2() + dx,
+                p.y2() + dy,
+                p.body().moved(dx, dy)));
       }
       for (AmpGlyph a : amps) {
         out.amps.add(new AmpGlyph(a.amp(), a.x() + dx, a.y() + dy, a.flipped()));
@@ -769,11 +821,19 @@ final class SchematicLayout {
         Caption c = s.caption();
         out.symbols.add(
             new Symbol(
-                s.kind(), s.net(), s.x() + dx, s.y() + dy, s.direction(), s.box().moved(dx, dy),
-                c == null ? null : new Caption(c.text(), c.box().moved(dx, dy), c.size(), c.bold(), c.kind())));
+                s.kind(),
+                s.net(),
+                s.x() + dx,
+                s.y() + dy,
+                s.direction(),
+                s.box().moved(dx, dy),
+                c == null
+                    ? null
+                    : new Caption(c.text(), c.box().moved(dx, dy), c.size(), c.bold(), c.kind())));
       }
       for (Caption c : captions) {
-        out.captions.add(new Caption(c.text(), c.box().moved(dx, dy), c.size(), c.bold(), c.kind()));
+        out.captions.add(
+            new Caption(c.text(), c.box().moved(dx, dy), c.size(), c.bold(), c.kind()));
       }
     }
   }
@@ -782,7 +842,12 @@ final class SchematicLayout {
   private final class Out extends Canvas {
     Sheet finish() {
       return new Sheet(
-          List.copyOf(parts), List.copyOf(amps), List.copyOf(wires), dots(), List.copyOf(symbols), List.copyOf(captions));
+          List.copyOf(parts),
+          List.copyOf(amps),
+          List.copyOf(wires),
+          dots(),
+          List.copyOf(symbols),
+          List.copyOf(captions));
     }
 
     /** Returns a dot wherever three or more connections meet on a net. */

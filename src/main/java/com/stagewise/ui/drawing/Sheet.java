@@ -7,8 +7,8 @@ import java.util.List;
 
 /**
  * A laid-out schematic in drawing coordinates (pixels at scale 1, y down): every part, op-amp
- * section, wire, junction dot, symbol and caption with its place. Pure data, drawn by
- * {@link SchematicDrawing} and checked by tests without the toolkit.
+ * section, wire, junction dot, symbol and caption with its place. Pure data, drawn by {@link
+ * SchematicDrawing} and checked by tests without the toolkit.
  *
  * @param parts the resistors and capacitors
  * @param amps the op-amp sections
@@ -165,7 +165,14 @@ record Sheet(
    * @param box the area it covers, caption included
    * @param caption the net name shown with it, if any (null for ground)
    */
-  record Symbol(SymbolKind kind, String net, double x, double y, Direction direction, Box box, Caption caption) {}
+  record Symbol(
+      SymbolKind kind,
+      String net,
+      double x,
+      double y,
+      Direction direction,
+      Box box,
+      Caption caption) {}
 
   /** Returns the box holding everything drawn. */
   Box bounds() {

@@ -20,7 +20,8 @@ final class VoltText {
 
   /** Returns a tick label: no unit, no superfluous decimals, e.g. "−5", "2.5", "0". */
   static String tick(double volts) {
-    String text = String.format(Locale.ROOT, "%.3f", volts).replaceAll("0+$", "").replaceAll("\\.$", "");
+    String text =
+        String.format(Locale.ROOT, "%.3f", volts).replaceAll("0+$", "").replaceAll("\\.$", "");
     if (text.equals("-0")) {
       text = "0";
     }

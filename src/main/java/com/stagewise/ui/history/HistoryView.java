@@ -44,7 +44,11 @@ public final class HistoryView {
     HBox.setHgrow(right, Priority.ALWAYS);
     root.getChildren().addAll(left, right);
     model.shownProperty().addListener((o, was, now) -> showCase(now));
-    model.timeline().addListener((javafx.collections.ListChangeListener<String>) c -> showCase(model.shownProperty().get()));
+    model
+        .timeline()
+        .addListener(
+            (javafx.collections.ListChangeListener<String>)
+                c -> showCase(model.shownProperty().get()));
     showCase(null);
   }
 
@@ -82,40 +86,63 @@ public final class HistoryView {
       b.setSelected(model.fieldProperty().get() == f);
       fieldRow.getChildren().add(b);
     }
-    fields.selectedToggleProperty().addListener((o, was, now) -> {
-      if (now == null) {
-        was.setSelected(true);
-      } else {
-        model.fieldProperty().set((HistoryViewModel.Field) now.getUserData());
-      }
-    });
+    fields
+        .selectedToggleProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                was.setSelected(true);
+              } else {
+                model.fieldProperty().set((HistoryViewModel.Field) now.getUserData());
+              }
+            });
     Keypad keypad = new Keypad(model.queryProperty(), "history");
     keypad.follow(field);
     list.setId("history-hits");
     VBox.setVgrow(list, Priority.ALWAYS);
-    list.setCellFactory(v -> new ListCell<>() {
-      {
-        setPrefWidth(0);
-        setWrapText(true);
-      }
+    list.setCellFactory(
+        v ->
+            new ListCell<>() {
+              {
+                setPrefWidth(0);
+                setWrapText(true);
+              }
 
-      @Override
-      protected void updateItem(SearchHit hit, boolean empty) {
-        super.updateItem(hit, empty);
-        if (empty || hit == null) {
-          setText(null);
-          return;
-        }
-        String end = hit.outcome() == null ? "open" : Words.outcome(hit.outcome());
-        String found = hit.confirmedFaults().isEmpty() ? "" : ": " + String.join(", ", hit.confirmedFaults().stream().map(Words::fault).toList());
-        setText(Words.date(hit.openedAt()) + "  " + hit.serial() + "  —  " + hit.symptom() + "\n" + hit.boardModel() + "  ·  " + end + found);
-      }
-    });
-    list.getSelectionModel().selectedItemProperty().addListener((o, was, hit) -> {
-      if (hit != null) {
-        model.show(hit.caseId());
-      }
-    });
+              @Override
+              protected void updateItem(SearchHit hit, boolean empty) {
+                super.updateItem(hit, empty);
+                if (empty || hit == null) {
+                  setText(null);
+                  return;
+                }
+                String end = hit.outcome() == null ? "open" : Words.outcome(hit.outcome());
+                String found =
+                    hit.confirmedFaults().isEmpty()
+                        ? ""
+                        : ": "
+                            + String.join(
+                                ", ", hit.confirmedFaults().stream().map(Words::fault).toList());
+                setText(
+                    Words.date(hit.openedAt())
+                        + "  "
+                        + hit.serial()
+                        + "  —  "
+                        + hit.symptom()
+                        + "\n"
+                        + hit.boardModel()
+                        + "  ·  "
+                        + end
+                        + found);
+              }
+            });
+    list.getSelectionModel()
+        .selectedItemProperty()
+        .addListener(
+            (o, was, hit) -> {
+              if (hit != null) {
+                model.show(hit.caseId());
+              }
+            });
     Label note = new Label();
     note.setId("history-note");
     note.getStyleClass().add("hint");
@@ -138,7 +165,8 @@ public final class HistoryView {
     Label symptom = new Label("Reported: " + view.symptom());
     symptom.setWrapText(true);
     symptom.setStyle("-fx-font-weight: bold;");
-    Label status = new Label(view.status() + (view.faults().isEmpty() ? "" : " — found: " + view.faults()));
+    Label status =
+        new Label(view.status() + (view.faults().isEmpty() ? "" : " — found: " + view.faults()));
     status.setId("history-case-status");
     status.setWrapText(true);
     caseBox.getChildren().addAll(title, symptom, status);

@@ -25,8 +25,8 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 /**
- * The history screen: search the cases (by serial, board model, fault, part or words), see a
- * unit's timeline, and a case as it was: readings, the suspect list at the time, actions, notes.
+ * The history screen: search the cases (by serial, board model, fault, part or words), see a unit's
+ * timeline, and a case as it was: readings, the suspect list at the time, actions, notes.
  */
 public final class HistoryViewModel {
   private final Bench bench;
@@ -76,8 +76,15 @@ public final class HistoryViewModel {
    * @param notes the notes with their times
    */
   public record CaseView(
-      String caseId, String title, String symptom, String status, String faults,
-      List<String> readings, List<String> suspects, List<String> actions, List<String> notes) {}
+      String caseId,
+      String title,
+      String symptom,
+      String status,
+      String faults,
+      List<String> readings,
+      List<String> suspects,
+      List<String> actions,
+      List<String> notes) {}
 
   public StringProperty queryProperty() {
     return query;
@@ -108,39 +115,71 @@ public final class HistoryViewModel {
     String words = query.get() == null ? "" : query.get().strip();
     SearchQuery q = SearchQuery.all();
     if (!words.isEmpty()) {
-      q = switch (field.get()) {
-        case ANY -> q.withText(words);
-        case SERIAL -> q.withSerial(words);
-        case BOARD -> q.withBoardModel(words);
-        case FAULT -> q.withFaultId(words);
-        case PART -> q.withPart(words.toUpperCase(Locale.ROOT));
-      };
+      q =
+          switch (field.get()) {
+            case ANY -> q.withText(words);
+            case SERIAL -> q.withSerial(words);
+            case BOARD -> q.withBoardModel(words);
+            case FAULT -> q.withFaultId(words);
+            case PART -> q.withPart(words.toUpperCase(Locale.ROOT));
+          };
     }
     SearchQuery finalQuery = q;
-    bench.tasks().run("Searching the history", () -> bench.store().search(finalQuery),
-        found -> {
-          hits.setAll(found);
-          hitsNote.set(found.isEmpty()
-              ? (words.isEmpty() ? "No cases yet." : "No case matches. Try fewer words or another field.")
-              : found.size() == 1 ? "1 case." : found.size() + " cases" + (found.size() >= SearchQuery.DEFAULT_LIMIT ? " (the first " + found.size() + ")." : "."));
-        },
-        e -> bench.problems().failed("Could not search the history", e,
-            field.get() == Field.FAULT ? "Type a fault as the suspects show it in short form, e.g. R2:open." : Words.CHECK_DATABASE));
+    bench
+        .tasks()
+        .run(
+            "Searching the history",
+            () -> bench.store().search(finalQuery),
+            found -> {
+              hits.setAll(found);
+              hitsNote.set(
+                  found.isEmpty()
+                      ? (words.isEmpty()
+                          ? "No cases yet."
+                          : "No case matches. Try fewer words or another field.")
+                      : found.size() == 1
+                          ? "1 case."
+                          : found.size()
+                              + " cases"
+                              + (found.size() >= SearchQuery.DEFAULT_LIMIT
+                                  ? " (the first " + found.size() + ")."
+                                  : "."));
+            },
+            e ->
+                bench
+                    .problems()
+                    .failed(
+                        "Could not search the history",
+                        e,
+                        field.get() == Field.FAULT
+                            ? "Type a fault as the suspects show it in short form, e.g. R2:open."
+                            : Words.CHECK_DATABASE));
   }
 
   /** Shows one case as it was, with its unit's timeline. */
   public void show(String caseId) {
-    bench.tasks().run("Reading the case",
-        () -> {
-          CaseFile file = bench.store().caseFile(caseId).orElseThrow(() -> new IllegalStateException("the case " + caseId + " is not in the history"));
-          UnitHistory unit = bench.store().unitHistory(file.repairCase().unitId()).orElseThrow();
-          return new Loaded(file, unit);
-        },
-        loaded -> {
-          shown.set(view(loaded.file(), loaded.unit()));
-          timeline.setAll(timeline(loaded.unit()));
-        },
-        e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
+    bench
+        .tasks()
+        .run(
+            "Reading the case",
+            () -> {
+              CaseFile file =
+                  bench
+                      .store()
+                      .caseFile(caseId)
+                      .orElseThrow(
+                          () ->
+                              new IllegalStateException(
+                                  "the case " + caseId + " is not in the history"));
+              UnitHistory unit =
+                  bench.store().unitHistory(file.repairCase().unitId()).orElseThrow();
+              return new Loaded(file, unit);
+            },
+            loaded -> {
+              shown.set(view(loaded.file(), loaded.unit()));
+              timeline.setAll(timeline(loaded.unit()));
+            },
+            e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
   }
 
   private record Loaded(CaseFile file, UnitHistory unit) {}
@@ -149,8 +188,15 @@ public final class HistoryViewModel {
     List<String> lines = new ArrayList<>();
     for (CaseFile f : unit.cases()) {
       RepairCase rc = f.repairCase();
-      String end = rc.status() == CaseStatus.OPEN ? "still open" : Words.outcome(rc.outcome()) + " " + Words.date(rc.closedAt());
-      String found = rc.confirmedFaults().isEmpty() ? "" : " — found " + String.join(", ", rc.confirmedFaults().stream().map(Words::fault).toList());
+      String end =
+          rc.status() == CaseStatus.OPEN
+              ? "still open"
+              : Words.outcome(rc.outcome()) + " " + Words.date(rc.closedAt());
+      String found =
+          rc.confirmedFaults().isEmpty()
+              ? ""
+              : " — found "
+                  + String.join(", ", rc.confirmedFaults().stream().map(Words::fault).toList());
       lines.add(Words.date(rc.openedAt()) + "  " + rc.symptom() + "  (" + end + ")" + found);
     }
     return lines;
@@ -158,21 +204,39 @@ public final class HistoryViewModel {
 
   static CaseView view(CaseFile file, UnitHistory unit) {
     RepairCase rc = file.repairCase();
-    String title = "Unit " + unit.unit().serial() + " (" + unit.boardModel().name() + "), opened " + Words.dateTime(rc.openedAt());
-    String status = rc.status() == CaseStatus.OPEN ? "Still open" : "Closed " + Words.dateTime(rc.closedAt()) + ": " + Words.outcome(rc.outcome());
+    String title =
+        "Unit "
+            + unit.unit().serial()
+            + " ("
+            + unit.boardModel().name()
+            + "), opened "
+            + Words.dateTime(rc.openedAt());
+    String status =
+        rc.status() == CaseStatus.OPEN
+            ? "Still open"
+            : "Closed " + Words.dateTime(rc.closedAt()) + ": " + Words.outcome(rc.outcome());
     String faults = String.join(", ", rc.confirmedFaults().stream().map(Words::fault).toList());
     List<String> readings = new ArrayList<>();
     for (StoredReading r : file.readings()) {
-      readings.add(Words.pin(r.at()) + ":  " + Words.voltsShort(r.value())
-          + (r.kind() == ReadingKind.AC ? String.format(Locale.ROOT, " AC at %.0f Hz", r.hz()) : "")
-          + "   (" + Words.dateTime(r.takenAt()) + ")");
+      readings.add(
+          Words.pin(r.at())
+              + ":  "
+              + Words.voltsShort(r.value())
+              + (r.kind() == ReadingKind.AC
+                  ? String.format(Locale.ROOT, " AC at %.0f Hz", r.hz())
+                  : "")
+              + "   ("
+              + Words.dateTime(r.takenAt())
+              + ")");
     }
     List<String> suspects = new ArrayList<>();
     if (!file.suspectLists().isEmpty()) {
       SuspectListRecord last = file.suspectLists().get(file.suspectLists().size() - 1);
-      suspects.add("As ranked " + Words.dateTime(last.computedAt()) + " (verdict: " + last.verdict() + "):");
+      suspects.add(
+          "As ranked " + Words.dateTime(last.computedAt()) + " (verdict: " + last.verdict() + "):");
       for (StoredSuspect s : last.suspects().stream().limit(6).toList()) {
-        suspects.add(s.rank() + ". " + Words.fault(s.fault()) + "  " + Words.percent(s.probability()));
+        suspects.add(
+            s.rank() + ". " + Words.fault(s.fault()) + "  " + Words.percent(s.probability()));
       }
     }
     List<String> actions = new ArrayList<>();
@@ -183,6 +247,7 @@ public final class HistoryViewModel {
     for (CaseNote n : file.notes()) {
       notes.add(Words.dateTime(n.at()) + ":  " + n.text());
     }
-    return new CaseView(rc.id(), title, rc.symptom(), status, faults, readings, suspects, actions, notes);
+    return new CaseView(
+        rc.id(), title, rc.symptom(), status, faults, readings, suspects, actions, notes);
   }
 }

@@ -23,7 +23,8 @@ import java.util.Optional;
  * @param title what to probe, e.g. "U1 pin 8 — positive supply pin (VCC)"
  * @param why why this point now (may be empty)
  */
-public record ProbePoint(String at, Reading.Kind kind, double hz, String packageRef, int pin, String title, String why) {
+public record ProbePoint(
+    String at, Reading.Kind kind, double hz, String packageRef, int pin, String title, String why) {
 
   /** Returns whether this is a package pin. */
   public boolean isPin() {
@@ -38,7 +39,9 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
   /** Returns the short call shown large, e.g. "Probe U1 pin 8" or "Probe net OUT (AC, 1 kHz)". */
   public String call() {
     String where = isPin() ? packageRef + " pin " + pin : "net " + at;
-    return "Probe " + where + (kind == Reading.Kind.AC ? String.format(Locale.ROOT, " (AC at %s Hz)", trim(hz)) : "");
+    return "Probe "
+        + where
+        + (kind == Reading.Kind.AC ? String.format(Locale.ROOT, " (AC at %s Hz)", trim(hz)) : "");
   }
 
   private static String trim(double hz) {
@@ -52,7 +55,8 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
       int dot = at.lastIndexOf('.');
       String pkg = at.substring(0, dot);
       int pin = Integer.parseInt(at.substring(dot + 1));
-      return Optional.of(new ProbePoint(at, kind, hz, pkg, pin, pinTitle(stage, pkg, pin, pins.get(at)), ""));
+      return Optional.of(
+          new ProbePoint(at, kind, hz, pkg, pin, pinTitle(stage, pkg, pin, pins.get(at)), ""));
     }
     if (stage.nets().contains(at)) {
       return Optional.of(new ProbePoint(at, kind, hz, "", 0, netTitle(stage, at, pins), ""));
@@ -64,11 +68,12 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
   private static String netTitle(Stage stage, String net, Map<String, String> pins) {
     List<String> places = new ArrayList<>();
     stage.parts().stream().filter(p -> p.touches(net)).forEach(p -> places.add(p.ref()));
-    pins.forEach((pin, n) -> {
-      if (n.equals(net)) {
-        places.add(Words.pin(pin));
-      }
-    });
+    pins.forEach(
+        (pin, n) -> {
+          if (n.equals(net)) {
+            places.add(Words.pin(pin));
+          }
+        });
     if (stage.rail(net).isPresent()) {
       places.add(0, "the supply rail");
     } else if (stage.input(net).isPresent()) {
@@ -77,8 +82,12 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
     if (places.isEmpty()) {
       return "Net " + net;
     }
-    String list = places.size() == 1 ? places.get(0)
-        : String.join(", ", places.subList(0, places.size() - 1)) + " and " + places.get(places.size() - 1);
+    String list =
+        places.size() == 1
+            ? places.get(0)
+            : String.join(", ", places.subList(0, places.size() - 1))
+                + " and "
+                + places.get(places.size() - 1);
     return "Net " + net + " — at " + list;
   }
 
@@ -86,7 +95,12 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
     PackageType type = stage.packageType(pkg).orElseThrow();
     String role =
         type.role(pin)
-            .map(r -> r.terminal().words() + (r.section().isEmpty() || type.sections().size() == 1 ? "" : " of section " + r.section()))
+            .map(
+                r ->
+                    r.terminal().words()
+                        + (r.section().isEmpty() || type.sections().size() == 1
+                            ? ""
+                            : " of section " + r.section()))
             .orElse("pin");
     return pkg + " pin " + pin + " — " + role + " (" + net + ")";
   }
@@ -102,8 +116,12 @@ public record ProbePoint(String at, Reading.Kind kind, double hz, String package
       for (Terminal t : new Terminal[] {Terminal.V_PLUS, Terminal.V_MINUS}) {
         String at = first.pinName(t);
         of(stage, at, Reading.Kind.DC, 0)
-            .map(p -> p.because("Rails first: a missing or low supply explains everything downstream, so check "
-                + Words.pin(at) + " before the signal pins."))
+            .map(
+                p ->
+                    p.because(
+                        "Rails first: a missing or low supply explains everything downstream, so check "
+                            + Words.pin(at)
+                            + " before the signal pins."))
             .ifPresent(rails::add);
       }
     }

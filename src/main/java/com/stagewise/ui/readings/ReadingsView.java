@@ -27,7 +27,9 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 
-/** The readings screen: the pin to probe on the package, the value pad, and what the readings show. */
+/**
+ * The readings screen: the pin to probe on the package, the value pad, and what the readings show.
+ */
 public final class ReadingsView {
   private final ReadingsViewModel model;
   private final Bench bench;
@@ -77,25 +79,38 @@ public final class ReadingsView {
     call.setId("probe-call");
     call.getStyleClass().add("probe-call");
     call.setWrapText(true);
-    call.textProperty().bind(Bindings.createStringBinding(
-        () -> model.probeProperty().get() == null
-            ? (bench.readings().isEmpty() ? "Choose a test point" : "No further probe needed")
-            : model.probeProperty().get().call(),
-        model.probeProperty()));
+    call.textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    model.probeProperty().get() == null
+                        ? (bench.readings().isEmpty()
+                            ? "Choose a test point"
+                            : "No further probe needed")
+                        : model.probeProperty().get().call(),
+                model.probeProperty()));
     Label title = new Label();
     title.setId("probe-title");
     title.setWrapText(true);
     title.setStyle("-fx-font-weight: bold;");
     title.setMinHeight(Region.USE_PREF_SIZE);
-    title.textProperty().bind(Bindings.createStringBinding(
-        () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().title(), model.probeProperty()));
+    title
+        .textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    model.probeProperty().get() == null ? "" : model.probeProperty().get().title(),
+                model.probeProperty()));
     Label why = new Label();
     why.setId("probe-why");
     why.getStyleClass().add("probe-why");
     why.setMinHeight(Region.USE_PREF_SIZE);
     why.setWrapText(true);
-    why.textProperty().bind(Bindings.createStringBinding(
-        () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().why(), model.probeProperty()));
+    why.textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () -> model.probeProperty().get() == null ? "" : model.probeProperty().get().why(),
+                model.probeProperty()));
     drawing.setId("package-drawing");
     drawing.setOnPinChosen(pin -> model.choose(shownPackage + "." + pin));
     drawing.setMaxWidth(Double.MAX_VALUE);
@@ -109,21 +124,24 @@ public final class ReadingsView {
     other.setId("other-point");
     other.setPromptText("Or probe another point …");
     other.setMaxWidth(Double.MAX_VALUE);
-    other.setCellFactory(v -> new ListCell<>() {
-      @Override
-      protected void updateItem(ProbePoint p, boolean empty) {
-        super.updateItem(p, empty);
-        setText(empty || p == null ? null : p.title());
-      }
-    });
+    other.setCellFactory(
+        v ->
+            new ListCell<>() {
+              @Override
+              protected void updateItem(ProbePoint p, boolean empty) {
+                super.updateItem(p, empty);
+                setText(empty || p == null ? null : p.title());
+              }
+            });
     other.setButtonCell(other.getCellFactory().call(null));
-    other.setOnAction(e -> {
-      ProbePoint p = other.getValue();
-      if (p != null) {
-        model.choose(p.at());
-        other.getSelectionModel().clearSelection();
-      }
-    });
+    other.setOnAction(
+        e -> {
+          ProbePoint p = other.getValue();
+          if (p != null) {
+            model.choose(p.at());
+            other.getSelectionModel().clearSelection();
+          }
+        });
     Button suggested = new Button("Back to the suggested probe");
     suggested.setId("probe-suggested");
     suggested.setOnAction(e -> model.followSuggestion());
@@ -136,8 +154,12 @@ public final class ReadingsView {
     if (stage == null) {
       return;
     }
-    String pkg = p != null && p.isPin() ? p.packageRef() : stage.packages().isEmpty() ? "" : stage.packages().get(0);
-    if (!pkg.isEmpty() && (!pkg.equals(shownPackage) || drawing.highlighted() == 0 && p != null && p.isPin())) {
+    String pkg =
+        p != null && p.isPin()
+            ? p.packageRef()
+            : stage.packages().isEmpty() ? "" : stage.packages().get(0);
+    if (!pkg.isEmpty()
+        && (!pkg.equals(shownPackage) || drawing.highlighted() == 0 && p != null && p.isPin())) {
       drawing.show(stage.packageType(pkg).orElseThrow(), pkg, null);
       shownPackage = pkg;
       showPinTexts();
@@ -187,8 +209,10 @@ public final class ReadingsView {
     list.setId("readings-list");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new ReadingCell());
-    Label empty = new Label("No readings yet. Put the probe where the left side says, type what the meter shows"
-        + " on the pad and tap Add reading. The suspects and the next probe follow each reading.");
+    Label empty =
+        new Label(
+            "No readings yet. Put the probe where the left side says, type what the meter shows"
+                + " on the pad and tap Add reading. The suspects and the next probe follow each reading.");
     empty.setWrapText(true);
     empty.getStyleClass().add("hint");
     empty.setPadding(new javafx.geometry.Insets(12));
@@ -251,8 +275,14 @@ public final class ReadingsView {
         return;
       }
       Reading r = row.reading();
-      String value = r.kind() == Reading.Kind.AC ? Words.voltsShort(r.value()) + " AC" : Words.voltsShort(r.value());
-      String state = Double.isNaN(row.healthyLow()) ? "" : row.healthy() ? "  — in the healthy range" : "  — outside the healthy range";
+      String value =
+          r.kind() == Reading.Kind.AC
+              ? Words.voltsShort(r.value()) + " AC"
+              : Words.voltsShort(r.value());
+      String state =
+          Double.isNaN(row.healthyLow())
+              ? ""
+              : row.healthy() ? "  — in the healthy range" : "  — outside the healthy range";
       title.setText(row.title() + ":  " + value + state);
       List<BandChart.Marker> markers = new ArrayList<>();
       row.predictions().forEach((label, volts) -> markers.add(new BandChart.Marker(label, volts)));

@@ -35,9 +35,9 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 /**
- * The readings screen: which pin to probe next (rails first, then where the diagnosis learns
- * most), the value pad for what the meter shows, and after each reading the suspect list and the
- * next probe, computed in the background.
+ * The readings screen: which pin to probe next (rails first, then where the diagnosis learns most),
+ * the value pad for what the meter shows, and after each reading the suspect list and the next
+ * probe, computed in the background.
  */
 public final class ReadingsViewModel {
   /** Suspects shown on this screen and marked on the band charts. */
@@ -74,7 +74,12 @@ public final class ReadingsViewModel {
    * @param healthyHigh the high end of the healthy range (NaN when unknown)
    * @param predictions where the top suspects put this reading: label to volts
    */
-  public record ReadingRow(Reading reading, String title, double healthyLow, double healthyHigh, Map<String, Double> predictions) {
+  public record ReadingRow(
+      Reading reading,
+      String title,
+      double healthyLow,
+      double healthyHigh,
+      Map<String, Double> predictions) {
     /** Returns whether the reading lies in the healthy range (false when the range is unknown). */
     public boolean healthy() {
       return reading.value() >= healthyLow && reading.value() <= healthyHigh;
@@ -129,45 +134,62 @@ public final class ReadingsViewModel {
     }
     testPoints.setAll(ProbePoint.all(stage));
     probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
-    String boardModel = bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
+    String boardModel =
+        bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
     HistoryStore store = bench.store();
     List<Reading> taken = List.copyOf(bench.readings());
-    bench.tasks().run(
-        "Working out the expected voltages and the fault list",
-        () -> {
-          ExpectedVolts volts = ExpectedVolts.of(stage);
-          Map<String, Integer> counts = boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel);
-          Diagnoser d = Diagnoser.of(stage, counts);
-          Diagnosis diagnosis = taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
-          return new Prepared(stage, volts, d, diagnosis);
-        },
-        prepared -> {
-          if (prepared.stage() != bench.stageProperty().get()) {
-            return;
-          }
-          expected.set(prepared.volts());
-          diagnoser = prepared.diagnoser();
-          diagnoserStage = prepared.stage();
-          if (prepared.diagnosis() != null) {
-            bench.diagnosisProperty().set(prepared.diagnosis());
-          }
-          refresh();
-        },
-        e -> bench.problems().failed("Could not prepare the diagnosis", e, "Check the stage's parts and rails on the Stage screen."));
+    bench
+        .tasks()
+        .run(
+            "Working out the expected voltages and the fault list",
+            () -> {
+              ExpectedVolts volts = ExpectedVolts.of(stage);
+              Map<String, Integer> counts =
+                  boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel);
+              Diagnoser d = Diagnoser.of(stage, counts);
+              Diagnosis diagnosis =
+                  taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
+              return new Prepared(stage, volts, d, diagnosis);
+            },
+            prepared -> {
+              if (prepared.stage() != bench.stageProperty().get()) {
+                return;
+              }
+              expected.set(prepared.volts());
+              diagnoser = prepared.diagnoser();
+              diagnoserStage = prepared.stage();
+              if (prepared.diagnosis() != null) {
+                bench.diagnosisProperty().set(prepared.diagnosis());
+              }
+              refresh();
+            },
+            e ->
+                bench
+                    .problems()
+                    .failed(
+                        "Could not prepare the diagnosis",
+                        e,
+                        "Check the stage's parts and rails on the Stage screen."));
   }
 
-  private record Prepared(Stage stage, ExpectedVolts volts, Diagnoser diagnoser, Diagnosis diagnosis) {}
+  private record Prepared(
+      Stage stage, ExpectedVolts volts, Diagnoser diagnoser, Diagnosis diagnosis) {}
 
-  /** Makes the technician's choice the point to probe (a pin tapped on the drawing, or from the list). */
+  /**
+   * Makes the technician's choice the point to probe (a pin tapped on the drawing, or from the
+   * list).
+   */
   public void choose(String at) {
     Stage stage = bench.stageProperty().get();
     if (stage == null) {
       return;
     }
-    ProbePoint.of(stage, at, Reading.Kind.DC, 0).ifPresent(p -> {
-      probeChosenByHand = true;
-      probe.set(p.because("Chosen by you."));
-    });
+    ProbePoint.of(stage, at, Reading.Kind.DC, 0)
+        .ifPresent(
+            p -> {
+              probeChosenByHand = true;
+              probe.set(p.because("Chosen by you."));
+            });
   }
 
   /** Returns to the suggested probe after a hand-picked one. */
@@ -188,18 +210,33 @@ public final class ReadingsViewModel {
     Double value = pad.valueProperty().get();
     Stage stage = bench.stageProperty().get();
     if (at == null || stage == null) {
-      bench.problems().show("Nothing to probe", "There is no test point chosen.", "Tap a pin on the package, or choose a test point from the list.");
+      bench
+          .problems()
+          .show(
+              "Nothing to probe",
+              "There is no test point chosen.",
+              "Tap a pin on the package, or choose a test point from the list.");
       return;
     }
     if (value == null) {
-      bench.problems().show("Type the reading first", "The pad shows no value.", "Type what the meter shows, e.g. 14.96 or -0.62, then tap Add reading.");
+      bench
+          .problems()
+          .show(
+              "Type the reading first",
+              "The pad shows no value.",
+              "Type what the meter shows, e.g. 14.96 or -0.62, then tap Add reading.");
       return;
     }
     Reading reading;
     try {
-      reading = at.kind() == Reading.Kind.AC ? Reading.ac(at.at(), Math.abs(value), at.hz()) : Reading.dc(at.at(), value);
+      reading =
+          at.kind() == Reading.Kind.AC
+              ? Reading.ac(at.at(), Math.abs(value), at.hz())
+              : Reading.dc(at.at(), value);
     } catch (InvalidInputException e) {
-      bench.problems().show("Not a reading", e.getMessage(), "Check the value on the meter and type it again.");
+      bench
+          .problems()
+          .show("Not a reading", e.getMessage(), "Check the value on the meter and type it again.");
       return;
     }
     bench.readings().add(reading);
@@ -212,40 +249,65 @@ public final class ReadingsViewModel {
     List<Reading> taken = List.copyOf(bench.readings());
     String caseId = bench.openCaseProperty().get().id();
     Diagnoser ready = diagnoserStage == stage ? diagnoser : null;
-    String boardModel = bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
+    String boardModel =
+        bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
     HistoryStore store = bench.store();
     thinking.set(true);
-    bench.tasks().run(
-        "Ranking the suspects",
-        () -> {
-          Diagnoser d = ready != null ? ready : Diagnoser.of(stage, boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel));
-          Diagnosis diagnosis = d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
-          Instant now = Instant.now();
-          StoredReading stored = new StoredReading(HistoryStore.newId(), caseId, added.at(),
-              added.kind() == Reading.Kind.AC ? ReadingKind.AC : ReadingKind.DC, added.value(),
-              added.kind() == Reading.Kind.AC ? added.hz() : null, null, meterText(), now);
-          store.addReadings(caseId, List.of(stored), suspectList(caseId, now, diagnosis));
-          return diagnosis;
-        },
-        diagnosis -> {
-          thinking.set(false);
-          if (bench.stageProperty().get() == stage) {
-            bench.diagnosisProperty().set(diagnosis);
-            refresh();
-          }
-        },
-        e -> {
-          thinking.set(false);
-          bench.readings().remove(added);
-          refresh();
-          bench.problems().failed("Could not take this reading", e,
-              "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
-        });
+    bench
+        .tasks()
+        .run(
+            "Ranking the suspects",
+            () -> {
+              Diagnoser d =
+                  ready != null
+                      ? ready
+                      : Diagnoser.of(
+                          stage,
+                          boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel));
+              Diagnosis diagnosis = d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
+              Instant now = Instant.now();
+              StoredReading stored =
+                  new StoredReading(
+                      HistoryStore.newId(),
+                      caseId,
+                      added.at(),
+                      added.kind() == Reading.Kind.AC ? ReadingKind.AC : ReadingKind.DC,
+                      added.value(),
+                      added.kind() == Reading.Kind.AC ? added.hz() : null,
+                      null,
+                      meterText(),
+                      now);
+              store.addReadings(caseId, List.of(stored), suspectList(caseId, now, diagnosis));
+              return diagnosis;
+            },
+            diagnosis -> {
+              thinking.set(false);
+              if (bench.stageProperty().get() == stage) {
+                bench.diagnosisProperty().set(diagnosis);
+                refresh();
+              }
+            },
+            e -> {
+              thinking.set(false);
+              bench.readings().remove(added);
+              refresh();
+              bench
+                  .problems()
+                  .failed(
+                      "Could not take this reading",
+                      e,
+                      "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
+            });
   }
 
   private static String meterText() {
     MeterSpec m = MeterSpec.DEFAULT;
-    return String.format(Locale.ROOT, "±(%s %% + %d counts), %d counts", trimNumber(m.percent()), m.counts(), m.displayCounts());
+    return String.format(
+        Locale.ROOT,
+        "±(%s %% + %d counts), %d counts",
+        trimNumber(m.percent()),
+        m.counts(),
+        m.displayCounts());
   }
 
   private static String trimNumber(double v) {
@@ -264,12 +326,23 @@ public final class ReadingsViewModel {
       if (probes.length() > 0) {
         probes.append('\n');
       }
-      probes.append(p.at()).append(' ').append(p.kind().word())
-          .append(String.format(Locale.ROOT, " %.2f bits", p.bits())).append(": ").append(p.why());
+      probes
+          .append(p.at())
+          .append(' ')
+          .append(p.kind().word())
+          .append(String.format(Locale.ROOT, " %.2f bits", p.bits()))
+          .append(": ")
+          .append(p.why());
     }
     String version = ReadingsViewModel.class.getPackage().getImplementationVersion();
-    return new SuspectListRecord(HistoryStore.newId(), caseId, at, version == null ? "development build" : version,
-        diagnosis.verdict().word(), suspects, probes.toString());
+    return new SuspectListRecord(
+        HistoryStore.newId(),
+        caseId,
+        at,
+        version == null ? "development build" : version,
+        diagnosis.verdict().word(),
+        suspects,
+        probes.toString());
   }
 
   /** Rebuilds the rows, the top suspects and the next probe from the bench. */
@@ -277,14 +350,18 @@ public final class ReadingsViewModel {
     Stage stage = bench.stageProperty().get();
     Diagnosis diagnosis = bench.diagnosisProperty().get();
     ExpectedVolts volts = expected.get();
-    List<Suspect> top = diagnosis == null ? List.of() : diagnosis.suspects().stream().limit(TOP).toList();
+    List<Suspect> top =
+        diagnosis == null ? List.of() : diagnosis.suspects().stream().limit(TOP).toList();
     topSuspects.setAll(top);
     verdict.set(diagnosis == null || bench.readings().isEmpty() ? "" : verdictLine(diagnosis));
     List<ReadingRow> list = new ArrayList<>();
     for (Reading r : bench.readings()) {
       double low = Double.NaN;
       double high = Double.NaN;
-      if (volts != null && volts.solved() && r.kind() == Reading.Kind.DC && volts.nominal().containsKey(r.at())) {
+      if (volts != null
+          && volts.solved()
+          && r.kind() == Reading.Kind.DC
+          && volts.nominal().containsKey(r.at())) {
         low = volts.low().get(r.at());
         high = volts.high().get(r.at());
       }
@@ -295,7 +372,12 @@ public final class ReadingsViewModel {
           predictions.put(Words.fault(s.fault()), v);
         }
       }
-      String title = stage == null ? r.at() : ProbePoint.of(stage, r.at(), r.kind(), r.hz()).map(ProbePoint::title).orElse(r.at());
+      String title =
+          stage == null
+              ? r.at()
+              : ProbePoint.of(stage, r.at(), r.kind(), r.hz())
+                  .map(ProbePoint::title)
+                  .orElse(r.at());
       list.add(new ReadingRow(r, title, low, high, predictions));
     }
     // Newest first: the reading just taken is where the eye goes.
@@ -309,9 +391,14 @@ public final class ReadingsViewModel {
   static String verdictLine(Diagnosis diagnosis) {
     return switch (diagnosis.verdict()) {
       case HEALTHY -> "The readings fit a healthy stage.";
-      case FAULT -> diagnosis.suspects().isEmpty()
-          ? "The readings show a fault."
-          : "Most likely: " + Words.fault(diagnosis.suspects().get(0).fault()) + " (" + Words.percent(diagnosis.suspects().get(0).probability()) + ")";
+      case FAULT ->
+          diagnosis.suspects().isEmpty()
+              ? "The readings show a fault."
+              : "Most likely: "
+                  + Words.fault(diagnosis.suspects().get(0).fault())
+                  + " ("
+                  + Words.percent(diagnosis.suspects().get(0).probability())
+                  + ")";
       case INCONCLUSIVE -> "Not clear yet: take the next probe.";
     };
   }

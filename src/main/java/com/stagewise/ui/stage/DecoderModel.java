@@ -16,18 +16,19 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
-/**
- * Reads a resistor's value off its colour bands or its SMD marking, for the value pad.
- */
+/** Reads a resistor's value off its colour bands or its SMD marking, for the value pad. */
 public final class DecoderModel {
   /** The band colours offered, in the order of their digits, then the multiplier-only ones. */
   public static final List<String> COLOURS =
-      List.of("black", "brown", "red", "orange", "yellow", "green", "blue", "violet", "grey", "white", "gold", "silver");
+      List.of(
+          "black", "brown", "red", "orange", "yellow", "green", "blue", "violet", "grey", "white",
+          "gold", "silver");
 
   private final ObservableList<String> bands = FXCollections.observableArrayList();
   private final StringProperty smd = new SimpleStringProperty("");
   private final ReadOnlyObjectWrapper<Double> ohms = new ReadOnlyObjectWrapper<>();
-  private final ReadOnlyStringWrapper result = new ReadOnlyStringWrapper("Tap the bands from the left, or type the SMD code.");
+  private final ReadOnlyStringWrapper result =
+      new ReadOnlyStringWrapper("Tap the bands from the left, or type the SMD code.");
 
   /** Creates an empty decoder. */
   public DecoderModel() {
@@ -87,7 +88,12 @@ public final class DecoderModel {
     try {
       BandedValue value = ColourCode.decode(List.copyOf(bands));
       ohms.set(value.ohms());
-      result.set(String.join(" – ", bands) + " = " + SiValue.format(value.ohms(), "Ω") + " ±" + Tolerance.format(value.tolerance()));
+      result.set(
+          String.join(" – ", bands)
+              + " = "
+              + SiValue.format(value.ohms(), "Ω")
+              + " ±"
+              + Tolerance.format(value.tolerance()));
     } catch (InvalidInputException e) {
       ohms.set(null);
       result.set("Not a colour code: " + e.getMessage());
@@ -103,7 +109,8 @@ public final class DecoderModel {
     try {
       double value = SmdCode.decode(code);
       ohms.set(value);
-      result.set("SMD " + code.toUpperCase(java.util.Locale.ROOT) + " = " + SiValue.format(value, "Ω"));
+      result.set(
+          "SMD " + code.toUpperCase(java.util.Locale.ROOT) + " = " + SiValue.format(value, "Ω"));
     } catch (InvalidInputException e) {
       ohms.set(null);
       result.set("Not an SMD code yet: " + e.getMessage());

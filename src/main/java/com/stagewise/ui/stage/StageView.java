@@ -69,31 +69,39 @@ public final class StageView {
     fromLibrary.setSelected(true);
     fromLibrary.setStyle("-fx-padding: 8 10 8 10;");
     fromTemplate.setStyle("-fx-padding: 8 10 8 10;");
-    source.selectedToggleProperty().addListener((o, was, now) -> {
-      if (now == null) {
-        was.setSelected(true);
-      }
-    });
+    source
+        .selectedToggleProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                was.setSelected(true);
+              }
+            });
     ListView<StageViewModel.LibraryEntry> list = new ListView<>(model.library());
     list.setId("stage-library");
     VBox.setVgrow(list, Priority.ALWAYS);
-    list.setCellFactory(v -> new ListCell<>() {
-      {
-        setPrefWidth(0);
-      }
+    list.setCellFactory(
+        v ->
+            new ListCell<>() {
+              {
+                setPrefWidth(0);
+              }
 
-      @Override
-      protected void updateItem(StageViewModel.LibraryEntry entry, boolean empty) {
-        super.updateItem(entry, empty);
-        setText(empty || entry == null ? null : entry.title());
-        setWrapText(true);
-      }
-    });
-    list.getSelectionModel().selectedItemProperty().addListener((o, was, entry) -> {
-      if (entry != null) {
-        model.choose(entry.stage());
-      }
-    });
+              @Override
+              protected void updateItem(StageViewModel.LibraryEntry entry, boolean empty) {
+                super.updateItem(entry, empty);
+                setText(empty || entry == null ? null : entry.title());
+                setWrapText(true);
+              }
+            });
+    list.getSelectionModel()
+        .selectedItemProperty()
+        .addListener(
+            (o, was, entry) -> {
+              if (entry != null) {
+                model.choose(entry.stage());
+              }
+            });
     Label note = new Label();
     note.getStyleClass().add("hint");
     note.setWrapText(true);
@@ -111,43 +119,54 @@ public final class StageView {
   }
 
   private VBox templatePanel() {
-    ListView<com.stagewise.circuit.template.StageTemplate> templates = new ListView<>(model.templates());
+    ListView<com.stagewise.circuit.template.StageTemplate> templates =
+        new ListView<>(model.templates());
     templates.setId("stage-templates");
     templates.setPrefHeight(220);
-    templates.setCellFactory(v -> new ListCell<>() {
-      {
-        setPrefWidth(0);
-      }
+    templates.setCellFactory(
+        v ->
+            new ListCell<>() {
+              {
+                setPrefWidth(0);
+              }
 
-      @Override
-      protected void updateItem(com.stagewise.circuit.template.StageTemplate t, boolean empty) {
-        super.updateItem(t, empty);
-        setText(empty || t == null ? null : t.title());
-        setWrapText(true);
-      }
-    });
-    templates.getSelectionModel().selectedItemProperty().addListener((o, was, t) -> model.templateProperty().set(t));
+              @Override
+              protected void updateItem(
+                  com.stagewise.circuit.template.StageTemplate t, boolean empty) {
+                super.updateItem(t, empty);
+                setText(empty || t == null ? null : t.title());
+                setWrapText(true);
+              }
+            });
+    templates
+        .getSelectionModel()
+        .selectedItemProperty()
+        .addListener((o, was, t) -> model.templateProperty().set(t));
     VBox form = new VBox(4);
     form.setId("template-form");
-    model.parameters().addListener((javafx.collections.ListChangeListener<StageViewModel.ParameterEntry>) c -> {
-      form.getChildren().clear();
-      var t = model.templateProperty().get();
-      if (t != null) {
-        Label about = new Label(t.description());
-        about.getStyleClass().add("hint");
-        about.setWrapText(true);
-        form.getChildren().add(about);
-      }
-      for (StageViewModel.ParameterEntry entry : model.parameters()) {
-        Label label = new Label(entry.label());
-        label.setWrapText(true);
-        label.setStyle("-fx-font-size: 15px;");
-        TextField field = new TextField();
-        field.setId("template-" + entry.parameter().name());
-        field.textProperty().bindBidirectional(entry.value());
-        form.getChildren().addAll(label, field);
-      }
-    });
+    model
+        .parameters()
+        .addListener(
+            (javafx.collections.ListChangeListener<StageViewModel.ParameterEntry>)
+                c -> {
+                  form.getChildren().clear();
+                  var t = model.templateProperty().get();
+                  if (t != null) {
+                    Label about = new Label(t.description());
+                    about.getStyleClass().add("hint");
+                    about.setWrapText(true);
+                    form.getChildren().add(about);
+                  }
+                  for (StageViewModel.ParameterEntry entry : model.parameters()) {
+                    Label label = new Label(entry.label());
+                    label.setWrapText(true);
+                    label.setStyle("-fx-font-size: 15px;");
+                    TextField field = new TextField();
+                    field.setId("template-" + entry.parameter().name());
+                    field.textProperty().bindBidirectional(entry.value());
+                    form.getChildren().addAll(label, field);
+                  }
+                });
     ScrollPane scroll = new ScrollPane(form);
     scroll.setFitToWidth(true);
     VBox.setVgrow(scroll, Priority.ALWAYS);
@@ -166,9 +185,15 @@ public final class StageView {
     title.setId("stage-title");
     title.getStyleClass().add("screen-title");
     title.setWrapText(true);
-    title.textProperty().bind(Bindings.createStringBinding(
-        () -> model.stageProperty().get() == null ? "Choose the stage you are working on" : model.stageProperty().get().title(),
-        model.stageProperty()));
+    title
+        .textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    model.stageProperty().get() == null
+                        ? "Choose the stage you are working on"
+                        : model.stageProperty().get().title(),
+                model.stageProperty()));
     VBox drawing = new VBox(4);
     drawing.getStyleClass().add("panel");
     drawing.setId("stage-drawing");
@@ -178,33 +203,45 @@ public final class StageView {
     drawingTitle.getStyleClass().add("hint");
     drawing.getChildren().addAll(drawingTitle, schematic, expectedBox);
     VBox.setVgrow(drawing, Priority.ALWAYS);
-    model.stageProperty().addListener((o, was, now) -> {
-      if (now != null) {
-        schematic.show(now);
-      }
-    });
+    model
+        .stageProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now != null) {
+                schematic.show(now);
+              }
+            });
     Label partsTitle = new Label("Parts — tap one to check or change its value");
     partsTitle.getStyleClass().add("section-title");
     ListView<StageViewModel.PartRow> parts = new ListView<>(model.parts());
     parts.setId("stage-parts");
     parts.setPrefHeight(200);
-    parts.setCellFactory(v -> new ListCell<>() {
-      @Override
-      protected void updateItem(StageViewModel.PartRow row, boolean empty) {
-        super.updateItem(row, empty);
-        setText(empty || row == null ? null : row.line());
-      }
-    });
-    parts.getSelectionModel().selectedItemProperty().addListener((o, was, row) -> {
-      if (row != null && row != model.selectedPartProperty().get()) {
-        model.selectedPartProperty().set(row);
-      }
-    });
-    model.selectedPartProperty().addListener((o, was, row) -> {
-      if (row != null && parts.getSelectionModel().getSelectedItem() != row) {
-        parts.getSelectionModel().select(row);
-      }
-    });
+    parts.setCellFactory(
+        v ->
+            new ListCell<>() {
+              @Override
+              protected void updateItem(StageViewModel.PartRow row, boolean empty) {
+                super.updateItem(row, empty);
+                setText(empty || row == null ? null : row.line());
+              }
+            });
+    parts
+        .getSelectionModel()
+        .selectedItemProperty()
+        .addListener(
+            (o, was, row) -> {
+              if (row != null && row != model.selectedPartProperty().get()) {
+                model.selectedPartProperty().set(row);
+              }
+            });
+    model
+        .selectedPartProperty()
+        .addListener(
+            (o, was, row) -> {
+              if (row != null && parts.getSelectionModel().getSelectedItem() != row) {
+                parts.getSelectionModel().select(row);
+              }
+            });
     Button use = new Button("Use this stage — go to readings");
     use.setId("use-stage");
     use.getStyleClass().add("primary");
@@ -237,17 +274,33 @@ public final class StageView {
       double low = expected.low().getOrDefault(net.getKey(), net.getValue());
       double high = expected.high().getOrDefault(net.getKey(), net.getValue());
       if (high - low >= 0.0105 && !model.stageProperty().get().isDriven(net.getKey())) {
-        ranges.append(ranges.length() == 0 ? "Healthy range: " : ",  ")
-            .append(net.getKey()).append(' ').append(Words.voltsShort(low).replace(" V", "")).append(" … ").append(Words.voltsShort(high));
+        ranges
+            .append(ranges.length() == 0 ? "Healthy range: " : ",  ")
+            .append(net.getKey())
+            .append(' ')
+            .append(Words.voltsShort(low).replace(" V", ""))
+            .append(" … ")
+            .append(Words.voltsShort(high));
       }
     }
     schematic.setNetLabels(labels);
     Label nets = new Label(ranges.toString());
     nets.setWrapText(true);
     StringBuilder states = new StringBuilder();
-    expected.states().forEach((ref, state) -> states.append(ref).append(": ")
-        .append(state.equals("linear") ? "working normally (linear)" : "output at its " + (state.equals("high") ? "upper" : "lower") + " limit")
-        .append("   "));
+    expected
+        .states()
+        .forEach(
+            (ref, state) ->
+                states
+                    .append(ref)
+                    .append(": ")
+                    .append(
+                        state.equals("linear")
+                            ? "working normally (linear)"
+                            : "output at its "
+                                + (state.equals("high") ? "upper" : "lower")
+                                + " limit")
+                    .append("   "));
     Label stateLine = new Label(states.toString().strip());
     stateLine.getStyleClass().add("hint");
     expectedBox.getChildren().addAll(nets, stateLine);
@@ -258,9 +311,15 @@ public final class StageView {
     box.getStyleClass().add("panel");
     Label title = new Label();
     title.getStyleClass().add("section-title");
-    title.textProperty().bind(Bindings.createStringBinding(
-        () -> model.selectedPartProperty().get() == null ? "No part chosen" : "Part " + model.selectedPartProperty().get().part().ref(),
-        model.selectedPartProperty()));
+    title
+        .textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    model.selectedPartProperty().get() == null
+                        ? "No part chosen"
+                        : "Part " + model.selectedPartProperty().get().part().ref(),
+                model.selectedPartProperty()));
     TextField designator = new TextField();
     designator.setId("part-designator");
     designator.setPrefColumnCount(6);
@@ -286,11 +345,13 @@ public final class StageView {
     StackPane modes = new StackPane(pad, decoder);
     modes.setAlignment(Pos.TOP_LEFT);
     // Keep one tab selected: a second tap on the selected tab would otherwise clear both.
-    mode.selectedToggleProperty().addListener((o, was, now) -> {
-      if (now == null) {
-        was.setSelected(true);
-      }
-    });
+    mode.selectedToggleProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                was.setSelected(true);
+              }
+            });
     VBox editing = new VBox(10, renameRow, new HBox(8, padTab, bandsTab), modes);
     editing.disableProperty().bind(model.selectedPartProperty().isNull());
     box.getChildren().addAll(title, editing);
@@ -323,11 +384,12 @@ public final class StageView {
     use.setId("decoder-use");
     use.getStyleClass().add("primary");
     use.disableProperty().bind(decoder.ohmsProperty().isNull());
-    use.setOnAction(e -> {
-      model.pad().setValue(decoder.ohmsProperty().get());
-      decoder.clear();
-      backToPad.run();
-    });
+    use.setOnAction(
+        e -> {
+          model.pad().setValue(decoder.ohmsProperty().get());
+          decoder.clear();
+          backToPad.run();
+        });
     Button clear = new Button("Clear");
     clear.setOnAction(e -> decoder.clear());
     box.getChildren().addAll(colours, new HBox(8, undo, clear), smd, result, use);
@@ -335,20 +397,25 @@ public final class StageView {
   }
 
   private static String bandStyle(String colour) {
-    String[] fillInk = switch (colour) {
-      case "black" -> new String[] {"#111111", "#ffffff"};
-      case "brown" -> new String[] {"#6b3a1e", "#ffffff"};
-      case "red" -> new String[] {"#c62828", "#ffffff"};
-      case "orange" -> new String[] {"#ef7d00", "#111111"};
-      case "yellow" -> new String[] {"#f5d000", "#111111"};
-      case "green" -> new String[] {"#2e7d32", "#ffffff"};
-      case "blue" -> new String[] {"#1e4fc2", "#ffffff"};
-      case "violet" -> new String[] {"#7b3fa8", "#ffffff"};
-      case "grey" -> new String[] {"#8c8c8c", "#111111"};
-      case "white" -> new String[] {"#ffffff", "#111111"};
-      case "gold" -> new String[] {"#c9a227", "#111111"};
-      default -> new String[] {"#c0c0c0", "#111111"};
-    };
-    return "-fx-background-color: #444444, " + fillInk[0] + "; -fx-text-fill: " + fillInk[1] + "; -fx-font-size: 14px; -fx-min-width: 72px;";
+    String[] fillInk =
+        switch (colour) {
+          case "black" -> new String[] {"#111111", "#ffffff"};
+          case "brown" -> new String[] {"#6b3a1e", "#ffffff"};
+          case "red" -> new String[] {"#c62828", "#ffffff"};
+          case "orange" -> new String[] {"#ef7d00", "#111111"};
+          case "yellow" -> new String[] {"#f5d000", "#111111"};
+          case "green" -> new String[] {"#2e7d32", "#ffffff"};
+          case "blue" -> new String[] {"#1e4fc2", "#ffffff"};
+          case "violet" -> new String[] {"#7b3fa8", "#ffffff"};
+          case "grey" -> new String[] {"#8c8c8c", "#111111"};
+          case "white" -> new String[] {"#ffffff", "#111111"};
+          case "gold" -> new String[] {"#c9a227", "#111111"};
+          default -> new String[] {"#c0c0c0", "#111111"};
+        };
+    return "-fx-background-color: #444444, "
+        + fillInk[0]
+        + "; -fx-text-fill: "
+        + fillInk[1]
+        + "; -fx-font-size: 14px; -fx-min-width: 72px;";
   }
 }

@@ -20,8 +20,8 @@ import com.stagewise.ui.ValuePadModel;
 import com.stagewise.ui.Words;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
-import java.util.Map;
 import java.util.List;
+import java.util.Map;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.SimpleStringProperty;
@@ -30,8 +30,8 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 /**
- * The stage screen: choose the stage from the board model's library, check and edit its part
- * values and designators, see what a healthy stage reads at each net, and take it to the readings.
+ * The stage screen: choose the stage from the board model's library, check and edit its part values
+ * and designators, see what a healthy stage reads at each net, and take it to the readings.
  */
 public final class StageViewModel {
   private final Bench bench;
@@ -44,7 +44,8 @@ public final class StageViewModel {
   private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
   private final DecoderModel decoder = new DecoderModel();
-  private final ObservableList<StageTemplate> templates = FXCollections.observableArrayList(Templates.all());
+  private final ObservableList<StageTemplate> templates =
+      FXCollections.observableArrayList(Templates.all());
   private final ObjectProperty<StageTemplate> template = new SimpleObjectProperty<>();
   private final ObservableList<ParameterEntry> parameters = FXCollections.observableArrayList();
   private boolean builtFromTemplate;
@@ -52,34 +53,46 @@ public final class StageViewModel {
   /** Creates the stage screen's model on a bench. */
   public StageViewModel(Bench bench) {
     this.bench = bench;
-    selectedPart.addListener((o, was, row) -> {
-      if (row != null) {
-        designator.set(row.part().ref());
-        pad.quantityProperty().set(row.part().kind() == PartKind.CAPACITOR ? ValuePadModel.Quantity.FARADS : ValuePadModel.Quantity.OHMS);
-        pad.setValue(row.part().value());
-      }
-    });
-    bench.stageProperty().addListener((o, was, now) -> {
-      if (now != null && now != stage.get()) {
-        setStage(now);
-      }
-    });
+    selectedPart.addListener(
+        (o, was, row) -> {
+          if (row != null) {
+            designator.set(row.part().ref());
+            pad.quantityProperty()
+                .set(
+                    row.part().kind() == PartKind.CAPACITOR
+                        ? ValuePadModel.Quantity.FARADS
+                        : ValuePadModel.Quantity.OHMS);
+            pad.setValue(row.part().value());
+          }
+        });
+    bench
+        .stageProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now != null && now != stage.get()) {
+                setStage(now);
+              }
+            });
     // A new case starts with no stage chosen, not with the last case's.
-    bench.openCaseProperty().addListener((o, was, now) -> {
-      if (bench.stageProperty().get() == null) {
-        setStage(null);
-      }
-    });
+    bench
+        .openCaseProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (bench.stageProperty().get() == null) {
+                setStage(null);
+              }
+            });
     bench.boardModelProperty().addListener((o, was, now) -> library.clear());
-    template.addListener((o, was, now) -> {
-      List<ParameterEntry> entries = new ArrayList<>();
-      if (now != null) {
-        for (Parameter p : now.parameters()) {
-          entries.add(new ParameterEntry(p, new SimpleStringProperty(p.defaultValue())));
-        }
-      }
-      parameters.setAll(entries);
-    });
+    template.addListener(
+        (o, was, now) -> {
+          List<ParameterEntry> entries = new ArrayList<>();
+          if (now != null) {
+            for (Parameter p : now.parameters()) {
+              entries.add(new ParameterEntry(p, new SimpleStringProperty(p.defaultValue())));
+            }
+          }
+          parameters.setAll(entries);
+        });
   }
 
   /**
@@ -91,7 +104,10 @@ public final class StageViewModel {
   public record ParameterEntry(Parameter parameter, StringProperty value) {
     /** Returns the label shown beside the field, e.g. "Rf — feedback resistor (Ω)". */
     public String label() {
-      return parameter.name() + " — " + parameter.meaning() + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
+      return parameter.name()
+          + " — "
+          + parameter.meaning()
+          + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
     }
   }
 
@@ -108,13 +124,18 @@ public final class StageViewModel {
   }
 
   /**
-   * Builds a stage from the chosen template and the values typed, for the board model on the
-   * bench; it joins the board model's library when it is used.
+   * Builds a stage from the chosen template and the values typed, for the board model on the bench;
+   * it joins the board model's library when it is used.
    */
   public void buildFromTemplate() {
     StageTemplate chosen = template.get();
     if (chosen == null) {
-      bench.problems().show("Choose a template first", "No template is chosen.", "Tap the kind of stage in the list, e.g. an inverting amplifier.");
+      bench
+          .problems()
+          .show(
+              "Choose a template first",
+              "No template is chosen.",
+              "Tap the kind of stage in the list, e.g. an inverting amplifier.");
       return;
     }
     Map<String, String> values = new LinkedHashMap<>();
@@ -128,11 +149,27 @@ public final class StageViewModel {
     try {
       built = chosen.build(values);
     } catch (InvalidInputException e) {
-      bench.problems().show("The template cannot take these values", e.getMessage(), "Check the value named, e.g. 4k7 for 4.7 kΩ, then build again.");
+      bench
+          .problems()
+          .show(
+              "The template cannot take these values",
+              e.getMessage(),
+              "Check the value named, e.g. 4k7 for 4.7 kΩ, then build again.");
       return;
     }
-    String board = bench.boardModelProperty().get() == null ? built.board() : bench.boardModelProperty().get().name();
-    setStage(new Stage(built.title(), board, built.ground(), built.rails(), built.inputs(), built.parts(), built.amplifiers()));
+    String board =
+        bench.boardModelProperty().get() == null
+            ? built.board()
+            : bench.boardModelProperty().get().name();
+    setStage(
+        new Stage(
+            built.title(),
+            board,
+            built.ground(),
+            built.rails(),
+            built.inputs(),
+            built.parts(),
+            built.amplifiers()));
     builtFromTemplate = true;
   }
 
@@ -220,9 +257,17 @@ public final class StageViewModel {
               libraryNote.set(
                   entries.isEmpty()
                       ? "No stages for " + model.name() + " yet. Build one from a template."
-                      : entries.size() + " stage" + (entries.size() == 1 ? "" : "s") + " of " + model.name() + ".");
+                      : entries.size()
+                          + " stage"
+                          + (entries.size() == 1 ? "" : "s")
+                          + " of "
+                          + model.name()
+                          + ".");
             },
-            e -> bench.problems().failed("Could not read the stage library", e, Words.CHECK_DATABASE));
+            e ->
+                bench
+                    .problems()
+                    .failed("Could not read the stage library", e, Words.CHECK_DATABASE));
   }
 
   /** Takes a stage to work on (from the library or a template); its parts become editable. */
@@ -244,7 +289,12 @@ public final class StageViewModel {
     if (s != null) {
       for (Part part : s.parts()) {
         String unit = part.kind() == PartKind.CAPACITOR ? "F" : "Ω";
-        rows.add(new PartRow(part, SiValue.format(part.value(), unit), Tolerance.format(part.tolerance()), part.netA() + " – " + part.netB()));
+        rows.add(
+            new PartRow(
+                part,
+                SiValue.format(part.value(), unit),
+                Tolerance.format(part.tolerance()),
+                part.netA() + " – " + part.netB()));
       }
     }
     parts.setAll(rows);
@@ -266,7 +316,13 @@ public final class StageViewModel {
                 expected.set(result);
               }
             },
-            e -> bench.problems().failed("Could not work out the expected voltages", e, "Check the part values of the stage."));
+            e ->
+                bench
+                    .problems()
+                    .failed(
+                        "Could not work out the expected voltages",
+                        e,
+                        "Check the part values of the stage."));
   }
 
   /** Sets the selected part's value to what the pad shows. */
@@ -274,7 +330,12 @@ public final class StageViewModel {
     PartRow row = selectedPart.get();
     Double value = pad.valueProperty().get();
     if (row == null || value == null) {
-      bench.problems().show("No value to set", "Choose a part, then type its value on the pad.", "Tap a part in the list, then type e.g. 4k7.");
+      bench
+          .problems()
+          .show(
+              "No value to set",
+              "Choose a part, then type its value on the pad.",
+              "Tap a part in the list, then type e.g. 4k7.");
       return;
     }
     String ref = row.part().ref();
@@ -289,12 +350,22 @@ public final class StageViewModel {
       return;
     }
     if (newRef.isEmpty() || !newRef.matches("[A-Za-z][A-Za-z0-9_]*")) {
-      bench.problems().show("Not a designator", "\"" + newRef + "\" is not a designator.", "Type it as printed on the board, e.g. R12 or C3.");
+      bench
+          .problems()
+          .show(
+              "Not a designator",
+              "\"" + newRef + "\" is not a designator.",
+              "Type it as printed on the board, e.g. R12 or C3.");
       return;
     }
     Stage s = stage.get();
     if (!newRef.equals(row.part().ref()) && s.part(newRef).isPresent()) {
-      bench.problems().show("Designator already used", newRef + " is already a part of this stage.", "Choose another designator.");
+      bench
+          .problems()
+          .show(
+              "Designator already used",
+              newRef + " is already a part of this stage.",
+              "Choose another designator.");
       return;
     }
     Part p = row.part();
@@ -306,11 +377,16 @@ public final class StageViewModel {
     try {
       stage.set(edited);
     } catch (InvalidInputException e) {
-      bench.problems().show("The stage cannot take this", e.getMessage(), "Check the value and try again.");
+      bench
+          .problems()
+          .show("The stage cannot take this", e.getMessage(), "Check the value and try again.");
       return;
     }
     refreshParts();
-    parts.stream().filter(r -> r.part().ref().equals(selectRef)).findFirst().ifPresent(selectedPart::set);
+    parts.stream()
+        .filter(r -> r.part().ref().equals(selectRef))
+        .findFirst()
+        .ifPresent(selectedPart::set);
     solve();
   }
 
@@ -321,31 +397,45 @@ public final class StageViewModel {
   public void useStage() {
     Stage s = stage.get();
     if (s == null) {
-      bench.problems().show("Choose a stage first", "No stage is chosen.", "Tap a stage in the library.");
+      bench
+          .problems()
+          .show("Choose a stage first", "No stage is chosen.", "Tap a stage in the library.");
       return;
     }
-    Runnable go = () -> {
-      boolean changed = bench.stageProperty().get() == null || !bench.stageProperty().get().equals(s);
-      bench.stageProperty().set(s);
-      if (changed) {
-        bench.readings().clear();
-        bench.diagnosisProperty().set(null);
-      }
-      String caseId = bench.openCaseProperty().get().id();
-      BoardModel model = bench.boardModelProperty().get();
-      boolean addToLibrary = builtFromTemplate && model != null;
-      builtFromTemplate = false;
-      bench.tasks().run("Saving the case's stage", () -> {
-            bench.resume().saveStage(caseId, s);
-            if (addToLibrary) {
-              // A stage built here joins the board model's library, so the next unit finds it.
-              bench.store().addStageSheet(model.id(), s.title(), StageSheet.write(s));
-            }
-            return null;
-          },
-          ok -> {}, e -> bench.problems().failed("Could not keep the stage for this case", e, Words.CHECK_DATABASE));
-      bench.go(Step.READINGS);
-    };
+    Runnable go =
+        () -> {
+          boolean changed =
+              bench.stageProperty().get() == null || !bench.stageProperty().get().equals(s);
+          bench.stageProperty().set(s);
+          if (changed) {
+            bench.readings().clear();
+            bench.diagnosisProperty().set(null);
+          }
+          String caseId = bench.openCaseProperty().get().id();
+          BoardModel model = bench.boardModelProperty().get();
+          boolean addToLibrary = builtFromTemplate && model != null;
+          builtFromTemplate = false;
+          bench
+              .tasks()
+              .run(
+                  "Saving the case's stage",
+                  () -> {
+                    bench.resume().saveStage(caseId, s);
+                    if (addToLibrary) {
+                      // A stage built here joins the board model's library, so the next unit finds
+                      // it.
+                      bench.store().addStageSheet(model.id(), s.title(), StageSheet.write(s));
+                    }
+                    return null;
+                  },
+                  ok -> {},
+                  e ->
+                      bench
+                          .problems()
+                          .failed(
+                              "Could not keep the stage for this case", e, Words.CHECK_DATABASE));
+          bench.go(Step.READINGS);
+        };
     if (SafetyCaution.hasHighRails(s)) {
       bench.caution().show(SafetyCaution.Reason.HIGH_RAILS, go);
     } else {

@@ -43,7 +43,11 @@ public final class StartView {
           model.loadBoardModels();
         });
     Button back = (Button) add.lookup("#add-unit-cancel");
-    back.setOnAction(e -> { add.setVisible(false); glance.setVisible(true); });
+    back.setOnAction(
+        e -> {
+          add.setVisible(false);
+          glance.setVisible(true);
+        });
     Button save = (Button) add.lookup("#add-unit-save");
     save.setOnAction(
         e -> {
@@ -90,20 +94,22 @@ public final class StartView {
     list.setId("unit-matches");
     list.setPrefHeight(170);
     list.setCellFactory(
-        v -> new ListCell<>() {
-          @Override
-          protected void updateItem(StartViewModel.UnitRow row, boolean empty) {
-            super.updateItem(row, empty);
-            setText(empty || row == null ? null : row.line());
-          }
-        });
+        v ->
+            new ListCell<>() {
+              @Override
+              protected void updateItem(StartViewModel.UnitRow row, boolean empty) {
+                super.updateItem(row, empty);
+                setText(empty || row == null ? null : row.line());
+              }
+            });
     list.getSelectionModel()
         .selectedItemProperty()
-        .addListener((o, was, row) -> {
-          if (row != null) {
-            model.select(row);
-          }
-        });
+        .addListener(
+            (o, was, row) -> {
+              if (row != null) {
+                model.select(row);
+              }
+            });
     Label note = new Label();
     note.setId("unit-matches-note");
     note.getStyleClass().add("hint");
@@ -119,18 +125,22 @@ public final class StartView {
     title.setId("unit-title");
     title.getStyleClass().add("section-title");
     title.setWrapText(true);
-    title.textProperty()
+    title
+        .textProperty()
         .bind(
             Bindings.createStringBinding(
                 () ->
                     model.selectedProperty().get() == null
                         ? "No unit chosen yet"
-                        : "Unit " + model.selectedProperty().get().unit().serial() + " — "
+                        : "Unit "
+                            + model.selectedProperty().get().unit().serial()
+                            + " — "
                             + model.selectedProperty().get().boardModel().name(),
                 model.selectedProperty()));
     Label owner = new Label();
     owner.getStyleClass().add("hint");
-    owner.textProperty()
+    owner
+        .textProperty()
         .bind(
             Bindings.createStringBinding(
                 () -> {
@@ -138,9 +148,13 @@ public final class StartView {
                   if (unit == null) {
                     return "Search for a serial on the left, or add a new unit.";
                   }
-                  String who = unit.unit().owner().isEmpty() ? "" : "Owner: " + unit.unit().owner() + ".  ";
+                  String who =
+                      unit.unit().owner().isEmpty() ? "" : "Owner: " + unit.unit().owner() + ".  ";
                   int cases = unit.cases().size();
-                  return who + (cases == 0 ? "No earlier cases." : cases == 1 ? "1 case so far." : cases + " cases so far.");
+                  return who
+                      + (cases == 0
+                          ? "No earlier cases."
+                          : cases == 1 ? "1 case so far." : cases + " cases so far.");
                 },
                 model.selectedProperty()));
     Label earlier = new Label("Earlier cases, newest first — tap an open one to resume it");
@@ -150,34 +164,37 @@ public final class StartView {
     cases.setId("unit-cases");
     VBox.setVgrow(cases, Priority.ALWAYS);
     cases.setCellFactory(
-        v -> new ListCell<>() {
-          {
-            // A cell no wider than the list, so long symptoms wrap instead of scrolling sideways.
-            setPrefWidth(0);
-          }
+        v ->
+            new ListCell<>() {
+              {
+                // A cell no wider than the list, so long symptoms wrap instead of scrolling
+                // sideways.
+                setPrefWidth(0);
+              }
 
-          @Override
-          protected void updateItem(StartViewModel.CaseLine line, boolean empty) {
-            super.updateItem(line, empty);
-            if (empty || line == null) {
-              setText(null);
-              return;
-            }
-            StringBuilder text = new StringBuilder(line.opened() + "   " + line.symptom());
-            text.append("\n").append(line.open() ? "Still open" : "Outcome: " + line.outcome());
-            if (!line.faults().isEmpty()) {
-              text.append("   Found: ").append(line.faults());
-            }
-            if (!line.replaced().isEmpty()) {
-              text.append("\nDone: ").append(line.replaced());
-            }
-            setText(text.toString());
-            setWrapText(true);
-          }
-        });
+              @Override
+              protected void updateItem(StartViewModel.CaseLine line, boolean empty) {
+                super.updateItem(line, empty);
+                if (empty || line == null) {
+                  setText(null);
+                  return;
+                }
+                StringBuilder text = new StringBuilder(line.opened() + "   " + line.symptom());
+                text.append("\n").append(line.open() ? "Still open" : "Outcome: " + line.outcome());
+                if (!line.faults().isEmpty()) {
+                  text.append("   Found: ").append(line.faults());
+                }
+                if (!line.replaced().isEmpty()) {
+                  text.append("\nDone: ").append(line.replaced());
+                }
+                setText(text.toString());
+                setWrapText(true);
+              }
+            });
     Button resume = new Button("Resume this open case");
     resume.setId("resume-case");
-    resume.disableProperty()
+    resume
+        .disableProperty()
         .bind(
             Bindings.createBooleanBinding(
                 () -> {
@@ -240,7 +257,8 @@ public final class StartView {
     keypad.follow(serial);
     keypad.follow(owner);
     keypad.follow(boardModel.getEditor());
-    box.getChildren().addAll(title, serial, boardModel, owner, mains, new HBox(8, save, cancel), help);
+    box.getChildren()
+        .addAll(title, serial, boardModel, owner, mains, new HBox(8, save, cancel), help);
     return box;
   }
 }

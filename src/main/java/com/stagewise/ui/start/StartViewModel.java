@@ -81,7 +81,13 @@ public final class StartViewModel {
    * @param open whether the case is still open
    */
   public record CaseLine(
-      String caseId, String opened, String symptom, String outcome, String faults, String replaced, boolean open) {}
+      String caseId,
+      String opened,
+      String symptom,
+      String outcome,
+      String faults,
+      String replaced,
+      boolean open) {}
 
   public StringProperty serialProperty() {
     return serial;
@@ -135,7 +141,10 @@ public final class StartViewModel {
             "Reading the board models",
             () -> bench.store().boardModels().stream().map(BoardModel::name).toList(),
             boardModelNames::setAll,
-            e -> bench.problems().failed("Could not read the board models", e, Words.CHECK_DATABASE));
+            e ->
+                bench
+                    .problems()
+                    .failed("Could not read the board models", e, Words.CHECK_DATABASE));
   }
 
   /**
@@ -155,10 +164,15 @@ public final class StartViewModel {
                 matchesNote.set(
                     wanted.isEmpty()
                         ? "No units yet. Add the first one below."
-                        : "No unit has a serial like \"" + serial.get().strip() + "\". Check it, or add the unit.");
+                        : "No unit has a serial like \""
+                            + serial.get().strip()
+                            + "\". Check it, or add the unit.");
               } else if (rows.size() > MAX_MATCHES) {
                 matchesNote.set(
-                    rows.size() + " units match; the first " + MAX_MATCHES + " are shown. Type more of the serial.");
+                    rows.size()
+                        + " units match; the first "
+                        + MAX_MATCHES
+                        + " are shown. Type more of the serial.");
               } else {
                 matchesNote.set(rows.size() == 1 ? "1 unit found." : rows.size() + " units found.");
               }
@@ -222,7 +236,10 @@ public final class StartViewModel {
               glance.setAll(glanceOf(history));
               bench.showUnit(history.unit(), history.boardModel());
             },
-            e -> bench.problems().failed("Could not read the unit's history", e, Words.CHECK_DATABASE));
+            e ->
+                bench
+                    .problems()
+                    .failed("Could not read the unit's history", e, Words.CHECK_DATABASE));
   }
 
   static List<CaseLine> glanceOf(UnitHistory history) {
@@ -232,7 +249,8 @@ public final class StartViewModel {
       List<String> replaced = new ArrayList<>();
       for (RepairAction action : file.actions()) {
         if (action.kind() == ActionKind.PART_REPLACED) {
-          replaced.add(action.part() + (action.newValue().isEmpty() ? "" : " → " + action.newValue()));
+          replaced.add(
+              action.part() + (action.newValue().isEmpty() ? "" : " → " + action.newValue()));
         } else if (action.kind() == ActionKind.REFLOW) {
           replaced.add("reflow" + (action.part().isEmpty() ? "" : " " + action.part()));
         }
@@ -294,14 +312,25 @@ public final class StartViewModel {
               select(row);
               loadBoardModels();
             },
-            e -> bench.problems().failed("Could not add the unit", e, "Check the serial and the board model, then try again."));
+            e ->
+                bench
+                    .problems()
+                    .failed(
+                        "Could not add the unit",
+                        e,
+                        "Check the serial and the board model, then try again."));
   }
 
   /** Opens a case for the selected unit with the typed symptom and moves on to the stage. */
   public void openCase() {
     UnitHistory history = selected.get();
     if (history == null) {
-      bench.problems().show("Choose a unit first", "No unit is chosen.", "Find the unit by its serial, or add it.");
+      bench
+          .problems()
+          .show(
+              "Choose a unit first",
+              "No unit is chosen.",
+              "Find the unit by its serial, or add it.");
       return;
     }
     String text = symptom.get() == null ? "" : symptom.get().strip();
@@ -334,9 +363,15 @@ public final class StartViewModel {
     if (history == null) {
       return;
     }
-    Optional<CaseFile> file = history.cases().stream().filter(c -> c.repairCase().id().equals(caseId)).findFirst();
+    Optional<CaseFile> file =
+        history.cases().stream().filter(c -> c.repairCase().id().equals(caseId)).findFirst();
     if (file.isEmpty() || file.get().repairCase().status() != CaseStatus.OPEN) {
-      bench.problems().show("This case is closed", "Only an open case can be resumed.", "Open a new case for the unit.");
+      bench
+          .problems()
+          .show(
+              "This case is closed",
+              "Only an open case can be resumed.",
+              "Open a new case for the unit.");
       return;
     }
     CaseResume resume = bench.resume();
@@ -358,11 +393,12 @@ public final class StartViewModel {
                 step = saved.get().step();
               }
               Step target = step;
-              afterCaution(() -> {
-                if (!bench.go(target)) {
-                  bench.go(Step.STAGE);
-                }
-              });
+              afterCaution(
+                  () -> {
+                    if (!bench.go(target)) {
+                      bench.go(Step.STAGE);
+                    }
+                  });
             },
             e -> bench.problems().failed("Could not resume the case", e, Words.CHECK_DATABASE));
   }

@@ -4,9 +4,6 @@ import com.stagewise.ui.Words;
 import com.stagewise.ui.drawing.SchematicDrawing;
 import java.util.LinkedHashMap;
 import java.util.Map;
-import javafx.scene.control.ToggleButton;
-import javafx.scene.control.ToggleGroup;
-import javafx.scene.layout.StackPane;
 import javafx.beans.binding.Bindings;
 import javafx.collections.ListChangeListener;
 import javafx.geometry.Pos;
@@ -16,13 +13,18 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
+import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 
-/** The suspects screen: the ranked list, and the chosen suspect's voltages beside the measured ones. */
+/**
+ * The suspects screen: the ranked list, and the chosen suspect's voltages beside the measured ones.
+ */
 public final class SuspectsView {
   private final SuspectsViewModel model;
   private final HBox root = new HBox(12);
@@ -41,7 +43,9 @@ public final class SuspectsView {
     right.setPrefWidth(560);
     right.setMinWidth(500);
     root.getChildren().addAll(left, right);
-    model.comparison().addListener((ListChangeListener<SuspectsViewModel.PointRow>) c -> showTable());
+    model
+        .comparison()
+        .addListener((ListChangeListener<SuspectsViewModel.PointRow>) c -> showTable());
     model.selectedProperty().addListener((o, was, now) -> showTable());
     showTable();
   }
@@ -65,16 +69,22 @@ public final class SuspectsView {
     list.setId("suspect-list");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new SuspectCell());
-    list.getSelectionModel().selectedItemProperty().addListener((o, was, row) -> {
-      if (row != null && row != model.selectedProperty().get()) {
-        model.selectedProperty().set(row);
-      }
-    });
-    model.selectedProperty().addListener((o, was, row) -> {
-      if (row != null && list.getSelectionModel().getSelectedItem() != row) {
-        list.getSelectionModel().select(row);
-      }
-    });
+    list.getSelectionModel()
+        .selectedItemProperty()
+        .addListener(
+            (o, was, row) -> {
+              if (row != null && row != model.selectedProperty().get()) {
+                model.selectedProperty().set(row);
+              }
+            });
+    model
+        .selectedProperty()
+        .addListener(
+            (o, was, row) -> {
+              if (row != null && list.getSelectionModel().getSelectedItem() != row) {
+                list.getSelectionModel().select(row);
+              }
+            });
     if (model.selectedProperty().get() != null) {
       list.getSelectionModel().select(model.selectedProperty().get());
     }
@@ -94,9 +104,15 @@ public final class SuspectsView {
     title.setId("suspect-chosen");
     title.getStyleClass().add("section-title");
     title.setWrapText(true);
-    title.textProperty().bind(Bindings.createStringBinding(
-        () -> model.selectedProperty().get() == null ? "Volts at each test point" : "If it is " + model.selectedProperty().get().title() + ":",
-        model.selectedProperty()));
+    title
+        .textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    model.selectedProperty().get() == null
+                        ? "Volts at each test point"
+                        : "If it is " + model.selectedProperty().get().title() + ":",
+                model.selectedProperty()));
     table.setId("suspect-volts");
     table.setHgap(18);
     table.setVgap(4);
@@ -111,11 +127,14 @@ public final class SuspectsView {
     asDrawing.setToggleGroup(views);
     asTable.setToggleGroup(views);
     asDrawing.setSelected(true);
-    views.selectedToggleProperty().addListener((o, was, now) -> {
-      if (now == null) {
-        was.setSelected(true);
-      }
-    });
+    views
+        .selectedToggleProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                was.setSelected(true);
+              }
+            });
     schematic.visibleProperty().bind(asDrawing.selectedProperty());
     scroll.visibleProperty().bind(asTable.selectedProperty());
     StackPane shown = new StackPane(schematic, scroll);
@@ -129,7 +148,8 @@ public final class SuspectsView {
     check.setWrapText(true);
     check.textProperty().bind(model.confirmingCheckProperty());
     check.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
-    Label caution = new Label("Unplug the unit and discharge the capacitors before any ohms check.");
+    Label caution =
+        new Label("Unplug the unit and discharge the capacitors before any ohms check.");
     caution.setWrapText(true);
     caution.setStyle("-fx-text-fill: #8a4b00; -fx-font-weight: bold;");
     caution.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
@@ -141,7 +161,8 @@ public final class SuspectsView {
     close.getStyleClass().add("primary");
     close.disableProperty().bind(model.selectedProperty().isNull());
     close.setOnAction(e -> model.closeOutWithSelected());
-    box.getChildren().addAll(title, viewRow, shown, checkTitle, check, caution, new HBox(10, back, close));
+    box.getChildren()
+        .addAll(title, viewRow, shown, checkTitle, check, caution, new HBox(10, back, close));
     return box;
   }
 
@@ -183,7 +204,12 @@ public final class SuspectsView {
   private void showTable() {
     showDrawing();
     table.getChildren().clear();
-    String[] heads = {"Test point", "Healthy", "Measured", model.selectedProperty().get() == null ? "Suspect" : "If this suspect"};
+    String[] heads = {
+      "Test point",
+      "Healthy",
+      "Measured",
+      model.selectedProperty().get() == null ? "Suspect" : "If this suspect"
+    };
     for (int c = 0; c < heads.length; c++) {
       Label head = new Label(heads[c]);
       head.setStyle("-fx-font-weight: bold;");
@@ -193,7 +219,8 @@ public final class SuspectsView {
     for (SuspectsViewModel.PointRow p : model.comparison()) {
       table.add(new Label(Words.pin(p.at())), 0, row);
       table.add(mono(Words.voltsShort(p.healthy())), 1, row);
-      Label measured = mono(Double.isNaN(p.measured()) ? "not read" : Words.voltsShort(p.measured()));
+      Label measured =
+          mono(Double.isNaN(p.measured()) ? "not read" : Words.voltsShort(p.measured()));
       if (!Double.isNaN(p.measured())) {
         measured.setStyle(measured.getStyle() + "-fx-font-weight: bold;");
       }

@@ -59,7 +59,8 @@ public final class SuspectsViewModel {
    * @param group the faults it cannot be told apart from, in words (empty when alone)
    * @param estimate the estimated value of a drifted part or low rail (empty when none)
    */
-  public record SuspectRow(Suspect suspect, int rank, String title, String group, String estimate) {}
+  public record SuspectRow(
+      Suspect suspect, int rank, String title, String group, String estimate) {}
 
   /**
    * One test point compared: healthy, measured and under the chosen suspect.
@@ -114,14 +115,24 @@ public final class SuspectsViewModel {
     if (stage == null) {
       return;
     }
-    bench.tasks().run("Working out the expected voltages", () -> ExpectedVolts.of(stage),
-        volts -> {
-          if (bench.stageProperty().get() == stage) {
-            expected.set(volts);
-            compare();
-          }
-        },
-        e -> bench.problems().failed("Could not work out the expected voltages", e, "Check the stage's parts on the Stage screen."));
+    bench
+        .tasks()
+        .run(
+            "Working out the expected voltages",
+            () -> ExpectedVolts.of(stage),
+            volts -> {
+              if (bench.stageProperty().get() == stage) {
+                expected.set(volts);
+                compare();
+              }
+            },
+            e ->
+                bench
+                    .problems()
+                    .failed(
+                        "Could not work out the expected voltages",
+                        e,
+                        "Check the stage's parts on the Stage screen."));
   }
 
   void refresh() {
@@ -137,13 +148,17 @@ public final class SuspectsViewModel {
             others.add(Words.fault(g));
           }
         }
-        rows.add(new SuspectRow(s, rank++, Words.fault(s.fault()), String.join(", ", others), estimate(stage, s)));
+        rows.add(
+            new SuspectRow(
+                s, rank++, Words.fault(s.fault()), String.join(", ", others), estimate(stage, s)));
       }
-      verdict.set(switch (d.verdict()) {
-        case HEALTHY -> "The readings fit a healthy stage. Look elsewhere on the board, or take more readings.";
-        case FAULT -> "The readings show a fault.";
-        case INCONCLUSIVE -> "Not clear yet: take the next probe on the Readings screen.";
-      });
+      verdict.set(
+          switch (d.verdict()) {
+            case HEALTHY ->
+                "The readings fit a healthy stage. Look elsewhere on the board, or take more readings.";
+            case FAULT -> "The readings show a fault.";
+            case INCONCLUSIVE -> "Not clear yet: take the next probe on the Readings screen.";
+          });
       confirmingCheck.set(d.confirmingCheck());
       StringBuilder text = new StringBuilder();
       for (Observation o : d.observations()) {
@@ -173,9 +188,21 @@ public final class SuspectsViewModel {
     Optional<Part> part = stage.part(what);
     if (part.isPresent()) {
       String unit = part.get().kind() == PartKind.CAPACITOR ? "F" : "Ω";
-      return "Estimated value " + SiValue.format(value, unit, 2) + " (marked " + SiValue.format(part.get().value(), unit) + ")";
+      return "Estimated value "
+          + SiValue.format(value, unit, 2)
+          + " (marked "
+          + SiValue.format(part.get().value(), unit)
+          + ")";
     }
-    return stage.rail(what).map(r -> "Estimated rail " + Words.voltsShort(value) + " (should be " + Words.voltsShort(r.volts()) + ")")
+    return stage
+        .rail(what)
+        .map(
+            r ->
+                "Estimated rail "
+                    + Words.voltsShort(value)
+                    + " (should be "
+                    + Words.voltsShort(r.volts())
+                    + ")")
         .orElse("Estimated " + SiValue.format(value, "", 2));
   }
 
@@ -204,7 +231,8 @@ public final class SuspectsViewModel {
         }
       }
       double healthy = volts == null ? Double.NaN : volts.at(at);
-      double predicted = row == null ? Double.NaN : row.suspect().predicted().getOrDefault(at, Double.NaN);
+      double predicted =
+          row == null ? Double.NaN : row.suspect().predicted().getOrDefault(at, Double.NaN);
       rows.add(new PointRow(at, healthy, measured, predicted));
     }
     comparison.setAll(rows);

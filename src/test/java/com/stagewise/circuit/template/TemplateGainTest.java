@@ -24,7 +24,9 @@ class TemplateGainTest {
   static final double RELATIVE = 2e-4;
 
   static void assertVoltsNear(double expected, double actual) {
-    assertThat(actual).isCloseTo(expected, org.assertj.core.data.Offset.offset(Math.abs(expected) * RELATIVE + 1e-6));
+    assertThat(actual)
+        .isCloseTo(
+            expected, org.assertj.core.data.Offset.offset(Math.abs(expected) * RELATIVE + 1e-6));
   }
 
   static OperatingPoint solve(Stage stage) {
@@ -50,12 +52,14 @@ class TemplateGainTest {
     assertVoltsNear(-4.7, solve(stage).at("OUT"));
     AcSolution ac = ac(stage);
     assertVoltsNear(0.47, ac.nets().get("OUT").amplitude());
-    assertThat(Math.abs(ac.nets().get("OUT").phaseDegrees())).isCloseTo(180, org.assertj.core.data.Offset.offset(0.1));
+    assertThat(Math.abs(ac.nets().get("OUT").phaseDegrees()))
+        .isCloseTo(180, org.assertj.core.data.Offset.offset(0.1));
   }
 
   @Test
   void nonInverting_gainIsOnePlusR2OverR1() {
-    Stage stage = Templates.named("non-inverting").build(Map.of("r1", "10k", "r2", "22k", "vin", "0.5"));
+    Stage stage =
+        Templates.named("non-inverting").build(Map.of("r1", "10k", "r2", "22k", "vin", "0.5"));
     // Closed-form ideal op-amp result: Vout = (1 + R2/R1) Vin = 3.2 x 0.5 = 1.6 V.
     assertVoltsNear(1.6, solve(stage).at("OUT"));
   }
@@ -63,16 +67,20 @@ class TemplateGainTest {
   @Test
   void follower_outputCopiesInput() {
     // Closed-form ideal op-amp result: Vout = Vin.
-    assertVoltsNear(2.0, solve(Templates.named("voltage-follower").build(Map.of("vin", "2"))).at("OUT"));
+    assertVoltsNear(
+        2.0, solve(Templates.named("voltage-follower").build(Map.of("vin", "2"))).at("OUT"));
   }
 
   @Test
   void summing_outputIsMinusWeightedSum() {
     Stage stage =
         Templates.named("summing")
-            .build(Map.of("inputs", "3", "r1", "10k", "r2", "20k", "r3", "47k", "r5", "10k",
-                "vin1", "0.5", "vin2", "0.4", "vin3", "-0.47"));
-    // Closed-form ideal op-amp result: Vout = -R5 (V1/R1 + V2/R2 + V3/R3) = -(0.5 + 0.2 - 0.1) = -0.6 V.
+            .build(
+                Map.of(
+                    "inputs", "3", "r1", "10k", "r2", "20k", "r3", "47k", "r5", "10k", "vin1",
+                    "0.5", "vin2", "0.4", "vin3", "-0.47"));
+    // Closed-form ideal op-amp result: Vout = -R5 (V1/R1 + V2/R2 + V3/R3) = -(0.5 + 0.2 - 0.1) =
+    // -0.6 V.
     assertVoltsNear(-0.6, solve(stage).at("OUT"));
   }
 
@@ -85,7 +93,8 @@ class TemplateGainTest {
 
   @Test
   void difference_unmatchedRatios_followSuperposition() {
-    Stage stage = Templates.named("difference").build(Map.of("r4", "33k", "vin1", "1", "vin2", "1.5"));
+    Stage stage =
+        Templates.named("difference").build(Map.of("r4", "33k", "vin1", "1", "vin2", "1.5"));
     // Closed-form ideal op-amp result by superposition:
     // Vout = V2 R4/(R3+R4) (1 + R2/R1) - V1 R2/R1.
     double expected = 1.5 * 33.0 / 43.0 * (1 + 2.2) - 1 * 2.2;
@@ -97,7 +106,8 @@ class TemplateGainTest {
     Stage stage =
         Templates.named("instrumentation")
             .build(Map.of("r2", "2k2", "r5", "22k", "r7", "22k", "vin1", "2.5", "vin2", "2.52"));
-    // Closed-form ideal op-amp result: Vout = (1 + 2 RF/RG)(R5/R4)(V2 - V1) with RF = R1 = R3 = 10k,
+    // Closed-form ideal op-amp result: Vout = (1 + 2 RF/RG)(R5/R4)(V2 - V1) with RF = R1 = R3 =
+    // 10k,
     // RG = R2 = 2k2, R5/R4 = 2.2.
     double expected = (1 + 2 * 10e3 / 2.2e3) * 2.2 * 0.02;
     assertVoltsNear(expected, solve(stage).at("OUT"));
@@ -129,8 +139,10 @@ class TemplateGainTest {
 
   @Test
   void transimpedance_outputIsMinusCurrentTimesR2() {
-    Stage stage = Templates.named("transimpedance").build(Map.of("vin", "-1", "r1", "10M", "r2", "1M"));
-    // Closed-form ideal op-amp result: I = Vin/R1 = -100 nA into the summing node, Vout = -I R2 = 0.1 V.
+    Stage stage =
+        Templates.named("transimpedance").build(Map.of("vin", "-1", "r1", "10M", "r2", "1M"));
+    // Closed-form ideal op-amp result: I = Vin/R1 = -100 nA into the summing node, Vout = -I R2 =
+    // 0.1 V.
     assertVoltsNear(0.1, solve(stage).at("OUT"));
   }
 
@@ -163,11 +175,15 @@ class TemplateGainTest {
     assertThat(result).isInstanceOf(SolveResult.Solved.class);
     var points = ((SolveResult.Solved) result).points();
     assertThat(points).hasSize(2);
-    assertThat(points).extracting(p -> p.states().get("U1A")).containsExactlyInAnyOrder(SectionState.HIGH, SectionState.LOW);
+    assertThat(points)
+        .extracting(p -> p.states().get("U1A"))
+        .containsExactlyInAnyOrder(SectionState.HIGH, SectionState.LOW);
     for (OperatingPoint point : points) {
-      // Positive feedback: V(POS) = Vout R1 / (R1 + R2) (divider), the threshold the input must cross.
+      // Positive feedback: V(POS) = Vout R1 / (R1 + R2) (divider), the threshold the input must
+      // cross.
       assertVoltsNear(point.at("OUT") * 10.0 / 110.0, point.at("POS"));
-      // Classic-bipolar output swings to about 1.5 V from each 15 V rail (design notes' device table).
+      // Classic-bipolar output swings to about 1.5 V from each 15 V rail (design notes' device
+      // table).
       assertThat(Math.abs(point.at("OUT"))).isBetween(13.4, 13.6);
     }
   }

@@ -50,7 +50,8 @@ class TemplatesTest {
   @MethodSource("templates")
   void build_unknownParameter_namesIt(StageTemplate template) {
     InvalidInputException e =
-        catchThrowableOfType(InvalidInputException.class, () -> template.build(Map.of("r99", "1k")));
+        catchThrowableOfType(
+            InvalidInputException.class, () -> template.build(Map.of("r99", "1k")));
     assertThat(e.field()).isEqualTo("r99");
     assertThat(e.getMessage()).contains("template " + template.name(), "unknown parameter");
   }
@@ -60,9 +61,18 @@ class TemplatesTest {
     assertThat(Templates.all())
         .extracting(StageTemplate::name)
         .containsExactly(
-            "inverting", "non-inverting", "voltage-follower", "summing", "difference", "integrator",
-            "differentiator", "instrumentation", "transimpedance", "sallen-key-low-pass",
-            "inverting-schmitt-trigger", "single-supply-inverting");
+            "inverting",
+            "non-inverting",
+            "voltage-follower",
+            "summing",
+            "difference",
+            "integrator",
+            "differentiator",
+            "instrumentation",
+            "transimpedance",
+            "sallen-key-low-pass",
+            "inverting-schmitt-trigger",
+            "single-supply-inverting");
   }
 
   static Stream<Arguments> variants() {
@@ -102,7 +112,10 @@ class TemplatesTest {
     assertThat(stage.amplifiers()).extracting(a -> a.ref()).containsExactly("U1A", "U1B", "U1C");
     assertThat(stage.amplifiers()).allMatch(a -> a.packageType() == PackageType.QUAD_14);
     // Quad pinout (industry standard): section C output on pin 8, supplies on 4 and 11.
-    assertThat(stage.pinNets()).containsEntry("U1.8", "OUT").containsEntry("U1.4", "VCC").containsEntry("U1.11", "VEE");
+    assertThat(stage.pinNets())
+        .containsEntry("U1.8", "OUT")
+        .containsEntry("U1.4", "VCC")
+        .containsEntry("U1.11", "VEE");
   }
 
   @Test
@@ -116,12 +129,15 @@ class TemplatesTest {
   @ParameterizedTest
   @CsvSource({
     "inverting, r1, 10q", "inverting, r2, -47k", "inverting, r1, 0", "inverting, vcc, -5",
-    "inverting, vee, 5", "inverting, class, fast", "inverting, package, dip-16", "summing, inputs, 5",
+    "inverting, vee, 5", "inverting, class, fast", "inverting, package, dip-16",
+        "summing, inputs, 5",
     "summing, inputs, two", "inverting, hz, -1", "inverting, vac, -0.1", "integrator, c1, none"
   })
   void build_badValue_namesTheParameter(String name, String parameter, String value) {
     InvalidInputException e =
-        catchThrowableOfType(InvalidInputException.class, () -> Templates.named(name).build(Map.of(parameter, value)));
+        catchThrowableOfType(
+            InvalidInputException.class,
+            () -> Templates.named(name).build(Map.of(parameter, value)));
     assertThat(e.field()).isEqualTo(parameter);
     assertThat(e.getMessage()).startsWith("template " + name + ": " + parameter + ": ");
   }
@@ -148,7 +164,10 @@ class TemplatesTest {
   @Test
   void rename_unknownOrClashing_isRefused() {
     Stage stage = Templates.named("inverting").build();
-    assertThat(catchThrowableOfType(InvalidInputException.class, () -> StageEdits.rename(stage, Map.of("R9", "R1"))).field())
+    assertThat(
+            catchThrowableOfType(
+                    InvalidInputException.class, () -> StageEdits.rename(stage, Map.of("R9", "R1")))
+                .field())
         .isEqualTo("R9");
     assertThatThrownBy(() -> StageEdits.rename(stage, Map.of("R1", "R2")))
         .isInstanceOf(InvalidInputException.class)
@@ -158,11 +177,13 @@ class TemplatesTest {
   @Test
   void renameNets_everywhere_keepsTheStageSound() {
     Stage stage = Templates.named("inverting").build();
-    Stage renamed = StageEdits.renameNets(stage, Map.of("VCC", "+15V", "VEE", "-15V", "IN", "LINE_IN"));
+    Stage renamed =
+        StageEdits.renameNets(stage, Map.of("VCC", "+15V", "VEE", "-15V", "IN", "LINE_IN"));
     assertThat(renamed.rail("+15V")).isPresent();
     assertThat(renamed.input("LINE_IN")).isPresent();
     assertThat(renamed.amplifiers().get(0).vMinus()).isEqualTo("-15V");
     assertThat(StageRules.problems(renamed)).isEmpty();
-    assertThatThrownBy(() -> StageEdits.renameNets(stage, Map.of("IN", "OUT"))).isInstanceOf(InvalidInputException.class);
+    assertThatThrownBy(() -> StageEdits.renameNets(stage, Map.of("IN", "OUT")))
+        .isInstanceOf(InvalidInputException.class);
   }
 }

@@ -48,8 +48,7 @@ class ColourCodeTest {
       "brown green black gold blue, 15, 0.0025"
     })
     void decode_fourAndFiveBands(String bands, double ohms, double tolerance) {
-      assertEquals(
-          new BandedValue(ohms, tolerance, OptionalInt.empty()), ColourCode.decode(bands));
+      assertEquals(new BandedValue(ohms, tolerance, OptionalInt.empty()), ColourCode.decode(bands));
     }
 
     // IEC 60062:2016 six-band resistors: the sixth band is the temperature coefficient (from
@@ -68,8 +67,17 @@ class ColourCodeTest {
     // given these tolerances in the 2016 edition).
     @ParameterizedTest
     @CsvSource({
-      "brown, 0.01", "red, 0.02", "orange, 0.0005", "yellow, 0.0002", "green, 0.005",
-      "blue, 0.0025", "violet, 0.001", "grey, 0.0001", "gold, 0.05", "silver, 0.10", "none, 0.20"
+      "brown, 0.01",
+      "red, 0.02",
+      "orange, 0.0005",
+      "yellow, 0.0002",
+      "green, 0.005",
+      "blue, 0.0025",
+      "violet, 0.001",
+      "grey, 0.0001",
+      "gold, 0.05",
+      "silver, 0.10",
+      "none, 0.20"
     })
     void decode_everyToleranceColour(String colour, double tolerance) {
       assertEquals(tolerance, ColourCode.decode("brown black black " + colour).tolerance());
@@ -90,8 +98,15 @@ class ColourCodeTest {
     // IEC 60062:2016 temperature coefficients in ppm/K (from memory).
     @ParameterizedTest
     @CsvSource({
-      "black, 250", "brown, 100", "red, 50", "orange, 15", "yellow, 25", "green, 20", "blue, 10",
-      "violet, 5", "grey, 1"
+      "black, 250",
+      "brown, 100",
+      "red, 50",
+      "orange, 15",
+      "yellow, 25",
+      "green, 20",
+      "blue, 10",
+      "violet, 5",
+      "grey, 1"
     })
     void decode_everyTempcoColour(String colour, int ppm) {
       assertEquals(
@@ -190,7 +205,8 @@ class ColourCodeTest {
       assertEquals(List.of(YELLOW, WHITE, WHITE, BROWN, BROWN), ColourCode.encode(4990, 0.01));
       assertEquals(List.of(YELLOW, WHITE, WHITE, BROWN, GOLD), ColourCode.encode(4990, 0.05));
       assertEquals(List.of(YELLOW, VIOLET, BLACK, GOLD, BROWN), ColourCode.encode(47, 0.01));
-      assertEquals(List.of(BLACK, YELLOW, VIOLET, Colour.PINK, BROWN), ColourCode.encode(0.047, 0.01));
+      assertEquals(
+          List.of(BLACK, YELLOW, VIOLET, Colour.PINK, BROWN), ColourCode.encode(0.047, 0.01));
     }
 
     @Test

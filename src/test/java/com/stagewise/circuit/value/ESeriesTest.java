@@ -37,7 +37,8 @@ class ESeriesTest {
     void e12_isTheStandardTable() {
       // IEC 60063 E12 (from memory of the standard; the familiar 10 % resistor values).
       assertEquals(
-          List.of(1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2), ESeries.E12.decade());
+          List.of(1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2),
+          ESeries.E12.decade());
     }
 
     @Test
@@ -72,8 +73,17 @@ class ESeriesTest {
     // IEC 60063 E192 spot checks (from memory), including 9.20, the value that deviates from the
     // rounded geometric series.
     @ParameterizedTest
-    @CsvSource({"1, 1.00", "2, 1.01", "8, 1.09", "95, 3.09", "96, 3.12", "135, 4.99", "186, 9.20",
-      "187, 9.31", "192, 9.88"})
+    @CsvSource({
+      "1, 1.00",
+      "2, 1.01",
+      "8, 1.09",
+      "95, 3.09",
+      "96, 3.12",
+      "135, 4.99",
+      "186, 9.20",
+      "187, 9.31",
+      "192, 9.88"
+    })
     void e192_spotChecks(int position, double expected) {
       assertEquals(expected, ESeries.E192.decade().get(position - 1));
     }
@@ -141,10 +151,23 @@ class ESeriesTest {
   class Nearest {
     @ParameterizedTest
     @CsvSource({
-      "E12, 4800, 4700", "E12, 5000, 4700", "E12, 5200, 5600", "E12, 9.6, 10", "E12, 0.0012, 0.0012",
-      "E24, 1e-12, 1e-12", "E96, 4990, 4990", "E96, 4800, 4750", "E24, 4800, 4700",
-      "E24, 2.9e-9, 3.0e-9", "E6, 1e6, 1e6", "E3, 3.2, 2.2", "E3, 3.3, 4.7", "E12, 8.6e5, 8.2e5",
-      "E192, 9.2, 9.2", "E12, 1.09, 1.0", "E12, 1.1, 1.2"
+      "E12, 4800, 4700",
+      "E12, 5000, 4700",
+      "E12, 5200, 5600",
+      "E12, 9.6, 10",
+      "E12, 0.0012, 0.0012",
+      "E24, 1e-12, 1e-12",
+      "E96, 4990, 4990",
+      "E96, 4800, 4750",
+      "E24, 4800, 4700",
+      "E24, 2.9e-9, 3.0e-9",
+      "E6, 1e6, 1e6",
+      "E3, 3.2, 2.2",
+      "E3, 3.3, 4.7",
+      "E12, 8.6e5, 8.2e5",
+      "E192, 9.2, 9.2",
+      "E12, 1.09, 1.0",
+      "E12, 1.1, 1.2"
     })
     void nearest_examples(ESeries series, double value, double expected) {
       // Expected values worked by hand from the IEC 60063 tables.
@@ -199,9 +222,19 @@ class ESeriesTest {
   class Preferred {
     @ParameterizedTest
     @CsvSource({
-      "E12, 4700, true", "E96, 4990, true", "E24, 4990, false", "E3, 4.7, true", "E24, 5100, true",
-      "E12, 5100, false", "E192, 9.2, true", "E192, 9.19, false", "E48, 1.02, false",
-      "E96, 1.02, true", "E24, 3e-9, true", "E12, 3e-9, false", "E6, 1e9, true",
+      "E12, 4700, true",
+      "E96, 4990, true",
+      "E24, 4990, false",
+      "E3, 4.7, true",
+      "E24, 5100, true",
+      "E12, 5100, false",
+      "E192, 9.2, true",
+      "E192, 9.19, false",
+      "E48, 1.02, false",
+      "E96, 1.02, true",
+      "E24, 3e-9, true",
+      "E12, 3e-9, false",
+      "E6, 1e9, true",
       "E12, 4.7e-12, true"
     })
     void isPreferred_followsTheTables(ESeries series, double value, boolean expected) {
@@ -227,8 +260,13 @@ class ESeriesTest {
   class Neighbours {
     @ParameterizedTest
     @CsvSource({
-      "E12, 4700, 3900, 5600", "E12, 5000, 4700, 5600", "E12, 1000, 820, 1200",
-      "E24, 9.5, 9.1, 10", "E96, 4990, 4870, 5110", "E3, 1, 0.47, 2.2", "E12, 0.0089, 0.0082, 0.01",
+      "E12, 4700, 3900, 5600",
+      "E12, 5000, 4700, 5600",
+      "E12, 1000, 820, 1200",
+      "E24, 9.5, 9.1, 10",
+      "E96, 4990, 4870, 5110",
+      "E3, 1, 0.47, 2.2",
+      "E12, 0.0089, 0.0082, 0.01",
       "E192, 9.2, 9.09, 9.31"
     })
     void neighbours_areTheValuesJustBelowAndAbove(
@@ -259,7 +297,9 @@ class ESeriesTest {
       assertThatThrownBy(() -> ESeries.parse(text))
           .isInstanceOf(InvalidInputException.class)
           .hasMessage(
-              "series \"" + (text == null ? "" : text) + "\" is not an E-series; expected one of"
+              "series \""
+                  + (text == null ? "" : text)
+                  + "\" is not an E-series; expected one of"
                   + " E3, E6, E12, E24, E48, E96, E192");
     }
   }

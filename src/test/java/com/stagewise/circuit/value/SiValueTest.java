@@ -21,8 +21,18 @@ class SiValueTest {
     // Plain decimal numbers with an optional exponent: ordinary decimal notation.
     @ParameterizedTest
     @CsvSource({
-      "1000, 1000", "1e3, 1000", "1E3, 1000", "-2.5, -2.5", "0.01, 0.01", ".5, 0.5", "5., 5",
-      "+3, 3", "1e-3, 0.001", "2.2E-12, 2.2e-12", "0, 0", "  47  , 47"
+      "1000, 1000",
+      "1e3, 1000",
+      "1E3, 1000",
+      "-2.5, -2.5",
+      "0.01, 0.01",
+      ".5, 0.5",
+      "5., 5",
+      "+3, 3",
+      "1e-3, 0.001",
+      "2.2E-12, 2.2e-12",
+      "0, 0",
+      "  47  , 47"
     })
     void plainNumbers(String text, double expected) {
       assertEquals(expected, SiValue.parse(text));
@@ -43,9 +53,22 @@ class SiValueTest {
     // Units written after the value, as on schematics and parts lists (common practice).
     @ParameterizedTest
     @CsvSource({
-      "10kΩ, 1e4", "10kΩ, 1e4", "100nF, 1e-7", "10 kohm, 1e4", "1 Ohms, 1", "1kHz, 1000",
-      "50 hz, 50", "5V, 5", "4.7R, 4.7", "470R, 470", "2A, 2", "4.7 kΩ, 4700", "100 nF, 1e-7",
-      "1 F, 1", "3fF, 3e-15", "2.2 mΩ, 0.0022"
+      "10kΩ, 1e4",
+      "10kΩ, 1e4",
+      "100nF, 1e-7",
+      "10 kohm, 1e4",
+      "1 Ohms, 1",
+      "1kHz, 1000",
+      "50 hz, 50",
+      "5V, 5",
+      "4.7R, 4.7",
+      "470R, 470",
+      "2A, 2",
+      "4.7 kΩ, 4700",
+      "100 nF, 1e-7",
+      "1 F, 1",
+      "3fF, 3e-15",
+      "2.2 mΩ, 0.0022"
     })
     void units(String text, double expected) {
       assertEquals(expected, SiValue.parse(text));
@@ -55,10 +78,27 @@ class SiValueTest {
     // point and the multiplier.
     @ParameterizedTest
     @CsvSource({
-      "4k7, 4700", "4K7, 4700", "4R7, 4.7", "R47, 0.47", "470R, 470", "0R, 0", "2u2, 2.2e-6",
-      "2µ2, 2.2e-6", "1M5, 1.5e6", "6n8, 6.8e-9", "p47, 4.7e-13", "1m5, 1.5e-3", "1K0, 1000",
-      "R10, 0.1", "4r7, 4.7", "1F5, 1.5", "4k7Ω, 4700", "2u2F, 2.2e-6", "4K7 ohm, 4700",
-      "k47, 470", "2G2, 2.2e9"
+      "4k7, 4700",
+      "4K7, 4700",
+      "4R7, 4.7",
+      "R47, 0.47",
+      "470R, 470",
+      "0R, 0",
+      "2u2, 2.2e-6",
+      "2µ2, 2.2e-6",
+      "1M5, 1.5e6",
+      "6n8, 6.8e-9",
+      "p47, 4.7e-13",
+      "1m5, 1.5e-3",
+      "1K0, 1000",
+      "R10, 0.1",
+      "4r7, 4.7",
+      "1F5, 1.5",
+      "4k7Ω, 4700",
+      "2u2F, 2.2e-6",
+      "4K7 ohm, 4700",
+      "k47, 470",
+      "2G2, 2.2e9"
     })
     void rkmCode(String text, double expected) {
       assertEquals(expected, SiValue.parse(text));
@@ -87,8 +127,27 @@ class SiValueTest {
     @ParameterizedTest
     @ValueSource(
         strings = {
-          "4k7k", "k", "R", "1..2", "abc", "1e", "10 kk", "4.7k7", "NaN", "Infinity", "-Infinity",
-          "10kR", "4R7Ω", "1 2", "--1", "0x10", "1e3.5", "4k7.", "4E", "1 kV V", "1mm"
+          "4k7k",
+          "k",
+          "R",
+          "1..2",
+          "abc",
+          "1e",
+          "10 kk",
+          "4.7k7",
+          "NaN",
+          "Infinity",
+          "-Infinity",
+          "10kR",
+          "4R7Ω",
+          "1 2",
+          "--1",
+          "0x10",
+          "1e3.5",
+          "4k7.",
+          "4E",
+          "1 kV V",
+          "1mm"
         })
     void notAValue_saysWhatWasGivenAndWhatIsExpected(String text) {
       assertThatThrownBy(() -> SiValue.parse(text))
@@ -147,10 +206,23 @@ class SiValueTest {
     // BIPM, 9th edition; common practice for part values).
     @ParameterizedTest
     @CsvSource({
-      "4700, Ω, 4.7 kΩ", "1e-7, F, 100 nF", "0, V, 0 V", "2.2e-6, F, 2.2 µF", "49.9, Ω, 49.9 Ω",
-      "1e6, Ω, 1 MΩ", "999.96, Ω, 1 kΩ", "-0.0125, V, -12.5 mV", "1234.5678, Ω, 1.235 kΩ",
-      "1e-18, F, 0.001 fF", "1e15, Ω, 1000 TΩ", "1000, Hz, 1 kHz", "0.47, Ω, 470 mΩ",
-      "15, V, 15 V", "2.2e-11, F, 22 pF", "4.99e5, Ω, 499 kΩ", "-0.0, V, 0 V"
+      "4700, Ω, 4.7 kΩ",
+      "1e-7, F, 100 nF",
+      "0, V, 0 V",
+      "2.2e-6, F, 2.2 µF",
+      "49.9, Ω, 49.9 Ω",
+      "1e6, Ω, 1 MΩ",
+      "999.96, Ω, 1 kΩ",
+      "-0.0125, V, -12.5 mV",
+      "1234.5678, Ω, 1.235 kΩ",
+      "1e-18, F, 0.001 fF",
+      "1e15, Ω, 1000 TΩ",
+      "1000, Hz, 1 kHz",
+      "0.47, Ω, 470 mΩ",
+      "15, V, 15 V",
+      "2.2e-11, F, 22 pF",
+      "4.99e5, Ω, 499 kΩ",
+      "-0.0, V, 0 V"
     })
     void engineeringNotation(double value, String unit, String expected) {
       assertEquals(expected, SiValue.format(value, unit));
@@ -205,9 +277,25 @@ class SiValueTest {
     // (1K0, R10).
     @ParameterizedTest
     @CsvSource({
-      "4700, 4K7", "470, 470R", "0, 0R", "0.47, R47", "4.7, 4R7", "1000, 1K0", "10000, 10K",
-      "1e6, 1M0", "1.5e6, 1M5", "4990, 4K99", "49.9, 49R9", "0.1, R10", "2.2e9, 2G2",
-      "100, 100R", "1, 1R0", "0.047, R047", "332000, 332K", "1e12, 1T0", "4753.4, 4K753"
+      "4700, 4K7",
+      "470, 470R",
+      "0, 0R",
+      "0.47, R47",
+      "4.7, 4R7",
+      "1000, 1K0",
+      "10000, 10K",
+      "1e6, 1M0",
+      "1.5e6, 1M5",
+      "4990, 4K99",
+      "49.9, 49R9",
+      "0.1, R10",
+      "2.2e9, 2G2",
+      "100, 100R",
+      "1, 1R0",
+      "0.047, R047",
+      "332000, 332K",
+      "1e12, 1T0",
+      "4753.4, 4K753"
     })
     void resistance(double ohms, String expected) {
       assertEquals(expected, SiValue.rkm(ohms));
@@ -216,8 +304,16 @@ class SiValueTest {
     // IEC 60062 capacitance code (from memory), with ASCII u for micro (common practice).
     @ParameterizedTest
     @CsvSource({
-      "2.2e-6, 2u2", "1e-7, 100n", "6.8e-9, 6n8", "4.7e-13, p47", "1e-9, 1n0", "2.2e-11, 22p",
-      "1e-3, 1m0", "1.5, 1F5", "4.7e-5, 47u", "0, 0F"
+      "2.2e-6, 2u2",
+      "1e-7, 100n",
+      "6.8e-9, 6n8",
+      "4.7e-13, p47",
+      "1e-9, 1n0",
+      "2.2e-11, 22p",
+      "1e-3, 1m0",
+      "1.5, 1F5",
+      "4.7e-5, 47u",
+      "0, 0F"
     })
     void capacitance(double farads, String expected) {
       assertEquals(expected, SiValue.rkmFarads(farads));

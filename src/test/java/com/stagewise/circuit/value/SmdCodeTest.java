@@ -19,8 +19,21 @@ class SmdCodeTest {
     // resistor makers' marking guides).
     @ParameterizedTest
     @CsvSource({
-      "472, 4700", "101, 100", "100, 10", "103, 10000", "105, 1e6", "220, 22", "4R7, 4.7",
-      "R47, 0.47", "1R0, 1", "000, 0", "0, 0", "00, 0", "' 472 ', 4700", "r47, 0.47", "107, 1e8"
+      "472, 4700",
+      "101, 100",
+      "100, 10",
+      "103, 10000",
+      "105, 1e6",
+      "220, 22",
+      "4R7, 4.7",
+      "R47, 0.47",
+      "1R0, 1",
+      "000, 0",
+      "0, 0",
+      "00, 0",
+      "' 472 ', 4700",
+      "r47, 0.47",
+      "107, 1e8"
     })
     void threeDigit(String code, double ohms) {
       assertEquals(ohms, SmdCode.decode(code));
@@ -29,8 +42,17 @@ class SmdCodeTest {
     // 4-digit code: three digits and a power of ten (common practice, 1 % parts).
     @ParameterizedTest
     @CsvSource({
-      "4702, 47000", "1003, 100000", "1000, 100", "49R9, 49.9", "1R00, 1", "R100, 0.1",
-      "0000, 0", "4991, 4990", "10R0, 10", "R047, 0.047", "2491, 2490"
+      "4702, 47000",
+      "1003, 100000",
+      "1000, 100",
+      "49R9, 49.9",
+      "1R00, 1",
+      "R100, 0.1",
+      "0000, 0",
+      "4991, 4990",
+      "10R0, 10",
+      "R047, 0.047",
+      "2491, 2490"
     })
     void fourDigit(String code, double ohms) {
       assertEquals(ohms, SmdCode.decode(code));
@@ -75,7 +97,8 @@ class SmdCodeTest {
     void eia96IndexOutOfRange_saysSo(String code) {
       assertThatThrownBy(() -> SmdCode.decode(code))
           .isInstanceOf(InvalidInputException.class)
-          .hasMessageContaining("EIA-96 index " + code.substring(0, 2) + " is not between 01 and 96");
+          .hasMessageContaining(
+              "EIA-96 index " + code.substring(0, 2) + " is not between 01 and 96");
     }
 
     @ParameterizedTest
@@ -91,8 +114,17 @@ class SmdCodeTest {
   class Encode {
     @ParameterizedTest
     @CsvSource({
-      "4700, 472", "100, 101", "10, 100", "4.7, 4R7", "0.47, R47", "0, 000", "1e6, 105",
-      "22, 220", "1, 1R0", "0.1, R10", "9.1e8, 917"
+      "4700, 472",
+      "100, 101",
+      "10, 100",
+      "4.7, 4R7",
+      "0.47, R47",
+      "0, 000",
+      "1e6, 105",
+      "22, 220",
+      "1, 1R0",
+      "0.1, R10",
+      "9.1e8, 917"
     })
     void threeDigit(double ohms, String code) {
       assertEquals(code, SmdCode.encodeThreeDigit(ohms));
@@ -100,8 +132,17 @@ class SmdCodeTest {
 
     @ParameterizedTest
     @CsvSource({
-      "47000, 4702", "100000, 1003", "100, 1000", "49.9, 49R9", "0.1, R100", "4990, 4991",
-      "0, 0000", "10, 10R0", "1, 1R00", "0.047, R047", "4.99, 4R99"
+      "47000, 4702",
+      "100000, 1003",
+      "100, 1000",
+      "49.9, 49R9",
+      "0.1, R100",
+      "4990, 4991",
+      "0, 0000",
+      "10, 10R0",
+      "1, 1R00",
+      "0.047, R047",
+      "4.99, 4R99"
     })
     void fourDigit(double ohms, String code) {
       assertEquals(code, SmdCode.encodeFourDigit(ohms));
@@ -109,8 +150,14 @@ class SmdCodeTest {
 
     @ParameterizedTest
     @CsvSource({
-      "10000, 01C", "49.9, 68X", "100, 01A", "0.1, 01Z", "97.6e6, 96F", "4990, 68B",
-      "1.24e6, 10E", "1, 01Y"
+      "10000, 01C",
+      "49.9, 68X",
+      "100, 01A",
+      "0.1, 01Z",
+      "97.6e6, 96F",
+      "4990, 68B",
+      "1.24e6, 10E",
+      "1, 01Y"
     })
     void eia96(double ohms, String code) {
       assertEquals(code, SmdCode.encodeEia96(ohms));
@@ -143,8 +190,7 @@ class SmdCodeTest {
           .hasMessage(
               "resistance 4.7 kΩ is not an E96 value, so it has no EIA-96 code; the nearest E96"
                   + " value is 4.75 kΩ");
-      assertThatThrownBy(() -> SmdCode.encodeEia96(0))
-          .isInstanceOf(InvalidInputException.class);
+      assertThatThrownBy(() -> SmdCode.encodeEia96(0)).isInstanceOf(InvalidInputException.class);
       assertThatThrownBy(() -> SmdCode.encodeEia96(1e8))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageContaining("outside the EIA-96 range");
@@ -156,8 +202,7 @@ class SmdCodeTest {
       assertThatThrownBy(() -> SmdCode.encodeThreeDigit(ohms))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageContaining("has no SMD code");
-      assertThatThrownBy(() -> SmdCode.encodeEia96(ohms))
-          .isInstanceOf(InvalidInputException.class);
+      assertThatThrownBy(() -> SmdCode.encodeEia96(ohms)).isInstanceOf(InvalidInputException.class);
     }
   }
 

@@ -15,8 +15,19 @@ class ToleranceTest {
   // A percentage is a hundredth (ISO 80000-1); the contract accepts "1%" or a fraction 0.01.
   @ParameterizedTest
   @CsvSource({
-    "1%, 0.01", "0.5 %, 0.005", "0.01, 0.01", "±5%, 0.05", "+/-10 %, 0.1", "+-2%, 0.02",
-    "20%, 0.2", "0, 0", "0%, 0", "0.1%, 0.001", "0.25%, 0.0025", "99.9%, 0.999", ".5%, 0.005",
+    "1%, 0.01",
+    "0.5 %, 0.005",
+    "0.01, 0.01",
+    "±5%, 0.05",
+    "+/-10 %, 0.1",
+    "+-2%, 0.02",
+    "20%, 0.2",
+    "0, 0",
+    "0%, 0",
+    "0.1%, 0.001",
+    "0.25%, 0.0025",
+    "99.9%, 0.999",
+    ".5%, 0.005",
     "  5%  , 0.05"
   })
   void parse_percentOrFraction(String text, double expected) {
@@ -36,8 +47,9 @@ class ToleranceTest {
   void parse_bareWholeNumber_suggestsAPercentSign() {
     assertThatThrownBy(() -> Tolerance.parse("5"))
         .isInstanceOf(InvalidInputException.class)
-        .hasMessage("tolerance \"5\" (5.0) must be at least 0 and below 1 (100 %); write 5% for a"
-            + " percentage");
+        .hasMessage(
+            "tolerance \"5\" (5.0) must be at least 0 and below 1 (100 %); write 5% for a"
+                + " percentage");
   }
 
   @ParameterizedTest
@@ -73,8 +85,15 @@ class ToleranceTest {
 
   @ParameterizedTest
   @CsvSource({
-    "0.01, 1%", "0.005, 0.5%", "0.05, 5%", "0.0025, 0.25%", "0.07, 7%", "0, 0%", "0.2, 20%",
-    "0.0001, 0.01%", "0.123456, 12.35%"
+    "0.01, 1%",
+    "0.005, 0.5%",
+    "0.05, 5%",
+    "0.0025, 0.25%",
+    "0.07, 7%",
+    "0, 0%",
+    "0.2, 20%",
+    "0.0001, 0.01%",
+    "0.123456, 12.35%"
   })
   void format_percentWithoutTrailingZeros(double fraction, String expected) {
     assertEquals(expected, Tolerance.format(fraction));

@@ -49,7 +49,8 @@ class HistoryExchangeTest {
 
   @Test
   void exportThenImport_intoEmptyHistory_bringsEverythingExactly() {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       fill(a);
       HistoryBundle exported = a.export(new ExportSelection.All(), "test");
       HistoryBundle parsed = roundTrip(exported);
@@ -65,7 +66,8 @@ class HistoryExchangeTest {
 
   @Test
   void importTwice_duplicatesNothing() {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       fill(a);
       HistoryBundle bundle = roundTrip(a.export(new ExportSelection.All(), "test"));
       b.importBundle(bundle, "x");
@@ -79,16 +81,22 @@ class HistoryExchangeTest {
 
   @Test
   void import_newerLocalEdit_isKeptAndReported() {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       fill(a);
       HistoryBundle early = a.export(new ExportSelection.All(), "t");
       b.importBundle(early, "x");
-      RepairCase open = b.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)).stream()
-          .map(h -> b.repairCase(h.caseId()).orElseThrow()).findFirst().orElseThrow();
+      RepairCase open =
+          b.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)).stream()
+              .map(h -> b.repairCase(h.caseId()).orElseThrow())
+              .findFirst()
+              .orElseThrow();
       // Bench B closes the case; then a stale copy from A (still open, older) arrives.
       b.closeCase(open.id(), Outcome.FIXED, List.of("C7:short"));
       ImportReport report = b.importBundle(early, "x");
-      assertThat(report.conflicts()).extracting(ImportReport.Conflict::id).containsExactly(open.id());
+      assertThat(report.conflicts())
+          .extracting(ImportReport.Conflict::id)
+          .containsExactly(open.id());
       assertThat(report.conflicts().get(0).reason()).contains("kept the local copy");
       assertThat(b.repairCase(open.id()).orElseThrow().status()).isEqualTo(CaseStatus.CLOSED);
     }
@@ -96,10 +104,14 @@ class HistoryExchangeTest {
 
   @Test
   void import_newerBundleCopy_replacesTheOlderLocalOne() {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       fill(a);
       b.importBundle(a.export(new ExportSelection.All(), "t"), "x");
-      String openId = a.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)).get(0).caseId();
+      String openId =
+          a.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN))
+              .get(0)
+              .caseId();
       a.closeCase(openId, Outcome.RETURNED, List.of());
       ImportReport report = b.importBundle(a.export(new ExportSelection.All(), "t"), "x");
       assertThat(report.updated()).isEqualTo(1);
@@ -110,13 +122,15 @@ class HistoryExchangeTest {
 
   @Test
   void import_sameModelAndSerialUnderOtherIds_matchesInsteadOfDuplicating() {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       BoardModel ma = a.boardModel("PSU-30", "");
       Unit ua = a.addUnit("H-1", ma.id(), "");
       a.openCase(ua.id(), "dead on arrival");
       BoardModel mb = b.boardModel("psu-30", "");
       Unit ub = b.addUnit("H-1", mb.id(), "");
-      ImportReport report = b.importBundle(roundTrip(a.export(new ExportSelection.All(), "t")), "x");
+      ImportReport report =
+          b.importBundle(roundTrip(a.export(new ExportSelection.All(), "t")), "x");
       assertThat(report.matched()).hasSize(2);
       assertThat(b.boardModels()).hasSize(1);
       assertThat(b.unitsBySerial("H-1")).containsExactly(ub);
@@ -151,38 +165,118 @@ class HistoryExchangeTest {
 
   static Stream<Arguments> hostileBundles() {
     return Stream.of(
-        Arguments.of("broken JSON", (Consumer<ObjectNode>) null, "{\"format\": \"stagewise-history\", \"version\": 1,", "not valid JSON"),
-        Arguments.of("trailing data", null, "{\"format\": \"stagewise-history\", \"version\": 1} {}", "not valid JSON"),
-        Arguments.of("duplicate key", null, "{\"format\": \"stagewise-history\", \"version\": 1, \"version\": 1}", "Duplicate field"),
+        Arguments.of(
+            "broken JSON",
+            (Consumer<ObjectNode>) null,
+            "{\"format\": \"stagewise-history\", \"version\": 1,",
+            "not valid JSON"),
+        Arguments.of(
+            "trailing data",
+            null,
+            "{\"format\": \"stagewise-history\", \"version\": 1} {}",
+            "not valid JSON"),
+        Arguments.of(
+            "duplicate key",
+            null,
+            "{\"format\": \"stagewise-history\", \"version\": 1, \"version\": 1}",
+            "Duplicate field"),
         Arguments.of("not an object", null, "[1, 2]", "expected an object"),
-        Arguments.of("newer version", edit(r -> r.put("version", 2)), null, "version: bundle format version 2 is newer"),
-        Arguments.of("wrong format", edit(r -> r.put("format", "stagewise-stage")), null, "format:"),
+        Arguments.of(
+            "newer version",
+            edit(r -> r.put("version", 2)),
+            null,
+            "version: bundle format version 2 is newer"),
+        Arguments.of(
+            "wrong format", edit(r -> r.put("format", "stagewise-stage")), null, "format:"),
         Arguments.of("unknown key", edit(r -> r.put("extra", true)), null, "extra: unknown key"),
-        Arguments.of("wrong type", edit(r -> first(r, "readings").put("value", "13.4")), null, "readings[0].value: expected a number, got a string"),
-        Arguments.of("wrong type of list", edit(r -> r.put("cases", "none")), null, "cases: expected an array"),
-        Arguments.of("bad status", edit(r -> first(r, "cases").put("status", "maybe")), null, "cases[0].status"),
-        Arguments.of("bad time", edit(r -> first(r, "notes").put("at", "yesterday")), null, "notes[0].at"),
-        Arguments.of("huge string", edit(r -> first(r, "notes").put("text", "x".repeat(3_000_000))), null, "limits"),
-        Arguments.of("long note", edit(r -> first(r, "notes").put("text", "x".repeat(60_000))), null, "notes[0].text: is too long"),
-        Arguments.of("line break in serial", edit(r -> first(r, "units").put("serial", "A\nB")), null, "units[0].serial"),
-        Arguments.of("bad id", edit(r -> first(r, "units").put("id", "1; DROP TABLE unit")), null, "units[0].id: expected an id"),
-        Arguments.of("duplicate id", edit(r -> ((ObjectNode) r.get("notes").get(0)).put("id", r.get("readings").get(0).get("id").textValue())), null, "appears twice"),
-        Arguments.of("id of the wrong kind", edit(r -> first(r, "readings").put("caseId", r.get("units").get(0).get("id").textValue())), null, "readings[0].caseId: expected the id of a case, but"),
-        Arguments.of("dangling reference", edit(r -> first(r, "cases").put("unitId", "00000000-0000-4000-8000-000000000000")), null, "cases[0].unitId: no unit"),
-        Arguments.of("bad fault id", edit(r -> ((ArrayNode) r.get("cases").get(0).get("confirmedFaults")).add("R2 is open")), null, "cases[0].confirmedFaults"),
-        Arguments.of("NaN", null, "{\"format\":\"stagewise-history\",\"version\":1,\"readings\":[{\"value\":NaN}]}", "not valid JSON"),
-        Arguments.of("closed without outcome", edit(r -> first(r, "cases").put("status", "closed").remove("outcome")), null, "cases[0]"));
+        Arguments.of(
+            "wrong type",
+            edit(r -> first(r, "readings").put("value", "13.4")),
+            null,
+            "readings[0].value: expected a number, got a string"),
+        Arguments.of(
+            "wrong type of list",
+            edit(r -> r.put("cases", "none")),
+            null,
+            "cases: expected an array"),
+        Arguments.of(
+            "bad status",
+            edit(r -> first(r, "cases").put("status", "maybe")),
+            null,
+            "cases[0].status"),
+        Arguments.of(
+            "bad time", edit(r -> first(r, "notes").put("at", "yesterday")), null, "notes[0].at"),
+        Arguments.of(
+            "huge string",
+            edit(r -> first(r, "notes").put("text", "x".repeat(3_000_000))),
+            null,
+            "limits"),
+        Arguments.of(
+            "long note",
+            edit(r -> first(r, "notes").put("text", "x".repeat(60_000))),
+            null,
+            "notes[0].text: is too long"),
+        Arguments.of(
+            "line break in serial",
+            edit(r -> first(r, "units").put("serial", "A\nB")),
+            null,
+            "units[0].serial"),
+        Arguments.of(
+            "bad id",
+            edit(r -> first(r, "units").put("id", "1; DROP TABLE unit")),
+            null,
+            "units[0].id: expected an id"),
+        Arguments.of(
+            "duplicate id",
+            edit(
+                r ->
+                    ((ObjectNode) r.get("notes").get(0))
+                        .put("id", r.get("readings").get(0).get("id").textValue())),
+            null,
+            "appears twice"),
+        Arguments.of(
+            "id of the wrong kind",
+            edit(
+                r ->
+                    first(r, "readings")
+                        .put("caseId", r.get("units").get(0).get("id").textValue())),
+            null,
+            "readings[0].caseId: expected the id of a case, but"),
+        Arguments.of(
+            "dangling reference",
+            edit(r -> first(r, "cases").put("unitId", "00000000-0000-4000-8000-000000000000")),
+            null,
+            "cases[0].unitId: no unit"),
+        Arguments.of(
+            "bad fault id",
+            edit(r -> ((ArrayNode) r.get("cases").get(0).get("confirmedFaults")).add("R2 is open")),
+            null,
+            "cases[0].confirmedFaults"),
+        Arguments.of(
+            "NaN",
+            null,
+            "{\"format\":\"stagewise-history\",\"version\":1,\"readings\":[{\"value\":NaN}]}",
+            "not valid JSON"),
+        Arguments.of(
+            "closed without outcome",
+            edit(r -> first(r, "cases").put("status", "closed").remove("outcome")),
+            null,
+            "cases[0]"));
   }
 
   @ParameterizedTest(name = "{0}")
   @MethodSource("hostileBundles")
   void import_hostileBundle_isRefusedWithTheFieldAndNothingChanges(
       String name, Consumer<ObjectNode> edit, String text, String expected) throws Exception {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       fill(a);
       String json = text;
       if (json == null) {
-        ObjectNode tree = (ObjectNode) new ObjectMapper().readTree(HistoryBundleJson.toJson(a.export(new ExportSelection.All(), "t")));
+        ObjectNode tree =
+            (ObjectNode)
+                new ObjectMapper()
+                    .readTree(HistoryBundleJson.toJson(a.export(new ExportSelection.All(), "t")));
         // Cases are written oldest first; make the first case the closed one for the edits.
         edit.accept(tree);
         json = tree.toString();
@@ -191,33 +285,51 @@ class HistoryExchangeTest {
       HistoryBundle localBefore = b.export(new ExportSelection.All(), "t");
       String input = json;
       assertThatThrownBy(
-              () -> b.importBundle(
-                  HistoryBundleJson.read(new ByteArrayInputStream(input.getBytes(StandardCharsets.UTF_8)), "bundle.json"),
-                  "bundle.json"))
+              () ->
+                  b.importBundle(
+                      HistoryBundleJson.read(
+                          new ByteArrayInputStream(input.getBytes(StandardCharsets.UTF_8)),
+                          "bundle.json"),
+                      "bundle.json"))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageStartingWith("bundle.json: ")
           .hasMessageContaining(expected);
-      assertThat(withoutExportTime(b.export(new ExportSelection.All(), "t"))).isEqualTo(withoutExportTime(localBefore));
+      assertThat(withoutExportTime(b.export(new ExportSelection.All(), "t")))
+          .isEqualTo(withoutExportTime(localBefore));
       assertThat(b.boardModels()).containsExactly(before);
     }
   }
 
   @Test
   void import_failureAfterSomeRecordsWereWritten_leavesNothing() {
-    try (HistoryStore a = open("a.db"); HistoryStore b = open("b.db")) {
+    try (HistoryStore a = open("a.db");
+        HistoryStore b = open("b.db")) {
       fill(a);
       HistoryBundle bundle = a.export(new ExportSelection.All(), "t");
       // A reading whose value is not finite passes the JSON reader only through the API; the
-      // check runs before the merge, so add one that breaks the database's CHECK constraint instead:
+      // check runs before the merge, so add one that breaks the database's CHECK constraint
+      // instead:
       // a case that is open but has an outcome is refused by the bundle checks too. Use a unit that
       // refers to a board model missing everywhere, placed after valid records.
-      Unit orphan = new Unit(HistoryStore.newId(), "ORPHAN", HistoryStore.newId(), "", clock.instant());
+      Unit orphan =
+          new Unit(HistoryStore.newId(), "ORPHAN", HistoryStore.newId(), "", clock.instant());
       List<Unit> units = new java.util.ArrayList<>(bundle.units());
       units.add(orphan);
       HistoryBundle broken =
-          new HistoryBundle(1, bundle.exportedAt(), "t", bundle.boardModels(), bundle.stageSheets(), units,
-              bundle.cases(), bundle.readings(), bundle.suspectLists(), bundle.actions(), bundle.notes());
-      assertThatThrownBy(() -> b.importBundle(broken, "x")).isInstanceOf(InvalidInputException.class)
+          new HistoryBundle(
+              1,
+              bundle.exportedAt(),
+              "t",
+              bundle.boardModels(),
+              bundle.stageSheets(),
+              units,
+              bundle.cases(),
+              bundle.readings(),
+              bundle.suspectLists(),
+              bundle.actions(),
+              bundle.notes());
+      assertThatThrownBy(() -> b.importBundle(broken, "x"))
+          .isInstanceOf(InvalidInputException.class)
           .hasMessageContaining("units[" + (units.size() - 1) + "].boardModelId");
       assertThat(b.isEmpty()).isTrue();
     }
@@ -236,7 +348,10 @@ class HistoryExchangeTest {
   /** Fills a history with two board models, three units, one closed and two open cases. */
   private void fill(HistoryStore store) {
     BoardModel mixer = store.boardModel("MX-8 main board", "Northfield Audio (invented)");
-    store.addStageSheet(mixer.id(), "Input buffer", "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Ω\"}");
+    store.addStageSheet(
+        mixer.id(),
+        "Input buffer",
+        "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Ω\"}");
     BoardModel psu = store.boardModel("PSU-30", "Harbour Instruments (invented)");
     Unit m1 = store.addUnit("NF-8-0001", mixer.id(), "");
     Unit m2 = store.addUnit("NF-8-0002", mixer.id(), "job 17");
@@ -245,10 +360,34 @@ class HistoryExchangeTest {
     store.addReadings(
         closed.id(),
         List.of(
-            new StoredReading(HistoryStore.newId(), closed.id(), "U1.1", ReadingKind.DC, 13.41, null, null, "6000-count", clock.instant()),
-            new StoredReading(HistoryStore.newId(), closed.id(), "OUT", ReadingKind.AC, 0.0, 1000.0, 0.001, "", clock.instant())),
-        new SuspectListRecord(HistoryStore.newId(), closed.id(), clock.instant(), "0.1.0", "fault",
-            List.of(new StoredSuspect("R2:open", 0.7, List.of("R2:open", "R1:high"), AWKWARD, 1),
+            new StoredReading(
+                HistoryStore.newId(),
+                closed.id(),
+                "U1.1",
+                ReadingKind.DC,
+                13.41,
+                null,
+                null,
+                "6000-count",
+                clock.instant()),
+            new StoredReading(
+                HistoryStore.newId(),
+                closed.id(),
+                "OUT",
+                ReadingKind.AC,
+                0.0,
+                1000.0,
+                0.001,
+                "",
+                clock.instant())),
+        new SuspectListRecord(
+            HistoryStore.newId(),
+            closed.id(),
+            clock.instant(),
+            "0.1.0",
+            "fault",
+            List.of(
+                new StoredSuspect("R2:open", 0.7, List.of("R2:open", "R1:high"), AWKWARD, 1),
                 new StoredSuspect("U1A:stuck-high", 0.3, List.of("U1A:stuck-high"), "", 2)),
             "U1.2 dc\nOUT ac 1000 Hz"));
     store.addAction(closed.id(), ActionKind.PART_REPLACED, "R2", "47k", "47k 1%", AWKWARD);
@@ -260,12 +399,23 @@ class HistoryExchangeTest {
 
   private static HistoryBundle roundTrip(HistoryBundle bundle) {
     String json = HistoryBundleJson.toJson(bundle);
-    return HistoryBundleJson.read(new ByteArrayInputStream(json.getBytes(StandardCharsets.UTF_8)), "bundle.json");
+    return HistoryBundleJson.read(
+        new ByteArrayInputStream(json.getBytes(StandardCharsets.UTF_8)), "bundle.json");
   }
 
   private static HistoryBundle withoutExportTime(HistoryBundle b) {
-    return new HistoryBundle(b.version(), Instant.EPOCH, "", b.boardModels(), b.stageSheets(), b.units(), b.cases(),
-        b.readings(), b.suspectLists(), b.actions(), b.notes());
+    return new HistoryBundle(
+        b.version(),
+        Instant.EPOCH,
+        "",
+        b.boardModels(),
+        b.stageSheets(),
+        b.units(),
+        b.cases(),
+        b.readings(),
+        b.suspectLists(),
+        b.actions(),
+        b.notes());
   }
 
   private static Consumer<ObjectNode> edit(Consumer<ObjectNode> edit) {

@@ -56,6 +56,7 @@ public class HistoryImportBenchmark {
 
   @Benchmark
   public ImportReport importTenThousandCases() {
-    return target.importBundle(HistoryBundleJson.read(new ByteArrayInputStream(json), "bench.json"), "bench.json");
+    return target.importBundle(
+        HistoryBundleJson.read(new ByteArrayInputStream(json), "bench.json"), "bench.json");
   }
 }

@@ -88,11 +88,16 @@ class CloseOutViewModelTest {
     assertThat(file.repairCase().status()).isEqualTo(CaseStatus.CLOSED);
     assertThat(file.repairCase().outcome()).isEqualTo(Outcome.FIXED);
     assertThat(file.repairCase().confirmedFaults()).containsExactly("R2:open");
-    assertThat(file.actions()).singleElement().satisfies(a -> {
-      assertThat(a.part()).isEqualTo("R2");
-      assertThat(a.newValue()).isEqualTo("47 kΩ");
-    });
-    assertThat(file.notes()).extracting(n -> n.text()).containsExactly("Checked both half-waves on the scope.");
+    assertThat(file.actions())
+        .singleElement()
+        .satisfies(
+            a -> {
+              assertThat(a.part()).isEqualTo("R2");
+              assertThat(a.newValue()).isEqualTo("47 kΩ");
+            });
+    assertThat(file.notes())
+        .extracting(n -> n.text())
+        .containsExactly("Checked both half-waves on the scope.");
     assertThat(closed).containsExactly(caseId);
     assertThat(t.bench.openCaseProperty().get()).isNull();
     // The shop's memory now counts the fault for this board model.

@@ -27,7 +27,8 @@ class BandScaleTest {
 
   @Test
   void fit_ignoresNonFiniteValues() {
-    BandScale s = BandScale.fit(Double.NaN, Double.NaN, Double.NaN, List.of(Double.POSITIVE_INFINITY));
+    BandScale s =
+        BandScale.fit(Double.NaN, Double.NaN, Double.NaN, List.of(Double.POSITIVE_INFINITY));
     assertThat(s).isEqualTo(new BandScale(-1, 1));
   }
 
@@ -40,7 +41,8 @@ class BandScaleTest {
 
   @Test
   void labelRows_separatesOverlappingLabels() {
-    int[] rows = BandScale.labelRows(new double[] {100, 110, 300, 105}, new double[] {60, 60, 60, 60}, 8);
+    int[] rows =
+        BandScale.labelRows(new double[] {100, 110, 300, 105}, new double[] {60, 60, 60, 60}, 8);
     assertThat(rows).containsExactly(0, 1, 0, 2);
   }
 

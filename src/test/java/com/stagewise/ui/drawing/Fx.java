@@ -24,7 +24,8 @@ final class Fx {
 
   private static boolean started;
   // Held so the setting survives garbage collection; the toolkit warns about the class path.
-  private static final java.util.logging.Logger FX_LOG = java.util.logging.Logger.getLogger("javafx");
+  private static final java.util.logging.Logger FX_LOG =
+      java.util.logging.Logger.getLogger("javafx");
 
   private Fx() {}
 
@@ -87,7 +88,10 @@ final class Fx {
     return SwingFXUtils.fromFXImage(image, null);
   }
 
-  /** Writes the picture under docs/screens/drawings when the run was started with -Dscreenshots=true. */
+  /**
+   * Writes the picture under docs/screens/drawings when the run was started with
+   * -Dscreenshots=true.
+   */
   static void keep(BufferedImage image, String name) {
     if (!Boolean.getBoolean("screenshots")) {
       return;

@@ -107,7 +107,8 @@ class PackageAndBandRenderTest {
         Fx.call(
             () -> {
               BandChart chart = new BandChart();
-              chart.show("SUM", 0.0, 0.0, Double.NaN, List.of(new BandChart.Marker("R3 open", 0.9)));
+              chart.show(
+                  "SUM", 0.0, 0.0, Double.NaN, List.of(new BandChart.Marker("R3 open", 0.9)));
               BufferedImage shot = Fx.render(chart, 560, 140);
               assertThat(chart.lookup("#no-reading")).isNotNull();
               assertThat(chart.lookup("#measured-marker")).isNull();
@@ -138,7 +139,23 @@ class PackageAndBandRenderTest {
     Event.fireEvent(
         node,
         new MouseEvent(
-            MouseEvent.MOUSE_CLICKED, x, y, x, y, MouseButton.PRIMARY, 1,
-            false, false, false, false, true, false, false, true, false, true, null));
+            MouseEvent.MOUSE_CLICKED,
+            x,
+            y,
+            x,
+            y,
+            MouseButton.PRIMARY,
+            1,
+            false,
+            false,
+            false,
+            false,
+            true,
+            false,
+            false,
+            true,
+            false,
+            true,
+            null));
   }
 }

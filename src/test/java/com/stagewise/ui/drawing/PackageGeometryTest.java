@@ -51,7 +51,8 @@ class PackageGeometryTest {
 
   @ParameterizedTest
   @CsvSource({"8, 370, 330", "14, 370, 480", "14, 350, 440", "8, 900, 700"})
-  void fittedToARoom_keepsTargetsAt48PixelsAndFitsWhereItCan(int pins, double width, double height) {
+  void fittedToARoom_keepsTargetsAt48PixelsAndFitsWhereItCan(
+      int pins, double width, double height) {
     PackageGeometry g = PackageGeometry.of(pins, width, height);
     assertThat(g.width()).isLessThanOrEqualTo(width);
     assertThat(g.height()).isLessThanOrEqualTo(height);

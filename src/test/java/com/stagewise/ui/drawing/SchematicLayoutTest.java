@@ -49,21 +49,31 @@ class SchematicLayoutTest {
       solid.add(part.body());
       what.add("body " + part.part().ref());
     }
-    sheet.amps().forEach(a -> a.slices().forEach(slice -> {
-      solid.add(slice);
-      what.add("triangle " + a.amp().ref());
-    }));
+    sheet
+        .amps()
+        .forEach(
+            a ->
+                a.slices()
+                    .forEach(
+                        slice -> {
+                          solid.add(slice);
+                          what.add("triangle " + a.amp().ref());
+                        }));
     for (Caption caption : sheet.captions()) {
       // Pin signs sit inside the triangle by design.
-      if (caption.kind() != Sheet.CaptionKind.PIN_SIGN && caption.kind() != Sheet.CaptionKind.AMP_REF) {
+      if (caption.kind() != Sheet.CaptionKind.PIN_SIGN
+          && caption.kind() != Sheet.CaptionKind.AMP_REF) {
         solid.add(caption.box());
         what.add("caption " + caption.text());
       }
     }
-    sheet.symbols().forEach(s -> {
-      solid.add(s.box());
-      what.add("symbol " + s.kind() + " " + s.net());
-    });
+    sheet
+        .symbols()
+        .forEach(
+            s -> {
+              solid.add(s.box());
+              what.add("symbol " + s.kind() + " " + s.net());
+            });
     for (int i = 0; i < solid.size(); i++) {
       for (int j = i + 1; j < solid.size(); j++) {
         assertThat(solid.get(i).overlaps(solid.get(j)))
@@ -83,9 +93,7 @@ class SchematicLayoutTest {
         Wire a = wires.get(i);
         Wire b = wires.get(j);
         if (!a.net().equals(b.net()) && a.horizontal() == b.horizontal()) {
-          assertThat(collinearShare(a, b))
-              .as("%s and %s run on top of each other", a, b)
-              .isFalse();
+          assertThat(collinearShare(a, b)).as("%s and %s run on top of each other", a, b).isFalse();
         }
       }
       for (PartGlyph part : sheet.parts()) {
@@ -112,7 +120,9 @@ class SchematicLayoutTest {
     Sheet sheet = layout(stage);
     Map<String, double[]> sizes = new LinkedHashMap<>();
     List<String> signalNets =
-        stage.nets().stream().filter(net -> !net.equals(stage.ground()) && stage.rail(net).isEmpty()).toList();
+        stage.nets().stream()
+            .filter(net -> !net.equals(stage.ground()) && stage.rail(net).isEmpty())
+            .toList();
     for (String net : signalNets) {
       // About the size of "OUT −13.41 V +13.50 V" over a measured line; driven nets one line.
       sizes.put(net, stage.isDriven(net) ? new double[] {120, 26} : new double[] {160, 46});
@@ -147,7 +157,8 @@ class SchematicLayoutTest {
     // The upper input stage faces the lower one, so the gain resistor sits between them.
     assertThat(byRef.get("U1A").flipped()).isTrue();
     assertThat(byRef.get("U1B").flipped()).isFalse();
-    PartGlyph gain = sheet.parts().stream().filter(p -> p.part().ref().equals("R2")).findFirst().orElseThrow();
+    PartGlyph gain =
+        sheet.parts().stream().filter(p -> p.part().ref().equals("R2")).findFirst().orElseThrow();
     assertThat(gain.vertical()).isTrue();
     assertThat(gain.body().cy()).isBetween(byRef.get("U1A").y(), byRef.get("U1B").y());
   }
@@ -166,8 +177,15 @@ class SchematicLayoutTest {
   @Test
   void stageWithoutSections_isDrawnAsFallbackRows() {
     Stage stage =
-        new Stage("divider", "", "GND", List.of(), List.of(),
-            List.of(Part.resistor("R1", 1e3, 0.01, "A", "B"), Part.resistor("R2", 1e3, 0.01, "B", "GND")),
+        new Stage(
+            "divider",
+            "",
+            "GND",
+            List.of(),
+            List.of(),
+            List.of(
+                Part.resistor("R1", 1e3, 0.01, "A", "B"),
+                Part.resistor("R2", 1e3, 0.01, "B", "GND")),
             List.of());
     Sheet sheet = layout(stage);
     assertThat(sheet.parts()).hasSize(2);
@@ -190,14 +208,20 @@ class SchematicLayoutTest {
   }
 
   private static double overlap(double a1, double a2, double b1, double b2) {
-    return Math.min(Math.max(a1, a2), Math.max(b1, b2)) - Math.max(Math.min(a1, a2), Math.min(b1, b2));
+    return Math.min(Math.max(a1, a2), Math.max(b1, b2))
+        - Math.max(Math.min(a1, a2), Math.min(b1, b2));
   }
 
   @Test
   void crossings_seesAPlus() {
     Sheet sheet =
-        new Sheet(List.of(), List.of(), List.of(new Wire("A", 0, 5, 10, 5), new Wire("B", 5, 0, 5, 10)),
-            List.of(), List.of(), List.of());
+        new Sheet(
+            List.of(),
+            List.of(),
+            List.of(new Wire("A", 0, 5, 10, 5), new Wire("B", 5, 0, 5, 10)),
+            List.of(),
+            List.of(),
+            List.of());
     assertThat(crossings(sheet)).hasSize(1);
   }
 
@@ -209,7 +233,8 @@ class SchematicLayoutTest {
     assertThat(sheet.dots()).hasSize(2);
     Sheet.AmpGlyph amp = sheet.amps().get(0);
     assertThat(sheet.dots()).anyMatch(d -> d.y() == amp.minusY() && d.x() < amp.x());
-    assertThat(sheet.dots()).anyMatch(d -> d.y() == amp.y() && d.x() > amp.x() + Sheet.AmpGlyph.WIDTH);
+    assertThat(sheet.dots())
+        .anyMatch(d -> d.y() == amp.y() && d.x() > amp.x() + Sheet.AmpGlyph.WIDTH);
   }
 
   @Test

@@ -7,22 +7,22 @@ import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
+import com.stagewise.circuit.template.StageTemplate;
+import com.stagewise.circuit.template.Templates;
+import com.stagewise.interchange.StageSheet;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import com.stagewise.circuit.template.StageTemplate;
-import com.stagewise.circuit.template.Templates;
-import com.stagewise.interchange.StageSheet;
 
 /**
- * The stages the drawing tests render: every stage template, the demo library, and a few
- * topologies no template builds (built in code here) for the fallback drawing.
+ * The stages the drawing tests render: every stage template, the demo library, and a few topologies
+ * no template builds (built in code here) for the fallback drawing.
  */
 final class TestCircuits {
   private final String title;
@@ -54,11 +54,21 @@ final class TestCircuits {
     return this;
   }
 
-  private TestCircuits amp(String section, PackageType type, String inPlus, String inMinus, String out) {
+  private TestCircuits amp(
+      String section, PackageType type, String inPlus, String inMinus, String out) {
     String vMinus = rails.size() > 1 ? "VEE" : "GND";
     amps.add(
         new Amplifier(
-            "U1" + section, "U1", type, section, DeviceClass.CLASSIC_BIPOLAR, inPlus, inMinus, out, "VCC", vMinus));
+            "U1" + section,
+            "U1",
+            type,
+            section,
+            DeviceClass.CLASSIC_BIPOLAR,
+            inPlus,
+            inMinus,
+            out,
+            "VCC",
+            vMinus));
     return this;
   }
 
@@ -74,22 +84,39 @@ final class TestCircuits {
   static Map<String, Stage> fallbacks() {
     Map<String, Stage> all = new LinkedHashMap<>();
     // A twin-T notch, whose loop of parts fits no role and must still be drawn.
-    all.put("fallback-twin-t", new TestCircuits("Twin-T notch (fallback drawing)", true).in("IN", 0)
-        .r("R1", 10e3, "IN", "A").r("R2", 10e3, "A", "POS").c("C3", 20e-9, "A", "GND")
-        .c("C1", 10e-9, "IN", "B").c("C2", 10e-9, "B", "POS").r("R3", 5e3, "B", "GND")
-        .r("R4", 10e3, "POS", "GND").u1("POS", "OUT", "OUT").build());
+    all.put(
+        "fallback-twin-t",
+        new TestCircuits("Twin-T notch (fallback drawing)", true)
+            .in("IN", 0)
+            .r("R1", 10e3, "IN", "A")
+            .r("R2", 10e3, "A", "POS")
+            .c("C3", 20e-9, "A", "GND")
+            .c("C1", 10e-9, "IN", "B")
+            .c("C2", 10e-9, "B", "POS")
+            .r("R3", 5e3, "B", "GND")
+            .r("R4", 10e3, "POS", "GND")
+            .u1("POS", "OUT", "OUT")
+            .build());
     // Two cascaded sections with a feedback part from the second output back to the first input.
-    all.put("fallback-loop", new TestCircuits("Two sections in a loop (fallback drawing)", true).in("IN", 0)
-        .r("R1", 10e3, "IN", "SUMA").r("R2", 10e3, "SUMA", "OA").r("R3", 10e3, "OA", "SUMB")
-        .r("R4", 22e3, "SUMB", "OUT").r("R5", 100e3, "OUT", "SUMA")
-        .amp("A", PackageType.DUAL_8, "GND", "SUMA", "OA").amp("B", PackageType.DUAL_8, "GND", "SUMB", "OUT").build());
+    all.put(
+        "fallback-loop",
+        new TestCircuits("Two sections in a loop (fallback drawing)", true)
+            .in("IN", 0)
+            .r("R1", 10e3, "IN", "SUMA")
+            .r("R2", 10e3, "SUMA", "OA")
+            .r("R3", 10e3, "OA", "SUMB")
+            .r("R4", 22e3, "SUMB", "OUT")
+            .r("R5", 100e3, "OUT", "SUMA")
+            .amp("A", PackageType.DUAL_8, "GND", "SUMA", "OA")
+            .amp("B", PackageType.DUAL_8, "GND", "SUMB", "OUT")
+            .build());
     return all;
   }
 
   /**
-   * Returns every stage template with its default values, the variants the templates offer
-   * (summing with 2 and 4 inputs, integrator without R2, differentiator without R1), the stage
-   * sheets of the demo library and the fallbacks.
+   * Returns every stage template with its default values, the variants the templates offer (summing
+   * with 2 and 4 inputs, integrator without R2, differentiator without R1), the stage sheets of the
+   * demo library and the fallbacks.
    */
   static Map<String, Stage> all() {
     Map<String, Stage> all = new LinkedHashMap<>();
@@ -99,9 +126,12 @@ final class TestCircuits {
     all.put("template-summing-2", Templates.named("summing").build(Map.of("inputs", "2")));
     all.put("template-summing-4", Templates.named("summing").build(Map.of("inputs", "4")));
     all.put("template-integrator-no-r2", Templates.named("integrator").build(Map.of("r2", "none")));
-    all.put("template-differentiator-no-r1", Templates.named("differentiator").build(Map.of("r1", "none")));
+    all.put(
+        "template-differentiator-no-r1",
+        Templates.named("differentiator").build(Map.of("r1", "none")));
     try (Stream<Path> files = Files.list(Path.of("data", "stages"))) {
-      for (Path file : files.filter(f -> f.toString().endsWith(StageSheet.SUFFIX)).sorted().toList()) {
+      for (Path file :
+          files.filter(f -> f.toString().endsWith(StageSheet.SUFFIX)).sorted().toList()) {
         String name = file.getFileName().toString().replace(StageSheet.SUFFIX, "");
         all.put("library-" + name, StageSheet.read(file));
       }

@@ -47,7 +47,8 @@ class ReadingsViewModelTest {
     // dual-8 pinout (DESIGN.md, industry standard): v+ is pin 8, v- is pin 4. Rails first is
     // common practice: a missing supply explains everything downstream.
     assertThat(model.probeProperty().get().at()).isEqualTo("U1.8");
-    assertThat(model.probeProperty().get().title()).isEqualTo("U1 pin 8 — positive supply pin (VCC)");
+    assertThat(model.probeProperty().get().title())
+        .isEqualTo("U1 pin 8 — positive supply pin (VCC)");
     read(14.96);
     assertThat(model.probeProperty().get().at()).isEqualTo("U1.4");
     read(-14.97);
@@ -75,7 +76,9 @@ class ReadingsViewModelTest {
     assertThat(model.rows().get(1).healthy()).isFalse();
     assertThat(model.rows().get(3).healthy()).isTrue();
     var file = t.store.caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
-    assertThat(file.readings()).extracting(r -> r.at()).containsExactly("U1.8", "U1.4", "U1.1", "U1.2");
+    assertThat(file.readings())
+        .extracting(r -> r.at())
+        .containsExactly("U1.8", "U1.4", "U1.1", "U1.2");
     assertThat(file.suspectLists()).hasSize(4);
     assertThat(file.suspectLists().get(3).suspects().get(0).fault()).isEqualTo(first.fault());
   }
@@ -105,14 +108,17 @@ class ReadingsViewModelTest {
   @Test
   void expected_inverting_matchesClosedForm() {
     // Inverting amplifier: Vout = -(Rf/Rin) Vin = -4.7 V (textbook closed form).
-    assertThat(model.expectedProperty().get().at("OUT")).isCloseTo(-4.7, org.assertj.core.data.Offset.offset(1e-3));
+    assertThat(model.expectedProperty().get().at("OUT"))
+        .isCloseTo(-4.7, org.assertj.core.data.Offset.offset(1e-3));
   }
 
   @Test
   void stage_arrivingAfterReadings_asOnResume_diagnosesThemAtOnce() {
     var again = new ReadingsViewModel(t.bench);
     t.bench.stageProperty().set(null);
-    t.bench.readings().setAll(Reading.dc("U1.8", 14.96), Reading.dc("U1.4", -14.97), Reading.dc("U1.1", -13.47));
+    t.bench
+        .readings()
+        .setAll(Reading.dc("U1.8", 14.96), Reading.dc("U1.4", -14.97), Reading.dc("U1.1", -13.47));
     t.bench.stageProperty().set(TestBench.invertingStage("Test amp board"));
     assertThat(t.bench.diagnosisProperty().get()).isNotNull();
     assertThat(again.rows()).hasSize(3);

@@ -28,7 +28,10 @@ class StageViewModelTest {
     t = TestBench.open(temp);
     var board = t.store.boardModel("Test amp board", "");
     boardId = board.id();
-    t.store.addStageSheet(board.id(), "Inverting amplifier, test", StageSheet.write(TestBench.invertingStage(board.name())));
+    t.store.addStageSheet(
+        board.id(),
+        "Inverting amplifier, test",
+        StageSheet.write(TestBench.invertingStage(board.name())));
     var unit = t.store.addUnit("TA-1", board.id(), "");
     t.bench.showUnit(unit, board);
     t.bench.startCase(t.store.openCase(unit.id(), "Dead"));
@@ -44,14 +47,17 @@ class StageViewModelTest {
 
   @Test
   void loadLibrary_listsTheBoardModelsStages() {
-    assertThat(model.library()).extracting(StageViewModel.LibraryEntry::title).containsExactly("Inverting amplifier, test");
+    assertThat(model.library())
+        .extracting(StageViewModel.LibraryEntry::title)
+        .containsExactly("Inverting amplifier, test");
     assertThat(model.libraryNoteProperty().get()).isEqualTo("1 stage of Test amp board.");
   }
 
   @Test
   void choose_showsPartsAndExpectedVoltsWithTheirRange() {
     model.choose(model.library().get(0).stage());
-    assertThat(model.parts()).extracting(StageViewModel.PartRow::line)
+    assertThat(model.parts())
+        .extracting(StageViewModel.PartRow::line)
         .containsExactly("R1   10 kΩ  ±1%   (IN – SUM)", "R2   47 kΩ  ±1%   (SUM – OUT)");
     var expected = model.expectedProperty().get();
     // Textbook inverting gain -Rf/Rin = -4.7 for 1 V in; 1 % parts move it by about 1 % each way.
@@ -102,6 +108,7 @@ class StageViewModelTest {
     model.useStage();
     assertThat(t.cautions).containsExactly(SafetyCaution.Reason.HIGH_RAILS);
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
-    assertThat(t.resume.load(t.bench.openCaseProperty().get().id()).orElseThrow().stage()).isPresent();
+    assertThat(t.resume.load(t.bench.openCaseProperty().get().id()).orElseThrow().stage())
+        .isPresent();
   }
 }

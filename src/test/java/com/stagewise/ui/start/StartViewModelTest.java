@@ -64,16 +64,20 @@ class StartViewModelTest {
   @Test
   void glance_closedCase_showsOutcomeFaultsAndPartsReplaced() {
     var rc = t.store.openCase(unit.id(), "No output");
-    t.store.addAction(rc.id(), com.stagewise.history.record.ActionKind.PART_REPLACED, "R2", "open", "47k", "");
+    t.store.addAction(
+        rc.id(), com.stagewise.history.record.ActionKind.PART_REPLACED, "R2", "open", "47k", "");
     t.store.closeCase(rc.id(), Outcome.FIXED, List.of("R2:open"));
     model.serialProperty().set("TA-1001");
     model.search();
-    assertThat(model.glance()).singleElement().satisfies(line -> {
-      assertThat(line.outcome()).isEqualTo("fixed");
-      assertThat(line.faults()).isEqualTo("R2 open");
-      assertThat(line.replaced()).isEqualTo("R2 → 47k");
-      assertThat(line.open()).isFalse();
-    });
+    assertThat(model.glance())
+        .singleElement()
+        .satisfies(
+            line -> {
+              assertThat(line.outcome()).isEqualTo("fixed");
+              assertThat(line.faults()).isEqualTo("R2 open");
+              assertThat(line.replaced()).isEqualTo("R2 → 47k");
+              assertThat(line.open()).isFalse();
+            });
   }
 
   @Test
@@ -93,7 +97,8 @@ class StartViewModelTest {
     model.openCase();
     assertThat(t.bench.openCaseProperty().get().symptom()).isEqualTo("Left channel dead");
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.STAGE);
-    assertThat(t.store.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN))).hasSize(1);
+    assertThat(t.store.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)))
+        .hasSize(1);
     assertThat(t.cautions).isEmpty();
   }
 
@@ -132,9 +137,20 @@ class StartViewModelTest {
     var rc = t.store.openCase(unit.id(), "Distorts");
     t.resume.saveStage(rc.id(), TestBench.invertingStage("Test amp board"));
     t.resume.saveStep(rc.id(), Step.READINGS);
-    t.store.addReadings(rc.id(), List.of(new com.stagewise.history.record.StoredReading(
-        com.stagewise.history.HistoryStore.newId(), rc.id(), "U1.8", com.stagewise.history.record.ReadingKind.DC,
-        14.9, null, null, "", java.time.Instant.now())), null);
+    t.store.addReadings(
+        rc.id(),
+        List.of(
+            new com.stagewise.history.record.StoredReading(
+                com.stagewise.history.HistoryStore.newId(),
+                rc.id(),
+                "U1.8",
+                com.stagewise.history.record.ReadingKind.DC,
+                14.9,
+                null,
+                null,
+                "",
+                java.time.Instant.now())),
+        null);
     model.serialProperty().set("TA-1001");
     model.search();
     model.resumeCase(rc.id());
