@@ -99,7 +99,11 @@ final class Predictor {
         p.apply(cs);
         CompiledStage.State near = linear == null ? null : linear.step();
         if (near == null) {
-          // A section changes state within one standard deviation: solve in full.
+          // A section changes state within one standard deviation: search again from this state,
+          // and solve in full only if that does not settle.
+          near = cs.solveNear(o.state);
+        }
+        if (near == null) {
           CompiledStage.Outcome moved = cs.solve();
           near = moved instanceof CompiledStage.Settled m ? matching(m, o.state) : null;
         }
@@ -184,9 +188,9 @@ final class Predictor {
       DeviceParams params = cs.device(k);
       double max = stage.amplifiers().get(k).deviceClass().offset().high();
       cs.setDevice(k, params.withOffset(params.offset() + max));
-      CompiledStage.State up = first(cs.solve());
+      CompiledStage.State up = near(cs, nominal);
       cs.setDevice(k, params.withOffset(params.offset() - max));
-      CompiledStage.State down = first(cs.solve());
+      CompiledStage.State down = near(cs, nominal);
       cs.setDevice(k, params);
       if (up == null || down == null) {
         continue;
@@ -202,6 +206,12 @@ final class Predictor {
       }
     }
     return List.of(new Outcome(nominal, -1, 0, weight, ""));
+  }
+
+  /** The state the stage settles in from {@code from}'s states, else its first state, else null. */
+  private static CompiledStage.State near(CompiledStage cs, CompiledStage.State from) {
+    CompiledStage.State state = cs.solveNear(from);
+    return state != null ? state : first(cs.solve());
   }
 
   private static CompiledStage.State first(CompiledStage.Outcome outcome) {

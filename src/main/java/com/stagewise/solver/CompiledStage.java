@@ -165,6 +165,21 @@ public final class CompiledStage {
   }
 
   /**
+   * Solves starting from a known state's section states, for re-solves after a change of numbers:
+   * returns the consistent stable state the search settles in from there, or null when it does not
+   * settle (then use {@link #solve}). Much cheaper than {@link #solve} for stages with several
+   * stable states, which {@link #solve} enumerates.
+   */
+  public State solveNear(State near) {
+    SectionState[] start = near.states().clone();
+    Network.DcSystem first = solveConsistently(start);
+    if (first == null || !allLinearStable(start, first)) {
+      return null;
+    }
+    return activeSetSearch(start, first);
+  }
+
+  /**
    * Returns every consistent state by trying every combination of section states, with no stability
    * filter. For cross-checks of the search; slow for many sections.
    */
