@@ -203,10 +203,10 @@ final class Explainer {
       String item =
           String.format(
                   Locale.ROOT,
-                  "%s %s at %s (this fault gives %s)",
+                  "%s %s at %s, where this fault gives %s",
                   r.ac() ? "AC" : "",
                   volts(r.value()),
-                  r.at(),
+                  pointWords(r),
                   volts(Evidence.mean(best, r)))
               .trim();
       (Evidence.score(best, r) <= 3 ? explains : misses).add(item);
@@ -225,6 +225,18 @@ final class Explainer {
           .append(" on this board model.");
     }
     return text.toString();
+  }
+
+  /**
+   * A test point for a technician: a pin with what it is ("U1.8 (positive supply pin)"), or a net.
+   */
+  private String pointWords(Evidence.Bound r) {
+    if (!points.isPin(r.point())) {
+      return r.at();
+    }
+    int dot = r.at().lastIndexOf('.');
+    String role = pinRole(r.at().substring(0, dot), Integer.parseInt(r.at().substring(dot + 1)));
+    return r.at() + " (" + role + ")";
   }
 
   private static List<String> limit(List<String> items) {
