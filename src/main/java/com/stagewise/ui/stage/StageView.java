@@ -1,6 +1,7 @@
 package com.stagewise.ui.stage;
 
 import com.stagewise.ui.ExpectedVolts;
+import com.stagewise.ui.ListSelection;
 import com.stagewise.ui.ValuePad;
 import com.stagewise.ui.Words;
 import com.stagewise.ui.drawing.SchematicDrawing;
@@ -225,23 +226,7 @@ public final class StageView {
                 setText(empty || row == null ? null : row.line());
               }
             });
-    parts
-        .getSelectionModel()
-        .selectedItemProperty()
-        .addListener(
-            (o, was, row) -> {
-              if (row != null && row != model.selectedPartProperty().get()) {
-                model.selectedPartProperty().set(row);
-              }
-            });
-    model
-        .selectedPartProperty()
-        .addListener(
-            (o, was, row) -> {
-              if (row != null && parts.getSelectionModel().getSelectedItem() != row) {
-                parts.getSelectionModel().select(row);
-              }
-            });
+    ListSelection.bind(parts, model.selectedPartProperty());
     Button use = new Button("Use this stage — go to readings");
     use.setId("use-stage");
     use.getStyleClass().add("primary");

@@ -1,5 +1,6 @@
 package com.stagewise.ui.suspects;
 
+import com.stagewise.ui.ListSelection;
 import com.stagewise.ui.Words;
 import com.stagewise.ui.drawing.SchematicDrawing;
 import java.util.LinkedHashMap;
@@ -69,22 +70,7 @@ public final class SuspectsView {
     list.setId("suspect-list");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new SuspectCell());
-    list.getSelectionModel()
-        .selectedItemProperty()
-        .addListener(
-            (o, was, row) -> {
-              if (row != null && row != model.selectedProperty().get()) {
-                model.selectedProperty().set(row);
-              }
-            });
-    model
-        .selectedProperty()
-        .addListener(
-            (o, was, row) -> {
-              if (row != null && list.getSelectionModel().getSelectedItem() != row) {
-                list.getSelectionModel().select(row);
-              }
-            });
+    ListSelection.bind(list, model.selectedProperty());
     if (model.selectedProperty().get() != null) {
       list.getSelectionModel().select(model.selectedProperty().get());
     }
