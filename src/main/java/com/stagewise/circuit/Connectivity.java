@@ -17,6 +17,14 @@ public final class Connectivity {
    * capacitors and inputs touch floats.
    */
   public static List<String> floatingNets(Stage stage) {
+    return floatingNets(stage, java.util.Set.of());
+  }
+
+  /**
+   * As {@link #floatingNets(Stage)}, with the outputs of the {@code deadSections} (designators)
+   * driving nothing: a dead output no longer ties its net to anything.
+   */
+  public static List<String> floatingNets(Stage stage, java.util.Set<String> deadSections) {
     Map<String, String> parent = new HashMap<>();
     final String driven = "\u0000driven";
     parent.put(driven, driven);
@@ -29,7 +37,9 @@ public final class Connectivity {
       }
     }
     for (Amplifier amp : stage.amplifiers()) {
-      union(parent, amp.out(), driven);
+      if (!deadSections.contains(amp.ref())) {
+        union(parent, amp.out(), driven);
+      }
     }
     List<String> floating = new ArrayList<>();
     for (String net : stage.nets()) {

@@ -254,16 +254,17 @@ final class FaultModel {
 
   /** The nets of a scenario with no DC path to a driven net; a dead output drives nothing. */
   private static List<String> floatingNets(Scenario scenario) {
-    Stage check = scenario.stage();
-    for (Map.Entry<String, SectionState> e : scenario.conditions().forced().entrySet()) {
-      if (e.getValue() == SectionState.DEAD) {
-        String isolated = "\u0000dead-" + e.getKey();
-        check = check.withAmplifier(e.getKey(), a -> a.withNet(Terminal.OUT, isolated));
-      }
-    }
-    List<String> floating = new ArrayList<>(Connectivity.floatingNets(check));
-    floating.removeIf(net -> net.startsWith("\u0000"));
-    return floating;
+    java.util.Set<String> dead = new java.util.HashSet<>();
+    scenario
+        .conditions()
+        .forced()
+        .forEach(
+            (ref, state) -> {
+              if (state == SectionState.DEAD) {
+                dead.add(ref);
+              }
+            });
+    return Connectivity.floatingNets(scenario.stage(), dead);
   }
 
   private static Amplifier inputReader(Stage stage, String net) {

@@ -1,9 +1,7 @@
 package com.stagewise.solver;
 
-import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.Connectivity;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.Terminal;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashSet;
@@ -281,18 +279,13 @@ public final class CompiledStage {
   }
 
   private List<String> floatingNets() {
-    Stage check = network.stage;
-    // A dead output no longer ties its net to anything: model that for the connectivity check.
+    java.util.Set<String> dead = new HashSet<>();
     for (int k = 0; k < network.sections.length; k++) {
       if (network.sourceNode[k] < 0) {
-        Amplifier amp = network.sections[k];
-        String isolated = "\u0000dead-" + amp.ref();
-        check = check.withAmplifier(amp.ref(), a -> a.withNet(Terminal.OUT, isolated));
+        dead.add(network.sections[k].ref());
       }
     }
-    List<String> floating = new ArrayList<>(Connectivity.floatingNets(check));
-    floating.removeIf(net -> net.startsWith("\u0000"));
-    return floating;
+    return Connectivity.floatingNets(network.stage, dead);
   }
 
   /**

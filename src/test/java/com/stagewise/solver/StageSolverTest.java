@@ -253,6 +253,16 @@ class StageSolverTest {
     }
 
     @Test
+    void deadOutput_withNothingElseOnItsNet_isNamedFloating() {
+      // A follower whose section no longer drives: OUT touches only the dead output and in-.
+      Stage stage =
+          TestStages.splitSupply(15).input("IN", 1.0).amp("U1A", "IN", "OUT", "OUT").build();
+      SolveResult result =
+          StageSolver.solve(stage, Conditions.NOMINAL.withForced("U1A", SectionState.DEAD));
+      assertThat(result).isEqualTo(new SolveResult.Floating(java.util.List.of("OUT")));
+    }
+
+    @Test
     void pins_followTheirNets() {
       OperatingPoint p = solveOne(TestStages.inverting(10e3, 47e3, 1.0));
       Map<String, Double> pins = p.pins();
