@@ -211,7 +211,13 @@ final class ProbePlanner {
       }
     }
     if (parts.size() < 2) {
-      return "confirms the first suspect";
+      // Every likely fault predicts the same here: the reading checks, it does not decide.
+      return seen.isEmpty()
+          ? "a check of the readings so far"
+          : String.format(
+              Locale.ROOT,
+              "the likely faults all put it near %s: a check of the readings so far",
+              Units.volts(seen.get(0)));
     }
     return (ac ? "AC amplitude: " : "") + String.join(", ", parts);
   }
