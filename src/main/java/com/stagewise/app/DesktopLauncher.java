@@ -19,7 +19,7 @@ import javafx.stage.Stage;
  * demo data with {@code --demo}), then shows the unit screen.
  *
  * <p>With {@code -Dstagewise.timing=true} it prints one line when the first window is shown, with
- * the milliseconds since the process started ({@code scripts/time-to-window.sh} reads it).
+ * the milliseconds since the process started ({@code src/scripts/time-to-window.sh} reads it).
  */
 public final class DesktopLauncher extends Application {
   private BenchApp app;

@@ -36,7 +36,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * case, pick the stage, enter the rails and pin readings, see the first suspect and the next probe,
  * close out, and find the case in the history.
  *
- * <p>With {@code -Dscreenshots=true} it also writes a picture of every screen to docs/screens.
+ * <p>With {@code -Dscreenshots=true} it also writes a picture of every screen to src/site/screens.
  */
 class BenchFlowTest {
   /** The demo unit worked on: a mixing-desk channel board with a line driver stage. */
@@ -316,7 +316,7 @@ class BenchFlowTest {
     assertThat(picture.getWidth()).isEqualTo((int) BenchApp.WIDTH);
     Path folder =
         Boolean.getBoolean("screenshots")
-            ? Path.of("docs", "screens")
+            ? Path.of("src", "site", "screens")
             : Path.of("target", "screens");
     Files.createDirectories(folder);
     try {

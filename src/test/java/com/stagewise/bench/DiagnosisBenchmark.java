@@ -32,9 +32,9 @@ import org.openjdk.jmh.annotations.Warmup;
  * Speed of the diagnosis on the largest template, the three-section instrumentation amplifier with
  * every net and used pin read, beside ngspice computing the same fault dictionary in one batch.
  *
- * <p>Run with {@code scripts/bench-diagnosis.sh}; see DEVELOPERS.md for the figures. The readings
- * are the solver's nominal values with the output section stuck high, so that the ranking has real
- * work to do.
+ * <p>Run with {@code src/scripts/bench-diagnosis.sh}; see DEVELOPERS.md for the figures. The
+ * readings are the solver's nominal values with the output section stuck high, so that the ranking
+ * has real work to do.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SampleTime)

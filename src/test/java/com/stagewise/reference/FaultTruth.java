@@ -19,7 +19,7 @@ import java.util.stream.Stream;
  * healthy} and every fault of {@link FaultList}, several simulated units (random in-tolerance
  * parts, rails and device parameters; the fault applied to the netlist here; ngspice 39, Debian
  * package, as reference simulator; meter error added). Seeded, so a rerun writes the same files.
- * Run by {@code scripts/spice-reference.sh truth} from the project root.
+ * Run by {@code src/scripts/spice-reference.sh truth} from the project root.
  */
 public final class FaultTruth {
   /** The master seed of the whole set. */

@@ -11,8 +11,9 @@ import java.util.stream.Stream;
 /**
  * Regenerates the stored reference files: solves every checked stage with ngspice (ngspice 39,
  * Debian package, as reference simulator) and writes its DC net and pin voltages and AC phasors to
- * {@code src/test/resources/reference/spice/NAME.json}. Run by {@code scripts/spice-reference.sh}
- * from the project root; stale files of stages that no longer exist are removed.
+ * {@code src/test/resources/reference/spice/NAME.json}. Run by {@code
+ * src/scripts/spice-reference.sh} from the project root; stale files of stages that no longer exist
+ * are removed.
  */
 public final class SpiceReference {
   private SpiceReference() {}

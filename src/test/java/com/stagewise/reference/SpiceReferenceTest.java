@@ -14,7 +14,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * Our solver against stored answers of ngspice 39 (Debian package, as reference simulator): every
  * template's default stage, every demo sheet and the hand-built stages, DC within 1 mV + 0.01 %, AC
- * amplitudes within 0.1 %. The stored files are made by {@code scripts/spice-reference.sh}.
+ * amplitudes within 0.1 %. The stored files are made by {@code src/scripts/spice-reference.sh}.
  */
 class SpiceReferenceTest {
 
@@ -42,7 +42,8 @@ class SpiceReferenceTest {
             .filter(name -> !stored.contains(name))
             .toList();
     assertThat(missing)
-        .as("stages without a stored ngspice answer: run scripts/spice-reference.sh to regenerate")
+        .as(
+            "stages without a stored ngspice answer: run src/scripts/spice-reference.sh to regenerate")
         .isEmpty();
   }
 }

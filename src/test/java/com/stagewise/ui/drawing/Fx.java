@@ -20,7 +20,7 @@ import javax.imageio.ImageIO;
 /** Runs code on the JavaFX thread (headless Monocle in the test run) and takes snapshots. */
 final class Fx {
   /** Where the drawings' pictures go when the run asks for them with -Dscreenshots=true. */
-  static final Path SHOTS = Path.of("docs", "screens", "drawings");
+  static final Path SHOTS = Path.of("src", "site", "screens", "drawings");
 
   private static boolean started;
   // Held so the setting survives garbage collection; the toolkit warns about the class path.
@@ -89,7 +89,7 @@ final class Fx {
   }
 
   /**
-   * Writes the picture under docs/screens/drawings when the run was started with
+   * Writes the picture under src/site/screens/drawings when the run was started with
    * -Dscreenshots=true.
    */
   static void keep(BufferedImage image, String name) {

@@ -1,15 +1,15 @@
 #!/usr/bin/env bash
 # Measures the time from launching the bench app to its first window being shown.
 #
-# Usage: scripts/time-to-window.sh [RUNS]      (default 5 runs; prints each and the median)
-#        JAVA_OPTIONS="..." scripts/time-to-window.sh   (other JVM options, e.g. " " for the defaults)
+# Usage: src/scripts/time-to-window.sh [RUNS]      (default 5 runs; prints each and the median)
+#        JAVA_OPTIONS="..." src/scripts/time-to-window.sh   (other JVM options, e.g. " " for the defaults)
 #
 # Each run starts the app with --demo on a fresh, empty data folder (so the demo data is filled
 # on first start, as on a new machine), under a virtual X display (Xvfb; `apt-get install xvfb`)
 # unless DISPLAY is already set. The app prints the milliseconds from its process start to the
 # first window shown when started with -Dstagewise.timing=true; the run then ends the app.
 set -euo pipefail
-cd "$(dirname "$0")/.."
+cd "$(dirname "$0")/../.."
 runs="${1:-5}"
 
 mvn -B -q -o compile dependency:build-classpath -Dmdep.outputFile=target/classpath.txt -Dmdep.includeScope=runtime >/dev/null \

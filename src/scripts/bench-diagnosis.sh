@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # Runs the diagnosis benchmark (JMH) on one core, beside ngspice on the same fault dictionary.
-# Usage: scripts/bench-diagnosis.sh   (needs ngspice on the PATH; takes about two minutes)
+# Usage: src/scripts/bench-diagnosis.sh   (needs ngspice on the PATH; takes about two minutes)
 set -euo pipefail
-cd "$(dirname "$0")/.."
+cd "$(dirname "$0")/../.."
 mvn -B -q -DskipTests test-compile
 mvn -B -q dependency:build-classpath -Dmdep.includeScope=test -Dmdep.outputFile=target/bench-classpath.txt
 # One core: taskset pins the JVM (and ngspice, its child) to CPU 0 where taskset exists.

@@ -2,9 +2,9 @@
 # Regenerates the reference data made with ngspice (Debian package `ngspice`, version 39):
 #   src/test/resources/reference/spice/*.json   (solver reference answers)
 #   src/test/resources/diagnosis/truth/*.json   (simulated fault truth set)
-# Usage: scripts/spice-reference.sh [reference|truth|timing STAGE-NAME]   (default: reference and truth)
+# Usage: src/scripts/spice-reference.sh [reference|truth|timing STAGE-NAME]   (default: reference and truth)
 set -euo pipefail
-cd "$(dirname "$0")/.."
+cd "$(dirname "$0")/../.."
 command -v ngspice >/dev/null || { echo "ngspice is not on the PATH: apt-get install ngspice" >&2; exit 1; }
 mvn -B -q -DskipTests test-compile
 cp_file=target/spice-reference.classpath
