@@ -36,6 +36,43 @@ class ArchitectureTest {
         .check(classes);
   }
 
+  /**
+   * View models (every {@code *Model} class of the UI, the bench state in the ui root package, and
+   * the words) stay plain Java: properties and commands, never nodes, so that they are tested
+   * without the toolkit (issue 8).
+   */
+  @Test
+  void viewModels_importNoJavafxScene() {
+    noClasses()
+        .that()
+        .resideInAPackage("com.stagewise.ui..")
+        .and()
+        .haveSimpleNameEndingWith("Model")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("javafx.scene..")
+        .check(classes);
+    noClasses()
+        .that()
+        .resideInAnyPackage("com.stagewise.ui", "com.stagewise.ui.words..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("javafx.scene..")
+        .check(classes);
+  }
+
+  /** The rule above looks at real classes: the screens' view models are among them. */
+  @Test
+  void viewModelRule_seesTheScreensViewModels() {
+    long viewModels =
+        classes.stream()
+            .filter(c -> c.getPackageName().startsWith("com.stagewise.ui."))
+            .filter(c -> c.getSimpleName().endsWith("ViewModel"))
+            .count();
+    org.junit.jupiter.api.Assertions.assertTrue(
+        viewModels >= 6, "expected the six screens' view models, found " + viewModels);
+  }
+
   @Test
   void jdbc_onlyInHistory() {
     noClasses()

@@ -1,9 +1,6 @@
 package com.stagewise.app;
 
 import com.stagewise.ui.Bench;
-import com.stagewise.ui.BenchWindow;
-import com.stagewise.ui.FxTasks;
-import com.stagewise.ui.Overlays;
 import com.stagewise.ui.SafetyCaution;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.closeout.CloseOutView;
@@ -12,6 +9,9 @@ import com.stagewise.ui.history.HistoryView;
 import com.stagewise.ui.history.HistoryViewModel;
 import com.stagewise.ui.readings.ReadingsView;
 import com.stagewise.ui.readings.ReadingsViewModel;
+import com.stagewise.ui.shell.BenchWindow;
+import com.stagewise.ui.shell.FxTasks;
+import com.stagewise.ui.shell.Overlays;
 import com.stagewise.ui.stage.StageView;
 import com.stagewise.ui.stage.StageViewModel;
 import com.stagewise.ui.start.StartView;

@@ -1,6 +1,6 @@
 package com.stagewise.app;
 
-import com.stagewise.ui.Overlays;
+import com.stagewise.ui.shell.Overlays;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
@@ -39,7 +39,7 @@ public final class DesktopLauncher extends Application {
     window.setMinWidth(1024);
     window.setMinHeight(700);
     Label opening = new Label("Opening the repair history …");
-    opening.setStyle("-fx-font-size: 22px;");
+    opening.setFont(javafx.scene.text.Font.font(22));
     // Only a label: the first window must come up fast; the screens follow when the history is
     // open.
     VBox splash = new VBox(18, opening);

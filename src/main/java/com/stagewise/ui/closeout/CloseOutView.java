@@ -3,8 +3,8 @@ package com.stagewise.ui.closeout;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairAction;
-import com.stagewise.ui.Keypad;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.widget.Keypad;
+import com.stagewise.ui.words.Words;
 import java.util.Locale;
 import javafx.collections.ListChangeListener;
 import javafx.geometry.Pos;
@@ -33,6 +33,7 @@ public final class CloseOutView {
   public CloseOutView(CloseOutViewModel model) {
     this.model = model;
     root.getStyleClass().add("screen");
+    root.getStylesheets().add(CloseOutView.class.getResource("closeout.css").toExternalForm());
     root.setId("screen-close-out");
     VBox left = actionsPanel();
     left.setPrefWidth(620);
@@ -125,7 +126,7 @@ public final class CloseOutView {
               }
             });
     Label recorded = new Label("Recorded in this case");
-    recorded.setStyle("-fx-font-weight: bold;");
+    recorded.getStyleClass().add("strong");
     HBox addRow = new HBox(8, add, showKeys);
     box.getChildren().addAll(title, kindRow, form, addRow, keypad, recorded, list);
     return box;

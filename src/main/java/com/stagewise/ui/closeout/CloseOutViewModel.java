@@ -12,7 +12,7 @@ import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.Step;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;

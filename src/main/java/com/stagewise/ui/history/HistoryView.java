@@ -1,8 +1,8 @@
 package com.stagewise.ui.history;
 
 import com.stagewise.history.SearchHit;
-import com.stagewise.ui.Keypad;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.widget.Keypad;
+import com.stagewise.ui.words.Words;
 import java.util.List;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
@@ -29,6 +29,7 @@ public final class HistoryView {
   public HistoryView(HistoryViewModel model) {
     this.model = model;
     root.getStyleClass().add("screen");
+    root.getStylesheets().add(HistoryView.class.getResource("history.css").toExternalForm());
     root.setId("screen-history");
     list = new ListView<>(model.hits());
     VBox left = searchPanel();
@@ -164,7 +165,7 @@ public final class HistoryView {
     title.setWrapText(true);
     Label symptom = new Label("Reported: " + view.symptom());
     symptom.setWrapText(true);
-    symptom.setStyle("-fx-font-weight: bold;");
+    symptom.getStyleClass().add("strong");
     Label status =
         new Label(view.status() + (view.faults().isEmpty() ? "" : " — found: " + view.faults()));
     status.setId("history-case-status");
@@ -179,7 +180,7 @@ public final class HistoryView {
 
   private void section(String heading, List<String> lines, String empty) {
     Label head = new Label(heading);
-    head.setStyle("-fx-font-weight: bold; -fx-text-fill: #0d4f6c; -fx-padding: 8 0 0 0;");
+    head.getStyleClass().add("case-section");
     caseBox.getChildren().add(head);
     if (lines.isEmpty() && !empty.isEmpty()) {
       Label none = new Label(empty);

@@ -13,7 +13,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.ui.Bench;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

@@ -5,7 +5,7 @@ import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

@@ -4,10 +4,10 @@ import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.ui.Bench;
-import com.stagewise.ui.ValuePad;
-import com.stagewise.ui.Words;
 import com.stagewise.ui.drawing.BandChart;
 import com.stagewise.ui.drawing.PackageDrawing;
+import com.stagewise.ui.widget.ValuePad;
+import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -43,6 +43,7 @@ public final class ReadingsView {
     this.model = model;
     this.bench = bench;
     root.getStyleClass().add("screen");
+    root.getStylesheets().add(ReadingsView.class.getResource("readings.css").toExternalForm());
     root.setId("screen-readings");
     VBox probe = probePanel();
     probe.setPrefWidth(380);
@@ -92,7 +93,7 @@ public final class ReadingsView {
     Label title = new Label();
     title.setId("probe-title");
     title.setWrapText(true);
-    title.setStyle("-fx-font-weight: bold;");
+    title.getStyleClass().add("strong");
     title.setMinHeight(Region.USE_PREF_SIZE);
     title
         .textProperty()
@@ -232,7 +233,7 @@ public final class ReadingsView {
     int rank = 1;
     for (Suspect s : model.topSuspects()) {
       Label name = new Label(rank++ + ".  " + Words.fault(s.fault()));
-      name.setStyle("-fx-font-weight: bold;");
+      name.getStyleClass().add("strong");
       name.setMinWidth(0);
       Region bar = new Region();
       bar.getStyleClass().add("suspect-bar");

@@ -1,10 +1,10 @@
 package com.stagewise.ui.stage;
 
 import com.stagewise.ui.ExpectedVolts;
-import com.stagewise.ui.ListSelection;
-import com.stagewise.ui.ValuePad;
-import com.stagewise.ui.Words;
 import com.stagewise.ui.drawing.SchematicDrawing;
+import com.stagewise.ui.widget.ListSelection;
+import com.stagewise.ui.widget.ValuePad;
+import com.stagewise.ui.words.Words;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Pos;
@@ -34,6 +34,7 @@ public final class StageView {
   public StageView(StageViewModel model) {
     this.model = model;
     root.getStyleClass().add("screen");
+    root.getStylesheets().add(StageView.class.getResource("stage.css").toExternalForm());
     root.setId("screen-stage");
     VBox library = libraryPanel();
     library.setPrefWidth(250);
@@ -68,8 +69,8 @@ public final class StageView {
     fromLibrary.setToggleGroup(source);
     fromTemplate.setToggleGroup(source);
     fromLibrary.setSelected(true);
-    fromLibrary.setStyle("-fx-padding: 8 10 8 10;");
-    fromTemplate.setStyle("-fx-padding: 8 10 8 10;");
+    fromLibrary.getStyleClass().add("source-toggle");
+    fromTemplate.getStyleClass().add("source-toggle");
     source
         .selectedToggleProperty()
         .addListener(
@@ -161,7 +162,7 @@ public final class StageView {
                   for (StageViewModel.ParameterEntry entry : model.parameters()) {
                     Label label = new Label(entry.label());
                     label.setWrapText(true);
-                    label.setStyle("-fx-font-size: 15px;");
+                    label.getStyleClass().add("parameter-label");
                     TextField field = new TextField();
                     field.setId("template-" + entry.parameter().name());
                     field.textProperty().bindBidirectional(entry.value());
@@ -351,7 +352,7 @@ public final class StageView {
       Button band = new Button(colour);
       band.setId("band-" + colour);
       band.setFocusTraversable(false);
-      band.setStyle(bandStyle(colour));
+      band.getStyleClass().addAll("colour-band", "band-" + colour);
       band.setOnAction(e -> decoder.addBand(colour));
       colours.getChildren().add(band);
     }
@@ -379,28 +380,5 @@ public final class StageView {
     clear.setOnAction(e -> decoder.clear());
     box.getChildren().addAll(colours, new HBox(8, undo, clear), smd, result, use);
     return box;
-  }
-
-  private static String bandStyle(String colour) {
-    String[] fillInk =
-        switch (colour) {
-          case "black" -> new String[] {"#111111", "#ffffff"};
-          case "brown" -> new String[] {"#6b3a1e", "#ffffff"};
-          case "red" -> new String[] {"#c62828", "#ffffff"};
-          case "orange" -> new String[] {"#ef7d00", "#111111"};
-          case "yellow" -> new String[] {"#f5d000", "#111111"};
-          case "green" -> new String[] {"#2e7d32", "#ffffff"};
-          case "blue" -> new String[] {"#1e4fc2", "#ffffff"};
-          case "violet" -> new String[] {"#7b3fa8", "#ffffff"};
-          case "grey" -> new String[] {"#8c8c8c", "#111111"};
-          case "white" -> new String[] {"#ffffff", "#111111"};
-          case "gold" -> new String[] {"#c9a227", "#111111"};
-          default -> new String[] {"#c0c0c0", "#111111"};
-        };
-    return "-fx-background-color: #444444, "
-        + fillInk[0]
-        + "; -fx-text-fill: "
-        + fillInk[1]
-        + "; -fx-font-size: 14px; -fx-min-width: 72px;";
   }
 }

@@ -1,6 +1,6 @@
 package com.stagewise.ui.start;
 
-import com.stagewise.ui.Keypad;
+import com.stagewise.ui.widget.Keypad;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
@@ -27,6 +27,7 @@ public final class StartView {
   public StartView(StartViewModel model) {
     this.model = model;
     root.getStyleClass().add("screen");
+    root.getStylesheets().add(StartView.class.getResource("start.css").toExternalForm());
     root.setId("screen-unit");
     VBox left = findPanel();
     StackPane right = new StackPane();
@@ -158,7 +159,7 @@ public final class StartView {
                 },
                 model.selectedProperty()));
     Label earlier = new Label("Earlier cases, newest first — tap an open one to resume it");
-    earlier.setStyle("-fx-font-weight: bold;");
+    earlier.getStyleClass().add("strong");
     earlier.visibleProperty().bind(model.selectedProperty().isNotNull());
     ListView<StartViewModel.CaseLine> cases = new ListView<>(model.glance());
     cases.setId("unit-cases");

@@ -13,7 +13,7 @@ import com.stagewise.ui.Bench;
 import com.stagewise.ui.CaseResume;
 import com.stagewise.ui.SafetyCaution;
 import com.stagewise.ui.Step;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;

@@ -1,8 +1,8 @@
 package com.stagewise.ui.suspects;
 
-import com.stagewise.ui.ListSelection;
-import com.stagewise.ui.Words;
 import com.stagewise.ui.drawing.SchematicDrawing;
+import com.stagewise.ui.widget.ListSelection;
+import com.stagewise.ui.words.Words;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
@@ -36,6 +36,7 @@ public final class SuspectsView {
   public SuspectsView(SuspectsViewModel model) {
     this.model = model;
     root.getStyleClass().add("screen");
+    root.getStylesheets().add(SuspectsView.class.getResource("suspects.css").toExternalForm());
     root.setId("screen-suspects");
     VBox left = listPanel();
     left.setPrefWidth(640);
@@ -137,7 +138,7 @@ public final class SuspectsView {
     Label caution =
         new Label("Unplug the unit and discharge the capacitors before any ohms check.");
     caution.setWrapText(true);
-    caution.setStyle("-fx-text-fill: #8a4b00; -fx-font-weight: bold;");
+    caution.getStyleClass().add("ohms-caution");
     caution.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     Button back = new Button("More readings");
     back.setId("suspects-more");
@@ -198,7 +199,7 @@ public final class SuspectsView {
     };
     for (int c = 0; c < heads.length; c++) {
       Label head = new Label(heads[c]);
-      head.setStyle("-fx-font-weight: bold;");
+      head.getStyleClass().add("strong");
       table.add(head, c, 0);
     }
     int row = 1;
@@ -208,11 +209,11 @@ public final class SuspectsView {
       Label measured =
           mono(Double.isNaN(p.measured()) ? "not read" : Words.voltsShort(p.measured()));
       if (!Double.isNaN(p.measured())) {
-        measured.setStyle(measured.getStyle() + "-fx-font-weight: bold;");
+        measured.getStyleClass().add("strong");
       }
       table.add(measured, 2, row);
       Label predicted = mono(Words.voltsShort(p.predicted()));
-      predicted.setStyle(predicted.getStyle() + "-fx-text-fill: #0d4f6c;");
+      predicted.getStyleClass().add("predicted");
       table.add(predicted, 3, row);
       row++;
     }
@@ -220,7 +221,7 @@ public final class SuspectsView {
 
   private static Label mono(String text) {
     Label label = new Label(text);
-    label.setStyle("-fx-font-family: 'DejaVu Sans Mono', monospace;");
+    label.getStyleClass().add("mono");
     return label;
   }
 
@@ -249,7 +250,7 @@ public final class SuspectsView {
       track.setPrefWidth(200 * (1 - row.suspect().probability()));
       track.setMinWidth(Region.USE_PREF_SIZE);
       Label pct = new Label(Words.percent(row.suspect().probability()));
-      pct.setStyle("-fx-font-weight: bold;");
+      pct.getStyleClass().add("strong");
       Region spring = new Region();
       HBox.setHgrow(spring, Priority.ALWAYS);
       HBox head = new HBox(8, name, spring, new HBox(0, bar, track), pct);
@@ -261,12 +262,12 @@ public final class SuspectsView {
       if (!row.group().isEmpty()) {
         Label group = new Label("Cannot yet be told apart from: " + row.group());
         group.setWrapText(true);
-        group.setStyle("-fx-font-style: italic;");
+        group.getStyleClass().add("group-note");
         box.getChildren().add(group);
       }
       if (!row.estimate().isEmpty()) {
         Label estimate = new Label(row.estimate());
-        estimate.setStyle("-fx-font-weight: bold;");
+        estimate.getStyleClass().add("strong");
         box.getChildren().add(estimate);
       }
       if (!row.suspect().consistent()) {

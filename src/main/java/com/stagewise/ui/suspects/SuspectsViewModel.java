@@ -11,7 +11,7 @@ import com.stagewise.diagnosis.Suspect;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.ExpectedVolts;
 import com.stagewise.ui.Step;
-import com.stagewise.ui.Words;
+import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;

@@ -1,4 +1,4 @@
-package com.stagewise.ui;
+package com.stagewise.ui.widget;
 
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
@@ -26,9 +26,7 @@ public final class ValuePad extends VBox {
     this.model = model;
     setSpacing(8);
     display.getStyleClass().add("value-display");
-    // Inline, so that no text-field rule of the theme can hide the digits on the dark display.
-    display.setStyle(
-        "-fx-text-fill: #ffffff; -fx-background-color: #1d2b36; -fx-prompt-text-fill: #9fb3c2;");
+    getStylesheets().add(ValuePad.class.getResource("widgets.css").toExternalForm());
     display.setPromptText("type or tap");
     display.setId(idPrefix + "-display");
     display.textProperty().bindBidirectional(model.textProperty());

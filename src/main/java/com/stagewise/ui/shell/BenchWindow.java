@@ -1,5 +1,7 @@
-package com.stagewise.ui;
+package com.stagewise.ui.shell;
 
+import com.stagewise.ui.Bench;
+import com.stagewise.ui.Step;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.function.Supplier;

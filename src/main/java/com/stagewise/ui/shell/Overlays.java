@@ -1,5 +1,8 @@
-package com.stagewise.ui;
+package com.stagewise.ui.shell;
 
+import com.stagewise.ui.Caution;
+import com.stagewise.ui.Problems;
+import com.stagewise.ui.SafetyCaution;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import javafx.application.Platform;
@@ -84,7 +87,7 @@ public final class Overlays implements Caution, Problems {
     whatLabel.setWrapText(true);
     Label todoLabel = new Label("What to do: " + todo);
     todoLabel.setWrapText(true);
-    todoLabel.setStyle("-fx-font-weight: bold;");
+    todoLabel.getStyleClass().add("strong");
     Button ok = new Button("OK");
     ok.setId("problem-ok");
     ok.getStyleClass().add("primary");

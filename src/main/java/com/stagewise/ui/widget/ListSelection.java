@@ -1,4 +1,4 @@
-package com.stagewise.ui;
+package com.stagewise.ui.widget;
 
 import javafx.beans.property.Property;
 import javafx.scene.control.ListView;

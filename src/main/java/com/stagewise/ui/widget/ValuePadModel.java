@@ -1,4 +1,4 @@
-package com.stagewise.ui;
+package com.stagewise.ui.widget;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.value.ESeries;

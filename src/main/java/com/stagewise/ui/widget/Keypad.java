@@ -1,4 +1,4 @@
-package com.stagewise.ui;
+package com.stagewise.ui.widget;
 
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
@@ -22,6 +22,7 @@ public final class Keypad extends GridPane {
     setHgap(5);
     setVgap(5);
     setId(idPrefix + "-keypad");
+    getStylesheets().add(Keypad.class.getResource("widgets.css").toExternalForm());
     for (int row = 0; row < ROWS.length; row++) {
       for (int col = 0; col < ROWS[row].length(); col++) {
         String key = String.valueOf(ROWS[row].charAt(col));

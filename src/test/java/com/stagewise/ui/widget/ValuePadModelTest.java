@@ -1,4 +1,4 @@
-package com.stagewise.ui;
+package com.stagewise.ui.widget;
 
 import static org.assertj.core.api.Assertions.assertThat;
 

@@ -1,4 +1,4 @@
-package com.stagewise.ui;
+package com.stagewise.ui.words;
 
 import com.stagewise.circuit.Reading;
 import com.stagewise.history.record.ActionKind;

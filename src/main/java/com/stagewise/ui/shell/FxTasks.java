@@ -1,5 +1,6 @@
-package com.stagewise.ui;
+package com.stagewise.ui.shell;
 
+import com.stagewise.ui.Tasks;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
