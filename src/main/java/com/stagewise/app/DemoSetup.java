@@ -27,7 +27,7 @@ final class DemoSetup {
   static void fill(HistoryStore store, BoardFlags flags, Path stages) {
     DemoHistory.fill(store);
     for (String model : List.of(DemoHistory.MIXER, DemoHistory.SUPPLY)) {
-      store.findBoardModel(model).ifPresent(m -> flags.setMainsPowered(m.id(), true));
+      store.units().findBoardModel(model).ifPresent(m -> flags.setMainsPowered(m.id(), true));
     }
     for (Path file : sheets(stages)) {
       String json;
@@ -38,12 +38,12 @@ final class DemoSetup {
       }
       Stage stage = StageSheet.read(json, file.toString());
       String board = stage.board().isBlank() ? "Demo boards" : stage.board();
-      BoardModel model = store.boardModel(board, "");
+      BoardModel model = store.units().boardModel(board, "");
       boolean known =
-          store.stageSheets(model.id()).stream()
+          store.library().sheets(model.id()).stream()
               .anyMatch(sheet -> sheet.title().equals(stage.title()));
       if (!known) {
-        store.addStageSheet(model.id(), stage.title(), json);
+        store.library().add(model.id(), stage.title(), json);
       }
     }
   }

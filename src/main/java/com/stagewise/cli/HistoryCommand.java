@@ -138,7 +138,7 @@ final class HistoryCommand implements Runnable {
   static final class Models extends Base {
     @Override
     void run(HistoryStore store, PrintWriter out) {
-      List<BoardModel> models = store.boardModels();
+      List<BoardModel> models = store.units().boardModels();
       if (json()) {
         out.println(HistoryJson.boardModels(models));
         return;
@@ -147,7 +147,7 @@ final class HistoryCommand implements Runnable {
         out.println("No board models yet. Add one with 'history add-model --name NAME'.");
       }
       for (BoardModel m : models) {
-        int sheets = store.stageSheets(m.id()).size();
+        int sheets = store.library().sheets(m.id()).size();
         out.println(
             m.name()
                 + (m.maker().isEmpty() ? "" : "  (" + m.maker() + ")")
@@ -180,9 +180,9 @@ final class HistoryCommand implements Runnable {
         Stage stage = StageSheet.read(text, file.toString());
         sheets.put(stage.title().isBlank() ? file.getFileName().toString() : stage.title(), text);
       }
-      BoardModel model = store.boardModel(name, maker);
+      BoardModel model = store.units().boardModel(name, maker);
       for (Map.Entry<String, String> sheet : sheets.entrySet()) {
-        store.addStageSheet(model.id(), sheet.getKey(), sheet.getValue());
+        store.library().add(model.id(), sheet.getKey(), sheet.getValue());
       }
       if (json()) {
         out.println(HistoryJson.boardModels(List.of(model)));
@@ -191,7 +191,7 @@ final class HistoryCommand implements Runnable {
             "Board model "
                 + model.name()
                 + " ("
-                + plural(store.stageSheets(model.id()).size(), "stage sheet")
+                + plural(store.library().sheets(model.id()).size(), "stage sheet")
                 + ").");
       }
     }
@@ -205,7 +205,7 @@ final class HistoryCommand implements Runnable {
     @Override
     void run(HistoryStore store, PrintWriter out) {
       String modelId = model == null ? null : requireModel(store, model).id();
-      List<Unit> units = store.units(modelId);
+      List<Unit> units = store.units().list(modelId);
       Map<String, BoardModel> models = modelsById(store);
       if (json()) {
         out.println(HistoryJson.units(units, models));
@@ -241,8 +241,8 @@ final class HistoryCommand implements Runnable {
     @Override
     void run(HistoryStore store, PrintWriter out) {
       BoardModel boardModel =
-          store.findBoardModel(model).orElseGet(() -> store.boardModel(model, ""));
-      Unit unit = store.addUnit(serial, boardModel.id(), owner);
+          store.units().findBoardModel(model).orElseGet(() -> store.units().boardModel(model, ""));
+      Unit unit = store.units().add(serial, boardModel.id(), owner);
       out.println(
           json()
               ? HistoryJson.unit(unit, boardModel)
@@ -270,7 +270,7 @@ final class HistoryCommand implements Runnable {
     @Override
     void run(HistoryStore store, PrintWriter out) {
       Unit unit = requireUnit(store, serial, model);
-      RepairCase opened = store.openCase(unit.id(), symptom);
+      RepairCase opened = store.cases().open(unit.id(), symptom);
       out.println(
           json()
               ? HistoryJson.repairCase(opened)
@@ -309,10 +309,10 @@ final class HistoryCommand implements Runnable {
                           "command line",
                           "--outcome",
                           "expected fixed, not-fixed or returned, got '" + outcome + "'"));
-      String id = store.resolveCaseId(caseId);
-      RepairCase closed = store.closeCase(id, how, faults);
+      String id = store.cases().resolveId(caseId);
+      RepairCase closed = store.cases().close(id, how, faults);
       if (note != null && !note.isBlank()) {
-        store.addNote(id, note);
+        store.cases().addNote(id, note);
       }
       out.println(
           json()
@@ -365,10 +365,10 @@ final class HistoryCommand implements Runnable {
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
-      String id = store.resolveCaseId(caseId);
-      RepairCase repairCase = store.repairCase(id).orElseThrow();
-      Unit unit = store.unit(repairCase.unitId()).orElseThrow();
-      BoardModel model = store.findBoardModel(unit.boardModelId()).orElseThrow();
+      String id = store.cases().resolveId(caseId);
+      RepairCase repairCase = store.cases().find(id).orElseThrow();
+      Unit unit = store.units().find(repairCase.unitId()).orElseThrow();
+      BoardModel model = store.units().findBoardModel(unit.boardModelId()).orElseThrow();
       Stage stage = stage(store, model);
       ReadingSet set = ReadingsSheet.read(readings, stage);
       Instant now = Instant.now();
@@ -376,7 +376,7 @@ final class HistoryCommand implements Runnable {
       Map<String, Integer> counts = new ShopMemory(store).faultCounts(model.id());
       SuspectListRecord suspects =
           CaseReadings.diagnose(stage, set, counts, top, id, now, programVersion());
-      store.addReadings(id, stored, suspects);
+      store.cases().addReadings(id, stored, suspects);
       if (json()) {
         out.println(HistoryJson.storedReadings(stored, suspects));
         return;
@@ -394,7 +394,7 @@ final class HistoryCommand implements Runnable {
       if (stageFile != null) {
         return StageSheet.read(stageFile);
       }
-      List<StageSheetRecord> sheets = store.stageSheets(model.id());
+      List<StageSheetRecord> sheets = store.library().sheets(model.id());
       if (sheetTitle != null) {
         sheets =
             sheets.stream().filter(s -> s.title().equalsIgnoreCase(sheetTitle.strip())).toList();
@@ -433,7 +433,7 @@ final class HistoryCommand implements Runnable {
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
-      CaseNote note = store.addNote(store.resolveCaseId(caseId), text);
+      CaseNote note = store.cases().addNote(store.cases().resolveId(caseId), text);
       out.println(
           json() ? HistoryJson.note(note) : "Note added to case " + shortId(note.caseId()) + ".");
     }
@@ -484,7 +484,9 @@ final class HistoryCommand implements Runnable {
                               + kind
                               + "'"));
       RepairAction action =
-          store.addAction(store.resolveCaseId(caseId), what, part, oldValue, newValue, text);
+          store
+              .cases()
+              .addAction(store.cases().resolveId(caseId), what, part, oldValue, newValue, text);
       out.println(
           json()
               ? HistoryJson.action(action)
@@ -517,12 +519,12 @@ final class HistoryCommand implements Runnable {
             "command line", "--serial/--case", "give either --serial or --case");
       }
       if (caseId != null) {
-        CaseFile file = store.caseFile(store.resolveCaseId(caseId)).orElseThrow();
+        CaseFile file = store.cases().caseFile(store.cases().resolveId(caseId)).orElseThrow();
         out.println(json() ? HistoryJson.caseFile(file) : HistoryText.caseFile(file));
         return;
       }
       Unit unit = requireUnit(store, serial, model);
-      UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
+      UnitHistory history = store.cases().unitHistory(unit.id()).orElseThrow();
       out.print(
           json()
               ? HistoryJson.unitHistory(history) + System.lineSeparator()
@@ -603,7 +605,7 @@ final class HistoryCommand implements Runnable {
       if (to != null) {
         query = query.withOpenedBefore(time("--to", to, true));
       }
-      List<SearchHit> hits = store.search(query);
+      List<SearchHit> hits = store.cases().search(query);
       out.print(json() ? HistoryJson.hits(hits) + System.lineSeparator() : HistoryText.hits(hits));
     }
   }
@@ -677,7 +679,7 @@ final class HistoryCommand implements Runnable {
       } else {
         selection = new ExportSelection.All();
       }
-      HistoryBundle bundle = store.export(selection, programVersion());
+      HistoryBundle bundle = store.transfer().export(selection, programVersion());
       HistoryBundleJson.write(bundle, file);
       if (json()) {
         out.println(
@@ -709,7 +711,7 @@ final class HistoryCommand implements Runnable {
     @Override
     void run(HistoryStore store, PrintWriter out) {
       HistoryBundle bundle = HistoryBundleJson.read(file);
-      ImportReport report = store.importBundle(bundle, file.toString());
+      ImportReport report = store.transfer().importBundle(bundle, file.toString());
       out.print(
           json()
               ? HistoryJson.importReport(report) + System.lineSeparator()
@@ -731,7 +733,7 @@ final class HistoryCommand implements Runnable {
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
-      store.backupTo(file);
+      store.transfer().backupTo(file);
       out.println(
           json()
               ? HistoryJson.fields(Map.of("backup", file.toString()))
@@ -752,7 +754,7 @@ final class HistoryCommand implements Runnable {
 
     @Override
     void run(HistoryStore store, PrintWriter out) {
-      Path saved = store.restoreFrom(file);
+      Path saved = store.transfer().restoreFrom(file);
       out.println(
           json()
               ? HistoryJson.fields(
@@ -830,6 +832,7 @@ final class HistoryCommand implements Runnable {
 
   static BoardModel requireModel(HistoryStore store, String name) {
     return store
+        .units()
         .findBoardModel(name)
         .orElseThrow(
             () ->
@@ -840,7 +843,7 @@ final class HistoryCommand implements Runnable {
   }
 
   static Unit requireUnit(HistoryStore store, String serial, String model) {
-    List<Unit> units = store.unitsBySerial(serial);
+    List<Unit> units = store.units().bySerial(serial);
     if (model != null) {
       String modelId = requireModel(store, model).id();
       units = units.stream().filter(u -> u.boardModelId().equals(modelId)).toList();
@@ -868,7 +871,7 @@ final class HistoryCommand implements Runnable {
 
   static Map<String, BoardModel> modelsById(HistoryStore store) {
     Map<String, BoardModel> models = new LinkedHashMap<>();
-    store.boardModels().forEach(m -> models.put(m.id(), m));
+    store.units().boardModels().forEach(m -> models.put(m.id(), m));
     return models;
   }
 

@@ -76,7 +76,10 @@ final class ReportCommand implements Callable<Integer> {
     try (HistoryStore store = HistoryStore.open(database)) {
       report =
           CaseReport.read(
-              store, store.resolveCaseId(caseId), clock.instant(), HistoryCommand.programVersion());
+              store,
+              store.cases().resolveId(caseId),
+              clock.instant(),
+              HistoryCommand.programVersion());
     }
     int pages = write(report, target, force);
     spec.commandLine()

@@ -1,6 +1,9 @@
 package com.stagewise.history;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.StoredSuspect;
+import com.stagewise.history.record.SuspectListRecord;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -8,23 +11,24 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * The limits and shapes of what the history accepts, checked on every write and every import.
+ * The limits and shapes of what the history accepts, checked on every write and every import by
+ * every store.
  *
  * <p>Limits keep a hostile or broken import from filling the disk or the screen; they are far above
  * what a bench ever writes.
  */
-final class Checks {
+public final class Checks {
   /** Serial numbers, names, part designators, values, test points: one line of text. */
-  static final int MAX_SHORT = 200;
+  public static final int MAX_SHORT = 200;
 
   /** Symptoms, notes, explanations: free text. */
-  static final int MAX_TEXT = 50_000;
+  public static final int MAX_TEXT = 50_000;
 
   /** A stage sheet's JSON text. */
-  static final int MAX_SHEET = 2_000_000;
+  public static final int MAX_SHEET = 2_000_000;
 
   /** Suspects in one stored suspect list, and faults in one group or one close-out. */
-  static final int MAX_LIST = 1_000;
+  public static final int MAX_LIST = 1_000;
 
   private static final Pattern UUID_SHAPE =
       Pattern.compile("[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}");
@@ -42,7 +46,7 @@ final class Checks {
 
   private Checks() {}
 
-  static String id(String source, String field, String value) {
+  public static String id(String source, String field, String value) {
     if (value == null || !UUID_SHAPE.matcher(value).matches()) {
       throw new InvalidInputException(
           source, field, "expected an id such as 3f1c…-… (a lower-case UUID), got " + quote(value));
@@ -50,7 +54,7 @@ final class Checks {
     return value;
   }
 
-  static String shortText(String source, String field, String value, boolean required) {
+  public static String shortText(String source, String field, String value, boolean required) {
     text(source, field, value, MAX_SHORT);
     if (value.indexOf('\n') >= 0 || value.indexOf('\r') >= 0) {
       throw new InvalidInputException(source, field, "expected one line of text, got a line break");
@@ -61,7 +65,7 @@ final class Checks {
     return value;
   }
 
-  static String text(String source, String field, String value, int max) {
+  public static String text(String source, String field, String value, int max) {
     if (value == null) {
       throw new InvalidInputException(source, field, "is missing");
     }
@@ -77,7 +81,7 @@ final class Checks {
     return value;
   }
 
-  static String faultId(String source, String field, String value) {
+  public static String faultId(String source, String field, String value) {
     if (value == null || value.length() > MAX_SHORT || !FAULT_ID.matcher(value).matches()) {
       throw new InvalidInputException(
           source,
@@ -88,14 +92,14 @@ final class Checks {
     return value;
   }
 
-  static double finite(String source, String field, double value) {
+  public static double finite(String source, String field, double value) {
     if (!Double.isFinite(value)) {
       throw new InvalidInputException(source, field, "expected a finite number, got " + value);
     }
     return value;
   }
 
-  static <T> List<T> list(String source, String field, List<T> values) {
+  public static <T> List<T> list(String source, String field, List<T> values) {
     if (values.size() > MAX_LIST) {
       throw new InvalidInputException(
           source,
@@ -105,12 +109,53 @@ final class Checks {
     return values;
   }
 
+  /** Checks a reading before it is stored; {@code field} names it in messages. */
+  public static void reading(String source, String field, StoredReading r) {
+    shortText(source, field + ".at", r.at(), true);
+    finite(source, field + ".value", r.value());
+    if (r.hz() != null) {
+      finite(source, field + ".hz", r.hz());
+    }
+    if (r.uncertainty() != null) {
+      finite(source, field + ".uncertainty", r.uncertainty());
+    }
+    text(source, field + ".meter", r.meterText(), MAX_TEXT);
+  }
+
+  /** Checks a suspect list before it is stored; {@code field} names it in messages. */
+  public static void suspectList(String source, String field, SuspectListRecord list) {
+    shortText(source, field + ".programVersion", list.programVersion(), false);
+    shortText(source, field + ".verdict", list.verdict(), true);
+    text(source, field + ".nextProbes", list.nextProbes(), MAX_TEXT);
+    list(source, field + ".suspects", list.suspects());
+    for (int i = 0; i < list.suspects().size(); i++) {
+      StoredSuspect s = list.suspects().get(i);
+      String at = field + ".suspects[" + i + "]";
+      faultId(source, at + ".fault", s.fault());
+      finite(source, at + ".probability", s.probability());
+      list(source, at + ".group", s.group());
+      for (String member : s.group()) {
+        faultId(source, at + ".group", member);
+      }
+      text(source, at + ".why", s.why(), MAX_TEXT);
+    }
+  }
+
+  /** Checks an action's texts before it is stored; {@code field} names it in messages. */
+  public static void action(
+      String source, String field, String part, String oldValue, String newValue, String text) {
+    shortText(source, field + "part", part, false);
+    shortText(source, field + "oldValue", oldValue, false);
+    shortText(source, field + "newValue", newValue, false);
+    text(source, field + "text", text, MAX_TEXT);
+  }
+
   /**
    * Returns the part designators that a fault id or an action's part field names, for search:
    * {@code R2:open} gives R2; {@code U1A:dead} gives U1A and U1; {@code U1.6-7:bridge} gives U1;
    * {@code R2, R3} gives R2 and R3.
    */
-  static List<String> parts(String faultOrPart) {
+  public static List<String> parts(String faultOrPart) {
     List<String> parts = new ArrayList<>();
     String text = faultOrPart.strip();
     if (text.equals("healthy")) {
@@ -144,7 +189,7 @@ final class Checks {
     }
   }
 
-  static String quote(String value) {
+  public static String quote(String value) {
     if (value == null) {
       return "nothing";
     }

@@ -25,7 +25,7 @@ public final class ShopMemory {
    * such case. A case that confirmed two faults counts once for each.
    */
   public Map<String, Integer> faultCounts(String boardModel) {
-    return store.confirmedFaultCounts(boardModel);
+    return store.cases().confirmedFaultCounts(boardModel);
   }
 
   /**

@@ -47,13 +47,14 @@ public record CaseReport(
       HistoryStore store, String caseId, Instant generatedAt, String programVersion) {
     CaseFile file =
         store
+            .cases()
             .caseFile(caseId)
             .orElseThrow(
                 () ->
                     new InvalidInputException(
                         "history", "case", "no case has the id '" + caseId + "'"));
-    Unit unit = store.unit(file.repairCase().unitId()).orElseThrow();
-    BoardModel model = store.findBoardModel(unit.boardModelId()).orElseThrow();
+    Unit unit = store.units().find(file.repairCase().unitId()).orElseThrow();
+    BoardModel model = store.units().findBoardModel(unit.boardModelId()).orElseThrow();
     return new CaseReport(unit, model, file, generatedAt, programVersion);
   }
 }

@@ -194,7 +194,10 @@ class BenchFlowTest {
     settle();
     shoot("09-history");
     var hits =
-        workshop.store().search(SearchQuery.all().withSerial(SERIAL).withStatus(CaseStatus.CLOSED));
+        workshop
+            .store()
+            .cases()
+            .search(SearchQuery.all().withSerial(SERIAL).withStatus(CaseStatus.CLOSED));
     assertThat(hits)
         .anySatisfy(
             hit -> {
@@ -206,6 +209,7 @@ class BenchFlowTest {
     var file =
         workshop
             .store()
+            .cases()
             .caseFile(
                 hits.stream()
                     .filter(h -> h.symptom().startsWith("Channel 1 output pinned"))

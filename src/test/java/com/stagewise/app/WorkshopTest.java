@@ -17,13 +17,13 @@ class WorkshopTest {
   @Test
   void open_demoOnEmptyHistory_fillsTheShopAndTheLibrary() {
     try (Workshop w = Workshop.open(folder(), true, Path.of("data", "stages"))) {
-      var mixer = w.store().findBoardModel(DemoHistory.MIXER).orElseThrow();
-      assertThat(w.store().units(mixer.id())).isNotEmpty();
+      var mixer = w.store().units().findBoardModel(DemoHistory.MIXER).orElseThrow();
+      assertThat(w.store().units().list(mixer.id())).isNotEmpty();
       assertThat(w.boardFlags().isMainsPowered(mixer.id())).isTrue();
       // Every sheet of the demo library joins its board's library.
       int sheets =
-          w.store().boardModels().stream()
-              .mapToInt(m -> w.store().stageSheets(m.id()).size())
+          w.store().units().boardModels().stream()
+              .mapToInt(m -> w.store().library().sheets(m.id()).size())
               .sum();
       assertThat(sheets).isGreaterThanOrEqualTo(DemoSetup.sheets(Path.of("data", "stages")).size());
     }
@@ -33,10 +33,10 @@ class WorkshopTest {
   void open_demoTwice_neverAddsTheDemoAgain() {
     int units;
     try (Workshop w = Workshop.open(folder(), true, Path.of("data", "stages"))) {
-      units = w.store().units(null).size();
+      units = w.store().units().list(null).size();
     }
     try (Workshop w = Workshop.open(folder(), true, Path.of("data", "stages"))) {
-      assertThat(w.store().units(null)).hasSize(units);
+      assertThat(w.store().units().list(null)).hasSize(units);
     }
   }
 

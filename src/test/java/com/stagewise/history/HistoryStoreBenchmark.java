@@ -51,7 +51,7 @@ public class HistoryStoreBenchmark {
     if (fresh) {
       SyntheticHistory.fill(store, CASES, READINGS_PER_CASE, 1, 2_000);
     }
-    unitIds = store.units(null).stream().map(u -> u.id()).toList();
+    unitIds = store.units().list(null).stream().map(u -> u.id()).toList();
   }
 
   @TearDown(Level.Trial)
@@ -62,33 +62,38 @@ public class HistoryStoreBenchmark {
   @Benchmark
   public List<SearchHit> searchBySerial() {
     int unit = random.nextInt(SyntheticHistory.unitsFor(CASES));
-    return store.search(SearchQuery.all().withSerial(SyntheticHistory.serial(unit)));
+    return store.cases().search(SearchQuery.all().withSerial(SyntheticHistory.serial(unit)));
   }
 
   /** A word picked uniformly from the vocabulary: a specific word, in few texts (typical query). */
   @Benchmark
   public List<SearchHit> fullTextSpecificWord() {
-    return store.search(
-        SearchQuery.all()
-            .withText(SyntheticHistory.word(random.nextInt(SyntheticHistory.VOCABULARY))));
+    return store
+        .cases()
+        .search(
+            SearchQuery.all()
+                .withText(SyntheticHistory.word(random.nextInt(SyntheticHistory.VOCABULARY))));
   }
 
   /** Two words drawn as they occur in the texts (so often common ones), both required. */
   @Benchmark
   public List<SearchHit> fullTextTwoUsualWords() {
-    return store.search(
-        SearchQuery.all()
-            .withText(SyntheticHistory.textWord(random) + " " + SyntheticHistory.textWord(random)));
+    return store
+        .cases()
+        .search(
+            SearchQuery.all()
+                .withText(
+                    SyntheticHistory.textWord(random) + " " + SyntheticHistory.textWord(random)));
   }
 
   /** The most frequent word, in about a third of all texts: the worst case. */
   @Benchmark
   public List<SearchHit> fullTextMostCommonWord() {
-    return store.search(SearchQuery.all().withText(SyntheticHistory.word(0)));
+    return store.cases().search(SearchQuery.all().withText(SyntheticHistory.word(0)));
   }
 
   @Benchmark
   public UnitHistory unitHistory() {
-    return store.unitHistory(unitIds.get(random.nextInt(unitIds.size()))).orElseThrow();
+    return store.cases().unitHistory(unitIds.get(random.nextInt(unitIds.size()))).orElseThrow();
   }
 }

@@ -27,16 +27,16 @@ class ShopMemoryTest {
   @Test
   void faultCounts_countsOnlyClosedFixedCasesOfTheModel(@TempDir Path folder) {
     try (HistoryStore store = HistoryStore.open(folder.resolve("m.db"))) {
-      BoardModel mixer = store.boardModel("MX-8", "");
-      BoardModel psu = store.boardModel("PSU-30", "");
-      Unit a = store.addUnit("1", mixer.id(), "");
-      Unit b = store.addUnit("2", mixer.id(), "");
-      Unit c = store.addUnit("3", psu.id(), "");
+      BoardModel mixer = store.units().boardModel("MX-8", "");
+      BoardModel psu = store.units().boardModel("PSU-30", "");
+      Unit a = store.units().add("1", mixer.id(), "");
+      Unit b = store.units().add("2", mixer.id(), "");
+      Unit c = store.units().add("3", psu.id(), "");
       close(store, a, Outcome.FIXED, "U1A:dead");
       close(store, b, Outcome.FIXED, "U1A:dead", "R7:open");
       close(store, b, Outcome.NOT_FIXED, "C3:short");
       close(store, c, Outcome.FIXED, "R7:open");
-      store.openCase(a.id(), "still open");
+      store.cases().open(a.id(), "still open");
       ShopMemory memory = new ShopMemory(store);
       assertThat(memory.faultCounts("mx-8")).isEqualTo(Map.of("U1A:dead", 2, "R7:open", 1));
       assertThat(memory.faultCounts(psu.id())).isEqualTo(Map.of("R7:open", 1));
@@ -45,8 +45,8 @@ class ShopMemoryTest {
   }
 
   private static void close(HistoryStore store, Unit unit, Outcome outcome, String... faults) {
-    RepairCase c = store.openCase(unit.id(), "symptom");
-    store.closeCase(c.id(), outcome, List.of(faults));
+    RepairCase c = store.cases().open(unit.id(), "symptom");
+    store.cases().close(c.id(), outcome, List.of(faults));
   }
 
   private static double sum(Map<String, Double> values) {

@@ -134,8 +134,8 @@ class PdfReportTest {
     try (HistoryStore store = HistoryStore.open(folder.resolve("demo.db"))) {
       DemoHistory.fill(store);
       List<String> serials = new ArrayList<>();
-      for (Unit unit : store.units(null)) {
-        UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
+      for (Unit unit : store.units().list(null)) {
+        UnitHistory history = store.cases().unitHistory(unit.id()).orElseThrow();
         for (CaseFile file : history.cases()) {
           CaseReport report =
               CaseReport.read(store, file.repairCase().id(), ReportFixture.GENERATED, "test build");

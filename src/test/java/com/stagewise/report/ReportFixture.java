@@ -67,9 +67,11 @@ final class ReportFixture {
    */
   static String storeCase(HistoryStore store, Clock clock, int readings) {
     BoardModel model =
-        store.boardModel("Northfield MX-8 channel board", "Northfield Audio (invented maker)");
-    Unit unit = store.addUnit(SERIAL, model.id(), "job 1184 — Riverside Hall");
-    RepairCase opened = store.openCase(unit.id(), SYMPTOM);
+        store
+            .units()
+            .boardModel("Northfield MX-8 channel board", "Northfield Audio (invented maker)");
+    Unit unit = store.units().add(SERIAL, model.id(), "job 1184 — Riverside Hall");
+    RepairCase opened = store.cases().open(unit.id(), SYMPTOM);
     String id = opened.id();
     List<StoredReading> stored = new ArrayList<>();
     for (int i = 1; i <= readings; i++) {
@@ -113,17 +115,19 @@ final class ReportFixture {
                     "Output stuck at its lower limit.",
                     3)),
             "SUM dc (0.37 bits): confirms the first suspect");
-    store.addReadings(id, stored, suspects);
-    store.addAction(
-        id,
-        ActionKind.PART_REPLACED,
-        "R2",
-        "47k 1% (cracked)",
-        "47k 1% metal film",
-        "Hairline crack across the body.");
-    store.addAction(id, ActionKind.REFLOW, "U1", "", "", "Reflowed pins 1–4.");
-    store.addNote(id, NOTE);
-    store.closeCase(id, Outcome.FIXED, List.of(FIRST_SUSPECT));
+    store.cases().addReadings(id, stored, suspects);
+    store
+        .cases()
+        .addAction(
+            id,
+            ActionKind.PART_REPLACED,
+            "R2",
+            "47k 1% (cracked)",
+            "47k 1% metal film",
+            "Hairline crack across the body.");
+    store.cases().addAction(id, ActionKind.REFLOW, "U1", "", "", "Reflowed pins 1–4.");
+    store.cases().addNote(id, NOTE);
+    store.cases().close(id, Outcome.FIXED, List.of(FIRST_SUSPECT));
     return id;
   }
 

@@ -94,7 +94,7 @@ public final class DemoHistory {
     if (!store.isEmpty()) {
       throw new IllegalStateException("the demo data goes into an empty history only");
     }
-    return store.importBundle(bundle(), "demo data");
+    return store.transfer().importBundle(bundle(), "demo data");
   }
 
   /** Returns the demo data as a bundle. */

@@ -157,12 +157,16 @@ public final class SyntheticHistory {
   public static void fill(
       HistoryStore store, int cases, int readingsPerCase, long seed, int chunk) {
     Generator generator = new Generator(cases, seed);
-    store.importBundle(
-        bundle(generator.models, generator.units, List.of(), List.of(), List.of(), List.of()),
-        "generator");
+    store
+        .transfer()
+        .importBundle(
+            bundle(generator.models, generator.units, List.of(), List.of(), List.of(), List.of()),
+            "generator");
     for (int first = 0; first < cases; first += chunk) {
-      store.importBundle(
-          generator.cases(Math.min(chunk, cases - first), readingsPerCase), "generator");
+      store
+          .transfer()
+          .importBundle(
+              generator.cases(Math.min(chunk, cases - first), readingsPerCase), "generator");
     }
   }
 

@@ -1,13 +1,6 @@
 package com.stagewise.interchange.history;
 
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.StreamReadConstraints;
-import com.fasterxml.jackson.core.exc.StreamConstraintsException;
-import com.fasterxml.jackson.databind.DeserializationFeature;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
@@ -27,6 +20,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
+import com.stagewise.interchange.JsonField;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
@@ -37,7 +31,6 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
 
 /**
  * Reads and writes a history bundle ({@code {"format": "stagewise-history", "version": 1, …}}), the
@@ -56,8 +49,8 @@ public final class HistoryBundleJson {
   /** The deepest nesting accepted (a bundle needs five levels). */
   static final int MAX_DEPTH = 16;
 
-  private static final Set<String> TOP =
-      Set.of(
+  private static final List<String> TOP =
+      List.of(
           "format",
           "version",
           "exportedAt",
@@ -70,14 +63,14 @@ public final class HistoryBundleJson {
           "suspectLists",
           "actions",
           "notes");
-  private static final Set<String> BOARD_MODEL =
-      Set.of("id", "name", "maker", "notes", "updatedAt");
-  private static final Set<String> STAGE_SHEET =
-      Set.of("id", "boardModelId", "title", "sheet", "updatedAt");
-  private static final Set<String> UNIT =
-      Set.of("id", "serial", "boardModelId", "owner", "updatedAt");
-  private static final Set<String> CASE =
-      Set.of(
+  private static final List<String> BOARD_MODEL =
+      List.of("id", "name", "maker", "notes", "updatedAt");
+  private static final List<String> STAGE_SHEET =
+      List.of("id", "boardModelId", "title", "sheet", "updatedAt");
+  private static final List<String> UNIT =
+      List.of("id", "serial", "boardModelId", "owner", "updatedAt");
+  private static final List<String> CASE =
+      List.of(
           "id",
           "unitId",
           "openedAt",
@@ -87,14 +80,14 @@ public final class HistoryBundleJson {
           "outcome",
           "confirmedFaults",
           "updatedAt");
-  private static final Set<String> READING =
-      Set.of("id", "caseId", "at", "kind", "value", "hz", "uncertainty", "meter", "takenAt");
-  private static final Set<String> SUSPECT_LIST =
-      Set.of("id", "caseId", "computedAt", "programVersion", "verdict", "suspects", "nextProbes");
-  private static final Set<String> SUSPECT = Set.of("fault", "probability", "group", "why");
-  private static final Set<String> ACTION =
-      Set.of("id", "caseId", "at", "kind", "part", "oldValue", "newValue", "text", "updatedAt");
-  private static final Set<String> NOTE = Set.of("id", "caseId", "at", "text", "updatedAt");
+  private static final List<String> READING =
+      List.of("id", "caseId", "at", "kind", "value", "hz", "uncertainty", "meter", "takenAt");
+  private static final List<String> SUSPECT_LIST =
+      List.of("id", "caseId", "computedAt", "programVersion", "verdict", "suspects", "nextProbes");
+  private static final List<String> SUSPECT = List.of("fault", "probability", "group", "why");
+  private static final List<String> ACTION =
+      List.of("id", "caseId", "at", "kind", "part", "oldValue", "newValue", "text", "updatedAt");
+  private static final List<String> NOTE = List.of("id", "caseId", "at", "text", "updatedAt");
 
   private static final ObjectMapper MAPPER = mapper();
   private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
@@ -102,19 +95,7 @@ public final class HistoryBundleJson {
   private HistoryBundleJson() {}
 
   private static ObjectMapper mapper() {
-    JsonFactory factory =
-        JsonFactory.builder()
-            .streamReadConstraints(
-                StreamReadConstraints.builder()
-                    .maxStringLength(MAX_STRING)
-                    .maxNestingDepth(MAX_DEPTH)
-                    .build())
-            .enable(com.fasterxml.jackson.core.StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .build();
-    ObjectMapper mapper = new ObjectMapper(factory);
-    mapper.enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
-    mapper.enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
-    return mapper;
+    return new ObjectMapper();
   }
 
   // ---- reading ----------------------------------------------------------------------------------
@@ -137,50 +118,25 @@ public final class HistoryBundleJson {
 
   /** Reads a bundle from {@code in}; {@code source} names it in messages. */
   public static HistoryBundle read(InputStream in, String source) {
-    JsonNode root;
-    try {
-      root = MAPPER.readTree(in);
-    } catch (StreamConstraintsException e) {
-      throw new InvalidInputException(
-          source, "", "the bundle is outside the accepted limits: " + e.getOriginalMessage());
-    } catch (JsonProcessingException e) {
-      String where =
-          e.getLocation() == null
-              ? ""
-              : " (line "
-                  + e.getLocation().getLineNr()
-                  + ", column "
-                  + e.getLocation().getColumnNr()
-                  + ")";
-      throw new InvalidInputException(
-          source, "", "not valid JSON" + where + ": " + e.getOriginalMessage());
-    } catch (IOException e) {
-      throw new InvalidInputException(source, "", "cannot read: " + e.getMessage());
-    }
-    if (root == null || root.isMissingNode()) {
-      throw new InvalidInputException(source, "", "the file is empty (expected a history bundle)");
-    }
-    return fromTree(root, source);
+    return fromTree(JsonField.parseRoot(in, source, "a history bundle", MAX_STRING, MAX_DEPTH));
   }
 
-  static HistoryBundle fromTree(JsonNode root, String source) {
-    JsonFields top = JsonFields.object(source, "", root, TOP);
-    String format = top.text("format");
+  static HistoryBundle fromTree(JsonField top) {
+    top.object("a history bundle", TOP);
+    String format = top.require("format", "\"" + HistoryBundle.FORMAT + "\"").text();
     if (!format.equals(HistoryBundle.FORMAT)) {
-      throw new InvalidInputException(
-          source,
-          "format",
-          "expected \""
-              + HistoryBundle.FORMAT
-              + "\", got \""
-              + format
-              + "\" (not a history bundle)");
+      throw top.require("format", "")
+          .error(
+              "expected \""
+                  + HistoryBundle.FORMAT
+                  + "\", found \""
+                  + format
+                  + "\" (not a history bundle)");
     }
-    int version = top.integer("version");
+    JsonField versionField = top.require("version", "the bundle format version");
+    int version = versionField.integer("the bundle format version");
     if (version > HistoryBundle.CURRENT_VERSION) {
-      throw new InvalidInputException(
-          source,
-          "version",
+      throw versionField.error(
           "bundle format version "
               + version
               + " is newer than this program reads (up to "
@@ -188,135 +144,128 @@ public final class HistoryBundleJson {
               + "); use a newer Stagewise");
     }
     if (version < 1) {
-      throw new InvalidInputException(source, "version", "expected 1 or more, got " + version);
+      throw versionField.error("expected 1 or more, found " + version);
     }
     List<BoardModel> models = new ArrayList<>();
-    List<JsonNode> items = top.array("boardModels");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "boardModels[" + i + "]", items.get(i), BOARD_MODEL);
+    for (JsonField f : top.optionalElements("boardModels", "board models")) {
+      f.object("a board model", BOARD_MODEL);
       models.add(
           new BoardModel(
-              f.text("id"),
-              f.text("name"),
-              f.text("maker", ""),
-              f.text("notes", ""),
-              f.time("updatedAt")));
+              text(f, "id"),
+              text(f, "name"),
+              f.optionalText("maker", ""),
+              f.optionalText("notes", ""),
+              time(f, "updatedAt")));
     }
     List<StageSheetRecord> sheets = new ArrayList<>();
-    items = top.array("stageSheets");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "stageSheets[" + i + "]", items.get(i), STAGE_SHEET);
+    for (JsonField f : top.optionalElements("stageSheets", "stage sheets")) {
+      f.object("a stage sheet", STAGE_SHEET);
       sheets.add(
           new StageSheetRecord(
-              f.text("id"),
-              f.text("boardModelId"),
-              f.text("title", ""),
-              f.text("sheet"),
-              f.time("updatedAt")));
+              text(f, "id"),
+              text(f, "boardModelId"),
+              f.optionalText("title", ""),
+              text(f, "sheet"),
+              time(f, "updatedAt")));
     }
     List<Unit> units = new ArrayList<>();
-    items = top.array("units");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "units[" + i + "]", items.get(i), UNIT);
+    for (JsonField f : top.optionalElements("units", "units")) {
+      f.object("a unit", UNIT);
       units.add(
           new Unit(
-              f.text("id"),
-              f.text("serial"),
-              f.text("boardModelId"),
-              f.text("owner", ""),
-              f.time("updatedAt")));
+              text(f, "id"),
+              text(f, "serial"),
+              text(f, "boardModelId"),
+              f.optionalText("owner", ""),
+              time(f, "updatedAt")));
     }
     List<RepairCase> cases = new ArrayList<>();
-    items = top.array("cases");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "cases[" + i + "]", items.get(i), CASE);
-      String outcome = f.text("outcome", null);
+    for (JsonField f : top.optionalElements("cases", "cases")) {
+      f.object("a case", CASE);
       cases.add(
           new RepairCase(
-              f.text("id"),
-              f.text("unitId"),
-              f.time("openedAt"),
-              f.text("symptom", ""),
-              f.word("status", CaseStatus::fromWord, "open or closed"),
-              f.time("closedAt", null),
-              outcome == null
-                  ? null
-                  : f.word("outcome", Outcome::fromWord, "fixed, not-fixed or returned"),
-              f.texts("confirmedFaults"),
-              f.time("updatedAt")));
+              text(f, "id"),
+              text(f, "unitId"),
+              time(f, "openedAt"),
+              f.optionalText("symptom", ""),
+              f.require("status", "open or closed").word(CaseStatus::fromWord, "open or closed"),
+              f.optional("closedAt").map(JsonField::time).orElse(null),
+              f.optional("outcome")
+                  .map(o -> o.word(Outcome::fromWord, "fixed, not-fixed or returned"))
+                  .orElse(null),
+              f.optional("confirmedFaults").map(g -> g.texts("fault ids")).orElse(List.of()),
+              time(f, "updatedAt")));
     }
     List<StoredReading> readings = new ArrayList<>();
-    items = top.array("readings");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "readings[" + i + "]", items.get(i), READING);
+    for (JsonField f : top.optionalElements("readings", "readings")) {
+      f.object("a reading", READING);
       readings.add(
           new StoredReading(
-              f.text("id"),
-              f.text("caseId"),
-              f.text("at"),
-              f.word("kind", ReadingKind::fromWord, "dc or ac"),
-              f.number("value"),
-              f.number("hz", null),
-              f.number("uncertainty", null),
-              f.text("meter", ""),
-              f.time("takenAt")));
+              text(f, "id"),
+              text(f, "caseId"),
+              text(f, "at"),
+              f.require("kind", "dc or ac").word(ReadingKind::fromWord, "dc or ac"),
+              f.require("value", "a number").finite("the reading's value"),
+              f.optional("hz").map(h -> h.finite("a frequency in Hz")).orElse(null),
+              f.optional("uncertainty").map(u -> u.finite("an uncertainty in volts")).orElse(null),
+              f.optionalText("meter", ""),
+              time(f, "takenAt")));
     }
     List<SuspectListRecord> lists = new ArrayList<>();
-    items = top.array("suspectLists");
-    for (int i = 0; i < items.size(); i++) {
-      String at = "suspectLists[" + i + "]";
-      JsonFields f = JsonFields.object(source, at, items.get(i), SUSPECT_LIST);
+    for (JsonField f : top.optionalElements("suspectLists", "suspect lists")) {
+      f.object("a suspect list", SUSPECT_LIST);
       List<StoredSuspect> suspects = new ArrayList<>();
-      List<JsonNode> suspectNodes = f.array("suspects");
-      for (int j = 0; j < suspectNodes.size(); j++) {
-        JsonFields s =
-            JsonFields.object(source, at + ".suspects[" + j + "]", suspectNodes.get(j), SUSPECT);
+      List<JsonField> suspectFields = f.optionalElements("suspects", "suspects");
+      for (int j = 0; j < suspectFields.size(); j++) {
+        JsonField s = suspectFields.get(j).object("a suspect", SUSPECT);
         suspects.add(
             new StoredSuspect(
-                s.text("fault"),
-                s.number("probability"),
-                s.texts("group"),
-                s.text("why", ""),
+                text(s, "fault"),
+                s.require("probability", "a number").finite("a probability"),
+                s.optional("group").map(g -> g.texts("fault ids")).orElse(List.of()),
+                s.optionalText("why", ""),
                 j + 1));
       }
       lists.add(
           new SuspectListRecord(
-              f.text("id"),
-              f.text("caseId"),
-              f.time("computedAt"),
-              f.text("programVersion", ""),
-              f.text("verdict"),
+              text(f, "id"),
+              text(f, "caseId"),
+              time(f, "computedAt"),
+              f.optionalText("programVersion", ""),
+              text(f, "verdict"),
               suspects,
-              f.text("nextProbes", "")));
+              f.optionalText("nextProbes", "")));
     }
     List<RepairAction> actions = new ArrayList<>();
-    items = top.array("actions");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "actions[" + i + "]", items.get(i), ACTION);
+    for (JsonField f : top.optionalElements("actions", "actions")) {
+      f.object("an action", ACTION);
       actions.add(
           new RepairAction(
-              f.text("id"),
-              f.text("caseId"),
-              f.time("at"),
-              f.word("kind", ActionKind::fromWord, "part-replaced, reflow, adjustment or other"),
-              f.text("part", ""),
-              f.text("oldValue", ""),
-              f.text("newValue", ""),
-              f.text("text", ""),
-              f.time("updatedAt")));
+              text(f, "id"),
+              text(f, "caseId"),
+              time(f, "at"),
+              f.require("kind", ACTION_KINDS).word(ActionKind::fromWord, ACTION_KINDS),
+              f.optionalText("part", ""),
+              f.optionalText("oldValue", ""),
+              f.optionalText("newValue", ""),
+              f.optionalText("text", ""),
+              time(f, "updatedAt")));
     }
     List<CaseNote> notes = new ArrayList<>();
-    items = top.array("notes");
-    for (int i = 0; i < items.size(); i++) {
-      JsonFields f = JsonFields.object(source, "notes[" + i + "]", items.get(i), NOTE);
+    for (JsonField f : top.optionalElements("notes", "notes")) {
+      f.object("a note", NOTE);
       notes.add(
           new CaseNote(
-              f.text("id"), f.text("caseId"), f.time("at"), f.text("text"), f.time("updatedAt")));
+              text(f, "id"),
+              text(f, "caseId"),
+              time(f, "at"),
+              text(f, "text"),
+              time(f, "updatedAt")));
     }
     return new HistoryBundle(
         version,
-        top.time("exportedAt", Instant.EPOCH),
-        top.text("programVersion", ""),
+        top.optional("exportedAt").map(JsonField::time).orElse(Instant.EPOCH),
+        top.optionalText("programVersion", ""),
         models,
         sheets,
         units,
@@ -325,6 +274,16 @@ public final class HistoryBundleJson {
         lists,
         actions,
         notes);
+  }
+
+  private static final String ACTION_KINDS = "part-replaced, reflow, adjustment or other";
+
+  private static String text(JsonField object, String key) {
+    return object.require(key, "a string").text();
+  }
+
+  private static Instant time(JsonField object, String key) {
+    return object.require(key, "a UTC time such as 2026-03-04T10:15:30Z").time();
   }
 
   // ---- writing ----------------------------------------------------------------------------------

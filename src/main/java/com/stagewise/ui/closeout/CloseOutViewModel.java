@@ -110,7 +110,7 @@ public final class CloseOutViewModel {
           .tasks()
           .run(
               "Reading the case",
-              () -> bench.store().caseFile(rc.id()).map(f -> f.actions()).orElse(List.of()),
+              () -> bench.store().cases().caseFile(rc.id()).map(f -> f.actions()).orElse(List.of()),
               stored -> {
                 if (bench.openCaseProperty().get() == rc) {
                   actions.setAll(stored);
@@ -234,7 +234,7 @@ public final class CloseOutViewModel {
         .tasks()
         .run(
             "Recording the action",
-            () -> bench.store().addAction(rc.id(), kind, part, oldValue, newValue, words),
+            () -> bench.store().cases().addAction(rc.id(), kind, part, oldValue, newValue, words),
             stored -> {
               actions.add(stored);
               clearForm();
@@ -280,9 +280,9 @@ public final class CloseOutViewModel {
             "Closing the case",
             () -> {
               if (!note.isEmpty()) {
-                bench.store().addNote(rc.id(), note);
+                bench.store().cases().addNote(rc.id(), note);
               }
-              RepairCase closed = bench.store().closeCase(rc.id(), chosen, faults);
+              RepairCase closed = bench.store().cases().close(rc.id(), chosen, faults);
               bench.resume().forget(rc.id());
               return closed;
             },
@@ -307,7 +307,7 @@ public final class CloseOutViewModel {
             "Keeping the case open",
             () -> {
               if (!note.isEmpty()) {
-                bench.store().addNote(rc.id(), note);
+                bench.store().cases().addNote(rc.id(), note);
               }
               return null;
             },

@@ -129,7 +129,7 @@ public final class HistoryViewModel {
         .tasks()
         .run(
             "Searching the history",
-            () -> bench.store().search(finalQuery),
+            () -> bench.store().cases().search(finalQuery),
             found -> {
               hits.setAll(found);
               hitsNote.set(
@@ -166,13 +166,14 @@ public final class HistoryViewModel {
               CaseFile file =
                   bench
                       .store()
+                      .cases()
                       .caseFile(caseId)
                       .orElseThrow(
                           () ->
                               new IllegalStateException(
                                   "the case " + caseId + " is not in the history"));
               UnitHistory unit =
-                  bench.store().unitHistory(file.repairCase().unitId()).orElseThrow();
+                  bench.store().cases().unitHistory(file.repairCase().unitId()).orElseThrow();
               return new Loaded(file, unit);
             },
             loaded -> {

@@ -145,7 +145,7 @@ public final class ReadingsViewModel {
             () -> {
               ExpectedVolts volts = ExpectedVolts.of(stage);
               Map<String, Integer> counts =
-                  boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel);
+                  boardModel.isEmpty() ? Map.of() : store.cases().confirmedFaultCounts(boardModel);
               Diagnoser d = Diagnoser.of(stage, counts);
               Diagnosis diagnosis =
                   taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
@@ -263,7 +263,9 @@ public final class ReadingsViewModel {
                       ? ready
                       : Diagnoser.of(
                           stage,
-                          boardModel.isEmpty() ? Map.of() : store.confirmedFaultCounts(boardModel));
+                          boardModel.isEmpty()
+                              ? Map.of()
+                              : store.cases().confirmedFaultCounts(boardModel));
               Diagnosis diagnosis = d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
               Instant now = Instant.now();
               StoredReading stored =
@@ -277,7 +279,9 @@ public final class ReadingsViewModel {
                       null,
                       meterText(),
                       now);
-              store.addReadings(caseId, List.of(stored), suspectList(caseId, now, diagnosis));
+              store
+                  .cases()
+                  .addReadings(caseId, List.of(stored), suspectList(caseId, now, diagnosis));
               return diagnosis;
             },
             diagnosis -> {

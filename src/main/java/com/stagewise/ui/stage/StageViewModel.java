@@ -246,7 +246,7 @@ public final class StageViewModel {
             "Reading the stage library",
             () -> {
               List<LibraryEntry> entries = new ArrayList<>();
-              for (StageSheetRecord sheet : bench.store().stageSheets(model.id())) {
+              for (StageSheetRecord sheet : bench.store().library().sheets(model.id())) {
                 Stage s = StageSheet.read(sheet.sheetJson(), "stage library: " + sheet.title());
                 entries.add(new LibraryEntry(s.title().isEmpty() ? sheet.title() : s.title(), s));
               }
@@ -424,7 +424,7 @@ public final class StageViewModel {
                     if (addToLibrary) {
                       // A stage built here joins the board model's library, so the next unit finds
                       // it.
-                      bench.store().addStageSheet(model.id(), s.title(), StageSheet.write(s));
+                      bench.store().library().add(model.id(), s.title(), StageSheet.write(s));
                     }
                     return null;
                   },

@@ -3,6 +3,8 @@ package com.stagewise.ui.start;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
+import com.stagewise.history.UnitMatch;
+import com.stagewise.history.UnitQuery;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseStatus;
@@ -15,10 +17,7 @@ import com.stagewise.ui.SafetyCaution;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
@@ -139,7 +138,7 @@ public final class StartViewModel {
         .tasks()
         .run(
             "Reading the board models",
-            () -> bench.store().boardModels().stream().map(BoardModel::name).toList(),
+            () -> bench.store().units().boardModels().stream().map(BoardModel::name).toList(),
             boardModelNames::setAll,
             e ->
                 bench
@@ -184,44 +183,16 @@ public final class StartViewModel {
   }
 
   private static List<UnitRow> findUnits(HistoryStore store, String wanted) {
-    Map<String, String> modelNames = new HashMap<>();
-    for (BoardModel model : store.boardModels()) {
-      modelNames.put(model.id(), model.name());
-    }
+    // One query: exact serials first, then units with a case open, then by serial.
     List<UnitRow> rows = new ArrayList<>();
-    for (Unit unit : store.units(null)) {
-      if (wanted.isEmpty() || normal(unit.serial()).contains(wanted)) {
-        int open = 0;
-        for (var hit :
-            store.search(
-                com.stagewise.history.SearchQuery.all()
-                    .withSerial(unit.serial())
-                    .withStatus(CaseStatus.OPEN))) {
-          if (hit.unitId().equals(unit.id())) {
-            open++;
-          }
-        }
-        rows.add(new UnitRow(unit, modelNames.getOrDefault(unit.boardModelId(), "?"), open));
-      }
+    for (UnitMatch match : store.units().search(UnitQuery.serialLike(wanted))) {
+      rows.add(new UnitRow(match.unit(), match.boardModel(), match.openCases()));
     }
-    // Exact serials first, then units with a case open, then by serial.
-    rows.sort(
-        (a, b) -> {
-          boolean exactA = normal(a.unit().serial()).equals(wanted);
-          boolean exactB = normal(b.unit().serial()).equals(wanted);
-          if (exactA != exactB) {
-            return exactA ? -1 : 1;
-          }
-          if ((a.openCases() > 0) != (b.openCases() > 0)) {
-            return a.openCases() > 0 ? -1 : 1;
-          }
-          return a.unit().serial().compareToIgnoreCase(b.unit().serial());
-        });
     return rows;
   }
 
   static String normal(String text) {
-    return text == null ? "" : text.toUpperCase(Locale.ROOT).replaceAll("[\\s\\-_/]", "");
+    return UnitQuery.normal(text);
   }
 
   /** Shows one unit's history at a glance and puts it on the bench. */
@@ -230,7 +201,7 @@ public final class StartViewModel {
         .tasks()
         .run(
             "Reading the unit's history",
-            () -> bench.store().unitHistory(row.unit().id()).orElseThrow(),
+            () -> bench.store().cases().unitHistory(row.unit().id()).orElseThrow(),
             history -> {
               selected.set(history);
               glance.setAll(glanceOf(history));
@@ -295,11 +266,11 @@ public final class StartViewModel {
         .run(
             "Adding the unit",
             () -> {
-              BoardModel model = bench.store().boardModel(modelText, "");
+              BoardModel model = bench.store().units().boardModel(modelText, "");
               if (mains) {
                 bench.boardFlags().setMainsPowered(model.id(), true);
               }
-              Unit unit = bench.store().addUnit(serialText, model.id(), owner);
+              Unit unit = bench.store().units().add(serialText, model.id(), owner);
               return new UnitRow(unit, model.name(), 0);
             },
             row -> {
@@ -347,7 +318,7 @@ public final class StartViewModel {
         .tasks()
         .run(
             "Opening the case",
-            () -> bench.store().openCase(history.unit().id(), text),
+            () -> bench.store().cases().open(history.unit().id(), text),
             opened -> {
               symptom.set("");
               bench.showUnit(history.unit(), history.boardModel());

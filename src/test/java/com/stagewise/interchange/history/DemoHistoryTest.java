@@ -32,7 +32,7 @@ class DemoHistoryTest {
       assertThat(new ShopMemory(store).faultCounts(DemoHistory.MIXER)).containsEntry("R2:open", 2);
       assertThatThrownBy(() -> DemoHistory.fill(store)).isInstanceOf(IllegalStateException.class);
       // The same demo from another bench merges without duplicates (ids come from fixed names).
-      assertThat(store.importBundle(DemoHistory.bundle(), "demo").added()).isZero();
+      assertThat(store.transfer().importBundle(DemoHistory.bundle(), "demo").added()).isZero();
     }
   }
 }

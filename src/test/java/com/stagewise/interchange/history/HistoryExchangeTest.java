@@ -52,15 +52,15 @@ class HistoryExchangeTest {
     try (HistoryStore a = open("a.db");
         HistoryStore b = open("b.db")) {
       fill(a);
-      HistoryBundle exported = a.export(new ExportSelection.All(), "test");
+      HistoryBundle exported = a.transfer().export(new ExportSelection.All(), "test");
       HistoryBundle parsed = roundTrip(exported);
       assertThat(parsed).isEqualTo(exported);
-      ImportReport report = b.importBundle(parsed, "bundle.json");
+      ImportReport report = b.transfer().importBundle(parsed, "bundle.json");
       assertThat(report.conflicts()).isEmpty();
       assertThat(report.added()).isEqualTo(exported.size());
-      HistoryBundle again = b.export(new ExportSelection.All(), "test");
+      HistoryBundle again = b.transfer().export(new ExportSelection.All(), "test");
       assertThat(withoutExportTime(again)).isEqualTo(withoutExportTime(exported));
-      assertThat(b.unitsBySerial(AWKWARD_SERIAL).get(0).owner()).isEqualTo(AWKWARD_LINE);
+      assertThat(b.units().bySerial(AWKWARD_SERIAL).get(0).owner()).isEqualTo(AWKWARD_LINE);
     }
   }
 
@@ -69,13 +69,14 @@ class HistoryExchangeTest {
     try (HistoryStore a = open("a.db");
         HistoryStore b = open("b.db")) {
       fill(a);
-      HistoryBundle bundle = roundTrip(a.export(new ExportSelection.All(), "test"));
-      b.importBundle(bundle, "x");
-      ImportReport second = b.importBundle(bundle, "x");
+      HistoryBundle bundle = roundTrip(a.transfer().export(new ExportSelection.All(), "test"));
+      b.transfer().importBundle(bundle, "x");
+      ImportReport second = b.transfer().importBundle(bundle, "x");
       assertThat(second.added()).isZero();
       assertThat(second.updated()).isZero();
       assertThat(second.unchanged()).isEqualTo(bundle.size());
-      assertThat(b.export(new ExportSelection.All(), "t").size()).isEqualTo(bundle.size());
+      assertThat(b.transfer().export(new ExportSelection.All(), "t").size())
+          .isEqualTo(bundle.size());
     }
   }
 
@@ -84,21 +85,24 @@ class HistoryExchangeTest {
     try (HistoryStore a = open("a.db");
         HistoryStore b = open("b.db")) {
       fill(a);
-      HistoryBundle early = a.export(new ExportSelection.All(), "t");
-      b.importBundle(early, "x");
+      HistoryBundle early = a.transfer().export(new ExportSelection.All(), "t");
+      b.transfer().importBundle(early, "x");
       RepairCase open =
-          b.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)).stream()
-              .map(h -> b.repairCase(h.caseId()).orElseThrow())
+          b
+              .cases()
+              .search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN))
+              .stream()
+              .map(h -> b.cases().find(h.caseId()).orElseThrow())
               .findFirst()
               .orElseThrow();
       // Bench B closes the case; then a stale copy from A (still open, older) arrives.
-      b.closeCase(open.id(), Outcome.FIXED, List.of("C7:short"));
-      ImportReport report = b.importBundle(early, "x");
+      b.cases().close(open.id(), Outcome.FIXED, List.of("C7:short"));
+      ImportReport report = b.transfer().importBundle(early, "x");
       assertThat(report.conflicts())
           .extracting(ImportReport.Conflict::id)
           .containsExactly(open.id());
       assertThat(report.conflicts().get(0).reason()).contains("kept the local copy");
-      assertThat(b.repairCase(open.id()).orElseThrow().status()).isEqualTo(CaseStatus.CLOSED);
+      assertThat(b.cases().find(open.id()).orElseThrow().status()).isEqualTo(CaseStatus.CLOSED);
     }
   }
 
@@ -107,16 +111,18 @@ class HistoryExchangeTest {
     try (HistoryStore a = open("a.db");
         HistoryStore b = open("b.db")) {
       fill(a);
-      b.importBundle(a.export(new ExportSelection.All(), "t"), "x");
+      b.transfer().importBundle(a.transfer().export(new ExportSelection.All(), "t"), "x");
       String openId =
-          a.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN))
+          a.cases()
+              .search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN))
               .get(0)
               .caseId();
-      a.closeCase(openId, Outcome.RETURNED, List.of());
-      ImportReport report = b.importBundle(a.export(new ExportSelection.All(), "t"), "x");
+      a.cases().close(openId, Outcome.RETURNED, List.of());
+      ImportReport report =
+          b.transfer().importBundle(a.transfer().export(new ExportSelection.All(), "t"), "x");
       assertThat(report.updated()).isEqualTo(1);
       assertThat(report.conflicts()).isEmpty();
-      assertThat(b.repairCase(openId).orElseThrow().outcome()).isEqualTo(Outcome.RETURNED);
+      assertThat(b.cases().find(openId).orElseThrow().outcome()).isEqualTo(Outcome.RETURNED);
     }
   }
 
@@ -124,17 +130,18 @@ class HistoryExchangeTest {
   void import_sameModelAndSerialUnderOtherIds_matchesInsteadOfDuplicating() {
     try (HistoryStore a = open("a.db");
         HistoryStore b = open("b.db")) {
-      BoardModel ma = a.boardModel("PSU-30", "");
-      Unit ua = a.addUnit("H-1", ma.id(), "");
-      a.openCase(ua.id(), "dead on arrival");
-      BoardModel mb = b.boardModel("psu-30", "");
-      Unit ub = b.addUnit("H-1", mb.id(), "");
+      BoardModel ma = a.units().boardModel("PSU-30", "");
+      Unit ua = a.units().add("H-1", ma.id(), "");
+      a.cases().open(ua.id(), "dead on arrival");
+      BoardModel mb = b.units().boardModel("psu-30", "");
+      Unit ub = b.units().add("H-1", mb.id(), "");
       ImportReport report =
-          b.importBundle(roundTrip(a.export(new ExportSelection.All(), "t")), "x");
+          b.transfer()
+              .importBundle(roundTrip(a.transfer().export(new ExportSelection.All(), "t")), "x");
       assertThat(report.matched()).hasSize(2);
-      assertThat(b.boardModels()).hasSize(1);
-      assertThat(b.unitsBySerial("H-1")).containsExactly(ub);
-      assertThat(b.unitHistory(ub.id()).orElseThrow().cases()).hasSize(1);
+      assertThat(b.units().boardModels()).hasSize(1);
+      assertThat(b.units().bySerial("H-1")).containsExactly(ub);
+      assertThat(b.cases().unitHistory(ub.id()).orElseThrow().cases()).hasSize(1);
     }
   }
 
@@ -142,23 +149,27 @@ class HistoryExchangeTest {
   void export_selections_holdWhatTheyRefer() {
     try (HistoryStore a = open("a.db")) {
       fill(a);
-      Unit unit = a.unitsBySerial("NF-8-0001").get(0);
-      HistoryBundle one = a.export(new ExportSelection.OneUnit(unit.id()), "t");
+      Unit unit = a.units().bySerial("NF-8-0001").get(0);
+      HistoryBundle one = a.transfer().export(new ExportSelection.OneUnit(unit.id()), "t");
       assertThat(one.units()).containsExactly(unit);
       assertThat(one.boardModels()).extracting(BoardModel::id).containsExactly(unit.boardModelId());
       assertThat(one.cases()).allMatch(c -> c.unitId().equals(unit.id())).hasSize(1);
       assertThat(one.stageSheets()).hasSize(1);
-      HistoryBundle model = a.export(new ExportSelection.OneBoardModel(unit.boardModelId()), "t");
+      HistoryBundle model =
+          a.transfer().export(new ExportSelection.OneBoardModel(unit.boardModelId()), "t");
       assertThat(model.units()).hasSize(2);
-      Instant firstOpened = a.export(new ExportSelection.All(), "t").cases().get(0).openedAt();
+      Instant firstOpened =
+          a.transfer().export(new ExportSelection.All(), "t").cases().get(0).openedAt();
       HistoryBundle range =
-          a.export(new ExportSelection.OpenedBetween(firstOpened, firstOpened.plusMillis(1)), "t");
+          a.transfer()
+              .export(
+                  new ExportSelection.OpenedBetween(firstOpened, firstOpened.plusMillis(1)), "t");
       assertThat(range.cases()).hasSize(1);
       assertThat(range.units()).hasSize(1);
       assertThat(range.boardModels()).hasSize(1);
       // A selection is importable on its own.
       try (HistoryStore c = open("c.db")) {
-        assertThat(c.importBundle(roundTrip(range), "x").conflicts()).isEmpty();
+        assertThat(c.transfer().importBundle(roundTrip(range), "x").conflicts()).isEmpty();
       }
     }
   }
@@ -169,18 +180,18 @@ class HistoryExchangeTest {
             "broken JSON",
             (Consumer<ObjectNode>) null,
             "{\"format\": \"stagewise-history\", \"version\": 1,",
-            "not valid JSON"),
+            "the text ends too early at line 1, column 46"),
         Arguments.of(
             "trailing data",
             null,
             "{\"format\": \"stagewise-history\", \"version\": 1} {}",
-            "not valid JSON"),
+            "there is more text after the end of the JSON object"),
         Arguments.of(
             "duplicate key",
             null,
             "{\"format\": \"stagewise-history\", \"version\": 1, \"version\": 1}",
-            "Duplicate field"),
-        Arguments.of("not an object", null, "[1, 2]", "expected an object"),
+            "key \"version\" appears twice in one object"),
+        Arguments.of("not an object", null, "[1, 2]", "expected a history bundle as a JSON object"),
         Arguments.of(
             "newer version",
             edit(r -> r.put("version", 2)),
@@ -193,7 +204,7 @@ class HistoryExchangeTest {
             "wrong type",
             edit(r -> first(r, "readings").put("value", "13.4")),
             null,
-            "readings[0].value: expected a number, got a string"),
+            "readings[0].value: expected the reading's value (a number), found the string"),
         Arguments.of(
             "wrong type of list",
             edit(r -> r.put("cases", "none")),
@@ -210,7 +221,7 @@ class HistoryExchangeTest {
             "huge string",
             edit(r -> first(r, "notes").put("text", "x".repeat(3_000_000))),
             null,
-            "limits"),
+            "holds a text longer than 2100000 characters"),
         Arguments.of(
             "long note",
             edit(r -> first(r, "notes").put("text", "x".repeat(60_000))),
@@ -255,8 +266,9 @@ class HistoryExchangeTest {
         Arguments.of(
             "NaN",
             null,
-            "{\"format\":\"stagewise-history\",\"version\":1,\"readings\":[{\"value\":NaN}]}",
-            "not valid JSON"),
+            "{\"format\":\"stagewise-history\",\"version\":1,\"readings\":[{\"id\":\"x\","
+                + "\"caseId\":\"y\",\"at\":\"OUT\",\"kind\":\"dc\",\"value\":NaN}]}",
+            "readings[0].value: expected the reading's value as a finite number, found the number NaN"),
         Arguments.of(
             "closed without outcome",
             edit(r -> first(r, "cases").put("status", "closed").remove("outcome")),
@@ -276,27 +288,30 @@ class HistoryExchangeTest {
         ObjectNode tree =
             (ObjectNode)
                 new ObjectMapper()
-                    .readTree(HistoryBundleJson.toJson(a.export(new ExportSelection.All(), "t")));
+                    .readTree(
+                        HistoryBundleJson.toJson(
+                            a.transfer().export(new ExportSelection.All(), "t")));
         // Cases are written oldest first; make the first case the closed one for the edits.
         edit.accept(tree);
         json = tree.toString();
       }
-      BoardModel before = b.boardModel("Local board", "");
-      HistoryBundle localBefore = b.export(new ExportSelection.All(), "t");
+      BoardModel before = b.units().boardModel("Local board", "");
+      HistoryBundle localBefore = b.transfer().export(new ExportSelection.All(), "t");
       String input = json;
       assertThatThrownBy(
               () ->
-                  b.importBundle(
-                      HistoryBundleJson.read(
-                          new ByteArrayInputStream(input.getBytes(StandardCharsets.UTF_8)),
-                          "bundle.json"),
-                      "bundle.json"))
+                  b.transfer()
+                      .importBundle(
+                          HistoryBundleJson.read(
+                              new ByteArrayInputStream(input.getBytes(StandardCharsets.UTF_8)),
+                              "bundle.json"),
+                          "bundle.json"))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageStartingWith("bundle.json: ")
           .hasMessageContaining(expected);
-      assertThat(withoutExportTime(b.export(new ExportSelection.All(), "t")))
+      assertThat(withoutExportTime(b.transfer().export(new ExportSelection.All(), "t")))
           .isEqualTo(withoutExportTime(localBefore));
-      assertThat(b.boardModels()).containsExactly(before);
+      assertThat(b.units().boardModels()).containsExactly(before);
     }
   }
 
@@ -305,7 +320,7 @@ class HistoryExchangeTest {
     try (HistoryStore a = open("a.db");
         HistoryStore b = open("b.db")) {
       fill(a);
-      HistoryBundle bundle = a.export(new ExportSelection.All(), "t");
+      HistoryBundle bundle = a.transfer().export(new ExportSelection.All(), "t");
       // A reading whose value is not finite passes the JSON reader only through the API; the
       // check runs before the merge, so add one that breaks the database's CHECK constraint
       // instead:
@@ -328,7 +343,7 @@ class HistoryExchangeTest {
               bundle.suspectLists(),
               bundle.actions(),
               bundle.notes());
-      assertThatThrownBy(() -> b.importBundle(broken, "x"))
+      assertThatThrownBy(() -> b.transfer().importBundle(broken, "x"))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageContaining("units[" + (units.size() - 1) + "].boardModelId");
       assertThat(b.isEmpty()).isTrue();
@@ -347,54 +362,58 @@ class HistoryExchangeTest {
 
   /** Fills a history with two board models, three units, one closed and two open cases. */
   private void fill(HistoryStore store) {
-    BoardModel mixer = store.boardModel("MX-8 main board", "Northfield Audio (invented)");
-    store.addStageSheet(
-        mixer.id(),
-        "Input buffer",
-        "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Ω\"}");
-    BoardModel psu = store.boardModel("PSU-30", "Harbour Instruments (invented)");
-    Unit m1 = store.addUnit("NF-8-0001", mixer.id(), "");
-    Unit m2 = store.addUnit("NF-8-0002", mixer.id(), "job 17");
-    Unit p1 = store.addUnit(AWKWARD_SERIAL, psu.id(), AWKWARD_LINE);
-    RepairCase closed = store.openCase(m1.id(), "Hum, left channel");
-    store.addReadings(
-        closed.id(),
-        List.of(
-            new StoredReading(
-                HistoryStore.newId(),
-                closed.id(),
-                "U1.1",
-                ReadingKind.DC,
-                13.41,
-                null,
-                null,
-                "6000-count",
-                clock.instant()),
-            new StoredReading(
-                HistoryStore.newId(),
-                closed.id(),
-                "OUT",
-                ReadingKind.AC,
-                0.0,
-                1000.0,
-                0.001,
-                "",
-                clock.instant())),
-        new SuspectListRecord(
-            HistoryStore.newId(),
+    BoardModel mixer = store.units().boardModel("MX-8 main board", "Northfield Audio (invented)");
+    store
+        .library()
+        .add(
+            mixer.id(),
+            "Input buffer",
+            "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Ω\"}");
+    BoardModel psu = store.units().boardModel("PSU-30", "Harbour Instruments (invented)");
+    Unit m1 = store.units().add("NF-8-0001", mixer.id(), "");
+    Unit m2 = store.units().add("NF-8-0002", mixer.id(), "job 17");
+    Unit p1 = store.units().add(AWKWARD_SERIAL, psu.id(), AWKWARD_LINE);
+    RepairCase closed = store.cases().open(m1.id(), "Hum, left channel");
+    store
+        .cases()
+        .addReadings(
             closed.id(),
-            clock.instant(),
-            "0.1.0",
-            "fault",
             List.of(
-                new StoredSuspect("R2:open", 0.7, List.of("R2:open", "R1:high"), AWKWARD, 1),
-                new StoredSuspect("U1A:stuck-high", 0.3, List.of("U1A:stuck-high"), "", 2)),
-            "U1.2 dc\nOUT ac 1000 Hz"));
-    store.addAction(closed.id(), ActionKind.PART_REPLACED, "R2", "47k", "47k 1%", AWKWARD);
-    store.addNote(closed.id(), AWKWARD);
-    store.closeCase(closed.id(), Outcome.FIXED, List.of("R2:open"));
-    store.openCase(m2.id(), "No output");
-    store.openCase(p1.id(), AWKWARD);
+                new StoredReading(
+                    HistoryStore.newId(),
+                    closed.id(),
+                    "U1.1",
+                    ReadingKind.DC,
+                    13.41,
+                    null,
+                    null,
+                    "6000-count",
+                    clock.instant()),
+                new StoredReading(
+                    HistoryStore.newId(),
+                    closed.id(),
+                    "OUT",
+                    ReadingKind.AC,
+                    0.0,
+                    1000.0,
+                    0.001,
+                    "",
+                    clock.instant())),
+            new SuspectListRecord(
+                HistoryStore.newId(),
+                closed.id(),
+                clock.instant(),
+                "0.1.0",
+                "fault",
+                List.of(
+                    new StoredSuspect("R2:open", 0.7, List.of("R2:open", "R1:high"), AWKWARD, 1),
+                    new StoredSuspect("U1A:stuck-high", 0.3, List.of("U1A:stuck-high"), "", 2)),
+                "U1.2 dc\nOUT ac 1000 Hz"));
+    store.cases().addAction(closed.id(), ActionKind.PART_REPLACED, "R2", "47k", "47k 1%", AWKWARD);
+    store.cases().addNote(closed.id(), AWKWARD);
+    store.cases().close(closed.id(), Outcome.FIXED, List.of("R2:open"));
+    store.cases().open(m2.id(), "No output");
+    store.cases().open(p1.id(), AWKWARD);
   }
 
   private static HistoryBundle roundTrip(HistoryBundle bundle) {

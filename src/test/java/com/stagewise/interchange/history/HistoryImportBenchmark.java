@@ -56,7 +56,9 @@ public class HistoryImportBenchmark {
 
   @Benchmark
   public ImportReport importTenThousandCases() {
-    return target.importBundle(
-        HistoryBundleJson.read(new ByteArrayInputStream(json), "bench.json"), "bench.json");
+    return target
+        .transfer()
+        .importBundle(
+            HistoryBundleJson.read(new ByteArrayInputStream(json), "bench.json"), "bench.json");
   }
 }

@@ -27,12 +27,12 @@ class CloseOutViewModelTest {
   @BeforeEach
   void setUp() {
     t = TestBench.open(temp);
-    var board = t.store.boardModel("Test amp board", "");
-    var unit = t.store.addUnit("TA-1", board.id(), "");
+    var board = t.store.units().boardModel("Test amp board", "");
+    var unit = t.store.units().add("TA-1", board.id(), "");
     t.bench.showUnit(unit, board);
     model = new CloseOutViewModel(t.bench);
     model.setAfterClose(closed::add);
-    t.bench.startCase(t.store.openCase(unit.id(), "Output pinned"));
+    t.bench.startCase(t.store.cases().open(unit.id(), "Output pinned"));
     caseId = t.bench.openCaseProperty().get().id();
     t.bench.stageProperty().set(TestBench.invertingStage(board.name()));
     t.bench.go(Step.CLOSE_OUT);
@@ -74,7 +74,7 @@ class CloseOutViewModelTest {
   void closeCase_withoutOutcome_asksForIt() {
     model.closeCase();
     assertThat(t.problems).containsExactly("How did it end?");
-    assertThat(t.store.repairCase(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);
+    assertThat(t.store.cases().find(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);
   }
 
   @Test
@@ -84,7 +84,7 @@ class CloseOutViewModelTest {
     model.outcomeProperty().set(Outcome.FIXED);
     model.notesProperty().set("Checked both half-waves on the scope.");
     model.closeCase();
-    var file = t.store.caseFile(caseId).orElseThrow();
+    var file = t.store.cases().caseFile(caseId).orElseThrow();
     assertThat(file.repairCase().status()).isEqualTo(CaseStatus.CLOSED);
     assertThat(file.repairCase().outcome()).isEqualTo(Outcome.FIXED);
     assertThat(file.repairCase().confirmedFaults()).containsExactly("R2:open");
@@ -101,7 +101,7 @@ class CloseOutViewModelTest {
     assertThat(closed).containsExactly(caseId);
     assertThat(t.bench.openCaseProperty().get()).isNull();
     // The shop's memory now counts the fault for this board model.
-    assertThat(t.store.confirmedFaultCounts("Test amp board")).containsEntry("R2:open", 1);
+    assertThat(t.store.cases().confirmedFaultCounts("Test amp board")).containsEntry("R2:open", 1);
   }
 
   @Test
@@ -115,9 +115,9 @@ class CloseOutViewModelTest {
   void leaveOpen_keepsTheCaseAndWhereItWas() {
     model.notesProperty().set("Waiting for a replacement op-amp.");
     model.leaveOpen();
-    assertThat(t.store.repairCase(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);
+    assertThat(t.store.cases().find(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);
     assertThat(t.resume.load(caseId).orElseThrow().step()).isEqualTo(Step.CLOSE_OUT);
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.UNIT);
-    assertThat(t.store.caseFile(caseId).orElseThrow().notes()).hasSize(1);
+    assertThat(t.store.cases().caseFile(caseId).orElseThrow().notes()).hasSize(1);
   }
 }

@@ -27,35 +27,39 @@ class HistoryViewModelTest {
   @BeforeEach
   void setUp() {
     t = TestBench.open(temp);
-    var board = t.store.boardModel("Test amp board", "");
-    var unit = t.store.addUnit("TA-1", board.id(), "");
-    var rc = t.store.openCase(unit.id(), "Channel hums after a drop");
+    var board = t.store.units().boardModel("Test amp board", "");
+    var unit = t.store.units().add("TA-1", board.id(), "");
+    var rc = t.store.cases().open(unit.id(), "Channel hums after a drop");
     caseId = rc.id();
-    t.store.addReadings(
-        caseId,
-        List.of(
-            new StoredReading(
+    t.store
+        .cases()
+        .addReadings(
+            caseId,
+            List.of(
+                new StoredReading(
+                    HistoryStore.newId(),
+                    caseId,
+                    "U1.8",
+                    ReadingKind.DC,
+                    14.9,
+                    null,
+                    null,
+                    "",
+                    Instant.now())),
+            new SuspectListRecord(
                 HistoryStore.newId(),
                 caseId,
-                "U1.8",
-                ReadingKind.DC,
-                14.9,
-                null,
-                null,
-                "",
-                Instant.now())),
-        new SuspectListRecord(
-            HistoryStore.newId(),
-            caseId,
-            Instant.now(),
-            "test",
-            "fault",
-            List.of(new StoredSuspect("U1.6-7:bridge", 0.7, List.of("U1.6-7:bridge"), "", 1)),
-            ""));
-    t.store.addAction(
-        caseId, ActionKind.REFLOW, "U1", "", "", "Removed a bridge between pins 6 and 7");
-    t.store.addNote(caseId, "Solder splash under the op-amp.");
-    t.store.closeCase(caseId, Outcome.FIXED, List.of("U1.6-7:bridge"));
+                Instant.now(),
+                "test",
+                "fault",
+                List.of(new StoredSuspect("U1.6-7:bridge", 0.7, List.of("U1.6-7:bridge"), "", 1)),
+                ""));
+    t.store
+        .cases()
+        .addAction(
+            caseId, ActionKind.REFLOW, "U1", "", "", "Removed a bridge between pins 6 and 7");
+    t.store.cases().addNote(caseId, "Solder splash under the op-amp.");
+    t.store.cases().close(caseId, Outcome.FIXED, List.of("U1.6-7:bridge"));
     model = new HistoryViewModel(t.bench);
   }
 

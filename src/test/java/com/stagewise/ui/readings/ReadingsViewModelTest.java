@@ -23,10 +23,10 @@ class ReadingsViewModelTest {
   @BeforeEach
   void setUp() {
     t = TestBench.open(temp);
-    BoardModel board = t.store.boardModel("Test amp board", "");
-    var unit = t.store.addUnit("TA-1", board.id(), "");
+    BoardModel board = t.store.units().boardModel("Test amp board", "");
+    var unit = t.store.units().add("TA-1", board.id(), "");
     t.bench.showUnit(unit, board);
-    t.bench.startCase(t.store.openCase(unit.id(), "Output pinned"));
+    t.bench.startCase(t.store.cases().open(unit.id(), "Output pinned"));
     model = new ReadingsViewModel(t.bench);
     t.bench.stageProperty().set(TestBench.invertingStage(board.name()));
     t.bench.go(Step.READINGS);
@@ -75,7 +75,7 @@ class ReadingsViewModelTest {
     assertThat(model.rows().get(1).reading().at()).isEqualTo("U1.1");
     assertThat(model.rows().get(1).healthy()).isFalse();
     assertThat(model.rows().get(3).healthy()).isTrue();
-    var file = t.store.caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
+    var file = t.store.cases().caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
     assertThat(file.readings())
         .extracting(r -> r.at())
         .containsExactly("U1.8", "U1.4", "U1.1", "U1.2");

@@ -26,15 +26,17 @@ class StageViewModelTest {
   @BeforeEach
   void setUp() {
     t = TestBench.open(temp);
-    var board = t.store.boardModel("Test amp board", "");
+    var board = t.store.units().boardModel("Test amp board", "");
     boardId = board.id();
-    t.store.addStageSheet(
-        board.id(),
-        "Inverting amplifier, test",
-        StageSheet.write(TestBench.invertingStage(board.name())));
-    var unit = t.store.addUnit("TA-1", board.id(), "");
+    t.store
+        .library()
+        .add(
+            board.id(),
+            "Inverting amplifier, test",
+            StageSheet.write(TestBench.invertingStage(board.name())));
+    var unit = t.store.units().add("TA-1", board.id(), "");
     t.bench.showUnit(unit, board);
-    t.bench.startCase(t.store.openCase(unit.id(), "Dead"));
+    t.bench.startCase(t.store.cases().open(unit.id(), "Dead"));
     t.bench.go(Step.STAGE);
     model = new StageViewModel(t.bench);
     model.loadLibrary();
@@ -98,7 +100,7 @@ class StageViewModelTest {
     assertThat(model.stageProperty().get().board()).isEqualTo("Test amp board");
     model.useStage();
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
-    assertThat(t.store.stageSheets(boardId)).hasSize(2);
+    assertThat(t.store.library().sheets(boardId)).hasSize(2);
   }
 
   @Test

@@ -26,9 +26,9 @@ class StartViewModelTest {
   @BeforeEach
   void setUp() {
     t = TestBench.open(temp);
-    amp = t.store.boardModel("Test amp board", "");
-    unit = t.store.addUnit("TA-1001", amp.id(), "bench test");
-    t.store.addUnit("TA-2002", amp.id(), "");
+    amp = t.store.units().boardModel("Test amp board", "");
+    unit = t.store.units().add("TA-1001", amp.id(), "bench test");
+    t.store.units().add("TA-2002", amp.id(), "");
     model = new StartViewModel(t.bench);
   }
 
@@ -63,10 +63,17 @@ class StartViewModelTest {
 
   @Test
   void glance_closedCase_showsOutcomeFaultsAndPartsReplaced() {
-    var rc = t.store.openCase(unit.id(), "No output");
-    t.store.addAction(
-        rc.id(), com.stagewise.history.record.ActionKind.PART_REPLACED, "R2", "open", "47k", "");
-    t.store.closeCase(rc.id(), Outcome.FIXED, List.of("R2:open"));
+    var rc = t.store.cases().open(unit.id(), "No output");
+    t.store
+        .cases()
+        .addAction(
+            rc.id(),
+            com.stagewise.history.record.ActionKind.PART_REPLACED,
+            "R2",
+            "open",
+            "47k",
+            "");
+    t.store.cases().close(rc.id(), Outcome.FIXED, List.of("R2:open"));
     model.serialProperty().set("TA-1001");
     model.search();
     assertThat(model.glance())
@@ -97,7 +104,10 @@ class StartViewModelTest {
     model.openCase();
     assertThat(t.bench.openCaseProperty().get().symptom()).isEqualTo("Left channel dead");
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.STAGE);
-    assertThat(t.store.search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)))
+    assertThat(
+            t.store
+                .cases()
+                .search(com.stagewise.history.SearchQuery.all().withStatus(CaseStatus.OPEN)))
         .hasSize(1);
     assertThat(t.cautions).isEmpty();
   }
@@ -127,30 +137,32 @@ class StartViewModelTest {
     model.newMainsProperty().set(true);
     model.addUnit();
     assertThat(model.selectedProperty().get().unit().serial()).isEqualTo("PX-7");
-    BoardModel power = t.store.findBoardModel("Power board").orElseThrow();
+    BoardModel power = t.store.units().findBoardModel("Power board").orElseThrow();
     assertThat(t.mains).containsEntry(power.id(), true);
     assertThat(t.bench.mainsPoweredProperty().get()).isTrue();
   }
 
   @Test
   void resumeCase_savedAtReadings_comesBackWithStageAndReadings() {
-    var rc = t.store.openCase(unit.id(), "Distorts");
+    var rc = t.store.cases().open(unit.id(), "Distorts");
     t.resume.saveStage(rc.id(), TestBench.invertingStage("Test amp board"));
     t.resume.saveStep(rc.id(), Step.READINGS);
-    t.store.addReadings(
-        rc.id(),
-        List.of(
-            new com.stagewise.history.record.StoredReading(
-                com.stagewise.history.HistoryStore.newId(),
-                rc.id(),
-                "U1.8",
-                com.stagewise.history.record.ReadingKind.DC,
-                14.9,
-                null,
-                null,
-                "",
-                java.time.Instant.now())),
-        null);
+    t.store
+        .cases()
+        .addReadings(
+            rc.id(),
+            List.of(
+                new com.stagewise.history.record.StoredReading(
+                    com.stagewise.history.HistoryStore.newId(),
+                    rc.id(),
+                    "U1.8",
+                    com.stagewise.history.record.ReadingKind.DC,
+                    14.9,
+                    null,
+                    null,
+                    "",
+                    java.time.Instant.now())),
+            null);
     model.serialProperty().set("TA-1001");
     model.search();
     model.resumeCase(rc.id());

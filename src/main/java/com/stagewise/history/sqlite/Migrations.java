@@ -1,5 +1,6 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
+import com.stagewise.history.StorageException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -37,12 +38,11 @@ final class Migrations {
   }
 
   /**
-   * Applies every script the file lacks, up to {@code target}.
+   * Refuses a file whose schema this program does not know (too new), without changing it.
    *
-   * @throws StorageException if the file was made by a newer program, or a script fails (the file
-   *     is then left at the last version that was applied completely)
+   * @throws StorageException if the file was made by a newer program
    */
-  static void migrate(Database database, int target, long nowMillis) {
+  static int requireKnown(Database database) {
     int version = database.read("read the schema version", connection -> currentVersion(database));
     if (version > LATEST) {
       throw new StorageException(
@@ -54,6 +54,24 @@ final class Migrations {
               + LATEST
               + "). It was left as it is; use the newer program.");
     }
+    return version;
+  }
+
+  /** Returns SQLite's own integrity check of the file: {@code ok}, or what is wrong. */
+  static String integrityCheck(Connection connection) throws SQLException {
+    try (Rows rows = new Rows(connection)) {
+      return String.join("; ", rows.query("PRAGMA integrity_check", rs -> rs.getString(1)));
+    }
+  }
+
+  /**
+   * Applies every script the file lacks, up to {@code target}.
+   *
+   * @throws StorageException if the file was made by a newer program, or a script fails (the file
+   *     is then left at the last version that was applied completely)
+   */
+  static void migrate(Database database, int target, long nowMillis) {
+    int version = requireKnown(database);
     for (int next = version + 1; next <= target; next++) {
       int step = next;
       String script = SCRIPTS.get(step - 1);

@@ -1,5 +1,6 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
+import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.Outcome;
@@ -39,17 +40,19 @@ public final class FixtureMaker {
 
   static void make(Path target, int version) {
     Clock clock = Clock.fixed(Instant.parse("2025-06-01T12:00:00Z"), ZoneOffset.UTC);
-    try (HistoryStore store = HistoryStore.open(target, clock, version)) {
-      BoardModel model = store.boardModel("MX-8 main board", "Northfield Audio (invented)");
-      store.addStageSheet(
-          model.id(), "Output driver", "{\"format\": \"stagewise-stage\", \"version\": 1}");
-      Unit unit = store.addUnit("NF-8-0100", model.id(), "job 2025-117");
-      RepairCase closed = store.openCase(unit.id(), CLOSED_SYMPTOM);
-      store.addNote(closed.id(), NOTE);
-      store.addAction(
-          closed.id(), ActionKind.PART_REPLACED, "U3", "dual op-amp", "dual op-amp", "");
-      store.closeCase(closed.id(), Outcome.FIXED, List.of("U3B:dead"));
-      store.openCase(unit.id(), "Crackles when cold");
+    try (HistoryStore store = SqliteHistory.open(target, clock, version)) {
+      BoardModel model = store.units().boardModel("MX-8 main board", "Northfield Audio (invented)");
+      store
+          .library()
+          .add(model.id(), "Output driver", "{\"format\": \"stagewise-stage\", \"version\": 1}");
+      Unit unit = store.units().add("NF-8-0100", model.id(), "job 2025-117");
+      RepairCase closed = store.cases().open(unit.id(), CLOSED_SYMPTOM);
+      store.cases().addNote(closed.id(), NOTE);
+      store
+          .cases()
+          .addAction(closed.id(), ActionKind.PART_REPLACED, "U3", "dual op-amp", "dual op-amp", "");
+      store.cases().close(closed.id(), Outcome.FIXED, List.of("U3B:dead"));
+      store.cases().open(unit.id(), "Crackles when cold");
     }
   }
 }

@@ -1,9 +1,15 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.Checks;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SearchHit;
+import com.stagewise.history.SearchQuery;
+import com.stagewise.history.StorageException;
+import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
@@ -26,6 +32,15 @@ import org.junit.jupiter.api.io.TempDir;
 /** Files that are not what they should be are refused clearly and never overwritten. */
 class FileSafetyTest {
   @TempDir Path folder;
+
+  @Test
+  void open_newFile_isAtLatestSchemaAndEmpty() {
+    try (HistoryStore store = HistoryStore.open(folder.resolve("new.db"))) {
+      assertThat(store.schemaVersion()).isEqualTo(SqliteHistory.latestSchemaVersion());
+      assertThat(store.isEmpty()).isTrue();
+      assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
+    }
+  }
 
   @Test
   void notADatabase_isRefusedAndLeftAsItIs() throws Exception {
@@ -57,10 +72,10 @@ class FileSafetyTest {
   void damagedFile_givesAClearMessageAndIsNotOverwritten() throws Exception {
     Path file = folder.resolve("damaged.db");
     try (HistoryStore store = HistoryStore.open(file)) {
-      BoardModel model = store.boardModel("PSU-30", "");
+      BoardModel model = store.units().boardModel("PSU-30", "");
       for (int i = 0; i < 200; i++) {
-        Unit unit = store.addUnit("U-" + i, model.id(), "");
-        store.openCase(unit.id(), "fault number " + i + " ".repeat(50));
+        Unit unit = store.units().add("U-" + i, model.id(), "");
+        store.cases().open(unit.id(), "fault number " + i + " ".repeat(50));
       }
     }
     byte[] bytes = Files.readAllBytes(file);
@@ -76,7 +91,7 @@ class FileSafetyTest {
     assertThatThrownBy(
             () -> {
               try (HistoryStore store = HistoryStore.open(file)) {
-                store.search(SearchQuery.all());
+                store.cases().search(SearchQuery.all());
               }
             })
         .isInstanceOf(StorageException.class)
@@ -142,19 +157,21 @@ class FileSafetyTest {
             "  leading and trailing spaces  ",
             "");
     try (HistoryStore store = HistoryStore.open(folder.resolve("text.db"))) {
-      BoardModel model = store.boardModel("Model \"X\"; 'quoted' — Ω", "Maker; 'Ltd'");
-      Unit unit = store.addUnit("SN\"1\";'2' — µ", model.id(), "owner 'O\"Brien'; 🔧");
+      BoardModel model = store.units().boardModel("Model \"X\"; 'quoted' — Ω", "Maker; 'Ltd'");
+      Unit unit = store.units().add("SN\"1\";'2' — µ", model.id(), "owner 'O\"Brien'; 🔧");
       for (String text : texts) {
-        RepairCase c = store.openCase(unit.id(), text);
-        CaseNote note = store.addNote(c.id(), text);
-        assertThat(store.repairCase(c.id()).orElseThrow().symptom()).isEqualTo(text);
-        assertThat(store.caseFile(c.id()).orElseThrow().notes()).containsExactly(note);
+        RepairCase c = store.cases().open(unit.id(), text);
+        CaseNote note = store.cases().addNote(c.id(), text);
+        assertThat(store.cases().find(c.id()).orElseThrow().symptom()).isEqualTo(text);
+        assertThat(store.cases().caseFile(c.id()).orElseThrow().notes()).containsExactly(note);
         assertThat(note.text()).isEqualTo(text);
       }
-      assertThat(store.findBoardModel("model \"x\"; 'QUOTED' — Ω")).contains(model);
-      assertThat(store.unitsBySerial("SN\"1\";'2' — µ")).containsExactly(unit);
+      assertThat(store.units().findBoardModel("model \"x\"; 'QUOTED' — Ω")).contains(model);
+      assertThat(store.units().bySerial("SN\"1\";'2' — µ")).containsExactly(unit);
       assertThat(
-              store.search(SearchQuery.all().withStatus(CaseStatus.OPEN).withSerial(unit.serial())))
+              store
+                  .cases()
+                  .search(SearchQuery.all().withStatus(CaseStatus.OPEN).withSerial(unit.serial())))
           .hasSize(texts.size());
     }
   }
@@ -162,8 +179,8 @@ class FileSafetyTest {
   @Test
   void overlongText_isRefusedWithTheField() {
     try (HistoryStore store = HistoryStore.open(folder.resolve("long.db"))) {
-      BoardModel model = store.boardModel("M", "");
-      assertThatThrownBy(() -> store.addUnit("x".repeat(Checks.MAX_SHORT + 1), model.id(), ""))
+      BoardModel model = store.units().boardModel("M", "");
+      assertThatThrownBy(() -> store.units().add("x".repeat(Checks.MAX_SHORT + 1), model.id(), ""))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageContaining("serial")
           .hasMessageContaining("too long");
@@ -175,24 +192,25 @@ class FileSafetyTest {
     Path file = folder.resolve("live.db");
     Path backup = folder.resolve("backup.db");
     try (HistoryStore store = HistoryStore.open(file)) {
-      BoardModel model = store.boardModel("PSU-30", "");
-      Unit kept = store.addUnit("KEPT", model.id(), "");
-      store.openCase(kept.id(), "before the backup");
-      store.backupTo(backup);
-      Unit later = store.addUnit("LATER", model.id(), "");
-      store.openCase(later.id(), "after the backup");
-      assertThatThrownBy(() -> store.backupTo(backup)).isInstanceOf(InvalidInputException.class);
+      BoardModel model = store.units().boardModel("PSU-30", "");
+      Unit kept = store.units().add("KEPT", model.id(), "");
+      store.cases().open(kept.id(), "before the backup");
+      store.transfer().backupTo(backup);
+      Unit later = store.units().add("LATER", model.id(), "");
+      store.cases().open(later.id(), "after the backup");
+      assertThatThrownBy(() -> store.transfer().backupTo(backup))
+          .isInstanceOf(InvalidInputException.class);
 
-      Path saved = store.restoreFrom(backup);
-      assertThat(store.unitsBySerial("LATER")).isEmpty();
-      assertThat(store.unitsBySerial("KEPT")).containsExactly(kept);
-      assertThat(store.search(SearchQuery.all().withText("backup")))
+      Path saved = store.transfer().restoreFrom(backup);
+      assertThat(store.units().bySerial("LATER")).isEmpty();
+      assertThat(store.units().bySerial("KEPT")).containsExactly(kept);
+      assertThat(store.cases().search(SearchQuery.all().withText("backup")))
           .extracting(SearchHit::symptom)
           .containsExactly("before the backup");
-      assertThat(store.integrityCheck()).isEqualTo("ok");
+      assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
       // The history as it was before the restore is kept beside the file.
       try (HistoryStore before = HistoryStore.open(saved)) {
-        assertThat(before.unitsBySerial("LATER")).hasSize(1);
+        assertThat(before.units().bySerial("LATER")).hasSize(1);
       }
     }
   }
@@ -203,15 +221,16 @@ class FileSafetyTest {
     Path junk = folder.resolve("junk.db");
     Files.write(junk, "not a backup".getBytes(StandardCharsets.UTF_8));
     try (HistoryStore store = HistoryStore.open(file)) {
-      store.addUnit("KEPT", store.boardModel("M", "").id(), "");
-      assertThatThrownBy(() -> store.restoreFrom(junk)).isInstanceOf(StorageException.class);
-      assertThat(store.unitsBySerial("KEPT")).hasSize(1);
+      store.units().add("KEPT", store.units().boardModel("M", "").id(), "");
+      assertThatThrownBy(() -> store.transfer().restoreFrom(junk))
+          .isInstanceOf(StorageException.class);
+      assertThat(store.units().bySerial("KEPT")).hasSize(1);
     }
   }
 
   @Test
   void everyEarlierSchemaVersion_hasAFixtureThatMigratesForward() throws Exception {
-    for (int version = 1; version < HistoryStore.latestSchemaVersion(); version++) {
+    for (int version = 1; version < SqliteHistory.latestSchemaVersion(); version++) {
       String name = "fixtures/schema-v" + version + ".db";
       Path copy = folder.resolve("schema-v" + version + ".db");
       try (InputStream in = FileSafetyTest.class.getResourceAsStream(name)) {
@@ -219,10 +238,10 @@ class FileSafetyTest {
         Files.copy(in, copy, StandardCopyOption.REPLACE_EXISTING);
       }
       try (HistoryStore store = HistoryStore.open(copy)) {
-        assertThat(store.schemaVersion()).isEqualTo(HistoryStore.latestSchemaVersion());
-        assertThat(store.integrityCheck()).isEqualTo("ok");
-        Unit unit = store.unitsBySerial("NF-8-0100").get(0);
-        UnitHistory history = store.unitHistory(unit.id()).orElseThrow();
+        assertThat(store.schemaVersion()).isEqualTo(SqliteHistory.latestSchemaVersion());
+        assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
+        Unit unit = store.units().bySerial("NF-8-0100").get(0);
+        UnitHistory history = store.cases().unitHistory(unit.id()).orElseThrow();
         assertThat(history.cases()).hasSize(2);
         assertThat(history.cases().get(0).repairCase().confirmedFaults())
             .containsExactly("U3B:dead");
@@ -230,13 +249,13 @@ class FileSafetyTest {
             .extracting(CaseNote::text)
             .containsExactly(FixtureMaker.NOTE);
         // Text search works on what was written before the index existed.
-        assertThat(store.search(SearchQuery.all().withText("distorts")))
+        assertThat(store.cases().search(SearchQuery.all().withText("distorts")))
             .extracting(SearchHit::symptom)
             .containsExactly(FixtureMaker.CLOSED_SYMPTOM);
-        assertThat(store.search(SearchQuery.all().withText("op-amp went"))).hasSize(1);
-        assertThat(store.search(SearchQuery.all().withPart("U3"))).hasSize(1);
+        assertThat(store.cases().search(SearchQuery.all().withText("op-amp went"))).hasSize(1);
+        assertThat(store.cases().search(SearchQuery.all().withPart("U3"))).hasSize(1);
         // And the migrated file takes new writes.
-        store.openCase(unit.id(), "new after migration");
+        store.cases().open(unit.id(), "new after migration");
       }
     }
   }

@@ -8,46 +8,34 @@ import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.Unit;
-import java.nio.file.Path;
-import java.time.Clock;
 import java.time.Instant;
-import java.time.ZoneOffset;
 import java.util.List;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
-class SearchTest {
-  @TempDir Path folder;
-  private final MutableClock clock = new MutableClock(Instant.parse("2026-01-10T09:00:00Z"));
-  private HistoryStore store;
+/** The contract of {@link Cases#search}: what every store finds, and in which order. */
+public abstract class SearchContract extends StoreContract {
   private RepairCase hum;
   private RepairCase dead;
   private RepairCase clipping;
 
   @BeforeEach
   void fill() {
-    store = HistoryStore.open(folder.resolve("s.db"), clock);
-    BoardModel mixer = store.boardModel("MX-8 main board", "Northfield Audio");
-    BoardModel psu = store.boardModel("PSU-30", "Harbour Instruments");
-    Unit m1 = store.addUnit("NF-8-0001", mixer.id(), "");
-    Unit m2 = store.addUnit("NF-8-0002", mixer.id(), "");
-    Unit p1 = store.addUnit("HB30/17\"A\"; drop", psu.id(), "");
-    hum = store.openCase(m1.id(), "Left channel hums at 100 Hz, worse when warm");
-    store.addAction(hum.id(), ActionKind.PART_REPLACED, "C12", "100u", "100u", "dried out");
-    store.closeCase(hum.id(), Outcome.FIXED, List.of("C12:open"));
+    clock.set(Instant.parse("2026-01-10T09:00:00Z"));
+    BoardModel mixer = store.units().boardModel("MX-8 main board", "Northfield Audio");
+    BoardModel psu = store.units().boardModel("PSU-30", "Harbour Instruments");
+    Unit m1 = store.units().add("NF-8-0001", mixer.id(), "");
+    Unit m2 = store.units().add("NF-8-0002", mixer.id(), "");
+    Unit p1 = store.units().add("HB30/17\"A\"; drop", psu.id(), "");
+    hum = store.cases().open(m1.id(), "Left channel hums at 100 Hz, worse when warm");
+    store.cases().addAction(hum.id(), ActionKind.PART_REPLACED, "C12", "100u", "100u", "dried out");
+    store.cases().close(hum.id(), Outcome.FIXED, List.of("C12:open"));
     clock.advanceDays(20);
-    dead = store.openCase(m2.id(), "No output on the right channel");
-    store.addNote(dead.id(), "Output op-amp runs hot; suspect a shorted feedback resistor");
-    store.closeCase(dead.id(), Outcome.FIXED, List.of("U1A:dead", "R2:short"));
+    dead = store.cases().open(m2.id(), "No output on the right channel");
+    store.cases().addNote(dead.id(), "Output op-amp runs hot; suspect a shorted feedback resistor");
+    store.cases().close(dead.id(), Outcome.FIXED, List.of("U1A:dead", "R2:short"));
     clock.advanceDays(20);
-    clipping = store.openCase(p1.id(), "Output clips at 12 V instead of 15 V; the hum is gone");
-  }
-
-  @AfterEach
-  void close() {
-    store.close();
+    clipping = store.cases().open(p1.id(), "Output clips at 12 V instead of 15 V; the hum is gone");
   }
 
   @Test
@@ -95,7 +83,7 @@ class SearchTest {
 
   @Test
   void fullText_findsSymptomsAndNotes_withSnippet() {
-    List<SearchHit> hits = store.search(SearchQuery.all().withText("shorted feedback"));
+    List<SearchHit> hits = store.cases().search(SearchQuery.all().withText("shorted feedback"));
     assertThat(hits).extracting(SearchHit::caseId).containsExactly(dead.id());
     assertThat(hits.get(0).snippet()).contains("[shorted]").contains("[feedback]");
   }
@@ -105,14 +93,16 @@ class SearchTest {
     // bm25 (SQLite FTS5 documentation, "The bm25() function"; Robertson and Zaragoza 2009) ranks
     // a text that holds the word more often, relative to its length, above one that mentions it
     // once among many words.
-    String unit = store.unitsBySerial("NF-8-0001").get(0).id();
+    String unit = store.units().bySerial("NF-8-0001").get(0).id();
     RepairCase passing =
-        store.openCase(
-            unit,
-            "Faint crackle on the aux send, only when the channel fader moves fast, "
-                + "otherwise the unit behaves normally on every output and input we tried today");
-    RepairCase strong = store.openCase(unit, "Crackle, loud crackle on every knob");
-    List<SearchHit> hits = store.search(SearchQuery.all().withText("crackle"));
+        store
+            .cases()
+            .open(
+                unit,
+                "Faint crackle on the aux send, only when the channel fader moves fast, "
+                    + "otherwise the unit behaves normally on every output and input we tried today");
+    RepairCase strong = store.cases().open(unit, "Crackle, loud crackle on every knob");
+    List<SearchHit> hits = store.cases().search(SearchQuery.all().withText("crackle"));
     assertThat(hits).extracting(SearchHit::caseId).containsExactly(strong.id(), passing.id());
     assertThat(hits.get(0).score()).isGreaterThan(hits.get(1).score());
   }
@@ -132,7 +122,9 @@ class SearchTest {
   @Test
   void fullText_ignoresAccents() {
     RepairCase accented =
-        store.openCase(store.unitsBySerial("NF-8-0001").get(0).id(), "Grésillement au démarrage");
+        store
+            .cases()
+            .open(store.units().bySerial("NF-8-0001").get(0).id(), "Grésillement au démarrage");
     assertThat(ids(SearchQuery.all().withText("gresillement demarrage")))
         .containsExactly(accented.id());
   }
@@ -142,66 +134,36 @@ class SearchTest {
     // Two ways to the same answer: with words only, only the best texts of each index are ranked;
     // a filter that excludes nothing (opened after 1970) forces ranking every match.
     java.util.Random random = new java.util.Random(5);
-    String unit = store.unitsBySerial("NF-8-0001").get(0).id();
+    String unit = store.units().bySerial("NF-8-0001").get(0).id();
     String[] words = {"relay", "chatter", "noise", "fuse", "warm", "cold", "buzz", "pop"};
     for (int i = 0; i < 60; i++) {
       StringBuilder text = new StringBuilder();
       for (int w = 0; w < 3 + random.nextInt(12); w++) {
         text.append(words[random.nextInt(words.length)]).append(' ');
       }
-      RepairCase c = store.openCase(unit, text.toString());
+      RepairCase c = store.cases().open(unit, text.toString());
       for (int n = 0; n < random.nextInt(4); n++) {
-        store.addNote(
-            c.id(),
-            words[random.nextInt(words.length)]
-                + " "
-                + words[random.nextInt(words.length)]
-                + " relay");
+        store
+            .cases()
+            .addNote(
+                c.id(),
+                words[random.nextInt(words.length)]
+                    + " "
+                    + words[random.nextInt(words.length)]
+                    + " relay");
       }
       clock.advanceMillis(1);
     }
     for (String word : List.of("relay", "buzz pop", "chatter")) {
       SearchQuery wordsOnly = SearchQuery.all().withText(word).withLimit(7);
-      List<SearchHit> fast = store.search(wordsOnly);
-      List<SearchHit> full = store.search(wordsOnly.withOpenedFrom(Instant.EPOCH));
+      List<SearchHit> fast = store.cases().search(wordsOnly);
+      List<SearchHit> full = store.cases().search(wordsOnly.withOpenedFrom(Instant.EPOCH));
       assertThat(fast).as(word).isEqualTo(full);
       assertThat(fast).as(word).isNotEmpty();
     }
   }
 
   private List<String> ids(SearchQuery query) {
-    return store.search(query).stream().map(SearchHit::caseId).toList();
-  }
-
-  /** A clock that tests move forward. */
-  static final class MutableClock extends Clock {
-    private Instant now;
-
-    MutableClock(Instant start) {
-      this.now = start;
-    }
-
-    void advanceDays(int days) {
-      now = now.plusSeconds(86_400L * days);
-    }
-
-    void advanceMillis(long millis) {
-      now = now.plusMillis(millis);
-    }
-
-    @Override
-    public java.time.ZoneId getZone() {
-      return ZoneOffset.UTC;
-    }
-
-    @Override
-    public Clock withZone(java.time.ZoneId zone) {
-      return this;
-    }
-
-    @Override
-    public Instant instant() {
-      return now;
-    }
+    return store.cases().search(query).stream().map(SearchHit::caseId).toList();
   }
 }

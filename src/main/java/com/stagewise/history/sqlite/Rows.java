@@ -1,5 +1,6 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
+import com.stagewise.history.Checks;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;

@@ -1,6 +1,7 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.ExportSelection;
 import com.stagewise.history.record.HistoryBundle;
 import java.sql.Connection;
 import java.sql.SQLException;

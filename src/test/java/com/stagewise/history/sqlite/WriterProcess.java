@@ -1,5 +1,6 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
+import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
@@ -39,13 +40,13 @@ public final class WriterProcess {
     String label = args[1];
     int count = Integer.parseInt(args[2]);
     try (HistoryStore store = HistoryStore.open(file)) {
-      BoardModel model = store.boardModel("Writer test board", "");
-      List<Unit> existing = store.unitsBySerial(label);
-      Unit unit = existing.isEmpty() ? store.addUnit(label, model.id(), "") : existing.get(0);
+      BoardModel model = store.units().boardModel("Writer test board", "");
+      List<Unit> existing = store.units().bySerial(label);
+      Unit unit = existing.isEmpty() ? store.units().add(label, model.id(), "") : existing.get(0);
       out.println("ready");
       for (int i = 0; count == 0 || i < count; i++) {
         HistoryBundle bundle = oneCase(unit.id(), label + " case " + i);
-        store.importBundle(bundle, "writer");
+        store.transfer().importBundle(bundle, "writer");
         out.println("committed " + bundle.cases().get(0).id());
       }
     }

@@ -1,7 +1,9 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SearchQuery;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;
@@ -59,7 +61,7 @@ class ProcessFailureTest {
     assertThat(reported).isNotEmpty();
 
     try (HistoryStore store = HistoryStore.open(file)) {
-      assertThat(store.integrityCheck()).isEqualTo("ok");
+      assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
     }
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file)) {
       Set<String> stored = ConcurrentHashMap.newKeySet();
@@ -120,8 +122,8 @@ class ProcessFailureTest {
     }
     assertThat(reported).hasSize(2 * perWriter);
     try (HistoryStore store = HistoryStore.open(file)) {
-      assertThat(store.search(SearchQuery.all().withLimit(10_000))).hasSize(2 * perWriter);
-      assertThat(store.integrityCheck()).isEqualTo("ok");
+      assertThat(store.cases().search(SearchQuery.all().withLimit(10_000))).hasSize(2 * perWriter);
+      assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
     }
   }
 

@@ -1,5 +1,6 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
+import com.stagewise.history.StorageException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
@@ -13,6 +14,7 @@ import java.util.Arrays;
 import java.util.Properties;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
+import org.sqlite.SQLiteOpenMode;
 
 /**
  * One connection to the history file, with the settings every use needs and the transactions.
@@ -24,7 +26,7 @@ import org.sqlite.SQLiteException;
  * BEGIN IMMEDIATE}): a transaction that reads first and upgrades later could fail with "database is
  * locked" without waiting.
  *
- * <p>Not thread-safe by itself; {@link HistoryStore} serialises its use.
+ * <p>Not thread-safe by itself; {@link SqliteHistory} serialises its use.
  */
 final class Database implements AutoCloseable {
   /**
@@ -46,11 +48,13 @@ final class Database implements AutoCloseable {
 
   private final Path path;
   private final Connection connection;
+  private final boolean readOnly;
   private boolean inTransaction;
 
-  private Database(Path path, Connection connection) {
+  private Database(Path path, Connection connection, boolean readOnly) {
     this.path = path;
     this.connection = connection;
+    this.readOnly = readOnly;
   }
 
   /** A unit of work inside a transaction. */
@@ -70,20 +74,14 @@ final class Database implements AutoCloseable {
   static Database open(Path path) {
     Path file = path.toAbsolutePath().normalize();
     checkBeforeOpening(file);
-    Properties settings = new Properties();
-    settings.setProperty("busy_timeout", Integer.toString(BUSY_TIMEOUT_MS));
-    settings.setProperty("foreign_keys", "true");
-    settings.setProperty("synchronous", "FULL");
-    Connection connection;
-    try {
-      connection = DriverManager.getConnection("jdbc:sqlite:" + file, settings);
-    } catch (SQLException e) {
-      throw translate(file, e, "open");
-    }
-    Database database = new Database(file, connection);
+    Database database = connect(file, false, false);
     try {
       database.checkOwnership();
-      try (PreparedStatement wal = connection.prepareStatement("PRAGMA journal_mode = WAL");
+      // Refuse a newer schema before anything is written: even switching the journal mode
+      // rewrites the file's header.
+      Migrations.requireKnown(database);
+      try (PreparedStatement wal =
+              database.connection.prepareStatement("PRAGMA journal_mode = WAL");
           ResultSet rs = wal.executeQuery()) {
         rs.next();
       }
@@ -95,6 +93,59 @@ final class Database implements AutoCloseable {
     } catch (SQLException | RuntimeException e) {
       database.closeQuietly();
       throw e instanceof StorageException se ? se : translate(file, e, "open");
+    }
+  }
+
+  /**
+   * Opens an existing database file for reading only: nothing is created beside it and nothing in
+   * it changes, so a file on read-only media or in a read-only folder can be read. Every write
+   * through it is refused.
+   *
+   * @throws StorageException if the file is missing, not an SQLite file, or another program's
+   */
+  static Database openReadOnly(Path path) {
+    Path file = path.toAbsolutePath().normalize();
+    if (!Files.exists(file)) {
+      throw new StorageException("The history database " + file + " does not exist.");
+    }
+    checkRegularSqliteFile(file);
+    // In a folder where SQLite cannot make its shared-memory file, open the file as immutable:
+    // nobody can be writing it there, and without the flag SQLite could not open it at all.
+    Path folder = file.getParent();
+    boolean immutable =
+        !Files.exists(file.resolveSibling(file.getFileName() + "-shm"))
+            && (folder == null || !canCreateIn(folder));
+    Database database = connect(file, true, immutable);
+    try {
+      database.checkOwnership();
+      return database;
+    } catch (RuntimeException e) {
+      database.closeQuietly();
+      throw e;
+    } catch (SQLException e) {
+      database.closeQuietly();
+      throw translate(file, e, "open");
+    }
+  }
+
+  private static Database connect(Path file, boolean readOnly, boolean immutable) {
+    Properties settings = new Properties();
+    settings.setProperty("busy_timeout", Integer.toString(BUSY_TIMEOUT_MS));
+    settings.setProperty("foreign_keys", "true");
+    settings.setProperty("synchronous", "FULL");
+    if (readOnly) {
+      settings.setProperty("open_mode", Integer.toString(SQLiteOpenMode.READONLY.flag));
+    }
+    String url =
+        immutable
+            ? "jdbc:sqlite:"
+                + file.toUri().toString().replaceFirst("^file://", "file:")
+                + "?immutable=1"
+            : "jdbc:sqlite:" + file;
+    try {
+      return new Database(file, DriverManager.getConnection(url, settings), readOnly);
+    } catch (SQLException e) {
+      throw translate(file, e, "open");
     }
   }
 
@@ -121,6 +172,28 @@ final class Database implements AutoCloseable {
       }
       return;
     }
+    checkRegularSqliteFile(file);
+    if (!Files.isWritable(file) || !canCreateIn(folder)) {
+      throw new StorageException(
+          "The history database "
+              + file
+              + " cannot be written: the file or its folder is read-only (the database needs to"
+              + " write its log file beside it). Copy it to a writable folder, or fix the permissions.");
+    }
+  }
+
+  /**
+   * Refuses anything but a regular file that is empty or starts with SQLite's header, without
+   * writing to it (and without blocking on a named pipe or a device).
+   */
+  private static void checkRegularSqliteFile(Path file) {
+    if (!Files.isRegularFile(file)) {
+      throw new StorageException(
+          "The history database "
+              + file
+              + " is not a regular file (a device, a named pipe or a socket). It was left as it is;"
+              + " choose another file with --db or STAGEWISE_DB.");
+    }
     byte[] head = new byte[SQLITE_MAGIC.length];
     int read;
     try (InputStream in = Files.newInputStream(file)) {
@@ -136,13 +209,6 @@ final class Database implements AutoCloseable {
               + file
               + " is not a Stagewise history database (it is not an SQLite file). "
               + "It was left as it is; choose another file with --db or STAGEWISE_DB.");
-    }
-    if (!Files.isWritable(file) || !canCreateIn(folder)) {
-      throw new StorageException(
-          "The history database "
-              + file
-              + " cannot be written: the file or its folder is read-only (the database needs to"
-              + " write its log file beside it). Copy it to a writable folder, or fix the permissions.");
     }
   }
 
@@ -199,6 +265,14 @@ final class Database implements AutoCloseable {
   <T> T write(String what, Work<T> work) {
     if (inTransaction) {
       throw new IllegalStateException("nested transaction");
+    }
+    if (readOnly) {
+      throw new StorageException(
+          "History database "
+              + path
+              + ": cannot "
+              + what
+              + ": it was opened for reading only. Nothing was changed.");
     }
     for (int attempt = 1; ; attempt++) {
       try {

@@ -1,6 +1,8 @@
-package com.stagewise.history;
+package com.stagewise.history.sqlite;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.Checks;
+import com.stagewise.history.ImportReport;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
@@ -123,13 +125,13 @@ final class Importer {
       StoredReading r = b.readings().get(i);
       String at = "readings[" + i + "]";
       declare(at, r.id(), READING);
-      HistoryStore.checkReading(at, r);
+      Checks.reading(source, at, r);
     }
     for (int i = 0; i < b.suspectLists().size(); i++) {
       SuspectListRecord s = b.suspectLists().get(i);
       String at = "suspectLists[" + i + "]";
       declare(at, s.id(), SUSPECT_LIST);
-      HistoryStore.checkSuspectList(at, s);
+      Checks.suspectList(source, at, s);
     }
     for (int i = 0; i < b.actions().size(); i++) {
       RepairAction a = b.actions().get(i);

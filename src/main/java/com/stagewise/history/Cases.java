@@ -1,0 +1,118 @@
+package com.stagewise.history;
+
+import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.SuspectListRecord;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+
+/** Repair cases and everything recorded in them: readings, suspect lists, notes and actions. */
+public interface Cases {
+
+  /**
+   * Opens a case for a unit with the symptom as reported, and returns it.
+   *
+   * @throws com.stagewise.circuit.InvalidInputException if the unit is unknown or the symptom too
+   *     long
+   */
+  RepairCase open(String unitId, String symptom);
+
+  /**
+   * Closes out a case: records its outcome and the faults found to be wrong, and returns it.
+   *
+   * @param confirmedFaults fault ids in the DESIGN.md grammar (may be empty, e.g. when returned)
+   * @throws com.stagewise.circuit.InvalidInputException if the case is unknown or already closed,
+   *     or a fault id is bad
+   */
+  RepairCase close(String caseId, Outcome outcome, List<String> confirmedFaults);
+
+  /**
+   * Closes out a case together with its closing note and the actions taken, in one transaction:
+   * everything is checked first (the case, the fault ids, the note's and every action's text), and
+   * on any problem nothing is written and the case stays open.
+   *
+   * @throws com.stagewise.circuit.InvalidInputException as {@link #close}, {@link #addNote} and
+   *     {@link #addAction} do
+   */
+  RepairCase close(String caseId, CloseOut closeOut);
+
+  /** Returns the case with this id, if there is one. */
+  Optional<RepairCase> find(String caseId);
+
+  /**
+   * Returns the id of the one case whose id starts with {@code prefix} (at least 4 characters), so
+   * that people can type the short ids that listings show.
+   *
+   * @throws com.stagewise.circuit.InvalidInputException if no case or more than one case matches
+   */
+  String resolveId(String prefix);
+
+  /**
+   * Stores readings taken in a case together with the suspect list computed from them (if any), in
+   * one transaction.
+   *
+   * @param suspectList the diagnosis at the time, or null if none was computed
+   */
+  void addReadings(String caseId, List<StoredReading> readings, SuspectListRecord suspectList);
+
+  /** Adds a time-stamped note to a case and returns it. */
+  CaseNote addNote(String caseId, String text);
+
+  /** Records something done to the unit in a case and returns it. */
+  RepairAction addAction(
+      String caseId, ActionKind kind, String part, String oldValue, String newValue, String text);
+
+  /** Returns everything about one case. */
+  Optional<CaseFile> caseFile(String caseId);
+
+  /** Returns a unit's whole history, if the unit exists. */
+  Optional<UnitHistory> unitHistory(String unitId);
+
+  /** Returns the cases that match {@code query}; see {@link SearchQuery} for the order. */
+  List<SearchHit> search(SearchQuery query);
+
+  /**
+   * Returns, for a board model (name or id), how many closed cases with outcome {@code fixed}
+   * confirmed each fault id, most often first; empty for an unknown model.
+   */
+  Map<String, Integer> confirmedFaultCounts(String boardModel);
+
+  /**
+   * Everything a close-out records.
+   *
+   * @param outcome how the case ended
+   * @param confirmedFaults the faults found to be wrong (fault ids)
+   * @param note the closing note, or empty for none
+   * @param actions what was done, in order
+   */
+  record CloseOut(
+      Outcome outcome, List<String> confirmedFaults, String note, List<ActionDraft> actions) {
+    public CloseOut {
+      Objects.requireNonNull(outcome, "outcome");
+      confirmedFaults = List.copyOf(confirmedFaults);
+      note = note == null ? "" : note;
+      actions = List.copyOf(actions);
+    }
+  }
+
+  /**
+   * An action to be recorded, before it has an id and a time.
+   *
+   * @param kind what kind of action
+   * @param part the part it concerns (may be empty)
+   * @param oldValue the value taken out (may be empty)
+   * @param newValue the value put in (may be empty)
+   * @param text what was done, in words (may be empty)
+   */
+  record ActionDraft(ActionKind kind, String part, String oldValue, String newValue, String text) {
+    public ActionDraft {
+      Objects.requireNonNull(kind, "kind");
+    }
+  }
+}

@@ -1,0 +1,138 @@
+package com.stagewise.history.sqlite;
+
+import com.stagewise.history.Cases;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.StageLibrary;
+import com.stagewise.history.Transfer;
+import com.stagewise.history.Units;
+import java.nio.file.Path;
+import java.time.Clock;
+
+/**
+ * The shop's repair history in one SQLite file: the embedded {@link HistoryStore}.
+ *
+ * <p>The file may be used by several programs at once: a writer waits for another's write lock (up
+ * to a timeout, then retries) instead of failing. Calls from several threads run one at a time.
+ */
+public final class SqliteHistory implements HistoryStore {
+  private final Database database;
+  private final Clock clock;
+  private final SqliteUnits units;
+  private final SqliteCases cases;
+  private final SqliteLibrary library;
+  private final SqliteTransfer transfer;
+
+  private SqliteHistory(Database database, Clock clock) {
+    this.database = database;
+    this.clock = clock;
+    this.units = new SqliteUnits(this);
+    this.cases = new SqliteCases(this);
+    this.library = new SqliteLibrary(this);
+    this.transfer = new SqliteTransfer(this);
+  }
+
+  /** Opens (creating if missing) the history file and brings its schema up to date. */
+  public static SqliteHistory open(Path file, Clock clock) {
+    return open(file, clock, Migrations.LATEST);
+  }
+
+  /** Opens the history file with its schema brought to {@code schemaVersion} (for fixtures). */
+  static SqliteHistory open(Path file, Clock clock, int schemaVersion) {
+    Database database = Database.open(file);
+    try {
+      Migrations.migrate(database, schemaVersion, clock.millis());
+      return new SqliteHistory(database, clock);
+    } catch (RuntimeException e) {
+      database.close();
+      throw e;
+    }
+  }
+
+  /** Opens an existing history file for reading only (see {@link HistoryStore#openReadOnly}). */
+  public static SqliteHistory openReadOnly(Path file, Clock clock) {
+    Database database = Database.openReadOnly(file);
+    try {
+      Migrations.requireKnown(database);
+      return new SqliteHistory(database, clock);
+    } catch (RuntimeException e) {
+      database.close();
+      throw e;
+    }
+  }
+
+  /** Returns the schema version this program writes. */
+  public static int latestSchemaVersion() {
+    return Migrations.LATEST;
+  }
+
+  @Override
+  public Units units() {
+    return units;
+  }
+
+  @Override
+  public Cases cases() {
+    return cases;
+  }
+
+  @Override
+  public StageLibrary library() {
+    return library;
+  }
+
+  @Override
+  public Transfer transfer() {
+    return transfer;
+  }
+
+  @Override
+  public synchronized boolean isEmpty() {
+    return database.read(
+        "count records",
+        c ->
+            database.queryInt(
+                    "SELECT (SELECT count(*) FROM board_model) + (SELECT count(*) FROM unit)"
+                        + " + (SELECT count(*) FROM repair_case)")
+                == 0);
+  }
+
+  @Override
+  public String location() {
+    return database.path().toString();
+  }
+
+  @Override
+  public Path file() {
+    return database.path();
+  }
+
+  @Override
+  public synchronized int schemaVersion() {
+    return database.read("read the schema version", c -> Migrations.currentVersion(database));
+  }
+
+  @Override
+  public synchronized void close() {
+    database.close();
+  }
+
+  // ---- for the sub-stores -----------------------------------------------------------------------
+
+  Clock clock() {
+    return clock;
+  }
+
+  Database database() {
+    return database;
+  }
+
+  /** Runs {@code work} in one read transaction, one call at a time. */
+  synchronized <T> T read(String what, Database.Work<T> work) {
+    return database.read(what, work);
+  }
+
+  /** Runs {@code work} in one write transaction, one call at a time. */
+  synchronized <T> T write(String what, Database.Work<T> work) {
+    return database.write(what, work);
+  }
+}
