@@ -1,5 +1,6 @@
 package com.stagewise.cli;
 
+import com.stagewise.casework.Casework;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.DatabaseLocation;
 import com.stagewise.history.HistoryStore;
@@ -76,21 +77,18 @@ final class ReportCommand implements Callable<Integer> {
     try (HistoryStore store = HistoryStore.open(database)) {
       report =
           CaseReport.read(
-              store,
-              store.cases().resolveId(caseId),
-              clock.instant(),
-              HistoryCommand.programVersion());
+              store, store.cases().resolveId(caseId), clock.instant(), Casework.version());
     }
     int pages = write(report, target, force);
     spec.commandLine()
         .getOut()
         .println(
             "Repair report of case "
-                + HistoryCommand.shortId(report.caseFile().repairCase().id())
+                + Wording.shortId(report.caseFile().repairCase().id())
                 + " (unit "
                 + report.unit().serial()
                 + ", "
-                + HistoryCommand.plural(pages, "page")
+                + Wording.plural(pages, "page")
                 + ") written to "
                 + target
                 + ".");

@@ -1,6 +1,8 @@
 package com.stagewise.cli;
 
+import com.stagewise.casework.Casework;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.cli.history.HistoryCommand;
 import com.stagewise.history.StorageException;
 import java.io.PrintWriter;
 import picocli.CommandLine;
@@ -68,8 +70,7 @@ public final class StagewiseCommand implements Runnable {
   static final class Version implements CommandLine.IVersionProvider {
     @Override
     public String[] getVersion() {
-      String version = StagewiseCommand.class.getPackage().getImplementationVersion();
-      return new String[] {"stagewise " + (version == null ? "development build" : version)};
+      return new String[] {"stagewise " + Casework.version()};
     }
   }
 }

@@ -1,5 +1,6 @@
 package com.stagewise.ui;
 
+import com.stagewise.casework.Casework;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnosis;
@@ -25,6 +26,7 @@ import javafx.collections.ObservableList;
  */
 public final class Bench {
   private final HistoryStore store;
+  private final Casework casework;
   private final Tasks tasks;
   private final Problems problems;
   private final Caution caution;
@@ -58,6 +60,7 @@ public final class Bench {
       BoardFlags boardFlags,
       CaseResume resume) {
     this.store = Objects.requireNonNull(store, "store");
+    this.casework = new Casework(store);
     this.tasks = Objects.requireNonNull(tasks, "tasks");
     this.problems = Objects.requireNonNull(problems, "problems");
     this.caution = Objects.requireNonNull(caution, "caution");
@@ -65,8 +68,14 @@ public final class Bench {
     this.resume = Objects.requireNonNull(resume, "resume");
   }
 
+  /** Returns the shop's history, for reading; changes to a case go through {@link #casework()}. */
   public HistoryStore store() {
     return store;
+  }
+
+  /** Returns the case workflow: every change to a unit or a case goes through it. */
+  public Casework casework() {
+    return casework;
   }
 
   public Tasks tasks() {

@@ -234,7 +234,7 @@ public final class CloseOutViewModel {
         .tasks()
         .run(
             "Recording the action",
-            () -> bench.store().cases().addAction(rc.id(), kind, part, oldValue, newValue, words),
+            () -> bench.casework().addAction(rc.id(), kind, part, oldValue, newValue, words),
             stored -> {
               actions.add(stored);
               clearForm();
@@ -279,10 +279,7 @@ public final class CloseOutViewModel {
         .run(
             "Closing the case",
             () -> {
-              if (!note.isEmpty()) {
-                bench.store().cases().addNote(rc.id(), note);
-              }
-              RepairCase closed = bench.store().cases().close(rc.id(), chosen, faults);
+              RepairCase closed = bench.casework().closeCase(rc.id(), chosen, faults, note);
               bench.resume().forget(rc.id());
               return closed;
             },
@@ -307,7 +304,7 @@ public final class CloseOutViewModel {
             "Keeping the case open",
             () -> {
               if (!note.isEmpty()) {
-                bench.store().cases().addNote(rc.id(), note);
+                bench.casework().addNote(rc.id(), note);
               }
               return null;
             },

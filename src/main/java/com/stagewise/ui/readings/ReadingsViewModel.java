@@ -1,5 +1,6 @@
 package com.stagewise.ui.readings;
 
+import com.stagewise.casework.Casework;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
@@ -9,20 +10,14 @@ import com.stagewise.diagnosis.Diagnoser;
 import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.diagnosis.ProbeAdvice;
 import com.stagewise.diagnosis.Suspect;
-import com.stagewise.history.HistoryStore;
-import com.stagewise.history.record.ReadingKind;
-import com.stagewise.history.record.StoredReading;
-import com.stagewise.history.record.StoredSuspect;
-import com.stagewise.history.record.SuspectListRecord;
+import com.stagewise.history.record.BoardModel;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.ExpectedVolts;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
-import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import javafx.beans.property.BooleanProperty;
@@ -134,9 +129,8 @@ public final class ReadingsViewModel {
     }
     testPoints.setAll(ProbePoint.all(stage));
     probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
-    String boardModel =
-        bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
-    HistoryStore store = bench.store();
+    BoardModel boardModel = bench.boardModelProperty().get();
+    Casework casework = bench.casework();
     List<Reading> taken = List.copyOf(bench.readings());
     bench
         .tasks()
@@ -144,9 +138,7 @@ public final class ReadingsViewModel {
             "Working out the expected voltages and the fault list",
             () -> {
               ExpectedVolts volts = ExpectedVolts.of(stage);
-              Map<String, Integer> counts =
-                  boardModel.isEmpty() ? Map.of() : store.cases().confirmedFaultCounts(boardModel);
-              Diagnoser d = Diagnoser.of(stage, counts);
+              Diagnoser d = casework.diagnoser(stage, boardModel);
               Diagnosis diagnosis =
                   taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
               return new Prepared(stage, volts, d, diagnosis);
@@ -249,39 +241,24 @@ public final class ReadingsViewModel {
     List<Reading> taken = List.copyOf(bench.readings());
     String caseId = bench.openCaseProperty().get().id();
     Diagnoser ready = diagnoserStage == stage ? diagnoser : null;
-    String boardModel =
-        bench.boardModelProperty().get() == null ? "" : bench.boardModelProperty().get().name();
-    HistoryStore store = bench.store();
+    BoardModel boardModel = bench.boardModelProperty().get();
+    Casework casework = bench.casework();
     thinking.set(true);
     bench
         .tasks()
         .run(
             "Ranking the suspects",
             () -> {
-              Diagnoser d =
-                  ready != null
-                      ? ready
-                      : Diagnoser.of(
-                          stage,
-                          boardModel.isEmpty()
-                              ? Map.of()
-                              : store.cases().confirmedFaultCounts(boardModel));
-              Diagnosis diagnosis = d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
-              Instant now = Instant.now();
-              StoredReading stored =
-                  new StoredReading(
-                      HistoryStore.newId(),
-                      caseId,
-                      added.at(),
-                      added.kind() == Reading.Kind.AC ? ReadingKind.AC : ReadingKind.DC,
-                      added.value(),
-                      added.kind() == Reading.Kind.AC ? added.hz() : null,
-                      null,
-                      meterText(),
-                      now);
-              store
-                  .cases()
-                  .addReadings(caseId, List.of(stored), suspectList(caseId, now, diagnosis));
+              Diagnoser d = ready != null ? ready : casework.diagnoser(stage, boardModel);
+              Diagnosis diagnosis =
+                  casework
+                      .addReadings(
+                          caseId,
+                          d,
+                          new ReadingSet(MeterSpec.DEFAULT, taken),
+                          List.of(added),
+                          Diagnoser.DEFAULT_TOP)
+                      .diagnosis();
               return diagnosis;
             },
             diagnosis -> {
@@ -302,51 +279,6 @@ public final class ReadingsViewModel {
                       e,
                       "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
             });
-  }
-
-  private static String meterText() {
-    MeterSpec m = MeterSpec.DEFAULT;
-    return String.format(
-        Locale.ROOT,
-        "±(%s %% + %d counts), %d counts",
-        trimNumber(m.percent()),
-        m.counts(),
-        m.displayCounts());
-  }
-
-  private static String trimNumber(double v) {
-    return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
-  }
-
-  /** Returns the suspect list as the history keeps it. */
-  static SuspectListRecord suspectList(String caseId, Instant at, Diagnosis diagnosis) {
-    List<StoredSuspect> suspects = new ArrayList<>();
-    int rank = 1;
-    for (Suspect s : diagnosis.suspects()) {
-      suspects.add(new StoredSuspect(s.fault(), s.probability(), s.group(), s.why(), rank++));
-    }
-    StringBuilder probes = new StringBuilder();
-    for (ProbeAdvice p : diagnosis.nextProbes()) {
-      if (probes.length() > 0) {
-        probes.append('\n');
-      }
-      probes
-          .append(p.at())
-          .append(' ')
-          .append(p.kind().word())
-          .append(String.format(Locale.ROOT, " %.2f bits", p.bits()))
-          .append(": ")
-          .append(p.why());
-    }
-    String version = ReadingsViewModel.class.getPackage().getImplementationVersion();
-    return new SuspectListRecord(
-        HistoryStore.newId(),
-        caseId,
-        at,
-        version == null ? "development build" : version,
-        diagnosis.verdict().word(),
-        suspects,
-        probes.toString());
   }
 
   /** Rebuilds the rows, the top suspects and the next probe from the bench. */

@@ -1,5 +1,6 @@
 package com.stagewise.ui.stage;
 
+import com.stagewise.casework.LibraryStage;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
@@ -10,8 +11,6 @@ import com.stagewise.circuit.template.Templates;
 import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
 import com.stagewise.history.record.BoardModel;
-import com.stagewise.history.record.StageSheetRecord;
-import com.stagewise.interchange.StageSheet;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.ExpectedVolts;
 import com.stagewise.ui.SafetyCaution;
@@ -246,9 +245,8 @@ public final class StageViewModel {
             "Reading the stage library",
             () -> {
               List<LibraryEntry> entries = new ArrayList<>();
-              for (StageSheetRecord sheet : bench.store().library().sheets(model.id())) {
-                Stage s = StageSheet.read(sheet.sheetJson(), "stage library: " + sheet.title());
-                entries.add(new LibraryEntry(s.title().isEmpty() ? sheet.title() : s.title(), s));
+              for (LibraryStage stored : bench.casework().stageLibrary(model)) {
+                entries.add(new LibraryEntry(stored.title(), stored.stage()));
               }
               return entries;
             },
@@ -424,7 +422,7 @@ public final class StageViewModel {
                     if (addToLibrary) {
                       // A stage built here joins the board model's library, so the next unit finds
                       // it.
-                      bench.store().library().add(model.id(), s.title(), StageSheet.write(s));
+                      bench.casework().addToLibrary(model, s);
                     }
                     return null;
                   },

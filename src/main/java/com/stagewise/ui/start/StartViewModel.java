@@ -5,6 +5,7 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.UnitMatch;
 import com.stagewise.history.UnitQuery;
+import com.stagewise.history.Units;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseStatus;
@@ -266,12 +267,11 @@ public final class StartViewModel {
         .run(
             "Adding the unit",
             () -> {
-              BoardModel model = bench.store().units().boardModel(modelText, "");
+              Units.AddedUnit added = bench.casework().addUnit(serialText, modelText, owner);
               if (mains) {
-                bench.boardFlags().setMainsPowered(model.id(), true);
+                bench.boardFlags().setMainsPowered(added.boardModel().id(), true);
               }
-              Unit unit = bench.store().units().add(serialText, model.id(), owner);
-              return new UnitRow(unit, model.name(), 0);
+              return new UnitRow(added.unit(), added.boardModel().name(), 0);
             },
             row -> {
               newSerial.set("");
@@ -318,7 +318,7 @@ public final class StartViewModel {
         .tasks()
         .run(
             "Opening the case",
-            () -> bench.store().cases().open(history.unit().id(), text),
+            () -> bench.casework().openCase(history.unit().id(), text),
             opened -> {
               symptom.set("");
               bench.showUnit(history.unit(), history.boardModel());

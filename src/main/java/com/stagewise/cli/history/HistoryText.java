@@ -1,8 +1,11 @@
-package com.stagewise.cli;
+package com.stagewise.cli.history;
+
+import static com.stagewise.cli.Wording.shortId;
 
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.SearchHit;
+import com.stagewise.history.ShopMemory;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.RepairAction;
@@ -51,10 +54,7 @@ final class HistoryText {
   static String caseFile(CaseFile file) {
     RepairCase c = file.repairCase();
     StringBuilder text = new StringBuilder();
-    text.append("Case ")
-        .append(HistoryCommand.shortId(c.id()))
-        .append("  opened ")
-        .append(when(c.openedAt()));
+    text.append("Case ").append(shortId(c.id())).append("  opened ").append(when(c.openedAt()));
     if (c.closedAt() != null) {
       text.append(", closed ").append(when(c.closedAt())).append(": ").append(c.outcome().word());
     } else {
@@ -90,7 +90,7 @@ final class HistoryText {
           .append(list.verdict())
           .append(NL);
       for (StoredSuspect s : list.suspects()) {
-        text.append("  ").append(CaseReadings.suspectLine(s, Map.of())).append(NL);
+        text.append("  ").append(suspectLine(s, Map.of())).append(NL);
       }
     }
     for (RepairAction a : file.actions()) {
@@ -118,7 +118,7 @@ final class HistoryText {
     }
     StringBuilder text = new StringBuilder();
     for (SearchHit hit : hits) {
-      text.append(HistoryCommand.shortId(hit.caseId()))
+      text.append(shortId(hit.caseId()))
           .append("  ")
           .append(when(hit.openedAt()))
           .append("  ")
@@ -162,6 +162,22 @@ final class HistoryText {
           .append(NL);
     }
     return text.toString();
+  }
+
+  /** Returns one suspect as a line of text, with the shop's hint ("seen 3 times on this model"). */
+  static String suspectLine(StoredSuspect s, Map<String, Integer> shopCounts) {
+    String hint = ShopMemory.hint(s.fault(), shopCounts).map(h -> "  [" + h + "]").orElse("");
+    List<String> others = s.group().stream().filter(f -> !f.equals(s.fault())).toList();
+    String group =
+        s.group().size() > 1 ? "  (cannot yet be told from " + String.join(", ", others) + ")" : "";
+    return String.format(
+        Locale.ROOT,
+        "  %2d. %-18s %5.1f %%%s%s",
+        s.rank(),
+        s.fault(),
+        100 * s.probability(),
+        group,
+        hint);
   }
 
   /** Returns a number as typed, without trailing zeros or exponent, independent of the locale. */

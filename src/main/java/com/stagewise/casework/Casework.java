@@ -1,0 +1,306 @@
+package com.stagewise.casework;
+
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.diagnosis.Diagnoser;
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.history.Cases;
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.ImportReport;
+import com.stagewise.history.ShopMemory;
+import com.stagewise.history.StageLibrary;
+import com.stagewise.history.Units;
+import com.stagewise.history.demo.DemoHistory;
+import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.HistoryBundle;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.SuspectListRecord;
+import com.stagewise.history.record.Unit;
+import com.stagewise.interchange.StageSheet;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/**
+ * What a technician does to a case, for the app and the command line alike: each method checks all
+ * it is given, then writes in one transaction of the shop's history (all of it or nothing).
+ *
+ * <p>Bad input (an empty serial, a bad stage sheet, a note over the limits, an unknown case) is an
+ * {@link InvalidInputException} that names the source, the field and what was expected; trouble
+ * with the file is a {@code StorageException}. Either way the history is left as it was.
+ *
+ * <p>Safe to use from several threads as far as the history is (its calls run one at a time); the
+ * diagnosis runs in the caller's thread, so a screen calls these methods off its own thread.
+ */
+public final class Casework {
+  private final HistoryStore store;
+  private final Clock clock;
+
+  /** Creates the workflow on a shop's history, taking times from the system clock (UTC). */
+  public Casework(HistoryStore store) {
+    this(store, Clock.systemUTC());
+  }
+
+  /** Creates the workflow on a shop's history, taking times from {@code clock}. */
+  public Casework(HistoryStore store, Clock clock) {
+    this.store = Objects.requireNonNull(store, "store");
+    this.clock = Objects.requireNonNull(clock, "clock");
+  }
+
+  /** Returns the history this workflow writes to (for reading). */
+  public HistoryStore history() {
+    return store;
+  }
+
+  /**
+   * Returns the version of this program as stored with every suspect list and printed on reports:
+   * the jar's version, or {@code development build} when run from the classes.
+   */
+  public static String version() {
+    String version = Casework.class.getPackage().getImplementationVersion();
+    return version == null || version.isBlank() ? "development build" : version;
+  }
+
+  // ---- board models and units -------------------------------------------------------------------
+
+  /**
+   * Returns the board model named {@code name} (adding it if new) with the stage sheets in {@code
+   * stageFiles} added to its library. Every sheet is read and checked first: one bad sheet adds
+   * nothing at all.
+   *
+   * @throws InvalidInputException if a file cannot be read or is not a valid stage sheet (the
+   *     message names the file), or the name is empty
+   */
+  public BoardModel addBoardModel(String name, String maker, List<Path> stageFiles) {
+    List<StageLibrary.SheetDraft> sheets = new ArrayList<>();
+    for (Path file : stageFiles) {
+      String text = readText(file);
+      Stage stage = StageSheet.read(text, file.toString());
+      String title =
+          stage.title().isBlank() ? String.valueOf(file.getFileName()) : stage.title().strip();
+      sheets.add(new StageLibrary.SheetDraft(title, text));
+    }
+    return store.library().addBoardModel(name, maker, sheets);
+  }
+
+  /**
+   * Adds a unit of the board model {@code boardModel} (its name or id; a new name adds the board
+   * model too, in the same transaction).
+   *
+   * @throws InvalidInputException if the serial or the board model is empty, or the board model
+   *     already has a unit with this serial: nothing is added then
+   */
+  public Units.AddedUnit addUnit(String serial, String boardModel, String owner) {
+    return store.units().addWithModel(serial, boardModel, owner);
+  }
+
+  // ---- opening a case and finding it again ------------------------------------------------------
+
+  /** Opens a case for a unit with the symptom as reported, and returns it. */
+  public RepairCase openCase(String unitId, String symptom) {
+    return store.cases().open(unitId, symptom);
+  }
+
+  /**
+   * Returns the case whose id is or starts with {@code idOrPrefix} (4 or more characters), with its
+   * unit and board model.
+   *
+   * @throws InvalidInputException if no case or more than one case matches
+   */
+  public CaseAtHand caseAtHand(String idOrPrefix) {
+    String id = store.cases().resolveId(idOrPrefix);
+    RepairCase repairCase = store.cases().find(id).orElseThrow();
+    Unit unit = store.units().find(repairCase.unitId()).orElseThrow();
+    BoardModel model = store.units().findBoardModel(unit.boardModelId()).orElseThrow();
+    return new CaseAtHand(repairCase, unit, model);
+  }
+
+  // ---- the stage --------------------------------------------------------------------------------
+
+  /**
+   * Returns the stages of a board model's library, in the order they were added.
+   *
+   * @throws InvalidInputException if a stored sheet is no longer a valid stage sheet (the message
+   *     names its title and the board model)
+   */
+  public List<LibraryStage> stageLibrary(BoardModel model) {
+    List<LibraryStage> stages = new ArrayList<>();
+    for (StageSheetRecord sheet : store.library().sheets(model.id())) {
+      stages.add(new LibraryStage(sheet, StageSheet.read(sheet.sheetJson(), source(sheet, model))));
+    }
+    return stages;
+  }
+
+  /**
+   * Returns the stage of the board model's library to use for a case: the one titled {@code title}
+   * (ignoring letter case), or for a null title the only one the library has.
+   *
+   * @throws InvalidInputException if the library has no such stage, or several and no title says
+   *     which (the message lists the titles)
+   */
+  public LibraryStage storedStage(BoardModel model, String title) {
+    List<StageSheetRecord> sheets = store.library().sheets(model.id());
+    List<StageSheetRecord> chosen =
+        title == null
+            ? sheets
+            : sheets.stream().filter(s -> s.title().equalsIgnoreCase(title.strip())).toList();
+    if (chosen.size() == 1) {
+      StageSheetRecord sheet = chosen.get(0);
+      return new LibraryStage(sheet, StageSheet.read(sheet.sheetJson(), source(sheet, model)));
+    }
+    String library = "stage library of " + model.name();
+    if (chosen.isEmpty()) {
+      throw new InvalidInputException(
+          library,
+          "stage",
+          sheets.isEmpty()
+              ? "board model " + model.name() + " has no stored stage sheet"
+              : "no stage sheet is titled '" + title + "'; the titles are " + titles(sheets));
+    }
+    throw new InvalidInputException(
+        library,
+        "stage",
+        "board model "
+            + model.name()
+            + " has several stage sheets; name one by its title: "
+            + titles(chosen));
+  }
+
+  /**
+   * Adds a stage (built on the bench, e.g. from a template) to the board model's library, so that
+   * the next unit of the model finds it.
+   */
+  public StageSheetRecord addToLibrary(BoardModel model, Stage stage) {
+    return store.library().add(model.id(), stage.title(), StageSheet.write(stage));
+  }
+
+  // ---- readings and the diagnosis ---------------------------------------------------------------
+
+  /**
+   * Returns the shop's counts for a board model: how many of its fixed cases confirmed each fault
+   * (empty for none, or a null model).
+   */
+  public Map<String, Integer> shopCounts(BoardModel model) {
+    return model == null ? Map.of() : new ShopMemory(store).faultCounts(model.id());
+  }
+
+  /** Returns the diagnosis of a stage with the shop's counts for the board model in its priors. */
+  public Diagnoser diagnoser(Stage stage, BoardModel model) {
+    return Diagnoser.of(stage, shopCounts(model));
+  }
+
+  /**
+   * Adds every reading of {@code set} to a case, with the suspect list they give, in one
+   * transaction.
+   *
+   * @param top the most suspects to keep, 1 or more
+   * @throws InvalidInputException if a reading does not fit the stage, or the case is unknown:
+   *     nothing is stored then
+   */
+  public StoredReadings addReadings(String caseId, Diagnoser diagnoser, ReadingSet set, int top) {
+    return addReadings(caseId, diagnoser, set, set.readings(), top);
+  }
+
+  /**
+   * Adds the readings {@code added} to a case and stores the suspect list that all readings taken
+   * so far ({@code taken}, which holds the added ones too) give, in one transaction. The readings
+   * are stored with the meter of {@code taken}.
+   *
+   * @param top the most suspects to keep, 1 or more
+   * @throws InvalidInputException if a reading does not fit the stage, or the case is unknown:
+   *     nothing is stored then
+   */
+  public StoredReadings addReadings(
+      String caseId, Diagnoser diagnoser, ReadingSet taken, List<Reading> added, int top) {
+    Diagnosis diagnosis = diagnoser.diagnose(taken, top);
+    Instant now = clock.instant();
+    List<StoredReading> readings = StoredText.readings(added, taken.meter(), caseId, now);
+    SuspectListRecord list = StoredText.suspectList(diagnosis, caseId, now, version());
+    store.cases().addReadings(caseId, readings, list);
+    return new StoredReadings(readings, list, diagnosis);
+  }
+
+  // ---- notes, actions, close-out ----------------------------------------------------------------
+
+  /** Adds a time-stamped note to a case and returns it. */
+  public CaseNote addNote(String caseId, String text) {
+    return store.cases().addNote(caseId, text);
+  }
+
+  /** Records something done to the unit in a case (a part replaced, a reflow…) and returns it. */
+  public RepairAction addAction(
+      String caseId, ActionKind kind, String part, String oldValue, String newValue, String text) {
+    return store.cases().addAction(caseId, kind, part, oldValue, newValue, text);
+  }
+
+  /**
+   * Closes out a case with its outcome, the faults found and a closing note (none when blank or
+   * null), in one transaction: if anything is refused, the case stays open and no note is added.
+   */
+  public RepairCase closeCase(String caseId, Outcome outcome, List<String> faults, String note) {
+    return store.cases().close(caseId, new Cases.CloseOut(outcome, faults, note, List.of()));
+  }
+
+  // ---- the history as a whole -------------------------------------------------------------------
+
+  /** Merges a bundle into the history, all of it or nothing (see {@code Transfer}). */
+  public ImportReport importBundle(HistoryBundle bundle, String source) {
+    return store.transfer().importBundle(bundle, source);
+  }
+
+  /**
+   * Replaces the whole history with a backup, after saving the current one beside it.
+   *
+   * @return the file the previous history was saved to
+   */
+  public Path restoreFrom(Path backup) {
+    return store.transfer().restoreFrom(backup);
+  }
+
+  /**
+   * Fills an empty history with the invented demo units and cases.
+   *
+   * @throws InvalidInputException if the history is not empty (nothing is added then)
+   */
+  public ImportReport fillWithDemo() {
+    if (!store.isEmpty()) {
+      throw new InvalidInputException(
+          store.location(),
+          "",
+          "the demo data goes into an empty history only; choose a new database file");
+    }
+    return DemoHistory.fill(store);
+  }
+
+  private static String source(StageSheetRecord sheet, BoardModel model) {
+    return "stage sheet '" + sheet.title() + "' of " + model.name();
+  }
+
+  private static String titles(List<StageSheetRecord> sheets) {
+    return String.join(", ", sheets.stream().map(s -> "'" + s.title() + "'").toList());
+  }
+
+  private static String readText(Path file) {
+    try {
+      return Files.readString(file, StandardCharsets.UTF_8);
+    } catch (IOException | RuntimeException e) {
+      throw new InvalidInputException(
+          file.toString(), "", "cannot read the file as UTF-8 text: " + e.getMessage());
+    }
+  }
+}

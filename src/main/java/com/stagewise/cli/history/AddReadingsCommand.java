@@ -1,0 +1,95 @@
+package com.stagewise.cli.history;
+
+import static com.stagewise.cli.Wording.plural;
+import static com.stagewise.cli.Wording.shortId;
+
+import com.stagewise.casework.CaseAtHand;
+import com.stagewise.casework.Casework;
+import com.stagewise.casework.StoredReadings;
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.diagnosis.Diagnoser;
+import com.stagewise.history.record.SuspectListRecord;
+import com.stagewise.interchange.ReadingsSheet;
+import com.stagewise.interchange.StageSheet;
+import com.stagewise.interchange.history.HistoryJson;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Map;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code history add-readings}: a readings file into a case, with the diagnosis it gives. */
+@Command(
+    name = "add-readings",
+    mixinStandardHelpOptions = true,
+    description = "Store a readings file in a case, with the diagnosis computed from it.")
+final class AddReadingsCommand extends HistorySubcommand {
+  @Mixin CaseOption target;
+
+  @Option(
+      names = "--readings",
+      required = true,
+      paramLabel = "FILE",
+      description = "The readings file (*.readings.json).")
+  Path readings;
+
+  @Option(
+      names = "--stage",
+      paramLabel = "FILE",
+      description =
+          "The stage sheet the readings were taken on (default: the board model's stored sheet).")
+  Path stageFile;
+
+  @Option(
+      names = "--sheet",
+      paramLabel = "TITLE",
+      description = "Which of the board model's stored sheets, if it has several.")
+  String sheetTitle;
+
+  @Option(
+      names = "--top",
+      defaultValue = "" + Diagnoser.DEFAULT_TOP,
+      description = "The most suspects to keep (default ${DEFAULT-VALUE}).")
+  int top;
+
+  @Override
+  void run(Casework work, PrintWriter out) {
+    CaseAtHand at = work.caseAtHand(target.caseId);
+    Stage stage = stage(work, at);
+    ReadingSet set = ReadingsSheet.read(readings, stage);
+    Map<String, Integer> counts = work.shopCounts(at.boardModel());
+    StoredReadings stored = work.addReadings(at.id(), Diagnoser.of(stage, counts), set, top);
+    SuspectListRecord suspects = stored.suspectList();
+    if (json()) {
+      out.println(HistoryJson.storedReadings(stored.readings(), suspects));
+      return;
+    }
+    out.println(
+        plural(stored.readings().size(), "reading") + " stored in case " + shortId(at.id()) + ".");
+    out.println("Verdict: " + suspects.verdict());
+    suspects.suspects().forEach(s -> out.println(HistoryText.suspectLine(s, counts)));
+    if (!suspects.nextProbes().isEmpty()) {
+      out.println("Next probes:");
+      suspects.nextProbes().lines().forEach(line -> out.println("  " + line));
+    }
+  }
+
+  private Stage stage(Casework work, CaseAtHand at) {
+    if (stageFile != null) {
+      return StageSheet.read(stageFile);
+    }
+    try {
+      return work.storedStage(at.boardModel(), sheetTitle).stage();
+    } catch (InvalidInputException e) {
+      throw new InvalidInputException(
+          e.getMessage()
+              + (sheetTitle == null
+                  ? " (give the stage sheet with --stage FILE, or choose a stored one with --sheet"
+                      + " TITLE)"
+                  : " (choose a stored sheet by its title with --sheet TITLE)"));
+    }
+  }
+}

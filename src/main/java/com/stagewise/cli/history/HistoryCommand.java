@@ -1,0 +1,46 @@
+package com.stagewise.cli.history;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * {@code stagewise history …}: the repair history from the command line: board models, units,
+ * cases, readings, notes, actions, search, and moving the history between benches.
+ *
+ * <p>Every subcommand takes {@code --db FILE} (else {@code STAGEWISE_DB}, else the user's data
+ * folder), {@code --json} and {@code --help}. Output is readable text by default. Each subcommand
+ * checks everything it is given first and then writes all of it or nothing.
+ */
+@Command(
+    name = "history",
+    mixinStandardHelpOptions = true,
+    description = "Keep and search the repair history: units, cases, readings, notes, actions.",
+    subcommands = {
+      ModelsCommand.class,
+      AddModelCommand.class,
+      UnitsCommand.class,
+      AddUnitCommand.class,
+      OpenCaseCommand.class,
+      CloseCaseCommand.class,
+      AddReadingsCommand.class,
+      AddNoteCommand.class,
+      AddActionCommand.class,
+      ShowCommand.class,
+      SearchCommand.class,
+      FaultsCommand.class,
+      ExportCommand.class,
+      ImportCommand.class,
+      BackupCommand.class,
+      RestoreCommand.class,
+      DemoCommand.class,
+      MakeTestDataCommand.class
+    })
+public final class HistoryCommand implements Runnable {
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public void run() {
+    throw new CommandLine.ParameterException(
+        spec.commandLine(), "Name a history command, e.g. 'history units' (see 'history --help').");
+  }
+}
