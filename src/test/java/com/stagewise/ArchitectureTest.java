@@ -3,16 +3,21 @@ package com.stagewise;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
 
+import com.tngtech.archunit.base.DescribedPredicate;
+import com.tngtech.archunit.core.domain.JavaClass;
 import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.domain.JavaMethodCall;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
+import java.util.Set;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
  * Keeps the feature packages of the design notes: dependencies point one way, {@code circuit <-
- * solver <- diagnosis <- (history, interchange) <- report <- ui, cli, app}, and each technology
- * stays at its edge (JavaFX in ui/app, JDBC in history, Jackson in interchange, PDFBox in report).
+ * solver <- diagnosis <- history <- interchange <- casework <- report, ui, cli, app}, the screens
+ * and the command line change the history only through the case workflow, and each technology stays
+ * at its edge (JavaFX in ui/app, JDBC in history, Jackson in interchange, PDFBox in report).
  */
 class ArchitectureTest {
   private static JavaClasses classes;
@@ -107,6 +112,10 @@ class ArchitectureTest {
         .check(classes);
   }
 
+  /**
+   * DESIGN.md, Architecture: {@code circuit <- solver <- diagnosis <- history <- interchange <-
+   * casework <- report, ui, cli, app}.
+   */
   @Test
   void featurePackages_dependOneWay() {
     layeredArchitecture()
@@ -122,6 +131,8 @@ class ArchitectureTest {
         .definedBy("com.stagewise.history..")
         .layer("interchange")
         .definedBy("com.stagewise.interchange..")
+        .layer("casework")
+        .definedBy("com.stagewise.casework..")
         .layer("report")
         .definedBy("com.stagewise.report..")
         .layer("ui")
@@ -140,18 +151,104 @@ class ArchitectureTest {
         .mayOnlyAccessLayers("diagnosis", "solver", "circuit")
         .whereLayer("interchange")
         .mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
+        .whereLayer("casework")
+        .mayOnlyAccessLayers("interchange", "history", "diagnosis", "solver", "circuit")
+        .whereLayer("casework")
+        .mayOnlyBeAccessedByLayers("report", "ui", "cli", "app")
         .whereLayer("report")
-        .mayOnlyAccessLayers("history", "diagnosis", "solver", "circuit")
+        .mayOnlyAccessLayers("casework", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("report")
         .mayOnlyBeAccessedByLayers("ui", "cli", "app")
         .whereLayer("ui")
-        .mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
+        .mayOnlyAccessLayers(
+            "report", "casework", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("cli")
-        .mayOnlyAccessLayers("report", "interchange", "history", "diagnosis", "solver", "circuit")
+        .mayOnlyAccessLayers(
+            "report", "casework", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("app")
         .mayOnlyAccessLayers(
-            "ui", "cli", "report", "interchange", "history", "diagnosis", "solver", "circuit")
+            "ui",
+            "cli",
+            "report",
+            "casework",
+            "interchange",
+            "history",
+            "diagnosis",
+            "solver",
+            "circuit")
         .check(classes);
+  }
+
+  /**
+   * The history's methods that change it (store interface and method name), and the fillers that
+   * write whole data sets. Reading (finding, listing, searching, exporting, backing up) is not in
+   * the list.
+   */
+  private static final Set<String> HISTORY_WRITES =
+      Set.of(
+          "Units.boardModel",
+          "Units.add",
+          "Units.addWithModel",
+          "Cases.open",
+          "Cases.close",
+          "Cases.addReadings",
+          "Cases.addNote",
+          "Cases.addAction",
+          "StageLibrary.add",
+          "StageLibrary.addBoardModel",
+          "Transfer.importBundle",
+          "Transfer.restoreFrom",
+          "DemoHistory.fill",
+          "SyntheticHistory.fill");
+
+  private static final DescribedPredicate<JavaMethodCall> A_HISTORY_WRITE =
+      DescribedPredicate.describe(
+          "a method that changes the history",
+          call ->
+              call.getTargetOwner().getPackageName().startsWith("com.stagewise.history")
+                  && HISTORY_WRITES.contains(
+                      call.getTargetOwner().getSimpleName() + "." + call.getName()));
+
+  /**
+   * Issue 8: the case workflow is the only way the screens and the command line change a case (or
+   * anything else in the history); they may read from the history directly.
+   */
+  @Test
+  void uiAndCli_changeTheHistoryOnlyThroughCasework() {
+    noClasses()
+        .that()
+        .resideInAnyPackage("com.stagewise.ui..", "com.stagewise.cli..")
+        .should()
+        .callMethodWhere(A_HISTORY_WRITE)
+        .check(classes);
+  }
+
+  /** The rule above looks at real calls: the case workflow makes most of the listed writes. */
+  @Test
+  void historyWriteRule_seesTheCaseworkWrites() {
+    Set<String> made = new java.util.TreeSet<>();
+    for (JavaClass c : classes) {
+      if (c.getPackageName().startsWith("com.stagewise.casework")) {
+        for (JavaMethodCall call : c.getMethodCallsFromSelf()) {
+          if (A_HISTORY_WRITE.test(call)) {
+            made.add(call.getTargetOwner().getSimpleName() + "." + call.getName());
+          }
+        }
+      }
+    }
+    org.assertj.core.api.Assertions.assertThat(made)
+        .contains(
+            "Units.addWithModel",
+            "Cases.open",
+            "Cases.close",
+            "Cases.addReadings",
+            "Cases.addNote",
+            "Cases.addAction",
+            "StageLibrary.add",
+            "StageLibrary.addBoardModel",
+            "Transfer.importBundle",
+            "Transfer.restoreFrom",
+            "DemoHistory.fill");
   }
 
   @Test
@@ -164,6 +261,7 @@ class ArchitectureTest {
             "com.stagewise.diagnosis..",
             "com.stagewise.history..",
             "com.stagewise.interchange..",
+            "com.stagewise.casework..",
             "com.stagewise.report..",
             "com.stagewise.ui..",
             "com.stagewise.cli..",

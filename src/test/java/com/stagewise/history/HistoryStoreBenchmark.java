@@ -25,9 +25,8 @@ import org.openjdk.jmh.annotations.Warmup;
  *
  * <p>Full-text queries return the default 50 best hits with snippets. The database is {@code
  * -Dstagewise.bench.db=FILE} (default {@code target/bench/history-100k.db}); it is generated on
- * first use, or beforehand with {@code stagewise history make-test-data --db FILE} (see
- * DEVELOPERS.md, "History store"). Sample time: the median is the {@code p0.50} line of JMH's
- * report.
+ * first use (see DEVELOPERS.md, "History store"). Sample time: the median is the {@code p0.50} line
+ * of JMH's report.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SampleTime)

@@ -33,7 +33,6 @@ import picocli.CommandLine.Command;
       BackupCommand.class,
       RestoreCommand.class,
       DemoCommand.class,
-      MakeTestDataCommand.class
     })
 public final class HistoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

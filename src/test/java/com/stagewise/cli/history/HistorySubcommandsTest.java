@@ -62,7 +62,7 @@ class HistorySubcommandsTest {
   }
 
   @Test
-  void subcommands_areTheEighteenOfTheHistory() {
+  void subcommands_areTheSeventeenOfTheHistory() {
     assertThat(subcommands().toList())
         .containsExactlyInAnyOrder(
             "models",
@@ -81,8 +81,7 @@ class HistorySubcommandsTest {
             "import",
             "backup",
             "restore",
-            "demo",
-            "make-test-data");
+            "demo");
   }
 
   /** Issue 9, point 2: each refusal the probe found, now with the database left as it was. */
