@@ -135,7 +135,11 @@ public final class Diagnoser {
       if (!unseen.isEmpty()) {
         notes.add(
             "These readings cannot rule out: "
-                + String.join(", ", unseen.subList(0, Math.min(8, unseen.size())))
+                + String.join(
+                    ", ",
+                    unseen.subList(0, Math.min(8, unseen.size())).stream()
+                        .map(Wording::fault)
+                        .toList())
                 + (unseen.size() > 8 ? " and " + (unseen.size() - 8) + " more" : "")
                 + ". The next probe, or the symptom itself, may tell them apart.");
       }
@@ -430,11 +434,11 @@ public final class Diagnoser {
         notes.add(
             String.format(
                 java.util.Locale.ROOT,
-                "Input %s reads %.3f V where the stage sheet says %.3f V: the stage is judged with the"
+                "Input %s reads %s where the stage sheet says %s: the stage is judged with the"
                     + " measured level, and the fault may be upstream of this stage.",
                 net,
-                r.value(),
-                input.dc()));
+                Units.volts(r.value()),
+                Units.volts(input.dc())));
       }
     }
     return measured;

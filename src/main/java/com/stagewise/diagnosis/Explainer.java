@@ -228,7 +228,8 @@ final class Explainer {
   }
 
   /**
-   * A test point for a technician: a pin with what it is ("U1.8 (positive supply pin)"), or a net.
+   * A test point for a technician: a pin with what it is ("U1 pin 8 (positive supply pin)"), or a
+   * net.
    */
   private String pointWords(Evidence.Bound r) {
     if (!points.isPin(r.point())) {
@@ -236,7 +237,7 @@ final class Explainer {
     }
     int dot = r.at().lastIndexOf('.');
     String role = pinRole(r.at().substring(0, dot), Integer.parseInt(r.at().substring(dot + 1)));
-    return r.at() + " (" + role + ")";
+    return Wording.point(r.at()) + " (" + role + ")";
   }
 
   private static List<String> limit(List<String> items) {
@@ -396,11 +397,13 @@ final class Explainer {
         String pins =
             amp == null
                 ? "its supply pins"
-                : amp.pinName(Terminal.V_PLUS) + " and " + amp.pinName(Terminal.V_MINUS);
+                : Wording.point(amp.pinName(Terminal.V_PLUS))
+                    + " and "
+                    + Wording.point(amp.pinName(Terminal.V_MINUS));
         yield "With power on, first read the supply at "
             + pins
             + " against ground; if both are right, power off, lift the output pin"
-            + (amp == null ? "" : " " + amp.pinName(Terminal.OUT))
+            + (amp == null ? "" : " (" + Wording.point(amp.pinName(Terminal.OUT)) + ")")
             + " and read it again powered: a section that still sits at a limit (or floats) with its output free is faulty. Replace the whole package.";
       }
       case LIFTED ->

@@ -207,7 +207,10 @@ final class ProbePlanner {
         seen.add(v);
         parts.add(
             String.format(
-                Locale.ROOT, "%s puts it at %s", s.hypothesis.fault.id(), Units.volts(v)));
+                Locale.ROOT,
+                "%s puts it at %s",
+                Wording.fault(s.hypothesis.fault.id()),
+                Units.volts(v)));
       }
     }
     if (parts.size() < 2) {

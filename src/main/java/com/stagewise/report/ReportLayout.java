@@ -1,5 +1,8 @@
 package com.stagewise.report;
 
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.value.Engineering;
+import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
@@ -146,11 +149,12 @@ final class ReportLayout {
           new ArrayList<>(
               List.of(
                   Integer.toString(i + 1),
-                  r.at(),
-                  r.hz() == null ? "DC" : "AC at " + number(r.hz()) + " Hz",
-                  number(r.value())
-                      + " V"
-                      + (r.uncertainty() == null ? "" : " ±" + number(r.uncertainty())),
+                  Wording.point(r.at()),
+                  r.hz() == null ? "DC" : "AC at " + Engineering.of(r.hz(), "Hz", 4),
+                  Engineering.reading(r.value(), MeterSpec.DEFAULT)
+                      + (r.uncertainty() == null
+                          ? ""
+                          : " " + Engineering.PLUS_MINUS + Engineering.volts(r.uncertainty())),
                   when(r.takenAt())));
       if (!oneMeter) {
         row.add(r.meterText());
@@ -180,12 +184,13 @@ final class ReportLayout {
               + list.verdict());
       List<List<String>> rows = new ArrayList<>();
       for (StoredSuspect s : list.suspects()) {
-        List<String> others = s.group().stream().filter(f -> !f.equals(s.fault())).toList();
+        List<String> others =
+            s.group().stream().filter(f -> !f.equals(s.fault())).map(Wording::fault).toList();
         rows.add(
             List.of(
                 Integer.toString(s.rank()),
-                s.fault(),
-                String.format(Locale.ROOT, "%.1f %%", 100 * s.probability()),
+                Wording.fault(s.fault()),
+                String.format(Locale.ROOT, "%.1f", 100 * s.probability()) + Engineering.SPACE + "%",
                 others.isEmpty() ? "" : String.join(", ", others),
                 s.why()));
       }
@@ -240,7 +245,8 @@ final class ReportLayout {
   private void confirmed(RepairCase c) {
     flow.heading("Confirmed fault", Style.BODY.leading());
     if (!c.confirmedFaults().isEmpty()) {
-      flow.paragraph(Style.BODY, String.join(", ", c.confirmedFaults()));
+      flow.paragraph(
+          Style.BODY, String.join(", ", c.confirmedFaults().stream().map(Wording::fault).toList()));
     } else if (c.closedAt() == null) {
       flow.paragraph(Style.BODY, "None yet: the case is not closed out.");
     } else {

@@ -159,13 +159,15 @@ class ReportCommandTest {
         .contains(
             "NF8-7",
             "Output stuck low; 47 kohm feedback resistor suspected",
-            "U1.8",
-            "U1.4",
-            "U1.1",
-            "U1.2");
+            "U1 pin 8",
+            "U1 pin 4",
+            "U1 pin 1",
+            "U1 pin 2");
     assertThat(text)
         .contains(
-            firstSuspect, "Replaced R2 -> output -4.70 V at +1 V in", "Confirmed fault R2:open");
+            com.stagewise.diagnosis.Wording.fault(firstSuspect),
+            "Replaced R2 -> output -4.70 V at +1 V in",
+            "Confirmed fault R2 open");
     assertThat(text).contains("it is not a statement that the unit is safe");
     try (var left = Files.list(folder)) {
       assertThat(left.map(p -> p.getFileName().toString()))

@@ -2,6 +2,7 @@ package com.stagewise.report;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
@@ -72,13 +73,17 @@ class PdfReportTest {
     }
     // Reading 1 is -13.48 + 0.01 V; reading 10 is an AC reading at 1 kHz given with its own
     // uncertainty.
-    assertThat(text)
-        .contains("-13.47 V", "AC at 1000 Hz", "-13.38 V ±0.003", "±(0.5 % + 2 counts)");
+    assertThat(text).contains("-13.47 V", "AC at 1 kHz", "-13.38 V ±3 mV", "±(0.5 % + 2 counts)");
     // -13.48 + 3/100 is -13.450000000000001 in binary floating point; the report prints it as
     // typed.
     assertThat(text).contains("TP-003 DC -13.45 V").doesNotContain("0000");
     assertThat(text)
-        .contains(ReportFixture.FIRST_SUSPECT + " 78.1 %", "R2:high 13.8 %", "U1A:stuck-low 8.1 %");
+        .contains(
+            Wording.fault(ReportFixture.FIRST_SUSPECT) + " 78.1 %",
+            "R2 drifted high 13.8 %",
+            "U1A output stuck 8.1 %")
+        .doesNotContain(
+            "R2:high", "U1A:stuck-low"); // fault ids stay in files, the PDF speaks words
     assertThat(text)
         .contains(
             "by Stagewise 0.1.0; verdict: fault", "R2 open (marked 47 kohm)", "SUM dc (0.37 bits)");
@@ -86,7 +91,7 @@ class PdfReportTest {
         .contains(
             "part replaced R2 47k 1% (cracked) 47k 1% metal film",
             "reflow U1", "Reflowed pins 1–4.");
-    assertThat(text).contains("Confirmed fault R2:open");
+    assertThat(text).contains("Confirmed fault R2 open");
     assertThat(text)
         .contains(
             "Discharged the 4700 µF reservoir capacitors (“about 35 V”) before ohms checks -> 0.2 V. Label in Japanese: ??. ?");
@@ -123,7 +128,7 @@ class PdfReportTest {
       }
       assertThat(all)
           .contains(
-              ReportFixture.FIRST_SUSPECT + " 78.1 %",
+              Wording.fault(ReportFixture.FIRST_SUSPECT) + " 78.1 %",
               ReportLayout.CAUTION_TEXT,
               "Reflowed pins 1–4.");
     }
@@ -145,7 +150,7 @@ class PdfReportTest {
                   unit.serial(),
                   Printable.text(file.repairCase().symptom()).replaceAll("\\s+", " "));
           assertThat(text).contains(ReportLayout.CAUTION_TEXT);
-          file.readings().forEach(r -> assertThat(text).contains(r.at()));
+          file.readings().forEach(r -> assertThat(text).contains(Wording.point(r.at())));
           file.notes()
               .forEach(
                   n -> assertThat(text).contains(Printable.text(n.text()).replaceAll("\\s+", " ")));

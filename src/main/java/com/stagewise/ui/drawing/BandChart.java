@@ -1,5 +1,7 @@
 package com.stagewise.ui.drawing;
 
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.value.Engineering;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -104,7 +106,7 @@ public final class BandChart extends Region {
     Text range =
         text(
             haveBand
-                ? "healthy " + VoltText.of(healthyLow) + " to " + VoltText.of(healthyHigh)
+                ? "healthy " + Engineering.band(healthyLow, healthyHigh)
                 : "healthy band unknown",
             Palette.font(15),
             Palette.BAND_EDGE.darker());
@@ -210,7 +212,7 @@ public final class BandChart extends Region {
     head.setId("measured-marker");
     Text value =
         text(
-            VoltText.of(measured) + (inside ? "" : "  outside"),
+            Engineering.reading(measured, MeterSpec.DEFAULT) + (inside ? "" : "  outside"),
             Palette.bold(16),
             Palette.MEASURED);
     double w = value.getLayoutBounds().getWidth();

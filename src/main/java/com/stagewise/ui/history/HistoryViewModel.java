@@ -222,9 +222,9 @@ public final class HistoryViewModel {
       readings.add(
           Words.pin(r.at())
               + ":  "
-              + Words.voltsShort(r.value())
+              + Words.measured(r.value())
               + (r.kind() == ReadingKind.AC
-                  ? String.format(Locale.ROOT, " AC at %.0f Hz", r.hz())
+                  ? " AC at " + (r.hz() == null ? "?" : Words.hertz(r.hz()))
                   : "")
               + "   ("
               + Words.dateTime(r.takenAt())

@@ -8,7 +8,6 @@ import com.stagewise.circuit.Terminal;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
@@ -39,13 +38,7 @@ public record ProbePoint(
   /** Returns the short call shown large, e.g. "Probe U1 pin 8" or "Probe net OUT (AC, 1 kHz)". */
   public String call() {
     String where = isPin() ? packageRef + " pin " + pin : "net " + at;
-    return "Probe "
-        + where
-        + (kind == Reading.Kind.AC ? String.format(Locale.ROOT, " (AC at %s Hz)", trim(hz)) : "");
-  }
-
-  private static String trim(double hz) {
-    return hz == Math.rint(hz) ? Long.toString((long) hz) : Double.toString(hz);
+    return "Probe " + where + (kind == Reading.Kind.AC ? " (AC at " + Words.hertz(hz) + ")" : "");
   }
 
   /** Returns the DC probe point for a test point of the stage, if it names a used pin or a net. */

@@ -135,6 +135,11 @@ public final class ReadingsView {
               }
             });
     other.setButtonCell(other.getCellFactory().call(null));
+    // Another stage or case: the box shows its prompt again, never a point of the last one.
+    model
+        .testPoints()
+        .addListener(
+            (ListChangeListener<ProbePoint>) c -> other.getSelectionModel().clearSelection());
     other.setOnAction(
         e -> {
           ProbePoint p = other.getValue();
@@ -183,7 +188,7 @@ public final class ReadingsView {
       for (Reading r : bench.readings()) {
         if (r.at().equals(pin.getKey()) && r.kind() == Reading.Kind.DC) {
           // Only the value: the pin's role and net are already beside it, and the column is narrow.
-          text = Words.voltsShort(r.value());
+          text = Words.measured(r.value());
         }
       }
       drawing.setPinText(number, text);
@@ -278,8 +283,8 @@ public final class ReadingsView {
       Reading r = row.reading();
       String value =
           r.kind() == Reading.Kind.AC
-              ? Words.voltsShort(r.value()) + " AC"
-              : Words.voltsShort(r.value());
+              ? Words.measured(r.value()) + " AC"
+              : Words.measured(r.value());
       String state =
           Double.isNaN(row.healthyLow())
               ? ""

@@ -115,6 +115,7 @@ public final class ReadingsViewModel {
   }
 
   private void stageChanged(Stage stage) {
+    pad.textProperty().set("");
     diagnoser = null;
     diagnoserStage = null;
     probeChosenByHand = false;
@@ -232,12 +233,13 @@ public final class ReadingsViewModel {
       return;
     }
     bench.readings().add(reading);
+    String typed = pad.textProperty().get();
     pad.press(ValuePadModel.CLEAR);
     probeChosenByHand = false;
-    diagnoseAndStore(stage, reading);
+    diagnoseAndStore(stage, reading, typed);
   }
 
-  private void diagnoseAndStore(Stage stage, Reading added) {
+  private void diagnoseAndStore(Stage stage, Reading added, String typed) {
     List<Reading> taken = List.copyOf(bench.readings());
     String caseId = bench.openCaseProperty().get().id();
     Diagnoser ready = diagnoserStage == stage ? diagnoser : null;
@@ -271,6 +273,9 @@ public final class ReadingsViewModel {
             e -> {
               thinking.set(false);
               bench.readings().remove(added);
+              if (pad.textProperty().get().isEmpty()) {
+                pad.textProperty().set(typed); // what was typed is not lost
+              }
               refresh();
               bench
                   .problems()

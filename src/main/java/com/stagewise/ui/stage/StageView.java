@@ -209,6 +209,8 @@ public final class StageView {
         .stageProperty()
         .addListener(
             (o, was, now) -> {
+              // A new case starts with no stage: the last case's drawing must not stay behind.
+              schematic.setVisible(now != null);
               if (now != null) {
                 schematic.show(now);
               }
@@ -256,7 +258,7 @@ public final class StageView {
       if (net.getKey().contains(".")) {
         continue;
       }
-      labels.put(net.getKey(), Words.voltsShort(net.getValue()));
+      labels.put(net.getKey(), Words.volts(net.getValue()));
       double low = expected.low().getOrDefault(net.getKey(), net.getValue());
       double high = expected.high().getOrDefault(net.getKey(), net.getValue());
       if (high - low >= 0.0105 && !model.stageProperty().get().isDriven(net.getKey())) {
@@ -264,9 +266,7 @@ public final class StageView {
             .append(ranges.length() == 0 ? "Healthy range: " : ",  ")
             .append(net.getKey())
             .append(' ')
-            .append(Words.voltsShort(low).replace(" V", ""))
-            .append(" … ")
-            .append(Words.voltsShort(high));
+            .append(Words.band(low, high));
       }
     }
     schematic.setNetLabels(labels);

@@ -80,6 +80,11 @@ public final class StageViewModel {
               if (bench.stageProperty().get() == null) {
                 setStage(null);
               }
+              // Nothing typed for the last case carries over: decoder, template, designator, pad.
+              decoder.clear();
+              template.set(null);
+              designator.set("");
+              pad.textProperty().set("");
             });
     bench.boardModelProperty().addListener((o, was, now) -> library.clear());
     template.addListener(

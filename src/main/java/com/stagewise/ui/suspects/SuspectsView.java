@@ -72,6 +72,12 @@ public final class SuspectsView {
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new SuspectCell());
     ListSelection.bind(list, model.selectedProperty());
+    // A new suspect list opens at its first suspect, not where the last one was scrolled to.
+    model
+        .suspects()
+        .addListener(
+            (ListChangeListener<SuspectsViewModel.SuspectRow>)
+                c -> javafx.application.Platform.runLater(() -> list.scrollTo(0)));
     if (model.selectedProperty().get() != null) {
       list.getSelectionModel().select(model.selectedProperty().get());
     }
@@ -170,15 +176,15 @@ public final class SuspectsView {
     var expected = model.expectedProperty().get();
     for (String net : stage.nets()) {
       if (expected != null && expected.solved() && expected.nominal().containsKey(net)) {
-        healthy.put(net, Words.voltsShort(expected.at(net)));
+        healthy.put(net, Words.volts(expected.at(net)));
       }
       if (selected != null && selected.suspect().predicted().containsKey(net)) {
-        predicted.put(net, Words.voltsShort(selected.suspect().predicted().get(net)));
+        predicted.put(net, Words.volts(selected.suspect().predicted().get(net)));
       }
     }
     for (SuspectsViewModel.PointRow p : model.comparison()) {
       if (!Double.isNaN(p.measured())) {
-        measured.put(pins.getOrDefault(p.at(), p.at()), Words.voltsShort(p.measured()));
+        measured.put(pins.getOrDefault(p.at(), p.at()), Words.measured(p.measured()));
       }
     }
     schematic.setNetLabels(healthy);
@@ -205,14 +211,13 @@ public final class SuspectsView {
     int row = 1;
     for (SuspectsViewModel.PointRow p : model.comparison()) {
       table.add(new Label(Words.pin(p.at())), 0, row);
-      table.add(mono(Words.voltsShort(p.healthy())), 1, row);
-      Label measured =
-          mono(Double.isNaN(p.measured()) ? "not read" : Words.voltsShort(p.measured()));
+      table.add(mono(Words.volts(p.healthy())), 1, row);
+      Label measured = mono(Double.isNaN(p.measured()) ? "not read" : Words.measured(p.measured()));
       if (!Double.isNaN(p.measured())) {
         measured.getStyleClass().add("strong");
       }
       table.add(measured, 2, row);
-      Label predicted = mono(Words.voltsShort(p.predicted()));
+      Label predicted = mono(Words.volts(p.predicted()));
       predicted.getStyleClass().add("predicted");
       table.add(predicted, 3, row);
       row++;

@@ -199,9 +199,9 @@ public final class SuspectsViewModel {
         .map(
             r ->
                 "Estimated rail "
-                    + Words.voltsShort(value)
+                    + Words.volts(value)
                     + " (should be "
-                    + Words.voltsShort(r.volts())
+                    + Words.volts(r.volts())
                     + ")")
         .orElse("Estimated " + SiValue.format(value, "", 2));
   }

@@ -2,6 +2,7 @@ package com.stagewise.ui.widget;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.value.ESeries;
+import com.stagewise.circuit.value.Engineering;
 import com.stagewise.circuit.value.SiValue;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
@@ -28,16 +29,23 @@ public final class ValuePadModel {
 
   /** What the pad is for: it sets the unit, the prefixes offered and the hint. */
   public enum Quantity {
-    OHMS("Ω", "R"),
-    FARADS("F", ""),
-    VOLTS("V", "");
+    // The largest plausible entries: 1000 V is the top range of a usual handheld meter (CAT III
+    // 1000 V, common practice); fixed resistors end near 1 GΩ and bench capacitors near 1 F
+    // (parts catalogues, from memory); a larger entry is a slipped prefix or decimal point.
+    OHMS("Ω", "R", 1e10, "a resistor on a board (up to 10 GΩ)"),
+    FARADS("F", "", 1.0, "a capacitor on a board (up to 1 F)"),
+    VOLTS("V", "", 1000, "a bench meter reads (up to 1000 V)");
 
     private final String unit;
     private final String rkmLetter;
+    private final double largest;
+    private final String largestWords;
 
-    Quantity(String unit, String rkmLetter) {
+    Quantity(String unit, String rkmLetter, double largest, String largestWords) {
       this.unit = unit;
       this.rkmLetter = rkmLetter;
+      this.largest = largest;
+      this.largestWords = largestWords;
     }
 
     /** Returns the unit symbol. */
@@ -161,9 +169,21 @@ public final class ValuePadModel {
       problem.set("A part value cannot be negative.");
       return;
     }
+    if (Math.abs(parsed) > q.largest) {
+      // Keep what was typed: the technician corrects the prefix or the point, nothing is lost.
+      value.set(null);
+      reading.set("");
+      hint.set("");
+      problem.set(
+          Engineering.of(parsed, q.unit(), SiValue.DEFAULT_DIGITS)
+              + " is more than "
+              + q.largestWords
+              + ". Check the decimal point and the prefix.");
+      return;
+    }
     value.set(parsed);
     problem.set("");
-    reading.set("= " + SiValue.format(parsed, q.unit()));
+    reading.set("= " + Engineering.of(parsed, q.unit(), SiValue.DEFAULT_DIGITS));
     hint.set(preferredHint(q, parsed));
   }
 

@@ -1,6 +1,9 @@
 package com.stagewise.ui.words;
 
+import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.value.Engineering;
+import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.ReadingKind;
@@ -47,77 +50,49 @@ public final class Words {
     };
   }
 
-  /** Returns volts with a sign and three decimals, e.g. {@code +14.960 V} (no locale). */
+  /**
+   * Returns computed volts (an expectation, a prediction) in engineering units, e.g. {@code −4.7
+   * V}, {@code −1.8 mV}, {@code 20 µV}; "—" for a value that is not a number.
+   */
   public static String volts(double volts) {
-    if (!Double.isFinite(volts)) {
-      return "—";
-    }
-    double shown = Math.abs(volts) < 0.0005 ? 0.0 : volts;
-    return String.format(Locale.ROOT, "%+.3f V", shown);
+    return Double.isFinite(volts) ? Engineering.volts(volts) : "—";
   }
 
-  /** Returns volts briefly, e.g. {@code 14.96 V}, {@code -4.7 V}, {@code 0 V}. */
-  public static String voltsShort(double volts) {
-    if (!Double.isFinite(volts)) {
-      return "—";
-    }
-    double shown = Math.abs(volts) < 0.005 ? 0.0 : volts;
-    String text = String.format(Locale.ROOT, "%.2f", shown);
-    text = text.replaceAll("0+$", "").replaceAll("\\.$", "");
-    return ("-0".equals(text) ? "0" : text) + " V";
+  /**
+   * Returns volts as the meter showed them, with its range's digits, e.g. {@code 11.90 V}, {@code
+   * −1.8 mV}; "—" for a value that is not a number.
+   */
+  public static String measured(double volts) {
+    return Double.isFinite(volts) ? Engineering.reading(volts, MeterSpec.DEFAULT) : "—";
+  }
+
+  /** Returns a healthy band, e.g. {@code ±5 mV} or {@code 2.495 V to 2.505 V}. */
+  public static String band(double low, double high) {
+    return Double.isFinite(low) && Double.isFinite(high) ? Engineering.band(low, high) : "—";
+  }
+
+  /** Returns a frequency, e.g. {@code 1 kHz}, {@code 50 Hz}. */
+  public static String hertz(double hz) {
+    return Double.isFinite(hz) ? Engineering.of(hz, "Hz", 4) : "—";
   }
 
   /** Returns a probability as a whole percentage, {@code <1 %} for small ones. */
   public static String percent(double probability) {
     double p = probability * 100;
     if (p > 0 && p < 1) {
-      return "<1 %";
+      return "<1" + Engineering.SPACE + "%";
     }
-    return String.format(Locale.ROOT, "%.0f %%", p);
+    return String.format(Locale.ROOT, "%.0f", p) + Engineering.SPACE + "%";
   }
 
-  /**
-   * Returns a fault id in a technician's words: {@code R2:open} gives "R2 open", {@code
-   * U1.6-7:bridge} gives "Solder bridge U1 pins 6–7".
-   */
+  /** Returns a fault id in a technician's words ({@link Wording#fault(String)}). */
   public static String fault(String id) {
-    if (id == null || id.isEmpty()) {
-      return "";
-    }
-    if (id.equals("healthy")) {
-      return "Nothing wrong (healthy stage)";
-    }
-    int colon = id.lastIndexOf(':');
-    if (colon < 0) {
-      return id;
-    }
-    String what = id.substring(0, colon);
-    String kind = id.substring(colon + 1);
-    return switch (kind) {
-      case "open" -> what + " open";
-      case "short" -> what + " shorted";
-      case "high" -> what + " drifted high";
-      case "low" ->
-          what.matches("[A-Za-z]+\\d*[A-Za-z]*") && !what.matches("[RC]\\d+.*")
-              ? "Rail " + what + " low"
-              : what + " drifted low";
-      case "stuck-high" -> what + " output stuck high";
-      case "stuck-low" -> what + " output stuck low";
-      case "dead" -> what + " output dead (not driving)";
-      case "lifted" -> pin(what) + " lifted (open joint)";
-      case "bridge" -> "Solder bridge " + pin(what).replace("pin ", "pins ").replace("-", "–");
-      case "missing" -> "Rail " + what + " missing";
-      default -> what + " " + kind;
-    };
+    return Wording.fault(id);
   }
 
   /** Returns a test point in words: {@code U1.8} gives "U1 pin 8", a net gives its name. */
   public static String pin(String at) {
-    int dot = at.lastIndexOf('.');
-    if (dot > 0 && dot < at.length() - 1 && Character.isDigit(at.charAt(dot + 1))) {
-      return at.substring(0, dot) + " pin " + at.substring(dot + 1);
-    }
-    return at;
+    return Wording.point(at);
   }
 
   /** Returns an action in one line, e.g. "Replaced R2: open → 4.7 kΩ". */

@@ -3,6 +3,8 @@ package com.stagewise.ui.drawing;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.value.Engineering;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -49,10 +51,11 @@ class BandScaleTest {
   @Test
   void voltText_usesRealMinusAndIgnoresLocale() {
     // The suite runs in a decimal-comma locale; the drawings must still print a decimal point.
-    assertThat(VoltText.of(-4.7)).isEqualTo("\u22124.70 V");
-    assertThat(VoltText.of(13.412)).isEqualTo("+13.41 V");
-    assertThat(VoltText.of(0.0234)).isEqualTo("+0.023 V");
-    assertThat(VoltText.of(-0.0001)).isEqualTo("0.000 V");
+    // Values and bands on the chart come from Engineering (its own table test); the chart's texts:
+    assertThat(Engineering.volts(-4.7)).isEqualTo("\u22124.7\u00a0V");
+    assertThat(Engineering.reading(13.412, MeterSpec.DEFAULT)).isEqualTo("13.41\u00a0V");
+    assertThat(Engineering.volts(0.0234)).isEqualTo("23.4\u00a0mV");
+    assertThat(Engineering.reading(-0.00001, MeterSpec.DEFAULT)).isEqualTo("0.0\u00a0mV");
     assertThat(VoltText.tick(-2.5)).isEqualTo("\u22122.5");
     assertThat(VoltText.tick(0)).isEqualTo("0");
   }

@@ -30,11 +30,11 @@ class SchematicRenderTest {
         continue;
       }
       double volts = stage.drivenVolts().getOrDefault(net, -4.7 + i);
-      expected.put(net, VoltText.of(volts));
+      expected.put(net, com.stagewise.circuit.value.Engineering.volts(volts));
       if (!stage.isDriven(net)) {
-        suspect.put(net, VoltText.of(13.5 - i));
+        suspect.put(net, com.stagewise.circuit.value.Engineering.volts(13.5 - i));
         if (i % 2 == 0) {
-          measured.put(net, VoltText.of(13.41 - i));
+          measured.put(net, com.stagewise.circuit.value.Engineering.volts(13.41 - i));
         }
       }
       i++;

@@ -106,9 +106,12 @@ class HistoryViewModelTest {
     var view = model.shownProperty().get();
     assertThat(view.status()).contains("fixed");
     assertThat(view.faults()).isEqualTo("Solder bridge U1 pins 6–7");
-    assertThat(view.readings()).singleElement().asString().startsWith("U1 pin 8:  14.9 V");
+    assertThat(view.readings())
+        .singleElement()
+        .asString()
+        .startsWith("U1 pin 8:  14.90\u00a0V"); // the 60 V range shows two decimals
     assertThat(view.suspects()).hasSize(2);
-    assertThat(view.suspects().get(1)).isEqualTo("1. Solder bridge U1 pins 6–7  70 %");
+    assertThat(view.suspects().get(1)).isEqualTo("1. Solder bridge U1 pins 6–7  70\u00a0%");
     assertThat(view.actions()).containsExactly("Reflow U1 — Removed a bridge between pins 6 and 7");
     assertThat(view.notes()).singleElement().asString().endsWith("Solder splash under the op-amp.");
     assertThat(model.timeline()).singleElement().asString().contains("Channel hums after a drop");

@@ -113,4 +113,32 @@ class StageViewModelTest {
     assertThat(t.resume.load(t.bench.openCaseProperty().get().id()).orElseThrow().stage())
         .isPresent();
   }
+
+  /** Regression: a new case on another board showed the last board's stage and decoder entry. */
+  @Test
+  void newCaseOnAnotherBoard_startsClean() {
+    model.choose(model.library().get(0).stage());
+    model.selectedPartProperty().set(model.parts().get(1));
+    model.decoder().addBand("yellow");
+    model.decoder().smdProperty().set("472");
+    model.templateProperty().set(Templates.all().get(0));
+    assertThat(model.expectedProperty().get()).isNotNull();
+
+    var other = t.store.boardModel("Other board", "");
+    var unit = t.store.addUnit("OB-2", other.id(), "");
+    t.bench.showUnit(unit, other);
+    t.bench.startCase(t.store.openCase(unit.id(), "Hum"));
+
+    assertThat(model.stageProperty().get()).isNull();
+    assertThat(model.parts()).isEmpty();
+    assertThat(model.expectedProperty().get()).isNull();
+    assertThat(model.selectedPartProperty().get()).isNull();
+    assertThat(model.decoder().smdProperty().get()).isEmpty();
+    assertThat(model.decoder().ohmsProperty().get()).isNull();
+    assertThat(model.templateProperty().get()).isNull();
+    assertThat(model.designatorProperty().get()).isEmpty();
+    assertThat(model.pad().textProperty().get()).isEmpty();
+    model.loadLibrary();
+    assertThat(model.library()).isEmpty();
+  }
 }

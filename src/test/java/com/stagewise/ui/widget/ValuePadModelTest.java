@@ -14,7 +14,7 @@ class ValuePadModelTest {
       pad.press(key);
     }
     assertThat(pad.valueProperty().get()).isEqualTo(4700.0);
-    assertThat(pad.readingProperty().get()).isEqualTo("= 4.7 kΩ");
+    assertThat(pad.readingProperty().get()).isEqualTo("= 4.7\u00a0kΩ");
     assertThat(pad.hintProperty().get()).isEqualTo("A preferred E24 value.");
   }
 
@@ -89,5 +89,31 @@ class ValuePadModelTest {
     ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.FARADS);
     pad.setValue(2.2e-6);
     assertThat(pad.valueProperty().get()).isEqualTo(2.2e-6);
+  }
+
+  @Test
+  void text_beyondAMetersTopRange_isWarnedInThePreview_andKept() {
+    // Regression: 1e6 V previewed as "= 1 MV", then refused with developer text after the pad
+    // was cleared. 1000 V is the top range of a usual handheld meter (common practice).
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+    pad.textProperty().set("1e6");
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.readingProperty().get()).isEmpty();
+    assertThat(pad.problemProperty().get())
+        .isEqualTo(
+            "1\u00a0MV is more than a bench meter reads (up to 1000 V)."
+                + " Check the decimal point and the prefix.");
+    assertThat(pad.textProperty().get()).isEqualTo("1e6");
+    pad.textProperty().set("-1000");
+    assertThat(pad.valueProperty().get()).isEqualTo(-1000.0);
+    assertThat(pad.readingProperty().get()).isEqualTo("= \u22121\u00a0kV");
+  }
+
+  @Test
+  void text_implausiblePartValue_isWarned() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.FARADS);
+    pad.textProperty().set("4700"); // 4700 F: a slipped "u"
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).contains("more than a capacitor on a board");
   }
 }

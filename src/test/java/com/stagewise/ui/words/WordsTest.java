@@ -30,18 +30,21 @@ class WordsTest {
   }
 
   @Test
-  void voltsShort_inDecimalCommaLocale_usesAPoint() {
-    assertThat(Words.voltsShort(-4.7)).isEqualTo("-4.7 V");
-    assertThat(Words.voltsShort(14.96)).isEqualTo("14.96 V");
-    assertThat(Words.voltsShort(0.001)).isEqualTo("0 V");
-    assertThat(Words.voltsShort(Double.NaN)).isEqualTo("—");
+  void volts_inDecimalCommaLocale_usesAPoint() {
+    // Values in engineering units with U+2212 and a no-break space (table in EngineeringTest).
+    assertThat(Words.volts(-4.7)).isEqualTo("\u22124.7\u00a0V");
+    assertThat(Words.volts(14.96)).isEqualTo("14.96\u00a0V");
+    assertThat(Words.volts(0.001)).isEqualTo("1\u00a0mV");
+    assertThat(Words.volts(Double.NaN)).isEqualTo("—");
+    assertThat(Words.measured(11.9)).isEqualTo("11.90\u00a0V");
+    assertThat(Words.band(-0.005, 0.005)).isEqualTo("\u00b15\u00a0mV");
   }
 
   @Test
   void percent_smallProbability_saysBelowOne() {
-    assertThat(Words.percent(0.953)).isEqualTo("95 %");
-    assertThat(Words.percent(0.004)).isEqualTo("<1 %");
-    assertThat(Words.percent(0)).isEqualTo("0 %");
+    assertThat(Words.percent(0.953)).isEqualTo("95\u00a0%");
+    assertThat(Words.percent(0.004)).isEqualTo("<1\u00a0%");
+    assertThat(Words.percent(0)).isEqualTo("0\u00a0%");
   }
 
   @Test
