@@ -124,10 +124,10 @@ class StageViewModelTest {
     model.templateProperty().set(Templates.all().get(0));
     assertThat(model.expectedProperty().get()).isNotNull();
 
-    var other = t.store.boardModel("Other board", "");
-    var unit = t.store.addUnit("OB-2", other.id(), "");
+    var other = t.store.units().boardModel("Other board", "");
+    var unit = t.store.units().add("OB-2", other.id(), "");
     t.bench.showUnit(unit, other);
-    t.bench.startCase(t.store.openCase(unit.id(), "Hum"));
+    t.bench.startCase(t.store.cases().open(unit.id(), "Hum"));
 
     assertThat(model.stageProperty().get()).isNull();
     assertThat(model.parts()).isEmpty();
