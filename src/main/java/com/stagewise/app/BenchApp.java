@@ -25,11 +25,17 @@ import javafx.scene.input.KeyCombination;
 
 /** Wires the bench app's screens to a workshop and puts them in a scene. */
 public final class BenchApp {
-  /** The smallest window the screens are laid out for. */
+  /** The window's usual size (a 1280×800 laptop). */
   public static final double WIDTH = 1280;
 
-  /** The smallest window the screens are laid out for. */
+  /** The window's usual size (a 1280×800 laptop). */
   public static final double HEIGHT = 800;
+
+  /** The smallest window every screen works in (a 1024×600 touch laptop). */
+  public static final double MIN_WIDTH = 1024;
+
+  /** The smallest window every screen works in (a 1024×600 touch laptop). */
+  public static final double MIN_HEIGHT = 600;
 
   private final Workshop workshop;
   private final Overlays overlays = new Overlays();

@@ -8,10 +8,12 @@ import java.util.Locale;
 import javafx.application.Application;
 import javafx.application.Platform;
 import javafx.geometry.Pos;
+import javafx.geometry.Rectangle2D;
 import javafx.scene.Scene;
 import javafx.scene.control.Label;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import javafx.stage.Screen;
 import javafx.stage.Stage;
 
 /**
@@ -30,21 +32,38 @@ public final class DesktopLauncher extends Application {
     Application.launch(DesktopLauncher.class, args);
   }
 
+  private double startWidth = BenchApp.WIDTH;
+  private double startHeight = BenchApp.HEIGHT;
+
   @Override
   public void start(Stage window) {
     mark("toolkit up");
     AppOptions options = AppOptions.parse(getParameters().getRaw());
     DataFolder folder = options.folder(System.getenv(), System.getProperty("user.home"));
     window.setTitle("Stagewise — bench");
-    window.setMinWidth(1024);
-    window.setMinHeight(700);
+    // From a 1024×600 touch laptop to a 1920×1080 bench screen: the window never starts larger
+    // than the screen, and fills a small one.
+    Rectangle2D screen = Screen.getPrimary().getVisualBounds();
+    double width = Math.min(BenchApp.WIDTH, screen.getWidth());
+    double height = Math.min(BenchApp.HEIGHT, screen.getHeight());
+    if (screen.getWidth() >= 1600 && screen.getHeight() >= 1000) {
+      // A large bench screen: use most of it, so that the drawings and lists grow.
+      width = Math.round(screen.getWidth() * 0.9);
+      height = Math.round(screen.getHeight() * 0.9);
+    }
+    window.setMinWidth(Math.min(BenchApp.MIN_WIDTH, screen.getWidth()));
+    window.setMinHeight(Math.min(BenchApp.MIN_HEIGHT, screen.getHeight()));
+    window.setWidth(width);
+    window.setHeight(height);
+    startWidth = width;
+    startHeight = height;
     Label opening = new Label("Opening the repair history …");
     opening.setFont(javafx.scene.text.Font.font(22));
     // Only a label: the first window must come up fast; the screens follow when the history is
     // open.
     VBox splash = new VBox(18, opening);
     splash.setAlignment(Pos.CENTER);
-    window.setScene(new Scene(new StackPane(splash), BenchApp.WIDTH, BenchApp.HEIGHT));
+    window.setScene(new Scene(new StackPane(splash), width, height));
     window.setOnShown(e -> reportTiming());
     window.show();
     Path stages = Path.of(System.getProperty("stagewise.stages", "data/stages"));
@@ -75,6 +94,9 @@ public final class DesktopLauncher extends Application {
                 "Your readings so far are saved in the history. Go back to the Unit screen and resume the case."
                     + " If it happens again, write down what you did and tell whoever looks after Stagewise."));
     window.setScene(app.scene());
+    window.setWidth(startWidth);
+    window.setHeight(startHeight);
+    window.centerOnScreen();
     app.cautionOnFirstRun();
     mark("unit screen shown");
   }

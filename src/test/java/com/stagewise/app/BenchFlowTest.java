@@ -12,14 +12,20 @@ import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.application.Platform;
 import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.Node;
+import javafx.scene.Parent;
 import javafx.scene.control.Label;
+import javafx.scene.control.Labeled;
 import javafx.scene.image.WritableImage;
+import javafx.scene.text.Text;
 import javafx.stage.Stage;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.AfterEach;
@@ -67,6 +73,9 @@ class BenchFlowTest {
       // Another test class started the toolkit first.
     }
     Platform.setImplicitExit(false);
+    // Building the window on a build machine shared by many jobs can take well over TestFX's
+    // default 30 s; the flow's own waits are longer too.
+    FxToolkit.toolkitContext().setSetupTimeoutInMillis(180_000);
   }
 
   @BeforeEach
@@ -314,19 +323,114 @@ class BenchFlowTest {
     WaitForAsyncUtils.waitForFxEvents();
   }
 
+  /** The window sizes every screen must work at: a small touch laptop, a laptop, a desk screen. */
+  private static final int[][] SIZES = {{1024, 600}, {1280, 800}, {1920, 1080}};
+
+  /**
+   * The screens already checked for cut texts at every size. The stage, readings, suspects,
+   * close-out and history screens still shorten a few texts at 1024×600 (issue 14, point 4, open):
+   * add each here once it shows every text whole.
+   */
+  private static final java.util.Set<String> CHECKED_WHOLE =
+      java.util.Set.of("01-safety-caution", "02-unit");
+
+  /**
+   * Shows the screen at each window size, fails when any text on it is cut short (shown with an
+   * ellipsis), and saves a picture at each size: 1280×800 under the screen's name, the others in a
+   * folder named for their size.
+   */
   private void shoot(String name) throws Exception {
+    for (int[] size : SIZES) {
+      fx(
+          () -> {
+            window.setWidth(size[0]);
+            window.setHeight(size[1]);
+            return null;
+          });
+      WaitForAsyncUtils.waitForFxEvents();
+      fx(
+          () -> {
+            window.getScene().getRoot().applyCss();
+            window.getScene().getRoot().layout();
+            return null;
+          });
+      WaitForAsyncUtils.waitForFxEvents();
+      String where = size[0] + "x" + size[1];
+      if (CHECKED_WHOLE.contains(name)) {
+        List<String> cut = fx(() -> cutTexts(window.getScene().getRoot(), new ArrayList<>()));
+        assertThat(cut).as("texts cut short on %s at %s", name, where).isEmpty();
+      }
+      if (size[0] == 1280) {
+        save(screensFolder().resolve(name + ".png"), size);
+      } else {
+        save(Path.of("target", "screens", where, name + ".png"), size);
+      }
+      if (size[0] == 1024 && name.equals("06-readings") && Boolean.getBoolean("screenshots")) {
+        save(screensFolder().resolve("10-readings-1024x600.png"), size);
+      }
+    }
+    fx(
+        () -> {
+          window.setWidth(BenchApp.WIDTH);
+          window.setHeight(BenchApp.HEIGHT);
+          return null;
+        });
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  /**
+   * Returns every visible text that its control shows shortened (JavaFX then draws it with an
+   * ellipsis): the control's own text and the text it draws differ.
+   */
+  private static List<String> cutTexts(Parent parent, List<String> cut) {
+    for (Node child : parent.getChildrenUnmodifiable()) {
+      if (!child.isVisible()) {
+        continue;
+      }
+      if (child instanceof Labeled labeled
+          && labeled.getText() != null
+          && !labeled.getText().isBlank()
+          && labeled.getWidth() > 0) {
+        for (Node part : labeled.getChildrenUnmodifiable()) {
+          if (part instanceof Text shown
+              && part.isVisible()
+              && shown.getText() != null
+              && !shown.getText().equals(labeled.getText())) {
+            cut.add(
+                (labeled.getId() == null
+                        ? labeled.getClass().getSimpleName()
+                        : "#" + labeled.getId())
+                    + " shows \""
+                    + shown.getText()
+                    + "\" for \""
+                    + labeled.getText()
+                    + "\"");
+          }
+        }
+      }
+      if (child instanceof Parent inner) {
+        cutTexts(inner, cut);
+      }
+    }
+    return cut;
+  }
+
+  private static Path screensFolder() {
+    return Boolean.getBoolean("screenshots")
+        ? Path.of("src", "site", "screens")
+        : Path.of("target", "screens");
+  }
+
+  private void save(Path file, int[] size) throws Exception {
     WritableImage image = fx(() -> window.getScene().snapshot(null));
     BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-    assertThat(picture.getWidth()).isEqualTo((int) BenchApp.WIDTH);
-    Path folder =
-        Boolean.getBoolean("screenshots")
-            ? Path.of("src", "site", "screens")
-            : Path.of("target", "screens");
-    Files.createDirectories(folder);
+    assertThat(picture.getWidth()).isEqualTo(size[0]);
+    assertThat(picture.getHeight()).isEqualTo(size[1]);
+    Files.createDirectories(file.getParent());
     try {
-      ImageIO.write(picture, "png", folder.resolve(name + ".png").toFile());
+      ImageIO.write(picture, "png", file.toFile());
     } catch (IOException e) {
-      throw new AssertionError("could not write the picture " + name, e);
+      throw new AssertionError("could not write the picture " + file, e);
     }
   }
 }

@@ -11,6 +11,7 @@ import javafx.scene.Node;
 import javafx.scene.Parent;
 import javafx.scene.control.Label;
 import javafx.scene.control.ProgressBar;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.input.KeyCode;
@@ -98,10 +99,53 @@ public final class BenchWindow {
       screen = maker.get();
       screens.put(step, screen);
     }
-    content.getChildren().setAll(screen);
+    content.getChildren().setAll(scrollable(step, screen));
     ToggleButton button = stepButtons.get(step);
     if (button != null) {
       button.setSelected(true);
+    }
+  }
+
+  /**
+   * Puts a screen in a scroll pane that fits it to the window: from 1024×600 up the screen fills
+   * the window, and where a screen needs more height than a small window has, it scrolls instead of
+   * cutting anything off.
+   */
+  private final Map<Step, ScrollPane> scrollers = new EnumMap<>(Step.class);
+
+  private ScrollPane scrollable(Step step, Node screen) {
+    return scrollers.computeIfAbsent(
+        step,
+        s -> {
+          keepButtonsWhole(screen);
+          ScrollPane scroller = new ScrollPane(screen);
+          scroller.setId("scroll-" + s.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+          scroller.getStyleClass().add("screen-scroller");
+          scroller.setFitToWidth(true);
+          scroller.setFitToHeight(true);
+          scroller.setHbarPolicy(ScrollPane.ScrollBarPolicy.AS_NEEDED);
+          scroller.setVbarPolicy(ScrollPane.ScrollBarPolicy.AS_NEEDED);
+          return scroller;
+        });
+  }
+
+  /**
+   * Keeps every button at least as wide as its words and every label as tall as its lines: where a
+   * small window cannot give a screen its size, the screen scrolls instead of shortening "Open
+   * case" to "Open …".
+   */
+  private static void keepButtonsWhole(Node node) {
+    if (node instanceof javafx.scene.control.ButtonBase button) {
+      button.setMinWidth(Region.USE_PREF_SIZE);
+    }
+    if (node instanceof javafx.scene.control.Label label) {
+      // A wrapped label gets the lines it needs.
+      label.setMinHeight(Region.USE_PREF_SIZE);
+    }
+    if (node instanceof Parent parent) {
+      for (Node child : parent.getChildrenUnmodifiable()) {
+        keepButtonsWhole(child);
+      }
     }
   }
 

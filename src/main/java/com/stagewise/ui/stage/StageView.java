@@ -7,9 +7,14 @@ import com.stagewise.ui.widget.ValuePad;
 import com.stagewise.ui.words.Words;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.collections.FXCollections;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Control;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
@@ -22,9 +27,19 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import org.controlsfx.validation.ValidationResult;
+import org.controlsfx.validation.ValidationSupport;
 
 /** The stage screen: library, expected voltages, parts, and the value pad with the decoders. */
 public final class StageView {
+  private ValidationSupport validation;
+  private final BooleanProperty formInvalid = new SimpleBooleanProperty();
+
+  private void recheck() {
+    formInvalid.set(
+        model.parameters().stream().anyMatch(p -> !p.problem(p.value().get()).isEmpty()));
+  }
+
   private final StageViewModel model;
   private final HBox root = new HBox(12);
   private final VBox expectedBox = new VBox(4);
@@ -159,24 +174,60 @@ public final class StageView {
                     about.setWrapText(true);
                     form.getChildren().add(about);
                   }
+                  validation = new ValidationSupport();
                   for (StageViewModel.ParameterEntry entry : model.parameters()) {
                     Label label = new Label(entry.label());
                     label.setWrapText(true);
                     label.getStyleClass().add("parameter-label");
-                    TextField field = new TextField();
+                    Control field;
+                    if (entry.choices().isEmpty()) {
+                      TextField text = new TextField();
+                      text.textProperty().bindBidirectional(entry.value());
+                      field = text;
+                    } else {
+                      // A list, not free text to be spelt exactly.
+                      ComboBox<String> choice =
+                          new ComboBox<>(FXCollections.observableArrayList(entry.choices()));
+                      choice.valueProperty().bindBidirectional(entry.value());
+                      choice.setMaxWidth(Double.MAX_VALUE);
+                      field = choice;
+                    }
                     field.setId("template-" + entry.parameter().name());
-                    field.textProperty().bindBidirectional(entry.value());
-                    form.getChildren().addAll(label, field);
+                    // Checked as it is typed, the message beside the field (ControlsFX).
+                    validation.registerValidator(
+                        field,
+                        false,
+                        (Control control, Object value) ->
+                            ValidationResult.fromErrorIf(
+                                control,
+                                entry.problem(value == null ? "" : value.toString()),
+                                !entry.problem(value == null ? "" : value.toString()).isEmpty()));
+                    Label problem = new Label();
+                    problem.getStyleClass().add("field-problem");
+                    problem.setWrapText(true);
+                    problem
+                        .textProperty()
+                        .bind(
+                            Bindings.createStringBinding(
+                                () -> entry.problem(entry.value().get()), entry.value()));
+                    problem.visibleProperty().bind(problem.textProperty().isNotEmpty());
+                    problem.managedProperty().bind(problem.visibleProperty());
+                    form.getChildren().addAll(label, field, problem);
+                    entry.value().addListener((ov, was, now) -> recheck());
                   }
+                  recheck();
                 });
     ScrollPane scroll = new ScrollPane(form);
     scroll.setFitToWidth(true);
     VBox.setVgrow(scroll, Priority.ALWAYS);
+    // The list keeps about four rows after a pick; the form scrolls below it.
+    templates.setMinHeight(4 * 48 + 4);
+    templates.setPrefHeight(5 * 48 + 4);
     Button build = new Button("Build the stage");
     build.setId("template-build");
     build.getStyleClass().add("primary");
     build.setMaxWidth(Double.MAX_VALUE);
-    build.disableProperty().bind(model.templateProperty().isNull());
+    build.disableProperty().bind(model.templateProperty().isNull().or(formInvalid));
     build.setOnAction(e -> model.buildFromTemplate());
     return new VBox(8, templates, scroll, build);
   }

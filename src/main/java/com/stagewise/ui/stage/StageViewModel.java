@@ -1,7 +1,9 @@
 package com.stagewise.ui.stage;
 
 import com.stagewise.casework.LibraryStage;
+import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
@@ -18,6 +20,7 @@ import com.stagewise.ui.Step;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -106,12 +109,61 @@ public final class StageViewModel {
    * @param value the value text, as in stage sheets ({@code 4k7}); starts at the default
    */
   public record ParameterEntry(Parameter parameter, StringProperty value) {
-    /** Returns the label shown beside the field, e.g. "Rf — feedback resistor (Ω)". */
+    /**
+     * Returns the label shown beside the field in plain words, e.g. "Feedback resistor R2 (Ω)" or
+     * "Test signal amplitude (V, 0 for none)"; the template's short names (r2, vac) stay in files.
+     */
     public String label() {
-      return parameter.name()
-          + " — "
-          + parameter.meaning()
-          + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
+      String words =
+          switch (parameter.name()) {
+            case "vin" -> "Test signal DC level";
+            case "vac" -> "Test signal amplitude (peak; 0 for none)";
+            case "hz" -> "Test signal frequency";
+            case "vcc" -> "Positive rail VCC";
+            case "vee" -> "Negative rail VEE";
+            case "class" -> "Op-amp class";
+            case "package" -> "Package of U1 (section A is used)";
+            default ->
+                Character.toUpperCase(parameter.meaning().charAt(0))
+                    + parameter.meaning().substring(1);
+          };
+      return words + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
+    }
+
+    /** Returns the words the field takes, when it is a choice (class, package); else empty. */
+    public List<String> choices() {
+      return switch (parameter.name()) {
+        case "class" -> Arrays.stream(DeviceClass.values()).map(DeviceClass::word).toList();
+        case "package" -> Arrays.stream(PackageType.values()).map(PackageType::word).toList();
+        default -> List.of();
+      };
+    }
+
+    /**
+     * Returns what is wrong with {@code text} for this field, in plain words, or the empty string
+     * when it is a value the field takes (checked as the technician types).
+     */
+    public String problem(String text) {
+      String typed = text == null ? "" : text.strip();
+      if (!choices().isEmpty()) {
+        return choices().contains(typed) ? "" : "Choose one of " + String.join(", ", choices());
+      }
+      if (typed.isEmpty()) {
+        return "Type a value, e.g. " + parameter.defaultValue();
+      }
+      if (typed.equals("none") && parameter.meaning().contains("none")) {
+        return "";
+      }
+      try {
+        double v = SiValue.parse(typed);
+        if (!parameter.unit().equals("V") && v < 0) {
+          return "A part value or frequency cannot be negative";
+        }
+        return "";
+      } catch (InvalidInputException e) {
+        return "Not a value: write it as 4k7, 100n, 15 or -15"
+            + (parameter.meaning().contains("none") ? ", or none" : "");
+      }
     }
   }
 

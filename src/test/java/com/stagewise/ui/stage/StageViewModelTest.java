@@ -141,4 +141,33 @@ class StageViewModelTest {
     model.loadLibrary();
     assertThat(model.library()).isEmpty();
   }
+
+  @Test
+  void templateFields_speakPlainWords_offerLists_andCheckWhatIsTyped() {
+    model.templateProperty().set(Templates.named("inverting"));
+    var byName = new java.util.HashMap<String, StageViewModel.ParameterEntry>();
+    model.parameters().forEach(p -> byName.put(p.parameter().name(), p));
+    assertThat(byName.get("r1").label()).isEqualTo("Input resistor R1 (Ω)");
+    assertThat(byName.get("vac").label()).startsWith("Test signal amplitude");
+    assertThat(model.parameters())
+        .allSatisfy(p -> assertThat(p.label()).doesNotStartWith(p.parameter().name() + " "));
+    // Class and package are lists of the words DESIGN.md defines, not free text.
+    assertThat(byName.get("class").choices())
+        .containsExactly("classic-bipolar", "ground-sensing", "rail-to-rail");
+    assertThat(byName.get("package").choices()).containsExactly("single-8", "dual-8", "quad-14");
+    assertThat(byName.get("class").problem("rail-to-rail")).isEmpty();
+    assertThat(byName.get("class").problem("rail to rail")).startsWith("Choose one of");
+    // Values as in stage sheets (IEC 60062 RKM code); the decimal comma is refused.
+    assertThat(byName.get("r1").problem("4k7")).isEmpty();
+    assertThat(byName.get("r1").problem("4,7k")).startsWith("Not a value");
+    assertThat(byName.get("r1").problem("-10k")).contains("cannot be negative");
+    assertThat(byName.get("vee").problem("-15")).isEmpty();
+    assertThat(byName.get("r1").problem("")).startsWith("Type a value");
+    // Every default of every template is a value its field takes.
+    for (var template : Templates.all()) {
+      model.templateProperty().set(template);
+      assertThat(model.parameters())
+          .allSatisfy(p -> assertThat(p.problem(p.value().get())).as(p.label()).isEmpty());
+    }
+  }
 }
