@@ -3,6 +3,7 @@ package com.stagewise;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
 
+import com.stagewise.ui.drawing.SchematicPicture;
 import com.tngtech.archunit.base.DescribedPredicate;
 import com.tngtech.archunit.core.domain.JavaClass;
 import com.tngtech.archunit.core.domain.JavaClasses;
@@ -164,7 +165,14 @@ class ArchitectureTest {
             "report", "casework", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("cli")
         .mayOnlyAccessLayers(
-            "report", "casework", "interchange", "history", "diagnosis", "solver", "circuit")
+            "ui",
+            "report",
+            "casework",
+            "interchange",
+            "history",
+            "diagnosis",
+            "solver",
+            "circuit")
         .whereLayer("app")
         .mayOnlyAccessLayers(
             "ui",
@@ -249,6 +257,24 @@ class ArchitectureTest {
             "Transfer.importBundle",
             "Transfer.restoreFrom",
             "DemoHistory.fill");
+  }
+
+  /**
+   * The command line draws schematics with the app's plain-Java picture writer ({@code stage
+   * draw}); nothing else of the ui package is its business.
+   */
+  @Test
+  void cli_usesOfTheUiOnlyTheSchematicPicture() {
+    noClasses()
+        .that()
+        .resideInAPackage("com.stagewise.cli..")
+        .should()
+        .dependOnClassesThat(
+            JavaClass.Predicates.resideInAPackage("com.stagewise.ui..")
+                .and(
+                    DescribedPredicate.not(
+                        JavaClass.Predicates.equivalentTo(SchematicPicture.class))))
+        .check(classes);
   }
 
   @Test

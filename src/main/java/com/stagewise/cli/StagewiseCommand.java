@@ -20,7 +20,8 @@ import picocli.CommandLine.Command;
       DiagnoseCommand.class,
       TemplateCommand.class,
       HistoryCommand.class,
-      ReportCommand.class
+      ReportCommand.class,
+      StageCommand.class
     })
 public final class StagewiseCommand implements Runnable {
 

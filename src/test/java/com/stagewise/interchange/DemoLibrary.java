@@ -60,6 +60,12 @@ public final class DemoLibrary {
   static final String SCALE = "Ferrowick WB-2 weighing scale, bridge amplifier board";
   static final String METER = "Quillon LX-2 light meter, sensor board";
 
+  /**
+   * Demo sheets written by hand, not from a template: a whole signal chain (five sections over two
+   * quad packages, one feeding the next) of an invented preamp's channel board.
+   */
+  static final List<String> HAND_WRITTEN = List.of("tarnwell-ps4-channel-chain.stage.json");
+
   /** Returns the entries of the demo library, one per template. */
   static List<Entry> entries() {
     return List.of(

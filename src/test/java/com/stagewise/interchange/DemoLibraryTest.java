@@ -2,6 +2,8 @@ package com.stagewise.interchange;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
@@ -69,8 +71,45 @@ class DemoLibraryTest {
 
   @Test
   void everySheet_comesFromAnEntry() throws IOException {
-    List<String> known = DemoLibrary.entries().stream().map(DemoLibrary.Entry::file).toList();
+    List<String> known =
+        new java.util.ArrayList<>(
+            DemoLibrary.entries().stream().map(DemoLibrary.Entry::file).toList());
+    known.addAll(DemoLibrary.HAND_WRITTEN);
     assertThat(stageFiles().map(f -> f.getFileName().toString())).allMatch(known::contains);
+  }
+
+  @Test
+  void everyHandWrittenSheet_isThereInTheFormTheProgramWrites() throws IOException {
+    for (String name : DemoLibrary.HAND_WRITTEN) {
+      Path file = STAGES.resolve(name);
+      assertThat(Files.readString(file, StandardCharsets.UTF_8))
+          .as("%s: keep it as StageSheet.write prints it", file)
+          .isEqualTo(StageSheet.write(StageSheet.read(file)));
+    }
+  }
+
+  @Test
+  void chainSheet_isAWholeChannelOverTwoQuadPackages() {
+    Stage chain = StageSheet.read(STAGES.resolve(DemoLibrary.HAND_WRITTEN.get(0)));
+    // The demo chain the diagnosis is judged on: at least five sections over two quad packages,
+    // each section after the first fed by the one before.
+    assertThat(chain.amplifiers()).hasSizeGreaterThanOrEqualTo(5);
+    assertThat(chain.packages()).hasSize(2);
+    assertThat(chain.packages())
+        .allMatch(p -> chain.packageType(p).orElseThrow() == PackageType.QUAD_14);
+    List<String> order = com.stagewise.diagnosis.SignalChain.of(chain).sections();
+    for (int i = 1; i < order.size(); i++) {
+      Amplifier before = chain.amplifier(order.get(i - 1)).orElseThrow();
+      Amplifier next = chain.amplifier(order.get(i)).orElseThrow();
+      boolean fed =
+          next.inPlus().equals(before.out())
+              || chain.parts().stream()
+                  .anyMatch(
+                      p ->
+                          p.touches(before.out())
+                              && (p.touches(next.inMinus()) || p.touches(next.inPlus())));
+      assertThat(fed).as("%s feeds %s", before.ref(), next.ref()).isTrue();
+    }
   }
 
   @ParameterizedTest

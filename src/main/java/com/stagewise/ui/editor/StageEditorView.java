@@ -1,0 +1,674 @@
+package com.stagewise.ui.editor;
+
+import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Terminal;
+import com.stagewise.ui.drawing.SchematicDrawing;
+import com.stagewise.ui.editor.DraftStage.DraftInput;
+import com.stagewise.ui.editor.DraftStage.DraftPart;
+import com.stagewise.ui.editor.DraftStage.DraftRail;
+import com.stagewise.ui.editor.DraftStage.DraftSection;
+import com.stagewise.ui.editor.EditorProblem.Place;
+import java.util.List;
+import java.util.function.Consumer;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+
+/**
+ * The stage editor's screen, touch first: the stage's sections, parts, rails and inputs as large
+ * rows on the left (each with its problems beside it), the schematic redrawn after every edit in
+ * the middle with the list of problems below it, and the chosen item's details on the right, where
+ * nets are tapped from the stage's nets or typed new. Every target is at least 48 px; nothing needs
+ * hover; Ctrl+Z and Ctrl+Y undo and redo, Enter confirms a field.
+ */
+public final class StageEditorView {
+  private final StageEditorModel model;
+  private final BorderPane root = new BorderPane();
+  private final VBox items = new VBox(6);
+  private final VBox details = new VBox(10);
+  private final VBox problemList = new VBox(4);
+  private final SchematicDrawing schematic = new SchematicDrawing();
+  private final Label refusal = new Label();
+  private final StackPane layers;
+  private final VBox questionPane = new VBox(14);
+  private final Button undo = new Button("Undo");
+  private final Button redo = new Button("Redo");
+  private final Label title = new Label();
+  private Place selectedPlace = Place.STAGE;
+  private String selectedKey = "";
+
+  /**
+   * Builds the editor bound to its model.
+   *
+   * @param model the editor's model
+   * @param onSave what to do with the stage after a save (e.g. take it to the stage screen)
+   * @param onClose what closes the editor (asked first when edits are unsaved)
+   */
+  public StageEditorView(
+      StageEditorModel model, Consumer<com.stagewise.circuit.Stage> onSave, Runnable onClose) {
+    this.model = model;
+    root.getStyleClass().add("screen");
+    root.setId("screen-stage-editor");
+    root.setTop(topBar(onSave, onClose));
+    ScrollPane itemScroll = new ScrollPane(items);
+    itemScroll.setFitToWidth(true);
+    itemScroll.setPrefWidth(300);
+    itemScroll.setMinWidth(260);
+    items.setId("editor-items");
+    root.setLeft(itemScroll);
+    schematic.setId("editor-schematic");
+    VBox.setVgrow(schematic, Priority.ALWAYS);
+    ScrollPane problemScroll = new ScrollPane(problemList);
+    problemScroll.setFitToWidth(true);
+    problemScroll.setPrefHeight(150);
+    problemList.setId("editor-problems");
+    VBox middle = new VBox(8, schematic, problemScroll);
+    middle.setPadding(new javafx.geometry.Insets(0, 10, 0, 10));
+    root.setCenter(middle);
+    ScrollPane detailScroll = new ScrollPane(details);
+    detailScroll.setFitToWidth(true);
+    detailScroll.setPrefWidth(400);
+    detailScroll.setMinWidth(360);
+    details.getStyleClass().add("panel");
+    details.setId("editor-details");
+    root.setRight(detailScroll);
+    questionPane.getStyleClass().add("problem");
+    questionPane.setMaxSize(560, 260);
+    questionPane.setId("editor-question");
+    StackPane overlay = new StackPane(questionPane);
+    overlay.getStyleClass().add("overlay");
+    overlay.visibleProperty().bind(questionPane.visibleProperty());
+    layers = new StackPane(root, overlay);
+    layers.addEventFilter(KeyEvent.KEY_PRESSED, this::keys);
+    model.addListener(this::refresh);
+    refresh();
+  }
+
+  /** Returns the screen's root node. */
+  public Node root() {
+    return layers;
+  }
+
+  private void keys(KeyEvent event) {
+    if (KeyCombination.valueOf("Shortcut+Z").match(event)) {
+      model.undo();
+      event.consume();
+    } else if (KeyCombination.valueOf("Shortcut+Y").match(event)) {
+      model.redo();
+      event.consume();
+    } else if (event.getCode() == KeyCode.ESCAPE && questionPane.isVisible()) {
+      model.answer(false);
+      event.consume();
+    }
+  }
+
+  private Node topBar(Consumer<com.stagewise.circuit.Stage> onSave, Runnable onClose) {
+    title.getStyleClass().add("screen-title");
+    undo.setId("editor-undo");
+    undo.setOnAction(e -> model.undo());
+    redo.setId("editor-redo");
+    redo.setOnAction(e -> model.redo());
+    Button save = new Button("Save stage");
+    save.setId("editor-save");
+    save.getStyleClass().add("primary");
+    save.setOnAction(e -> model.save().ifPresent(onSave));
+    Button close = new Button("Close");
+    close.setId("editor-close");
+    close.setOnAction(e -> model.close(onClose));
+    Button empty = new Button("Start empty");
+    empty.setId("editor-start-empty");
+    empty.setOnAction(e -> model.startEmpty("New stage", model.draft().board()));
+    HBox spacer = new HBox();
+    HBox.setHgrow(spacer, Priority.ALWAYS);
+    refusal.getStyleClass().addAll("value-message", "bad");
+    refusal.setWrapText(true);
+    refusal.setId("editor-refusal");
+    HBox bar = new HBox(8, title, spacer, empty, undo, redo, save, close);
+    bar.setAlignment(Pos.CENTER_LEFT);
+    return new VBox(6, bar, refusal);
+  }
+
+  private void refresh() {
+    DraftStage draft = model.draft();
+    title.setText("Stage editor — " + (draft.title().isBlank() ? "untitled stage" : draft.title()));
+    undo.setDisable(!model.canUndo());
+    redo.setDisable(!model.canRedo());
+    undo.setText(model.canUndo() ? "Undo: " + model.undoLabel() : "Undo");
+    refusal.setText(model.refusal());
+    refusal.setVisible(!model.refusal().isEmpty());
+    refusal.setManaged(!model.refusal().isEmpty());
+    refreshItems(draft);
+    refreshProblems();
+    refreshDetails(draft);
+    schematic.show(model.drawable());
+    refreshQuestion();
+  }
+
+  private void refreshQuestion() {
+    questionPane.getChildren().clear();
+    questionPane.setVisible(model.question().isPresent());
+    model
+        .question()
+        .ifPresent(
+            q -> {
+              Label text = new Label(q.text());
+              text.setWrapText(true);
+              text.getStyleClass().add("caution-text");
+              Button yes = new Button(q.yes());
+              yes.setId("editor-question-yes");
+              yes.setOnAction(e -> model.answer(true));
+              Button no = new Button("Keep editing");
+              no.setId("editor-question-no");
+              no.getStyleClass().add("primary");
+              no.setOnAction(e -> model.answer(false));
+              questionPane.getChildren().addAll(text, new HBox(10, no, yes));
+            });
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // Left: the stage's items
+
+  private void refreshItems(DraftStage draft) {
+    items.getChildren().clear();
+    items.getChildren().add(heading("Stage"));
+    items.getChildren().add(row("editor-item-stage", stageSummary(draft), Place.STAGE, ""));
+    items.getChildren().add(heading("Op-amp sections"));
+    for (DraftSection s : draft.sections()) {
+      items
+          .getChildren()
+          .add(
+              row(
+                  "editor-item-" + s.ref(),
+                  s.ref() + "  " + s.packageType().word() + ", " + s.deviceClass().word(),
+                  Place.SECTION,
+                  s.ref()));
+    }
+    items.getChildren().add(addButton("editor-add-section", "+ Section", this::addSection));
+    items.getChildren().add(heading("Parts"));
+    for (DraftPart p : draft.parts()) {
+      items
+          .getChildren()
+          .add(
+              row(
+                  "editor-item-" + p.ref(),
+                  p.ref()
+                      + "  "
+                      + p.value().text()
+                      + "  "
+                      + String.join(
+                          " – ", p.nets().stream().map(n -> n.isEmpty() ? "?" : n).toList()),
+                  Place.PART,
+                  p.ref()));
+    }
+    HBox addParts =
+        new HBox(
+            6,
+            addButton(
+                "editor-add-resistor",
+                "+ Resistor",
+                () -> select(Place.PART, model.addPart(PartKind.RESISTOR))),
+            addButton(
+                "editor-add-capacitor",
+                "+ Capacitor",
+                () -> select(Place.PART, model.addPart(PartKind.CAPACITOR))));
+    items.getChildren().add(addParts);
+    items.getChildren().add(heading("Rails"));
+    for (int i = 0; i < draft.rails().size(); i++) {
+      DraftRail r = draft.rails().get(i);
+      items
+          .getChildren()
+          .add(
+              row(
+                  "editor-item-rail-" + i,
+                  (r.net().isEmpty() ? "(no net)" : r.net()) + "  " + r.volts().text() + " V",
+                  Place.RAIL,
+                  String.valueOf(i)));
+    }
+    items
+        .getChildren()
+        .add(
+            addButton(
+                "editor-add-rail",
+                "+ Rail",
+                () -> {
+                  model.addRail(nextName("V", draft), "");
+                  select(Place.RAIL, String.valueOf(model.draft().rails().size() - 1));
+                }));
+    items.getChildren().add(heading("Test inputs"));
+    for (int i = 0; i < draft.inputs().size(); i++) {
+      DraftInput in = draft.inputs().get(i);
+      items
+          .getChildren()
+          .add(
+              row(
+                  "editor-item-input-" + i,
+                  (in.net().isEmpty() ? "(no net)" : in.net()) + "  " + in.dc().text() + " V",
+                  Place.INPUT,
+                  String.valueOf(i)));
+    }
+    items
+        .getChildren()
+        .add(
+            addButton(
+                "editor-add-input",
+                "+ Input",
+                () -> {
+                  model.addInput(nextName("IN", draft), "0");
+                  select(Place.INPUT, String.valueOf(model.draft().inputs().size() - 1));
+                }));
+  }
+
+  private static String nextName(String prefix, DraftStage draft) {
+    if (!draft.nets().contains(prefix)) {
+      return prefix;
+    }
+    int n = 2;
+    while (draft.nets().contains(prefix + n)) {
+      n++;
+    }
+    return prefix + n;
+  }
+
+  private static String stageSummary(DraftStage draft) {
+    return (draft.title().isBlank() ? "untitled" : draft.title())
+        + "  (ground "
+        + draft.ground()
+        + ")";
+  }
+
+  private Node heading(String text) {
+    Label label = new Label(text);
+    label.getStyleClass().add("section-title");
+    return label;
+  }
+
+  private Node row(String id, String text, Place place, String key) {
+    ToggleButton button = new ToggleButton(text);
+    button.setId(id);
+    button.setMaxWidth(Double.MAX_VALUE);
+    button.setAlignment(Pos.CENTER_LEFT);
+    button.setSelected(place == selectedPlace && key.equals(selectedKey));
+    button.setOnAction(e -> select(place, key));
+    VBox box = new VBox(2, button);
+    for (EditorProblem problem : model.problemsOf(place, key)) {
+      Label why = new Label(problem.message());
+      why.setWrapText(true);
+      why.getStyleClass().addAll("value-message", "bad");
+      box.getChildren().add(why);
+    }
+    return box;
+  }
+
+  private Button addButton(String id, String text, Runnable action) {
+    Button button = new Button(text);
+    button.setId(id);
+    button.setOnAction(e -> action.run());
+    return button;
+  }
+
+  private void select(Place place, String key) {
+    selectedPlace = place;
+    selectedKey = key;
+    refresh();
+  }
+
+  private void addSection() {
+    DraftStage draft = model.draft();
+    // The next free letter of the last package, else a new package of the same type.
+    PackageType type = PackageType.DUAL_8;
+    String pkg = model.nextPackage();
+    DeviceClass cls = DeviceClass.CLASSIC_BIPOLAR;
+    if (!draft.sections().isEmpty()) {
+      DraftSection last = draft.sections().get(draft.sections().size() - 1);
+      type = last.packageType();
+      cls = last.deviceClass();
+      if (!model.freeSections(type, last.packageRef()).isEmpty()) {
+        pkg = last.packageRef();
+      }
+    }
+    String letter = model.freeSections(type, pkg).get(0);
+    model.addSection(type, pkg, letter, cls).ifPresent(ref -> select(Place.SECTION, ref));
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // Middle: problems
+
+  private void refreshProblems() {
+    problemList.getChildren().clear();
+    List<EditorProblem> problems = model.problems();
+    Label head =
+        new Label(
+            problems.isEmpty()
+                ? "No problems: the stage is ready to save."
+                : problems.size() + " problem(s) — tap one to go to it");
+    head.getStyleClass().add(problems.isEmpty() ? "hint" : "value-message");
+    head.setId("editor-problem-count");
+    problemList.getChildren().add(head);
+    for (EditorProblem problem : problems) {
+      Button go = new Button(problem.message());
+      go.setWrapText(true);
+      go.setMaxWidth(Double.MAX_VALUE);
+      go.setAlignment(Pos.CENTER_LEFT);
+      go.getStyleClass().add("problem-row");
+      go.setOnAction(e -> select(problem.place(), problem.key()));
+      problemList.getChildren().add(go);
+    }
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // Right: the chosen item's details
+
+  private void refreshDetails(DraftStage draft) {
+    details.getChildren().clear();
+    switch (selectedPlace) {
+      case PART -> {
+        DraftPart part = draft.part(selectedKey);
+        if (part != null) {
+          partDetails(part);
+          return;
+        }
+      }
+      case SECTION -> {
+        DraftSection section = draft.section(selectedKey);
+        if (section != null) {
+          sectionDetails(section);
+          return;
+        }
+      }
+      case RAIL -> {
+        int i = Integer.parseInt(selectedKey);
+        if (i < draft.rails().size()) {
+          railDetails(i, draft.rails().get(i));
+          return;
+        }
+      }
+      case INPUT -> {
+        int i = Integer.parseInt(selectedKey);
+        if (i < draft.inputs().size()) {
+          inputDetails(i, draft.inputs().get(i));
+          return;
+        }
+      }
+      default -> {}
+    }
+    stageDetails(draft);
+  }
+
+  private void stageDetails(DraftStage draft) {
+    details.getChildren().add(heading("The stage"));
+    details
+        .getChildren()
+        .add(field("editor-title", "Title", draft.title(), t -> model.setTitle(t, draft.board())));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-board",
+                "Board model",
+                draft.board(),
+                b -> model.setTitle(draft.title(), b)));
+    details
+        .getChildren()
+        .add(netPicker("editor-ground", "Ground net", draft.ground(), model::setGround));
+    Label hint =
+        new Label(
+            "Add the op-amp sections first, then the parts; tap a net to connect a lead, or type a"
+                + " new net's name.");
+    hint.setWrapText(true);
+    hint.getStyleClass().add("hint");
+    details.getChildren().add(hint);
+  }
+
+  private void partDetails(DraftPart part) {
+    String ref = part.ref();
+    details.getChildren().add(heading(part.kind().word() + " " + ref));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-part-ref",
+                "Designator",
+                ref,
+                n -> {
+                  if (model.renamePart(ref, n)) {
+                    selectedKey = n.strip();
+                    refresh();
+                  }
+                }));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-part-value",
+                "Value ("
+                    + part.kind().unit()
+                    + "), e.g. "
+                    + (part.kind() == PartKind.CAPACITOR ? "100n" : "4k7"),
+                part.value().text(),
+                v -> model.setPartValue(ref, v)));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-part-tolerance",
+                "Tolerance",
+                part.tolerance().text(),
+                t -> model.setPartTolerance(ref, t)));
+    if (part.kind() == PartKind.RESISTOR) {
+      details
+          .getChildren()
+          .add(
+              field(
+                  "editor-part-smd",
+                  "SMD code (e.g. 473, 4702, 01C)",
+                  "",
+                  c -> model.setPartValueFromSmd(ref, c)));
+    }
+    for (int lead = 0; lead < part.nets().size(); lead++) {
+      int l = lead;
+      details
+          .getChildren()
+          .add(
+              netPicker(
+                  "editor-part-net-" + (lead + 1),
+                  "End " + (lead + 1),
+                  part.nets().get(lead),
+                  n -> model.setPartNet(ref, l, n)));
+    }
+    Button delete = new Button("Delete " + ref);
+    delete.setId("editor-part-delete");
+    delete.setOnAction(
+        e -> {
+          model.removePart(ref);
+          select(Place.STAGE, "");
+        });
+    details.getChildren().add(delete);
+  }
+
+  private void sectionDetails(DraftSection section) {
+    String ref = section.ref();
+    details.getChildren().add(heading("Section " + ref + " of " + section.packageRef()));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-section-ref",
+                "Designator",
+                ref,
+                n -> {
+                  if (model.renameSection(ref, n)) {
+                    selectedKey = n.strip();
+                    refresh();
+                  }
+                }));
+    FlowPane letters = new FlowPane(6, 6);
+    for (String letter : section.packageType().sections()) {
+      ToggleButton b = new ToggleButton(letter);
+      b.setId("editor-section-letter-" + letter);
+      b.setSelected(letter.equals(section.section()));
+      b.setOnAction(e -> model.setSectionLetter(ref, letter));
+      letters.getChildren().add(b);
+    }
+    details
+        .getChildren()
+        .addAll(small("Section letter (" + section.packageType().word() + ")"), letters);
+    FlowPane classes = new FlowPane(6, 6);
+    for (DeviceClass cls : DeviceClass.values()) {
+      ToggleButton b = new ToggleButton(cls.word());
+      b.setId("editor-section-class-" + cls.word());
+      b.setSelected(cls == section.deviceClass());
+      b.setOnAction(e -> model.setSectionClass(ref, cls));
+      classes.getChildren().add(b);
+    }
+    details.getChildren().addAll(small("Device class"), classes);
+    for (Terminal terminal : Terminal.values()) {
+      details
+          .getChildren()
+          .add(
+              netPicker(
+                  "editor-section-"
+                      + terminal.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'),
+                  terminal.words() + " — pin " + section.packageRef() + "." + section.pin(terminal),
+                  section.net(terminal),
+                  n -> model.setSectionNet(ref, terminal, n)));
+    }
+    Button delete = new Button("Delete " + ref);
+    delete.setId("editor-section-delete");
+    delete.setOnAction(
+        e -> {
+          model.removeSection(ref);
+          select(Place.STAGE, "");
+        });
+    details.getChildren().add(delete);
+  }
+
+  private void railDetails(int index, DraftRail rail) {
+    details.getChildren().add(heading("Rail " + rail.net()));
+    details
+        .getChildren()
+        .add(netPicker("editor-rail-net", "Net", rail.net(), n -> model.setRailNet(index, n)));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-rail-volts",
+                "Volts, e.g. 15 or -15",
+                rail.volts().text(),
+                v -> model.setRailVolts(index, v)));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-rail-tolerance",
+                "Tolerance",
+                rail.tolerance().text(),
+                t -> model.setRailTolerance(index, t)));
+    Button remove = new Button("Remove this rail");
+    remove.setId("editor-rail-remove");
+    remove.setOnAction(
+        e -> {
+          model.removeRail(index);
+          select(Place.STAGE, "");
+        });
+    details.getChildren().add(remove);
+  }
+
+  private void inputDetails(int index, DraftInput input) {
+    details.getChildren().add(heading("Test input " + input.net()));
+    details
+        .getChildren()
+        .add(netPicker("editor-input-net", "Net", input.net(), n -> model.setInputNet(index, n)));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-input-dc",
+                "DC level (V)",
+                input.dc().text(),
+                v -> model.setInputDc(index, v)));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-input-ac",
+                "AC amplitude (V, empty for none)",
+                input.ac().text(),
+                v -> model.setInputAc(index, v, input.hz().text())));
+    details
+        .getChildren()
+        .add(
+            field(
+                "editor-input-hz",
+                "AC frequency (Hz), e.g. 1k",
+                input.hz().text(),
+                v -> model.setInputAc(index, input.ac().text(), v)));
+    Button remove = new Button("Remove this input");
+    remove.setId("editor-input-remove");
+    remove.setOnAction(
+        e -> {
+          model.removeInput(index);
+          select(Place.STAGE, "");
+        });
+    details.getChildren().add(remove);
+  }
+
+  private static Label small(String text) {
+    Label label = new Label(text);
+    label.getStyleClass().add("hint");
+    label.setWrapText(true);
+    return label;
+  }
+
+  /** A text field that commits on Enter or with its OK button (large enough to tap). */
+  private Node field(String id, String label, String value, Consumer<String> commit) {
+    TextField text = new TextField(value);
+    text.setId(id);
+    HBox.setHgrow(text, Priority.ALWAYS);
+    text.setOnAction(e -> commit.accept(text.getText()));
+    Button ok = new Button("OK");
+    ok.setId(id + "-ok");
+    ok.setOnAction(e -> commit.accept(text.getText()));
+    return new VBox(4, small(label), new HBox(6, text, ok));
+  }
+
+  /**
+   * The nets of the stage as buttons to tap (the current one selected), and a field for a new net's
+   * name.
+   */
+  private Node netPicker(String id, String label, String current, Consumer<String> choose) {
+    FlowPane nets = new FlowPane(6, 6);
+    nets.setId(id);
+    for (String net : model.netChoices()) {
+      ToggleButton b = new ToggleButton(net);
+      b.setId(id + "-" + net);
+      b.setSelected(net.equals(current));
+      b.setOnAction(e -> choose.accept(net));
+      nets.getChildren().add(b);
+    }
+    TextField name = new TextField();
+    name.setId(id + "-new");
+    name.setPromptText("new net");
+    name.setPrefColumnCount(7);
+    name.setOnAction(e -> choose.accept(name.getText()));
+    Button use = new Button("Use");
+    use.setId(id + "-use");
+    use.setOnAction(e -> choose.accept(name.getText()));
+    String now = current == null || current.isEmpty() ? "not connected" : current;
+    return new VBox(4, small(label + ": " + now), nets, new HBox(6, name, use));
+  }
+}

@@ -1,0 +1,13 @@
+#!/usr/bin/env bash
+# Runs the signal-chain and stage-editor benchmarks (JMH) on one core: the five-section chain's full
+# diagnosis beside the largest single stages and beside ngspice on the same fault dictionaries, and
+# the editor's re-check and redraw after an edit.
+# Usage: src/scripts/bench-chain.sh [JMH options]   (needs ngspice on the PATH; about six minutes)
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+mvn -B -q -DskipTests test-compile
+mvn -B -q dependency:build-classpath -Dmdep.includeScope=test -Dmdep.outputFile=target/bench-classpath.txt
+pin=""
+if command -v taskset >/dev/null 2>&1; then pin="taskset -c 0"; fi
+$pin java -Djava.awt.headless=true -cp "target/test-classes:target/classes:$(cat target/bench-classpath.txt)" \
+  org.openjdk.jmh.Main 'ChainBenchmark|EditorBenchmark' -rf text -rff target/bench-chain.txt "$@"
