@@ -165,14 +165,7 @@ class ArchitectureTest {
             "report", "casework", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("cli")
         .mayOnlyAccessLayers(
-            "ui",
-            "report",
-            "casework",
-            "interchange",
-            "history",
-            "diagnosis",
-            "solver",
-            "circuit")
+            "ui", "report", "casework", "interchange", "history", "diagnosis", "solver", "circuit")
         .whereLayer("app")
         .mayOnlyAccessLayers(
             "ui",
