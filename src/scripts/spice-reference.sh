@@ -2,7 +2,8 @@
 # Regenerates the reference data made with ngspice (Debian package `ngspice`, version 39):
 #   src/test/resources/reference/spice/*.json   (solver reference answers)
 #   src/test/resources/diagnosis/truth/*.json   (simulated fault truth set)
-# Usage: src/scripts/spice-reference.sh [reference|truth|timing STAGE-NAME]   (default: reference and truth)
+#   src/test/resources/reference/ohms/*.json    (power-off resistances, every fault)
+# Usage: src/scripts/spice-reference.sh [reference|truth|ohms|timing STAGE-NAME]   (default: all three)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 command -v ngspice >/dev/null || { echo "ngspice is not on the PATH: apt-get install ngspice" >&2; exit 1; }
@@ -14,9 +15,11 @@ what="${1:-all}"
 case "$what" in
   reference) java -cp "$cp" com.stagewise.reference.SpiceReference ;;
   truth) java -cp "$cp" com.stagewise.reference.FaultTruth ;;
+  ohms) java -cp "$cp" com.stagewise.reference.PowerOffReference ;;
   timing) java -cp "$cp" com.stagewise.reference.SpiceBatch "${2:-}" ;;
   all)
     java -cp "$cp" com.stagewise.reference.SpiceReference
-    java -cp "$cp" com.stagewise.reference.FaultTruth ;;
-  *) echo "usage: $0 [reference|truth|timing STAGE-NAME]" >&2; exit 2 ;;
+    java -cp "$cp" com.stagewise.reference.FaultTruth
+    java -cp "$cp" com.stagewise.reference.PowerOffReference ;;
+  *) echo "usage: $0 [reference|truth|ohms|timing STAGE-NAME]" >&2; exit 2 ;;
 esac
