@@ -1,5 +1,6 @@
 package com.stagewise.casework;
 
+import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
@@ -33,6 +34,17 @@ final class StoredText {
   static List<StoredReading> readings(
       List<Reading> added, MeterSpec meter, String caseId, Instant now) {
     List<StoredReading> stored = new ArrayList<>();
+    for (int i = 0; i < added.size(); i++) {
+      if (added.get(i).kind() == Reading.Kind.OHMS) {
+        // The history's schema has no place for a second point yet: refuse before anything is
+        // written, rather than keep half a reading.
+        throw new InvalidInputException(
+            "",
+            "readings[" + i + "].ohms",
+            "ohms readings cannot be kept in the history yet (expected volts readings here;"
+                + " diagnose power-off readings with `stagewise diagnose --readings FILE`)");
+      }
+    }
     for (Reading r : added) {
       boolean ac = r.kind() == Reading.Kind.AC;
       Double uncertainty = r.uncertainty().isPresent() ? r.uncertainty().getAsDouble() : null;
@@ -78,6 +90,9 @@ final class StoredText {
   static String probeLine(ProbeAdvice probe) {
     StringBuilder line = new StringBuilder();
     line.append(probe.at()).append(' ').append(probe.kind().word());
+    if (!probe.to().isEmpty()) {
+      line.append(" to ").append(probe.to());
+    }
     if (probe.kind() == Reading.Kind.AC) {
       line.append(' ').append(number(probe.hz())).append(" Hz");
     }

@@ -11,8 +11,9 @@ package com.stagewise.circuit;
  * @param percent the percentage of the reading, e.g. 0.5 for ±0.5 %, 0 or more
  * @param counts the number of counts of the last digit, 0 or more
  * @param displayCounts the counts of the display, e.g. 6000, above 0
+ * @param ohms the accuracy of the resistance ranges ({@link OhmsSpec#DEFAULT} unless given)
  */
-public record MeterSpec(double percent, int counts, int displayCounts) {
+public record MeterSpec(double percent, int counts, int displayCounts, OhmsSpec ohms) {
 
   /**
    * A 6000-count handheld meter at ±(0.5 % of reading + 2 counts) (the default of the readings
@@ -26,8 +27,14 @@ public record MeterSpec(double percent, int counts, int displayCounts) {
   /** Number of decade ranges (for 6000 counts: 0.6, 6, 60 and 600 V). */
   private static final int RANGES = 4;
 
+  /** Returns a meter with the default ohms accuracy; see the record description. */
+  public MeterSpec(double percent, int counts, int displayCounts) {
+    this(percent, counts, displayCounts, OhmsSpec.DEFAULT);
+  }
+
   /** Checks the fields; see the record description. */
   public MeterSpec {
+    java.util.Objects.requireNonNull(ohms, "ohms");
     if (!Double.isFinite(percent) || percent < 0) {
       throw new InvalidInputException(
           "", "percent", "meter percent (" + percent + ") must be 0 or more");
@@ -51,6 +58,16 @@ public record MeterSpec(double percent, int counts, int displayCounts) {
       resolution *= 10;
     }
     return resolution;
+  }
+
+  /** Returns the half-width of the uncertainty of an ohms reading, in ohms. */
+  public double ohmsUncertainty(double ohms) {
+    return this.ohms.uncertainty(ohms, displayCounts);
+  }
+
+  /** Returns the largest resistance the meter shows before OL, in ohms. */
+  public double ohmsOverRange() {
+    return ohms.overRange(displayCounts);
   }
 
   /** Returns the half-width of the uncertainty of a DC reading of {@code volts}, in volts. */

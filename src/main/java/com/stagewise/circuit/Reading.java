@@ -5,7 +5,8 @@ import java.util.Objects;
 import java.util.OptionalDouble;
 
 /**
- * One measurement the technician took: a DC level or an AC amplitude at a test point.
+ * One measurement the technician took: a DC level or an AC amplitude at a test point, or (power
+ * off) the resistance between two points.
  *
  * @param at the test point: a net name (e.g. {@code OUT}) or a package pin {@code PACKAGE.PIN}
  *     (e.g. {@code U1.6})
@@ -15,16 +16,23 @@ import java.util.OptionalDouble;
  * @param hz the frequency of an AC reading in hertz; 0 for a DC reading
  * @param uncertainty the half-width of the reading's uncertainty in volts, when the technician gave
  *     one; empty means "use the meter's (DC) or the scope's (AC)", see {@link
- *     ReadingSet#uncertainty(Reading)}
+ *     ReadingSet#uncertainty(Reading)}; for an ohms reading, in ohms
+ * @param to the second point of an ohms reading (a net, package pin or part lead); empty for volts
  */
-public record Reading(String at, Kind kind, double value, double hz, OptionalDouble uncertainty) {
+public record Reading(
+    String at, Kind kind, double value, double hz, OptionalDouble uncertainty, String to) {
 
   /** What a reading measures. */
   public enum Kind {
     /** A DC level in volts. */
     DC,
     /** An AC amplitude in volts at one frequency. */
-    AC;
+    AC,
+    /**
+     * A resistance in ohms between two points, taken with the power off; {@link
+     * Double#POSITIVE_INFINITY} is the meter's over-range (OL).
+     */
+    OHMS;
 
     /** Returns the word used in files, {@code dc} or {@code ac}. */
     public String word() {
@@ -37,7 +45,34 @@ public record Reading(String at, Kind kind, double value, double hz, OptionalDou
     Part.requireName(at, "at");
     Objects.requireNonNull(kind, "kind");
     Objects.requireNonNull(uncertainty, "uncertainty");
-    if (!Double.isFinite(value)) {
+    to = to == null ? "" : to;
+    if (kind == Kind.OHMS) {
+      Part.requireName(to, "to");
+      if (to.equals(at)) {
+        throw new InvalidInputException(
+            "", "to", "ohms reading from " + at + " to itself (expected two different points)");
+      }
+      if (Double.isNaN(value) || value < 0 || value == Double.NEGATIVE_INFINITY) {
+        throw new InvalidInputException(
+            "",
+            "ohms",
+            "ohms reading from "
+                + at
+                + " to "
+                + to
+                + " ("
+                + value
+                + ") must be 0 or more ohms, or \"OL\"");
+      }
+    } else if (!to.isEmpty()) {
+      throw new InvalidInputException(
+          "",
+          "to",
+          "a " + kind.word() + " reading has no \"to\" (expected \"to\" only with \"ohms\")");
+    }
+    if (kind == Kind.OHMS) {
+      // The value is checked above; OL is the one non-finite value a reading may hold.
+    } else if (!Double.isFinite(value)) {
       throw new InvalidInputException(
           "", kind.word(), "reading at " + at + " (" + value + ") must be a finite number");
     }
@@ -66,6 +101,24 @@ public record Reading(String at, Kind kind, double value, double hz, OptionalDou
               + uncertainty.getAsDouble()
               + ") must be above 0 volts");
     }
+  }
+
+  /** Returns a volts reading (no second point); see the record description. */
+  public Reading(String at, Kind kind, double value, double hz, OptionalDouble uncertainty) {
+    this(at, kind, value, hz, uncertainty, "");
+  }
+
+  /**
+   * Returns an ohms reading between two points with the meter's ohms uncertainty; {@link
+   * Double#POSITIVE_INFINITY} for OL.
+   */
+  public static Reading ohms(String at, String to, double ohms) {
+    return new Reading(at, Kind.OHMS, ohms, 0, OptionalDouble.empty(), to);
+  }
+
+  /** Returns whether this is an ohms reading that showed the meter's over-range (OL). */
+  public boolean isOverRange() {
+    return kind == Kind.OHMS && value == Double.POSITIVE_INFINITY;
   }
 
   /** Returns a DC reading with the meter's uncertainty. */

@@ -29,12 +29,16 @@ public record ReadingSet(MeterSpec meter, List<Reading> readings) {
   }
 
   /**
-   * Returns the half-width of a reading's uncertainty in volts: the technician's own figure when
-   * given, else the scope's for an AC reading, else the meter's.
+   * Returns the half-width of a reading's uncertainty in volts (ohms for an ohms reading): the
+   * technician's own figure when given, else the scope's for an AC reading, else the meter's (its
+   * ohms spec for an ohms reading; infinite for OL).
    */
   public double uncertainty(Reading reading) {
     if (reading.uncertainty().isPresent()) {
       return reading.uncertainty().getAsDouble();
+    }
+    if (reading.kind() == Reading.Kind.OHMS) {
+      return meter.ohmsUncertainty(reading.value());
     }
     if (reading.kind() == Reading.Kind.AC) {
       return SCOPE_PERCENT / 100 * Math.abs(reading.value()) + SCOPE_FLOOR_VOLTS;

@@ -108,7 +108,8 @@ final class DiagnoseCommand implements Callable<Integer> {
       for (ProbeAdvice p : d.nextProbes()) {
         String kind =
             p.kind().word()
-                + (p.hz() > 0 ? String.format(Locale.ROOT, " at %s Hz", trim(p.hz())) : "");
+                + (p.hz() > 0 ? String.format(Locale.ROOT, " at %s Hz", trim(p.hz())) : "")
+                + (p.to().isEmpty() ? "" : " to " + p.to());
         out.printf(Locale.ROOT, "  %-10s %-14s %.2f bits  %s%n", p.at(), kind, p.bits(), p.why());
       }
     }

@@ -1,6 +1,7 @@
 package com.stagewise.diagnosis;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Reading;
@@ -48,6 +49,14 @@ public final class Diagnoser {
   private final Map<String, Integer> shopCounts;
   private final TestPoints points;
   private final Evidence evidence;
+  private final OhmsChecks ohmsChecks;
+
+  /** Ohms checks are planned over the hypotheses that hold this share of the probability. */
+  private static final double OHMS_MASS = 0.999;
+
+  /** … and at most this many of them. */
+  private static final int OHMS_HYPOTHESES = 24;
+
   private final double span;
   private final Map<Map<String, Double>, List<Hypothesis>> models = new ConcurrentHashMap<>();
 
@@ -67,6 +76,7 @@ public final class Diagnoser {
     }
     this.span = max;
     this.evidence = new Evidence(max);
+    this.ohmsChecks = new OhmsChecks(stage);
   }
 
   /** Returns a diagnoser for a stage with the published priors. */
@@ -109,21 +119,31 @@ public final class Diagnoser {
       throw new InvalidInputException(
           "", "top", "the number of suspects (" + top + ") must be 1 or more");
     }
+    readings = leadsOnNets(readings);
     check(readings);
     List<String> notes = new ArrayList<>();
     Map<String, Double> inputs = measuredInputs(readings, notes);
     List<Hypothesis> hypotheses = models.computeIfAbsent(inputs, this::build);
     List<Evidence.Bound> bound = new ArrayList<>();
+    List<Reading> ohms = new ArrayList<>();
     for (Reading r : readings.readings()) {
-      bound.add(Evidence.bind(points, readings, r));
+      if (r.kind() == Reading.Kind.OHMS) {
+        ohms.add(r);
+      } else {
+        bound.add(Evidence.bind(points, readings, r));
+      }
     }
-    Ranking ranking = rank(hypotheses, bound);
+    Ranking ranking = rank(hypotheses, bound, ohms, readings.meter());
     notes.addAll(catalogue.notes());
     Explainer explainer = new Explainer(stage, points, span, shopCounts);
     List<Suspect> suspects = suspects(ranking, bound, top, explainer);
     Verdict verdict = verdict(ranking);
     List<ProbeAdvice> probes =
-        new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter());
+        withOhmsChecks(
+            new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter()),
+            ranking,
+            ohms,
+            readings.meter());
     String check =
         verdict == Verdict.HEALTHY
             ? ""
@@ -298,7 +318,53 @@ public final class Diagnoser {
     return out;
   }
 
-  private Ranking rank(List<Hypothesis> hypotheses, List<Evidence.Bound> bound) {
+  /**
+   * Returns the volts probes with the best power-off (ohms) checks among them, all sorted by bits:
+   * an ohms check comes first only when it tells the leading suspects apart better than any volts
+   * probe.
+   */
+  private List<ProbeAdvice> withOhmsChecks(
+      List<ProbeAdvice> volts, Ranking ranking, List<Reading> ohms, MeterSpec meter) {
+    List<Scored> top = new ArrayList<>();
+    double mass = 0;
+    for (Scored s : ranking.scored()) {
+      if (mass >= OHMS_MASS || top.size() >= OHMS_HYPOTHESES) {
+        break;
+      }
+      top.add(s);
+      mass += s.probability;
+    }
+    List<ProbeAdvice> all = new ArrayList<>(volts);
+    all.addAll(ohmsChecks.plan(top, ohms, meter));
+    all.sort(Comparator.comparingDouble((ProbeAdvice a) -> -a.bits()));
+    return all.subList(0, Math.min(volts.size() + 2, all.size()));
+  }
+
+  /** Volts readings at a part lead ({@code R2.1}) are readings at the lead's net. */
+  private ReadingSet leadsOnNets(ReadingSet readings) {
+    List<Reading> out = new ArrayList<>();
+    boolean changed = false;
+    for (Reading r : readings.readings()) {
+      if (r.kind() != Reading.Kind.OHMS
+          && !points.index.containsKey(r.at())
+          && ohmsChecks.knows(r.at())
+          && !r.at().equals(ohmsChecks.onFaulted(r.at()))) {
+        out.add(
+            new Reading(
+                ohmsChecks.onFaulted(r.at()), r.kind(), r.value(), r.hz(), r.uncertainty()));
+        changed = true;
+      } else {
+        out.add(r);
+      }
+    }
+    return changed ? new ReadingSet(readings.meter(), out) : readings;
+  }
+
+  private Ranking rank(
+      List<Hypothesis> hypotheses,
+      List<Evidence.Bound> bound,
+      List<Reading> ohms,
+      MeterSpec meter) {
     List<Scored> scored = new ArrayList<>(hypotheses.size());
     double[] weight = readingWeights(bound);
     double maxLog = Double.NEGATIVE_INFINITY;
@@ -312,6 +378,9 @@ public final class Diagnoser {
         double sum = Math.log(p.weight());
         for (int i = 0; i < bound.size(); i++) {
           sum += weight[i] * evidence.logLikelihood(p, bound.get(i));
+        }
+        if (!ohms.isEmpty()) {
+          sum += ohmsChecks.logLikelihood(h.fault, p.value(), ohms, meter);
         }
         logs[v] = sum;
         if (sum > best) {
@@ -456,6 +525,15 @@ public final class Diagnoser {
     for (int i = 0; i < list.size(); i++) {
       Reading r = list.get(i);
       String field = "readings[" + i + "]";
+      if (r.kind() == Reading.Kind.OHMS) {
+        if (!ohmsChecks.knows(r.at())) {
+          throw new InvalidInputException("", field + ".at", unknownPoint(r.at()));
+        }
+        if (!ohmsChecks.knows(r.to())) {
+          throw new InvalidInputException("", field + ".to", unknownPoint(r.to()));
+        }
+        continue;
+      }
       if (!points.index.containsKey(r.at())) {
         throw new InvalidInputException("", field + ".at", unknownPoint(r.at()));
       }

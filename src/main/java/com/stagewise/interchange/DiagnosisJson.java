@@ -64,6 +64,9 @@ public final class DiagnosisJson {
       ObjectNode node = JsonText.object();
       node.put("at", p.at());
       node.put("kind", p.kind().word());
+      if (p.kind() == Reading.Kind.OHMS) {
+        node.put("to", p.to());
+      }
       if (p.kind() == Reading.Kind.AC) {
         node.set("hz", JsonText.number(p.hz()));
       }

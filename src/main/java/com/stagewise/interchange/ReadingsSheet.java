@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.OhmsSpec;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Reading;
@@ -33,15 +34,28 @@ public final class ReadingsSheet {
   /** The {@code format} of a readings file. */
   public static final String FORMAT = "stagewise-readings";
 
-  /** The newest version this program reads and the one it writes. */
-  public static final int VERSION = 1;
+  /**
+   * The newest version this program reads. Version 2 adds ohms readings ({@code "to"}, {@code
+   * "ohms"}), the meter's {@code ohms} spec and part leads as points; a set that uses none of them
+   * is written as version 1.
+   */
+  public static final int VERSION = 2;
 
   /** The file name ending of readings files. */
   public static final String SUFFIX = ".readings.json";
 
   private static final List<String> ROOT_KEYS = List.of("format", "version", "meter", "readings");
-  private static final List<String> METER_KEYS = List.of("percent", "counts", "displayCounts");
-  private static final List<String> READING_KEYS = List.of("at", "dc", "ac", "hz", "uncertainty");
+  private static final List<String> METER_KEYS =
+      List.of("percent", "counts", "displayCounts", "ohms");
+  private static final List<String> OHMS_KEYS = List.of("percent", "counts");
+  private static final List<String> READING_KEYS =
+      List.of("at", "to", "dc", "ac", "ohms", "hz", "uncertainty");
+
+  /** The meter's over-range, as a readings file writes it. */
+  public static final String OVER_RANGE = "OL";
+
+  /** The largest ohms a file may give (beyond any meter's top range: it would show OL). */
+  private static final double MAX_OHMS = 1e9;
 
   private ReadingsSheet() {}
 
@@ -64,11 +78,12 @@ public final class ReadingsSheet {
     JsonField root = JsonField.parseRoot(json, source);
     root.requireHeader(FORMAT, VERSION, "a readings file");
     root.object("a readings file", ROOT_KEYS);
-    MeterSpec meter = root.optional("meter").map(ReadingsSheet::meter).orElse(MeterSpec.DEFAULT);
+    int version = root.require("version", "").integer("the version number");
+    MeterSpec meter = root.optional("meter").map(m -> meter(m, version)).orElse(MeterSpec.DEFAULT);
     double limit = 2 * largestRail(stage) + 1;
     List<Reading> readings = new ArrayList<>();
     for (JsonField field : root.require("readings", "an array of readings").elements("readings")) {
-      readings.add(reading(field, stage, limit));
+      readings.add(reading(field, stage, limit, version));
     }
     return new ReadingSet(meter, readings);
   }
@@ -78,18 +93,32 @@ public final class ReadingsSheet {
     Map<String, Object> fields = new LinkedHashMap<>();
     JsonNodeFactory nodes = JsonNodeFactory.instance;
     fields.put("format", nodes.textNode(FORMAT));
-    fields.put("version", nodes.numberNode(VERSION));
+    fields.put("version", nodes.numberNode(needsVersion2(set) ? 2 : 1));
     MeterSpec meter = set.meter();
-    fields.put(
-        "meter",
+    ObjectNode meterNode =
         JsonText.object()
             .<ObjectNode>set("percent", JsonText.number(meter.percent()))
             .put("counts", meter.counts())
-            .put("displayCounts", meter.displayCounts()));
+            .put("displayCounts", meter.displayCounts());
+    if (!meter.ohms().equals(OhmsSpec.DEFAULT)) {
+      meterNode.set(
+          "ohms",
+          JsonText.object()
+              .<ObjectNode>set("percent", JsonText.number(meter.ohms().percent()))
+              .put("counts", meter.ohms().counts()));
+    }
+    fields.put("meter", meterNode);
     List<JsonNode> readings = new ArrayList<>();
     for (Reading reading : set.readings()) {
       ObjectNode node = JsonText.object().put("at", reading.at());
-      node.set(reading.kind().word(), JsonText.number(reading.value()));
+      if (reading.kind() == Reading.Kind.OHMS) {
+        node.put("to", reading.to());
+      }
+      if (reading.isOverRange()) {
+        node.put("ohms", OVER_RANGE);
+      } else {
+        node.set(reading.kind().word(), JsonText.number(reading.value()));
+      }
       if (reading.kind() == Reading.Kind.AC) {
         node.set("hz", JsonText.number(reading.hz()));
       }
@@ -109,8 +138,21 @@ public final class ReadingsSheet {
     StageSheet.writeText(file, write(set));
   }
 
-  private static MeterSpec meter(JsonField field) {
-    field.object("the meter", METER_KEYS);
+  /**
+   * Returns whether a set may use anything of version 2: an ohms reading, a meter ohms spec, or a
+   * point with a dot (a part lead looks like a package pin without the stage at hand, so any dotted
+   * point is written as version 2, which reads package pins as before).
+   */
+  static boolean needsVersion2(ReadingSet set) {
+    if (!set.meter().ohms().equals(OhmsSpec.DEFAULT)) {
+      return true;
+    }
+    return set.readings().stream()
+        .anyMatch(r -> r.kind() == Reading.Kind.OHMS || r.at().indexOf('.') > 0);
+  }
+
+  private static MeterSpec meter(JsonField field, int version) {
+    field.object("the meter", version >= 2 ? METER_KEYS : METER_KEYS.subList(0, 3));
     MeterSpec base = MeterSpec.DEFAULT;
     double percent =
         field
@@ -135,16 +177,58 @@ public final class ReadingsSheet {
           .orElse(field)
           .error("displayCounts (" + display + ") must be above 0, e.g. 6000");
     }
-    return new MeterSpec(percent, counts, display);
+    OhmsSpec ohms = field.optional("ohms").map(ReadingsSheet::ohmsSpec).orElse(OhmsSpec.DEFAULT);
+    return new MeterSpec(percent, counts, display, ohms);
   }
 
-  private static Reading reading(JsonField field, Stage stage, double limit) {
-    field.object("a reading", READING_KEYS);
+  private static OhmsSpec ohmsSpec(JsonField field) {
+    field.object("the meter's ohms accuracy", OHMS_KEYS);
+    double percent =
+        field
+            .optional("percent")
+            .map(f -> f.nonNegative("the ohms percent of reading, e.g. 0.8"))
+            .orElse(OhmsSpec.DEFAULT.percent());
+    Optional<JsonField> countsField = field.optional("counts");
+    int counts =
+        countsField
+            .map(f -> f.integer("the ohms counts, e.g. 3"))
+            .orElse(OhmsSpec.DEFAULT.counts());
+    if (counts < 0) {
+      throw countsField.get().error("counts (" + counts + ") must be 0 or more");
+    }
+    return new OhmsSpec(percent, counts);
+  }
+
+  private static Reading reading(JsonField field, Stage stage, double limit, int version) {
+    field.object("a reading", version >= 2 ? READING_KEYS : VOLTS_KEYS);
     JsonField atField = field.require("at", "a net name or a package pin such as U1.6");
     String at = atField.name("a net name or a package pin such as U1.6");
-    checkTestPoint(atField, at, stage);
+    checkTestPoint(atField, at, stage, version);
     Optional<JsonField> dc = field.optional("dc");
     Optional<JsonField> ac = field.optional("ac");
+    Optional<JsonField> ohms = field.optional("ohms");
+    Optional<JsonField> to = field.optional("to");
+    if (ohms.isPresent()) {
+      if (dc.isPresent() || ac.isPresent()) {
+        throw field.error(
+            "a reading has one of \"dc\", \"ac\" or \"ohms\" (expected volts with the power on"
+                + " or ohms with it off, one reading per entry)");
+      }
+      return ohmsReading(field, at, ohms.get(), to, stage, version);
+    }
+    if (to.isPresent()) {
+      throw to.get()
+          .error(
+              "a volts reading has no \"to\" (expected \"to\" only with \"ohms\", the second"
+                  + " point of a power-off reading)");
+    }
+    for (JsonField volts : List.of(dc, ac).stream().flatMap(Optional::stream).toList()) {
+      if (volts.node().isTextual() && volts.node().asText().trim().equalsIgnoreCase(OVER_RANGE)) {
+        throw volts.error(
+            "\"OL\" is the ohmmeter's over-range (expected volts here, a number; OL only with"
+                + " \"ohms\")");
+      }
+    }
     if (dc.isPresent() == ac.isPresent()) {
       throw field.error(
           dc.isPresent()
@@ -205,9 +289,96 @@ public final class ReadingsSheet {
     }
   }
 
-  /** Checks that a test point is a net of the stage or a modelled pin of one of its packages. */
-  private static void checkTestPoint(JsonField field, String at, Stage stage) {
+  private static final List<String> VOLTS_KEYS = List.of("at", "dc", "ac", "hz", "uncertainty");
+
+  private static Reading ohmsReading(
+      JsonField field,
+      String at,
+      JsonField ohmsField,
+      Optional<JsonField> toField,
+      Stage stage,
+      int version) {
+    if (toField.isEmpty()) {
+      throw field.error(
+          "missing field \"to\" (expected the second point of the ohms reading from "
+              + at
+              + ", e.g. GND)");
+    }
+    String to = toField.get().name("the second point: a net, a package pin or a part lead");
+    checkTestPoint(toField.get(), to, stage, version);
+    if (to.equals(at)) {
+      throw toField.get().error("\"to\" is the same point as \"at\" (expected another point)");
+    }
+    double value;
+    if (ohmsField.node().isTextual()
+        && ohmsField.node().asText().trim().equalsIgnoreCase(OVER_RANGE)) {
+      value = Double.POSITIVE_INFINITY;
+    } else {
+      value = ohmsField.number("the ohms read (a number, e.g. 46800 or \"4k7\"), or \"OL\"");
+      if (value < 0) {
+        throw ohmsField.error(
+            "ohms ("
+                + plain(value)
+                + ") must be 0 or more (expected the resistance read, or \"OL\" for the meter's"
+                + " over-range)");
+      }
+      if (value > MAX_OHMS) {
+        throw ohmsField.error(
+            "ohms ("
+                + plain(value)
+                + ") is beyond any meter's range (expected at most 1 GΩ; a meter shows \"OL\""
+                + " there)");
+      }
+    }
+    if (field.optional("hz").isPresent()) {
+      throw field.require("hz", "").error("an ohms reading has no \"hz\"");
+    }
+    OptionalDouble uncertainty = OptionalDouble.empty();
+    Optional<JsonField> uField = field.optional("uncertainty");
+    if (uField.isPresent()) {
+      double u = uField.get().nonNegative("the uncertainty in ohms (half-width), e.g. 50");
+      if (u == 0) {
+        throw uField.get().error("uncertainty must be above 0 ohms (half-width), e.g. 50");
+      }
+      uncertainty = OptionalDouble.of(u);
+    }
+    try {
+      return new Reading(at, Reading.Kind.OHMS, value, 0, uncertainty, to);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
+  }
+
+  /**
+   * Checks that a test point is a net of the stage, a modelled pin of one of its packages, or (in
+   * version 2) a part lead such as {@code R2.1}.
+   */
+  private static void checkTestPoint(JsonField field, String at, Stage stage, int version) {
     if (stage.nets().contains(at)) {
+      return;
+    }
+    int leadDot = at.lastIndexOf('.');
+    if (leadDot > 0 && stage.part(at.substring(0, leadDot)).isPresent()) {
+      String lead = at.substring(leadDot + 1);
+      if (version < 2) {
+        throw field.error(
+            "part lead "
+                + at
+                + " needs a version 2 readings file (expected a net or a package pin in version"
+                + " 1)");
+      }
+      if (!lead.equals("1") && !lead.equals("2")) {
+        throw field.error(
+            "\""
+                + lead
+                + "\" is not a lead of "
+                + at.substring(0, leadDot)
+                + " (expected "
+                + at.substring(0, leadDot)
+                + ".1 or "
+                + at.substring(0, leadDot)
+                + ".2)");
+      }
       return;
     }
     int dot = at.lastIndexOf('.');
@@ -272,6 +443,10 @@ public final class ReadingsSheet {
 
   private static String examplePin(Stage stage) {
     return stage.pinNets().keySet().stream().findFirst().orElse("U1.6");
+  }
+
+  private static String plain(double value) {
+    return java.math.BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
   }
 
   /** Returns the largest rail magnitude of a stage in volts (0 when it has no rails). */

@@ -1,0 +1,349 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.Stage;
+import com.stagewise.solver.OhmsPrediction;
+import com.stagewise.solver.PowerOff;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Power-off (ohms) readings in the diagnosis: their likelihood under each hypothesis, and the ohms
+ * checks worth taking next.
+ *
+ * <p>A hypothesis predicts the reading between two points from {@link PowerOffFaults} (a drifted
+ * part at the value that fits the readings best): the nominal resistance with the healthy range of
+ * the part tolerances taken as a uniform spread, plus the meter's ohms uncertainty (its half-width
+ * as a uniform error) and a floor for the test leads. A reading beyond the meter's top range shows
+ * OL; the chance of OL follows from the same normal spread. As with volts, a small share of every
+ * reading is a misread (log-uniform over the meter's span), so one slip never eliminates the truth.
+ */
+final class OhmsChecks {
+  /**
+   * Resistance of the test leads and their contact, ohms: a few tenths of an ohm unless the meter's
+   * relative mode nulls it (common practice); taken as a model floor.
+   */
+  static final double LEAD_OHMS = 0.3;
+
+  /** Relative model floor (junctions not quite off, board leakage): 0.5 % (common practice). */
+  static final double RELATIVE_FLOOR = 0.005;
+
+  /** Decades a misread may land in, log-uniform (0.1 Ω … 1 GΩ). */
+  private static final double MISREAD_DECADES = 10;
+
+  /** Chance that a misread shows OL. */
+  private static final double MISREAD_OL = 0.1;
+
+  private static final double[] NODES = {0, Math.sqrt(3), -Math.sqrt(3)};
+  private static final double[] NODE_WEIGHTS = {2.0 / 3, 1.0 / 6, 1.0 / 6};
+  private static final int LISTED = 3;
+
+  private final Stage stage;
+  private final PowerOff healthy;
+  private final List<String> candidates;
+  private final Map<String, PowerOff> networks = new HashMap<>();
+
+  OhmsChecks(Stage stage) {
+    this.stage = stage;
+    this.healthy = PowerOff.of(stage);
+    Set<String> points = new LinkedHashSet<>(stage.nets());
+    points.addAll(stage.pinNets().keySet());
+    this.candidates = List.copyOf(points);
+  }
+
+  /** Returns whether a point names a net, package pin or part lead of the stage. */
+  boolean knows(String point) {
+    return healthy.node(point).isPresent();
+  }
+
+  /** Returns the net a part lead sits on, or the point itself for a net or pin. */
+  String onFaulted(String point) {
+    return PowerOffFaults.onFaulted(healthy, point);
+  }
+
+  /** Returns the prediction between two points under a fault (value: a drifted part's value). */
+  synchronized OhmsPrediction predict(Fault fault, double value, String a, String b) {
+    boolean drift = fault.kind() == FaultKind.HIGH || fault.kind() == FaultKind.LOW;
+    String key = fault.id() + (drift ? "@" + value : "");
+    PowerOff network =
+        networks.computeIfAbsent(
+            key,
+            k ->
+                drift && Double.isNaN(value)
+                    ? healthy
+                    : PowerOffFaults.faulted(stage, fault, value));
+    return network.predict(onFaulted(a), onFaulted(b));
+  }
+
+  /** Returns the summed log-likelihood of the ohms readings under a fault with a drifted value. */
+  double logLikelihood(Fault fault, double value, List<Reading> ohms, MeterSpec meter) {
+    double sum = 0;
+    for (Reading r : ohms) {
+      OhmsPrediction p = predict(fault, value, r.at(), r.to());
+      sum += logLikelihood(p, r.isOverRange(), r.value(), meter, r.uncertainty());
+    }
+    return sum;
+  }
+
+  private double logLikelihood(
+      OhmsPrediction p,
+      boolean overRange,
+      double value,
+      MeterSpec meter,
+      java.util.OptionalDouble given) {
+    double pOl = overRangeChance(p, meter);
+    if (overRange) {
+      return Math.log((1 - Evidence.MISREAD) * pOl + Evidence.MISREAD * MISREAD_OL);
+    }
+    double tail = (1 - MISREAD_OL) / (Math.max(value, 0.1) * Math.log(10) * MISREAD_DECADES);
+    double core = 0;
+    if (p.connected()) {
+      double variance = variance(p, meter, given);
+      double d = value - p.nominal();
+      core = (1 - pOl) * Math.exp(-d * d / (2 * variance)) / Math.sqrt(2 * Math.PI * variance);
+    }
+    return Math.log((1 - Evidence.MISREAD) * core + Evidence.MISREAD * tail);
+  }
+
+  /** The variance of a numeric reading about the nominal: tolerances, meter, leads and floor. */
+  static double variance(OhmsPrediction p, MeterSpec meter, java.util.OptionalDouble given) {
+    double spread = Evidence.SPREAD_MARGIN * (p.high() - p.low()) / Math.sqrt(12);
+    double u = given.isPresent() ? given.getAsDouble() : meter.ohmsUncertainty(p.nominal());
+    double floor = LEAD_OHMS + RELATIVE_FLOOR * p.nominal();
+    return spread * spread + u * u / 3 + floor * floor;
+  }
+
+  /** The chance the meter shows OL: beyond its top range, or nothing connects. */
+  static double overRangeChance(OhmsPrediction p, MeterSpec meter) {
+    if (!p.connected()) {
+      return 1;
+    }
+    double sd = Math.sqrt(variance(p, meter, java.util.OptionalDouble.empty()));
+    return normalCdf((p.nominal() - meter.ohmsOverRange()) / sd);
+  }
+
+  private static double normalCdf(double z) {
+    // Abramowitz and Stegun 7.1.26 for erf (error below 1.5e-7).
+    double x = Math.abs(z) / Math.sqrt(2);
+    double t = 1 / (1 + 0.3275911 * x);
+    double erf =
+        1
+            - ((((1.061405429 * t - 1.453152027) * t + 1.421413741) * t - 0.284496736) * t
+                    + 0.254829592)
+                * t
+                * Math.exp(-x * x);
+    return z >= 0 ? (1 + erf) / 2 : (1 - erf) / 2;
+  }
+
+  /**
+   * Returns the ohms checks worth taking next among the leading suspects, best first: each pair of
+   * points (nets and used pins) by its expected information gain in bits.
+   *
+   * @param top the leading hypotheses with their probabilities (summing to about 1)
+   * @param taken the ohms readings already taken
+   */
+  List<ProbeAdvice> plan(List<Diagnoser.Scored> top, List<Reading> taken, MeterSpec meter) {
+    if (top.size() < 2) {
+      return List.of();
+    }
+    double mass = top.stream().mapToDouble(s -> s.probability).sum();
+    double[] prior = new double[top.size()];
+    for (int h = 0; h < prior.length; h++) {
+      prior[h] = top.get(h).probability / mass;
+    }
+    double entropy = entropy(prior);
+    Set<String> done = new HashSet<>();
+    for (Reading r : taken) {
+      done.add(pairKey(onFaulted(r.at()), onFaulted(r.to())));
+    }
+    List<ProbeAdvice> advice = new ArrayList<>();
+    Set<String> seenNets = new HashSet<>();
+    for (int i = 0; i < candidates.size(); i++) {
+      for (int j = i + 1; j < candidates.size(); j++) {
+        String a = candidates.get(i);
+        String b = candidates.get(j);
+        String netA = healthy.node(a).orElseThrow();
+        String netB = healthy.node(b).orElseThrow();
+        boolean pinCheck = !a.equals(netA) || !b.equals(netB);
+        if (netA.equals(netB) && !pinCheck) {
+          continue;
+        }
+        // Between two nets one pair is enough; a pin against its own net checks its joint.
+        if (pinCheck && !netA.equals(netB)) {
+          continue;
+        }
+        if (done.contains(pairKey(a, b)) || !seenNets.add(pairKey(a, b))) {
+          continue;
+        }
+        OhmsPrediction[] predicted = new OhmsPrediction[top.size()];
+        for (int h = 0; h < predicted.length; h++) {
+          Diagnoser.Scored s = top.get(h);
+          predicted[h] = predict(s.hypothesis.fault, s.best.value(), a, b);
+        }
+        double bits = Math.round(gain(predicted, prior, entropy, meter) * 10000) / 10000.0;
+        if (bits > 0) {
+          advice.add(new ProbeAdvice(a, Reading.Kind.OHMS, 0, bits, why(a, b, top, predicted), b));
+        }
+      }
+    }
+    advice.sort(
+        Comparator.comparingDouble((ProbeAdvice x) -> -x.bits())
+            .thenComparing(x -> across(x.at(), x.to()).isEmpty() ? 1 : 0));
+    return advice.subList(0, Math.min(LISTED, advice.size()));
+  }
+
+  private static String pairKey(String a, String b) {
+    return a.compareTo(b) < 0 ? a + "|" + b : b + "|" + a;
+  }
+
+  private double gain(OhmsPrediction[] predicted, double[] prior, double entropy, MeterSpec meter) {
+    int n = predicted.length;
+    double expected = 0;
+    double[] posterior = new double[n];
+    // The OL outcome.
+    double olTotal = 0;
+    for (int d = 0; d < n; d++) {
+      posterior[d] = prior[d] * Math.exp(logLikelihood(predicted[d], true, 0, meter, none()));
+      olTotal += posterior[d];
+    }
+    if (olTotal > 0) {
+      for (int d = 0; d < n; d++) {
+        posterior[d] /= olTotal;
+      }
+      expected += olTotal * entropy(posterior);
+    }
+    // Numeric outcomes about each connected hypothesis's nominal (Gauss–Hermite, three points).
+    for (int c = 0; c < n; c++) {
+      if (!predicted[c].connected()) {
+        continue;
+      }
+      double shown = prior[c] * (1 - overRangeChance(predicted[c], meter));
+      double sd = Math.sqrt(variance(predicted[c], meter, none()));
+      for (int q = 0; q < NODES.length; q++) {
+        double x = Math.max(0, predicted[c].nominal() + NODES[q] * sd);
+        double[] logs = new double[n];
+        double max = Double.NEGATIVE_INFINITY;
+        for (int d = 0; d < n; d++) {
+          logs[d] = logLikelihood(predicted[d], false, x, meter, none());
+          max = Math.max(max, logs[d]);
+        }
+        double total = 0;
+        for (int d = 0; d < n; d++) {
+          posterior[d] = prior[d] * Math.exp(logs[d] - max);
+          total += posterior[d];
+        }
+        for (int d = 0; d < n; d++) {
+          posterior[d] /= total;
+        }
+        expected += shown * NODE_WEIGHTS[q] * entropy(posterior);
+      }
+    }
+    return Math.max(0, (entropy - expected) / Math.log(2));
+  }
+
+  private static java.util.OptionalDouble none() {
+    return java.util.OptionalDouble.empty();
+  }
+
+  private static double entropy(double[] p) {
+    double h = 0;
+    for (double x : p) {
+      if (x > 0) {
+        h -= x * Math.log(x);
+      }
+    }
+    return h;
+  }
+
+  /** Returns the resistors whose two leads are on the two points' nets, e.g. "R2". */
+  private String across(String a, String b) {
+    String netA = healthy.node(a).orElse("");
+    String netB = healthy.node(b).orElse("");
+    List<String> refs = new ArrayList<>();
+    for (Part p : stage.parts()) {
+      if (p.kind() == PartKind.RESISTOR
+          && (p.netA().equals(netA) && p.netB().equals(netB)
+              || p.netA().equals(netB) && p.netB().equals(netA))) {
+        refs.add(p.ref());
+      }
+    }
+    return String.join(", ", refs);
+  }
+
+  private String why(String a, String b, List<Diagnoser.Scored> top, OhmsPrediction[] predicted) {
+    StringBuilder text = new StringBuilder("Power off: unplug the unit, discharge its capacitors");
+    text.append(" and wait, then read ohms from ").append(a).append(" to ").append(b);
+    String across = across(a, b);
+    if (!across.isEmpty()) {
+      text.append(" (across ").append(across).append(")");
+    }
+    text.append(": ");
+    List<String> parts = new ArrayList<>();
+    List<OhmsPrediction> shown = new ArrayList<>();
+    for (int h = 0; h < top.size() && parts.size() < 3; h++) {
+      OhmsPrediction p = predicted[h];
+      boolean distinct = shown.stream().noneMatch(x -> similar(x, p));
+      if (!distinct) {
+        continue;
+      }
+      shown.add(p);
+      Fault fault = top.get(h).hypothesis.fault;
+      String who = fault.kind() == FaultKind.HEALTHY ? "healthy" : fault.id();
+      String reads = text(p);
+      parts.add(fault.kind() == FaultKind.HEALTHY ? reads + " healthy" : who + " reads " + reads);
+    }
+    text.append(String.join("; ", parts));
+    for (int h = 0; h < predicted.length; h++) {
+      if (!predicted[h].creep().isEmpty()) {
+        OhmsPrediction.Creep c = predicted[h].creep().get(0);
+        text.append(
+            String.format(
+                Locale.ROOT,
+                ". %s (%s) makes the reading creep for about %.0f s: wait until it settles",
+                c.ref(),
+                Units.format(c.farads(), "F"),
+                c.seconds()));
+        break;
+      }
+    }
+    return text.toString();
+  }
+
+  private static boolean similar(OhmsPrediction x, OhmsPrediction y) {
+    if (!x.connected() || !y.connected()) {
+      return x.connected() == y.connected();
+    }
+    double a = x.nominal();
+    double b = y.nominal();
+    return Math.abs(a - b) <= 0.02 * Math.max(a, b) + LEAD_OHMS;
+  }
+
+  /** Returns a predicted reading in words, e.g. "47.0 kΩ (46.5–47.5 kΩ)", "OL", "about 0 Ω". */
+  static String text(OhmsPrediction p) {
+    if (!p.connected()) {
+      return "OL";
+    }
+    if (p.nominal() < LEAD_OHMS) {
+      return "about 0 Ω";
+    }
+    if (p.high() - p.low() < 1e-6 * p.nominal()) {
+      return Units.format(p.nominal(), "Ω");
+    }
+    return Units.format(p.nominal(), "Ω")
+        + " ("
+        + Units.format(p.low(), "Ω")
+        + " to "
+        + Units.format(p.high(), "Ω")
+        + ")";
+  }
+}
