@@ -72,7 +72,12 @@ class DiagnoseCommandTest {
     assertThat(sum).isCloseTo(1.0, org.assertj.core.data.Offset.offset(1e-4));
     double bits = Double.MAX_VALUE;
     for (JsonNode p : doc.get("nextProbes")) {
-      assertThat(p.get("kind").asText()).isIn("dc", "ac");
+      assertThat(p.get("kind").asText()).isIn("dc", "ac", "ohms");
+      if (p.get("kind").asText().equals("ohms")) {
+        // A power-off check names its second point and says to unplug and discharge first.
+        assertThat(p.get("to").asText()).isNotBlank();
+        assertThat(p.get("why").asText()).contains("unplug", "discharge");
+      }
       assertThat(p.get("bits").asDouble()).isLessThanOrEqualTo(bits);
       bits = p.get("bits").asDouble();
     }
