@@ -47,7 +47,8 @@ final class Exporter {
     String caseIds = "case_id IN (SELECT c.id FROM repair_case c WHERE " + cases + ")";
     try (Rows rows = new Rows(connection)) {
       var boardModels =
-          rows.query(Rows.BOARD_MODEL + " WHERE " + models + " ORDER BY name", Rows::boardModel, p);
+          rows.query(
+              Records.BOARD_MODEL + " WHERE " + models + " ORDER BY name", Records::boardModel, p);
       if (boardModels.isEmpty()
           && !(selection instanceof ExportSelection.All)
           && !(selection instanceof ExportSelection.OpenedBetween)) {
@@ -60,24 +61,28 @@ final class Exporter {
           programVersion,
           boardModels,
           rows.query(
-              Rows.STAGE_SHEET
+              Records.STAGE_SHEET
                   + " WHERE board_model_id IN (SELECT id FROM board_model WHERE "
                   + models
                   + ") ORDER BY updated_at, id",
-              Rows::stageSheet,
+              Records::stageSheet,
               p),
-          rows.query(Rows.UNIT + " WHERE " + units + " ORDER BY serial, id", Rows::unit, p),
+          rows.query(Records.UNIT + " WHERE " + units + " ORDER BY serial, id", Records::unit, p),
           rows.query(
-              Rows.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.row", Rows::repairCase, p),
+              Records.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.row",
+              Records::repairCase,
+              p),
           rows.query(
-              Rows.READING + " WHERE " + caseIds + " ORDER BY case_id, taken_at, rowid",
-              Rows::reading,
+              Records.READING + " WHERE " + caseIds + " ORDER BY case_id, taken_at, rowid",
+              Records::reading,
               p),
           rows.suspectLists("WHERE " + caseIds + " ORDER BY case_id, computed_at, rowid", p),
           rows.query(
-              Rows.ACTION + " WHERE " + caseIds + " ORDER BY case_id, at, rowid", Rows::action, p),
+              Records.ACTION + " WHERE " + caseIds + " ORDER BY case_id, at, rowid",
+              Records::action,
+              p),
           rows.query(
-              Rows.NOTE + " WHERE " + caseIds + " ORDER BY case_id, at, row", Rows::note, p));
+              Records.NOTE + " WHERE " + caseIds + " ORDER BY case_id, at, row", Records::note, p));
     }
   }
 }

@@ -20,7 +20,7 @@ final class Require {
   }
 
   static RepairCase repairCase(Rows rows, String caseId) throws SQLException {
-    return rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, caseId)
+    return rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, caseId)
         .orElseThrow(
             () ->
                 new InvalidInputException(

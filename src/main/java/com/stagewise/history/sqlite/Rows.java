@@ -1,12 +1,8 @@
 package com.stagewise.history.sqlite;
 
 import com.stagewise.history.Checks;
-import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
-import com.stagewise.history.record.CaseStatus;
-import com.stagewise.history.record.Outcome;
-import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
@@ -21,7 +17,6 @@ import java.sql.SQLException;
 import java.sql.Types;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -35,24 +30,6 @@ import java.util.Set;
  * <p>An instance lives for one transaction and keeps each statement prepared once.
  */
 final class Rows implements AutoCloseable {
-  static final String BOARD_MODEL = "SELECT id, name, maker, notes, updated_at FROM board_model";
-  static final String STAGE_SHEET =
-      "SELECT id, board_model_id, title, sheet_json, updated_at FROM stage_sheet";
-  static final String UNIT = "SELECT id, serial, board_model_id, owner, updated_at FROM unit";
-  static final String CASE =
-      "SELECT c.id, c.unit_id, c.opened_at, c.symptom, c.status, c.closed_at, c.outcome,"
-          + " c.updated_at, (SELECT group_concat(fault_id, ' ') FROM (SELECT fault_id FROM"
-          + " confirmed_fault f WHERE f.case_id = c.id ORDER BY position)) AS faults"
-          + " FROM repair_case c";
-  static final String READING =
-      "SELECT id, case_id, at, kind, value, hz, uncertainty, meter, taken_at FROM reading";
-  static final String SUSPECT_LIST =
-      "SELECT id, case_id, computed_at, program_version, verdict, next_probes FROM suspect_list";
-  static final String ACTION =
-      "SELECT id, case_id, at, kind, part, old_value, new_value, text, updated_at"
-          + " FROM repair_action";
-  static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
-
   private final Connection connection;
   private final Map<String, PreparedStatement> prepared = new HashMap<>();
 
@@ -122,80 +99,18 @@ final class Rows implements AutoCloseable {
     T map(ResultSet rs) throws SQLException;
   }
 
-  // ---- reading records ------------------------------------------------------------------------
-
-  static BoardModel boardModel(ResultSet rs) throws SQLException {
-    return new BoardModel(
-        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
-  }
-
-  static StageSheetRecord stageSheet(ResultSet rs) throws SQLException {
-    return new StageSheetRecord(
-        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
-  }
-
-  static Unit unit(ResultSet rs) throws SQLException {
-    return new Unit(
-        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
-  }
-
-  static RepairCase repairCase(ResultSet rs) throws SQLException {
-    String outcome = rs.getString(7);
-    return new RepairCase(
-        rs.getString(1),
-        rs.getString(2),
-        time(rs, 3),
-        rs.getString(4),
-        CaseStatus.fromWord(rs.getString(5)).orElseThrow(),
-        time(rs, 6),
-        outcome == null ? null : Outcome.fromWord(outcome).orElseThrow(),
-        words(rs.getString(9)),
-        time(rs, 8));
-  }
-
-  static StoredReading reading(ResultSet rs) throws SQLException {
-    return new StoredReading(
-        rs.getString(1),
-        rs.getString(2),
-        rs.getString(3),
-        ReadingKind.fromWord(rs.getString(4)).orElseThrow(),
-        rs.getDouble(5),
-        nullableDouble(rs, 6),
-        nullableDouble(rs, 7),
-        rs.getString(8),
-        time(rs, 9));
-  }
-
-  static RepairAction action(ResultSet rs) throws SQLException {
-    return new RepairAction(
-        rs.getString(1),
-        rs.getString(2),
-        time(rs, 3),
-        ActionKind.fromWord(rs.getString(4)).orElseThrow(),
-        rs.getString(5),
-        rs.getString(6),
-        rs.getString(7),
-        rs.getString(8),
-        time(rs, 9));
-  }
-
-  static CaseNote note(ResultSet rs) throws SQLException {
-    return new CaseNote(
-        rs.getString(1), rs.getString(2), time(rs, 3), rs.getString(4), time(rs, 5));
-  }
-
   /** Returns the suspect lists selected by {@code where} (with its parameters), with suspects. */
   List<SuspectListRecord> suspectLists(String where, Object... parameters) throws SQLException {
     record Head(
         String id, String caseId, Instant at, String version, String verdict, String next) {}
     List<Head> heads =
         query(
-            SUSPECT_LIST + " " + where,
+            Records.SUSPECT_LIST + " " + where,
             rs ->
                 new Head(
                     rs.getString(1),
                     rs.getString(2),
-                    time(rs, 3),
+                    Records.time(rs, 3),
                     rs.getString(4),
                     rs.getString(5),
                     rs.getString(6)),
@@ -210,7 +125,7 @@ final class Rows implements AutoCloseable {
                   new StoredSuspect(
                       rs.getString(1),
                       rs.getDouble(2),
-                      words(rs.getString(3)),
+                      Records.words(rs.getString(3)),
                       rs.getString(4),
                       rs.getInt(5)),
               head.id());
@@ -225,20 +140,6 @@ final class Rows implements AutoCloseable {
               head.next()));
     }
     return lists;
-  }
-
-  private static Instant time(ResultSet rs, int column) throws SQLException {
-    long millis = rs.getLong(column);
-    return rs.wasNull() ? null : Instant.ofEpochMilli(millis);
-  }
-
-  private static Double nullableDouble(ResultSet rs, int column) throws SQLException {
-    double value = rs.getDouble(column);
-    return rs.wasNull() ? null : value;
-  }
-
-  private static List<String> words(String joined) {
-    return joined == null || joined.isEmpty() ? List.of() : Arrays.asList(joined.split(" "));
   }
 
   // ---- writing records ------------------------------------------------------------------------

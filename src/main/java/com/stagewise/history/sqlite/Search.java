@@ -40,44 +40,7 @@ final class Search {
       if (match.isEmpty()) {
         return List.of();
       }
-      // Rank every matching case by its best text, without snippets: snippets are made for the
-      // returned hits only (making one for each of thousands of matches costs far more).
-      // With words only (no other criterion), only the best texts of each index can make the
-      // first hits: a case among the first n has its best symptom among the first n symptoms, and
-      // its best note among the first n · NOTES_PER_CASE notes unless the cases above it hold
-      // more matching notes than that. Taking just those (FTS5 keeps the top of a rank-ordered
-      // LIMIT without sorting every match) spares joining and grouping every match of a common
-      // word.
-      boolean wordsOnly =
-          query.serial().isEmpty()
-              && query.boardModel().isEmpty()
-              && query.faultId().isEmpty()
-              && query.part().isEmpty()
-              && query.status().isEmpty()
-              && query.openedFrom().isEmpty()
-              && query.openedBefore().isEmpty();
-      String cap = wordsOnly ? " ORDER BY rank LIMIT ?" : "";
-      sql.append("WITH text_hit (case_row, score) AS (")
-          .append("SELECT * FROM (SELECT rowid, rank FROM symptom_text WHERE symptom_text MATCH ?")
-          .append(cap)
-          .append(")")
-          .append(
-              " UNION ALL SELECT rc.row, n.score FROM (SELECT rowid AS note_row, rank AS score FROM note_text")
-          .append(" WHERE note_text MATCH ?")
-          .append(cap)
-          .append(") n")
-          .append(
-              " JOIN case_note cn ON cn.row = n.note_row JOIN repair_case rc ON rc.id = cn.case_id),")
-          .append(" best (case_row, score) AS (SELECT case_row, min(score) FROM text_hit")
-          .append(" GROUP BY case_row) ");
-      parameters.add(match);
-      if (wordsOnly) {
-        parameters.add(query.limit());
-      }
-      parameters.add(match);
-      if (wordsOnly) {
-        parameters.add((long) query.limit() * NOTES_PER_CASE);
-      }
+      appendTextHits(sql, parameters, match, query);
     }
     sql.append("SELECT c.id, u.id, u.serial, m.name, c.status, c.outcome, c.opened_at, c.symptom,")
         .append(" (SELECT group_concat(fault_id, ' ') FROM (SELECT fault_id FROM confirmed_fault f")
@@ -89,6 +52,65 @@ final class Search {
                 : " FROM repair_case c")
         .append(" JOIN unit u ON u.id = c.unit_id JOIN board_model m ON m.id = u.board_model_id")
         .append(" WHERE 1 = 1");
+    appendFilters(sql, parameters, query);
+    sql.append(
+            ranked ? " ORDER BY best.score, c.opened_at DESC" : " ORDER BY c.opened_at DESC, c.id")
+        .append(" LIMIT ?");
+    parameters.add(query.limit());
+    List<SearchHit> hits = hits(connection, sql.toString(), parameters);
+    return ranked && !hits.isEmpty()
+        ? withSnippets(hits, snippets(connection, matchExpression(query.text().get()), hits))
+        : hits;
+  }
+
+  /**
+   * Appends the common table expressions {@code text_hit} (every matching symptom and note, by
+   * case) and {@code best} (each case's best rank).
+   */
+  private static void appendTextHits(
+      StringBuilder sql, List<Object> parameters, String match, SearchQuery query) {
+    // Rank every matching case by its best text, without snippets: snippets are made for the
+    // returned hits only (making one for each of thousands of matches costs far more).
+    // With words only (no other criterion), only the best texts of each index can make the
+    // first hits: a case among the first n has its best symptom among the first n symptoms, and
+    // its best note among the first n · NOTES_PER_CASE notes unless the cases above it hold
+    // more matching notes than that. Taking just those (FTS5 keeps the top of a rank-ordered
+    // LIMIT without sorting every match) spares joining and grouping every match of a common
+    // word.
+    boolean wordsOnly =
+        query.serial().isEmpty()
+            && query.boardModel().isEmpty()
+            && query.faultId().isEmpty()
+            && query.part().isEmpty()
+            && query.status().isEmpty()
+            && query.openedFrom().isEmpty()
+            && query.openedBefore().isEmpty();
+    String cap = wordsOnly ? " ORDER BY rank LIMIT ?" : "";
+    sql.append("WITH text_hit (case_row, score) AS (")
+        .append("SELECT * FROM (SELECT rowid, rank FROM symptom_text WHERE symptom_text MATCH ?")
+        .append(cap)
+        .append(")")
+        .append(
+            " UNION ALL SELECT rc.row, n.score FROM (SELECT rowid AS note_row, rank AS score FROM note_text")
+        .append(" WHERE note_text MATCH ?")
+        .append(cap)
+        .append(") n")
+        .append(
+            " JOIN case_note cn ON cn.row = n.note_row JOIN repair_case rc ON rc.id = cn.case_id),")
+        .append(" best (case_row, score) AS (SELECT case_row, min(score) FROM text_hit")
+        .append(" GROUP BY case_row) ");
+    parameters.add(match);
+    if (wordsOnly) {
+      parameters.add(query.limit());
+    }
+    parameters.add(match);
+    if (wordsOnly) {
+      parameters.add((long) query.limit() * NOTES_PER_CASE);
+    }
+  }
+
+  /** Appends one condition per criterion of the query other than its words. */
+  private static void appendFilters(StringBuilder sql, List<Object> parameters, SearchQuery query) {
     if (query.serial().isPresent()) {
       sql.append(" AND u.serial = ? COLLATE NOCASE");
       parameters.add(query.serial().get());
@@ -119,13 +141,13 @@ final class Search {
       sql.append(" AND c.opened_at < ?");
       parameters.add(query.openedBefore().get());
     }
-    sql.append(
-            ranked ? " ORDER BY best.score, c.opened_at DESC" : " ORDER BY c.opened_at DESC, c.id")
-        .append(" LIMIT ?");
-    parameters.add(query.limit());
+  }
 
+  /** Runs the search and maps each row to a hit (the symptom, shortened, stands as snippet). */
+  private static List<SearchHit> hits(Connection connection, String sql, List<Object> parameters)
+      throws SQLException {
     List<SearchHit> hits = new ArrayList<>();
-    try (PreparedStatement statement = connection.prepareStatement(sql.toString())) {
+    try (PreparedStatement statement = connection.prepareStatement(sql)) {
       Rows.bind(statement, parameters.toArray());
       try (ResultSet rs = statement.executeQuery()) {
         while (rs.next()) {
@@ -149,29 +171,28 @@ final class Search {
         }
       }
     }
-    if (ranked && !hits.isEmpty()) {
-      Map<String, String> snippets =
-          snippets(connection, matchExpression(query.text().get()), hits);
-      List<SearchHit> withSnippets = new ArrayList<>(hits.size());
-      for (SearchHit hit : hits) {
-        String snippet = snippets.get(hit.caseId());
-        withSnippets.add(
-            new SearchHit(
-                hit.caseId(),
-                hit.unitId(),
-                hit.serial(),
-                hit.boardModel(),
-                hit.status(),
-                hit.outcome(),
-                hit.openedAt(),
-                hit.symptom(),
-                hit.confirmedFaults(),
-                snippet == null ? hit.snippet() : snippet,
-                hit.score()));
-      }
-      return withSnippets;
-    }
     return hits;
+  }
+
+  private static List<SearchHit> withSnippets(List<SearchHit> hits, Map<String, String> snippets) {
+    List<SearchHit> withSnippets = new ArrayList<>(hits.size());
+    for (SearchHit hit : hits) {
+      String snippet = snippets.get(hit.caseId());
+      withSnippets.add(
+          new SearchHit(
+              hit.caseId(),
+              hit.unitId(),
+              hit.serial(),
+              hit.boardModel(),
+              hit.status(),
+              hit.outcome(),
+              hit.openedAt(),
+              hit.symptom(),
+              hit.confirmedFaults(),
+              snippet == null ? hit.snippet() : snippet,
+              hit.score()));
+    }
+    return withSnippets;
   }
 
   /**

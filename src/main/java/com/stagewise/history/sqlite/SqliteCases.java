@@ -133,7 +133,7 @@ final class SqliteCases implements Cases {
         "find a case",
         c -> {
           try (Rows rows = new Rows(c)) {
-            return rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, caseId);
+            return rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, caseId);
           }
         });
   }
@@ -247,7 +247,7 @@ final class SqliteCases implements Cases {
         c -> {
           try (Rows rows = new Rows(c)) {
             Optional<RepairCase> found =
-                rows.first(Rows.CASE + " WHERE c.id = ?", Rows::repairCase, caseId);
+                rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, caseId);
             return found.isEmpty()
                 ? Optional.<CaseFile>empty()
                 : Optional.of(caseFile(rows, found.get()));
@@ -261,21 +261,21 @@ final class SqliteCases implements Cases {
         "read a unit's history",
         c -> {
           try (Rows rows = new Rows(c)) {
-            Optional<Unit> unit = rows.first(Rows.UNIT + " WHERE id = ?", Rows::unit, unitId);
+            Optional<Unit> unit = rows.first(Records.UNIT + " WHERE id = ?", Records::unit, unitId);
             if (unit.isEmpty()) {
               return Optional.<UnitHistory>empty();
             }
             BoardModel model =
                 rows.first(
-                        Rows.BOARD_MODEL + " WHERE id = ?",
-                        Rows::boardModel,
+                        Records.BOARD_MODEL + " WHERE id = ?",
+                        Records::boardModel,
                         unit.get().boardModelId())
                     .orElseThrow();
             List<CaseFile> cases = new ArrayList<>();
             for (RepairCase rc :
                 rows.query(
-                    Rows.CASE + " WHERE c.unit_id = ? ORDER BY c.opened_at, c.row",
-                    Rows::repairCase,
+                    Records.CASE + " WHERE c.unit_id = ? ORDER BY c.opened_at, c.row",
+                    Records::repairCase,
                     unitId)) {
               cases.add(caseFile(rows, rc));
             }
@@ -288,10 +288,11 @@ final class SqliteCases implements Cases {
     String id = rc.id();
     return new CaseFile(
         rc,
-        rows.query(Rows.READING + " WHERE case_id = ? ORDER BY taken_at, rowid", Rows::reading, id),
+        rows.query(
+            Records.READING + " WHERE case_id = ? ORDER BY taken_at, rowid", Records::reading, id),
         rows.suspectLists("WHERE case_id = ? ORDER BY computed_at, rowid", id),
-        rows.query(Rows.ACTION + " WHERE case_id = ? ORDER BY at, rowid", Rows::action, id),
-        rows.query(Rows.NOTE + " WHERE case_id = ? ORDER BY at, row", Rows::note, id));
+        rows.query(Records.ACTION + " WHERE case_id = ? ORDER BY at, rowid", Records::action, id),
+        rows.query(Records.NOTE + " WHERE case_id = ? ORDER BY at, row", Records::note, id));
   }
 
   @Override

@@ -47,8 +47,8 @@ final class SqliteLibrary implements StageLibrary {
         c -> {
           try (Rows rows = new Rows(c)) {
             return rows.query(
-                Rows.STAGE_SHEET + " WHERE board_model_id = ? ORDER BY updated_at, id",
-                Rows::stageSheet,
+                Records.STAGE_SHEET + " WHERE board_model_id = ? ORDER BY updated_at, id",
+                Records::stageSheet,
                 boardModelId);
           }
         });

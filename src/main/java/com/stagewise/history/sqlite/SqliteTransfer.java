@@ -27,7 +27,8 @@ final class SqliteTransfer implements Transfer {
 
   @Override
   public ImportReport importBundle(HistoryBundle bundle, String source) {
-    return history.write("import", c -> new Importer(c, source).run(bundle));
+    Instant now = history.clock().instant();
+    return history.write("import", c -> new Importer(c, source, now).run(bundle));
   }
 
   @Override

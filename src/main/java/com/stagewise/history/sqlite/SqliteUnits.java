@@ -53,7 +53,9 @@ final class SqliteUnits implements Units {
       throws SQLException {
     Optional<BoardModel> existing =
         rows.first(
-            Rows.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE", Rows::boardModel, name.strip());
+            Records.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE",
+            Records::boardModel,
+            name.strip());
     if (existing.isPresent()) {
       return new ModelFound(existing.get(), false);
     }
@@ -75,8 +77,8 @@ final class SqliteUnits implements Units {
 
   private static Optional<BoardModel> findModel(Rows rows, String nameOrId) throws SQLException {
     return rows.first(
-        Rows.BOARD_MODEL + " WHERE id = ? OR name = ? COLLATE NOCASE",
-        Rows::boardModel,
+        Records.BOARD_MODEL + " WHERE id = ? OR name = ? COLLATE NOCASE",
+        Records::boardModel,
         nameOrId,
         nameOrId.strip());
   }
@@ -87,7 +89,8 @@ final class SqliteUnits implements Units {
         "list board models",
         c -> {
           try (Rows rows = new Rows(c)) {
-            return rows.query(Rows.BOARD_MODEL + " ORDER BY name COLLATE NOCASE", Rows::boardModel);
+            return rows.query(
+                Records.BOARD_MODEL + " ORDER BY name COLLATE NOCASE", Records::boardModel);
           }
         });
   }
@@ -136,8 +139,8 @@ final class SqliteUnits implements Units {
       Rows rows, String serial, String boardModelId, String owner, Instant now)
       throws SQLException {
     if (rows.first(
-            Rows.UNIT + " WHERE board_model_id = ? AND serial = ?",
-            Rows::unit,
+            Records.UNIT + " WHERE board_model_id = ? AND serial = ?",
+            Records::unit,
             boardModelId,
             serial)
         .isPresent()) {
@@ -155,7 +158,7 @@ final class SqliteUnits implements Units {
         "find a unit",
         c -> {
           try (Rows rows = new Rows(c)) {
-            return rows.first(Rows.UNIT + " WHERE id = ?", Rows::unit, unitId);
+            return rows.first(Records.UNIT + " WHERE id = ?", Records::unit, unitId);
           }
         });
   }
@@ -167,7 +170,9 @@ final class SqliteUnits implements Units {
         c -> {
           try (Rows rows = new Rows(c)) {
             return rows.query(
-                Rows.UNIT + " WHERE serial = ? COLLATE NOCASE ORDER BY serial", Rows::unit, serial);
+                Records.UNIT + " WHERE serial = ? COLLATE NOCASE ORDER BY serial",
+                Records::unit,
+                serial);
           }
         });
   }
@@ -179,10 +184,10 @@ final class SqliteUnits implements Units {
         c -> {
           try (Rows rows = new Rows(c)) {
             return boardModelIdOrNull == null
-                ? rows.query(Rows.UNIT + " ORDER BY serial, id", Rows::unit)
+                ? rows.query(Records.UNIT + " ORDER BY serial, id", Records::unit)
                 : rows.query(
-                    Rows.UNIT + " WHERE board_model_id = ? ORDER BY serial, id",
-                    Rows::unit,
+                    Records.UNIT + " WHERE board_model_id = ? ORDER BY serial, id",
+                    Records::unit,
                     boardModelIdOrNull);
           }
         });
@@ -217,7 +222,7 @@ final class SqliteUnits implements Units {
           try (Rows rows = new Rows(c)) {
             return rows.query(
                 sql.toString(),
-                rs -> new UnitMatch(Rows.unit(rs), rs.getString(6), rs.getInt(7)),
+                rs -> new UnitMatch(Records.unit(rs), rs.getString(6), rs.getInt(7)),
                 parameters.toArray());
           }
         });

@@ -39,8 +39,8 @@ import java.util.List;
  * <p>Reading is strict: unknown keys, wrong types, duplicate keys, trailing data, strings longer
  * than a stage sheet may be, non-finite numbers and a newer format version are errors that name the
  * field. Whether ids are well formed, unique and point at the right kind of record is checked when
- * the bundle is imported ({@code HistoryStore.importBundle}), against the bundle and the local
- * history together.
+ * the bundle is imported ({@code Transfer.importBundle}), against the bundle and the local history
+ * together.
  */
 public final class HistoryBundleJson {
   /** The longest string accepted anywhere in a bundle (a stage sheet's JSON text, with margin). */
