@@ -10,7 +10,9 @@ import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Properties;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
@@ -46,6 +48,11 @@ final class Database implements AutoCloseable {
   private static final byte[] SQLITE_MAGIC =
       "SQLite format 3\0".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
 
+  /** What to do about a damaged file (a backup is a complete history file of its own). */
+  static final String RESTORE_HINT =
+      "To restore a backup, move the damaged file aside and copy the backup in its place;"
+          + " commands that only read (list, show, search, export) may still read what is left.";
+
   private final Path path;
   private final Connection connection;
   private final boolean readOnly;
@@ -80,6 +87,7 @@ final class Database implements AutoCloseable {
       // Refuse a newer schema before anything is written: even switching the journal mode
       // rewrites the file's header.
       Migrations.requireKnown(database);
+      database.requireUndamaged();
       try (PreparedStatement wal =
               database.connection.prepareStatement("PRAGMA journal_mode = WAL");
           ResultSet rs = wal.executeQuery()) {
@@ -240,6 +248,31 @@ final class Database implements AutoCloseable {
     }
   }
 
+  /**
+   * Refuses a damaged file before anything is written to it: SQLite's {@code quick_check} reads
+   * every page (not the indexes' agreement with their tables, which the full check adds), so that a
+   * write cannot succeed on the sound pages of a file whose other pages are broken. It costs one
+   * read of the file, done once when a history is opened for writing.
+   */
+  private void requireUndamaged() throws SQLException {
+    List<String> problems = new ArrayList<>();
+    try (PreparedStatement check = connection.prepareStatement("PRAGMA quick_check(5)");
+        ResultSet rs = check.executeQuery()) {
+      while (rs.next()) {
+        problems.add(rs.getString(1));
+      }
+    }
+    if (!problems.equals(List.of("ok"))) {
+      throw new StorageException(
+          "The history database "
+              + path
+              + " is damaged ("
+              + String.join("; ", problems)
+              + "). It was left as it is and nothing is written to it. "
+              + RESTORE_HINT);
+    }
+  }
+
   Path path() {
     return path;
   }
@@ -386,10 +419,7 @@ final class Database implements AutoCloseable {
     String code = e instanceof SQLiteException se ? se.getResultCode().name() : "";
     String problem;
     if (code.startsWith("SQLITE_CORRUPT") || code.equals("SQLITE_NOTADB")) {
-      problem =
-          "the file is damaged ("
-              + plain(e)
-              + "). It was left as it is; restore a backup with 'stagewise history restore'.";
+      problem = "the file is damaged (" + plain(e) + "). It was left as it is. " + RESTORE_HINT;
     } else if (code.startsWith("SQLITE_BUSY") || code.startsWith("SQLITE_LOCKED")) {
       problem =
           "another program kept the database busy for too long. Nothing was changed; try again.";
