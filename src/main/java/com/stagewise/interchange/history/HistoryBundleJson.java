@@ -38,9 +38,10 @@ import java.util.List;
  *
  * <p>Reading is strict: unknown keys, wrong types, duplicate keys, trailing data, strings longer
  * than a stage sheet may be, non-finite numbers and a newer format version are errors that name the
- * field. Whether ids are well formed, unique and point at the right kind of record is checked when
- * the bundle is imported ({@code Transfer.importBundle}), against the bundle and the local history
- * together.
+ * field, and every document the bundle carries (its stage sheets) is checked by the reader of its
+ * own files. Whether ids are well formed, unique and point at the right kind of record is checked
+ * when the bundle is imported ({@code Transfer.importBundle}), against the bundle and the local
+ * history together.
  */
 public final class HistoryBundleJson {
   /** The longest string accepted anywhere in a bundle (a stage sheet's JSON text, with margin). */
@@ -118,7 +119,10 @@ public final class HistoryBundleJson {
 
   /** Reads a bundle from {@code in}; {@code source} names it in messages. */
   public static HistoryBundle read(InputStream in, String source) {
-    return fromTree(JsonField.parseRoot(in, source, "a history bundle", MAX_STRING, MAX_DEPTH));
+    HistoryBundle bundle =
+        fromTree(JsonField.parseRoot(in, source, "a history bundle", MAX_STRING, MAX_DEPTH));
+    BundleDocuments.check(bundle, source);
+    return bundle;
   }
 
   static HistoryBundle fromTree(JsonField top) {

@@ -39,6 +39,17 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 class HistoryExchangeTest {
+  /** A sound stage sheet (a unity-gain buffer), with a character outside ASCII in its title. */
+  static final String SHEET =
+      "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Buffer Ω\","
+          + " \"rails\": [{\"net\": \"VCC\", \"volts\": 15}, {\"net\": \"VEE\", \"volts\": -15}],"
+          + " \"inputs\": [{\"net\": \"IN\", \"dc\": 1}],"
+          + " \"parts\": [{\"ref\": \"R1\", \"kind\": \"resistor\", \"value\": \"10k\","
+          + " \"nets\": [\"OUT\", \"GND\"]}],"
+          + " \"amplifiers\": [{\"ref\": \"U1A\", \"package\": \"U1\", \"packageType\": \"dual-8\","
+          + " \"section\": \"A\", \"class\": \"classic-bipolar\", \"inPlus\": \"IN\","
+          + " \"inMinus\": \"OUT\", \"out\": \"OUT\", \"vPlus\": \"VCC\", \"vMinus\": \"VEE\"}]}";
+
   /** Text that tends to break storage, escaping or search: quotes, SQL, unicode, line breaks. */
   static final String AWKWARD =
       "It's \"dead\"; '); DROP TABLE unit;-- 100 % \\ back\\slash\ttab\nnew line — Ω µ ü ß 中文 עברית"
@@ -270,6 +281,31 @@ class HistoryExchangeTest {
                 + "\"caseId\":\"y\",\"at\":\"OUT\",\"kind\":\"dc\",\"value\":NaN}]}",
             "readings[0].value: expected the reading's value as a finite number, found the number NaN"),
         Arguments.of(
+            "stage sheet that is not JSON",
+            edit(r -> first(r, "stageSheets").put("sheet", "not json at all")),
+            null,
+            "stageSheets[0].sheet: not valid JSON"),
+        Arguments.of(
+            "empty stage sheet",
+            edit(r -> first(r, "stageSheets").put("sheet", "{}")),
+            null,
+            "stageSheets[0].sheet.format: missing field"),
+        Arguments.of(
+            "stage sheet with a negative resistor",
+            edit(r -> first(r, "stageSheets").put("sheet", SHEET.replace("\"10k\"", "\"-10k\""))),
+            null,
+            "stageSheets[0].sheet.parts[0].value"),
+        Arguments.of(
+            "bad reading named by the bundle, not the history",
+            edit(r -> first(r, "readings").put("at", "")),
+            null,
+            "readings[0].at: must not be empty"),
+        Arguments.of(
+            "time far in the future",
+            edit(r -> first(r, "notes").put("updatedAt", "2999-01-01T00:00:00Z")),
+            null,
+            "notes[0].updatedAt: the time 2999-01-01T00:00:00Z lies in the future"),
+        Arguments.of(
             "closed without outcome",
             edit(r -> first(r, "cases").put("status", "closed").remove("outcome")),
             null,
@@ -308,7 +344,18 @@ class HistoryExchangeTest {
                           "bundle.json"))
           .isInstanceOf(InvalidInputException.class)
           .hasMessageStartingWith("bundle.json: ")
-          .hasMessageContaining(expected);
+          .hasMessageContaining(expected)
+          // Each message names the bundle once, not "history", and repeats no prefix.
+          .satisfies(
+              e -> {
+                String message = e.getMessage();
+                assertThat(message.indexOf("bundle.json"))
+                    .isEqualTo(message.lastIndexOf("bundle.json"));
+                assertThat(message)
+                    .doesNotStartWith("history")
+                    .doesNotContain(
+                        "Jackson", "JsonNode", "JsonReadFeature", "StreamReadConstraints");
+              });
       assertThat(withoutExportTime(b.transfer().export(new ExportSelection.All(), "t")))
           .isEqualTo(withoutExportTime(localBefore));
       assertThat(b.units().boardModels()).containsExactly(before);
@@ -363,12 +410,7 @@ class HistoryExchangeTest {
   /** Fills a history with two board models, three units, one closed and two open cases. */
   private void fill(HistoryStore store) {
     BoardModel mixer = store.units().boardModel("MX-8 main board", "Northfield Audio (invented)");
-    store
-        .library()
-        .add(
-            mixer.id(),
-            "Input buffer",
-            "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Ω\"}");
+    store.library().add(mixer.id(), "Input buffer", SHEET);
     BoardModel psu = store.units().boardModel("PSU-30", "Harbour Instruments (invented)");
     Unit m1 = store.units().add("NF-8-0001", mixer.id(), "");
     Unit m2 = store.units().add("NF-8-0002", mixer.id(), "job 17");
