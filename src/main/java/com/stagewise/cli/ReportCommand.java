@@ -74,7 +74,7 @@ final class ReportCommand implements Callable<Integer> {
           "no history database here; give the right file with --db or STAGEWISE_DB");
     }
     CaseReport report;
-    try (HistoryStore store = HistoryStore.open(database)) {
+    try (HistoryStore store = HistoryStore.openReadOnly(database)) {
       report =
           CaseReport.read(
               store, store.cases().resolveId(caseId), clock.instant(), Casework.version());

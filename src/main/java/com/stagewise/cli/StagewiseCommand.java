@@ -59,7 +59,10 @@ public final class StagewiseCommand implements Runnable {
             err.println("stagewise: internal error: " + ex);
           }
           err.flush();
-          return ex instanceof InvalidInputException ? ExitCode.BAD_INPUT : ExitCode.INTERNAL_ERROR;
+          boolean badFile = ex instanceof StorageException se && se.isUnusableFile();
+          return ex instanceof InvalidInputException || badFile
+              ? ExitCode.BAD_INPUT
+              : ExitCode.INTERNAL_ERROR;
         });
     int code = line.execute(args);
     out.flush();

@@ -22,6 +22,11 @@ final class BackupCommand extends HistorySubcommand {
   Path file;
 
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     work.history().transfer().backupTo(file);
     out.println(

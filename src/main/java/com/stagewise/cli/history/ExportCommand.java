@@ -48,6 +48,11 @@ final class ExportCommand extends HistorySubcommand {
   String to;
 
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     ExportSelection selection;
     if (serial != null) {

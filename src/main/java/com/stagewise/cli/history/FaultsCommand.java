@@ -19,6 +19,11 @@ final class FaultsCommand extends HistorySubcommand {
   String model;
 
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     BoardModel boardModel = Lookups.requireModel(work.history(), model);
     Map<String, Integer> counts = work.shopCounts(boardModel);

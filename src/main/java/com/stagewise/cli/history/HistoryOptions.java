@@ -25,6 +25,10 @@ final class HistoryOptions {
     return HistoryStore.open(DatabaseLocation.resolve(db));
   }
 
+  HistoryStore openForReading() {
+    return HistoryStore.openReadOnly(DatabaseLocation.resolve(db));
+  }
+
   PrintWriter out() {
     return spec.commandLine().getOut();
   }

@@ -17,7 +17,7 @@ abstract class HistorySubcommand implements Callable<Integer> {
 
   @Override
   public final Integer call() {
-    try (HistoryStore store = options.open()) {
+    try (HistoryStore store = readsOnly() ? options.openForReading() : options.open()) {
       run(new Casework(store), options.out());
     }
     options.out().flush();
@@ -26,6 +26,14 @@ abstract class HistorySubcommand implements Callable<Integer> {
 
   /** Runs the subcommand; reads go to {@code work.history()}, changes through {@code work}. */
   abstract void run(Casework work, PrintWriter out);
+
+  /**
+   * Returns whether the subcommand only reads: the history is then opened read-only, so that a
+   * read-only file can still be listed and searched, and nothing in it can change.
+   */
+  boolean readsOnly() {
+    return false;
+  }
 
   boolean json() {
     return options.json;

@@ -13,6 +13,11 @@ import picocli.CommandLine.Command;
 @Command(name = "models", mixinStandardHelpOptions = true, description = "List the board models.")
 final class ModelsCommand extends HistorySubcommand {
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     List<BoardModel> models = work.history().units().boardModels();
     if (json()) {

@@ -56,6 +56,11 @@ final class SearchCommand extends HistorySubcommand {
   int limit;
 
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     if (limit < 1) {
       throw new InvalidInputException(

@@ -31,6 +31,11 @@ final class ShowCommand extends HistorySubcommand {
   String caseId;
 
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     if ((serial == null) == (caseId == null)) {
       throw new InvalidInputException(

@@ -20,6 +20,11 @@ final class UnitsCommand extends HistorySubcommand {
   String model;
 
   @Override
+  boolean readsOnly() {
+    return true;
+  }
+
+  @Override
   void run(Casework work, PrintWriter out) {
     String modelId = model == null ? null : Lookups.requireModel(work.history(), model).id();
     List<Unit> units = work.history().units().list(modelId);

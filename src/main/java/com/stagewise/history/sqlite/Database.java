@@ -114,7 +114,11 @@ final class Database implements AutoCloseable {
   static Database openReadOnly(Path path) {
     Path file = path.toAbsolutePath().normalize();
     if (!Files.exists(file)) {
-      throw new StorageException("The history database " + file + " does not exist.");
+      throw StorageException.unusableFile(
+          "The history database "
+              + file
+              + " does not exist: nothing has been recorded there yet. Choose another file with"
+              + " --db or STAGEWISE_DB.");
     }
     checkRegularSqliteFile(file);
     // In a folder where SQLite cannot make its shared-memory file, open the file as immutable:
@@ -160,20 +164,21 @@ final class Database implements AutoCloseable {
   private static void checkBeforeOpening(Path file) {
     Path folder = file.getParent();
     if (Files.isDirectory(file)) {
-      throw new StorageException("The history database " + file + " is a folder, not a file.");
+      throw StorageException.unusableFile(
+          "The history database " + file + " is a folder, not a file.");
     }
     if (!Files.exists(file)) {
       if (folder == null || !Files.isDirectory(folder)) {
         try {
           Files.createDirectories(folder);
         } catch (IOException | RuntimeException e) {
-          throw new StorageException(
+          throw StorageException.unusableFile(
               "Cannot create the folder " + folder + " for the history database: " + e.getMessage(),
               e);
         }
       }
       if (!canCreateIn(folder)) {
-        throw new StorageException(
+        throw StorageException.unusableFile(
             "Cannot create the history database in "
                 + folder
                 + ": the folder is not writable. Choose another file with --db or STAGEWISE_DB.");
@@ -182,7 +187,7 @@ final class Database implements AutoCloseable {
     }
     checkRegularSqliteFile(file);
     if (!Files.isWritable(file) || !canCreateIn(folder)) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "The history database "
               + file
               + " cannot be written: the file or its folder is read-only (the database needs to"
@@ -196,7 +201,7 @@ final class Database implements AutoCloseable {
    */
   private static void checkRegularSqliteFile(Path file) {
     if (!Files.isRegularFile(file)) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "The history database "
               + file
               + " is not a regular file (a device, a named pipe or a socket). It was left as it is;"
@@ -207,12 +212,12 @@ final class Database implements AutoCloseable {
     try (InputStream in = Files.newInputStream(file)) {
       read = in.readNBytes(head, 0, head.length);
     } catch (IOException e) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "Cannot read the history database " + file + ": " + e.getMessage(), e);
     }
     // An empty file is what SQLite itself makes for a new database; anything else must be one.
     if (read > 0 && (read < head.length || !Arrays.equals(head, SQLITE_MAGIC))) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "The file "
               + file
               + " is not a Stagewise history database (it is not an SQLite file). "
@@ -240,7 +245,7 @@ final class Database implements AutoCloseable {
     int applicationId = queryInt("PRAGMA application_id");
     int objects = queryInt("SELECT count(*) FROM sqlite_master");
     if (applicationId != APPLICATION_ID && !(applicationId == 0 && objects == 0)) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "The file "
               + path
               + " is an SQLite database, but not a Stagewise history database. It was left as it"
@@ -263,7 +268,7 @@ final class Database implements AutoCloseable {
       }
     }
     if (!problems.equals(List.of("ok"))) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "The history database "
               + path
               + " is damaged ("
@@ -434,8 +439,10 @@ final class Database implements AutoCloseable {
     } else {
       problem = plain(e);
     }
-    return new StorageException(
-        "History database " + file + ": cannot " + what + ": " + problem, e);
+    String message = "History database " + file + ": cannot " + what + ": " + problem;
+    return code.startsWith("SQLITE_CORRUPT") || code.equals("SQLITE_NOTADB")
+        ? StorageException.unusableFile(message, e)
+        : new StorageException(message, e);
   }
 
   private static String plain(Exception e) {

@@ -45,7 +45,7 @@ final class Migrations {
   static int requireKnown(Database database) {
     int version = database.read("read the schema version", connection -> currentVersion(database));
     if (version > LATEST) {
-      throw new StorageException(
+      throw StorageException.unusableFile(
           "The history database "
               + database.path()
               + " was made by a newer Stagewise (schema version "
