@@ -296,7 +296,11 @@ public final class HistoryBundleJson {
   public static void write(HistoryBundle bundle, Path file) {
     Path folder = file.toAbsolutePath().getParent();
     try {
-      Path temporary = Files.createTempFile(folder, ".stagewise-export", ".tmp");
+      // Files.createTempFile would make the file readable by its owner only (0600); a bundle is
+      // made to be carried to other benches, so it gets the user's normal permissions (umask).
+      Path temporary =
+          Files.createFile(
+              folder.resolve(".stagewise-export-" + java.util.UUID.randomUUID() + ".tmp"));
       try {
         try (OutputStream out = Files.newOutputStream(temporary)) {
           write(bundle, out);
