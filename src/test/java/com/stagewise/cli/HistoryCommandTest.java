@@ -213,13 +213,14 @@ class HistoryCommandTest {
   }
 
   @Test
-  void fileThatIsNoDatabase_exitsOneWithAClearMessageAndStaysAsItWas() throws Exception {
+  void fileThatIsNoDatabase_exitsTwoAsBadInputWithAClearMessageAndStaysAsItWas() throws Exception {
     Path file = folder.resolve("letter.txt");
     Files.writeString(
         file, "Dear customer, your mixer is ready.\n".repeat(30), StandardCharsets.UTF_8);
     byte[] before = Files.readAllBytes(file);
     Run run = history(file, "units");
-    assertThat(run.code()).isEqualTo(ExitCode.INTERNAL_ERROR);
+    // A file that is no history is bad input (issue 9): exit 2, not an internal error.
+    assertThat(run.code()).isEqualTo(ExitCode.BAD_INPUT);
     assertThat(run.err())
         .startsWith("stagewise: The file ")
         .contains("is not a Stagewise history database")
