@@ -5,14 +5,22 @@ import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
-import com.stagewise.solver.CompiledStage;
+import com.stagewise.solver.AcSolution;
+import com.stagewise.solver.Analysis;
+import com.stagewise.solver.Change;
 import com.stagewise.solver.DeviceParams;
+import com.stagewise.solver.OperatingPoint;
+import com.stagewise.solver.Probe;
 import com.stagewise.solver.SectionState;
+import com.stagewise.solver.SolveResult;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.function.Function;
+import java.util.function.UnaryOperator;
 
 /**
  * Predicts what every test point reads under one scenario, with its spread.
@@ -53,71 +61,73 @@ final class Predictor {
    */
   List<Prediction> predict(Scenario scenario, boolean withSpread) {
     Stage stage = scenario.stage();
-    CompiledStage cs = CompiledStage.of(stage, scenario.conditions());
+    Analysis cs = Analysis.of(stage, scenario.conditions());
     if (drifting(stage)) {
       // A floating input tied to a rail stands for its bias current's drift; the current itself,
       // pushed through the tie, would move the node by hundreds of volts.
-      for (int k = 0; k < cs.sectionCount(); k++) {
-        cs.setDevice(k, cs.device(k).withBias(0, 0));
+      List<Change> noBias = new ArrayList<>();
+      for (Amplifier amp : stage.amplifiers()) {
+        noBias.add(new Change.Device(amp.ref(), cs.device(amp.ref()).withBias(0, 0)));
       }
+      cs = cs.with(noBias.toArray(new Change[0]));
     }
-    int[] at = pointNets(stage, cs);
-    CompiledStage.Outcome outcome = cs.solve();
-    if (!(outcome instanceof CompiledStage.Settled settled)) {
+    Reader reader = reader(stage, cs);
+    SolveResult outcome = cs.solve();
+    if (!(outcome instanceof SolveResult.Solved settled)) {
       return List.of(unpredictable(scenario));
     }
     List<Outcome> outcomes = new ArrayList<>();
-    if (settled.states().size() > 1) {
-      for (CompiledStage.State state : settled.states()) {
+    if (settled.points().size() > 1) {
+      for (OperatingPoint state : settled.points()) {
         outcomes.add(
             new Outcome(
                 state,
-                -1,
+                null,
                 0,
-                scenario.weight() / settled.states().size(),
-                "settles " + describe(stage, state)));
+                scenario.weight() / settled.points().size(),
+                "settles " + describe(state)));
       }
     } else if (withSpread || !scenario.onGrid()) {
-      outcomes.addAll(offsetCorners(stage, cs, settled.states().get(0), scenario.weight()));
+      outcomes.addAll(offsetCorners(stage, cs, settled.primary(), scenario.weight()));
     } else {
-      outcomes.add(new Outcome(settled.states().get(0), -1, 0, scenario.weight(), ""));
+      outcomes.add(new Outcome(settled.primary(), null, 0, scenario.weight(), ""));
     }
     boolean ac = cs.acHz() > 0;
     List<Perturbation> perturbations = withSpread ? perturbations(stage, cs) : List.of();
     List<Prediction> predictions = new ArrayList<>();
     for (Outcome o : outcomes) {
-      DeviceParams saved = o.section >= 0 ? cs.device(o.section) : null;
-      if (o.section >= 0) {
-        cs.setDevice(o.section, saved.withOffset(o.offset));
-      }
-      double[] dcMean = pick(o.state.volts(), at);
-      double[] acMean = ac ? acValues(cs, o.state, at) : null;
+      Analysis at =
+          o.section == null
+              ? cs
+              : cs.with(new Change.Device(o.section, cs.device(o.section).withOffset(o.offset)));
+      double[] dcMean = reader.dc(o.point);
+      double[] acMean = ac ? reader.ac(at.ac(o.point)) : null;
       double[] dcVar = new double[points.size];
       double[] acVar = ac ? new double[points.size] : null;
-      CompiledStage.Linearization linear = perturbations.isEmpty() ? null : cs.linearize(o.state);
+      Analysis.Linearized linear =
+          perturbations.isEmpty() ? null : at.linearize(o.point).orElse(null);
       for (Perturbation p : perturbations) {
-        p.apply(cs);
-        CompiledStage.State near = linear == null ? null : linear.step();
+        Change change = p.change.apply(at);
+        OperatingPoint near = linear == null ? null : linear.step(change).orElse(null);
+        boolean stepped = near != null;
+        Analysis moved = null;
         if (near == null) {
           // A section changes state within one standard deviation: search again from this state,
           // and solve in full only if that does not settle.
-          near = cs.solveNear(o.state);
-        }
-        if (near == null) {
-          CompiledStage.Outcome moved = cs.solve();
-          near = moved instanceof CompiledStage.Settled m ? matching(m, o.state) : null;
-        }
-        if (near != null) {
-          addSquares(dcVar, pick(near.volts(), at), dcMean);
-          // Only part values and gain move the small-signal response of a settled state.
-          if (ac && p.movesAc) {
-            addSquares(acVar, acValues(cs, near, at), acMean);
+          moved = at.with(change);
+          near = moved.settleFrom(o.point).orElse(null);
+          if (near == null) {
+            near = moved.solve() instanceof SolveResult.Solved m ? matching(m, o.point) : null;
           }
         }
-        p.undo(cs);
-      }
-      if (o.section >= 0) {
-        cs.setDevice(o.section, saved);
+        if (near != null) {
+          addSquares(dcVar, reader.dc(near), dcMean);
+          // Only part values and gain move the small-signal response of a settled state.
+          if (ac && p.movesAc) {
+            Optional<AcSolution> response = stepped ? linear.ac(change) : moved.ac(near);
+            addSquares(acVar, reader.ac(response), acMean);
+          }
+        }
       }
       predictions.add(
           new Prediction(
@@ -128,156 +138,164 @@ final class Predictor {
               ac ? sqrt(acVar) : null,
               scenario.value(),
               join(scenario.label(), o.label),
-              states(stage, o.state)));
+              o.point.states()));
     }
     return predictions;
   }
 
   /**
-   * One outcome of a scenario: a settled state, and the section whose offset was set to reach it
-   * (-1 when none).
+   * One outcome of a scenario: a settled point, and the section whose offset was set to reach it
+   * (null when none).
    */
   private record Outcome(
-      CompiledStage.State state, int section, double offset, double weight, String label) {}
+      OperatingPoint point, String section, double offset, double weight, String label) {}
 
-  /** A change of one number of a compiled stage by one standard deviation, and its undoing. */
-  private static final class Perturbation {
-    private final java.util.function.Consumer<CompiledStage> apply;
-    private final java.util.function.Consumer<CompiledStage> undo;
-    private final boolean movesAc;
+  /**
+   * A change of one number of a stage by one standard deviation, worked out from the analysis it
+   * applies to.
+   */
+  private record Perturbation(Function<Analysis, Change> change, boolean movesAc) {}
 
-    Perturbation(
-        java.util.function.Consumer<CompiledStage> apply,
-        java.util.function.Consumer<CompiledStage> undo,
-        boolean movesAc) {
-      this.apply = apply;
-      this.undo = undo;
-      this.movesAc = movesAc;
+  /** Reads the test points from a scenario's points; a net the fault removed reads 0 V. */
+  private final class Reader {
+    private final Probe probe;
+    private final int[] slot;
+
+    Reader(Probe probe, int[] slot) {
+      this.probe = probe;
+      this.slot = slot;
     }
 
-    void apply(CompiledStage cs) {
-      apply.accept(cs);
+    double[] dc(OperatingPoint point) {
+      return spread(probe.dc(point));
     }
 
-    void undo(CompiledStage cs) {
-      undo.accept(cs);
+    double[] ac(Optional<AcSolution> response) {
+      return response.isPresent()
+          ? spread(probe.acAmplitudes(response.get()))
+          : new double[points.size];
+    }
+
+    private double[] spread(double[] read) {
+      double[] values = new double[points.size];
+      for (int i = 0; i < points.size; i++) {
+        // A net that the fault took every part away from reads like a bare pad: about 0 V.
+        values[i] = slot[i] < 0 ? 0 : read[slot[i]];
+      }
+      return values;
     }
   }
 
-  /** Maps each test point to the scenario's net index (a lifted pin reads its own net). */
-  private int[] pointNets(Stage stage, CompiledStage cs) {
+  /** Maps each test point to the scenario's net (a lifted pin reads its own net). */
+  private Reader reader(Stage stage, Analysis cs) {
     // Scenarios of one fault share their sections (a drift grid changes only a value), so the pin
     // map is kept per list of sections.
     Map<String, String> pins =
         pinCache.computeIfAbsent(stage.amplifiers(), amps -> stage.pinNets());
-    int[] at = new int[points.size];
+    List<String> nets = new ArrayList<>();
+    Map<String, Integer> seen = new HashMap<>();
+    int[] slot = new int[points.size];
     for (int i = 0; i < points.size; i++) {
       String name = points.names.get(i);
       String net = points.isPin(i) ? pins.getOrDefault(name, points.netOf.get(i)) : name;
-      at[i] = cs.net(net);
+      if (!cs.hasNet(net)) {
+        slot[i] = -1;
+        continue;
+      }
+      slot[i] =
+          seen.computeIfAbsent(
+              net,
+              n -> {
+                nets.add(n);
+                return nets.size() - 1;
+              });
     }
-    return at;
+    return new Reader(cs.probe(nets), slot);
   }
 
   private List<Outcome> offsetCorners(
-      Stage stage, CompiledStage cs, CompiledStage.State nominal, double weight) {
-    for (int k = 0; k < cs.sectionCount(); k++) {
-      if (cs.isForced(k)) {
+      Stage stage, Analysis cs, OperatingPoint nominal, double weight) {
+    for (Amplifier amp : stage.amplifiers()) {
+      String ref = amp.ref();
+      if (cs.isForced(ref)) {
         continue;
       }
-      DeviceParams params = cs.device(k);
-      double max = stage.amplifiers().get(k).deviceClass().offset().high();
-      cs.setDevice(k, params.withOffset(params.offset() + max));
-      CompiledStage.State up = near(cs, nominal);
-      cs.setDevice(k, params.withOffset(params.offset() - max));
-      CompiledStage.State down = near(cs, nominal);
-      cs.setDevice(k, params);
+      DeviceParams params = cs.device(ref);
+      double max = amp.deviceClass().offset().high();
+      OperatingPoint up =
+          near(cs.with(new Change.Device(ref, params.withOffset(params.offset() + max))), nominal);
+      OperatingPoint down =
+          near(cs.with(new Change.Device(ref, params.withOffset(params.offset() - max))), nominal);
       if (up == null || down == null) {
         continue;
       }
-      SectionState now = nominal.states()[k];
-      SectionState upState = up.states()[k];
-      SectionState downState = down.states()[k];
+      SectionState now = nominal.states().get(ref);
+      SectionState upState = up.states().get(ref);
+      SectionState downState = down.states().get(ref);
       if (upState != downState && (upState != now || downState != now)) {
-        String ref = stage.amplifiers().get(k).ref();
         return List.of(
-            new Outcome(up, k, params.offset() + max, weight / 2, ref + " offset positive"),
-            new Outcome(down, k, params.offset() - max, weight / 2, ref + " offset negative"));
+            new Outcome(up, ref, params.offset() + max, weight / 2, ref + " offset positive"),
+            new Outcome(down, ref, params.offset() - max, weight / 2, ref + " offset negative"));
       }
     }
-    return List.of(new Outcome(nominal, -1, 0, weight, ""));
+    return List.of(new Outcome(nominal, null, 0, weight, ""));
   }
 
-  /** The state the stage settles in from {@code from}'s states, else its first state, else null. */
-  private static CompiledStage.State near(CompiledStage cs, CompiledStage.State from) {
-    CompiledStage.State state = cs.solveNear(from);
-    return state != null ? state : first(cs.solve());
+  /** The point the stage settles in from {@code from}'s states, else its first point, else null. */
+  private static OperatingPoint near(Analysis cs, OperatingPoint from) {
+    Optional<OperatingPoint> state = cs.settleFrom(from);
+    if (state.isPresent()) {
+      return state.get();
+    }
+    return cs.solve() instanceof SolveResult.Solved s ? s.primary() : null;
   }
 
-  private static CompiledStage.State first(CompiledStage.Outcome outcome) {
-    return outcome instanceof CompiledStage.Settled s ? s.states().get(0) : null;
-  }
-
-  private static CompiledStage.State matching(
-      CompiledStage.Settled settled, CompiledStage.State target) {
-    for (CompiledStage.State state : settled.states()) {
-      if (Arrays.equals(state.states(), target.states())) {
-        return state;
+  private static OperatingPoint matching(SolveResult.Solved settled, OperatingPoint target) {
+    for (OperatingPoint point : settled.points()) {
+      if (point.states().equals(target.states())) {
+        return point;
       }
     }
-    return settled.states().get(0);
+    return settled.primary();
   }
 
-  private List<Perturbation> perturbations(Stage stage, CompiledStage cs) {
+  private List<Perturbation> perturbations(Stage stage, Analysis cs) {
     List<Perturbation> list = new ArrayList<>();
-    List<Part> parts = stage.parts();
-    for (int p = 0; p < parts.size(); p++) {
-      Part part = parts.get(p);
+    for (Part part : stage.parts()) {
       if (part.tolerance() > 0 && !part.ref().startsWith("~")) {
-        int index = p;
-        double nominal = cs.partValue(p);
-        double moved = nominal * (1 + part.tolerance() * UNIFORM_SD);
-        list.add(
-            new Perturbation(
-                c -> c.setPartValue(index, moved), c -> c.setPartValue(index, nominal), true));
+        double moved = cs.partValue(part.ref()) * (1 + part.tolerance() * UNIFORM_SD);
+        Change change = new Change.PartValue(part.ref(), moved);
+        list.add(new Perturbation(c -> change, true));
       }
     }
     for (Rail rail : stage.rails()) {
-      int net = cs.net(rail.net());
-      double volts = cs.drivenVolts(net);
-      double moved = volts * (1 + rail.tolerance() * UNIFORM_SD);
-      list.add(
-          new Perturbation(
-              c -> c.setDrivenVolts(net, moved), c -> c.setDrivenVolts(net, volts), false));
+      double moved = cs.drivenVolts(rail.net()) * (1 + rail.tolerance() * UNIFORM_SD);
+      Change change = new Change.DrivenVolts(rail.net(), moved);
+      list.add(new Perturbation(c -> change, false));
     }
     boolean drifting = drifting(stage);
-    for (int k = 0; k < cs.sectionCount(); k++) {
-      Amplifier amp = stage.amplifiers().get(k);
+    for (Amplifier amp : stage.amplifiers()) {
       DeviceClass type = amp.deviceClass();
-      int section = k;
+      String ref = amp.ref();
       double offsetStep = type.offset().high() * UNIFORM_SD;
       // Uniform over the class's range: its standard deviation is the width over √12.
       double biasStep = (type.biasCurrent().high() - type.biasCurrent().low()) / Math.sqrt(12);
       double lowStep = (type.headroomLow().high() - type.headroomLow().low()) / Math.sqrt(12);
       double highStep = (type.headroomHigh().high() - type.headroomHigh().low()) / Math.sqrt(12);
-      list.add(device(section, p -> p.withOffset(p.offset() + offsetStep), false));
+      list.add(device(ref, p -> p.withOffset(p.offset() + offsetStep), false));
       if (!drifting) {
         // Where a floating input is tied to a rail to stand for its drift, the bias current is
         // already what put it there; moving it again through the tie would count it twice.
         list.add(
-            device(
-                section,
-                p -> p.withBias(p.biasPlus() + biasStep, p.biasMinus() + biasStep),
-                false));
+            device(ref, p -> p.withBias(p.biasPlus() + biasStep, p.biasMinus() + biasStep), false));
       }
       list.add(
-          device(section, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
+          device(ref, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
       list.add(
-          device(
-              section, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
+          device(ref, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
       // Gain is spread over a decade or more; the low end of the class's range is the honest step.
       double lowGain = type.openLoopGain().low();
-      list.add(device(section, p -> p.withGain(lowGain), true));
+      list.add(device(ref, p -> p.withGain(lowGain), true));
     }
     return list;
   }
@@ -287,36 +305,8 @@ final class Predictor {
   }
 
   private static Perturbation device(
-      int k, java.util.function.UnaryOperator<DeviceParams> change, boolean movesAc) {
-    DeviceParams[] saved = new DeviceParams[1];
-    return new Perturbation(
-        c -> {
-          saved[0] = c.device(k);
-          c.setDevice(k, change.apply(saved[0]));
-        },
-        c -> c.setDevice(k, saved[0]),
-        movesAc);
-  }
-
-  private double[] pick(double[] volts, int[] at) {
-    double[] values = new double[points.size];
-    for (int i = 0; i < points.size; i++) {
-      // A net that the fault took every part away from reads like a bare pad: about 0 V.
-      values[i] = at[i] < 0 ? 0 : volts[at[i]];
-    }
-    return values;
-  }
-
-  private double[] acValues(CompiledStage cs, CompiledStage.State state, int[] at) {
-    double[][] ac = cs.ac(state);
-    double[] values = new double[points.size];
-    if (ac == null) {
-      return values;
-    }
-    for (int i = 0; i < points.size; i++) {
-      values[i] = at[i] < 0 ? 0 : ac[0][at[i]];
-    }
-    return values;
+      String ref, UnaryOperator<DeviceParams> change, boolean movesAc) {
+    return new Perturbation(c -> new Change.Device(ref, change.apply(c.device(ref))), movesAc);
   }
 
   private Prediction unpredictable(Scenario scenario) {
@@ -335,17 +325,9 @@ final class Predictor {
         Map.of());
   }
 
-  private static Map<String, SectionState> states(Stage stage, CompiledStage.State state) {
-    Map<String, SectionState> map = new LinkedHashMap<>();
-    for (int k = 0; k < state.states().length; k++) {
-      map.put(stage.amplifiers().get(k).ref(), state.states()[k]);
-    }
-    return map;
-  }
-
-  private static String describe(Stage stage, CompiledStage.State state) {
+  private static String describe(OperatingPoint point) {
     List<String> parts = new ArrayList<>();
-    states(stage, state).forEach((ref, s) -> parts.add(ref + " " + s.word()));
+    point.states().forEach((ref, s) -> parts.add(ref + " " + s.word()));
     return String.join(", ", parts);
   }
 

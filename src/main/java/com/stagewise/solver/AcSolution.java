@@ -12,6 +12,6 @@ public record AcSolution(double hz, Map<String, Phasor> nets) {
 
   /** Keeps the map unmodifiable. */
   public AcSolution {
-    nets = java.util.Collections.unmodifiableMap(nets);
+    nets = nets instanceof Layout.Phasors ? nets : java.util.Collections.unmodifiableMap(nets);
   }
 }

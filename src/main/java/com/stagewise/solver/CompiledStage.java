@@ -4,20 +4,20 @@ import com.stagewise.circuit.Connectivity;
 import com.stagewise.circuit.Stage;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 
 /**
- * A stage compiled once for repeated solves: the fast form of {@link StageSolver} for work that
- * solves one topology many times with changed numbers (tolerance spreads, fault grids).
- *
- * <p>Nets, parts and sections are addressed by index ({@link #net}, {@link #part}, {@link
- * #section}); part values, driven-net voltages and device parameters can be changed between solves.
- * Not safe for use by several threads at once.
+ * The {@link Analysis} of a stage: the stage compiled once into index arrays ({@link Network}),
+ * with the saturation search and the factorised re-solves. Everything index-based stays in here;
+ * callers see names and the solver's values.
  */
-public final class CompiledStage {
+final class CompiledStage implements Analysis {
   /** Consistency slack in volts, far below any meter's resolution. */
   private static final double SLACK = 1e-9;
 
@@ -28,118 +28,282 @@ public final class CompiledStage {
   private static final int MAX_ENUMERATED_SECTIONS = 9;
 
   private final Network network;
+  private final Layout layout;
+  private final Map<String, Integer> partIndex;
 
-  private CompiledStage(Network network) {
+  private CompiledStage(Network network, Layout layout, Map<String, Integer> partIndex) {
     this.network = network;
+    this.layout = layout;
+    this.partIndex = partIndex;
   }
 
   /** Compiles a stage under the given conditions. */
-  public static CompiledStage of(Stage stage, Conditions conditions) {
-    return new CompiledStage(new Network(stage, conditions));
+  static CompiledStage of(Stage stage, Conditions conditions) {
+    Network network = new Network(stage, conditions);
+    String[] refs = new String[network.sections.length];
+    for (int k = 0; k < refs.length; k++) {
+      refs[k] = network.sections[k].ref();
+    }
+    Map<String, Integer> parts = new HashMap<>(network.partRefs.length * 2);
+    for (int p = 0; p < network.partRefs.length; p++) {
+      parts.put(network.partRefs[p], p);
+    }
+    return new CompiledStage(network, new Layout(stage, network.nets, refs), parts);
   }
 
-  /**
-   * One consistent operating state.
-   *
-   * @param volts the voltage of every net, indexed as {@link #nets()}
-   * @param states the state of every section, indexed as the stage's amplifiers
-   */
-  public record State(double[] volts, SectionState[] states) {}
+  /** One consistent state in index form: volts per net, state per section. */
+  private record State(double[] volts, SectionState[] states) {}
 
-  /** The outcome of a solve: settled states, floating nets, or no consistent state. */
-  public sealed interface Outcome permits Settled, Floats, Unsettled {}
+  // ---------------------------------------------------------------- the face
 
-  /** The stage settles in one state, or (strong positive feedback) in several stable ones. */
-  public record Settled(List<State> states) implements Outcome {}
+  @Override
+  public Stage stage() {
+    return network.stage;
+  }
 
-  /** Some nets have no DC path to a driven net. */
-  public record Floats(List<String> nets) implements Outcome {}
-
-  /** No combination of linear and clamped outputs satisfies every section. */
-  public record Unsettled(String section, String reason) implements Outcome {}
-
-  /** Returns the nets in index order (the stage's net order). */
+  @Override
   public List<String> nets() {
     return List.of(network.nets);
   }
 
-  /** Returns the index of a net, or -1 if the stage has no such net. */
-  public int net(String name) {
-    return network.netIndex.getOrDefault(name, -1);
+  @Override
+  public SolveResult solve() {
+    Outcome outcome = solveStates();
+    if (outcome instanceof Floats f) {
+      return new SolveResult.Floating(f.nets);
+    }
+    if (outcome instanceof Unsettled u) {
+      return new SolveResult.NoConsistentState(u.section, u.reason);
+    }
+    List<OperatingPoint> points = new ArrayList<>();
+    for (State state : ((Settled) outcome).states) {
+      points.add(pointOf(state));
+    }
+    return new SolveResult.Solved(points);
   }
 
-  /** Returns the index of a part by designator, or -1. */
-  public int part(String ref) {
-    for (int p = 0; p < network.partRefs.length; p++) {
-      if (network.partRefs[p].equals(ref)) {
-        return p;
+  @Override
+  public Optional<OperatingPoint> settleFrom(OperatingPoint near) {
+    State state = solveNear(statesOf(near));
+    return state == null ? Optional.empty() : Optional.of(pointOf(state));
+  }
+
+  @Override
+  public Optional<Linearized> linearize(OperatingPoint point) {
+    SectionState[] states = statesOf(point);
+    double[] x = vectorOf(point);
+    boolean[] collapsed = collapsedAt(x);
+    Network.DcSystem system = network.solveDc(states, collapsed);
+    return system == null
+        ? Optional.empty()
+        : Optional.of(new Linearization(states.clone(), collapsed, system));
+  }
+
+  @Override
+  public Optional<AcSolution> ac(OperatingPoint point) {
+    if (network.acHz == 0) {
+      return Optional.empty();
+    }
+    return acAbout(statesOf(point), collapsedAt(vectorOf(point)));
+  }
+
+  @Override
+  public List<OperatingPoint> enumerateConsistent() {
+    List<OperatingPoint> found = new ArrayList<>();
+    forEachCombination(
+        states -> {
+          Network.DcSystem system = solveConsistently(states);
+          if (system != null && isConsistent(states, system.x())) {
+            found.add(pointOf(stateOf(states, system.x())));
+          }
+        });
+    return found;
+  }
+
+  @Override
+  public CompiledStage with(Change... changes) {
+    Network copy = network.copyNumbers();
+    CompiledStage changed = new CompiledStage(copy, layout, partIndex);
+    for (Change change : changes) {
+      changed.apply(change);
+    }
+    return changed;
+  }
+
+  @Override
+  public double partValue(String ref) {
+    return network.value[part(ref)];
+  }
+
+  @Override
+  public double drivenVolts(String net) {
+    int i = drivenNet(net);
+    return network.driven[i];
+  }
+
+  @Override
+  public DeviceParams device(String section) {
+    return network.params[section(section)];
+  }
+
+  @Override
+  public boolean isForced(String section) {
+    return network.forced[section(section)] != null;
+  }
+
+  @Override
+  public boolean hasNet(String net) {
+    return layout.netIndex.containsKey(net);
+  }
+
+  @Override
+  public double acHz() {
+    return network.acHz;
+  }
+
+  @Override
+  public Probe probe(List<String> nets) {
+    return new Probe(layout, nets);
+  }
+
+  // ---------------------------------------------------------------- changes of numbers
+
+  private int part(String ref) {
+    Integer p = partIndex.get(ref);
+    if (p == null) {
+      throw new IllegalArgumentException("the stage has no part " + ref);
+    }
+    return p;
+  }
+
+  private int section(String ref) {
+    Integer k = layout.sectionIndex.get(ref);
+    if (k == null) {
+      throw new IllegalArgumentException("the stage has no section " + ref);
+    }
+    return k;
+  }
+
+  private int drivenNet(String net) {
+    Integer i = layout.netIndex.get(net);
+    if (i == null || network.unknownOf[i] >= 0) {
+      throw new IllegalArgumentException(net + " is not a driven net of the stage");
+    }
+    return i;
+  }
+
+  /** Applies a change to this analysis's own numbers; returns what undoes it. */
+  private Change apply(Change change) {
+    if (change instanceof Change.PartValue v) {
+      int p = part(v.ref());
+      double old = network.value[p];
+      network.value[p] = v.value();
+      return new Change.PartValue(v.ref(), old);
+    }
+    if (change instanceof Change.DrivenVolts d) {
+      int i = drivenNet(d.net());
+      double old = network.driven[i];
+      network.driven[i] = d.volts();
+      return new Change.DrivenVolts(d.net(), old);
+    }
+    Change.Device d = (Change.Device) change;
+    int k = section(d.section());
+    DeviceParams old = network.params[k];
+    network.params[k] = d.params();
+    return new Change.Device(d.section(), old);
+  }
+
+  // ---------------------------------------------------------------- points and index form
+
+  private OperatingPoint pointOf(State state) {
+    return layout.point(state.volts, state.states);
+  }
+
+  private SectionState[] statesOf(OperatingPoint point) {
+    if (point.states() instanceof Layout.States s && s.layout == layout) {
+      return s.states;
+    }
+    SectionState[] states = new SectionState[layout.sections.length];
+    for (int k = 0; k < states.length; k++) {
+      states[k] = point.states().get(layout.sections[k]);
+      if (states[k] == null) {
+        throw new IllegalArgumentException("the point has no state for " + layout.sections[k]);
       }
     }
-    return -1;
+    return states;
   }
 
-  /** Returns the number of parts. */
-  public int partCount() {
-    return network.value.length;
-  }
-
-  /** Returns the number of sections. */
-  public int sectionCount() {
-    return network.sections.length;
-  }
-
-  /** Returns the value of part p (ohms or farads). */
-  public double partValue(int p) {
-    return network.value[p];
-  }
-
-  /** Sets the value of part p (ohms or farads), for the next solve. */
-  public void setPartValue(int p, double value) {
-    network.value[p] = value;
-  }
-
-  /** Returns whether net i is driven (ground, a rail or an input). */
-  public boolean isDriven(int net) {
-    return network.unknownOf[net] < 0;
-  }
-
-  /** Returns the voltage of driven net i. */
-  public double drivenVolts(int net) {
-    return network.driven[net];
-  }
-
-  /**
-   * Sets the voltage of a driven net, for the next solve.
-   *
-   * @throws IllegalArgumentException if the net is not driven
-   */
-  public void setDrivenVolts(int net, double volts) {
-    if (network.unknownOf[net] >= 0) {
-      throw new IllegalArgumentException(network.nets[net] + " is not a driven net");
+  private double[] voltsOf(OperatingPoint point) {
+    if (point.nets() instanceof Layout.NetVolts v && v.layout == layout) {
+      return v.volts;
     }
-    network.driven[net] = volts;
+    double[] volts = new double[layout.nets.length];
+    for (int i = 0; i < volts.length; i++) {
+      Double v = point.nets().get(layout.nets[i]);
+      if (v == null) {
+        throw new IllegalArgumentException("the point has no voltage for " + layout.nets[i]);
+      }
+      volts[i] = v;
+    }
+    return volts;
   }
 
-  /** Returns the device parameters of section k. */
-  public DeviceParams device(int k) {
-    return network.params[k];
+  private double[] vectorOf(OperatingPoint point) {
+    double[] volts = voltsOf(point);
+    double[] x = new double[network.size];
+    for (int i = 0; i < network.nets.length; i++) {
+      int u = network.unknownOf[i];
+      if (u >= 0) {
+        x[u] = volts[i];
+      }
+    }
+    // The internal sources follow from the nets: re-solving with the states gives them, and the
+    // collapsed test reads only nets, so they are left at 0 here.
+    return x;
   }
 
-  /** Sets the device parameters of section k, for the next solve. */
-  public void setDevice(int k, DeviceParams params) {
-    network.params[k] = params;
+  private boolean[] collapsedAt(double[] x) {
+    int n = network.sections.length;
+    boolean[] collapsed = new boolean[n];
+    for (int k = 0; k < n; k++) {
+      collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(x, k);
+    }
+    return collapsed;
   }
 
-  /** Returns whether section k's output is forced by a fault. */
-  public boolean isForced(int k) {
-    return network.forced[k] != null;
+  private Optional<AcSolution> acAbout(SectionState[] states, boolean[] collapsed) {
+    double[][] solution = network.solveAc(states, collapsed);
+    if (solution == null) {
+      return Optional.empty();
+    }
+    int nets = network.nets.length;
+    double[] amplitude = new double[nets];
+    double[] phase = new double[nets];
+    for (int i = 0; i < nets; i++) {
+      int u = network.unknownOf[i];
+      if (u >= 0) {
+        Phasor p = Phasor.of(solution[0][u], solution[1][u]);
+        amplitude[i] = p.amplitude();
+        phase[i] = p.phaseDegrees();
+      } else {
+        amplitude[i] = network.acSource[i];
+      }
+    }
+    return Optional.of(new AcSolution(network.acHz, new Layout.Phasors(layout, amplitude, phase)));
   }
 
-  /**
-   * Solves at DC: every stable consistent state, or the floating nets, or which section has no
-   * consistent state; never NaN voltages.
-   */
-  public Outcome solve() {
+  // ---------------------------------------------------------------- the search
+
+  /** The outcome of a solve in index form. */
+  private sealed interface Outcome permits Settled, Floats, Unsettled {}
+
+  private record Settled(List<State> states) implements Outcome {}
+
+  private record Floats(List<String> nets) implements Outcome {}
+
+  private record Unsettled(String section, String reason) implements Outcome {}
+
+  private Outcome solveStates() {
     int n = network.sections.length;
     SectionState[] start = new SectionState[n];
     for (int k = 0; k < n; k++) {
@@ -162,14 +326,8 @@ public final class CompiledStage {
     return found != null ? new Settled(List.of(found)) : enumerate(true);
   }
 
-  /**
-   * Solves starting from a known state's section states, for re-solves after a change of numbers:
-   * returns the consistent stable state the search settles in from there, or null when it does not
-   * settle (then use {@link #solve}). Much cheaper than {@link #solve} for stages with several
-   * stable states, which {@link #solve} enumerates.
-   */
-  public State solveNear(State near) {
-    SectionState[] start = near.states().clone();
+  private State solveNear(SectionState[] near) {
+    SectionState[] start = near.clone();
     Network.DcSystem first = solveConsistently(start);
     if (first == null || !allLinearStable(start, first)) {
       return null;
@@ -177,27 +335,8 @@ public final class CompiledStage {
     return activeSetSearch(start, first);
   }
 
-  /**
-   * Returns every consistent state by trying every combination of section states, with no stability
-   * filter. For cross-checks of the search; slow for many sections.
-   */
-  public List<State> enumerateConsistent() {
-    List<State> found = new ArrayList<>();
-    forEachCombination(
-        states -> {
-          Network.DcSystem system = solveConsistently(states);
-          if (system != null && isConsistent(states, system.x())) {
-            found.add(stateOf(states, system.x()));
-          }
-        });
-    return found;
-  }
-
-  /**
-   * A state's factorised system, for fast re-solves after small changes of the numbers: one step of
-   * x ← x + M⁻¹·(b − M'·x) with the old factors, exact to first order in the change.
-   */
-  public final class Linearization {
+  /** A state's factorised system: one step of x ← x + M⁻¹·(b − M'·x) with the old factors. */
+  private final class Linearization implements Linearized {
     private final SectionState[] states;
     private final boolean[] collapsed;
     private final double[] x;
@@ -210,76 +349,44 @@ public final class CompiledStage {
       this.system = system;
     }
 
-    /**
-     * Returns the state after the numbers changed, to first order, if the sections stay in the same
-     * states; null when a section would change state (then solve again in full).
-     */
-    public State step() {
-      double[] dx = system.factors().solve(network.residual(states, collapsed, x));
-      double[] moved = new double[x.length];
-      for (int i = 0; i < x.length; i++) {
-        moved[i] = x[i] + dx[i];
-      }
-      for (int k = 0; k < states.length; k++) {
-        if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
-          return null;
+    @Override
+    public Optional<OperatingPoint> step(Change change) {
+      Change undo = apply(change);
+      try {
+        double[] dx = system.factors().solve(network.residual(states, collapsed, x));
+        double[] moved = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+          moved[i] = x[i] + dx[i];
         }
-      }
-      return isConsistent(states, moved) ? stateOf(states, moved) : null;
-    }
-  }
-
-  /** Returns the factorised system of a state, or null when it is singular. */
-  public Linearization linearize(State state) {
-    int n = network.sections.length;
-    boolean[] collapsed = new boolean[n];
-    double[] x = vectorOf(state);
-    for (int k = 0; k < n; k++) {
-      collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(x, k);
-    }
-    Network.DcSystem system = network.solveDc(state.states(), collapsed);
-    return system == null ? null : new Linearization(state.states().clone(), collapsed, system);
-  }
-
-  /** Returns the AC analysis frequency (the first input with AC), or 0 when no input has AC. */
-  public double acHz() {
-    return network.acHz;
-  }
-
-  /**
-   * Returns the small-signal AC response about a state: {@code {amplitude, phase in degrees}} per
-   * net, or null when no input has AC or the system is singular.
-   */
-  public double[][] ac(State state) {
-    if (network.acHz == 0) {
-      return null;
-    }
-    int n = network.sections.length;
-    boolean[] collapsed = new boolean[n];
-    double[] x = vectorOf(state);
-    for (int k = 0; k < n; k++) {
-      collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(x, k);
-    }
-    double[][] solution = network.solveAc(state.states(), collapsed);
-    if (solution == null) {
-      return null;
-    }
-    double[][] out = new double[2][network.nets.length];
-    for (int i = 0; i < network.nets.length; i++) {
-      int u = network.unknownOf[i];
-      if (u >= 0) {
-        Phasor p = Phasor.of(solution[0][u], solution[1][u]);
-        out[0][i] = p.amplitude();
-        out[1][i] = p.phaseDegrees();
-      } else {
-        out[0][i] = network.acSource[i];
+        for (int k = 0; k < states.length; k++) {
+          if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
+            return Optional.empty();
+          }
+        }
+        return isConsistent(states, moved)
+            ? Optional.of(pointOf(stateOf(states, moved)))
+            : Optional.empty();
+      } finally {
+        apply(undo);
       }
     }
-    return out;
+
+    @Override
+    public Optional<AcSolution> ac(Change change) {
+      if (network.acHz == 0) {
+        return Optional.empty();
+      }
+      Change undo = apply(change);
+      try {
+        return acAbout(states, collapsed);
+      } finally {
+        apply(undo);
+      }
+    }
   }
 
   private List<String> floatingNets() {
-    java.util.Set<String> dead = new HashSet<>();
+    Set<String> dead = new HashSet<>();
     for (int k = 0; k < network.sections.length; k++) {
       if (network.sourceNode[k] < 0) {
         dead.add(network.sections[k].ref());
@@ -477,25 +584,5 @@ public final class CompiledStage {
       volts[i] = network.volts(x, i);
     }
     return new State(volts, states.clone());
-  }
-
-  private double[] vectorOf(State state) {
-    double[] x = new double[network.size];
-    for (int i = 0; i < network.nets.length; i++) {
-      int u = network.unknownOf[i];
-      if (u >= 0) {
-        x[u] = state.volts()[i];
-      }
-    }
-    return x;
-  }
-
-  /** Returns the section designators, indexed as the stage's amplifiers. */
-  String[] sectionRefs() {
-    String[] refs = new String[network.sections.length];
-    for (int k = 0; k < refs.length; k++) {
-      refs[k] = network.sections[k].ref();
-    }
-    return refs;
   }
 }

@@ -28,7 +28,6 @@ final class Network {
 
   final Stage stage;
   final String[] nets;
-  final Map<String, Integer> netIndex = new HashMap<>();
 
   /** Per net: its index among the unknowns, or -1 for a driven net. */
   final int[] unknownOf;
@@ -70,6 +69,7 @@ final class Network {
     driven = new double[nets.length];
     Map<String, Double> drivenVolts = stage.drivenVolts();
     int next = 0;
+    Map<String, Integer> netIndex = new HashMap<>();
     for (int i = 0; i < nets.length; i++) {
       netIndex.put(nets[i], i);
       Double volts = drivenVolts.get(nets[i]);
@@ -126,6 +126,36 @@ final class Network {
       }
     }
     acHz = hz;
+  }
+
+  /** A copy that shares the topology and has its own numbers (values, driven volts, devices). */
+  private Network(Network other) {
+    stage = other.stage;
+    nets = other.nets;
+    unknownOf = other.unknownOf;
+    driven = other.driven.clone();
+    partRefs = other.partRefs;
+    partA = other.partA;
+    partB = other.partB;
+    capacitor = other.capacitor;
+    value = other.value.clone();
+    sections = other.sections;
+    inPlus = other.inPlus;
+    inMinus = other.inMinus;
+    out = other.out;
+    vPlus = other.vPlus;
+    vMinus = other.vMinus;
+    params = other.params.clone();
+    forced = other.forced;
+    sourceNode = other.sourceNode;
+    size = other.size;
+    acSource = other.acSource;
+    acHz = other.acHz;
+  }
+
+  /** Returns a copy with its own numbers, to change without touching this one. */
+  Network copyNumbers() {
+    return new Network(this);
   }
 
   /** Returns the voltage of net i in a solution vector. */

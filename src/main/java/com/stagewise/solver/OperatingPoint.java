@@ -14,9 +14,16 @@ public record OperatingPoint(
 
   /** Keeps the maps as given (the solver builds them in order and does not change them). */
   public OperatingPoint {
-    nets = java.util.Collections.unmodifiableMap(nets);
-    pins = java.util.Collections.unmodifiableMap(pins);
-    states = java.util.Collections.unmodifiableMap(states);
+    nets = readOnly(nets);
+    pins = readOnly(pins);
+    states = readOnly(states);
+  }
+
+  private static <V> Map<String, V> readOnly(Map<String, V> map) {
+    // The solver's own views over arrays are read-only already.
+    return map instanceof Layout.ArrayMap<?> || map instanceof Layout.PinVolts
+        ? map
+        : java.util.Collections.unmodifiableMap(map);
   }
 
   /**
@@ -25,6 +32,12 @@ public record OperatingPoint(
    * @throws IllegalArgumentException if the stage has no such net or used pin
    */
   public double at(String testPoint) {
+    if (nets instanceof Layout.NetVolts v) {
+      Integer i = v.layout.netIndex.get(testPoint);
+      if (i != null) {
+        return v.volts[i];
+      }
+    }
     Double volts = nets.get(testPoint);
     if (volts == null) {
       volts = pins.get(testPoint);

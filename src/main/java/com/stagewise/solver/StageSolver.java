@@ -1,10 +1,7 @@
 package com.stagewise.solver;
 
 import com.stagewise.circuit.Stage;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -18,8 +15,8 @@ import java.util.Optional;
  * lies within its limits and every clamped section's demand lies beyond the limit it is clamped at.
  * The search starts with every section linear and moves each inconsistent one towards the limit its
  * demand points at; where strong positive feedback is present (or the search cycles) every
- * combination of states is tried and the stable consistent ones are kept. See {@link CompiledStage}
- * for the fast form used by the diagnosis.
+ * combination of states is tried and the stable consistent ones are kept. See {@link Analysis} for
+ * the fast form used by the diagnosis.
  */
 public final class StageSolver {
   private StageSolver() {}
@@ -36,19 +33,7 @@ public final class StageSolver {
    *     consistent state; never NaN voltages
    */
   public static SolveResult solve(Stage stage, Conditions conditions) {
-    CompiledStage compiled = CompiledStage.of(stage, conditions);
-    CompiledStage.Outcome outcome = compiled.solve();
-    if (outcome instanceof CompiledStage.Floats f) {
-      return new SolveResult.Floating(f.nets());
-    }
-    if (outcome instanceof CompiledStage.Unsettled u) {
-      return new SolveResult.NoConsistentState(u.section(), u.reason());
-    }
-    List<OperatingPoint> points = new ArrayList<>();
-    for (CompiledStage.State state : ((CompiledStage.Settled) outcome).states()) {
-      points.add(pointOf(stage, compiled, state));
-    }
-    return new SolveResult.Solved(points);
+    return Analysis.of(stage, conditions).solve();
   }
 
   /**
@@ -64,29 +49,7 @@ public final class StageSolver {
 
   /** As {@link #ac(Stage, OperatingPoint)}, under the given conditions. */
   public static Optional<AcSolution> ac(Stage stage, Conditions conditions, OperatingPoint point) {
-    CompiledStage compiled = CompiledStage.of(stage, conditions);
-    if (compiled.acHz() == 0) {
-      return Optional.empty();
-    }
-    List<String> nets = compiled.nets();
-    double[] volts = new double[nets.size()];
-    for (int i = 0; i < volts.length; i++) {
-      volts[i] = point.nets().get(nets.get(i));
-    }
-    String[] refs = compiled.sectionRefs();
-    SectionState[] states = new SectionState[refs.length];
-    for (int k = 0; k < refs.length; k++) {
-      states[k] = point.states().get(refs[k]);
-    }
-    double[][] ac = compiled.ac(new CompiledStage.State(volts, states));
-    if (ac == null) {
-      return Optional.empty();
-    }
-    Map<String, Phasor> phasors = new LinkedHashMap<>();
-    for (int i = 0; i < volts.length; i++) {
-      phasors.put(nets.get(i), new Phasor(ac[0][i], ac[1][i]));
-    }
-    return Optional.of(new AcSolution(compiled.acHz(), phasors));
+    return Analysis.of(stage, conditions).ac(point);
   }
 
   /**
@@ -94,28 +57,6 @@ public final class StageSolver {
    * stability filter. Exposed for cross-checks of the search; slow for many sections.
    */
   public static List<OperatingPoint> enumerateConsistent(Stage stage, Conditions conditions) {
-    CompiledStage compiled = CompiledStage.of(stage, conditions);
-    List<OperatingPoint> points = new ArrayList<>();
-    for (CompiledStage.State state : compiled.enumerateConsistent()) {
-      points.add(pointOf(stage, compiled, state));
-    }
-    return points;
-  }
-
-  private static OperatingPoint pointOf(
-      Stage stage, CompiledStage compiled, CompiledStage.State state) {
-    Map<String, Double> nets = new LinkedHashMap<>();
-    List<String> names = compiled.nets();
-    for (int i = 0; i < names.size(); i++) {
-      nets.put(names.get(i), state.volts()[i]);
-    }
-    Map<String, Double> pins = new LinkedHashMap<>();
-    stage.pinNets().forEach((pin, net) -> pins.put(pin, nets.get(net)));
-    Map<String, SectionState> sectionStates = new LinkedHashMap<>();
-    String[] refs = compiled.sectionRefs();
-    for (int k = 0; k < refs.length; k++) {
-      sectionStates.put(refs[k], state.states()[k]);
-    }
-    return new OperatingPoint(nets, pins, sectionStates);
+    return Analysis.of(stage, conditions).enumerateConsistent();
   }
 }

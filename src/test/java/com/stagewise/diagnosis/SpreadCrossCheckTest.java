@@ -7,9 +7,13 @@ import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.template.Templates;
-import com.stagewise.solver.CompiledStage;
+import com.stagewise.solver.Analysis;
+import com.stagewise.solver.Change;
 import com.stagewise.solver.Conditions;
 import com.stagewise.solver.DeviceParams;
+import com.stagewise.solver.Probe;
+import com.stagewise.solver.SolveResult;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -58,26 +62,28 @@ class SpreadCrossCheckTest {
 
   /** Standard deviation at each test point over random units: every parameter uniform in range. */
   static double[] monteCarloSd(Stage stage, TestPoints points, Random random) {
-    CompiledStage cs = CompiledStage.of(stage, Conditions.NOMINAL);
+    Analysis base = Analysis.of(stage, Conditions.NOMINAL);
     List<Part> parts = stage.parts();
     double[] sum = new double[points.size];
     double[] squares = new double[points.size];
-    int[] at = new int[points.size];
     var pins = stage.pinNets();
+    List<String> nets = new ArrayList<>();
     for (int i = 0; i < points.size; i++) {
-      at[i] = cs.net(points.isPin(i) ? pins.get(points.names.get(i)) : points.names.get(i));
+      nets.add(points.isPin(i) ? pins.get(points.names.get(i)) : points.names.get(i));
     }
+    Probe probe = base.probe(nets);
     int n = 0;
     for (int s = 0; s < SAMPLES; s++) {
-      for (int p = 0; p < parts.size(); p++) {
-        cs.setPartValue(
-            p,
-            parts.get(p).value() * (1 + parts.get(p).tolerance() * (2 * random.nextDouble() - 1)));
+      List<Change> changes = new ArrayList<>();
+      for (Part part : parts) {
+        changes.add(
+            new Change.PartValue(
+                part.ref(), part.value() * (1 + part.tolerance() * (2 * random.nextDouble() - 1))));
       }
       for (Rail rail : stage.rails()) {
-        cs.setDrivenVolts(
-            cs.net(rail.net()),
-            rail.volts() * (1 + rail.tolerance() * (2 * random.nextDouble() - 1)));
+        changes.add(
+            new Change.DrivenVolts(
+                rail.net(), rail.volts() * (1 + rail.tolerance() * (2 * random.nextDouble() - 1))));
       }
       for (int k = 0; k < stage.amplifiers().size(); k++) {
         DeviceClass type = stage.amplifiers().get(k).deviceClass();
@@ -93,14 +99,16 @@ class SpreadCrossCheckTest {
         double high =
             type.headroomHigh().low()
                 + (type.headroomHigh().high() - type.headroomHigh().low()) * random.nextDouble();
-        cs.setDevice(
-            k, new DeviceParams(gain, offset, bias, bias, type.outputResistance(), low, high));
+        changes.add(
+            new Change.Device(
+                stage.amplifiers().get(k).ref(),
+                new DeviceParams(gain, offset, bias, bias, type.outputResistance(), low, high)));
       }
-      if (cs.solve() instanceof CompiledStage.Settled settled) {
-        double[] v = settled.states().get(0).volts();
+      if (base.with(changes.toArray(new Change[0])).solve() instanceof SolveResult.Solved solved) {
+        double[] v = probe.dc(solved.primary());
         for (int i = 0; i < points.size; i++) {
-          sum[i] += v[at[i]];
-          squares[i] += v[at[i]] * v[at[i]];
+          sum[i] += v[i];
+          squares[i] += v[i] * v[i];
         }
         n++;
       }
