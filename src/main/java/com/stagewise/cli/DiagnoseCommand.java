@@ -8,18 +8,30 @@ import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.diagnosis.Observation;
 import com.stagewise.diagnosis.ProbeAdvice;
 import com.stagewise.diagnosis.Suspect;
+import com.stagewise.interchange.BatchLine;
 import com.stagewise.interchange.DiagnosisJson;
 import com.stagewise.interchange.ReadingsSheet;
 import com.stagewise.interchange.StageSheet;
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
-/** {@code stagewise diagnose --stage S --readings R [--json] [--top N]}. */
+/**
+ * {@code stagewise diagnose --stage S --readings R [--json] [--top N]}, or {@code diagnose --batch
+ * FILE.jsonl} for many cases in one run.
+ */
 @Command(
     name = "diagnose",
     mixinStandardHelpOptions = true,
@@ -27,19 +39,20 @@ import picocli.CommandLine.Spec;
 final class DiagnoseCommand implements Callable<Integer> {
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
-  @Option(
-      names = "--stage",
-      required = true,
-      paramLabel = "FILE",
-      description = "the stage sheet (*.stage.json)")
+  @Option(names = "--stage", paramLabel = "FILE", description = "the stage sheet (*.stage.json)")
   Path stageFile;
 
-  @Option(
-      names = "--readings",
-      required = true,
-      paramLabel = "FILE",
-      description = "the readings (*.readings.json)")
+  @Option(names = "--readings", paramLabel = "FILE", description = "the readings (*.readings.json)")
   Path readingsFile;
+
+  @Option(
+      names = "--batch",
+      paramLabel = "FILE",
+      description =
+          "diagnose many cases: one {\"stage\": PATH-or-sheet, \"readings\": PATH-or-readings}"
+              + " a line (paths relative to FILE's folder); prints one diagnosis JSON a line, or"
+              + " {\"error\": ...} for a bad line, and exits 2 if any line was bad")
+  Path batchFile;
 
   @Option(names = "--json", description = "print the diagnosis document instead of a table")
   boolean json;
@@ -57,6 +70,19 @@ final class DiagnoseCommand implements Callable<Integer> {
       throw new InvalidInputException(
           "command line", "--top", "the number of suspects (" + top + ") must be 1 or more");
     }
+    if (batchFile != null) {
+      if (stageFile != null || readingsFile != null) {
+        throw new InvalidInputException(
+            "command line", "--batch", "give either --batch or --stage and --readings, not both");
+      }
+      return batch();
+    }
+    if (stageFile == null || readingsFile == null) {
+      throw new InvalidInputException(
+          "command line",
+          stageFile == null ? "--stage" : "--readings",
+          "a file is needed (--stage FILE --readings FILE), or --batch FILE");
+    }
     Stage stage = StageSheet.read(stageFile);
     ReadingSet readings = ReadingsSheet.read(readingsFile, stage);
     Diagnosis diagnosis;
@@ -73,6 +99,52 @@ final class DiagnoseCommand implements Callable<Integer> {
     }
     out.flush();
     return ExitCode.OK;
+  }
+
+  /**
+   * Diagnoses every line of the batch file in this one process; a diagnoser is kept per stage, so
+   * that many cases on one stage compute its predictions once.
+   */
+  private int batch() {
+    List<String> lines;
+    try {
+      lines = Files.readAllLines(batchFile, StandardCharsets.UTF_8);
+    } catch (NoSuchFileException e) {
+      throw new InvalidInputException(batchFile.toString(), "", "the batch file does not exist");
+    } catch (IOException | UncheckedIOException e) {
+      throw new InvalidInputException(
+          batchFile.toString(),
+          "",
+          "the batch file cannot be read as UTF-8 text: " + e.getMessage());
+    }
+    Path folder = batchFile.toAbsolutePath().getParent();
+    Map<String, Stage> stages = new HashMap<>();
+    Map<Stage, Diagnoser> diagnosers = new HashMap<>();
+    PrintWriter out = spec.commandLine().getOut();
+    boolean bad = false;
+    for (int i = 0; i < lines.size(); i++) {
+      String line = lines.get(i);
+      if (line.isBlank()) {
+        continue;
+      }
+      String source = batchFile + " line " + (i + 1);
+      try {
+        BatchLine read = BatchLine.read(line, source, folder, stages);
+        Diagnoser diagnoser = diagnosers.computeIfAbsent(read.stage(), Diagnoser::of);
+        Diagnosis diagnosis;
+        try {
+          diagnosis = diagnoser.diagnose(read.readings(), top);
+        } catch (InvalidInputException e) {
+          throw e.inSource(read.readingsSource());
+        }
+        out.println(DiagnosisJson.writeLine(diagnosis));
+      } catch (InvalidInputException e) {
+        bad = true;
+        out.println(DiagnosisJson.errorLine(e.getMessage()));
+      }
+    }
+    out.flush();
+    return bad ? ExitCode.BAD_INPUT : ExitCode.OK;
   }
 
   static void print(PrintWriter out, Diagnosis d) {

@@ -84,6 +84,18 @@ public final class DiagnosisJson {
     return JsonText.document(fields);
   }
 
+  /** Returns the JSON text of a diagnosis on one line, for a line of a batch's output. */
+  public static String writeLine(Diagnosis diagnosis) {
+    return JsonText.compact(write(diagnosis));
+  }
+
+  /** Returns {@code {"error": message}} on one line, for a bad line of a batch. */
+  public static String errorLine(String message) {
+    com.fasterxml.jackson.databind.node.ObjectNode node = JsonText.object();
+    node.put("error", message);
+    return JsonText.compact(node.toString());
+  }
+
   /** Rounds to {@code digits} significant digits, so files do not carry noise digits. */
   private static double round(double value, int digits) {
     if (value == 0 || !Double.isFinite(value)) {

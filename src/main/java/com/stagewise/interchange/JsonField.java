@@ -127,6 +127,17 @@ public final class JsonField {
     return new InvalidInputException(source, at, problem);
   }
 
+  /** Returns whether this field is a JSON string. */
+  public boolean isText() {
+    return node.isTextual();
+  }
+
+  /** Returns this field's JSON text, for reading an embedded document on its own. */
+  public String json() {
+    return node.toString();
+  }
+
+  /** Returns the file or screen named in messages. */
   public String source() {
     return source;
   }

@@ -76,6 +76,15 @@ final class JsonText {
     return JsonNodeFactory.instance.numberNode(value);
   }
 
+  /** Returns a JSON text printed on one line (no line breaks inside). */
+  static String compact(String json) {
+    try {
+      return MAPPER.writeValueAsString(MAPPER.readTree(json));
+    } catch (JsonProcessingException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+
   /** Returns one node printed on one line. */
   static String oneLine(JsonNode node) {
     try {

@@ -21,10 +21,31 @@ final class CompiledStage implements Analysis {
   /** Consistency slack in volts, far below any meter's resolution. */
   private static final double SLACK = 1e-9;
 
-  /** Iterations of the active-set search before falling back to enumeration. */
-  private static final int MAX_ITERATIONS = 40;
+  /**
+   * Iterations of the active-set search per section: each section moves at most from linear to a
+   * clamp and back a few times before the search settles or repeats itself.
+   */
+  private static final int ITERATIONS_PER_SECTION = 4;
 
-  /** Above this many free sections, enumeration of every state combination is refused. */
+  /**
+   * Most bistable sections (strong positive feedback) whose every combination of states is tried:
+   * 3^6 = 729 searches. Beyond it the search keeps the state it reaches from all outputs linear and
+   * says so.
+   */
+  static final int MAX_BISTABLE_SECTIONS = 6;
+
+  /** Said when a stage has more bistable sections than the search tries exhaustively. */
+  static final String TOO_MANY_BISTABLE =
+      "this stage has too many bistable sections to search exhaustively (more than "
+          + MAX_BISTABLE_SECTIONS
+          + "); results assume each of them at the limit its output leans towards with every"
+          + " output linear";
+
+  /**
+   * Free sections up to which a search that did not settle falls back to trying every combination
+   * of states (3^9 = 19,683 solves); only a search that cycles although no section is bistable gets
+   * there.
+   */
   private static final int MAX_ENUMERATED_SECTIONS = 9;
 
   private final Network network;
@@ -76,10 +97,11 @@ final class CompiledStage implements Analysis {
       return new SolveResult.NoConsistentState(u.section, u.reason);
     }
     List<OperatingPoint> points = new ArrayList<>();
-    for (State state : ((Settled) outcome).states) {
+    Settled settled = (Settled) outcome;
+    for (State state : settled.states) {
       points.add(pointOf(state));
     }
-    return new SolveResult.Solved(points);
+    return new SolveResult.Solved(points, settled.notes);
   }
 
   @Override
@@ -297,12 +319,25 @@ final class CompiledStage implements Analysis {
   /** The outcome of a solve in index form. */
   private sealed interface Outcome permits Settled, Floats, Unsettled {}
 
-  private record Settled(List<State> states) implements Outcome {}
+  private record Settled(List<State> states, List<String> notes) implements Outcome {
+    Settled(List<State> states) {
+      this(states, List.of());
+    }
+  }
 
   private record Floats(List<String> nets) implements Outcome {}
 
   private record Unsettled(String section, String reason) implements Outcome {}
 
+  /**
+   * The saturation search. From all outputs linear, an active-set search moves each inconsistent
+   * section towards the limit its demand points at (a clamped one first back to linear). Sections
+   * with strong positive feedback (bistable: their linear state is unstable) are not moved by the
+   * search; instead every combination of their states is tried, each with the active-set search for
+   * the others, and every stable consistent result is kept (a Schmitt trigger has two). More than
+   * {@link #MAX_BISTABLE_SECTIONS} bistable sections are not tried exhaustively: the state reached
+   * from all outputs linear is kept, with a note.
+   */
   private Outcome solveStates() {
     int n = network.sections.length;
     SectionState[] start = new SectionState[n];
@@ -317,13 +352,80 @@ final class CompiledStage implements Analysis {
       }
       return enumerate(true);
     }
-    // Strong positive feedback shows as an unstable linear section at the all-linear start; such a
-    // stage may have several stable states, so every combination is tried.
-    if (!allLinearStable(start, first)) {
-      return enumerate(true);
+    boolean[] bistable = new boolean[n];
+    int count = 0;
+    for (int k = 0; k < n; k++) {
+      if (network.forced[k] == null && !first.stable(network, k)) {
+        bistable[k] = true;
+        count++;
+      }
     }
-    State found = activeSetSearch(start, first);
-    return found != null ? new Settled(List.of(found)) : enumerate(true);
+    if (count == 0) {
+      State found = activeSetSearch(start, first, bistable);
+      if (found != null) {
+        return new Settled(List.of(found));
+      }
+      return fallBack(start);
+    }
+    if (count > MAX_BISTABLE_SECTIONS) {
+      SectionState[] leaning = start.clone();
+      for (int k = 0; k < n; k++) {
+        if (bistable[k]) {
+          double[] limits = network.limits(first.x(), k);
+          boolean up = network.source(first.x(), k) >= (limits[0] + limits[1]) / 2;
+          leaning[k] = up ? SectionState.HIGH : SectionState.LOW;
+        }
+      }
+      State found = activeSetSearch(leaning, null, new boolean[n], bistable);
+      return found != null
+          ? new Settled(List.of(found), List.of(TOO_MANY_BISTABLE))
+          : new Unsettled("", TOO_MANY_BISTABLE + ", and no consistent state was found that way");
+    }
+    List<State> found = new ArrayList<>();
+    Set<String> seen = new HashSet<>();
+    forEachCombination(
+        start,
+        bistable,
+        states -> {
+          State state = activeSetSearch(states, null, bistable);
+          if (state != null && seen.add(Arrays.toString(state.states))) {
+            found.add(state);
+          }
+        });
+    if (found.isEmpty()) {
+      return fallBack(start);
+    }
+    // In the order of a full enumeration (first section fastest, high before low before linear),
+    // so that the first state is the same whichever way it was found.
+    found.sort(CompiledStage::enumerationOrder);
+    return new Settled(found);
+  }
+
+  /**
+   * When the search does not settle although no section is bistable: every combination of states
+   * for a stage of a few sections, else no consistent state with the reason.
+   */
+  private Outcome fallBack(SectionState[] start) {
+    return enumerate(true);
+  }
+
+  private static int enumerationOrder(State a, State b) {
+    for (int k = a.states.length - 1; k >= 0; k--) {
+      int c = Integer.compare(rank(a.states[k]), rank(b.states[k]));
+      if (c != 0) {
+        return c;
+      }
+    }
+    return 0;
+  }
+
+  private static int rank(SectionState state) {
+    return switch (state) {
+      case HIGH -> 0;
+      case LOW -> 1;
+      case LINEAR -> 2;
+      case DEAD -> 3;
+    };
   }
 
   private State solveNear(SectionState[] near) {
@@ -332,7 +434,7 @@ final class CompiledStage implements Analysis {
     if (first == null || !allLinearStable(start, first)) {
       return null;
     }
-    return activeSetSearch(start, first);
+    return activeSetSearch(start, first, new boolean[start.length]);
   }
 
   /** A state's factorised system: one step of x ← x + M⁻¹·(b − M'·x) with the old factors. */
@@ -397,16 +499,33 @@ final class CompiledStage implements Analysis {
 
   /**
    * Starting from {@code start}, moves each section whose state is inconsistent to the state its
-   * demand points at, until nothing changes. Converges in a few steps for negative feedback; a
-   * repeated combination, or an end state with an unstable linear section, ends the search without
-   * a result (null).
+   * demand points at, until nothing changes; sections marked {@code fixed} keep their state. A
+   * clamped output whose demand has left its limit steps back to linear first, never straight to
+   * the opposite clamp: jumping over makes two coupled sections swap clamps for ever. Converges in
+   * a few steps for negative feedback; a repeated combination, or an end state that is not
+   * consistent or has an unstable linear section, ends the search without a result (null).
+   *
+   * @param first the solved system of {@code start}, or null to solve it here
    */
-  private State activeSetSearch(SectionState[] start, Network.DcSystem first) {
+  private State activeSetSearch(SectionState[] start, Network.DcSystem first, boolean[] fixed) {
+    return activeSetSearch(start, first, fixed, null);
+  }
+
+  /**
+   * As {@link #activeSetSearch(SectionState[], Network.DcSystem, boolean[])}, for the sections
+   * marked {@code bistable} (may be null) the other way round: positive feedback makes a clamped
+   * output whose demand has left its limit jump to the opposite clamp, and a linear one found
+   * unstable where the search comes to rest is moved to the limit its output leans towards (used
+   * only where the stage has too many bistable sections to try each combination).
+   */
+  private State activeSetSearch(
+      SectionState[] start, Network.DcSystem first, boolean[] fixed, boolean[] bistable) {
     int n = network.sections.length;
     SectionState[] states = start.clone();
     Set<String> seen = new HashSet<>();
     Network.DcSystem system = first;
-    for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+    int iterations = ITERATIONS_PER_SECTION * n + 8;
+    for (int iteration = 0; iteration < iterations; iteration++) {
       if (!seen.add(Arrays.toString(states))) {
         return null;
       }
@@ -419,19 +538,35 @@ final class CompiledStage implements Analysis {
       double[] x = system.x();
       boolean changed = false;
       for (int k = 0; k < n; k++) {
-        if (network.forced[k] != null) {
+        if (network.forced[k] != null || fixed[k]) {
           continue;
         }
         SectionState next = preferredState(x, k, states[k]);
+        if (bistable != null && bistable[k] && next == SectionState.LINEAR) {
+          next = states[k] == SectionState.HIGH ? SectionState.LOW : SectionState.HIGH;
+        }
         if (next != states[k]) {
           states[k] = next;
           changed = true;
         }
       }
+      if (!changed && bistable != null) {
+        for (int k = 0; k < n; k++) {
+          if (network.forced[k] == null
+              && !fixed[k]
+              && states[k] == SectionState.LINEAR
+              && !system.stable(network, k)) {
+            double[] limits = network.limits(x, k);
+            boolean up = network.source(x, k) >= (limits[0] + limits[1]) / 2;
+            states[k] = up ? SectionState.HIGH : SectionState.LOW;
+            changed = true;
+          }
+        }
+      }
       if (!changed) {
-        // The start state was checked for stability already; a moved one is checked here.
-        boolean stable = iteration == 0 || allLinearStable(states, system);
-        return stable ? stateOf(states, x) : null;
+        return isConsistent(states, x) && allLinearStable(states, system)
+            ? stateOf(states, x)
+            : null;
       }
       system = null;
     }
@@ -463,10 +598,10 @@ final class CompiledStage implements Analysis {
       return now;
     }
     if (now == SectionState.HIGH && demand < limits[1] - SLACK) {
-      return demand < limits[0] - SLACK ? SectionState.LOW : SectionState.LINEAR;
+      return SectionState.LINEAR;
     }
     if (now == SectionState.LOW && demand > limits[0] + SLACK) {
-      return demand > limits[1] + SLACK ? SectionState.HIGH : SectionState.LINEAR;
+      return SectionState.LINEAR;
     }
     return now;
   }
@@ -559,16 +694,32 @@ final class CompiledStage implements Analysis {
   /** Calls {@code action} with every combination of states of the free sections (HIGH first). */
   private void forEachCombination(Consumer<SectionState[]> action) {
     int n = network.sections.length;
+    SectionState[] start = new SectionState[n];
+    boolean[] all = new boolean[n];
+    for (int k = 0; k < n; k++) {
+      start[k] = network.forced[k] != null ? network.forced[k] : SectionState.LINEAR;
+      all[k] = network.forced[k] == null;
+    }
+    forEachCombination(start, all, action);
+  }
+
+  /**
+   * Calls {@code action} with {@code start} varied over every combination of states of the sections
+   * marked in {@code vary} (HIGH first, the first section fastest).
+   */
+  private void forEachCombination(
+      SectionState[] start, boolean[] vary, Consumer<SectionState[]> action) {
+    int n = network.sections.length;
     SectionState[] choices = {SectionState.HIGH, SectionState.LOW, SectionState.LINEAR};
     int[] digit = new int[n];
     while (true) {
       SectionState[] states = new SectionState[n];
       for (int k = 0; k < n; k++) {
-        states[k] = network.forced[k] != null ? network.forced[k] : choices[digit[k]];
+        states[k] = vary[k] ? choices[digit[k]] : start[k];
       }
       action.accept(states);
       int k = 0;
-      while (k < n && (network.forced[k] != null || ++digit[k] == choices.length)) {
+      while (k < n && (!vary[k] || ++digit[k] == choices.length)) {
         digit[k] = 0;
         k++;
       }

@@ -17,14 +17,21 @@ public sealed interface SolveResult
    * first section high.
    *
    * @param points the stable, consistent operating points, never empty
+   * @param notes what the search assumed, in plain words (empty when it tried everything)
    */
-  record Solved(List<OperatingPoint> points) implements SolveResult {
-    /** Copies the list and checks that it is not empty. */
+  record Solved(List<OperatingPoint> points, List<String> notes) implements SolveResult {
+    /** Copies the lists and checks that there is a point. */
     public Solved {
       points = List.copyOf(points);
+      notes = List.copyOf(notes);
       if (points.isEmpty()) {
         throw new IllegalArgumentException("a solved stage has at least one operating point");
       }
+    }
+
+    /** A solve that tried every state it had to: no notes. */
+    public Solved(List<OperatingPoint> points) {
+      this(points, List.of());
     }
 
     /** Returns the first operating point. */

@@ -142,4 +142,62 @@ class DiagnoseCommandTest {
             "0");
     StagewiseCommandTest.assertBadInput(run, "--top");
   }
+
+  @Test
+  void batch_givesOneDiagnosisALine_sameAsTheSingleCommand_andAnErrorLineForBadInput()
+      throws Exception {
+    // DESIGN.md, "Command line": one {"stage", "readings"} a line, one diagnosis a line out, or
+    // {"error": ...} for a bad line while the others still run; exit 2 if any line was bad.
+    Path stage = Path.of("data", "stages", "larkspur-sm8-line-driver.stage.json").toAbsolutePath();
+    Path readings =
+        Path.of("data", "readings", "larkspur-sm8-line-driver.no-feedback.readings.json")
+            .toAbsolutePath();
+    String embedded = new ObjectMapper().readTree(readings.toFile()).toString();
+    Path batch = dir.resolve("cases.jsonl");
+    Files.writeString(
+        batch,
+        String.join(
+                "\n",
+                "{\"stage\": \"" + stage + "\", \"readings\": \"" + readings + "\"}",
+                "{\"stage\": \"" + stage + "\", \"readings\": " + embedded + "}",
+                "{\"stage\": \"missing.stage.json\", \"readings\": \"" + readings + "\"}",
+                "not json at all",
+                "",
+                "{\"stage\": \"" + stage + "\", \"readings\": \"" + readings + "\", \"extra\": 1}")
+            + "\n");
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run("diagnose", "--batch", batch.toString(), "--top", "4");
+    assertThat(run.code()).isEqualTo(ExitCode.BAD_INPUT);
+    String[] lines = run.out().split("\n");
+    assertThat(lines).hasSize(5);
+    StagewiseCommandTest.Run single =
+        StagewiseCommandTest.run(
+            "diagnose",
+            "--stage",
+            stage.toString(),
+            "--readings",
+            readings.toString(),
+            "--json",
+            "--top",
+            "4");
+    ObjectMapper mapper = new ObjectMapper();
+    JsonNode expected = mapper.readTree(single.out());
+    assertThat(mapper.readTree(lines[0])).isEqualTo(expected);
+    assertThat(mapper.readTree(lines[1])).isEqualTo(expected);
+    assertThat(mapper.readTree(lines[2]).get("error").asText()).contains("missing.stage.json");
+    assertThat(mapper.readTree(lines[3]).get("error").asText()).contains("line 4");
+    assertThat(mapper.readTree(lines[4]).get("error").asText()).contains("extra");
+    assertThat(run.err()).doesNotContain("Exception");
+  }
+
+  @Test
+  void batch_withStageToo_isRefused() throws Exception {
+    Path batch = dir.resolve("cases.jsonl");
+    Files.writeString(batch, "");
+    StagewiseCommandTest.Run run =
+        StagewiseCommandTest.run(
+            "diagnose", "--batch", batch.toString(), "--stage", "x.stage.json");
+    assertThat(run.code()).isEqualTo(ExitCode.BAD_INPUT);
+    assertThat(run.err()).contains("--batch");
+  }
 }
