@@ -7,10 +7,12 @@ import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.template.Templates;
 import com.stagewise.diagnosis.Diagnoser;
 import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.interchange.StageSheet;
 import com.stagewise.reference.SpiceBatch;
 import com.stagewise.solver.OperatingPoint;
 import com.stagewise.solver.SolveResult;
 import com.stagewise.solver.StageSolver;
+import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,6 +24,7 @@ import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
@@ -44,6 +47,10 @@ import org.openjdk.jmh.annotations.Warmup;
 @Fork(1)
 @Threads(1)
 public class DiagnosisBenchmark {
+  /** A template's name, or a test sheet's name under src/test/resources/stages. */
+  @Param({"instrumentation", "chain-12", "chain-7-bistable", "chain-9-bistable"})
+  public String stageName;
+
   private Stage stage;
   private ReadingSet allPins;
   private ReadingSet allButOne;
@@ -51,7 +58,11 @@ public class DiagnosisBenchmark {
 
   @Setup(Level.Trial)
   public void setUp() {
-    stage = Templates.named("instrumentation").build();
+    stage =
+        Templates.find(stageName).isPresent()
+            ? Templates.named(stageName).build()
+            : StageSheet.read(
+                Path.of("src", "test", "resources", "stages", stageName + ".stage.json"));
     SolveResult.Solved solved =
         (SolveResult.Solved)
             StageSolver.solve(
