@@ -135,7 +135,9 @@ public final class BenchWindow {
    * case" to "Open …".
    */
   private static void keepButtonsWhole(Node node) {
-    if (node instanceof javafx.scene.control.ButtonBase button) {
+    if (node instanceof javafx.scene.control.ButtonBase button
+        && !button.getStyleClass().contains("key")) {
+      // Keypad keys may narrow to the 48 px touch minimum instead (widgets.css).
       button.setMinWidth(Region.USE_PREF_SIZE);
     }
     if (node instanceof javafx.scene.control.Label label) {

@@ -59,7 +59,9 @@ public final class StartView {
     left.getChildren().add(addButton);
     HBox.setHgrow(right, Priority.ALWAYS);
     left.setPrefWidth(640);
-    left.setMinWidth(600);
+    // Room for the keypad at the 48 px touch minimum per key, so that a 1024 px window keeps the
+    // case column beside it.
+    left.setMinWidth(540);
     root.getChildren().addAll(left, right);
   }
 
