@@ -347,6 +347,15 @@ class BenchFlowTest {
             window.setHeight(size[1]);
             return null;
           });
+      // The window system applies a new size asynchronously: wait until the scene has it.
+      WaitForAsyncUtils.waitFor(
+          30,
+          TimeUnit.SECONDS,
+          () ->
+              fx(
+                  () ->
+                      window.getScene().getWidth() == size[0]
+                          && window.getScene().getHeight() == size[1]));
       WaitForAsyncUtils.waitForFxEvents();
       fx(
           () -> {
@@ -375,6 +384,8 @@ class BenchFlowTest {
           window.setHeight(BenchApp.HEIGHT);
           return null;
         });
+    WaitForAsyncUtils.waitFor(
+        30, TimeUnit.SECONDS, () -> fx(() -> window.getScene().getWidth() == BenchApp.WIDTH));
     WaitForAsyncUtils.waitForFxEvents();
   }
 
