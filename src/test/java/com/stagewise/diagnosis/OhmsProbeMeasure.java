@@ -1,0 +1,170 @@
+package com.stagewise.diagnosis;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Part;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
+import com.stagewise.solver.PowerOff;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.SplittableRandom;
+import java.util.stream.Stream;
+
+/**
+ * Measures, on the fault truth set, how many probes it takes to isolate the true fault when
+ * following {@code nextProbes} from no readings, with and without power-off checks allowed. Run by
+ * hand (it prints a table; not a unit test): {@code java -cp …
+ * com.stagewise.diagnosis.OhmsProbeMeasure [every-Nth-case]}.
+ *
+ * <p>Volts readings come from the truth set (ngspice, meter error as drawn there). Ohms readings
+ * are computed for the simulated unit (its drawn part values, the fault applied as the meter sees
+ * it, the drifted value as simulated) by {@link PowerOff}, which agrees with ngspice within 0.1 %
+ * on every fault and pair of nets of these stages ({@code PowerOffReferenceTest}); the meter's
+ * error is drawn uniformly within ±(0.8 % + 3 counts) and rounded to the range's resolution, as the
+ * truth set does for volts; beyond 60 MΩ the meter shows OL.
+ */
+public final class OhmsProbeMeasure {
+  private static final int MAX_PROBES = 3;
+
+  private OhmsProbeMeasure() {}
+
+  public static void main(String[] args) throws Exception {
+    int every = args.length > 0 ? Integer.parseInt(args[0]) : 2;
+    ObjectMapper mapper = new ObjectMapper();
+    int cases = 0;
+    int[] within = new int[2];
+    long[] probes = new long[2];
+    int[] isolated = new int[2];
+    SplittableRandom rnd = new SplittableRandom(20261202L);
+    List<Path> files;
+    try (Stream<Path> s = Files.list(TruthCases.FOLDER)) {
+      files = s.filter(f -> f.toString().endsWith(".json")).sorted().toList();
+    }
+    List<TruthCases.StageCases> truth = TruthCases.load();
+    for (int f = 0; f < files.size(); f++) {
+      JsonNode root = mapper.readTree(files.get(f).toFile());
+      TruthCases.StageCases stage = truth.get(f);
+      Diagnoser diagnoser = Diagnoser.of(stage.stage());
+      JsonNode rawCases = root.get("cases");
+      for (int i = 0; i < stage.cases().size(); i += every) {
+        TruthCases.Case c = stage.cases().get(i);
+        if (c.fault().equals("healthy")) {
+          continue;
+        }
+        cases++;
+        JsonNode unit = rawCases.get(i).get("unit");
+        Stage unitStage = unitStage(stage.stage(), unit);
+        Fault fault =
+            Fault.parse(
+                c.fault(),
+                stage.stage().rails().stream()
+                    .map(r -> r.net())
+                    .collect(java.util.stream.Collectors.toSet()));
+        double value = unit.has("faultValue") ? unit.get("faultValue").asDouble() : Double.NaN;
+        PowerOff healthyUnit = PowerOff.of(unitStage);
+        PowerOff faulted = PowerOffFaults.faulted(unitStage, fault, value);
+        for (int mode = 0; mode < 2; mode++) {
+          boolean ohmsAllowed = mode == 1;
+          List<Reading> taken = new ArrayList<>();
+          List<Reading> available = new ArrayList<>(c.dc());
+          available.addAll(c.ac());
+          boolean done = false;
+          while (taken.size() <= 8) {
+            Diagnosis d = diagnoser.diagnose(new ReadingSet(stage.meter(), taken), 5);
+            Suspect first = d.suspects().get(0);
+            if (first.fault().equals(c.fault()) && first.group().size() == 1) {
+              done = true;
+              break;
+            }
+            Reading next = null;
+            for (ProbeAdvice advice : d.nextProbes()) {
+              if (advice.kind() == Reading.Kind.OHMS) {
+                if (ohmsAllowed) {
+                  double r =
+                      faulted.ohms(
+                          PowerOffFaults.onFaulted(healthyUnit, advice.at()),
+                          PowerOffFaults.onFaulted(healthyUnit, advice.to()));
+                  next = Reading.ohms(advice.at(), advice.to(), shown(rnd, stage.meter(), r));
+                  break;
+                }
+                continue;
+              }
+              next =
+                  available.stream()
+                      .filter(r -> r.at().equals(advice.at()) && r.kind() == advice.kind())
+                      .findFirst()
+                      .orElse(null);
+              if (next != null) {
+                available.remove(next);
+                break;
+              }
+            }
+            if (next == null) {
+              break;
+            }
+            taken.add(next);
+          }
+          if (done) {
+            isolated[mode]++;
+            probes[mode] += taken.size();
+            if (taken.size() <= MAX_PROBES) {
+              within[mode]++;
+            }
+          }
+        }
+      }
+      System.out.printf(
+          Locale.ROOT,
+          "%-50s cases %4d  within 3: volts %4d, with ohms %4d%n",
+          files.get(f).getFileName(),
+          cases,
+          within[0],
+          within[1]);
+    }
+    for (int mode = 0; mode < 2; mode++) {
+      System.out.printf(
+          Locale.ROOT,
+          "%s: %d faulty units; true fault first alone within %d probes in %d (%.1f %%);"
+              + " isolated at all in %d, mean %.2f probes%n",
+          mode == 0 ? "volts only" : "ohms allowed",
+          cases,
+          MAX_PROBES,
+          within[mode],
+          100.0 * within[mode] / cases,
+          isolated[mode],
+          isolated[mode] == 0 ? 0.0 : (double) probes[mode] / isolated[mode]);
+    }
+  }
+
+  private static Stage unitStage(Stage stage, JsonNode unit) {
+    List<Part> parts = new ArrayList<>();
+    for (Part p : stage.parts()) {
+      JsonNode v = unit.get("parts").get(p.ref());
+      parts.add(v == null ? p : p.withValue(v.asDouble()));
+    }
+    return stage.withParts(parts);
+  }
+
+  /** What the meter shows: OL beyond its top range, else the value with the error drawn. */
+  private static double shown(SplittableRandom rnd, MeterSpec meter, double ohms) {
+    if (!Double.isFinite(ohms) || ohms > meter.ohmsOverRange()) {
+      return Double.POSITIVE_INFINITY;
+    }
+    double u = meter.ohmsUncertainty(ohms);
+    double value = Math.max(0, ohms + u * (2 * rnd.nextDouble() - 1));
+    double step = meter.ohms().resolution(value, meter.displayCounts());
+    BigDecimal s = new BigDecimal(step, new MathContext(1));
+    double rounded =
+        new BigDecimal(value).divide(s, 0, RoundingMode.HALF_EVEN).multiply(s).doubleValue();
+    return rounded > meter.ohmsOverRange() ? Double.POSITIVE_INFINITY : rounded;
+  }
+}
