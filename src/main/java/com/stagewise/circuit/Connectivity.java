@@ -12,9 +12,9 @@ public final class Connectivity {
   /**
    * Returns the nets with no DC path to a driven net, in the stage's net order.
    *
-   * <p>DC paths run through resistors and from each section's output (a source behind its output
-   * resistance). Capacitors are open at DC, and op-amp inputs draw no current, so a net that only
-   * capacitors and inputs touch floats.
+   * <p>DC paths run through resistors, trimmers, junctions and from each section's output (a source
+   * behind its output resistance). Capacitors are open at DC, and op-amp inputs draw no current, so
+   * a net that only capacitors and inputs touch floats.
    */
   public static List<String> floatingNets(Stage stage) {
     return floatingNets(stage, java.util.Set.of());
@@ -32,8 +32,13 @@ public final class Connectivity {
       parent.put(net, stage.isDriven(net) ? driven : net);
     }
     for (Part part : stage.parts()) {
-      if (part.kind() == PartKind.RESISTOR) {
+      // Junctions conduct at DC too (forward, or through their leakage): a net that only a
+      // reverse-biased diode holds still has a defined voltage, as in ngspice.
+      if (part.kind() == PartKind.RESISTOR || part.kind().isJunction()) {
         union(parent, part.netA(), part.netB());
+      } else if (part.kind().isTrimmer()) {
+        union(parent, part.netA(), part.wiper());
+        union(parent, part.wiper(), part.netB());
       }
     }
     for (Amplifier amp : stage.amplifiers()) {

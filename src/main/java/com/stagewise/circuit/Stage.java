@@ -23,7 +23,7 @@ import java.util.function.UnaryOperator;
  * @param ground the reference net
  * @param rails the supply rails
  * @param inputs the test inputs
- * @param parts resistors and capacitors
+ * @param parts resistors, capacitors, diodes, zeners, LEDs, trimmers
  * @param amplifiers op-amp sections
  */
 public record Stage(
@@ -53,8 +53,7 @@ public record Stage(
     rails.forEach(rail -> nets.add(rail.net()));
     inputs.forEach(input -> nets.add(input.net()));
     for (Part part : parts) {
-      nets.add(part.netA());
-      nets.add(part.netB());
+      nets.addAll(part.nets());
     }
     for (Amplifier amp : amplifiers) {
       for (Terminal terminal : Terminal.values()) {

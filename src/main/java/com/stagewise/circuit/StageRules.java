@@ -88,7 +88,17 @@ public final class StageRules {
         problems.add(
             new Problem("parts[" + i + "].ref", "designator " + part.ref() + " is used twice"));
       }
-      if (part.netA().equals(part.netB())) {
+      if (part.kind().isTrimmer()
+          && part.netA().equals(part.wiper())
+          && part.netB().equals(part.wiper())) {
+        problems.add(
+            new Problem(
+                "parts[" + i + "].nets",
+                part.ref()
+                    + " has all three leads on net "
+                    + part.netA()
+                    + " (expected [end, wiper, end] on at least two nets)"));
+      } else if (part.netA().equals(part.netB()) && !part.kind().isTrimmer()) {
         problems.add(
             new Problem(
                 "parts[" + i + "].nets",
@@ -167,8 +177,9 @@ public final class StageRules {
   private static void checkNetUse(Stage stage, List<Problem> problems) {
     Map<String, Integer> uses = new HashMap<>();
     for (Part part : stage.parts()) {
-      uses.merge(part.netA(), 1, Integer::sum);
-      uses.merge(part.netB(), 1, Integer::sum);
+      for (String net : new java.util.HashSet<>(part.nets())) {
+        uses.merge(net, 1, Integer::sum);
+      }
     }
     for (Amplifier amp : stage.amplifiers()) {
       for (Terminal terminal : Terminal.values()) {
@@ -185,7 +196,7 @@ public final class StageRules {
     }
     for (int i = 0; i < stage.parts().size(); i++) {
       Part part = stage.parts().get(i);
-      for (String net : List.of(part.netA(), part.netB())) {
+      for (String net : part.nets()) {
         if (!stage.isDriven(net) && uses.getOrDefault(net, 0) == 1) {
           problems.add(
               new Problem(

@@ -6,7 +6,9 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.LedColour;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
@@ -15,6 +17,7 @@ import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
 import com.stagewise.circuit.Terminal;
 import com.stagewise.circuit.TestInput;
+import com.stagewise.circuit.value.ZenerMarking;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -26,7 +29,8 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Reads and writes stage sheets ({@code *.stage.json}, format {@code stagewise-stage}, version 1).
+ * Reads and writes stage sheets ({@code *.stage.json}, format {@code stagewise-stage}, versions 1
+ * and 2; version 2 adds diodes, zeners, LEDs, trimmers and potentiometers).
  *
  * <p>Reading is strict: an unknown key, a missing field, a wrong type, a bad or negative value, a
  * wrong format or a newer version, a section terminal on a net nothing else touches, and every
@@ -46,8 +50,11 @@ public final class StageSheet {
   /** The {@code format} of a stage sheet. */
   public static final String FORMAT = "stagewise-stage";
 
-  /** The newest version this program reads and the one it writes. */
-  public static final int VERSION = 1;
+  /**
+   * The newest version this program reads. A sheet is written as version 1 unless it holds a part
+   * kind of version 2 (diode, zener, LED, trimmer, potentiometer).
+   */
+  public static final int VERSION = 2;
 
   /** The file name ending of stage sheets. */
   public static final String SUFFIX = ".stage.json";
@@ -72,7 +79,16 @@ public final class StageSheet {
   private static final List<String> RAIL_KEYS = List.of("net", "volts", "tolerance");
   private static final List<String> INPUT_KEYS = List.of("net", "dc", "ac", "hz");
   private static final List<String> PART_KEYS =
-      List.of("ref", "kind", "value", "tolerance", "nets");
+      List.of("ref", "kind", "value", "tolerance", "nets", "class", "colour", "position", "sealed");
+
+  /** A trimmer's wiper position when the sheet gives none: mid-travel (DESIGN.md). */
+  static final double DEFAULT_POSITION = 0.5;
+
+  /**
+   * Tolerance of a trimmer's end-to-end value when the sheet gives none (20 %, common practice).
+   */
+  static final double DEFAULT_TRIMMER_TOLERANCE = 0.20;
+
   private static final List<String> AMPLIFIER_KEYS =
       List.of(
           "ref",
@@ -146,9 +162,10 @@ public final class StageSheet {
         root.optional("inputs").map(f -> f.elements("inputs")).orElse(List.of())) {
       inputs.add(input(field));
     }
+    int version = root.require("version", "the version number").integer("the version number");
     List<Part> parts = new ArrayList<>();
     for (JsonField field : root.require("parts", "an array of parts").elements("parts")) {
-      parts.add(part(field));
+      parts.add(part(field, version));
     }
     List<JsonField> ampFields =
         root.require("amplifiers", "an array of op-amp sections").elements("op-amp sections");
@@ -174,7 +191,7 @@ public final class StageSheet {
     Map<String, Object> fields = new LinkedHashMap<>();
     JsonNodeFactory nodes = JsonNodeFactory.instance;
     fields.put("format", nodes.textNode(FORMAT));
-    fields.put("version", nodes.numberNode(VERSION));
+    fields.put("version", nodes.numberNode(Part.newerKinds(stage.parts()).isEmpty() ? 1 : 2));
     fields.put("title", nodes.textNode(stage.title()));
     fields.put("board", nodes.textNode(stage.board()));
     fields.put("ground", nodes.textNode(stage.ground()));
@@ -200,14 +217,7 @@ public final class StageSheet {
     fields.put("inputs", inputs);
     List<JsonNode> parts = new ArrayList<>();
     for (Part part : stage.parts()) {
-      ArrayNode nets = nodes.arrayNode().add(part.netA()).add(part.netB());
-      parts.add(
-          JsonText.object()
-              .put("ref", part.ref())
-              .put("kind", part.kind().word())
-              .put("value", ValueText.format(part.value(), part.kind() == PartKind.RESISTOR))
-              .put("tolerance", ValueText.formatTolerance(part.tolerance()))
-              .set("nets", nets));
+      parts.add(partNode(part));
     }
     fields.put("parts", parts);
     List<JsonNode> amplifiers = new ArrayList<>();
@@ -305,39 +315,209 @@ public final class StageSheet {
     }
   }
 
-  private static Part part(JsonField field) {
+  private static ObjectNode partNode(Part part) {
+    ArrayNode nets = JsonNodeFactory.instance.arrayNode();
+    part.nets().forEach(nets::add);
+    ObjectNode node = JsonText.object().put("ref", part.ref()).put("kind", part.kind().word());
+    PartKind kind = part.kind();
+    if (kind == PartKind.DIODE) {
+      node.put("class", part.diodeClass().word());
+    } else if (kind == PartKind.LED) {
+      node.put("colour", part.colour().word());
+    } else if (kind == PartKind.ZENER) {
+      node.put("value", ZenerMarking.format(part.value()));
+    } else {
+      node.put("value", ValueText.format(part.value(), kind.isOhms()));
+    }
+    if (kind != PartKind.DIODE && kind != PartKind.LED) {
+      node.put("tolerance", ValueText.formatTolerance(part.tolerance()));
+    }
+    if (kind.isTrimmer()) {
+      node.set("position", JsonText.number(part.position()));
+      if (part.sealed()) {
+        node.put("sealed", true);
+      }
+    }
+    node.set("nets", nets);
+    return node;
+  }
+
+  private static Part part(JsonField field, int version) {
     field.object("a part", PART_KEYS);
     String ref = field.require("ref", "the designator, e.g. R1").name("the designator, e.g. R1");
     PartKind kind;
-    JsonField kindField = field.require("kind", "resistor or capacitor");
+    JsonField kindField = field.require("kind", PartKind.words());
     try {
-      kind = PartKind.of(kindField.name("resistor or capacitor"));
+      kind = PartKind.of(kindField.name(PartKind.words()));
     } catch (InvalidInputException e) {
       throw kindField.rewrap(e, "");
     }
-    String unit = kind == PartKind.RESISTOR ? "ohms, e.g. 4k7 or 470R" : "farads, e.g. 100n or 2u2";
-    double value =
-        field.require("value", "the value in " + unit).nonNegative("the value in " + unit);
-    double tolerance =
-        field
-            .optional("tolerance")
-            .map(JsonField::tolerance)
-            .orElse(
-                kind == PartKind.RESISTOR
-                    ? DEFAULT_RESISTOR_TOLERANCE
-                    : DEFAULT_CAPACITOR_TOLERANCE);
-    JsonField netsField =
-        field.require("nets", "the two nets the part joins, e.g. [\"IN\", \"SUM\"]");
-    List<JsonField> nets = netsField.elements("two net names");
-    if (nets.size() != 2) {
-      throw netsField.error("expected exactly two net names, found " + nets.size());
+    if (kind.sheetVersion() > version) {
+      throw kindField.error(
+          "kind "
+              + kind.word()
+              + " needs a stage sheet of version "
+              + kind.sheetVersion()
+              + " (expected \"version\": "
+              + kind.sheetVersion()
+              + " at the top of the sheet)");
     }
-    String netA = nets.get(0).name("a net name");
-    String netB = nets.get(1).name("a net name");
+    for (String key : List.of("class", "colour", "position", "sealed")) {
+      boolean allowed =
+          switch (key) {
+            case "class" -> kind == PartKind.DIODE;
+            case "colour" -> kind == PartKind.LED;
+            default -> kind.isTrimmer();
+          };
+      if (!allowed && field.optional(key).isPresent()) {
+        throw field
+            .optional(key)
+            .orElseThrow()
+            .error("a " + kind.word() + " has no \"" + key + "\" (remove it, or check the kind)");
+      }
+    }
+    if ((kind == PartKind.DIODE || kind == PartKind.LED) && field.optional("value").isPresent()) {
+      throw field
+          .optional("value")
+          .orElseThrow()
+          .error(
+              "a "
+                  + kind.word()
+                  + " has no value (its "
+                  + (kind == PartKind.LED ? "colour" : "class")
+                  + " sets its figures): remove \"value\"");
+    }
+    double value = 0;
+    if (kind == PartKind.ZENER) {
+      JsonField valueField =
+          field.require("value", "the zener's voltage, a marking such as 5V1, 12V or 3.3V");
+      value = zenerVolts(valueField);
+    } else if (!kind.isJunction()) {
+      String unit = kind.isOhms() ? "ohms, e.g. 4k7 or 470R" : "farads, e.g. 100n or 2u2";
+      value = field.require("value", "the value in " + unit).nonNegative("the value in " + unit);
+    }
+    double defaultTolerance =
+        switch (kind) {
+          case RESISTOR -> DEFAULT_RESISTOR_TOLERANCE;
+          case TRIMMER, POTENTIOMETER -> DEFAULT_TRIMMER_TOLERANCE;
+          default -> DEFAULT_CAPACITOR_TOLERANCE;
+        };
+    double tolerance =
+        kind == PartKind.DIODE || kind == PartKind.LED
+            ? 0
+            : field.optional("tolerance").map(JsonField::tolerance).orElse(defaultTolerance);
+    int count = kind.isTrimmer() ? 3 : 2;
+    String shape =
+        kind.isTrimmer()
+            ? "three net names [end, wiper, end], e.g. [\"OUT\", \"FB\", \"GND\"]"
+            : kind.isJunction()
+                ? "two net names [anode, cathode], e.g. [\"OUT\", \"RECT\"]"
+                : "two net names, the nets the part joins, e.g. [\"IN\", \"SUM\"]";
+    JsonField netsField = field.require("nets", shape);
+    List<JsonField> nets = netsField.elements(shape);
+    if (nets.size() != count) {
+      throw netsField.error(
+          ref
+              + " is a "
+              + kind.word()
+              + ": expected "
+              + shape
+              + ", found "
+              + nets.size()
+              + (nets.size() == 1 ? " net" : " nets"));
+    }
+    List<String> names = new ArrayList<>();
+    for (JsonField net : nets) {
+      names.add(net.name("a net name"));
+    }
+    DiodeClass diodeClass = null;
+    if (kind == PartKind.DIODE) {
+      JsonField classField = field.optional("class").orElse(null);
+      if (classField != null) {
+        try {
+          diodeClass = DiodeClass.of(classField.name("silicon or schottky"));
+        } catch (InvalidInputException e) {
+          throw classField.rewrap(e, "");
+        }
+      }
+    }
+    LedColour colour = null;
+    if (kind == PartKind.LED) {
+      JsonField colourField =
+          field.require("colour", "the LED's colour (" + LedColour.words() + ")");
+      try {
+        colour = LedColour.of(colourField.name(LedColour.words()));
+      } catch (InvalidInputException e) {
+        throw colourField.rewrap(e, "");
+      }
+    }
+    double position = Double.NaN;
+    boolean sealed = false;
+    if (kind.isTrimmer()) {
+      position =
+          field
+              .optional("position")
+              .map(f -> f.number("the wiper position, from 0 to 1 (e.g. 0.5)"))
+              .orElse(DEFAULT_POSITION);
+      sealed =
+          field
+              .optional("sealed")
+              .map(
+                  f -> {
+                    if (!f.node().isBoolean()) {
+                      throw f.error(
+                          "expected true or false, found " + JsonField.describe(f.node()));
+                    }
+                    return f.node().booleanValue();
+                  })
+              .orElse(false);
+    }
     try {
-      return new Part(ref, kind, value, tolerance, netA, netB);
+      if (kind.isTrimmer()) {
+        return new Part(
+            ref,
+            kind,
+            value,
+            tolerance,
+            names.get(0),
+            names.get(2),
+            names.get(1),
+            position,
+            sealed,
+            null,
+            null);
+      }
+      return new Part(
+          ref,
+          kind,
+          value,
+          tolerance,
+          names.get(0),
+          names.get(1),
+          null,
+          Double.NaN,
+          false,
+          diodeClass,
+          colour);
     } catch (InvalidInputException e) {
       throw field.rewrap(e, e.field());
+    }
+  }
+
+  private static double zenerVolts(JsonField valueField) {
+    JsonNode node = valueField.node();
+    if (node.isNumber()) {
+      return valueField.nonNegative("the zener's voltage in volts, e.g. 5.1");
+    }
+    if (!node.isTextual()) {
+      throw valueField.error(
+          "expected the zener's voltage, a marking such as 5V1, 12V or 3.3V, found "
+              + JsonField.describe(node));
+    }
+    try {
+      return ZenerMarking.parse(node.textValue());
+    } catch (InvalidInputException e) {
+      throw valueField.rewrap(e, "");
     }
   }
 
@@ -404,8 +584,9 @@ public final class StageSheet {
   private static void checkTerminalNets(Stage stage, List<JsonField> ampFields) {
     Map<String, Integer> uses = new HashMap<>();
     for (Part part : stage.parts()) {
-      uses.merge(part.netA(), 1, Integer::sum);
-      uses.merge(part.netB(), 1, Integer::sum);
+      for (String net : new java.util.HashSet<>(part.nets())) {
+        uses.merge(net, 1, Integer::sum);
+      }
     }
     for (Amplifier amp : stage.amplifiers()) {
       for (Terminal terminal : Terminal.values()) {

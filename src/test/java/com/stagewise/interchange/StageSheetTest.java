@@ -195,7 +195,7 @@ class StageSheetTest {
 
     @Test
     void newerVersion_saysItIsNewer() {
-      InvalidInputException e = badSheet(EXAMPLE.replace("\"version\": 1", "\"version\": 2"));
+      InvalidInputException e = badSheet(EXAMPLE.replace("\"version\": 1", "\"version\": 3"));
       assertThat(e.field()).isEqualTo("version");
       assertThat(e.getMessage()).contains("newer");
     }

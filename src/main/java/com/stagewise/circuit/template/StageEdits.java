@@ -51,8 +51,7 @@ public final class StageEdits {
     List<Part> parts = new ArrayList<>();
     for (Part part : stage.parts()) {
       String ref = renames.getOrDefault(part.ref(), part.ref()).strip();
-      parts.add(
-          new Part(ref, part.kind(), part.value(), part.tolerance(), part.netA(), part.netB()));
+      parts.add(part.withRef(ref));
     }
     List<Amplifier> amplifiers = new ArrayList<>();
     for (Amplifier amp : stage.amplifiers()) {
@@ -149,7 +148,12 @@ public final class StageEdits {
                         p.value(),
                         p.tolerance(),
                         net.apply(p.netA()),
-                        net.apply(p.netB())))
+                        net.apply(p.netB()),
+                        p.wiper() == null ? null : net.apply(p.wiper()),
+                        p.position(),
+                        p.sealed(),
+                        p.diodeClass(),
+                        p.colour()))
             .toList();
     List<Amplifier> amplifiers =
         stage.amplifiers().stream()

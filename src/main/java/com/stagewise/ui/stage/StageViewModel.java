@@ -424,7 +424,7 @@ public final class StageViewModel {
       return;
     }
     Part p = row.part();
-    Part renamed = new Part(newRef, p.kind(), p.value(), p.tolerance(), p.netA(), p.netB());
+    Part renamed = p.withRef(newRef);
     edit(s.withPart(p.ref(), old -> renamed), newRef);
   }
 
