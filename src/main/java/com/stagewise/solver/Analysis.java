@@ -65,8 +65,17 @@ public sealed interface Analysis permits CompiledStage {
    */
   Analysis with(Change... changes);
 
-  /** Returns the value of a part (ohms or farads); throws for an unknown designator. */
+  /**
+   * Returns the value of a part (ohms or farads; a zener's volts; 0 for a diode or LED); throws
+   * for an unknown designator.
+   */
   double partValue(String ref);
+
+  /**
+   * Returns a trimmer's wiper position (0 to 1), NaN for a part without a wiper; throws for an
+   * unknown designator.
+   */
+  double partPosition(String ref);
 
   /** Returns the voltage of a driven net; throws if the net is not driven. */
   double drivenVolts(String net);

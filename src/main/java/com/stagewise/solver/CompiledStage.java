@@ -106,7 +106,7 @@ final class CompiledStage implements Analysis {
 
   @Override
   public Optional<OperatingPoint> settleFrom(OperatingPoint near) {
-    State state = solveNear(statesOf(near));
+    State state = solveNear(statesOf(near), vectorOf(near));
     return state == null ? Optional.empty() : Optional.of(pointOf(state));
   }
 
@@ -115,7 +115,7 @@ final class CompiledStage implements Analysis {
     SectionState[] states = statesOf(point);
     double[] x = vectorOf(point);
     boolean[] collapsed = collapsedAt(x);
-    Network.DcSystem system = network.solveDc(states, collapsed);
+    Network.DcSystem system = network.solveDc(states, collapsed, x);
     return system == null
         ? Optional.empty()
         : Optional.of(new Linearization(states.clone(), collapsed, system));
@@ -126,7 +126,8 @@ final class CompiledStage implements Analysis {
     if (network.acHz == 0) {
       return Optional.empty();
     }
-    return acAbout(statesOf(point), collapsedAt(vectorOf(point)));
+    double[] x = vectorOf(point);
+    return acAbout(statesOf(point), collapsedAt(x), x);
   }
 
   @Override
@@ -134,7 +135,7 @@ final class CompiledStage implements Analysis {
     List<OperatingPoint> found = new ArrayList<>();
     forEachCombination(
         states -> {
-          Network.DcSystem system = solveConsistently(states);
+          Network.DcSystem system = solveConsistently(states, null);
           if (system != null && isConsistent(states, system.x())) {
             found.add(pointOf(stateOf(states, system.x())));
           }
@@ -155,6 +156,11 @@ final class CompiledStage implements Analysis {
   @Override
   public double partValue(String ref) {
     return network.value[part(ref)];
+  }
+
+  @Override
+  public double partPosition(String ref) {
+    return network.position[part(ref)];
   }
 
   @Override
@@ -219,8 +225,17 @@ final class CompiledStage implements Analysis {
     if (change instanceof Change.PartValue v) {
       int p = part(v.ref());
       double old = network.value[p];
-      network.value[p] = v.value();
+      network.setValue(p, v.value());
       return new Change.PartValue(v.ref(), old);
+    }
+    if (change instanceof Change.WiperPosition w) {
+      int p = part(w.ref());
+      if (network.partW[p] < 0) {
+        throw new IllegalArgumentException(w.ref() + " is not a trimmer: it has no wiper position");
+      }
+      double old = network.position[p];
+      network.position[p] = w.position();
+      return new Change.WiperPosition(w.ref(), old);
     }
     if (change instanceof Change.DrivenVolts d) {
       int i = drivenNet(d.net());
@@ -280,7 +295,9 @@ final class CompiledStage implements Analysis {
       }
     }
     // The internal sources follow from the nets: re-solving with the states gives them, and the
-    // collapsed test reads only nets, so they are left at 0 here.
+    // collapsed test reads only nets, so they are left at 0 here. A junction's inner node (behind
+    // its series resistance) follows from the voltage across the part.
+    network.fillInner(x);
     return x;
   }
 
@@ -293,8 +310,8 @@ final class CompiledStage implements Analysis {
     return collapsed;
   }
 
-  private Optional<AcSolution> acAbout(SectionState[] states, boolean[] collapsed) {
-    double[][] solution = network.solveAc(states, collapsed);
+  private Optional<AcSolution> acAbout(SectionState[] states, boolean[] collapsed, double[] dc) {
+    double[][] solution = network.solveAc(states, collapsed, dc);
     if (solution == null) {
       return Optional.empty();
     }
@@ -344,13 +361,18 @@ final class CompiledStage implements Analysis {
     for (int k = 0; k < n; k++) {
       start[k] = network.forced[k] != null ? network.forced[k] : SectionState.LINEAR;
     }
-    Network.DcSystem first = solveConsistently(start);
+    Network.DcSystem first = solveConsistently(start, null);
     if (first == null) {
       List<String> floating = floatingNets();
       if (!floating.isEmpty()) {
         return new Floats(floating);
       }
-      return enumerate(true);
+      String junction = network.newtonFailure;
+      Outcome all = enumerate(true);
+      if (all instanceof Unsettled && !junction.isEmpty()) {
+        return notSettled(junction);
+      }
+      return all;
     }
     boolean[] bistable = new boolean[n];
     int count = 0;
@@ -401,6 +423,16 @@ final class CompiledStage implements Analysis {
     return new Settled(found);
   }
 
+  private Unsettled notSettled(String junction) {
+    return new Unsettled(
+        junction,
+        "the junction of "
+            + junction
+            + " did not settle: Newton's method found no operating point within "
+            + Network.MAX_NEWTON
+            + " steps, even with gmin stepping");
+  }
+
   /**
    * When the search does not settle although no section is bistable: every combination of states
    * for a stage of a few sections, else no consistent state with the reason.
@@ -428,9 +460,9 @@ final class CompiledStage implements Analysis {
     };
   }
 
-  private State solveNear(SectionState[] near) {
+  private State solveNear(SectionState[] near, double[] guess) {
     SectionState[] start = near.clone();
-    Network.DcSystem first = solveConsistently(start);
+    Network.DcSystem first = solveConsistently(start, guess);
     if (first == null || !allLinearStable(start, first)) {
       return null;
     }
@@ -480,7 +512,7 @@ final class CompiledStage implements Analysis {
       }
       Change undo = apply(change);
       try {
-        return acAbout(states, collapsed);
+        return acAbout(states, collapsed, x);
       } finally {
         apply(undo);
       }
@@ -524,18 +556,20 @@ final class CompiledStage implements Analysis {
     SectionState[] states = start.clone();
     Set<String> seen = new HashSet<>();
     Network.DcSystem system = first;
+    double[] last = first == null ? null : first.x();
     int iterations = ITERATIONS_PER_SECTION * n + 8;
     for (int iteration = 0; iteration < iterations; iteration++) {
       if (!seen.add(Arrays.toString(states))) {
         return null;
       }
       if (system == null) {
-        system = solveConsistently(states);
+        system = solveConsistently(states, last);
         if (system == null) {
           return null;
         }
       }
       double[] x = system.x();
+      last = x;
       boolean changed = false;
       for (int k = 0; k < n; k++) {
         if (network.forced[k] != null || fixed[k]) {
@@ -635,15 +669,16 @@ final class CompiledStage implements Analysis {
    * Solves with the given states; the choice between normal and mid-supply clamp rows is settled by
    * re-solving if the supply pins' voltages change it.
    */
-  private Network.DcSystem solveConsistently(SectionState[] states) {
+  private Network.DcSystem solveConsistently(SectionState[] states, double[] start) {
     int n = network.sections.length;
     boolean[] collapsed = new boolean[n];
-    double[] guess = new double[network.size];
+    double[] guess = start != null ? start : new double[network.size];
     for (int round = 0; round < 3; round++) {
       for (int k = 0; k < n; k++) {
         collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(guess, k);
       }
-      Network.DcSystem system = network.solveDc(states, collapsed);
+      Network.DcSystem system =
+          network.solveDc(states, collapsed, start == null ? null : guess);
       if (system == null) {
         return null;
       }
@@ -657,6 +692,7 @@ final class CompiledStage implements Analysis {
         return system;
       }
       guess = system.x();
+      start = guess;
     }
     return null;
   }
@@ -674,7 +710,7 @@ final class CompiledStage implements Analysis {
     List<State> found = new ArrayList<>();
     forEachCombination(
         states -> {
-          Network.DcSystem system = solveConsistently(states);
+          Network.DcSystem system = solveConsistently(states, null);
           if (system == null || !isConsistent(states, system.x())) {
             return;
           }

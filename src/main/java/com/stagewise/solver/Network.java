@@ -41,6 +41,30 @@ final class Network {
   final boolean[] capacitor;
   final double[] value;
 
+  /** Per part: the wiper's net of a trimmer, else -1. */
+  final int[] partW;
+
+  /** Per part: a trimmer's wiper position (0 to 1), else NaN. */
+  final double[] position;
+
+  /** Per part: the junction of a diode, zener or LED, else null. */
+  final Junction[] junction;
+
+  /** Per part: the part as the stage has it (for a zener's figures after a change of value). */
+  final Part[] model;
+
+  /**
+   * Per part: the unknown of a junction's inner node (between its series resistance and the
+   * junction itself), or -1.
+   */
+  final int[] inner;
+
+  /** Whether any part is a junction: the DC system is then solved by Newton's method. */
+  final boolean nonlinear;
+
+  /** The junction that kept the last failed Newton iteration from settling, or "". */
+  String newtonFailure = "";
+
   final Amplifier[] sections;
   final int[] inPlus;
   final int[] inMinus;
@@ -87,6 +111,12 @@ final class Network {
     partB = new int[parts.size()];
     capacitor = new boolean[parts.size()];
     value = new double[parts.size()];
+    partW = new int[parts.size()];
+    position = new double[parts.size()];
+    junction = new Junction[parts.size()];
+    model = parts.toArray(new Part[0]);
+    inner = new int[parts.size()];
+    boolean anyJunction = false;
     for (int p = 0; p < parts.size(); p++) {
       Part part = parts.get(p);
       partRefs[p] = part.ref();
@@ -94,7 +124,12 @@ final class Network {
       partB[p] = netIndex.get(part.netB());
       capacitor[p] = part.kind() == PartKind.CAPACITOR;
       value[p] = part.value();
+      partW[p] = part.kind().isTrimmer() ? netIndex.get(part.wiper()) : -1;
+      position[p] = part.position();
+      junction[p] = part.kind().isJunction() ? new Junction(part.junction()) : null;
+      anyJunction |= junction[p] != null;
     }
+    nonlinear = anyJunction;
     sections = stage.amplifiers().toArray(new Amplifier[0]);
     int n = sections.length;
     inPlus = new int[n];
@@ -115,6 +150,9 @@ final class Network {
       params[k] = conditions.device(amp);
       forced[k] = conditions.forcedState(amp.ref()).orElse(null);
       sourceNode[k] = forced[k] == SectionState.DEAD ? -1 : next++;
+    }
+    for (int p = 0; p < parts.size(); p++) {
+      inner[p] = junction[p] != null && junction[p].figures.seriesOhms() > 0 ? next++ : -1;
     }
     size = next;
     acSource = new double[nets.length];
@@ -139,6 +177,12 @@ final class Network {
     partB = other.partB;
     capacitor = other.capacitor;
     value = other.value.clone();
+    partW = other.partW;
+    position = other.position.clone();
+    junction = other.junction.clone();
+    model = other.model;
+    inner = other.inner;
+    nonlinear = other.nonlinear;
     sections = other.sections;
     inPlus = other.inPlus;
     inMinus = other.inMinus;
@@ -198,17 +242,163 @@ final class Network {
 
   /**
    * Solves the DC system with every section in the given state; returns null when singular (a
-   * floating net, or a loop gain of exactly 1).
+   * floating net, or a loop gain of exactly 1) or, with junctions, when Newton's method does not
+   * settle (then {@link #newtonFailure} names the junction).
    *
    * @param states one state per section; forced sections must carry their forced state
    * @param collapsedHint per section, whether to use the mid-supply clamp for HIGH/LOW rows
    */
   DcSystem solveDc(SectionState[] states, boolean[] collapsedHint) {
-    double[][] a = new double[size][size];
-    double[] b = new double[size];
+    return solveDc(states, collapsedHint, null);
+  }
+
+  /**
+   * As {@link #solveDc(SectionState[], boolean[])}, starting Newton's method from {@code guess}
+   * (all unknowns; null for the junctions' critical voltages).
+   */
+  DcSystem solveDc(SectionState[] states, boolean[] collapsedHint, double[] guess) {
+    if (!nonlinear) {
+      double[][] a = new double[size][size];
+      double[] b = new double[size];
+      stampLinear(a, b, states, collapsedHint, 0);
+      DenseLu.Factors factors = DenseLu.factor(a);
+      return factors == null ? null : new DcSystem(factors.solve(b), factors);
+    }
+    newtonFailure = "";
+    DcSystem direct = newton(states, collapsedHint, guess, 0);
+    if (direct != null) {
+      return direct;
+    }
+    // Gmin stepping, as SPICE does when plain Newton fails: a conductance from every node to
+    // ground, lowered a decade at a time, each solve starting from the last.
+    double[] x = guess;
+    for (double shunt = 1e-2; shunt >= 1e-13; shunt /= 10) {
+      DcSystem stepped = newton(states, collapsedHint, x, shunt);
+      if (stepped == null) {
+        return null;
+      }
+      x = stepped.x();
+    }
+    DcSystem last = newton(states, collapsedHint, x, 0);
+    if (last != null) {
+      newtonFailure = "";
+    }
+    return last;
+  }
+
+  /** Newton iterations allowed for one DC solve with junctions. */
+  static final int MAX_NEWTON = 150;
+
+  /**
+   * Newton's method on the DC system with junction-voltage limiting; null when singular or not
+   * settled within {@link #MAX_NEWTON} steps.
+   */
+  private DcSystem newton(
+      SectionState[] states, boolean[] collapsedHint, double[] guess, double shunt) {
+    double[] x = guess != null ? guess.clone() : new double[size];
+    double[] vj = new double[junction.length];
+    for (int p = 0; p < junction.length; p++) {
+      if (junction[p] != null) {
+        vj[p] = guess != null ? junctionVolts(x, p) : junction[p].vcrit;
+      }
+    }
+    for (int iteration = 0; iteration < MAX_NEWTON; iteration++) {
+      double[][] a = new double[size][size];
+      double[] b = new double[size];
+      stampLinear(a, b, states, collapsedHint, shunt);
+      for (int p = 0; p < junction.length; p++) {
+        if (junction[p] != null) {
+          stampJunction(a, b, p, vj[p]);
+        }
+      }
+      DenseLu.Factors factors = DenseLu.factor(a);
+      if (factors == null) {
+        return null;
+      }
+      double[] next = factors.solve(b);
+      boolean settled = iteration > 0;
+      for (int i = 0; i < size && settled; i++) {
+        if (!(Math.abs(next[i] - x[i])
+            <= NEWTON_RELATIVE * Math.max(Math.abs(next[i]), Math.abs(x[i])) + NEWTON_VOLTS)) {
+          settled = false;
+        }
+      }
+      double worst = 0;
+      for (int p = 0; p < junction.length; p++) {
+        if (junction[p] == null) {
+          continue;
+        }
+        double proposed = junctionVolts(next, p);
+        double limited = junction[p].limit(proposed, vj[p]);
+        if (limited != proposed) {
+          settled = false;
+        }
+        double moved = Math.abs(limited - vj[p]);
+        if (moved >= worst) {
+          worst = moved;
+          newtonFailure = partRefs[p];
+        }
+        vj[p] = limited;
+      }
+      for (double v : next) {
+        if (!Double.isFinite(v)) {
+          return null;
+        }
+      }
+      x = next;
+      if (settled) {
+        return new DcSystem(x, factors);
+      }
+    }
+    return null;
+  }
+
+  /** Relative change of every unknown at which Newton's method has settled. */
+  static final double NEWTON_RELATIVE = 1e-9;
+
+  /** Absolute change (volts) at which Newton's method has settled. */
+  static final double NEWTON_VOLTS = 1e-9;
+
+  /** The voltage across part p's junction itself (inner node to cathode) at x. */
+  double junctionVolts(double[] x, int p) {
+    double cathode = volts(x, partB[p]);
+    return (inner[p] >= 0 ? x[inner[p]] : volts(x, partA[p])) - cathode;
+  }
+
+  /** Stamps junction p linearised at vd: its conductance and the matching current source. */
+  private void stampJunction(double[][] a, double[] b, int p, double vd) {
+    double[] e = junction[p].evaluate(vd);
+    double gd = e[1];
+    double equivalent = e[0] - gd * vd;
+    int anodeSide = inner[p] >= 0 ? -1 - inner[p] : partA[p];
+    stampTerminals(a, b, anodeSide, partB[p], gd);
+    injectTerminal(b, anodeSide, -equivalent);
+    injectTerminal(b, partB[p], equivalent);
+  }
+
+  /** Stamps everything linear: resistors, trimmers, series resistances, sections, bias currents. */
+  private void stampLinear(
+      double[][] a, double[] b, SectionState[] states, boolean[] collapsedHint, double shunt) {
     for (int p = 0; p < value.length; p++) {
-      if (!capacitor[p]) {
+      if (junction[p] != null) {
+        if (inner[p] >= 0) {
+          stampTerminals(a, b, partA[p], -1 - inner[p], 1 / junction[p].figures.seriesOhms());
+          if (shunt > 0) {
+            a[inner[p]][inner[p]] += shunt;
+          }
+        }
+      } else if (partW[p] >= 0) {
+        stamp(a, b, partA[p], partW[p], 1 / Math.max(value[p] * position[p], MIN_OHMS));
+        stamp(a, b, partW[p], partB[p], 1 / Math.max(value[p] * (1 - position[p]), MIN_OHMS));
+      } else if (!capacitor[p]) {
         stamp(a, b, partA[p], partB[p], 1 / Math.max(value[p], MIN_OHMS));
+      }
+    }
+    if (shunt > 0) {
+      for (int i = 0; i < nets.length; i++) {
+        if (unknownOf[i] >= 0) {
+          a[unknownOf[i]][unknownOf[i]] += shunt;
+        }
       }
     }
     for (int k = 0; k < sections.length; k++) {
@@ -224,8 +414,62 @@ final class Network {
         writeSectionRow(a, b, k, states[k], collapsedHint[k]);
       }
     }
-    DenseLu.Factors factors = DenseLu.factor(a);
-    return factors == null ? null : new DcSystem(factors.solve(b), factors);
+  }
+
+  /** Sets the value of part p; a zener's junction follows its new voltage. */
+  void setValue(int p, double newValue) {
+    value[p] = newValue;
+    if (junction[p] != null && model[p].kind() == PartKind.ZENER) {
+      junction[p] = new Junction(model[p].withValue(newValue).junction());
+    }
+  }
+
+  /** Fills the inner nodes of the junctions in x from the net voltages already there. */
+  void fillInner(double[] x) {
+    for (int p = 0; p < junction.length; p++) {
+      if (junction[p] != null && inner[p] >= 0) {
+        double across = volts(x, partA[p]) - volts(x, partB[p]);
+        x[inner[p]] = volts(x, partB[p]) + junction[p].junctionVolts(across);
+      }
+    }
+  }
+
+  /** The voltage at a terminal: a net index, or {@code -1 - u} for unknown u. */
+  private double terminalVolts(double[] x, int terminal) {
+    return terminal < 0 ? x[-1 - terminal] : volts(x, terminal);
+  }
+
+  /** The unknown of a terminal (a net index, or {@code -1 - u}), or -1 for a driven net. */
+  private int terminalUnknown(int terminal) {
+    return terminal < 0 ? -1 - terminal : unknownOf[terminal];
+  }
+
+  private void stampTerminals(double[][] a, double[] b, int t1, int t2, double g) {
+    int i = terminalUnknown(t1);
+    int j = terminalUnknown(t2);
+    if (i >= 0) {
+      a[i][i] += g;
+      if (j >= 0) {
+        a[i][j] -= g;
+      } else {
+        b[i] += g * driven[t2];
+      }
+    }
+    if (j >= 0) {
+      a[j][j] += g;
+      if (i >= 0) {
+        a[j][i] -= g;
+      } else {
+        b[j] += g * driven[t1];
+      }
+    }
+  }
+
+  private void injectTerminal(double[] b, int terminal, double amps) {
+    int u = terminalUnknown(terminal);
+    if (u >= 0) {
+      b[u] += amps;
+    }
   }
 
   /**
@@ -239,14 +483,22 @@ final class Network {
       if (capacitor[p]) {
         continue;
       }
-      double current = (volts(x, partA[p]) - volts(x, partB[p])) / Math.max(value[p], MIN_OHMS);
-      int i = unknownOf[partA[p]];
-      int j = unknownOf[partB[p]];
-      if (i >= 0) {
-        r[i] -= current;
-      }
-      if (j >= 0) {
-        r[j] += current;
+      if (junction[p] != null) {
+        int anodeSide = partA[p];
+        if (inner[p] >= 0) {
+          anodeSide = -1 - inner[p];
+          double series = (volts(x, partA[p]) - x[inner[p]]) / junction[p].figures.seriesOhms();
+          flow(r, partA[p], anodeSide, series);
+        }
+        flow(r, anodeSide, partB[p], junction[p].current(junctionVolts(x, p)));
+      } else if (partW[p] >= 0) {
+        double upper = Math.max(value[p] * position[p], MIN_OHMS);
+        double lower = Math.max(value[p] * (1 - position[p]), MIN_OHMS);
+        flow(r, partA[p], partW[p], (volts(x, partA[p]) - volts(x, partW[p])) / upper);
+        flow(r, partW[p], partB[p], (volts(x, partW[p]) - volts(x, partB[p])) / lower);
+      } else {
+        double current = (volts(x, partA[p]) - volts(x, partB[p])) / Math.max(value[p], MIN_OHMS);
+        flow(r, partA[p], partB[p], current);
       }
     }
     for (int k = 0; k < sections.length; k++) {
@@ -271,6 +523,18 @@ final class Network {
     return r;
   }
 
+  /** Books a current from terminal t1 to terminal t2 into the residual of their rows. */
+  private void flow(double[] r, int t1, int t2, double amps) {
+    int i = terminalUnknown(t1);
+    int j = terminalUnknown(t2);
+    if (i >= 0) {
+      r[i] -= amps;
+    }
+    if (j >= 0) {
+      r[j] += amps;
+    }
+  }
+
   /**
    * A solved DC system: the unknowns and the factorised matrix, kept for cheap follow-up solves.
    *
@@ -292,16 +556,41 @@ final class Network {
    * Solves the small-signal AC system about a DC state at {@link #acHz}; returns {@code {re, im}}
    * per unknown, or null when singular. Inputs whose AC is at another frequency are AC ground.
    */
-  double[][] solveAc(SectionState[] states, boolean[] collapsedHint) {
+  double[][] solveAc(SectionState[] states, boolean[] collapsedHint, double[] dc) {
     double[][] ar = new double[size][size];
     double[][] ai = new double[size][size];
     double[] br = new double[size];
     double[] bi = new double[size];
     double omega = 2 * Math.PI * acHz;
     for (int p = 0; p < value.length; p++) {
-      double g = capacitor[p] ? 0 : 1 / Math.max(value[p], MIN_OHMS);
-      double susceptance = capacitor[p] ? omega * value[p] : 0;
-      stampComplex(ar, ai, br, bi, partA[p], partB[p], g, susceptance);
+      if (junction[p] != null) {
+        // Small signal: the junction is its conductance at the DC point (a conducting diode its
+        // dynamic resistance, an off one nearly open), in series with its series resistance.
+        double gd = junction[p].evaluate(junctionVolts(dc, p))[1];
+        if (inner[p] >= 0) {
+          int node = -1 - inner[p];
+          stampComplex(ar, ai, br, bi, partA[p], node, 1 / junction[p].figures.seriesOhms(), 0);
+          stampComplex(ar, ai, br, bi, partB[p], node, gd, 0);
+        } else {
+          stampComplex(ar, ai, br, bi, partA[p], partB[p], gd, 0);
+        }
+      } else if (partW[p] >= 0) {
+        stampComplex(
+            ar, ai, br, bi, partA[p], partW[p], 1 / Math.max(value[p] * position[p], MIN_OHMS), 0);
+        stampComplex(
+            ar,
+            ai,
+            br,
+            bi,
+            partW[p],
+            partB[p],
+            1 / Math.max(value[p] * (1 - position[p]), MIN_OHMS),
+            0);
+      } else {
+        double g = capacitor[p] ? 0 : 1 / Math.max(value[p], MIN_OHMS);
+        double susceptance = capacitor[p] ? omega * value[p] : 0;
+        stampComplex(ar, ai, br, bi, partA[p], partB[p], g, susceptance);
+      }
     }
     for (int k = 0; k < sections.length; k++) {
       if (sourceNode[k] >= 0) {

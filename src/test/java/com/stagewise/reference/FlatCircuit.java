@@ -1,6 +1,7 @@
 package com.stagewise.reference;
 
 import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.JunctionFigures;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
@@ -47,11 +48,28 @@ final class FlatCircuit {
   }
 
   /**
-   * A resistor or capacitor between two nodes.
+   * A resistor or capacitor between two nodes, or a junction from anode {@code a} to cathode {@code
+   * b} with its figures.
    *
    * @param label what the branch is, for the netlist's comments (a designator, "bridge", "tie")
+   * @param junction a junction's figures (Shockley, series resistance, breakdown); else null
    */
-  record Branch(String label, PartKind kind, String a, String b, double value) {}
+  record Branch(
+      String label, PartKind kind, String a, String b, double value, JunctionFigures junction) {
+    Branch(String label, PartKind kind, String a, String b, double value) {
+      this(label, kind, a, b, value, null);
+    }
+  }
+
+  /** The label of a trimmer's track section from its first end to the wiper. */
+  static String upperTrack(String ref) {
+    return ref + " (1-w)";
+  }
+
+  /** The label of a trimmer's track section from the wiper to its second end. */
+  static String lowerTrack(String ref) {
+    return ref + " (w-2)";
+  }
 
   /** One op-amp section with the nodes on its terminals. */
   record Section(
@@ -141,8 +159,30 @@ final class FlatCircuit {
       }
     }
     for (Part part : stage.parts()) {
-      flat.branches.add(
-          new Branch(part.ref(), part.kind(), part.netA(), part.netB(), part.value()));
+      if (part.kind().isJunction()) {
+        flat.branches.add(
+            new Branch(
+                part.ref(), part.kind(), part.netA(), part.netB(), part.value(), part.junction()));
+      } else if (part.kind().isTrimmer()) {
+        // A trimmer is its track in two sections, split at the wiper.
+        flat.branches.add(
+            new Branch(
+                upperTrack(part.ref()),
+                PartKind.RESISTOR,
+                part.netA(),
+                part.wiper(),
+                part.value() * part.position()));
+        flat.branches.add(
+            new Branch(
+                lowerTrack(part.ref()),
+                PartKind.RESISTOR,
+                part.wiper(),
+                part.netB(),
+                part.value() * (1 - part.position())));
+      } else {
+        flat.branches.add(
+            new Branch(part.ref(), part.kind(), part.netA(), part.netB(), part.value()));
+      }
     }
     for (Amplifier amp : stage.amplifiers()) {
       Map<Terminal, String> nodes = new HashMap<>();
@@ -244,7 +284,7 @@ final class FlatCircuit {
       parent.put(node, isDriven(node) ? drivenRoot : node);
     }
     for (Branch branch : branches) {
-      if (branch.kind() == PartKind.RESISTOR) {
+      if (branch.kind() == PartKind.RESISTOR || branch.junction() != null) {
         union(parent, branch.a(), branch.b());
       }
     }

@@ -7,6 +7,7 @@ import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
+import com.stagewise.circuit.template.Templates;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -149,6 +150,20 @@ final class HandStages {
                 "V+",
                 "GND")
             .build());
+    // The precision rectifier on the negative half: its diode turns off, the loop opens and the
+    // output clamps low while the load holds the rectified output at ground.
+    stages.put(
+        "hand-rectifier-negative-half",
+        Templates.named("precision-rectifier").build(Map.of("vin", "-1", "vac", "0.1")));
+    // A zener pushed hard into breakdown, and a schottky limiter driven into limiting.
+    stages.put(
+        "hand-zener-hard",
+        Templates.named("zener-reference").build(Map.of("r1", "470", "zd1", "3V3")));
+    stages.put(
+        "hand-schottky-limiter",
+        Templates.named("diode-limiter").build(Map.of("vin", "-0.5", "diode", "schottky")));
+    // A gain trimmer at the end of its travel (position 1: the wiper sits on the foot end).
+    stages.put("hand-trimmer-end", Templates.named("gain-trim").build(Map.of("pos", "1")));
     return stages;
   }
 }

@@ -1,5 +1,6 @@
 package com.stagewise.reference;
 
+import com.stagewise.circuit.JunctionFigures;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
@@ -152,9 +153,33 @@ record SpiceNetlist(String text, Map<String, String> spiceNodes) {
     }
     int r = 0;
     int c = 0;
+    int d = 0;
     for (Branch branch : flat.branches) {
       w.line("* " + oneLine(branch.label()));
-      if (branch.kind() == PartKind.RESISTOR) {
+      if (branch.junction() != null) {
+        // ngspice's D element (the SPICE2 junction model): IS, N, RS; a zener's BV, IBV, NBV.
+        d++;
+        JunctionFigures f = branch.junction();
+        w.line("D" + d + " " + w.node(branch.a()) + " " + w.node(branch.b()) + " dm" + d);
+        w.line(
+            ".model dm"
+                + d
+                + " D(IS="
+                + num(f.saturationAmps())
+                + " N="
+                + num(f.emission())
+                + " RS="
+                + num(f.seriesOhms())
+                + (f.breaksDown()
+                    ? " BV="
+                        + num(f.breakdownVolts())
+                        + " IBV="
+                        + num(f.breakdownAmps())
+                        + " NBV="
+                        + num(f.emission())
+                    : "")
+                + ")");
+      } else if (branch.kind() == PartKind.RESISTOR) {
         r++;
         w.line(
             "R"

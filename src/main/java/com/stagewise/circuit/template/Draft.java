@@ -100,6 +100,47 @@ final class Draft {
     return this;
   }
 
+  /** Zener tolerance of the templates: 5 %, the usual small zener grade (common practice). */
+  static final double ZENER_TOLERANCE = 0.05;
+
+  /**
+   * Trimmer tolerance of the templates: 20 % end to end, usual for cermet trimmers (common
+   * practice).
+   */
+  static final double TRIMMER_TOLERANCE = 0.20;
+
+  /** Adds a diode of the class in parameter {@code param}, anode to cathode. */
+  Draft diode(String ref, String param, String anode, String cathode) {
+    parts.add(Part.diode(ref, values.diodeClass(param), anode, cathode));
+    return this;
+  }
+
+  /** Adds an LED of the colour in parameter {@code param}, anode to cathode. */
+  Draft led(String ref, String param, String anode, String cathode) {
+    parts.add(Part.led(ref, values.ledColour(param), anode, cathode));
+    return this;
+  }
+
+  /** Adds a zener marked as parameter {@code param}, anode to cathode. */
+  Draft zener(String ref, String param, String anode, String cathode) {
+    parts.add(Part.zener(ref, values.zener(param), ZENER_TOLERANCE, anode, cathode));
+    return this;
+  }
+
+  /** Adds a trimmer of parameter {@code param}, wiper at parameter {@code position}. */
+  Draft trimmer(String ref, String param, String position, String endA, String wiper, String endB) {
+    parts.add(
+        Part.trimmer(
+            ref,
+            values.positive(param),
+            TRIMMER_TOLERANCE,
+            endA,
+            wiper,
+            endB,
+            values.fraction(position)));
+    return this;
+  }
+
   /**
    * Adds section {@code section} of package {@code pkg}, supplied from VCC and the negative supply.
    */

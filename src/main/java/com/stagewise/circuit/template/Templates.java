@@ -51,17 +51,17 @@ public final class Templates {
                         + ")"));
   }
 
-  private static Parameter p(String name, String meaning, String defaultValue, String unit) {
+  static Parameter p(String name, String meaning, String defaultValue, String unit) {
     return new Parameter(name, meaning, defaultValue, unit);
   }
 
-  private static List<Parameter> with(List<Parameter> own, List<Parameter> common) {
+  static List<Parameter> with(List<Parameter> own, List<Parameter> common) {
     List<Parameter> all = new ArrayList<>(own);
     all.addAll(common);
     return all;
   }
 
-  private static List<Parameter> split(String deviceClass) {
+  static List<Parameter> split(String deviceClass) {
     return List.of(
         p("vcc", "positive rail VCC", "15", "V"),
         p("vee", "negative rail VEE", "-15", "V"),
@@ -77,7 +77,7 @@ public final class Templates {
             ""));
   }
 
-  private static List<Parameter> signal(String dc, String ac, String hz) {
+  static List<Parameter> signal(String dc, String ac, String hz) {
     return List.of(
         p("vin", "DC level of the test input IN", dc, "V"),
         p("vac", "AC amplitude of the test input IN (0 for none)", ac, "V"),
@@ -327,6 +327,7 @@ public final class Templates {
                     .c("C2", "c2", "BIAS", "GND")
                     .u1("BIAS", "SUM", "OUT")
                     .build()));
+    all.addAll(JunctionTemplates.catalogue());
     return List.copyOf(all);
   }
 

@@ -1,9 +1,12 @@
 package com.stagewise.circuit.template;
 
 import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.LedColour;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.value.SiValue;
+import com.stagewise.circuit.value.ZenerMarking;
 import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
@@ -106,6 +109,44 @@ final class Values {
       // Reported below with the expected range.
     }
     throw error(name, name + " (" + text + ") must be a whole number from " + min + " to " + max);
+  }
+
+  /** Returns a zener voltage from its marking ({@code 5V1}, {@code 12V}, {@code 3.3V}). */
+  double zener(String name) {
+    try {
+      return ZenerMarking.parse(text(name));
+    } catch (InvalidInputException e) {
+      throw error(name, e.getMessage());
+    }
+  }
+
+  /** Returns a trimmer position, from 0 to 1. */
+  double fraction(String name) {
+    double value = number(name);
+    if (!(value >= 0 && value <= 1)) {
+      throw error(name, name + " (" + text(name) + ") must be between 0 and 1");
+    }
+    return value;
+  }
+
+  DiodeClass diodeClass(String name) {
+    try {
+      DiodeClass c = DiodeClass.of(text(name));
+      if (c != DiodeClass.LED) {
+        return c;
+      }
+    } catch (InvalidInputException e) {
+      // Reported below with the expected words.
+    }
+    throw error(name, "\"" + text(name) + "\" is not a diode class (expected silicon or schottky)");
+  }
+
+  LedColour ledColour(String name) {
+    try {
+      return LedColour.of(text(name));
+    } catch (InvalidInputException e) {
+      throw error(name, e.getMessage());
+    }
   }
 
   DeviceClass deviceClass(String name) {
