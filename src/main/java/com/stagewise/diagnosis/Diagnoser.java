@@ -310,7 +310,11 @@ public final class Diagnoser {
       Prediction b = raw.get(i + 1).get(0);
       for (int k = 0; k < SUB_STEPS; k++) {
         double t = (double) k / SUB_STEPS;
-        double value = a.value() * Math.pow(b.value() / a.value(), t);
+        // Geometric between drifted values; linear where a grid holds 0 (a trimmer's end).
+        double value =
+            a.value() > 0 && b.value() > 0
+                ? a.value() * Math.pow(b.value() / a.value(), t)
+                : a.value() + (b.value() - a.value()) * t;
         out.add(a.toward(b, t, 1.0 / steps, value));
       }
     }

@@ -8,6 +8,7 @@ import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
+import com.stagewise.circuit.value.ZenerMarking;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -254,7 +255,10 @@ final class Explainer {
     String s = fault.subject();
     return switch (fault.kind()) {
       case HEALTHY -> "No fault: the readings fit a working stage";
-      case OPEN -> s + " open (marked " + marked(s) + ")";
+      case OPEN ->
+          partKind(s).isTrimmer()
+              ? s + "'s track open between its ends (marked " + marked(s) + ")"
+              : s + " open (marked " + marked(s) + ")";
       case SHORT -> s + " shorted (marked " + marked(s) + ")";
       case HIGH, LOW -> {
         String way = fault.kind() == FaultKind.HIGH ? "high" : "low";
@@ -284,6 +288,25 @@ final class Explainer {
                   volts(estimate.getAsDouble()),
                   volts(stage.rail(s).map(Rail::volts).orElse(0.0)))
               : "rail " + s + " low";
+      case LEAKY ->
+          s
+              + " leaky: passes reverse current"
+              + (estimate.isPresent()
+                  ? ", as if about " + Units.format(estimate.getAsDouble(), "Ω") + " sat across it"
+                  : "")
+              + " ("
+              + marked(s)
+              + ")";
+      case WIPER_OPEN -> s + "'s wiper no longer touches its track (" + marked(s) + ")";
+      case MISSET ->
+          estimate.isPresent()
+              ? String.format(
+                  Locale.ROOT,
+                  "%s misset: set at about %.2f of its travel, where the sheet says %.2f",
+                  s,
+                  estimate.getAsDouble(),
+                  stage.part(s).map(Part::position).orElse(Double.NaN))
+              : s + " misset (" + marked(s) + ")";
     };
   }
 
@@ -346,8 +369,45 @@ final class Explainer {
   }
 
   private String marked(String ref) {
-    return stage.part(ref).map(p -> value(ref, p.value())).orElse("?");
+    return stage.part(ref).map(this::marking).orElse("?");
   }
+
+  /** A part's marking in words: its value, a diode's class, an LED's colour, a trimmer's set. */
+  private String marking(Part p) {
+    return switch (p.kind()) {
+      case DIODE -> p.diodeClass().word() + " diode";
+      case LED -> p.colour().word() + " LED";
+      case ZENER -> ZenerMarking.format(p.value()) + " zener";
+      case TRIMMER, POTENTIOMETER ->
+          value(p.ref(), p.value())
+              + " "
+              + p.kind().word()
+              + String.format(Locale.ROOT, ", set at %.2f", p.position());
+      default -> value(p.ref(), p.value());
+    };
+  }
+
+  /**
+   * The diode test across a junction, as a meter shows it (about 1 mA test current, common practice
+   * for handheld meters): its forward volts from the class's figures.
+   */
+  private String diodeTest(String ref) {
+    Part part = stage.part(ref).orElse(null);
+    if (part == null || !part.kind().isJunction()) {
+      return "";
+    }
+    double forward = part.junction().forwardVolts(DIODE_TEST_AMPS);
+    return "put the meter on its diode test across "
+        + ref
+        + ", red lead on the anode ("
+        + ref
+        + ".a): expect about "
+        + String.format(Locale.ROOT, "%.1f V", forward)
+        + " one way and OL the other (reverse the leads)";
+  }
+
+  /** A handheld meter's diode-test current: about 1 mA (common practice). */
+  static final double DIODE_TEST_AMPS = 1e-3;
 
   private String value(String ref, double value) {
     PartKind kind = stage.part(ref).map(Part::kind).orElse(PartKind.RESISTOR);
@@ -358,8 +418,64 @@ final class Explainer {
   String confirmingCheck(Fault fault, OptionalDouble estimate) {
     String s = fault.subject();
     String powerOff = "Power off, unplug the unit and discharge its capacitors; then ";
+    if (partKind(s).isJunction()
+        && (fault.kind() == FaultKind.OPEN
+            || fault.kind() == FaultKind.SHORT
+            || fault.kind() == FaultKind.LEAKY)) {
+      return powerOff
+          + diodeTest(s)
+          + ". An open "
+          + partKind(s).word()
+          + " reads OL both ways, a shorted one near 0 V both ways, a leaky one a low reading"
+          + " the reverse way too; lift one leg if the rest of the circuit confuses the reading.";
+    }
+    if (partKind(s).isTrimmer()) {
+      Part part = stage.part(s).orElseThrow();
+      double[] track = part.trackOhms();
+      String ends =
+          ": expect "
+              + value(s, part.value())
+              + " end to end (pins 1 and 2), and from the wiper (w) about "
+              + value(s, track[0])
+              + " to pin 1 and "
+              + value(s, track[1])
+              + " to pin 2 at the sheet's setting";
+      return switch (fault.kind()) {
+        case MISSET ->
+            (estimate.isPresent()
+                    ? String.format(
+                        Locale.ROOT,
+                        "%s now sits at about %.2f of its travel. ",
+                        s,
+                        estimate.getAsDouble())
+                    : "")
+                + "Set it back as the unit's adjustment procedure says (with power on, reading the"
+                + " stage's output while turning it); or "
+                + powerOff.substring(0, 1).toLowerCase(Locale.ROOT)
+                + powerOff.substring(1)
+                + "read "
+                + s
+                + ends
+                + ".";
+        case WIPER_OPEN ->
+            powerOff
+                + "read "
+                + s
+                + ends
+                + ". A wiper that has left the track reads OL (or jumps about) from w to both ends"
+                + " while the ends still read "
+                + value(s, part.value())
+                + ".";
+        default ->
+            powerOff
+                + "read "
+                + s
+                + ends
+                + ". An open track reads OL end to end; the wiper then reaches only one end.";
+      };
+    }
     return switch (fault.kind()) {
-      case HEALTHY -> "";
+      case HEALTHY, LEAKY, WIPER_OPEN, MISSET -> "";
       case OPEN ->
           partKind(s) == PartKind.RESISTOR
               ? powerOff
@@ -383,15 +499,32 @@ final class Explainer {
                   ? "; a good capacitor charges up towards OL."
                   : " where " + marked(s) + " is marked.");
       case HIGH, LOW ->
-          powerOff
-              + "lift one leg of "
-              + s
-              + " and measure it: marked "
-              + marked(s)
-              + (estimate.isPresent()
-                  ? ", this reading suggests about " + value(s, estimate.getAsDouble())
-                  : "")
-              + ".";
+          partKind(s) == PartKind.ZENER
+              ? "With power on, read across "
+                  + s
+                  + " from its anode ("
+                  + s
+                  + ".a) to its cathode ("
+                  + s
+                  + ".k): a good one reads about minus its marked "
+                  + marked(s)
+                  + " (the cathode the higher)"
+                  + (estimate.isPresent()
+                      ? "; this reading suggests about "
+                          + value(s, estimate.getAsDouble())
+                          + " instead"
+                      : "")
+                  + ". Confirm with the part lifted, fed from a supply through a resistor at about"
+                  + " 5 mA."
+              : powerOff
+                  + "lift one leg of "
+                  + s
+                  + " and measure it: marked "
+                  + marked(s)
+                  + (estimate.isPresent()
+                      ? ", this reading suggests about " + value(s, estimate.getAsDouble())
+                      : "")
+                  + ".";
       case STUCK_HIGH, STUCK_LOW, DEAD -> {
         Amplifier amp = stage.amplifier(s).orElse(null);
         String pins =

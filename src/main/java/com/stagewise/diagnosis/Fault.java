@@ -9,7 +9,8 @@ import java.util.regex.Pattern;
  * One fault hypothesis, identified by the fault-id grammar of the design notes.
  *
  * <p>Ids: {@code healthy}; {@code R2:open|short|high|low}; {@code U1A:stuck-high|stuck-low|dead};
- * {@code U1.3:lifted}; {@code U1.6-7:bridge}; {@code VCC:missing|low}.
+ * {@code U1.3:lifted}; {@code U1.6-7:bridge}; {@code VCC:missing|low}; {@code D1:open|short|leaky};
+ * {@code ZD1:high|low}; {@code RV1:wiper-open|open|misset}.
  *
  * @param kind the kind of fault
  * @param subject the designator, section, package, or rail net the fault is on ("" when healthy)
@@ -101,6 +102,12 @@ public record Fault(FaultKind kind, String subject, int pin, int otherPin) {
           return of(subject, FaultKind.DEAD);
         case "missing":
           return of(subject, FaultKind.RAIL_MISSING);
+        case "leaky":
+          return of(subject, FaultKind.LEAKY);
+        case "wiper-open":
+          return of(subject, FaultKind.WIPER_OPEN);
+        case "misset":
+          return of(subject, FaultKind.MISSET);
         default:
           break;
       }
@@ -111,7 +118,8 @@ public record Fault(FaultKind kind, String subject, int pin, int otherPin) {
         "\""
             + id
             + "\" is not a fault id (expected e.g. healthy, R2:open, R2:high, U1A:stuck-high,"
-            + " U1A:dead, U1.3:lifted, U1.6-7:bridge, VCC:missing, VCC:low)");
+            + " U1A:dead, U1.3:lifted, U1.6-7:bridge, VCC:missing, VCC:low, D1:leaky, ZD1:high,"
+            + " RV1:wiper-open, RV1:misset)");
   }
 
   @Override

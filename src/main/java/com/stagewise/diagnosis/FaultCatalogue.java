@@ -3,6 +3,7 @@ package com.stagewise.diagnosis;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
+import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import java.util.ArrayList;
@@ -10,9 +11,10 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The faults a stage can have: every part open, short, high and low; every section stuck high,
- * stuck low and dead; every used package pin lifted; every pair of adjacent used pins bridged
- * (unless both sit on one net); every rail missing and low; and healthy.
+ * The faults a stage can have: every part open, short, high and low (diodes, zeners, LEDs and
+ * trimmers their own, see {@link #partFaults}); every section stuck high, stuck low and dead; every
+ * used package pin lifted; every pair of adjacent used pins bridged (unless both sit on one net);
+ * every rail missing and low; and healthy.
  */
 public final class FaultCatalogue {
   private FaultCatalogue() {}
@@ -25,14 +27,30 @@ public final class FaultCatalogue {
    */
   public record Entries(List<Fault> faults, List<String> notes) {}
 
+  /**
+   * Returns the faults a part of a kind can have (DESIGN.md fault ids): a resistor or capacitor
+   * open, short, high, low; a diode or LED open, short, leaky; a zener also high and low (its
+   * voltage); a trimmer's wiper open, its track open, or misset.
+   */
+  public static List<FaultKind> partFaults(PartKind kind) {
+    return switch (kind) {
+      case RESISTOR, CAPACITOR ->
+          List.of(FaultKind.OPEN, FaultKind.SHORT, FaultKind.HIGH, FaultKind.LOW);
+      case DIODE, LED -> List.of(FaultKind.OPEN, FaultKind.SHORT, FaultKind.LEAKY);
+      case ZENER ->
+          List.of(FaultKind.OPEN, FaultKind.SHORT, FaultKind.LEAKY, FaultKind.HIGH, FaultKind.LOW);
+      case TRIMMER, POTENTIOMETER ->
+          List.of(FaultKind.WIPER_OPEN, FaultKind.OPEN, FaultKind.MISSET);
+    };
+  }
+
   /** Returns the catalogue of a stage. */
   public static Entries of(Stage stage) {
     List<Fault> faults = new ArrayList<>();
     List<String> notes = new ArrayList<>();
     faults.add(Fault.HEALTHY);
     for (Part part : stage.parts()) {
-      for (FaultKind kind :
-          List.of(FaultKind.OPEN, FaultKind.SHORT, FaultKind.HIGH, FaultKind.LOW)) {
+      for (FaultKind kind : partFaults(part.kind())) {
         faults.add(Fault.of(part.ref(), kind));
       }
     }

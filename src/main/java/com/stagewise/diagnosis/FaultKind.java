@@ -13,7 +13,13 @@ public enum FaultKind {
   LIFTED("lifted"),
   BRIDGE("bridge"),
   RAIL_MISSING("missing"),
-  RAIL_LOW("low");
+  RAIL_LOW("low"),
+  /** A diode, LED or zener passing reverse current. */
+  LEAKY("leaky"),
+  /** A trimmer's wiper no longer touching its track. */
+  WIPER_OPEN("wiper-open"),
+  /** A trimmer turned away from where the stage needs it. */
+  MISSET("misset");
 
   private final String suffix;
 

@@ -71,6 +71,18 @@ final class FaultModel {
     return factors;
   }
 
+  /** Returns the factors tried for a zener's voltage drifted high or low, up to ×3 or ÷3. */
+  static double[] zenerFactors(double tolerance, boolean high) {
+    double start = Math.log(1 + 1.5 * tolerance + 0.01);
+    double end = Math.log(MAX_ZENER_DRIFT);
+    double[] factors = new double[GRID];
+    for (int i = 0; i < GRID; i++) {
+      double f = Math.exp(start + (end - start) * i / (GRID - 1));
+      factors[i] = high ? f : 1 / f;
+    }
+    return factors;
+  }
+
   /** Returns the fractions of nominal tried for a low rail: from 5 % up to just below tolerance. */
   static double[] railFractions(double tolerance) {
     double start = 0.05;
@@ -86,7 +98,10 @@ final class FaultModel {
     String s = fault.subject();
     return switch (fault.kind()) {
       case HEALTHY -> List.of(new Scenario(base, conditions, 1, Double.NaN, ""));
-      case OPEN -> List.of(new Scenario(base.minusPart(s), conditions, 1, Double.NaN, ""));
+      case OPEN ->
+          isTrimmer(base, s)
+              ? trackOpen(base, conditions, s)
+              : List.of(new Scenario(base.minusPart(s), conditions, 1, Double.NaN, ""));
       case SHORT -> List.of(new Scenario(shorted(base, s), conditions, 1, Double.NaN, ""));
       case HIGH, LOW -> drifted(base, conditions, s, fault.kind() == FaultKind.HIGH);
       case STUCK_HIGH -> forced(base, conditions, s, SectionState.HIGH);
@@ -97,7 +112,111 @@ final class FaultModel {
       case RAIL_MISSING ->
           List.of(new Scenario(base, conditions.withDriven(s, 0.0), 1, Double.NaN, ""));
       case RAIL_LOW -> lowRail(base, conditions, s);
+      case LEAKY -> leaky(base, conditions, s);
+      case WIPER_OPEN -> List.of(wiperOpen(base, conditions, s));
+      case MISSET -> misset(base, conditions, s);
     };
+  }
+
+  /** The largest factor tried for a zener drifted high or low: 3 (beyond, it is open or short). */
+  static final double MAX_ZENER_DRIFT = 3;
+
+  /** The range of leak resistances tried for a leaky junction: 100 Ω to 10 MΩ. */
+  static final double LEAK_MIN_OHMS = 100;
+
+  static final double LEAK_MAX_OHMS = 10e6;
+
+  /**
+   * How far a trimmer's wiper may sit from the sheet's position on a working unit: ±5 % of its
+   * travel (common practice for a setting made by hand). A misset trimmer sits beyond it.
+   */
+  static final double SET_SPREAD = 0.05;
+
+  /** Positions tried for a misset trimmer: every 2.5 % of the travel. */
+  static final int POSITIONS = 41;
+
+  private static boolean isTrimmer(Stage base, String ref) {
+    return base.part(ref).map(p -> p.kind().isTrimmer()).orElse(false);
+  }
+
+  /** Returns the leak resistances tried for a leaky junction, log-spaced. */
+  static double[] leakOhms() {
+    double[] ohms = new double[GRID];
+    for (int i = 0; i < GRID; i++) {
+      ohms[i] = LEAK_MIN_OHMS * Math.pow(LEAK_MAX_OHMS / LEAK_MIN_OHMS, (double) i / (GRID - 1));
+    }
+    return ohms;
+  }
+
+  /** Returns the wiper positions tried for a misset trimmer set at {@code nominal}. */
+  static double[] missetPositions(double nominal) {
+    List<Double> positions = new ArrayList<>();
+    for (int i = 0; i < POSITIONS; i++) {
+      double p = (double) i / (POSITIONS - 1);
+      if (Math.abs(p - nominal) > SET_SPREAD + 1e-9) {
+        positions.add(p);
+      }
+    }
+    return positions.stream().mapToDouble(Double::doubleValue).toArray();
+  }
+
+  private static List<Scenario> leaky(Stage base, Conditions conditions, String ref) {
+    Part part = base.part(ref).orElseThrow();
+    List<Scenario> grid = new ArrayList<>();
+    for (double ohms : leakOhms()) {
+      Part leak = Part.resistor("~leak-" + ref, ohms, 0, part.netA(), part.netB());
+      grid.add(new Scenario(base.plusPart(leak), conditions, 1, ohms, ""));
+    }
+    return grid;
+  }
+
+  /** The wiper has left the track: the track stays whole between its ends, the wiper is free. */
+  private static Scenario wiperOpen(Stage base, Conditions conditions, String ref) {
+    Part part = base.part(ref).orElseThrow();
+    Part track = Part.resistor(ref, part.value(), part.tolerance(), part.netA(), part.netB());
+    return new Scenario(base.withPart(ref, p -> track), conditions, 1, Double.NaN, "");
+  }
+
+  /** The track is open: the wiper still touches one side or the other (two scenarios). */
+  private static List<Scenario> trackOpen(Stage base, Conditions conditions, String ref) {
+    Part part = base.part(ref).orElseThrow();
+    double[] track = part.trackOhms();
+    List<Scenario> out = new ArrayList<>();
+    if (!part.netA().equals(part.wiper())) {
+      Part upper = Part.resistor(ref, track[0], part.tolerance(), part.netA(), part.wiper());
+      out.add(
+          new Scenario(
+              base.withPart(ref, p -> upper),
+              conditions,
+              0.5,
+              Double.NaN,
+              "the wiper keeps the " + part.netA() + " end"));
+    }
+    if (!part.netB().equals(part.wiper())) {
+      Part lower = Part.resistor(ref, track[1], part.tolerance(), part.wiper(), part.netB());
+      out.add(
+          new Scenario(
+              base.withPart(ref, p -> lower),
+              conditions,
+              0.5,
+              Double.NaN,
+              "the wiper keeps the " + part.netB() + " end"));
+    }
+    if (out.isEmpty()) {
+      out.add(new Scenario(base.minusPart(ref), conditions, 1, Double.NaN, ""));
+    }
+    return out;
+  }
+
+  private static List<Scenario> misset(Stage base, Conditions conditions, String ref) {
+    Part part = base.part(ref).orElseThrow();
+    List<Scenario> grid = new ArrayList<>();
+    for (double position : missetPositions(part.position())) {
+      grid.add(
+          new Scenario(
+              base.withPart(ref, p -> p.withPosition(position)), conditions, 1, position, ""));
+    }
+    return grid;
   }
 
   private static Stage shorted(Stage base, String ref) {
@@ -110,7 +229,11 @@ final class FaultModel {
       Stage base, Conditions conditions, String ref, boolean high) {
     Part part = base.part(ref).orElseThrow();
     List<Scenario> grid = new ArrayList<>();
-    for (double factor : driftFactors(part.tolerance(), high)) {
+    double[] factors =
+        part.kind() == PartKind.ZENER
+            ? zenerFactors(part.tolerance(), high)
+            : driftFactors(part.tolerance(), high);
+    for (double factor : factors) {
       double value = part.value() * factor;
       grid.add(new Scenario(base.withPart(ref, p -> p.withValue(value)), conditions, 1, value, ""));
     }

@@ -267,6 +267,14 @@ final class Predictor {
         Change change = new Change.PartValue(part.ref(), moved);
         list.add(new Perturbation(c -> change, true));
       }
+      if (part.kind().isTrimmer() && !part.sealed() && !part.ref().startsWith("~")) {
+        // An unsealed trimmer sits within its setting spread of the sheet's position.
+        double position = cs.partPosition(part.ref());
+        double step = FaultModel.SET_SPREAD * UNIFORM_SD;
+        double moved = position + step <= 1 ? position + step : position - step;
+        Change change = new Change.WiperPosition(part.ref(), moved);
+        list.add(new Perturbation(c -> change, true));
+      }
     }
     for (Rail rail : stage.rails()) {
       double moved = cs.drivenVolts(rail.net()) * (1 + rail.tolerance() * UNIFORM_SD);

@@ -39,6 +39,13 @@ public final class Priors {
   private static final double SECTION_RATE = 2.0;
   private static final double RESISTOR_RATE = 1.0;
   private static final double CAPACITOR_RATE = 1.0;
+
+  /** Diodes, zeners and LEDs fail about as often as a fixed resistor (common practice). */
+  private static final double DIODE_RATE = 1.0;
+
+  /** Trimmers fail (and are turned) more often than fixed resistors: twice (common practice). */
+  private static final double TRIMMER_RATE = 2.0;
+
   private static final double JOINT_RATE = 0.25;
   private static final double BRIDGE_RATE = 0.08;
   private static final double RAIL_RATE = 2.5;
@@ -130,11 +137,15 @@ public final class Priors {
     String s = fault.subject();
     return switch (fault.kind()) {
       case HEALTHY -> 0;
-      case OPEN, SHORT, HIGH, LOW -> {
-        boolean resistor = stage.part(s).map(p -> p.kind() == PartKind.RESISTOR).orElse(true);
-        yield resistor
-            ? RESISTOR_RATE * resistorShare(fault.kind())
-            : CAPACITOR_RATE * capacitorShare(fault.kind());
+      case OPEN, SHORT, HIGH, LOW, LEAKY, WIPER_OPEN, MISSET -> {
+        PartKind kind = stage.part(s).map(p -> p.kind()).orElse(PartKind.RESISTOR);
+        yield switch (kind) {
+          case RESISTOR -> RESISTOR_RATE * resistorShare(fault.kind());
+          case CAPACITOR -> CAPACITOR_RATE * capacitorShare(fault.kind());
+          case DIODE, LED -> DIODE_RATE * diodeShare(fault.kind());
+          case ZENER -> DIODE_RATE * zenerShare(fault.kind());
+          case TRIMMER, POTENTIOMETER -> TRIMMER_RATE * trimmerShare(fault.kind());
+        };
       }
       // Improper output 77 % is split evenly between the two limits; no output 23 %.
       case STUCK_HIGH, STUCK_LOW -> SECTION_RATE * 0.385;
@@ -153,6 +164,49 @@ public final class Priors {
       // Film resistors drift upward far more often than downward (common practice): 2 to 1.
       case HIGH -> 0.24;
       case LOW -> 0.12;
+      default -> 0;
+    };
+  }
+
+  /**
+   * Small-signal diodes and LEDs: short 49 %, open 36 %, parameter change (here: leaky) 15 %, the
+   * RAC FMD-97 shares for general-purpose diodes as MIL-HDBK-338B reproduces them (from memory,
+   * rounded).
+   */
+  private static double diodeShare(FaultKind kind) {
+    return switch (kind) {
+      case SHORT -> 0.49;
+      case OPEN -> 0.36;
+      case LEAKY -> 0.15;
+      default -> 0;
+    };
+  }
+
+  /**
+   * Zeners: parameter change 69 % (split between voltage high, low and leaky), open 18 %, short 13
+   * % (the same sources for voltage-reference diodes, from memory, rounded).
+   */
+  private static double zenerShare(FaultKind kind) {
+    return switch (kind) {
+      case HIGH -> 0.25;
+      case LOW -> 0.25;
+      case LEAKY -> 0.19;
+      case OPEN -> 0.18;
+      case SHORT -> 0.13;
+      default -> 0;
+    };
+  }
+
+  /**
+   * Trimmers: an open track about half, an erratic or lifted wiper about a third (the same sources
+   * for variable resistors, from memory, rounded); a misset one is common enough on the bench to
+   * get the rest (common practice).
+   */
+  private static double trimmerShare(FaultKind kind) {
+    return switch (kind) {
+      case OPEN -> 0.35;
+      case WIPER_OPEN -> 0.35;
+      case MISSET -> 0.30;
       default -> 0;
     };
   }

@@ -59,6 +59,7 @@ public final class DemoLibrary {
   static final String LOGGER = "Ostrander DL-5 data logger, analogue input card";
   static final String SCALE = "Ferrowick WB-2 weighing scale, bridge amplifier board";
   static final String METER = "Quillon LX-2 light meter, sensor board";
+  static final String OVEN = "Brannock TC-4 oven controller, front panel board";
 
   /**
    * Demo sheets written by hand, not from a template: a whole signal chain (five sections over two
@@ -184,7 +185,63 @@ public final class DemoLibrary {
                 "U15"),
             Map.of("VCC", "+12V"),
             "Insert return amplifier (12 V section)",
-            MIXER));
+            MIXER),
+        new Entry(
+            "ostrander-dl5-peak-rectifier.stage.json",
+            "precision-rectifier",
+            Map.of("vin", "0.8", "vac", "0.1", "hz", "50", "r1", "22k"),
+            Map.of("D1", "D7", "R1", "R27", "U1", "U7"),
+            Map.of("IN", "CH2_IN", "RECT", "CH2_RECT", "OUT", "U7_OUT"),
+            "Channel 2 precision rectifier",
+            LOGGER),
+        new Entry(
+            "larkspur-sm8-clip-limiter.stage.json",
+            "diode-limiter",
+            Map.of("vin", "0.2", "vac", "0.01", "hz", "1k", "r1", "10k", "r2", "100k"),
+            Map.of("R1", "R91", "R2", "R92", "D1", "D91", "D2", "D92", "U1", "U16"),
+            Map.of("VCC", "+15V", "VEE", "-15V", "OUT", "CLIP_OUT"),
+            "Headphone clip limiter",
+            MIXER),
+        new Entry(
+            "ostrander-dl5-input-protect.stage.json",
+            "input-clamp",
+            Map.of("vin", "5", "vac", "0.5", "hz", "50", "r1", "4k7", "r2", "47k"),
+            Map.of("R1", "R41", "R2", "R42", "D1", "D41", "D2", "D42", "U1", "U8"),
+            Map.of("IN", "CH3_IN", "PIN", "CH3_PIN", "OUT", "CH3_BUF"),
+            "Channel 3 input protection and buffer",
+            LOGGER),
+        new Entry(
+            "halden-psu30-set-point.stage.json",
+            "zener-reference",
+            Map.of("r1", "3k3", "zd1", "6V2", "r2", "10k", "vcc", "24", "vee", "-5"),
+            Map.of("R1", "R55", "R2", "R56", "ZD1", "ZD3", "U1", "U5"),
+            Map.of("REF", "VREF", "OUT", "V_SET", "VCC", "+24V", "VEE", "-5V"),
+            "Output voltage set-point reference",
+            SUPPLY),
+        new Entry(
+            "brannock-tc4-over-temp.stage.json",
+            "led-comparator",
+            Map.of("vin", "7", "r1", "10k", "r2", "10k", "r3", "1k", "colour", "red"),
+            Map.of("R1", "R11", "R2", "R12", "R3", "R13", "D1", "LED2", "U1", "U2"),
+            Map.of("IN", "TEMP", "THR", "LIMIT", "OUT", "ALARM", "LED", "LED_A", "VCC", "+12V"),
+            "Over-temperature lamp",
+            OVEN),
+        new Entry(
+            "quillon-lx2-offset-null.stage.json",
+            "offset-null",
+            Map.of("vin", "0.1", "vac", "0.01", "hz", "100", "pos", "0.5"),
+            Map.of("R1", "R21", "R2", "R22", "R3", "R23", "RV1", "RV2", "U1", "U3"),
+            Map.of("IN", "RANGE_IN", "OUT", "RANGE_OUT"),
+            "Range amplifier with offset null",
+            METER),
+        new Entry(
+            "ferrowick-wb2-span-trim.stage.json",
+            "gain-trim",
+            Map.of("vin", "1.2", "vac", "0.1", "hz", "10", "pos", "0.5"),
+            Map.of("R1", "R31", "R2", "R32", "RV1", "RV1", "U1", "U3"),
+            Map.of("IN", "WEIGHT", "OUT", "SPAN_OUT"),
+            "Span adjustment amplifier",
+            SCALE));
   }
 
   /** Writes every sheet of the library into the folder given as the first argument. */

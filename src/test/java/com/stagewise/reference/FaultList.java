@@ -31,7 +31,16 @@ final class FaultList {
     List<String> faults = new ArrayList<>();
     faults.add("healthy");
     for (Part part : stage.parts()) {
-      for (String kind : List.of("open", "short", "high", "low")) {
+      // DESIGN.md fault ids: diodes and LEDs open|short|leaky, zeners also high|low (their
+      // voltage), trimmers wiper-open|open|misset; resistors and capacitors open|short|high|low.
+      List<String> kinds =
+          switch (part.kind()) {
+            case DIODE, LED -> List.of("open", "short", "leaky");
+            case ZENER -> List.of("open", "short", "leaky", "high", "low");
+            case TRIMMER, POTENTIOMETER -> List.of("wiper-open", "open", "misset");
+            default -> List.of("open", "short", "high", "low");
+          };
+      for (String kind : kinds) {
         faults.add(part.ref() + ":" + kind);
       }
     }

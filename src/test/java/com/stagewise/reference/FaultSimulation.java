@@ -2,6 +2,7 @@ package com.stagewise.reference;
 
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
@@ -221,7 +222,18 @@ final class FaultSimulation {
       }
       return null;
     }
+    Part part = stage.part(ref).orElse(null);
+    if (part != null && part.kind().isTrimmer()) {
+      return applyToTrimmer(flat, part, kind, rnd);
+    }
     switch (kind) {
+      case "leaky" -> {
+        // A leaky junction: a resistance across it, drawn log-uniformly.
+        Branch b = flat.branches.get(flat.branchIndex(ref));
+        double ohms = LEAK_MIN * Math.pow(LEAK_MAX / LEAK_MIN, rnd.nextDouble());
+        flat.branches.add(new Branch("leak " + ref, PartKind.RESISTOR, b.a(), b.b(), ohms));
+        return ohms;
+      }
       case "open" -> flat.branches.remove(flat.branchIndex(ref));
       case "short" -> {
         int i = flat.branchIndex(ref);
@@ -233,6 +245,14 @@ final class FaultSimulation {
         int i = flat.branchIndex(ref);
         Branch b = flat.branches.get(i);
         double factor = uniform(rnd, DRIFT_MIN, DRIFT_MAX);
+        if (b.junction() != null) {
+          // A zener's voltage drifted: factor drawn uniformly, its breakdown follows.
+          double zf = uniform(rnd, ZENER_DRIFT_MIN, ZENER_DRIFT_MAX);
+          double volts = kind.equals("high") ? b.value() * zf : b.value() / zf;
+          flat.branches.set(
+              i, new Branch(b.label(), b.kind(), b.a(), b.b(), volts, DiodeClass.zener(volts)));
+          return volts;
+        }
         double value = kind.equals("high") ? b.value() * factor : b.value() / factor;
         flat.branches.set(i, new Branch(b.label(), b.kind(), b.a(), b.b(), value));
         return value;
@@ -270,6 +290,62 @@ final class FaultSimulation {
       default -> throw new IllegalArgumentException("unknown fault kind in " + fault);
     }
     return null;
+  }
+
+  /** A leaky junction's leak resistance: log-uniform from 2 kΩ to 200 kΩ (common practice). */
+  static final double LEAK_MIN = 2e3;
+
+  static final double LEAK_MAX = 200e3;
+
+  /** A drifted zener's voltage factor: uniform from 1.15 to 1.6 (as a model of the fault). */
+  static final double ZENER_DRIFT_MIN = 1.15;
+
+  static final double ZENER_DRIFT_MAX = 1.6;
+
+  /** A misset trimmer sits at least this far (share of travel) from its sheet position. */
+  static final double MISSET_MIN = 0.15;
+
+  /**
+   * Applies a trimmer fault to its two track sections: the wiper off the track (the track whole end
+   * to end), the track open (the wiper keeps one end, drawn at random), or the wiper moved to a
+   * position drawn uniformly at least {@link #MISSET_MIN} from the sheet's.
+   */
+  private static Double applyToTrimmer(
+      FlatCircuit flat, Part part, String kind, SplittableRandom rnd) {
+    String ref = part.ref();
+    int upper = flat.branchIndex(FlatCircuit.upperTrack(ref));
+    Branch up = flat.branches.get(upper);
+    int lower = flat.branchIndex(FlatCircuit.lowerTrack(ref));
+    Branch down = flat.branches.get(lower);
+    switch (kind) {
+      case "wiper-open" -> {
+        flat.branches.set(
+            upper, new Branch(ref, PartKind.RESISTOR, part.netA(), part.netB(), part.value()));
+        flat.branches.remove(lower);
+        return null;
+      }
+      case "open" -> {
+        // Recorded as the fault value: 0 when the wiper keeps the first end, 1 the second.
+        boolean keepsFirst = rnd.nextBoolean();
+        flat.branches.remove(keepsFirst ? lower : upper);
+        return keepsFirst ? 0.0 : 1.0;
+      }
+      case "misset" -> {
+        double nominal = part.position();
+        double position;
+        do {
+          position = rnd.nextDouble();
+        } while (Math.abs(position - nominal) < MISSET_MIN);
+        flat.branches.set(
+            upper, new Branch(up.label(), up.kind(), up.a(), up.b(), part.value() * position));
+        flat.branches.set(
+            lower,
+            new Branch(
+                down.label(), down.kind(), down.a(), down.b(), part.value() * (1 - position)));
+        return position;
+      }
+      default -> throw new IllegalArgumentException("unknown trimmer fault " + ref + ":" + kind);
+    }
   }
 
   /**

@@ -33,8 +33,13 @@ public final class FaultTruth {
 
   private FaultTruth() {}
 
-  /** Writes one truth file per stage and prints the counts per fault kind and the dropped cases. */
+  /**
+   * Writes one truth file per stage and prints the counts per fault kind and the dropped cases;
+   * with the argument {@code missing}, only the stages that have no truth file yet (others are left
+   * as they are).
+   */
   public static void main(String[] args) throws IOException {
+    boolean onlyMissing = args.length > 0 && args[0].equals("missing");
     if (!Ngspice.available()) {
       System.err.println(Ngspice.MISSING);
       System.exit(1);
@@ -44,8 +49,11 @@ public final class FaultTruth {
     List<String> written = new ArrayList<>();
     int total = 0;
     for (ReferenceStages.Named named : truthStages()) {
-      TruthFiles.StageTruth truth = generate(named);
       String name = named.source().name() + ".json";
+      if (onlyMissing && Files.exists(TruthFiles.FOLDER.resolve(name))) {
+        continue;
+      }
+      TruthFiles.StageTruth truth = generate(named);
       TruthFiles.write(TruthFiles.FOLDER.resolve(name), truth);
       written.add(name);
       for (Case c : truth.cases()) {
@@ -58,7 +66,7 @@ public final class FaultTruth {
     }
     try (Stream<Path> files = Files.list(TruthFiles.FOLDER)) {
       for (Path file : files.toList()) {
-        if (!written.contains(file.getFileName().toString())) {
+        if (!onlyMissing && !written.contains(file.getFileName().toString())) {
           Files.delete(file);
         }
       }

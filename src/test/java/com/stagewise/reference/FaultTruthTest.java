@@ -216,8 +216,35 @@ class FaultTruthTest {
       int colon = fault.lastIndexOf(':');
       String ref = fault.substring(0, colon);
       String kind = fault.substring(colon + 1);
-      if (stage.rail(ref).isEmpty()) {
+      Part trimmer = stage.part(ref).filter(p -> p.kind().isTrimmer()).orElse(null);
+      if (trimmer != null) {
+        double value = unit.path("parts").path(ref).asDouble();
+        double[] track = {value * trimmer.position(), value * (1 - trimmer.position())};
+        Part faultedTrimmer =
+            switch (kind) {
+              case "wiper-open" -> Part.resistor(ref, value, 0, trimmer.netA(), trimmer.netB());
+              case "open" ->
+                  unit.path("faultValue").asDouble() == 0
+                      ? Part.resistor(ref, track[0], 0, trimmer.netA(), trimmer.wiper())
+                      : Part.resistor(ref, track[1], 0, trimmer.wiper(), trimmer.netB());
+              case "misset" ->
+                  trimmer.withValue(value).withPosition(unit.path("faultValue").asDouble());
+              default -> throw new IllegalArgumentException("unknown fault " + fault);
+            };
+        s = s.withPart(ref, p -> faultedTrimmer);
+      } else if (stage.rail(ref).isEmpty()) {
         switch (kind) {
+          case "leaky" -> {
+            Part junction = stage.part(ref).orElseThrow();
+            s =
+                s.plusPart(
+                    Part.resistor(
+                        "LEAK",
+                        unit.path("faultValue").asDouble(),
+                        0,
+                        junction.netA(),
+                        junction.netB()));
+          }
           case "open" -> s = s.minusPart(ref);
           case "short" ->
               s =
