@@ -317,10 +317,12 @@ final class FaultSimulation {
     Branch up = flat.branches.get(upper);
     int lower = flat.branchIndex(FlatCircuit.lowerTrack(ref));
     Branch down = flat.branches.get(lower);
+    // The unit's own end-to-end value (drawn within tolerance) is the sum of its two sections.
+    double ohms = up.value() + down.value();
     switch (kind) {
       case "wiper-open" -> {
         flat.branches.set(
-            upper, new Branch(ref, PartKind.RESISTOR, part.netA(), part.netB(), part.value()));
+            upper, new Branch(ref, PartKind.RESISTOR, part.netA(), part.netB(), ohms));
         flat.branches.remove(lower);
         return null;
       }
@@ -337,11 +339,10 @@ final class FaultSimulation {
           position = rnd.nextDouble();
         } while (Math.abs(position - nominal) < MISSET_MIN);
         flat.branches.set(
-            upper, new Branch(up.label(), up.kind(), up.a(), up.b(), part.value() * position));
+            upper, new Branch(up.label(), up.kind(), up.a(), up.b(), ohms * position));
         flat.branches.set(
             lower,
-            new Branch(
-                down.label(), down.kind(), down.a(), down.b(), part.value() * (1 - position)));
+            new Branch(down.label(), down.kind(), down.a(), down.b(), ohms * (1 - position)));
         return position;
       }
       default -> throw new IllegalArgumentException("unknown trimmer fault " + ref + ":" + kind);

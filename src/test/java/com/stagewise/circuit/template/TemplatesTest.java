@@ -9,6 +9,7 @@ import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
 import com.stagewise.circuit.value.SiValue;
+import com.stagewise.circuit.value.ZenerMarking;
 import java.util.Map;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -39,7 +40,10 @@ class TemplatesTest {
     assertThat(template.parameters()).extracting(Parameter::name).doesNotHaveDuplicates();
     for (Parameter parameter : template.parameters()) {
       assertThat(parameter.meaning()).isNotBlank();
-      if (!parameter.unit().isEmpty()) {
+      if (parameter.name().startsWith("zd")) {
+        // A zener's default is its marking, read by the zener marking parser.
+        assertThat(ZenerMarking.parse(parameter.defaultValue())).isPositive();
+      } else if (!parameter.unit().isEmpty()) {
         // Every default with a unit is a value the shared parser reads.
         SiValue.parse(parameter.defaultValue());
       }
@@ -72,7 +76,14 @@ class TemplatesTest {
             "transimpedance",
             "sallen-key-low-pass",
             "inverting-schmitt-trigger",
-            "single-supply-inverting");
+            "single-supply-inverting",
+            "precision-rectifier",
+            "diode-limiter",
+            "input-clamp",
+            "zener-reference",
+            "led-comparator",
+            "offset-null",
+            "gain-trim");
   }
 
   static Stream<Arguments> variants() {
