@@ -182,7 +182,7 @@ final class FaultModel {
     Part part = base.part(ref).orElseThrow();
     double[] track = part.trackOhms();
     List<Scenario> out = new ArrayList<>();
-    if (!part.netA().equals(part.wiper())) {
+    {
       Part upper = Part.resistor(ref, track[0], part.tolerance(), part.netA(), part.wiper());
       out.add(
           new Scenario(
@@ -192,7 +192,7 @@ final class FaultModel {
               Double.NaN,
               "the wiper keeps the " + part.netA() + " end"));
     }
-    if (!part.netB().equals(part.wiper())) {
+    {
       Part lower = Part.resistor(ref, track[1], part.tolerance(), part.wiper(), part.netB());
       out.add(
           new Scenario(

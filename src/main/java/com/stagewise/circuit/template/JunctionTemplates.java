@@ -169,23 +169,23 @@ final class JunctionTemplates {
         new StageTemplate(
             "gain-trim",
             "Non-inverting amplifier with gain trimmer",
-            "Non-inverting amplifier whose feedback divider holds trimmer RV1 between R2 and R1: the"
-                + " wiper feeds the inverting input, so turning it sets the gain between"
-                + " (R1+R2+RV1)/(R1+RV1) and (R1+R2+RV1)/R1.",
+            "Non-inverting amplifier whose gain is set by trimmer RV1, wired as a variable resistor"
+                + " (wiper to its ground end) below R1: gain = 1 + R2/(R1 + RV1 x position), from"
+                + " 1 + R2/(R1 + RV1) to 1 + R2/R1.",
             with(
                 List.of(
-                    p("r1", "resistor R1 from the divider's foot to ground", "10k", "Ω"),
-                    p("r2", "resistor R2 from the output to the divider's top", "10k", "Ω"),
+                    p("r1", "resistor R1 from the inverting input to the trimmer", "4k7", "Ω"),
+                    p("r2", "feedback resistor R2", "10k", "Ω"),
                     p("rv1", "trimmer RV1 end to end", "10k", "Ω"),
-                    p("pos", "RV1's wiper position from the top end (0 to 1)", "0.5", "")),
+                    p("pos", "RV1's wiper position from the R1 end (0 to 1)", "0.5", "")),
                 with(signal("1", "0.1", "1k"), split("classic-bipolar"))),
             v ->
                 new Draft(v)
                     .dualRails()
                     .input("IN", "vin", "vac", "hz")
-                    .r("R2", "r2", "OUT", "TOP")
-                    .trimmer("RV1", "rv1", "pos", "TOP", "FB", "FOOT")
-                    .r("R1", "r1", "FOOT", "GND")
+                    .r("R2", "r2", "OUT", "FB")
+                    .r("R1", "r1", "FB", "FOOT")
+                    .trimmer("RV1", "rv1", "pos", "FOOT", "GND", "GND")
                     .u1("IN", "FB", "OUT")
                     .build()));
     return all;
