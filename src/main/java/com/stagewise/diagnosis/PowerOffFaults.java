@@ -20,6 +20,13 @@ import java.util.Optional;
  * solder bridge is a 0 Ω link between the two pins' nets, whatever drives them when powered. A
  * stuck or dead output and a missing or low rail leave the network as it is: the ohmmeter cannot
  * see them.
+ *
+ * <p>The newer parts: a leaky junction is its leak resistance (the value given) between anode and
+ * cathode; a zener drifted high or low changes nothing (junctions do not conduct at the meter's
+ * test voltage); a trimmer whose wiper is open is its whole track between the ends; a misset
+ * trimmer has its wiper at the position given; an open track leaves the wiper on one end's side:
+ * the second end's when the value given is 1, else the first end's (the diagnosis's open-track
+ * scenarios carry no side, so its ohms prediction takes the first end: a known limit).
  */
 public final class PowerOffFaults {
   private PowerOffFaults() {}
@@ -27,13 +34,24 @@ public final class PowerOffFaults {
   /**
    * Returns the stage as the ohmmeter sees it under a fault.
    *
-   * @param value the part's value for a drifted part ({@code high}/{@code low}); ignored otherwise
+   * @param value the part's value for a drifted part ({@code high}/{@code low}), the leak ohms of a
+   *     leaky junction, the wiper position of a misset trimmer, the end (0 or 1) an open track's
+   *     wiper keeps; ignored otherwise
    * @throws IllegalArgumentException if the fault names nothing of the stage
    */
   public static Stage apply(Stage base, Fault fault, double value) {
     String s = fault.subject();
     return switch (fault.kind()) {
-      case OPEN -> base.minusPart(part(base, s).ref());
+      case OPEN -> {
+        Part p = part(base, s);
+        if (!p.kind().isTrimmer()) {
+          yield base.minusPart(s);
+        }
+        double[] track = p.trackOhms();
+        yield value == 1
+            ? base.withPart(s, x -> Part.resistor(s, track[1], p.tolerance(), p.wiper(), p.netB()))
+            : base.withPart(s, x -> Part.resistor(s, track[0], p.tolerance(), p.netA(), p.wiper()));
+      }
       case SHORT -> {
         Part p = part(base, s);
         yield base.withPart(s, x -> new Part(s, PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
@@ -41,6 +59,24 @@ public final class PowerOffFaults {
       case HIGH, LOW -> {
         part(base, s);
         yield base.withPart(s, x -> x.withValue(value));
+      }
+      case LEAKY -> {
+        Part p = part(base, s);
+        if (!(value > 0) || !Double.isFinite(value)) {
+          throw new IllegalArgumentException(fault.id() + " needs its leak resistance");
+        }
+        yield base.plusPart(Part.resistor("~leak-" + s, value, 0, p.netA(), p.netB()));
+      }
+      case WIPER_OPEN -> {
+        Part p = part(base, s);
+        yield base.withPart(s, x -> Part.resistor(s, p.value(), p.tolerance(), p.netA(), p.netB()));
+      }
+      case MISSET -> {
+        part(base, s);
+        if (!(value >= 0 && value <= 1)) {
+          throw new IllegalArgumentException(fault.id() + " needs the wiper's position, 0 to 1");
+        }
+        yield base.withPart(s, x -> x.withPosition(value));
       }
       case LIFTED -> lifted(base, s, fault.pin());
       case BRIDGE -> {

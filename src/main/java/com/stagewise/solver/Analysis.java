@@ -66,8 +66,8 @@ public sealed interface Analysis permits CompiledStage {
   Analysis with(Change... changes);
 
   /**
-   * Returns the value of a part (ohms or farads; a zener's volts; 0 for a diode or LED); throws
-   * for an unknown designator.
+   * Returns the value of a part (ohms or farads; a zener's volts; 0 for a diode or LED); throws for
+   * an unknown designator.
    */
   double partValue(String ref);
 

@@ -13,8 +13,7 @@ public sealed interface Change
    * A part's value changed.
    *
    * @param ref the part's designator
-   * @param value ohms or farads (a zener's marked volts), 0 or more (0 Ω is a link or a dead
-   *     short)
+   * @param value ohms or farads (a zener's marked volts), 0 or more (0 Ω is a link or a dead short)
    */
   record PartValue(String ref, double value) implements Change {
     /** Checks the value. */

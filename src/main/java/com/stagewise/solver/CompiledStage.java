@@ -677,8 +677,7 @@ final class CompiledStage implements Analysis {
       for (int k = 0; k < n; k++) {
         collapsed[k] = network.sourceNode[k] >= 0 && network.collapsed(guess, k);
       }
-      Network.DcSystem system =
-          network.solveDc(states, collapsed, start == null ? null : guess);
+      Network.DcSystem system = network.solveDc(states, collapsed, start == null ? null : guess);
       if (system == null) {
         return null;
       }

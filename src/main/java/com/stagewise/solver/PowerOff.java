@@ -30,7 +30,15 @@ import java.util.Set;
  *
  * <p>Points are named as in a readings file: a net ({@code SUM}), a package pin ({@code U1.2}; a
  * pin no section uses touches nothing) or a part lead ({@code R2.1}, {@code R2.2}: the part's first
- * and second net).
+ * and second net; {@code D1.a}, {@code D1.k} a junction's anode and cathode; {@code RV1.1}, {@code
+ * RV1.w}, {@code RV1.2} a trimmer's ends and wiper).
+ *
+ * <p>The newer parts: a trimmer is its track split at the wiper (two resistors, the wiper at the
+ * sheet's position, both sections at the track's tolerance corner together, so Rayleigh's law still
+ * gives the exact range); diodes, zeners and LEDs are open, as the design notes' power-off model
+ * has them (a meter's ohms ranges drive too little voltage to turn a junction on — common practice;
+ * its diode-test mode, which does, is not an ohms reading). A reading across a diode therefore
+ * shows the rest of the network, or OL.
  */
 public final class PowerOff {
   /** Resistors below this are taken as this (ohms): the DC solver's floor for links and shorts. */
@@ -60,8 +68,20 @@ public final class PowerOff {
     for (String net : stage.pinNets().values()) {
       nodes.putIfAbsent(net, nodes.size());
     }
-    List<Part> resistors =
-        stage.parts().stream().filter(p -> p.kind() == PartKind.RESISTOR).toList();
+    List<Part> resistors = new ArrayList<>();
+    for (Part part : stage.parts()) {
+      if (part.kind() == PartKind.RESISTOR) {
+        resistors.add(part);
+      } else if (part.kind().isTrimmer()) {
+        double[] track = part.trackOhms();
+        resistors.add(
+            Part.resistor(
+                part.ref() + "~1", track[0], part.tolerance(), part.netA(), part.wiper()));
+        resistors.add(
+            Part.resistor(
+                part.ref() + "~2", track[1], part.tolerance(), part.wiper(), part.netB()));
+      }
+    }
     nominal = new Network(nodes, resistors, 0);
     low = new Network(nodes, resistors, -1);
     high = new Network(nodes, resistors, 1);
@@ -96,11 +116,7 @@ public final class PowerOff {
     String lead = point.substring(dot + 1);
     Optional<Part> part = stage.part(owner);
     if (part.isPresent()) {
-      return switch (lead) {
-        case "1" -> Optional.of(part.get().netA());
-        case "2" -> Optional.of(part.get().netB());
-        default -> Optional.empty();
-      };
+      return Optional.ofNullable(part.get().leadNet(lead));
     }
     var type = stage.packageType(owner);
     if (type.isPresent() && lead.matches("[0-9]{1,2}")) {
@@ -129,8 +145,9 @@ public final class PowerOff {
     Set<String> points = new LinkedHashSet<>(stage.nets());
     points.addAll(stage.pinNets().keySet());
     for (Part part : stage.parts()) {
-      points.add(part.ref() + ".1");
-      points.add(part.ref() + ".2");
+      for (String lead : part.leads()) {
+        points.add(part.ref() + "." + lead);
+      }
     }
     return List.copyOf(points);
   }

@@ -58,10 +58,7 @@ final class PowerOffReference {
               stage.rails().stream()
                   .map(r -> r.net())
                   .collect(java.util.stream.Collectors.toSet()));
-      double value =
-          SpicePowerOff.isDrift(stage, answer.fault())
-              ? SpicePowerOff.driftedValue(stage, answer.fault())
-              : Double.NaN;
+      double value = SpicePowerOff.simulatedValue(stage, answer.fault());
       PowerOff faulted = PowerOffFaults.faulted(stage, fault, value);
       for (int k = 0; k < answer.pairs().size(); k++) {
         String a = answer.pairs().get(k)[0];

@@ -84,6 +84,22 @@ final class SpicePowerOff {
     return (fault.endsWith(":high") || fault.endsWith(":low")) && stage.part(ref).isPresent();
   }
 
+  /**
+   * Returns the value the fault simulation gives a fault in these checks (random draws seeded with
+   * 1): a leaky junction's leak ohms, a misset trimmer's position, the end an open track's wiper
+   * keeps (0 the first, 1 the second); NaN for a fault without one. Drifted parts: {@link
+   * #driftedValue}.
+   */
+  static double simulatedValue(Stage stage, String fault) {
+    if (isDrift(stage, fault)) {
+      return driftedValue(stage, fault);
+    }
+    Double value =
+        FaultSimulation.apply(
+            FlatCircuit.of(stage, Conditions.NOMINAL), stage, fault, new SplittableRandom(1));
+    return value == null ? Double.NaN : value;
+  }
+
   /** Runs ngspice once for every fault of a stage and returns the answers in fault order. */
   static List<Answer> solve(Stage stage) {
     Deck deck = deck(stage);
@@ -125,7 +141,10 @@ final class SpicePowerOff {
       } else {
         FaultSimulation.apply(flat, stage, fault, new SplittableRandom(1));
       }
-      // Power off: no sources, no op-amp sections; the nets they held stay as nodes.
+      // Power off: no sources, no op-amp sections; the nets they held stay as nodes. Junctions are
+      // open as the design notes' power-off model has them (the meter's test voltage does not turn
+      // them on); a shorted or leaky one is a resistor by now and stays.
+      flat.branches.removeIf(b -> b.kind().isJunction());
       flat.driven.clear();
       flat.acDrive.clear();
       flat.hz = 0;

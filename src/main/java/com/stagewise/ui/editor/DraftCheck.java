@@ -2,6 +2,9 @@ package com.stagewise.ui.editor;
 
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.Connectivity;
+import com.stagewise.circuit.DiodeClass;
+import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.LedColour;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
@@ -11,6 +14,7 @@ import com.stagewise.circuit.Terminal;
 import com.stagewise.circuit.TestInput;
 import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
+import com.stagewise.circuit.value.ZenerMarking;
 import com.stagewise.ui.editor.DraftStage.DraftInput;
 import com.stagewise.ui.editor.DraftStage.DraftPart;
 import com.stagewise.ui.editor.DraftStage.DraftRail;
@@ -176,37 +180,108 @@ final class DraftCheck {
       key = ref;
       problems.add(new EditorProblem(Place.PART, key, "a part needs its designator, e.g. R7"));
     }
-    boolean resistor = part.kind() == PartKind.RESISTOR;
-    double value = resistor ? 1000 : 1e-9;
-    String valueProblem = part.value().problem(SiValue::parse);
-    if (valueProblem != null) {
-      problems.add(
-          new EditorProblem(
-              Place.PART,
-              key,
-              part.ref()
-                  + " value: "
-                  + valueProblem
-                  + (resistor ? " (ohms, e.g. 4k7 or 470R)" : " (farads, e.g. 100n or 2u2)")));
-    } else if (part.value().value(SiValue::parse) < 0) {
-      problems.add(new EditorProblem(Place.PART, key, part.ref() + " value must not be below 0"));
+    PartKind kind = part.kind();
+    double value = kind == PartKind.CAPACITOR ? 1e-9 : kind == PartKind.ZENER ? 5.1 : 1000;
+    if (kind == PartKind.ZENER) {
+      String zenerProblem = part.value().problem(ZenerMarking::parse);
+      if (zenerProblem != null) {
+        problems.add(
+            new EditorProblem(
+                Place.PART,
+                key,
+                part.ref()
+                    + " is a zener and needs its voltage: "
+                    + (part.value().text().isBlank() ? "type its marking" : zenerProblem)
+                    + " (e.g. 5V1, 12V or 3.3V)"));
+      } else {
+        value = part.value().value(ZenerMarking::parse);
+      }
+    } else if (kind == PartKind.DIODE || kind == PartKind.LED) {
+      value = 0;
     } else {
-      value = part.value().value(SiValue::parse);
+      boolean farads = kind == PartKind.CAPACITOR;
+      String valueProblem = part.value().problem(SiValue::parse);
+      if (valueProblem != null) {
+        problems.add(
+            new EditorProblem(
+                Place.PART,
+                key,
+                part.ref()
+                    + " value: "
+                    + valueProblem
+                    + (farads ? " (farads, e.g. 100n or 2u2)" : " (ohms, e.g. 4k7 or 470R)")));
+      } else if (part.value().value(SiValue::parse) < 0) {
+        problems.add(new EditorProblem(Place.PART, key, part.ref() + " value must not be below 0"));
+      } else {
+        value = part.value().value(SiValue::parse);
+      }
     }
-    double tolerance = resistor ? 0.01 : 0.1;
-    String tolProblem = part.tolerance().problem(Tolerance::parse);
-    if (tolProblem != null) {
-      problems.add(new EditorProblem(Place.PART, key, part.ref() + ": " + tolProblem));
+    double tolerance = kind == PartKind.CAPACITOR || kind.isTrimmer() ? 0.1 : 0.01;
+    if (kind == PartKind.DIODE || kind == PartKind.LED) {
+      tolerance = 0;
     } else {
-      tolerance = part.tolerance().value(Tolerance::parse);
+      String tolProblem = part.tolerance().problem(Tolerance::parse);
+      if (tolProblem != null) {
+        problems.add(new EditorProblem(Place.PART, key, part.ref() + ": " + tolProblem));
+      } else {
+        tolerance = part.tolerance().value(Tolerance::parse);
+      }
+    }
+    DiodeClass diodeClass = null;
+    LedColour colour = null;
+    if (kind == PartKind.DIODE) {
+      diodeClass = DiodeClass.SILICON;
+      try {
+        diodeClass = DiodeClass.of(part.choice());
+        if (diodeClass == DiodeClass.LED) {
+          throw new InvalidInputException("", "class", "led is a kind of its own");
+        }
+      } catch (InvalidInputException e) {
+        diodeClass = DiodeClass.SILICON;
+        problems.add(
+            new EditorProblem(
+                Place.PART, key, part.ref() + " needs its diode class: silicon or schottky"));
+      }
+    } else if (kind == PartKind.LED) {
+      colour = LedColour.RED;
+      try {
+        colour = LedColour.of(part.choice());
+      } catch (InvalidInputException e) {
+        problems.add(
+            new EditorProblem(
+                Place.PART,
+                key,
+                part.ref() + " is an LED and needs its colour: " + LedColour.words()));
+      }
+    }
+    double position = Double.NaN;
+    if (kind.isTrimmer()) {
+      position = 0.5;
+      String positionProblem = part.position().problem(SiValue::parse);
+      double typed = positionProblem == null ? part.position().value(SiValue::parse) : Double.NaN;
+      if (part.position().text().isBlank() && Double.isNaN(part.position().exact())) {
+        position = 0.5; // the stage sheet's default
+      } else if (!(typed >= 0 && typed <= 1)) {
+        problems.add(
+            new EditorProblem(
+                Place.PART,
+                key,
+                part.ref()
+                    + " position ("
+                    + part.position().text()
+                    + ") must be between 0 and 1: the wiper's share of the track from end 1"));
+      } else {
+        position = typed;
+      }
     }
     List<String> nets = new ArrayList<>();
     List<Integer> unwired = new ArrayList<>();
+    List<String> leads = part.leads();
     for (int lead = 0; lead < part.nets().size(); lead++) {
       String net = part.nets().get(lead);
       if (net.isEmpty()) {
-        unwired.add(lead + 1);
-        net = UNWIRED + ref + "." + (lead + 1);
+        unwired.add(lead);
+        net = UNWIRED + ref + "." + leads.get(lead);
       }
       nets.add(net);
     }
@@ -217,10 +292,48 @@ final class DraftCheck {
               key,
               part.ref()
                   + (unwired.size() == part.nets().size()
-                      ? " is not connected yet: choose the nets of both ends"
-                      : " end " + unwired.get(0) + " is not connected yet: choose its net")));
+                      ? " is not connected yet: choose the nets of "
+                          + (part.nets().size() == 3 ? "both ends and the wiper" : "both ends")
+                      : " "
+                          + leadName(part, unwired.get(0))
+                          + " is not connected yet: choose its net")));
     }
-    return new Part(ref, part.kind(), value, tolerance, nets.get(0), nets.get(1));
+    if (kind.isTrimmer()) {
+      return new Part(
+          ref,
+          kind,
+          value,
+          tolerance,
+          nets.get(0),
+          nets.get(2),
+          nets.get(1),
+          position,
+          part.sealed(),
+          null,
+          null);
+    }
+    return new Part(
+        ref,
+        kind,
+        value,
+        tolerance,
+        nets.get(0),
+        nets.get(1),
+        null,
+        Double.NaN,
+        false,
+        diodeClass,
+        colour);
+  }
+
+  /** The lead in words: "end 2", "anode", "cathode", "wiper". */
+  static String leadName(DraftPart part, int lead) {
+    return switch (part.leads().get(lead)) {
+      case "a" -> "anode";
+      case "k" -> "cathode";
+      case "w" -> "wiper";
+      default -> "end " + part.leads().get(lead);
+    };
   }
 
   private static Amplifier section(DraftSection s, int index, List<EditorProblem> problems) {

@@ -11,6 +11,7 @@ import com.stagewise.circuit.Terminal;
 import com.stagewise.circuit.TestInput;
 import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
+import com.stagewise.circuit.value.ZenerMarking;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -94,12 +95,25 @@ public record DraftStage(
    *
    * @param ref its designator
    * @param kind its kind
-   * @param value its value (ohms, farads)
+   * @param value its value (ohms, farads; a zener's marking such as {@code 5V1}; empty for a diode
+   *     or LED, which have none)
    * @param tolerance its tolerance
-   * @param nets the nets on its leads, in sheet order; {@code ""} where not wired yet
+   * @param nets the nets on its leads, in sheet order ({@code [anode, cathode]} for a junction,
+   *     {@code [end, wiper, end]} for a trimmer); {@code ""} where not wired yet
+   * @param choice a diode's class ({@code silicon}, {@code schottky}) or an LED's colour ({@code
+   *     red} …) as chosen; {@code ""} for other kinds or when not chosen yet
+   * @param position a trimmer's wiper position (0 to 1) as entered; empty for other kinds
+   * @param sealed whether a trimmer is factory-set and sealed
    */
   public record DraftPart(
-      String ref, PartKind kind, Entry value, Entry tolerance, List<String> nets) {
+      String ref,
+      PartKind kind,
+      Entry value,
+      Entry tolerance,
+      List<String> nets,
+      String choice,
+      Entry position,
+      boolean sealed) {
     /** Copies the nets; see the record description. */
     public DraftPart {
       ref = ref == null ? "" : ref.strip();
@@ -107,24 +121,51 @@ public record DraftStage(
       Objects.requireNonNull(value, "value");
       Objects.requireNonNull(tolerance, "tolerance");
       nets = nets.stream().map(n -> n == null ? "" : n.strip()).toList();
+      choice = choice == null ? "" : choice.strip();
+      position = position == null ? Entry.typed("") : position;
+    }
+
+    /** A resistor or capacitor (no choice, no wiper). */
+    public DraftPart(String ref, PartKind kind, Entry value, Entry tolerance, List<String> nets) {
+      this(ref, kind, value, tolerance, nets, "", Entry.typed(""), false);
     }
 
     DraftPart withRef(String newRef) {
-      return new DraftPart(newRef, kind, value, tolerance, nets);
+      return new DraftPart(newRef, kind, value, tolerance, nets, choice, position, sealed);
     }
 
     DraftPart withValue(Entry newValue) {
-      return new DraftPart(ref, kind, newValue, tolerance, nets);
+      return new DraftPart(ref, kind, newValue, tolerance, nets, choice, position, sealed);
     }
 
     DraftPart withTolerance(Entry newTolerance) {
-      return new DraftPart(ref, kind, value, newTolerance, nets);
+      return new DraftPart(ref, kind, value, newTolerance, nets, choice, position, sealed);
     }
 
     DraftPart withNet(int lead, String net) {
       List<String> changed = new ArrayList<>(nets);
       changed.set(lead, net == null ? "" : net.strip());
-      return new DraftPart(ref, kind, value, tolerance, changed);
+      return withNets(changed);
+    }
+
+    DraftPart withNets(List<String> changed) {
+      return new DraftPart(ref, kind, value, tolerance, changed, choice, position, sealed);
+    }
+
+    DraftPart withChoice(String newChoice) {
+      return new DraftPart(ref, kind, value, tolerance, nets, newChoice, position, sealed);
+    }
+
+    DraftPart withPosition(Entry newPosition, boolean newSealed) {
+      return new DraftPart(ref, kind, value, tolerance, nets, choice, newPosition, newSealed);
+    }
+
+    /** Returns the names of the leads in the order of {@link #nets}, as in readings files. */
+    public List<String> leads() {
+      if (kind.isTrimmer()) {
+        return List.of("1", "w", "2");
+      }
+      return kind.isJunction() ? List.of("a", "k") : List.of("1", "2");
     }
   }
 
@@ -215,13 +256,26 @@ public record DraftStage(
     }
     List<DraftPart> parts = new ArrayList<>();
     for (Part part : stage.parts()) {
+      String choice =
+          switch (part.kind()) {
+            case DIODE -> part.diodeClass().word();
+            case LED -> part.colour().word();
+            default -> "";
+          };
+      Entry position =
+          part.kind().isTrimmer()
+              ? Entry.of(part.position(), plain(part.position()))
+              : Entry.typed("");
       parts.add(
           new DraftPart(
               part.ref(),
               part.kind(),
               Entry.of(part.value(), valueText(part.kind(), part.value())),
               Entry.of(part.tolerance(), Tolerance.format(part.tolerance())),
-              List.of(part.netA(), part.netB())));
+              part.nets(),
+              choice,
+              position,
+              part.sealed()));
     }
     List<DraftSection> sections = new ArrayList<>();
     for (Amplifier amp : stage.amplifiers()) {
@@ -242,9 +296,17 @@ public record DraftStage(
         stage.title(), stage.board(), stage.ground(), rails, inputs, parts, sections);
   }
 
-  /** Returns a value as a technician writes it: {@code 4k7}, {@code 100n}. */
+  /**
+   * Returns a value as a technician writes it: {@code 4k7}, {@code 100n}, a zener's {@code 5V1};
+   * empty for a diode or LED (no value).
+   */
   static String valueText(PartKind kind, double value) {
-    return kind == PartKind.CAPACITOR ? SiValue.rkmFarads(value) : SiValue.rkm(value);
+    return switch (kind) {
+      case CAPACITOR -> SiValue.rkmFarads(value);
+      case ZENER -> ZenerMarking.format(value);
+      case DIODE, LED -> "";
+      default -> SiValue.rkm(value);
+    };
   }
 
   /** Returns a number in plain decimal notation, whatever the machine's locale. */

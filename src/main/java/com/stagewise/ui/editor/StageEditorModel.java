@@ -41,6 +41,12 @@ public final class StageEditorModel {
   /** Capacitor tolerance offered for a new capacitor: 10 % (common practice). */
   static final String NEW_CAPACITOR_TOLERANCE = "10%";
 
+  /** A new zener's tolerance: 5 % (the usual grade of small zeners; common practice). */
+  static final String NEW_ZENER_TOLERANCE = "5%";
+
+  /** A new trimmer's track tolerance: 20 % (usual for cermet trimmers; common practice). */
+  static final String NEW_TRIMMER_TOLERANCE = "20%";
+
   /** Rail tolerance offered for a new rail: 5 %, a regulated supply (common practice). */
   static final String NEW_RAIL_TOLERANCE = "5%";
 
@@ -311,14 +317,7 @@ public final class StageEditorModel {
                 .map(i -> new DraftInput(rename.apply(i.net()), i.dc(), i.ac(), i.hz()))
                 .toList(),
             draft.parts().stream()
-                .map(
-                    p ->
-                        new DraftPart(
-                            p.ref(),
-                            p.kind(),
-                            p.value(),
-                            p.tolerance(),
-                            p.nets().stream().map(rename).toList()))
+                .map(p -> p.withNets(p.nets().stream().map(rename).toList()))
                 .toList(),
             draft.sections().stream()
                 .map(
@@ -348,14 +347,56 @@ public final class StageEditorModel {
    */
   public String addPart(PartKind kind) {
     String ref = nextFree(prefix(kind));
-    boolean resistor = kind == PartKind.RESISTOR;
     DraftPart part =
-        new DraftPart(
-            ref,
-            kind,
-            Entry.typed(resistor ? "10k" : "100n"),
-            Entry.typed(resistor ? NEW_RESISTOR_TOLERANCE : NEW_CAPACITOR_TOLERANCE),
-            List.of("", ""));
+        switch (kind) {
+          case RESISTOR ->
+              new DraftPart(
+                  ref,
+                  kind,
+                  Entry.typed("10k"),
+                  Entry.typed(NEW_RESISTOR_TOLERANCE),
+                  List.of("", ""));
+          case CAPACITOR ->
+              new DraftPart(
+                  ref,
+                  kind,
+                  Entry.typed("100n"),
+                  Entry.typed(NEW_CAPACITOR_TOLERANCE),
+                  List.of("", ""));
+          case DIODE ->
+              new DraftPart(
+                  ref,
+                  kind,
+                  Entry.typed(""),
+                  Entry.typed(""),
+                  List.of("", ""),
+                  "silicon",
+                  Entry.typed(""),
+                  false);
+          case LED ->
+              new DraftPart(
+                  ref,
+                  kind,
+                  Entry.typed(""),
+                  Entry.typed(""),
+                  List.of("", ""),
+                  "red",
+                  Entry.typed(""),
+                  false);
+          case ZENER ->
+              new DraftPart(
+                  ref, kind, Entry.typed("5V1"), Entry.typed(NEW_ZENER_TOLERANCE), List.of("", ""));
+          case TRIMMER, POTENTIOMETER ->
+              new DraftPart(
+                  ref,
+                  kind,
+                  Entry.typed("10k"),
+                  Entry.typed(NEW_TRIMMER_TOLERANCE),
+                  List.of("", "", ""),
+                  "",
+                  Entry.typed("0.5"),
+                  false);
+        };
     List<DraftPart> parts = new ArrayList<>(draft.parts());
     parts.add(part);
     apply("add " + ref, draft.withParts(parts));
@@ -405,8 +446,52 @@ public final class StageEditorModel {
     String name = net == null ? "" : net.strip();
     return changePart(
         ref,
-        "connect " + ref + " end " + (lead + 1) + " to " + (name.isEmpty() ? "nothing" : name),
+        "connect "
+            + ref
+            + " "
+            + DraftCheck.leadName(part, lead)
+            + " to "
+            + (name.isEmpty() ? "nothing" : name),
         p -> p.withNet(lead, name));
+  }
+
+  /**
+   * Chooses a diode's class ({@code silicon}, {@code schottky}) or an LED's colour ({@code red},
+   * {@code green} …); kept as chosen even if not a word the kind takes (then flagged).
+   */
+  public boolean setPartChoice(String ref, String word) {
+    DraftPart part = draft.part(ref);
+    if (part == null) {
+      return refuse("There is no part " + ref + ".");
+    }
+    if (part.kind() != PartKind.DIODE && part.kind() != PartKind.LED) {
+      return refuse(
+          "A class or colour is chosen for a diode or LED; "
+              + ref
+              + " is a "
+              + part.kind().word()
+              + ".");
+    }
+    String what = part.kind() == PartKind.LED ? " colour to " : " class to ";
+    return changePart(ref, "set " + ref + what + word, p -> p.withChoice(word));
+  }
+
+  /**
+   * Sets a trimmer's wiper position as typed (0 to 1, the share of the track from end 1) and
+   * whether it is sealed; kept as typed even if not valid (then flagged).
+   */
+  public boolean setPartPosition(String ref, String text, boolean sealed) {
+    DraftPart part = draft.part(ref);
+    if (part == null) {
+      return refuse("There is no part " + ref + ".");
+    }
+    if (!part.kind().isTrimmer()) {
+      return refuse("A wiper position is set on a trimmer; " + ref + " has no wiper.");
+    }
+    return changePart(
+        ref,
+        "set " + ref + " wiper to " + text + (sealed ? " (sealed)" : ""),
+        p -> p.withPosition(Entry.typed(text), sealed));
   }
 
   /** Sets a part's value as typed ({@code 4k7}, {@code 100n}); kept as typed even if not valid. */
@@ -787,7 +872,13 @@ public final class StageEditorModel {
   }
 
   private static String prefix(PartKind kind) {
-    return kind == PartKind.CAPACITOR ? "C" : "R";
+    return switch (kind) {
+      case CAPACITOR -> "C";
+      case DIODE, LED -> "D";
+      case ZENER -> "ZD";
+      case TRIMMER, POTENTIOMETER -> "RV";
+      default -> "R";
+    };
   }
 
   private String highestRail() {

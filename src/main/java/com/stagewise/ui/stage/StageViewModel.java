@@ -2,7 +2,9 @@ package com.stagewise.ui.stage;
 
 import com.stagewise.casework.LibraryStage;
 import com.stagewise.circuit.DeviceClass;
+import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.LedColour;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
@@ -12,6 +14,7 @@ import com.stagewise.circuit.template.StageTemplate;
 import com.stagewise.circuit.template.Templates;
 import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
+import com.stagewise.circuit.value.ZenerMarking;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.ExpectedVolts;
@@ -123,6 +126,8 @@ public final class StageViewModel {
             case "vee" -> "Negative rail VEE";
             case "class" -> "Op-amp class";
             case "package" -> "Package of U1 (section A is used)";
+            case "diode" -> "Diode class";
+            case "colour" -> "LED colour";
             default ->
                 Character.toUpperCase(parameter.meaning().charAt(0))
                     + parameter.meaning().substring(1);
@@ -130,13 +135,32 @@ public final class StageViewModel {
       return words + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
     }
 
-    /** Returns the words the field takes, when it is a choice (class, package); else empty. */
+    /**
+     * Returns the words the field takes, when it is a choice (op-amp class, package, diode class,
+     * LED colour); else empty.
+     */
     public List<String> choices() {
       return switch (parameter.name()) {
         case "class" -> Arrays.stream(DeviceClass.values()).map(DeviceClass::word).toList();
         case "package" -> Arrays.stream(PackageType.values()).map(PackageType::word).toList();
+        case "diode" ->
+            Arrays.stream(DiodeClass.values())
+                .filter(c -> c != DiodeClass.LED)
+                .map(DiodeClass::word)
+                .toList();
+        case "colour" -> Arrays.stream(LedColour.values()).map(LedColour::word).toList();
         default -> List.of();
       };
+    }
+
+    /** Whether the field takes a zener's marked voltage ({@code 5V1}). */
+    private boolean isZenerMarking() {
+      return parameter.meaning().startsWith("zener ");
+    }
+
+    /** Whether the field takes a trimmer's wiper position (0 to 1). */
+    private boolean isPosition() {
+      return parameter.meaning().contains("wiper position");
     }
 
     /**
@@ -153,6 +177,22 @@ public final class StageViewModel {
       }
       if (typed.equals("none") && parameter.meaning().contains("none")) {
         return "";
+      }
+      if (isZenerMarking()) {
+        try {
+          ZenerMarking.parse(typed);
+          return "";
+        } catch (InvalidInputException e) {
+          return "Not a zener voltage: write its marking, e.g. 5V1, 12V or 3.3V";
+        }
+      }
+      if (isPosition()) {
+        try {
+          double v = SiValue.parse(typed);
+          return v >= 0 && v <= 1 ? "" : "A wiper position is from 0 (first end) to 1 (other end)";
+        } catch (InvalidInputException e) {
+          return "Not a position: write a share of the travel from 0 to 1, e.g. 0.5";
+        }
       }
       try {
         double v = SiValue.parse(typed);

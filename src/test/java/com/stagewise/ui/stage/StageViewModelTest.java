@@ -163,11 +163,35 @@ class StageViewModelTest {
     assertThat(byName.get("r1").problem("-10k")).contains("cannot be negative");
     assertThat(byName.get("vee").problem("-15")).isEmpty();
     assertThat(byName.get("r1").problem("")).startsWith("Type a value");
+    // The junction templates: diode class and LED colour are lists of DESIGN.md's words, a zener
+    // takes its usual marking, a trimmer position is a share of the travel (0 to 1).
+    model.templateProperty().set(Templates.named("precision-rectifier"));
+    var diode = field(model, "diode");
+    assertThat(diode.choices()).containsExactly("silicon", "schottky");
+    assertThat(diode.label()).isEqualTo("Diode class");
+    model.templateProperty().set(Templates.named("led-comparator"));
+    assertThat(field(model, "colour").choices())
+        .containsExactly("red", "orange", "yellow", "green", "blue", "white");
+    assertThat(field(model, "colour").problem("purple")).startsWith("Choose one of");
+    model.templateProperty().set(Templates.named("zener-reference"));
+    assertThat(field(model, "zd1").problem("5V1")).isEmpty();
+    assertThat(field(model, "zd1").problem("3.3V")).isEmpty();
+    assertThat(field(model, "zd1").problem("5,1V")).startsWith("Not a zener voltage");
+    model.templateProperty().set(Templates.named("offset-null"));
+    assertThat(field(model, "pos").problem("0.82")).isEmpty();
+    assertThat(field(model, "pos").problem("1.7")).startsWith("A wiper position is from 0");
     // Every default of every template is a value its field takes.
     for (var template : Templates.all()) {
       model.templateProperty().set(template);
       assertThat(model.parameters())
           .allSatisfy(p -> assertThat(p.problem(p.value().get())).as(p.label()).isEmpty());
     }
+  }
+
+  private static StageViewModel.ParameterEntry field(StageViewModel model, String name) {
+    return model.parameters().stream()
+        .filter(p -> p.parameter().name().equals(name))
+        .findFirst()
+        .orElseThrow();
   }
 }
