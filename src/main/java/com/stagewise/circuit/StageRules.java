@@ -5,12 +5,17 @@ import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 
 /**
- * Checks a stage for mistakes that a well-formed sheet can still hold: duplicate designators, two
- * sections on the same pins, sections of one package on different supplies, a net that only one
- * part end touches (usually a misspelt name), an unconnected ground, and nets with no DC path.
+ * Checks a stage for mistakes that a well-formed sheet can still hold: sizes and values outside
+ * {@link Limits}, duplicate designators, two sections on the same pins, sections of one package on
+ * different supplies, a net that only one part end or section pin touches (usually a misspelt
+ * name), an unconnected ground, and nets with no DC path.
+ *
+ * <p>These are the rules of every stage, wherever it comes from (a sheet, a template, the app): one
+ * place, one message each.
  */
 public final class StageRules {
   private StageRules() {}
@@ -26,10 +31,17 @@ public final class StageRules {
   /** Returns every problem found, in sheet order; an empty list when the stage is sound. */
   public static List<Problem> problems(Stage stage) {
     List<Problem> problems = new ArrayList<>();
+    if (!checkSizes(stage, problems)) {
+      // Too large to check further within bounded time: say what was too large and stop.
+      return problems;
+    }
+    checkNames(stage, problems);
+    checkValues(stage, problems);
     checkDrivenNets(stage, problems);
     checkDesignators(stage, problems);
     checkSections(stage, problems);
     checkNetUse(stage, problems);
+    checkTerminalNets(stage, problems);
     for (String net : Connectivity.floatingNets(stage)) {
       problems.add(
           new Problem(
@@ -175,17 +187,7 @@ public final class StageRules {
   }
 
   private static void checkNetUse(Stage stage, List<Problem> problems) {
-    Map<String, Integer> uses = new HashMap<>();
-    for (Part part : stage.parts()) {
-      for (String net : new java.util.HashSet<>(part.nets())) {
-        uses.merge(net, 1, Integer::sum);
-      }
-    }
-    for (Amplifier amp : stage.amplifiers()) {
-      for (Terminal terminal : Terminal.values()) {
-        uses.merge(amp.net(terminal), 1, Integer::sum);
-      }
-    }
+    Map<String, Integer> uses = uses(stage);
     if (!uses.containsKey(stage.ground())) {
       problems.add(
           new Problem(
@@ -209,5 +211,159 @@ public final class StageRules {
         }
       }
     }
+  }
+
+  /** Adds a problem for every list beyond its limit; returns whether all sizes are within them. */
+  private static boolean checkSizes(Stage stage, List<Problem> problems) {
+    int before = problems.size();
+    tooMany(problems, "rails", stage.rails().size(), Limits.MAX_RAILS, "rails");
+    tooMany(problems, "inputs", stage.inputs().size(), Limits.MAX_INPUTS, "test inputs");
+    tooMany(problems, "parts", stage.parts().size(), Limits.MAX_PARTS, "parts");
+    tooMany(
+        problems, "amplifiers", stage.amplifiers().size(), Limits.MAX_SECTIONS, "op-amp sections");
+    if (problems.size() == before) {
+      tooMany(problems, "nets", stage.nets().size(), Limits.MAX_NETS, "nets");
+    }
+    return problems.size() == before;
+  }
+
+  private static void tooMany(
+      List<Problem> problems, String field, int found, int max, String things) {
+    if (found > max) {
+      problems.add(new Problem(field, Limits.tooMany(found, max, things)));
+    }
+  }
+
+  private static void checkNames(Stage stage, List<Problem> problems) {
+    text(problems, "title", stage.title(), "the title", Limits.MAX_TEXT_LENGTH);
+    text(problems, "board", stage.board(), "the board", Limits.MAX_TEXT_LENGTH);
+    name(problems, "ground", stage.ground(), "the ground net's name");
+    for (int i = 0; i < stage.rails().size(); i++) {
+      name(problems, "rails[" + i + "].net", stage.rails().get(i).net(), "a net name");
+    }
+    for (int i = 0; i < stage.inputs().size(); i++) {
+      name(problems, "inputs[" + i + "].net", stage.inputs().get(i).net(), "a net name");
+    }
+    for (int i = 0; i < stage.parts().size(); i++) {
+      Part part = stage.parts().get(i);
+      String at = "parts[" + i + "]";
+      name(problems, at + ".ref", part.ref(), "a designator");
+      name(problems, at + ".nets[0]", part.netA(), "a net name");
+      name(problems, at + ".nets[1]", part.netB(), "a net name");
+    }
+    for (int i = 0; i < stage.amplifiers().size(); i++) {
+      Amplifier amp = stage.amplifiers().get(i);
+      String at = "amplifiers[" + i + "]";
+      name(problems, at + ".ref", amp.ref(), "a designator");
+      name(problems, at + ".package", amp.packageRef(), "a package designator");
+      for (Terminal terminal : Terminal.values()) {
+        name(problems, at + "." + terminal.key(), amp.net(terminal), "a net name");
+      }
+    }
+  }
+
+  private static void name(List<Problem> problems, String field, String name, String role) {
+    if (name.length() > Limits.MAX_NAME_LENGTH) {
+      problems.add(new Problem(field, Limits.tooLong(role, name.length(), Limits.MAX_NAME_LENGTH)));
+    } else if (name.chars().anyMatch(Character::isISOControl)) {
+      problems.add(
+          new Problem(
+              field, role + " holds a control character (expected letters, digits and signs)"));
+    }
+  }
+
+  private static void text(
+      List<Problem> problems, String field, String text, String role, int max) {
+    if (text.length() > max) {
+      problems.add(new Problem(field, Limits.tooLong(role, text.length(), max)));
+    }
+  }
+
+  private static void checkValues(Stage stage, List<Problem> problems) {
+    for (int i = 0; i < stage.rails().size(); i++) {
+      Rail rail = stage.rails().get(i);
+      String at = "rails[" + i + "]";
+      span(problems, at + ".volts", Limits.RAIL_VOLTS, "rail " + rail.net(), rail.volts());
+      span(
+          problems,
+          at + ".tolerance",
+          Limits.TOLERANCE,
+          "rail " + rail.net() + "'s tolerance",
+          rail.tolerance());
+    }
+    for (int i = 0; i < stage.inputs().size(); i++) {
+      TestInput input = stage.inputs().get(i);
+      String at = "inputs[" + i + "]";
+      span(problems, at + ".dc", Limits.INPUT_DC_VOLTS, "input " + input.net(), input.dc());
+      span(problems, at + ".ac", Limits.INPUT_AC_VOLTS, "input " + input.net(), input.ac());
+      if (input.hasAc() || input.hz() > 0) {
+        span(problems, at + ".hz", Limits.FREQUENCY_HZ, "input " + input.net(), input.hz());
+      }
+    }
+    for (int i = 0; i < stage.parts().size(); i++) {
+      Part part = stage.parts().get(i);
+      String at = "parts[" + i + "]";
+      boolean link = part.kind() == PartKind.RESISTOR && part.value() == 0;
+      Optional<Limits.Span> range = Limits.of(part.kind());
+      if (!link && range.isPresent()) {
+        span(problems, at + ".value", range.get(), part.ref(), part.value());
+      }
+      span(
+          problems,
+          at + ".tolerance",
+          Limits.TOLERANCE,
+          part.ref() + "'s tolerance",
+          part.tolerance());
+    }
+  }
+
+  private static void span(
+      List<Problem> problems, String field, Limits.Span span, String subject, double value) {
+    if (!span.contains(value)) {
+      problems.add(new Problem(field, span.problem(subject, value)));
+    }
+  }
+
+  /**
+   * Adds a problem for a section's input or supply pin on a net that nothing else touches: a
+   * misspelt net name leaves the pin on a net of its own.
+   */
+  private static void checkTerminalNets(Stage stage, List<Problem> problems) {
+    Map<String, Integer> uses = uses(stage);
+    for (int i = 0; i < stage.amplifiers().size(); i++) {
+      Amplifier amp = stage.amplifiers().get(i);
+      for (Terminal terminal :
+          List.of(Terminal.IN_PLUS, Terminal.IN_MINUS, Terminal.V_PLUS, Terminal.V_MINUS)) {
+        String net = amp.net(terminal);
+        if (!stage.isDriven(net) && uses.getOrDefault(net, 0) == 1) {
+          problems.add(
+              new Problem(
+                  "amplifiers[" + i + "]." + terminal.key(),
+                  amp.ref()
+                      + " "
+                      + terminal.words()
+                      + " is on net "
+                      + net
+                      + ", which no part, other pin, rail or input touches"
+                      + " (expected the name of a net of the stage; misspelt?)"));
+        }
+      }
+    }
+  }
+
+  private static Map<String, Integer> uses(Stage stage) {
+    Map<String, Integer> uses = new HashMap<>();
+    for (Part part : stage.parts()) {
+      // A trimmer touches its end and wiper nets once each, even when two share a net.
+      for (String net : new HashSet<>(part.nets())) {
+        uses.merge(net, 1, Integer::sum);
+      }
+    }
+    for (Amplifier amp : stage.amplifiers()) {
+      for (Terminal terminal : Terminal.values()) {
+        uses.merge(amp.net(terminal), 1, Integer::sum);
+      }
+    }
+    return uses;
   }
 }

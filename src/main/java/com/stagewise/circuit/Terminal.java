@@ -2,18 +2,25 @@ package com.stagewise.circuit;
 
 /** The five terminals of an op-amp section. */
 public enum Terminal {
-  IN_PLUS("in+", "non-inverting input"),
-  IN_MINUS("in-", "inverting input"),
-  OUT("out", "output"),
-  V_PLUS("v+", "positive supply pin"),
-  V_MINUS("v-", "negative supply pin");
+  IN_PLUS("in+", "non-inverting input", "inPlus"),
+  IN_MINUS("in-", "inverting input", "inMinus"),
+  OUT("out", "output", "out"),
+  V_PLUS("v+", "positive supply pin", "vPlus"),
+  V_MINUS("v-", "negative supply pin", "vMinus");
 
   private final String symbol;
   private final String words;
+  private final String key;
 
-  Terminal(String symbol, String words) {
+  Terminal(String symbol, String words, String key) {
     this.symbol = symbol;
     this.words = words;
+    this.key = key;
+  }
+
+  /** Returns the key of the terminal's net in a stage sheet, e.g. {@code inPlus}. */
+  public String key() {
+    return key;
   }
 
   /** Returns the short symbol, e.g. {@code in+}. */

@@ -5,6 +5,7 @@ import com.stagewise.circuit.Stage;
 import com.stagewise.interchange.SolutionJson;
 import com.stagewise.interchange.StageSheet;
 import com.stagewise.solver.AcSolution;
+import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.solver.OperatingPoint;
 import com.stagewise.solver.Phasor;
 import com.stagewise.solver.SolveResult;
@@ -31,8 +32,9 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true,
     description =
         "Prints what every net and op-amp pin of a healthy stage should read: DC volts, the state of"
-            + " each section and, when a test input has AC, the AC amplitude and phase. Nominal part"
-            + " values and nominal device parameters.")
+            + " each section and, when a test input has AC, the AC amplitude and phase, with nominal"
+            + " part values and nominal device parameters; and the healthy range of each DC level"
+            + " over the parts' and rails' tolerances.")
 final class SolveCommand implements Callable<Integer> {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
@@ -52,37 +54,27 @@ final class SolveCommand implements Callable<Integer> {
   public Integer call() {
     Stage stage = StageSheet.read(stageFile);
     SolveResult result = StageSolver.solve(stage);
-    String source = stageFile.toString();
-    if (result instanceof SolveResult.Floating floating) {
-      throw new InvalidInputException(
-          source,
-          "nets",
-          "no DC path sets the voltage of "
-              + String.join(", ", floating.nets())
-              + " (expected a resistor or an output to tie it to ground, a rail or an input)");
+    if (!(result instanceof SolveResult.Solved solved)) {
+      throw new InvalidInputException(stageFile.toString(), result.field(), result.problem());
     }
-    if (result instanceof SolveResult.NoConsistentState none) {
-      throw new InvalidInputException(
-          source,
-          "amplifiers",
-          (none.section().isEmpty() ? "" : none.section() + ": ")
-              + "no consistent state: "
-              + none.reason());
-    }
-    SolveResult.Solved solved = (SolveResult.Solved) result;
     Optional<AcSolution> ac = StageSolver.ac(stage, solved.primary());
+    ExpectedVolts healthy = ExpectedVolts.of(stage, solved);
     PrintWriter out = spec.commandLine().getOut();
     if (json) {
-      out.print(SolutionJson.write(solved, ac));
+      out.print(SolutionJson.write(solved, ac, healthy));
     } else {
-      out.print(table(stage, solved, ac));
+      out.print(table(stage, solved, ac, healthy));
     }
     out.flush();
     return ExitCode.OK;
   }
 
-  /** Returns the readable table: one row per net with its pins, expected volts and AC. */
-  static String table(Stage stage, SolveResult.Solved solved, Optional<AcSolution> ac) {
+  /**
+   * Returns the readable table: one row per net with its pins, expected volts, AC and (for the
+   * first state) the healthy range over the tolerances.
+   */
+  static String table(
+      Stage stage, SolveResult.Solved solved, Optional<AcSolution> ac, ExpectedVolts healthy) {
     StringBuilder text = new StringBuilder();
     String heading = stage.title().isEmpty() ? "Stage" : stage.title();
     text.append(heading)
@@ -101,39 +93,50 @@ final class SolveCommand implements Callable<Integer> {
     for (int i = 0; i < points.size(); i++) {
       OperatingPoint point = points.get(i);
       boolean withAc = i == 0 && ac.isPresent();
+      boolean withRange = i == 0 && healthy.solved();
       if (points.size() > 1) {
         text.append("\nState ").append(i + 1).append(":\n");
       }
       text.append('\n');
-      String format = withAc ? "%-14s %-18s %12s %14s %10s%n" : "%-14s %-18s %12s%n";
-      if (withAc) {
-        text.append(
-            String.format(
-                Locale.ROOT,
-                format,
-                "net",
-                "pins",
-                "DC volts",
-                "AC at " + number(ac.get().hz(), 0) + " Hz",
-                "phase"));
-      } else {
-        text.append(String.format(Locale.ROOT, format, "net", "pins", "DC volts"));
-      }
+      String format =
+          "%-14s %-18s %12s" + (withAc ? " %14s %10s" : "%s%s") + (withRange ? "   %s%n" : "%s%n");
+      text.append(
+          String.format(
+                      Locale.ROOT,
+                      format,
+                      "net",
+                      "pins",
+                      "DC volts",
+                      withAc ? "AC at " + number(ac.get().hz(), 0) + " Hz" : "",
+                      withAc ? "phase" : "",
+                      withRange ? "healthy range (tolerances)" : "")
+                  .stripTrailing()
+              + "\n");
       for (Map.Entry<String, Double> net : point.nets().entrySet()) {
         String pins = String.join(" ", pinsOfNet.getOrDefault(net.getKey(), List.of()));
         String volts = number(net.getValue(), 4);
+        String amplitude = "";
+        String phase = "";
         if (withAc) {
           Phasor phasor = ac.get().nets().get(net.getKey());
-          String amplitude = phasor == null ? "" : number(phasor.amplitude(), 4);
-          String phase =
+          amplitude = phasor == null ? "" : number(phasor.amplitude(), 4);
+          phase =
               phasor == null || phasor.amplitude() == 0
                   ? ""
                   : number(phasor.phaseDegrees(), 1) + "°";
-          text.append(
-              String.format(Locale.ROOT, format, net.getKey(), pins, volts, amplitude, phase));
-        } else {
-          text.append(String.format(Locale.ROOT, format, net.getKey(), pins, volts));
         }
+        String range = "";
+        // Ground and test inputs are set by the bench, not by the parts: no range to show.
+        if (withRange
+            && !net.getKey().equals(stage.ground())
+            && stage.input(net.getKey()).isEmpty()) {
+          range =
+              number(healthy.low(net.getKey()), 4) + " … " + number(healthy.high(net.getKey()), 4);
+        }
+        text.append(
+            String.format(Locale.ROOT, format, net.getKey(), pins, volts, amplitude, phase, range)
+                    .stripTrailing()
+                + "\n");
       }
       text.append("\nsections:");
       point

@@ -1,11 +1,8 @@
 package com.stagewise.cli;
 
-import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.InvalidInputException;
-import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
-import com.stagewise.circuit.Terminal;
 import com.stagewise.interchange.StageSheet;
 import com.stagewise.ui.drawing.SchematicPicture;
 import java.io.IOException;
@@ -15,11 +12,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -45,49 +39,11 @@ final class StageCommand implements Runnable {
   }
 
   /**
-   * Returns every problem of a stage: the stage rules and section pins on nets nothing else
-   * touches.
+   * Returns every problem of a stage: the stage rules (which include section pins on nets nothing
+   * else touches).
    */
   static List<StageRules.Problem> problems(Stage stage) {
-    List<StageRules.Problem> problems = new ArrayList<>(StageRules.problems(stage));
-    Map<String, Integer> uses = new HashMap<>();
-    for (Part part : stage.parts()) {
-      uses.merge(part.netA(), 1, Integer::sum);
-      uses.merge(part.netB(), 1, Integer::sum);
-    }
-    for (Amplifier amp : stage.amplifiers()) {
-      for (Terminal terminal : Terminal.values()) {
-        uses.merge(amp.net(terminal), 1, Integer::sum);
-      }
-    }
-    Map<Terminal, String> keys =
-        Map.of(
-            Terminal.IN_PLUS, "inPlus",
-            Terminal.IN_MINUS, "inMinus",
-            Terminal.V_PLUS, "vPlus",
-            Terminal.V_MINUS, "vMinus");
-    for (int i = 0; i < stage.amplifiers().size(); i++) {
-      Amplifier amp = stage.amplifiers().get(i);
-      for (Terminal terminal :
-          List.of(Terminal.IN_PLUS, Terminal.IN_MINUS, Terminal.V_PLUS, Terminal.V_MINUS)) {
-        String net = amp.net(terminal);
-        String field = "amplifiers[" + i + "]." + keys.get(terminal);
-        // The stage rules may already say it (the rule is moving into them): say it once.
-        boolean said = problems.stream().anyMatch(p -> p.field().equals(field));
-        if (!said && !stage.isDriven(net) && uses.getOrDefault(net, 0) == 1) {
-          problems.add(
-              new StageRules.Problem(
-                  field,
-                  amp.ref()
-                      + " "
-                      + terminal.words()
-                      + " is on net "
-                      + net
-                      + ", which no part, other pin, rail or input touches (misspelt?)"));
-        }
-      }
-    }
-    return problems;
+    return StageRules.problems(stage);
   }
 
   /** {@code stage check FILE…}: prints every problem of each sheet; exit 2 if any. */

@@ -53,8 +53,8 @@ public final class StagewiseCommand implements Runnable {
         (ex, cmd, parseResult) -> {
           if (ex instanceof InvalidInputException || ex instanceof StorageException) {
             // Both messages are written for the user: the file, the field or the fault, and what to
-            // do.
-            err.println("stagewise: " + ex.getMessage());
+            // do; on one line, whatever text of the user's they quote.
+            err.println("stagewise: " + oneLine(ex.getMessage()));
           } else {
             err.println("stagewise: internal error: " + ex);
           }
@@ -68,6 +68,27 @@ public final class StagewiseCommand implements Runnable {
     out.flush();
     err.flush();
     return code;
+  }
+
+  /**
+   * Returns a message on one line: a line break or another control character that it quotes from
+   * the user's text is shown escaped ({@code \\n}, {@code \\u0007}).
+   */
+  static String oneLine(String message) {
+    StringBuilder text = new StringBuilder(message.length());
+    for (int i = 0; i < message.length(); i++) {
+      char c = message.charAt(i);
+      if (c == '\n') {
+        text.append("\\n");
+      } else if (c == '\r') {
+        text.append("\\r");
+      } else if (Character.isISOControl(c)) {
+        text.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
+      } else {
+        text.append(c);
+      }
+    }
+    return text.toString();
   }
 
   /** Prints the version recorded in the jar's manifest. */

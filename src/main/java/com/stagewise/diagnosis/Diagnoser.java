@@ -2,9 +2,9 @@ package com.stagewise.diagnosis;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
-import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
@@ -111,16 +111,16 @@ public final class Diagnoser {
    * Returns the diagnosis of a set of readings.
    *
    * @param top the most suspects to list, 1 or more
-   * @throws InvalidInputException if a reading names no net or used pin of the stage, is not a
-   *     finite number, lies far beyond every rail, or is an AC reading the stage cannot have
+   * @throws InvalidInputException for any problem of {@link ReadingRules#problems}: a reading at no
+   *     net or used pin of the stage, far beyond every rail, or an AC reading the stage cannot have
    */
   public Diagnosis diagnose(ReadingSet readings, int top) {
     if (top < 1) {
       throw new InvalidInputException(
           "", "top", "the number of suspects (" + top + ") must be 1 or more");
     }
+    ReadingRules.requireSound(stage, readings, "");
     readings = leadsOnNets(readings);
-    check(readings);
     List<String> notes = new ArrayList<>();
     Map<String, Double> inputs = measuredInputs(readings, notes);
     List<Hypothesis> hypotheses = models.computeIfAbsent(inputs, this::build);
@@ -515,88 +515,5 @@ public final class Diagnoser {
       }
     }
     return measured;
-  }
-
-  private void check(ReadingSet readings) {
-    boolean hasAc = stage.inputs().stream().anyMatch(TestInput::hasAc);
-    double acHz =
-        stage.inputs().stream()
-            .filter(TestInput::hasAc)
-            .mapToDouble(TestInput::hz)
-            .findFirst()
-            .orElse(0);
-    List<Reading> list = readings.readings();
-    for (int i = 0; i < list.size(); i++) {
-      Reading r = list.get(i);
-      String field = "readings[" + i + "]";
-      if (r.kind() == Reading.Kind.OHMS) {
-        if (!ohmsChecks.knows(r.at())) {
-          throw new InvalidInputException("", field + ".at", unknownPoint(r.at()));
-        }
-        if (!ohmsChecks.knows(r.to())) {
-          throw new InvalidInputException("", field + ".to", unknownPoint(r.to()));
-        }
-        continue;
-      }
-      if (!points.index.containsKey(r.at())) {
-        throw new InvalidInputException("", field + ".at", unknownPoint(r.at()));
-      }
-      if (r.kind() == Reading.Kind.DC && Math.abs(r.value()) > 2 * span + 1) {
-        throw new InvalidInputException(
-            "",
-            field + ".dc",
-            String.format(
-                java.util.Locale.ROOT,
-                "%.3f V at %s is far beyond every rail of this stage (largest %.1f V): check the value and its sign",
-                r.value(),
-                r.at(),
-                span));
-      }
-      if (r.kind() == Reading.Kind.AC && !hasAc) {
-        throw new InvalidInputException(
-            "",
-            field + ".ac",
-            "the stage has no AC test input, so an AC reading at " + r.at() + " cannot be judged");
-      }
-      if (r.kind() == Reading.Kind.AC && Math.abs(r.hz() - acHz) > 1e-6 * acHz) {
-        throw new InvalidInputException(
-            "",
-            field + ".hz",
-            String.format(
-                java.util.Locale.ROOT,
-                "the AC reading at %s is at %s Hz but the stage's test input is at %s Hz",
-                r.at(),
-                r.hz(),
-                acHz));
-      }
-    }
-  }
-
-  private String unknownPoint(String at) {
-    int dot = at.lastIndexOf('.');
-    if (dot > 0) {
-      String pkg = at.substring(0, dot);
-      String pinText = at.substring(dot + 1);
-      PackageType type = stage.packageType(pkg).orElse(null);
-      if (type != null && pinText.matches("\\d+")) {
-        int pin = Integer.parseInt(pinText);
-        if (pin < 1 || pin > type.pinCount()) {
-          return at + ": a " + type.word() + " package has pins 1 to " + type.pinCount();
-        }
-        return at
-            + ": pin "
-            + pin
-            + " of "
-            + pkg
-            + " is not used by this stage (read a used pin or a net)";
-      }
-    }
-    return "\""
-        + at
-        + "\" is not a net or a used package pin of this stage (nets: "
-        + String.join(", ", stage.nets())
-        + "; pins like "
-        + stage.pinNets().keySet().stream().findFirst().orElse("U1.1")
-        + ")";
   }
 }

@@ -1,6 +1,8 @@
 package com.stagewise.diagnosis;
 
+import com.stagewise.circuit.InvalidInputException;
 import java.util.List;
+import java.util.regex.Pattern;
 
 /**
  * The answer for one set of readings: the verdict, what the readings show, the ranked suspects, the
@@ -12,6 +14,9 @@ import java.util.List;
  * @param nextProbes ranked by expected information gain, best first
  * @param confirmingCheck how to confirm the first suspect at the bench (empty when healthy)
  * @param notes other things worth knowing: an input that is off, faults no reading can see
+ * @throws InvalidInputException if any number of the answer is not finite (a probability, a
+ *     predicted or estimated value, a probe's bits or frequency) or a text shows one: the edge
+ *     check that keeps "NaN %" from ever being printed or stored
  */
 public record Diagnosis(
     Verdict verdict,
@@ -21,11 +26,52 @@ public record Diagnosis(
     String confirmingCheck,
     List<String> notes) {
 
-  /** Copies the lists. */
+  /** A number word in a text that is not inside quotes (a quoted one is the user's own text). */
+  private static final Pattern NOT_A_NUMBER =
+      Pattern.compile("(?<![\"\\w])(NaN|-?Infinity)(?![\"\\w])");
+
+  /** Copies the lists and checks that every number is finite. */
   public Diagnosis {
     observations = List.copyOf(observations);
     suspects = List.copyOf(suspects);
     nextProbes = List.copyOf(nextProbes);
     notes = List.copyOf(notes);
+    for (Suspect s : suspects) {
+      requireFinite(s.probability(), "the probability of " + s.fault());
+      s.estimatedValue().ifPresent(v -> requireFinite(v, "the estimated value of " + s.fault()));
+      s.predicted()
+          .forEach((at, v) -> requireFinite(v, "the volts " + s.fault() + " gives at " + at));
+      requireText(s.why());
+    }
+    for (ProbeAdvice p : nextProbes) {
+      requireFinite(p.bits(), "the information of probing " + p.at());
+      requireFinite(p.hz(), "the frequency of probing " + p.at());
+      requireText(p.why());
+    }
+    observations.forEach(o -> requireText(o.text()));
+    notes.forEach(Diagnosis::requireText);
+    requireText(confirmingCheck);
+  }
+
+  private static void requireFinite(double value, String what) {
+    if (!Double.isFinite(value)) {
+      throw notFinite(what);
+    }
+  }
+
+  private static void requireText(String text) {
+    if (NOT_A_NUMBER.matcher(text).find()) {
+      throw notFinite("a number in the explanation");
+    }
+  }
+
+  private static InvalidInputException notFinite(String what) {
+    return new InvalidInputException(
+        "",
+        "",
+        "the diagnosis cannot be worked out: "
+            + what
+            + " is not a finite number (expected the stage's values and the readings within their"
+            + " plausible ranges)");
   }
 }

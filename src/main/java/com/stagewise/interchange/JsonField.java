@@ -119,7 +119,10 @@ public final class JsonField {
    */
   public InvalidInputException rewrap(InvalidInputException e, String subField) {
     String problem = e.getMessage();
-    String prefix = e.field().isEmpty() ? "" : e.field() + ": ";
+    // Strip the file and path the exception already names, so that neither is said twice.
+    String prefix =
+        (e.source().isEmpty() ? "" : e.source() + ": ")
+            + (e.field().isEmpty() ? "" : e.field() + ": ");
     if (problem.startsWith(prefix)) {
       problem = problem.substring(prefix.length());
     }
@@ -497,7 +500,11 @@ public final class JsonField {
   /** Returns a short description of what a node holds, for messages. */
   public static String describe(JsonNode node) {
     if (node.isTextual()) {
-      return "the string \"" + node.asText() + "\"";
+      return "the string " + quoted(node.asText());
+    }
+    if (node.isNumber() && !Double.isFinite(node.doubleValue())) {
+      // JSON has no NaN or infinity; say so without printing one as if it were a result.
+      return "a number that is not finite (\"" + node.asText() + "\", which JSON does not allow)";
     }
     if (node.isNumber()) {
       return "the number " + printed(node.doubleValue());
@@ -517,9 +524,33 @@ public final class JsonField {
     return node.getNodeType().name().toLowerCase(Locale.ROOT);
   }
 
+  /**
+   * Returns a user's text in quotes for a message, on one line: control characters escaped, and cut
+   * after 60 characters with the full length said.
+   */
+  static String quoted(String text) {
+    StringBuilder out = new StringBuilder("\"");
+    int shown = Math.min(text.length(), 60);
+    for (int i = 0; i < shown; i++) {
+      char c = text.charAt(i);
+      if (c == '\n') {
+        out.append("\\n");
+      } else if (Character.isISOControl(c)) {
+        out.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+      } else {
+        out.append(c);
+      }
+    }
+    out.append('"');
+    if (text.length() > shown) {
+      out.insert(out.length() - 1, "…").append(" (").append(text.length()).append(" characters)");
+    }
+    return out.toString();
+  }
+
   private static String printed(double value) {
-    if (Double.isNaN(value)) {
-      return "NaN";
+    if (!Double.isFinite(value)) {
+      return "a number that is not finite";
     }
     return value == Math.rint(value) && Math.abs(value) < 1e15
         ? Long.toString((long) value)

@@ -69,9 +69,13 @@ final class JsonText {
     }
     double magnitude = Math.abs(value);
     if (magnitude >= 1e-7 && magnitude < 1e15) {
-      // BigDecimal.valueOf uses the shortest decimal that reads back as the same double.
-      return JsonNodeFactory.instance.numberNode(
-          new BigDecimal(BigDecimal.valueOf(value).toPlainString()));
+      // BigDecimal.valueOf uses the shortest decimal that reads back as the same double. A small
+      // value with all 17 digits would print as a run of more than 20 digits in plain form; it
+      // keeps the exponent form then.
+      String plain = BigDecimal.valueOf(value).toPlainString();
+      if (plain.chars().filter(Character::isDigit).count() <= 20) {
+        return JsonNodeFactory.instance.numberNode(new BigDecimal(plain));
+      }
     }
     return JsonNodeFactory.instance.numberNode(value);
   }

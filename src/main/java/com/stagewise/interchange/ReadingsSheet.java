@@ -4,11 +4,11 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Limits;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.OhmsSpec;
-import com.stagewise.circuit.PackageType;
-import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import java.nio.file.Path;
@@ -18,17 +18,17 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.TreeSet;
 
 /**
  * Reads and writes readings files ({@code *.readings.json}, format {@code stagewise-readings},
  * version 1) for one stage.
  *
  * <p>Each reading's {@code at} is a net of the stage or a pin {@code PACKAGE.PIN} of one of its
- * packages. {@code meter} is optional ({@link MeterSpec#DEFAULT}); so is each of its three fields,
- * which then takes the default's figure. An {@code ac} reading without {@code hz} takes the
- * frequency of the stage's first AC input. A value far beyond every rail (more than twice the
- * largest rail magnitude plus 1 V) is taken for a typing mistake and refused.
+ * packages (version 2 also a part lead such as {@code R2.1}). {@code meter} is optional ({@link
+ * MeterSpec#DEFAULT}); so is each of its fields, which then takes the default's figure. An {@code
+ * ac} reading without {@code hz} takes the frequency of the stage's first AC input. Every rule of
+ * {@link ReadingRules} applies (test points, plausible values, the meter's figures, the number of
+ * readings), with its message.
  */
 public final class ReadingsSheet {
   /** The {@code format} of a readings file. */
@@ -54,9 +54,6 @@ public final class ReadingsSheet {
   /** The meter's over-range, as a readings file writes it. */
   public static final String OVER_RANGE = "OL";
 
-  /** The largest ohms a file may give (beyond any meter's top range: it would show OL). */
-  private static final double MAX_OHMS = 1e9;
-
   private ReadingsSheet() {}
 
   /**
@@ -75,17 +72,28 @@ public final class ReadingsSheet {
    * @throws InvalidInputException naming the source, the JSON path and what was expected
    */
   public static ReadingSet read(String json, String source, Stage stage) {
+    StageSheet.requireSize(json, source);
     JsonField root = JsonField.parseRoot(json, source);
     root.requireHeader(FORMAT, VERSION, "a readings file");
     root.object("a readings file", ROOT_KEYS);
     int version = root.require("version", "").integer("the version number");
     MeterSpec meter = root.optional("meter").map(m -> meter(m, version)).orElse(MeterSpec.DEFAULT);
-    double limit = 2 * largestRail(stage) + 1;
-    List<Reading> readings = new ArrayList<>();
-    for (JsonField field : root.require("readings", "an array of readings").elements("readings")) {
-      readings.add(reading(field, stage, limit, version));
+    List<JsonField> fields = root.require("readings", "an array of readings").elements("readings");
+    if (fields.size() > Limits.MAX_READINGS) {
+      throw root.require("readings", "")
+          .error(
+              fields.size()
+                  + " readings is more than this program takes for one set (at most "
+                  + Limits.MAX_READINGS
+                  + ")");
     }
-    return new ReadingSet(meter, readings);
+    List<Reading> readings = new ArrayList<>();
+    for (JsonField field : fields) {
+      readings.add(reading(field, stage, version));
+    }
+    ReadingSet set = new ReadingSet(meter, readings);
+    ReadingRules.requireSound(stage, set, source);
+    return set;
   }
 
   /** Returns the text of a readings file, ending in a newline. */
@@ -178,7 +186,11 @@ public final class ReadingsSheet {
           .error("displayCounts (" + display + ") must be above 0, e.g. 6000");
     }
     OhmsSpec ohms = field.optional("ohms").map(ReadingsSheet::ohmsSpec).orElse(OhmsSpec.DEFAULT);
-    return new MeterSpec(percent, counts, display, ohms);
+    try {
+      return new MeterSpec(percent, counts, display, ohms);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
   }
 
   private static OhmsSpec ohmsSpec(JsonField field) {
@@ -196,14 +208,18 @@ public final class ReadingsSheet {
     if (counts < 0) {
       throw countsField.get().error("counts (" + counts + ") must be 0 or more");
     }
-    return new OhmsSpec(percent, counts);
+    try {
+      return new OhmsSpec(percent, counts);
+    } catch (InvalidInputException e) {
+      throw field.rewrap(e, e.field());
+    }
   }
 
-  private static Reading reading(JsonField field, Stage stage, double limit, int version) {
+  private static Reading reading(JsonField field, Stage stage, int version) {
     field.object("a reading", version >= 2 ? READING_KEYS : VOLTS_KEYS);
     JsonField atField = field.require("at", "a net name or a package pin such as U1.6");
     String at = atField.name("a net name or a package pin such as U1.6");
-    checkTestPoint(atField, at, stage, version);
+    requireVersionFor(atField, at, stage, version);
     Optional<JsonField> dc = field.optional("dc");
     Optional<JsonField> ac = field.optional("ac");
     Optional<JsonField> ohms = field.optional("ohms");
@@ -241,14 +257,6 @@ public final class ReadingsSheet {
         kind == Reading.Kind.DC
             ? valueField.number("the DC volts read")
             : valueField.nonNegative("the AC amplitude read, in volts");
-    if (Math.abs(value) > limit) {
-      throw valueField.error(
-          "reading ("
-              + value
-              + " V) is far beyond every rail of the stage (expected at most about ±"
-              + limit
-              + " V; check the decimal point and the unit)");
-    }
     double hz = 0;
     Optional<JsonField> hzField = field.optional("hz");
     if (kind == Reading.Kind.AC) {
@@ -305,7 +313,7 @@ public final class ReadingsSheet {
               + ", e.g. GND)");
     }
     String to = toField.get().name("the second point: a net, a package pin or a part lead");
-    checkTestPoint(toField.get(), to, stage, version);
+    requireVersionFor(toField.get(), to, stage, version);
     if (to.equals(at)) {
       throw toField.get().error("\"to\" is the same point as \"at\" (expected another point)");
     }
@@ -321,13 +329,6 @@ public final class ReadingsSheet {
                 + plain(value)
                 + ") must be 0 or more (expected the resistance read, or \"OL\" for the meter's"
                 + " over-range)");
-      }
-      if (value > MAX_OHMS) {
-        throw ohmsField.error(
-            "ohms ("
-                + plain(value)
-                + ") is beyond any meter's range (expected at most 1 GΩ; a meter shows \"OL\""
-                + " there)");
       }
     }
     if (field.optional("hz").isPresent()) {
@@ -350,107 +351,20 @@ public final class ReadingsSheet {
   }
 
   /**
-   * Checks that a test point is a net of the stage, a modelled pin of one of its packages, or (in
-   * version 2) a part lead such as {@code R2.1}.
+   * Refuses a part lead ({@code R2.1}) as a point of a version-1 file; whether the point names
+   * anything of the stage is for {@link ReadingRules}.
    */
-  private static void checkTestPoint(JsonField field, String at, Stage stage, int version) {
-    if (stage.nets().contains(at)) {
-      return;
-    }
-    int leadDot = at.lastIndexOf('.');
-    if (leadDot > 0 && stage.part(at.substring(0, leadDot)).isPresent()) {
-      String lead = at.substring(leadDot + 1);
-      if (version < 2) {
-        throw field.error(
-            "part lead "
-                + at
-                + " needs a version 2 readings file (expected a net or a package pin in version"
-                + " 1)");
-      }
-      if (!lead.equals("1") && !lead.equals("2")) {
-        throw field.error(
-            "\""
-                + lead
-                + "\" is not a lead of "
-                + at.substring(0, leadDot)
-                + " (expected "
-                + at.substring(0, leadDot)
-                + ".1 or "
-                + at.substring(0, leadDot)
-                + ".2)");
-      }
-      return;
-    }
-    int dot = at.lastIndexOf('.');
-    if (dot <= 0) {
+  private static void requireVersionFor(JsonField field, String at, Stage stage, int version) {
+    if (version < 2 && ReadingRules.isPartLead(stage, at)) {
       throw field.error(
-          "\""
+          "part lead "
               + at
-              + "\" is not a net of the stage (expected one of "
-              + String.join(", ", stage.nets())
-              + ", or a package pin such as "
-              + examplePin(stage)
-              + ")");
+              + " needs a version 2 readings file (expected a net or a package pin in version"
+              + " 1)");
     }
-    String pkg = at.substring(0, dot);
-    Optional<PackageType> type = stage.packageType(pkg);
-    if (type.isEmpty()) {
-      throw field.error(
-          "package "
-              + pkg
-              + " is not on the stage (expected a net, or a pin of "
-              + String.join(", ", stage.packages())
-              + ", e.g. "
-              + examplePin(stage)
-              + ")");
-    }
-    String pinText = at.substring(dot + 1);
-    int pin;
-    try {
-      pin = Integer.parseInt(pinText);
-    } catch (NumberFormatException e) {
-      throw field.error(
-          "\"" + pinText + "\" is not a pin number (expected e.g. " + examplePin(stage) + ")");
-    }
-    if (pin < 1 || pin > type.get().pinCount()) {
-      throw field.error(
-          pkg
-              + " is a "
-              + type.get().word()
-              + " package, which has no pin "
-              + pin
-              + " (expected 1 to "
-              + type.get().pinCount()
-              + ")");
-    }
-    if (!stage.pinNets().containsKey(at)) {
-      TreeSet<Integer> used = new TreeSet<>();
-      for (String key : stage.pinNets().keySet()) {
-        if (key.startsWith(pkg + ".")) {
-          used.add(Integer.parseInt(key.substring(pkg.length() + 1)));
-        }
-      }
-      throw field.error(
-          "pin "
-              + pin
-              + " of "
-              + pkg
-              + " is not used by any section of the stage (expected one of pins "
-              + used
-              + ")");
-    }
-  }
-
-  private static String examplePin(Stage stage) {
-    return stage.pinNets().keySet().stream().findFirst().orElse("U1.6");
   }
 
   private static String plain(double value) {
     return java.math.BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
-  }
-
-  /** Returns the largest rail magnitude of a stage in volts (0 when it has no rails). */
-  static double largestRail(Stage stage) {
-    return stage.rails().stream().mapToDouble(Rail::volts).map(Math::abs).max().orElse(0);
   }
 }

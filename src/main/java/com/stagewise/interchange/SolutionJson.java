@@ -9,6 +9,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.solver.AcSolution;
+import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.solver.OperatingPoint;
 import com.stagewise.solver.Phasor;
 import com.stagewise.solver.SectionState;
@@ -27,6 +28,11 @@ import java.util.Optional;
  * one consistent state (a Schmitt trigger between its thresholds) gives the first in {@code dc} and
  * {@code sections} and the others in {@code alternatives}, a list of {@code {"dc": …, "sections":
  * …}} objects; readers that do not know that field can ignore it.
+ *
+ * <p>{@code healthy} (an extension of version 1; the keys above are unchanged) holds the healthy
+ * range of the first state over the parts' and rails' tolerances ({@link ExpectedVolts}): {@code
+ * {"nets": {"OUT": {"low": -4.83, "high": -4.57}, …}, "pins": {"U1.1": {…}, …}}}. It is left out
+ * when no range could be worked out.
  */
 public final class SolutionJson {
   /** The {@code format} of a solution document. */
@@ -50,6 +56,18 @@ public final class SolutionJson {
    * @param ac the AC response about the primary point, if an input has AC
    */
   public static String write(SolveResult.Solved solved, Optional<AcSolution> ac) {
+    return write(solved, ac, null);
+  }
+
+  /**
+   * Returns the solution document with the healthy ranges, ending in a newline.
+   *
+   * @param solved the consistent operating points; the first is the primary one
+   * @param ac the AC response about the primary point, if an input has AC
+   * @param healthy the healthy ranges about the primary point; null or unsolved to leave them out
+   */
+  public static String write(
+      SolveResult.Solved solved, Optional<AcSolution> ac, ExpectedVolts healthy) {
     ObjectNode root = JsonText.object();
     root.put("format", FORMAT);
     root.put("version", VERSION);
@@ -72,6 +90,9 @@ public final class SolutionJson {
                   .<ObjectNode>set("hz", JsonText.number(solution.hz()))
                   .set("nets", nets));
         });
+    if (healthy != null && healthy.solved()) {
+      root.set("healthy", healthy(primary, healthy));
+    }
     if (solved.points().size() > 1) {
       ArrayNode alternatives = root.putArray("alternatives");
       for (OperatingPoint point : solved.points().subList(1, solved.points().size())) {
@@ -92,6 +113,26 @@ public final class SolutionJson {
     ObjectNode pins = JsonText.object();
     point.pins().forEach((pin, volts) -> pins.set(pin, JsonText.number(volts)));
     return JsonText.object().<ObjectNode>set("nets", nets).set("pins", pins);
+  }
+
+  private static ObjectNode healthy(OperatingPoint point, ExpectedVolts healthy) {
+    ObjectNode nets = JsonText.object();
+    point.nets().keySet().forEach(net -> range(nets, net, healthy));
+    ObjectNode pins = JsonText.object();
+    point.pins().keySet().forEach(pin -> range(pins, pin, healthy));
+    return JsonText.object().<ObjectNode>set("nets", nets).set("pins", pins);
+  }
+
+  private static void range(ObjectNode into, String testPoint, ExpectedVolts healthy) {
+    double low = healthy.low(testPoint);
+    double high = healthy.high(testPoint);
+    if (Double.isFinite(low) && Double.isFinite(high)) {
+      into.set(
+          testPoint,
+          JsonText.object()
+              .<ObjectNode>set("low", JsonText.number(low))
+              .set("high", JsonText.number(high)));
+    }
   }
 
   private static ArrayNode sections(OperatingPoint point) {

@@ -9,13 +9,13 @@ import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.LedColour;
+import com.stagewise.circuit.Limits;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
-import com.stagewise.circuit.Terminal;
 import com.stagewise.circuit.TestInput;
 import com.stagewise.circuit.value.ZenerMarking;
 import java.io.IOException;
@@ -32,10 +32,11 @@ import java.util.Map;
  * Reads and writes stage sheets ({@code *.stage.json}, format {@code stagewise-stage}, versions 1
  * and 2; version 2 adds diodes, zeners, LEDs, trimmers and potentiometers).
  *
- * <p>Reading is strict: an unknown key, a missing field, a wrong type, a bad or negative value, a
- * wrong format or a newer version, a section terminal on a net nothing else touches, and every
- * problem of {@link StageRules#problems} is an {@link InvalidInputException} that names the file,
- * the JSON path (e.g. {@code parts[2].value}) and what was expected.
+ * <p>Reading is strict: a file larger than {@link Limits#MAX_FILE_BYTES}, an unknown key, a missing
+ * field, a wrong type, a bad or negative value, a wrong format or a newer version, and every
+ * problem of {@link StageRules#problems} (values outside their plausible range, sizes, nets) is an
+ * {@link InvalidInputException} that names the file, the JSON path (e.g. {@code parts[2].value})
+ * and what was expected.
  *
  * <p>Values may be plain numbers or strings with an SI prefix or in RKM code ({@code 10k}, {@code
  * 4k7}, {@code 470R}, {@code 100n}, {@code 2u2}); tolerances {@code "1%"} or {@code 0.01}. Fields
@@ -147,6 +148,7 @@ public final class StageSheet {
   }
 
   private static Stage parse(String json, String source, boolean checked) {
+    requireSize(json, source);
     JsonField root = JsonField.parseRoot(json, source);
     root.requireHeader(FORMAT, VERSION, "a stage sheet");
     root.object("a stage sheet", ROOT_KEYS);
@@ -180,7 +182,6 @@ public final class StageSheet {
       throw root.rewrap(e, e.field());
     }
     if (checked) {
-      checkTerminalNets(stage, ampFields);
       StageRules.requireSound(stage, source);
     }
     return stage;
@@ -250,6 +251,24 @@ public final class StageSheet {
 
   static String readText(Path file) {
     try {
+      if (Files.isDirectory(file)) {
+        throw new InvalidInputException(file.toString(), "", "this is a folder (expected a file)");
+      }
+      if (Files.exists(file) && !Files.isRegularFile(file)) {
+        throw new InvalidInputException(
+            file.toString(), "", "this is not a regular file (expected a JSON text file)");
+      }
+      long size = Files.size(file);
+      if (size > Limits.MAX_FILE_BYTES) {
+        throw new InvalidInputException(
+            file.toString(),
+            "",
+            "the file is "
+                + size
+                + " bytes long, more than this program reads ("
+                + Limits.MAX_FILE_BYTES
+                + " bytes at most; a stage sheet or readings file is a few kilobytes)");
+      }
       return Files.readString(file, StandardCharsets.UTF_8);
     } catch (java.nio.file.NoSuchFileException e) {
       throw new InvalidInputException(
@@ -260,6 +279,20 @@ public final class StageSheet {
     } catch (IOException e) {
       throw new InvalidInputException(
           file.toString(), "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+    }
+  }
+
+  /** Refuses a text longer than {@link Limits#MAX_FILE_BYTES} characters before parsing it. */
+  static void requireSize(String json, String source) {
+    if (json.length() > Limits.MAX_FILE_BYTES) {
+      throw new InvalidInputException(
+          source,
+          "",
+          "the text is "
+              + json.length()
+              + " characters long, more than this program reads ("
+              + Limits.MAX_FILE_BYTES
+              + " at most)");
     }
   }
 
@@ -575,51 +608,6 @@ public final class StageSheet {
           nets.get("vMinus"));
     } catch (InvalidInputException e) {
       throw field.rewrap(e, e.field());
-    }
-  }
-
-  /**
-   * Rejects an input or supply terminal on a net that no part, other pin, rail or input touches.
-   */
-  private static void checkTerminalNets(Stage stage, List<JsonField> ampFields) {
-    Map<String, Integer> uses = new HashMap<>();
-    for (Part part : stage.parts()) {
-      for (String net : new java.util.HashSet<>(part.nets())) {
-        uses.merge(net, 1, Integer::sum);
-      }
-    }
-    for (Amplifier amp : stage.amplifiers()) {
-      for (Terminal terminal : Terminal.values()) {
-        uses.merge(amp.net(terminal), 1, Integer::sum);
-      }
-    }
-    Map<Terminal, String> keys =
-        Map.of(
-            Terminal.IN_PLUS,
-            "inPlus",
-            Terminal.IN_MINUS,
-            "inMinus",
-            Terminal.V_PLUS,
-            "vPlus",
-            Terminal.V_MINUS,
-            "vMinus");
-    for (int i = 0; i < stage.amplifiers().size(); i++) {
-      Amplifier amp = stage.amplifiers().get(i);
-      for (Terminal terminal :
-          List.of(Terminal.IN_PLUS, Terminal.IN_MINUS, Terminal.V_PLUS, Terminal.V_MINUS)) {
-        String net = amp.net(terminal);
-        if (!stage.isDriven(net) && uses.getOrDefault(net, 0) == 1) {
-          throw new InvalidInputException(
-              ampFields.get(i).source(),
-              ampFields.get(i).path() + "." + keys.get(terminal),
-              amp.ref()
-                  + " "
-                  + terminal.words()
-                  + " is on net "
-                  + net
-                  + ", which no part, other pin, rail or input touches (expected the name of a net of the stage; misspelt?)");
-        }
-      }
     }
   }
 }

@@ -10,6 +10,18 @@ public sealed interface SolveResult
     permits SolveResult.Solved, SolveResult.Floating, SolveResult.NoConsistentState {
 
   /**
+   * Returns why the stage could not be solved, in plain words and with what was expected: the one
+   * message that the app and the command line both show. Empty when the stage was solved.
+   */
+  String problem();
+
+  /**
+   * Returns the field of the stage sheet the problem points at ({@code nets} or {@code
+   * amplifiers}); empty when the stage was solved.
+   */
+  String field();
+
+  /**
    * The stage has at least one consistent operating point.
    *
    * <p>Stages with negative feedback have exactly one. A stage with strong positive feedback (a
@@ -38,6 +50,16 @@ public sealed interface SolveResult
     public OperatingPoint primary() {
       return points.get(0);
     }
+
+    @Override
+    public String problem() {
+      return "";
+    }
+
+    @Override
+    public String field() {
+      return "";
+    }
   }
 
   /**
@@ -50,6 +72,18 @@ public sealed interface SolveResult
     public Floating {
       nets = List.copyOf(nets);
     }
+
+    @Override
+    public String problem() {
+      return "no DC path sets the voltage of "
+          + String.join(", ", nets)
+          + " (expected a resistor or an output to tie it to ground, a rail or an input)";
+    }
+
+    @Override
+    public String field() {
+      return "nets";
+    }
   }
 
   /**
@@ -58,5 +92,15 @@ public sealed interface SolveResult
    * @param section the designator of a section that could not be satisfied (may be empty)
    * @param reason what went wrong, in plain words
    */
-  record NoConsistentState(String section, String reason) implements SolveResult {}
+  record NoConsistentState(String section, String reason) implements SolveResult {
+    @Override
+    public String problem() {
+      return (section.isEmpty() ? "" : section + ": ") + "no consistent state: " + reason;
+    }
+
+    @Override
+    public String field() {
+      return "amplifiers";
+    }
+  }
 }

@@ -21,6 +21,11 @@ import java.util.Optional;
 public final class StageSolver {
   private StageSolver() {}
 
+  /** The reason given when a solve gives voltages that are not finite numbers. */
+  static final String NOT_FINITE =
+      "the computed voltages are not finite numbers (expected part values, rails and inputs within"
+          + " their plausible ranges)";
+
   /** Solves a stage with nominal parts and nominal device parameters. */
   public static SolveResult solve(Stage stage) {
     return solve(stage, Conditions.NOMINAL);
@@ -33,7 +38,16 @@ public final class StageSolver {
    *     consistent state; never NaN voltages
    */
   public static SolveResult solve(Stage stage, Conditions conditions) {
-    return Analysis.of(stage, conditions).solve();
+    SolveResult result = Analysis.of(stage, conditions).solve();
+    if (result instanceof SolveResult.Solved solved) {
+      for (OperatingPoint point : solved.points()) {
+        if (!point.nets().values().stream().allMatch(Double::isFinite)) {
+          // The edge of the result: a value the matrix could not hold never leaves the solver.
+          return new SolveResult.NoConsistentState("", NOT_FINITE);
+        }
+      }
+    }
+    return result;
   }
 
   /**
@@ -49,7 +63,13 @@ public final class StageSolver {
 
   /** As {@link #ac(Stage, OperatingPoint)}, under the given conditions. */
   public static Optional<AcSolution> ac(Stage stage, Conditions conditions, OperatingPoint point) {
-    return Analysis.of(stage, conditions).ac(point);
+    Optional<AcSolution> ac = Analysis.of(stage, conditions).ac(point);
+    // The edge of the result: no AC response rather than one that is not a number.
+    return ac.filter(
+        a ->
+            a.nets().values().stream()
+                .allMatch(
+                    p -> Double.isFinite(p.amplitude()) && Double.isFinite(p.phaseDegrees())));
   }
 
   /**

@@ -134,7 +134,7 @@ class DiagnoserTest {
   void badReadings_nameWhatToFix() {
     assertThatThrownBy(() -> diagnoser.diagnose(readings("U1.9", 1.0)))
         .isInstanceOf(InvalidInputException.class)
-        .hasMessageContaining("pins 1 to 8");
+        .hasMessageContaining("has no pin 9 (expected 1 to 8)");
     assertThatThrownBy(() -> diagnoser.diagnose(readings("U1.5", 1.0)))
         .isInstanceOf(InvalidInputException.class)
         .hasMessageContaining("not used");

@@ -85,7 +85,8 @@ class ReadingsSheetOhmsTest {
         "{\"at\": \"SUM\", \"to\": \"GND\", \"dc\": 1}|readings[0].to|a volts reading has no \"to\"",
         "{\"at\": \"SUM\", \"to\": \"SUM\", \"ohms\": 1}|readings[0].to|same point",
         "{\"at\": \"R2.3\", \"to\": \"SUM\", \"ohms\": 1}|readings[0].at|not a lead of R2",
-        "{\"at\": \"SUM\", \"to\": \"OUT\", \"ohms\": 5e9}|readings[0].ohms|beyond any meter",
+        // Limits.READING_OHMS: 0 Ω … 1 TΩ, beyond it a meter shows OL.
+        "{\"at\": \"SUM\", \"to\": \"OUT\", \"ohms\": 5e13}|readings[0].ohms|beyond any meter",
         "{\"at\": \"SUM\", \"to\": \"OUT\", \"ohms\": \"lots\"}|readings[0].ohms|lots",
       })
   void badOhmsReading_isRefusedNamingFileFieldAndExpectation(

@@ -1,6 +1,6 @@
 package com.stagewise.ui.stage;
 
-import com.stagewise.ui.ExpectedVolts;
+import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.drawing.SchematicDrawing;
 import com.stagewise.ui.widget.ListSelection;
 import com.stagewise.ui.widget.ValuePad;

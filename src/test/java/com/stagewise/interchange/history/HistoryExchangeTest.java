@@ -279,7 +279,7 @@ class HistoryExchangeTest {
             null,
             "{\"format\":\"stagewise-history\",\"version\":1,\"readings\":[{\"id\":\"x\","
                 + "\"caseId\":\"y\",\"at\":\"OUT\",\"kind\":\"dc\",\"value\":NaN}]}",
-            "readings[0].value: expected the reading's value as a finite number, found the number NaN"),
+            "readings[0].value: expected the reading's value as a finite number, found a number that is not finite (\"NaN\", which JSON does not allow)"),
         Arguments.of(
             "stage sheet that is not JSON",
             edit(r -> first(r, "stageSheets").put("sheet", "not json at all")),

@@ -1,11 +1,8 @@
-package com.stagewise.ui;
+package com.stagewise.solver;
 
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
-import com.stagewise.solver.OperatingPoint;
-import com.stagewise.solver.SolveResult;
-import com.stagewise.solver.StageSolver;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -13,11 +10,13 @@ import java.util.Map;
 
 /**
  * What a healthy stage reads at each test point: the nominal volts, and a healthy range from the
- * parts' and rails' tolerances.
+ * parts' and rails' tolerances (tolerance propagation). {@code stagewise solve} prints it, and the
+ * app shows it beside each test point.
  *
  * <p>The range moves each part and rail to either end of its tolerance, one at a time, and keeps
  * the largest rise and fall at each point (a one-at-a-time estimate, common practice for a first
- * check), widened by {@link #OFFSET_MARGIN} for device offsets.
+ * check), widened by {@link #OFFSET_MARGIN} for device offsets. A corner that cannot be solved, or
+ * whose state differs so much that a value is not finite, is left out of the range.
  *
  * @param nominal volts at every net and used pin with nominal parts
  * @param low the lower end of the healthy range at each test point
@@ -42,24 +41,35 @@ public record ExpectedVolts(
     return nominal.getOrDefault(testPoint, Double.NaN);
   }
 
+  /** Returns the lower end of the healthy range at a test point, or NaN when unknown. */
+  public double low(String testPoint) {
+    return low.getOrDefault(testPoint, Double.NaN);
+  }
+
+  /** Returns the upper end of the healthy range at a test point, or NaN when unknown. */
+  public double high(String testPoint) {
+    return high.getOrDefault(testPoint, Double.NaN);
+  }
+
   /**
-   * Solves the stage and its tolerance corners. Slow for big stages: call off the screen's thread.
+   * Solves the stage and its tolerance corners (two more solves per part and rail with a
+   * tolerance). Slow for big stages: call off the screen's thread.
+   *
+   * @return the nominal volts and healthy ranges, or, when the stage cannot be solved, empty maps
+   *     and the solver's one message ({@link SolveResult#problem()})
    */
   public static ExpectedVolts of(Stage stage) {
-    SolveResult result = StageSolver.solve(stage);
+    return of(stage, StageSolver.solve(stage));
+  }
+
+  /**
+   * As {@link #of(Stage)}, from the nominal solve already made.
+   *
+   * @param result the solver's result for {@code stage} with nominal conditions
+   */
+  public static ExpectedVolts of(Stage stage, SolveResult result) {
     if (!(result instanceof SolveResult.Solved solved)) {
-      String why;
-      if (result instanceof SolveResult.Floating f) {
-        why =
-            "nothing sets the voltage of "
-                + String.join(", ", f.nets())
-                + "; check the parts' nets";
-      } else if (result instanceof SolveResult.NoConsistentState n) {
-        why = "section " + n.section() + " has no steady state: " + n.reason();
-      } else {
-        why = "the stage could not be solved";
-      }
-      return new ExpectedVolts(Map.of(), Map.of(), Map.of(), Map.of(), why);
+      return new ExpectedVolts(Map.of(), Map.of(), Map.of(), Map.of(), result.problem());
     }
     OperatingPoint point = solved.primary();
     Map<String, Double> nominal = new LinkedHashMap<>(point.nets());
@@ -78,7 +88,7 @@ public record ExpectedVolts(
         OperatingPoint p = c.primary();
         for (String key : nominal.keySet()) {
           Double v = p.nets().containsKey(key) ? p.nets().get(key) : p.pins().get(key);
-          if (v == null) {
+          if (v == null || !Double.isFinite(v)) {
             continue;
           }
           double delta = v - nominal.get(key);
