@@ -10,6 +10,8 @@ import com.stagewise.ui.editor.DraftStage.DraftPart;
 import com.stagewise.ui.editor.DraftStage.DraftRail;
 import com.stagewise.ui.editor.DraftStage.DraftSection;
 import com.stagewise.ui.editor.EditorProblem.Place;
+import com.stagewise.ui.widget.ValuePad;
+import com.stagewise.ui.widget.ValuePadModel;
 import java.util.List;
 import java.util.function.Consumer;
 import javafx.geometry.Pos;
@@ -64,6 +66,7 @@ public final class StageEditorView {
     this.model = model;
     root.getStyleClass().add("screen");
     root.setId("screen-stage-editor");
+    root.getStylesheets().add(StageEditorView.class.getResource("editor.css").toExternalForm());
     root.setTop(topBar(onSave, onClose));
     ScrollPane itemScroll = new ScrollPane(items);
     itemScroll.setFitToWidth(true);
@@ -135,7 +138,7 @@ public final class StageEditorView {
     empty.setOnAction(e -> model.startEmpty("New stage", model.draft().board()));
     HBox spacer = new HBox();
     HBox.setHgrow(spacer, Priority.ALWAYS);
-    refusal.getStyleClass().addAll("value-message", "bad");
+    refusal.getStyleClass().add("editor-refusal");
     refusal.setWrapText(true);
     refusal.setId("editor-refusal");
     HBox bar = new HBox(8, title, spacer, empty, undo, redo, save, close);
@@ -168,7 +171,7 @@ public final class StageEditorView {
             q -> {
               Label text = new Label(q.text());
               text.setWrapText(true);
-              text.getStyleClass().add("caution-text");
+              text.getStyleClass().add("editor-question-text");
               Button yes = new Button(q.yes());
               yes.setId("editor-question-yes");
               yes.setOnAction(e -> model.answer(true));
@@ -198,7 +201,13 @@ public final class StageEditorView {
                   Place.SECTION,
                   s.ref()));
     }
-    items.getChildren().add(addButton("editor-add-section", "+ Section", this::addSection));
+    FlowPane addSections = new FlowPane(6, 6);
+    for (PackageType type : PackageType.values()) {
+      addSections
+          .getChildren()
+          .add(addButton("editor-add-" + type.word(), "+ " + type.word(), () -> addSection(type)));
+    }
+    items.getChildren().add(addSections);
     items.getChildren().add(heading("Parts"));
     for (DraftPart p : draft.parts()) {
       items
@@ -246,7 +255,12 @@ public final class StageEditorView {
                 "editor-add-rail",
                 "+ Rail",
                 () -> {
-                  model.addRail(nextName("V", draft), "");
+                  // The usual split supply first (common practice): +15 V, then -15 V.
+                  int n = draft.rails().size();
+                  String net = n == 0 ? "VCC" : n == 1 ? "VEE" : nextName("V", draft);
+                  model.addRail(
+                      draft.nets().contains(net) ? nextName("V", draft) : net,
+                      n == 0 ? "15" : n == 1 ? "-15" : "0");
                   select(Place.RAIL, String.valueOf(model.draft().rails().size() - 1));
                 }));
     items.getChildren().add(heading("Test inputs"));
@@ -304,11 +318,15 @@ public final class StageEditorView {
     button.setAlignment(Pos.CENTER_LEFT);
     button.setSelected(place == selectedPlace && key.equals(selectedKey));
     button.setOnAction(e -> select(place, key));
+    button.getStyleClass().add("editor-item");
+    if (!model.problemsOf(place, key).isEmpty()) {
+      button.getStyleClass().add("has-problem");
+    }
     VBox box = new VBox(2, button);
     for (EditorProblem problem : model.problemsOf(place, key)) {
       Label why = new Label(problem.message());
       why.setWrapText(true);
-      why.getStyleClass().addAll("value-message", "bad");
+      why.getStyleClass().add("editor-problem");
       box.getChildren().add(why);
     }
     return box;
@@ -327,18 +345,15 @@ public final class StageEditorView {
     refresh();
   }
 
-  private void addSection() {
+  /** Adds the next free section of the last package of that type, else of a new package. */
+  private void addSection(PackageType type) {
     DraftStage draft = model.draft();
-    // The next free letter of the last package, else a new package of the same type.
-    PackageType type = PackageType.DUAL_8;
     String pkg = model.nextPackage();
     DeviceClass cls = DeviceClass.CLASSIC_BIPOLAR;
-    if (!draft.sections().isEmpty()) {
-      DraftSection last = draft.sections().get(draft.sections().size() - 1);
-      type = last.packageType();
-      cls = last.deviceClass();
-      if (!model.freeSections(type, last.packageRef()).isEmpty()) {
-        pkg = last.packageRef();
+    for (DraftSection s : draft.sections()) {
+      if (s.packageType() == type && !model.freeSections(type, s.packageRef()).isEmpty()) {
+        pkg = s.packageRef();
+        cls = s.deviceClass();
       }
     }
     String letter = model.freeSections(type, pkg).get(0);
@@ -356,7 +371,7 @@ public final class StageEditorView {
             problems.isEmpty()
                 ? "No problems: the stage is ready to save."
                 : problems.size() + " problem(s) — tap one to go to it");
-    head.getStyleClass().add(problems.isEmpty() ? "hint" : "value-message");
+    head.getStyleClass().add(problems.isEmpty() ? "hint" : "editor-problem-count");
     head.setId("editor-problem-count");
     problemList.getChildren().add(head);
     for (EditorProblem problem : problems) {
@@ -364,7 +379,7 @@ public final class StageEditorView {
       go.setWrapText(true);
       go.setMaxWidth(Double.MAX_VALUE);
       go.setAlignment(Pos.CENTER_LEFT);
-      go.getStyleClass().add("problem-row");
+      go.getStyleClass().add("editor-problem-row");
       go.setOnAction(e -> select(problem.place(), problem.key()));
       problemList.getChildren().add(go);
     }
@@ -453,22 +468,23 @@ public final class StageEditorView {
     details
         .getChildren()
         .add(
-            field(
-                "editor-part-value",
-                "Value ("
-                    + part.kind().unit()
-                    + "), e.g. "
-                    + (part.kind() == PartKind.CAPACITOR ? "100n" : "4k7"),
-                part.value().text(),
-                v -> model.setPartValue(ref, v)));
-    details
-        .getChildren()
-        .add(
-            field(
-                "editor-part-tolerance",
-                "Tolerance",
-                part.tolerance().text(),
-                t -> model.setPartTolerance(ref, t)));
+            pad(
+                "editor-value",
+                "Value: " + part.value().text() + " " + part.kind().unit(),
+                part.kind() == PartKind.CAPACITOR
+                    ? ValuePadModel.Quantity.FARADS
+                    : ValuePadModel.Quantity.OHMS,
+                "Set " + ref,
+                v -> model.setPartValue(ref, DraftStage.valueText(part.kind(), v))));
+    FlowPane tolerances = new FlowPane(6, 6);
+    for (String t : List.of("1%", "2%", "5%", "10%", "20%")) {
+      ToggleButton b = new ToggleButton(t);
+      b.setId("editor-part-tolerance-" + t.replace("%", ""));
+      b.setSelected(t.equals(part.tolerance().text()));
+      b.setOnAction(e -> model.setPartTolerance(ref, t));
+      tolerances.getChildren().add(b);
+    }
+    details.getChildren().addAll(small("Tolerance: " + part.tolerance().text()), tolerances);
     if (part.kind() == PartKind.RESISTOR) {
       details
           .getChildren()
@@ -565,11 +581,12 @@ public final class StageEditorView {
     details
         .getChildren()
         .add(
-            field(
-                "editor-rail-volts",
-                "Volts, e.g. 15 or -15",
-                rail.volts().text(),
-                v -> model.setRailVolts(index, v)));
+            pad(
+                "editor-volts",
+                "Volts: " + rail.volts().text(),
+                ValuePadModel.Quantity.VOLTS,
+                "Set rail volts",
+                v -> model.setRailVolts(index, DraftStage.plain(v))));
     details
         .getChildren()
         .add(
@@ -596,11 +613,19 @@ public final class StageEditorView {
     details
         .getChildren()
         .add(
-            field(
-                "editor-input-dc",
-                "DC level (V)",
-                input.dc().text(),
-                v -> model.setInputDc(index, v)));
+            pad(
+                "editor-volts",
+                "DC level: " + input.dc().text() + " V",
+                ValuePadModel.Quantity.VOLTS,
+                "Set DC level",
+                v -> model.setInputDc(index, DraftStage.plain(v))));
+    Button ac = new Button("AC 0.1 V at 1 kHz");
+    ac.setId("editor-input-ac-preset");
+    ac.setOnAction(e -> model.setInputAc(index, "0.1", "1000"));
+    Button noAc = new Button("No AC");
+    noAc.setId("editor-input-no-ac");
+    noAc.setOnAction(e -> model.setInputAc(index, "", ""));
+    details.getChildren().add(new HBox(6, ac, noAc));
     details
         .getChildren()
         .add(
@@ -625,6 +650,27 @@ public final class StageEditorView {
           select(Place.STAGE, "");
         });
     details.getChildren().add(remove);
+  }
+
+  /** A value pad for one number; its enter key sets it. */
+  private Node pad(
+      String id,
+      String label,
+      ValuePadModel.Quantity quantity,
+      String enter,
+      java.util.function.DoubleConsumer set) {
+    ValuePadModel padModel = new ValuePadModel(quantity);
+    ValuePad pad =
+        new ValuePad(
+            padModel,
+            id,
+            enter,
+            () -> {
+              if (padModel.valueProperty().get() != null) {
+                set.accept(padModel.valueProperty().get());
+              }
+            });
+    return new VBox(4, small(label), pad);
   }
 
   private static Label small(String text) {
@@ -655,7 +701,8 @@ public final class StageEditorView {
     nets.setId(id);
     for (String net : model.netChoices()) {
       ToggleButton b = new ToggleButton(net);
-      b.setId(id + "-" + net);
+      b.setId(id + "-" + net.replaceAll("[^A-Za-z0-9_]", "_"));
+      b.getStyleClass().add("editor-net");
       b.setSelected(net.equals(current));
       b.setOnAction(e -> choose.accept(net));
       nets.getChildren().add(b);
@@ -668,7 +715,10 @@ public final class StageEditorView {
     Button use = new Button("Use");
     use.setId(id + "-use");
     use.setOnAction(e -> choose.accept(name.getText()));
+    Button fresh = new Button("New net");
+    fresh.setId(id + "-new-net");
+    fresh.setOnAction(e -> choose.accept(nextName("N", model.draft())));
     String now = current == null || current.isEmpty() ? "not connected" : current;
-    return new VBox(4, small(label + ": " + now), nets, new HBox(6, name, use));
+    return new VBox(4, small(label + ": " + now), nets, new HBox(6, fresh, name, use));
   }
 }

@@ -210,6 +210,13 @@ public final class ReadingsView {
     verdict.getStyleClass().add("verdict");
     verdict.setWrapText(true);
     verdict.textProperty().bind(model.verdictProperty());
+    Label chain = new Label();
+    chain.setId("readings-chain");
+    chain.setWrapText(true);
+    chain.getStyleClass().add("hint");
+    chain.textProperty().bind(model.chainProperty());
+    chain.visibleProperty().bind(model.chainProperty().isNotEmpty());
+    chain.managedProperty().bind(chain.visibleProperty());
     suspectsBox.setId("readings-suspects");
     ListView<ReadingsViewModel.ReadingRow> list = new ListView<>(model.rows());
     list.setId("readings-list");
@@ -229,7 +236,7 @@ public final class ReadingsView {
     all.setMaxWidth(Double.MAX_VALUE);
     all.disableProperty().bind(Bindings.isEmpty(bench.readings()));
     all.setOnAction(e -> model.showSuspects());
-    box.getChildren().addAll(head, verdict, suspectsBox, list, all);
+    box.getChildren().addAll(head, verdict, chain, suspectsBox, list, all);
     return box;
   }
 

@@ -8,7 +8,9 @@ import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnoser;
 import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.diagnosis.Fault;
 import com.stagewise.diagnosis.ProbeAdvice;
+import com.stagewise.diagnosis.SignalChain;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.solver.ExpectedVolts;
@@ -45,6 +47,7 @@ public final class ReadingsViewModel {
   private final ObservableList<ReadingRow> rows = FXCollections.observableArrayList();
   private final ObservableList<Suspect> topSuspects = FXCollections.observableArrayList();
   private final StringProperty verdict = new SimpleStringProperty("");
+  private final StringProperty chain = new SimpleStringProperty("");
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
   private final BooleanProperty thinking = new SimpleBooleanProperty(false);
   private Diagnoser diagnoser;
@@ -103,6 +106,55 @@ public final class ReadingsViewModel {
 
   public StringProperty verdictProperty() {
     return verdict;
+  }
+
+  /**
+   * Returns where along the signal chain the top suspects sit, for a stage of several sections
+   * (empty otherwise), e.g. "Along the chain: U1A › U1B › U1C ◀ R6 open › U1D › U2A".
+   */
+  public StringProperty chainProperty() {
+    return chain;
+  }
+
+  /** Returns the chain line for a stage and its top suspects; empty for a single section. */
+  static String chainLine(Stage stage, List<Suspect> suspects) {
+    if (stage == null || stage.amplifiers().size() < 2 || suspects.isEmpty()) {
+      return "";
+    }
+    SignalChain order = SignalChain.of(stage);
+    java.util.Set<String> rails = new java.util.HashSet<>();
+    stage.rails().forEach(r -> rails.add(r.net()));
+    List<List<String>> at = new ArrayList<>();
+    order.sections().forEach(s -> at.add(new ArrayList<>()));
+    List<String> nowhere = new ArrayList<>();
+    for (Suspect s : suspects) {
+      if (s.fault().equals("healthy")) {
+        continue;
+      }
+      Optional<Integer> position;
+      try {
+        position = order.position(Fault.parse(s.fault(), rails));
+      } catch (InvalidInputException e) {
+        position = Optional.empty();
+      }
+      String words = Words.fault(s.fault());
+      if (position.isPresent()) {
+        at.get(position.get()).add(words);
+      } else {
+        nowhere.add(words);
+      }
+    }
+    StringBuilder line = new StringBuilder("Along the chain: ");
+    for (int i = 0; i < order.sections().size(); i++) {
+      line.append(i == 0 ? "" : " › ").append(order.sections().get(i));
+      if (!at.get(i).isEmpty()) {
+        line.append(" ◀ ").append(String.join(", ", at.get(i)));
+      }
+    }
+    if (!nowhere.isEmpty()) {
+      line.append(".  Not in one section: ").append(String.join(", ", nowhere));
+    }
+    return line.toString();
   }
 
   public ObjectProperty<ExpectedVolts> expectedProperty() {
@@ -295,6 +347,7 @@ public final class ReadingsViewModel {
         diagnosis == null ? List.of() : diagnosis.suspects().stream().limit(TOP).toList();
     topSuspects.setAll(top);
     verdict.set(diagnosis == null || bench.readings().isEmpty() ? "" : verdictLine(diagnosis));
+    chain.set(bench.readings().isEmpty() ? "" : chainLine(stage, top));
     List<ReadingRow> list = new ArrayList<>();
     for (Reading r : bench.readings()) {
       double low = Double.NaN;

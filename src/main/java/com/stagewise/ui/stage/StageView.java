@@ -2,6 +2,7 @@ package com.stagewise.ui.stage;
 
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.drawing.SchematicDrawing;
+import com.stagewise.ui.editor.StageEditorView;
 import com.stagewise.ui.widget.ListSelection;
 import com.stagewise.ui.widget.ValuePad;
 import com.stagewise.ui.words.Words;
@@ -42,6 +43,7 @@ public final class StageView {
 
   private final StageViewModel model;
   private final HBox root = new HBox(12);
+  private final StackPane layers = new StackPane();
   private final VBox expectedBox = new VBox(4);
   private final SchematicDrawing schematic = new SchematicDrawing();
 
@@ -61,11 +63,17 @@ public final class StageView {
     editor.setMinWidth(430);
     root.getChildren().addAll(library, middle, editor);
     model.expectedProperty().addListener((o, was, now) -> showExpected(now));
+    StageEditorView stageEditor =
+        new StageEditorView(model.editor(), model::useEdited, model::closeEditor);
+    Node editorRoot = stageEditor.root();
+    editorRoot.visibleProperty().bind(model.editingProperty());
+    root.visibleProperty().bind(model.editingProperty().not());
+    layers.getChildren().addAll(root, editorRoot);
   }
 
-  /** Returns the screen's root node. */
+  /** Returns the screen's root node: the screen, with the stage editor over it when open. */
   public Node root() {
-    return root;
+    return layers;
   }
 
   /** Reloads the library (when the screen is shown again for another unit). */
@@ -131,7 +139,19 @@ public final class StageView {
     libraryBox.managedProperty().bind(fromLibrary.selectedProperty());
     templateBox.visibleProperty().bind(fromTemplate.selectedProperty());
     templateBox.managedProperty().bind(fromTemplate.selectedProperty());
-    box.getChildren().addAll(new HBox(6, fromLibrary, fromTemplate), libraryBox, templateBox);
+    Button edit = new Button("Edit stage");
+    edit.setId("stage-edit");
+    edit.disableProperty().bind(model.stageProperty().isNull());
+    edit.setOnAction(e -> model.openEditor(false));
+    Button fresh = new Button("New stage");
+    fresh.setId("stage-new");
+    fresh.setOnAction(e -> model.openEditor(true));
+    box.getChildren()
+        .addAll(
+            new HBox(6, fromLibrary, fromTemplate),
+            libraryBox,
+            templateBox,
+            new HBox(6, edit, fresh));
     return box;
   }
 

@@ -20,6 +20,7 @@ import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.SafetyCaution;
 import com.stagewise.ui.Step;
+import com.stagewise.ui.editor.StageEditorModel;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
@@ -27,7 +28,9 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
@@ -54,6 +57,8 @@ public final class StageViewModel {
   private final ObjectProperty<StageTemplate> template = new SimpleObjectProperty<>();
   private final ObservableList<ParameterEntry> parameters = FXCollections.observableArrayList();
   private boolean builtFromTemplate;
+  private final StageEditorModel editor = new StageEditorModel();
+  private final BooleanProperty editing = new SimpleBooleanProperty(false);
 
   /** Creates the stage screen's model on a bench. */
   public StageViewModel(Bench bench) {
@@ -345,6 +350,9 @@ public final class StageViewModel {
               for (LibraryStage stored : bench.casework().stageLibrary(model)) {
                 entries.add(new LibraryEntry(stored.title(), stored.stage()));
               }
+              // Newest first: a stage built or edited for an earlier unit of the model is the
+              // likeliest one on the bench now.
+              java.util.Collections.reverse(entries);
               return entries;
             },
             entries -> {
@@ -363,6 +371,46 @@ public final class StageViewModel {
                 bench
                     .problems()
                     .failed("Could not read the stage library", e, Words.CHECK_DATABASE));
+  }
+
+  /** Returns the stage editor's model. */
+  public StageEditorModel editor() {
+    return editor;
+  }
+
+  /** Returns whether the stage editor is open over the screen. */
+  public BooleanProperty editingProperty() {
+    return editing;
+  }
+
+  /**
+   * Opens the stage editor on a copy of the chosen stage, or on an empty stage of the board model
+   * when {@code empty} or when no stage is chosen. (The editor asks before it drops unsaved edits.)
+   */
+  public void openEditor(boolean empty) {
+    Stage s = stage.get();
+    BoardModel model = bench.boardModelProperty().get();
+    if (empty || s == null) {
+      editor.startEmpty("New stage", model == null ? "" : model.name());
+    } else {
+      editor.startFrom(s, "\"" + s.title() + "\"");
+    }
+    editing.set(true);
+  }
+
+  /**
+   * Takes a stage saved in the editor: it becomes the chosen stage and, when it is used for the
+   * case, joins the board model's library so that the next unit of the model finds it.
+   */
+  public void useEdited(Stage edited) {
+    setStage(edited);
+    builtFromTemplate = true;
+    editing.set(false);
+  }
+
+  /** Closes the editor (its model has asked about unsaved edits first). */
+  public void closeEditor() {
+    editing.set(false);
   }
 
   /** Takes a stage to work on (from the library or a template); its parts become editable. */

@@ -104,6 +104,31 @@ class StageViewModelTest {
   }
 
   @Test
+  void editedStage_joinsTheLibraryAndIsOfferedFirstForTheNextUnit() {
+    model.choose(model.library().get(0).stage());
+    model.openEditor(false);
+    assertThat(model.editingProperty().get()).isTrue();
+    model.editor().setPartValue("R2", "100k");
+    model.editor().setTitle("Inverting amplifier, R2 changed", "Test amp board");
+    model.useEdited(model.editor().save().orElseThrow());
+    assertThat(model.editingProperty().get()).isFalse();
+    model.useStage();
+
+    StageViewModel next = new StageViewModel(t.bench);
+    next.loadLibrary();
+    assertThat(next.library()).hasSize(2);
+    assertThat(next.library().get(0).title()).isEqualTo("Inverting amplifier, R2 changed");
+    assertThat(next.library().get(0).stage().part("R2").orElseThrow().value()).isEqualTo(100_000.0);
+  }
+
+  @Test
+  void newStage_opensTheEditorEmptyOnTheBoardModel() {
+    model.openEditor(true);
+    assertThat(model.editor().draft().parts()).isEmpty();
+    assertThat(model.editor().draft().board()).isEqualTo("Test amp board");
+  }
+
+  @Test
   void useStage_railAboveFiftyVolts_showsTheCautionFirst() {
     Stage base = model.library().get(0).stage();
     model.choose(base.withRails(List.of(new Rail("VCC", 60, 0.05), new Rail("VEE", -60, 0.05))));

@@ -1,0 +1,278 @@
+package com.stagewise.app;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.diagnosis.Suspect;
+import com.stagewise.history.SearchQuery;
+import com.stagewise.history.record.CaseStatus;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.ui.Step;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
+import javafx.application.Platform;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.image.WritableImage;
+import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.api.FxToolkit;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * Builds a stage from empty in the stage editor by taps alone (rails, input, a section, parts, each
+ * net tapped or made new, values on the value pad), diagnoses an open feedback resistor on it and
+ * closes the case, in a real (headless) window on the demo shop.
+ *
+ * <p>With {@code -Dscreenshots=true} it writes the editor's pictures to src/site/screens.
+ */
+class EditorFlowTest {
+  private static final String SERIAL = "NF8-22019";
+
+  /** Volts from a rail to the clamped output of a classic-bipolar op-amp (DESIGN.md). */
+  private static final double HEADROOM = 1.5;
+
+  private static final double VCC = 14.96;
+  private static final double VEE = -14.97;
+
+  @TempDir Path temp;
+
+  private Workshop workshop;
+  private BenchApp app;
+  private Stage window;
+  private final FxRobot robot = new FxRobot();
+
+  @BeforeAll
+  static void toolkit() throws Exception {
+    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
+    try {
+      Platform.startup(() -> {});
+    } catch (IllegalStateException alreadyRunning) {
+      // Another test class started the toolkit first.
+    }
+    Platform.setImplicitExit(false);
+  }
+
+  @BeforeEach
+  void open() throws Exception {
+    DataFolder folder =
+        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
+    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
+    window =
+        FxToolkit.registerStage(
+            () -> {
+              Stage stage = new Stage();
+              app = BenchApp.build(workshop);
+              stage.setScene(app.scene());
+              stage.setTitle("Stagewise — bench");
+              stage.show();
+              app.cautionOnFirstRun();
+              return stage;
+            });
+    settle();
+  }
+
+  @AfterEach
+  void close() throws Exception {
+    FxToolkit.cleanupStages();
+    app.close();
+    workshop.close();
+  }
+
+  @Test
+  void stageBuiltFromEmptyByTouch_diagnosesAnOpenFeedbackResistorAndClosesTheCase()
+      throws Exception {
+    tap("#caution-ok");
+    for (char c : SERIAL.toCharArray()) {
+      tap("#serial-key-" + c);
+    }
+    tap("#serial-search");
+    // The case's symptom is words; the stage below is built by taps alone.
+    robot.clickOn("#symptom").write("Output pinned negative, no audio");
+    tap("#open-case");
+    tap("#caution-ok");
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.STAGE);
+
+    // The editor, from empty.
+    tap("#stage-new");
+    assertThat(fx(() -> robot.lookup("#screen-stage-editor").query().isVisible())).isTrue();
+    // Rails: the split supply the editor offers first.
+    tap("#editor-add-rail");
+    tap("#editor-add-rail");
+    // The test input: 1 V DC on the value pad, and the AC preset.
+    tap("#editor-add-input");
+    tap("#editor-volts-key-1");
+    tap("#editor-volts-enter");
+    tap("#editor-input-ac-preset");
+    // One section of a dual package, its supply pins already on the rails; inputs and output
+    // tapped: in+ to ground, in- and out on new nets.
+    tap("#editor-add-dual-8");
+    tap("#editor-section-in-plus-GND");
+    tap("#editor-section-in-minus-new-net");
+    tap("#editor-section-out-new-net");
+    // R1 (10 kΩ offered) from the input to the inverting input; R2 47 kΩ across the section.
+    tap("#editor-add-resistor");
+    tap("#editor-part-net-1-IN");
+    tap("#editor-part-net-2-N1");
+    tap("#editor-add-resistor");
+    tap("#editor-value-key-4");
+    tap("#editor-value-key-7");
+    tap("#editor-value-key-k");
+    tap("#editor-value-enter");
+    tap("#editor-part-net-1-N1");
+    tap("#editor-part-net-2-N2");
+    assertThat(text("#editor-problem-count")).startsWith("No problems");
+    shoot("10-stage-editor");
+    tap("#editor-save");
+    assertThat(fx(() -> robot.lookup("#screen-stage-editor").query().isVisible())).isFalse();
+
+    tap("#use-stage");
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
+    var built = fx(() -> app.bench().stageProperty().get());
+    assertThat(built.amplifiers()).hasSize(1);
+    assertThat(built.part("R2").orElseThrow().value()).isEqualTo(47000.0);
+
+    // Readings of an open R2, as the diagnosis asks for them (rails first).
+    for (int probe = 0; probe < 8 && !text("#probe-call").startsWith("No further"); probe++) {
+      typeReading(openFeedbackResistor(currentProbeAt()));
+      Diagnosis now = fx(() -> app.bench().diagnosisProperty().get());
+      if (now.suspects().get(0).probability() > 0.8
+          && now.suspects().get(0).group().contains("R2:open")) {
+        break;
+      }
+    }
+    Diagnosis diagnosis = fx(() -> app.bench().diagnosisProperty().get());
+    Suspect first = diagnosis.suspects().get(0);
+    // Textbook: with the feedback resistor open the inverting stage runs open-loop and the output
+    // clamps at the negative limit while the inverting input follows the input.
+    assertThat(first.group()).contains("R2:open");
+
+    tap("#show-suspects");
+    tap("#suspects-close-out");
+    tap("#action-add");
+    tap("#outcome-fixed");
+    tap("#close-case");
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.HISTORY);
+
+    var hits =
+        workshop
+            .store()
+            .cases()
+            .search(SearchQuery.all().withSerial(SERIAL).withStatus(CaseStatus.CLOSED));
+    assertThat(hits)
+        .anySatisfy(
+            hit -> {
+              assertThat(hit.outcome()).isEqualTo(Outcome.FIXED);
+              assertThat(hit.confirmedFaults()).contains(first.fault());
+            });
+    // The stage built for this unit joined its board model's library.
+    var model = workshop.store().units().findBoardModel("Northfield MX-8 channel board");
+    assertThat(model).isPresent();
+    assertThat(workshop.store().library().sheets(model.get().id()))
+        .anySatisfy(sheet -> assertThat(sheet.title()).isEqualTo("New stage"));
+  }
+
+  /**
+   * Returns what the stage with R2 open reads at a test point (N1 is the inverting input's net, N2
+   * the output's, as the editor named them).
+   */
+  private static double openFeedbackResistor(String at) {
+    Map<String, Double> dc =
+        Map.ofEntries(
+            Map.entry("U1.8", VCC),
+            Map.entry("VCC", VCC),
+            Map.entry("U1.4", VEE),
+            Map.entry("VEE", VEE),
+            Map.entry("U1.1", VEE + HEADROOM),
+            Map.entry("N2", VEE + HEADROOM),
+            Map.entry("U1.2", 1.0),
+            Map.entry("N1", 1.0),
+            Map.entry("IN", 1.0),
+            Map.entry("U1.3", 0.0),
+            Map.entry("GND", 0.0));
+    Double volts = dc.get(at);
+    if (volts == null) {
+      throw new AssertionError("the flow asked for an unexpected test point: " + at);
+    }
+    return volts;
+  }
+
+  private String currentProbeAt() throws Exception {
+    String call = text("#probe-call");
+    return call.replace("Probe ", "")
+        .replace(" pin ", ".")
+        .replace("net ", "")
+        .replaceAll(" \\(AC.*", "");
+  }
+
+  private void typeReading(double volts) throws Exception {
+    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
+    if (volts < 0) {
+      robot.clickOn("#reading-key-sign");
+    }
+    for (char c : text.toCharArray()) {
+      robot.clickOn("#reading-key-" + (c == '.' ? "point" : String.valueOf(c)));
+    }
+    tap("#reading-enter");
+  }
+
+  private void tap(String query) throws Exception {
+    robot.clickOn(query);
+    settle();
+  }
+
+  private String text(String query) throws Exception {
+    return fx(
+        () -> {
+          var node = robot.lookup(query).query();
+          if (node instanceof javafx.scene.control.Labeled labeled) {
+            return labeled.getText();
+          }
+          if (node instanceof javafx.scene.control.TextInputControl input) {
+            return input.getText();
+          }
+          throw new AssertionError(query + " is not a text node");
+        });
+  }
+
+  private static <T> T fx(Callable<T> work) throws Exception {
+    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
+  }
+
+  private void settle() throws Exception {
+    WaitForAsyncUtils.waitFor(
+        90,
+        TimeUnit.SECONDS,
+        () -> {
+          WaitForAsyncUtils.waitForFxEvents();
+          return fx(() -> app.idle());
+        });
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  private void shoot(String name) throws Exception {
+    WritableImage image = fx(() -> window.getScene().snapshot(null));
+    BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
+    Path folder =
+        Boolean.getBoolean("screenshots")
+            ? Path.of("src", "site", "screens")
+            : Path.of("target", "screens");
+    Files.createDirectories(folder);
+    try {
+      ImageIO.write(picture, "png", folder.resolve(name + ".png").toFile());
+    } catch (IOException e) {
+      throw new AssertionError("could not write the picture " + name, e);
+    }
+  }
+}
