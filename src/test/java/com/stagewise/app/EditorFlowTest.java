@@ -227,9 +227,51 @@ class EditorFlowTest {
     tap("#reading-enter");
   }
 
+  /**
+   * Taps a node; when it lies outside the window (down a long panel), first swipes the panel it
+   * sits in towards it, as a finger would.
+   */
   private void tap(String query) throws Exception {
+    for (int swipe = 0; swipe < 40; swipe++) {
+      double[] where = fx(() -> placeInWindow(query));
+      if (where == null || where[0] == 0) {
+        break;
+      }
+      robot.moveTo(fx(() -> (javafx.scene.Node) scrollPaneOf(robot.lookup(query).query())));
+      robot.scroll(
+          2,
+          where[0] > 0
+              ? javafx.geometry.VerticalDirection.DOWN
+              : javafx.geometry.VerticalDirection.UP);
+      WaitForAsyncUtils.waitForFxEvents();
+    }
     robot.clickOn(query);
     settle();
+  }
+
+  /**
+   * Returns {+1} when the node is below the window, {-1} above, {0} in view; null if unscrollable.
+   */
+  private double[] placeInWindow(String query) {
+    javafx.scene.Node node = robot.lookup(query).query();
+    if (scrollPaneOf(node) == null) {
+      return null;
+    }
+    var bounds = node.localToScene(node.getBoundsInLocal());
+    double height = node.getScene().getHeight();
+    if (bounds.getMaxY() > height) {
+      return new double[] {1};
+    }
+    return new double[] {bounds.getMinY() < 0 ? -1 : 0};
+  }
+
+  private static javafx.scene.control.ScrollPane scrollPaneOf(javafx.scene.Node node) {
+    for (javafx.scene.Node n = node; n != null; n = n.getParent()) {
+      if (n instanceof javafx.scene.control.ScrollPane pane) {
+        return pane;
+      }
+    }
+    return null;
   }
 
   private String text(String query) throws Exception {

@@ -73,7 +73,9 @@ public final class StageEditorView {
     itemScroll.setPrefWidth(300);
     itemScroll.setMinWidth(260);
     items.setId("editor-items");
-    root.setLeft(itemScroll);
+    VBox left = new VBox(8, addBar(), itemScroll);
+    VBox.setVgrow(itemScroll, Priority.ALWAYS);
+    root.setLeft(left);
     schematic.setId("editor-schematic");
     VBox.setVgrow(schematic, Priority.ALWAYS);
     ScrollPane problemScroll = new ScrollPane(problemList);
@@ -201,13 +203,6 @@ public final class StageEditorView {
                   Place.SECTION,
                   s.ref()));
     }
-    FlowPane addSections = new FlowPane(6, 6);
-    for (PackageType type : PackageType.values()) {
-      addSections
-          .getChildren()
-          .add(addButton("editor-add-" + type.word(), "+ " + type.word(), () -> addSection(type)));
-    }
-    items.getChildren().add(addSections);
     items.getChildren().add(heading("Parts"));
     for (DraftPart p : draft.parts()) {
       items
@@ -224,18 +219,6 @@ public final class StageEditorView {
                   Place.PART,
                   p.ref()));
     }
-    HBox addParts =
-        new HBox(
-            6,
-            addButton(
-                "editor-add-resistor",
-                "+ Resistor",
-                () -> select(Place.PART, model.addPart(PartKind.RESISTOR))),
-            addButton(
-                "editor-add-capacitor",
-                "+ Capacitor",
-                () -> select(Place.PART, model.addPart(PartKind.CAPACITOR))));
-    items.getChildren().add(addParts);
     items.getChildren().add(heading("Rails"));
     for (int i = 0; i < draft.rails().size(); i++) {
       DraftRail r = draft.rails().get(i);
@@ -248,21 +231,6 @@ public final class StageEditorView {
                   Place.RAIL,
                   String.valueOf(i)));
     }
-    items
-        .getChildren()
-        .add(
-            addButton(
-                "editor-add-rail",
-                "+ Rail",
-                () -> {
-                  // The usual split supply first (common practice): +15 V, then -15 V.
-                  int n = draft.rails().size();
-                  String net = n == 0 ? "VCC" : n == 1 ? "VEE" : nextName("V", draft);
-                  model.addRail(
-                      draft.nets().contains(net) ? nextName("V", draft) : net,
-                      n == 0 ? "15" : n == 1 ? "-15" : "0");
-                  select(Place.RAIL, String.valueOf(model.draft().rails().size() - 1));
-                }));
     items.getChildren().add(heading("Test inputs"));
     for (int i = 0; i < draft.inputs().size(); i++) {
       DraftInput in = draft.inputs().get(i);
@@ -275,16 +243,54 @@ public final class StageEditorView {
                   Place.INPUT,
                   String.valueOf(i)));
     }
-    items
-        .getChildren()
+  }
+
+  /** The add buttons, always in view above the list (no scrolling to reach them). */
+  private Node addBar() {
+    FlowPane bar = new FlowPane(6, 6);
+    bar.setId("editor-add-bar");
+    bar.setPrefWrapLength(300);
+    for (PackageType type : PackageType.values()) {
+      bar.getChildren()
+          .add(addButton("editor-add-" + type.word(), "+ " + type.word(), () -> addSection(type)));
+    }
+    bar.getChildren()
+        .add(
+            addButton(
+                "editor-add-resistor",
+                "+ Resistor",
+                () -> select(Place.PART, model.addPart(PartKind.RESISTOR))));
+    bar.getChildren()
+        .add(
+            addButton(
+                "editor-add-capacitor",
+                "+ Capacitor",
+                () -> select(Place.PART, model.addPart(PartKind.CAPACITOR))));
+    bar.getChildren()
+        .add(
+            addButton(
+                "editor-add-rail",
+                "+ Rail",
+                () -> {
+                  // The usual split supply first (common practice): +15 V, then -15 V.
+                  DraftStage draft = model.draft();
+                  int n = draft.rails().size();
+                  String net = n == 0 ? "VCC" : n == 1 ? "VEE" : nextName("V", draft);
+                  model.addRail(
+                      draft.nets().contains(net) ? nextName("V", draft) : net,
+                      n == 0 ? "15" : n == 1 ? "-15" : "0");
+                  select(Place.RAIL, String.valueOf(model.draft().rails().size() - 1));
+                }));
+    bar.getChildren()
         .add(
             addButton(
                 "editor-add-input",
                 "+ Input",
                 () -> {
-                  model.addInput(nextName("IN", draft), "0");
+                  model.addInput(nextName("IN", model.draft()), "0");
                   select(Place.INPUT, String.valueOf(model.draft().inputs().size() - 1));
                 }));
+    return bar;
   }
 
   private static String nextName(String prefix, DraftStage draft) {
