@@ -106,7 +106,7 @@ class EditorFlowTest {
 
     // The editor, from empty.
     tap("#stage-new");
-    assertThat(fx(() -> robot.lookup("#screen-stage-editor").query().isVisible())).isTrue();
+    assertThat(fx(() -> shown("#screen-stage-editor"))).isTrue();
     // Rails: the split supply the editor offers first.
     tap("#editor-add-rail");
     tap("#editor-add-rail");
@@ -135,7 +135,7 @@ class EditorFlowTest {
     assertThat(text("#editor-problem-count")).startsWith("No problems");
     shoot("10-stage-editor");
     tap("#editor-save");
-    assertThat(fx(() -> robot.lookup("#screen-stage-editor").query().isVisible())).isFalse();
+    assertThat(fx(() -> shown("#screen-stage-editor"))).isFalse();
 
     tap("#use-stage");
     assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
@@ -232,18 +232,32 @@ class EditorFlowTest {
    * sits in towards it, as a finger would.
    */
   private void tap(String query) throws Exception {
+    try {
+      swipeToAndTap(query);
+    } catch (Exception | AssertionError e) {
+      // A picture of the window as it was when the tap failed, to see why.
+      shoot("failed-tap-" + query.replaceAll("[^A-Za-z0-9-]", ""));
+      throw e;
+    }
+  }
+
+  private void swipeToAndTap(String query) throws Exception {
     for (int swipe = 0; swipe < 40; swipe++) {
       double[] where = fx(() -> placeInWindow(query));
       if (where == null || where[0] == 0) {
         break;
       }
-      robot.moveTo(fx(() -> (javafx.scene.Node) scrollPaneOf(robot.lookup(query).query())));
-      robot.scroll(
-          2,
-          where[0] > 0
-              ? javafx.geometry.VerticalDirection.DOWN
-              : javafx.geometry.VerticalDirection.UP);
-      WaitForAsyncUtils.waitForFxEvents();
+      // A finger swipe: press near the panel's left edge (its margin, away from text fields,
+      // which keep a drag for selecting text) and drag the content the other way.
+      javafx.scene.control.ScrollPane pane = fx(() -> scrollPaneOf(robot.lookup(query).query()));
+      javafx.geometry.Bounds box = fx(() -> pane.localToScreen(pane.getLayoutBounds()));
+      double distance = where[0] > 0 ? -160 : 160;
+      robot
+          .drag(
+              new javafx.geometry.Point2D(box.getMinX() + 4, box.getCenterY()),
+              javafx.scene.input.MouseButton.PRIMARY)
+          .dropBy(0, distance);
+      settle();
     }
     robot.clickOn(query);
     settle();
@@ -254,15 +268,28 @@ class EditorFlowTest {
    */
   private double[] placeInWindow(String query) {
     javafx.scene.Node node = robot.lookup(query).query();
-    if (scrollPaneOf(node) == null) {
+    javafx.scene.control.ScrollPane pane = scrollPaneOf(node);
+    if (pane == null) {
       return null;
     }
+    // In view means inside the panel's own window on the screen, not merely inside the scene:
+    // a row below the panel's bottom edge sits under the status bar, where a tap misses it.
     var bounds = node.localToScene(node.getBoundsInLocal());
-    double height = node.getScene().getHeight();
-    if (bounds.getMaxY() > height) {
+    var view = pane.localToScene(pane.getLayoutBounds());
+    if (bounds.getMaxY() > view.getMaxY()) {
       return new double[] {1};
     }
-    return new double[] {bounds.getMinY() < 0 ? -1 : 0};
+    return new double[] {bounds.getMinY() < view.getMinY() ? -1 : 0};
+  }
+
+  /** Whether a node is shown: it and every node it sits in are visible. */
+  private boolean shown(String query) {
+    for (javafx.scene.Node n = robot.lookup(query).query(); n != null; n = n.getParent()) {
+      if (!n.isVisible()) {
+        return false;
+      }
+    }
+    return true;
   }
 
   private static javafx.scene.control.ScrollPane scrollPaneOf(javafx.scene.Node node) {

@@ -10,6 +10,7 @@ import com.stagewise.ui.editor.DraftStage.DraftPart;
 import com.stagewise.ui.editor.DraftStage.DraftRail;
 import com.stagewise.ui.editor.DraftStage.DraftSection;
 import com.stagewise.ui.editor.EditorProblem.Place;
+import com.stagewise.ui.widget.SwipePanel;
 import com.stagewise.ui.widget.ValuePad;
 import com.stagewise.ui.widget.ValuePadModel;
 import java.util.List;
@@ -70,6 +71,8 @@ public final class StageEditorView {
     root.setTop(topBar(onSave, onClose));
     ScrollPane itemScroll = new ScrollPane(items);
     itemScroll.setFitToWidth(true);
+    // A finger drags a long panel along, as on a phone, besides the wheel and the scroll bar.
+    SwipePanel.of(itemScroll);
     itemScroll.setPrefWidth(300);
     itemScroll.setMinWidth(260);
     items.setId("editor-items");
@@ -80,6 +83,7 @@ public final class StageEditorView {
     VBox.setVgrow(schematic, Priority.ALWAYS);
     ScrollPane problemScroll = new ScrollPane(problemList);
     problemScroll.setFitToWidth(true);
+    SwipePanel.of(problemScroll);
     problemScroll.setPrefHeight(150);
     problemList.setId("editor-problems");
     VBox middle = new VBox(8, schematic, problemScroll);
@@ -87,6 +91,7 @@ public final class StageEditorView {
     root.setCenter(middle);
     ScrollPane detailScroll = new ScrollPane(details);
     detailScroll.setFitToWidth(true);
+    SwipePanel.of(detailScroll);
     detailScroll.setPrefWidth(400);
     detailScroll.setMinWidth(360);
     details.getStyleClass().add("panel");
@@ -298,6 +303,15 @@ public final class StageEditorView {
       return prefix;
     }
     int n = 2;
+    while (draft.nets().contains(prefix + n)) {
+      n++;
+    }
+    return prefix + n;
+  }
+
+  /** A new net's name as technicians number them: N1, N2, … (the first free one). */
+  private static String nextNumbered(String prefix, DraftStage draft) {
+    int n = 1;
     while (draft.nets().contains(prefix + n)) {
       n++;
     }
@@ -723,7 +737,7 @@ public final class StageEditorView {
     use.setOnAction(e -> choose.accept(name.getText()));
     Button fresh = new Button("New net");
     fresh.setId(id + "-new-net");
-    fresh.setOnAction(e -> choose.accept(nextName("N", model.draft())));
+    fresh.setOnAction(e -> choose.accept(nextNumbered("N", model.draft())));
     String now = current == null || current.isEmpty() ? "not connected" : current;
     return new VBox(4, small(label + ": " + now), nets, new HBox(6, fresh, name, use));
   }
