@@ -21,6 +21,10 @@ import java.util.Map;
 public final class TestBench implements AutoCloseable {
   public final HistoryStore store;
   public final List<String> problems = new ArrayList<>();
+
+  /** Each problem shown, as its title, what happened and what to do, one line each. */
+  public final List<String> problemTexts = new ArrayList<>();
+
   public final List<SafetyCaution.Reason> cautions = new ArrayList<>();
   public final Map<String, Boolean> mains = new HashMap<>();
   public final CaseResume resume;
@@ -29,7 +33,11 @@ public final class TestBench implements AutoCloseable {
   private TestBench(Path folder) {
     store = HistoryStore.open(folder.resolve("history.db"));
     resume = new CaseResume(folder.resolve("open-cases"));
-    Problems recorder = (title, what, todo) -> problems.add(title);
+    Problems recorder =
+        (title, what, todo) -> {
+          problems.add(title);
+          problemTexts.add(title + "\n" + what + "\n" + todo);
+        };
     Caution caution =
         (reason, then) -> {
           cautions.add(reason);

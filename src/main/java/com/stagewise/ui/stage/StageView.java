@@ -146,13 +146,42 @@ public final class StageView {
     Button fresh = new Button("New stage");
     fresh.setId("stage-new");
     fresh.setOnAction(e -> model.openEditor(true));
+    // Stage sheets as files: from a shared folder or a USB stick, and back.
+    Button open = new Button("Open file…");
+    open.setId("stage-open-file");
+    open.setOnAction(e -> chooseSheet(false).ifPresent(model::importSheet));
+    Button save = new Button("Save to file…");
+    save.setId("stage-save-file");
+    save.disableProperty().bind(model.stageProperty().isNull());
+    save.setOnAction(e -> chooseSheet(true).ifPresent(model::exportSheet));
     box.getChildren()
         .addAll(
             new HBox(6, fromLibrary, fromTemplate),
             libraryBox,
             templateBox,
-            new HBox(6, edit, fresh));
+            new HBox(6, edit, fresh),
+            new HBox(6, open, save));
     return box;
+  }
+
+  /** Asks for a stage sheet file to open, or where to save one. */
+  private java.util.Optional<java.nio.file.Path> chooseSheet(boolean forSaving) {
+    javafx.stage.FileChooser chooser = new javafx.stage.FileChooser();
+    chooser.setTitle(forSaving ? "Save the stage sheet" : "Open a stage sheet");
+    chooser
+        .getExtensionFilters()
+        .addAll(
+            new javafx.stage.FileChooser.ExtensionFilter("Stage sheets", "*.stage.json"),
+            new javafx.stage.FileChooser.ExtensionFilter("All files", "*.*"));
+    var stage = model.stageProperty().get();
+    if (forSaving && stage != null) {
+      chooser.setInitialFileName(
+          stage.title().replaceAll("[^A-Za-z0-9._-]+", "-").replaceAll("^-+|-+$", "")
+              + ".stage.json");
+    }
+    var window = root.getScene() == null ? null : root.getScene().getWindow();
+    java.io.File file = forSaving ? chooser.showSaveDialog(window) : chooser.showOpenDialog(window);
+    return java.util.Optional.ofNullable(file).map(java.io.File::toPath);
   }
 
   private VBox templatePanel() {

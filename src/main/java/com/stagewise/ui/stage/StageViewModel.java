@@ -16,6 +16,7 @@ import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
 import com.stagewise.circuit.value.ZenerMarking;
 import com.stagewise.history.record.BoardModel;
+import com.stagewise.interchange.StageSheet;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.SafetyCaution;
@@ -23,6 +24,7 @@ import com.stagewise.ui.Step;
 import com.stagewise.ui.editor.StageEditorModel;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -371,6 +373,74 @@ public final class StageViewModel {
                 bench
                     .problems()
                     .failed("Could not read the stage library", e, Words.CHECK_DATABASE));
+  }
+
+  /**
+   * Opens a stage sheet file (from a shared folder or a USB stick, say) as the stage to work on. It
+   * is checked first; a file that is not a usable sheet is refused with what to fix and changes
+   * nothing. Like a stage built here, it joins the board model's library when it is used.
+   */
+  public void importSheet(Path file) {
+    bench
+        .tasks()
+        .run(
+            "Opening the stage sheet " + file.getFileName(),
+            () -> StageSheet.read(file),
+            opened -> {
+              setStage(opened);
+              builtFromTemplate = true;
+              BoardModel model = bench.boardModelProperty().get();
+              libraryNote.set(
+                  "Opened \""
+                      + opened.title()
+                      + "\" from "
+                      + file.getFileName()
+                      + (model == null
+                          ? "."
+                          : ". It joins the library of " + model.name() + " when you use it."));
+            },
+            e ->
+                bench
+                    .problems()
+                    .show(
+                        "This file is not a stage sheet that can be used",
+                        e.getMessage(),
+                        "Fix what is named above in the file, or choose another file ("
+                            + StageSheet.SUFFIX
+                            + "). Nothing was changed."));
+  }
+
+  /** Saves the chosen stage as a stage sheet file, for another bench or the shop's engineer. */
+  public void exportSheet(Path file) {
+    Stage s = stage.get();
+    if (s == null) {
+      bench
+          .problems()
+          .show(
+              "Choose a stage first", "No stage is chosen to save.", "Tap a stage in the library.");
+      return;
+    }
+    Path target =
+        file.getFileName().toString().endsWith(StageSheet.SUFFIX)
+            ? file
+            : file.resolveSibling(
+                file.getFileName().toString().replaceFirst("\\.json$", "") + StageSheet.SUFFIX);
+    bench
+        .tasks()
+        .run(
+            "Saving the stage sheet " + target.getFileName(),
+            () -> {
+              StageSheet.write(s, target);
+              return target;
+            },
+            saved -> libraryNote.set("Saved \"" + s.title() + "\" to " + saved + "."),
+            e ->
+                bench
+                    .problems()
+                    .failed(
+                        "Could not save the stage sheet",
+                        e,
+                        "Check that the folder exists, is writable and has room, then try again."));
   }
 
   /** Returns the stage editor's model. */

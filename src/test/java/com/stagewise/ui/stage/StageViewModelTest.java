@@ -213,6 +213,49 @@ class StageViewModelTest {
     }
   }
 
+  @Test
+  void exportThenImport_bringsBackTheSameStage_andItJoinsTheLibraryWhenUsed() {
+    Stage chosen = model.library().get(0).stage();
+    model.choose(chosen);
+    Path file = temp.resolve("usb").resolve("inverting");
+    file.getParent().toFile().mkdirs();
+
+    model.exportSheet(file);
+    Path written = temp.resolve("usb").resolve("inverting" + StageSheet.SUFFIX);
+    assertThat(written).exists();
+    assertThat(model.libraryNoteProperty().get()).startsWith("Saved ");
+
+    // Change R2, so that the stage on the screen is no longer the saved one.
+    model.selectedPartProperty().set(model.parts().get(1));
+    model.pad().textProperty().set("22k");
+    model.applyValue();
+    assertThat(model.stageProperty().get()).isNotEqualTo(chosen);
+    model.importSheet(written);
+    // Read back from its own file, the stage is the one that was saved.
+    assertThat(model.stageProperty().get()).isEqualTo(chosen);
+    assertThat(model.libraryNoteProperty().get()).contains("joins the library of Test amp board");
+  }
+
+  @Test
+  void importOfABrokenSheet_isRefusedWithWhatToFix_andKeepsTheChosenStage() throws Exception {
+    Stage chosen = model.library().get(0).stage();
+    model.choose(chosen);
+    Path broken = temp.resolve("broken" + StageSheet.SUFFIX);
+    java.nio.file.Files.writeString(
+        broken,
+        StageSheet.write(chosen)
+            .replaceFirst("\"value\"\\s*:\\s*\"[^\"]*\"", "\"value\": \"ten\""));
+
+    model.importSheet(broken);
+
+    assertThat(t.problemTexts).hasSize(1);
+    assertThat(t.problemTexts.get(0))
+        .contains("broken" + StageSheet.SUFFIX)
+        .contains("ten")
+        .contains("Nothing was changed");
+    assertThat(model.stageProperty().get()).isEqualTo(chosen);
+  }
+
   private static StageViewModel.ParameterEntry field(StageViewModel model, String name) {
     return model.parameters().stream()
         .filter(p -> p.parameter().name().equals(name))
