@@ -91,6 +91,70 @@ public final class ReadingRules {
   }
 
   /**
+   * Returns the problems of one reading whose stage is not at hand (a reading carried by a history
+   * bundle): its test point's name, its value against the plausible range, its frequency and its
+   * uncertainty. The stage's rails are unknown, so the value is judged against {@code
+   * largestDrivenVolts}: the largest rail or input of the stages it may have been taken on, or the
+   * end of {@link Limits#RAIL_VOLTS} when none is known. Fields are named {@code at}, {@code
+   * value}, {@code hz} and {@code uncertainty}.
+   */
+  public static List<StageRules.Problem> storedProblems(Reading r, double largestDrivenVolts) {
+    List<StageRules.Problem> problems = new ArrayList<>();
+    if (r.at().length() > Limits.MAX_NAME_LENGTH) {
+      problems.add(
+          new StageRules.Problem(
+              "at", Limits.tooLong("the test point", r.at().length(), Limits.MAX_NAME_LENGTH)));
+    } else if (r.at().chars().anyMatch(Character::isISOControl)) {
+      problems.add(
+          new StageRules.Problem(
+              "at",
+              "the test point holds a control character (expected a net name or a pin such as"
+                  + " U1.6)"));
+    }
+    if (r.kind() == Reading.Kind.OHMS) {
+      if (!r.isOverRange() && !Limits.READING_OHMS.contains(r.value())) {
+        problems.add(
+            new StageRules.Problem(
+                "value", Limits.READING_OHMS.problem("the ohms reading at " + r.at(), r.value())));
+      }
+      return problems;
+    }
+    double limit =
+        (r.kind() == Reading.Kind.AC ? Limits.READING_AC_FACTOR : Limits.READING_RAIL_FACTOR)
+                * largestDrivenVolts
+            + Limits.READING_MARGIN_VOLTS;
+    if (Math.abs(r.value()) > limit) {
+      problems.add(
+          new StageRules.Problem(
+              "value",
+              r.kind().word()
+                  + " reading at "
+                  + r.at()
+                  + " ("
+                  + Limits.shown(r.value(), "V")
+                  + ") is far beyond every rail and input its stage may have (largest "
+                  + Limits.shown(largestDrivenVolts, "V")
+                  + "; expected at most ±"
+                  + Limits.shown(limit, "V")
+                  + "; check the decimal point, the unit and the sign)"));
+    }
+    if (r.kind() == Reading.Kind.AC && !Limits.FREQUENCY_HZ.contains(r.hz())) {
+      problems.add(
+          new StageRules.Problem(
+              "hz", Limits.FREQUENCY_HZ.problem("the reading's frequency", r.hz())));
+    }
+    if (r.uncertainty().isPresent()
+        && !Limits.UNCERTAINTY_VOLTS.contains(r.uncertainty().getAsDouble())) {
+      problems.add(
+          new StageRules.Problem(
+              "uncertainty",
+              Limits.UNCERTAINTY_VOLTS.problem(
+                  "the uncertainty at " + r.at(), r.uncertainty().getAsDouble())));
+    }
+    return problems;
+  }
+
+  /**
    * Checks the readings and throws on the first problem.
    *
    * @param source the file or screen the readings came from, named in the message

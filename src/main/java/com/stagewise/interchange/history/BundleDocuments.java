@@ -1,15 +1,30 @@
 package com.stagewise.interchange.history;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Limits;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingRules;
+import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.StageRules;
 import com.stagewise.history.record.HistoryBundle;
+import com.stagewise.history.record.ReadingKind;
+import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.Unit;
 import com.stagewise.interchange.StageSheet;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
 
 /**
  * Checks the documents a bundle carries with the same rules as the files they came from, before
- * anything of the bundle is written: every stage sheet through the stage sheet reader. A problem is
- * named by the bundle's file, the record's path and the path inside the document, e.g. {@code
- * shop.json: stageSheets[2].sheet.parts[1].value: …}.
+ * anything of the bundle is written: every stage sheet through the stage sheet reader, every
+ * reading with {@link ReadingRules} (its value within the plausible range of the rails of its board
+ * model's sheets in the bundle, or of any rail when the bundle carries none). A problem is named by
+ * the bundle's file, the record's path and the path inside the document, e.g. {@code shop.json:
+ * stageSheets[2].sheet.parts[1].value: …}.
  */
 final class BundleDocuments {
   private BundleDocuments() {}
@@ -21,15 +36,65 @@ final class BundleDocuments {
    * @throws InvalidInputException for the first document that its reader refuses
    */
   static void check(HistoryBundle bundle, String source) {
+    // The largest rail or input of each board model's sheets, to judge its readings by.
+    Map<String, Double> largestByModel = new HashMap<>();
     for (int i = 0; i < bundle.stageSheets().size(); i++) {
       StageSheetRecord sheet = bundle.stageSheets().get(i);
       String at = "stageSheets[" + i + "].sheet";
+      Stage stage;
       try {
-        StageSheet.read(sheet.sheetJson(), "");
+        stage = StageSheet.read(sheet.sheetJson(), "");
       } catch (InvalidInputException e) {
         throw inside(source, at, e);
       }
+      largestByModel.merge(sheet.boardModelId(), Limits.largestDrivenVolts(stage), Math::max);
     }
+    Map<String, String> modelOfUnit = new HashMap<>();
+    for (Unit unit : bundle.units()) {
+      modelOfUnit.put(unit.id(), unit.boardModelId());
+    }
+    Map<String, String> modelOfCase = new HashMap<>();
+    for (RepairCase c : bundle.cases()) {
+      modelOfCase.put(c.id(), modelOfUnit.getOrDefault(c.unitId(), ""));
+    }
+    List<StoredReading> readings = bundle.readings();
+    for (int i = 0; i < readings.size(); i++) {
+      StoredReading stored = readings.get(i);
+      String at = "readings[" + i + "]";
+      if (stored.at().isBlank()) {
+        // The bundle check of every record says so, in its words (BundleCheck).
+        continue;
+      }
+      double largest =
+          largestByModel.getOrDefault(
+              modelOfCase.getOrDefault(stored.caseId(), ""), Limits.RAIL_VOLTS.max());
+      Reading reading;
+      try {
+        reading = reading(stored);
+      } catch (InvalidInputException e) {
+        String key =
+            e.field().equals("hz") || e.field().equals("uncertainty") ? e.field() : "value";
+        throw new InvalidInputException(source, at + "." + key, problemOf(e));
+      }
+      List<StageRules.Problem> problems = ReadingRules.storedProblems(reading, largest);
+      if (!problems.isEmpty()) {
+        StageRules.Problem first = problems.get(0);
+        throw new InvalidInputException(source, at + "." + first.field(), first.message());
+      }
+    }
+  }
+
+  /** Returns a stored reading as the domain's reading, with the checks of its record. */
+  private static Reading reading(StoredReading stored) {
+    boolean ac = stored.kind() == ReadingKind.AC;
+    return new Reading(
+        stored.at(),
+        ac ? Reading.Kind.AC : Reading.Kind.DC,
+        stored.value(),
+        stored.hz() == null ? 0 : stored.hz(),
+        stored.uncertainty() == null
+            ? OptionalDouble.empty()
+            : OptionalDouble.of(stored.uncertainty()));
   }
 
   /** Returns the reader's complaint, placed at {@code at} inside the bundle {@code source}. */

@@ -301,6 +301,33 @@ class HistoryExchangeTest {
             null,
             "readings[0].at: must not be empty"),
         Arguments.of(
+            // Issue 9: readings of 1e308 V were stored with exit 0. Limits.READING_RAIL_FACTOR:
+            // 2 × the largest rail (15 V in SHEET) + 1 V = 31 V.
+            "reading of 1e308 volts",
+            edit(r -> first(r, "readings").put("value", 1e308)),
+            null,
+            "readings[0].value: dc reading at U1.1 (1.000e+308 V) is far beyond every rail"),
+        Arguments.of(
+            "reading beyond the rails of its board model's sheet",
+            edit(r -> first(r, "readings").put("value", 40)),
+            null,
+            "expected at most ±31 V"),
+        Arguments.of(
+            "AC reading at an absurd frequency",
+            edit(r -> ((ObjectNode) r.get("readings").get(1)).put("hz", 1e15)),
+            null,
+            "readings[1].hz: the reading's frequency (1.000e+15 Hz) is outside the plausible range"),
+        Arguments.of(
+            "reading with an absurd uncertainty",
+            edit(r -> ((ObjectNode) r.get("readings").get(1)).put("uncertainty", 1e300)),
+            null,
+            "readings[1].uncertainty: the uncertainty at OUT"),
+        Arguments.of(
+            "dc reading with a frequency",
+            edit(r -> first(r, "readings").put("hz", 50)),
+            null,
+            "readings[0].hz"),
+        Arguments.of(
             "time far in the future",
             edit(r -> first(r, "notes").put("updatedAt", "2999-01-01T00:00:00Z")),
             null,
