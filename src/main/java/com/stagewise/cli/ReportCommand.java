@@ -15,6 +15,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Clock;
+import java.util.UUID;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -138,7 +139,11 @@ final class ReportCommand implements Callable<Integer> {
   private static int write(CaseReport report, Path target, boolean force) {
     Path temporary;
     try {
-      temporary = Files.createTempFile(target.getParent(), ".stagewise-report-", ".tmp");
+      // Files.createTempFile would make the report readable by its owner only (0600); a report
+      // is made to be printed and passed on, so it gets the user's normal permissions (umask).
+      temporary =
+          Files.createFile(
+              target.getParent().resolve(".stagewise-report-" + UUID.randomUUID() + ".tmp"));
     } catch (IOException e) {
       throw new InvalidInputException(
           SOURCE,

@@ -14,6 +14,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.Locale;
+import java.util.UUID;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -145,7 +146,9 @@ final class StageCommand implements Runnable {
             "--out", "", "the folder of " + out + " does not exist (expected an existing folder)");
       }
       Stage stage = StageSheet.readForm(file);
-      Path temp = Files.createTempFile(folder, ".stagewise-draw", ".tmp");
+      // Not Files.createTempFile, which makes the file readable by its owner only (0600): a
+      // drawing gets the user's normal permissions (umask), as every file we write for people.
+      Path temp = Files.createFile(folder.resolve(".stagewise-draw-" + UUID.randomUUID() + ".tmp"));
       try {
         try (OutputStream stream = Files.newOutputStream(temp)) {
           if (svg) {
