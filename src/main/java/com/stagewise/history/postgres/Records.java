@@ -1,0 +1,115 @@
+package com.stagewise.history.postgres;
+
+import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CaseStatus;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.ReadingKind;
+import com.stagewise.history.record.RepairAction;
+import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.Unit;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.Arrays;
+import java.util.List;
+
+/** The queries that select each kind of record, and the mapping of their rows to records. */
+final class Records {
+  static final String BOARD_MODEL = "SELECT id, name, maker, notes, updated_at FROM board_model";
+  static final String STAGE_SHEET =
+      "SELECT id, board_model_id, title, sheet_json, updated_at FROM stage_sheet";
+  static final String UNIT = "SELECT id, serial, board_model_id, owner, updated_at FROM unit";
+  static final String CASE =
+      "SELECT c.id, c.unit_id, c.opened_at, c.symptom, c.status, c.closed_at, c.outcome,"
+          + " c.updated_at, (SELECT string_agg(fault_id, ' ' ORDER BY position) FROM"
+          + " confirmed_fault f WHERE f.case_id = c.id) AS faults"
+          + " FROM repair_case c";
+  static final String READING =
+      "SELECT id, case_id, at, kind, value, hz, uncertainty, meter, taken_at FROM reading";
+  static final String SUSPECT_LIST =
+      "SELECT id, case_id, computed_at, program_version, verdict, next_probes FROM suspect_list";
+  static final String ACTION =
+      "SELECT id, case_id, at, kind, part, old_value, new_value, text, updated_at"
+          + " FROM repair_action";
+  static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
+
+  private Records() {}
+
+  static BoardModel boardModel(ResultSet rs) throws SQLException {
+    return new BoardModel(
+        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
+  }
+
+  static StageSheetRecord stageSheet(ResultSet rs) throws SQLException {
+    return new StageSheetRecord(
+        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
+  }
+
+  static Unit unit(ResultSet rs) throws SQLException {
+    return new Unit(
+        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
+  }
+
+  static RepairCase repairCase(ResultSet rs) throws SQLException {
+    String outcome = rs.getString(7);
+    return new RepairCase(
+        rs.getString(1),
+        rs.getString(2),
+        time(rs, 3),
+        rs.getString(4),
+        CaseStatus.fromWord(rs.getString(5)).orElseThrow(),
+        time(rs, 6),
+        outcome == null ? null : Outcome.fromWord(outcome).orElseThrow(),
+        words(rs.getString(9)),
+        time(rs, 8));
+  }
+
+  static StoredReading reading(ResultSet rs) throws SQLException {
+    return new StoredReading(
+        rs.getString(1),
+        rs.getString(2),
+        rs.getString(3),
+        ReadingKind.fromWord(rs.getString(4)).orElseThrow(),
+        rs.getDouble(5),
+        nullableDouble(rs, 6),
+        nullableDouble(rs, 7),
+        rs.getString(8),
+        time(rs, 9));
+  }
+
+  static RepairAction action(ResultSet rs) throws SQLException {
+    return new RepairAction(
+        rs.getString(1),
+        rs.getString(2),
+        time(rs, 3),
+        ActionKind.fromWord(rs.getString(4)).orElseThrow(),
+        rs.getString(5),
+        rs.getString(6),
+        rs.getString(7),
+        rs.getString(8),
+        time(rs, 9));
+  }
+
+  static CaseNote note(ResultSet rs) throws SQLException {
+    return new CaseNote(
+        rs.getString(1), rs.getString(2), time(rs, 3), rs.getString(4), time(rs, 5));
+  }
+
+  static Instant time(ResultSet rs, int column) throws SQLException {
+    long millis = rs.getLong(column);
+    return rs.wasNull() ? null : Instant.ofEpochMilli(millis);
+  }
+
+  static Double nullableDouble(ResultSet rs, int column) throws SQLException {
+    double value = rs.getDouble(column);
+    return rs.wasNull() ? null : value;
+  }
+
+  static List<String> words(String joined) {
+    return joined == null || joined.isEmpty() ? List.of() : Arrays.asList(joined.split(" "));
+  }
+}
