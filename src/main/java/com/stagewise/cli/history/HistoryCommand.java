@@ -33,6 +33,8 @@ import picocli.CommandLine.Command;
       BackupCommand.class,
       RestoreCommand.class,
       DemoCommand.class,
+      ServerInitCommand.class,
+      ServerCheckCommand.class,
     })
 public final class HistoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

@@ -57,13 +57,27 @@ final class PgMigrations {
    *     shop's administrator)
    */
   static void migrate(PgDatabase database, long nowMillis) {
+    migrate(database, nowMillis, LATEST);
+  }
+
+  /** Applies the scripts the schema lacks up to version {@code target} (for fixtures). */
+  static void migrate(PgDatabase database, long nowMillis, int target) {
     String schema = database.address().schema();
     int version = database.read("read the schema version", c -> versionOf(c, schema));
+    if (version == NO_USAGE) {
+      throw new StorageException(
+          "Shop server "
+              + database.address()
+              + ": this user may not use the shop's schema "
+              + schema
+              + ". Ask the shop's administrator to run 'stagewise history server-init --grant"
+              + " ROLE' for this bench's role. The bench keeps working on its own file.");
+    }
     requireKnown(database, version);
-    if (version >= LATEST) {
+    if (version >= target) {
       return;
     }
-    for (int next = Math.max(version, 0) + 1; next <= LATEST; next++) {
+    for (int next = Math.max(version, 0) + 1; next <= target; next++) {
       int step = next;
       String script = SCRIPTS.get(step - 1);
       String text = load(script);
@@ -116,8 +130,19 @@ final class PgMigrations {
     }
   }
 
+  /** What {@link #versionOf} returns for a schema that this user may not use. */
+  private static final int NO_USAGE = -2;
+
   private static int versionOf(Connection c, String schema) throws SQLException {
-    return schemaExists(c, schema) ? currentVersion(c, schema) : 0;
+    if (!schemaExists(c, schema)) {
+      return 0;
+    }
+    if (PgDatabase.queryInt(
+            c, "SELECT CASE WHEN has_schema_privilege(?, 'USAGE') THEN 1 ELSE 0 END", schema)
+        == 0) {
+      return NO_USAGE;
+    }
+    return currentVersion(c, schema);
   }
 
   /**
