@@ -21,11 +21,35 @@ public final class ShopMemory {
 
   /**
    * Returns, for a board model (its name, ignoring letter case, or its id), how many closed cases
-   * with outcome {@code fixed} confirmed each fault id; empty for an unknown model or one with no
-   * such case. A case that confirmed two faults counts once for each.
+   * with outcome {@code fixed} confirmed each fault id, most often first; empty for an unknown
+   * model or one with no such case. A case that confirmed two faults counts once for each. On a
+   * bench that syncs with a shop server, the shop-wide counts kept at the last sync are blended in
+   * (per fault the larger count), so the memory is the whole shop's, offline too.
    */
   public Map<String, Integer> faultCounts(String boardModel) {
-    return store.cases().confirmedFaultCounts(boardModel);
+    Map<String, Integer> own = store.cases().confirmedFaultCounts(boardModel);
+    if (!(store instanceof SyncLedger ledger)) {
+      return own;
+    }
+    // The shop server's counts, kept on the bench at its last sync, hold this bench's synced
+    // cases too: per fault the larger of the two counts is the shop's (cases not yet sent are in
+    // the bench's own count only). Adding them would count the bench's synced cases twice.
+    String name = store.units().findBoardModel(boardModel).map(m -> m.name()).orElse(boardModel);
+    Map<String, Integer> shop = ledger.shopCounts(name);
+    if (shop.isEmpty()) {
+      return own;
+    }
+    Map<String, Integer> blended = new java.util.LinkedHashMap<>(own);
+    shop.forEach((fault, n) -> blended.merge(fault, n, Math::max));
+    java.util.List<Map.Entry<String, Integer>> sorted =
+        new java.util.ArrayList<>(blended.entrySet());
+    sorted.sort(
+        Map.Entry.<String, Integer>comparingByValue()
+            .reversed()
+            .thenComparing(Map.Entry.comparingByKey()));
+    Map<String, Integer> ordered = new java.util.LinkedHashMap<>();
+    sorted.forEach(e -> ordered.put(e.getKey(), e.getValue()));
+    return ordered;
   }
 
   /**

@@ -35,6 +35,7 @@ import picocli.CommandLine.Command;
       DemoCommand.class,
       ServerInitCommand.class,
       ServerCheckCommand.class,
+      SyncCommand.class,
     })
 public final class HistoryCommand implements Runnable {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

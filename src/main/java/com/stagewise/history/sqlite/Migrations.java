@@ -20,7 +20,8 @@ import java.util.Locale;
  */
 final class Migrations {
   /** The scripts in order; script {@code i} brings the schema to version {@code i + 1}. */
-  static final List<String> SCRIPTS = List.of("V1__core_tables.sql", "V2__full_text_search.sql");
+  static final List<String> SCRIPTS =
+      List.of("V1__core_tables.sql", "V2__full_text_search.sql", "V3__sync.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

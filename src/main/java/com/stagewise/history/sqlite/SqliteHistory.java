@@ -2,11 +2,18 @@ package com.stagewise.history.sqlite;
 
 import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.ImportReport;
 import com.stagewise.history.StageLibrary;
+import com.stagewise.history.SyncLedger;
 import com.stagewise.history.Transfer;
 import com.stagewise.history.Units;
+import com.stagewise.history.record.HistoryBundle;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 
 /**
  * The shop's repair history in one SQLite file: the embedded {@link HistoryStore}.
@@ -14,13 +21,14 @@ import java.time.Clock;
  * <p>The file may be used by several programs at once: a writer waits for another's write lock (up
  * to a timeout, then retries) instead of failing. Calls from several threads run one at a time.
  */
-public final class SqliteHistory implements HistoryStore {
+public final class SqliteHistory implements HistoryStore, SyncLedger {
   private final Database database;
   private final Clock clock;
   private final SqliteUnits units;
   private final SqliteCases cases;
   private final SqliteLibrary library;
   private final SqliteTransfer transfer;
+  private final Ledger ledger;
 
   private SqliteHistory(Database database, Clock clock) {
     this.database = database;
@@ -29,6 +37,7 @@ public final class SqliteHistory implements HistoryStore {
     this.cases = new SqliteCases(this);
     this.library = new SqliteLibrary(this);
     this.transfer = new SqliteTransfer(this);
+    this.ledger = new Ledger(this);
   }
 
   /** Opens (creating if missing) the history file and brings its schema up to date. */
@@ -109,6 +118,59 @@ public final class SqliteHistory implements HistoryStore {
   @Override
   public synchronized int schemaVersion() {
     return database.read("read the schema version", c -> Migrations.currentVersion(database));
+  }
+
+  // ---- the bench's side of sync (SyncLedger)
+  // -----------------------------------------------------
+
+  @Override
+  public int pendingCount() {
+    return ledger.pendingCount();
+  }
+
+  @Override
+  public List<Batch> pendingBatches(int max, String programVersion) {
+    return ledger.pendingBatches(max, programVersion);
+  }
+
+  @Override
+  public void uploaded(Batch batch) {
+    ledger.uploaded(batch);
+  }
+
+  @Override
+  public ImportReport mergeFromServer(HistoryBundle bundle, String source) {
+    return ledger.mergeFromServer(bundle, source);
+  }
+
+  @Override
+  public long pulledThrough(String server) {
+    return ledger.pulledThrough(server);
+  }
+
+  @Override
+  public void pulled(String server, long through) {
+    ledger.pulled(server, through);
+  }
+
+  @Override
+  public void synced(String server, Instant at) {
+    ledger.synced(server, at);
+  }
+
+  @Override
+  public Optional<Instant> lastSync(String server) {
+    return ledger.lastSync(server);
+  }
+
+  @Override
+  public void cacheShopCounts(Map<String, Map<String, Integer>> counts) {
+    ledger.cacheShopCounts(counts);
+  }
+
+  @Override
+  public Map<String, Integer> shopCounts(String boardModelName) {
+    return ledger.shopCounts(boardModelName);
   }
 
   @Override

@@ -151,6 +151,28 @@ public final class HistoryJson {
     return text(root);
   }
 
+  /**
+   * Returns {@code {"server": …, "down": n, "downUnchanged": n, "up": n, "conflicts": […],
+   * "endedAt": "…"}}, the summary of {@code history sync --json}.
+   */
+  public static String syncReport(com.stagewise.history.sync.SyncReport report) {
+    ObjectNode root = NODES.objectNode();
+    root.put("server", report.server())
+        .put("down", report.down())
+        .put("downUnchanged", report.downUnchanged())
+        .put("up", report.up());
+    ArrayNode conflicts = root.putArray("conflicts");
+    for (ImportReport.Conflict conflict : report.conflicts()) {
+      conflicts
+          .addObject()
+          .put("kind", conflict.kind())
+          .put("id", conflict.id())
+          .put("reason", conflict.reason());
+    }
+    root.put("endedAt", report.endedAt().toString());
+    return text(root);
+  }
+
   /** Returns {@code {"boardModel": …, "faultCounts": {fault: n, …}}}. */
   public static String faultCounts(String boardModel, Map<String, Integer> counts) {
     ObjectNode root = NODES.objectNode();

@@ -53,7 +53,13 @@ class HistorySubcommandsTest {
 
     assertThat(help.code()).as(help.err()).isEqualTo(ExitCode.OK);
     assertThat(help.err()).isEmpty();
-    assertThat(help.out()).contains("Usage: stagewise history " + sub, "--db", "--json", "--help");
+    assertThat(help.out()).contains("Usage: stagewise history " + sub, "--help");
+    // The server's own commands (schema and rights, connection check) work on the server only.
+    if (sub.startsWith("server-")) {
+      assertThat(help.out()).contains("--server");
+    } else {
+      assertThat(help.out()).contains("--db", "--json");
+    }
     CommandLine.Model.CommandSpec spec =
         new CommandLine(new HistoryCommand()).getSubcommands().get(sub).getCommandSpec();
     for (CommandLine.Model.OptionSpec option : spec.options()) {
@@ -62,7 +68,7 @@ class HistorySubcommandsTest {
   }
 
   @Test
-  void subcommands_areTheSeventeenOfTheHistory() {
+  void subcommands_areTheTwentyOfTheHistory() {
     assertThat(subcommands().toList())
         .containsExactlyInAnyOrder(
             "models",
@@ -81,7 +87,10 @@ class HistorySubcommandsTest {
             "import",
             "backup",
             "restore",
-            "demo");
+            "demo",
+            "server-init",
+            "server-check",
+            "sync");
   }
 
   /** Issue 9, point 2: each refusal the probe found, now with the database left as it was. */

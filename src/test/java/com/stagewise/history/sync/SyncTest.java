@@ -1,0 +1,243 @@
+package com.stagewise.history.sync;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SearchQuery;
+import com.stagewise.history.ServerAddress;
+import com.stagewise.history.ShopMemory;
+import com.stagewise.history.StorageException;
+import com.stagewise.history.SyncLedger;
+import com.stagewise.history.postgres.PgHistory;
+import com.stagewise.history.postgres.TestServer;
+import com.stagewise.history.record.CaseStatus;
+import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.RepairCase;
+import java.io.BufferedReader;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import java.util.Set;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Benches syncing with a real PostgreSQL server: each bench a separate history file, the concurrent
+ * ones separate processes. "Exactly the union" is checked record by record.
+ */
+class SyncTest {
+  /** Rounds of sync-and-kill (the issue asks for at least 50). */
+  private static final int KILL_ROUNDS = 50;
+
+  private static final long SEED = 20261202L;
+
+  @TempDir Path folder;
+
+  private final TestServer server = TestServer.get();
+
+  private PgHistory shop(ServerAddress address) {
+    return PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment());
+  }
+
+  @Test
+  void twoBenches_seeEachOthersCases_andTheShopMemoryOfBoth() {
+    ServerAddress address = server.freshShop();
+    try (HistoryStore a = HistoryStore.open(folder.resolve("a.db"));
+        HistoryStore b = HistoryStore.open(folder.resolve("b.db"));
+        PgHistory shop = shop(address)) {
+      RepairCase fromA = Bench.addCase(a, "A-1", 0);
+      RepairCase fromB = Bench.addCase(b, "B-1", 1);
+      Bench.addCase(b, "B-2", 2);
+      Bench.sync(a, shop, "a");
+      Bench.sync(b, shop, "b");
+      SyncReport last = Bench.sync(a, shop, "a");
+      assertThat(last.conflicts()).isEmpty();
+      assertThat(a.cases().find(fromB.id())).contains(fromB);
+      assertThat(b.cases().find(fromA.id())).contains(fromA);
+      assertThat(Bench.content(a)).isEqualTo(Bench.content(b)).isEqualTo(Bench.content(shop));
+      assertThat(((SyncLedger) a).pendingCount()).isZero();
+      // Both benches made "MX-8 main board" on their own: one model on the server, matched by name.
+      assertThat(shop.units().boardModels()).hasSize(1);
+      // Shop memory: A's own history confirmed R2:open once; the shop confirmed it twice.
+      assertThat(a.cases().confirmedFaultCounts(Bench.MODEL)).containsEntry("R2:open", 2);
+      assertThat(new ShopMemory(a).faultCounts(Bench.MODEL))
+          .containsEntry("R2:open", 2)
+          .containsEntry("C1:short", 1);
+      assertThat(((SyncLedger) b).shopCounts(Bench.MODEL))
+          .isEqualTo(shop.confirmedFaultCounts().get(Bench.MODEL));
+      assertThat(a.cases().search(SearchQuery.all().withText("cracked"))).hasSize(3);
+    }
+  }
+
+  @Test
+  void sameCaseClosedOnTwoBenches_isAConflictReported_andNeitherCopyIsLost() {
+    ServerAddress address = server.freshShop();
+    try (HistoryStore a = HistoryStore.open(folder.resolve("a.db"));
+        HistoryStore b = HistoryStore.open(folder.resolve("b.db"));
+        PgHistory shop = shop(address)) {
+      String unit = a.units().addWithModel("A-9", Bench.MODEL, "").unit().id();
+      RepairCase open = a.cases().open(unit, "dead");
+      Bench.sync(a, shop, "a");
+      Bench.sync(b, shop, "b");
+      RepairCase onB = b.cases().close(open.id(), Outcome.RETURNED, List.of());
+      Bench.sync(b, shop, "b");
+      // A closes the same case its own way, after B's close went up: A's copy is the newer.
+      a.cases().close(open.id(), Outcome.FIXED, List.of("R2:open"));
+      SyncReport report = Bench.sync(a, shop, "a");
+      assertThat(report.conflicts()).extracting(c -> c.id()).contains(open.id());
+      assertThat(b.cases().find(open.id())).contains(onB);
+      assertThat(a.cases().find(open.id()).orElseThrow().status()).isEqualTo(CaseStatus.CLOSED);
+    }
+  }
+
+  @Test
+  void serverStoppedMidway_benchKeepsWorkingOffline_andCatchesUp() {
+    ServerAddress address = server.freshShop();
+    Path file = folder.resolve("offline.db");
+    try (HistoryStore bench = HistoryStore.open(file)) {
+      try (PgHistory shop = shop(address)) {
+        Bench.addCase(bench, "OFF-1", 0);
+        Bench.sync(bench, shop, "offline");
+        server.stop();
+        try {
+          Bench.addCase(bench, "OFF-2", 1);
+          assertThatThrownBy(() -> Bench.sync(bench, shop, "offline"))
+              .isInstanceOf(StorageException.class)
+              .hasMessageContaining("cannot");
+          assertThatThrownBy(() -> shop(address))
+              .isInstanceOf(StorageException.class)
+              .hasMessageContaining("cannot reach the server");
+          // The bench works on: a case opened and closed while the server is down.
+          Bench.addCase(bench, "OFF-3", 2);
+          assertThat(bench.cases().search(SearchQuery.all())).hasSize(3);
+        } finally {
+          server.start();
+        }
+      }
+      try (PgHistory shop = shop(address)) {
+        Bench.sync(bench, shop, "offline");
+        assertThat(Bench.content(shop)).isEqualTo(Bench.content(bench));
+        assertThat(shop.cases().search(SearchQuery.all())).hasSize(3);
+      }
+    }
+  }
+
+  @Test
+  void twoThenEightBenchesInTheirOwnProcesses_endWithExactlyTheUnion() throws Exception {
+    for (int benches : List.of(2, 8)) {
+      ServerAddress address = server.freshShop();
+      List<Path> files = new ArrayList<>();
+      List<Process> children = new ArrayList<>();
+      for (int i = 0; i < benches; i++) {
+        Path file = folder.resolve("bench" + benches + "-" + i + ".db");
+        files.add(file);
+        children.add(start("work", file, address, "B" + benches + "x" + i, "5"));
+      }
+      for (Process child : children) {
+        assertThat(child.waitFor(300, TimeUnit.SECONDS)).isTrue();
+        String err = new String(child.getErrorStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertThat(child.exitValue()).as(err).isZero();
+      }
+      // Benches that finished early have not seen the later ones' work yet: one more round each.
+      try (PgHistory shop = shop(address)) {
+        Set<String> union = new HashSet<>();
+        for (Path file : files) {
+          try (HistoryStore bench = HistoryStore.open(file)) {
+            Bench.sync(bench, shop, file.getFileName().toString());
+            union.addAll(Bench.content(bench));
+          }
+        }
+        Set<String> onServer = Bench.content(shop);
+        assertThat(shop.cases().search(SearchQuery.all().withLimit(1000))).hasSize(benches * 5);
+        for (Path file : files) {
+          try (HistoryStore bench = HistoryStore.open(file)) {
+            Bench.sync(bench, shop, file.getFileName().toString());
+            assertThat(Bench.content(bench)).as(file.toString()).isEqualTo(onServer);
+          }
+        }
+        assertThat(onServer).isEqualTo(union);
+      }
+    }
+  }
+
+  @Test
+  void syncKilledAtRandomMoments_losesNothingAndDuplicatesNothing() throws Exception {
+    ServerAddress address = server.freshShop();
+    Path file = folder.resolve("killed.db");
+    Path other = folder.resolve("other.db");
+    Random random = new Random(SEED);
+    int killedMidSync = 0;
+    try (HistoryStore bench = HistoryStore.open(file);
+        HistoryStore otherBench = HistoryStore.open(other);
+        PgHistory shop = shop(address)) {
+      for (int i = 0; i < 40; i++) {
+        Bench.addCase(bench, "K-" + (i % 7), i);
+        Bench.addCase(otherBench, "O-" + (i % 7), i);
+      }
+      Bench.sync(otherBench, shop, "other");
+      for (int round = 0; round < KILL_ROUNDS; round++) {
+        Process child = start("loop", file, address, "killed", null);
+        BufferedReader out =
+            new BufferedReader(
+                new InputStreamReader(child.getInputStream(), StandardCharsets.UTF_8));
+        assertThat(out.readLine()).as("round %d started", round).isEqualTo("ready");
+        Thread.sleep(random.nextInt(400));
+        child.destroyForcibly();
+        assertThat(child.waitFor(30, TimeUnit.SECONDS)).isTrue();
+        // Killed before its first sync ended: the interesting rounds.
+        if (!out.ready()) {
+          killedMidSync++;
+        }
+        // New work on both sides between rounds, so that every round has something to send.
+        Bench.addCase(bench, "K-" + round % 7, 100 + round);
+        Bench.addCase(otherBench, "O-" + round % 7, 100 + round);
+        Bench.sync(otherBench, shop, "other");
+      }
+      Bench.sync(bench, shop, "killed");
+      Bench.sync(otherBench, shop, "other");
+      Set<String> onServer = Bench.content(shop);
+      assertThat(Bench.content(bench)).isEqualTo(onServer);
+      assertThat(Bench.content(otherBench)).isEqualTo(onServer);
+      assertThat(shop.cases().search(SearchQuery.all().withLimit(1000)))
+          .hasSize(2 * (40 + KILL_ROUNDS));
+      assertThat(((SyncLedger) bench).pendingCount()).isZero();
+    }
+    assertThat(killedMidSync).as("rounds killed before the first sync ended").isPositive();
+  }
+
+  private Process start(String mode, Path file, ServerAddress address, String name, String n)
+      throws Exception {
+    String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+    List<String> command =
+        new ArrayList<>(
+            List.of(
+                java,
+                "-cp",
+                System.getProperty("java.class.path"),
+                Bench.class.getName(),
+                mode,
+                file.toString(),
+                "postgresql://127.0.0.1:"
+                    + address.port()
+                    + "/"
+                    + address.database()
+                    + "?schema="
+                    + address.schema(),
+                name));
+    if (n != null) {
+      command.add(n);
+    }
+    ProcessBuilder builder = new ProcessBuilder(command);
+    Map<String, String> env = builder.environment();
+    env.putAll(server.adminEnvironment());
+    return builder.start();
+  }
+}
