@@ -42,6 +42,7 @@ public final class BenchApp {
   private final FxTasks tasks = new FxTasks();
   private final Bench bench;
   private final BenchWindow window;
+  private final java.util.Optional<ShopSync> shopSync;
   private final Scene scene;
 
   private BenchApp(Workshop workshop) {
@@ -50,6 +51,8 @@ public final class BenchApp {
         new Bench(
             workshop.store(), tasks, overlays, overlays, workshop.boardFlags(), workshop.resume());
     window = new BenchWindow(bench, overlays, tasks.pendingProperty(), tasks.currentProperty());
+    shopSync = ShopSync.start(workshop.store(), workshop.settings());
+    shopSync.ifPresent(sync -> window.showShopServer(sync.text()));
     StartViewModel start = new StartViewModel(bench);
     StartView startView = new StartView(start);
     window.screen(Step.UNIT, startView::root);
@@ -131,6 +134,7 @@ public final class BenchApp {
 
   /** Stops the background thread. */
   void close() {
+    shopSync.ifPresent(ShopSync::close);
     tasks.close();
   }
 }

@@ -12,6 +12,7 @@ import java.util.Properties;
 /** The app's few settings, in a properties file in the data folder. */
 final class Settings {
   private static final String CAUTION = "caution.acknowledged";
+  private static final String SHOP_SERVER = "shop.server";
 
   private final Path file;
   private final Properties props = new Properties();
@@ -32,6 +33,15 @@ final class Settings {
   /** Returns whether the technician has acknowledged the safety caution on this machine. */
   synchronized boolean cautionAcknowledged() {
     return Boolean.parseBoolean(props.getProperty(CAUTION, "false"));
+  }
+
+  /**
+   * Returns the shop server's address as set in the settings file ({@code shop.server}, e.g. {@code
+   * postgresql://bench-server/shop}), or null when none is set.
+   */
+  synchronized String shopServer() {
+    String server = props.getProperty(SHOP_SERVER, "").strip();
+    return server.isEmpty() ? null : server;
   }
 
   /** Records that the safety caution was acknowledged. */

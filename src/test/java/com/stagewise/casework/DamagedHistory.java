@@ -33,7 +33,9 @@ public final class DamagedHistory {
         pageSize = rs.getInt(1);
       }
       try (ResultSet rs =
-          s.executeQuery("SELECT rootpage FROM sqlite_master WHERE tbl_name = 'unit'")) {
+          // Triggers on the table have no page of their own (root page 0).
+          s.executeQuery(
+              "SELECT rootpage FROM sqlite_master WHERE tbl_name = 'unit' AND rootpage > 0")) {
         while (rs.next()) {
           pages.add(rs.getInt(1));
         }

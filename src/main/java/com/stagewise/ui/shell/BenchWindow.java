@@ -38,6 +38,7 @@ public final class BenchWindow {
   private final Map<Step, Supplier<Node>> makers = new EnumMap<>(Step.class);
   private final Map<Step, Node> screens = new EnumMap<>(Step.class);
   private final Map<Step, ToggleButton> stepButtons = new EnumMap<>(Step.class);
+  private final HBox statusBar;
 
   /**
    * Builds the window's content.
@@ -56,7 +57,8 @@ public final class BenchWindow {
     BorderPane frame = new BorderPane();
     frame.setTop(new VBox(topBar(), caseLine()));
     frame.setCenter(content);
-    frame.setBottom(statusBar(pending, working));
+    statusBar = statusBar(pending, working);
+    frame.setBottom(statusBar);
     root.getChildren().addAll(frame, overlays.layer());
     root.getStylesheets().add(BenchWindow.class.getResource("bench.css").toExternalForm());
     bench.stepProperty().addListener((o, was, now) -> show(now));
@@ -239,6 +241,18 @@ public final class BenchWindow {
     HBox.setHgrow(spring, Priority.ALWAYS);
     line.getChildren().addAll(what, spring, mains);
     return line;
+  }
+
+  /**
+   * Shows the shop server's sync state (last sync time, a sync's progress, or that the server is
+   * away) in the status bar, beside the keys hint.
+   */
+  public void showShopServer(javafx.beans.value.ObservableStringValue words) {
+    Label server = new Label();
+    server.setId("shop-server");
+    server.getStyleClass().add("hint");
+    server.textProperty().bind(words);
+    statusBar.getChildren().add(statusBar.getChildren().size() - 1, server);
   }
 
   private HBox statusBar(

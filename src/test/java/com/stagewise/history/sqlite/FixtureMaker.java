@@ -15,10 +15,11 @@ import java.util.List;
 
 /**
  * Makes the fixture database of an earlier schema version, kept under {@code
- * src/test/resources/com/stagewise/history/fixtures/schema-v<n>.db} for the migration test.
+ * src/test/resources/com/stagewise/history/sqlite/fixtures/schema-v<n>.db} for the migration test.
  *
  * <p>Run once when a new schema version is added, for the version it replaces (see DEVELOPERS.md):
- * {@code java -cp target/test-classes:target/classes:<deps> com.stagewise.history.FixtureMaker 1}.
+ * {@code java -cp target/test-classes:target/classes:<deps>
+ * com.stagewise.history.sqlite.FixtureMaker 1}.
  */
 public final class FixtureMaker {
   /** The symptom of the fixture's closed case, which the migration test searches for. */
@@ -32,7 +33,8 @@ public final class FixtureMaker {
   public static void main(String[] args) throws Exception {
     int version = Integer.parseInt(args[0]);
     Path target =
-        Path.of("src/test/resources/com/stagewise/history/fixtures/schema-v" + version + ".db");
+        Path.of(
+            "src/test/resources/com/stagewise/history/sqlite/fixtures/schema-v" + version + ".db");
     Files.createDirectories(target.getParent());
     Files.deleteIfExists(target);
     make(target, version);
