@@ -3,6 +3,7 @@ package com.stagewise.history.sync;
 import com.stagewise.history.ExportSelection;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ServerAddress;
+import com.stagewise.history.StorageException;
 import com.stagewise.history.SyncLedger;
 import com.stagewise.history.postgres.PgHistory;
 import com.stagewise.history.record.HistoryBundle;
@@ -92,33 +93,48 @@ final class Bench {
 
   /**
    * {@code work DB ADDRESS NAME N}: adds N cases, syncing after each, and prints {@code synced i};
-   * {@code loop DB ADDRESS NAME}: prints {@code ready} once connected, then syncs for ever (until
-   * killed), printing {@code synced} after each. User and password come from PGUSER/PGPASSWORD.
+   * {@code loop DB ADDRESS NAME}: prints {@code ready} once its file is open, then syncs for ever
+   * (until killed), printing {@code synced i} after each. User and password come from
+   * PGUSER/PGPASSWORD.
    */
-  public static void main(String[] args) {
+  public static void main(String[] args) throws InterruptedException {
     String mode = args[0];
     Path db = Path.of(args[1]);
     ServerAddress address = ServerAddress.parse("test", args[2]);
     String name = args[3];
     Map<String, String> env = System.getenv();
-    try (HistoryStore store = HistoryStore.open(db);
-        PgHistory server = PgHistory.open(address, Clock.systemUTC(), env)) {
-      if (mode.equals("work")) {
-        int n = Integer.parseInt(args[4]);
-        for (int i = 0; i < n; i++) {
-          addCase(store, name + "-" + (i % 3), i);
-          sync(store, server, name);
-          System.out.println("synced " + i);
-          System.out.flush();
-        }
-      } else {
+    PgHistory server = null;
+    try (HistoryStore store = HistoryStore.open(db)) {
+      int n = mode.equals("work") ? Integer.parseInt(args[4]) : Integer.MAX_VALUE;
+      if (!mode.equals("work")) {
         System.out.println("ready");
         System.out.flush();
-        while (true) {
-          sync(store, server, name);
-          System.out.println("synced");
-          System.out.flush();
+      }
+      for (int i = 0; i < n; i++) {
+        if (mode.equals("work")) {
+          addCase(store, name + "-" + (i % 3), i);
         }
+        // As a bench does: a server that cannot be reached (a busy machine's connect timing out)
+        // leaves the bench working on its file; the next sync catches up.
+        try {
+          if (server == null) {
+            server = PgHistory.open(address, Clock.systemUTC(), env);
+          }
+          sync(store, server, name);
+          System.out.println("synced " + i);
+        } catch (StorageException e) {
+          System.out.println("offline " + i);
+          if (server != null) {
+            server.close();
+            server = null;
+          }
+          Thread.sleep(200);
+        }
+        System.out.flush();
+      }
+    } finally {
+      if (server != null) {
+        server.close();
       }
     }
   }
