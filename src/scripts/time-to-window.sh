@@ -3,6 +3,9 @@
 #
 # Usage: src/scripts/time-to-window.sh [RUNS]      (default 5 runs; prints each and the median)
 #        JAVA_OPTIONS="..." src/scripts/time-to-window.sh   (other JVM options, e.g. " " for the defaults)
+#        IMAGE=target/dist/Stagewise src/scripts/time-to-window.sh [RUNS]
+#            (the app image of `mvn -B package -Ppackage`, started by its own launcher; with
+#             NO_CDS=1 its class-data sharing archive is left out, for the comparison)
 #
 # Each run starts the app with --demo on a fresh, empty data folder (so the demo data is filled
 # on first start, as on a new machine), under a virtual X display (Xvfb; `apt-get install xvfb`)
@@ -11,21 +14,40 @@
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 runs="${1:-5}"
+if [ -z "${DISPLAY:-}" ]; then
+  # No display: run this script again inside a virtual one.
+  exec xvfb-run -a -s "-screen 0 1280x800x24" "$0" "$runs"
+fi
 
-mvn -B -q -o compile dependency:build-classpath -Dmdep.outputFile=target/classpath.txt -Dmdep.includeScope=runtime >/dev/null \
-  || mvn -B -q compile dependency:build-classpath -Dmdep.outputFile=target/classpath.txt -Dmdep.includeScope=runtime >/dev/null
-cp="target/classes:$(cat target/classpath.txt)"
+image="${IMAGE:-}"
+if [ -z "$image" ]; then
+  mvn -B -q -o compile dependency:build-classpath -Dmdep.outputFile=target/classpath.txt -Dmdep.includeScope=runtime >/dev/null \
+    || mvn -B -q compile dependency:build-classpath -Dmdep.outputFile=target/classpath.txt -Dmdep.includeScope=runtime >/dev/null
+  cp="target/classes:$(cat target/classpath.txt)"
+fi
 
 work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT
+if [ -n "$image" ] && [ -n "${NO_CDS:-}" ]; then
+  # A copy of the image whose launcher leaves the app's archive out (the runtime's own stays).
+  cp -a "$image" "$work/image"
+  image="$work/image"
+  sed -i '/SharedArchiveFile\|Xshare/d' "$image/lib/app/Stagewise.cfg"
+fi
 
 one_run() {
   local n="$1" out="$work/run-$1.log" data="$work/data-$1"
   mkdir -p "$data"
-  # The same JVM options as the javafx-maven-plugin's run configuration in pom.xml.
-  XDG_DATA_HOME="$data" java ${JAVA_OPTIONS:--XX:TieredStopAtLevel=1 -XX:+UseSerialGC} -Dprism.order=sw \
-      -Dstagewise.timing=true -cp "$cp" \
-      com.stagewise.app.Main --demo >"$out" 2>&1 &
+  if [ -n "$image" ]; then
+    # The image's own launcher with its own options; JAVA_TOOL_OPTIONS adds the timing line.
+    XDG_DATA_HOME="$data" JAVA_TOOL_OPTIONS="-Dstagewise.timing=true" \
+        "$image/bin/Stagewise" --demo >"$out" 2>&1 &
+  else
+    # The same JVM options as the javafx-maven-plugin's run configuration in pom.xml.
+    XDG_DATA_HOME="$data" java ${JAVA_OPTIONS:--XX:TieredStopAtLevel=1 -XX:+UseSerialGC} -Dprism.order=sw \
+        -Dstagewise.timing=true -cp "$cp" \
+        com.stagewise.app.Main --demo >"$out" 2>&1 &
+  fi
   local pid=$!
   for _ in $(seq 1 600); do
     if grep -q "first window shown" "$out"; then break; fi
@@ -55,9 +77,4 @@ measure() {
   echo "median of $runs runs: $median ms from process start to the first window"
 }
 
-if [ -n "${DISPLAY:-}" ]; then
-  measure
-else
-  # No display: run this script again inside a virtual one.
-  exec xvfb-run -a -s "-screen 0 1280x800x24" "$0" "$runs"
-fi
+measure

@@ -1,17 +1,20 @@
 package com.stagewise.app;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.interchange.StageSheet;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
 /**
- * The desktop app's own options: {@code --demo} and {@code --db FILE}.
+ * The desktop app's own options: {@code --demo}, {@code --db FILE}, and a stage sheet to open (a
+ * {@code *.stage.json} file, as a file manager passes it when the sheet is opened with the app).
  *
  * @param demo whether to start with the demo data
  * @param db the database named by {@code --db}, or null
+ * @param sheet the stage sheet to open on the stage screen, or null
  */
-record AppOptions(boolean demo, Path db) {
+record AppOptions(boolean demo, Path db, Path sheet) {
 
   /**
    * Returns whether every argument is a desktop-app option (so the app, not the command line,
@@ -34,6 +37,7 @@ record AppOptions(boolean demo, Path db) {
   static AppOptions parse(List<String> args) {
     boolean demo = false;
     Path db = null;
+    Path sheet = null;
     for (int i = 0; i < args.size(); i++) {
       String arg = args.get(i);
       if (arg.equals("--demo")) {
@@ -42,11 +46,16 @@ record AppOptions(boolean demo, Path db) {
         db = Path.of(args.get(++i));
       } else if (arg.startsWith("--db=")) {
         db = Path.of(arg.substring("--db=".length()));
+      } else if (arg.endsWith(StageSheet.SUFFIX) && !arg.startsWith("-") && sheet == null) {
+        sheet = Path.of(arg);
       } else {
-        throw new InvalidInputException("command line", arg, "expected --demo or --db FILE");
+        throw new InvalidInputException(
+            "command line",
+            arg,
+            "expected --demo, --db FILE or a stage sheet file (" + StageSheet.SUFFIX + ")");
       }
     }
-    return new AppOptions(demo, db);
+    return new AppOptions(demo, db, sheet);
   }
 
   /**

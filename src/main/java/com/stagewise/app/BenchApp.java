@@ -45,7 +45,7 @@ public final class BenchApp {
   private final java.util.Optional<ShopSync> shopSync;
   private final Scene scene;
 
-  private BenchApp(Workshop workshop) {
+  private BenchApp(Workshop workshop, java.nio.file.Path sheet) {
     this.workshop = workshop;
     bench =
         new Bench(
@@ -57,6 +57,13 @@ public final class BenchApp {
     StartView startView = new StartView(start);
     window.screen(Step.UNIT, startView::root);
     StageViewModel stage = new StageViewModel(bench);
+    if (sheet != null) {
+      stage.openOnArrival(sheet);
+      overlays.show(
+          "A stage sheet to open",
+          "Stagewise was started with the stage sheet " + sheet.getFileName() + ".",
+          "Find the unit and open its case: the sheet opens on the Stage screen.");
+    }
     window.screen(Step.STAGE, () -> new StageView(stage).root());
     ReadingsViewModel readings = new ReadingsViewModel(bench);
     window.screen(Step.READINGS, () -> new ReadingsView(readings, bench).root());
@@ -102,7 +109,15 @@ public final class BenchApp {
 
   /** Builds the app on an opened workshop. Call on the JavaFX thread. */
   static BenchApp build(Workshop workshop) {
-    return new BenchApp(workshop);
+    return new BenchApp(workshop, null);
+  }
+
+  /**
+   * Builds the app on a workshop with a stage sheet to open (from the command line or a file
+   * manager): it opens on the stage screen once a unit's case is open.
+   */
+  static BenchApp build(Workshop workshop, java.nio.file.Path sheet) {
+    return new BenchApp(workshop, sheet);
   }
 
   /** Returns the scene with every screen. */

@@ -72,7 +72,7 @@ public final class DesktopLauncher extends Application {
             () -> {
               try {
                 Workshop opened = Workshop.open(folder, options.demo(), stages);
-                Platform.runLater(() -> showBench(window, opened));
+                Platform.runLater(() -> showBench(window, opened, options.sheet()));
               } catch (RuntimeException e) {
                 Platform.runLater(() -> cannotOpen(window, folder, e));
               }
@@ -82,9 +82,9 @@ public final class DesktopLauncher extends Application {
     opener.start();
   }
 
-  private void showBench(Stage window, Workshop opened) {
+  private void showBench(Stage window, Workshop opened, Path sheet) {
     workshop = opened;
-    app = BenchApp.build(opened);
+    app = BenchApp.build(opened, sheet);
     Overlays overlays = app.overlays();
     Thread.setDefaultUncaughtExceptionHandler(
         (thread, e) ->

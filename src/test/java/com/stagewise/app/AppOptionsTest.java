@@ -69,4 +69,14 @@ class AppOptionsTest {
         .isInstanceOf(InvalidInputException.class)
         .hasMessageContaining("--fast");
   }
+
+  @Test
+  void parse_aStageSheetFile_isOpenedByTheApp() {
+    // A file manager starts the app with the file's path as its one argument.
+    AppOptions options = AppOptions.parse(List.of("/media/usb/line-driver.stage.json"));
+    assertThat(options.sheet()).isEqualTo(Path.of("/media/usb/line-driver.stage.json"));
+    assertThat(AppOptions.isDesktop(new String[] {"--demo", "a.stage.json"})).isTrue();
+    assertThat(AppOptions.isDesktop(new String[] {"a.stage.json", "b.stage.json"})).isFalse();
+    assertThat(AppOptions.isDesktop(new String[] {"notes.txt"})).isFalse();
+  }
 }

@@ -61,6 +61,7 @@ public final class StageViewModel {
   private boolean builtFromTemplate;
   private final StageEditorModel editor = new StageEditorModel();
   private final BooleanProperty editing = new SimpleBooleanProperty(false);
+  private Path arriving;
 
   /** Creates the stage screen's model on a bench. */
   public StageViewModel(Bench bench) {
@@ -343,6 +344,11 @@ public final class StageViewModel {
       libraryNote.set("Choose a unit first.");
       return;
     }
+    if (arriving != null) {
+      Path sheet = arriving;
+      arriving = null;
+      importSheet(sheet);
+    }
     bench
         .tasks()
         .run(
@@ -373,6 +379,14 @@ public final class StageViewModel {
                 bench
                     .problems()
                     .failed("Could not read the stage library", e, Words.CHECK_DATABASE));
+  }
+
+  /**
+   * Keeps a stage sheet file to open when the stage screen is first shown for a unit (the app was
+   * started with it, e.g. from a file manager).
+   */
+  public void openOnArrival(Path sheet) {
+    arriving = sheet;
   }
 
   /**

@@ -237,6 +237,20 @@ class StageViewModelTest {
   }
 
   @Test
+  void aSheetTheAppWasStartedWith_opensWhenTheStageScreenIsShown() {
+    Stage chosen = model.library().get(0).stage();
+    Path file = temp.resolve("given" + StageSheet.SUFFIX);
+    StageSheet.write(chosen, file);
+    StageViewModel arriving = new StageViewModel(t.bench);
+    arriving.openOnArrival(file);
+    assertThat(arriving.stageProperty().get()).isNull();
+
+    arriving.loadLibrary();
+
+    assertThat(arriving.stageProperty().get()).isEqualTo(chosen);
+  }
+
+  @Test
   void importOfABrokenSheet_isRefusedWithWhatToFix_andKeepsTheChosenStage() throws Exception {
     Stage chosen = model.library().get(0).stage();
     model.choose(chosen);

@@ -1,0 +1,104 @@
+#!/usr/bin/env bash
+# Builds the self-contained Stagewise app image (its own Java runtime, JavaFX, an icon, a desktop
+# entry) with the JDK's jpackage, and a class-data sharing archive (AppCDS) for a quick start.
+#
+# Run through Maven: `mvn -B package -Ppackage` (after the jar and its libraries are built);
+# by hand: src/package/build-image.sh [TARGET_DIR]   (default: target)
+#
+# The archive is made by starting the image once with the demo data under a virtual display
+# (Xvfb; `apt-get install xvfb`) until the unit screen shows; without a display or Xvfb the image is
+# built without it and starts a little slower.
+set -euo pipefail
+here="$(cd "$(dirname "$0")" && pwd)"
+target="$(cd "${1:-$here/../../target}" && pwd)"
+name=Stagewise
+version="${STAGEWISE_VERSION:-1.0}"
+
+command -v jpackage >/dev/null || { echo "jpackage not found: it comes with a full JDK 17 (openjdk-17-jdk)" >&2; exit 1; }
+[ -f "$target/stagewise.jar" ] || { echo "$target/stagewise.jar is missing: run mvn -B package first" >&2; exit 1; }
+
+work="$target/jpackage"
+rm -rf "$work" "$target/dist/$name"
+mkdir -p "$work/input/lib" "$work/input/javafx" "$work/input/desktop" "$target/dist"
+cp "$target/stagewise.jar" "$work/input/"
+for jar in "$target"/lib/*.jar; do
+  case "$(basename "$jar")" in
+    javafx-*-linux.jar) cp "$jar" "$work/input/javafx/" ;;  # the real JavaFX modules
+    javafx-*) ;;                                            # empty stand-ins without a platform
+    *) cp "$jar" "$work/input/lib/" ;;
+  esac
+done
+cp "$here/stagewise.desktop.in" "$here/stagewise-mime.xml" "$here/install-desktop-entry.sh" "$work/input/desktop/"
+
+# JavaFX on the module path (as JavaFX expects; no "unsupported configuration" warning), ControlsFX
+# on the class path with the JavaFX internals it reaches for; the same quick-start JVM options as
+# `mvn javafx:run` (DEVELOPERS.md, "Time to the first window").
+opens=(
+  --add-exports=javafx.base/com.sun.javafx.event=ALL-UNNAMED
+  --add-exports=javafx.controls/com.sun.javafx.scene.control=ALL-UNNAMED
+  --add-exports=javafx.controls/com.sun.javafx.scene.control.behavior=ALL-UNNAMED
+  --add-exports=javafx.controls/com.sun.javafx.scene.control.inputmap=ALL-UNNAMED
+  --add-exports=javafx.graphics/com.sun.javafx.scene=ALL-UNNAMED
+  --add-exports=javafx.graphics/com.sun.javafx.scene.traversal=ALL-UNNAMED
+  --add-exports=javafx.graphics/com.sun.javafx.css=ALL-UNNAMED
+  --add-opens=javafx.controls/javafx.scene.control.skin=ALL-UNNAMED
+)
+options="--module-path \$APPDIR/javafx --add-modules javafx.controls ${opens[*]} -Dprism.order=sw -XX:TieredStopAtLevel=1 -XX:+UseSerialGC"
+
+jpackage --type app-image --name "$name" --app-version "$version" --vendor "Stagewise" \
+  --description "Bench diagnosis of op-amp stages" \
+  --dest "$target/dist" --input "$work/input" \
+  --main-jar stagewise.jar --main-class com.stagewise.app.Main \
+  --icon "$here/stagewise.png" \
+  --jlink-options "--strip-debug --no-man-pages --no-header-files --generate-cds-archive" \
+  --java-options "$options"
+
+image="$target/dist/$name"
+appdir="$image/lib/app"
+cfg="$appdir/$name.cfg"
+
+# The JavaFX jars sit on the module path; take them off the class path jpackage wrote.
+sed -i '/^app.classpath=\$APPDIR\/javafx\//d' "$cfg"
+
+train() {
+  # Starts the image's own java exactly as its launcher would, with the demo data on a fresh
+  # folder, until the unit screen shows; then ends it so that the JVM writes the archive.
+  local cp opts main log data pid
+  cp="$(sed -n 's/^app.classpath=//p' "$cfg" | sed "s|\\\$APPDIR|$appdir|g" | paste -sd:)"
+  mapfile -t opts < <(sed -n 's/^java-options=//p' "$cfg" | sed "s|\\\$APPDIR|$appdir|g")
+  main="$(sed -n 's/^app.mainclass=//p' "$cfg")"
+  log="$work/train.log"
+  data="$work/train-data"
+  mkdir -p "$data"
+  XDG_DATA_HOME="$data" "$image/lib/runtime/bin/java" "${opts[@]}" \
+    -XX:ArchiveClassesAtExit="$work/stagewise.jsa" -Dstagewise.timing=true \
+    -cp "$cp" "$main" --demo >"$log" 2>&1 &
+  pid=$!
+  for _ in $(seq 1 600); do
+    grep -q "unit screen shown" "$log" && break
+    kill -0 "$pid" 2>/dev/null || break
+    sleep 0.1
+  done
+  sleep 1
+  kill -TERM "$pid" 2>/dev/null || true
+  wait "$pid" 2>/dev/null || true
+}
+
+if [ -n "${DISPLAY:-}" ]; then
+  train
+elif command -v xvfb-run >/dev/null; then
+  export -f train
+  export cfg appdir image work
+  xvfb-run -a -s "-screen 0 1280x800x24" bash -c train
+fi
+if [ -s "$work/stagewise.jsa" ]; then
+  cp "$work/stagewise.jsa" "$appdir/stagewise.jsa"
+  # -Xshare:auto: should the archive not fit (another runtime, a changed jar), the app starts
+  # without it instead of failing.
+  sed -i "s|^\[JavaOptions\]|[JavaOptions]\njava-options=-XX:SharedArchiveFile=\$APPDIR/stagewise.jsa\njava-options=-Xshare:auto|" "$cfg"
+  echo "Class-data sharing archive: $appdir/stagewise.jsa"
+else
+  echo "No display and no Xvfb: the image is built without a class-data sharing archive." >&2
+fi
+chmod +x "$appdir/desktop/install-desktop-entry.sh"
+echo "App image: $image  (start it with $image/bin/$name; menu entry: $appdir/desktop/install-desktop-entry.sh)"
