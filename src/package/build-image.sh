@@ -60,36 +60,10 @@ cfg="$appdir/$name.cfg"
 # The JavaFX jars sit on the module path; take them off the class path jpackage wrote.
 sed -i '/^app.classpath=\$APPDIR\/javafx\//d' "$cfg"
 
-train() {
-  # Starts the image's own java exactly as its launcher would, with the demo data on a fresh
-  # folder, until the unit screen shows; then ends it so that the JVM writes the archive.
-  local cp opts main log data pid
-  cp="$(sed -n 's/^app.classpath=//p' "$cfg" | sed "s|\\\$APPDIR|$appdir|g" | paste -sd:)"
-  mapfile -t opts < <(sed -n 's/^java-options=//p' "$cfg" | sed "s|\\\$APPDIR|$appdir|g")
-  main="$(sed -n 's/^app.mainclass=//p' "$cfg")"
-  log="$work/train.log"
-  data="$work/train-data"
-  mkdir -p "$data"
-  XDG_DATA_HOME="$data" "$image/lib/runtime/bin/java" "${opts[@]}" \
-    -XX:ArchiveClassesAtExit="$work/stagewise.jsa" -Dstagewise.timing=true \
-    -cp "$cp" "$main" --demo >"$log" 2>&1 &
-  pid=$!
-  for _ in $(seq 1 600); do
-    grep -q "unit screen shown" "$log" && break
-    kill -0 "$pid" 2>/dev/null || break
-    sleep 0.1
-  done
-  sleep 1
-  kill -TERM "$pid" 2>/dev/null || true
-  wait "$pid" 2>/dev/null || true
-}
-
 if [ -n "${DISPLAY:-}" ]; then
-  train
+  bash "$here/train-cds.sh" "$image" "$work"
 elif command -v xvfb-run >/dev/null; then
-  export -f train
-  export cfg appdir image work
-  xvfb-run -a -s "-screen 0 1280x800x24" bash -c train
+  xvfb-run -a -s "-screen 0 1280x800x24" bash "$here/train-cds.sh" "$image" "$work"
 fi
 if [ -s "$work/stagewise.jsa" ]; then
   cp "$work/stagewise.jsa" "$appdir/stagewise.jsa"
