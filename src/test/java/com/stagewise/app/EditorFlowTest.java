@@ -133,7 +133,7 @@ class EditorFlowTest {
     tap("#editor-part-net-1-N1");
     tap("#editor-part-net-2-N2");
     assertThat(text("#editor-problem-count")).startsWith("No problems");
-    shoot("10-stage-editor");
+    shoot("11-stage-editor");
     tap("#editor-save");
     assertThat(fx(() -> shown("#screen-stage-editor"))).isFalse();
 
