@@ -30,6 +30,7 @@ public final class Bench {
   private final Tasks tasks;
   private final Problems problems;
   private final Caution caution;
+  private final java.util.Set<String> cautionedCases = new java.util.HashSet<>();
   private final BoardFlags boardFlags;
   private final CaseResume resume;
 
@@ -84,6 +85,15 @@ public final class Bench {
 
   public Problems problems() {
     return problems;
+  }
+
+  /**
+   * Returns whether the mains caution has been shown for this case since the app started, and marks
+   * it shown. The caution comes once per case and session: opening the case brings it, going back
+   * to the case later the same day does not; the next start of the app brings it again.
+   */
+  public boolean firstCautionFor(String caseId) {
+    return cautionedCases.add(caseId);
   }
 
   public Caution caution() {

@@ -323,7 +323,7 @@ public final class StartViewModel {
               symptom.set("");
               bench.showUnit(history.unit(), history.boardModel());
               bench.startCase(opened);
-              afterCaution(() -> bench.go(Step.STAGE));
+              afterCaution(opened.id(), () -> bench.go(Step.STAGE));
             },
             e -> bench.problems().failed("Could not open the case", e, Words.CHECK_DATABASE));
   }
@@ -365,6 +365,7 @@ public final class StartViewModel {
               }
               Step target = step;
               afterCaution(
+                  caseId,
                   () -> {
                     if (!bench.go(target)) {
                       bench.go(Step.STAGE);
@@ -374,8 +375,8 @@ public final class StartViewModel {
             e -> bench.problems().failed("Could not resume the case", e, Words.CHECK_DATABASE));
   }
 
-  private void afterCaution(Runnable then) {
-    if (bench.mainsPoweredProperty().get()) {
+  private void afterCaution(String caseId, Runnable then) {
+    if (bench.mainsPoweredProperty().get() && bench.firstCautionFor(caseId)) {
       bench.caution().show(SafetyCaution.Reason.MAINS, then);
     } else {
       then.run();

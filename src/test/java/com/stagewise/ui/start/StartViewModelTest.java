@@ -170,4 +170,26 @@ class StartViewModelTest {
     assertThat(t.bench.stageProperty().get().title()).isEqualTo("Inverting amplifier, test");
     assertThat(t.bench.readings()).extracting(r -> r.at()).containsExactly("U1.8");
   }
+
+  @Test
+  void resumeCase_mainsPoweredBoard_cautionsOncePerCaseNotOnEveryResume() {
+    t.mains.put(amp.id(), true);
+    model.serialProperty().set("TA-1001");
+    model.search();
+    model.symptomProperty().set("Hum");
+    model.openCase();
+    String caseId = t.bench.openCaseProperty().get().id();
+    assertThat(t.cautions).containsExactly(SafetyCaution.Reason.MAINS);
+
+    model.search();
+    model.resumeCase(caseId);
+    model.resumeCase(caseId);
+
+    assertThat(t.cautions).containsExactly(SafetyCaution.Reason.MAINS);
+    assertThat(t.bench.stepProperty().get()).isEqualTo(Step.STAGE);
+    // Another case of the same mains-powered unit brings it again.
+    model.symptomProperty().set("Crackles");
+    model.openCase();
+    assertThat(t.cautions).containsExactly(SafetyCaution.Reason.MAINS, SafetyCaution.Reason.MAINS);
+  }
 }
