@@ -48,6 +48,12 @@ final class CompiledStage implements Analysis {
    */
   private static final int MAX_ENUMERATED_SECTIONS = 9;
 
+  /** Chord steps allowed after a change of a stage with junctions before a full solve instead. */
+  private static final int CHORD_STEPS = 40;
+
+  /** Relative size of a chord step at which it has settled (volts per volt, plus 1 V). */
+  private static final double CHORD_SETTLED = 1e-13;
+
   private final Network network;
   private final Layout layout;
   private final Map<String, Integer> partIndex;
@@ -492,6 +498,9 @@ final class CompiledStage implements Analysis {
         for (int i = 0; i < x.length; i++) {
           moved[i] = x[i] + dx[i];
         }
+        if (network.nonlinear && !chord(moved)) {
+          return Optional.empty();
+        }
         for (int k = 0; k < states.length; k++) {
           if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
             return Optional.empty();
@@ -503,6 +512,34 @@ final class CompiledStage implements Analysis {
       } finally {
         apply(undo);
       }
+    }
+
+    /**
+     * With junctions one step is not enough: a junction's current is exponential in its voltage, so
+     * a change that moves a conducting junction (a rail under a clamp diode, a zener's own voltage)
+     * by more than a few N·Vt makes the first step stop near N·Vt, far short (a zener drifted 0.15
+     * V moved its node 0.047 V). The step is repeated with the same factors (the chord method)
+     * until it settles; the factors stay close to the Jacobian wherever the current stays close,
+     * which is what a small change of a conducting junction does. Returns false when it does not
+     * settle within {@link #CHORD_STEPS} steps (a junction turning on or off): the caller then
+     * solves in full.
+     */
+    private boolean chord(double[] moved) {
+      for (int step = 0; step < CHORD_STEPS; step++) {
+        double[] dx = system.factors().solve(network.residual(states, collapsed, moved));
+        double largest = 0;
+        for (int i = 0; i < moved.length; i++) {
+          moved[i] += dx[i];
+          largest = Math.max(largest, Math.abs(dx[i]) / (1 + Math.abs(moved[i])));
+        }
+        if (!(largest < Double.POSITIVE_INFINITY)) {
+          return false;
+        }
+        if (largest < CHORD_SETTLED) {
+          return true;
+        }
+      }
+      return false;
     }
 
     @Override

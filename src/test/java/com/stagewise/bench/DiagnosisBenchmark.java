@@ -33,11 +33,13 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Speed of the diagnosis on the largest template, the three-section instrumentation amplifier with
- * every net and used pin read, beside ngspice computing the same fault dictionary in one batch.
+ * every net and used pin read, beside ngspice computing the same fault dictionary in one batch; and
+ * on the largest stages with newer parts: the back-to-back diode limiter (two junctions, Newton's
+ * method in every solve) and the offset-null stage (a trimmer; the most faults of the new stages).
  *
  * <p>Run with {@code src/scripts/bench-diagnosis.sh}; see DEVELOPERS.md for the figures. The
- * readings are the solver's nominal values with the output section stuck high, so that the ranking
- * has real work to do.
+ * readings are the solver's nominal values with the third (or only) section stuck high, so that the
+ * ranking has real work to do.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SampleTime)
@@ -48,7 +50,14 @@ import org.openjdk.jmh.annotations.Warmup;
 @Threads(1)
 public class DiagnosisBenchmark {
   /** A template's name, or a test sheet's name under src/test/resources/stages. */
-  @Param({"instrumentation", "chain-12", "chain-7-bistable", "chain-9-bistable"})
+  @Param({
+    "instrumentation",
+    "chain-12",
+    "chain-7-bistable",
+    "chain-9-bistable",
+    "diode-limiter",
+    "offset-null"
+  })
   public String stageName;
 
   private Stage stage;
@@ -68,7 +77,8 @@ public class DiagnosisBenchmark {
             StageSolver.solve(
                 stage,
                 com.stagewise.solver.Conditions.NOMINAL.withForced(
-                    stage.amplifiers().get(2).ref(), com.stagewise.solver.SectionState.HIGH));
+                    stage.amplifiers().get(Math.min(2, stage.amplifiers().size() - 1)).ref(),
+                    com.stagewise.solver.SectionState.HIGH));
     OperatingPoint point = solved.primary();
     List<Reading> readings = new ArrayList<>();
     point.nets().forEach((net, volts) -> readings.add(Reading.dc(net, volts)));

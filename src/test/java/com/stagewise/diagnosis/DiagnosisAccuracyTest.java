@@ -24,6 +24,7 @@ import org.junit.jupiter.api.Test;
  */
 class DiagnosisAccuracyTest {
   private static final Map<String, Score> SCORES = new TreeMap<>();
+  private static final Map<String, Score> FAMILY_SCORES = new TreeMap<>();
   private static List<TruthCases.StageCases> truth;
 
   @BeforeAll
@@ -50,36 +51,57 @@ class DiagnosisAccuracyTest {
   private static Score score(
       String name, BiFunction<TruthCases.Case, TruthCases.StageCases, ReadingSet> readings) {
     Score score = new Score();
+    Map<String, Score> families = new TreeMap<>();
     for (TruthCases.StageCases stage : truth) {
       Diagnoser diagnoser = Diagnoser.of(stage.stage());
+      Score family = families.computeIfAbsent(family(stage.stage()), f -> new Score());
       for (TruthCases.Case c : stage.cases()) {
         Diagnosis d = diagnoser.diagnose(readings.apply(c, stage), 20);
-        Suspect first = d.suspects().get(0);
-        boolean hit = first.fault().equals(c.fault()) || first.group().contains(c.fault());
-        boolean three = d.suspects().stream().limit(3).anyMatch(s -> s.fault().equals(c.fault()));
-        // Tied: the readings cannot tell the truth apart from one of the first three suspects.
-        boolean tied = d.suspects().stream().limit(3).anyMatch(s -> s.group().contains(c.fault()));
-        score.cases++;
-        score.firstOrGroup += hit ? 1 : 0;
-        score.topThree += three ? 1 : 0;
-        score.topThreeOrTied += three || tied ? 1 : 0;
-        score.groupSizes += first.group().size();
-        if (c.fault().equals("healthy")) {
-          score.healthy++;
-          score.healthyCalled += d.verdict() == Verdict.HEALTHY ? 1 : 0;
-        }
-        String kind =
-            c.fault().contains(":")
-                ? c.fault().substring(c.fault().lastIndexOf(':') + 1)
-                : c.fault();
-        int[] k = score.byKind.computeIfAbsent(kind, x -> new int[3]);
-        k[0]++;
-        k[1] += hit ? 1 : 0;
-        k[2] += three ? 1 : 0;
+        count(score, c, d);
+        count(family, c, d);
       }
     }
     SCORES.put(name, score);
+    families.forEach((f, s) -> FAMILY_SCORES.put(name + ", " + f, s));
     return score;
+  }
+
+  /**
+   * The stage family a stage belongs to: op-amp stages of resistors and capacitors, stages with
+   * diodes, zeners or LEDs, and stages with trimmers (a stage with both counts as a junction
+   * stage).
+   */
+  static String family(com.stagewise.circuit.Stage stage) {
+    if (stage.parts().stream().anyMatch(p -> p.kind().isJunction())) {
+      return "stages with diodes, zeners or LEDs";
+    }
+    if (stage.parts().stream().anyMatch(p -> p.kind().isTrimmer())) {
+      return "stages with trimmers";
+    }
+    return "resistors and capacitors only";
+  }
+
+  private static void count(Score score, TruthCases.Case c, Diagnosis d) {
+    Suspect first = d.suspects().get(0);
+    boolean hit = first.fault().equals(c.fault()) || first.group().contains(c.fault());
+    boolean three = d.suspects().stream().limit(3).anyMatch(s -> s.fault().equals(c.fault()));
+    // Tied: the readings cannot tell the truth apart from one of the first three suspects.
+    boolean tied = d.suspects().stream().limit(3).anyMatch(s -> s.group().contains(c.fault()));
+    score.cases++;
+    score.firstOrGroup += hit ? 1 : 0;
+    score.topThree += three ? 1 : 0;
+    score.topThreeOrTied += three || tied ? 1 : 0;
+    score.groupSizes += first.group().size();
+    if (c.fault().equals("healthy")) {
+      score.healthy++;
+      score.healthyCalled += d.verdict() == Verdict.HEALTHY ? 1 : 0;
+    }
+    String kind =
+        c.fault().contains(":") ? c.fault().substring(c.fault().lastIndexOf(':') + 1) : c.fault();
+    int[] k = score.byKind.computeIfAbsent(kind, x -> new int[3]);
+    k[0]++;
+    k[1] += hit ? 1 : 0;
+    k[2] += three ? 1 : 0;
   }
 
   @Test
@@ -195,7 +217,9 @@ class DiagnosisAccuracyTest {
         new StringBuilder(
             "| readings | cases | first or in group | first three | first three or tied | healthy called healthy | mean group size |\n|---|---|---|---|---|---|---|\n");
     List<String> kinds = new ArrayList<>();
-    SCORES.forEach(
+    Map<String, Score> rows = new java.util.LinkedHashMap<>(SCORES);
+    rows.putAll(FAMILY_SCORES);
+    rows.forEach(
         (name, s) -> {
           text.append(
               String.format(
