@@ -1,16 +1,11 @@
 package com.stagewise.reference;
 
-import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.PackageType;
-import com.stagewise.circuit.Part;
-import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.TestInput;
+import com.stagewise.circuit.TestStage;
 import com.stagewise.circuit.template.Templates;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 
 /**
@@ -19,68 +14,15 @@ import java.util.Map;
  * package, a rail-to-rail part). Test data only, nothing here is demo data.
  */
 final class HandStages {
-  private final List<Rail> rails = new ArrayList<>();
-  private final List<TestInput> inputs = new ArrayList<>();
-  private final List<Part> parts = new ArrayList<>();
-  private final List<Amplifier> amps = new ArrayList<>();
-  private final String title;
-
-  private HandStages(String title) {
-    this.title = title;
-  }
-
-  static HandStages split(String title, double volts) {
-    HandStages s = new HandStages(title);
-    s.rails.add(new Rail("VCC", volts, 0.05));
-    s.rails.add(new Rail("VEE", -volts, 0.05));
-    return s;
-  }
-
-  HandStages rail(String net, double volts) {
-    rails.add(new Rail(net, volts, 0.05));
-    return this;
-  }
-
-  HandStages input(String net, double dc, double ac, double hz) {
-    inputs.add(new TestInput(net, dc, ac, hz));
-    return this;
-  }
-
-  HandStages r(String ref, double ohms, String a, String b) {
-    parts.add(Part.resistor(ref, ohms, 0.01, a, b));
-    return this;
-  }
-
-  HandStages c(String ref, double farads, String a, String b) {
-    parts.add(Part.capacitor(ref, farads, 0.1, a, b));
-    return this;
-  }
-
-  HandStages amp(
-      String ref,
-      String pkg,
-      PackageType type,
-      String section,
-      DeviceClass cls,
-      String inPlus,
-      String inMinus,
-      String out,
-      String vPlus,
-      String vMinus) {
-    amps.add(new Amplifier(ref, pkg, type, section, cls, inPlus, inMinus, out, vPlus, vMinus));
-    return this;
-  }
-
-  Stage build() {
-    return new Stage(title, "", "GND", rails, inputs, parts, amps);
-  }
+  private HandStages() {}
 
   /** Returns the hand-built stages by id, in a fixed order. */
   static Map<String, Stage> all() {
     Map<String, Stage> stages = new LinkedHashMap<>();
     stages.put(
         "hand-inverting-dual",
-        split("Inverting, gain -4.7, dual package", 15)
+        TestStage.splitSupply(15)
+            .title("Inverting, gain -4.7, dual package")
             .input("IN", 1.0, 0.1, 1000)
             .r("R1", 10e3, "IN", "SUM")
             .r("R2", 47e3, "SUM", "OUT")
@@ -99,7 +41,8 @@ final class HandStages {
             .build());
     stages.put(
         "hand-two-stage-quad",
-        split("Two sections of a quad: non-inverting gain 3 then inverting -2", 12)
+        TestStage.splitSupply(12)
+            .title("Two sections of a quad: non-inverting gain 3 then inverting -2")
             .input("IN", 0.8, 0.05, 500)
             .r("R1", 10e3, "FB1", "GND")
             .r("R2", 20e3, "FB1", "MID")
@@ -130,7 +73,8 @@ final class HandStages {
             .build());
     stages.put(
         "hand-filtered-supply",
-        new HandStages("Non-inverting on a single supply fed through 100 R")
+        TestStage.empty()
+            .title("Non-inverting on a single supply fed through 100 R")
             .rail("VCC", 12)
             .input("IN", 1.5, 0.2, 2000)
             .r("R9", 100, "VCC", "V+")

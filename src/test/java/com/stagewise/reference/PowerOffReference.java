@@ -25,7 +25,10 @@ final class PowerOffReference {
   /** The folder of the stored files, from the project root. */
   static final Path FOLDER = Path.of("src", "test", "resources", "reference", "ohms");
 
-  /** Agreement required with ngspice, relative: 0.1 % (the figure). */
+  /**
+   * Agreement required with ngspice, relative: 0.1 % (our figure: well inside a handheld's ±0.8 %
+   * ohms accuracy, so a disagreement could never hide a fault).
+   */
   static final double RELATIVE = 1e-3;
 
   private PowerOffReference() {}

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestStage;
 import org.junit.jupiter.api.Test;
 
 class ExpectedVoltsTest {
@@ -17,7 +18,7 @@ class ExpectedVoltsTest {
     // R1 at +1 % (-4.7/1.01 = -4.6535 V), one part at a time, each widened by the 5 mV offset
     // margin (DESIGN.md, classic-bipolar offset ±5 mV).
     Stage stage =
-        TestStages.splitSupply(15)
+        TestStage.splitSupply(15)
             .input("IN", 1)
             .r("R1", 10e3, "IN", "SUM")
             .r("R2", 47e3, "SUM", "OUT")
@@ -37,7 +38,7 @@ class ExpectedVoltsTest {
   @Test
   void everyNominal_liesWithinItsRange() {
     Stage stage =
-        TestStages.splitSupply(12)
+        TestStage.splitSupply(12)
             .input("IN", 0.5)
             .r("R1", 4.7e3, "IN", "SUM")
             .r("R2", 22e3, "SUM", "OUT")
@@ -59,7 +60,7 @@ class ExpectedVoltsTest {
     // A follower's input coupled through a capacitor with no bias resistor: nothing but the
     // capacitor and an op-amp input touch X, so it has no DC path (capacitors are open at DC).
     Stage stage =
-        TestStages.splitSupply(15)
+        TestStage.splitSupply(15)
             .input("IN", 1)
             .c("C1", 1e-7, "IN", "X")
             .amp("U1A", "X", "OUT", "OUT")

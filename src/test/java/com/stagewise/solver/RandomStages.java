@@ -2,6 +2,7 @@ package com.stagewise.solver;
 
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestStage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -18,7 +19,7 @@ final class RandomStages {
    * to 9 resistors; some have positive feedback, some saturate, some float.
    */
   static Stage next(Random random) {
-    TestStages s = TestStages.splitSupply(12);
+    TestStage s = TestStage.splitSupply(12);
     int inputs = 1 + random.nextInt(2);
     List<String> nets = new ArrayList<>(List.of("GND"));
     for (int i = 1; i <= inputs; i++) {

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestStage;
 import com.stagewise.interchange.StageSheet;
 import java.nio.file.Path;
 import java.util.List;
@@ -73,7 +74,7 @@ class SaturationSearchTest {
 
   @Test
   void moreBistableSectionsThanTheLimit_keepTheStateFromAllLinear_andSaySo() {
-    TestStages chain = TestStages.splitSupply(15).input("IN", 0.5);
+    TestStage chain = TestStage.splitSupply(15).input("IN", 0.5);
     String previous = "IN";
     for (int i = 1; i <= CompiledStage.MAX_BISTABLE_SECTIONS + 1; i++) {
       // A non-inverting Schmitt trigger: in+ between the previous output (10k) and its own (100k).

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
+import com.stagewise.circuit.TestStage;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
@@ -111,7 +112,7 @@ class SolverPropertyTest {
   void superposition_ofTheSolverItself_overInputs() {
     // The same property through the public solve: scaling one input's level and solving again.
     Stage base =
-        TestStages.splitSupply(15)
+        TestStage.splitSupply(15)
             .input("IN1", 0.4)
             .input("IN2", -0.3)
             .r("R1", 10e3, "IN1", "SUM")

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestStage;
 import java.util.Map;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
@@ -46,7 +47,7 @@ class StageSolverTest {
     @Test
     void inverting_gainIsMinusR2OverR1() {
       // Closed-form ideal op-amp result: Vout = -R2/R1 · Vin; with A = 2e5 the error is < 0.003 %.
-      OperatingPoint p = solveOne(TestStages.inverting(10e3, 47e3, 1.0));
+      OperatingPoint p = solveOne(TestStage.inverting(10e3, 47e3, 1.0));
       assertVoltsNear(-4.7, p.at("OUT"), 1e-3);
       assertVoltsNear(0, p.at("SUM"), 1e-4);
       assertThat(p.states()).containsEntry("U1A", SectionState.LINEAR);
@@ -58,7 +59,7 @@ class StageSolverTest {
     void inverting_finiteGain_matchesSedraSmithWorkedNumbers(double gain, double expected) {
       // Sedra & Smith, Microelectronic Circuits, ch. 2: R1 = 1k, R2 = 100k,
       // G = -(R2/R1) / (1 + (1 + R2/R1)/A): -90.83 at A = 1e3, -99.00 at 1e4, -99.90 at 1e5.
-      Stage stage = TestStages.inverting(1e3, 100e3, 0.01);
+      Stage stage = TestStage.inverting(1e3, 100e3, 0.01);
       OperatingPoint p = solveOne(stage, idealish(stage, gain));
       // The book's figures are rounded to two decimals; our 50 Ω output resistance adds < 0.01.
       assertVoltsNear(expected, p.at("OUT") / 0.01, 0.01);
@@ -68,7 +69,7 @@ class StageSolverTest {
     void nonInverting_gainIsOnePlusR2OverR1() {
       // Closed-form ideal op-amp result: Vout = (1 + R2/R1) · Vin.
       Stage stage =
-          TestStages.splitSupply(15)
+          TestStage.splitSupply(15)
               .input("IN", 0.5)
               .r("R1", 10e3, "FB", "GND")
               .r("R2", 22e3, "FB", "OUT")
@@ -81,7 +82,7 @@ class StageSolverTest {
     void follower_outputEqualsInput() {
       // Closed-form ideal op-amp result: a follower has gain 1.
       Stage stage =
-          TestStages.splitSupply(12)
+          TestStage.splitSupply(12)
               .input("IN", 2.5)
               .r("RL", 10e3, "OUT", "GND")
               .amp("U1A", "IN", "OUT", "OUT")
@@ -93,7 +94,7 @@ class StageSolverTest {
     void summing_outputIsWeightedSum() {
       // Closed-form ideal op-amp result: Vout = -RF·(V1/R1 + V2/R2 + V3/R3).
       Stage stage =
-          TestStages.splitSupply(15)
+          TestStage.splitSupply(15)
               .input("IN1", 0.3)
               .input("IN2", -0.2)
               .input("IN3", 1.0)
@@ -111,7 +112,7 @@ class StageSolverTest {
     void difference_outputIsScaledDifference() {
       // Closed-form ideal op-amp result: with R1 = R3 and R2 = R4, Vout = (R2/R1)·(V2 − V1).
       Stage stage =
-          TestStages.splitSupply(15)
+          TestStage.splitSupply(15)
               .input("V1", 1.2)
               .input("V2", 1.5)
               .r("R1", 10e3, "V1", "INM")
@@ -130,7 +131,7 @@ class StageSolverTest {
       double rf = 24.9e3;
       double rg = 5e3;
       Stage stage =
-          TestStages.splitSupply(15)
+          TestStage.splitSupply(15)
               .input("V1", 0.100)
               .input("V2", 0.120)
               .amp("U1A", "V1", "G1", "O1")
@@ -154,7 +155,7 @@ class StageSolverTest {
     @Test
     void inverting_largeInput_clampsAtRailLessHeadroom() {
       // Classic-bipolar headroom 1.5 V (DESIGN.md): -10 × 2 V would be -20 V; it stops at -13.5 V.
-      OperatingPoint p = solveOne(TestStages.inverting(10e3, 100e3, 2.0));
+      OperatingPoint p = solveOne(TestStage.inverting(10e3, 100e3, 2.0));
       assertThat(p.states()).containsEntry("U1A", SectionState.LOW);
       // The 50 Ω output resistance feeds R2 + R1 back to IN: (2 + 13.5) V · 50 / 110.05k = 7 mV.
       assertVoltsNear(-13.5 + 15.5 * 50 / 110.05e3, p.at("OUT"), 1e-6);
@@ -165,7 +166,7 @@ class StageSolverTest {
     @Test
     void missingRail_clipsOutputNearZero() {
       // A rail that is missing is a supply net at 0 V; the same model clips the output (DESIGN.md).
-      Stage stage = TestStages.inverting(10e3, 47e3, -1.0);
+      Stage stage = TestStage.inverting(10e3, 47e3, -1.0);
       OperatingPoint p = solveOne(stage, Conditions.NOMINAL.withDriven("VCC", 0.0));
       assertThat(p.states()).containsEntry("U1A", SectionState.HIGH);
       assertVoltsNear(-1.5, p.at("OUT"), 1e-3);
@@ -174,7 +175,7 @@ class StageSolverTest {
     @Test
     void groundSensing_singleSupplyWithMissingRail_outputSitsAtGround() {
       Stage stage =
-          TestStages.splitSupply(15)
+          TestStage.splitSupply(15)
               .rail("V5", 5)
               .input("IN", 1.0)
               .r("R1", 10e3, "FB", "GND")
@@ -189,7 +190,7 @@ class StageSolverTest {
     void schmittTrigger_reportsBothStableStates() {
       // An inverting Schmitt trigger at 0 V input has two stable states (common practice).
       Stage stage =
-          TestStages.splitSupply(12)
+          TestStage.splitSupply(12)
               .input("IN", 0.0)
               .r("R1", 10e3, "REF", "GND")
               .r("R2", 100e3, "REF", "OUT")
@@ -210,7 +211,7 @@ class StageSolverTest {
     @Test
     void schmittTrigger_inputBeyondThreshold_hasOneState() {
       Stage stage =
-          TestStages.splitSupply(12)
+          TestStage.splitSupply(12)
               .input("IN", 2.0)
               .r("R1", 10e3, "REF", "GND")
               .r("R2", 100e3, "REF", "OUT")
@@ -222,7 +223,7 @@ class StageSolverTest {
 
     @Test
     void forcedStates_areHonoured() {
-      Stage stage = TestStages.inverting(10e3, 47e3, 1.0);
+      Stage stage = TestStage.inverting(10e3, 47e3, 1.0);
       // 13.5 V behind 50 Ω, loaded by R2 + R1 = 57k back to IN at 1 V.
       assertVoltsNear(
           13.5 - 12.5 * 50 / 57.05e3,
@@ -241,7 +242,7 @@ class StageSolverTest {
     @Test
     void floatingNet_isNamed() {
       Stage stage =
-          TestStages.splitSupply(15)
+          TestStage.splitSupply(15)
               .input("IN", 1.0)
               .c("C1", 100e-9, "IN", "X")
               .r("R2", 10e3, "FB", "OUT")
@@ -256,7 +257,7 @@ class StageSolverTest {
     void deadOutput_withNothingElseOnItsNet_isNamedFloating() {
       // A follower whose section no longer drives: OUT touches only the dead output and in-.
       Stage stage =
-          TestStages.splitSupply(15).input("IN", 1.0).amp("U1A", "IN", "OUT", "OUT").build();
+          TestStage.splitSupply(15).input("IN", 1.0).amp("U1A", "IN", "OUT", "OUT").build();
       SolveResult result =
           StageSolver.solve(stage, Conditions.NOMINAL.withForced("U1A", SectionState.DEAD));
       assertThat(result).isEqualTo(new SolveResult.Floating(java.util.List.of("OUT")));
@@ -264,7 +265,7 @@ class StageSolverTest {
 
     @Test
     void pins_followTheirNets() {
-      OperatingPoint p = solveOne(TestStages.inverting(10e3, 47e3, 1.0));
+      OperatingPoint p = solveOne(TestStage.inverting(10e3, 47e3, 1.0));
       Map<String, Double> pins = p.pins();
       // quad-14 section A: out 1, in- 2, in+ 3, v+ 4, v- 11 (DESIGN.md pinout).
       assertThat(pins.keySet()).containsExactly("U1.1", "U1.2", "U1.3", "U1.4", "U1.11");
@@ -278,8 +279,8 @@ class StageSolverTest {
     @Test
     void inverting_acGainAndPhase() {
       Stage stage =
-          TestStages.splitSupply(15)
-              .acInput("IN", 0, 0.1, 1000)
+          TestStage.splitSupply(15)
+              .input("IN", 0, 0.1, 1000)
               .r("R1", 10e3, "IN", "SUM")
               .r("R2", 47e3, "SUM", "OUT")
               .amp("U1A", "GND", "SUM", "OUT")
@@ -299,8 +300,8 @@ class StageSolverTest {
       double c = 10e-9;
       double corner = 1 / (2 * Math.PI * rf * c);
       Stage stage =
-          TestStages.splitSupply(15)
-              .acInput("IN", 0.1, 0.1, corner)
+          TestStage.splitSupply(15)
+              .input("IN", 0.1, 0.1, corner)
               .r("R1", r, "IN", "SUM")
               .r("RF", rf, "SUM", "OUT")
               .c("C1", c, "SUM", "OUT")
@@ -327,8 +328,8 @@ class StageSolverTest {
       assertThat(f0).isCloseTo(1073, org.assertj.core.data.Offset.offset(1.0));
       assertThat(q).isCloseTo(0.742, org.assertj.core.data.Offset.offset(0.001));
       Stage stage =
-          TestStages.splitSupply(15)
-              .acInput("IN", 0, 1.0, f0)
+          TestStage.splitSupply(15)
+              .input("IN", 0, 1.0, f0)
               .r("R1", r1, "IN", "A")
               .r("R2", r2, "A", "B")
               .c("C1", c1, "A", "OUT")
@@ -347,8 +348,8 @@ class StageSolverTest {
     void clampedOutput_passesNoAc() {
       // DESIGN.md: a saturated output passes no AC.
       Stage stage =
-          TestStages.splitSupply(15)
-              .acInput("IN", 3.0, 0.1, 1000)
+          TestStage.splitSupply(15)
+              .input("IN", 3.0, 0.1, 1000)
               .r("R1", 10e3, "IN", "SUM")
               .r("R2", 100e3, "SUM", "OUT")
               .amp("U1A", "GND", "SUM", "OUT")

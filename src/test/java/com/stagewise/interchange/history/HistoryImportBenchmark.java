@@ -5,9 +5,11 @@ import com.stagewise.history.ImportReport;
 import com.stagewise.history.demo.SyntheticHistory;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
+import java.util.stream.Stream;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -49,9 +51,27 @@ public class HistoryImportBenchmark {
     target = HistoryStore.open(folder.resolve("import-" + System.nanoTime() + ".db"));
   }
 
+  /** Closes and deletes each imported history (about 40 MB each), so that none piles up. */
   @TearDown(Level.Invocation)
-  public void closeHistory() {
+  public void closeHistory() throws IOException {
     target.close();
+    deleteEverythingIn(folder);
+  }
+
+  /** Deletes the temporary folder, so that a run leaves nothing behind. */
+  @TearDown(Level.Trial)
+  public void removeFolder() throws IOException {
+    deleteEverythingIn(folder);
+    Files.deleteIfExists(folder);
+  }
+
+  private static void deleteEverythingIn(Path folder) throws IOException {
+    // The history file and its journal files (-wal, -shm) beside it.
+    try (Stream<Path> files = Files.list(folder)) {
+      for (Path f : files.toList()) {
+        Files.deleteIfExists(f);
+      }
+    }
   }
 
   @Benchmark

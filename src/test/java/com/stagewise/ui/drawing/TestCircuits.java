@@ -1,12 +1,9 @@
 package com.stagewise.ui.drawing;
 
-import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.PackageType;
-import com.stagewise.circuit.Part;
-import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.TestInput;
+import com.stagewise.circuit.TestStage;
 import com.stagewise.circuit.template.StageTemplate;
 import com.stagewise.circuit.template.Templates;
 import com.stagewise.interchange.StageSheet;
@@ -14,9 +11,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
 
@@ -25,60 +20,7 @@ import java.util.stream.Stream;
  * no template builds (built in code here) for the fallback drawing.
  */
 final class TestCircuits {
-  private final String title;
-  private final List<Rail> rails = new ArrayList<>();
-  private final List<TestInput> inputs = new ArrayList<>();
-  private final List<Part> parts = new ArrayList<>();
-  private final List<Amplifier> amps = new ArrayList<>();
-
-  private TestCircuits(String title, boolean split) {
-    this.title = title;
-    rails.add(new Rail("VCC", split ? 15 : 12, 0.05));
-    if (split) {
-      rails.add(new Rail("VEE", -15, 0.05));
-    }
-  }
-
-  private TestCircuits in(String net, double volts) {
-    inputs.add(TestInput.dc(net, volts));
-    return this;
-  }
-
-  private TestCircuits r(String ref, double ohms, String a, String b) {
-    parts.add(Part.resistor(ref, ohms, 0.01, a, b));
-    return this;
-  }
-
-  private TestCircuits c(String ref, double farads, String a, String b) {
-    parts.add(Part.capacitor(ref, farads, 0.1, a, b));
-    return this;
-  }
-
-  private TestCircuits amp(
-      String section, PackageType type, String inPlus, String inMinus, String out) {
-    String vMinus = rails.size() > 1 ? "VEE" : "GND";
-    amps.add(
-        new Amplifier(
-            "U1" + section,
-            "U1",
-            type,
-            section,
-            DeviceClass.CLASSIC_BIPOLAR,
-            inPlus,
-            inMinus,
-            out,
-            "VCC",
-            vMinus));
-    return this;
-  }
-
-  private TestCircuits u1(String inPlus, String inMinus, String out) {
-    return amp("A", PackageType.DUAL_8, inPlus, inMinus, out);
-  }
-
-  private Stage build() {
-    return new Stage(title, "", "GND", rails, inputs, parts, amps);
-  }
+  private TestCircuits() {}
 
   /** Returns the stages no template builds, to exercise the fallback drawing. */
   static Map<String, Stage> fallbacks() {
@@ -86,8 +28,9 @@ final class TestCircuits {
     // A twin-T notch, whose loop of parts fits no role and must still be drawn.
     all.put(
         "fallback-twin-t",
-        new TestCircuits("Twin-T notch (fallback drawing)", true)
-            .in("IN", 0)
+        TestStage.splitSupply(15)
+            .title("Twin-T notch (fallback drawing)")
+            .input("IN", 0)
             .r("R1", 10e3, "IN", "A")
             .r("R2", 10e3, "A", "POS")
             .c("C3", 20e-9, "A", "GND")
@@ -95,20 +38,51 @@ final class TestCircuits {
             .c("C2", 10e-9, "B", "POS")
             .r("R3", 5e3, "B", "GND")
             .r("R4", 10e3, "POS", "GND")
-            .u1("POS", "OUT", "OUT")
+            .amp(
+                "U1A",
+                "U1",
+                PackageType.DUAL_8,
+                "A",
+                DeviceClass.CLASSIC_BIPOLAR,
+                "POS",
+                "OUT",
+                "OUT",
+                "VCC",
+                "VEE")
             .build());
     // Two cascaded sections with a feedback part from the second output back to the first input.
     all.put(
         "fallback-loop",
-        new TestCircuits("Two sections in a loop (fallback drawing)", true)
-            .in("IN", 0)
+        TestStage.splitSupply(15)
+            .title("Two sections in a loop (fallback drawing)")
+            .input("IN", 0)
             .r("R1", 10e3, "IN", "SUMA")
             .r("R2", 10e3, "SUMA", "OA")
             .r("R3", 10e3, "OA", "SUMB")
             .r("R4", 22e3, "SUMB", "OUT")
             .r("R5", 100e3, "OUT", "SUMA")
-            .amp("A", PackageType.DUAL_8, "GND", "SUMA", "OA")
-            .amp("B", PackageType.DUAL_8, "GND", "SUMB", "OUT")
+            .amp(
+                "U1A",
+                "U1",
+                PackageType.DUAL_8,
+                "A",
+                DeviceClass.CLASSIC_BIPOLAR,
+                "GND",
+                "SUMA",
+                "OA",
+                "VCC",
+                "VEE")
+            .amp(
+                "U1B",
+                "U1",
+                PackageType.DUAL_8,
+                "B",
+                DeviceClass.CLASSIC_BIPOLAR,
+                "GND",
+                "SUMB",
+                "OUT",
+                "VCC",
+                "VEE")
             .build());
     return all;
   }
