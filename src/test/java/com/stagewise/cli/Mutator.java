@@ -122,7 +122,7 @@ final class Mutator {
     try {
       return MAPPER.readTree(text);
     } catch (Exception e) {
-      throw new IllegalStateException("a seed document must be JSON", e);
+      throw new IllegalStateException("a document to mutate must be JSON", e);
     }
   }
 
