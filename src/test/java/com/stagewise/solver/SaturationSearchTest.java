@@ -76,7 +76,7 @@ class SaturationSearchTest {
   void moreBistableSectionsThanTheLimit_keepTheStateFromAllLinear_andSaySo() {
     TestStage chain = TestStage.splitSupply(15).input("IN", 0.5);
     String previous = "IN";
-    for (int i = 1; i <= CompiledStage.MAX_BISTABLE_SECTIONS + 1; i++) {
+    for (int i = 1; i <= SaturationSearch.MAX_BISTABLE_SECTIONS + 1; i++) {
       // A non-inverting Schmitt trigger: in+ between the previous output (10k) and its own (100k).
       chain
           .r("RI" + i, 10e3, previous, "P" + i)
@@ -87,8 +87,8 @@ class SaturationSearchTest {
     SolveResult result = StageSolver.solve(chain.build());
     assertThat(result).isInstanceOf(SolveResult.Solved.class);
     assertThat(((SolveResult.Solved) result).notes())
-        .containsExactly(CompiledStage.TOO_MANY_BISTABLE);
-    assertThat(CompiledStage.TOO_MANY_BISTABLE)
+        .containsExactly(SaturationSearch.TOO_MANY_BISTABLE);
+    assertThat(SaturationSearch.TOO_MANY_BISTABLE)
         .startsWith("this stage has too many bistable sections to search exhaustively");
   }
 }
