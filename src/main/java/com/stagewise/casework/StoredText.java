@@ -1,6 +1,5 @@
 package com.stagewise.casework;
 
-import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
@@ -29,37 +28,35 @@ final class StoredText {
   /**
    * Returns the readings as history records of a case, taken at {@code now} with the set's meter. A
    * reading with its own uncertainty keeps it (and no meter line); an AC reading without one was
-   * taken with a scope (DESIGN.md, Readings).
+   * taken with a scope (DESIGN.md, Readings); an ohms reading keeps its second point and the
+   * meter's ohms accuracy, OL as {@link Double#POSITIVE_INFINITY}.
    */
   static List<StoredReading> readings(
       List<Reading> added, MeterSpec meter, String caseId, Instant now) {
     List<StoredReading> stored = new ArrayList<>();
-    for (int i = 0; i < added.size(); i++) {
-      if (added.get(i).kind() == Reading.Kind.OHMS) {
-        // The history's schema has no place for a second point yet: refuse before anything is
-        // written, rather than keep half a reading.
-        throw new InvalidInputException(
-            "",
-            "readings[" + i + "].ohms",
-            "ohms readings cannot be kept in the history yet (expected volts readings here;"
-                + " diagnose power-off readings with `stagewise diagnose --readings FILE`)");
-      }
-    }
     for (Reading r : added) {
       boolean ac = r.kind() == Reading.Kind.AC;
       Double uncertainty = r.uncertainty().isPresent() ? r.uncertainty().getAsDouble() : null;
-      String meterLine = uncertainty != null ? "" : ac ? scopeLine() : meterLine(meter);
+      String meterLine =
+          uncertainty != null
+              ? ""
+              : switch (r.kind()) {
+                case AC -> scopeLine();
+                case DC -> meterLine(meter);
+                case OHMS -> ohmsLine(meter);
+              };
       stored.add(
           new StoredReading(
               HistoryStore.newId(),
               caseId,
               r.at(),
-              ac ? ReadingKind.AC : ReadingKind.DC,
+              kind(r.kind()),
               r.value(),
               ac ? r.hz() : null,
               uncertainty,
               meterLine,
-              now));
+              now,
+              r.to()));
     }
     return stored;
   }
@@ -110,6 +107,28 @@ final class StoredText {
         + number(meter.percent())
         + " % + "
         + meter.counts()
+        + " counts)";
+  }
+
+  /** Returns the kind a reading is stored as. */
+  static ReadingKind kind(Reading.Kind kind) {
+    return switch (kind) {
+      case DC -> ReadingKind.DC;
+      case AC -> ReadingKind.AC;
+      case OHMS -> ReadingKind.OHMS;
+    };
+  }
+
+  /**
+   * Returns the meter's resistance function as one line: {@code 6000-count meter, ohms ±(0.8 % + 3
+   * counts)}.
+   */
+  static String ohmsLine(MeterSpec meter) {
+    return meter.displayCounts()
+        + "-count meter, ohms ±("
+        + number(meter.ohms().percent())
+        + " % + "
+        + meter.ohms().counts()
         + " counts)";
   }
 

@@ -1,6 +1,7 @@
 package com.stagewise.history;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
@@ -112,7 +113,32 @@ public final class Checks {
   /** Checks a reading before it is stored; {@code field} names it in messages. */
   public static void reading(String source, String field, StoredReading r) {
     shortText(source, field + ".at", r.at(), true);
-    finite(source, field + ".value", r.value());
+    if (r.kind() == ReadingKind.OHMS) {
+      // A power-off reading: two points, 0 ohms or more, or the meter's over-range (OL).
+      shortText(source, field + ".to", r.to(), true);
+      if (!r.isOverRange()) {
+        finite(source, field + ".value", r.value());
+        if (r.value() < 0) {
+          throw new InvalidInputException(
+              source, field + ".value", "expected 0 ohms or more, or OL, got " + r.value());
+        }
+      }
+      if (r.hz() != null) {
+        throw new InvalidInputException(
+            source, field + ".hz", "an ohms reading has no frequency (expected none)");
+      }
+    } else {
+      if (!r.to().isEmpty()) {
+        throw new InvalidInputException(
+            source,
+            field + ".to",
+            "a "
+                + r.kind().word()
+                + " reading has no second point (expected \"to\" only with"
+                + " ohms)");
+      }
+      finite(source, field + ".value", r.value());
+    }
     if (r.hz() != null) {
       finite(source, field + ".hz", r.hz());
     }

@@ -149,12 +149,13 @@ final class ReportLayout {
           new ArrayList<>(
               List.of(
                   Integer.toString(i + 1),
-                  Wording.point(r.at()),
-                  r.hz() == null ? "DC" : "AC at " + Engineering.of(r.hz(), "Hz", 4),
-                  Engineering.reading(r.value(), MeterSpec.DEFAULT)
-                      + (r.uncertainty() == null
-                          ? ""
-                          : " " + Engineering.PLUS_MINUS + Engineering.volts(r.uncertainty())),
+                  r.to().isEmpty()
+                      ? Wording.point(r.at())
+                      : Wording.point(r.at()) + " to " + Wording.point(r.to()),
+                  r.to().isEmpty()
+                      ? r.hz() == null ? "DC" : "AC at " + Engineering.of(r.hz(), "Hz", 4)
+                      : "ohms, power off",
+                  value(r),
                   when(r.takenAt())));
       if (!oneMeter) {
         row.add(r.meterText());
@@ -162,6 +163,17 @@ final class ReportLayout {
       rows.add(row);
     }
     flow.table(columns, rows);
+  }
+
+  /** Returns a reading's value as printed: volts with the meter's digits, or ohms (OL). */
+  private static String value(StoredReading r) {
+    if (!r.to().isEmpty()) {
+      return r.isOverRange() ? "OL" : Engineering.of(r.value(), "Ω", 4);
+    }
+    return Engineering.reading(r.value(), MeterSpec.DEFAULT)
+        + (r.uncertainty() == null
+            ? ""
+            : " " + Engineering.PLUS_MINUS + Engineering.volts(r.uncertainty()));
   }
 
   private void suspects() {

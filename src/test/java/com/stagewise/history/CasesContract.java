@@ -23,6 +23,91 @@ import org.junit.jupiter.api.Test;
 public abstract class CasesContract extends StoreContract {
 
   @Test
+  void ohmsReadings_comeBackWithTheirSecondPointAndOverRange() {
+    BoardModel model = store.units().boardModel("SM-8", "Larkspur (invented)");
+    Unit unit = store.units().add("SM8-5", model.id(), "");
+    RepairCase opened = store.cases().open(unit.id(), "no output");
+    StoredReading volts =
+        new StoredReading(
+            HistoryStore.newId(),
+            opened.id(),
+            "U3.1",
+            ReadingKind.DC,
+            -13.46,
+            null,
+            null,
+            "6000-count meter",
+            clock.instant());
+    StoredReading overRange =
+        new StoredReading(
+            HistoryStore.newId(),
+            opened.id(),
+            "SUM",
+            ReadingKind.OHMS,
+            Double.POSITIVE_INFINITY,
+            null,
+            null,
+            "6000-count meter, ohms ±(0.8 % + 3 counts)",
+            clock.instant(),
+            "OUT");
+    StoredReading across =
+        new StoredReading(
+            HistoryStore.newId(),
+            opened.id(),
+            "R14.1",
+            ReadingKind.OHMS,
+            0.4,
+            null,
+            0.1,
+            "",
+            clock.instant(),
+            "R14.2");
+    store
+        .cases()
+        .addReadings(
+            opened.id(),
+            List.of(volts, overRange, across),
+            new SuspectListRecord(
+                HistoryStore.newId(),
+                opened.id(),
+                clock.instant(),
+                "0.1.0",
+                "fault",
+                List.of(new StoredSuspect("R14:short", 0.97, List.of("R14:short"), "", 1)),
+                ""));
+
+    List<StoredReading> back = store.cases().caseFile(opened.id()).orElseThrow().readings();
+    assertThat(back).containsExactly(volts, overRange, across);
+    assertThat(back.get(1).isOverRange()).isTrue();
+    assertThat(back.get(2).to()).isEqualTo("R14.2");
+  }
+
+  @Test
+  void ohmsReadingWithoutASecondPoint_isRefusedAndNothingIsStored() {
+    BoardModel model = store.units().boardModel("SM-8", "Larkspur (invented)");
+    Unit unit = store.units().add("SM8-6", model.id(), "");
+    RepairCase opened = store.cases().open(unit.id(), "no output");
+    StoredReading noSecondPoint =
+        new StoredReading(
+            HistoryStore.newId(),
+            opened.id(),
+            "SUM",
+            ReadingKind.OHMS,
+            47000,
+            null,
+            null,
+            "",
+            clock.instant());
+    SuspectListRecord list =
+        new SuspectListRecord(
+            HistoryStore.newId(), opened.id(), clock.instant(), "0.1.0", "fault", List.of(), "");
+    assertThatThrownBy(() -> store.cases().addReadings(opened.id(), List.of(noSecondPoint), list))
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("to");
+    assertThat(store.cases().caseFile(opened.id()).orElseThrow().readings()).isEmpty();
+  }
+
+  @Test
   void caseLifecycle_everythingComesBackInUnitHistory() {
     BoardModel model = store.units().boardModel("PSU-30", "Harbour Instruments");
     Unit unit = store.units().add("H-0042", model.id(), "job 7781");

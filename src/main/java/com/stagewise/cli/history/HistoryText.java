@@ -8,6 +8,7 @@ import com.stagewise.history.SearchHit;
 import com.stagewise.history.ShopMemory;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
@@ -67,6 +68,19 @@ final class HistoryText {
     if (!file.readings().isEmpty()) {
       text.append("  Readings:").append(NL);
       for (StoredReading r : file.readings()) {
+        if (r.kind() == ReadingKind.OHMS) {
+          // A power-off reading: between two points, in ohms or OL.
+          text.append(
+              String.format(
+                  Locale.ROOT,
+                  "    %s  %-8s to %-8s ohms %s",
+                  when(r.takenAt()),
+                  r.at(),
+                  r.to(),
+                  r.isOverRange() ? "OL" : number(r.value()) + " Ω"));
+          text.append(NL);
+          continue;
+        }
         text.append(
             String.format(
                 Locale.ROOT,

@@ -18,7 +18,11 @@ import java.util.List;
 final class PgMigrations {
   /** The scripts in order; script {@code i} brings the schema to version {@code i + 1}. */
   static final List<String> SCRIPTS =
-      List.of("V1__core_tables.sql", "V2__full_text_search.sql", "V3__change_numbers.sql");
+      List.of(
+          "V1__core_tables.sql",
+          "V2__full_text_search.sql",
+          "V3__change_numbers.sql",
+          "V4__ohms_readings.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

@@ -30,8 +30,11 @@ public record HistoryBundle(
   /** The {@code format} word of a history bundle file. */
   public static final String FORMAT = "stagewise-history";
 
-  /** The newest bundle format version this program reads and the one it writes. */
-  public static final int CURRENT_VERSION = 1;
+  /**
+   * The newest bundle format version this program reads and the one it writes (2: readings may be
+   * ohms readings, with {@code "to"} and {@code "OL"}; a version-1 bundle is read as before).
+   */
+  public static final int CURRENT_VERSION = 2;
 
   public HistoryBundle {
     exportedAt = Times.millis(Objects.requireNonNull(exportedAt, "exportedAt"));

@@ -3,10 +3,12 @@ package com.stagewise.history.record;
 import java.util.Locale;
 import java.util.Optional;
 
-/** Whether a reading is a DC level or an AC amplitude. */
+/** Whether a reading is a DC level, an AC amplitude or (power off) a resistance in ohms. */
 public enum ReadingKind {
   DC("dc"),
-  AC("ac");
+  AC("ac"),
+  /** A resistance between two points, taken with the power off. */
+  OHMS("ohms");
 
   private final String word;
 

@@ -289,8 +289,8 @@ final class Rows implements AutoCloseable {
   boolean tryInsert(StoredReading r) throws SQLException {
     int inserted =
         update(
-            "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at)"
-                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at,"
+                + " to_point) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
             r.id(),
             r.caseId(),
             r.at(),
@@ -299,7 +299,8 @@ final class Rows implements AutoCloseable {
             r.hz(),
             r.uncertainty(),
             r.meterText(),
-            r.takenAt());
+            r.takenAt(),
+            r.to());
     return inserted == 1;
   }
 

@@ -7,7 +7,6 @@ import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
 import com.stagewise.history.record.HistoryBundle;
-import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
 import com.stagewise.history.record.StoredReading;
@@ -73,7 +72,9 @@ final class BundleDocuments {
         reading = reading(stored);
       } catch (InvalidInputException e) {
         String key =
-            e.field().equals("hz") || e.field().equals("uncertainty") ? e.field() : "value";
+            e.field().equals("hz") || e.field().equals("uncertainty") || e.field().equals("to")
+                ? e.field()
+                : "value";
         throw new InvalidInputException(source, at + "." + key, problemOf(e));
       }
       List<StageRules.Problem> problems = ReadingRules.storedProblems(reading, largest);
@@ -86,15 +87,21 @@ final class BundleDocuments {
 
   /** Returns a stored reading as the domain's reading, with the checks of its record. */
   private static Reading reading(StoredReading stored) {
-    boolean ac = stored.kind() == ReadingKind.AC;
+    Reading.Kind kind =
+        switch (stored.kind()) {
+          case AC -> Reading.Kind.AC;
+          case DC -> Reading.Kind.DC;
+          case OHMS -> Reading.Kind.OHMS;
+        };
     return new Reading(
         stored.at(),
-        ac ? Reading.Kind.AC : Reading.Kind.DC,
+        kind,
         stored.value(),
         stored.hz() == null ? 0 : stored.hz(),
         stored.uncertainty() == null
             ? OptionalDouble.empty()
-            : OptionalDouble.of(stored.uncertainty()));
+            : OptionalDouble.of(stored.uncertainty()),
+        stored.to());
   }
 
   /** Returns the reader's complaint, placed at {@code at} inside the bundle {@code source}. */

@@ -21,6 +21,7 @@ import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
 import com.stagewise.interchange.JsonField;
+import com.stagewise.interchange.ReadingsSheet;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
@@ -82,7 +83,7 @@ public final class HistoryBundleJson {
           "confirmedFaults",
           "updatedAt");
   private static final List<String> READING =
-      List.of("id", "caseId", "at", "kind", "value", "hz", "uncertainty", "meter", "takenAt");
+      List.of("id", "caseId", "at", "to", "kind", "value", "hz", "uncertainty", "meter", "takenAt");
   private static final List<String> SUSPECT_LIST =
       List.of("id", "caseId", "computedAt", "programVersion", "verdict", "suspects", "nextProbes");
   private static final List<String> SUSPECT = List.of("fault", "probability", "group", "why");
@@ -203,17 +204,20 @@ public final class HistoryBundleJson {
     List<StoredReading> readings = new ArrayList<>();
     for (JsonField f : top.optionalElements("readings", "readings")) {
       f.object("a reading", READING);
+      ReadingKind kind =
+          f.require("kind", "dc, ac or ohms").word(ReadingKind::fromWord, "dc, ac or ohms");
       readings.add(
           new StoredReading(
               text(f, "id"),
               text(f, "caseId"),
               text(f, "at"),
-              f.require("kind", "dc or ac").word(ReadingKind::fromWord, "dc or ac"),
-              f.require("value", "a number").finite("the reading's value"),
+              kind,
+              readingValue(f.require("value", "a number"), kind),
               f.optional("hz").map(h -> h.finite("a frequency in Hz")).orElse(null),
               f.optional("uncertainty").map(u -> u.finite("an uncertainty in volts")).orElse(null),
               f.optionalText("meter", ""),
-              time(f, "takenAt")));
+              time(f, "takenAt"),
+              f.optionalText("to", "")));
     }
     List<SuspectListRecord> lists = new ArrayList<>();
     for (JsonField f : top.optionalElements("suspectLists", "suspect lists")) {
@@ -404,10 +408,35 @@ public final class HistoryBundleJson {
     return o.put("updatedAt", c.updatedAt().toString());
   }
 
+  /**
+   * Returns a reading's value: a finite number, or for an ohms reading also {@code "OL"}, the
+   * meter's over-range ({@link Double#POSITIVE_INFINITY}).
+   */
+  private static double readingValue(JsonField value, ReadingKind kind) {
+    if (kind == ReadingKind.OHMS && value.isText()) {
+      if (!value.text().equals(ReadingsSheet.OVER_RANGE)) {
+        throw value.error(
+            "expected ohms as a number or \"OL\" (the meter's over-range), found \""
+                + value.text()
+                + "\"");
+      }
+      return Double.POSITIVE_INFINITY;
+    }
+    return value.finite("the reading's value");
+  }
+
   static ObjectNode tree(StoredReading r) {
     ObjectNode o = NODES.objectNode();
-    o.put("id", r.id()).put("caseId", r.caseId()).put("at", r.at()).put("kind", r.kind().word());
-    o.put("value", r.value());
+    o.put("id", r.id()).put("caseId", r.caseId()).put("at", r.at());
+    if (!r.to().isEmpty()) {
+      o.put("to", r.to());
+    }
+    o.put("kind", r.kind().word());
+    if (r.isOverRange()) {
+      o.put("value", ReadingsSheet.OVER_RANGE);
+    } else {
+      o.put("value", r.value());
+    }
     if (r.hz() != null) {
       o.put("hz", r.hz());
     }

@@ -1,5 +1,6 @@
 package com.stagewise.ui.history;
 
+import com.stagewise.circuit.value.Engineering;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
@@ -219,6 +220,19 @@ public final class HistoryViewModel {
     String faults = String.join(", ", rc.confirmedFaults().stream().map(Words::fault).toList());
     List<String> readings = new ArrayList<>();
     for (StoredReading r : file.readings()) {
+      if (r.kind() == ReadingKind.OHMS) {
+        // A power-off reading: between two points, in ohms or OL.
+        readings.add(
+            Words.pin(r.at())
+                + " to "
+                + Words.pin(r.to())
+                + ":  "
+                + (r.isOverRange() ? "OL" : Engineering.of(r.value(), "Ω", 4))
+                + " (power off)   ("
+                + Words.dateTime(r.takenAt())
+                + ")");
+        continue;
+      }
       readings.add(
           Words.pin(r.at())
               + ":  "

@@ -6,7 +6,6 @@ import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.Outcome;
-import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.StoredReading;
 import java.time.Instant;
@@ -125,12 +124,17 @@ public final class Words {
 
   /** Returns the reading a stored reading stands for. */
   public static Reading reading(StoredReading stored) {
-    Reading.Kind kind = stored.kind() == ReadingKind.AC ? Reading.Kind.AC : Reading.Kind.DC;
+    Reading.Kind kind =
+        switch (stored.kind()) {
+          case AC -> Reading.Kind.AC;
+          case DC -> Reading.Kind.DC;
+          case OHMS -> Reading.Kind.OHMS;
+        };
     double hz = kind == Reading.Kind.AC && stored.hz() != null ? stored.hz() : 0;
     OptionalDouble uncertainty =
         stored.uncertainty() == null
             ? OptionalDouble.empty()
             : OptionalDouble.of(stored.uncertainty());
-    return new Reading(stored.at(), kind, stored.value(), hz, uncertainty);
+    return new Reading(stored.at(), kind, stored.value(), hz, uncertainty, stored.to());
   }
 }

@@ -248,6 +248,22 @@ class FileSafetyTest {
         assertThat(history.cases().get(0).notes())
             .extracting(CaseNote::text)
             .containsExactly(FixtureMaker.NOTE);
+        if (version >= 3) {
+          // Schema 4 rebuilt the reading table: every reading is still there, in arrival order,
+          // with its values.
+          assertThat(history.cases().get(0).readings())
+              .extracting(
+                  r ->
+                      r.at()
+                          + " "
+                          + r.kind().word()
+                          + " "
+                          + r.value()
+                          + (r.hz() == null ? "" : " at " + r.hz().intValue() + " Hz"))
+              .containsExactlyElementsOf(FixtureMaker.READINGS);
+          assertThat(history.cases().get(0).readings().get(1).uncertainty()).isEqualTo(0.001);
+          assertThat(history.cases().get(0).readings()).allMatch(r -> r.to().isEmpty());
+        }
         // Text search works on what was written before the index existed.
         assertThat(store.cases().search(SearchQuery.all().withText("distorts")))
             .extracting(SearchHit::symptom)

@@ -4,7 +4,11 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.record.StoredSuspect;
+import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -28,6 +32,12 @@ public final class FixtureMaker {
   /** The note of the fixture's closed case. */
   static final String NOTE = "Replaced the output op-amp; the distortion went away";
 
+  /**
+   * The readings of the fixture's closed case (from schema version 3 on), which the migration test
+   * finds again, in order, after every later migration.
+   */
+  static final List<String> READINGS = List.of("U3.7 dc 13.4", "OUT ac 0.0021 at 1000 Hz");
+
   private FixtureMaker() {}
 
   public static void main(String[] args) throws Exception {
@@ -50,6 +60,42 @@ public final class FixtureMaker {
       Unit unit = store.units().add("NF-8-0100", model.id(), "job 2025-117");
       RepairCase closed = store.cases().open(unit.id(), CLOSED_SYMPTOM);
       store.cases().addNote(closed.id(), NOTE);
+      if (version >= 3) {
+        Instant at = clock.instant();
+        store
+            .cases()
+            .addReadings(
+                closed.id(),
+                List.of(
+                    new StoredReading(
+                        HistoryStore.newId(),
+                        closed.id(),
+                        "U3.7",
+                        ReadingKind.DC,
+                        13.4,
+                        null,
+                        null,
+                        "6000-count meter, ±(0.5 % + 2 counts)",
+                        at),
+                    new StoredReading(
+                        HistoryStore.newId(),
+                        closed.id(),
+                        "OUT",
+                        ReadingKind.AC,
+                        0.0021,
+                        1000.0,
+                        0.001,
+                        "",
+                        at)),
+                new SuspectListRecord(
+                    HistoryStore.newId(),
+                    closed.id(),
+                    at,
+                    "0.1.0",
+                    "fault",
+                    List.of(new StoredSuspect("U3B:dead", 0.8, List.of("U3B:dead"), "", 1)),
+                    ""));
+      }
       store
           .cases()
           .addAction(closed.id(), ActionKind.PART_REPLACED, "U3", "dual op-amp", "dual op-amp", "");

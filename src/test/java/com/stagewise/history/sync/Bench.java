@@ -61,7 +61,19 @@ final class Bench {
                     null,
                     null,
                     "m",
-                    now)),
+                    now),
+                // A power-off reading, so that every sync test carries ohms readings and OL.
+                new StoredReading(
+                    HistoryStore.newId(),
+                    c.id(),
+                    "U1.2",
+                    ReadingKind.OHMS,
+                    i % 2 == 0 ? Double.POSITIVE_INFINITY : 46800,
+                    null,
+                    null,
+                    "m",
+                    now,
+                    "OUT")),
             null);
     store.cases().addNote(c.id(), "feedback resistor looked cracked, " + serial);
     return store.cases().close(c.id(), Outcome.FIXED, List.of(i % 2 == 0 ? "R2:open" : "C1:short"));

@@ -205,9 +205,9 @@ class HistoryExchangeTest {
         Arguments.of("not an object", null, "[1, 2]", "expected a history bundle as a JSON object"),
         Arguments.of(
             "newer version",
-            edit(r -> r.put("version", 2)),
+            edit(r -> r.put("version", 3)),
             null,
-            "version: bundle format version 2 is newer"),
+            "version: bundle format version 3 is newer"),
         Arguments.of(
             "wrong format", edit(r -> r.put("format", "stagewise-stage")), null, "format:"),
         Arguments.of("unknown key", edit(r -> r.put("extra", true)), null, "extra: unknown key"),
