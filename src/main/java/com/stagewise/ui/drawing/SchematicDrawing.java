@@ -185,6 +185,32 @@ public final class SchematicDrawing extends Region {
       group.getChildren().add(line(left, glyph.y1(), body.x(), glyph.y1(), 2));
       group.getChildren().add(line(body.right(), glyph.y1(), right, glyph.y1(), 2));
     }
+    if (PartShape.drawnHere(glyph.part())) {
+      if (glyph.part().kind().isTrimmer()) {
+        Rectangle rect = new Rectangle(body.x(), body.y(), body.w(), body.h());
+        rect.setFill(Palette.PART_FILL);
+        rect.setStroke(Palette.INK);
+        rect.setStrokeWidth(2);
+        group.getChildren().add(rect);
+      }
+      PartShape shape = PartShape.of(glyph);
+      for (PartShape.Stroke st : shape.strokes) {
+        group.getChildren().add(line(st.x1(), st.y1(), st.x2(), st.y2(), st.width()));
+      }
+      for (PartShape.Fill f : shape.fills) {
+        Polygon polygon = new Polygon(f.points());
+        polygon.setFill(Palette.INK);
+        polygon.setStroke(Palette.INK);
+        group.getChildren().add(polygon);
+      }
+      for (PartShape.Label l : shape.labels) {
+        group
+            .getChildren()
+            .add(text(l.text(), Palette.font(PartShape.LEAD_FONT), Palette.SOFT_INK, l.x(), l.y()));
+      }
+      content.getChildren().add(group);
+      return;
+    }
     if (glyph.part().kind() == PartKind.CAPACITOR) {
       // Two plates across the lead, 4 px in from the body box on the lead's axis.
       if (vertical) {

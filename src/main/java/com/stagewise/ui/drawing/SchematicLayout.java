@@ -6,6 +6,7 @@ import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
 import com.stagewise.circuit.value.SiValue;
+import com.stagewise.circuit.value.ZenerMarking;
 import com.stagewise.ui.drawing.Sheet.AmpGlyph;
 import com.stagewise.ui.drawing.Sheet.Caption;
 import com.stagewise.ui.drawing.Sheet.CaptionKind;
@@ -185,7 +186,7 @@ final class SchematicLayout {
       String topNet = part.touches(upper.inMinus()) ? upper.inMinus() : part.netA();
       String bottomNet = lower.inMinus();
       out.wire(topNet, x, top, x, mid - HANG / 2);
-      out.verticalPart(part, x, mid - HANG / 2, mid + HANG / 2);
+      out.verticalPart(part, topNet, x, mid - HANG / 2, mid + HANG / 2);
       out.wire(bottomNet, x, mid + HANG / 2, x, bottom);
     }
     routes(out, blocks, origin, rank);
@@ -342,7 +343,7 @@ final class SchematicLayout {
       }
       double x1 = x + flagA;
       out.symbol(SymbolKind.FLAG, part.netA(), x1, y, Direction.LEFT);
-      out.horizontalPart(part, x1, x1 + CELL, y, -1);
+      out.horizontalPart(part, part.netA(), x1, x1 + CELL, y, -1);
       out.symbol(SymbolKind.FLAG, part.netB(), x1 + CELL, y, Direction.RIGHT);
       x = x1 + CELL + flagB + 30;
     }
@@ -398,7 +399,7 @@ final class SchematicLayout {
     for (Part part : feedback) {
       lane = mY + dM * (LANE + lanes * LANE_STEP);
       b.wire(minus, -NODE, prevLeft, -NODE, lane);
-      b.horizontalPart(part, -NODE, OUT_X, lane, dM);
+      b.horizontalPart(part, minus, -NODE, OUT_X, lane, dM);
       b.wire(outNet, OUT_X, lane, OUT_X, prevRight);
       prevLeft = lane;
       prevRight = lane;
@@ -415,7 +416,7 @@ final class SchematicLayout {
     for (Part part : positive) {
       double pLane = pY + dP * (LANE + pLanes * LANE_STEP);
       b.wire(plus, -NODE, pPrevLeft, -NODE, pLane);
-      b.horizontalPart(part, -NODE, OUT_X, pLane, dP);
+      b.horizontalPart(part, plus, -NODE, OUT_X, pLane, dP);
       b.wire(outNet, OUT_X, pLane, OUT_X, pPrevRight);
       pPrevLeft = pLane;
       pPrevRight = pLane;
@@ -460,7 +461,7 @@ final class SchematicLayout {
     double end = OUT_X + 30;
     for (Part part : loads) {
       String far = other(part, outNet);
-      b.verticalPart(part, x, 0, HANG);
+      b.verticalPart(part, outNet, x, 0, HANG);
       b.supplySymbol(far, x, HANG, Direction.DOWN);
       end = x + 30;
       x += HSTEP;
@@ -572,7 +573,7 @@ final class SchematicLayout {
     for (Part part : hangers) {
       double cx = x - (columnsFromNode ? BUS : HSTEP) - column * HSTEP;
       String far = other(part, net);
-      b.verticalPart(part, cx, y, y + HANG);
+      b.verticalPart(part, net, cx, y, y + HANG);
       b.supplySymbol(far, cx, y + HANG, Direction.DOWN);
       extent = Math.max(extent, y + HANG + 28);
       lastColumn = cx;
@@ -580,7 +581,7 @@ final class SchematicLayout {
     }
     for (Part part : uplinks) {
       double cx = x - (columnsFromNode ? BUS : HSTEP) - column * HSTEP;
-      b.verticalPart(part, cx, y, y - d * HANG);
+      b.verticalPart(part, net, cx, y, y - d * HANG);
       b.uplinks.add(new Uplink(cx, y - d * HANG, d));
       lastColumn = cx;
       column++;
@@ -602,8 +603,8 @@ final class SchematicLayout {
         rowY = nextY;
       }
       double endX = rowX - CELL;
-      b.horizontalPart(part, endX, rowX, rowY, d);
       String far = other(part, net);
+      b.horizontalPart(part, far, endX, rowX, rowY, d);
       double reach = rowY + d * 30;
       if (outOwner.containsKey(far) && outOwner.get(far) != amp) {
         b.routes.add(new Pending(far, endX, rowY));
@@ -646,9 +647,22 @@ final class SchematicLayout {
     return Math.ceil(size * 1.3);
   }
 
-  /** Returns the text shown for a part's value, e.g. "4.7 kΩ", "100 nF". */
+  /**
+   * Returns the text shown for a part's value, e.g. "4.7 kΩ", "100 nF"; a zener's marking "5V1"
+   * (its symbol says it is a zener), a diode's class ("silicon"), an LED's colour ("red LED"), a
+   * trimmer's value and wiper ("10 kΩ at 0.5").
+   */
   static String valueText(Part part) {
-    return SiValue.format(part.value(), part.kind().unit(), 3);
+    return switch (part.kind()) {
+      case ZENER -> ZenerMarking.format(part.value());
+      case DIODE -> part.diodeClass().word();
+      case LED -> part.colour().word() + " LED";
+      case TRIMMER, POTENTIOMETER ->
+          SiValue.format(part.value(), part.kind().unit(), 3)
+              + " at "
+              + java.math.BigDecimal.valueOf(part.position()).stripTrailingZeros().toPlainString();
+      default -> SiValue.format(part.value(), part.kind().unit(), 3);
+    };
   }
 
   // ---------------------------------------------------------------------------------------------
@@ -674,13 +688,13 @@ final class SchematicLayout {
     }
 
     /** A part across (x1, y)–(x2, y); its captions go above (d = −1) or below (d = +1). */
-    void horizontalPart(Part part, double x1, double x2, double y, int d) {
+    void horizontalPart(Part part, String firstNet, double x1, double x2, double y, int d) {
       double cx = (x1 + x2) / 2;
       Box body =
           part.kind() == PartKind.CAPACITOR
               ? Box.centred(cx, y, CAP_GAP + 4, CAP_PLATE)
               : Box.centred(cx, y, BODY_LONG, BODY_SHORT);
-      parts.add(new PartGlyph(part, x1, y, x2, y, body));
+      parts.add(new PartGlyph(part, x1, y, x2, y, body, firstNet, -d));
       String value = valueText(part);
       double wRef = width(part.ref(), PART_FONT, true);
       double wValue = width(value, PART_FONT, false);
@@ -691,13 +705,13 @@ final class SchematicLayout {
     }
 
     /** A part across (x, y1)–(x, y2); its captions go to the right of the body. */
-    void verticalPart(Part part, double x, double y1, double y2) {
+    void verticalPart(Part part, String firstNet, double x, double y1, double y2) {
       double cy = (y1 + y2) / 2;
       Box body =
           part.kind() == PartKind.CAPACITOR
               ? Box.centred(x, cy, CAP_PLATE, CAP_GAP + 4)
               : Box.centred(x, cy, BODY_SHORT, BODY_LONG);
-      parts.add(new PartGlyph(part, x, y1, x, y2, body));
+      parts.add(new PartGlyph(part, x, y1, x, y2, body, firstNet, -1));
       double left = body.right() + 5;
       caption(part.ref(), left, cy - line(PART_FONT), PART_FONT, true, CaptionKind.DESIGNATOR);
       caption(valueText(part), left, cy, PART_FONT, false, CaptionKind.VALUE);
@@ -809,7 +823,9 @@ final class SchematicLayout {
                 p.y1() + dy,
                 p.x2() + dx,
                 p.y2() + dy,
-                p.body().moved(dx, dy)));
+                p.body().moved(dx, dy),
+                p.firstNet(),
+                p.free()));
       }
       for (AmpGlyph a : amps) {
         out.amps.add(new AmpGlyph(a.amp(), a.x() + dx, a.y() + dy, a.flipped()));

@@ -141,6 +141,22 @@ public final class SchematicPicture {
       pen.line(left, glyph.y1(), body.x(), glyph.y1(), 2, INK);
       pen.line(body.right(), glyph.y1(), right, glyph.y1(), 2, INK);
     }
+    if (PartShape.drawnHere(glyph.part())) {
+      if (glyph.part().kind().isTrimmer()) {
+        pen.rect(body.x(), body.y(), body.w(), body.h(), 0, PART_FILL, INK, 2);
+      }
+      PartShape shape = PartShape.of(glyph);
+      for (PartShape.Stroke st : shape.strokes) {
+        pen.line(st.x1(), st.y1(), st.x2(), st.y2(), st.width(), INK);
+      }
+      for (PartShape.Fill f : shape.fills) {
+        pen.polygon(f.points(), INK, INK, 1);
+      }
+      for (PartShape.Label l : shape.labels) {
+        pen.text(l.x(), l.y(), l.text(), PartShape.LEAD_FONT, false, SOFT_INK);
+      }
+      return;
+    }
     if (glyph.part().kind() == PartKind.CAPACITOR) {
       if (glyph.vertical()) {
         pen.line(body.x(), body.y() + 2, body.right(), body.y() + 2, 3.2, INK);

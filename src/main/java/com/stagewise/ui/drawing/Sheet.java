@@ -72,10 +72,20 @@ record Sheet(
    * @param x2 second terminal x
    * @param y2 second terminal y
    * @param body the body's box (resistor rectangle or capacitor plates)
+   * @param firstNet the net at (x1, y1), or null when it does not matter
+   * @param free the side of the axis without captions, where a symbol draws its extras (a trimmer's
+   *     wiper, an LED's arrows, lead names): +1 right of a vertical part or below a horizontal one,
+   *     −1 left or above
    */
-  record PartGlyph(Part part, double x1, double y1, double x2, double y2, Box body) {
+  record PartGlyph(
+      Part part, double x1, double y1, double x2, double y2, Box body, String firstNet, int free) {
     boolean vertical() {
       return x1 == x2;
+    }
+
+    /** Whether the part's first net (a junction's anode, a trimmer's end 1) is at (x1, y1). */
+    boolean firstAtStart() {
+      return firstNet == null || part.netA().equals(firstNet) || !part.netB().equals(firstNet);
     }
   }
 

@@ -271,6 +271,15 @@ public final class StageEditorView {
                 "editor-add-capacitor",
                 "+ Capacitor",
                 () -> select(Place.PART, model.addPart(PartKind.CAPACITOR))));
+    for (PartKind kind : List.of(PartKind.DIODE, PartKind.ZENER, PartKind.LED, PartKind.TRIMMER)) {
+      String word = kind == PartKind.LED ? "LED" : kind.word();
+      bar.getChildren()
+          .add(
+              addButton(
+                  "editor-add-" + kind.word(),
+                  "+ " + Character.toUpperCase(word.charAt(0)) + word.substring(1),
+                  () -> select(Place.PART, model.addPart(kind))));
+    }
     bar.getChildren()
         .add(
             addButton(
@@ -485,17 +494,63 @@ public final class StageEditorView {
                     refresh();
                   }
                 }));
-    details
-        .getChildren()
-        .add(
-            pad(
-                "editor-value",
-                "Value: " + part.value().text() + " " + part.kind().unit(),
-                part.kind() == PartKind.CAPACITOR
-                    ? ValuePadModel.Quantity.FARADS
-                    : ValuePadModel.Quantity.OHMS,
-                "Set " + ref,
-                v -> model.setPartValue(ref, DraftStage.valueText(part.kind(), v))));
+    if (part.kind() == PartKind.DIODE || part.kind() == PartKind.LED) {
+      // A diode's class or an LED's colour sets its junction; it has no value to type.
+      List<String> words =
+          part.kind() == PartKind.LED
+              ? java.util.Arrays.stream(com.stagewise.circuit.LedColour.values())
+                  .map(com.stagewise.circuit.LedColour::word)
+                  .toList()
+              : List.of("silicon", "schottky");
+      FlowPane choices = new FlowPane(6, 6);
+      for (String w : words) {
+        ToggleButton b = new ToggleButton(w);
+        b.setId("editor-part-choice-" + w);
+        b.setSelected(w.equals(part.choice()));
+        b.setOnAction(e -> model.setPartChoice(ref, w));
+        choices.getChildren().add(b);
+      }
+      details
+          .getChildren()
+          .addAll(
+              small((part.kind() == PartKind.LED ? "Colour: " : "Class: ") + part.choice()),
+              choices);
+    } else {
+      details
+          .getChildren()
+          .add(
+              pad(
+                  "editor-value",
+                  "Value: " + part.value().text() + " " + part.kind().unit(),
+                  switch (part.kind()) {
+                    case CAPACITOR -> ValuePadModel.Quantity.FARADS;
+                    case ZENER -> ValuePadModel.Quantity.ZENER;
+                    default -> ValuePadModel.Quantity.OHMS;
+                  },
+                  "Set " + ref,
+                  v -> model.setPartValue(ref, DraftStage.valueText(part.kind(), v))));
+    }
+    if (part.kind().isTrimmer()) {
+      details
+          .getChildren()
+          .add(
+              pad(
+                  "editor-position",
+                  "Wiper position (0 at end 1, 1 at end 2): " + part.position().text(),
+                  ValuePadModel.Quantity.POSITION,
+                  "Set wiper",
+                  v ->
+                      model.setPartPosition(
+                          ref,
+                          java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString(),
+                          part.sealed())));
+      ToggleButton sealed = new ToggleButton("Sealed (factory-set)");
+      sealed.setId("editor-part-sealed");
+      sealed.setSelected(part.sealed());
+      sealed.setOnAction(
+          e -> model.setPartPosition(ref, part.position().text(), sealed.isSelected()));
+      details.getChildren().add(sealed);
+    }
     FlowPane tolerances = new FlowPane(6, 6);
     for (String t : List.of("1%", "2%", "5%", "10%", "20%")) {
       ToggleButton b = new ToggleButton(t);
@@ -504,7 +559,9 @@ public final class StageEditorView {
       b.setOnAction(e -> model.setPartTolerance(ref, t));
       tolerances.getChildren().add(b);
     }
-    details.getChildren().addAll(small("Tolerance: " + part.tolerance().text()), tolerances);
+    if (part.kind() != PartKind.DIODE && part.kind() != PartKind.LED) {
+      details.getChildren().addAll(small("Tolerance: " + part.tolerance().text()), tolerances);
+    }
     if (part.kind() == PartKind.RESISTOR) {
       details
           .getChildren()
@@ -522,7 +579,7 @@ public final class StageEditorView {
           .add(
               netPicker(
                   "editor-part-net-" + (lead + 1),
-                  "End " + (lead + 1),
+                  leadWords(part, lead),
                   part.nets().get(lead),
                   n -> model.setPartNet(ref, l, n)));
     }
@@ -534,6 +591,16 @@ public final class StageEditorView {
           select(Place.STAGE, "");
         });
     details.getChildren().add(delete);
+  }
+
+  /** A lead in words: "End 1", "Anode", "Cathode", "Wiper". */
+  private static String leadWords(DraftPart part, int lead) {
+    return switch (part.leads().get(lead)) {
+      case "a" -> "Anode";
+      case "k" -> "Cathode";
+      case "w" -> "Wiper";
+      default -> "End " + part.leads().get(lead);
+    };
   }
 
   private void sectionDetails(DraftSection section) {

@@ -425,6 +425,19 @@ public final class StageView {
     bandsTab.setToggleGroup(mode);
     padTab.setSelected(true);
     ValuePad pad = new ValuePad(model.pad(), "part", "Set value", model::applyValue);
+    // A trimmer's pad sets its end-to-end value or, with this on, its wiper position (0 to 1).
+    ToggleButton wiperTab = new ToggleButton("Wiper position");
+    wiperTab.setId("part-wiper");
+    wiperTab.selectedProperty().bindBidirectional(model.wiperProperty());
+    wiperTab
+        .visibleProperty()
+        .bind(
+            Bindings.createBooleanBinding(
+                () ->
+                    model.selectedPartProperty().get() != null
+                        && model.selectedPartProperty().get().part().kind().isTrimmer(),
+                model.selectedPartProperty()));
+    wiperTab.managedProperty().bind(wiperTab.visibleProperty());
     VBox decoder = decoderPanel(() -> padTab.setSelected(true));
     decoder.visibleProperty().bind(bandsTab.selectedProperty());
     pad.visibleProperty().bind(bandsTab.selectedProperty().not());
@@ -438,7 +451,7 @@ public final class StageView {
                 was.setSelected(true);
               }
             });
-    VBox editing = new VBox(10, renameRow, new HBox(8, padTab, bandsTab), modes);
+    VBox editing = new VBox(10, renameRow, new HBox(8, padTab, bandsTab), wiperTab, modes);
     editing.disableProperty().bind(model.selectedPartProperty().isNull());
     box.getChildren().addAll(title, editing);
     return box;

@@ -51,6 +51,7 @@ public final class StageViewModel {
   private final ObservableList<PartRow> parts = FXCollections.observableArrayList();
   private final ObjectProperty<PartRow> selectedPart = new SimpleObjectProperty<>();
   private final StringProperty designator = new SimpleStringProperty("");
+  private final BooleanProperty wiper = new SimpleBooleanProperty(false);
   private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.OHMS);
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
   private final DecoderModel decoder = new DecoderModel();
@@ -70,13 +71,41 @@ public final class StageViewModel {
         (o, was, row) -> {
           if (row != null) {
             designator.set(row.part().ref());
+            Part part = row.part();
+            // The same trimmer chosen again after an edit keeps the pad on its wiper.
+            boolean sameTrimmer =
+                wiper.get()
+                    && was != null
+                    && was.part().ref().equals(part.ref())
+                    && part.kind().isTrimmer();
+            if (sameTrimmer) {
+              pad.setValue(part.position());
+              return;
+            }
+            wiper.set(false);
             pad.quantityProperty()
                 .set(
-                    row.part().kind() == PartKind.CAPACITOR
-                        ? ValuePadModel.Quantity.FARADS
-                        : ValuePadModel.Quantity.OHMS);
-            pad.setValue(row.part().value());
+                    switch (part.kind()) {
+                      case CAPACITOR -> ValuePadModel.Quantity.FARADS;
+                      case ZENER -> ValuePadModel.Quantity.ZENER;
+                      default -> ValuePadModel.Quantity.OHMS;
+                    });
+            if (part.kind() == PartKind.DIODE || part.kind() == PartKind.LED) {
+              pad.textProperty().set("");
+            } else {
+              pad.setValue(part.value());
+            }
           }
+        });
+    wiper.addListener(
+        (o, was, now) -> {
+          PartRow row = selectedPart.get();
+          if (row == null || !row.part().kind().isTrimmer()) {
+            return;
+          }
+          pad.quantityProperty()
+              .set(now ? ValuePadModel.Quantity.POSITION : ValuePadModel.Quantity.OHMS);
+          pad.setValue(now ? row.part().position() : row.part().value());
         });
     bench
         .stageProperty()
@@ -296,7 +325,9 @@ public final class StageViewModel {
   public record PartRow(Part part, String value, String tolerance, String nets) {
     /** Returns the row as one line. */
     public String line() {
-      return part.ref() + "   " + value + "  ±" + tolerance + "   (" + nets + ")";
+      // A diode's or an LED's class fixes its figures: it has no tolerance to show.
+      String within = tolerance.isEmpty() ? "" : "  ±" + tolerance;
+      return part.ref() + "   " + value + within + "   (" + nets + ")";
     }
   }
 
@@ -322,6 +353,14 @@ public final class StageViewModel {
 
   public StringProperty designatorProperty() {
     return designator;
+  }
+
+  /**
+   * Whether the pad sets the chosen trimmer's wiper position (0 to 1) rather than its end-to-end
+   * value; only a trimmer or potentiometer has one.
+   */
+  public BooleanProperty wiperProperty() {
+    return wiper;
   }
 
   public ValuePadModel pad() {
@@ -515,16 +554,50 @@ public final class StageViewModel {
     List<PartRow> rows = new ArrayList<>();
     if (s != null) {
       for (Part part : s.parts()) {
-        String unit = part.kind() == PartKind.CAPACITOR ? "F" : "Ω";
         rows.add(
             new PartRow(
                 part,
-                SiValue.format(part.value(), unit),
-                Tolerance.format(part.tolerance()),
-                part.netA() + " – " + part.netB()));
+                valueWords(part),
+                part.kind() == PartKind.DIODE || part.kind() == PartKind.LED
+                    ? ""
+                    : Tolerance.format(part.tolerance()),
+                leadWords(part)));
       }
     }
     parts.setAll(rows);
+  }
+
+  /**
+   * Returns a part's value as the list shows it: {@code 4.7 kΩ}, a zener's marking {@code 5V1}, a
+   * diode's class, an LED's colour, a trimmer's value and wiper ({@code 10 kΩ, wiper at 0.5}).
+   */
+  static String valueWords(Part part) {
+    return switch (part.kind()) {
+      case CAPACITOR -> SiValue.format(part.value(), "F");
+      case ZENER -> ZenerMarking.format(part.value()) + " zener";
+      case DIODE -> part.diodeClass().word() + " diode";
+      case LED -> part.colour().word() + " LED";
+      case TRIMMER, POTENTIOMETER ->
+          SiValue.format(part.value(), "Ω")
+              + ", wiper at "
+              + java.math.BigDecimal.valueOf(part.position()).stripTrailingZeros().toPlainString()
+              + (part.sealed() ? " (sealed)" : "");
+      default -> SiValue.format(part.value(), "Ω");
+    };
+  }
+
+  /**
+   * Returns a part's nets with its lead names where they matter: {@code anode OUT – cathode RECT},
+   * {@code VCC – wiper NULL – VEE}; a resistor's or capacitor's as {@code SUM – OUT}.
+   */
+  static String leadWords(Part part) {
+    if (part.kind().isJunction()) {
+      return "anode " + part.anode() + " – cathode " + part.cathode();
+    }
+    if (part.kind().isTrimmer()) {
+      return part.netA() + " – wiper " + part.wiper() + " – " + part.netB();
+    }
+    return part.netA() + " – " + part.netB();
   }
 
   private void solve() {
@@ -566,6 +639,33 @@ public final class StageViewModel {
       return;
     }
     String ref = row.part().ref();
+    PartKind kind = row.part().kind();
+    if (kind == PartKind.DIODE || kind == PartKind.LED) {
+      bench
+          .problems()
+          .show(
+              "A diode has no value to type",
+              ref
+                  + " is "
+                  + (kind == PartKind.LED
+                      ? "an LED: its colour sets its forward voltage."
+                      : "a " + row.part().diodeClass().word() + " diode: its class sets its drop."),
+              "Change its class or colour in the stage editor.");
+      return;
+    }
+    if (wiper.get() && kind.isTrimmer()) {
+      if (!(value >= 0 && value <= 1)) {
+        bench
+            .problems()
+            .show(
+                "Not a wiper position",
+                "A wiper position is from 0 (end 1) to 1 (end 2).",
+                "Type e.g. 0.5.");
+        return;
+      }
+      edit(stage.get().withPart(ref, p -> p.withPosition(value)), ref);
+      return;
+    }
     edit(stage.get().withPart(ref, p -> p.withValue(value)), ref);
   }
 

@@ -107,6 +107,8 @@ public final class ValuePad extends VBox {
       case OHMS -> "R marks the point in ohms (4R7 = 4.7 Ω), k = kilo (4k7 = 4.7 kΩ), M = mega.";
       case FARADS -> "p = pico, n = nano, µ = micro (100n = 100 nF, 2u2 = 2.2 µF).";
       case VOLTS -> "m = milli (350m = 0.35 V), µ = micro, ± changes the sign.";
+      case ZENER -> "A zener's marking: V marks the point (5V1 = 5.1 V, 12V = 12 V).";
+      case POSITION -> "The wiper's share of the travel: 0 at end 1, 1 at end 2 (0.5 = middle).";
     };
   }
 

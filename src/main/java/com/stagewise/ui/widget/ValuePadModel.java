@@ -4,6 +4,7 @@ import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.value.ESeries;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.circuit.value.SiValue;
+import com.stagewise.circuit.value.ZenerMarking;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
@@ -34,7 +35,12 @@ public final class ValuePadModel {
     // (parts catalogues, from memory); a larger entry is a slipped prefix or decimal point.
     OHMS("Ω", "R", 1e10, "a resistor on a board (up to 10 GΩ)"),
     FARADS("F", "", 1.0, "a capacitor on a board (up to 1 F)"),
-    VOLTS("V", "", 1000, "a bench meter reads (up to 1000 V)");
+    VOLTS("V", "", 1000, "a bench meter reads (up to 1000 V)"),
+    // Zener markings: 5V1, 12V, 3.3V (the V stands for the decimal point); small zeners end near
+    // 200 V (parts catalogues, from memory), ZenerMarking takes up to 400 V.
+    ZENER("V", "V", ZenerMarking.MAX_VOLTS, "a zener's marking (up to 400 V)"),
+    // A trimmer's wiper: the share of its travel from end 1, 0 to 1.
+    POSITION("", "", 1, "a wiper's travel (0 to 1)");
 
     private final String unit;
     private final String rkmLetter;
@@ -59,6 +65,8 @@ public final class ValuePadModel {
         case OHMS -> java.util.List.of("R", "k", "M");
         case FARADS -> java.util.List.of("p", "n", "u");
         case VOLTS -> java.util.List.of("u", "m");
+        case ZENER -> java.util.List.of("V");
+        case POSITION -> java.util.List.of();
       };
     }
 
@@ -135,7 +143,18 @@ public final class ValuePadModel {
 
   /** Sets the entry to a value (e.g. from the colour-code decoder). */
   public void setValue(double si) {
-    text.set(quantity.get() == Quantity.OHMS ? SiValue.rkm(si) : plain(SiValue.format(si, "")));
+    text.set(
+        switch (quantity.get()) {
+          case OHMS -> SiValue.rkm(si);
+          case ZENER -> ZenerMarking.format(si);
+          case POSITION -> share(si);
+          default -> plain(SiValue.format(si, ""));
+        });
+  }
+
+  /** A wiper position as a plain decimal ("0.82", never "820m"), independent of the locale. */
+  private static String share(double position) {
+    return java.math.BigDecimal.valueOf(position).stripTrailingZeros().toPlainString();
   }
 
   private static String plain(String formatted) {
@@ -153,7 +172,7 @@ public final class ValuePadModel {
     }
     double parsed;
     try {
-      parsed = SiValue.parse(now);
+      parsed = quantity.get() == Quantity.ZENER ? ZenerMarking.parse(now) : SiValue.parse(now);
     } catch (InvalidInputException e) {
       value.set(null);
       reading.set("");
@@ -167,6 +186,16 @@ public final class ValuePadModel {
       reading.set("");
       hint.set("");
       problem.set("A part value cannot be negative.");
+      return;
+    }
+    if (q == Quantity.POSITION && parsed > 1) {
+      value.set(null);
+      reading.set("");
+      hint.set("");
+      problem.set(
+          "A wiper position is from 0 (end 1) to 1 (end 2); "
+              + now
+              + " is beyond the track. Check the decimal point.");
       return;
     }
     if (Math.abs(parsed) > q.largest) {
@@ -183,7 +212,13 @@ public final class ValuePadModel {
     }
     value.set(parsed);
     problem.set("");
-    reading.set("= " + Engineering.of(parsed, q.unit(), SiValue.DEFAULT_DIGITS));
+    reading.set(
+        switch (q) {
+          case ZENER ->
+              "= " + Engineering.of(parsed, q.unit(), SiValue.DEFAULT_DIGITS) + " zener voltage";
+          case POSITION -> "= " + share(parsed) + " of the travel from end 1";
+          default -> "= " + Engineering.of(parsed, q.unit(), SiValue.DEFAULT_DIGITS);
+        });
     hint.set(preferredHint(q, parsed));
   }
 
@@ -192,12 +227,14 @@ public final class ValuePadModel {
       case OHMS -> "4k7, 470R, 10k, 1M5";
       case FARADS -> "100n, 2u2, 47p";
       case VOLTS -> "14.96, -0.62, 350m";
+      case ZENER -> "5V1, 12V, 3.3V";
+      case POSITION -> "0.5, 0.82, 0";
     };
   }
 
   /** Returns the nearest E24 (resistors) or E12 (capacitors) value when the value is not one. */
   static String preferredHint(Quantity q, double parsed) {
-    if (q == Quantity.VOLTS || parsed <= 0) {
+    if (q == Quantity.VOLTS || q == Quantity.ZENER || q == Quantity.POSITION || parsed <= 0) {
       return "";
     }
     ESeries series = q == Quantity.OHMS ? ESeries.E24 : ESeries.E12;

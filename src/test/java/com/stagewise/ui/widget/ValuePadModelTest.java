@@ -116,4 +116,44 @@ class ValuePadModelTest {
     assertThat(pad.hasValue()).isFalse();
     assertThat(pad.problemProperty().get()).contains("more than a capacitor on a board");
   }
+
+  @Test
+  void zener_markingTypedOnThePad_readsAsItsVoltage() {
+    // The usual zener marking (common practice, e.g. BZX-style parts): 5V1 is 5.1 V, 3V3 is 3.3 V;
+    // the pad's V key types the marking's letter.
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.ZENER);
+    assertThat(pad.quantityProperty().get().prefixKeys()).containsExactly("V");
+    for (String key : new String[] {"5", "V", "1"}) {
+      pad.press(key);
+    }
+    assertThat(pad.valueProperty().get()).isEqualTo(5.1);
+    assertThat(pad.readingProperty().get()).endsWith("zener voltage");
+    pad.textProperty().set("3.3V");
+    assertThat(pad.valueProperty().get()).isEqualTo(3.3);
+    pad.setValue(12);
+    assertThat(pad.textProperty().get()).isEqualTo("12V");
+    pad.textProperty().set("5,1V");
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).contains("5V1");
+    assertThat(pad.textProperty().get()).isEqualTo("5,1V");
+  }
+
+  @Test
+  void position_isAShareOfTheTravel_andBeyondTheTrackIsRefusedButKept() {
+    // DESIGN.md: a trimmer's position is its wiper's share of the way from the first end, 0 to 1.
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.POSITION);
+    pad.textProperty().set("0.82");
+    assertThat(pad.valueProperty().get()).isEqualTo(0.82);
+    assertThat(pad.readingProperty().get()).isEqualTo("= 0.82 of the travel from end 1");
+    pad.textProperty().set("1.7");
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).contains("0 (end 1) to 1 (end 2)");
+    assertThat(pad.textProperty().get()).isEqualTo("1.7");
+    pad.textProperty().set("-0.1");
+    assertThat(pad.hasValue()).isFalse();
+    // A position put on the pad from the stage reads as a plain share, as typed.
+    pad.setValue(0.3);
+    assertThat(pad.textProperty().get()).isEqualTo("0.3");
+    assertThat(pad.valueProperty().get()).isEqualTo(0.3);
+  }
 }
