@@ -1,6 +1,6 @@
 package com.stagewise.ui.drawing;
 
-import static com.stagewise.ui.drawing.SchematicLayout.*;
+import static com.stagewise.ui.drawing.SchematicLayout.NODE;
 
 import com.stagewise.ui.drawing.SchematicLayout.Pending;
 import com.stagewise.ui.drawing.SchematicLayout.TextMeasure;

@@ -1,6 +1,18 @@
 package com.stagewise.ui.drawing;
 
-import static com.stagewise.ui.drawing.SchematicLayout.*;
+import static com.stagewise.ui.drawing.SchematicLayout.BUS;
+import static com.stagewise.ui.drawing.SchematicLayout.CELL;
+import static com.stagewise.ui.drawing.SchematicLayout.HANG;
+import static com.stagewise.ui.drawing.SchematicLayout.HSTEP;
+import static com.stagewise.ui.drawing.SchematicLayout.LANE;
+import static com.stagewise.ui.drawing.SchematicLayout.LANE_STEP;
+import static com.stagewise.ui.drawing.SchematicLayout.NODE;
+import static com.stagewise.ui.drawing.SchematicLayout.OUT_X;
+import static com.stagewise.ui.drawing.SchematicLayout.PART_FONT;
+import static com.stagewise.ui.drawing.SchematicLayout.PIN_FONT;
+import static com.stagewise.ui.drawing.SchematicLayout.ROW;
+import static com.stagewise.ui.drawing.SchematicLayout.SUPPLY_X;
+import static com.stagewise.ui.drawing.SchematicLayout.line;
 
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.Part;

@@ -1,6 +1,13 @@
 package com.stagewise.ui.drawing;
 
-import static com.stagewise.ui.drawing.SchematicLayout.*;
+import static com.stagewise.ui.drawing.SchematicLayout.BODY_LONG;
+import static com.stagewise.ui.drawing.SchematicLayout.BODY_SHORT;
+import static com.stagewise.ui.drawing.SchematicLayout.CAP_GAP;
+import static com.stagewise.ui.drawing.SchematicLayout.CAP_PLATE;
+import static com.stagewise.ui.drawing.SchematicLayout.NET_FONT;
+import static com.stagewise.ui.drawing.SchematicLayout.PART_FONT;
+import static com.stagewise.ui.drawing.SchematicLayout.line;
+import static com.stagewise.ui.drawing.SchematicLayout.valueText;
 
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;

@@ -1,7 +1,5 @@
 package com.stagewise.ui.drawing;
 
-import static com.stagewise.ui.drawing.SchematicLayout.*;
-
 import com.stagewise.ui.drawing.SchematicLayout.TextMeasure;
 import com.stagewise.ui.drawing.Sheet.Dot;
 import com.stagewise.ui.drawing.Sheet.PartGlyph;

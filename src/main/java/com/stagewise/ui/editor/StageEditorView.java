@@ -351,6 +351,7 @@ public final class StageEditorView {
   private Button addButton(String id, String text, Runnable action) {
     Button button = new Button(text);
     button.setId(id);
+    button.getStyleClass().add("editor-add");
     button.setOnAction(e -> action.run());
     return button;
   }
