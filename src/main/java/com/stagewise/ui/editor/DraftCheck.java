@@ -78,7 +78,8 @@ final class DraftCheck {
           new EditorProblem(
               Place.STAGE,
               "",
-              "the stage has no op-amp section yet: add one (package, designator, section letter)"));
+              "the stage has no op-amp section yet: add one (package, designator, section"
+                  + " letter)"));
     }
     rules(draft, stage, problems);
     floating(draft, stage, problems);
@@ -235,8 +236,11 @@ final class DraftCheck {
   private static void loneTerminals(DraftStage draft, Stage stage, List<EditorProblem> problems) {
     Map<String, Integer> uses = new HashMap<>();
     for (Part part : stage.parts()) {
-      uses.merge(part.netA(), 1, Integer::sum);
-      uses.merge(part.netB(), 1, Integer::sum);
+      // Every lead, a trimmer's wiper too (a section input on a wiper is wired), each net once per
+      // part as StageRules counts it.
+      for (String net : new HashSet<>(part.nets())) {
+        uses.merge(net, 1, Integer::sum);
+      }
     }
     for (Amplifier amp : stage.amplifiers()) {
       for (Terminal terminal : Terminal.values()) {
