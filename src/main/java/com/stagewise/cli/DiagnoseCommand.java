@@ -64,6 +64,13 @@ final class DiagnoseCommand implements Callable<Integer> {
       description = "list at most N suspects (default ${DEFAULT-VALUE})")
   int top;
 
+  @Option(
+      names = "--mains-powered",
+      description =
+          "the unit is mains-powered: when a power-off (ohms) check tells the leading suspects"
+              + " apart, it is proposed first")
+  boolean mainsPowered;
+
   @Override
   public Integer call() {
     if (top < 1) {
@@ -87,7 +94,7 @@ final class DiagnoseCommand implements Callable<Integer> {
     ReadingSet readings = ReadingsSheet.read(readingsFile, stage);
     Diagnosis diagnosis;
     try {
-      diagnosis = Diagnoser.of(stage).diagnose(readings, top);
+      diagnosis = Diagnoser.of(stage).mainsPowered(mainsPowered).diagnose(readings, top);
     } catch (InvalidInputException e) {
       throw e.inSource(readingsFile.toString());
     }

@@ -8,14 +8,15 @@ import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
-import com.stagewise.solver.Conditions;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
@@ -37,12 +38,6 @@ public final class Diagnoser {
   /** A hypothesis below this share of the first suspect's probability is left off the list. */
   private static final double LIST_FLOOR = 1e-4;
 
-  /** Grid points whose spread is computed; the others borrow it from the nearest of these. */
-  private static final int SPREAD_EVERY = 8;
-
-  /** Interpolated steps between neighbouring grid points of a drifted value. */
-  private static final int SUB_STEPS = 4;
-
   private final Stage stage;
   private final FaultCatalogue.Entries catalogue;
   private final Map<String, Double> priors;
@@ -58,7 +53,16 @@ public final class Diagnoser {
   private static final int OHMS_HYPOTHESES = 24;
 
   private final double span;
-  private final Map<Map<String, Double>, List<Hypothesis>> models = new ConcurrentHashMap<>();
+  private final Map<Map<String, Double>, List<Hypothesis>> models;
+
+  /** Whether the unit is mains-powered (then a power-off check that splits the leaders leads). */
+  private final boolean mainsPowered;
+
+  /** Suspects within this factor of the first one's probability are the leading suspects. */
+  private static final double LEADING_FACTOR = 10;
+
+  /** … at most this many of them. */
+  private static final int LEADING_MOST = 6;
 
   private Diagnoser(Stage stage, Map<String, Integer> shopCounts) {
     this.stage = stage;
@@ -77,6 +81,32 @@ public final class Diagnoser {
     this.span = max;
     this.evidence = new Evidence(max);
     this.ohmsChecks = new OhmsChecks(stage);
+    this.models = new ConcurrentHashMap<>();
+    this.mainsPowered = false;
+  }
+
+  private Diagnoser(Diagnoser base, boolean mainsPowered) {
+    this.stage = base.stage;
+    this.catalogue = base.catalogue;
+    this.priors = base.priors;
+    this.shopCounts = base.shopCounts;
+    this.points = base.points;
+    this.span = base.span;
+    this.evidence = base.evidence;
+    this.ohmsChecks = base.ohmsChecks;
+    this.models = base.models;
+    this.mainsPowered = mainsPowered;
+  }
+
+  /**
+   * Returns this diagnoser for a unit that is (or is not) mains-powered: when it is, and a
+   * power-off (ohms) check tells the leading suspects apart (it resolves more than half of the
+   * uncertainty among them), that check is the first next probe even where a powered probe promises
+   * more bits; the other probes stay sorted by bits. Working unpowered is the safe way on such a
+   * unit.
+   */
+  public Diagnoser mainsPowered(boolean mains) {
+    return mains == mainsPowered ? this : new Diagnoser(this, mains);
   }
 
   /** Returns a diagnoser for a stage with the published priors. */
@@ -226,100 +256,7 @@ public final class Diagnoser {
   }
 
   private List<Hypothesis> build(Map<String, Double> inputs) {
-    Conditions conditions = Conditions.NOMINAL;
-    // Predictions start from the middle of each class's ranges (bias current, headroom), where a
-    // random working part is most likely to sit; the solver's nominal takes bias as zero.
-    for (com.stagewise.circuit.Amplifier amp : stage.amplifiers()) {
-      com.stagewise.circuit.DeviceClass type = amp.deviceClass();
-      double bias = mid(type.biasCurrent());
-      conditions =
-          conditions.withDevice(
-              amp.ref(),
-              com.stagewise.solver.DeviceParams.nominal(type)
-                  .withBias(bias, bias)
-                  .withHeadroom(mid(type.headroomLow()), mid(type.headroomHigh())));
-    }
-    for (Map.Entry<String, Double> e : inputs.entrySet()) {
-      conditions = conditions.withDriven(e.getKey(), e.getValue());
-    }
-    Predictor predictor = new Predictor(points, stage);
-    List<Hypothesis> hypotheses = new ArrayList<>();
-    for (Fault fault : catalogue.faults()) {
-      List<Scenario> scenarios = FaultModel.scenarios(stage, conditions, fault);
-      List<Prediction> predictions = predictAll(predictor, scenarios);
-      hypotheses.add(new Hypothesis(fault, priors.get(fault.id()), predictions));
-    }
-    return hypotheses;
-  }
-
-  private static double mid(com.stagewise.circuit.Range range) {
-    return (range.low() + range.high()) / 2;
-  }
-
-  private static List<Prediction> predictAll(Predictor predictor, List<Scenario> scenarios) {
-    boolean grid = scenarios.size() > 1 && scenarios.stream().allMatch(Scenario::onGrid);
-    if (!grid) {
-      List<Prediction> out = new ArrayList<>();
-      for (Scenario s : scenarios) {
-        out.addAll(predictor.predict(s, true));
-      }
-      return out;
-    }
-    int n = scenarios.size();
-    List<List<Prediction>> raw = new ArrayList<>();
-    for (int i = 0; i < n; i++) {
-      boolean spread = i % SPREAD_EVERY == 0 || i == n - 1;
-      raw.add(predictor.predict(scenarios.get(i), spread));
-    }
-    // Borrow the spread of the nearest grid point that has one.
-    for (int i = 0; i < n; i++) {
-      if (i % SPREAD_EVERY == 0 || i == n - 1) {
-        continue;
-      }
-      int lower = i - i % SPREAD_EVERY;
-      int upper = Math.min(lower + SPREAD_EVERY, n - 1);
-      int from = i - lower <= upper - i ? lower : upper;
-      List<Prediction> borrowed = new ArrayList<>();
-      for (int k = 0; k < raw.get(i).size(); k++) {
-        Prediction p = raw.get(i).get(k);
-        Prediction donor = raw.get(from).get(Math.min(k, raw.get(from).size() - 1));
-        borrowed.add(
-            new Prediction(
-                p.weight(),
-                p.dcMean(),
-                donor.dcSd(),
-                p.acMean(),
-                donor.acSd(),
-                p.value(),
-                p.label(),
-                p.states()));
-      }
-      raw.set(i, borrowed);
-    }
-    boolean simple = raw.stream().allMatch(list -> list.size() == 1);
-    List<Prediction> out = new ArrayList<>();
-    if (!simple) {
-      raw.forEach(out::addAll);
-      double total = out.stream().mapToDouble(Prediction::weight).sum();
-      return out.stream().map(p -> p.withWeight(p.weight() / total)).toList();
-    }
-    // A log-uniform prior over the drifted value: equal weight per interpolated step.
-    int steps = (n - 1) * SUB_STEPS + 1;
-    for (int i = 0; i < n - 1; i++) {
-      Prediction a = raw.get(i).get(0);
-      Prediction b = raw.get(i + 1).get(0);
-      for (int k = 0; k < SUB_STEPS; k++) {
-        double t = (double) k / SUB_STEPS;
-        // Geometric between drifted values; linear where a grid holds 0 (a trimmer's end).
-        double value =
-            a.value() > 0 && b.value() > 0
-                ? a.value() * Math.pow(b.value() / a.value(), t)
-                : a.value() + (b.value() - a.value()) * t;
-        out.add(a.toward(b, t, 1.0 / steps, value));
-      }
-    }
-    out.add(raw.get(n - 1).get(0).withWeight(1.0 / steps));
-    return out;
+    return Hypotheses.build(stage, points, catalogue, priors, inputs);
   }
 
   /**
@@ -341,7 +278,37 @@ public final class Diagnoser {
     List<ProbeAdvice> all = new ArrayList<>(volts);
     all.addAll(ohmsChecks.plan(top, ohms, meter));
     all.sort(Comparator.comparingDouble((ProbeAdvice a) -> -a.bits()));
-    return all.subList(0, Math.min(volts.size() + 2, all.size()));
+    all = new ArrayList<>(all.subList(0, Math.min(volts.size() + 2, all.size())));
+    if (mainsPowered) {
+      List<Scored> leading = new ArrayList<>();
+      for (Scored s : ranking.scored()) {
+        if (leading.size() >= LEADING_MOST
+            || s.probability < ranking.first().probability / LEADING_FACTOR) {
+          break;
+        }
+        leading.add(s);
+      }
+      Optional<ProbeAdvice> first = ohmsChecks.splitting(leading, ohms, meter);
+      if (first.isPresent()) {
+        ProbeAdvice check = first.get();
+        double bits = check.bits();
+        for (ProbeAdvice a : all) {
+          // Its bits as the other probes count them (over the same suspects), where it is listed.
+          if (a.kind() == Reading.Kind.OHMS
+              && Set.of(a.at(), a.to()).equals(Set.of(check.at(), check.to()))) {
+            bits = a.bits();
+          }
+        }
+        all.removeIf(
+            a ->
+                a.kind() == Reading.Kind.OHMS
+                    && Set.of(a.at(), a.to()).equals(Set.of(check.at(), check.to())));
+        all.add(
+            0,
+            new ProbeAdvice(check.at(), check.kind(), check.hz(), bits, check.why(), check.to()));
+      }
+    }
+    return all;
   }
 
   /** Volts readings at a part lead ({@code R2.1}) are readings at the lead's net. */

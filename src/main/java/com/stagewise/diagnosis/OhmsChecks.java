@@ -15,6 +15,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 
 /**
@@ -47,6 +48,12 @@ final class OhmsChecks {
   private static final double[] NODES = {0, Math.sqrt(3), -Math.sqrt(3)};
   private static final double[] NODE_WEIGHTS = {2.0 / 3, 1.0 / 6, 1.0 / 6};
   private static final int LISTED = 3;
+
+  /**
+   * The share of the leading suspects' uncertainty (entropy) an ohms check must resolve to be said
+   * to tell them apart (our choice: more than half of what there is to know).
+   */
+  static final double SPLIT_SHARE = 0.5;
 
   private final Stage stage;
   private final PowerOff healthy;
@@ -200,6 +207,40 @@ final class OhmsChecks {
         Comparator.comparingDouble((ProbeAdvice x) -> -x.bits())
             .thenComparing(x -> across(x.at(), x.to()).isEmpty() ? 1 : 0));
     return advice.subList(0, Math.min(LISTED, advice.size()));
+  }
+
+  /**
+   * Returns the ohms check that tells the leading suspects apart with the power off, when the best
+   * one resolves at least {@link #SPLIT_SHARE} of the uncertainty among them (its expected bits
+   * over the leading suspects alone, against their entropy); empty otherwise, or with fewer than
+   * two leading suspects. Its why says first that the unit is mains-powered.
+   */
+  Optional<ProbeAdvice> splitting(
+      List<Diagnoser.Scored> leading, List<Reading> taken, MeterSpec meter) {
+    if (leading.size() < 2) {
+      return Optional.empty();
+    }
+    double mass = leading.stream().mapToDouble(s -> s.probability).sum();
+    double[] prior = new double[leading.size()];
+    for (int h = 0; h < prior.length; h++) {
+      prior[h] = leading.get(h).probability / mass;
+    }
+    List<ProbeAdvice> checks = plan(leading, taken, meter);
+    // entropy() is in nats, the checks' gains in bits.
+    if (checks.isEmpty() || checks.get(0).bits() < SPLIT_SHARE * entropy(prior) / Math.log(2)) {
+      return Optional.empty();
+    }
+    ProbeAdvice best = checks.get(0);
+    return Optional.of(
+        new ProbeAdvice(
+            best.at(),
+            Reading.Kind.OHMS,
+            0,
+            best.bits(),
+            "The unit is mains-powered, and this check tells the leading suspects apart with the"
+                + " power off, so it comes first. "
+                + best.why(),
+            best.to()));
   }
 
   private static String pairKey(String a, String b) {

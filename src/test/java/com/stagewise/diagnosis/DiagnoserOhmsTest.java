@@ -60,6 +60,41 @@ class DiagnoserOhmsTest {
   }
 
   @Test
+  void mainsPoweredUnit_getsThePowerOffCheckFirst_whenItTellsTheLeadersApart() {
+    // Only the output read, at its lower limit: an open feedback resistor, a stuck output and a
+    // lifted output pin all put it there (textbook inverting amplifier). With the power off an
+    // open R15 leaves SUM and OUT unconnected (OL), while with R15 whole the meter reads R15 in
+    // parallel with the rest of the network (DESIGN.md power-off model): that check splits them.
+    ReadingSet low = new ReadingSet(MeterSpec.DEFAULT, List.of(Reading.dc("U3.1", -13.46)));
+    Diagnosis plain = Diagnoser.of(STAGE).diagnose(low);
+    Diagnosis mains = Diagnoser.of(STAGE).mainsPowered(true).diagnose(low);
+    assertThat(plain.nextProbes().get(0).kind()).isEqualTo(Reading.Kind.DC);
+    ProbeAdvice first = mains.nextProbes().get(0);
+    assertThat(first.kind()).isEqualTo(Reading.Kind.OHMS);
+    assertThat(java.util.Set.of(first.at(), first.to())).containsExactlyInAnyOrder("SUM", "OUT");
+    assertThat(first.why()).contains("mains-powered", "unplug", "discharge", "OL");
+    // A powered probe promised more bits; the rest stay sorted by bits, best first.
+    assertThat(first.bits()).isLessThan(plain.nextProbes().get(0).bits());
+    List<ProbeAdvice> rest = mains.nextProbes().subList(1, mains.nextProbes().size());
+    for (int i = 1; i < rest.size(); i++) {
+      assertThat(rest.get(i).bits()).isLessThanOrEqualTo(rest.get(i - 1).bits());
+    }
+    // The suspects themselves do not depend on how the unit is powered.
+    assertThat(mains.suspects()).isEqualTo(plain.suspects());
+  }
+
+  @Test
+  void mainsPoweredUnit_keepsVoltsFirst_whenNoOhmsCheckTellsTheLeadersApart() {
+    // The output near 0 V points at the negative rail (missing or low) or its pin: the resistor
+    // network reads the same with the power off whatever the rail did, so volts stay first.
+    ReadingSet rail = new ReadingSet(MeterSpec.DEFAULT, List.of(Reading.dc("OUT", 0.5)));
+    Diagnosis mains = Diagnoser.of(STAGE).mainsPowered(true).diagnose(rail);
+    assertThat(mains.suspects().get(0).fault()).isEqualTo("-15V:missing");
+    assertThat(mains.nextProbes().get(0).kind()).isEqualTo(Reading.Kind.DC);
+    assertThat(mains.nextProbes()).noneMatch(p -> p.why().contains("mains-powered"));
+  }
+
+  @Test
   void demoFileWithTheOhmsReading_leavesOneSuspect() {
     ReadingSet set =
         ReadingsSheet.read(

@@ -143,6 +143,25 @@ class DiagnosisAccuracyTest {
   }
 
   @Test
+  void powerOffReadings_areReportedBesideVolts_andDoNotMakeItWorse() throws IOException {
+    Score dc =
+        SCORES.containsKey("full DC readings")
+            ? SCORES.get("full DC readings")
+            : score("full DC readings", (c, st) -> c.full(st.meter()));
+    // Every pair of nets read with the power off (ngspice, the ohmmeter's error drawn as the truth
+    // generator draws it), beside the full and the partial DC readings.
+    Score ohms = score("full DC and power-off readings", (c, st) -> c.fullWithOhms(st.meter()));
+    Score partial =
+        score("partial DC and power-off readings", (c, st) -> c.partialWithOhms(st.meter()));
+    write();
+    assertThat(ohms.rate(ohms.firstOrGroup)).isGreaterThanOrEqualTo(dc.rate(dc.firstOrGroup));
+    assertThat((double) ohms.groupSizes / ohms.cases)
+        .isLessThanOrEqualTo((double) dc.groupSizes / dc.cases);
+    assertThat((double) ohms.healthyCalled / ohms.healthy).isGreaterThanOrEqualTo(0.95);
+    assertThat(partial.rate(partial.firstOrGroup)).isGreaterThan(0.5);
+  }
+
+  @Test
   void followingTheNextProbe_isolatesTheTruth() throws IOException {
     // Start from nothing, take the reading that nextProbes puts first (from the simulated unit),
     // and count readings until the true fault stands first with a group of its own.

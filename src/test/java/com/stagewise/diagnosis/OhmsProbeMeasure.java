@@ -16,6 +16,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.SplittableRandom;
 import java.util.stream.Stream;
 
@@ -25,12 +26,11 @@ import java.util.stream.Stream;
  * hand (it prints a table; not a unit test): {@code java -cp …
  * com.stagewise.diagnosis.OhmsProbeMeasure [every-Nth-case]}.
  *
- * <p>Volts readings come from the truth set (ngspice, meter error as drawn there). Ohms readings
- * are computed for the simulated unit (its drawn part values, the fault applied as the meter sees
- * it, the drifted value as simulated) by {@link PowerOff}, which agrees with ngspice within 0.1 %
- * on every fault and pair of nets of these stages ({@code PowerOffReferenceTest}); the meter's
- * error is drawn uniformly within ±(0.8 % + 3 counts) and rounded to the range's resolution, as the
- * truth set does for volts; beyond 60 MΩ the meter shows OL.
+ * <p>Volts readings come from the truth set (ngspice, meter error as drawn there); so do ohms
+ * readings between two nets (ngspice on the unit's power-off network, ohmmeter error drawn there).
+ * A point that is a package pin or a part lead reads as its net, except a lifted pin, which touches
+ * nothing with the power off (OL); a pin against its own net reads the leads' 0 Ω with the meter's
+ * error (±3 counts of 0.1 Ω).
  */
 public final class OhmsProbeMeasure {
   private static final int MAX_PROBES = 3;
@@ -45,6 +45,10 @@ public final class OhmsProbeMeasure {
     long[] probes = new long[2];
     int[] isolated = new int[2];
     SplittableRandom rnd = new SplittableRandom(20261202L);
+    // Per fault kind, with ohms allowed: units, within 3 probes, isolated by every reading of the
+    // unit at once (all DC, AC and ohms between nets), and first with a group of its own but not
+    // alone-first within 3 (a tie the readings cannot break, or more probes needed).
+    java.util.Map<String, int[]> kinds = new java.util.TreeMap<>();
     List<Path> files;
     try (Stream<Path> s = Files.list(TruthCases.FOLDER)) {
       files = s.filter(f -> f.toString().endsWith(".json")).sorted().toList();
@@ -69,9 +73,9 @@ public final class OhmsProbeMeasure {
                 stage.stage().rails().stream()
                     .map(r -> r.net())
                     .collect(java.util.stream.Collectors.toSet()));
-        double value = unit.has("faultValue") ? unit.get("faultValue").asDouble() : Double.NaN;
         PowerOff healthyUnit = PowerOff.of(unitStage);
-        PowerOff faulted = PowerOffFaults.faulted(unitStage, fault, value);
+        String lifted =
+            fault.kind() == FaultKind.LIFTED ? fault.subject() + "." + fault.pin() : null;
         for (int mode = 0; mode < 2; mode++) {
           boolean ohmsAllowed = mode == 1;
           List<Reading> taken = new ArrayList<>();
@@ -89,11 +93,11 @@ public final class OhmsProbeMeasure {
             for (ProbeAdvice advice : d.nextProbes()) {
               if (advice.kind() == Reading.Kind.OHMS) {
                 if (ohmsAllowed) {
-                  double r =
-                      faulted.ohms(
-                          PowerOffFaults.onFaulted(healthyUnit, advice.at()),
-                          PowerOffFaults.onFaulted(healthyUnit, advice.to()));
-                  next = Reading.ohms(advice.at(), advice.to(), shown(rnd, stage.meter(), r));
+                  next =
+                      Reading.ohms(
+                          advice.at(),
+                          advice.to(),
+                          truthOhms(c, healthyUnit, lifted, advice.at(), advice.to(), rnd, stage));
                   break;
                 }
                 continue;
@@ -120,6 +124,19 @@ public final class OhmsProbeMeasure {
               within[mode]++;
             }
           }
+          if (ohmsAllowed) {
+            String kind = c.fault().substring(c.fault().lastIndexOf(':') + 1);
+            int[] k = kinds.computeIfAbsent(kind, x -> new int[4]);
+            k[0]++;
+            k[1] += done && taken.size() <= MAX_PROBES ? 1 : 0;
+            List<Reading> everything = new ArrayList<>(c.dc());
+            everything.addAll(c.ac());
+            everything.addAll(c.ohms());
+            Suspect all =
+                diagnoser.diagnose(new ReadingSet(stage.meter(), everything), 5).suspects().get(0);
+            k[2] += all.fault().equals(c.fault()) && all.group().size() == 1 ? 1 : 0;
+            k[3] += done && taken.size() > MAX_PROBES ? 1 : 0;
+          }
         }
       }
       System.out.printf(
@@ -130,6 +147,13 @@ public final class OhmsProbeMeasure {
           within[0],
           within[1]);
     }
+    System.out.println(
+        "by fault kind (units, within 3 with ohms, isolated by every reading at once, isolated"
+            + " only after more than 3):");
+    kinds.forEach(
+        (kind, k) ->
+            System.out.printf(
+                Locale.ROOT, "  %-12s %4d %4d %4d %4d%n", kind, k[0], k[1], k[2], k[3]));
     for (int mode = 0; mode < 2; mode++) {
       System.out.printf(
           Locale.ROOT,
@@ -143,6 +167,32 @@ public final class OhmsProbeMeasure {
           isolated[mode],
           isolated[mode] == 0 ? 0.0 : (double) probes[mode] / isolated[mode]);
     }
+  }
+
+  /** Returns what the ohmmeter showed between two points of the simulated unit (see above). */
+  private static double truthOhms(
+      TruthCases.Case c,
+      PowerOff healthy,
+      String lifted,
+      String a,
+      String b,
+      SplittableRandom rnd,
+      TruthCases.StageCases stage) {
+    if (a.equals(lifted) || b.equals(lifted)) {
+      return Double.POSITIVE_INFINITY;
+    }
+    String netA = healthy.node(a).orElseThrow();
+    String netB = healthy.node(b).orElseThrow();
+    if (netA.equals(netB)) {
+      return shown(rnd, stage.meter(), 0);
+    }
+    for (Reading r : c.ohms()) {
+      if (Set.of(r.at(), r.to()).equals(Set.of(netA, netB))) {
+        return r.value();
+      }
+    }
+    throw new IllegalStateException(
+        "no ohms reading " + netA + " to " + netB + " in the truth set");
   }
 
   private static Stage unitStage(Stage stage, JsonNode unit) {

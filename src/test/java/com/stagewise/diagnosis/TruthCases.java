@@ -35,8 +35,10 @@ final class TruthCases {
    * @param dc every DC reading (all nets and used pins)
    * @param ac the AC readings, if the stage has an AC input
    * @param partial the test points of the partial set (the output and two or three pins)
+   * @param ohms the power-off readings between every pair of nets (ngspice, ohmmeter error drawn)
    */
-  record Case(String fault, List<Reading> dc, List<Reading> ac, Set<String> partial) {
+  record Case(
+      String fault, List<Reading> dc, List<Reading> ac, Set<String> partial, List<Reading> ohms) {
     ReadingSet full(MeterSpec meter) {
       return new ReadingSet(meter, dc);
     }
@@ -45,6 +47,18 @@ final class TruthCases {
       List<Reading> all = new ArrayList<>(dc);
       all.addAll(ac);
       return new ReadingSet(meter, all);
+    }
+
+    ReadingSet fullWithOhms(MeterSpec meter) {
+      List<Reading> all = new ArrayList<>(dc);
+      all.addAll(ohms);
+      return new ReadingSet(meter, all);
+    }
+
+    ReadingSet partialWithOhms(MeterSpec meter) {
+      List<Reading> some = new ArrayList<>(partial(meter).readings());
+      some.addAll(ohms);
+      return new ReadingSet(meter, some);
     }
 
     ReadingSet partial(MeterSpec meter) {
@@ -83,7 +97,16 @@ final class TruthCases {
           }
           Set<String> partial = new HashSet<>();
           c.get("partial").forEach(p -> partial.add(p.asText()));
-          cases.add(new Case(c.get("fault").asText(), dc, ac, partial));
+          List<Reading> ohms = new ArrayList<>();
+          for (JsonNode r : c.path("ohms")) {
+            JsonNode v = r.get("ohms");
+            ohms.add(
+                Reading.ohms(
+                    r.get("at").asText(),
+                    r.get("to").asText(),
+                    v.isTextual() ? Double.POSITIVE_INFINITY : v.asDouble()));
+          }
+          cases.add(new Case(c.get("fault").asText(), dc, ac, partial, ohms));
         }
         all.add(new StageCases(file.getFileName().toString(), stage, meter, cases));
       }

@@ -75,6 +75,16 @@ final class FaultSimulation {
    */
   record Reading(String at, String kind, double volts, double hz) {}
 
+  /**
+   * One power-off reading between two nets, as the truth generator computed it.
+   *
+   * @param at the first net
+   * @param to the second net
+   * @param exact ngspice's resistance in ohms ({@link Double#POSITIVE_INFINITY}: nothing connects)
+   * @param shown what the ohmmeter shows ({@link Double#POSITIVE_INFINITY}: OL)
+   */
+  record Ohms(String at, String to, double exact, double shown) {}
+
   /** One simulated unit. */
   record Case(
       String fault,
@@ -91,7 +101,8 @@ final class FaultSimulation {
       List<Reading> readings,
       List<String> partial,
       String start,
-      String solvedBy) {}
+      String solvedBy,
+      List<Ohms> ohms) {}
 
   /** A case ngspice could not solve. */
   record Dropped(String fault, long seed, int sample, String reason) {}
@@ -121,6 +132,22 @@ final class FaultSimulation {
     Stage unit = stage.withParts(randomParts).withRails(randomRails);
     FlatCircuit flat = FlatCircuit.of(unit, conditions);
     Double faultValue = apply(flat, stage, fault, rnd);
+    // Power off, before any floating node is tied (a tie stands for a bias current, which flows
+    // only
+    // with the power on). The meter's error is drawn from a random stream of its own, so that the
+    // volts readings stay exactly as they were before power-off readings joined.
+    SpicePowerOff.Answer off = SpicePowerOff.ofUnit(flat, stage);
+    SplittableRandom ohmsRnd = new SplittableRandom(seed ^ OHMS_STREAM);
+    List<Ohms> ohms = new ArrayList<>();
+    for (int k = 0; k < off.pairs().size(); k++) {
+      double exact = off.ohms()[k];
+      ohms.add(
+          new Ohms(
+              off.pairs().get(k)[0],
+              off.pairs().get(k)[1],
+              Double.isInfinite(exact) ? exact : significant(exact),
+              ohmmeterReading(ohmsRnd, OhmsMeterModel.HANDHELD, exact)));
+    }
     List<Tie> ties = tieFloating(flat, rnd);
     Map<String, Double> rails = new LinkedHashMap<>();
     for (Rail rail : stage.rails()) {
@@ -186,7 +213,8 @@ final class FaultSimulation {
         readings,
         List.copyOf(partial),
         startWords.toString(),
-        attempt.how());
+        attempt.how(),
+        ohms);
   }
 
   /** Device parameters drawn uniformly within the class's ranges (bias currents independently). */
@@ -412,6 +440,24 @@ final class FaultSimulation {
     double u = meter.uncertainty(volts);
     double shown = volts + uniform(rnd, -u, u);
     return roundTo(shown, meter.resolution(shown));
+  }
+
+  /** Salt of the random stream of the ohmmeter's errors ("ohms" in ASCII). */
+  static final long OHMS_STREAM = 0x6f686d73L;
+
+  /**
+   * Returns what the ohmmeter shows for a resistance: the error drawn uniformly within its
+   * accuracy, rounded to the range's resolution, OL ({@link Double#POSITIVE_INFINITY}) beyond the
+   * top range or where nothing connects; never below 0.
+   */
+  static double ohmmeterReading(SplittableRandom rnd, OhmsMeterModel meter, double ohms) {
+    if (!Double.isFinite(ohms) || ohms > meter.overRange()) {
+      return Double.POSITIVE_INFINITY;
+    }
+    double u = meter.uncertainty(ohms);
+    double shown = Math.max(0, ohms + uniform(rnd, -u, u));
+    double rounded = roundTo(shown, meter.resolution(shown));
+    return rounded > meter.overRange() ? Double.POSITIVE_INFINITY : rounded;
   }
 
   /** Returns what the scope shows for an amplitude: ±(3 % + 1 mV), to 0.1 mV, never negative. */

@@ -141,35 +141,11 @@ final class SpicePowerOff {
       } else {
         FaultSimulation.apply(flat, stage, fault, new SplittableRandom(1));
       }
-      // Power off: no sources, no op-amp sections; the nets they held stay as nodes. Junctions are
-      // open as the design notes' power-off model has them (the meter's test voltage does not turn
-      // them on); a shorted or leaky one is a resistor by now and stays.
-      flat.branches.removeIf(b -> b.kind().isJunction());
-      flat.driven.clear();
-      flat.acDrive.clear();
-      flat.hz = 0;
-      flat.sections.clear();
+      powerOff(flat);
       SpiceNetlist.Body body = SpiceNetlist.body(flat, false);
       List<String[]> pairs = pairs(stage, fault);
       pairsOf.add(pairs);
-      StringBuilder circuit = new StringBuilder();
-      circuit.append(body.lines());
-      // ngspice 39's own rshunt option crashes (malloc) on nodes held only by current sources, so
-      // the shunts are written out: 1 TΩ from every node to ground.
-      int shunt = 0;
-      for (String node : new java.util.TreeSet<>(body.spiceNodes().values())) {
-        if (!node.equals("0")) {
-          circuit.append("Rsh").append(++shunt).append(' ').append(node).append(" 0 1e12\n");
-        }
-      }
-      for (int k = 0; k < pairs.size(); k++) {
-        String a = spiceNode(body, flat, pairs.get(k)[0]);
-        String b = spiceNode(body, flat, pairs.get(k)[1]);
-        // Current flows from b through the source into a.
-        circuit.append("It").append(k).append(' ').append(b).append(' ').append(a);
-        circuit.append(" DC 0\n");
-      }
-      String key = circuit.toString();
+      String key = circuit(flat, body, pairs);
       Integer first = firstWith.get(key);
       if (first != null) {
         // The same network as an earlier fault (a stuck output, a missing rail …): same answers.
@@ -182,21 +158,100 @@ final class SpicePowerOff {
       files.put(
           file,
           "* " + fault + " (power off)\n" + SpiceNetlist.options(false) + "\n" + key + ".end\n");
-      control.append("echo @@fault ").append(f).append('\n');
-      control.append("source ").append(file).append('\n');
-      for (int k = 0; k < pairs.size(); k++) {
-        String a = spiceNode(body, flat, pairs.get(k)[0]);
-        String b = spiceNode(body, flat, pairs.get(k)[1]);
-        control.append("alter it").append(k).append(" dc=").append(SpiceNetlist.num(TEST_AMPS));
-        control.append("\nop\necho @@pair ").append(k).append('\n');
-        control.append("print ").append(difference(a, b)).append('\n');
-        control.append("alter it").append(k).append(" dc=0\ndestroy all\n");
-      }
-      control.append("remcirc\n");
+      control(control, f, file, flat, body, pairs);
     }
     control.append("echo @@end\nquit 0\n.endc\n.end\n");
     files.put(MAIN, control.toString());
     return new Deck(files, faults, pairsOf, sameAs);
+  }
+
+  /**
+   * Returns what an ohmmeter reads between every pair of nets of one simulated unit with the power
+   * off, as ngspice computes it: the unit's faulted circuit (its drawn part values, the fault as
+   * the truth generator applied it) with every source, op-amp section and junction removed, before
+   * any floating node is tied (a tie models a bias current, which flows only with the power on).
+   *
+   * @param unit the unit's flattened, faulted circuit (not changed)
+   * @param stage the stage, for its nets
+   * @return per pair {@code [a, b]} of nets (in the stage's order), the ohms; {@link
+   *     Double#POSITIVE_INFINITY} where nothing connects
+   */
+  static Answer ofUnit(FlatCircuit unit, Stage stage) {
+    FlatCircuit flat = unit.copy();
+    powerOff(flat);
+    SpiceNetlist.Body body = SpiceNetlist.body(flat, false);
+    List<String[]> pairs = pairs(stage, "healthy");
+    Map<String, String> files = new LinkedHashMap<>();
+    files.put(
+        "unit.cir",
+        "* unit (power off)\n"
+            + SpiceNetlist.options(false)
+            + "\n"
+            + circuit(flat, body, pairs)
+            + ".end\n");
+    StringBuilder control = new StringBuilder("* power-off resistances\n.control\nset numdgt=15\n");
+    control(control, 0, "unit.cir", flat, body, pairs);
+    control.append("echo @@end\nquit 0\n.endc\n.end\n");
+    files.put(MAIN, control.toString());
+    Deck deck = new Deck(files, List.of("unit"), List.of(pairs), List.of(0));
+    return parse(Ngspice.runFiles(files, MAIN), deck).get(0);
+  }
+
+  /**
+   * Turns a flattened circuit into its power-off network: no sources, no op-amp sections (the nets
+   * they held stay as nodes). Junctions are open as the design notes' power-off model has them (the
+   * meter's test voltage does not turn them on); a shorted or leaky one is a resistor by now and
+   * stays.
+   */
+  private static void powerOff(FlatCircuit flat) {
+    flat.branches.removeIf(b -> b.kind().isJunction());
+    flat.driven.clear();
+    flat.acDrive.clear();
+    flat.hz = 0;
+    flat.sections.clear();
+  }
+
+  /** Returns the circuit's element lines: the network, the shunts and one test source per pair. */
+  private static String circuit(FlatCircuit flat, SpiceNetlist.Body body, List<String[]> pairs) {
+    StringBuilder circuit = new StringBuilder();
+    circuit.append(body.lines());
+    // ngspice 39's own rshunt option crashes (malloc) on nodes held only by current sources, so
+    // the shunts are written out: 1 TΩ from every node to ground.
+    int shunt = 0;
+    for (String node : new java.util.TreeSet<>(body.spiceNodes().values())) {
+      if (!node.equals("0")) {
+        circuit.append("Rsh").append(++shunt).append(' ').append(node).append(" 0 1e12\n");
+      }
+    }
+    for (int k = 0; k < pairs.size(); k++) {
+      String a = spiceNode(body, flat, pairs.get(k)[0]);
+      String b = spiceNode(body, flat, pairs.get(k)[1]);
+      // Current flows from b through the source into a.
+      circuit.append("It").append(k).append(' ').append(b).append(' ').append(a);
+      circuit.append(" DC 0\n");
+    }
+    return circuit.toString();
+  }
+
+  /** Appends the control lines that solve every pair of one circuit file, one test current each. */
+  private static void control(
+      StringBuilder control,
+      int index,
+      String file,
+      FlatCircuit flat,
+      SpiceNetlist.Body body,
+      List<String[]> pairs) {
+    control.append("echo @@fault ").append(index).append('\n');
+    control.append("source ").append(file).append('\n');
+    for (int k = 0; k < pairs.size(); k++) {
+      String a = spiceNode(body, flat, pairs.get(k)[0]);
+      String b = spiceNode(body, flat, pairs.get(k)[1]);
+      control.append("alter it").append(k).append(" dc=").append(SpiceNetlist.num(TEST_AMPS));
+      control.append("\nop\necho @@pair ").append(k).append('\n');
+      control.append("print ").append(difference(a, b)).append('\n');
+      control.append("alter it").append(k).append(" dc=0\ndestroy all\n");
+    }
+    control.append("remcirc\n");
   }
 
   private static String spiceNode(SpiceNetlist.Body body, FlatCircuit flat, String point) {

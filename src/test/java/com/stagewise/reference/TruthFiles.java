@@ -54,6 +54,10 @@ final class TruthFiles {
     meter.put("percent", MeterModel.HANDHELD.percent());
     meter.put("counts", MeterModel.HANDHELD.counts());
     meter.put("displayCounts", MeterModel.HANDHELD.displayCounts());
+    meter
+        .putObject("ohms")
+        .put("percent", OhmsMeterModel.HANDHELD.percent())
+        .put("counts", OhmsMeterModel.HANDHELD.counts());
     ObjectNode scope = head.putObject("scope");
     scope.put("percent", FaultSimulation.SCOPE_FRACTION * 100);
     scope.put("volts", FaultSimulation.SCOPE_VOLTS);
@@ -109,6 +113,15 @@ final class TruthFiles {
         one.put("ac", r.volts()).put("hz", r.hz());
       }
     }
+    ArrayNode ohms = node.putArray("ohms");
+    for (FaultSimulation.Ohms o : c.ohms()) {
+      ObjectNode one = ohms.addObject().put("at", o.at()).put("to", o.to());
+      if (Double.isInfinite(o.shown())) {
+        one.put("ohms", "OL");
+      } else {
+        one.put("ohms", o.shown());
+      }
+    }
     ArrayNode partial = node.putArray("partial");
     c.partial().forEach(partial::add);
     ObjectNode exact = node.putObject("exact");
@@ -122,6 +135,15 @@ final class TruthFiles {
                   ac.putObject(net)
                       .put("amplitude", FaultSimulation.significant(p.amplitude()))
                       .put("phaseDegrees", FaultSimulation.significant(p.phaseDegrees())));
+    }
+    ObjectNode exactOhms = exact.putObject("ohms");
+    for (FaultSimulation.Ohms o : c.ohms()) {
+      String key = o.at() + " to " + o.to();
+      if (Double.isInfinite(o.exact())) {
+        exactOhms.put(key, "open");
+      } else {
+        exactOhms.put(key, o.exact());
+      }
     }
     ObjectNode unit = node.putObject("unit");
     ObjectNode parts = unit.putObject("parts");

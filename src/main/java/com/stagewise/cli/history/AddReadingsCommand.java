@@ -55,13 +55,21 @@ final class AddReadingsCommand extends HistorySubcommand {
       description = "The most suspects to keep (default ${DEFAULT-VALUE}).")
   int top;
 
+  @Option(
+      names = "--mains-powered",
+      description =
+          "The unit is mains-powered: when a power-off (ohms) check tells the leading suspects"
+              + " apart, it is proposed first.")
+  boolean mainsPowered;
+
   @Override
   void run(Casework work, PrintWriter out) {
     CaseAtHand at = work.caseAtHand(target.caseId);
     Stage stage = stage(work, at);
     ReadingSet set = ReadingsSheet.read(readings, stage);
     Map<String, Integer> counts = work.shopCounts(at.boardModel());
-    StoredReadings stored = work.addReadings(at.id(), Diagnoser.of(stage, counts), set, top);
+    StoredReadings stored =
+        work.addReadings(at.id(), Diagnoser.of(stage, counts).mainsPowered(mainsPowered), set, top);
     SuspectListRecord suspects = stored.suspectList();
     if (json()) {
       out.println(HistoryJson.storedReadings(stored.readings(), suspects));

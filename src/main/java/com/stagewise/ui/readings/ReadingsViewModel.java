@@ -184,6 +184,7 @@ public final class ReadingsViewModel {
     probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
     BoardModel boardModel = bench.boardModelProperty().get();
     Casework casework = bench.casework();
+    boolean mains = bench.mainsPoweredProperty().get();
     List<Reading> taken = List.copyOf(bench.readings());
     bench
         .tasks()
@@ -191,7 +192,7 @@ public final class ReadingsViewModel {
             "Working out the expected voltages and the fault list",
             () -> {
               ExpectedVolts volts = ExpectedVolts.of(stage);
-              Diagnoser d = casework.diagnoser(stage, boardModel);
+              Diagnoser d = casework.diagnoser(stage, boardModel).mainsPowered(mains);
               Diagnosis diagnosis =
                   taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
               return new Prepared(stage, volts, d, diagnosis);
@@ -297,13 +298,15 @@ public final class ReadingsViewModel {
     Diagnoser ready = diagnoserStage == stage ? diagnoser : null;
     BoardModel boardModel = bench.boardModelProperty().get();
     Casework casework = bench.casework();
+    boolean mains = bench.mainsPoweredProperty().get();
     thinking.set(true);
     bench
         .tasks()
         .run(
             "Ranking the suspects",
             () -> {
-              Diagnoser d = ready != null ? ready : casework.diagnoser(stage, boardModel);
+              Diagnoser d =
+                  ready != null ? ready : casework.diagnoser(stage, boardModel).mainsPowered(mains);
               Diagnosis diagnosis =
                   casework
                       .addReadings(

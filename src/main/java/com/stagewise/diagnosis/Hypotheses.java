@@ -1,0 +1,128 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.Stage;
+import com.stagewise.solver.Conditions;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Builds the hypotheses of a stage: every fault of the catalogue with its prior and the predictions
+ * of its scenarios (a drifted value on a grid, interpolated between grid points, under a
+ * log-uniform prior).
+ */
+final class Hypotheses {
+  /** Grid points whose spread is computed; the others borrow it from the nearest of these. */
+  private static final int SPREAD_EVERY = 8;
+
+  /** Interpolated steps between neighbouring grid points of a drifted value. */
+  private static final int SUB_STEPS = 4;
+
+  private Hypotheses() {}
+
+  /**
+   * Returns every hypothesis of the catalogue with its prior and the predictions of its scenarios,
+   * the inputs held at {@code inputs} (the sheet's levels, or the measured ones).
+   */
+  static List<Diagnoser.Hypothesis> build(
+      Stage stage,
+      TestPoints points,
+      FaultCatalogue.Entries catalogue,
+      Map<String, Double> priors,
+      Map<String, Double> inputs) {
+    Conditions conditions = Conditions.NOMINAL;
+    // Predictions start from the middle of each class's ranges (bias current, headroom), where a
+    // random working part is most likely to sit; the solver's nominal takes bias as zero.
+    for (com.stagewise.circuit.Amplifier amp : stage.amplifiers()) {
+      com.stagewise.circuit.DeviceClass type = amp.deviceClass();
+      double bias = mid(type.biasCurrent());
+      conditions =
+          conditions.withDevice(
+              amp.ref(),
+              com.stagewise.solver.DeviceParams.nominal(type)
+                  .withBias(bias, bias)
+                  .withHeadroom(mid(type.headroomLow()), mid(type.headroomHigh())));
+    }
+    for (Map.Entry<String, Double> e : inputs.entrySet()) {
+      conditions = conditions.withDriven(e.getKey(), e.getValue());
+    }
+    Predictor predictor = new Predictor(points, stage);
+    List<Diagnoser.Hypothesis> hypotheses = new ArrayList<>();
+    for (Fault fault : catalogue.faults()) {
+      List<Scenario> scenarios = FaultModel.scenarios(stage, conditions, fault);
+      List<Prediction> predictions = predictAll(predictor, scenarios);
+      hypotheses.add(new Diagnoser.Hypothesis(fault, priors.get(fault.id()), predictions));
+    }
+    return hypotheses;
+  }
+
+  private static double mid(com.stagewise.circuit.Range range) {
+    return (range.low() + range.high()) / 2;
+  }
+
+  private static List<Prediction> predictAll(Predictor predictor, List<Scenario> scenarios) {
+    boolean grid = scenarios.size() > 1 && scenarios.stream().allMatch(Scenario::onGrid);
+    if (!grid) {
+      List<Prediction> out = new ArrayList<>();
+      for (Scenario s : scenarios) {
+        out.addAll(predictor.predict(s, true));
+      }
+      return out;
+    }
+    int n = scenarios.size();
+    List<List<Prediction>> raw = new ArrayList<>();
+    for (int i = 0; i < n; i++) {
+      boolean spread = i % SPREAD_EVERY == 0 || i == n - 1;
+      raw.add(predictor.predict(scenarios.get(i), spread));
+    }
+    // Borrow the spread of the nearest grid point that has one.
+    for (int i = 0; i < n; i++) {
+      if (i % SPREAD_EVERY == 0 || i == n - 1) {
+        continue;
+      }
+      int lower = i - i % SPREAD_EVERY;
+      int upper = Math.min(lower + SPREAD_EVERY, n - 1);
+      int from = i - lower <= upper - i ? lower : upper;
+      List<Prediction> borrowed = new ArrayList<>();
+      for (int k = 0; k < raw.get(i).size(); k++) {
+        Prediction p = raw.get(i).get(k);
+        Prediction donor = raw.get(from).get(Math.min(k, raw.get(from).size() - 1));
+        borrowed.add(
+            new Prediction(
+                p.weight(),
+                p.dcMean(),
+                donor.dcSd(),
+                p.acMean(),
+                donor.acSd(),
+                p.value(),
+                p.label(),
+                p.states()));
+      }
+      raw.set(i, borrowed);
+    }
+    boolean simple = raw.stream().allMatch(list -> list.size() == 1);
+    List<Prediction> out = new ArrayList<>();
+    if (!simple) {
+      raw.forEach(out::addAll);
+      double total = out.stream().mapToDouble(Prediction::weight).sum();
+      return out.stream().map(p -> p.withWeight(p.weight() / total)).toList();
+    }
+    // A log-uniform prior over the drifted value: equal weight per interpolated step.
+    int steps = (n - 1) * SUB_STEPS + 1;
+    for (int i = 0; i < n - 1; i++) {
+      Prediction a = raw.get(i).get(0);
+      Prediction b = raw.get(i + 1).get(0);
+      for (int k = 0; k < SUB_STEPS; k++) {
+        double t = (double) k / SUB_STEPS;
+        // Geometric between drifted values; linear where a grid holds 0 (a trimmer's end).
+        double value =
+            a.value() > 0 && b.value() > 0
+                ? a.value() * Math.pow(b.value() / a.value(), t)
+                : a.value() + (b.value() - a.value()) * t;
+        out.add(a.toward(b, t, 1.0 / steps, value));
+      }
+    }
+    out.add(raw.get(n - 1).get(0).withWeight(1.0 / steps));
+    return out;
+  }
+}
