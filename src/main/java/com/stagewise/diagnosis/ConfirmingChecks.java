@@ -6,6 +6,8 @@ import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
 import com.stagewise.circuit.value.ZenerMarking;
+import com.stagewise.solver.OhmsPrediction;
+import com.stagewise.solver.PowerOff;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
@@ -71,6 +73,43 @@ final class ConfirmingChecks {
 
   /** Returns how to confirm a fault at the bench, with the power off where ohms are read. */
   String of(Fault fault, OptionalDouble estimate) {
+    String check = atTheBench(fault, estimate);
+    String inCircuit = inCircuit(fault, estimate);
+    return inCircuit.isEmpty() ? check : check + " " + inCircuit;
+  }
+
+  /**
+   * Returns, for a resistor open, shorted or drifted, what the ohmmeter reads across it in circuit
+   * with the power off (no leg lifted: the rest of the network in parallel), good and with the
+   * fault: the same power-off predictions the next probes and the ohms readings use ({@link
+   * PowerOffFaults}); empty for other faults, or a drifted part whose value is not estimated.
+   */
+  String inCircuit(Fault fault, OptionalDouble estimate) {
+    String s = fault.subject();
+    boolean drift = fault.kind() == FaultKind.HIGH || fault.kind() == FaultKind.LOW;
+    if (partKind(s) != PartKind.RESISTOR
+        || stage.part(s).isEmpty()
+        || !(fault.kind() == FaultKind.OPEN || fault.kind() == FaultKind.SHORT || drift)
+        || drift && estimate.isEmpty()) {
+      return "";
+    }
+    String a = s + ".1";
+    String b = s + ".2";
+    PowerOff healthy = PowerOff.of(stage);
+    OhmsPrediction good =
+        healthy.predict(PowerOffFaults.onFaulted(healthy, a), PowerOffFaults.onFaulted(healthy, b));
+    OhmsPrediction bad =
+        PowerOffFaults.predict(stage, fault, drift ? estimate.getAsDouble() : Double.NaN, a, b);
+    return "Before lifting a leg: in circuit, with the power off, "
+        + s
+        + " reads "
+        + OhmsChecks.text(good)
+        + " when good (the rest of the network in parallel) and "
+        + OhmsChecks.text(bad)
+        + " with this fault.";
+  }
+
+  private String atTheBench(Fault fault, OptionalDouble estimate) {
     String s = fault.subject();
     String powerOff = "Power off, unplug the unit and discharge its capacitors; then ";
     if (partKind(s).isJunction()

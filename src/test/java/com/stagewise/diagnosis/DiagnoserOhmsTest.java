@@ -107,6 +107,23 @@ class DiagnoserOhmsTest {
   }
 
   @Test
+  void confirmingCheck_saysWhatTheOhmmeterReadsInCircuit_goodAndFaulty() {
+    // With the power off the input IN floats (DESIGN.md power-off model), so nothing sits in
+    // parallel with R15 or R14: in circuit each reads its own value, 47 kΩ ±1 % and 10 kΩ ±1 %
+    // (series–parallel rules, any circuits textbook); open reads OL, shorted about 0 Ω.
+    ReadingSet open =
+        ReadingsSheet.read(
+            Path.of("data/readings/larkspur-sm8-line-driver.no-feedback-ohms.readings.json"),
+            STAGE);
+    assertThat(Diagnoser.of(STAGE).diagnose(open).confirmingCheck())
+        .contains("in circuit", "R15 reads 47 kΩ (46.5 kΩ to 47.5 kΩ) when good", "OL with this");
+    Diagnosis shorted =
+        Diagnoser.of(STAGE).diagnose(plus(VOLTS, Reading.ohms("R14.1", "R14.2", 0.4)));
+    assertThat(shorted.confirmingCheck())
+        .contains("R14 reads 10 kΩ (9.9 kΩ to 10.1 kΩ) when good", "about 0 Ω with this fault");
+  }
+
+  @Test
   void nearZeroOhmsAcrossTheInputResistor_pointsToItsShort() {
     Diagnosis d = Diagnoser.of(STAGE).diagnose(plus(VOLTS, Reading.ohms("R14.1", "R14.2", 0.4)));
     assertThat(d.suspects().get(0).fault()).isEqualTo("R14:short");
