@@ -29,7 +29,7 @@ class JunctionInputCommandTest {
           zener without a voltage | data/stages/halden-psu30-set-point.stage.json | "value": "6V2", |  | parts[1].value | zener's voltage | 5V1
           LED without a colour | data/stages/brannock-tc4-over-temp.stage.json | "colour": "red", |  | parts[3].colour | LED's colour | red
           trimmer position 1.7 | data/stages/quillon-lx2-offset-null.stage.json | "position": 0.5 | "position": 1.7 | position | between 0 and 1 | 1.7
-          diode with one net | data/stages/ostrander-dl5-peak-rectifier.stage.json | "nets": ["U7_OUT", "CH2_RECT"] | "nets": ["U7_OUT"] | nets | 2 | D7
+          diode with one net | data/stages/ostrander-dl5-peak-rectifier.stage.json | "nets": ["U7_OUT", "CH2_RECT"] | "nets": ["U7_OUT"] | parts[0].nets | two net names [anode, cathode] | D7
           """)
   void brokenPart_exits2_namingTheFileFieldAndWhatToWrite(
       String what,
