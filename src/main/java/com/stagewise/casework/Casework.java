@@ -237,6 +237,38 @@ public final class Casework {
 
   // ---- notes, actions, close-out ----------------------------------------------------------------
 
+  /**
+   * Strikes out readings of a case, restores struck ones and adds the readings that replace them,
+   * then stores the suspect list of the readings that stand, all in one transaction. Nothing is
+   * deleted: a struck reading stays in the history marked with when it was struck. A correction is
+   * a strike plus the right reading.
+   *
+   * @param standing every reading of the case that stands after the change, the added ones
+   *     included; the diagnosis uses only these (none standing: no suspect list is stored)
+   * @param strike ids of the readings to strike out
+   * @param restore ids of struck readings to stand again
+   * @param added the readings to add (the right values)
+   * @throws InvalidInputException if a reading id is not one of the case's readings, or an added
+   *     reading is bad; nothing is then written
+   */
+  public RevisedReadings reviseReadings(
+      String caseId,
+      Diagnoser diagnoser,
+      ReadingSet standing,
+      List<String> strike,
+      List<String> restore,
+      List<Reading> added,
+      int top) {
+    Diagnosis diagnosis = standing.readings().isEmpty() ? null : diagnoser.diagnose(standing, top);
+    Instant now = clock.instant();
+    List<StoredReading> stored = StoredText.readings(added, standing.meter(), caseId, now);
+    SuspectListRecord list =
+        diagnosis == null ? null : StoredText.suspectList(diagnosis, caseId, now, version());
+    List<StoredReading> changed =
+        store.cases().reviseReadings(caseId, new Cases.Revision(strike, restore, stored), list);
+    return new RevisedReadings(changed, stored, list, diagnosis);
+  }
+
   /** Adds a time-stamped note to a case and returns it. */
   public CaseNote addNote(String caseId, String text) {
     return store.cases().addNote(caseId, text);

@@ -145,6 +145,20 @@ public final class BundleCheck {
       declare(at, r.id(), READING);
       Checks.reading(source, at, r);
       time(at + ".takenAt", r.takenAt());
+      if (r.struckAt() != null) {
+        time(at + ".struckAt", r.struckAt());
+      }
+      time(at + ".updatedAt", r.updatedAt());
+      if (r.updatedAt().isBefore(r.takenAt())) {
+        throw new InvalidInputException(
+            source,
+            at + ".updatedAt",
+            "the reading was changed ("
+                + r.updatedAt()
+                + ") before it was taken ("
+                + r.takenAt()
+                + "); expected a time at or after takenAt");
+      }
     }
     for (int i = 0; i < b.suspectLists().size(); i++) {
       SuspectListRecord s = b.suspectLists().get(i);

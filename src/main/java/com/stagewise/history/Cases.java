@@ -61,6 +61,22 @@ public interface Cases {
    */
   void addReadings(String caseId, List<StoredReading> readings, SuspectListRecord suspectList);
 
+  /**
+   * Strikes out readings of a case and restores struck ones, adds the readings that replace them,
+   * and stores the suspect list of the readings that then stand, in one transaction. Nothing is
+   * deleted: a struck reading stays in the history, marked with when it was struck, and is left out
+   * of later diagnoses; a correction is a strike plus a new reading.
+   *
+   * @param revision what to strike, restore and add
+   * @param suspectList the diagnosis of the readings that stand afterwards, or null if none was
+   *     computed
+   * @return the struck and restored readings as now stored, strikes first, each in the order given
+   * @throws com.stagewise.circuit.InvalidInputException if the case is unknown, a reading id is not
+   *     one of the case's readings, or an added reading is bad; nothing is then written
+   */
+  List<StoredReading> reviseReadings(
+      String caseId, Revision revision, SuspectListRecord suspectList);
+
   /** Adds a time-stamped note to a case and returns it. */
   CaseNote addNote(String caseId, String text);
 
@@ -82,6 +98,21 @@ public interface Cases {
    * confirmed each fault id, most often first; empty for an unknown model.
    */
   Map<String, Integer> confirmedFaultCounts(String boardModel);
+
+  /**
+   * A change to a case's readings: readings struck out, struck ones standing again, new ones.
+   *
+   * @param strike ids of readings to strike out (one already struck keeps its time)
+   * @param restore ids of struck readings to stand again (one that stands is left as it is)
+   * @param added new readings, e.g. the right value in place of a mistyped one
+   */
+  record Revision(List<String> strike, List<String> restore, List<StoredReading> added) {
+    public Revision {
+      strike = List.copyOf(strike);
+      restore = List.copyOf(restore);
+      added = List.copyOf(added);
+    }
+  }
 
   /**
    * Everything a close-out records.

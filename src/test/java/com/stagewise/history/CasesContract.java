@@ -151,6 +151,92 @@ public abstract class CasesContract extends StoreContract {
     assertThat(store.cases().confirmedFaultCounts("psu-30")).isEqualTo(Map.of("R2:open", 1));
   }
 
+  private StoredReading dc(String caseId, String at, double volts) {
+    return new StoredReading(
+        HistoryStore.newId(),
+        caseId,
+        at,
+        ReadingKind.DC,
+        volts,
+        null,
+        null,
+        "6000-count meter",
+        clock.instant());
+  }
+
+  @Test
+  void reviseReadings_correction_keepsTheStruckReadingMarkedWithWhen() {
+    BoardModel model = store.units().boardModel("PSU-30", "Harbour Instruments");
+    Unit unit = store.units().add("H-0043", model.id(), "");
+    RepairCase c = store.cases().open(unit.id(), "no output");
+    StoredReading typo = dc(c.id(), "U1.8", 1.19);
+    store.cases().addReadings(c.id(), List.of(typo), null);
+    clock.advanceMillis(60_000);
+    StoredReading right = dc(c.id(), "U1.8", 11.9);
+    List<StoredReading> changed =
+        store
+            .cases()
+            .reviseReadings(
+                c.id(), new Cases.Revision(List.of(typo.id()), List.of(), List.of(right)), null);
+
+    assertThat(changed).hasSize(1);
+    assertThat(changed.get(0).struckAt()).isEqualTo(clock.instant());
+    assertThat(changed.get(0).updatedAt()).isEqualTo(clock.instant());
+    List<StoredReading> kept = store.cases().caseFile(c.id()).orElseThrow().readings();
+    // Nothing is deleted: the mistyped reading is still there, struck, beside the right one.
+    assertThat(kept).extracting(StoredReading::value).containsExactly(1.19, 11.9);
+    assertThat(kept.get(0).struck()).isTrue();
+    assertThat(kept.get(0).sameTaking(typo)).isTrue();
+    assertThat(kept.get(1).struck()).isFalse();
+  }
+
+  @Test
+  void reviseReadings_restore_undoesTheStrike() {
+    BoardModel model = store.units().boardModel("PSU-30", "Harbour Instruments");
+    Unit unit = store.units().add("H-0044", model.id(), "");
+    RepairCase c = store.cases().open(unit.id(), "no output");
+    StoredReading r = dc(c.id(), "OUT", 13.4);
+    store.cases().addReadings(c.id(), List.of(r), null);
+    store
+        .cases()
+        .reviseReadings(c.id(), new Cases.Revision(List.of(r.id()), List.of(), List.of()), null);
+    clock.advanceMillis(5_000);
+    List<StoredReading> back =
+        store
+            .cases()
+            .reviseReadings(
+                c.id(), new Cases.Revision(List.of(), List.of(r.id()), List.of()), null);
+
+    assertThat(back.get(0).struck()).isFalse();
+    assertThat(back.get(0).updatedAt()).isEqualTo(clock.instant());
+    assertThat(store.cases().caseFile(c.id()).orElseThrow().readings().get(0).struck()).isFalse();
+  }
+
+  @Test
+  void reviseReadings_aReadingOfAnotherCase_isRefusedAndNothingChanges() {
+    BoardModel model = store.units().boardModel("PSU-30", "Harbour Instruments");
+    Unit unit = store.units().add("H-0045", model.id(), "");
+    RepairCase first = store.cases().open(unit.id(), "no output");
+    RepairCase second = store.cases().open(unit.id(), "hum");
+    StoredReading other = dc(first.id(), "OUT", 13.4);
+    store.cases().addReadings(first.id(), List.of(other), null);
+    StoredReading added = dc(second.id(), "OUT", 0.2);
+
+    assertThatThrownBy(
+            () ->
+                store
+                    .cases()
+                    .reviseReadings(
+                        second.id(),
+                        new Cases.Revision(List.of(other.id()), List.of(), List.of(added)),
+                        null))
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("reading");
+    assertThat(store.cases().caseFile(second.id()).orElseThrow().readings()).isEmpty();
+    assertThat(store.cases().caseFile(first.id()).orElseThrow().readings().get(0).struck())
+        .isFalse();
+  }
+
   @Test
   void closeCase_twice_isRefused() {
     BoardModel model = store.units().boardModel("PSU-30", "");

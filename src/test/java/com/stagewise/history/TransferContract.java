@@ -6,7 +6,9 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.HistoryBundle;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import java.time.Clock;
 import java.util.List;
@@ -32,6 +34,44 @@ public abstract class TransferContract extends StoreContract {
       ImportReport again = other.transfer().importBundle(bundle, "bundle.json");
       assertThat(again.added()).isZero();
       assertThat(again.unchanged()).isEqualTo(5);
+    }
+  }
+
+  @Test
+  void aStruckReading_travelsStruck_andTheLaterStrikeOrRestoreWins() {
+    BoardModel model = store.units().boardModel("MX-8", "Northfield");
+    Unit unit = store.units().add("NF-3", model.id(), "");
+    RepairCase c = store.cases().open(unit.id(), "hum");
+    StoredReading r =
+        new StoredReading(
+            HistoryStore.newId(),
+            c.id(),
+            "OUT",
+            ReadingKind.DC,
+            1.19,
+            null,
+            null,
+            "m",
+            clock.instant());
+    store.cases().addReadings(c.id(), List.of(r), null);
+    HistoryBundle standing = store.transfer().export(new ExportSelection.All(), "test");
+    clock.advanceMillis(1_000);
+    store
+        .cases()
+        .reviseReadings(c.id(), new Cases.Revision(List.of(r.id()), List.of(), List.of()), null);
+    HistoryBundle struck = store.transfer().export(new ExportSelection.All(), "test");
+    try (HistoryStore other = openStore(clock)) {
+      other.transfer().importBundle(standing, "standing.json");
+      ImportReport report = other.transfer().importBundle(struck, "struck.json");
+      assertThat(report.updated()).isEqualTo(1);
+      assertThat(report.conflicts()).isEmpty();
+      StoredReading there = other.cases().caseFile(c.id()).orElseThrow().readings().get(0);
+      assertThat(there.struck()).isTrue();
+      assertThat(there.struckAt()).isEqualTo(clock.instant());
+      // The older copy that still stands does not undo the strike.
+      ImportReport older = other.transfer().importBundle(standing, "standing.json");
+      assertThat(other.cases().caseFile(c.id()).orElseThrow().readings().get(0).struck()).isTrue();
+      assertThat(older.updated()).isZero();
     }
   }
 

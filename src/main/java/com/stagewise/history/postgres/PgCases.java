@@ -173,19 +173,7 @@ final class PgCases implements Cases {
   @Override
   public void addReadings(
       String caseId, List<StoredReading> readings, SuspectListRecord suspectList) {
-    for (int i = 0; i < readings.size(); i++) {
-      StoredReading r = readings.get(i);
-      Checks.reading(SOURCE, "readings[" + i + "]", r);
-      if (!r.caseId().equals(caseId)) {
-        throw new IllegalArgumentException("reading " + r.id() + " belongs to another case");
-      }
-    }
-    if (suspectList != null) {
-      Checks.suspectList(SOURCE, "suspects", suspectList);
-      if (!suspectList.caseId().equals(caseId)) {
-        throw new IllegalArgumentException("the suspect list belongs to another case");
-      }
-    }
+    checkAdded(caseId, readings, suspectList);
     history.write(
         "store readings",
         c -> {
@@ -200,6 +188,72 @@ final class PgCases implements Cases {
             return null;
           }
         });
+  }
+
+  private static void checkAdded(
+      String caseId, List<StoredReading> readings, SuspectListRecord suspectList) {
+    for (int i = 0; i < readings.size(); i++) {
+      StoredReading r = readings.get(i);
+      Checks.reading(SOURCE, "readings[" + i + "]", r);
+      if (!r.caseId().equals(caseId)) {
+        throw new IllegalArgumentException("reading " + r.id() + " belongs to another case");
+      }
+    }
+    if (suspectList != null) {
+      Checks.suspectList(SOURCE, "suspects", suspectList);
+      if (!suspectList.caseId().equals(caseId)) {
+        throw new IllegalArgumentException("the suspect list belongs to another case");
+      }
+    }
+  }
+
+  @Override
+  public List<StoredReading> reviseReadings(
+      String caseId, Revision revision, SuspectListRecord suspectList) {
+    Objects.requireNonNull(revision, "revision");
+    checkAdded(caseId, revision.added(), suspectList);
+    Instant now = history.clock().instant();
+    return history.write(
+        "strike out readings",
+        c -> {
+          try (Rows rows = new Rows(c)) {
+            Require.repairCase(rows, caseId);
+            List<StoredReading> changed = new ArrayList<>();
+            for (String id : revision.strike()) {
+              changed.add(strike(rows, caseId, id, true, now));
+            }
+            for (String id : revision.restore()) {
+              changed.add(strike(rows, caseId, id, false, now));
+            }
+            for (StoredReading r : revision.added()) {
+              rows.insert(r);
+            }
+            if (suspectList != null) {
+              rows.insert(suspectList);
+            }
+            return changed;
+          }
+        });
+  }
+
+  /** Strikes out (or restores) one reading of the case and returns it as now stored. */
+  private static StoredReading strike(
+      Rows rows, String caseId, String readingId, boolean struck, Instant now) throws SQLException {
+    StoredReading r =
+        rows.first(Records.READING + " WHERE id = ?", Records::reading, readingId)
+            .filter(found -> found.caseId().equals(caseId))
+            .orElseThrow(
+                () ->
+                    new InvalidInputException(
+                        SOURCE,
+                        "reading",
+                        "the case has no reading with the id " + Checks.quote(readingId)));
+    if (r.struck() == struck) {
+      return r;
+    }
+    StoredReading changed = struck ? r.struckOut(now) : r.restored(now);
+    rows.replaceStrike(changed);
+    return changed;
   }
 
   @Override

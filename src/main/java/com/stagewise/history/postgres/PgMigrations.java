@@ -22,7 +22,8 @@ final class PgMigrations {
           "V1__core_tables.sql",
           "V2__full_text_search.sql",
           "V3__change_numbers.sql",
-          "V4__ohms_readings.sql");
+          "V4__ohms_readings.sql",
+          "V5__struck_readings.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

@@ -6,6 +6,11 @@ import java.util.Objects;
 /**
  * One reading as taken during a case.
  *
+ * <p>A reading is never deleted: one that was mistyped is struck out ({@code struckAt} says when),
+ * stays in the history marked as struck, and is left out of every later diagnosis. A strike can be
+ * undone (the reading stands again); {@code updatedAt} says when the reading was last struck or
+ * restored, so that a strike travels between benches like any other change.
+ *
  * @param id stable id (UUID)
  * @param caseId the case it was taken in
  * @param at the test point: a net name or a package pin {@code PACKAGE.PIN}
@@ -18,6 +23,8 @@ import java.util.Objects;
  * @param meterText the meter as described in the readings file (may be empty)
  * @param takenAt when it was taken (or stored)
  * @param to the second point of an ohms reading; empty for volts
+ * @param struckAt when it was struck out, or null while it stands
+ * @param updatedAt when it was taken, struck out or restored, whichever came last
  */
 public record StoredReading(
     String id,
@@ -29,7 +36,9 @@ public record StoredReading(
     Double uncertainty,
     String meterText,
     Instant takenAt,
-    String to) {
+    String to,
+    Instant struckAt,
+    Instant updatedAt) {
   public StoredReading {
     Objects.requireNonNull(id, "id");
     Objects.requireNonNull(caseId, "caseId");
@@ -38,9 +47,31 @@ public record StoredReading(
     Times.text(meterText, "meterText");
     takenAt = Times.millis(Objects.requireNonNull(takenAt, "takenAt"));
     Times.text(to, "to");
+    struckAt = Times.millis(struckAt);
+    updatedAt = Times.millis(updatedAt == null ? takenAt : updatedAt);
   }
 
-  /** Returns a volts reading (DC or AC, no second point); see the record description. */
+  /**
+   * Returns a reading that stands (never struck out), last changed when it was taken; see the
+   * record description.
+   */
+  public StoredReading(
+      String id,
+      String caseId,
+      String at,
+      ReadingKind kind,
+      double value,
+      Double hz,
+      Double uncertainty,
+      String meterText,
+      Instant takenAt,
+      String to) {
+    this(id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, null, takenAt);
+  }
+
+  /**
+   * Returns a volts reading (DC or AC, no second point) that stands; see the record description.
+   */
   public StoredReading(
       String id,
       String caseId,
@@ -57,5 +88,41 @@ public record StoredReading(
   /** Returns whether this is an ohms reading that showed the meter's over-range (OL). */
   public boolean isOverRange() {
     return kind == ReadingKind.OHMS && value == Double.POSITIVE_INFINITY;
+  }
+
+  /** Returns whether the reading has been struck out (and is left out of the diagnosis). */
+  public boolean struck() {
+    return struckAt != null;
+  }
+
+  /** Returns this reading struck out at {@code when}. */
+  public StoredReading struckOut(Instant when) {
+    Objects.requireNonNull(when, "when");
+    return new StoredReading(
+        id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, when, when);
+  }
+
+  /** Returns this reading standing again (its strike undone) as of {@code when}. */
+  public StoredReading restored(Instant when) {
+    Objects.requireNonNull(when, "when");
+    return new StoredReading(
+        id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, null, when);
+  }
+
+  /**
+   * Returns whether {@code other} is the same reading as taken (every field but the strike and the
+   * time of the last change), so that the two differ at most in whether it is struck out.
+   */
+  public boolean sameTaking(StoredReading other) {
+    return id.equals(other.id)
+        && caseId.equals(other.caseId)
+        && at.equals(other.at)
+        && to.equals(other.to)
+        && kind == other.kind
+        && Double.compare(value, other.value) == 0
+        && Objects.equals(hz, other.hz)
+        && Objects.equals(uncertainty, other.uncertainty)
+        && meterText.equals(other.meterText)
+        && takenAt.equals(other.takenAt);
   }
 }

@@ -103,15 +103,7 @@ final class Importer {
       mergeCase(c, rows);
     }
     for (StoredReading r : b.readings()) {
-      if (rows.tryInsert(r)) {
-        added++;
-      } else {
-        settleFixed(
-            BundleCheck.READING,
-            r.id(),
-            r,
-            rows.first(Records.READING + " WHERE id = ?", Records::reading, r.id()).orElseThrow());
-      }
+      mergeReading(r, rows);
     }
     for (SuspectListRecord s : b.suspectLists()) {
       if (rows.tryInsert(s)) {
@@ -274,6 +266,31 @@ final class Importer {
     }
   }
 
+  /**
+   * Merges a reading: what was taken is never edited, but whether it is struck out may change, and
+   * the later change of the two copies wins.
+   */
+  private void mergeReading(StoredReading r, Rows rows) throws SQLException {
+    if (rows.tryInsert(r)) {
+      added++;
+      return;
+    }
+    StoredReading local =
+        rows.first(Records.READING + " WHERE id = ?", Records::reading, r.id()).orElseThrow();
+    if (r.sameTaking(local)) {
+      settle(
+          BundleCheck.READING,
+          r.id(),
+          r,
+          local,
+          r.updatedAt(),
+          local.updatedAt(),
+          () -> rows.replaceStrike(r));
+    } else {
+      settleFixed(BundleCheck.READING, r.id(), r, local);
+    }
+  }
+
   private void mergeAction(RepairAction a, Rows rows) throws SQLException {
     if (rows.tryInsert(a)) {
       added++;
@@ -353,7 +370,7 @@ final class Importer {
     return false;
   }
 
-  /** Settles a record that is never edited once written (readings, suspect lists). */
+  /** Settles a record that is never edited once written (suspect lists, what a reading read). */
   private void settleFixed(String kind, String id, Object incoming, Object local) {
     if (incoming.equals(local)) {
       unchanged++;

@@ -25,7 +25,8 @@ final class Migrations {
           "V1__core_tables.sql",
           "V2__full_text_search.sql",
           "V3__sync.sql",
-          "V4__ohms_readings.sql");
+          "V4__ohms_readings.sql",
+          "V5__struck_readings.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

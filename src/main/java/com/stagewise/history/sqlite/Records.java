@@ -29,8 +29,8 @@ final class Records {
           + " confirmed_fault f WHERE f.case_id = c.id ORDER BY position)) AS faults"
           + " FROM repair_case c";
   static final String READING =
-      "SELECT id, case_id, at, kind, value, hz, uncertainty, meter, taken_at, to_point"
-          + " FROM reading";
+      "SELECT id, case_id, at, kind, value, hz, uncertainty, meter, taken_at, to_point,"
+          + " struck_at, updated_at FROM reading";
   static final String SUSPECT_LIST =
       "SELECT id, case_id, computed_at, program_version, verdict, next_probes FROM suspect_list";
   static final String ACTION =
@@ -80,7 +80,9 @@ final class Records {
         nullableDouble(rs, 7),
         rs.getString(8),
         time(rs, 9),
-        rs.getString(10));
+        rs.getString(10),
+        time(rs, 11),
+        time(rs, 12));
   }
 
   static RepairAction action(ResultSet rs) throws SQLException {

@@ -290,7 +290,8 @@ final class Rows implements AutoCloseable {
     int inserted =
         update(
             "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at,"
-                + " to_point) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+                + " to_point, struck_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
+                + " ON CONFLICT (id) DO NOTHING",
             r.id(),
             r.caseId(),
             r.at(),
@@ -300,8 +301,19 @@ final class Rows implements AutoCloseable {
             r.uncertainty(),
             r.meterText(),
             r.takenAt(),
-            r.to());
+            r.to(),
+            r.struckAt(),
+            r.updatedAt());
     return inserted == 1;
+  }
+
+  /** Replaces whether a stored reading is struck out, and when that last changed. */
+  void replaceStrike(StoredReading r) throws SQLException {
+    update(
+        "UPDATE reading SET struck_at = ?, updated_at = ? WHERE id = ?",
+        r.struckAt(),
+        r.updatedAt(),
+        r.id());
   }
 
   boolean tryInsert(SuspectListRecord list) throws SQLException {

@@ -83,7 +83,19 @@ public final class HistoryBundleJson {
           "confirmedFaults",
           "updatedAt");
   private static final List<String> READING =
-      List.of("id", "caseId", "at", "to", "kind", "value", "hz", "uncertainty", "meter", "takenAt");
+      List.of(
+          "id",
+          "caseId",
+          "at",
+          "to",
+          "kind",
+          "value",
+          "hz",
+          "uncertainty",
+          "meter",
+          "takenAt",
+          "struckAt",
+          "updatedAt");
   private static final List<String> SUSPECT_LIST =
       List.of("id", "caseId", "computedAt", "programVersion", "verdict", "suspects", "nextProbes");
   private static final List<String> SUSPECT = List.of("fault", "probability", "group", "why");
@@ -217,7 +229,9 @@ public final class HistoryBundleJson {
               f.optional("uncertainty").map(u -> u.finite("an uncertainty in volts")).orElse(null),
               f.optionalText("meter", ""),
               time(f, "takenAt"),
-              f.optionalText("to", "")));
+              f.optionalText("to", ""),
+              f.optional("struckAt").map(JsonField::time).orElse(null),
+              f.optional("updatedAt").map(JsonField::time).orElse(null)));
     }
     List<SuspectListRecord> lists = new ArrayList<>();
     for (JsonField f : top.optionalElements("suspectLists", "suspect lists")) {
@@ -443,7 +457,15 @@ public final class HistoryBundleJson {
     if (r.uncertainty() != null) {
       o.put("uncertainty", r.uncertainty());
     }
-    return o.put("meter", r.meterText()).put("takenAt", r.takenAt().toString());
+    o.put("meter", r.meterText()).put("takenAt", r.takenAt().toString());
+    // A reading never struck out is written as before, so that older programs still read it.
+    if (r.struckAt() != null) {
+      o.put("struckAt", r.struckAt().toString());
+    }
+    if (!r.updatedAt().equals(r.takenAt())) {
+      o.put("updatedAt", r.updatedAt().toString());
+    }
+    return o;
   }
 
   static ObjectNode tree(SuspectListRecord s) {

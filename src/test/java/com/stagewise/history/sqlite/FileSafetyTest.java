@@ -14,6 +14,7 @@ import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -270,8 +271,27 @@ class FileSafetyTest {
             .containsExactly(FixtureMaker.CLOSED_SYMPTOM);
         assertThat(store.cases().search(SearchQuery.all().withText("op-amp went"))).hasSize(1);
         assertThat(store.cases().search(SearchQuery.all().withPart("U3"))).hasSize(1);
+        if (version >= 3) {
+          // Readings stored before they could be struck out stand, last changed when taken.
+          assertThat(history.cases().get(0).readings())
+              .hasSize(2)
+              .noneMatch(StoredReading::struck)
+              .allMatch(r -> r.updatedAt().equals(r.takenAt()));
+        }
         // And the migrated file takes new writes.
         store.cases().open(unit.id(), "new after migration");
+      }
+      if (version >= 3) {
+        // Filling in the new columns is no change to send to the shop server.
+        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + copy);
+            PreparedStatement q =
+                c.prepareStatement(
+                    "SELECT count(*), max(version) FROM outbox WHERE kind = 'reading'");
+            java.sql.ResultSet rs = q.executeQuery()) {
+          assertThat(rs.next()).isTrue();
+          assertThat(rs.getInt(1)).isEqualTo(2);
+          assertThat(rs.getInt(2)).isEqualTo(1);
+        }
       }
     }
   }

@@ -4,14 +4,16 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.Outcome;
-import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
-import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.SQLException;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
@@ -50,8 +52,9 @@ public final class FixtureMaker {
     make(target, version);
   }
 
-  static void make(Path target, int version) {
+  static void make(Path target, int version) throws SQLException {
     Clock clock = Clock.fixed(Instant.parse("2025-06-01T12:00:00Z"), ZoneOffset.UTC);
+    String closedCaseId = null;
     try (HistoryStore store = SqliteHistory.open(target, clock, version)) {
       BoardModel model = store.units().boardModel("MX-8 main board", "Northfield Audio (invented)");
       store
@@ -66,27 +69,7 @@ public final class FixtureMaker {
             .cases()
             .addReadings(
                 closed.id(),
-                List.of(
-                    new StoredReading(
-                        HistoryStore.newId(),
-                        closed.id(),
-                        "U3.7",
-                        ReadingKind.DC,
-                        13.4,
-                        null,
-                        null,
-                        "6000-count meter, ±(0.5 % + 2 counts)",
-                        at),
-                    new StoredReading(
-                        HistoryStore.newId(),
-                        closed.id(),
-                        "OUT",
-                        ReadingKind.AC,
-                        0.0021,
-                        1000.0,
-                        0.001,
-                        "",
-                        at)),
+                List.of(),
                 new SuspectListRecord(
                     HistoryStore.newId(),
                     closed.id(),
@@ -95,12 +78,39 @@ public final class FixtureMaker {
                     "fault",
                     List.of(new StoredSuspect("U3B:dead", 0.8, List.of("U3B:dead"), "", 1)),
                     ""));
+        closedCaseId = closed.id();
       }
       store
           .cases()
           .addAction(closed.id(), ActionKind.PART_REPLACED, "U3", "dual op-amp", "dual op-amp", "");
       store.cases().close(closed.id(), Outcome.FIXED, List.of("U3B:dead"));
       store.cases().open(unit.id(), "Crackles when cold");
+    }
+    if (closedCaseId != null) {
+      // The readings go in with the columns every version from 3 on has: the program's own writes
+      // follow the newest schema, which an older file does not have.
+      try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + target);
+          PreparedStatement insert =
+              c.prepareStatement(
+                  "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter,"
+                      + " taken_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+        Object[][] rows = {
+          {"U3.7", "dc", 13.4, null, null, "6000-count meter, ±(0.5 % + 2 counts)"},
+          {"OUT", "ac", 0.0021, 1000.0, 0.001, ""}
+        };
+        for (Object[] row : rows) {
+          insert.setString(1, HistoryStore.newId());
+          insert.setString(2, closedCaseId);
+          insert.setString(3, (String) row[0]);
+          insert.setString(4, (String) row[1]);
+          insert.setDouble(5, (Double) row[2]);
+          insert.setObject(6, row[3]);
+          insert.setObject(7, row[4]);
+          insert.setString(8, (String) row[5]);
+          insert.setLong(9, clock.millis());
+          insert.executeUpdate();
+        }
+      }
     }
   }
 }

@@ -3,6 +3,7 @@ package com.stagewise.history.sync;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.ServerAddress;
@@ -14,6 +15,7 @@ import com.stagewise.history.postgres.TestServer;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
 import java.io.BufferedReader;
 import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
@@ -74,6 +76,39 @@ class SyncTest {
       assertThat(((SyncLedger) b).shopCounts(Bench.MODEL))
           .isEqualTo(shop.confirmedFaultCounts().get(Bench.MODEL));
       assertThat(a.cases().search(SearchQuery.all().withText("cracked"))).hasSize(3);
+    }
+  }
+
+  @Test
+  void readingStruckOnOneBench_isStruckOnTheServerAndTheOther_andALaterRestoreWins() {
+    ServerAddress address = server.freshShop();
+    try (HistoryStore a = HistoryStore.open(folder.resolve("a.db"));
+        HistoryStore b = HistoryStore.open(folder.resolve("b.db"));
+        PgHistory shop = shop(address)) {
+      RepairCase c = Bench.addCase(a, "A-7", 0);
+      Bench.sync(a, shop, "a");
+      Bench.sync(b, shop, "b");
+      StoredReading typo = a.cases().caseFile(c.id()).orElseThrow().readings().get(0);
+      a.cases()
+          .reviseReadings(
+              c.id(), new Cases.Revision(List.of(typo.id()), List.of(), List.of()), null);
+      Bench.sync(a, shop, "a");
+      SyncReport pulled = Bench.sync(b, shop, "b");
+
+      assertThat(pulled.conflicts()).isEmpty();
+      assertThat(shop.cases().caseFile(c.id()).orElseThrow().readings().get(0).struck()).isTrue();
+      StoredReading onB = b.cases().caseFile(c.id()).orElseThrow().readings().get(0);
+      assertThat(onB.struck()).isTrue();
+      assertThat(onB.sameTaking(typo)).isTrue();
+
+      // B restores it afterwards: the later change wins everywhere.
+      b.cases()
+          .reviseReadings(
+              c.id(), new Cases.Revision(List.of(), List.of(typo.id()), List.of()), null);
+      Bench.sync(b, shop, "b");
+      assertThat(Bench.sync(a, shop, "a").conflicts()).isEmpty();
+      assertThat(a.cases().caseFile(c.id()).orElseThrow().readings().get(0).struck()).isFalse();
+      assertThat(Bench.content(a)).isEqualTo(Bench.content(b)).isEqualTo(Bench.content(shop));
     }
   }
 

@@ -1,0 +1,81 @@
+package com.stagewise.history.postgres;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.stagewise.history.CaseFile;
+import com.stagewise.history.ServerAddress;
+import com.stagewise.history.record.StoredReading;
+import java.sql.Connection;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.Clock;
+import java.time.Instant;
+import org.junit.jupiter.api.Test;
+
+/**
+ * A shop's schema of an earlier version on a real server (a throwaway cluster, {@link TestServer})
+ * is brought up to date on connect and loses nothing.
+ */
+class PgMigrationTest {
+  private static final long TAKEN = Instant.parse("2025-06-01T12:00:00Z").toEpochMilli();
+
+  private final TestServer server = TestServer.get();
+
+  @Test
+  void version4Shop_migrates_andItsReadingsStandUnchanged_withoutNewChangeNumbers()
+      throws SQLException {
+    ServerAddress address = server.freshShop();
+    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
+    try {
+      PgMigrations.migrate(admin, 0L, 4);
+    } finally {
+      admin.close();
+    }
+    String s = address.schema();
+    server.adminSql(
+        // The triggers of version 3 on name the change-number sequence without its schema.
+        "SET search_path TO " + s,
+        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
+        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
+        "INSERT INTO "
+            + s
+            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
+            + " VALUES ('c1', 'u1', "
+            + TAKEN
+            + ", 'crackles when cold', 'open', "
+            + TAKEN
+            + ")",
+        "INSERT INTO "
+            + s
+            + ".reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at)"
+            + " VALUES ('r1', 'c1', 'U3.8', 'dc', 1.19, NULL, NULL, '6000-count meter', "
+            + TAKEN
+            + ")");
+    long changeBefore = changeNumber(s);
+
+    try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
+      assertThat(shop.schemaVersion()).isEqualTo(PgMigrations.LATEST);
+      CaseFile file = shop.cases().caseFile("c1").orElseThrow();
+      assertThat(file.repairCase().symptom()).isEqualTo("crackles when cold");
+      assertThat(file.readings()).hasSize(1);
+      StoredReading r = file.readings().get(0);
+      assertThat(r.at()).isEqualTo("U3.8");
+      assertThat(r.value()).isEqualTo(1.19);
+      assertThat(r.takenAt()).isEqualTo(Instant.ofEpochMilli(TAKEN));
+      assertThat(r.struck()).isFalse();
+      assertThat(r.updatedAt()).isEqualTo(r.takenAt());
+    }
+    // Filling in the new column is no change for the benches to pull.
+    assertThat(changeNumber(s)).isEqualTo(changeBefore);
+  }
+
+  private long changeNumber(String schema) throws SQLException {
+    try (Connection c = server.adminConnection(TestServer.DATABASE);
+        Statement st = c.createStatement();
+        ResultSet rs = st.executeQuery("SELECT change_no FROM " + schema + ".reading")) {
+      assertThat(rs.next()).isTrue();
+      return rs.getLong(1);
+    }
+  }
+}
