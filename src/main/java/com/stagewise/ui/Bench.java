@@ -8,7 +8,11 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.Unit;
+import java.time.Instant;
+import java.util.IdentityHashMap;
+import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.BooleanBinding;
 import javafx.beans.property.BooleanProperty;
@@ -41,6 +45,9 @@ public final class Bench {
   private final ObjectProperty<RepairCase> openCase = new SimpleObjectProperty<>();
   private final ObjectProperty<Stage> stage = new SimpleObjectProperty<>();
   private final ObservableList<Reading> readings = FXCollections.observableArrayList();
+  private final ObservableList<StruckReading> struckReadings = FXCollections.observableArrayList();
+  // By identity: two readings of the same value at the same point are still two readings.
+  private final Map<Reading, String> readingIds = new IdentityHashMap<>();
   private final ObjectProperty<Diagnosis> diagnosis = new SimpleObjectProperty<>();
 
   /**
@@ -132,8 +139,33 @@ public final class Bench {
     return stage;
   }
 
+  /** Returns the readings of the case that stand (the diagnosis uses exactly these). */
   public ObservableList<Reading> readings() {
     return readings;
+  }
+
+  /**
+   * A reading struck out: it is kept in the history, marked, and left out of the diagnosis.
+   *
+   * @param reading the reading as taken
+   * @param id its id in the history
+   * @param struckAt when it was struck out, or null while the strike is being stored
+   */
+  public record StruckReading(Reading reading, String id, Instant struckAt) {}
+
+  /** Returns the case's readings that were struck out, in the order they were struck. */
+  public ObservableList<StruckReading> struckReadings() {
+    return struckReadings;
+  }
+
+  /** Returns the history's id of a reading on the bench (the very object), once it is stored. */
+  public Optional<String> readingId(Reading reading) {
+    return Optional.ofNullable(readingIds.get(reading));
+  }
+
+  /** Records the history's id of a reading on the bench. */
+  public void rememberId(Reading reading, String id) {
+    readingIds.put(reading, Objects.requireNonNull(id, "id"));
   }
 
   public ObjectProperty<Diagnosis> diagnosisProperty() {
@@ -191,6 +223,8 @@ public final class Bench {
     openCase.set(null);
     stage.set(null);
     readings.clear();
+    struckReadings.clear();
+    readingIds.clear();
     diagnosis.set(null);
   }
 }

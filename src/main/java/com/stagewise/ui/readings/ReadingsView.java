@@ -53,7 +53,7 @@ public final class ReadingsView {
     Label padTitle = new Label("What does the meter show?");
     padTitle.getStyleClass().add("section-title");
     ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
-    pad.getChildren().addAll(padTitle, valuePad);
+    pad.getChildren().addAll(padTitle, correctingBar(), valuePad);
     pad.setMinWidth(396);
     pad.setMaxWidth(396);
     VBox results = resultsPanel();
@@ -222,6 +222,12 @@ public final class ReadingsView {
     list.setId("readings-list");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new ReadingCell());
+    // Another case or stage: nothing stays chosen from the last one.
+    model
+        .rows()
+        .addListener(
+            (ListChangeListener<ReadingsViewModel.ReadingRow>)
+                c -> list.getSelectionModel().clearSelection());
     Label empty =
         new Label(
             "No readings yet. Put the probe where the left side says, type what the meter shows"
@@ -236,8 +242,97 @@ public final class ReadingsView {
     all.setMaxWidth(Double.MAX_VALUE);
     all.disableProperty().bind(Bindings.isEmpty(bench.readings()));
     all.setOnAction(e -> model.showSuspects());
-    box.getChildren().addAll(head, verdict, chain, suspectsBox, list, all);
+    box.getChildren()
+        .addAll(head, verdict, chain, suspectsBox, list, cardActions(list), undoBar(), all);
     return box;
+  }
+
+  /** What can be done to the reading whose card was tapped: correct it or strike it out. */
+  private Node cardActions(ListView<ReadingsViewModel.ReadingRow> list) {
+    Label what = new Label();
+    what.setId("reading-chosen");
+    what.setWrapText(true);
+    what.setMinHeight(Region.USE_PREF_SIZE);
+    Button correct = new Button("Correct");
+    correct.setId("reading-correct");
+    Button strike = new Button("Strike out");
+    strike.setId("reading-strike");
+    Button restore = new Button("Restore");
+    restore.setId("reading-restore");
+    var chosen = list.getSelectionModel().selectedItemProperty();
+    correct.setOnAction(e -> model.correct(chosen.get()));
+    strike.setOnAction(e -> model.strike(chosen.get()));
+    restore.setOnAction(e -> model.restore(chosen.get()));
+    for (Button b : List.of(correct, strike, restore)) {
+      b.setMinWidth(Region.USE_PREF_SIZE);
+    }
+    Region spring = new Region();
+    HBox.setHgrow(spring, Priority.ALWAYS);
+    HBox.setHgrow(what, Priority.SOMETIMES);
+    HBox bar = new HBox(8, what, spring, correct, strike, restore);
+    bar.setAlignment(Pos.CENTER_LEFT);
+    bar.getStyleClass().add("card-actions");
+    bar.visibleProperty().bind(chosen.isNotNull());
+    bar.managedProperty().bind(bar.visibleProperty());
+    chosen.addListener(
+        (o, was, row) -> {
+          boolean struck = row != null && row.struck();
+          what.setText(row == null ? "" : row.title() + ":  " + valueText(row.reading()));
+          correct.setVisible(!struck);
+          correct.setManaged(!struck);
+          strike.setVisible(!struck);
+          strike.setManaged(!struck);
+          restore.setVisible(struck);
+          restore.setManaged(struck);
+        });
+    return bar;
+  }
+
+  /** The last strike, restore or correction, with its undo. */
+  private Node undoBar() {
+    Label what = new Label();
+    what.setId("reading-undo-text");
+    what.setWrapText(true);
+    what.setMinHeight(Region.USE_PREF_SIZE);
+    what.textProperty().bind(model.undoTextProperty());
+    Button undo = new Button("Undo");
+    undo.setId("reading-undo");
+    undo.setMinWidth(Region.USE_PREF_SIZE);
+    undo.setOnAction(e -> model.undo());
+    Region spring = new Region();
+    HBox.setHgrow(spring, Priority.ALWAYS);
+    HBox bar = new HBox(8, what, spring, undo);
+    bar.setAlignment(Pos.CENTER_LEFT);
+    bar.getStyleClass().add("undo-bar");
+    bar.visibleProperty().bind(model.undoTextProperty().isNotEmpty());
+    bar.managedProperty().bind(bar.visibleProperty());
+    return bar;
+  }
+
+  /** Says which reading the pad is correcting, with a way out. */
+  private Node correctingBar() {
+    Label what = new Label();
+    what.setId("correcting");
+    what.setWrapText(true);
+    what.setMinHeight(Region.USE_PREF_SIZE);
+    what.textProperty().bind(model.correctingTextProperty());
+    Button cancel = new Button("Cancel");
+    cancel.setId("correcting-cancel");
+    cancel.setMinWidth(Region.USE_PREF_SIZE);
+    cancel.setOnAction(e -> model.cancelCorrection());
+    HBox.setHgrow(what, Priority.ALWAYS);
+    HBox bar = new HBox(8, what, cancel);
+    bar.setAlignment(Pos.CENTER_LEFT);
+    bar.getStyleClass().add("correcting-bar");
+    bar.visibleProperty().bind(model.correctingTextProperty().isNotEmpty());
+    bar.managedProperty().bind(bar.visibleProperty());
+    return bar;
+  }
+
+  private static String valueText(Reading r) {
+    return r.kind() == Reading.Kind.AC
+        ? Words.measured(r.value()) + " AC"
+        : Words.measured(r.value());
   }
 
   private void showSuspects() {
@@ -288,10 +383,26 @@ public final class ReadingsView {
         return;
       }
       Reading r = row.reading();
-      String value =
-          r.kind() == Reading.Kind.AC
-              ? Words.measured(r.value()) + " AC"
-              : Words.measured(r.value());
+      String value = valueText(r);
+      if (row.struck()) {
+        title.setText(
+            row.title()
+                + ":  "
+                + value
+                + "  — struck out"
+                + (row.struckAt() == null ? "" : " " + Words.dateTime(row.struckAt())));
+        if (!title.getStyleClass().contains("struck")) {
+          title.getStyleClass().add("struck");
+        }
+        chart.setVisible(false);
+        chart.setManaged(false);
+        setText(null);
+        setGraphic(box);
+        return;
+      }
+      title.getStyleClass().remove("struck");
+      chart.setVisible(true);
+      chart.setManaged(true);
       String state =
           Double.isNaN(row.healthyLow())
               ? ""

@@ -18,6 +18,7 @@ import com.stagewise.ui.Bench;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -50,6 +51,8 @@ public final class ReadingsViewModel {
   private final StringProperty chain = new SimpleStringProperty("");
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
   private final BooleanProperty thinking = new SimpleBooleanProperty(false);
+  private final Revisions revisions;
+  private final StringProperty correctingText = new SimpleStringProperty("");
   private Diagnoser diagnoser;
   private Stage diagnoserStage;
   private boolean probeChosenByHand;
@@ -57,6 +60,21 @@ public final class ReadingsViewModel {
   /** Creates the readings screen's model on a bench. */
   public ReadingsViewModel(Bench bench) {
     this.bench = bench;
+    this.revisions =
+        new Revisions(bench, s -> diagnoserStage == s ? diagnoser : null, this::refresh);
+    revisions
+        .correctingProperty()
+        .addListener(
+            (o, was, now) ->
+                correctingText.set(
+                    now == null
+                        ? ""
+                        : "Correcting "
+                            + Words.pin(now.at())
+                            + " "
+                            + Words.measured(now.value())
+                            + ": type the right value and tap Add reading. The wrong one stays in"
+                            + " the history, struck out."));
     bench.stageProperty().addListener((o, was, now) -> stageChanged(now));
     if (bench.stageProperty().get() != null) {
       stageChanged(bench.stageProperty().get());
@@ -71,13 +89,18 @@ public final class ReadingsViewModel {
    * @param healthyLow the low end of the healthy range (NaN when unknown)
    * @param healthyHigh the high end of the healthy range (NaN when unknown)
    * @param predictions where the top suspects put this reading: label to volts
+   * @param struckAt when the reading was struck out (null while it stands, and while its strike is
+   *     being stored: see {@link #struck()})
+   * @param struck whether the reading is struck out (left out of the diagnosis)
    */
   public record ReadingRow(
       Reading reading,
       String title,
       double healthyLow,
       double healthyHigh,
-      Map<String, Double> predictions) {
+      Map<String, Double> predictions,
+      Instant struckAt,
+      boolean struck) {
     /** Returns whether the reading lies in the healthy range (false when the range is unknown). */
     public boolean healthy() {
       return reading.value() >= healthyLow && reading.value() <= healthyHigh;
@@ -102,6 +125,72 @@ public final class ReadingsViewModel {
 
   public ObservableList<Suspect> topSuspects() {
     return topSuspects;
+  }
+
+  /**
+   * Returns what the last strike, restore or correction did ("Struck out U1 pin 8 1.190 V."), while
+   * it can be undone; empty otherwise.
+   */
+  public StringProperty undoTextProperty() {
+    return revisions.undoTextProperty();
+  }
+
+  /** Returns the line that says which reading is being corrected; empty when none is. */
+  public StringProperty correctingTextProperty() {
+    return correctingText;
+  }
+
+  /**
+   * Strikes out a reading (a card tapped, then Strike out): it stays in the history, marked struck
+   * with the time, and the diagnosis leaves it out.
+   */
+  public void strike(ReadingRow row) {
+    if (row != null && !row.struck()) {
+      revisions.strike(row.reading());
+    }
+  }
+
+  /** Makes a struck reading stand again. */
+  public void restore(ReadingRow row) {
+    if (row != null && row.struck()) {
+      revisions.restore(row.reading());
+    }
+  }
+
+  /**
+   * Starts correcting a reading: its point becomes the probe and its value goes on the pad; the
+   * next Add reading strikes it out and adds the right value in one step.
+   */
+  public void correct(ReadingRow row) {
+    Stage stage = bench.stageProperty().get();
+    if (row == null || row.struck() || stage == null) {
+      return;
+    }
+    Reading r = row.reading();
+    revisions.startCorrection(r);
+    if (revisions.correctingProperty().get() != r) {
+      return;
+    }
+    ProbePoint.of(stage, r.at(), r.kind(), r.hz())
+        .ifPresent(
+            p -> {
+              probeChosenByHand = true;
+              probe.set(p.because("Correcting the reading taken here."));
+            });
+    pad.textProperty()
+        .set(java.math.BigDecimal.valueOf(r.value()).stripTrailingZeros().toPlainString());
+  }
+
+  /** Stops correcting; the reading stays as it was. */
+  public void cancelCorrection() {
+    revisions.cancelCorrection();
+    pad.textProperty().set("");
+    followSuggestion();
+  }
+
+  /** Undoes the last strike, restore or correction. */
+  public void undo() {
+    revisions.undo();
   }
 
   public StringProperty verdictProperty() {
@@ -168,6 +257,8 @@ public final class ReadingsViewModel {
 
   private void stageChanged(Stage stage) {
     pad.textProperty().set("");
+    revisions.forgetUndo();
+    revisions.cancelCorrection();
     diagnoser = null;
     diagnoserStage = null;
     probeChosenByHand = false;
@@ -285,10 +376,21 @@ public final class ReadingsViewModel {
           .show("Not a reading", e.getMessage(), "Check the value on the meter and type it again.");
       return;
     }
-    bench.readings().add(reading);
     String typed = pad.textProperty().get();
     pad.press(ValuePadModel.CLEAR);
     probeChosenByHand = false;
+    if (revisions.correctingProperty().get() != null) {
+      revisions.finishCorrection(
+          reading,
+          failed -> {
+            if (pad.textProperty().get().isEmpty()) {
+              pad.textProperty().set(typed); // what was typed is not lost
+            }
+          });
+      return;
+    }
+    revisions.forgetUndo();
+    bench.readings().add(reading);
     diagnoseAndStore(stage, reading, typed);
   }
 
@@ -307,21 +409,18 @@ public final class ReadingsViewModel {
             () -> {
               Diagnoser d =
                   ready != null ? ready : casework.diagnoser(stage, boardModel).mainsPowered(mains);
-              Diagnosis diagnosis =
-                  casework
-                      .addReadings(
-                          caseId,
-                          d,
-                          new ReadingSet(MeterSpec.DEFAULT, taken),
-                          List.of(added),
-                          Diagnoser.DEFAULT_TOP)
-                      .diagnosis();
-              return diagnosis;
+              return casework.addReadings(
+                  caseId,
+                  d,
+                  new ReadingSet(MeterSpec.DEFAULT, taken),
+                  List.of(added),
+                  Diagnoser.DEFAULT_TOP);
             },
-            diagnosis -> {
+            stored -> {
               thinking.set(false);
+              bench.rememberId(added, stored.readings().get(0).id());
               if (bench.stageProperty().get() == stage) {
-                bench.diagnosisProperty().set(diagnosis);
+                bench.diagnosisProperty().set(stored.diagnosis());
                 refresh();
               }
             },
@@ -375,10 +474,23 @@ public final class ReadingsViewModel {
               : ProbePoint.of(stage, r.at(), r.kind(), r.hz())
                   .map(ProbePoint::title)
                   .orElse(r.at());
-      list.add(new ReadingRow(r, title, low, high, predictions));
+      list.add(new ReadingRow(r, title, low, high, predictions, null, false));
     }
     // Newest first: the reading just taken is where the eye goes.
     java.util.Collections.reverse(list);
+    // Struck readings last, greyed, newest strike first: kept in sight, left out of the diagnosis.
+    List<Bench.StruckReading> struck = new ArrayList<>(bench.struckReadings());
+    java.util.Collections.reverse(struck);
+    for (Bench.StruckReading s : struck) {
+      Reading r = s.reading();
+      String title =
+          stage == null
+              ? r.at()
+              : ProbePoint.of(stage, r.at(), r.kind(), r.hz())
+                  .map(ProbePoint::title)
+                  .orElse(r.at());
+      list.add(new ReadingRow(r, title, Double.NaN, Double.NaN, Map.of(), s.struckAt(), true));
+    }
     rows.setAll(list);
     if (stage != null && !probeChosenByHand) {
       probe.set(nextProbe(stage, diagnosis));

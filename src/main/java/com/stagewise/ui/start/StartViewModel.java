@@ -1,5 +1,6 @@
 package com.stagewise.ui.start;
 
+import com.stagewise.circuit.Reading;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
@@ -358,7 +359,15 @@ public final class StartViewModel {
               if (saved.isPresent() && saved.get().stage().isPresent()) {
                 // Readings first: the stage's arrival starts the diagnosis of what is on the bench.
                 for (var stored : file.get().readings()) {
-                  bench.readings().add(Words.reading(stored));
+                  Reading reading = Words.reading(stored);
+                  bench.rememberId(reading, stored.id());
+                  if (stored.struck()) {
+                    bench
+                        .struckReadings()
+                        .add(new Bench.StruckReading(reading, stored.id(), stored.struckAt()));
+                  } else {
+                    bench.readings().add(reading);
+                  }
                 }
                 bench.stageProperty().set(saved.get().stage().get());
                 step = saved.get().step();

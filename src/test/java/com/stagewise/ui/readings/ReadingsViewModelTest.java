@@ -124,4 +124,98 @@ class ReadingsViewModelTest {
     assertThat(again.rows()).hasSize(3);
     assertThat(again.probeProperty().get().at()).isNotIn("U1.8", "U1.4");
   }
+
+  private boolean railSuspected() {
+    return t.bench.diagnosisProperty().get().suspects().get(0).fault().startsWith("VCC:");
+  }
+
+  @Test
+  void correct_aMistypedRailReading_strikesItAndTheDiagnosisFollowsTheRightValue() {
+    // 1.496 V typed for 14.96 V on the +15 V supply pin (dual-8: pin 8 is v+, DESIGN.md): a rail
+    // that low is the first explanation; once corrected it is not (the textbook stage is healthy
+    // with its rails within 5 %).
+    read(1.496);
+    read(-14.97);
+    model.choose("U1.1");
+    read(-4.70);
+    assertThat(railSuspected()).isTrue();
+
+    ReadingsViewModel.ReadingRow typo = model.rows().get(2);
+    assertThat(typo.reading().value()).isEqualTo(1.496);
+    model.correct(typo);
+    assertThat(model.probeProperty().get().at()).isEqualTo("U1.8");
+    assertThat(model.pad().textProperty().get()).isEqualTo("1.496");
+    assertThat(model.correctingTextProperty().get()).contains("U1 pin 8");
+    model.pad().textProperty().set("14.96");
+    model.addReading();
+
+    assertThat(model.correctingTextProperty().get()).isEmpty();
+    assertThat(railSuspected()).isFalse();
+    assertThat(t.bench.readings()).extracting(Reading::value).containsExactly(-14.97, -4.70, 14.96);
+    assertThat(model.rows().get(model.rows().size() - 1).struck()).isTrue();
+    assertThat(model.undoTextProperty().get()).startsWith("Corrected U1 pin 8");
+    var file = t.store.cases().caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
+    // Nothing deleted: the history holds the mistyped reading, struck with when, and the right one.
+    assertThat(file.readings())
+        .extracting(r -> r.value())
+        .containsExactly(1.496, -14.97, -4.70, 14.96);
+    assertThat(file.readings().get(0).struckAt()).isNotNull();
+    assertThat(file.readings().subList(1, 4)).noneMatch(r -> r.struck());
+    // The stored suspect list is the one of the readings that stand.
+    assertThat(file.suspectLists().get(file.suspectLists().size() - 1).suspects().get(0).fault())
+        .isEqualTo(t.bench.diagnosisProperty().get().suspects().get(0).fault());
+
+    model.undo();
+    assertThat(railSuspected()).isTrue();
+    assertThat(t.bench.readings())
+        .extracting(Reading::value)
+        .containsExactlyInAnyOrder(1.496, -14.97, -4.70);
+    file = t.store.cases().caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
+    assertThat(file.readings())
+        .filteredOn(r -> r.struck())
+        .extracting(r -> r.value())
+        .containsExactly(14.96);
+  }
+
+  @Test
+  void strike_aReading_leavesItOutOfTheDiagnosis_andUndoBringsItBack() {
+    read(14.96);
+    read(-14.97);
+    model.choose("U1.1");
+    read(-13.47); // far from the healthy -4.7 V: the output looks stuck low
+    String withIt = t.bench.diagnosisProperty().get().suspects().get(0).fault();
+    ReadingsViewModel.ReadingRow out = model.rows().get(0);
+    assertThat(out.reading().at()).isEqualTo("U1.1");
+
+    model.strike(out);
+
+    assertThat(t.bench.readings()).extracting(Reading::at).containsExactly("U1.8", "U1.4");
+    assertThat(model.rows()).hasSize(3);
+    ReadingsViewModel.ReadingRow struck = model.rows().get(2);
+    assertThat(struck.struck()).isTrue();
+    assertThat(struck.struckAt()).isNotNull();
+    assertThat(model.undoTextProperty().get()).startsWith("Struck out U1 pin 1");
+    // With only the rails read, the output fault is no longer called.
+    assertThat(t.bench.diagnosisProperty().get().suspects().get(0).fault()).isNotEqualTo(withIt);
+    var file = t.store.cases().caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
+    assertThat(file.readings()).hasSize(3);
+    assertThat(file.readings().get(2).struck()).isTrue();
+
+    model.undo();
+    assertThat(t.bench.readings()).extracting(Reading::at).contains("U1.1");
+    assertThat(t.bench.struckReadings()).isEmpty();
+    assertThat(t.bench.diagnosisProperty().get().suspects().get(0).fault()).isEqualTo(withIt);
+    assertThat(model.undoTextProperty().get()).isEmpty();
+  }
+
+  @Test
+  void strike_everyReading_leavesNoDiagnosis_andTheStruckOnesListed() {
+    read(14.96);
+    model.strike(model.rows().get(0));
+    assertThat(t.bench.readings()).isEmpty();
+    assertThat(t.bench.diagnosisProperty().get()).isNull();
+    assertThat(model.rows()).singleElement().matches(ReadingsViewModel.ReadingRow::struck);
+    model.restore(model.rows().get(0));
+    assertThat(t.bench.readings()).containsExactly(Reading.dc("U1.8", 14.96));
+  }
 }
