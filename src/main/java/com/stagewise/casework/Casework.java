@@ -238,6 +238,69 @@ public final class Casework {
   // ---- notes, actions, close-out ----------------------------------------------------------------
 
   /**
+   * Strikes out one reading of a case, or restores it, without a new diagnosis (the command line,
+   * where diagnoses come from readings files). The reading is named by its number in the case (1
+   * for the first taken, as {@code history show} lists them) or by its id or the id's first
+   * characters (at least 4).
+   *
+   * @return the reading as now stored
+   * @throws InvalidInputException if the case has no such reading, or several match
+   */
+  public StoredReading strikeReading(String caseId, String reading, boolean restore) {
+    List<StoredReading> readings =
+        store.cases().caseFile(caseId).map(f -> f.readings()).orElse(List.of());
+    String id = readingId(readings, reading);
+    List<String> one = List.of(id);
+    return store
+        .cases()
+        .reviseReadings(
+            caseId,
+            new Cases.Revision(restore ? List.of() : one, restore ? one : List.of(), List.of()),
+            null)
+        .get(0);
+  }
+
+  private static String readingId(List<StoredReading> readings, String reading) {
+    String given = reading == null ? "" : reading.strip();
+    if (given.matches("[0-9]{1,4}")) {
+      int number = Integer.parseInt(given);
+      if (number < 1 || number > readings.size()) {
+        throw new InvalidInputException(
+            "history",
+            "reading",
+            "the case has "
+                + readings.size()
+                + (readings.size() == 1 ? " reading" : " readings")
+                + "; expected a number from 1 to "
+                + readings.size()
+                + " (as 'history show' lists them) or a reading id, not "
+                + given);
+      }
+      return readings.get(number - 1).id();
+    }
+    if (given.length() < 4) {
+      throw new InvalidInputException(
+          "history",
+          "reading",
+          "expected the reading's number in the case (1, 2, …) or at least 4 characters of its"
+              + " id, not '"
+              + given
+              + "'");
+    }
+    List<String> ids =
+        readings.stream().map(StoredReading::id).filter(i -> i.startsWith(given)).toList();
+    if (ids.size() != 1) {
+      throw new InvalidInputException(
+          "history",
+          "reading",
+          ids.isEmpty()
+              ? "the case has no reading whose id starts with '" + given + "'"
+              : "more than one reading's id starts with '" + given + "'; give more of the id");
+    }
+    return ids.get(0);
+  }
+
+  /**
    * Strikes out readings of a case, restores struck ones and adds the readings that replace them,
    * then stores the suspect list of the readings that stand, all in one transaction. Nothing is
    * deleted: a struck reading stays in the history marked with when it was struck. A correction is

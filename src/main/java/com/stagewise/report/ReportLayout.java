@@ -121,6 +121,13 @@ final class ReportLayout {
   private void readings() {
     List<StoredReading> readings = report.caseFile().readings();
     flow.heading("Readings (" + readings.size() + ")", 3 * Style.TABLE.leading());
+    if (readings.stream().anyMatch(StoredReading::struck)) {
+      flow.paragraph(
+          Style.BODY,
+          "A reading struck out (mistyped or taken at the wrong point) is kept here, marked, and"
+              + " was left out of every diagnosis after it was struck.");
+      flow.gap(3);
+    }
     if (readings.isEmpty()) {
       flow.paragraph(Style.BODY, "No readings were stored in this case.");
       return;
@@ -156,7 +163,9 @@ final class ReportLayout {
                       ? r.hz() == null ? "DC" : "AC at " + Engineering.of(r.hz(), "Hz", 4)
                       : "ohms, power off",
                   value(r),
-                  when(r.takenAt())));
+                  r.struck()
+                      ? when(r.takenAt()) + ", struck out " + when(r.struckAt())
+                      : when(r.takenAt())));
       if (!oneMeter) {
         row.add(r.meterText());
       }

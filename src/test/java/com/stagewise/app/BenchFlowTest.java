@@ -8,6 +8,7 @@ import com.stagewise.history.SearchQuery;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.ui.Step;
+import com.stagewise.ui.readings.ReadingsViewModel;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -150,9 +151,34 @@ class BenchFlowTest {
     // Readings: rails first, as a technician checks them (common practice).
     assertThat(text("#probe-call")).isEqualTo("Probe U1 pin 8");
     shoot("05-readings-first-probe");
+    // A slip of the finger: 1.50 V typed for the 14.96 V on the supply pin. A rail that low is the
+    // first suspect; the card is tapped and corrected, and the rail is no longer suspected.
+    typeReading(1.50);
+    assertThat(fx(() -> app.bench().diagnosisProperty().get().suspects().get(0).fault()))
+        .startsWith("VCC:");
+    tapReadingCard(1.50);
+    robot.clickOn("#reading-correct");
+    assertThat(text("#correcting")).contains("U1 pin 8");
+    assertThat(text("#reading-display")).isEqualTo("1.5");
+    robot.clickOn("#reading-key-clear");
     typeReading(VCC);
+    assertThat(text("#reading-undo-text")).startsWith("Corrected U1 pin 8");
+    assertThat(fx(() -> app.bench().diagnosisProperty().get().suspects().get(0).fault()))
+        .doesNotStartWith("VCC:");
+    assertThat(fx(() -> app.bench().readings().size())).isEqualTo(1);
     assertThat(text("#probe-call")).isEqualTo("Probe U1 pin 4");
     typeReading(VEE);
+    // A reading taken at the wrong point is struck out: the diagnosis is again that of the rails.
+    String beforeStray = fx(() -> app.bench().diagnosisProperty().get().suspects().get(0).fault());
+    typeReading(9.99);
+    tapReadingCard(9.99);
+    robot.clickOn("#reading-strike");
+    settle();
+    assertThat(fx(() -> app.bench().readings().size())).isEqualTo(2);
+    assertThat(fx(() -> app.bench().struckReadings().size())).isEqualTo(2);
+    assertThat(fx(() -> app.bench().diagnosisProperty().get().suspects().get(0).fault()))
+        .isEqualTo(beforeStray);
+    assertThat(text("#reading-undo-text")).startsWith("Struck out");
     // Then where the diagnosis learns most; we read what an open R2 gives at each point.
     String firstSignalProbe = text("#probe-call");
     Diagnosis afterRails = fx(() -> app.bench().diagnosisProperty().get());
@@ -226,7 +252,13 @@ class BenchFlowTest {
                     .orElseThrow()
                     .caseId())
             .orElseThrow();
-    assertThat(file.readings()).hasSizeGreaterThanOrEqualTo(3);
+    assertThat(file.readings()).hasSizeGreaterThanOrEqualTo(5);
+    // Nothing deleted: the mistyped and the stray readings are kept, struck out, with when.
+    assertThat(file.readings())
+        .filteredOn(r -> r.struck())
+        .extracting(r -> r.value())
+        .containsExactlyInAnyOrder(1.50, 9.99);
+    assertThat(fx(() -> labelsContaining("struck out"))).hasSize(2);
     assertThat(file.suspectLists()).isNotEmpty();
     assertThat(file.actions()).isNotEmpty();
     assertThat(file.notes())
@@ -242,6 +274,26 @@ class BenchFlowTest {
                 (javafx.scene.control.ListCell<?> cell) ->
                     cell.getText() != null && cell.getText().startsWith(startOfText))
             .<javafx.scene.control.ListCell<?>>query());
+  }
+
+  /** Taps the card of the reading with this value on the readings screen. */
+  private void tapReadingCard(double value) throws Exception {
+    robot.clickOn(
+        robot
+            .lookup("#readings-list .list-cell")
+            .match(
+                (javafx.scene.control.ListCell<ReadingsViewModel.ReadingRow> cell) ->
+                    cell.getItem() != null && cell.getItem().reading().value() == value)
+            .<javafx.scene.control.ListCell<?>>query());
+    settle();
+  }
+
+  /** Returns the visible labels on the screen whose text contains {@code words}. */
+  private List<String> labelsContaining(String words) {
+    return robot.lookup(".label").queryAllAs(Label.class).stream()
+        .filter(l -> l.isVisible() && l.getText() != null && l.getText().contains(words))
+        .map(Label::getText)
+        .toList();
   }
 
   private String currentProbeAt() {

@@ -111,6 +111,22 @@ class HistoryCommandTest {
     assertThat(faults).contains("R2:open");
     assertThat(total).isBetween(0.99, 1.01);
 
+    // The third reading struck out by its number, then restored; a number out of range is bad
+    // input.
+    Run struck = history(db, "strike-reading", "--case", caseId, "--reading", "3");
+    assertThat(struck.code()).as(struck.err()).isEqualTo(ExitCode.OK);
+    assertThat(struck.out()).contains("U1.1").contains("struck out");
+    assertThat(history(db, "show", "--case", caseId).out()).contains("struck out");
+    Run nine = history(db, "strike-reading", "--case", caseId, "--reading", "9");
+    assertThat(nine.code()).isEqualTo(ExitCode.BAD_INPUT);
+    assertThat(nine.err()).contains("reading").contains("1 to 4").doesNotContain("Exception");
+    JsonNode restored =
+        json(
+            history(
+                db, "strike-reading", "--case", caseId, "--reading", "3", "--restore", "--json"));
+    assertThat(restored.get("readings").get(0).has("struckAt")).isFalse();
+    assertThat(restored.get("readings").get(0).get("updatedAt")).isNotNull();
+
     assertThat(
             history(
                     db,

@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
       OpenCaseCommand.class,
       CloseCaseCommand.class,
       AddReadingsCommand.class,
+      StrikeReadingCommand.class,
       AddNoteCommand.class,
       AddActionCommand.class,
       ShowCommand.class,

@@ -92,6 +92,9 @@ final class HistoryText {
         if (r.hz() != null) {
           text.append(" at ").append(number(r.hz())).append(" Hz");
         }
+        if (r.struck()) {
+          text.append("  struck out ").append(when(r.struckAt()));
+        }
         text.append(NL);
       }
     }

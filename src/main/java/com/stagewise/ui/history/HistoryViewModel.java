@@ -242,7 +242,10 @@ public final class HistoryViewModel {
                   : "")
               + "   ("
               + Words.dateTime(r.takenAt())
-              + ")");
+              + ")"
+              + (r.struck()
+                  ? "   struck out " + Words.dateTime(r.struckAt()) + ", not counted"
+                  : ""));
     }
     List<String> suspects = new ArrayList<>();
     if (!file.suspectLists().isEmpty()) {

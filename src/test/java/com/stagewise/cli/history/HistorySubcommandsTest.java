@@ -68,7 +68,7 @@ class HistorySubcommandsTest {
   }
 
   @Test
-  void subcommands_areTheTwentyOfTheHistory() {
+  void subcommands_areTheTwentyOneOfTheHistory() {
     assertThat(subcommands().toList())
         .containsExactlyInAnyOrder(
             "models",
@@ -78,6 +78,7 @@ class HistorySubcommandsTest {
             "open-case",
             "close-case",
             "add-readings",
+            "strike-reading",
             "add-note",
             "add-action",
             "show",
@@ -107,6 +108,22 @@ class HistorySubcommandsTest {
           history(db, "open-case", "--serial", "NF8-21037", "--symptom", "crackles", "--json");
       assertThat(opened.code()).as(opened.err()).isEqualTo(ExitCode.OK);
       return opened.out().replaceAll("(?s).*\"id\"\\s*:\\s*\"([0-9a-f-]+)\".*", "$1");
+    }
+
+    @Test
+    void strikeReading_unknownReading_exitsTwoAndChangesNothing() {
+      Path db = demo();
+      String caseId = openCase(db);
+      Map<String, String> before = HistoryDigest.of(db);
+
+      Run refused = history(db, "strike-reading", "--case", caseId, "--reading", "ffff0000");
+
+      assertThat(refused.code()).isEqualTo(ExitCode.BAD_INPUT);
+      assertThat(refused.err())
+          .contains("reading")
+          .contains("ffff0000")
+          .doesNotContain("Exception");
+      assertThat(HistoryDigest.of(db)).isEqualTo(before);
     }
 
     @Test
