@@ -64,6 +64,10 @@ public final class Diagnoser {
   /** … at most this many of them. */
   private static final int LEADING_MOST = 6;
 
+  /** Each model's readings' log-likelihoods, kept across re-ranks (by the model's identity). */
+  private final Map<List<Hypothesis>, Likelihoods> likelihoods =
+      java.util.Collections.synchronizedMap(new java.util.IdentityHashMap<>());
+
   private Diagnoser(Stage stage, Map<String, Integer> shopCounts) {
     this.stage = stage;
     this.catalogue = FaultCatalogue.of(stage);
@@ -338,8 +342,15 @@ public final class Diagnoser {
       MeterSpec meter) {
     List<Scored> scored = new ArrayList<>(hypotheses.size());
     double[] weight = readingWeights(bound);
+    Likelihoods table = likelihoods.computeIfAbsent(hypotheses, l -> new Likelihoods(l, evidence));
+    double[][] figures = new double[bound.size()][];
+    for (int i = 0; i < figures.length; i++) {
+      figures[i] = table.of(bound.get(i));
+    }
     double maxLog = Double.NEGATIVE_INFINITY;
-    for (Hypothesis h : hypotheses) {
+    for (int index = 0; index < hypotheses.size(); index++) {
+      Hypothesis h = hypotheses.get(index);
+      int at = table.first(index);
       int n = h.predictions.size();
       double[] logs = new double[n];
       double best = Double.NEGATIVE_INFINITY;
@@ -348,7 +359,7 @@ public final class Diagnoser {
         Prediction p = h.predictions.get(v);
         double sum = Math.log(p.weight());
         for (int i = 0; i < bound.size(); i++) {
-          sum += weight[i] * evidence.logLikelihood(p, bound.get(i));
+          sum += weight[i] * figures[i][at + v];
         }
         if (!ohms.isEmpty()) {
           sum += ohmsChecks.logLikelihood(h.fault, p.value(), ohms, meter);

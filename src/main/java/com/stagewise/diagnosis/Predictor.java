@@ -215,6 +215,9 @@ final class Predictor {
 
   private List<Outcome> offsetCorners(
       Stage stage, Analysis cs, OperatingPoint nominal, double weight) {
+    // An offset moves only the right-hand side, so the nominal factors tell cheaply whether both
+    // corners keep every state (the usual case); only a corner that moves a state is searched.
+    Analysis.Linearized linear = cs.linearize(nominal).orElse(null);
     for (Amplifier amp : stage.amplifiers()) {
       String ref = amp.ref();
       if (cs.isForced(ref)) {
@@ -222,10 +225,16 @@ final class Predictor {
       }
       DeviceParams params = cs.device(ref);
       double max = amp.deviceClass().offset().high();
-      OperatingPoint up =
-          near(cs.with(new Change.Device(ref, params.withOffset(params.offset() + max))), nominal);
-      OperatingPoint down =
-          near(cs.with(new Change.Device(ref, params.withOffset(params.offset() - max))), nominal);
+      Change upChange = new Change.Device(ref, params.withOffset(params.offset() + max));
+      Change downChange = new Change.Device(ref, params.withOffset(params.offset() - max));
+      if (linear != null
+          && linear.settle(upChange).isPresent()
+          && linear.settle(downChange).isPresent()) {
+        // Both corners settle in the nominal states: no split at this section.
+        continue;
+      }
+      OperatingPoint up = near(cs.with(upChange), nominal);
+      OperatingPoint down = near(cs.with(downChange), nominal);
       if (up == null || down == null) {
         continue;
       }

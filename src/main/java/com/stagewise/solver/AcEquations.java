@@ -15,6 +15,15 @@ final class AcEquations {
    * im}} per unknown, or null when singular. Inputs whose AC is at another frequency are AC ground.
    */
   double[][] solve(SectionState[] states, boolean[] collapsedHint, double[] dc) {
+    Equations e = assemble(states, collapsedHint, dc);
+    return DenseLu.solveComplex(e.ar, e.ai, e.br, e.bi);
+  }
+
+  /** The AC system's matrix {@code ar + j·ai} and right-hand side {@code br + j·bi}. */
+  record Equations(double[][] ar, double[][] ai, double[] br, double[] bi) {}
+
+  /** Assembles the small-signal AC system about a DC state, as {@link #solve} solves it. */
+  Equations assemble(SectionState[] states, boolean[] collapsedHint, double[] dc) {
     double[][] ar = new double[net.size][net.size];
     double[][] ai = new double[net.size][net.size];
     double[] br = new double[net.size];
@@ -92,7 +101,7 @@ final class AcEquations {
         }
       }
     }
-    return DenseLu.solveComplex(ar, ai, br, bi);
+    return new Equations(ar, ai, br, bi);
   }
 
   /**

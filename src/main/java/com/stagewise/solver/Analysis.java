@@ -112,8 +112,18 @@ public sealed interface Analysis permits CompiledStage {
     Optional<OperatingPoint> step(Change change);
 
     /**
-     * Returns the AC response about this point's section states with the change applied (exact: the
-     * change is a low-rank update of the factorised system); empty as {@link Analysis#ac}.
+     * Returns the point that {@code with(change).settleFrom(point)} gives, found with the kept
+     * factors: for a change that moves only the right-hand side of the equations (a driven voltage;
+     * a section's offset, bias currents or headroom) on a stage without junctions, the one step is
+     * exact, and the point is returned when the search would keep every section in its state there.
+     * Empty otherwise (then ask {@code settleFrom}).
+     */
+    Optional<OperatingPoint> settle(Change change);
+
+    /**
+     * Returns the AC response about this point's section states with the change applied; empty as
+     * {@link Analysis#ac}. A two-terminal part's value or a linear section's gain is a rank-one
+     * update of the kept AC factors (Sherman–Morrison); other changes are solved in full.
      */
     Optional<AcSolution> ac(Change change);
   }

@@ -272,7 +272,11 @@ final class CompiledStage implements Analysis {
   }
 
   Optional<AcSolution> acAbout(SectionState[] states, boolean[] collapsed, double[] dc) {
-    double[][] solution = network.solveAc(states, collapsed, dc);
+    return acSolution(network.solveAc(states, collapsed, dc));
+  }
+
+  /** The AC response from the unknowns' phasors {@code {re, im}}; empty for null (singular). */
+  Optional<AcSolution> acSolution(double[][] solution) {
     if (solution == null) {
       return Optional.empty();
     }

@@ -22,6 +22,9 @@ final class DenseLu {
     private final double[][] lu;
     private final int[] order;
 
+    /** Entries of the inverse's diagonal found so far (NaN: not yet), kept for repeated tests. */
+    private double[] inverseDiagonal;
+
     private Factors(double[][] lu, int[] order) {
       this.lu = lu;
       this.order = order;
@@ -50,11 +53,43 @@ final class DenseLu {
       return y;
     }
 
-    /** Returns entry (k, k) of the inverse matrix. */
+    /**
+     * Returns entry (k, k) of the inverse matrix: the k-th unknown of {@code a·x = e_k}. The same
+     * sums as {@link #solve} with the unit vector, less the terms that are exactly zero: forward
+     * substitution starts at the row that holds the unit, back substitution stops at row k. Kept
+     * once found (the saturation search asks again for every section at every settled state).
+     */
     double inverseDiagonal(int k) {
-      double[] unit = new double[order.length];
-      unit[k] = 1;
-      return solve(unit)[k];
+      int n = order.length;
+      if (inverseDiagonal == null) {
+        inverseDiagonal = new double[n];
+        java.util.Arrays.fill(inverseDiagonal, Double.NaN);
+      } else if (!Double.isNaN(inverseDiagonal[k])) {
+        return inverseDiagonal[k];
+      }
+      int first = 0;
+      while (order[first] != k) {
+        first++;
+      }
+      double[] y = new double[n];
+      for (int i = first; i < n; i++) {
+        double sum = i == first ? 1 : 0;
+        double[] row = lu[i];
+        for (int j = first; j < i; j++) {
+          sum -= row[j] * y[j];
+        }
+        y[i] = sum;
+      }
+      for (int i = n - 1; i >= k; i--) {
+        double sum = y[i];
+        double[] row = lu[i];
+        for (int j = i + 1; j < n; j++) {
+          sum -= row[j] * y[j];
+        }
+        y[i] = sum / row[i];
+      }
+      inverseDiagonal[k] = y[k];
+      return y[k];
     }
   }
 
@@ -111,6 +146,125 @@ final class DenseLu {
       }
     }
     return new Factors(a, order);
+  }
+
+  /**
+   * An LU factorisation of a complex matrix with partial pivoting (the same pivots as {@link
+   * #solveComplex}), for solving with several right-hand sides.
+   */
+  static final class ComplexFactors {
+    private final double[][] re;
+    private final double[][] im;
+    private final int[] order;
+
+    private ComplexFactors(double[][] re, double[][] im, int[] order) {
+      this.re = re;
+      this.im = im;
+      this.order = order;
+    }
+
+    /** Returns {@code {re, im}} of x with {@code a·x = br + j·bi}; b is not changed. */
+    double[][] solve(double[] br, double[] bi) {
+      int n = order.length;
+      double[] yr = new double[n];
+      double[] yi = new double[n];
+      for (int i = 0; i < n; i++) {
+        double sr = br[order[i]];
+        double si = bi[order[i]];
+        double[] lr = re[i];
+        double[] li = im[i];
+        for (int j = 0; j < i; j++) {
+          sr -= lr[j] * yr[j] - li[j] * yi[j];
+          si -= lr[j] * yi[j] + li[j] * yr[j];
+        }
+        yr[i] = sr;
+        yi[i] = si;
+      }
+      for (int i = n - 1; i >= 0; i--) {
+        double sr = yr[i];
+        double si = yi[i];
+        double[] ur = re[i];
+        double[] ui = im[i];
+        for (int j = i + 1; j < n; j++) {
+          sr -= ur[j] * yr[j] - ui[j] * yi[j];
+          si -= ur[j] * yi[j] + ui[j] * yr[j];
+        }
+        double dr = ur[i];
+        double di = ui[i];
+        double d = dr * dr + di * di;
+        yr[i] = (sr * dr + si * di) / d;
+        yi[i] = (si * dr - sr * di) / d;
+      }
+      return new double[][] {yr, yi};
+    }
+  }
+
+  /**
+   * Factorises the complex matrix {@code ar + j·ai} in place and returns the factors, or null when
+   * it is singular (by the same test as {@link #solveComplex}).
+   */
+  static ComplexFactors factorComplex(double[][] ar, double[][] ai) {
+    int n = ar.length;
+    double[] rowScale = new double[n];
+    int[] order = new int[n];
+    for (int i = 0; i < n; i++) {
+      order[i] = i;
+      double max = 0;
+      for (int j = 0; j < n; j++) {
+        max = Math.max(max, Math.abs(ar[i][j]) + Math.abs(ai[i][j]));
+      }
+      if (max == 0) {
+        return null;
+      }
+      rowScale[i] = 1 / max;
+    }
+    for (int col = 0; col < n; col++) {
+      int pivot = col;
+      double best = (Math.abs(ar[col][col]) + Math.abs(ai[col][col])) * rowScale[col];
+      for (int row = col + 1; row < n; row++) {
+        double size = (Math.abs(ar[row][col]) + Math.abs(ai[row][col])) * rowScale[row];
+        if (size > best) {
+          best = size;
+          pivot = row;
+        }
+      }
+      if (best < SINGULAR) {
+        return null;
+      }
+      if (pivot != col) {
+        double[] r = ar[col];
+        ar[col] = ar[pivot];
+        ar[pivot] = r;
+        r = ai[col];
+        ai[col] = ai[pivot];
+        ai[pivot] = r;
+        double t = rowScale[col];
+        rowScale[col] = rowScale[pivot];
+        rowScale[pivot] = t;
+        int o = order[col];
+        order[col] = order[pivot];
+        order[pivot] = o;
+      }
+      double pr = ar[col][col];
+      double pi = ai[col][col];
+      double denominator = pr * pr + pi * pi;
+      for (int row = col + 1; row < n; row++) {
+        double fr = (ar[row][col] * pr + ai[row][col] * pi) / denominator;
+        double fi = (ai[row][col] * pr - ar[row][col] * pi) / denominator;
+        ar[row][col] = fr;
+        ai[row][col] = fi;
+        if (fr == 0 && fi == 0) {
+          continue;
+        }
+        for (int j = col + 1; j < n; j++) {
+          double xr = ar[col][j];
+          double xi = ai[col][j];
+          ar[row][j] -= fr * xr - fi * xi;
+          ai[row][j] -= fr * xi + fi * xr;
+        }
+      }
+    }
+    return new ComplexFactors(ar, ai, order);
   }
 
   /**

@@ -17,6 +17,9 @@ final class Linearization implements Analysis.Linearized {
   private final double[] x;
   private final DcSystem system;
 
+  /** The AC factors about this point, made on the first AC question. */
+  private AcUpdate acUpdate;
+
   Linearization(
       CompiledStage analysis, SectionState[] states, boolean[] collapsed, DcSystem system) {
     this.analysis = analysis;
@@ -80,9 +83,59 @@ final class Linearization implements Analysis.Linearized {
   }
 
   @Override
+  public Optional<OperatingPoint> settle(Change change) {
+    if (network.nonlinear || !movesRightHandSideOnly(change)) {
+      return Optional.empty();
+    }
+    Change undo = analysis.apply(change);
+    try {
+      // The matrix is the one factorised here, so one step is the exact solution with these
+      // states, and each linear section's stability is as it was.
+      double[] dx = system.factors().solve(network.residual(states, collapsed, x));
+      double[] moved = new double[x.length];
+      for (int i = 0; i < x.length; i++) {
+        moved[i] = x[i] + dx[i];
+      }
+      for (int k = 0; k < states.length; k++) {
+        if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
+          return Optional.empty();
+        }
+      }
+      return analysis.search.keepsEveryState(states, moved, system)
+          ? Optional.of(analysis.pointOf(analysis.search.stateOf(states, moved)))
+          : Optional.empty();
+    } finally {
+      analysis.apply(undo);
+    }
+  }
+
+  /**
+   * Whether a change moves only the right-hand side of the DC equations: a driven voltage, or a
+   * section's offset, bias currents or headroom (its gain and output resistance are in the matrix).
+   */
+  private boolean movesRightHandSideOnly(Change change) {
+    if (change instanceof Change.DrivenVolts) {
+      return true;
+    }
+    if (change instanceof Change.Device d) {
+      DeviceParams now = analysis.device(d.section());
+      return d.params().gain() == now.gain()
+          && d.params().outputResistance() == now.outputResistance();
+    }
+    return false;
+  }
+
+  @Override
   public Optional<AcSolution> ac(Change change) {
     if (network.acHz == 0) {
       return Optional.empty();
+    }
+    if (acUpdate == null) {
+      acUpdate = AcUpdate.of(network, states, collapsed, x);
+    }
+    double[][] updated = acUpdate == null ? null : acUpdate.solve(change);
+    if (updated != null) {
+      return analysis.acSolution(updated);
     }
     Change undo = analysis.apply(change);
     try {

@@ -55,6 +55,10 @@ public final class PowerOff {
   private static final double SETTLE_TIME_CONSTANTS = 7;
 
   private final Stage stage;
+
+  /** The stage's used package pins and their nets, built once (a lookup per point asked). */
+  private final Map<String, String> pinNets;
+
   private final Map<String, Integer> nodes = new LinkedHashMap<>();
   private final Network nominal;
   private final Network low;
@@ -62,10 +66,11 @@ public final class PowerOff {
 
   private PowerOff(Stage stage) {
     this.stage = stage;
+    this.pinNets = stage.pinNets();
     for (String net : stage.nets()) {
       nodes.put(net, nodes.size());
     }
-    for (String net : stage.pinNets().values()) {
+    for (String net : pinNets.values()) {
       nodes.putIfAbsent(net, nodes.size());
     }
     List<Part> resistors = new ArrayList<>();
@@ -104,7 +109,7 @@ public final class PowerOff {
     if (nodes.containsKey(point)) {
       return Optional.of(point);
     }
-    String pinNet = stage.pinNets().get(point);
+    String pinNet = pinNets.get(point);
     if (pinNet != null) {
       return Optional.of(pinNet);
     }
@@ -130,7 +135,7 @@ public final class PowerOff {
 
   /** Returns whether a point is a part lead ({@code R2.1}) rather than a net or a package pin. */
   public boolean isLead(String point) {
-    if (point == null || nodes.containsKey(point) || stage.pinNets().containsKey(point)) {
+    if (point == null || nodes.containsKey(point) || pinNets.containsKey(point)) {
       return false;
     }
     int dot = point.lastIndexOf('.');
@@ -143,7 +148,7 @@ public final class PowerOff {
    */
   public List<String> points() {
     Set<String> points = new LinkedHashSet<>(stage.nets());
-    points.addAll(stage.pinNets().keySet());
+    points.addAll(pinNets.keySet());
     for (Part part : stage.parts()) {
       for (String lead : part.leads()) {
         points.add(part.ref() + "." + lead);

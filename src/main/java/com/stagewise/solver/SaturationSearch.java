@@ -278,6 +278,21 @@ final class SaturationSearch {
     return null;
   }
 
+  /**
+   * Whether the search, started from {@code states} with the solution x of those states (whose
+   * factors are {@code system}'s), stays there: every section where its demand keeps it, every
+   * state consistent, every linear section stable. Exactly the first round of {@link
+   * #activeSetSearch} ending without a move.
+   */
+  boolean keepsEveryState(SectionState[] states, double[] x, DcSystem system) {
+    for (int k = 0; k < states.length; k++) {
+      if (network.forced[k] == null && preferredState(x, k, states[k]) != states[k]) {
+        return false;
+      }
+    }
+    return isConsistent(states, x) && allLinearStable(states, system);
+  }
+
   private boolean allLinearStable(SectionState[] states, DcSystem system) {
     for (int k = 0; k < states.length; k++) {
       if (network.forced[k] == null

@@ -1,0 +1,66 @@
+package com.stagewise.diagnosis;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Each reading's log-likelihood under every prediction of one list of hypotheses, kept per reading.
+ * The predictions do not change when a reading is added, only the sum over the readings, so a
+ * re-rank after one more reading computes only the new reading's figures; the others are looked up.
+ * The most recently used readings are kept, up to {@link #MAX_FIGURES} numbers in all. Safe to call
+ * from several threads.
+ */
+final class Likelihoods {
+  /** Numbers kept at most (8 bytes each: 32 MB), beyond which the least recently used go. */
+  private static final long MAX_FIGURES = 4_000_000;
+
+  private final List<Diagnoser.Hypothesis> hypotheses;
+  private final Evidence evidence;
+  private final int[] first;
+  private final int total;
+  private final Map<Evidence.Bound, double[]> byReading = new LinkedHashMap<>(64, 0.75f, true);
+
+  Likelihoods(List<Diagnoser.Hypothesis> hypotheses, Evidence evidence) {
+    this.hypotheses = hypotheses;
+    this.evidence = evidence;
+    this.first = new int[hypotheses.size()];
+    int count = 0;
+    for (int h = 0; h < first.length; h++) {
+      first[h] = count;
+      count += hypotheses.get(h).predictions.size();
+    }
+    this.total = count;
+  }
+
+  /** Returns the index of hypothesis h's first prediction in the arrays of {@link #of}. */
+  int first(int h) {
+    return first[h];
+  }
+
+  /**
+   * Returns the log-likelihood of a reading under every prediction, hypothesis by hypothesis in
+   * list order, each hypothesis's predictions in their order ({@link Evidence#logLikelihood}). The
+   * array is shared: do not change it.
+   */
+  synchronized double[] of(Evidence.Bound reading) {
+    double[] figures = byReading.get(reading);
+    if (figures != null) {
+      return figures;
+    }
+    figures = new double[total];
+    int i = 0;
+    for (Diagnoser.Hypothesis h : hypotheses) {
+      for (Prediction p : h.predictions) {
+        figures[i++] = evidence.logLikelihood(p, reading);
+      }
+    }
+    byReading.put(reading, figures);
+    var eldest = byReading.entrySet().iterator();
+    while ((long) byReading.size() * total > MAX_FIGURES && byReading.size() > 1) {
+      eldest.next();
+      eldest.remove();
+    }
+    return figures;
+  }
+}
