@@ -26,6 +26,7 @@ final class AcUpdate {
   private final DenseLu.ComplexFactors factors;
   private final double[] br;
   private final double[] bi;
+  private double[][] before;
 
   private AcUpdate(
       Network network,
@@ -125,7 +126,8 @@ final class AcUpdate {
     } else {
       return null;
     }
-    double[][] z = factors.solve(dbr, dbi);
+    // z = M⁻¹·b′: the response before the change where the right-hand side stays as it was.
+    double[][] z = changesRightHandSide(dbr, dbi) ? factors.solve(dbr, dbi) : unchanged();
     double[][] w = factors.solve(pr, pi);
     // qᵀz and qᵀw (q is real).
     double qzr = 0;
@@ -166,6 +168,18 @@ final class AcUpdate {
     // A large change (a part shorted or opened) makes z and the correction nearly cancel: beyond
     // GROWTH the update would lose more digits than a fresh factorisation, so solve in full.
     return terms > GROWTH * result ? null : new double[][] {xr, xi};
+  }
+
+  private boolean changesRightHandSide(double[] dbr, double[] dbi) {
+    return !java.util.Arrays.equals(dbr, br) || !java.util.Arrays.equals(dbi, bi);
+  }
+
+  /** The response before any change, solved once and kept. */
+  private double[][] unchanged() {
+    if (before == null) {
+      before = factors.solve(br, bi);
+    }
+    return before;
   }
 
   /** Adds coefficient c of net {@code net} in row s: into q, or the right-hand side if driven. */

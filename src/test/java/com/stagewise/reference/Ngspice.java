@@ -106,10 +106,29 @@ final class Ngspice {
   static String runFiles(Map<String, String> files, String main) {
     Path dir = null;
     try {
-      dir = Files.createTempDirectory("stagewise-spice");
+      dir = writeFiles(files);
+      return runIn(dir, main);
+    } finally {
+      deleteQuietly(dir);
+    }
+  }
+
+  /** Writes the files into a new temporary folder and returns it. */
+  static Path writeFiles(Map<String, String> files) {
+    try {
+      Path dir = Files.createTempDirectory("stagewise-spice");
       for (Map.Entry<String, String> f : files.entrySet()) {
         Files.writeString(dir.resolve(f.getKey()), f.getValue(), StandardCharsets.US_ASCII);
       }
+      return dir;
+    } catch (IOException e) {
+      throw new IllegalStateException("cannot write the netlists (" + e.getMessage() + ")", e);
+    }
+  }
+
+  /** Runs ngspice in batch mode on {@code main} in a folder of netlists written before. */
+  static String runIn(Path dir, String main) {
+    try {
       // Notes on stderr would otherwise interleave with printed values in mid-line.
       Path errors = dir.resolve("stderr.txt");
       ProcessBuilder builder =
@@ -130,8 +149,6 @@ final class Ngspice {
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
       throw new IllegalStateException("interrupted while ngspice ran", e);
-    } finally {
-      deleteQuietly(dir);
     }
   }
 
@@ -212,7 +229,7 @@ final class Ngspice {
     return sb.toString().trim();
   }
 
-  private static void deleteQuietly(Path dir) {
+  static void deleteQuietly(Path dir) {
     if (dir == null) {
       return;
     }
