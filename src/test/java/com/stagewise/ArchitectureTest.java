@@ -2,6 +2,7 @@ package com.stagewise;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.stagewise.ui.drawing.SchematicPicture;
 import com.tngtech.archunit.base.DescribedPredicate;
@@ -77,6 +78,40 @@ class ArchitectureTest {
             .count();
     org.junit.jupiter.api.Assertions.assertTrue(
         viewModels >= 6, "expected the six screens' view models, found " + viewModels);
+  }
+
+  /**
+   * The store contract knows no store: {@code history} and its records depend on neither the SQLite
+   * nor the PostgreSQL store, which both depend on it (issue 8: no cycle between the history's
+   * packages). Callers open a store by its own class.
+   */
+  @Test
+  void storeContract_knowsNoStoreImplementation() {
+    noClasses()
+        .that()
+        .resideInAnyPackage("com.stagewise.history", "com.stagewise.history.record..")
+        .should()
+        .dependOnClassesThat()
+        .resideInAnyPackage("com.stagewise.history.sqlite..", "com.stagewise.history.postgres..")
+        .check(classes);
+  }
+
+  /**
+   * No package of the program, at any depth, is part of a dependency cycle. One pair is taken as a
+   * whole: {@code circuit.value} (value parsing and formatting) raises the circuit's {@code
+   * InvalidInputException} and reads the {@code MeterSpec}, and the circuit's limits format their
+   * values with it; they are one feature in two folders.
+   */
+  @Test
+  void packages_areFreeOfCycles() {
+    slices()
+        .matching("com.stagewise.(**)")
+        .should()
+        .beFreeOfCycles()
+        .ignoreDependency(
+            JavaClass.Predicates.resideInAPackage("com.stagewise.circuit.value"),
+            JavaClass.Predicates.resideInAPackage("com.stagewise.circuit"))
+        .check(classes);
   }
 
   @Test

@@ -1,6 +1,7 @@
 package com.stagewise.app;
 
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.ui.BoardFlags;
 import com.stagewise.ui.CaseResume;
 import java.nio.file.Path;
@@ -27,7 +28,7 @@ record Workshop(
    * stage library from {@code stages}.
    */
   static Workshop open(DataFolder folder, boolean demo, Path stages) {
-    HistoryStore store = HistoryStore.open(folder.database());
+    HistoryStore store = SqliteHistory.open(folder.database());
     try {
       FileBoardFlags flags =
           new FileBoardFlags(

@@ -2,8 +2,10 @@ package com.stagewise.cli;
 
 import com.stagewise.casework.Casework;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.cli.history.Phrases;
 import com.stagewise.history.DatabaseLocation;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.report.CaseReport;
 import com.stagewise.report.PdfReport;
 import java.io.IOException;
@@ -75,7 +77,7 @@ final class ReportCommand implements Callable<Integer> {
           "no history database here; give the right file with --db or STAGEWISE_DB");
     }
     CaseReport report;
-    try (HistoryStore store = HistoryStore.openReadOnly(database)) {
+    try (HistoryStore store = SqliteHistory.openReadOnly(database)) {
       report =
           CaseReport.read(
               store, store.cases().resolveId(caseId), clock.instant(), Casework.version());
@@ -85,11 +87,11 @@ final class ReportCommand implements Callable<Integer> {
         .getOut()
         .println(
             "Repair report of case "
-                + Wording.shortId(report.caseFile().repairCase().id())
+                + HistoryStore.shortId(report.caseFile().repairCase().id())
                 + " (unit "
                 + report.unit().serial()
                 + ", "
-                + Wording.plural(pages, "page")
+                + Phrases.plural(pages, "page")
                 + ") written to "
                 + target
                 + ".");

@@ -1,8 +1,6 @@
 package com.stagewise.history;
 
-import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Path;
-import java.time.Clock;
 import java.util.UUID;
 
 /**
@@ -16,42 +14,23 @@ import java.util.UUID;
  * an {@code InvalidInputException}; trouble with the storage itself is a {@link StorageException}.
  * A store may be used from several threads; its calls run one at a time.
  *
- * <p>{@link #open(Path)} opens the embedded SQLite file; a second implementation passes the same
- * contract tests.
+ * <p>{@code history.sqlite.SqliteHistory} opens the embedded SQLite file and {@code
+ * history.postgres.PgHistory} the shop server; both pass the same contract tests. The contract
+ * knows neither, so that it stays free of storage detail.
  */
 public interface HistoryStore extends AutoCloseable {
-
-  /**
-   * Opens the history file at {@code file}, creating it (and its folder) if missing, and brings its
-   * schema up to date.
-   *
-   * @throws StorageException if the file is not a history database, is damaged, was made by a newer
-   *     program, or cannot be written; the file is then left as it was
-   */
-  static HistoryStore open(Path file) {
-    return SqliteHistory.open(file, Clock.systemUTC());
-  }
-
-  /** Opens the history file as {@link #open(Path)} does, taking times from {@code clock}. */
-  static HistoryStore open(Path file, Clock clock) {
-    return SqliteHistory.open(file, clock);
-  }
-
-  /**
-   * Opens an existing history file for reading only: nothing is created, migrated or written, so a
-   * read-only file (or folder) can still be listed and searched. Every write through the store is
-   * refused.
-   *
-   * @throws StorageException if the file is missing, not a history database, damaged, or of a
-   *     schema this program does not know; the file is left as it was
-   */
-  static HistoryStore openReadOnly(Path file) {
-    return SqliteHistory.openReadOnly(file, Clock.systemUTC());
-  }
 
   /** Returns a new stable id (a random lower-case UUID). */
   static String newId() {
     return UUID.randomUUID().toString();
+  }
+
+  /**
+   * Returns the first 8 characters of an id, as listings and reports show it (a prefix finds the
+   * case).
+   */
+  static String shortId(String id) {
+    return id.substring(0, Math.min(8, id.length()));
   }
 
   /** Units and board models. */

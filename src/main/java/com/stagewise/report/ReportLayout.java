@@ -3,6 +3,7 @@ package com.stagewise.report;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
+import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
@@ -48,7 +49,7 @@ final class ReportLayout {
             "Repair report — unit "
                 + report.unit().serial()
                 + " — case "
-                + shortId(report.caseFile().repairCase().id()));
+                + HistoryStore.shortId(report.caseFile().repairCase().id()));
   }
 
   /** Returns the pages of the report, measured with {@code measure}. */
@@ -292,9 +293,5 @@ final class ReportLayout {
 
   private static String orNone(String text, String none) {
     return text.isBlank() ? none : text;
-  }
-
-  private static String shortId(String id) {
-    return id.substring(0, Math.min(8, id.length()));
   }
 }

@@ -22,6 +22,7 @@ import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.interchange.StageSheet;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -88,7 +89,7 @@ class CaseworkTest {
   @BeforeEach
   void open() {
     file = folder.resolve("bench.db");
-    store = HistoryStore.open(file, clock);
+    store = SqliteHistory.open(file, clock);
     casework = new Casework(store, clock);
   }
 
@@ -471,7 +472,7 @@ class CaseworkTest {
       // either way nothing is written and the message says so.
       assertThatThrownBy(
               () -> {
-                try (HistoryStore damaged = HistoryStore.open(file, clock)) {
+                try (HistoryStore damaged = SqliteHistory.open(file, clock)) {
                   new Casework(damaged, clock).addUnit("A-2", "LP-3005", "");
                 }
               })
@@ -480,7 +481,7 @@ class CaseworkTest {
           .hasMessageContaining("left as it is");
 
       assertThat(HistoryDigest.of(file, List.of("unit"))).isEqualTo(before);
-      store = HistoryStore.open(folder.resolve("sound.db"), clock);
+      store = SqliteHistory.open(folder.resolve("sound.db"), clock);
     }
   }
 }

@@ -1,6 +1,7 @@
 package com.stagewise.history;
 
 import com.stagewise.history.demo.SyntheticHistory;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -46,7 +47,7 @@ public class HistoryStoreBenchmark {
   public void open() throws Exception {
     Path file = Path.of(System.getProperty("stagewise.bench.db", "target/bench/history-100k.db"));
     boolean fresh = !Files.exists(file);
-    store = HistoryStore.open(file);
+    store = SqliteHistory.open(file);
     if (fresh) {
       SyntheticHistory.fill(store, CASES, READINGS_PER_CASE, 1, 2_000);
     }

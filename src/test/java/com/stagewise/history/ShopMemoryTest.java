@@ -6,6 +6,7 @@ import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.Unit;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -26,7 +27,7 @@ class ShopMemoryTest {
 
   @Test
   void faultCounts_countsOnlyClosedFixedCasesOfTheModel(@TempDir Path folder) {
-    try (HistoryStore store = HistoryStore.open(folder.resolve("m.db"))) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("m.db"))) {
       BoardModel mixer = store.units().boardModel("MX-8", "");
       BoardModel psu = store.units().boardModel("PSU-30", "");
       Unit a = store.units().add("1", mixer.id(), "");

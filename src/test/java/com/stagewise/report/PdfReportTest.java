@@ -8,6 +8,7 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.demo.DemoHistory;
 import com.stagewise.history.record.Unit;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -136,7 +137,7 @@ class PdfReportTest {
 
   @Test
   void report_ofEveryDemoCase_renders() throws IOException {
-    try (HistoryStore store = HistoryStore.open(folder.resolve("demo.db"))) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("demo.db"))) {
       DemoHistory.fill(store);
       List<String> serials = new ArrayList<>();
       for (Unit unit : store.units().list(null)) {

@@ -10,6 +10,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -134,7 +135,7 @@ final class ReportFixture {
   /** Opens a new history in {@code folder}, stores the case and returns its report. */
   static CaseReport report(Path folder, int readings) {
     SteppingClock clock = new SteppingClock();
-    try (HistoryStore store = HistoryStore.open(folder.resolve("history.db"), clock)) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("history.db"), clock)) {
       String id = storeCase(store, clock, readings);
       return CaseReport.read(store, id, GENERATED, "test build");
     }

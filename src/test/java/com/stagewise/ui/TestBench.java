@@ -8,6 +8,7 @@ import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -31,7 +32,7 @@ public final class TestBench implements AutoCloseable {
   public final Bench bench;
 
   private TestBench(Path folder) {
-    store = HistoryStore.open(folder.resolve("history.db"));
+    store = SqliteHistory.open(folder.resolve("history.db"));
     resume = new CaseResume(folder.resolve("open-cases"));
     Problems recorder =
         (title, what, todo) -> {

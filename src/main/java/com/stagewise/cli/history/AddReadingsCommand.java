@@ -1,7 +1,7 @@
 package com.stagewise.cli.history;
 
-import static com.stagewise.cli.Wording.plural;
-import static com.stagewise.cli.Wording.shortId;
+import static com.stagewise.cli.history.Phrases.plural;
+import static com.stagewise.history.HistoryStore.shortId;
 
 import com.stagewise.casework.CaseAtHand;
 import com.stagewise.casework.Casework;

@@ -2,6 +2,7 @@ package com.stagewise.cli.history;
 
 import com.stagewise.history.DatabaseLocation;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import picocli.CommandLine;
@@ -22,11 +23,11 @@ final class HistoryOptions {
   CommandLine.Model.CommandSpec spec;
 
   HistoryStore open() {
-    return HistoryStore.open(DatabaseLocation.resolve(db));
+    return SqliteHistory.open(DatabaseLocation.resolve(db));
   }
 
   HistoryStore openForReading() {
-    return HistoryStore.openReadOnly(DatabaseLocation.resolve(db));
+    return SqliteHistory.openReadOnly(DatabaseLocation.resolve(db));
   }
 
   PrintWriter out() {

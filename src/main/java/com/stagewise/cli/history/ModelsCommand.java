@@ -1,6 +1,6 @@
 package com.stagewise.cli.history;
 
-import static com.stagewise.cli.Wording.plural;
+import static com.stagewise.cli.history.Phrases.plural;
 
 import com.stagewise.casework.Casework;
 import com.stagewise.history.record.BoardModel;

@@ -1,6 +1,6 @@
 package com.stagewise.cli.history;
 
-import static com.stagewise.cli.Wording.shortId;
+import static com.stagewise.history.HistoryStore.shortId;
 
 import com.stagewise.casework.Casework;
 import com.stagewise.history.record.RepairCase;

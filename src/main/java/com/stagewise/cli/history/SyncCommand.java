@@ -8,6 +8,7 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.SyncLedger;
 import com.stagewise.history.postgres.PgHistory;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.history.sync.Sync;
 import com.stagewise.history.sync.SyncReport;
 import com.stagewise.interchange.history.HistoryJson;
@@ -55,7 +56,7 @@ final class SyncCommand implements Callable<Integer> {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
     Path file = DatabaseLocation.resolve(db);
-    try (HistoryStore bench = HistoryStore.open(file)) {
+    try (HistoryStore bench = SqliteHistory.open(file)) {
       if (!(bench instanceof SyncLedger ledger)) {
         throw new InvalidInputException(file.toString(), "db", "expected a bench's history file");
       }

@@ -40,7 +40,18 @@ public final class SqliteHistory implements HistoryStore, SyncLedger {
     this.ledger = new Ledger(this);
   }
 
-  /** Opens (creating if missing) the history file and brings its schema up to date. */
+  /**
+   * Opens the history file at {@code file}, creating it (and its folder) if missing, and brings its
+   * schema up to date.
+   *
+   * @throws StorageException if the file is not a history database, is damaged, was made by a newer
+   *     program, or cannot be written; the file is then left as it was
+   */
+  public static SqliteHistory open(Path file) {
+    return open(file, Clock.systemUTC());
+  }
+
+  /** Opens the history file as {@link #open(Path)} does, taking times from {@code clock}. */
   public static SqliteHistory open(Path file, Clock clock) {
     return open(file, clock, Migrations.LATEST);
   }
@@ -57,7 +68,19 @@ public final class SqliteHistory implements HistoryStore, SyncLedger {
     }
   }
 
-  /** Opens an existing history file for reading only (see {@link HistoryStore#openReadOnly}). */
+  /**
+   * Opens an existing history file for reading only: nothing is created, migrated or written, so a
+   * read-only file (or folder) can still be listed and searched. Every write through the store is
+   * refused.
+   *
+   * @throws StorageException if the file is missing, not a history database, damaged, or of a
+   *     schema this program does not know; the file is left as it was
+   */
+  public static SqliteHistory openReadOnly(Path file) {
+    return openReadOnly(file, Clock.systemUTC());
+  }
+
+  /** Opens the history file for reading as {@link #openReadOnly(Path)} does, with a clock. */
   public static SqliteHistory openReadOnly(Path file, Clock clock) {
     Database database = Database.openReadOnly(file);
     try {

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 
 import com.stagewise.cli.ExitCode;
 import com.stagewise.cli.history.HistorySubcommandsTest.Run;
-import com.stagewise.history.HistoryStore;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermissions;
@@ -54,7 +54,7 @@ class DatabaseFileCommandTest {
   @Test
   void newerSchemaFile_exitsTwoAndKeepsItsHeader() throws Exception {
     Path file = folder.resolve("newer.db");
-    HistoryStore.open(file).close();
+    SqliteHistory.open(file).close();
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file)) {
       try (PreparedStatement s =
           c.prepareStatement("INSERT INTO schema_version VALUES (99, 0, 'V99__future.sql')")) {

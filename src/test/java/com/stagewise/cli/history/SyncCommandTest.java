@@ -7,6 +7,7 @@ import com.stagewise.history.SearchQuery;
 import com.stagewise.history.ServerAddress;
 import com.stagewise.history.postgres.TestServer;
 import com.stagewise.history.record.Outcome;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -59,7 +60,7 @@ class SyncCommandTest {
   void sync_json_summarisesWhatWentUp_andShowsProgress() throws Exception {
     ServerAddress address = server.freshShop();
     Path db = folder.resolve("bench.db");
-    try (HistoryStore bench = HistoryStore.open(db)) {
+    try (HistoryStore bench = SqliteHistory.open(db)) {
       String unit = bench.units().addWithModel("CLI-1", "PSU-30", "").unit().id();
       var c = bench.cases().open(unit, "dead on arrival");
       bench.cases().close(c.id(), Outcome.FIXED, List.of("VCC:missing"));
@@ -98,7 +99,7 @@ class SyncCommandTest {
             url(address));
     assertThat(down.code()).as(down.err()).isZero();
     assertThat(down.out()).contains("3 records came down");
-    try (HistoryStore bench = HistoryStore.open(other)) {
+    try (HistoryStore bench = SqliteHistory.open(other)) {
       assertThat(bench.cases().search(SearchQuery.all().withText("arrival"))).hasSize(1);
     }
   }
@@ -107,7 +108,7 @@ class SyncCommandTest {
   void sync_wrongPassword_saysSo_andTheBenchWorksOn() throws Exception {
     ServerAddress address = server.freshShop();
     Path db = folder.resolve("bench.db");
-    try (HistoryStore bench = HistoryStore.open(db)) {
+    try (HistoryStore bench = SqliteHistory.open(db)) {
       bench.units().addWithModel("CLI-2", "PSU-30", "");
     }
     Map<String, String> wrong = Map.of("PGUSER", TestServer.ADMIN, "PGPASSWORD", "wrong-pw-99");

@@ -7,6 +7,7 @@ import com.stagewise.history.ServerAddress;
 import com.stagewise.history.SyncLedger;
 import com.stagewise.history.demo.SyntheticHistory;
 import com.stagewise.history.record.HistoryBundle;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.history.sync.Sync;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -61,9 +62,9 @@ public final class ServerMeasure {
       p.toFile().delete();
     }
     ServerAddress address = server.freshShop();
-    try (HistoryStore benchA = HistoryStore.open(a);
-        HistoryStore benchB = HistoryStore.open(b);
-        HistoryStore benchC = HistoryStore.open(c);
+    try (HistoryStore benchA = SqliteHistory.open(a);
+        HistoryStore benchB = SqliteHistory.open(b);
+        HistoryStore benchC = SqliteHistory.open(c);
         PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
       SyntheticHistory.fill(benchA, 10_000, 10, 7, 2_000);
       int pending = ((SyncLedger) benchA).pendingCount();
@@ -103,7 +104,7 @@ public final class ServerMeasure {
     Path file = folder.resolve("search-" + cases + ".db");
     file.toFile().delete();
     ServerAddress address = server.freshShop();
-    try (HistoryStore made = HistoryStore.open(file)) {
+    try (HistoryStore made = SqliteHistory.open(file)) {
       made.units().boardModel("warm-up", "");
     }
     try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
@@ -124,7 +125,7 @@ public final class ServerMeasure {
         cases,
         (g1 - g0) / 1e9,
         (g2 - g1) / 1e9);
-    try (HistoryStore bench = HistoryStore.open(file);
+    try (HistoryStore bench = SqliteHistory.open(file);
         PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
       String serial = SyntheticHistory.serial(cases / 8);
       String rare = SyntheticHistory.word(2_000);

@@ -40,13 +40,13 @@ class DatabaseFileTest {
     assertTimeoutPreemptively(
         Duration.ofSeconds(10),
         () ->
-            assertThatThrownBy(() -> HistoryStore.open(fifo))
+            assertThatThrownBy(() -> SqliteHistory.open(fifo))
                 .isInstanceOf(StorageException.class)
                 .hasMessageContaining("not a regular file"));
     assertTimeoutPreemptively(
         Duration.ofSeconds(10),
         () ->
-            assertThatThrownBy(() -> HistoryStore.openReadOnly(fifo))
+            assertThatThrownBy(() -> SqliteHistory.openReadOnly(fifo))
                 .isInstanceOf(StorageException.class)
                 .hasMessageContaining("not a regular file"));
   }
@@ -55,10 +55,10 @@ class DatabaseFileTest {
   void devNullAsDatabase_isRefusedAndLeavesNoStrayFile() throws Exception {
     Path link = folder.resolve("history.db");
     Files.createSymbolicLink(link, Path.of("/dev/null"));
-    assertThatThrownBy(() -> HistoryStore.open(link))
+    assertThatThrownBy(() -> SqliteHistory.open(link))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("not a regular file");
-    assertThatThrownBy(() -> HistoryStore.open(Path.of("/dev/null")))
+    assertThatThrownBy(() -> SqliteHistory.open(Path.of("/dev/null")))
         .isInstanceOf(StorageException.class);
     try (Stream<Path> files = Files.list(folder)) {
       assertThat(files.toList()).containsExactly(link);
@@ -71,14 +71,14 @@ class DatabaseFileTest {
   @Test
   void newerSchemaInRollbackJournalMode_keepsItsHeaderByteForByte() throws Exception {
     Path file = folder.resolve("newer.db");
-    HistoryStore.open(file).close();
+    SqliteHistory.open(file).close();
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file)) {
       execute(c, "INSERT INTO schema_version VALUES (99, 0, 'V99__future.sql')");
       execute(c, "PRAGMA journal_mode = DELETE");
     }
     byte[] before = Files.readAllBytes(file);
     assertThat(before[18]).as("file format write version 1 = rollback journal").isEqualTo((byte) 1);
-    assertThatThrownBy(() -> HistoryStore.open(file))
+    assertThatThrownBy(() -> SqliteHistory.open(file))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("newer Stagewise")
         .hasMessageContaining("left as it is");
@@ -89,7 +89,7 @@ class DatabaseFileTest {
   @Test
   void damagedFile_refusesWritesAndStaysAsItIs() throws Exception {
     Path file = folder.resolve("damaged.db");
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       BoardModel model = store.units().boardModel("PSU-30", "");
       for (int i = 0; i < 300; i++) {
         Unit unit = store.units().add("U-" + i, model.id(), "");
@@ -109,7 +109,7 @@ class DatabaseFileTest {
     Files.write(file, bytes);
     assertThatThrownBy(
             () -> {
-              try (HistoryStore store = HistoryStore.open(file)) {
+              try (HistoryStore store = SqliteHistory.open(file)) {
                 store.units().boardModel("Another board", "");
               }
             })
@@ -123,7 +123,7 @@ class DatabaseFileTest {
   void restoreFromAnEmptyFile_isRefusedAndChangesNothing() throws Exception {
     Path file = folder.resolve("live.db");
     Path empty = Files.createFile(folder.resolve("empty.db"));
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       store.units().add("KEPT", store.units().boardModel("M", "").id(), "");
       assertThatThrownBy(() -> store.transfer().restoreFrom(empty))
           .isInstanceOf(InvalidInputException.class)
@@ -141,12 +141,12 @@ class DatabaseFileTest {
   @Test
   void readOnlyHistory_canBeListedAndSearchedButNotWritten() throws Exception {
     Path file = folder.resolve("shop.db");
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       Unit unit = store.units().add("NF-1", store.units().boardModel("MX-8", "").id(), "");
       store.cases().open(unit.id(), "hum on the left channel");
     }
     byte[] before = Files.readAllBytes(file);
-    try (HistoryStore store = HistoryStore.openReadOnly(file)) {
+    try (HistoryStore store = SqliteHistory.openReadOnly(file)) {
       assertThat(store.units().search(UnitQuery.serialLike("nf1"))).hasSize(1);
       assertThat(store.cases().search(SearchQuery.all().withText("hum"))).hasSize(1);
       assertThatThrownBy(() -> store.units().boardModel("Other", ""))
@@ -159,7 +159,7 @@ class DatabaseFileTest {
   @Test
   void openReadOnly_missingFile_isRefusedAndCreatesNothing() {
     Path file = folder.resolve("missing.db");
-    assertThatThrownBy(() -> HistoryStore.openReadOnly(file))
+    assertThatThrownBy(() -> SqliteHistory.openReadOnly(file))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("does not exist");
     assertThat(file).doesNotExist();

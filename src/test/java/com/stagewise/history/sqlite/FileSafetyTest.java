@@ -36,7 +36,7 @@ class FileSafetyTest {
 
   @Test
   void open_newFile_isAtLatestSchemaAndEmpty() {
-    try (HistoryStore store = HistoryStore.open(folder.resolve("new.db"))) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("new.db"))) {
       assertThat(store.schemaVersion()).isEqualTo(SqliteHistory.latestSchemaVersion());
       assertThat(store.isEmpty()).isTrue();
       assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
@@ -48,7 +48,7 @@ class FileSafetyTest {
     Path file = folder.resolve("notes.db");
     byte[] text = "Bench notes, not a database.\n".repeat(200).getBytes(StandardCharsets.UTF_8);
     Files.write(file, text);
-    assertThatThrownBy(() -> HistoryStore.open(file))
+    assertThatThrownBy(() -> SqliteHistory.open(file))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("is not a Stagewise history database")
         .hasMessageContaining(file.getFileName().toString());
@@ -63,7 +63,7 @@ class FileSafetyTest {
       s.execute();
     }
     byte[] before = Files.readAllBytes(file);
-    assertThatThrownBy(() -> HistoryStore.open(file))
+    assertThatThrownBy(() -> SqliteHistory.open(file))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("not a Stagewise history database");
     assertThat(Files.readAllBytes(file)).isEqualTo(before);
@@ -72,7 +72,7 @@ class FileSafetyTest {
   @Test
   void damagedFile_givesAClearMessageAndIsNotOverwritten() throws Exception {
     Path file = folder.resolve("damaged.db");
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       BoardModel model = store.units().boardModel("PSU-30", "");
       for (int i = 0; i < 200; i++) {
         Unit unit = store.units().add("U-" + i, model.id(), "");
@@ -91,7 +91,7 @@ class FileSafetyTest {
 
     assertThatThrownBy(
             () -> {
-              try (HistoryStore store = HistoryStore.open(file)) {
+              try (HistoryStore store = SqliteHistory.open(file)) {
                 store.cases().search(SearchQuery.all());
               }
             })
@@ -104,14 +104,14 @@ class FileSafetyTest {
   @Test
   void newerSchema_isRefusedAndLeftAsItIs() throws Exception {
     Path file = folder.resolve("newer.db");
-    HistoryStore.open(file).close();
+    SqliteHistory.open(file).close();
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
         PreparedStatement s =
             c.prepareStatement("INSERT INTO schema_version VALUES (99, 0, 'V99__future.sql')")) {
       s.execute();
     }
     byte[] before = Files.readAllBytes(file);
-    assertThatThrownBy(() -> HistoryStore.open(file))
+    assertThatThrownBy(() -> SqliteHistory.open(file))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("newer Stagewise")
         .hasMessageContaining("99");
@@ -131,7 +131,7 @@ class FileSafetyTest {
     }
     Path file = where.resolve("history.db");
     try {
-      assertThatThrownBy(() -> HistoryStore.open(file))
+      assertThatThrownBy(() -> SqliteHistory.open(file))
           .isInstanceOf(StorageException.class)
           .hasMessageContaining("Cannot create the history database in " + where)
           .hasMessageContaining("not writable");
@@ -143,7 +143,7 @@ class FileSafetyTest {
 
   @Test
   void folderGivenAsTheFile_isRefused() {
-    assertThatThrownBy(() -> HistoryStore.open(folder))
+    assertThatThrownBy(() -> SqliteHistory.open(folder))
         .isInstanceOf(StorageException.class)
         .hasMessageContaining("is a folder");
   }
@@ -157,7 +157,7 @@ class FileSafetyTest {
             "Lines\nand\r\nbreaks\tand tabs \\ backslashes % _ wildcards",
             "  leading and trailing spaces  ",
             "");
-    try (HistoryStore store = HistoryStore.open(folder.resolve("text.db"))) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("text.db"))) {
       BoardModel model = store.units().boardModel("Model \"X\"; 'quoted' — Ω", "Maker; 'Ltd'");
       Unit unit = store.units().add("SN\"1\";'2' — µ", model.id(), "owner 'O\"Brien'; 🔧");
       for (String text : texts) {
@@ -179,7 +179,7 @@ class FileSafetyTest {
 
   @Test
   void overlongText_isRefusedWithTheField() {
-    try (HistoryStore store = HistoryStore.open(folder.resolve("long.db"))) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("long.db"))) {
       BoardModel model = store.units().boardModel("M", "");
       assertThatThrownBy(() -> store.units().add("x".repeat(Checks.MAX_SHORT + 1), model.id(), ""))
           .isInstanceOf(InvalidInputException.class)
@@ -192,7 +192,7 @@ class FileSafetyTest {
   void backupAndRestore_bringBackTheSavedHistory() throws Exception {
     Path file = folder.resolve("live.db");
     Path backup = folder.resolve("backup.db");
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       BoardModel model = store.units().boardModel("PSU-30", "");
       Unit kept = store.units().add("KEPT", model.id(), "");
       store.cases().open(kept.id(), "before the backup");
@@ -210,7 +210,7 @@ class FileSafetyTest {
           .containsExactly("before the backup");
       assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
       // The history as it was before the restore is kept beside the file.
-      try (HistoryStore before = HistoryStore.open(saved)) {
+      try (HistoryStore before = SqliteHistory.open(saved)) {
         assertThat(before.units().bySerial("LATER")).hasSize(1);
       }
     }
@@ -221,7 +221,7 @@ class FileSafetyTest {
     Path file = folder.resolve("live.db");
     Path junk = folder.resolve("junk.db");
     Files.write(junk, "not a backup".getBytes(StandardCharsets.UTF_8));
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       store.units().add("KEPT", store.units().boardModel("M", "").id(), "");
       assertThatThrownBy(() -> store.transfer().restoreFrom(junk))
           .isInstanceOf(StorageException.class);
@@ -238,7 +238,7 @@ class FileSafetyTest {
         assertThat(in).as("fixture %s (make it with FixtureMaker)", name).isNotNull();
         Files.copy(in, copy, StandardCopyOption.REPLACE_EXISTING);
       }
-      try (HistoryStore store = HistoryStore.open(copy)) {
+      try (HistoryStore store = SqliteHistory.open(copy)) {
         assertThat(store.schemaVersion()).isEqualTo(SqliteHistory.latestSchemaVersion());
         assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
         Unit unit = store.units().bySerial("NF-8-0100").get(0);

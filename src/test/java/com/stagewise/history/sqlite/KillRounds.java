@@ -102,7 +102,7 @@ final class KillRounds {
   private static Result check(Path file, int rounds, int killedAtCount, Set<String> acknowledged)
       throws SQLException {
     String integrity;
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       integrity = store.transfer().integrityCheck();
     }
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file)) {

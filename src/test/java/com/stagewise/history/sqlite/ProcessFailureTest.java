@@ -54,7 +54,7 @@ class ProcessFailureTest {
   void twoWritersAtOnce_loseNothingAndNeverReportLocked() throws Exception {
     Path file = folder.resolve("shared.db");
     // Create the file first, so that both writers find the schema in place.
-    HistoryStore.open(file).close();
+    SqliteHistory.open(file).close();
     int perWriter = 120;
     Set<String> reported = ConcurrentHashMap.newKeySet();
     List<Process> children = new ArrayList<>();
@@ -76,7 +76,7 @@ class ProcessFailureTest {
       assertThat(readers.get(i).committed).isEqualTo(perWriter);
     }
     assertThat(reported).hasSize(2 * perWriter);
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       assertThat(store.cases().search(SearchQuery.all().withLimit(10_000))).hasSize(2 * perWriter);
       assertThat(store.transfer().integrityCheck()).isEqualTo("ok");
     }

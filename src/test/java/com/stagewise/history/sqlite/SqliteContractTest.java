@@ -18,7 +18,7 @@ class SqliteContractTest {
   private final AtomicInteger files = new AtomicInteger();
 
   private HistoryStore fresh(Clock clock) {
-    return HistoryStore.open(folder.resolve("h" + files.incrementAndGet() + ".db"), clock);
+    return SqliteHistory.open(folder.resolve("h" + files.incrementAndGet() + ".db"), clock);
   }
 
   @Nested

@@ -39,7 +39,7 @@ public final class WriterProcess {
     Path file = Path.of(args[0]);
     String label = args[1];
     int count = Integer.parseInt(args[2]);
-    try (HistoryStore store = HistoryStore.open(file)) {
+    try (HistoryStore store = SqliteHistory.open(file)) {
       BoardModel model = store.units().boardModel("Writer test board", "");
       List<Unit> existing = store.units().bySerial(label);
       Unit unit = existing.isEmpty() ? store.units().add(label, model.id(), "") : existing.get(0);

@@ -12,6 +12,7 @@ import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.List;
@@ -116,7 +117,7 @@ final class Bench {
     String name = args[3];
     Map<String, String> env = System.getenv();
     PgHistory server = null;
-    try (HistoryStore store = HistoryStore.open(db)) {
+    try (HistoryStore store = SqliteHistory.open(db)) {
       int n = mode.equals("work") ? Integer.parseInt(args[4]) : Integer.MAX_VALUE;
       if (!mode.equals("work")) {
         System.out.println("ready");

@@ -16,6 +16,7 @@ import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.BufferedReader;
 import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
@@ -52,8 +53,8 @@ class SyncTest {
   @Test
   void twoBenches_seeEachOthersCases_andTheShopMemoryOfBoth() {
     ServerAddress address = server.freshShop();
-    try (HistoryStore a = HistoryStore.open(folder.resolve("a.db"));
-        HistoryStore b = HistoryStore.open(folder.resolve("b.db"));
+    try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
+        HistoryStore b = SqliteHistory.open(folder.resolve("b.db"));
         PgHistory shop = shop(address)) {
       RepairCase fromA = Bench.addCase(a, "A-1", 0);
       RepairCase fromB = Bench.addCase(b, "B-1", 1);
@@ -82,8 +83,8 @@ class SyncTest {
   @Test
   void readingStruckOnOneBench_isStruckOnTheServerAndTheOther_andALaterRestoreWins() {
     ServerAddress address = server.freshShop();
-    try (HistoryStore a = HistoryStore.open(folder.resolve("a.db"));
-        HistoryStore b = HistoryStore.open(folder.resolve("b.db"));
+    try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
+        HistoryStore b = SqliteHistory.open(folder.resolve("b.db"));
         PgHistory shop = shop(address)) {
       RepairCase c = Bench.addCase(a, "A-7", 0);
       Bench.sync(a, shop, "a");
@@ -115,8 +116,8 @@ class SyncTest {
   @Test
   void sameCaseClosedOnTwoBenches_isAConflictReported_andNeitherCopyIsLost() {
     ServerAddress address = server.freshShop();
-    try (HistoryStore a = HistoryStore.open(folder.resolve("a.db"));
-        HistoryStore b = HistoryStore.open(folder.resolve("b.db"));
+    try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
+        HistoryStore b = SqliteHistory.open(folder.resolve("b.db"));
         PgHistory shop = shop(address)) {
       String unit = a.units().addWithModel("A-9", Bench.MODEL, "").unit().id();
       RepairCase open = a.cases().open(unit, "dead");
@@ -137,7 +138,7 @@ class SyncTest {
   void serverStoppedMidway_benchKeepsWorkingOffline_andCatchesUp() {
     ServerAddress address = server.freshShop();
     Path file = folder.resolve("offline.db");
-    try (HistoryStore bench = HistoryStore.open(file)) {
+    try (HistoryStore bench = SqliteHistory.open(file)) {
       try (PgHistory shop = shop(address)) {
         Bench.addCase(bench, "OFF-1", 0);
         Bench.sync(bench, shop, "offline");
@@ -185,7 +186,7 @@ class SyncTest {
       try (PgHistory shop = shop(address)) {
         Set<String> union = new HashSet<>();
         for (Path file : files) {
-          try (HistoryStore bench = HistoryStore.open(file)) {
+          try (HistoryStore bench = SqliteHistory.open(file)) {
             Bench.sync(bench, shop, file.getFileName().toString());
             union.addAll(Bench.content(bench));
           }
@@ -193,7 +194,7 @@ class SyncTest {
         Set<String> onServer = Bench.content(shop);
         assertThat(shop.cases().search(SearchQuery.all().withLimit(1000))).hasSize(benches * 5);
         for (Path file : files) {
-          try (HistoryStore bench = HistoryStore.open(file)) {
+          try (HistoryStore bench = SqliteHistory.open(file)) {
             Bench.sync(bench, shop, file.getFileName().toString());
             assertThat(Bench.content(bench)).as(file.toString()).isEqualTo(onServer);
           }
@@ -210,8 +211,8 @@ class SyncTest {
     Path other = folder.resolve("other.db");
     Random random = new Random(SEED);
     int killedMidSync = 0;
-    try (HistoryStore bench = HistoryStore.open(file);
-        HistoryStore otherBench = HistoryStore.open(other);
+    try (HistoryStore bench = SqliteHistory.open(file);
+        HistoryStore otherBench = SqliteHistory.open(other);
         PgHistory shop = shop(address)) {
       for (int i = 0; i < 40; i++) {
         Bench.addCase(bench, "K-" + (i % 7), i);

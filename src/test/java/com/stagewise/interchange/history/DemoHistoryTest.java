@@ -9,6 +9,7 @@ import com.stagewise.history.ShopMemory;
 import com.stagewise.history.demo.DemoHistory;
 import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.interchange.StageSheet;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -27,7 +28,7 @@ class DemoHistoryTest {
 
   @Test
   void demo_fillsAnEmptyHistoryOnly_andFeedsTheShopMemory(@TempDir Path folder) {
-    try (HistoryStore store = HistoryStore.open(folder.resolve("demo.db"))) {
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("demo.db"))) {
       assertThat(DemoHistory.fill(store).conflicts()).isEmpty();
       assertThat(new ShopMemory(store).faultCounts(DemoHistory.MIXER)).containsEntry("R2:open", 2);
       assertThatThrownBy(() -> DemoHistory.fill(store)).isInstanceOf(IllegalStateException.class);

@@ -22,6 +22,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
@@ -431,7 +432,7 @@ class HistoryExchangeTest {
   static final String AWKWARD_SERIAL = "SN \"42\"; x'y' — Ω";
 
   private HistoryStore open(String name) {
-    return HistoryStore.open(folder.resolve(name), clock);
+    return SqliteHistory.open(folder.resolve(name), clock);
   }
 
   /** Fills a history with two board models, three units, one closed and two open cases. */

@@ -3,6 +3,7 @@ package com.stagewise.interchange.history;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.demo.SyntheticHistory;
+import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -48,7 +49,7 @@ public class HistoryImportBenchmark {
 
   @Setup(Level.Invocation)
   public void emptyHistory() {
-    target = HistoryStore.open(folder.resolve("import-" + System.nanoTime() + ".db"));
+    target = SqliteHistory.open(folder.resolve("import-" + System.nanoTime() + ".db"));
   }
 
   /** Closes and deletes each imported history (about 40 MB each), so that none piles up. */

@@ -10,6 +10,7 @@ import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.UnitHistory;
@@ -52,7 +53,7 @@ class NewPartFaultCaseTest {
     Stage stage = StageSheet.read(Path.of("data", "stages", sheet + ".stage.json"));
     String readingsJson = truthReadings(sheet, fault);
 
-    try (HistoryStore store = HistoryStore.open(temp.resolve("history.db"))) {
+    try (HistoryStore store = SqliteHistory.open(temp.resolve("history.db"))) {
       Casework work = new Casework(store);
       var added = work.addUnit("NP-1", stage.board(), "");
       BoardModel model = added.boardModel();
