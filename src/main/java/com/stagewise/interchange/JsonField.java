@@ -1,26 +1,11 @@
 package com.stagewise.interchange;
 
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonParseException;
-import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.StreamReadConstraints;
-import com.fasterxml.jackson.core.exc.StreamConstraintsException;
-import com.fasterxml.jackson.core.io.JsonEOFException;
-import com.fasterxml.jackson.core.json.JsonReadFeature;
-import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
-import java.io.IOException;
 import java.io.InputStream;
-import java.time.DateTimeException;
 import java.time.Instant;
-import java.time.LocalDateTime;
-import java.time.ZoneOffset;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -38,14 +23,6 @@ import java.util.function.Function;
  * bundles.
  */
 public final class JsonField {
-  private static final ObjectMapper MAPPER =
-      JsonMapper.builder()
-          .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
-          // Read NaN and Infinity so that the complaint can name the field instead of the column.
-          .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-          .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-          .build();
-
   private final String source;
   private final String path;
   private final JsonNode node;
@@ -62,51 +39,12 @@ public final class JsonField {
    * @throws InvalidInputException if the text is not JSON or its top is not an object
    */
   public static JsonField parseRoot(String text, String source) {
-    JsonNode root;
-    try {
-      root = MAPPER.readTree(text);
-    } catch (JsonProcessingException e) {
-      throw new InvalidInputException(source, "", parseProblem(e));
-    }
-    if (root == null || root.isMissingNode()) {
-      throw new InvalidInputException(source, "", "the file is empty (expected a JSON object {…})");
-    }
-    JsonField field = new JsonField(source, "", root);
-    if (!root.isObject()) {
-      throw field.error("expected a JSON object {…} at the top, found " + describe(root));
-    }
-    return field;
+    return JsonParsing.root(text, source);
   }
 
-  private static String parseProblem(JsonProcessingException e) {
-    String where =
-        e.getLocation() == null
-            ? ""
-            : " at line "
-                + e.getLocation().getLineNr()
-                + ", column "
-                + e.getLocation().getColumnNr();
-    String original = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
-    if (e instanceof JsonEOFException || original.contains("end-of-input")) {
-      return "the text ends too early" + where + ": a bracket, brace or quote is not closed";
-    }
-    if (e instanceof JsonParseException && original.startsWith("Duplicate field '")) {
-      int end = original.indexOf('\'', "Duplicate field '".length());
-      String key = end > 0 ? original.substring("Duplicate field '".length(), end) : "?";
-      return "key \""
-          + key
-          + "\" appears twice in one object"
-          + where
-          + " (expected each key once)";
-    }
-    if (original.startsWith("Trailing token")) {
-      return "there is more text after the end of the JSON object"
-          + where
-          + " (expected one object)";
-    }
-    return "not valid JSON"
-        + where
-        + " (check for a missing or extra comma, quote, colon or bracket)";
+  /** Returns a field at the top of a document: its path is empty. */
+  static JsonField top(String source, JsonNode node) {
+    return new JsonField(source, "", node);
   }
 
   /** Returns an exception naming this field's file and path. */
@@ -337,50 +275,7 @@ public final class JsonField {
    */
   public static JsonField parseRoot(
       InputStream in, String source, String what, int maxString, int maxDepth) {
-    ObjectMapper mapper =
-        JsonMapper.builder(
-                JsonFactory.builder()
-                    .streamReadConstraints(
-                        StreamReadConstraints.builder()
-                            .maxStringLength(maxString)
-                            .maxNestingDepth(maxDepth)
-                            .build())
-                    .build())
-            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
-            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-            .build();
-    JsonNode root;
-    try {
-      root = mapper.readTree(in);
-    } catch (StreamConstraintsException e) {
-      String original = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
-      String problem =
-          original.contains("nesting depth")
-              ? "nested deeper than " + maxDepth + " levels (expected " + what + ")"
-              : original.contains("String value length") || original.contains("string length")
-                  ? "holds a text longer than "
-                      + maxString
-                      + " characters (more than "
-                      + what
-                      + " ever needs)"
-                  : "is larger than " + what + " may be";
-      throw new InvalidInputException(source, "", "the file " + problem);
-    } catch (JsonProcessingException e) {
-      throw new InvalidInputException(source, "", parseProblem(e));
-    } catch (IOException e) {
-      throw new InvalidInputException(source, "", "cannot read the file: " + e.getMessage());
-    }
-    if (root == null || root.isMissingNode()) {
-      throw new InvalidInputException(
-          source, "", "the file is empty (expected " + what + ", a JSON object {…})");
-    }
-    JsonField field = new JsonField(source, "", root);
-    if (!root.isObject()) {
-      throw field.error(
-          "expected " + what + " as a JSON object {…} at the top, found " + describe(root));
-    }
-    return field;
+    return JsonParsing.root(in, source, what, maxString, maxDepth);
   }
 
   /** Returns an optional child string, or {@code absent} when the key is missing or null. */
@@ -431,70 +326,11 @@ public final class JsonField {
   public Instant time() {
     String text = text();
     try {
-      Instant fast = fastUtc(text);
+      Instant fast = UtcText.fastUtc(text);
       return fast != null ? fast : Instant.parse(text);
     } catch (DateTimeParseException e) {
       throw error("expected a UTC time such as 2026-03-04T10:15:30Z, found " + describe(node));
     }
-  }
-
-  /**
-   * Returns the instant of a UTC time written as {@code Instant.toString} writes whole seconds or
-   * milliseconds ({@code 2026-03-04T10:15:30Z}, {@code 2026-03-04T10:15:30.123Z}), or null for any
-   * other shape (then {@code Instant.parse} decides). Bundles hold hundreds of thousands of times
-   * and {@code Instant.parse} costs several microseconds each.
-   */
-  static Instant fastUtc(String t) {
-    int n = t.length();
-    if ((n != 20 && n != 24)
-        || t.charAt(4) != '-'
-        || t.charAt(7) != '-'
-        || t.charAt(10) != 'T'
-        || t.charAt(13) != ':'
-        || t.charAt(16) != ':'
-        || t.charAt(n - 1) != 'Z'
-        || (n == 24 && t.charAt(19) != '.')) {
-      return null;
-    }
-    int year = digits(t, 0, 4);
-    int month = digits(t, 5, 2);
-    int day = digits(t, 8, 2);
-    int hour = digits(t, 11, 2);
-    int minute = digits(t, 14, 2);
-    int second = digits(t, 17, 2);
-    int millis = n == 24 ? digits(t, 20, 3) : 0;
-    if (year < 0
-        || month < 1
-        || month > 12
-        || day < 1
-        || day > 31
-        || hour < 0
-        || hour > 23
-        || minute < 0
-        || minute > 59
-        || second < 0
-        || second > 59
-        || millis < 0) {
-      return null;
-    }
-    try {
-      return LocalDateTime.of(year, month, day, hour, minute, second, millis * 1_000_000)
-          .toInstant(ZoneOffset.UTC);
-    } catch (DateTimeException e) {
-      return null;
-    }
-  }
-
-  private static int digits(String text, int from, int count) {
-    int value = 0;
-    for (int i = from; i < from + count; i++) {
-      char c = text.charAt(i);
-      if (c < '0' || c > '9') {
-        return -1;
-      }
-      value = value * 10 + (c - '0');
-    }
-    return value;
   }
 
   /** Returns a short description of what a node holds, for messages. */

@@ -62,7 +62,7 @@ public final class ReadingsSheet {
    * @throws InvalidInputException naming the file, the JSON path and what was expected
    */
   public static ReadingSet read(Path file, Stage stage) {
-    return read(StageSheet.readText(file), file.toString(), stage);
+    return read(SheetFiles.readText(file), file.toString(), stage);
   }
 
   /**
@@ -72,7 +72,7 @@ public final class ReadingsSheet {
    * @throws InvalidInputException naming the source, the JSON path and what was expected
    */
   public static ReadingSet read(String json, String source, Stage stage) {
-    StageSheet.requireSize(json, source);
+    SheetFiles.requireSize(json, source);
     JsonField root = JsonField.parseRoot(json, source);
     root.requireHeader(FORMAT, VERSION, "a readings file");
     root.object("a readings file", ROOT_KEYS);
@@ -143,7 +143,7 @@ public final class ReadingsSheet {
    * @throws InvalidInputException if the file cannot be written (naming the file)
    */
   public static void write(ReadingSet set, Path file) {
-    StageSheet.writeText(file, write(set));
+    SheetFiles.writeText(file, write(set));
   }
 
   /**

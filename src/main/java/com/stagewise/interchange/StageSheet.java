@@ -1,26 +1,18 @@
 package com.stagewise.interchange;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
-import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.InvalidInputException;
-import com.stagewise.circuit.LedColour;
 import com.stagewise.circuit.Limits;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
-import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
 import com.stagewise.circuit.TestInput;
-import com.stagewise.circuit.value.ZenerMarking;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -79,17 +71,6 @@ public final class StageSheet {
           "amplifiers");
   private static final List<String> RAIL_KEYS = List.of("net", "volts", "tolerance");
   private static final List<String> INPUT_KEYS = List.of("net", "dc", "ac", "hz");
-  private static final List<String> PART_KEYS =
-      List.of("ref", "kind", "value", "tolerance", "nets", "class", "colour", "position", "sealed");
-
-  /** A trimmer's wiper position when the sheet gives none: mid-travel (DESIGN.md). */
-  static final double DEFAULT_POSITION = 0.5;
-
-  /**
-   * Tolerance of a trimmer's end-to-end value when the sheet gives none (20 %, common practice).
-   */
-  static final double DEFAULT_TRIMMER_TOLERANCE = 0.20;
-
   private static final List<String> AMPLIFIER_KEYS =
       List.of(
           "ref",
@@ -112,7 +93,7 @@ public final class StageSheet {
    *     message names the file
    */
   public static Stage read(Path file) {
-    return read(readText(file), file.toString());
+    return read(SheetFiles.readText(file), file.toString());
   }
 
   /**
@@ -144,11 +125,11 @@ public final class StageSheet {
    * @throws InvalidInputException if the file cannot be read or is not a well-formed stage sheet
    */
   public static Stage readForm(Path file) {
-    return readForm(readText(file), file.toString());
+    return readForm(SheetFiles.readText(file), file.toString());
   }
 
   private static Stage parse(String json, String source, boolean checked) {
-    requireSize(json, source);
+    SheetFiles.requireSize(json, source);
     JsonField root = JsonField.parseRoot(json, source);
     root.requireHeader(FORMAT, VERSION, "a stage sheet");
     root.object("a stage sheet", ROOT_KEYS);
@@ -167,7 +148,7 @@ public final class StageSheet {
     int version = root.require("version", "the version number").integer("the version number");
     List<Part> parts = new ArrayList<>();
     for (JsonField field : root.require("parts", "an array of parts").elements("parts")) {
-      parts.add(part(field, version));
+      parts.add(SheetParts.part(field, version));
     }
     List<JsonField> ampFields =
         root.require("amplifiers", "an array of op-amp sections").elements("op-amp sections");
@@ -218,7 +199,7 @@ public final class StageSheet {
     fields.put("inputs", inputs);
     List<JsonNode> parts = new ArrayList<>();
     for (Part part : stage.parts()) {
-      parts.add(partNode(part));
+      parts.add(SheetParts.node(part));
     }
     fields.put("parts", parts);
     List<JsonNode> amplifiers = new ArrayList<>();
@@ -246,65 +227,7 @@ public final class StageSheet {
    * @throws InvalidInputException if the file cannot be written (naming the file)
    */
   public static void write(Stage stage, Path file) {
-    writeText(file, write(stage));
-  }
-
-  static String readText(Path file) {
-    try {
-      if (Files.isDirectory(file)) {
-        throw new InvalidInputException(file.toString(), "", "this is a folder (expected a file)");
-      }
-      if (Files.exists(file) && !Files.isRegularFile(file)) {
-        throw new InvalidInputException(
-            file.toString(), "", "this is not a regular file (expected a JSON text file)");
-      }
-      long size = Files.size(file);
-      if (size > Limits.MAX_FILE_BYTES) {
-        throw new InvalidInputException(
-            file.toString(),
-            "",
-            "the file is "
-                + size
-                + " bytes long, more than this program reads ("
-                + Limits.MAX_FILE_BYTES
-                + " bytes at most; a stage sheet or readings file is a few kilobytes)");
-      }
-      return Files.readString(file, StandardCharsets.UTF_8);
-    } catch (java.nio.file.NoSuchFileException e) {
-      throw new InvalidInputException(
-          file.toString(), "", "no such file (expected an existing file)");
-    } catch (java.nio.charset.MalformedInputException e) {
-      throw new InvalidInputException(
-          file.toString(), "", "the file is not UTF-8 text (expected a JSON text file)");
-    } catch (IOException e) {
-      throw new InvalidInputException(
-          file.toString(), "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
-    }
-  }
-
-  /** Refuses a text longer than {@link Limits#MAX_FILE_BYTES} characters before parsing it. */
-  static void requireSize(String json, String source) {
-    if (json.length() > Limits.MAX_FILE_BYTES) {
-      throw new InvalidInputException(
-          source,
-          "",
-          "the text is "
-              + json.length()
-              + " characters long, more than this program reads ("
-              + Limits.MAX_FILE_BYTES
-              + " at most)");
-    }
-  }
-
-  static void writeText(Path file, String text) {
-    try {
-      Files.writeString(file, text, StandardCharsets.UTF_8);
-    } catch (IOException e) {
-      throw new InvalidInputException(
-          file.toString(),
-          "",
-          "cannot write the file (" + e.getClass().getSimpleName() + "): expected a writable path");
-    }
+    SheetFiles.writeText(file, write(stage));
   }
 
   private static Rail rail(JsonField field) {
@@ -345,212 +268,6 @@ public final class StageSheet {
       return new TestInput(net, dc, ac, hz);
     } catch (InvalidInputException e) {
       throw field.rewrap(e, e.field());
-    }
-  }
-
-  private static ObjectNode partNode(Part part) {
-    ArrayNode nets = JsonNodeFactory.instance.arrayNode();
-    part.nets().forEach(nets::add);
-    ObjectNode node = JsonText.object().put("ref", part.ref()).put("kind", part.kind().word());
-    PartKind kind = part.kind();
-    if (kind == PartKind.DIODE) {
-      node.put("class", part.diodeClass().word());
-    } else if (kind == PartKind.LED) {
-      node.put("colour", part.colour().word());
-    } else if (kind == PartKind.ZENER) {
-      node.put("value", ZenerMarking.format(part.value()));
-    } else {
-      node.put("value", ValueText.format(part.value(), kind.isOhms()));
-    }
-    if (kind != PartKind.DIODE && kind != PartKind.LED) {
-      node.put("tolerance", ValueText.formatTolerance(part.tolerance()));
-    }
-    if (kind.isTrimmer()) {
-      node.set("position", JsonText.number(part.position()));
-      if (part.sealed()) {
-        node.put("sealed", true);
-      }
-    }
-    node.set("nets", nets);
-    return node;
-  }
-
-  private static Part part(JsonField field, int version) {
-    field.object("a part", PART_KEYS);
-    String ref = field.require("ref", "the designator, e.g. R1").name("the designator, e.g. R1");
-    PartKind kind;
-    JsonField kindField = field.require("kind", PartKind.words());
-    try {
-      kind = PartKind.of(kindField.name(PartKind.words()));
-    } catch (InvalidInputException e) {
-      throw kindField.rewrap(e, "");
-    }
-    if (kind.sheetVersion() > version) {
-      throw kindField.error(
-          "kind "
-              + kind.word()
-              + " needs a stage sheet of version "
-              + kind.sheetVersion()
-              + " (expected \"version\": "
-              + kind.sheetVersion()
-              + " at the top of the sheet)");
-    }
-    for (String key : List.of("class", "colour", "position", "sealed")) {
-      boolean allowed =
-          switch (key) {
-            case "class" -> kind == PartKind.DIODE;
-            case "colour" -> kind == PartKind.LED;
-            default -> kind.isTrimmer();
-          };
-      if (!allowed && field.optional(key).isPresent()) {
-        throw field
-            .optional(key)
-            .orElseThrow()
-            .error("a " + kind.word() + " has no \"" + key + "\" (remove it, or check the kind)");
-      }
-    }
-    if ((kind == PartKind.DIODE || kind == PartKind.LED) && field.optional("value").isPresent()) {
-      throw field
-          .optional("value")
-          .orElseThrow()
-          .error(
-              "a "
-                  + kind.word()
-                  + " has no value (its "
-                  + (kind == PartKind.LED ? "colour" : "class")
-                  + " sets its figures): remove \"value\"");
-    }
-    double value = 0;
-    if (kind == PartKind.ZENER) {
-      JsonField valueField =
-          field.require("value", "the zener's voltage, a marking such as 5V1, 12V or 3.3V");
-      value = zenerVolts(valueField);
-    } else if (!kind.isJunction()) {
-      String unit = kind.isOhms() ? "ohms, e.g. 4k7 or 470R" : "farads, e.g. 100n or 2u2";
-      value = field.require("value", "the value in " + unit).nonNegative("the value in " + unit);
-    }
-    double defaultTolerance =
-        switch (kind) {
-          case RESISTOR -> DEFAULT_RESISTOR_TOLERANCE;
-          case TRIMMER, POTENTIOMETER -> DEFAULT_TRIMMER_TOLERANCE;
-          default -> DEFAULT_CAPACITOR_TOLERANCE;
-        };
-    double tolerance =
-        kind == PartKind.DIODE || kind == PartKind.LED
-            ? 0
-            : field.optional("tolerance").map(JsonField::tolerance).orElse(defaultTolerance);
-    int count = kind.isTrimmer() ? 3 : 2;
-    String shape =
-        kind.isTrimmer()
-            ? "three net names [end, wiper, end], e.g. [\"OUT\", \"FB\", \"GND\"]"
-            : kind.isJunction()
-                ? "two net names [anode, cathode], e.g. [\"OUT\", \"RECT\"]"
-                : "two net names, the nets the part joins, e.g. [\"IN\", \"SUM\"]";
-    JsonField netsField = field.require("nets", shape);
-    List<JsonField> nets = netsField.elements(shape);
-    if (nets.size() != count) {
-      throw netsField.error(
-          ref
-              + " is a "
-              + kind.word()
-              + ": expected "
-              + shape
-              + ", found "
-              + nets.size()
-              + (nets.size() == 1 ? " net" : " nets"));
-    }
-    List<String> names = new ArrayList<>();
-    for (JsonField net : nets) {
-      names.add(net.name("a net name"));
-    }
-    DiodeClass diodeClass = null;
-    if (kind == PartKind.DIODE) {
-      JsonField classField = field.optional("class").orElse(null);
-      if (classField != null) {
-        try {
-          diodeClass = DiodeClass.of(classField.name("silicon or schottky"));
-        } catch (InvalidInputException e) {
-          throw classField.rewrap(e, "");
-        }
-      }
-    }
-    LedColour colour = null;
-    if (kind == PartKind.LED) {
-      JsonField colourField =
-          field.require("colour", "the LED's colour (" + LedColour.words() + ")");
-      try {
-        colour = LedColour.of(colourField.name(LedColour.words()));
-      } catch (InvalidInputException e) {
-        throw colourField.rewrap(e, "");
-      }
-    }
-    double position = Double.NaN;
-    boolean sealed = false;
-    if (kind.isTrimmer()) {
-      position =
-          field
-              .optional("position")
-              .map(f -> f.number("the wiper position, from 0 to 1 (e.g. 0.5)"))
-              .orElse(DEFAULT_POSITION);
-      sealed =
-          field
-              .optional("sealed")
-              .map(
-                  f -> {
-                    if (!f.node().isBoolean()) {
-                      throw f.error(
-                          "expected true or false, found " + JsonField.describe(f.node()));
-                    }
-                    return f.node().booleanValue();
-                  })
-              .orElse(false);
-    }
-    try {
-      if (kind.isTrimmer()) {
-        return new Part(
-            ref,
-            kind,
-            value,
-            tolerance,
-            names.get(0),
-            names.get(2),
-            names.get(1),
-            position,
-            sealed,
-            null,
-            null);
-      }
-      return new Part(
-          ref,
-          kind,
-          value,
-          tolerance,
-          names.get(0),
-          names.get(1),
-          null,
-          Double.NaN,
-          false,
-          diodeClass,
-          colour);
-    } catch (InvalidInputException e) {
-      throw field.rewrap(e, e.field());
-    }
-  }
-
-  private static double zenerVolts(JsonField valueField) {
-    JsonNode node = valueField.node();
-    if (node.isNumber()) {
-      return valueField.nonNegative("the zener's voltage in volts, e.g. 5.1");
-    }
-    if (!node.isTextual()) {
-      throw valueField.error(
-          "expected the zener's voltage, a marking such as 5V1, 12V or 3.3V, found "
-              + JsonField.describe(node));
-    }
-    try {
-      return ZenerMarking.parse(node.textValue());
-    } catch (InvalidInputException e) {
-      throw valueField.rewrap(e, "");
     }
   }
 
