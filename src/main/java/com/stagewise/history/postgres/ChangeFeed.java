@@ -1,6 +1,9 @@
 package com.stagewise.history.postgres;
 
 import com.stagewise.history.ShopServer;
+import com.stagewise.history.jdbc.Records;
+import com.stagewise.history.jdbc.Rows;
+import com.stagewise.history.jdbc.SqlDialect;
 import com.stagewise.history.record.HistoryBundle;
 import java.sql.Connection;
 import java.sql.SQLException;
@@ -27,7 +30,7 @@ final class ChangeFeed {
 
   static ShopServer.Changes since(
       Connection connection, long after, String programVersion, Instant now) throws SQLException {
-    try (Rows rows = new Rows(connection)) {
+    try (Rows rows = new Rows(connection, SqlDialect.POSTGRES)) {
       long through = after;
       for (String table : TABLES) {
         long max =
@@ -69,7 +72,11 @@ final class ChangeFeed {
                   Records::unit,
                   after),
               rows.query(
-                  SINCE + Records.CASE + " WHERE " + numbered(cases) + " ORDER BY c.change_no",
+                  SINCE
+                      + Records.cases(SqlDialect.POSTGRES)
+                      + " WHERE "
+                      + numbered(cases)
+                      + " ORDER BY c.change_no",
                   Records::repairCase,
                   after),
               rows.query(

@@ -2,6 +2,7 @@ package com.stagewise.history.postgres;
 
 import com.stagewise.history.ServerAddress;
 import com.stagewise.history.StorageException;
+import com.stagewise.history.jdbc.Rows;
 import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.PreparedStatement;

@@ -3,16 +3,28 @@ package com.stagewise.history.postgres;
 import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
+import com.stagewise.history.SearchHit;
+import com.stagewise.history.SearchQuery;
 import com.stagewise.history.ServerAddress;
 import com.stagewise.history.ShopServer;
 import com.stagewise.history.StageLibrary;
 import com.stagewise.history.StorageException;
 import com.stagewise.history.Transfer;
 import com.stagewise.history.Units;
+import com.stagewise.history.jdbc.JdbcAccess;
+import com.stagewise.history.jdbc.JdbcCases;
+import com.stagewise.history.jdbc.JdbcLibrary;
+import com.stagewise.history.jdbc.JdbcUnits;
+import com.stagewise.history.jdbc.Rows;
+import com.stagewise.history.jdbc.SqlDialect;
+import com.stagewise.history.jdbc.SqlWork;
 import com.stagewise.history.record.HistoryBundle;
 import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.SQLException;
 import java.time.Clock;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -26,17 +38,18 @@ import java.util.Map;
 public final class PgHistory implements HistoryStore, ShopServer {
   private final PgDatabase database;
   private final Clock clock;
-  private final PgUnits units;
-  private final PgCases cases;
-  private final PgLibrary library;
+  private final JdbcUnits units;
+  private final JdbcCases cases;
+  private final JdbcLibrary library;
   private final PgTransfer transfer;
 
   private PgHistory(PgDatabase database, Clock clock) {
     this.database = database;
     this.clock = clock;
-    this.units = new PgUnits(this);
-    this.cases = new PgCases(this);
-    this.library = new PgLibrary(this);
+    JdbcAccess access = new Access(clock);
+    this.units = new JdbcUnits(access);
+    this.cases = new JdbcCases(access);
+    this.library = new JdbcLibrary(access);
     this.transfer = new PgTransfer(this);
   }
 
@@ -142,7 +155,7 @@ public final class PgHistory implements HistoryStore, ShopServer {
     return database.read(
         "count confirmed faults",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.POSTGRES)) {
             Map<String, Map<String, Integer>> counts = new LinkedHashMap<>();
             for (Object[] row :
                 rows.query(
@@ -184,5 +197,27 @@ public final class PgHistory implements HistoryStore, ShopServer {
 
   synchronized <T> T write(String what, PgDatabase.Work<T> work) {
     return database.write(what, work);
+  }
+
+  /** The shared JDBC parts' way into this store: one transaction at a time, and its search. */
+  private final class Access extends JdbcAccess {
+    Access(Clock clock) {
+      super(clock, SqlDialect.POSTGRES);
+    }
+
+    @Override
+    protected <T> T read(String what, SqlWork<T> work) {
+      return PgHistory.this.read(what, work::run);
+    }
+
+    @Override
+    protected <T> T write(String what, SqlWork<T> work) {
+      return PgHistory.this.write(what, work::run);
+    }
+
+    @Override
+    protected List<SearchHit> search(Connection connection, SearchQuery query) throws SQLException {
+      return TextSearch.run(connection, query);
+    }
   }
 }

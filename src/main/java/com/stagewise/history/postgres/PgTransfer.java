@@ -4,6 +4,9 @@ import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.ExportSelection;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.Transfer;
+import com.stagewise.history.jdbc.Exporter;
+import com.stagewise.history.jdbc.Importer;
+import com.stagewise.history.jdbc.SqlDialect;
 import com.stagewise.history.record.HistoryBundle;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -36,13 +39,15 @@ final class PgTransfer implements Transfer {
   @Override
   public HistoryBundle export(ExportSelection selection, String programVersion) {
     Instant now = history.clock().instant();
-    return history.read("export", c -> Exporter.export(c, selection, programVersion, now));
+    return history.read(
+        "export", c -> Exporter.export(c, SqlDialect.POSTGRES, selection, programVersion, now));
   }
 
   @Override
   public ImportReport importBundle(HistoryBundle bundle, String source) {
     Instant now = history.clock().instant();
-    return history.write("import", c -> new Importer(c, source, now).run(bundle));
+    return history.write(
+        "import", c -> new Importer(c, SqlDialect.POSTGRES, source, now).run(bundle));
   }
 
   /**

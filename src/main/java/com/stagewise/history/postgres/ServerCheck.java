@@ -3,6 +3,7 @@ package com.stagewise.history.postgres;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.ServerAddress;
 import com.stagewise.history.StorageException;
+import com.stagewise.history.jdbc.Rows;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;

@@ -3,6 +3,10 @@ package com.stagewise.history.sqlite;
 import com.stagewise.history.BundleCheck;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.SyncLedger;
+import com.stagewise.history.jdbc.Importer;
+import com.stagewise.history.jdbc.Records;
+import com.stagewise.history.jdbc.Rows;
+import com.stagewise.history.jdbc.SqlDialect;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.HistoryBundle;
@@ -54,7 +58,7 @@ final class Ledger implements SyncLedger {
     return history.read(
         "read pending records",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             // Board models first, then units, then cases: a batch's parents are in it anyway, but
             // this order sends a shop's new models before the cases that use them.
             List<Pending> all =
@@ -138,7 +142,8 @@ final class Ledger implements SyncLedger {
       units.add(unit);
     } else {
       RepairCase rc =
-          rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, key).orElseThrow();
+          rows.first(Records.cases(SqlDialect.SQLITE) + " WHERE c.id = ?", Records::repairCase, key)
+              .orElseThrow();
       Unit unit =
           rows.first(Records.UNIT + " WHERE id = ?", Records::unit, rc.unitId()).orElseThrow();
       models.addAll(
@@ -194,7 +199,7 @@ final class Ledger implements SyncLedger {
     history.write(
         "mark records as on the server",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             for (Pending p : batch.pending()) {
               rows.update(
                   "DELETE FROM outbox WHERE kind = ? AND id = ? AND version = ?",
@@ -213,12 +218,12 @@ final class Ledger implements SyncLedger {
     return history.write(
         "merge records from the server",
         c -> {
-          ImportReport report = new Importer(c, source, now).run(bundle);
+          ImportReport report = new Importer(c, SqlDialect.SQLITE, source, now).run(bundle);
           Set<String> kept = new HashSet<>();
           for (ImportReport.Conflict conflict : report.conflicts()) {
             kept.add(conflict.id());
           }
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             for (String id : ids(bundle)) {
               if (!kept.contains(id)) {
                 rows.update("DELETE FROM outbox WHERE id = ?", id);
@@ -247,7 +252,7 @@ final class Ledger implements SyncLedger {
     return history.read(
         "read the sync state",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             return rows.first(
                     "SELECT pulled_through FROM sync_state WHERE server = ?",
                     rs -> rs.getLong(1),
@@ -262,7 +267,7 @@ final class Ledger implements SyncLedger {
     history.write(
         "record the sync state",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             rows.update(
                 "INSERT INTO sync_state (server, pulled_through) VALUES (?, ?)"
                     + " ON CONFLICT (server) DO UPDATE SET pulled_through ="
@@ -279,7 +284,7 @@ final class Ledger implements SyncLedger {
     history.write(
         "record the sync time",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             rows.update(
                 "INSERT INTO sync_state (server, pulled_through, synced_at) VALUES (?, 0, ?)"
                     + " ON CONFLICT (server) DO UPDATE SET synced_at = excluded.synced_at",
@@ -295,7 +300,7 @@ final class Ledger implements SyncLedger {
     return history.read(
         "read the sync state",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             return server == null
                 ? rows.first(
                         "SELECT max(synced_at) FROM sync_state WHERE synced_at IS NOT NULL",
@@ -316,7 +321,7 @@ final class Ledger implements SyncLedger {
     history.write(
         "keep the shop's counts",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             rows.update("DELETE FROM shop_fault_count");
             for (Map.Entry<String, Map<String, Integer>> model : counts.entrySet()) {
               for (Map.Entry<String, Integer> fault : model.getValue().entrySet()) {
@@ -338,7 +343,7 @@ final class Ledger implements SyncLedger {
     return history.read(
         "read the shop's counts",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = new Rows(c, SqlDialect.SQLITE)) {
             Map<String, Integer> counts = new LinkedHashMap<>();
             for (Object[] row :
                 rows.query(

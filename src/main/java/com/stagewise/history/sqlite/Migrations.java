@@ -1,6 +1,8 @@
 package com.stagewise.history.sqlite;
 
 import com.stagewise.history.StorageException;
+import com.stagewise.history.jdbc.Rows;
+import com.stagewise.history.jdbc.SqlDialect;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -65,7 +67,7 @@ final class Migrations {
 
   /** Returns SQLite's own integrity check of the file: {@code ok}, or what is wrong. */
   static String integrityCheck(Connection connection) throws SQLException {
-    try (Rows rows = new Rows(connection)) {
+    try (Rows rows = new Rows(connection, SqlDialect.SQLITE)) {
       return String.join("; ", rows.query("PRAGMA integrity_check", rs -> rs.getString(1)));
     }
   }

@@ -2,6 +2,7 @@ package com.stagewise.history.sqlite;
 
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
+import com.stagewise.history.jdbc.Rows;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import java.sql.Connection;

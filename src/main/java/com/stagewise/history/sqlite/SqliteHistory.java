@@ -3,12 +3,22 @@ package com.stagewise.history.sqlite;
 import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
+import com.stagewise.history.SearchHit;
+import com.stagewise.history.SearchQuery;
 import com.stagewise.history.StageLibrary;
 import com.stagewise.history.SyncLedger;
 import com.stagewise.history.Transfer;
 import com.stagewise.history.Units;
+import com.stagewise.history.jdbc.JdbcAccess;
+import com.stagewise.history.jdbc.JdbcCases;
+import com.stagewise.history.jdbc.JdbcLibrary;
+import com.stagewise.history.jdbc.JdbcUnits;
+import com.stagewise.history.jdbc.SqlDialect;
+import com.stagewise.history.jdbc.SqlWork;
 import com.stagewise.history.record.HistoryBundle;
 import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.SQLException;
 import java.time.Clock;
 import java.time.Instant;
 import java.util.List;
@@ -24,18 +34,19 @@ import java.util.Optional;
 public final class SqliteHistory implements HistoryStore, SyncLedger {
   private final Database database;
   private final Clock clock;
-  private final SqliteUnits units;
-  private final SqliteCases cases;
-  private final SqliteLibrary library;
+  private final JdbcUnits units;
+  private final JdbcCases cases;
+  private final JdbcLibrary library;
   private final SqliteTransfer transfer;
   private final Ledger ledger;
 
   private SqliteHistory(Database database, Clock clock) {
     this.database = database;
     this.clock = clock;
-    this.units = new SqliteUnits(this);
-    this.cases = new SqliteCases(this);
-    this.library = new SqliteLibrary(this);
+    JdbcAccess access = new Access(clock);
+    this.units = new JdbcUnits(access);
+    this.cases = new JdbcCases(access);
+    this.library = new JdbcLibrary(access);
     this.transfer = new SqliteTransfer(this);
     this.ledger = new Ledger(this);
   }
@@ -219,5 +230,27 @@ public final class SqliteHistory implements HistoryStore, SyncLedger {
   /** Runs {@code work} in one write transaction, one call at a time. */
   synchronized <T> T write(String what, Database.Work<T> work) {
     return database.write(what, work);
+  }
+
+  /** The shared JDBC parts' way into this store: one transaction at a time, and its search. */
+  private final class Access extends JdbcAccess {
+    Access(Clock clock) {
+      super(clock, SqlDialect.SQLITE);
+    }
+
+    @Override
+    protected <T> T read(String what, SqlWork<T> work) {
+      return SqliteHistory.this.read(what, work::run);
+    }
+
+    @Override
+    protected <T> T write(String what, SqlWork<T> work) {
+      return SqliteHistory.this.write(what, work::run);
+    }
+
+    @Override
+    protected List<SearchHit> search(Connection connection, SearchQuery query) throws SQLException {
+      return Search.run(connection, query);
+    }
   }
 }

@@ -1,4 +1,4 @@
-package com.stagewise.history.sqlite;
+package com.stagewise.history.jdbc;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.Checks;
@@ -20,7 +20,8 @@ final class Require {
   }
 
   static RepairCase repairCase(Rows rows, String caseId) throws SQLException {
-    return rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, caseId)
+    return rows.first(
+            Records.cases(rows.dialect()) + " WHERE c.id = ?", Records::repairCase, caseId)
         .orElseThrow(
             () ->
                 new InvalidInputException(

@@ -1,4 +1,4 @@
-package com.stagewise.history.postgres;
+package com.stagewise.history.jdbc;
 
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
@@ -18,44 +18,49 @@ import java.util.Arrays;
 import java.util.List;
 
 /** The queries that select each kind of record, and the mapping of their rows to records. */
-final class Records {
-  static final String BOARD_MODEL = "SELECT id, name, maker, notes, updated_at FROM board_model";
-  static final String STAGE_SHEET =
+public final class Records {
+  public static final String BOARD_MODEL =
+      "SELECT id, name, maker, notes, updated_at FROM board_model";
+  public static final String STAGE_SHEET =
       "SELECT id, board_model_id, title, sheet_json, updated_at FROM stage_sheet";
-  static final String UNIT = "SELECT id, serial, board_model_id, owner, updated_at FROM unit";
-  static final String CASE =
-      "SELECT c.id, c.unit_id, c.opened_at, c.symptom, c.status, c.closed_at, c.outcome,"
-          + " c.updated_at, (SELECT string_agg(fault_id, ' ' ORDER BY position) FROM"
-          + " confirmed_fault f WHERE f.case_id = c.id) AS faults"
-          + " FROM repair_case c";
-  static final String READING =
+  public static final String UNIT =
+      "SELECT id, serial, board_model_id, owner, updated_at FROM unit";
+  public static final String READING =
       "SELECT id, case_id, at, kind, value, hz, uncertainty, meter, taken_at, to_point,"
           + " struck_at, updated_at FROM reading";
-  static final String SUSPECT_LIST =
+  public static final String SUSPECT_LIST =
       "SELECT id, case_id, computed_at, program_version, verdict, next_probes FROM suspect_list";
-  static final String ACTION =
+  public static final String ACTION =
       "SELECT id, case_id, at, kind, part, old_value, new_value, text, updated_at"
           + " FROM repair_action";
-  static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
+  public static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
 
   private Records() {}
 
-  static BoardModel boardModel(ResultSet rs) throws SQLException {
+  /** The query that selects cases (table alias {@code c}), with their confirmed faults. */
+  public static String cases(SqlDialect dialect) {
+    return "SELECT c.id, c.unit_id, c.opened_at, c.symptom, c.status, c.closed_at, c.outcome,"
+        + " c.updated_at, "
+        + dialect.confirmedFaults()
+        + " AS faults FROM repair_case c";
+  }
+
+  public static BoardModel boardModel(ResultSet rs) throws SQLException {
     return new BoardModel(
         rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
   }
 
-  static StageSheetRecord stageSheet(ResultSet rs) throws SQLException {
+  public static StageSheetRecord stageSheet(ResultSet rs) throws SQLException {
     return new StageSheetRecord(
         rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
   }
 
-  static Unit unit(ResultSet rs) throws SQLException {
+  public static Unit unit(ResultSet rs) throws SQLException {
     return new Unit(
         rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
   }
 
-  static RepairCase repairCase(ResultSet rs) throws SQLException {
+  public static RepairCase repairCase(ResultSet rs) throws SQLException {
     String outcome = rs.getString(7);
     return new RepairCase(
         rs.getString(1),
@@ -69,7 +74,7 @@ final class Records {
         time(rs, 8));
   }
 
-  static StoredReading reading(ResultSet rs) throws SQLException {
+  public static StoredReading reading(ResultSet rs) throws SQLException {
     return new StoredReading(
         rs.getString(1),
         rs.getString(2),
@@ -85,7 +90,7 @@ final class Records {
         time(rs, 12));
   }
 
-  static RepairAction action(ResultSet rs) throws SQLException {
+  public static RepairAction action(ResultSet rs) throws SQLException {
     return new RepairAction(
         rs.getString(1),
         rs.getString(2),
@@ -98,22 +103,22 @@ final class Records {
         time(rs, 9));
   }
 
-  static CaseNote note(ResultSet rs) throws SQLException {
+  public static CaseNote note(ResultSet rs) throws SQLException {
     return new CaseNote(
         rs.getString(1), rs.getString(2), time(rs, 3), rs.getString(4), time(rs, 5));
   }
 
-  static Instant time(ResultSet rs, int column) throws SQLException {
+  public static Instant time(ResultSet rs, int column) throws SQLException {
     long millis = rs.getLong(column);
     return rs.wasNull() ? null : Instant.ofEpochMilli(millis);
   }
 
-  static Double nullableDouble(ResultSet rs, int column) throws SQLException {
+  public static Double nullableDouble(ResultSet rs, int column) throws SQLException {
     double value = rs.getDouble(column);
     return rs.wasNull() ? null : value;
   }
 
-  static List<String> words(String joined) {
+  public static List<String> words(String joined) {
     return joined == null || joined.isEmpty() ? List.of() : Arrays.asList(joined.split(" "));
   }
 }

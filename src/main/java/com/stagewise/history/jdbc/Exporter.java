@@ -1,4 +1,4 @@
-package com.stagewise.history.sqlite;
+package com.stagewise.history.jdbc;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.ExportSelection;
@@ -8,11 +8,16 @@ import java.sql.SQLException;
 import java.time.Instant;
 
 /** Reads the selected part of the history into a bundle (inside one read transaction). */
-final class Exporter {
+public final class Exporter {
   private Exporter() {}
 
-  static HistoryBundle export(
-      Connection connection, ExportSelection selection, String programVersion, Instant now)
+  /** Reads what {@code selection} names, in the SQL of {@code dialect}. */
+  public static HistoryBundle export(
+      Connection connection,
+      SqlDialect dialect,
+      ExportSelection selection,
+      String programVersion,
+      Instant now)
       throws SQLException {
     // Each selection is three conditions (on cases, units and board models) with one parameter.
     String cases;
@@ -45,10 +50,14 @@ final class Exporter {
       p = new Object[0];
     }
     String caseIds = "case_id IN (SELECT c.id FROM repair_case c WHERE " + cases + ")";
-    try (Rows rows = new Rows(connection)) {
+    SqlDialect d = dialect;
+    String byCase = " ORDER BY " + d.binaryOrder("case_id") + ", ";
+    try (Rows rows = new Rows(connection, dialect)) {
       var boardModels =
           rows.query(
-              Records.BOARD_MODEL + " WHERE " + models + " ORDER BY name", Records::boardModel, p);
+              Records.BOARD_MODEL + " WHERE " + models + " ORDER BY " + d.binaryOrder("name"),
+              Records::boardModel,
+              p);
       if (boardModels.isEmpty()
           && !(selection instanceof ExportSelection.All)
           && !(selection instanceof ExportSelection.OpenedBetween)) {
@@ -64,25 +73,41 @@ final class Exporter {
               Records.STAGE_SHEET
                   + " WHERE board_model_id IN (SELECT id FROM board_model WHERE "
                   + models
-                  + ") ORDER BY updated_at, id",
+                  + ") ORDER BY updated_at, "
+                  + d.binaryOrder("id"),
               Records::stageSheet,
               p),
-          rows.query(Records.UNIT + " WHERE " + units + " ORDER BY serial, id", Records::unit, p),
           rows.query(
-              Records.CASE + " WHERE " + cases + " ORDER BY c.opened_at, c.row",
+              Records.UNIT + " WHERE " + units + " ORDER BY " + d.binaryOrder("serial") + ", id",
+              Records::unit,
+              p),
+          rows.query(
+              Records.cases(d)
+                  + " WHERE "
+                  + cases
+                  + " ORDER BY c.opened_at, "
+                  + d.insertionOrder("c.row"),
               Records::repairCase,
               p),
           rows.query(
-              Records.READING + " WHERE " + caseIds + " ORDER BY case_id, taken_at, rowid",
+              Records.READING
+                  + " WHERE "
+                  + caseIds
+                  + byCase
+                  + "taken_at, "
+                  + d.insertionOrder("rowid"),
               Records::reading,
               p),
-          rows.suspectLists("WHERE " + caseIds + " ORDER BY case_id, computed_at, rowid", p),
+          rows.suspectLists(
+              "WHERE " + caseIds + byCase + "computed_at, " + d.insertionOrder("rowid"), p),
           rows.query(
-              Records.ACTION + " WHERE " + caseIds + " ORDER BY case_id, at, rowid",
+              Records.ACTION + " WHERE " + caseIds + byCase + "at, " + d.insertionOrder("rowid"),
               Records::action,
               p),
           rows.query(
-              Records.NOTE + " WHERE " + caseIds + " ORDER BY case_id, at, row", Records::note, p));
+              Records.NOTE + " WHERE " + caseIds + byCase + "at, " + d.insertionOrder("row"),
+              Records::note,
+              p));
     }
   }
 }

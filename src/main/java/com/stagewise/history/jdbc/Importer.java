@@ -1,4 +1,4 @@
-package com.stagewise.history.sqlite;
+package com.stagewise.history.jdbc;
 
 import com.stagewise.history.BundleCheck;
 import com.stagewise.history.ImportReport;
@@ -30,7 +30,7 @@ import java.util.Set;
  * is written, and the caller's transaction rolls back whatever was written before a later failure.
  * Then records are merged by id, parents first.
  */
-final class Importer {
+public final class Importer {
 
   /** The local table of each kind of record that others refer to. */
   private static final Map<String, String> PARENT_TABLES =
@@ -43,6 +43,7 @@ final class Importer {
           "repair_case");
 
   private final Connection connection;
+  private final SqlDialect dialect;
   private final String source;
   private final Map<String, String> remapped = new HashMap<>();
   private final Set<String> touchedCases = new LinkedHashSet<>();
@@ -54,14 +55,17 @@ final class Importer {
 
   private final Instant now;
 
-  Importer(Connection connection, String source, Instant now) {
+  /** An import into {@code connection}'s store (of {@code dialect}) from {@code source}. */
+  public Importer(Connection connection, SqlDialect dialect, String source, Instant now) {
     this.connection = connection;
+    this.dialect = dialect;
     this.source = source;
     this.now = now;
   }
 
-  ImportReport run(HistoryBundle bundle) throws SQLException {
-    try (Rows rows = new Rows(connection)) {
+  /** Merges {@code bundle} into the store, inside the caller's transaction. */
+  public ImportReport run(HistoryBundle bundle) throws SQLException {
+    try (Rows rows = new Rows(connection, dialect)) {
       new BundleCheck(source, now).check(bundle, (id, kind) -> localKind(rows, id, kind));
       merge(bundle, rows);
     }
@@ -134,7 +138,7 @@ final class Importer {
     if (local.isEmpty()) {
       Optional<BoardModel> sameName =
           rows.first(
-              Records.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE",
+              Records.BOARD_MODEL + " WHERE " + rows.dialect().caselessEquals("name"),
               Records::boardModel,
               m.name());
       if (sameName.isPresent()) {
@@ -149,7 +153,10 @@ final class Importer {
     }
     Optional<BoardModel> clash =
         rows.first(
-            Records.BOARD_MODEL + " WHERE name = ? COLLATE NOCASE AND id <> ?",
+            Records.BOARD_MODEL
+                + " WHERE "
+                + rows.dialect().caselessEquals("name")
+                + " AND id <> ?",
             Records::boardModel,
             m.name(),
             m.id());
@@ -253,7 +260,8 @@ final class Importer {
       return;
     }
     RepairCase local =
-        rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, c.id()).orElseThrow();
+        rows.first(Records.cases(rows.dialect()) + " WHERE c.id = ?", Records::repairCase, c.id())
+            .orElseThrow();
     if (settle(
         BundleCheck.CASE,
         c.id(),

@@ -1,6 +1,6 @@
-package com.stagewise.history.sqlite;
+package com.stagewise.history.jdbc;
 
-import static com.stagewise.history.sqlite.Require.SOURCE;
+import static com.stagewise.history.jdbc.Require.SOURCE;
 
 import com.stagewise.history.Checks;
 import com.stagewise.history.HistoryStore;
@@ -10,11 +10,12 @@ import com.stagewise.history.record.StageSheetRecord;
 import java.time.Instant;
 import java.util.List;
 
-/** The board models' stage sheets in the SQLite file. */
-final class SqliteLibrary implements StageLibrary {
-  private final SqliteHistory history;
+/** The board models' stage sheets in a store reached through JDBC. */
+public final class JdbcLibrary implements StageLibrary {
+  private final JdbcAccess history;
 
-  SqliteLibrary(SqliteHistory history) {
+  /** Serves the stage library of the store behind {@code history}. */
+  public JdbcLibrary(JdbcAccess history) {
     this.history = history;
   }
 
@@ -25,7 +26,7 @@ final class SqliteLibrary implements StageLibrary {
     return history.write(
         "add a stage sheet",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.exists(rows, "board_model", boardModelId, "board model");
             StageSheetRecord sheet =
                 new StageSheetRecord(HistoryStore.newId(), boardModelId, title, sheetJson, now);
@@ -45,9 +46,11 @@ final class SqliteLibrary implements StageLibrary {
     return history.read(
         "list stage sheets",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return rows.query(
-                Records.STAGE_SHEET + " WHERE board_model_id = ? ORDER BY updated_at, id",
+                Records.STAGE_SHEET
+                    + " WHERE board_model_id = ? ORDER BY updated_at, "
+                    + rows.dialect().binaryOrder("id"),
                 Records::stageSheet,
                 boardModelId);
           }
@@ -66,8 +69,8 @@ final class SqliteLibrary implements StageLibrary {
     return history.write(
         "add a board model",
         c -> {
-          try (Rows rows = new Rows(c)) {
-            BoardModel model = SqliteUnits.findOrAddModel(rows, name, maker, now).model();
+          try (Rows rows = history.rows(c)) {
+            BoardModel model = JdbcUnits.findOrAddModel(rows, name, maker, now).model();
             for (SheetDraft sheet : sheets) {
               rows.insert(
                   new StageSheetRecord(

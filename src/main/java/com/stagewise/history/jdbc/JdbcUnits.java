@@ -1,6 +1,6 @@
-package com.stagewise.history.postgres;
+package com.stagewise.history.jdbc;
 
-import static com.stagewise.history.postgres.Require.SOURCE;
+import static com.stagewise.history.jdbc.Require.SOURCE;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.Checks;
@@ -16,21 +16,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-/**
- * Units and board models on the shop server (the same queries as the bench's, in PostgreSQL's
- * words).
- */
-final class PgUnits implements Units {
-  /**
-   * A unit's serial as {@link UnitQuery#normal} compares it, in SQL: ASCII upper case, without
-   * blanks, tabs, dashes, underscores or slashes.
-   */
-  private static final String NORMAL_SERIAL =
-      "upper(translate(u.serial, ' ' || chr(9) || '-_/', ''))";
+/** Units and board models in a store reached through JDBC. */
+public final class JdbcUnits implements Units {
+  private final JdbcAccess history;
 
-  private final PgHistory history;
-
-  PgUnits(PgHistory history) {
+  /** Serves the units and board models of the store behind {@code history}. */
+  public JdbcUnits(JdbcAccess history) {
     this.history = history;
   }
 
@@ -42,20 +33,20 @@ final class PgUnits implements Units {
     return history.write(
         "add a board model",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return findOrAddModel(rows, name, maker, now).model();
           }
         });
   }
 
   /** A board model found or just added. */
-  record ModelFound(BoardModel model, boolean added) {}
+  public record ModelFound(BoardModel model, boolean added) {}
 
-  static ModelFound findOrAddModel(Rows rows, String name, String maker, Instant now)
+  public static ModelFound findOrAddModel(Rows rows, String name, String maker, Instant now)
       throws SQLException {
     Optional<BoardModel> existing =
         rows.first(
-            Records.BOARD_MODEL + " WHERE lower(name) = lower(?)",
+            Records.BOARD_MODEL + " WHERE " + rows.dialect().caselessEquals("name"),
             Records::boardModel,
             name.strip());
     if (existing.isPresent()) {
@@ -71,7 +62,7 @@ final class PgUnits implements Units {
     return history.read(
         "find a board model",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return findModel(rows, nameOrId);
           }
         });
@@ -79,7 +70,7 @@ final class PgUnits implements Units {
 
   private static Optional<BoardModel> findModel(Rows rows, String nameOrId) throws SQLException {
     return rows.first(
-        Records.BOARD_MODEL + " WHERE id = ? OR lower(name) = lower(?)",
+        Records.BOARD_MODEL + " WHERE id = ? OR " + rows.dialect().caselessEquals("name"),
         Records::boardModel,
         nameOrId,
         nameOrId.strip());
@@ -90,9 +81,10 @@ final class PgUnits implements Units {
     return history.read(
         "list board models",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return rows.query(
-                Records.BOARD_MODEL + " ORDER BY lower(name) COLLATE \"C\"", Records::boardModel);
+                Records.BOARD_MODEL + " ORDER BY " + rows.dialect().caselessOrder("name"),
+                Records::boardModel);
           }
         });
   }
@@ -104,7 +96,7 @@ final class PgUnits implements Units {
     return history.write(
         "add a unit",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.exists(rows, "board_model", boardModelId, "board model");
             return insertUnit(rows, serial, boardModelId, owner, now);
           }
@@ -119,7 +111,7 @@ final class PgUnits implements Units {
     return history.write(
         "add a unit",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Optional<BoardModel> known = findModel(rows, boardModel);
             ModelFound found =
                 known.isPresent()
@@ -159,7 +151,7 @@ final class PgUnits implements Units {
     return history.read(
         "find a unit",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return rows.first(Records.UNIT + " WHERE id = ?", Records::unit, unitId);
           }
         });
@@ -170,9 +162,13 @@ final class PgUnits implements Units {
     return history.read(
         "find units",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return rows.query(
-                Records.UNIT + " WHERE lower(serial) = lower(?) ORDER BY serial COLLATE \"C\"",
+                Records.UNIT
+                    + " WHERE "
+                    + rows.dialect().caselessEquals("serial")
+                    + " ORDER BY "
+                    + rows.dialect().binaryOrder("serial"),
                 Records::unit,
                 serial);
           }
@@ -184,14 +180,13 @@ final class PgUnits implements Units {
     return history.read(
         "list units",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
+            SqlDialect d = rows.dialect();
+            String order = " ORDER BY " + d.binaryOrder("serial") + ", " + d.binaryOrder("id");
             return boardModelIdOrNull == null
-                ? rows.query(
-                    Records.UNIT + " ORDER BY serial COLLATE \"C\", id COLLATE \"C\"",
-                    Records::unit)
+                ? rows.query(Records.UNIT + order, Records::unit)
                 : rows.query(
-                    Records.UNIT
-                        + " WHERE board_model_id = ? ORDER BY serial COLLATE \"C\", id COLLATE \"C\"",
+                    Records.UNIT + " WHERE board_model_id = ?" + order,
                     Records::unit,
                     boardModelIdOrNull);
           }
@@ -200,6 +195,8 @@ final class PgUnits implements Units {
 
   @Override
   public List<UnitMatch> search(UnitQuery query) {
+    SqlDialect d = history.dialect();
+    String normalSerial = d.normalSerial("u.serial");
     List<Object> parameters = new ArrayList<>();
     StringBuilder sql =
         new StringBuilder(
@@ -207,27 +204,30 @@ final class PgUnits implements Units {
                 + " (SELECT count(*) FROM repair_case rc WHERE rc.unit_id = u.id"
                 + " AND rc.status = 'open') AS open_cases,"
                 + " "
-                + NORMAL_SERIAL
+                + normalSerial
                 + " = ? AS exact,"
                 + " EXISTS (SELECT 1 FROM repair_case rc WHERE rc.unit_id = u.id"
                 + " AND rc.status = 'open') AS any_open"
                 + " FROM unit u JOIN board_model m ON m.id = u.board_model_id WHERE 1 = 1");
     parameters.add(query.serialPart());
     if (!query.serialPart().isEmpty()) {
-      sql.append(" AND strpos(").append(NORMAL_SERIAL).append(", ?) > 0");
+      sql.append(" AND ").append(d.contains(normalSerial));
       parameters.add(query.serialPart());
     }
     if (query.boardModelId().isPresent()) {
       sql.append(" AND u.board_model_id = ?");
       parameters.add(query.boardModelId().get());
     }
-    sql.append(
-        " ORDER BY exact DESC, any_open DESC, lower(u.serial) COLLATE \"C\", u.id COLLATE \"C\" LIMIT ?");
+    sql.append(" ORDER BY exact DESC, any_open DESC, ")
+        .append(d.caselessOrder("u.serial"))
+        .append(", ")
+        .append(d.binaryOrder("u.id"))
+        .append(" LIMIT ?");
     parameters.add(query.limit());
     return history.read(
         "search units",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             return rows.query(
                 sql.toString(),
                 rs -> new UnitMatch(Records.unit(rs), rs.getString(6), rs.getInt(7)),

@@ -1,6 +1,6 @@
-package com.stagewise.history.sqlite;
+package com.stagewise.history.jdbc;
 
-import static com.stagewise.history.sqlite.Require.SOURCE;
+import static com.stagewise.history.jdbc.Require.SOURCE;
 
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.CaseFile;
@@ -30,11 +30,12 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
-/** Cases and their records in the SQLite file. */
-final class SqliteCases implements Cases {
-  private final SqliteHistory history;
+/** Cases and their records in a store reached through JDBC. */
+public final class JdbcCases implements Cases {
+  private final JdbcAccess history;
 
-  SqliteCases(SqliteHistory history) {
+  /** Serves the cases of the store behind {@code history}. */
+  public JdbcCases(JdbcAccess history) {
     this.history = history;
   }
 
@@ -45,7 +46,7 @@ final class SqliteCases implements Cases {
     return history.write(
         "open a case",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.exists(rows, "unit", unitId, "unit");
             RepairCase opened =
                 new RepairCase(
@@ -87,7 +88,7 @@ final class SqliteCases implements Cases {
     return history.write(
         "close a case",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             RepairCase open = Require.repairCase(rows, caseId);
             if (open.status() == CaseStatus.CLOSED) {
               throw new InvalidInputException(
@@ -132,8 +133,9 @@ final class SqliteCases implements Cases {
     return history.read(
         "find a case",
         c -> {
-          try (Rows rows = new Rows(c)) {
-            return rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, caseId);
+          try (Rows rows = history.rows(c)) {
+            return rows.first(
+                Records.cases(history.dialect()) + " WHERE c.id = ?", Records::repairCase, caseId);
           }
         });
   }
@@ -151,12 +153,14 @@ final class SqliteCases implements Cases {
         history.read(
             "find a case",
             c -> {
-              try (Rows rows = new Rows(c)) {
+              try (Rows rows = history.rows(c)) {
+                // A prefix of hex digits and dashes: LIKE has nothing in it to escape.
                 return rows.query(
-                    "SELECT id FROM repair_case WHERE id >= ? AND id < ? ORDER BY id LIMIT 2",
+                    "SELECT id FROM repair_case WHERE id LIKE ? ORDER BY "
+                        + history.dialect().binaryOrder("id")
+                        + " LIMIT 2",
                     rs -> rs.getString(1),
-                    clean,
-                    clean + "\uffff");
+                    clean + "%");
               }
             });
     if (ids.isEmpty()) {
@@ -178,7 +182,7 @@ final class SqliteCases implements Cases {
     history.write(
         "store readings",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.repairCase(rows, caseId);
             for (StoredReading r : readings) {
               rows.insert(r);
@@ -217,7 +221,7 @@ final class SqliteCases implements Cases {
     return history.write(
         "strike out readings",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.repairCase(rows, caseId);
             List<StoredReading> changed = new ArrayList<>();
             for (String id : revision.strike()) {
@@ -264,7 +268,7 @@ final class SqliteCases implements Cases {
     return history.write(
         "add a note",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.repairCase(rows, caseId);
             CaseNote note = new CaseNote(HistoryStore.newId(), caseId, now, text, now);
             rows.insert(note);
@@ -282,7 +286,7 @@ final class SqliteCases implements Cases {
     return history.write(
         "add an action",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Require.repairCase(rows, caseId);
             RepairAction action =
                 new RepairAction(
@@ -299,9 +303,12 @@ final class SqliteCases implements Cases {
     return history.read(
         "read a case",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Optional<RepairCase> found =
-                rows.first(Records.CASE + " WHERE c.id = ?", Records::repairCase, caseId);
+                rows.first(
+                    Records.cases(history.dialect()) + " WHERE c.id = ?",
+                    Records::repairCase,
+                    caseId);
             return found.isEmpty()
                 ? Optional.<CaseFile>empty()
                 : Optional.of(caseFile(rows, found.get()));
@@ -314,7 +321,7 @@ final class SqliteCases implements Cases {
     return history.read(
         "read a unit's history",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Optional<Unit> unit = rows.first(Records.UNIT + " WHERE id = ?", Records::unit, unitId);
             if (unit.isEmpty()) {
               return Optional.<UnitHistory>empty();
@@ -328,7 +335,9 @@ final class SqliteCases implements Cases {
             List<CaseFile> cases = new ArrayList<>();
             for (RepairCase rc :
                 rows.query(
-                    Records.CASE + " WHERE c.unit_id = ? ORDER BY c.opened_at, c.row",
+                    Records.cases(history.dialect())
+                        + " WHERE c.unit_id = ? ORDER BY c.opened_at, "
+                        + history.dialect().insertionOrder("c.row"),
                     Records::repairCase,
                     unitId)) {
               cases.add(caseFile(rows, rc));
@@ -340,18 +349,28 @@ final class SqliteCases implements Cases {
 
   private static CaseFile caseFile(Rows rows, RepairCase rc) throws SQLException {
     String id = rc.id();
+    SqlDialect d = rows.dialect();
     return new CaseFile(
         rc,
         rows.query(
-            Records.READING + " WHERE case_id = ? ORDER BY taken_at, rowid", Records::reading, id),
-        rows.suspectLists("WHERE case_id = ? ORDER BY computed_at, rowid", id),
-        rows.query(Records.ACTION + " WHERE case_id = ? ORDER BY at, rowid", Records::action, id),
-        rows.query(Records.NOTE + " WHERE case_id = ? ORDER BY at, row", Records::note, id));
+            Records.READING + " WHERE case_id = ? ORDER BY taken_at, " + d.insertionOrder("rowid"),
+            Records::reading,
+            id),
+        rows.suspectLists(
+            "WHERE case_id = ? ORDER BY computed_at, " + d.insertionOrder("rowid"), id),
+        rows.query(
+            Records.ACTION + " WHERE case_id = ? ORDER BY at, " + d.insertionOrder("rowid"),
+            Records::action,
+            id),
+        rows.query(
+            Records.NOTE + " WHERE case_id = ? ORDER BY at, " + d.insertionOrder("row"),
+            Records::note,
+            id));
   }
 
   @Override
   public List<SearchHit> search(SearchQuery query) {
-    return history.read("search", c -> Search.run(c, query));
+    return history.read("search", c -> history.search(c, query));
   }
 
   @Override
@@ -359,7 +378,7 @@ final class SqliteCases implements Cases {
     return history.read(
         "count confirmed faults",
         c -> {
-          try (Rows rows = new Rows(c)) {
+          try (Rows rows = history.rows(c)) {
             Map<String, Integer> counts = new LinkedHashMap<>();
             for (Object[] row :
                 rows.query(
@@ -367,9 +386,12 @@ final class SqliteCases implements Cases {
                         + " JOIN repair_case rc ON rc.id = f.case_id"
                         + " JOIN unit u ON u.id = rc.unit_id"
                         + " JOIN board_model m ON m.id = u.board_model_id"
-                        + " WHERE (m.id = ? OR m.name = ? COLLATE NOCASE)"
+                        + " WHERE (m.id = ? OR "
+                        + history.dialect().caselessEquals("m.name")
+                        + ")"
                         + " AND rc.status = 'closed' AND rc.outcome = 'fixed'"
-                        + " GROUP BY f.fault_id ORDER BY count(DISTINCT f.case_id) DESC, f.fault_id",
+                        + " GROUP BY f.fault_id ORDER BY count(DISTINCT f.case_id) DESC, "
+                        + history.dialect().binaryOrder("f.fault_id"),
                     rs -> new Object[] {rs.getString(1), rs.getInt(2)},
                     boardModel,
                     boardModel.strip())) {

@@ -1,4 +1,4 @@
-package com.stagewise.history.postgres;
+package com.stagewise.history.jdbc;
 
 import com.stagewise.history.Checks;
 import com.stagewise.history.record.BoardModel;
@@ -29,16 +29,24 @@ import java.util.Set;
  *
  * <p>An instance lives for one transaction and keeps each statement prepared once.
  */
-final class Rows implements AutoCloseable {
+public final class Rows implements AutoCloseable {
   private final Connection connection;
+  private final SqlDialect dialect;
   private final Map<String, PreparedStatement> prepared = new HashMap<>();
 
-  Rows(Connection connection) {
+  /** Reads and writes rows on {@code connection}, in the SQL of {@code dialect}. */
+  public Rows(Connection connection, SqlDialect dialect) {
     this.connection = connection;
+    this.dialect = dialect;
+  }
+
+  /** Returns the SQL dialect of the store these rows are in. */
+  public SqlDialect dialect() {
+    return dialect;
   }
 
   /** Returns the statement for {@code sql}, prepared once per transaction. */
-  PreparedStatement statement(String sql) throws SQLException {
+  public PreparedStatement statement(String sql) throws SQLException {
     PreparedStatement statement = prepared.get(sql);
     if (statement == null) {
       statement = connection.prepareStatement(sql);
@@ -49,7 +57,8 @@ final class Rows implements AutoCloseable {
   }
 
   /** Runs a query with {@code parameters} and maps every row. */
-  <T> List<T> query(String sql, RowMapper<T> mapper, Object... parameters) throws SQLException {
+  public <T> List<T> query(String sql, RowMapper<T> mapper, Object... parameters)
+      throws SQLException {
     PreparedStatement statement = statement(sql);
     bind(statement, parameters);
     List<T> rows = new ArrayList<>();
@@ -61,18 +70,19 @@ final class Rows implements AutoCloseable {
     return rows;
   }
 
-  <T> Optional<T> first(String sql, RowMapper<T> mapper, Object... parameters) throws SQLException {
+  public <T> Optional<T> first(String sql, RowMapper<T> mapper, Object... parameters)
+      throws SQLException {
     List<T> rows = query(sql, mapper, parameters);
     return rows.isEmpty() ? Optional.empty() : Optional.of(rows.get(0));
   }
 
-  int update(String sql, Object... parameters) throws SQLException {
+  public int update(String sql, Object... parameters) throws SQLException {
     PreparedStatement statement = statement(sql);
     bind(statement, parameters);
     return statement.executeUpdate();
   }
 
-  static void bind(PreparedStatement statement, Object... parameters) throws SQLException {
+  public static void bind(PreparedStatement statement, Object... parameters) throws SQLException {
     for (int i = 0; i < parameters.length; i++) {
       Object value = parameters[i];
       if (value == null) {
@@ -95,12 +105,13 @@ final class Rows implements AutoCloseable {
 
   /** Maps one result row to a value. */
   @FunctionalInterface
-  interface RowMapper<T> {
+  public interface RowMapper<T> {
     T map(ResultSet rs) throws SQLException;
   }
 
   /** Returns the suspect lists selected by {@code where} (with its parameters), with suspects. */
-  List<SuspectListRecord> suspectLists(String where, Object... parameters) throws SQLException {
+  public List<SuspectListRecord> suspectLists(String where, Object... parameters)
+      throws SQLException {
     record Head(
         String id, String caseId, Instant at, String version, String verdict, String next) {}
     List<Head> heads =
@@ -146,7 +157,7 @@ final class Rows implements AutoCloseable {
   // tryInsert adds a record unless one with its id is there already (then it returns false and
   // changes nothing); insert expects a new id.
 
-  <T> void insert(T record) throws SQLException {
+  public <T> void insert(T record) throws SQLException {
     boolean inserted;
     if (record instanceof BoardModel m) {
       inserted = tryInsert(m);
@@ -172,7 +183,7 @@ final class Rows implements AutoCloseable {
     }
   }
 
-  boolean tryInsert(BoardModel m) throws SQLException {
+  public boolean tryInsert(BoardModel m) throws SQLException {
     int inserted =
         update(
             "INSERT INTO board_model (id, name, maker, notes, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
@@ -184,7 +195,7 @@ final class Rows implements AutoCloseable {
     return inserted == 1;
   }
 
-  void replace(BoardModel m) throws SQLException {
+  public void replace(BoardModel m) throws SQLException {
     update(
         "UPDATE board_model SET name = ?, maker = ?, notes = ?, updated_at = ? WHERE id = ?",
         m.name(),
@@ -194,7 +205,7 @@ final class Rows implements AutoCloseable {
         m.id());
   }
 
-  boolean tryInsert(StageSheetRecord s) throws SQLException {
+  public boolean tryInsert(StageSheetRecord s) throws SQLException {
     int inserted =
         update(
             "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
@@ -207,7 +218,7 @@ final class Rows implements AutoCloseable {
     return inserted == 1;
   }
 
-  void replace(StageSheetRecord s) throws SQLException {
+  public void replace(StageSheetRecord s) throws SQLException {
     update(
         "UPDATE stage_sheet SET board_model_id = ?, title = ?, sheet_json = ?, updated_at = ?"
             + " WHERE id = ?",
@@ -218,7 +229,7 @@ final class Rows implements AutoCloseable {
         s.id());
   }
 
-  boolean tryInsert(Unit u) throws SQLException {
+  public boolean tryInsert(Unit u) throws SQLException {
     int inserted =
         update(
             "INSERT INTO unit (id, serial, board_model_id, owner, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
@@ -230,7 +241,7 @@ final class Rows implements AutoCloseable {
     return inserted == 1;
   }
 
-  void replace(Unit u) throws SQLException {
+  public void replace(Unit u) throws SQLException {
     update(
         "UPDATE unit SET serial = ?, board_model_id = ?, owner = ?, updated_at = ? WHERE id = ?",
         u.serial(),
@@ -240,7 +251,7 @@ final class Rows implements AutoCloseable {
         u.id());
   }
 
-  boolean tryInsert(RepairCase c) throws SQLException {
+  public boolean tryInsert(RepairCase c) throws SQLException {
     int inserted =
         update(
             "INSERT INTO repair_case (id, unit_id, opened_at, symptom, status, closed_at, outcome,"
@@ -259,7 +270,7 @@ final class Rows implements AutoCloseable {
     return inserted == 1;
   }
 
-  void replace(RepairCase c) throws SQLException {
+  public void replace(RepairCase c) throws SQLException {
     update(
         "UPDATE repair_case SET unit_id = ?, opened_at = ?, symptom = ?, status = ?,"
             + " closed_at = ?, outcome = ?, updated_at = ? WHERE id = ?",
@@ -286,7 +297,7 @@ final class Rows implements AutoCloseable {
     }
   }
 
-  boolean tryInsert(StoredReading r) throws SQLException {
+  public boolean tryInsert(StoredReading r) throws SQLException {
     int inserted =
         update(
             "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at,"
@@ -308,7 +319,7 @@ final class Rows implements AutoCloseable {
   }
 
   /** Replaces whether a stored reading is struck out, and when that last changed. */
-  void replaceStrike(StoredReading r) throws SQLException {
+  public void replaceStrike(StoredReading r) throws SQLException {
     update(
         "UPDATE reading SET struck_at = ?, updated_at = ? WHERE id = ?",
         r.struckAt(),
@@ -316,7 +327,7 @@ final class Rows implements AutoCloseable {
         r.id());
   }
 
-  boolean tryInsert(SuspectListRecord list) throws SQLException {
+  public boolean tryInsert(SuspectListRecord list) throws SQLException {
     int inserted =
         update(
             "INSERT INTO suspect_list (id, case_id, computed_at, program_version, verdict,"
@@ -344,7 +355,7 @@ final class Rows implements AutoCloseable {
     return true;
   }
 
-  boolean tryInsert(RepairAction a) throws SQLException {
+  public boolean tryInsert(RepairAction a) throws SQLException {
     int inserted =
         update(
             "INSERT INTO repair_action (id, case_id, at, kind, part, old_value, new_value, text,"
@@ -361,7 +372,7 @@ final class Rows implements AutoCloseable {
     return inserted == 1;
   }
 
-  void replace(RepairAction a) throws SQLException {
+  public void replace(RepairAction a) throws SQLException {
     update(
         "UPDATE repair_action SET case_id = ?, at = ?, kind = ?, part = ?, old_value = ?,"
             + " new_value = ?, text = ?, updated_at = ? WHERE id = ?",
@@ -376,7 +387,7 @@ final class Rows implements AutoCloseable {
         a.id());
   }
 
-  boolean tryInsert(CaseNote n) throws SQLException {
+  public boolean tryInsert(CaseNote n) throws SQLException {
     int inserted =
         update(
             "INSERT INTO case_note (id, case_id, at, text, updated_at) VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
@@ -388,7 +399,7 @@ final class Rows implements AutoCloseable {
     return inserted == 1;
   }
 
-  void replace(CaseNote n) throws SQLException {
+  public void replace(CaseNote n) throws SQLException {
     update(
         "UPDATE case_note SET case_id = ?, at = ?, text = ?, updated_at = ? WHERE id = ?",
         n.caseId(),
@@ -402,7 +413,7 @@ final class Rows implements AutoCloseable {
    * Rebuilds the part designators that search finds case {@code caseId} by, from its confirmed
    * faults and its actions.
    */
-  void indexParts(String caseId) throws SQLException {
+  public void indexParts(String caseId) throws SQLException {
     update("DELETE FROM case_part WHERE case_id = ?", caseId);
     Set<String> parts = new LinkedHashSet<>();
     for (String fault :
@@ -417,10 +428,7 @@ final class Rows implements AutoCloseable {
       parts.addAll(Checks.parts(part));
     }
     for (String part : parts) {
-      update(
-          "INSERT INTO case_part (case_id, part) VALUES (?, ?) ON CONFLICT DO NOTHING",
-          caseId,
-          part);
+      update(dialect.insertOrIgnore("case_part (case_id, part) VALUES (?, ?)"), caseId, part);
     }
   }
 
