@@ -1,17 +1,17 @@
 package com.stagewise.history.postgres;
 
+import static com.stagewise.history.jdbc.SearchRows.appendFilters;
+import static com.stagewise.history.jdbc.SearchRows.hits;
+import static com.stagewise.history.jdbc.SearchRows.withSnippets;
+
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
-import com.stagewise.history.jdbc.Rows;
-import com.stagewise.history.record.CaseStatus;
-import com.stagewise.history.record.Outcome;
+import com.stagewise.history.jdbc.SqlDialect;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.time.Instant;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -64,100 +64,15 @@ final class TextSearch {
             ranked ? " FROM best JOIN repair_case c ON c.id = best.case_id" : " FROM repair_case c")
         .append(" JOIN unit u ON u.id = c.unit_id JOIN board_model m ON m.id = u.board_model_id")
         .append(" WHERE 1 = 1");
-    appendFilters(sql, parameters, query);
+    appendFilters(sql, parameters, query, SqlDialect.POSTGRES);
     sql.append(
             ranked
                 ? " ORDER BY best.score DESC, c.opened_at DESC, c.id COLLATE \"C\""
                 : " ORDER BY c.opened_at DESC, c.id COLLATE \"C\"")
         .append(" LIMIT ?");
     parameters.add(query.limit());
-    List<SearchHit> hits = hits(connection, sql.toString(), parameters);
+    List<SearchHit> hits = hits(connection, sql.toString(), parameters, false);
     return ranked && !hits.isEmpty() ? withSnippets(hits, snippets(connection, words, hits)) : hits;
-  }
-
-  private static void appendFilters(StringBuilder sql, List<Object> parameters, SearchQuery query) {
-    if (query.serial().isPresent()) {
-      sql.append(" AND lower(u.serial) = lower(?)");
-      parameters.add(query.serial().get());
-    }
-    if (query.boardModel().isPresent()) {
-      sql.append(" AND (m.id = ? OR lower(m.name) = lower(?))");
-      parameters.add(query.boardModel().get());
-      parameters.add(query.boardModel().get());
-    }
-    if (query.faultId().isPresent()) {
-      sql.append(
-          " AND EXISTS (SELECT 1 FROM confirmed_fault f WHERE f.case_id = c.id AND f.fault_id = ?)");
-      parameters.add(query.faultId().get());
-    }
-    if (query.part().isPresent()) {
-      sql.append(
-          " AND EXISTS (SELECT 1 FROM case_part p WHERE p.case_id = c.id"
-              + " AND lower(p.part) = lower(?))");
-      parameters.add(query.part().get());
-    }
-    if (query.status().isPresent()) {
-      sql.append(" AND c.status = ?");
-      parameters.add(query.status().get().word());
-    }
-    if (query.openedFrom().isPresent()) {
-      sql.append(" AND c.opened_at >= ?");
-      parameters.add(query.openedFrom().get());
-    }
-    if (query.openedBefore().isPresent()) {
-      sql.append(" AND c.opened_at < ?");
-      parameters.add(query.openedBefore().get());
-    }
-  }
-
-  private static List<SearchHit> hits(Connection connection, String sql, List<Object> parameters)
-      throws SQLException {
-    List<SearchHit> hits = new ArrayList<>();
-    try (PreparedStatement statement = connection.prepareStatement(sql)) {
-      Rows.bind(statement, parameters.toArray());
-      try (ResultSet rs = statement.executeQuery()) {
-        while (rs.next()) {
-          String outcome = rs.getString(6);
-          String faults = rs.getString(9);
-          String symptom = rs.getString(8);
-          hits.add(
-              new SearchHit(
-                  rs.getString(1),
-                  rs.getString(2),
-                  rs.getString(3),
-                  rs.getString(4),
-                  CaseStatus.fromWord(rs.getString(5)).orElseThrow(),
-                  outcome == null ? null : Outcome.fromWord(outcome).orElseThrow(),
-                  Instant.ofEpochMilli(rs.getLong(7)),
-                  symptom,
-                  faults == null || faults.isEmpty() ? List.of() : Arrays.asList(faults.split(" ")),
-                  shortened(symptom),
-                  rs.getDouble(10)));
-        }
-      }
-    }
-    return hits;
-  }
-
-  private static List<SearchHit> withSnippets(List<SearchHit> hits, Map<String, String> snippets) {
-    List<SearchHit> out = new ArrayList<>(hits.size());
-    for (SearchHit hit : hits) {
-      String snippet = snippets.get(hit.caseId());
-      out.add(
-          new SearchHit(
-              hit.caseId(),
-              hit.unitId(),
-              hit.serial(),
-              hit.boardModel(),
-              hit.status(),
-              hit.outcome(),
-              hit.openedAt(),
-              hit.symptom(),
-              hit.confirmedFaults(),
-              snippet == null ? hit.snippet() : snippet,
-              hit.score()));
-    }
-    return out;
   }
 
   /** Returns, for each hit, its symptom's matching words in context, else its best note's. */
@@ -211,10 +126,5 @@ final class TextSearch {
       i += i < lower.length() ? Character.charCount(cp) : 1;
     }
     return query.toString();
-  }
-
-  private static String shortened(String symptom) {
-    int max = 80;
-    return symptom.length() <= max ? symptom : symptom.substring(0, max) + "…";
   }
 }
