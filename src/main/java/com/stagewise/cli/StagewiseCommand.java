@@ -2,9 +2,11 @@ package com.stagewise.cli;
 
 import com.stagewise.casework.Casework;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.cli.history.CommandTree;
 import com.stagewise.cli.history.HistoryCommand;
 import com.stagewise.history.StorageException;
 import java.io.PrintWriter;
+import java.util.List;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -13,17 +15,21 @@ import picocli.CommandLine.Command;
     name = "stagewise",
     mixinStandardHelpOptions = true,
     versionProvider = StagewiseCommand.Version.class,
-    description = "Bench tool for diagnosing op-amp stages and keeping the repair history.",
-    subcommands = {
-      CommandLine.HelpCommand.class,
-      SolveCommand.class,
-      DiagnoseCommand.class,
-      TemplateCommand.class,
-      HistoryCommand.class,
-      ReportCommand.class,
-      StageCommand.class
-    })
+    description = "Bench tool for diagnosing op-amp stages and keeping the repair history.")
 public final class StagewiseCommand implements Runnable {
+  /**
+   * The commands, in the order {@code --help} lists them; {@code history} stands for its own tree
+   * ({@link HistoryCommand#commandLine}).
+   */
+  private static final List<Class<?>> SUBCOMMANDS =
+      List.of(
+          CommandLine.HelpCommand.class,
+          SolveCommand.class,
+          DiagnoseCommand.class,
+          TemplateCommand.class,
+          HistoryCommand.class,
+          ReportCommand.class,
+          StageCommand.class);
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
@@ -40,7 +46,7 @@ public final class StagewiseCommand implements Runnable {
    * ExitCode#INTERNAL_ERROR}. Stack traces are never printed for bad input.
    */
   public static int execute(String[] args, PrintWriter out, PrintWriter err) {
-    CommandLine line = new CommandLine(new StagewiseCommand());
+    CommandLine line = commandLine(args);
     line.setOut(out);
     line.setErr(err);
     line.setParameterExceptionHandler(
@@ -68,6 +74,36 @@ public final class StagewiseCommand implements Runnable {
     out.flush();
     err.flush();
     return code;
+  }
+
+  /**
+   * Returns the command line for {@code args}: with only the command they name (and only the
+   * history subcommand they name), or with every command for help, a misspelt or a missing name.
+   * Picocli reads each command's options from its annotations when the command is added; reading
+   * all of them took about as long as a whole diagnosis of a demo stage.
+   */
+  static CommandLine commandLine(String[] args) {
+    int at = CommandTree.firstWordAt(args, 0);
+    String name = at < 0 ? null : args[at];
+    boolean one =
+        name != null
+            && SUBCOMMANDS.stream()
+                .anyMatch(
+                    c -> c != CommandLine.HelpCommand.class && CommandTree.nameOf(c).equals(name));
+    CommandLine line = new CommandLine(new StagewiseCommand());
+    for (Class<?> command : SUBCOMMANDS) {
+      String commandName = CommandTree.nameOf(command);
+      if (one && !commandName.equals(name)) {
+        continue;
+      }
+      if (command == HistoryCommand.class) {
+        int sub = one ? CommandTree.firstWordAt(args, at + 1) : -1;
+        line.addSubcommand(commandName, HistoryCommand.commandLine(sub < 0 ? null : args[sub]));
+      } else {
+        line.addSubcommand(command);
+      }
+    }
+    return line;
   }
 
   /**

@@ -1,5 +1,6 @@
 package com.stagewise.cli.history;
 
+import java.util.List;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -14,32 +15,44 @@ import picocli.CommandLine.Command;
 @Command(
     name = "history",
     mixinStandardHelpOptions = true,
-    description = "Keep and search the repair history: units, cases, readings, notes, actions.",
-    subcommands = {
-      ModelsCommand.class,
-      AddModelCommand.class,
-      UnitsCommand.class,
-      AddUnitCommand.class,
-      OpenCaseCommand.class,
-      CloseCaseCommand.class,
-      AddReadingsCommand.class,
-      StrikeReadingCommand.class,
-      AddNoteCommand.class,
-      AddActionCommand.class,
-      ShowCommand.class,
-      SearchCommand.class,
-      FaultsCommand.class,
-      ExportCommand.class,
-      ImportCommand.class,
-      BackupCommand.class,
-      RestoreCommand.class,
-      DemoCommand.class,
-      ServerInitCommand.class,
-      ServerCheckCommand.class,
-      SyncCommand.class,
-    })
+    description = "Keep and search the repair history: units, cases, readings, notes, actions.")
 public final class HistoryCommand implements Runnable {
+  /** The history's subcommands, in the order {@code history --help} lists them. */
+  static final List<Class<?>> SUBCOMMANDS =
+      List.of(
+          ModelsCommand.class,
+          AddModelCommand.class,
+          UnitsCommand.class,
+          AddUnitCommand.class,
+          OpenCaseCommand.class,
+          CloseCaseCommand.class,
+          AddReadingsCommand.class,
+          StrikeReadingCommand.class,
+          AddNoteCommand.class,
+          AddActionCommand.class,
+          ShowCommand.class,
+          SearchCommand.class,
+          FaultsCommand.class,
+          ExportCommand.class,
+          ImportCommand.class,
+          BackupCommand.class,
+          RestoreCommand.class,
+          DemoCommand.class,
+          ServerInitCommand.class,
+          ServerCheckCommand.class,
+          SyncCommand.class);
+
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  /**
+   * Returns the history's command line with the subcommand {@code name} only, or with every
+   * subcommand when {@code name} is null or names none of them (help, a misspelt name). Picocli
+   * reads a command's options from its annotations when it is added, so a call reads only what it
+   * runs (the command line starts faster).
+   */
+  public static CommandLine commandLine(String name) {
+    return CommandTree.withSubcommands(new HistoryCommand(), SUBCOMMANDS, name);
+  }
 
   @Override
   public void run() {

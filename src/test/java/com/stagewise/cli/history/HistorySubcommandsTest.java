@@ -43,7 +43,7 @@ class HistorySubcommandsTest {
   }
 
   static Stream<String> subcommands() {
-    return new CommandLine(new HistoryCommand()).getSubcommands().keySet().stream();
+    return HistoryCommand.commandLine(null).getSubcommands().keySet().stream();
   }
 
   @ParameterizedTest
@@ -61,7 +61,7 @@ class HistorySubcommandsTest {
       assertThat(help.out()).contains("--db", "--json");
     }
     CommandLine.Model.CommandSpec spec =
-        new CommandLine(new HistoryCommand()).getSubcommands().get(sub).getCommandSpec();
+        HistoryCommand.commandLine(null).getSubcommands().get(sub).getCommandSpec();
     for (CommandLine.Model.OptionSpec option : spec.options()) {
       assertThat(help.out()).contains(option.longestName());
     }
