@@ -1,5 +1,6 @@
 package com.stagewise.casework;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
@@ -91,6 +92,10 @@ final class StoredText {
       line.append(" to ").append(probe.to());
     }
     if (probe.kind() == Reading.Kind.AC) {
+      // Peak, the version-1 measure, is left unsaid so that earlier lines keep their wording.
+      if (probe.measure() != AcMeasure.PEAK) {
+        line.append(' ').append(probe.measure().word());
+      }
       line.append(' ').append(number(probe.hz())).append(" Hz");
     }
     line.append(" (")

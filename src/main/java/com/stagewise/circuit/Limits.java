@@ -208,7 +208,7 @@ public final class Limits {
       largest = Math.max(largest, Math.abs(rail.volts()));
     }
     for (TestInput input : stage.inputs()) {
-      largest = Math.max(largest, Math.abs(input.dc()) + input.ac());
+      largest = Math.max(largest, Math.abs(input.dc()) + input.peakAc());
     }
     return largest;
   }

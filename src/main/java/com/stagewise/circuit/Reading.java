@@ -2,6 +2,7 @@ package com.stagewise.circuit;
 
 import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 /**
@@ -11,16 +12,24 @@ import java.util.OptionalDouble;
  * @param at the test point: a net name (e.g. {@code OUT}) or a package pin {@code PACKAGE.PIN}
  *     (e.g. {@code U1.6})
  * @param kind whether the value is a DC level or an AC amplitude
- * @param value volts: the DC level, or the AC amplitude in the same measure (peak or RMS) as the
- *     stage's test input
+ * @param value volts: the DC level, or the AC amplitude in {@code measure}
  * @param hz the frequency of an AC reading in hertz; 0 for a DC reading
  * @param uncertainty the half-width of the reading's uncertainty in volts, when the technician gave
  *     one; empty means "use the meter's (DC) or the scope's (AC)", see {@link
  *     ReadingSet#uncertainty(Reading)}; for an ohms reading, in ohms
  * @param to the second point of an ohms reading (a net, package pin or part lead); empty for volts
+ * @param measure how an AC reading is stated (RMS, peak or peak-to-peak); empty means the same
+ *     measure as the stage's AC input (version-1 behaviour, see {@link #measureIn(Stage)}); always
+ *     empty for DC and ohms
  */
 public record Reading(
-    String at, Kind kind, double value, double hz, OptionalDouble uncertainty, String to) {
+    String at,
+    Kind kind,
+    double value,
+    double hz,
+    OptionalDouble uncertainty,
+    String to,
+    Optional<AcMeasure> measure) {
 
   /** What a reading measures. */
   public enum Kind {
@@ -45,7 +54,16 @@ public record Reading(
     Part.requireName(at, "at");
     Objects.requireNonNull(kind, "kind");
     Objects.requireNonNull(uncertainty, "uncertainty");
+    Objects.requireNonNull(measure, "measure");
     to = to == null ? "" : to;
+    if (measure.isPresent() && kind != Kind.AC) {
+      throw new InvalidInputException(
+          "",
+          "measure",
+          "a "
+              + kind.word()
+              + " reading has no \"measure\" (expected \"measure\" only with \"ac\")");
+    }
     if (kind == Kind.OHMS) {
       Part.requireName(to, "to");
       if (to.equals(at)) {
@@ -103,9 +121,56 @@ public record Reading(
     }
   }
 
+  /** Returns a reading in the default measure; see the record description. */
+  public Reading(
+      String at, Kind kind, double value, double hz, OptionalDouble uncertainty, String to) {
+    this(at, kind, value, hz, uncertainty, to, Optional.empty());
+  }
+
   /** Returns a volts reading (no second point); see the record description. */
   public Reading(String at, Kind kind, double value, double hz, OptionalDouble uncertainty) {
     this(at, kind, value, hz, uncertainty, "");
+  }
+
+  /**
+   * Returns an AC reading stated in {@code measure} (amplitude in volts at {@code hz}) with the
+   * scope's uncertainty.
+   */
+  public static Reading ac(String at, double amplitude, double hz, AcMeasure measure) {
+    return new Reading(
+        at, Kind.AC, amplitude, hz, OptionalDouble.empty(), "", Optional.of(measure));
+  }
+
+  /**
+   * Returns the measure this AC reading is stated in: its own, else that of the stage's AC input
+   * (the first input with an AC amplitude; peak when the stage has none).
+   */
+  public AcMeasure measureIn(Stage stage) {
+    return measure.orElseGet(() -> acMeasure(stage));
+  }
+
+  /** Returns the measure of the stage's first AC input, peak when it has none. */
+  public static AcMeasure acMeasure(Stage stage) {
+    return stage.inputs().stream()
+        .filter(TestInput::hasAc)
+        .map(TestInput::measure)
+        .findFirst()
+        .orElse(AcMeasure.PEAK);
+  }
+
+  /** Returns this reading as a peak amplitude in volts (AC), or its value unchanged (DC, ohms). */
+  public double peakIn(Stage stage) {
+    return kind == Kind.AC ? measureIn(stage).toPeak(value) : value;
+  }
+
+  /** Returns a copy of this volts reading taken at another point (same value, measure, …). */
+  public Reading movedTo(String point) {
+    return new Reading(point, kind, value, hz, uncertainty, to, measure);
+  }
+
+  /** Returns a copy with another value (and the same kind, point, measure and uncertainty). */
+  public Reading withValue(double newValue) {
+    return new Reading(at, kind, newValue, hz, uncertainty, to, measure);
   }
 
   /**

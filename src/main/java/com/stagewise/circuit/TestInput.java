@@ -5,14 +5,21 @@ package com.stagewise.circuit;
  *
  * @param net the driven net
  * @param dc the DC level in volts
- * @param ac the AC amplitude in volts (peak or RMS, as the readings use it); 0 when none
+ * @param ac the AC amplitude in volts, stated in {@code measure}; 0 when none
  * @param hz the AC frequency in hertz; 0 when there is no AC
+ * @param measure how {@code ac} is stated: peak (the default), RMS or peak-to-peak
  */
-public record TestInput(String net, double dc, double ac, double hz) {
+public record TestInput(String net, double dc, double ac, double hz, AcMeasure measure) {
+
+  /** Returns an input whose AC amplitude is a peak (the stage sheet's default). */
+  public TestInput(String net, double dc, double ac, double hz) {
+    this(net, dc, ac, hz, AcMeasure.PEAK);
+  }
 
   /** Checks the fields; see the record description. */
   public TestInput {
     Part.requireName(net, "net");
+    java.util.Objects.requireNonNull(measure, "measure");
     if (!Double.isFinite(dc)) {
       throw new InvalidInputException(
           "", "dc", "input " + net + " dc (" + dc + ") must be a finite number");
@@ -41,8 +48,18 @@ public record TestInput(String net, double dc, double ac, double hz) {
     return ac > 0;
   }
 
+  /** Returns the AC amplitude as a peak in volts, whatever the measure it is stated in. */
+  public double peakAc() {
+    return measure.toPeak(ac);
+  }
+
   /** Returns a copy with another DC level. */
   public TestInput withDc(double volts) {
-    return new TestInput(net, volts, ac, hz);
+    return new TestInput(net, volts, ac, hz, measure);
+  }
+
+  /** Returns a copy with the AC amplitude stated in another measure (the same signal). */
+  public TestInput withMeasure(AcMeasure other) {
+    return new TestInput(net, dc, other.fromPeak(peakAc()), hz, other);
   }
 }

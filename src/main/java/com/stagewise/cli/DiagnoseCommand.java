@@ -1,6 +1,7 @@
 package com.stagewise.cli;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnoser;
@@ -187,6 +188,7 @@ final class DiagnoseCommand implements Callable<Integer> {
       for (ProbeAdvice p : d.nextProbes()) {
         String kind =
             p.kind().word()
+                + (p.kind() == Reading.Kind.AC ? " " + p.measure().word() : "")
                 + (p.hz() > 0 ? String.format(Locale.ROOT, " at %s Hz", trim(p.hz())) : "")
                 + (p.to().isEmpty() ? "" : " to " + p.to());
         out.printf(Locale.ROOT, "  %-10s %-14s %.2f bits  %s%n", p.at(), kind, p.bits(), p.why());

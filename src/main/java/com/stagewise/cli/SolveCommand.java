@@ -1,6 +1,8 @@
 package com.stagewise.cli;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.interchange.SolutionJson;
 import com.stagewise.interchange.StageSheet;
@@ -61,7 +63,7 @@ final class SolveCommand implements Callable<Integer> {
     ExpectedVolts healthy = ExpectedVolts.of(stage, solved);
     PrintWriter out = spec.commandLine().getOut();
     if (json) {
-      out.print(SolutionJson.write(solved, ac, healthy));
+      out.print(SolutionJson.write(solved, ac, healthy, Reading.acMeasure(stage)));
     } else {
       out.print(table(stage, solved, ac, healthy));
     }
@@ -76,6 +78,8 @@ final class SolveCommand implements Callable<Integer> {
   static String table(
       Stage stage, SolveResult.Solved solved, Optional<AcSolution> ac, ExpectedVolts healthy) {
     StringBuilder text = new StringBuilder();
+    // The AC column is stated in the measure of the stage's AC input (peak unless it says).
+    AcMeasure measure = Reading.acMeasure(stage);
     String heading = stage.title().isEmpty() ? "Stage" : stage.title();
     text.append(heading)
         .append(stage.board().isEmpty() ? "" : " (" + stage.board() + ")")
@@ -107,7 +111,9 @@ final class SolveCommand implements Callable<Integer> {
                       "net",
                       "pins",
                       "DC volts",
-                      withAc ? "AC at " + number(ac.get().hz(), 0) + " Hz" : "",
+                      withAc
+                          ? "AC " + measure.words() + " at " + number(ac.get().hz(), 0) + " Hz"
+                          : "",
                       withAc ? "phase" : "",
                       withRange ? "healthy range (tolerances)" : "")
                   .stripTrailing()
@@ -119,7 +125,7 @@ final class SolveCommand implements Callable<Integer> {
         String phase = "";
         if (withAc) {
           Phasor phasor = ac.get().nets().get(net.getKey());
-          amplitude = phasor == null ? "" : number(phasor.amplitude(), 4);
+          amplitude = phasor == null ? "" : number(measure.fromPeak(phasor.amplitude()), 4);
           phase =
               phasor == null || phasor.amplitude() == 0
                   ? ""

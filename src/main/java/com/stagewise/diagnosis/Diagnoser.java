@@ -164,7 +164,7 @@ public final class Diagnoser {
       if (r.kind() == Reading.Kind.OHMS) {
         ohms.add(r);
       } else {
-        bound.add(Evidence.bind(points, readings, r));
+        bound.add(Evidence.bind(points, readings, r, stage));
       }
     }
     Ranking ranking = rank(hypotheses, bound, ohms, readings.meter());
@@ -324,9 +324,7 @@ public final class Diagnoser {
           && !points.index.containsKey(r.at())
           && ohmsChecks.knows(r.at())
           && !r.at().equals(ohmsChecks.onFaulted(r.at()))) {
-        out.add(
-            new Reading(
-                ohmsChecks.onFaulted(r.at()), r.kind(), r.value(), r.hz(), r.uncertainty()));
+        out.add(r.movedTo(ohmsChecks.onFaulted(r.at())));
         changed = true;
       } else {
         out.add(r);

@@ -1,7 +1,9 @@
 package com.stagewise.diagnosis;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
 
 /**
  * How well predictions fit readings: the likelihood of each reading given a prediction.
@@ -32,8 +34,20 @@ final class Evidence {
   /** Relative model floor for AC amplitudes (flat open-loop gain, ideal parts): 1 %. */
   static final double AC_FLOOR = 0.01;
 
-  /** One reading bound to its test point, with its uncertainty's variance. */
-  record Bound(int point, boolean ac, double value, double variance, String at) {}
+  /**
+   * One reading bound to its test point, with its uncertainty's variance. An AC reading is held as
+   * a peak amplitude (the solver's measure), with the measure it was stated in kept for the texts.
+   */
+  record Bound(int point, boolean ac, double value, double variance, String at, AcMeasure measure) {
+    Bound(int point, boolean ac, double value, double variance, String at) {
+      this(point, ac, value, variance, at, AcMeasure.PEAK);
+    }
+
+    /** Returns a peak amplitude (or DC volts) in the measure this reading was stated in. */
+    double stated(double volts) {
+      return ac ? measure.fromPeak(volts) : volts;
+    }
+  }
 
   private final double tailDensity;
 
@@ -42,11 +56,20 @@ final class Evidence {
     this.tailDensity = 1 / (2 * (1.2 * span + 1));
   }
 
-  static Bound bind(TestPoints points, ReadingSet set, Reading reading) {
+  /**
+   * Binds a reading to its test point. An AC reading and its uncertainty (the scope's or meter's
+   * figure on the value as stated) are turned into peak volts, the measure of the predictions.
+   */
+  static Bound bind(TestPoints points, ReadingSet set, Reading reading, Stage stage) {
     int point = points.index.get(reading.at());
     double u = set.uncertainty(reading);
+    if (reading.kind() != Reading.Kind.AC) {
+      return new Bound(point, false, reading.value(), u * u / 3, reading.at());
+    }
+    AcMeasure measure = reading.measureIn(stage);
+    double peakU = measure.toPeak(u);
     return new Bound(
-        point, reading.kind() == Reading.Kind.AC, reading.value(), u * u / 3, reading.at());
+        point, true, measure.toPeak(reading.value()), peakU * peakU / 3, reading.at(), measure);
   }
 
   /** Returns the variance of the prediction's error at a reading: spread, instrument and floor. */

@@ -1,5 +1,6 @@
 package com.stagewise.diagnosis;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
@@ -44,7 +45,8 @@ final class Explainer {
           out.add(
               new Observation(
                   r.at(),
-                  String.format(Locale.ROOT, "no AC signal where %s is expected", volts(mean))));
+                  String.format(
+                      Locale.ROOT, "no AC signal where %s is expected", acVolts(r, mean))));
         } else if (Evidence.score(expected, r) > 4) {
           out.add(
               new Observation(
@@ -52,8 +54,8 @@ final class Explainer {
                   String.format(
                       Locale.ROOT,
                       "AC amplitude %s where %s is expected",
-                      volts(r.value()),
-                      volts(mean))));
+                      acVolts(r, r.value()),
+                      acVolts(r, mean))));
         }
         continue;
       }
@@ -207,9 +209,9 @@ final class Explainer {
                   Locale.ROOT,
                   "%s %s at %s, where this fault gives %s",
                   r.ac() ? "AC" : "",
-                  volts(r.value()),
+                  acVolts(r, r.value()),
                   pointWords(r),
-                  volts(Evidence.mean(best, r)))
+                  acVolts(r, Evidence.mean(best, r)))
               .trim();
       (Evidence.score(best, r) <= 3 ? explains : misses).add(item);
     }
@@ -384,6 +386,15 @@ final class Explainer {
   /** Returns how to confirm a fault at the bench, with the power off where ohms are read. */
   String confirmingCheck(Fault fault, OptionalDouble estimate) {
     return checks.of(fault, estimate);
+  }
+
+  /**
+   * Returns volts as the reading states them: DC as they are, an AC peak in the reading's measure
+   * with the measure named unless it is peak (the plain "AC amplitude" of version 1).
+   */
+  static String acVolts(Evidence.Bound r, double volts) {
+    String text = volts(r.stated(volts));
+    return r.ac() && r.measure() != AcMeasure.PEAK ? text + " " + r.measure().words() : text;
   }
 
   private static String volts(double v) {

@@ -1,5 +1,6 @@
 package com.stagewise.diagnosis;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
@@ -43,7 +44,11 @@ final class ProbePlanner {
   private final TestPoints points;
   private final Evidence evidence;
 
+  /** The measure an AC probe is stated in: that of the stage's AC input. */
+  private final AcMeasure measure;
+
   ProbePlanner(Stage stage, TestPoints points, Evidence evidence) {
+    this.measure = Reading.acMeasure(stage);
     this.stage = stage;
     this.points = points;
     this.evidence = evidence;
@@ -107,7 +112,8 @@ final class ProbePlanner {
       }
       if (ac && isOutput(i) && !taken.contains("ac:" + name)) {
         double bits = round(gain(i, true, prior, components, entropy, meter));
-        advice.add(new ProbeAdvice(name, Reading.Kind.AC, hz, bits, why(i, true, top)));
+        advice.add(
+            new ProbeAdvice(name, Reading.Kind.AC, hz, bits, why(i, true, top), "", measure));
       }
     }
     // Best first; on a tie prefer a package pin (a technician probes the pins), then sheet order.
@@ -145,9 +151,12 @@ final class ProbePlanner {
     for (int c = 0; c < n; c++) {
       Prediction p = components.get(c).prediction;
       mean[c] = ac ? (p.acMean() == null ? 0 : p.acMean()[point]) : p.dcMean()[point];
+      // The scope's figure on the value as the technician will state it, back in peak volts.
       double u =
           ac
-              ? ReadingSet.SCOPE_PERCENT / 100 * Math.abs(mean[c]) + ReadingSet.SCOPE_FLOOR_VOLTS
+              ? measure.toPeak(
+                  ReadingSet.SCOPE_PERCENT / 100 * Math.abs(measure.fromPeak(mean[c]))
+                      + ReadingSet.SCOPE_FLOOR_VOLTS)
               : meter.uncertainty(mean[c]);
       Evidence.Bound probe =
           new Evidence.Bound(point, ac, mean[c], u * u / 3, points.names.get(point));
@@ -210,7 +219,7 @@ final class ProbePlanner {
                 Locale.ROOT,
                 "%s puts it at %s",
                 Wording.fault(s.hypothesis.fault.id()),
-                Units.volts(v)));
+                Units.volts(ac ? measure.fromPeak(v) : v)));
       }
     }
     if (parts.size() < 2) {
@@ -220,8 +229,10 @@ final class ProbePlanner {
           : String.format(
               Locale.ROOT,
               "the likely faults all put it near %s: a check of the readings so far",
-              Units.volts(seen.get(0)));
+              Units.volts(ac ? measure.fromPeak(seen.get(0)) : seen.get(0)));
     }
-    return (ac ? "AC amplitude: " : "") + String.join(", ", parts);
+    String head =
+        measure == AcMeasure.PEAK ? "AC amplitude: " : "AC volts " + measure.words() + ": ";
+    return (ac ? head : "") + String.join(", ", parts);
   }
 }

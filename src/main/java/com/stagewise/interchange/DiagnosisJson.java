@@ -17,8 +17,9 @@ import java.util.Map;
  * Writes a diagnosis as the {@code stagewise-diagnosis} document of the design notes.
  *
  * <p>Besides the contract's fields it adds, compatibly: {@code estimatedValue} on a suspect whose
- * value was estimated (a drifted part in ohms or farads, a low rail in volts), and at the top level
- * {@code confirmingCheck} and {@code notes}.
+ * value was estimated (a drifted part in ohms or farads, a low rail in volts), {@code measure} on a
+ * next probe of kind {@code ac} (how to state the AC reading: {@code rms}, {@code peak} or {@code
+ * pp}), and at the top level {@code confirmingCheck} and {@code notes}.
  */
 public final class DiagnosisJson {
   /** The document's format name. */
@@ -69,6 +70,8 @@ public final class DiagnosisJson {
       }
       if (p.kind() == Reading.Kind.AC) {
         node.set("hz", JsonText.number(p.hz()));
+        // An extension of version 1: how the AC reading should be stated (rms, peak or pp).
+        node.put("measure", p.measure().word());
       }
       node.set("bits", JsonText.number(round(p.bits(), 4)));
       node.put("why", p.why());

@@ -3,6 +3,7 @@ package com.stagewise.interchange;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.Limits;
 import com.stagewise.circuit.MeterSpec;
@@ -26,7 +27,8 @@ import java.util.OptionalDouble;
  * <p>Each reading's {@code at} is a net of the stage or a pin {@code PACKAGE.PIN} of one of its
  * packages (version 2 also a part lead such as {@code R2.1}). {@code meter} is optional ({@link
  * MeterSpec#DEFAULT}); so is each of its fields, which then takes the default's figure. An {@code
- * ac} reading without {@code hz} takes the frequency of the stage's first AC input. Every rule of
+ * ac} reading without {@code hz} takes the frequency of the stage's first AC input; one without
+ * {@code measure} is stated in the measure of that input (version-1 behaviour). Every rule of
  * {@link ReadingRules} applies (test points, plausible values, the meter's figures, the number of
  * readings), with its message.
  */
@@ -49,7 +51,7 @@ public final class ReadingsSheet {
       List.of("percent", "counts", "displayCounts", "ohms");
   private static final List<String> OHMS_KEYS = List.of("percent", "counts");
   private static final List<String> READING_KEYS =
-      List.of("at", "to", "dc", "ac", "ohms", "hz", "uncertainty");
+      List.of("at", "to", "dc", "ac", "ohms", "hz", "uncertainty", "measure");
 
   /** The meter's over-range, as a readings file writes it. */
   public static final String OVER_RANGE = "OL";
@@ -130,6 +132,8 @@ public final class ReadingsSheet {
       if (reading.kind() == Reading.Kind.AC) {
         node.set("hz", JsonText.number(reading.hz()));
       }
+      // Only a measure the reading states is written: a version-1 file reads back byte for byte.
+      reading.measure().ifPresent(m -> node.put("measure", m.word()));
       reading.uncertainty().ifPresent(u -> node.set("uncertainty", JsonText.number(u)));
       readings.add(node);
     }
@@ -281,6 +285,7 @@ public final class ReadingsSheet {
     } else if (hzField.isPresent()) {
       throw hzField.get().error("a dc reading has no \"hz\" (expected hz only with \"ac\")");
     }
+    Optional<AcMeasure> measure = Measures.optional(field);
     OptionalDouble uncertainty = OptionalDouble.empty();
     Optional<JsonField> uField = field.optional("uncertainty");
     if (uField.isPresent()) {
@@ -291,13 +296,14 @@ public final class ReadingsSheet {
       uncertainty = OptionalDouble.of(u);
     }
     try {
-      return new Reading(at, kind, value, hz, uncertainty);
+      return new Reading(at, kind, value, hz, uncertainty, "", measure);
     } catch (InvalidInputException e) {
       throw field.rewrap(e, e.field());
     }
   }
 
-  private static final List<String> VOLTS_KEYS = List.of("at", "dc", "ac", "hz", "uncertainty");
+  private static final List<String> VOLTS_KEYS =
+      List.of("at", "dc", "ac", "hz", "uncertainty", "measure");
 
   private static Reading ohmsReading(
       JsonField field,
@@ -334,6 +340,7 @@ public final class ReadingsSheet {
     if (field.optional("hz").isPresent()) {
       throw field.require("hz", "").error("an ohms reading has no \"hz\"");
     }
+    Measures.optional(field);
     OptionalDouble uncertainty = OptionalDouble.empty();
     Optional<JsonField> uField = field.optional("uncertainty");
     if (uField.isPresent()) {

@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.solver.AcSolution;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.solver.OperatingPoint;
@@ -68,6 +69,25 @@ public final class SolutionJson {
    */
   public static String write(
       SolveResult.Solved solved, Optional<AcSolution> ac, ExpectedVolts healthy) {
+    return write(solved, ac, healthy, AcMeasure.PEAK);
+  }
+
+  /**
+   * Returns the solution document with the healthy ranges and the AC amplitudes stated in {@code
+   * measure} (the measure of the stage's AC input), ending in a newline. The {@code ac} object says
+   * its measure ({@code "measure": "rms"}, an extension of version 1: the other keys are
+   * unchanged).
+   *
+   * @param solved the consistent operating points; the first is the primary one
+   * @param ac the AC response about the primary point (peak amplitudes), if an input has AC
+   * @param healthy the healthy ranges about the primary point; null or unsolved to leave them out
+   * @param measure the measure the amplitudes are written in
+   */
+  public static String write(
+      SolveResult.Solved solved,
+      Optional<AcSolution> ac,
+      ExpectedVolts healthy,
+      AcMeasure measure) {
     ObjectNode root = JsonText.object();
     root.put("format", FORMAT);
     root.put("version", VERSION);
@@ -81,13 +101,15 @@ public final class SolutionJson {
             nets.set(
                 net.getKey(),
                 JsonText.object()
-                    .<ObjectNode>set("amplitude", JsonText.number(net.getValue().amplitude()))
+                    .<ObjectNode>set(
+                        "amplitude", JsonText.number(measure.fromPeak(net.getValue().amplitude())))
                     .set("phaseDegrees", JsonText.number(net.getValue().phaseDegrees())));
           }
           root.set(
               "ac",
               JsonText.object()
                   .<ObjectNode>set("hz", JsonText.number(solution.hz()))
+                  .<ObjectNode>put("measure", measure.word())
                   .set("nets", nets));
         });
     if (healthy != null && healthy.solved()) {

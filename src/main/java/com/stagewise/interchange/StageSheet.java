@@ -3,6 +3,7 @@ package com.stagewise.interchange;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.InvalidInputException;
@@ -70,7 +71,7 @@ public final class StageSheet {
           "parts",
           "amplifiers");
   private static final List<String> RAIL_KEYS = List.of("net", "volts", "tolerance");
-  private static final List<String> INPUT_KEYS = List.of("net", "dc", "ac", "hz");
+  private static final List<String> INPUT_KEYS = List.of("net", "dc", "ac", "hz", "measure");
   private static final List<String> AMPLIFIER_KEYS =
       List.of(
           "ref",
@@ -193,6 +194,10 @@ public final class StageSheet {
       if (input.hasAc() || input.hz() > 0) {
         node.set("ac", JsonText.number(input.ac()));
         node.set("hz", JsonText.number(input.hz()));
+        // Peak is the default: a sheet of version 1 is written back byte for byte.
+        if (input.measure() != AcMeasure.PEAK) {
+          node.put("measure", input.measure().word());
+        }
       }
       inputs.add(node);
     }
@@ -264,8 +269,9 @@ public final class StageSheet {
           .error(
               "an input with an ac amplitude needs \"hz\" above 0 (the frequency in hertz, e.g. 1000)");
     }
+    AcMeasure measure = Measures.of(field);
     try {
-      return new TestInput(net, dc, ac, hz);
+      return new TestInput(net, dc, ac, hz, measure);
     } catch (InvalidInputException e) {
       throw field.rewrap(e, e.field());
     }

@@ -159,7 +159,7 @@ final class Network {
     for (var input : stage.inputs()) {
       if (input.hasAc() && (hz == 0 || input.hz() == hz)) {
         hz = input.hz();
-        acSource[netIndex.get(input.net())] = input.ac();
+        acSource[netIndex.get(input.net())] = input.peakAc();
       }
     }
     acHz = hz;

@@ -57,7 +57,7 @@ final class HealthyCallMeasure {
         System.out.println(line);
         List<String> worst = new ArrayList<>();
         for (Reading r : set.readings()) {
-          Evidence.Bound b = Evidence.bind(points, set, r);
+          Evidence.Bound b = Evidence.bind(points, set, r, stage.stage());
           double z =
               (r.value() - Evidence.mean(healthy, b)) / Math.sqrt(Evidence.variance(healthy, b));
           if (Math.abs(z) > Double.parseDouble(System.getProperty("z", "2"))) {

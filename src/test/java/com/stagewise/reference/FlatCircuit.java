@@ -154,6 +154,11 @@ final class FlatCircuit {
       flat.hz = acSource.get().hz();
       for (TestInput input : stage.inputs()) {
         if (input.hasAc() && input.hz() == flat.hz) {
+          // ngspice's AC source magnitude is a peak; a stage stated otherwise would be misread.
+          if (input.measure() != com.stagewise.circuit.AcMeasure.PEAK) {
+            throw new IllegalArgumentException(
+                "state input " + input.net() + " as a peak amplitude before flattening");
+          }
           flat.acDrive.put(input.net(), input.ac());
         }
       }

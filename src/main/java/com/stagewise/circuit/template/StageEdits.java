@@ -136,7 +136,7 @@ public final class StageEdits {
             .toList();
     List<TestInput> inputs =
         stage.inputs().stream()
-            .map(i -> new TestInput(net.apply(i.net()), i.dc(), i.ac(), i.hz()))
+            .map(i -> new TestInput(net.apply(i.net()), i.dc(), i.ac(), i.hz(), i.measure()))
             .toList();
     List<Part> parts =
         stage.parts().stream()
