@@ -50,6 +50,7 @@ import java.util.Objects;
 public final class Casework {
   private final HistoryStore store;
   private final Clock clock;
+  private final ModelStages stages;
 
   /** Creates the workflow on a shop's history, taking times from the system clock (UTC). */
   public Casework(HistoryStore store) {
@@ -58,8 +59,32 @@ public final class Casework {
 
   /** Creates the workflow on a shop's history, taking times from {@code clock}. */
   public Casework(HistoryStore store, Clock clock) {
+    this(store, clock, defaultWho());
+  }
+
+  /**
+   * Creates the workflow on a shop's history, taking times from {@code clock} and naming {@code
+   * who} as the one who saved the stage versions it saves.
+   */
+  public Casework(HistoryStore store, Clock clock, String who) {
     this.store = Objects.requireNonNull(store, "store");
     this.clock = Objects.requireNonNull(clock, "clock");
+    this.stages = new ModelStages(store, who);
+  }
+
+  /**
+   * Returns who saves stage versions when nobody is named: the {@code stagewise.technician} system
+   * property, else the name the computer's user logged in with.
+   */
+  public static String defaultWho() {
+    String named = System.getProperty("stagewise.technician", "").strip();
+    String who = named.isEmpty() ? System.getProperty("user.name", "").strip() : named;
+    return who.length() > 40 ? who.substring(0, 40) : who;
+  }
+
+  /** Returns the board models' library stages, in versions. */
+  public ModelStages library() {
+    return stages;
   }
 
   /** Returns the history this workflow writes to (for reading). */
@@ -133,44 +158,42 @@ public final class Casework {
   // ---- the stage --------------------------------------------------------------------------------
 
   /**
-   * Returns the stages of a board model's library, in the order they were added.
+   * Returns the latest version of each stage of a board model's library, the one saved most
+   * recently first (see {@link ModelStages#latest}).
    *
    * @throws InvalidInputException if a stored sheet is no longer a valid stage sheet (the message
    *     names its title and the board model)
    */
   public List<LibraryStage> stageLibrary(BoardModel model) {
-    List<LibraryStage> stages = new ArrayList<>();
-    for (StageSheetRecord sheet : store.library().sheets(model.id())) {
-      stages.add(new LibraryStage(sheet, StageSheet.read(sheet.sheetJson(), source(sheet, model))));
-    }
-    return stages;
+    return stages.latest(model);
   }
 
   /**
-   * Returns the stage of the board model's library to use for a case: the one titled {@code title}
-   * (ignoring letter case), or for a null title the only one the library has.
+   * Returns the stage of the board model's library to use for a case, its latest version: the one
+   * titled {@code title} (ignoring letter case), or for a null title the only one the library has.
    *
    * @throws InvalidInputException if the library has no such stage, or several and no title says
    *     which (the message lists the titles)
    */
   public LibraryStage storedStage(BoardModel model, String title) {
-    List<StageSheetRecord> sheets = store.library().sheets(model.id());
-    List<StageSheetRecord> chosen =
+    List<LibraryStage> latest = stages.latest(model);
+    List<LibraryStage> chosen =
         title == null
-            ? sheets
-            : sheets.stream().filter(s -> s.title().equalsIgnoreCase(title.strip())).toList();
+            ? latest
+            : latest.stream()
+                .filter(s -> s.sheet().title().equalsIgnoreCase(title.strip()))
+                .toList();
     if (chosen.size() == 1) {
-      StageSheetRecord sheet = chosen.get(0);
-      return new LibraryStage(sheet, StageSheet.read(sheet.sheetJson(), source(sheet, model)));
+      return chosen.get(0);
     }
     String library = "stage library of " + model.name();
     if (chosen.isEmpty()) {
       throw new InvalidInputException(
           library,
           "stage",
-          sheets.isEmpty()
+          latest.isEmpty()
               ? "board model " + model.name() + " has no stored stage sheet"
-              : "no stage sheet is titled '" + title + "'; the titles are " + titles(sheets));
+              : "no stage sheet is titled '" + title + "'; the titles are " + titles(latest));
     }
     throw new InvalidInputException(
         library,
@@ -182,11 +205,12 @@ public final class Casework {
   }
 
   /**
-   * Adds a stage (built on the bench, e.g. from a template) to the board model's library, so that
-   * the next unit of the model finds it.
+   * Adds a stage (built on the bench, e.g. from a template) to the board model's library as a
+   * version of its stage, so that the next unit of the model finds it (nothing is added when a
+   * version with the same parts, nets and values is kept already).
    */
   public StageSheetRecord addToLibrary(BoardModel model, Stage stage) {
-    return store.library().add(model.id(), stage.title(), StageSheet.write(stage));
+    return stages.save(model, stage).sheet();
   }
 
   // ---- readings and the diagnosis ---------------------------------------------------------------
@@ -382,12 +406,8 @@ public final class Casework {
     return DemoHistory.fill(store);
   }
 
-  private static String source(StageSheetRecord sheet, BoardModel model) {
-    return "stage sheet '" + sheet.title() + "' of " + model.name();
-  }
-
-  private static String titles(List<StageSheetRecord> sheets) {
-    return String.join(", ", sheets.stream().map(s -> "'" + s.title() + "'").toList());
+  private static String titles(List<LibraryStage> stages) {
+    return String.join(", ", stages.stream().map(s -> "'" + s.sheet().title() + "'").toList());
   }
 
   private static String readText(Path file) {

@@ -45,15 +45,15 @@ public final class BundleCheck {
   public static final Duration FUTURE_MARGIN = Duration.ofDays(1);
 
   /** The kinds of record that others refer to. */
-  private static final List<String> PARENTS = List.of(BOARD_MODEL, UNIT, CASE);
+  private static final List<String> PARENTS = List.of(BOARD_MODEL, STAGE_SHEET, UNIT, CASE);
 
   /** Looks up what kind of parent record an id is in the local history. */
   @FunctionalInterface
   public interface LocalKinds<E extends Exception> {
     /**
-     * Returns the kind ({@link #BOARD_MODEL}, {@link #UNIT} or {@link #CASE}) of the local record
-     * with this id, if there is one; {@code wanted} is the kind the caller hopes for (looked up
-     * first).
+     * Returns the kind ({@link #BOARD_MODEL}, {@link #STAGE_SHEET}, {@link #UNIT} or {@link #CASE})
+     * of the local record with this id, if there is one; {@code wanted} is the kind the caller
+     * hopes for (looked up first).
      */
     Optional<String> kindOf(String id, String wanted) throws E;
   }
@@ -137,7 +137,9 @@ public final class BundleCheck {
       declare(at, s.id(), STAGE_SHEET);
       Checks.shortText(source, at + ".title", s.title(), false);
       Checks.text(source, at + ".sheet", s.sheetJson(), Checks.MAX_SHEET);
+      Checks.shortText(source, at + ".savedBy", s.savedBy(), false);
       time(at + ".updatedAt", s.updatedAt());
+      time(at + ".savedAt", s.savedAt());
     }
     for (int i = 0; i < b.readings().size(); i++) {
       StoredReading r = b.readings().get(i);
@@ -230,6 +232,9 @@ public final class BundleCheck {
     }
     for (int i = 0; i < b.cases().size(); i++) {
       refer(local, "cases[" + i + "].unitId", b.cases().get(i).unitId(), UNIT);
+      if (b.cases().get(i).stageSheetId() != null) {
+        refer(local, "cases[" + i + "].stageSheetId", b.cases().get(i).stageSheetId(), STAGE_SHEET);
+      }
     }
     for (int i = 0; i < b.readings().size(); i++) {
       refer(local, "readings[" + i + "].caseId", b.readings().get(i).caseId(), CASE);

@@ -73,7 +73,7 @@ public final class Exporter {
               Records.STAGE_SHEET
                   + " WHERE board_model_id IN (SELECT id FROM board_model WHERE "
                   + models
-                  + ") ORDER BY updated_at, "
+                  + ") ORDER BY version, saved_at, "
                   + d.binaryOrder("id"),
               Records::stageSheet,
               p),

@@ -2,6 +2,7 @@ package com.stagewise.history.jdbc;
 
 import com.stagewise.history.BundleCheck;
 import com.stagewise.history.ImportReport;
+import com.stagewise.history.StageVersions;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.HistoryBundle;
@@ -37,6 +38,8 @@ public final class Importer {
       Map.of(
           BundleCheck.BOARD_MODEL,
           "board_model",
+          BundleCheck.STAGE_SHEET,
+          "stage_sheet",
           BundleCheck.UNIT,
           "unit",
           BundleCheck.CASE,
@@ -98,7 +101,7 @@ public final class Importer {
       mergeBoardModel(m, rows);
     }
     for (StageSheetRecord s : b.stageSheets()) {
-      mergeStageSheet(s, rows);
+      mergeStageSheet(s, b.numbersStageVersions(), rows);
     }
     for (Unit u : b.units()) {
       mergeUnit(u, rows);
@@ -179,27 +182,65 @@ public final class Importer {
         () -> rows.replace(m));
   }
 
-  private void mergeStageSheet(StageSheetRecord s0, Rows rows) throws SQLException {
-    StageSheetRecord s =
-        new StageSheetRecord(
-            s0.id(), mapped(s0.boardModelId()), s0.title(), s0.sheetJson(), s0.updatedAt());
-    // New records are the common case: try the insert first, and look at the local copy only
-    // when there is one.
-    if (rows.tryInsert(s)) {
-      added++;
-      return;
+  /**
+   * Merges a version of a library stage by {@link StageVersions}: a text kept here already is that
+   * version (no duplicate, the bundle's id matched to it); a different text under a number taken
+   * here goes to the next free number, whichever of the two was saved later.
+   */
+  private void mergeStageSheet(StageSheetRecord s0, boolean numbered, Rows rows)
+      throws SQLException {
+    StageSheetRecord s = s0.withBoardModel(mapped(s0.boardModelId()));
+    Optional<StageSheetRecord> local =
+        rows.first(Records.STAGE_SHEET + " WHERE id = ?", Records::stageSheet, s.id());
+    List<StageSheetRecord> versions =
+        rows.query(
+            Records.STAGE_SHEET
+                + " WHERE board_model_id = ? AND "
+                + rows.dialect().caselessEquals("title"),
+            Records::stageSheet,
+            s.boardModelId(),
+            s.title());
+    StageVersions.Placement placement =
+        local.isEmpty()
+            ? StageVersions.placeNew(s, versions, numbered, now)
+            : StageVersions.placeKnown(s, local.get(), versions, numbered, now);
+    if (placement instanceof StageVersions.Placement.Same same) {
+      if (!same.local().id().equals(s.id())) {
+        remapped.put(s.id(), same.local().id());
+        matched.add(
+            "stage '"
+                + s.title()
+                + "' version "
+                + same.local().version()
+                + " matched the local version with the same sheet");
+      }
+      unchanged++;
+    } else if (placement instanceof StageVersions.Placement.Write write) {
+      if (write.moved().isPresent()) {
+        rows.replace(write.moved().get());
+        matched.add(
+            "stage '"
+                + s.title()
+                + "': the local version saved later moved to version "
+                + write.moved().get().version());
+      }
+      if (local.isEmpty()) {
+        rows.insert(write.record());
+        added++;
+      } else {
+        rows.replace(write.record());
+        updated++;
+      }
+    } else {
+      settle(
+          BundleCheck.STAGE_SHEET,
+          s.id(),
+          s,
+          local.get(),
+          s.updatedAt(),
+          local.get().updatedAt(),
+          () -> rows.replace(s));
     }
-    StageSheetRecord local =
-        rows.first(Records.STAGE_SHEET + " WHERE id = ?", Records::stageSheet, s.id())
-            .orElseThrow();
-    settle(
-        BundleCheck.STAGE_SHEET,
-        s.id(),
-        s,
-        local,
-        s.updatedAt(),
-        local.updatedAt(),
-        () -> rows.replace(s));
   }
 
   /**
@@ -253,7 +294,8 @@ public final class Importer {
             c0.closedAt(),
             c0.outcome(),
             c0.confirmedFaults(),
-            c0.updatedAt());
+            c0.updatedAt(),
+            c0.stageSheetId() == null ? null : mapped(c0.stageSheetId()));
     if (rows.tryInsert(c)) {
       added++;
       touchedCases.add(c.id());

@@ -120,7 +120,8 @@ public final class JdbcCases implements Cases {
                     now,
                     closeOut.outcome(),
                     closeOut.confirmedFaults(),
-                    now);
+                    now,
+                    open.stageSheetId());
             rows.replace(closed);
             rows.indexParts(caseId);
             return closed;

@@ -22,7 +22,8 @@ public final class Records {
   public static final String BOARD_MODEL =
       "SELECT id, name, maker, notes, updated_at FROM board_model";
   public static final String STAGE_SHEET =
-      "SELECT id, board_model_id, title, sheet_json, updated_at FROM stage_sheet";
+      "SELECT id, board_model_id, title, sheet_json, updated_at, version, saved_by, saved_at"
+          + " FROM stage_sheet";
   public static final String UNIT =
       "SELECT id, serial, board_model_id, owner, updated_at FROM unit";
   public static final String READING =
@@ -40,7 +41,7 @@ public final class Records {
   /** The query that selects cases (table alias {@code c}), with their confirmed faults. */
   public static String cases(SqlDialect dialect) {
     return "SELECT c.id, c.unit_id, c.opened_at, c.symptom, c.status, c.closed_at, c.outcome,"
-        + " c.updated_at, "
+        + " c.updated_at, c.stage_sheet_id, "
         + dialect.confirmedFaults()
         + " AS faults FROM repair_case c";
   }
@@ -52,7 +53,14 @@ public final class Records {
 
   public static StageSheetRecord stageSheet(ResultSet rs) throws SQLException {
     return new StageSheetRecord(
-        rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), time(rs, 5));
+        rs.getString(1),
+        rs.getString(2),
+        rs.getString(3),
+        rs.getString(4),
+        time(rs, 5),
+        rs.getInt(6),
+        rs.getString(7),
+        time(rs, 8));
   }
 
   public static Unit unit(ResultSet rs) throws SQLException {
@@ -70,8 +78,9 @@ public final class Records {
         CaseStatus.fromWord(rs.getString(5)).orElseThrow(),
         time(rs, 6),
         outcome == null ? null : Outcome.fromWord(outcome).orElseThrow(),
-        words(rs.getString(9)),
-        time(rs, 8));
+        words(rs.getString(10)),
+        time(rs, 8),
+        rs.getString(9));
   }
 
   public static StoredReading reading(ResultSet rs) throws SQLException {

@@ -208,24 +208,30 @@ public final class Rows implements AutoCloseable {
   public boolean tryInsert(StageSheetRecord s) throws SQLException {
     int inserted =
         update(
-            "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
-                + " VALUES (?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+            "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at, version,"
+                + " saved_by, saved_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
             s.id(),
             s.boardModelId(),
             s.title(),
             s.sheetJson(),
-            s.updatedAt());
+            s.updatedAt(),
+            s.version(),
+            s.savedBy(),
+            s.savedAt());
     return inserted == 1;
   }
 
   public void replace(StageSheetRecord s) throws SQLException {
     update(
-        "UPDATE stage_sheet SET board_model_id = ?, title = ?, sheet_json = ?, updated_at = ?"
-            + " WHERE id = ?",
+        "UPDATE stage_sheet SET board_model_id = ?, title = ?, sheet_json = ?, updated_at = ?,"
+            + " version = ?, saved_by = ?, saved_at = ? WHERE id = ?",
         s.boardModelId(),
         s.title(),
         s.sheetJson(),
         s.updatedAt(),
+        s.version(),
+        s.savedBy(),
+        s.savedAt(),
         s.id());
   }
 
@@ -255,7 +261,8 @@ public final class Rows implements AutoCloseable {
     int inserted =
         update(
             "INSERT INTO repair_case (id, unit_id, opened_at, symptom, status, closed_at, outcome,"
-                + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (id) DO NOTHING",
+                + " updated_at, stage_sheet_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)"
+                + " ON CONFLICT (id) DO NOTHING",
             c.id(),
             c.unitId(),
             c.openedAt(),
@@ -263,7 +270,8 @@ public final class Rows implements AutoCloseable {
             c.status().word(),
             c.closedAt(),
             c.outcome() == null ? null : c.outcome().word(),
-            c.updatedAt());
+            c.updatedAt(),
+            c.stageSheetId());
     if (inserted == 1) {
       writeFaults(c);
     }
@@ -273,7 +281,7 @@ public final class Rows implements AutoCloseable {
   public void replace(RepairCase c) throws SQLException {
     update(
         "UPDATE repair_case SET unit_id = ?, opened_at = ?, symptom = ?, status = ?,"
-            + " closed_at = ?, outcome = ?, updated_at = ? WHERE id = ?",
+            + " closed_at = ?, outcome = ?, updated_at = ?, stage_sheet_id = ? WHERE id = ?",
         c.unitId(),
         c.openedAt(),
         c.symptom(),
@@ -281,6 +289,7 @@ public final class Rows implements AutoCloseable {
         c.closedAt(),
         c.outcome() == null ? null : c.outcome().word(),
         c.updatedAt(),
+        c.stageSheetId(),
         c.id());
     update("DELETE FROM confirmed_fault WHERE case_id = ?", c.id());
     writeFaults(c);

@@ -63,8 +63,17 @@ final class ChangeFeed {
                       + " ORDER BY change_no",
                   Records::boardModel,
                   after),
+              // With the versions the changed cases are diagnosed with, so the bundle stands alone.
               rows.query(
-                  Records.STAGE_SHEET + " WHERE change_no > ? ORDER BY change_no",
+                  SINCE
+                      + Records.STAGE_SHEET
+                      + " WHERE "
+                      + numbered(
+                          "change_no > ?1 OR id IN (SELECT c.stage_sheet_id FROM repair_case c"
+                              + " WHERE "
+                              + cases
+                              + ")")
+                      + " ORDER BY change_no",
                   Records::stageSheet,
                   after),
               rows.query(

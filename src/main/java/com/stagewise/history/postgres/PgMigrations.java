@@ -23,7 +23,8 @@ final class PgMigrations {
           "V2__full_text_search.sql",
           "V3__change_numbers.sql",
           "V4__ohms_readings.sql",
-          "V5__struck_readings.sql");
+          "V5__struck_readings.sql",
+          "V6__stage_versions.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

@@ -32,9 +32,22 @@ public record HistoryBundle(
 
   /**
    * The newest bundle format version this program reads and the one it writes (2: readings may be
-   * ohms readings, with {@code "to"} and {@code "OL"}; a version-1 bundle is read as before).
+   * ohms readings, with {@code "to"} and {@code "OL"}; 3: stage sheets carry their version number,
+   * who saved them and when, and cases the stage version they are diagnosed with). Bundles of
+   * earlier versions are read as before.
    */
-  public static final int CURRENT_VERSION = 2;
+  public static final int CURRENT_VERSION = 3;
+
+  /**
+   * The first bundle format version whose stage sheets carry version numbers; a sheet of an earlier
+   * bundle becomes the next version of its stage unless its text is kept already.
+   */
+  public static final int STAGE_VERSIONS = 3;
+
+  /** Returns whether this bundle's stage sheets carry their version numbers. */
+  public boolean numbersStageVersions() {
+    return version >= STAGE_VERSIONS;
+  }
 
   public HistoryBundle {
     exportedAt = Times.millis(Objects.requireNonNull(exportedAt, "exportedAt"));

@@ -17,6 +17,8 @@ import java.util.Objects;
  * @param confirmedFaults the fault ids found to be wrong at close-out (DESIGN.md grammar), in the
  *     order given; empty while open
  * @param updatedAt when this record was last changed
+ * @param stageSheetId the version of the board model's library stage the case is diagnosed with (a
+ *     {@link StageSheetRecord} id), or null while none is chosen
  */
 public record RepairCase(
     String id,
@@ -27,7 +29,8 @@ public record RepairCase(
     Instant closedAt,
     Outcome outcome,
     List<String> confirmedFaults,
-    Instant updatedAt) {
+    Instant updatedAt,
+    String stageSheetId) {
   public RepairCase {
     Objects.requireNonNull(id, "id");
     Objects.requireNonNull(unitId, "unitId");
@@ -37,5 +40,41 @@ public record RepairCase(
     closedAt = Times.millis(closedAt);
     confirmedFaults = List.copyOf(confirmedFaults);
     updatedAt = Times.millis(Objects.requireNonNull(updatedAt, "updatedAt"));
+  }
+
+  /** A case with no stage version chosen. */
+  public RepairCase(
+      String id,
+      String unitId,
+      Instant openedAt,
+      String symptom,
+      CaseStatus status,
+      Instant closedAt,
+      Outcome outcome,
+      List<String> confirmedFaults,
+      Instant updatedAt) {
+    this(
+        id, unitId, openedAt, symptom, status, closedAt, outcome, confirmedFaults, updatedAt, null);
+  }
+
+  /** Returns this case diagnosed with the stage version {@code sheetId}, changed at {@code at}. */
+  public RepairCase withStageSheet(String sheetId, Instant at) {
+    return new RepairCase(
+        id, unitId, openedAt, symptom, status, closedAt, outcome, confirmedFaults, at, sheetId);
+  }
+
+  /** Returns this case with its unit known here by another id. */
+  public RepairCase withUnit(String localUnitId) {
+    return new RepairCase(
+        id,
+        localUnitId,
+        openedAt,
+        symptom,
+        status,
+        closedAt,
+        outcome,
+        confirmedFaults,
+        updatedAt,
+        stageSheetId);
   }
 }

@@ -150,6 +150,12 @@ final class Ledger implements SyncLedger {
           rows.query(
               Records.BOARD_MODEL + " WHERE id = ?", Records::boardModel, unit.boardModelId()));
       units.add(unit);
+      if (rc.stageSheetId() != null) {
+        // The version the case is diagnosed with goes along: the server may not have it yet.
+        sheets.addAll(
+            rows.query(
+                Records.STAGE_SHEET + " WHERE id = ?", Records::stageSheet, rc.stageSheetId()));
+      }
       cases.add(rc);
       for (StoredReading r :
           rows.query(

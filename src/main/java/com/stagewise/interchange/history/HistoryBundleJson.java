@@ -67,8 +67,6 @@ public final class HistoryBundleJson {
           "notes");
   private static final List<String> BOARD_MODEL =
       List.of("id", "name", "maker", "notes", "updatedAt");
-  private static final List<String> STAGE_SHEET =
-      List.of("id", "boardModelId", "title", "sheet", "updatedAt");
   private static final List<String> UNIT =
       List.of("id", "serial", "boardModelId", "owner", "updatedAt");
   private static final List<String> CASE =
@@ -81,7 +79,8 @@ public final class HistoryBundleJson {
           "closedAt",
           "outcome",
           "confirmedFaults",
-          "updatedAt");
+          "updatedAt",
+          LibraryFields.CASE_STAGE);
   private static final List<String> READING =
       List.of(
           "id",
@@ -176,14 +175,7 @@ public final class HistoryBundleJson {
     }
     List<StageSheetRecord> sheets = new ArrayList<>();
     for (JsonField f : top.optionalElements("stageSheets", "stage sheets")) {
-      f.object("a stage sheet", STAGE_SHEET);
-      sheets.add(
-          new StageSheetRecord(
-              text(f, "id"),
-              text(f, "boardModelId"),
-              f.optionalText("title", ""),
-              text(f, "sheet"),
-              time(f, "updatedAt")));
+      sheets.add(LibraryFields.sheet(f));
     }
     List<Unit> units = new ArrayList<>();
     for (JsonField f : top.optionalElements("units", "units")) {
@@ -211,7 +203,8 @@ public final class HistoryBundleJson {
                   .map(o -> o.word(Outcome::fromWord, "fixed, not-fixed or returned"))
                   .orElse(null),
               f.optional("confirmedFaults").map(g -> g.texts("fault ids")).orElse(List.of()),
-              time(f, "updatedAt")));
+              time(f, "updatedAt"),
+              LibraryFields.caseStage(f)));
     }
     List<StoredReading> readings = new ArrayList<>();
     for (JsonField f : top.optionalElements("readings", "readings")) {
@@ -348,7 +341,7 @@ public final class HistoryBundleJson {
       json.writeStringField("exportedAt", bundle.exportedAt().toString());
       json.writeStringField("programVersion", bundle.programVersion());
       writeArray(json, "boardModels", bundle.boardModels(), HistoryBundleJson::tree);
-      writeArray(json, "stageSheets", bundle.stageSheets(), HistoryBundleJson::tree);
+      writeArray(json, "stageSheets", bundle.stageSheets(), LibraryFields::tree);
       writeArray(json, "units", bundle.units(), HistoryBundleJson::tree);
       writeArray(json, "cases", bundle.cases(), HistoryBundleJson::tree);
       writeArray(json, "readings", bundle.readings(), HistoryBundleJson::tree);
@@ -389,15 +382,6 @@ public final class HistoryBundleJson {
     return o.put("updatedAt", m.updatedAt().toString());
   }
 
-  static ObjectNode tree(StageSheetRecord s) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", s.id())
-        .put("boardModelId", s.boardModelId())
-        .put("title", s.title())
-        .put("sheet", s.sheetJson());
-    return o.put("updatedAt", s.updatedAt().toString());
-  }
-
   static ObjectNode tree(Unit u) {
     ObjectNode o = NODES.objectNode();
     o.put("id", u.id())
@@ -419,7 +403,9 @@ public final class HistoryBundleJson {
     }
     ArrayNode faults = o.putArray("confirmedFaults");
     c.confirmedFaults().forEach(faults::add);
-    return o.put("updatedAt", c.updatedAt().toString());
+    o.put("updatedAt", c.updatedAt().toString());
+    LibraryFields.caseStage(c, o);
+    return o;
   }
 
   /**

@@ -59,7 +59,6 @@ public final class StageViewModel {
       FXCollections.observableArrayList(Templates.all());
   private final ObjectProperty<StageTemplate> template = new SimpleObjectProperty<>();
   private final ObservableList<ParameterEntry> parameters = FXCollections.observableArrayList();
-  private boolean builtFromTemplate;
   private final StageEditorModel editor = new StageEditorModel();
   private final BooleanProperty editing = new SimpleBooleanProperty(false);
   private Path arriving;
@@ -303,7 +302,6 @@ public final class StageViewModel {
             built.inputs(),
             built.parts(),
             built.amplifiers()));
-    builtFromTemplate = true;
   }
 
   /**
@@ -397,9 +395,9 @@ public final class StageViewModel {
               for (LibraryStage stored : bench.casework().stageLibrary(model)) {
                 entries.add(new LibraryEntry(stored.title(), stored.stage()));
               }
-              // Newest first: a stage built or edited for an earlier unit of the model is the
-              // likeliest one on the bench now.
-              java.util.Collections.reverse(entries);
+              // The casework lists the latest version of each stage, the one saved most recently
+              // first: a stage built or edited for an earlier unit of the model is the likeliest
+              // one on the bench now.
               return entries;
             },
             entries -> {
@@ -441,7 +439,6 @@ public final class StageViewModel {
             () -> StageSheet.read(file),
             opened -> {
               setStage(opened);
-              builtFromTemplate = true;
               BoardModel model = bench.boardModelProperty().get();
               libraryNote.set(
                   "Opened \""
@@ -527,7 +524,6 @@ public final class StageViewModel {
    */
   public void useEdited(Stage edited) {
     setStage(edited);
-    builtFromTemplate = true;
     editing.set(false);
   }
 
@@ -539,7 +535,6 @@ public final class StageViewModel {
   /** Takes a stage to work on (from the library or a template); its parts become editable. */
   public void choose(Stage chosen) {
     setStage(chosen);
-    builtFromTemplate = false;
   }
 
   private void setStage(Stage chosen) {
@@ -739,20 +734,16 @@ public final class StageViewModel {
             bench.diagnosisProperty().set(null);
           }
           String caseId = bench.openCaseProperty().get().id();
-          BoardModel model = bench.boardModelProperty().get();
-          boolean addToLibrary = builtFromTemplate && model != null;
-          builtFromTemplate = false;
           bench
               .tasks()
               .run(
                   "Saving the case's stage",
                   () -> {
                     bench.resume().saveStage(caseId, s);
-                    if (addToLibrary) {
-                      // A stage built here joins the board model's library, so the next unit finds
-                      // it.
-                      bench.casework().addToLibrary(model, s);
-                    }
+                    // The case keeps the version it is diagnosed with; a stage built or changed
+                    // here becomes the next version of its library stage, so the next unit of the
+                    // model is offered it first.
+                    bench.casework().library().useForCase(caseId, s);
                     return null;
                   },
                   ok -> {},

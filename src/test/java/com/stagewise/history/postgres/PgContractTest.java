@@ -4,6 +4,7 @@ import com.stagewise.history.CasesContract;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.SearchContract;
 import com.stagewise.history.StageLibraryContract;
+import com.stagewise.history.StageVersionsContract;
 import com.stagewise.history.TransferContract;
 import com.stagewise.history.UnitsContract;
 import java.time.Clock;
@@ -45,6 +46,14 @@ class PgContractTest {
 
   @Nested
   class Library extends StageLibraryContract {
+    @Override
+    protected HistoryStore openStore(Clock clock) {
+      return fresh(clock);
+    }
+  }
+
+  @Nested
+  class Versions extends StageVersionsContract {
     @Override
     protected HistoryStore openStore(Clock clock) {
       return fresh(clock);

@@ -70,6 +70,79 @@ class PgMigrationTest {
     assertThat(changeNumber(s)).isEqualTo(changeBefore);
   }
 
+  @Test
+  void version5Shop_migrates_sheetsOfOneTitleBecomeItsVersions_withoutNewChangeNumbers()
+      throws SQLException {
+    ServerAddress address = server.freshShop();
+    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
+    try {
+      PgMigrations.migrate(admin, 0L, 5);
+    } finally {
+      admin.close();
+    }
+    String s = address.schema();
+    server.adminSql(
+        "SET search_path TO " + s,
+        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
+        // Two sheets of one title (the second saved after an edit, letter case aside) and one of
+        // another title, stored before versions were kept.
+        "INSERT INTO "
+            + s
+            + ".stage_sheet (id, board_model_id, title, sheet_json, updated_at) VALUES"
+            + " ('s2', 'm1', 'output driver', '{\"b\": 2}', "
+            + (TAKEN + 1000)
+            + "), ('s1', 'm1', 'Output driver', '{\"a\": 1}', "
+            + TAKEN
+            + "), ('s3', 'm1', 'Input buffer', '{\"c\": 3}', "
+            + TAKEN
+            + ")",
+        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
+        "INSERT INTO "
+            + s
+            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
+            + " VALUES ('c1', 'u1', "
+            + TAKEN
+            + ", 'crackles when cold', 'open', "
+            + TAKEN
+            + ")");
+    long changeBefore = maxChange(s, "stage_sheet");
+
+    try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
+      assertThat(shop.schemaVersion()).isEqualTo(PgMigrations.LATEST);
+      assertThat(shop.library().versions("m1", "OUTPUT DRIVER"))
+          .extracting(v -> v.id() + " " + v.version() + " " + v.sheetJson())
+          .containsExactly("s2 2 {\"b\": 2}", "s1 1 {\"a\": 1}");
+      assertThat(shop.library().versions("m1", "Input buffer"))
+          .extracting(v -> v.version() + " " + v.savedAt().toEpochMilli())
+          .containsExactly("1 " + TAKEN);
+      assertThat(shop.cases().find("c1").orElseThrow().stageSheetId()).isNull();
+      // The migrated schema takes the next version, and a case records it.
+      assertThat(shop.library().useForCase("c1", "Output driver", "{}", "Ann").version())
+          .isEqualTo(3);
+      assertThat(shop.cases().find("c1").orElseThrow().stageSheetId()).isNotNull();
+    }
+    // Numbering the sheets already there is no change for the benches to pull.
+    try (Connection c = server.adminConnection(TestServer.DATABASE);
+        Statement st = c.createStatement();
+        ResultSet rs =
+            st.executeQuery(
+                "SELECT max(change_no) FROM "
+                    + s
+                    + ".stage_sheet WHERE id IN ('s1', 's2', 's3')")) {
+      assertThat(rs.next()).isTrue();
+      assertThat(rs.getLong(1)).isEqualTo(changeBefore);
+    }
+  }
+
+  private long maxChange(String schema, String table) throws SQLException {
+    try (Connection c = server.adminConnection(TestServer.DATABASE);
+        Statement st = c.createStatement();
+        ResultSet rs = st.executeQuery("SELECT max(change_no) FROM " + schema + "." + table)) {
+      assertThat(rs.next()).isTrue();
+      return rs.getLong(1);
+    }
+  }
+
   private long changeNumber(String schema) throws SQLException {
     try (Connection c = server.adminConnection(TestServer.DATABASE);
         Statement st = c.createStatement();

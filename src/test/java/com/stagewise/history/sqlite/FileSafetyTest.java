@@ -14,6 +14,7 @@ import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StageSheetRecord;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import java.io.InputStream;
@@ -278,8 +279,42 @@ class FileSafetyTest {
               .noneMatch(StoredReading::struck)
               .allMatch(r -> r.updatedAt().equals(r.takenAt()));
         }
-        // And the migrated file takes new writes.
-        store.cases().open(unit.id(), "new after migration");
+        // Schema 6: the sheets stored before are the versions of their stage in the order they
+        // were stored, saved when they were stored, by nobody named; each case names none.
+        List<StageSheetRecord> versions =
+            store.library().versions(unit.boardModelId(), FixtureMaker.SHEET_TITLE);
+        List<String> texts = new java.util.ArrayList<>(FixtureMaker.SHEETS);
+        if (version < 5) {
+          texts = texts.subList(0, 1);
+        }
+        java.util.Collections.reverse(texts);
+        assertThat(versions)
+            .extracting(StageSheetRecord::sheetJson)
+            .containsExactlyElementsOf(texts);
+        assertThat(versions)
+            .extracting(StageSheetRecord::version)
+            .containsExactlyElementsOf(version < 5 ? List.of(1) : List.of(2, 1));
+        assertThat(versions)
+            .allMatch(v -> v.savedAt().equals(v.updatedAt()) && v.savedBy().isEmpty());
+        assertThat(history.cases()).allMatch(c -> c.repairCase().stageSheetId() == null);
+        // And the migrated file takes new writes, a new version of the stage among them.
+        RepairCase opened = store.cases().open(unit.id(), "new after migration");
+        StageSheetRecord next =
+            store.library().useForCase(opened.id(), FixtureMaker.SHEET_TITLE, "{}", "Ann");
+        assertThat(next.version()).isEqualTo(versions.size() + 1);
+      }
+      if (version >= 3) {
+        // Numbering the stored sheets is no change to send to the shop server: each is in the
+        // outbox once, as it was added.
+        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + copy);
+            PreparedStatement q =
+                c.prepareStatement(
+                    "SELECT max(version) FROM outbox WHERE kind = 'stage sheet'"
+                        + " AND id IN (SELECT id FROM stage_sheet WHERE saved_by = '')");
+            java.sql.ResultSet rs = q.executeQuery()) {
+          assertThat(rs.next()).isTrue();
+          assertThat(rs.getInt(1)).isEqualTo(1);
+        }
       }
       if (version >= 3) {
         // Filling in the new columns is no change to send to the shop server.

@@ -40,6 +40,15 @@ public final class FixtureMaker {
    */
   static final List<String> READINGS = List.of("U3.7 dc 13.4", "OUT ac 0.0021 at 1000 Hz");
 
+  /** The title of the fixture's stage sheets. */
+  static final String SHEET_TITLE = "Output driver";
+
+  /** The texts of the fixture's stage sheets, in the order they were saved. */
+  static final List<String> SHEETS =
+      List.of(
+          "{\"format\": \"stagewise-stage\", \"version\": 1}",
+          "{\"format\": \"stagewise-stage\", \"version\": 1, \"title\": \"Output driver\"}");
+
   private FixtureMaker() {}
 
   public static void main(String[] args) throws Exception {
@@ -55,11 +64,10 @@ public final class FixtureMaker {
   static void make(Path target, int version) throws SQLException {
     Clock clock = Clock.fixed(Instant.parse("2025-06-01T12:00:00Z"), ZoneOffset.UTC);
     String closedCaseId = null;
+    String modelId;
     try (HistoryStore store = SqliteHistory.open(target, clock, version)) {
       BoardModel model = store.units().boardModel("MX-8 main board", "Northfield Audio (invented)");
-      store
-          .library()
-          .add(model.id(), "Output driver", "{\"format\": \"stagewise-stage\", \"version\": 1}");
+      modelId = model.id();
       Unit unit = store.units().add("NF-8-0100", model.id(), "job 2025-117");
       RepairCase closed = store.cases().open(unit.id(), CLOSED_SYMPTOM);
       store.cases().addNote(closed.id(), NOTE);
@@ -86,6 +94,25 @@ public final class FixtureMaker {
       store.cases().close(closed.id(), Outcome.FIXED, List.of("U3B:dead"));
       store.cases().open(unit.id(), "Crackles when cold");
     }
+    // Stage sheets go in with the columns of version 1, which every version has. From version 5 on
+    // the model has two sheets of one title (a stage saved again after an edit), which version 6
+    // numbers as versions 1 and 2 of one library stage.
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + target);
+        PreparedStatement insert =
+            c.prepareStatement(
+                "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
+                    + " VALUES (?, ?, ?, ?, ?)")) {
+      List<String> sheets =
+          version >= 5 ? List.of(SHEETS.get(0), SHEETS.get(1)) : List.of(SHEETS.get(0));
+      for (int i = 0; i < sheets.size(); i++) {
+        insert.setString(1, HistoryStore.newId());
+        insert.setString(2, modelId);
+        insert.setString(3, SHEET_TITLE);
+        insert.setString(4, sheets.get(i));
+        insert.setLong(5, clock.millis() + i);
+        insert.executeUpdate();
+      }
+    }
     if (closedCaseId != null) {
       // The readings go in with the columns every version from 3 on has: the program's own writes
       // follow the newest schema, which an older file does not have.
@@ -93,7 +120,8 @@ public final class FixtureMaker {
           PreparedStatement insert =
               c.prepareStatement(
                   "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter,"
-                      + " taken_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+                      + " taken_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)");
+          java.sql.Statement changed = c.createStatement()) {
         Object[][] rows = {
           {"U3.7", "dc", 13.4, null, null, "6000-count meter, ±(0.5 % + 2 counts)"},
           {"OUT", "ac", 0.0021, 1000.0, 0.001, ""}
@@ -109,6 +137,17 @@ public final class FixtureMaker {
           insert.setString(8, (String) row[5]);
           insert.setLong(9, clock.millis());
           insert.executeUpdate();
+        }
+        if (version >= 5) {
+          // From version 5 on a reading was last changed when it was taken; the outbox trigger is
+          // set aside for it, as the version 5 script does.
+          changed.execute("DROP TRIGGER reading_outbox_update");
+          changed.execute("UPDATE reading SET updated_at = taken_at");
+          changed.execute(
+              "CREATE TRIGGER reading_outbox_update AFTER UPDATE ON reading BEGIN"
+                  + " INSERT OR REPLACE INTO outbox (kind, id, version) VALUES ('reading',"
+                  + " new.id, coalesce((SELECT version FROM outbox WHERE kind = 'reading' AND"
+                  + " id = new.id), 0) + 1); END");
         }
       }
     }

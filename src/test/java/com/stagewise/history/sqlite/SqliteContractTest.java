@@ -4,6 +4,7 @@ import com.stagewise.history.CasesContract;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.SearchContract;
 import com.stagewise.history.StageLibraryContract;
+import com.stagewise.history.StageVersionsContract;
 import com.stagewise.history.TransferContract;
 import com.stagewise.history.UnitsContract;
 import java.nio.file.Path;
@@ -47,6 +48,14 @@ class SqliteContractTest {
 
   @Nested
   class Library extends StageLibraryContract {
+    @Override
+    protected HistoryStore openStore(Clock clock) {
+      return fresh(clock);
+    }
+  }
+
+  @Nested
+  class Versions extends StageVersionsContract {
     @Override
     protected HistoryStore openStore(Clock clock) {
       return fresh(clock);

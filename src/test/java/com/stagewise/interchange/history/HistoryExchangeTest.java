@@ -206,9 +206,9 @@ class HistoryExchangeTest {
         Arguments.of("not an object", null, "[1, 2]", "expected a history bundle as a JSON object"),
         Arguments.of(
             "newer version",
-            edit(r -> r.put("version", 3)),
+            edit(r -> r.put("version", HistoryBundle.CURRENT_VERSION + 1)),
             null,
-            "version: bundle format version 3 is newer"),
+            "version: bundle format version " + (HistoryBundle.CURRENT_VERSION + 1) + " is newer"),
         Arguments.of(
             "wrong format", edit(r -> r.put("format", "stagewise-stage")), null, "format:"),
         Arguments.of("unknown key", edit(r -> r.put("extra", true)), null, "extra: unknown key"),
@@ -333,6 +333,21 @@ class HistoryExchangeTest {
             edit(r -> first(r, "notes").put("updatedAt", "2999-01-01T00:00:00Z")),
             null,
             "notes[0].updatedAt: the time 2999-01-01T00:00:00Z lies in the future"),
+        Arguments.of(
+            "stage version zero",
+            edit(r -> first(r, "stageSheets").put("version", 0)),
+            null,
+            "stageSheets[0].version: expected a version number, 1 or more, found 0"),
+        Arguments.of(
+            "stage version as text",
+            edit(r -> first(r, "stageSheets").put("version", "2")),
+            null,
+            "stageSheets[0].version: expected a version number, 1 or more (a whole number)"),
+        Arguments.of(
+            "case names a stage version that is not there",
+            edit(r -> first(r, "cases").put("stageSheetId", HistoryStore.newId())),
+            null,
+            "cases[0].stageSheetId: no stage sheet with id"),
         Arguments.of(
             "closed without outcome",
             edit(r -> first(r, "cases").put("status", "closed").remove("outcome")),
