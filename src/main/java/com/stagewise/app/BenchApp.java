@@ -95,6 +95,7 @@ public final class BenchApp {
               }
             });
     scene = new Scene(window.root(), WIDTH, HEIGHT);
+    bench.setFiles(new WindowFiles(scene::getWindow));
     window.addShortcuts(scene);
     scene
         .getAccelerators()

@@ -7,17 +7,12 @@ import com.stagewise.history.DatabaseLocation;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.sqlite.SqliteHistory;
 import com.stagewise.report.CaseReport;
-import com.stagewise.report.PdfReport;
+import com.stagewise.report.ReportFile;
 import java.io.IOException;
-import java.io.OutputStream;
-import java.io.UncheckedIOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.Clock;
-import java.util.UUID;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -137,58 +132,20 @@ final class ReportCommand implements Callable<Integer> {
     return target;
   }
 
-  /** Writes the report to a temporary file beside {@code target}, then moves it into place. */
+  /** Writes the report whole or not at all (see {@link ReportFile}). */
   private static int write(CaseReport report, Path target, boolean force) {
-    Path temporary;
     try {
-      // Files.createTempFile would make the report readable by its owner only (0600); a report
-      // is made to be printed and passed on, so it gets the user's normal permissions (umask).
-      temporary =
-          Files.createFile(
-              target.getParent().resolve(".stagewise-report-" + UUID.randomUUID() + ".tmp"));
+      return ReportFile.write(report, target, force);
+    } catch (FileAlreadyExistsException e) {
+      throw new InvalidInputException(
+          SOURCE,
+          "--out",
+          "'" + target + "' exists already; give --force to replace it, or choose another name");
     } catch (IOException e) {
       throw new InvalidInputException(
           SOURCE,
           "--out",
           "cannot write in the folder '" + target.getParent() + "': " + e.getMessage());
-    }
-    try {
-      int pages;
-      try (OutputStream stream = Files.newOutputStream(temporary)) {
-        pages = PdfReport.write(report, stream);
-      }
-      moveIntoPlace(temporary, target, force);
-      return pages;
-    } catch (IOException e) {
-      throw new UncheckedIOException("writing " + target, e);
-    } finally {
-      try {
-        Files.deleteIfExists(temporary);
-      } catch (IOException ignored) {
-        // Only a stray temporary file is left; the report itself is complete or absent.
-      }
-    }
-  }
-
-  private static void moveIntoPlace(Path temporary, Path target, boolean force) throws IOException {
-    if (!force) {
-      try {
-        // Without REPLACE_EXISTING the move fails rather than overwrite a file that appeared
-        // meanwhile.
-        Files.move(temporary, target);
-      } catch (FileAlreadyExistsException e) {
-        throw new InvalidInputException(
-            SOURCE,
-            "--out",
-            "'" + target + "' exists already; give --force to replace it, or choose another name");
-      }
-      return;
-    }
-    try {
-      Files.move(
-          temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-    } catch (AtomicMoveNotSupportedException e) {
-      Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING);
     }
   }
 }

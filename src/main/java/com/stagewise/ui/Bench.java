@@ -37,6 +37,7 @@ public final class Bench {
   private final java.util.Set<String> cautionedCases = new java.util.HashSet<>();
   private final BoardFlags boardFlags;
   private final CaseResume resume;
+  private FilePicker files = FilePicker.NONE;
 
   private final ObjectProperty<Step> step = new SimpleObjectProperty<>(Step.UNIT);
   private final ObjectProperty<Unit> unit = new SimpleObjectProperty<>();
@@ -84,6 +85,16 @@ public final class Bench {
   /** Returns the case workflow: every change to a unit or a case goes through it. */
   public Casework casework() {
     return casework;
+  }
+
+  /** Returns where the technician chooses files to save. */
+  public FilePicker files() {
+    return files;
+  }
+
+  /** Sets where the technician chooses files to save (the app's chooser; a fixed one in tests). */
+  public void setFiles(FilePicker picker) {
+    this.files = Objects.requireNonNull(picker, "picker");
   }
 
   public Tasks tasks() {

@@ -193,8 +193,13 @@ public final class CloseOutView {
     leave.setOnAction(e -> model.leaveOpen());
     HBox buttons = new HBox(10, close, leave);
     buttons.setAlignment(Pos.CENTER_LEFT);
+    CheckBox report = new CheckBox("Save the repair report (PDF) when the case is closed");
+    report.setId("close-save-report");
+    report.setWrapText(true);
+    report.selectedProperty().bindBidirectional(model.saveReportProperty());
     box.getChildren()
-        .addAll(faultsTitle, faultsBox, outcomeTitle, outcomeRow, notesTitle, notes, buttons);
+        .addAll(
+            faultsTitle, faultsBox, outcomeTitle, outcomeRow, notesTitle, notes, report, buttons);
     return box;
   }
 

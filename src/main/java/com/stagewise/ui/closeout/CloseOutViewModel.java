@@ -11,13 +11,16 @@ import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.ui.Bench;
+import com.stagewise.ui.ReportSaving;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Consumer;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
@@ -43,6 +46,7 @@ public final class CloseOutViewModel {
   private final ObjectProperty<Outcome> outcome = new SimpleObjectProperty<>();
   private final StringProperty notes = new SimpleStringProperty("");
   private Consumer<String> afterClose = caseId -> {};
+  private final BooleanProperty saveReport = new SimpleBooleanProperty(false);
 
   /** Creates the close-out's model on a bench. */
   public CloseOutViewModel(Bench bench) {
@@ -91,6 +95,11 @@ public final class CloseOutViewModel {
 
   public StringProperty notesProperty() {
     return notes;
+  }
+
+  /** Whether the repair report (PDF) is saved as soon as the case is closed. */
+  public BooleanProperty saveReportProperty() {
+    return saveReport;
   }
 
   /** Sets what happens after a case is closed (the app shows it in the history). */
@@ -274,6 +283,7 @@ public final class CloseOutViewModel {
             ? List.copyOf(confirmedFaults)
             : List.of();
     String note = text(notes);
+    String serial = bench.unitProperty().get() == null ? "" : bench.unitProperty().get().serial();
     bench
         .tasks()
         .run(
@@ -286,6 +296,19 @@ public final class CloseOutViewModel {
             closed -> {
               bench.clearCase();
               afterClose.accept(closed.id());
+              if (saveReport.get()) {
+                ReportSaving.save(
+                    bench,
+                    closed.id(),
+                    serial,
+                    saved ->
+                        bench
+                            .problems()
+                            .show(
+                                "Report saved",
+                                saved,
+                                "Print it from there, or pass it on with the unit."));
+              }
             },
             e -> bench.problems().failed("Could not close the case", e, Words.CHECK_DATABASE));
   }

@@ -170,7 +170,16 @@ public final class HistoryView {
         new Label(view.status() + (view.faults().isEmpty() ? "" : " — found: " + view.faults()));
     status.setId("history-case-status");
     status.setWrapText(true);
-    caseBox.getChildren().addAll(title, symptom, status);
+    Button save = new Button("Save report (PDF)");
+    save.setId("history-save-report");
+    save.setMinHeight(48);
+    save.setOnAction(e -> model.saveReport());
+    Label saved = new Label();
+    saved.setId("history-report-note");
+    saved.getStyleClass().add("hint");
+    saved.setWrapText(true);
+    saved.textProperty().bind(model.reportNoteProperty());
+    caseBox.getChildren().addAll(title, symptom, status, new HBox(8, save), saved);
     section("Readings", view.readings(), "No readings.");
     section("Suspects at the time", view.suspects(), "No suspect list was computed.");
     section("What was done", view.actions(), "Nothing recorded.");

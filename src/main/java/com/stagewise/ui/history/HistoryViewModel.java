@@ -14,6 +14,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.ui.Bench;
+import com.stagewise.ui.ReportSaving;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,6 +38,8 @@ public final class HistoryViewModel {
   private final StringProperty hitsNote = new SimpleStringProperty("");
   private final ObjectProperty<CaseView> shown = new SimpleObjectProperty<>();
   private final ObservableList<String> timeline = FXCollections.observableArrayList();
+  private final StringProperty reportNote = new SimpleStringProperty("");
+  private String shownSerial = "";
 
   /** Creates the history screen's model on a bench. */
   public HistoryViewModel(Bench bench) {
@@ -111,6 +114,19 @@ public final class HistoryViewModel {
     return timeline;
   }
 
+  /** Says where the shown case's report was saved, once it is. */
+  public StringProperty reportNoteProperty() {
+    return reportNote;
+  }
+
+  /** Asks where to save the shown case's repair report (PDF) and saves it there. */
+  public void saveReport() {
+    CaseView view = shown.get();
+    if (view != null) {
+      ReportSaving.save(bench, view.caseId(), shownSerial, reportNote::set);
+    }
+  }
+
   /** Searches the cases; an empty search lists the newest cases. */
   public void search() {
     String words = query.get() == null ? "" : query.get().strip();
@@ -178,6 +194,8 @@ public final class HistoryViewModel {
               return new Loaded(file, unit);
             },
             loaded -> {
+              shownSerial = loaded.unit().unit().serial();
+              reportNote.set("");
               shown.set(view(loaded.file(), loaded.unit()));
               timeline.setAll(timeline(loaded.unit()));
             },
