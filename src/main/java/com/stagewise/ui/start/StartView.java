@@ -1,6 +1,7 @@
 package com.stagewise.ui.start;
 
 import com.stagewise.ui.widget.Keypad;
+import javafx.animation.PauseTransition;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
@@ -15,6 +16,7 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import javafx.util.Duration;
 
 /** The unit screen: the serial search with its keypad, the unit's history and the case buttons. */
 public final class StartView {
@@ -85,6 +87,11 @@ public final class StartView {
     serialField.setPromptText("Serial, e.g. AM-2041");
     serialField.textProperty().bindBidirectional(model.serialProperty());
     serialField.setOnAction(e -> model.search());
+    // Live search: the list follows the typing (on-screen keypad or keyboard) after a short pause,
+    // so a burst of keys runs one query.
+    PauseTransition typing = new PauseTransition(Duration.millis(250));
+    typing.setOnFinished(e -> model.searchAsTyped());
+    model.serialProperty().addListener((o, was, now) -> typing.playFromStart());
     HBox.setHgrow(serialField, Priority.ALWAYS);
     Button search = new Button("Search");
     search.setId("serial-search");

@@ -150,9 +150,22 @@ public final class StartViewModel {
 
   /**
    * Lists the units whose serial contains what is typed (letter case, blanks and dashes ignored);
-   * an empty search lists the units with open cases first, then the rest.
+   * an empty search lists the units with open cases first, then the rest. A single match is put on
+   * the bench.
    */
   public void search() {
+    search(true);
+  }
+
+  /**
+   * Lists the matches while the serial is being typed, without putting any unit on the bench: the
+   * technician picks from the list, or presses Search.
+   */
+  public void searchAsTyped() {
+    search(false);
+  }
+
+  private void search(boolean takeSingleMatch) {
     String wanted = normal(serial.get());
     bench
         .tasks()
@@ -177,7 +190,7 @@ public final class StartViewModel {
               } else {
                 matchesNote.set(rows.size() == 1 ? "1 unit found." : rows.size() + " units found.");
               }
-              if (rows.size() == 1) {
+              if (rows.size() == 1 && takeSingleMatch) {
                 select(rows.get(0));
               }
             },

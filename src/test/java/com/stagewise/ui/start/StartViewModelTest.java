@@ -47,6 +47,22 @@ class StartViewModelTest {
   }
 
   @Test
+  void searchAsTyped_listsTheMatchesWithoutPuttingTheOneUnitOnTheBench() {
+    model.serialProperty().set("ta-1");
+
+    model.searchAsTyped();
+
+    assertThat(model.matches()).extracting(r -> r.unit().serial()).containsExactly("TA-1001");
+    assertThat(model.matchesNoteProperty().get()).isEqualTo("1 unit found.");
+    assertThat(t.bench.unitProperty().get()).isNull();
+
+    model.serialProperty().set("ta");
+    model.searchAsTyped();
+
+    assertThat(model.matches()).hasSize(2);
+  }
+
+  @Test
   void search_empty_listsEveryUnit() {
     model.search();
     assertThat(model.matches()).hasSize(2);
