@@ -13,6 +13,8 @@ import java.util.Properties;
 final class Settings {
   private static final String CAUTION = "caution.acknowledged";
   private static final String SHOP_SERVER = "shop.server";
+  private static final String LARGE_TEXT = "view.large-text";
+  private static final String HIGH_CONTRAST = "view.high-contrast";
 
   private final Path file;
   private final Properties props = new Properties();
@@ -47,6 +49,28 @@ final class Settings {
   /** Records that the safety caution was acknowledged. */
   synchronized void acknowledgeCaution() {
     props.setProperty(CAUTION, "true");
+    save();
+  }
+
+  /** Returns whether the screens show larger text. */
+  synchronized boolean largeText() {
+    return Boolean.parseBoolean(props.getProperty(LARGE_TEXT, "false"));
+  }
+
+  /** Returns whether the screens show high contrast. */
+  synchronized boolean highContrast() {
+    return Boolean.parseBoolean(props.getProperty(HIGH_CONTRAST, "false"));
+  }
+
+  /** Keeps whether the screens show larger text, for the next start. */
+  synchronized void setLargeText(boolean on) {
+    props.setProperty(LARGE_TEXT, Boolean.toString(on));
+    save();
+  }
+
+  /** Keeps whether the screens show high contrast, for the next start. */
+  synchronized void setHighContrast(boolean on) {
+    props.setProperty(HIGH_CONTRAST, Boolean.toString(on));
     save();
   }
 
