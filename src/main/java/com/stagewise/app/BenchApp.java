@@ -51,10 +51,10 @@ public final class BenchApp {
         new Bench(
             workshop.store(), tasks, overlays, overlays, workshop.boardFlags(), workshop.resume());
     window = new BenchWindow(bench, overlays, tasks.pendingProperty(), tasks.currentProperty());
-    window.largeTextProperty().set(workshop.settings().largeText());
-    window.highContrastProperty().set(workshop.settings().highContrast());
-    window.largeTextProperty().addListener((o, was, now) -> workshop.settings().setLargeText(now));
-    window
+    bench.largeTextProperty().set(workshop.settings().largeText());
+    bench.highContrastProperty().set(workshop.settings().highContrast());
+    bench.largeTextProperty().addListener((o, was, now) -> workshop.settings().setLargeText(now));
+    bench
         .highContrastProperty()
         .addListener((o, was, now) -> workshop.settings().setHighContrast(now));
     shopSync = ShopSync.start(workshop.store(), workshop.settings());

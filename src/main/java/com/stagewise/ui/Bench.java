@@ -38,6 +38,8 @@ public final class Bench {
   private final BoardFlags boardFlags;
   private final CaseResume resume;
   private FilePicker files = FilePicker.NONE;
+  private final BooleanProperty largeText = new SimpleBooleanProperty(false);
+  private final BooleanProperty highContrast = new SimpleBooleanProperty(false);
 
   private final ObjectProperty<Step> step = new SimpleObjectProperty<>(Step.UNIT);
   private final ObjectProperty<Unit> unit = new SimpleObjectProperty<>();
@@ -85,6 +87,16 @@ public final class Bench {
   /** Returns the case workflow: every change to a unit or a case goes through it. */
   public Casework casework() {
     return casework;
+  }
+
+  /** Whether the screens show larger text (a setting the app keeps between starts). */
+  public BooleanProperty largeTextProperty() {
+    return largeText;
+  }
+
+  /** Whether the screens show high contrast (a setting the app keeps between starts). */
+  public BooleanProperty highContrastProperty() {
+    return highContrast;
   }
 
   /** Returns where the technician chooses files to save. */

@@ -18,6 +18,7 @@ import javafx.scene.control.TextArea;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
@@ -57,7 +58,9 @@ public final class CloseOutView {
     Label title = new Label("What was done");
     title.getStyleClass().add("section-title");
     ToggleGroup kinds = new ToggleGroup();
-    HBox kindRow = new HBox(6);
+    // Rows of choices wrap in a narrow window rather than cutting their words.
+    FlowPane kindRow = new FlowPane(6, 6);
+    kindRow.setPrefWrapLength(300);
     for (ActionKind kind : ActionKind.values()) {
       ToggleButton button = new ToggleButton(Words.actionKind(kind));
       button.setId("action-" + kind.word());
@@ -150,7 +153,9 @@ public final class CloseOutView {
     Label outcomeTitle = new Label("Outcome");
     outcomeTitle.getStyleClass().add("section-title");
     ToggleGroup outcomes = new ToggleGroup();
-    HBox outcomeRow = new HBox(6);
+    // Wraps onto a second line in a narrow window rather than cutting "Returned unrepaired".
+    FlowPane outcomeRow = new FlowPane(6, 6);
+    outcomeRow.setPrefWrapLength(300);
     for (Outcome o : Outcome.values()) {
       ToggleButton button =
           new ToggleButton(

@@ -7,7 +7,6 @@ import java.util.Map;
 import java.util.function.Supplier;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.BooleanProperty;
-import javafx.beans.property.SimpleBooleanProperty;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.Parent;
@@ -40,8 +39,6 @@ public final class BenchWindow {
   private final Map<Step, Supplier<Node>> makers = new EnumMap<>(Step.class);
   private final Map<Step, Node> screens = new EnumMap<>(Step.class);
   private final Map<Step, ToggleButton> stepButtons = new EnumMap<>(Step.class);
-  private final BooleanProperty largeText = new SimpleBooleanProperty(false);
-  private final BooleanProperty highContrast = new SimpleBooleanProperty(false);
   private final HBox statusBar;
 
   /**
@@ -67,8 +64,8 @@ public final class BenchWindow {
     root.getStylesheets().add(BenchWindow.class.getResource("bench.css").toExternalForm());
     root.getStylesheets().add(BenchWindow.class.getResource("large-text.css").toExternalForm());
     root.getStylesheets().add(BenchWindow.class.getResource("high-contrast.css").toExternalForm());
-    showAs(largeText, "large-text");
-    showAs(highContrast, "high-contrast");
+    showAs(bench.largeTextProperty(), "large-text");
+    showAs(bench.highContrastProperty(), "high-contrast");
     bench.stepProperty().addListener((o, was, now) -> show(now));
   }
 
@@ -263,16 +260,6 @@ public final class BenchWindow {
     statusBar.getChildren().add(statusBar.getChildren().size() - 1, server);
   }
 
-  /** Whether the screens show larger text (a setting the app keeps). */
-  public BooleanProperty largeTextProperty() {
-    return largeText;
-  }
-
-  /** Whether the screens show high contrast (a setting the app keeps). */
-  public BooleanProperty highContrastProperty() {
-    return highContrast;
-  }
-
   private void showAs(BooleanProperty setting, String styleClass) {
     setting.addListener(
         (o, was, now) -> {
@@ -281,13 +268,6 @@ public final class BenchWindow {
             root.getStyleClass().add(styleClass);
           }
         });
-  }
-
-  private ToggleButton viewToggle(String text, String id, BooleanProperty setting) {
-    ToggleButton toggle = new ToggleButton(text);
-    toggle.setId(id);
-    toggle.selectedProperty().bindBidirectional(setting);
-    return toggle;
   }
 
   private HBox statusBar(
@@ -311,13 +291,7 @@ public final class BenchWindow {
     HBox.setHgrow(spring, Priority.ALWAYS);
     Label keys = new Label("Keys: Ctrl+1 … Ctrl+6 switch screens, Enter confirms");
     keys.getStyleClass().add("hint");
-    HBox view =
-        new HBox(
-            6,
-            viewToggle("Larger text", "view-large-text", largeText),
-            viewToggle("High contrast", "view-high-contrast", highContrast));
-    view.setAlignment(Pos.CENTER_RIGHT);
-    bar.getChildren().addAll(progress, text, spring, keys, view);
+    bar.getChildren().addAll(progress, text, spring, keys);
     return bar;
   }
 }

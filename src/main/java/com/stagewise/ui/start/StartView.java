@@ -12,6 +12,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.StackPane;
@@ -106,6 +107,12 @@ public final class StartView {
     list.setCellFactory(
         v ->
             new ListCell<>() {
+              {
+                // No wider than the list: a long board name wraps instead of scrolling sideways.
+                setPrefWidth(0);
+                setWrapText(true);
+              }
+
               @Override
               protected void updateItem(StartViewModel.UnitRow row, boolean empty) {
                 super.updateItem(row, empty);
@@ -126,6 +133,21 @@ public final class StartView {
     note.textProperty().bind(model.matchesNoteProperty());
     box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, list, note);
     return box;
+  }
+
+  /** The screens' look for a dim or a bright bench: larger text, high contrast (kept). */
+  private HBox viewRow() {
+    ToggleButton larger = new ToggleButton("Larger text");
+    larger.setId("view-large-text");
+    larger.selectedProperty().bindBidirectional(model.largeTextProperty());
+    ToggleButton contrast = new ToggleButton("High contrast");
+    contrast.setId("view-high-contrast");
+    contrast.selectedProperty().bindBidirectional(model.highContrastProperty());
+    Label screen = new Label("Screen:");
+    screen.getStyleClass().add("hint");
+    HBox row = new HBox(8, screen, larger, contrast);
+    row.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+    return row;
   }
 
   private VBox glancePanel() {
@@ -230,7 +252,8 @@ public final class StartView {
     HBox openRow = new HBox(8, symptom, open);
     openRow.setAlignment(Pos.CENTER_LEFT);
     keypad.follow(symptom);
-    box.getChildren().addAll(title, owner, earlier, cases, resume, symptomTitle, openRow);
+    box.getChildren()
+        .addAll(title, owner, earlier, cases, resume, symptomTitle, openRow, viewRow());
     return box;
   }
 

@@ -38,6 +38,12 @@ public final class StartViewModel {
   /** The most units listed for one search. */
   static final int MAX_MATCHES = 30;
 
+  /** The serial (normalised) of the last search, explicit or as typed. */
+  private String lastWanted;
+
+  /** Whether the list of matches is being replaced (its selection then means nothing). */
+  private boolean refreshing;
+
   private final Bench bench;
   private final StringProperty serial = new SimpleStringProperty("");
   private final ObservableList<UnitRow> matches = FXCollections.observableArrayList();
@@ -50,6 +56,16 @@ public final class StartViewModel {
   private final StringProperty newBoardModel = new SimpleStringProperty("");
   private final StringProperty newOwner = new SimpleStringProperty("");
   private final BooleanProperty newMains = new SimpleBooleanProperty(false);
+
+  /** Whether the screens show larger text (kept between starts). */
+  public BooleanProperty largeTextProperty() {
+    return bench.largeTextProperty();
+  }
+
+  /** Whether the screens show high contrast (kept between starts). */
+  public BooleanProperty highContrastProperty() {
+    return bench.highContrastProperty();
+  }
 
   /** Creates the unit screen's model on a bench. */
   public StartViewModel(Bench bench) {
@@ -162,18 +178,27 @@ public final class StartViewModel {
    * technician picks from the list, or presses Search.
    */
   public void searchAsTyped() {
-    search(false);
+    if (!normal(serial.get()).equals(lastWanted)) {
+      search(false);
+    }
   }
 
   private void search(boolean takeSingleMatch) {
     String wanted = normal(serial.get());
+    lastWanted = wanted;
     bench
         .tasks()
         .run(
             "Looking for the unit",
             () -> findUnits(bench.store(), wanted),
             rows -> {
-              matches.setAll(rows.size() > MAX_MATCHES ? rows.subList(0, MAX_MATCHES) : rows);
+              // A list refreshed under the technician's finger selects nothing by itself.
+              refreshing = true;
+              try {
+                matches.setAll(rows.size() > MAX_MATCHES ? rows.subList(0, MAX_MATCHES) : rows);
+              } finally {
+                refreshing = false;
+              }
               if (rows.isEmpty()) {
                 matchesNote.set(
                     wanted.isEmpty()
@@ -212,6 +237,9 @@ public final class StartViewModel {
 
   /** Shows one unit's history at a glance and puts it on the bench. */
   public void select(UnitRow row) {
+    if (refreshing) {
+      return;
+    }
     bench
         .tasks()
         .run(

@@ -27,6 +27,9 @@ import javafx.scene.layout.VBox;
  * The suspects screen: the ranked list, and the chosen suspect's voltages beside the measured ones.
  */
 public final class SuspectsView {
+  /** Width in pixels of a suspect's probability bar at 100 %. */
+  private static final double BAR = 140;
+
   private final SuspectsViewModel model;
   private final HBox root = new HBox(12);
   private final GridPane table = new GridPane();
@@ -248,14 +251,17 @@ public final class SuspectsView {
       name.getStyleClass().add("suspect-name");
       Region bar = new Region();
       bar.getStyleClass().add("suspect-bar");
-      bar.setPrefWidth(Math.max(2, 200 * row.suspect().probability()));
+      bar.setPrefWidth(Math.max(2, BAR * row.suspect().probability()));
       bar.setMinWidth(Region.USE_PREF_SIZE);
       Region track = new Region();
       track.getStyleClass().add("suspect-bar-track");
-      track.setPrefWidth(200 * (1 - row.suspect().probability()));
+      track.setPrefWidth(BAR * (1 - row.suspect().probability()));
       track.setMinWidth(Region.USE_PREF_SIZE);
       Label pct = new Label(Words.percent(row.suspect().probability()));
       pct.getStyleClass().add("strong");
+      // The figure stays on one line ("96 %", never "96" over "%"); the bar and the name give way.
+      pct.setWrapText(false);
+      pct.setMinWidth(Region.USE_PREF_SIZE);
       Region spring = new Region();
       HBox.setHgrow(spring, Priority.ALWAYS);
       HBox head = new HBox(8, name, spring, new HBox(0, bar, track), pct);
