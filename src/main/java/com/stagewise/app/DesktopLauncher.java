@@ -27,9 +27,29 @@ public final class DesktopLauncher extends Application {
   private BenchApp app;
   private Workshop workshop;
 
+  /** JavaFX's own log; held so that its level survives garbage collection. */
+  private static final java.util.logging.Logger FX_LOG =
+      java.util.logging.Logger.getLogger("javafx");
+
   static void open(String[] args) {
     mark("main");
+    quietOnTheClassPath();
     Application.launch(DesktopLauncher.class, args);
+  }
+
+  /**
+   * Started from the jar ({@code java -jar stagewise.jar}), JavaFX runs from the class path rather
+   * than as named modules. Everything the app uses works so, but JavaFX then logs "Unsupported
+   * JavaFX configuration" at start, which would only alarm a technician; its warnings are left out
+   * in that case (errors are still logged). The app image (jpackage) loads JavaFX as modules and
+   * keeps every message.
+   */
+  static boolean quietOnTheClassPath() {
+    if (Application.class.getModule().isNamed()) {
+      return false;
+    }
+    FX_LOG.setLevel(java.util.logging.Level.SEVERE);
+    return true;
   }
 
   private double startWidth = BenchApp.WIDTH;
