@@ -323,7 +323,10 @@ final class OhmsChecks {
 
   private String why(String a, String b, List<Diagnoser.Scored> top, OhmsPrediction[] predicted) {
     StringBuilder text = new StringBuilder("Power off: unplug the unit, discharge its capacitors");
-    text.append(" and wait, then read ohms from ").append(a).append(" to ").append(b);
+    text.append(" and wait, then read ohms from ")
+        .append(pointWords(a))
+        .append(" to ")
+        .append(pointWords(b));
     String across = across(a, b);
     if (!across.isEmpty()) {
       text.append(" (across ").append(across).append(")");
@@ -339,9 +342,11 @@ final class OhmsChecks {
       }
       shown.add(p);
       Fault fault = top.get(h).hypothesis.fault;
-      String who = fault.kind() == FaultKind.HEALTHY ? "healthy" : fault.id();
       String reads = text(p);
-      parts.add(fault.kind() == FaultKind.HEALTHY ? reads + " healthy" : who + " reads " + reads);
+      parts.add(
+          fault.kind() == FaultKind.HEALTHY
+              ? reads + " when healthy"
+              : reads + " " + ifFault(fault, top.get(h).best.value()));
     }
     text.append(String.join("; ", parts));
     for (int h = 0; h < predicted.length; h++) {
@@ -358,6 +363,62 @@ final class OhmsChecks {
       }
     }
     return text.toString();
+  }
+
+  /** Returns a point in words: "U1 pin 2", "net SUM", "R14 lead 1", "D1 anode", "RV1 wiper". */
+  private String pointWords(String point) {
+    if (healthy.isLead(point)) {
+      int dot = point.lastIndexOf('.');
+      String lead = point.substring(dot + 1);
+      String word =
+          switch (lead) {
+            case "a" -> "anode";
+            case "k" -> "cathode";
+            case "w" -> "wiper";
+            default -> "lead " + lead;
+          };
+      return point.substring(0, dot) + " " + word;
+    }
+    String words = Wording.point(point);
+    return words.equals(point) ? "net " + point : words;
+  }
+
+  /**
+   * Returns the condition under which a suspect gives its reading, in words: "if R15 is open", "if
+   * R14 is shorted", "if R7 has drifted to about 180 kΩ", "if U1 pin 3 is lifted"; never a fault id
+   * (those stay in files and {@code --json}).
+   */
+  String ifFault(Fault fault, double value) {
+    String s = fault.subject();
+    boolean known = Double.isFinite(value);
+    String unit =
+        stage
+            .part(s)
+            .map(p -> p.kind() == PartKind.CAPACITOR ? "F" : p.kind() == PartKind.ZENER ? "V" : "Ω")
+            .orElse("Ω");
+    return switch (fault.kind()) {
+      case HEALTHY -> "when healthy";
+      case OPEN -> "if " + s + " is open";
+      case SHORT -> "if " + s + " is shorted";
+      case HIGH, LOW ->
+          known
+              ? "if " + s + " has drifted to about " + Units.format(value, unit)
+              : "if " + s + " has drifted " + (fault.kind() == FaultKind.HIGH ? "high" : "low");
+      case LEAKY ->
+          "if "
+              + s
+              + " is leaky"
+              + (known ? " (about " + Units.format(value, "Ω") + " across it)" : "");
+      case LIFTED -> "if " + s + " pin " + fault.pin() + " is lifted";
+      case BRIDGE ->
+          "with a solder bridge between " + s + " pins " + fault.pin() + " and " + fault.otherPin();
+      case WIPER_OPEN -> "if the wiper of " + s + " is open";
+      case MISSET -> "if " + s + " is set wrong";
+      default -> {
+        String words = Wording.fault(fault.id());
+        yield "with " + (words.startsWith("Rail ") ? "r" + words.substring(1) : words);
+      }
+    };
   }
 
   private static boolean similar(OhmsPrediction x, OhmsPrediction y) {

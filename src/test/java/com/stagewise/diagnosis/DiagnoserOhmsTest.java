@@ -151,4 +151,16 @@ class DiagnoserOhmsTest {
         .isInstanceOf(InvalidInputException.class)
         .hasMessageContaining("X9");
   }
+
+  @Test
+  void ohmsProbeWhy_speaksInWords_neverFaultIds() {
+    // Fault ids stay in files and --json (DESIGN.md); a why says "if R15 is open".
+    Diagnosis d = Diagnoser.of(STAGE).diagnose(VOLTS);
+    ProbeAdvice probe = d.nextProbes().get(0);
+    assertThat(probe.kind()).isEqualTo(Reading.Kind.OHMS);
+    assertThat(probe.why())
+        .containsAnyOf("if R15 is open", "if R14 is shorted")
+        .doesNotContain("R15:open", "R14:short", ":lifted", ":stuck");
+    assertThat(probe.why()).doesNotContainPattern("[A-Z]+\\d*[A-Z]?:[a-z-]+");
+  }
 }

@@ -15,10 +15,11 @@ import javafx.scene.text.Font;
 import javafx.scene.text.Text;
 
 /**
- * A compact horizontal chart of volts at one test point: the healthy band, a large marker for the
- * measured value and small markers where the top suspects would put the reading. Values outside the
- * band stretch the axis; a band of zero width shows as a thin bar; a missing (NaN) reading shows
- * "no reading".
+ * A compact horizontal chart of volts at one test point, or of ohms between two points (power off):
+ * the healthy band, a large marker for the measured value and small markers where the top suspects
+ * would put the reading. Values outside the band stretch the axis; a band of zero width shows as a
+ * thin bar; a missing (NaN) reading shows "no reading". Ohms go on a logarithmic axis with a zone
+ * for OL (+∞, the meter's over-range) at its right end.
  */
 public final class BandChart extends Region {
   private static final double SIDE = 22;
@@ -26,14 +27,21 @@ public final class BandChart extends Region {
   private static final double BAND_HALF = 11;
   private static final double ROW = 17;
 
+  /** Test leads and their contact, ohms: a few tenths unless nulled (common practice). */
+  private static final double LEADS = 0.5;
+
   private String testPoint = "";
   private double healthyLow = Double.NaN;
   private double healthyHigh = Double.NaN;
   private double measured = Double.NaN;
   private List<Marker> markers = List.of();
   private int labelRowCount = 1;
+  private boolean ohms;
 
-  /** Where a suspect would put the reading: its label (e.g. "R2 open") and the volts. */
+  /**
+   * Where a suspect would put the reading: its label (e.g. "R2 open") and the volts (or ohms, +∞
+   * for OL).
+   */
   public record Marker(String label, double volts) {
     /** Checks the label; the volts may be any number (a non-finite one is not drawn). */
     public Marker {
@@ -54,6 +62,32 @@ public final class BandChart extends Region {
    * the suspects' markers.
    */
   public void show(
+      String testPoint,
+      double healthyLow,
+      double healthyHigh,
+      double measured,
+      List<Marker> markers) {
+    ohms = false;
+    fill(testPoint, healthyLow, healthyHigh, measured, markers);
+  }
+
+  /**
+   * Shows the chart for an ohms reading between two points on a logarithmic axis: the healthy range
+   * in ohms (both +∞ when a healthy stage reads OL there), the reading (+∞ for OL, NaN for none)
+   * and the suspects' markers (+∞ for OL).
+   */
+  public void showOhms(
+      String pair, double healthyLow, double healthyHigh, double measured, List<Marker> markers) {
+    ohms = true;
+    fill(pair, healthyLow, healthyHigh, measured, markers);
+  }
+
+  /** Returns whether the chart shows ohms (on its logarithmic axis). */
+  public boolean showsOhms() {
+    return ohms;
+  }
+
+  private void fill(
       String testPoint,
       double healthyLow,
       double healthyHigh,
@@ -93,26 +127,33 @@ public final class BandChart extends Region {
       return;
     }
     double length = width - 2 * SIDE;
-    BandScale scale =
-        BandScale.fit(
-            healthyLow, healthyHigh, measured, markers.stream().map(Marker::volts).toList());
+    List<Double> marks = markers.stream().map(Marker::volts).toList();
+    ChartAxis scale =
+        ohms
+            ? OhmsScale.fit(healthyLow, healthyHigh, measured, marks)
+            : BandScale.fit(healthyLow, healthyHigh, measured, marks);
     Rectangle paper = new Rectangle(width, computePrefHeight(width), Palette.PAPER);
     getChildren().add(paper);
 
     Text title = text(testPoint, Palette.bold(18), Palette.INK);
     title.setX(SIDE);
     title.setY(12);
-    boolean haveBand = Double.isFinite(healthyLow) && Double.isFinite(healthyHigh);
+    boolean haveBand =
+        ohms
+            ? !Double.isNaN(healthyLow) && !Double.isNaN(healthyHigh)
+            : Double.isFinite(healthyLow) && Double.isFinite(healthyHigh);
     Text range =
         text(
-            haveBand
-                ? "healthy " + Engineering.band(healthyLow, healthyHigh)
-                : "healthy band unknown",
+            haveBand ? "healthy " + bandText() : "healthy band unknown",
             Palette.font(15),
             Palette.BAND_EDGE.darker());
     range.setX(width - SIDE - range.getLayoutBounds().getWidth());
     range.setY(12);
-    getChildren().addAll(title, range);
+    getChildren().add(range);
+    // The card's own line names the point: the chart's title gives way rather than overlap.
+    if (title.getLayoutBounds().getWidth() + 16 <= range.getX() - SIDE) {
+      getChildren().add(title);
+    }
 
     Line axis = new Line(SIDE, AXIS_Y, SIDE + length, AXIS_Y);
     axis.setStroke(Palette.SOFT_INK);
@@ -133,14 +174,14 @@ public final class BandChart extends Region {
 
     drawMarkers(scale, length);
     double tickBaseline = AXIS_Y + BAND_HALF + 12 + labelRowCount * ROW + 10;
-    for (double tick : scale.ticks(6)) {
+    for (double tick : scale.ticks(ohms ? (int) Math.max(3, length / 70) : 6)) {
       double x = SIDE + scale.position(tick, length);
       Line mark = new Line(x, AXIS_Y - 4, x, AXIS_Y + 4);
       mark.setStroke(Palette.SOFT_INK);
       getChildren().add(mark);
       // Tick values go below the suspects' labels, when the chart is tall enough for them.
       if (getHeight() <= 0 || tickBaseline + 6 <= getHeight()) {
-        Text label = text(VoltText.tick(tick), Palette.font(12), Palette.SOFT_INK);
+        Text label = text(scale.tickText(tick), Palette.font(12), Palette.SOFT_INK);
         label.setX(x - label.getLayoutBounds().getWidth() / 2);
         label.setY(tickBaseline);
         getChildren().add(label);
@@ -151,8 +192,49 @@ public final class BandChart extends Region {
     drawMeasured(scale, length, width);
   }
 
-  private void drawMarkers(BandScale scale, double length) {
-    List<Marker> shown = markers.stream().filter(m -> Double.isFinite(m.volts())).toList();
+  private String bandText() {
+    if (!ohms) {
+      return Engineering.band(healthyLow, healthyHigh);
+    }
+    if (healthyLow == Double.POSITIVE_INFINITY) {
+      return "OL";
+    }
+    String low = ohmsText(healthyLow);
+    String high = ohmsText(healthyHigh);
+    return low.equals(high) ? low : low + " to " + high;
+  }
+
+  /** Returns ohms as the chart prints them: "46.8 kΩ", "0.4 Ω", "OL". */
+  static String ohmsText(double value) {
+    return value == Double.POSITIVE_INFINITY ? "OL" : Engineering.of(value, "Ω", 3);
+  }
+
+  /**
+   * Returns whether an ohms reading fits a healthy range: within the range widened by the default
+   * meter's ohms uncertainty at each end and half an ohm for the test leads (common practice), or
+   * OL where a healthy stage reads OL. False when the range is unknown (NaN).
+   */
+  public static boolean ohmsInside(double low, double high, double measured) {
+    if (Double.isNaN(low) || Double.isNaN(high) || Double.isNaN(measured)) {
+      return false;
+    }
+    if (measured == Double.POSITIVE_INFINITY) {
+      // OL: a healthy stage reads OL there, or beyond the meter's top range.
+      return high > MeterSpec.DEFAULT.ohmsOverRange();
+    }
+    if (high == Double.POSITIVE_INFINITY) {
+      return false;
+    }
+    return measured >= low - MeterSpec.DEFAULT.ohmsUncertainty(low) - LEADS
+        && measured <= high + MeterSpec.DEFAULT.ohmsUncertainty(high) + LEADS;
+  }
+
+  private boolean drawable(double value) {
+    return ohms ? !Double.isNaN(value) : Double.isFinite(value);
+  }
+
+  private void drawMarkers(ChartAxis scale, double length) {
+    List<Marker> shown = markers.stream().filter(m -> drawable(m.volts())).toList();
     double[] centres = new double[shown.size()];
     double[] widths = new double[shown.size()];
     List<Text> labels = new ArrayList<>();
@@ -182,8 +264,8 @@ public final class BandChart extends Region {
     }
   }
 
-  private void drawMeasured(BandScale scale, double length, double width) {
-    if (!Double.isFinite(measured)) {
+  private void drawMeasured(ChartAxis scale, double length, double width) {
+    if (!drawable(measured)) {
       Text none = text("no reading", Palette.bold(16), Palette.SOFT_INK);
       none.setId("no-reading");
       none.setX(width / 2 - none.getLayoutBounds().getWidth() / 2);
@@ -193,9 +275,11 @@ public final class BandChart extends Region {
     }
     double x = SIDE + scale.position(measured, length);
     boolean inside =
-        Double.isFinite(healthyLow)
-            && measured >= healthyLow - 1e-12
-            && measured <= healthyHigh + 1e-12;
+        ohms
+            ? ohmsInside(healthyLow, healthyHigh, measured)
+            : Double.isFinite(healthyLow)
+                && measured >= healthyLow - 1e-12
+                && measured <= healthyHigh + 1e-12;
     Color mark = inside ? Palette.BAND_EDGE : Palette.OUTSIDE;
     Line needle = new Line(x, AXIS_Y - BAND_HALF - 4, x, AXIS_Y + BAND_HALF + 2);
     needle.setStroke(mark);
@@ -212,7 +296,8 @@ public final class BandChart extends Region {
     head.setId("measured-marker");
     Text value =
         text(
-            Engineering.reading(measured, MeterSpec.DEFAULT) + (inside ? "" : "  outside"),
+            (ohms ? ohmsText(measured) : Engineering.reading(measured, MeterSpec.DEFAULT))
+                + (inside ? "" : "  outside"),
             Palette.bold(16),
             Palette.MEASURED);
     double w = value.getLayoutBounds().getWidth();

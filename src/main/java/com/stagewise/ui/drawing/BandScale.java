@@ -10,7 +10,7 @@ import java.util.List;
  * @param min the volts at the left end
  * @param max the volts at the right end, above {@code min}
  */
-record BandScale(double min, double max) {
+record BandScale(double min, double max) implements ChartAxis {
 
   /** Checks that the span is finite and not empty. */
   BandScale {
@@ -51,12 +51,14 @@ record BandScale(double min, double max) {
   }
 
   /** Returns the position of {@code volts} on a line of {@code length} pixels starting at 0. */
-  double position(double volts, double length) {
+  @Override
+  public double position(double volts, double length) {
     return (volts - min) / (max - min) * length;
   }
 
   /** Returns round tick values inside the span, about {@code wanted} of them (1-2-5 steps). */
-  List<Double> ticks(int wanted) {
+  @Override
+  public List<Double> ticks(int wanted) {
     double raw = (max - min) / Math.max(1, wanted);
     double magnitude = Math.pow(10, Math.floor(Math.log10(raw)));
     double step = magnitude;
@@ -72,6 +74,11 @@ record BandScale(double min, double max) {
       ticks.add(Math.round(t / step) * step);
     }
     return ticks;
+  }
+
+  @Override
+  public String tickText(double volts) {
+    return VoltText.tick(volts);
   }
 
   /**

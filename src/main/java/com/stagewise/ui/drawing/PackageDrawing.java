@@ -24,6 +24,9 @@ import javafx.scene.transform.Scale;
  * probe. Every pin is a touch target of at least 48 px at the preferred size.
  */
 public final class PackageDrawing extends Region {
+  /** The smallest font a pin's text shrinks to before its column widens. */
+  private static final double SMALLEST_FONT = 12;
+
   private final Group content = new Group();
   private final Scale scale = new Scale(1, 1, 0, 0);
   private final Map<Integer, String> pinText = new HashMap<>();
@@ -31,6 +34,7 @@ public final class PackageDrawing extends Region {
   private String packageRef = "";
   private Map<Integer, String> pinNames = Map.of();
   private int highlighted;
+  private int alsoHighlighted;
   private IntConsumer onPinChosen = pin -> {};
   private PackageGeometry geometry = PackageGeometry.of(8);
 
@@ -52,16 +56,25 @@ public final class PackageDrawing extends Region {
     this.type = Objects.requireNonNull(type, "type");
     this.packageRef = packageRef == null ? "" : packageRef;
     this.pinNames = pinNames == null ? Map.of() : new LinkedHashMap<>(pinNames);
-    this.geometry =
-        PackageGeometry.of(type.pinCount(), Math.max(getWidth(), 1), Math.max(getHeight(), 1));
+    this.geometry = fitted(Math.max(getWidth(), 1), Math.max(getHeight(), 1));
     this.highlighted = 0;
+    this.alsoHighlighted = 0;
     pinText.clear();
     redraw();
   }
 
   /** Highlights the pin to probe (0 clears the highlight). */
   public void highlight(int pin) {
+    highlight(pin, 0);
+  }
+
+  /**
+   * Highlights the pins of a pair to read between (power off): the first is spelled out above the
+   * package; 0 leaves a place without a pin.
+   */
+  public void highlight(int pin, int second) {
     highlighted = pin;
+    alsoHighlighted = second;
     redraw();
   }
 
@@ -72,6 +85,7 @@ public final class PackageDrawing extends Region {
     } else {
       pinText.put(pin, text);
     }
+    requestLayout();
     redraw();
   }
 
@@ -105,13 +119,57 @@ public final class PackageDrawing extends Region {
     return PackageGeometry.of(pinCount(), 0, 0).height();
   }
 
+  /**
+   * Returns the geometry for a room: text columns wide enough for every pin's text at the smallest
+   * font, as long as the drawing, scaled to the room, keeps its pins 48 px (common practice for a
+   * finger); a longer text is shortened ({@link #fit}).
+   */
+  private PackageGeometry fitted(double roomWidth, double roomHeight) {
+    double column = minColumn();
+    while (true) {
+      PackageGeometry g = PackageGeometry.of(pinCount(), roomWidth, roomHeight, column);
+      // Only the width counts here: a room too low scales every drawing alike, texts or not.
+      double s = Math.min(1, roomWidth / g.width());
+      if (column <= PackageGeometry.MIN_TEXT_COLUMN
+          || s * g.pin(1).pad().w() >= PackageGeometry.MIN_PAD) {
+        return g;
+      }
+      column -= 4;
+    }
+  }
+
+  /**
+   * Returns the width a pin's text column needs so that every pin's name and text fit whole at the
+   * smallest font the drawing uses ({@link #fit}); a smaller room scales the drawing as a whole.
+   */
+  private double minColumn() {
+    double widest = 0;
+    if (type != null) {
+      for (int pin = 1; pin <= type.pinCount(); pin++) {
+        String name = pinNames.getOrDefault(pin, PackageGeometry.pinName(type, pin));
+        widest = Math.max(widest, width(name, true));
+        String extra = pinText.get(pin);
+        if (extra != null) {
+          widest = Math.max(widest, width(extra, true));
+        }
+      }
+    }
+    return widest + 16;
+  }
+
+  private static double width(String value, boolean bold) {
+    Text text = new Text(value);
+    text.setFont(bold ? Palette.bold(SMALLEST_FONT) : Palette.font(SMALLEST_FONT));
+    return Math.ceil(text.getLayoutBounds().getWidth());
+  }
+
   private int pinCount() {
     return type == null ? 8 : type.pinCount();
   }
 
   @Override
   protected void layoutChildren() {
-    PackageGeometry fitted = PackageGeometry.of(pinCount(), getWidth(), getHeight());
+    PackageGeometry fitted = fitted(getWidth(), getHeight());
     if (fitted.width() != geometry.width() || fitted.height() != geometry.height()) {
       geometry = fitted;
       redraw();
@@ -183,7 +241,7 @@ public final class PackageDrawing extends Region {
   }
 
   private void drawPin(PackageGeometry.PinPlace place) {
-    boolean on = place.pin() == highlighted;
+    boolean on = place.pin() == highlighted || place.pin() == alsoHighlighted;
     Box pad = place.pad();
     Group pin = new Group();
     pin.setId("pin-" + place.pin());
@@ -230,7 +288,7 @@ public final class PackageDrawing extends Region {
   }
 
   private void drawPinNumber(PackageGeometry.PinPlace place) {
-    boolean on = place.pin() == highlighted;
+    boolean on = place.pin() == highlighted || place.pin() == alsoHighlighted;
     Box pad = place.pad();
     Text number =
         text(
@@ -249,7 +307,7 @@ public final class PackageDrawing extends Region {
    */
   private static void fit(Text text, double width, boolean bold) {
     double size = text.getFont().getSize();
-    while (size > 12 && text.getLayoutBounds().getWidth() > width) {
+    while (size > SMALLEST_FONT && text.getLayoutBounds().getWidth() > width) {
       size -= 1;
       text.setFont(bold ? Palette.bold(size) : Palette.font(size));
     }

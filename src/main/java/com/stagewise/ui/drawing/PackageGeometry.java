@@ -22,7 +22,9 @@ final class PackageGeometry {
   static final double MAX_PITCH = 62;
   static final double MIN_TEXT_COLUMN = 72;
   static final double MAX_TEXT_COLUMN = 176;
-  static final double MIN_BODY = 84;
+  // Narrow enough to leave a reading's column its room in a 350 px panel, wide enough for
+  // "quad-14".
+  static final double MIN_BODY = 72;
   static final double MAX_BODY = 150;
   static final double TOP = 40;
   static final double BOTTOM = 30;
@@ -47,7 +49,7 @@ final class PackageGeometry {
    */
   record PinPlace(int pin, boolean left, Box pad, Box text) {}
 
-  private PackageGeometry(int pinCount, double roomWidth, double roomHeight) {
+  private PackageGeometry(int pinCount, double roomWidth, double roomHeight, double minColumn) {
     if (pinCount < 2 || pinCount % 2 != 0) {
       throw new IllegalArgumentException(
           "pin count (" + pinCount + ") must be even and at least 2");
@@ -58,14 +60,14 @@ final class PackageGeometry {
     // below 48 px; a room smaller than that is handled by scaling the whole drawing.
     double pitch = clamp((roomHeight - TOP - BOTTOM) / perSide, MIN_PITCH, MAX_PITCH);
     double pad = Math.min(PAD, pitch - 4);
-    double besideBody = 2 * (MARGIN + MIN_TEXT_COLUMN + 8 + pad - 6);
+    double besideBody = 2 * (MARGIN + minColumn + 8 + pad - 6);
     double bodyWidth =
         clamp(Math.min(roomWidth * 0.26, roomWidth - besideBody), MIN_BODY, MAX_BODY);
     double column =
         clamp(
             (roomWidth - bodyWidth - 2 * pad - 2 * MARGIN) / 2 - 8,
-            MIN_TEXT_COLUMN,
-            MAX_TEXT_COLUMN);
+            minColumn,
+            Math.max(minColumn, MAX_TEXT_COLUMN));
     double bodyX = MARGIN + column + 8 + pad - 6;
     body = new Box(bodyX, TOP, bodyWidth, perSide * pitch);
     List<PinPlace> places = new ArrayList<>();
@@ -99,7 +101,18 @@ final class PackageGeometry {
    * @throws IllegalArgumentException if the count is odd or below 2
    */
   static PackageGeometry of(int pinCount, double roomWidth, double roomHeight) {
-    return new PackageGeometry(pinCount, roomWidth, roomHeight);
+    return new PackageGeometry(pinCount, roomWidth, roomHeight, MIN_TEXT_COLUMN);
+  }
+
+  /**
+   * Returns the geometry for a room, with text columns at least {@code minColumn} wide (so that the
+   * widest pin text fits whole; a room too small then scales the drawing instead of cutting text).
+   *
+   * @throws IllegalArgumentException if the count is odd or below 2
+   */
+  static PackageGeometry of(int pinCount, double roomWidth, double roomHeight, double minColumn) {
+    return new PackageGeometry(
+        pinCount, roomWidth, roomHeight, Math.max(MIN_TEXT_COLUMN, minColumn));
   }
 
   /**
@@ -108,7 +121,7 @@ final class PackageGeometry {
    * @throws IllegalArgumentException if the count is odd or below 2
    */
   static PackageGeometry of(int pinCount) {
-    return new PackageGeometry(pinCount, PREFERRED_WIDTH, 10_000);
+    return new PackageGeometry(pinCount, PREFERRED_WIDTH, 10_000, MIN_TEXT_COLUMN);
   }
 
   int pinCount() {

@@ -2,9 +2,12 @@ package com.stagewise.ui.readings;
 
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.Terminal;
+import com.stagewise.diagnosis.Diagnosis;
+import com.stagewise.diagnosis.ProbeAdvice;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
@@ -12,13 +15,13 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * A place to put the meter probe: a package pin or a net, with what it is in words.
+ * A place to put the meter probe: a package pin, a part lead or a net, with what it is in words.
  *
- * @param at the test point as the readings name it, {@code U1.8} or {@code OUT}
- * @param kind DC level or AC amplitude
+ * @param at the test point as the readings name it, {@code U1.8}, {@code D1.a} or {@code OUT}
+ * @param kind DC level, AC amplitude, or ohms (power off, one of a pair of points)
  * @param hz the frequency of an AC reading, 0 for DC
- * @param packageRef the package of a pin (empty for a net)
- * @param pin the pin number (0 for a net)
+ * @param packageRef the package of a pin, the part of a lead (empty for a net)
+ * @param pin the pin number (0 for a lead or a net)
  * @param title what to probe, e.g. "U1 pin 8 — positive supply pin (VCC)"
  * @param why why this point now (may be empty)
  */
@@ -30,6 +33,22 @@ public record ProbePoint(
     return pin > 0;
   }
 
+  /** Returns whether this is a part's lead ({@code R2.1}, {@code D1.a}, {@code RV1.w}). */
+  public boolean isLead() {
+    return pin == 0 && !packageRef.isEmpty();
+  }
+
+  /** Returns the point in a few words: "U1 pin 8", "D1 anode", "net OUT". */
+  public String shortName() {
+    if (isPin()) {
+      return packageRef + " pin " + pin;
+    }
+    if (isLead()) {
+      return packageRef + " " + leadWord(at.substring(packageRef.length() + 1));
+    }
+    return "net " + at;
+  }
+
   /** Returns a copy with another reason. */
   public ProbePoint because(String reason) {
     return new ProbePoint(at, kind, hz, packageRef, pin, title, reason);
@@ -37,8 +56,9 @@ public record ProbePoint(
 
   /** Returns the short call shown large, e.g. "Probe U1 pin 8" or "Probe net OUT (AC, 1 kHz)". */
   public String call() {
-    String where = isPin() ? packageRef + " pin " + pin : "net " + at;
-    return "Probe " + where + (kind == Reading.Kind.AC ? " (AC at " + Words.hertz(hz) + ")" : "");
+    return "Probe "
+        + shortName()
+        + (kind == Reading.Kind.AC ? " (AC at " + Words.hertz(hz) + ")" : "");
   }
 
   /** Returns the DC probe point for a test point of the stage, if it names a used pin or a net. */
@@ -54,7 +74,63 @@ public record ProbePoint(
     if (stage.nets().contains(at)) {
       return Optional.of(new ProbePoint(at, kind, hz, "", 0, netTitle(stage, at, pins), ""));
     }
+    int dot = at.lastIndexOf('.');
+    if (dot > 0) {
+      String ref = at.substring(0, dot);
+      String lead = at.substring(dot + 1);
+      Optional<Part> part = stage.part(ref);
+      if (part.isPresent() && part.get().leadNet(lead) != null) {
+        String title =
+            ref
+                + " "
+                + leadWord(lead)
+                + " ("
+                + at
+                + ") — on net "
+                + part.get().leadNet(lead)
+                + ", "
+                + part.get().kind().name().toLowerCase(java.util.Locale.ROOT);
+        return Optional.of(new ProbePoint(at, kind, hz, ref, 0, title, ""));
+      }
+    }
     return Optional.empty();
+  }
+
+  /**
+   * Returns the point to probe next: the first supply pin not yet read, then the diagnosis's best
+   * probe, else null when there is nothing more worth probing.
+   */
+  static ProbePoint next(Stage stage, Diagnosis diagnosis, List<Reading> readings) {
+    for (ProbePoint rail : rails(stage)) {
+      if (readings.stream()
+          .noneMatch(r -> r.at().equals(rail.at()) && r.kind() == Reading.Kind.DC)) {
+        return rail;
+      }
+    }
+    if (diagnosis == null || readings.isEmpty()) {
+      return null;
+    }
+    for (ProbeAdvice advice : diagnosis.nextProbes()) {
+      if (advice.kind() == Reading.Kind.OHMS) {
+        // A power-off check has two points: the power-off mode offers it (PowerOffMode).
+        continue;
+      }
+      Optional<ProbePoint> point = of(stage, advice.at(), advice.kind(), advice.hz());
+      if (point.isPresent()) {
+        return point.get().because(advice.why());
+      }
+    }
+    return null;
+  }
+
+  /** Returns a lead's name in words: "anode", "cathode", "wiper", "end 1", "lead 2". */
+  static String leadWord(String lead) {
+    return switch (lead) {
+      case "a" -> "anode";
+      case "k" -> "cathode";
+      case "w" -> "wiper";
+      default -> "lead " + lead;
+    };
   }
 
   /** Returns where a net can be found: "Net SUM — at R1, R2 and U1 pin 2". */
@@ -121,7 +197,10 @@ public record ProbePoint(
     return rails;
   }
 
-  /** Returns every test point of the stage: package pins first, then the nets (ground left out). */
+  /**
+   * Returns every test point of the stage: package pins first, then the nets (ground left out),
+   * then every part's leads.
+   */
   public static List<ProbePoint> all(Stage stage) {
     List<ProbePoint> points = new ArrayList<>();
     for (String at : stage.pinNets().keySet()) {
@@ -132,6 +211,18 @@ public record ProbePoint(
         of(stage, net, Reading.Kind.DC, 0).ifPresent(points::add);
       }
     }
+    for (Part part : stage.parts()) {
+      for (String lead : part.leads()) {
+        of(stage, part.ref() + "." + lead, Reading.Kind.DC, 0).ifPresent(points::add);
+      }
+    }
+    return points;
+  }
+
+  /** Returns every point an ohmmeter's lead may touch: as {@link #all}, with ground. */
+  public static List<ProbePoint> allForOhms(Stage stage) {
+    List<ProbePoint> points = new ArrayList<>(all(stage));
+    of(stage, stage.ground(), Reading.Kind.DC, 0).ifPresent(g -> points.add(0, g));
     return points;
   }
 }

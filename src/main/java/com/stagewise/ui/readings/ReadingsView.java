@@ -4,11 +4,9 @@ import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.ui.Bench;
-import com.stagewise.ui.drawing.BandChart;
 import com.stagewise.ui.drawing.PackageDrawing;
 import com.stagewise.ui.widget.ValuePad;
 import com.stagewise.ui.words.Words;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
@@ -33,7 +31,7 @@ import javafx.scene.layout.VBox;
 public final class ReadingsView {
   private final ReadingsViewModel model;
   private final Bench bench;
-  private final HBox root = new HBox(12);
+  private final VBox root = new VBox(8);
   private final PackageDrawing drawing = new PackageDrawing();
   private final VBox suspectsBox = new VBox(6);
   private String shownPackage = "";
@@ -58,8 +56,14 @@ public final class ReadingsView {
     pad.setMaxWidth(396);
     VBox results = resultsPanel();
     HBox.setHgrow(results, Priority.ALWAYS);
-    root.getChildren().addAll(probe, pad, results);
+    HBox columns = new HBox(12, probe, pad, results);
+    VBox.setVgrow(columns, Priority.ALWAYS);
+    root.getChildren().addAll(PowerOffViews.modeBar(model), columns);
     model.probeProperty().addListener((o, was, now) -> showProbe(now));
+    PowerOffMode mode = model.powerOff();
+    mode.fromProperty().addListener((o, was, now) -> showProbe(model.probeProperty().get()));
+    mode.toProperty().addListener((o, was, now) -> showProbe(model.probeProperty().get()));
+    mode.activeProperty().addListener((o, was, now) -> showProbe(model.probeProperty().get()));
     bench.readings().addListener((ListChangeListener<Reading>) c -> showPinTexts());
     model.topSuspects().addListener((ListChangeListener<Suspect>) c -> showSuspects());
     showProbe(model.probeProperty().get());
@@ -123,7 +127,6 @@ public final class ReadingsView {
     VBox.setVgrow(drawingHolder, Priority.ALWAYS);
     ComboBox<ProbePoint> other = new ComboBox<>(model.testPoints());
     other.setId("other-point");
-    other.setPromptText("Or probe another point …");
     other.setMaxWidth(Double.MAX_VALUE);
     other.setCellFactory(
         v ->
@@ -134,7 +137,15 @@ public final class ReadingsView {
                 setText(empty || p == null ? null : p.title());
               }
             });
-    other.setButtonCell(other.getCellFactory().call(null));
+    // A custom button cell shows nothing once the choice is cleared; it shows the prompt instead.
+    other.setButtonCell(
+        new ListCell<>() {
+          @Override
+          protected void updateItem(ProbePoint p, boolean empty) {
+            super.updateItem(p, empty);
+            setText(empty || p == null ? other.getPromptText() : p.title());
+          }
+        });
     // Another stage or case: the box shows its prompt again, never a point of the last one.
     model
         .testPoints()
@@ -148,17 +159,40 @@ public final class ReadingsView {
             other.getSelectionModel().clearSelection();
           }
         });
-    Button suggested = new Button("Back to the suggested probe");
+    Button suggested = new Button();
     suggested.setId("probe-suggested");
+    suggested
+        .textProperty()
+        .bind(
+            Bindings.when(model.powerOff().activeProperty())
+                .then("Back to the suggested pair")
+                .otherwise("Back to the suggested probe"));
     suggested.setOnAction(e -> model.followSuggestion());
-    box.getChildren().addAll(heading, call, title, why, drawingHolder, other, suggested);
+    other
+        .promptTextProperty()
+        .bind(
+            Bindings.when(model.powerOff().activeProperty())
+                .then("Or pick a point from the list …")
+                .otherwise("Or probe another point …"));
+    VBox powered = new VBox(8, heading, call, title, why);
+    PowerOffViews.showWhen(powered, model.powerOff().activeProperty().not());
+    box.getChildren()
+        .addAll(powered, PowerOffViews.pairHeader(model), drawingHolder, other, suggested);
     return box;
   }
 
-  private void showProbe(ProbePoint p) {
+  private void showProbe(ProbePoint volts) {
     Stage stage = bench.stageProperty().get();
     if (stage == null) {
       return;
+    }
+    PowerOffMode mode = model.powerOff();
+    ProbePoint p = mode.activeProperty().get() ? mode.fromProperty().get() : volts;
+    ProbePoint q = mode.activeProperty().get() ? mode.toProperty().get() : null;
+    if ((p == null || !p.isPin()) && q != null && q.isPin()) {
+      ProbePoint swap = p;
+      p = q;
+      q = swap;
     }
     String pkg =
         p != null && p.isPin()
@@ -170,7 +204,8 @@ public final class ReadingsView {
       shownPackage = pkg;
       showPinTexts();
     }
-    drawing.highlight(p != null && p.isPin() ? p.pin() : 0);
+    int second = q != null && q.isPin() && q.packageRef().equals(pkg) ? q.pin() : 0;
+    drawing.highlight(p != null && p.isPin() ? p.pin() : 0, second);
   }
 
   private void showPinTexts() {
@@ -221,7 +256,7 @@ public final class ReadingsView {
     ListView<ReadingsViewModel.ReadingRow> list = new ListView<>(model.rows());
     list.setId("readings-list");
     VBox.setVgrow(list, Priority.ALWAYS);
-    list.setCellFactory(v -> new ReadingCell());
+    list.setCellFactory(v -> new ReadingCard());
     // Another case or stage: nothing stays chosen from the last one.
     model
         .rows()
@@ -277,7 +312,8 @@ public final class ReadingsView {
     chosen.addListener(
         (o, was, row) -> {
           boolean struck = row != null && row.struck();
-          what.setText(row == null ? "" : row.title() + ":  " + valueText(row.reading()));
+          what.setText(
+              row == null ? "" : row.title() + ":  " + ReadingCard.valueText(row.reading()));
           correct.setVisible(!struck);
           correct.setManaged(!struck);
           strike.setVisible(!struck);
@@ -329,12 +365,6 @@ public final class ReadingsView {
     return bar;
   }
 
-  private static String valueText(Reading r) {
-    return r.kind() == Reading.Kind.AC
-        ? Words.measured(r.value()) + " AC"
-        : Words.measured(r.value());
-  }
-
   private void showSuspects() {
     suspectsBox.getChildren().clear();
     int rank = 1;
@@ -359,60 +389,6 @@ public final class ReadingsView {
       HBox row = new HBox(10, name, spring, barRow, pct);
       row.setAlignment(Pos.CENTER_LEFT);
       suspectsBox.getChildren().add(row);
-    }
-  }
-
-  /** One reading: its point, its value, and its band chart. */
-  private static final class ReadingCell extends ListCell<ReadingsViewModel.ReadingRow> {
-    private final BandChart chart = new BandChart();
-    private final Label title = new Label();
-    private final VBox box = new VBox(2, title, chart);
-
-    ReadingCell() {
-      title.setWrapText(true);
-      chart.setMaxWidth(Double.MAX_VALUE);
-      setPrefWidth(0);
-    }
-
-    @Override
-    protected void updateItem(ReadingsViewModel.ReadingRow row, boolean empty) {
-      super.updateItem(row, empty);
-      if (empty || row == null) {
-        setGraphic(null);
-        setText(null);
-        return;
-      }
-      Reading r = row.reading();
-      String value = valueText(r);
-      if (row.struck()) {
-        title.setText(
-            row.title()
-                + ":  "
-                + value
-                + "  — struck out"
-                + (row.struckAt() == null ? "" : " " + Words.dateTime(row.struckAt())));
-        if (!title.getStyleClass().contains("struck")) {
-          title.getStyleClass().add("struck");
-        }
-        chart.setVisible(false);
-        chart.setManaged(false);
-        setText(null);
-        setGraphic(box);
-        return;
-      }
-      title.getStyleClass().remove("struck");
-      chart.setVisible(true);
-      chart.setManaged(true);
-      String state =
-          Double.isNaN(row.healthyLow())
-              ? ""
-              : row.healthy() ? "  — in the healthy range" : "  — outside the healthy range";
-      title.setText(row.title() + ":  " + value + state);
-      List<BandChart.Marker> markers = new ArrayList<>();
-      row.predictions().forEach((label, volts) -> markers.add(new BandChart.Marker(label, volts)));
-      chart.show(Words.pin(r.at()), row.healthyLow(), row.healthyHigh(), r.value(), markers);
-      setText(null);
-      setGraphic(box);
     }
   }
 }

@@ -8,21 +8,17 @@ import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnoser;
 import com.stagewise.diagnosis.Diagnosis;
-import com.stagewise.diagnosis.Fault;
 import com.stagewise.diagnosis.ProbeAdvice;
-import com.stagewise.diagnosis.SignalChain;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.Step;
+import com.stagewise.ui.drawing.BandChart;
 import com.stagewise.ui.widget.ValuePadModel;
-import com.stagewise.ui.words.Words;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleBooleanProperty;
@@ -52,7 +48,10 @@ public final class ReadingsViewModel {
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
   private final BooleanProperty thinking = new SimpleBooleanProperty(false);
   private final Revisions revisions;
-  private final StringProperty correctingText = new SimpleStringProperty("");
+  private final PowerOffMode powerOff = new PowerOffMode();
+  private final ReadingCards cards = new ReadingCards();
+  // What was typed in the other mode: switching modes loses nothing.
+  private String otherModeText = "";
   private Diagnoser diagnoser;
   private Stage diagnoserStage;
   private boolean probeChosenByHand;
@@ -62,19 +61,6 @@ public final class ReadingsViewModel {
     this.bench = bench;
     this.revisions =
         new Revisions(bench, s -> diagnoserStage == s ? diagnoser : null, this::refresh);
-    revisions
-        .correctingProperty()
-        .addListener(
-            (o, was, now) ->
-                correctingText.set(
-                    now == null
-                        ? ""
-                        : "Correcting "
-                            + Words.pin(now.at())
-                            + " "
-                            + Words.measured(now.value())
-                            + ": type the right value and tap Add reading. The wrong one stays in"
-                            + " the history, struck out."));
     bench.stageProperty().addListener((o, was, now) -> stageChanged(now));
     if (bench.stageProperty().get() != null) {
       stageChanged(bench.stageProperty().get());
@@ -101,14 +87,59 @@ public final class ReadingsViewModel {
       Map<String, Double> predictions,
       Instant struckAt,
       boolean struck) {
-    /** Returns whether the reading lies in the healthy range (false when the range is unknown). */
+    /**
+     * Returns whether the reading lies in the healthy range (false when the range is unknown); an
+     * ohms reading within the meter's uncertainty and the test leads of it ({@link
+     * BandChart#ohmsInside}).
+     */
     public boolean healthy() {
+      if (reading.kind() == Reading.Kind.OHMS) {
+        return BandChart.ohmsInside(healthyLow, healthyHigh, reading.value());
+      }
       return reading.value() >= healthyLow && reading.value() <= healthyHigh;
     }
   }
 
   public ValuePadModel pad() {
     return pad;
+  }
+
+  /** Returns the power-off mode: its caution, its pair of points and the suggested pair. */
+  public PowerOffMode powerOff() {
+    return powerOff;
+  }
+
+  /**
+   * Switches between powered readings (volts) and power-off readings (ohms between two points). The
+   * pad keeps what was typed in each mode; entering power-off mode brings up its caution and the
+   * suggested pair.
+   */
+  public void setPowerOff(boolean on) {
+    if (on == powerOff.activeProperty().get()) {
+      return;
+    }
+    if (revisions.correctingProperty().get() != null) {
+      revisions.cancelCorrection();
+    }
+    String typed = pad.textProperty().get();
+    pad.textProperty().set(otherModeText);
+    otherModeText = typed == null ? "" : typed;
+    pad.quantityProperty()
+        .set(on ? ValuePadModel.Quantity.METER_OHMS : ValuePadModel.Quantity.VOLTS);
+    if (on) {
+      if (!powerOff.chosenByHand()) {
+        powerOff.followSuggestion(bench.stageProperty().get());
+      }
+      powerOff.enter();
+    } else {
+      powerOff.leave();
+    }
+  }
+
+  /** Goes into power-off mode with the suggested pair of points chosen: one tap takes it. */
+  public void takeSuggestedOhmsCheck() {
+    powerOff.followSuggestion(bench.stageProperty().get());
+    setPowerOff(true);
   }
 
   public ObjectProperty<ProbePoint> probeProperty() {
@@ -137,7 +168,7 @@ public final class ReadingsViewModel {
 
   /** Returns the line that says which reading is being corrected; empty when none is. */
   public StringProperty correctingTextProperty() {
-    return correctingText;
+    return revisions.correctingTextProperty();
   }
 
   /**
@@ -167,8 +198,18 @@ public final class ReadingsViewModel {
       return;
     }
     Reading r = row.reading();
+    setPowerOff(r.kind() == Reading.Kind.OHMS);
     revisions.startCorrection(r);
     if (revisions.correctingProperty().get() != r) {
+      return;
+    }
+    if (r.kind() == Reading.Kind.OHMS) {
+      powerOff.set(
+          ProbePoint.of(stage, r.at(), r.kind(), 0).orElse(null),
+          ProbePoint.of(stage, r.to(), r.kind(), 0).orElse(null),
+          "Correcting the reading taken between these points.",
+          true);
+      pad.setValue(r.value());
       return;
     }
     ProbePoint.of(stage, r.at(), r.kind(), r.hz())
@@ -186,6 +227,9 @@ public final class ReadingsViewModel {
     revisions.cancelCorrection();
     pad.textProperty().set("");
     followSuggestion();
+    if (powerOff.activeProperty().get()) {
+      powerOff.followSuggestion(bench.stageProperty().get());
+    }
   }
 
   /** Undoes the last strike, restore or correction. */
@@ -205,47 +249,6 @@ public final class ReadingsViewModel {
     return chain;
   }
 
-  /** Returns the chain line for a stage and its top suspects; empty for a single section. */
-  static String chainLine(Stage stage, List<Suspect> suspects) {
-    if (stage == null || stage.amplifiers().size() < 2 || suspects.isEmpty()) {
-      return "";
-    }
-    SignalChain order = SignalChain.of(stage);
-    java.util.Set<String> rails = new java.util.HashSet<>();
-    stage.rails().forEach(r -> rails.add(r.net()));
-    List<List<String>> at = new ArrayList<>();
-    order.sections().forEach(s -> at.add(new ArrayList<>()));
-    List<String> nowhere = new ArrayList<>();
-    for (Suspect s : suspects) {
-      if (s.fault().equals("healthy")) {
-        continue;
-      }
-      Optional<Integer> position;
-      try {
-        position = order.position(Fault.parse(s.fault(), rails));
-      } catch (InvalidInputException e) {
-        position = Optional.empty();
-      }
-      String words = Words.fault(s.fault());
-      if (position.isPresent()) {
-        at.get(position.get()).add(words);
-      } else {
-        nowhere.add(words);
-      }
-    }
-    StringBuilder line = new StringBuilder("Along the chain: ");
-    for (int i = 0; i < order.sections().size(); i++) {
-      line.append(i == 0 ? "" : " › ").append(order.sections().get(i));
-      if (!at.get(i).isEmpty()) {
-        line.append(" ◀ ").append(String.join(", ", at.get(i)));
-      }
-    }
-    if (!nowhere.isEmpty()) {
-      line.append(".  Not in one section: ").append(String.join(", ", nowhere));
-    }
-    return line.toString();
-  }
-
   public ObjectProperty<ExpectedVolts> expectedProperty() {
     return expected;
   }
@@ -262,6 +265,9 @@ public final class ReadingsViewModel {
     diagnoser = null;
     diagnoserStage = null;
     probeChosenByHand = false;
+    powerOff.reset();
+    setPowerOff(false);
+    otherModeText = "";
     rows.clear();
     topSuspects.clear();
     verdict.set("");
@@ -271,8 +277,8 @@ public final class ReadingsViewModel {
       probe.set(null);
       return;
     }
-    testPoints.setAll(ProbePoint.all(stage));
-    probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
+    testPoints.setAll(ProbePoint.allForOhms(stage));
+    probe.set(ProbePoint.next(stage, bench.diagnosisProperty().get(), bench.readings()));
     BoardModel boardModel = bench.boardModelProperty().get();
     Casework casework = bench.casework();
     boolean mains = bench.mainsPoweredProperty().get();
@@ -321,6 +327,13 @@ public final class ReadingsViewModel {
     if (stage == null) {
       return;
     }
+    if (powerOff.activeProperty().get()) {
+      ProbePoint.of(stage, at, Reading.Kind.OHMS, 0).ifPresent(powerOff::choose);
+      return;
+    }
+    if (at.equals(stage.ground())) {
+      return; // ground is the meter's reference for volts
+    }
     ProbePoint.of(stage, at, Reading.Kind.DC, 0)
         .ifPresent(
             p -> {
@@ -331,10 +344,14 @@ public final class ReadingsViewModel {
 
   /** Returns to the suggested probe after a hand-picked one. */
   public void followSuggestion() {
+    if (powerOff.activeProperty().get()) {
+      powerOff.followSuggestion(bench.stageProperty().get());
+      return;
+    }
     probeChosenByHand = false;
     Stage stage = bench.stageProperty().get();
     if (stage != null) {
-      probe.set(nextProbe(stage, bench.diagnosisProperty().get()));
+      probe.set(ProbePoint.next(stage, bench.diagnosisProperty().get(), bench.readings()));
     }
   }
 
@@ -343,9 +360,20 @@ public final class ReadingsViewModel {
    * the next probe in the background, and stores both in the case.
    */
   public void addReading() {
-    ProbePoint at = probe.get();
+    boolean ohms = powerOff.activeProperty().get();
+    ProbePoint at = ohms ? powerOff.fromProperty().get() : probe.get();
+    ProbePoint to = ohms ? powerOff.toProperty().get() : null;
     Double value = pad.valueProperty().get();
     Stage stage = bench.stageProperty().get();
+    if (ohms && stage != null && (at == null || to == null || at.at().equals(to.at()))) {
+      bench
+          .problems()
+          .show(
+              "Choose two points",
+              "An ohms reading is taken between two different points.",
+              "Tap the first point and then the second, on the drawing or from the list.");
+      return;
+    }
     if (at == null || stage == null) {
       bench
           .problems()
@@ -366,10 +394,14 @@ public final class ReadingsViewModel {
     }
     Reading reading;
     try {
-      reading =
-          at.kind() == Reading.Kind.AC
-              ? Reading.ac(at.at(), Math.abs(value), at.hz())
-              : Reading.dc(at.at(), value);
+      if (ohms) {
+        reading = Reading.ohms(at.at(), to.at(), value);
+      } else {
+        reading =
+            at.kind() == Reading.Kind.AC
+                ? Reading.ac(at.at(), Math.abs(value), at.hz())
+                : Reading.dc(at.at(), value);
+      }
     } catch (InvalidInputException e) {
       bench
           .problems()
@@ -379,6 +411,9 @@ public final class ReadingsViewModel {
     String typed = pad.textProperty().get();
     pad.press(ValuePadModel.CLEAR);
     probeChosenByHand = false;
+    if (ohms) {
+      powerOff.clear();
+    }
     if (revisions.correctingProperty().get() != null) {
       revisions.finishCorrection(
           reading,
@@ -391,53 +426,16 @@ public final class ReadingsViewModel {
     }
     revisions.forgetUndo();
     bench.readings().add(reading);
-    diagnoseAndStore(stage, reading, typed);
-  }
-
-  private void diagnoseAndStore(Stage stage, Reading added, String typed) {
-    List<Reading> taken = List.copyOf(bench.readings());
-    String caseId = bench.openCaseProperty().get().id();
-    Diagnoser ready = diagnoserStage == stage ? diagnoser : null;
-    BoardModel boardModel = bench.boardModelProperty().get();
-    Casework casework = bench.casework();
-    boolean mains = bench.mainsPoweredProperty().get();
     thinking.set(true);
-    bench
-        .tasks()
-        .run(
-            "Ranking the suspects",
-            () -> {
-              Diagnoser d =
-                  ready != null ? ready : casework.diagnoser(stage, boardModel).mainsPowered(mains);
-              return casework.addReadings(
-                  caseId,
-                  d,
-                  new ReadingSet(MeterSpec.DEFAULT, taken),
-                  List.of(added),
-                  Diagnoser.DEFAULT_TOP);
-            },
-            stored -> {
-              thinking.set(false);
-              bench.rememberId(added, stored.readings().get(0).id());
-              if (bench.stageProperty().get() == stage) {
-                bench.diagnosisProperty().set(stored.diagnosis());
-                refresh();
-              }
-            },
-            e -> {
-              thinking.set(false);
-              bench.readings().remove(added);
-              if (pad.textProperty().get().isEmpty()) {
-                pad.textProperty().set(typed); // what was typed is not lost
-              }
-              refresh();
-              bench
-                  .problems()
-                  .failed(
-                      "Could not take this reading",
-                      e,
-                      "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
-            });
+    revisions.add(
+        stage,
+        reading,
+        () -> thinking.set(false),
+        () -> {
+          if (pad.textProperty().get().isEmpty()) {
+            pad.textProperty().set(typed); // what was typed is not lost
+          }
+        });
   }
 
   /** Rebuilds the rows, the top suspects and the next probe from the bench. */
@@ -448,99 +446,26 @@ public final class ReadingsViewModel {
     List<Suspect> top =
         diagnosis == null ? List.of() : diagnosis.suspects().stream().limit(TOP).toList();
     topSuspects.setAll(top);
-    verdict.set(diagnosis == null || bench.readings().isEmpty() ? "" : verdictLine(diagnosis));
-    chain.set(bench.readings().isEmpty() ? "" : chainLine(stage, top));
-    List<ReadingRow> list = new ArrayList<>();
-    for (Reading r : bench.readings()) {
-      double low = Double.NaN;
-      double high = Double.NaN;
-      if (volts != null
-          && volts.solved()
-          && r.kind() == Reading.Kind.DC
-          && volts.nominal().containsKey(r.at())) {
-        low = volts.low().get(r.at());
-        high = volts.high().get(r.at());
-      }
-      Map<String, Double> predictions = new java.util.LinkedHashMap<>();
-      for (Suspect s : top) {
-        Double v = s.predicted().get(r.at());
-        if (v != null && !s.fault().equals("healthy")) {
-          predictions.put(Words.fault(s.fault()), v);
-        }
-      }
-      String title =
-          stage == null
-              ? r.at()
-              : ProbePoint.of(stage, r.at(), r.kind(), r.hz())
-                  .map(ProbePoint::title)
-                  .orElse(r.at());
-      list.add(new ReadingRow(r, title, low, high, predictions, null, false));
-    }
-    // Newest first: the reading just taken is where the eye goes.
-    java.util.Collections.reverse(list);
-    // Struck readings last, greyed, newest strike first: kept in sight, left out of the diagnosis.
-    List<Bench.StruckReading> struck = new ArrayList<>(bench.struckReadings());
-    java.util.Collections.reverse(struck);
-    for (Bench.StruckReading s : struck) {
-      Reading r = s.reading();
-      String title =
-          stage == null
-              ? r.at()
-              : ProbePoint.of(stage, r.at(), r.kind(), r.hz())
-                  .map(ProbePoint::title)
-                  .orElse(r.at());
-      list.add(new ReadingRow(r, title, Double.NaN, Double.NaN, Map.of(), s.struckAt(), true));
-    }
+    verdict.set(
+        diagnosis == null || bench.readings().isEmpty() ? "" : ReadingsText.verdictLine(diagnosis));
+    chain.set(bench.readings().isEmpty() ? "" : ReadingsText.chainLine(stage, top));
+    List<ReadingRow> list = cards.rows(stage, bench, volts, top);
     rows.setAll(list);
     if (stage != null && !probeChosenByHand) {
-      probe.set(nextProbe(stage, diagnosis));
+      probe.set(ProbePoint.next(stage, diagnosis, bench.readings()));
     }
-  }
-
-  static String verdictLine(Diagnosis diagnosis) {
-    return switch (diagnosis.verdict()) {
-      case HEALTHY -> "The readings fit a healthy stage.";
-      case FAULT ->
-          diagnosis.suspects().isEmpty()
-              ? "The readings show a fault."
-              : "Most likely: "
-                  + Words.fault(diagnosis.suspects().get(0).fault())
-                  + " ("
-                  + Words.percent(diagnosis.suspects().get(0).probability())
-                  + ")";
-      case INCONCLUSIVE -> "Not clear yet: take the next probe.";
-    };
-  }
-
-  /**
-   * Returns the point to probe next: the first supply pin not yet read, then the diagnosis's best
-   * probe, else null when there is nothing more worth probing.
-   */
-  ProbePoint nextProbe(Stage stage, Diagnosis diagnosis) {
-    for (ProbePoint rail : ProbePoint.rails(stage)) {
-      if (!isRead(rail.at(), Reading.Kind.DC)) {
-        return rail;
-      }
+    ProbeAdvice ohms = null;
+    if (diagnosis != null && !bench.readings().isEmpty()) {
+      ohms =
+          diagnosis.nextProbes().stream()
+              .filter(a -> a.kind() == Reading.Kind.OHMS)
+              .findFirst()
+              .orElse(null);
     }
-    if (diagnosis == null || bench.readings().isEmpty()) {
-      return null;
+    boolean leads = ohms != null && diagnosis.nextProbes().get(0) == ohms;
+    if (revisions.correctingProperty().get() == null) {
+      powerOff.suggest(stage, ohms, leads);
     }
-    for (ProbeAdvice advice : diagnosis.nextProbes()) {
-      if (advice.kind() == Reading.Kind.OHMS) {
-        // A power-off check has two points and needs the screen's power-off mode (not built yet);
-        // the suspects screen lists it in words.
-        continue;
-      }
-      Optional<ProbePoint> point = ProbePoint.of(stage, advice.at(), advice.kind(), advice.hz());
-      if (point.isPresent()) {
-        return point.get().because(advice.why());
-      }
-    }
-    return null;
-  }
-
-  private boolean isRead(String at, Reading.Kind kind) {
-    return bench.readings().stream().anyMatch(r -> r.at().equals(at) && r.kind() == kind);
   }
 
   /** Goes on to the suspects screen. */

@@ -34,6 +34,7 @@ final class Revisions {
   private final Runnable refreshed;
   private final StringProperty undoText = new SimpleStringProperty("");
   private final ObjectProperty<Reading> correcting = new SimpleObjectProperty<>();
+  private final StringProperty correctingText = new SimpleStringProperty("");
   private final BooleanHolder busy = new BooleanHolder();
   private Runnable undo;
 
@@ -47,6 +48,20 @@ final class Revisions {
     this.bench = bench;
     this.readyDiagnoser = readyDiagnoser;
     this.refreshed = refreshed;
+    correcting.addListener(
+        (o, was, now) ->
+            correctingText.set(
+                now == null
+                    ? ""
+                    : "Correcting "
+                        + describe(now)
+                        + ": type the right value and tap Add reading. The wrong one stays in"
+                        + " the history, struck out."));
+  }
+
+  /** The line that says which reading is being corrected; empty when none is. */
+  StringProperty correctingTextProperty() {
+    return correctingText;
   }
 
   /**
@@ -119,7 +134,12 @@ final class Revisions {
   void finishCorrection(Reading right, Consumer<Void> onFailure) {
     Reading wrong = correcting.get();
     correcting.set(null);
-    String what = describe(wrong) + " → " + Words.measured(right.value());
+    String what =
+        describe(wrong)
+            + " → "
+            + (right.kind() == Reading.Kind.OHMS
+                ? Words.ohms(right.value())
+                : Words.measured(right.value()));
     revise(
         List.of(wrong),
         List.of(),
@@ -127,6 +147,56 @@ final class Revisions {
         "Corrected " + what + ".",
         () -> revise(List.of(right), List.of(wrong), null, "", null, null),
         onFailure);
+  }
+
+  /**
+   * Stores a reading just added to the bench with the suspect list of every reading that stands, in
+   * the background; on refusal takes it off the bench again and says why.
+   *
+   * @param done called when the work ends, either way
+   * @param refused called after a refusal (the caller gives the typed text back to the pad)
+   */
+  void add(Stage stage, Reading added, Runnable done, Runnable refused) {
+    List<Reading> taken = List.copyOf(bench.readings());
+    String caseId = bench.openCaseProperty().get().id();
+    Diagnoser ready = readyDiagnoser.apply(stage);
+    BoardModel boardModel = bench.boardModelProperty().get();
+    Casework casework = bench.casework();
+    boolean mains = bench.mainsPoweredProperty().get();
+    bench
+        .tasks()
+        .run(
+            "Ranking the suspects",
+            () -> {
+              Diagnoser d =
+                  ready != null ? ready : casework.diagnoser(stage, boardModel).mainsPowered(mains);
+              return casework.addReadings(
+                  caseId,
+                  d,
+                  new ReadingSet(MeterSpec.DEFAULT, taken),
+                  List.of(added),
+                  Diagnoser.DEFAULT_TOP);
+            },
+            stored -> {
+              done.run();
+              bench.rememberId(added, stored.readings().get(0).id());
+              if (bench.stageProperty().get() == stage) {
+                bench.diagnosisProperty().set(stored.diagnosis());
+                refreshed.run();
+              }
+            },
+            e -> {
+              done.run();
+              removeByIdentity(bench.readings(), added);
+              refused.run();
+              refreshed.run();
+              bench
+                  .problems()
+                  .failed(
+                      "Could not take this reading",
+                      e,
+                      "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
+            });
   }
 
   /** Undoes the last strike, restore or correction. */
@@ -151,7 +221,11 @@ final class Revisions {
     return true;
   }
 
-  private static String describe(Reading r) {
+  /** Returns a reading in a few words: "U1 pin 8 1.190 V", "SUM to OUT 46.8 kΩ (power off)". */
+  static String describe(Reading r) {
+    if (r.kind() == Reading.Kind.OHMS) {
+      return Words.pin(r.at()) + " to " + Words.pin(r.to()) + " " + Words.ohms(r.value());
+    }
     return Words.pin(r.at())
         + " "
         + Words.measured(r.value())

@@ -78,9 +78,11 @@ public final class ValuePad extends VBox {
         String key = digits[row][col];
         if (key == null) {
           key =
-              model.quantityProperty().get() == ValuePadModel.Quantity.VOLTS
-                  ? ValuePadModel.SIGN
-                  : null;
+              switch (model.quantityProperty().get()) {
+                case VOLTS -> ValuePadModel.SIGN;
+                case METER_OHMS -> ValuePadModel.OVER_RANGE;
+                default -> null;
+              };
         }
         if (key != null) {
           keys.add(key(idPrefix, key, key), col, row);
@@ -105,6 +107,9 @@ public final class ValuePad extends VBox {
   static String legend(ValuePadModel.Quantity quantity) {
     return switch (quantity) {
       case OHMS -> "R marks the point in ohms (4R7 = 4.7 Ω), k = kilo (4k7 = 4.7 kΩ), M = mega.";
+      case METER_OHMS ->
+          "k = kilo (46k8 = 46.8 kΩ), M = mega, R marks the point in ohms; OL = the meter's"
+              + " over-range.";
       case FARADS -> "p = pico, n = nano, µ = micro (100n = 100 nF, 2u2 = 2.2 µF).";
       case VOLTS -> "m = milli (350m = 0.35 V), µ = micro, ± changes the sign.";
       case ZENER -> "A zener's marking: V marks the point (5V1 = 5.1 V, 12V = 12 V).";
@@ -131,6 +136,7 @@ public final class ValuePad extends VBox {
       case ValuePadModel.BACK -> "back";
       case ValuePadModel.CLEAR -> "clear";
       case ValuePadModel.SIGN -> "sign";
+      case ValuePadModel.OVER_RANGE -> "ol";
       case "M" -> "mega";
       case "m" -> "milli";
       default -> key;

@@ -28,6 +28,9 @@ public final class ValuePadModel {
   /** Key that changes the sign (volts only). */
   public static final String SIGN = "±";
 
+  /** Key for the ohmmeter's over-range, "OL" (ohms readings only): the value is +∞. */
+  public static final String OVER_RANGE = "OL";
+
   /** What the pad is for: it sets the unit, the prefixes offered and the hint. */
   public enum Quantity {
     // The largest plausible entries: 1000 V is the top range of a usual handheld meter (CAT III
@@ -40,7 +43,10 @@ public final class ValuePadModel {
     // 200 V (parts catalogues, from memory), ZenerMarking takes up to 400 V.
     ZENER("V", "V", ZenerMarking.MAX_VOLTS, "a zener's marking (up to 400 V)"),
     // A trimmer's wiper: the share of its travel from end 1, 0 to 1.
-    POSITION("", "", 1, "a wiper's travel (0 to 1)");
+    POSITION("", "", 1, "a wiper's travel (0 to 1)"),
+    // What an ohmmeter shows with the power off: up to 1 TΩ (the span of a resistor, as the
+    // readings contract takes it), or OL, its over-range.
+    METER_OHMS("Ω", "R", 1e12, "an ohms reading may be (up to 1 TΩ; tap OL for over-range)");
 
     private final String unit;
     private final String rkmLetter;
@@ -62,7 +68,7 @@ public final class ValuePadModel {
     /** Returns the prefix keys for this quantity, smallest first. */
     public java.util.List<String> prefixKeys() {
       return switch (this) {
-        case OHMS -> java.util.List.of("R", "k", "M");
+        case OHMS, METER_OHMS -> java.util.List.of("R", "k", "M");
         case FARADS -> java.util.List.of("p", "n", "u");
         case VOLTS -> java.util.List.of("u", "m");
         case ZENER -> java.util.List.of("V");
@@ -137,15 +143,24 @@ public final class ValuePadModel {
       case BACK -> text.set(now.isEmpty() ? "" : now.substring(0, now.length() - 1));
       case CLEAR -> text.set("");
       case SIGN -> text.set(now.startsWith("-") ? now.substring(1) : "-" + now);
-      default -> text.set(now + key);
+      case OVER_RANGE -> text.set(OVER_RANGE);
+      default -> text.set(isOverRange(now) ? key : now + key);
     }
   }
 
-  /** Sets the entry to a value (e.g. from the colour-code decoder). */
+  private static boolean isOverRange(String typed) {
+    return typed.strip().equalsIgnoreCase(OVER_RANGE);
+  }
+
+  /** Sets the entry to a value (e.g. from the colour-code decoder); +∞ of an ohms reading is OL. */
   public void setValue(double si) {
+    if (quantity.get() == Quantity.METER_OHMS && si == Double.POSITIVE_INFINITY) {
+      text.set(OVER_RANGE);
+      return;
+    }
     text.set(
         switch (quantity.get()) {
-          case OHMS -> SiValue.rkm(si);
+          case OHMS, METER_OHMS -> SiValue.rkm(si);
           case ZENER -> ZenerMarking.format(si);
           case POSITION -> share(si);
           default -> plain(SiValue.format(si, ""));
@@ -170,6 +185,13 @@ public final class ValuePadModel {
       problem.set("");
       return;
     }
+    if (isOverRange(now) && quantity.get() == Quantity.METER_OHMS) {
+      value.set(Double.POSITIVE_INFINITY);
+      problem.set("");
+      hint.set("");
+      reading.set("= OL, over range: nothing the meter can measure connects the two points");
+      return;
+    }
     double parsed;
     try {
       parsed = quantity.get() == Quantity.ZENER ? ZenerMarking.parse(now) : SiValue.parse(now);
@@ -185,7 +207,10 @@ public final class ValuePadModel {
       value.set(null);
       reading.set("");
       hint.set("");
-      problem.set("A part value cannot be negative.");
+      problem.set(
+          q == Quantity.METER_OHMS
+              ? "An ohms reading cannot be negative: check the leads and the meter's range."
+              : "A part value cannot be negative.");
       return;
     }
     if (q == Quantity.POSITION && parsed > 1) {
@@ -225,6 +250,7 @@ public final class ValuePadModel {
   private String examples() {
     return switch (quantity.get()) {
       case OHMS -> "4k7, 470R, 10k, 1M5";
+      case METER_OHMS -> "46k8, 0.4, 120R, 1M2 or OL";
       case FARADS -> "100n, 2u2, 47p";
       case VOLTS -> "14.96, -0.62, 350m";
       case ZENER -> "5V1, 12V, 3.3V";
@@ -234,7 +260,11 @@ public final class ValuePadModel {
 
   /** Returns the nearest E24 (resistors) or E12 (capacitors) value when the value is not one. */
   static String preferredHint(Quantity q, double parsed) {
-    if (q == Quantity.VOLTS || q == Quantity.ZENER || q == Quantity.POSITION || parsed <= 0) {
+    if (q == Quantity.VOLTS
+        || q == Quantity.ZENER
+        || q == Quantity.POSITION
+        || q == Quantity.METER_OHMS
+        || parsed <= 0) {
       return "";
     }
     ESeries series = q == Quantity.OHMS ? ESeries.E24 : ESeries.E12;

@@ -65,6 +65,17 @@ public final class Words {
     return Double.isFinite(volts) ? Engineering.reading(volts, MeterSpec.DEFAULT) : "—";
   }
 
+  /**
+   * Returns ohms as the meter showed them, e.g. {@code 46.8 kΩ}, {@code 0.4 Ω}; {@code OL} for the
+   * over-range (+∞); "—" for NaN.
+   */
+  public static String ohms(double ohms) {
+    if (ohms == Double.POSITIVE_INFINITY) {
+      return "OL";
+    }
+    return Double.isFinite(ohms) ? Engineering.of(ohms, "Ω", 4) : "—";
+  }
+
   /** Returns a healthy band, e.g. {@code ±5 mV} or {@code 2.495 V to 2.505 V}. */
   public static String band(double low, double high) {
     return Double.isFinite(low) && Double.isFinite(high) ? Engineering.band(low, high) : "—";

@@ -158,4 +158,67 @@ class PackageAndBandRenderTest {
             true,
             null));
   }
+
+  @Test
+  void packageDrawing_readingValuesBesidePins_areNeverCutShort() {
+    // Regression: in the readings screen's panel (about 352 px of room) a pin's reading such as
+    // "−13.47 V" was drawn as "−13.4…". The text column now widens for it, the pins still 48 px.
+    List<String> shown =
+        Fx.call(
+            () -> {
+              PackageDrawing drawing = new PackageDrawing();
+              drawing.show(PackageType.DUAL_8, "U1", Map.of());
+              drawing.setPinText(1, "\u221213.47\u00a0V");
+              drawing.setPinText(4, "\u221214.97\u00a0V");
+              drawing.setPinText(8, "14.96\u00a0V");
+              drawing.highlight(1);
+              Fx.render(drawing, 352, 280);
+              List<String> texts = new java.util.ArrayList<>();
+              collect(drawing, texts);
+              Node pad = ((javafx.scene.Group) drawing.lookup("#pin-1")).getChildren().get(0);
+              assertThat(pad.localToScene(pad.getBoundsInLocal()).getWidth())
+                  .isGreaterThanOrEqualTo(48);
+              return texts;
+            });
+    assertThat(shown).contains("\u221213.47\u00a0V", "\u221214.97\u00a0V", "14.96\u00a0V");
+    assertThat(shown).noneMatch(t -> t.endsWith("\u2026"));
+  }
+
+  @Test
+  void bandChart_ohms_onALogAxisWithOverRange() {
+    // 47 kΩ ±1 % healthy (R2 alone, series–parallel rules), the meter showing OL, an open R2
+    // predicting OL: the axis holds decades of ohms and an OL zone.
+    List<String> shown =
+        Fx.call(
+            () -> {
+              BandChart chart = new BandChart();
+              chart.showOhms(
+                  "SUM to OUT",
+                  46_530,
+                  47_470,
+                  Double.POSITIVE_INFINITY,
+                  List.of(
+                      new BandChart.Marker("R2 open", Double.POSITIVE_INFINITY),
+                      new BandChart.Marker("R1 shorted", 47_000)));
+              Fx.render(chart, 560, 150);
+              assertThat(chart.lookup("#healthy-band")).isNotNull();
+              assertThat(chart.showsOhms()).isTrue();
+              List<String> texts = new java.util.ArrayList<>();
+              collect(chart, texts);
+              return texts;
+            });
+    assertThat(shown)
+        .contains("healthy 46.5\u00a0kΩ to 47.5\u00a0kΩ", "OL  outside", "OL", "R2 open")
+        .anyMatch(t -> t.endsWith("kΩ") && !t.startsWith("healthy"));
+  }
+
+  private static void collect(javafx.scene.Parent parent, List<String> texts) {
+    for (Node n : parent.getChildrenUnmodifiable()) {
+      if (n instanceof javafx.scene.text.Text t) {
+        texts.add(t.getText());
+      } else if (n instanceof javafx.scene.Parent p) {
+        collect(p, texts);
+      }
+    }
+  }
 }

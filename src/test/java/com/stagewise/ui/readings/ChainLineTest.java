@@ -21,7 +21,7 @@ class ChainLineTest {
   void chainStage_showsEachSuspectAtItsSection() {
     Stage chain = StageSheet.read(Path.of("data/stages/tarnwell-ps4-channel-chain.stage.json"));
     String line =
-        ReadingsViewModel.chainLine(
+        ReadingsText.chainLine(
             chain,
             List.of(
                 suspect("U1C:stuck-high", 0.41),
@@ -40,6 +40,6 @@ class ChainLineTest {
   @Test
   void singleSection_hasNoChainLine() {
     Stage one = StageSheet.read(Path.of("data/stages/larkspur-sm8-line-driver.stage.json"));
-    assertThat(ReadingsViewModel.chainLine(one, List.of(suspect("R15:open", 0.9)))).isEmpty();
+    assertThat(ReadingsText.chainLine(one, List.of(suspect("R15:open", 0.9)))).isEmpty();
   }
 }

@@ -156,4 +156,37 @@ class ValuePadModelTest {
     assertThat(pad.textProperty().get()).isEqualTo("0.3");
     assertThat(pad.valueProperty().get()).isEqualTo(0.3);
   }
+
+  @Test
+  void meterOhms_kAndMKeys_andOverRange() {
+    // An ohmmeter's display: 46.8 kΩ typed as 46k8 (IEC 60062 RKM code); OL is its over-range.
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.METER_OHMS);
+    for (String key : new String[] {"4", "6", "k", "8"}) {
+      pad.press(key);
+    }
+    assertThat(pad.valueProperty().get()).isEqualTo(46_800.0);
+    assertThat(pad.hintProperty().get()).isEmpty();
+    pad.press(ValuePadModel.OVER_RANGE);
+    assertThat(pad.textProperty().get()).isEqualTo("OL");
+    assertThat(pad.valueProperty().get()).isEqualTo(Double.POSITIVE_INFINITY);
+    assertThat(pad.readingProperty().get()).startsWith("= OL");
+    // A digit after OL starts a new value.
+    pad.press("1");
+    pad.press("M");
+    pad.press("2");
+    assertThat(pad.valueProperty().get()).isEqualTo(1.2e6);
+    pad.setValue(Double.POSITIVE_INFINITY);
+    assertThat(pad.textProperty().get()).isEqualTo("OL");
+  }
+
+  @Test
+  void meterOhms_negativeIsRefusedInWords_andOlMeansNothingForVolts() {
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.METER_OHMS);
+    pad.textProperty().set("-5");
+    assertThat(pad.hasValue()).isFalse();
+    assertThat(pad.problemProperty().get()).contains("cannot be negative");
+    ValuePadModel volts = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+    volts.textProperty().set("OL");
+    assertThat(volts.hasValue()).isFalse();
+  }
 }

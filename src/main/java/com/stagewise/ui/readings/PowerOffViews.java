@@ -1,0 +1,180 @@
+package com.stagewise.ui.readings;
+
+import com.stagewise.diagnosis.ProbeAdvice;
+import javafx.beans.binding.Bindings;
+import javafx.beans.value.ObservableValue;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/**
+ * The power-off parts of the readings screen: the switch between powered and power-off readings,
+ * the caution shown while the power is off, the offer of a power-off check the diagnosis ranks
+ * first, and the pair of points to read between.
+ */
+final class PowerOffViews {
+  private PowerOffViews() {}
+
+  /** The switch between the two modes, with the offer of the suggested power-off check. */
+  static Node modeBar(ReadingsViewModel model) {
+    PowerOffMode mode = model.powerOff();
+    ToggleGroup group = new ToggleGroup();
+    ToggleButton volts = new ToggleButton("Powered: volts");
+    volts.setId("mode-volts");
+    ToggleButton ohms = new ToggleButton("Power off: ohms");
+    ohms.setId("mode-ohms");
+    for (ToggleButton b : new ToggleButton[] {volts, ohms}) {
+      b.setToggleGroup(group);
+      b.getStyleClass().add("mode-switch");
+      b.setMinWidth(Region.USE_PREF_SIZE);
+    }
+    volts.setSelected(!mode.activeProperty().get());
+    ohms.setSelected(mode.activeProperty().get());
+    volts.setOnAction(e -> model.setPowerOff(false));
+    ohms.setOnAction(e -> model.setPowerOff(true));
+    // A toggle group lets a tap unselect; the mode is the model's, so the buttons follow it.
+    mode.activeProperty()
+        .addListener(
+            (o, was, on) -> {
+              volts.setSelected(!on);
+              ohms.setSelected(on);
+            });
+    group
+        .selectedToggleProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == null) {
+                (mode.activeProperty().get() ? ohms : volts).setSelected(true);
+              }
+            });
+    Label offer = new Label();
+    offer.setId("ohms-offer");
+    offer.setWrapText(true);
+    offer.setMinHeight(Region.USE_PREF_SIZE);
+    offer
+        .textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () -> offerText(mode.suggestedProperty().get()), mode.suggestedProperty()));
+    Button take = new Button("Take it with the power off");
+    take.setId("take-ohms");
+    take.getStyleClass().add("primary");
+    take.setMinWidth(Region.USE_PREF_SIZE);
+    take.setOnAction(e -> model.takeSuggestedOhmsCheck());
+    HBox offerBox = new HBox(10, offer, take);
+    offerBox.setAlignment(Pos.CENTER_LEFT);
+    offerBox.getStyleClass().add("ohms-offer");
+    HBox.setHgrow(offerBox, Priority.ALWAYS);
+    HBox.setHgrow(offer, Priority.ALWAYS);
+    showWhen(offerBox, mode.leadingProperty().and(mode.activeProperty().not()));
+    Node banner = banner(model);
+    HBox.setHgrow(banner, Priority.ALWAYS);
+    VBox switches = new VBox(6, volts, ohms);
+    switches.setMinWidth(Region.USE_PREF_SIZE);
+    volts.setMaxWidth(Double.MAX_VALUE);
+    ohms.setMaxWidth(Double.MAX_VALUE);
+    HBox bar = new HBox(10, switches, offerBox, banner);
+    bar.setAlignment(Pos.CENTER_LEFT);
+    return bar;
+  }
+
+  private static String offerText(ProbeAdvice advice) {
+    if (advice == null) {
+      return "";
+    }
+    return "A power-off check tells the suspects apart best: ohms from "
+        + com.stagewise.ui.words.Words.pin(advice.at())
+        + " to "
+        + com.stagewise.ui.words.Words.pin(advice.to())
+        + ".";
+  }
+
+  /** The caution, shown for as long as the screen is in power-off mode. */
+  private static Node banner(ReadingsViewModel model) {
+    Label title = new Label("Power off — ohms readings");
+    title.getStyleClass().add("poweroff-title");
+    Label text = new Label(PowerOffMode.CAUTION);
+    text.setId("poweroff-caution");
+    text.setWrapText(true);
+    text.setMinHeight(Region.USE_PREF_SIZE);
+    VBox banner = new VBox(2, title, text);
+    banner.setId("poweroff-banner");
+    banner.getStyleClass().add("poweroff-banner");
+    showWhen(banner, model.powerOff().activeProperty());
+    return banner;
+  }
+
+  /** What to read in power-off mode: the call, the two points (tap one to fill it), the why. */
+  static Node pairHeader(ReadingsViewModel model) {
+    PowerOffMode mode = model.powerOff();
+    Label heading = new Label("Power-off check");
+    heading.getStyleClass().add("section-title");
+    Label call = new Label();
+    call.setId("ohms-call");
+    call.getStyleClass().add("ohms-call");
+    call.setWrapText(true);
+    call.setMinHeight(Region.USE_PREF_SIZE);
+    call.textProperty().bind(mode.call());
+    Button from = slot("ohms-from", "From", mode.fromProperty(), false, mode);
+    Button to = slot("ohms-to", "To", mode.toProperty(), true, mode);
+    Label why = new Label();
+    why.setId("ohms-why");
+    why.getStyleClass().add("probe-why");
+    why.setWrapText(true);
+    why.setMinHeight(Region.USE_PREF_SIZE);
+    why.textProperty().bind(mode.whyProperty());
+    why.getStyleClass().add("ohms-why");
+    VBox box = new VBox(6, heading, call, from, to, why);
+    showWhen(box, mode.activeProperty());
+    return box;
+  }
+
+  private static Button slot(
+      String id,
+      String word,
+      ObservableValue<ProbePoint> point,
+      boolean second,
+      PowerOffMode mode) {
+    Button b = new Button();
+    b.setId(id);
+    b.getStyleClass().add("pair-slot");
+    b.setMaxWidth(Double.MAX_VALUE);
+    b.setWrapText(true);
+    b.setMinHeight(Region.USE_PREF_SIZE);
+    b.setAlignment(Pos.CENTER_LEFT);
+    b.textProperty()
+        .bind(
+            Bindings.createStringBinding(
+                () ->
+                    word
+                        + ":  "
+                        + (point.getValue() == null
+                            ? "(tap a point)"
+                            : point.getValue().shortName()),
+                point));
+    b.setOnAction(e -> mode.fillNext(second));
+    Runnable lit =
+        () -> {
+          boolean on = mode.fillingToProperty().get() == second;
+          b.getStyleClass().remove("filling");
+          if (on) {
+            b.getStyleClass().add("filling");
+          }
+        };
+    mode.fillingToProperty().addListener((o, a, c) -> lit.run());
+    lit.run();
+    return b;
+  }
+
+  static void showWhen(Node node, ObservableValue<Boolean> condition) {
+    node.visibleProperty().bind(Bindings.createBooleanBinding(condition::getValue, condition));
+    node.managedProperty().bind(node.visibleProperty());
+  }
+}
