@@ -372,6 +372,9 @@ public final class ReadingsView {
       Label name = new Label(rank++ + ".  " + Words.fault(s.fault()));
       name.getStyleClass().add("strong");
       name.setMinWidth(0);
+      // A long name wraps rather than losing its end ("U1 pin 1 lifted (open joint)").
+      name.setWrapText(true);
+      name.setMinHeight(Region.USE_PREF_SIZE);
       Region bar = new Region();
       bar.getStyleClass().add("suspect-bar");
       bar.setPrefWidth(Math.max(2, 90 * s.probability()));
