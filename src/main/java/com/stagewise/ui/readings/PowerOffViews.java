@@ -10,7 +10,6 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.HBox;
-import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
@@ -68,21 +67,13 @@ final class PowerOffViews {
     take.getStyleClass().add("primary");
     take.setMinWidth(Region.USE_PREF_SIZE);
     take.setOnAction(e -> model.takeSuggestedOhmsCheck());
-    HBox offerBox = new HBox(10, offer, take);
-    offerBox.setAlignment(Pos.CENTER_LEFT);
+    VBox offerBox = new VBox(6, offer, take);
     offerBox.getStyleClass().add("ohms-offer");
-    HBox.setHgrow(offerBox, Priority.ALWAYS);
-    HBox.setHgrow(offer, Priority.ALWAYS);
     showWhen(offerBox, mode.leadingProperty().and(mode.activeProperty().not()));
-    Node banner = banner(model);
-    HBox.setHgrow(banner, Priority.ALWAYS);
-    VBox switches = new VBox(6, volts, ohms);
-    switches.setMinWidth(Region.USE_PREF_SIZE);
-    volts.setMaxWidth(Double.MAX_VALUE);
-    ohms.setMaxWidth(Double.MAX_VALUE);
-    HBox bar = new HBox(10, switches, offerBox, banner);
-    bar.setAlignment(Pos.CENTER_LEFT);
-    return bar;
+    HBox switches = new HBox(6, volts, ohms);
+    switches.setAlignment(Pos.CENTER_LEFT);
+    // In the probe column: the value pad and its Add reading button stay where they were.
+    return new VBox(8, switches, offerBox, banner(model));
   }
 
   private static String offerText(ProbeAdvice advice) {

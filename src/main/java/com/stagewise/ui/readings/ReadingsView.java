@@ -58,7 +58,7 @@ public final class ReadingsView {
     HBox.setHgrow(results, Priority.ALWAYS);
     HBox columns = new HBox(12, probe, pad, results);
     VBox.setVgrow(columns, Priority.ALWAYS);
-    root.getChildren().addAll(PowerOffViews.modeBar(model), columns);
+    root.getChildren().add(columns);
     model.probeProperty().addListener((o, was, now) -> showProbe(now));
     PowerOffMode mode = model.powerOff();
     mode.fromProperty().addListener((o, was, now) -> showProbe(model.probeProperty().get()));
@@ -177,7 +177,13 @@ public final class ReadingsView {
     VBox powered = new VBox(8, heading, call, title, why);
     PowerOffViews.showWhen(powered, model.powerOff().activeProperty().not());
     box.getChildren()
-        .addAll(powered, PowerOffViews.pairHeader(model), drawingHolder, other, suggested);
+        .addAll(
+            PowerOffViews.modeBar(model),
+            powered,
+            PowerOffViews.pairHeader(model),
+            drawingHolder,
+            other,
+            suggested);
     return box;
   }
 
