@@ -64,7 +64,7 @@ public final class BenchApp {
     window.screen(Step.UNIT, startView::root);
     StageViewModel stage = new StageViewModel(bench);
     if (sheet != null) {
-      stage.openOnArrival(sheet);
+      stage.libraryModel().openOnArrival(sheet);
       overlays.show(
           "A stage sheet to open",
           "Stagewise was started with the stage sheet " + sheet.getFileName() + ".",

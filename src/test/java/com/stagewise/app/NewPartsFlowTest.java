@@ -4,7 +4,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
-import com.stagewise.ui.stage.StageViewModel;
+import com.stagewise.ui.stage.LibraryEntry;
+import com.stagewise.ui.stage.PartRow;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -197,10 +198,10 @@ class NewPartsFlowTest {
 
   /** The text a row shows: a part's line, a library entry's title. */
   private static String shownText(Object item) {
-    if (item instanceof StageViewModel.PartRow row) {
+    if (item instanceof PartRow row) {
       return row.line();
     }
-    if (item instanceof StageViewModel.LibraryEntry entry) {
+    if (item instanceof LibraryEntry entry) {
       return entry.title();
     }
     return String.valueOf(item);

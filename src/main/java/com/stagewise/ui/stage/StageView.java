@@ -53,7 +53,7 @@ public final class StageView {
     root.getStyleClass().add("screen");
     root.getStylesheets().add(StageView.class.getResource("stage.css").toExternalForm());
     root.setId("screen-stage");
-    VBox library = libraryPanel();
+    VBox library = new LibraryPanel(model, root).build(templatePanel());
     library.setPrefWidth(250);
     library.setMinWidth(230);
     VBox middle = middlePanel();
@@ -79,109 +79,6 @@ public final class StageView {
   /** Reloads the library (when the screen is shown again for another unit). */
   public void refresh() {
     model.loadLibrary();
-  }
-
-  private VBox libraryPanel() {
-    VBox box = new VBox(10);
-    box.getStyleClass().add("panel");
-    ToggleGroup source = new ToggleGroup();
-    ToggleButton fromLibrary = new ToggleButton("Library");
-    fromLibrary.setId("stage-from-library");
-    ToggleButton fromTemplate = new ToggleButton("Template");
-    fromTemplate.setId("stage-from-template");
-    fromLibrary.setToggleGroup(source);
-    fromTemplate.setToggleGroup(source);
-    fromLibrary.setSelected(true);
-    fromLibrary.getStyleClass().add("source-toggle");
-    fromTemplate.getStyleClass().add("source-toggle");
-    source
-        .selectedToggleProperty()
-        .addListener(
-            (o, was, now) -> {
-              if (now == null) {
-                was.setSelected(true);
-              }
-            });
-    ListView<StageViewModel.LibraryEntry> list = new ListView<>(model.library());
-    list.setId("stage-library");
-    VBox.setVgrow(list, Priority.ALWAYS);
-    list.setCellFactory(
-        v ->
-            new ListCell<>() {
-              {
-                setPrefWidth(0);
-              }
-
-              @Override
-              protected void updateItem(StageViewModel.LibraryEntry entry, boolean empty) {
-                super.updateItem(entry, empty);
-                setText(empty || entry == null ? null : entry.title());
-                setWrapText(true);
-              }
-            });
-    list.getSelectionModel()
-        .selectedItemProperty()
-        .addListener(
-            (o, was, entry) -> {
-              if (entry != null) {
-                model.choose(entry.stage());
-              }
-            });
-    Label note = new Label();
-    note.getStyleClass().add("hint");
-    note.setWrapText(true);
-    note.textProperty().bind(model.libraryNoteProperty());
-    VBox libraryBox = new VBox(8, list, note);
-    VBox.setVgrow(libraryBox, Priority.ALWAYS);
-    VBox templateBox = templatePanel();
-    VBox.setVgrow(templateBox, Priority.ALWAYS);
-    libraryBox.visibleProperty().bind(fromLibrary.selectedProperty());
-    libraryBox.managedProperty().bind(fromLibrary.selectedProperty());
-    templateBox.visibleProperty().bind(fromTemplate.selectedProperty());
-    templateBox.managedProperty().bind(fromTemplate.selectedProperty());
-    Button edit = new Button("Edit stage");
-    edit.setId("stage-edit");
-    edit.disableProperty().bind(model.stageProperty().isNull());
-    edit.setOnAction(e -> model.openEditor(false));
-    Button fresh = new Button("New stage");
-    fresh.setId("stage-new");
-    fresh.setOnAction(e -> model.openEditor(true));
-    // Stage sheets as files: from a shared folder or a USB stick, and back.
-    Button open = new Button("Open file…");
-    open.setId("stage-open-file");
-    open.setOnAction(e -> chooseSheet(false).ifPresent(model::importSheet));
-    Button save = new Button("Save to file…");
-    save.setId("stage-save-file");
-    save.disableProperty().bind(model.stageProperty().isNull());
-    save.setOnAction(e -> chooseSheet(true).ifPresent(model::exportSheet));
-    box.getChildren()
-        .addAll(
-            new HBox(6, fromLibrary, fromTemplate),
-            libraryBox,
-            templateBox,
-            new HBox(6, edit, fresh),
-            new HBox(6, open, save));
-    return box;
-  }
-
-  /** Asks for a stage sheet file to open, or where to save one. */
-  private java.util.Optional<java.nio.file.Path> chooseSheet(boolean forSaving) {
-    javafx.stage.FileChooser chooser = new javafx.stage.FileChooser();
-    chooser.setTitle(forSaving ? "Save the stage sheet" : "Open a stage sheet");
-    chooser
-        .getExtensionFilters()
-        .addAll(
-            new javafx.stage.FileChooser.ExtensionFilter("Stage sheets", "*.stage.json"),
-            new javafx.stage.FileChooser.ExtensionFilter("All files", "*.*"));
-    var stage = model.stageProperty().get();
-    if (forSaving && stage != null) {
-      chooser.setInitialFileName(
-          stage.title().replaceAll("[^A-Za-z0-9._-]+", "-").replaceAll("^-+|-+$", "")
-              + ".stage.json");
-    }
-    var window = root.getScene() == null ? null : root.getScene().getWindow();
-    java.io.File file = forSaving ? chooser.showSaveDialog(window) : chooser.showOpenDialog(window);
-    return java.util.Optional.ofNullable(file).map(java.io.File::toPath);
   }
 
   private VBox templatePanel() {
@@ -213,7 +110,7 @@ public final class StageView {
     model
         .parameters()
         .addListener(
-            (javafx.collections.ListChangeListener<StageViewModel.ParameterEntry>)
+            (javafx.collections.ListChangeListener<ParameterEntry>)
                 c -> {
                   form.getChildren().clear();
                   var t = model.templateProperty().get();
@@ -224,7 +121,7 @@ public final class StageView {
                     form.getChildren().add(about);
                   }
                   validation = new ValidationSupport();
-                  for (StageViewModel.ParameterEntry entry : model.parameters()) {
+                  for (ParameterEntry entry : model.parameters()) {
                     Label label = new Label(entry.label());
                     label.setWrapText(true);
                     label.getStyleClass().add("parameter-label");
@@ -317,14 +214,14 @@ public final class StageView {
             });
     Label partsTitle = new Label("Parts — tap one to check or change its value");
     partsTitle.getStyleClass().add("section-title");
-    ListView<StageViewModel.PartRow> parts = new ListView<>(model.parts());
+    ListView<PartRow> parts = new ListView<>(model.parts());
     parts.setId("stage-parts");
     parts.setPrefHeight(200);
     parts.setCellFactory(
         v ->
             new ListCell<>() {
               @Override
-              protected void updateItem(StageViewModel.PartRow row, boolean empty) {
+              protected void updateItem(PartRow row, boolean empty) {
                 super.updateItem(row, empty);
                 setText(empty || row == null ? null : row.line());
               }

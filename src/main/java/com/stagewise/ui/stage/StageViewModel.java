@@ -1,22 +1,14 @@
 package com.stagewise.ui.stage;
 
-import com.stagewise.casework.LibraryStage;
-import com.stagewise.circuit.DeviceClass;
-import com.stagewise.circuit.DiodeClass;
 import com.stagewise.circuit.InvalidInputException;
-import com.stagewise.circuit.LedColour;
-import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.template.Parameter;
 import com.stagewise.circuit.template.StageTemplate;
 import com.stagewise.circuit.template.Templates;
-import com.stagewise.circuit.value.SiValue;
 import com.stagewise.circuit.value.Tolerance;
-import com.stagewise.circuit.value.ZenerMarking;
 import com.stagewise.history.record.BoardModel;
-import com.stagewise.interchange.StageSheet;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.SafetyCaution;
@@ -24,9 +16,7 @@ import com.stagewise.ui.Step;
 import com.stagewise.ui.editor.StageEditorModel;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
-import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -45,9 +35,8 @@ import javafx.collections.ObservableList;
  */
 public final class StageViewModel {
   private final Bench bench;
-  private final ObservableList<LibraryEntry> library = FXCollections.observableArrayList();
-  private final StringProperty libraryNote = new SimpleStringProperty("");
   private final ObjectProperty<Stage> stage = new SimpleObjectProperty<>();
+  private final StageLibraryModel libraryModel;
   private final ObservableList<PartRow> parts = FXCollections.observableArrayList();
   private final ObjectProperty<PartRow> selectedPart = new SimpleObjectProperty<>();
   private final StringProperty designator = new SimpleStringProperty("");
@@ -61,11 +50,11 @@ public final class StageViewModel {
   private final ObservableList<ParameterEntry> parameters = FXCollections.observableArrayList();
   private final StageEditorModel editor = new StageEditorModel();
   private final BooleanProperty editing = new SimpleBooleanProperty(false);
-  private Path arriving;
 
   /** Creates the stage screen's model on a bench. */
   public StageViewModel(Bench bench) {
     this.bench = bench;
+    this.libraryModel = new StageLibraryModel(bench, this::setStage, stage::get);
     selectedPart.addListener(
         (o, was, row) -> {
           if (row != null) {
@@ -128,7 +117,7 @@ public final class StageViewModel {
               designator.set("");
               pad.textProperty().set("");
             });
-    bench.boardModelProperty().addListener((o, was, now) -> library.clear());
+    bench.boardModelProperty().addListener((o, was, now) -> libraryModel.clear());
     template.addListener(
         (o, was, now) -> {
           List<ParameterEntry> entries = new ArrayList<>();
@@ -139,108 +128,6 @@ public final class StageViewModel {
           }
           parameters.setAll(entries);
         });
-  }
-
-  /**
-   * One parameter of the chosen template with the value typed for it.
-   *
-   * @param parameter the parameter
-   * @param value the value text, as in stage sheets ({@code 4k7}); starts at the default
-   */
-  public record ParameterEntry(Parameter parameter, StringProperty value) {
-    /**
-     * Returns the label shown beside the field in plain words, e.g. "Feedback resistor R2 (Ω)" or
-     * "Test signal amplitude (V, 0 for none)"; the template's short names (r2, vac) stay in files.
-     */
-    public String label() {
-      String words =
-          switch (parameter.name()) {
-            case "vin" -> "Test signal DC level";
-            case "vac" -> "Test signal amplitude (peak; 0 for none)";
-            case "hz" -> "Test signal frequency";
-            case "vcc" -> "Positive rail VCC";
-            case "vee" -> "Negative rail VEE";
-            case "class" -> "Op-amp class";
-            case "package" -> "Package of U1 (section A is used)";
-            case "diode" -> "Diode class";
-            case "colour" -> "LED colour";
-            default ->
-                Character.toUpperCase(parameter.meaning().charAt(0))
-                    + parameter.meaning().substring(1);
-          };
-      return words + (parameter.unit().isEmpty() ? "" : " (" + parameter.unit() + ")");
-    }
-
-    /**
-     * Returns the words the field takes, when it is a choice (op-amp class, package, diode class,
-     * LED colour); else empty.
-     */
-    public List<String> choices() {
-      return switch (parameter.name()) {
-        case "class" -> Arrays.stream(DeviceClass.values()).map(DeviceClass::word).toList();
-        case "package" -> Arrays.stream(PackageType.values()).map(PackageType::word).toList();
-        case "diode" ->
-            Arrays.stream(DiodeClass.values())
-                .filter(c -> c != DiodeClass.LED)
-                .map(DiodeClass::word)
-                .toList();
-        case "colour" -> Arrays.stream(LedColour.values()).map(LedColour::word).toList();
-        default -> List.of();
-      };
-    }
-
-    /** Whether the field takes a zener's marked voltage ({@code 5V1}). */
-    private boolean isZenerMarking() {
-      return parameter.meaning().startsWith("zener ");
-    }
-
-    /** Whether the field takes a trimmer's wiper position (0 to 1). */
-    private boolean isPosition() {
-      return parameter.meaning().contains("wiper position");
-    }
-
-    /**
-     * Returns what is wrong with {@code text} for this field, in plain words, or the empty string
-     * when it is a value the field takes (checked as the technician types).
-     */
-    public String problem(String text) {
-      String typed = text == null ? "" : text.strip();
-      if (!choices().isEmpty()) {
-        return choices().contains(typed) ? "" : "Choose one of " + String.join(", ", choices());
-      }
-      if (typed.isEmpty()) {
-        return "Type a value, e.g. " + parameter.defaultValue();
-      }
-      if (typed.equals("none") && parameter.meaning().contains("none")) {
-        return "";
-      }
-      if (isZenerMarking()) {
-        try {
-          ZenerMarking.parse(typed);
-          return "";
-        } catch (InvalidInputException e) {
-          return "Not a zener voltage: write its marking, e.g. 5V1, 12V or 3.3V";
-        }
-      }
-      if (isPosition()) {
-        try {
-          double v = SiValue.parse(typed);
-          return v >= 0 && v <= 1 ? "" : "A wiper position is from 0 (first end) to 1 (other end)";
-        } catch (InvalidInputException e) {
-          return "Not a position: write a share of the travel from 0 to 1, e.g. 0.5";
-        }
-      }
-      try {
-        double v = SiValue.parse(typed);
-        if (!parameter.unit().equals("V") && v < 0) {
-          return "A part value or frequency cannot be negative";
-        }
-        return "";
-      } catch (InvalidInputException e) {
-        return "Not a value: write it as 4k7, 100n, 15 or -15"
-            + (parameter.meaning().contains("none") ? ", or none" : "");
-      }
-    }
   }
 
   public ObservableList<StageTemplate> templates() {
@@ -304,37 +191,22 @@ public final class StageViewModel {
             built.amplifiers()));
   }
 
-  /**
-   * One stage of the board model's library.
-   *
-   * @param title its title
-   * @param stage the stage
-   */
-  public record LibraryEntry(String title, Stage stage) {}
-
-  /**
-   * One part of the stage as listed.
-   *
-   * @param part the part
-   * @param value its value with unit, e.g. "4.7 kΩ"
-   * @param tolerance its tolerance, e.g. "1 %"
-   * @param nets the nets it joins, e.g. "IN – SUM"
-   */
-  public record PartRow(Part part, String value, String tolerance, String nets) {
-    /** Returns the row as one line. */
-    public String line() {
-      // A diode's or an LED's class fixes its figures: it has no tolerance to show.
-      String within = tolerance.isEmpty() ? "" : "  ±" + tolerance;
-      return part.ref() + "   " + value + within + "   (" + nets + ")";
-    }
+  /** Returns where the screen picks a stage: the library, the versions, stage sheet files. */
+  public StageLibraryModel libraryModel() {
+    return libraryModel;
   }
 
   public ObservableList<LibraryEntry> library() {
-    return library;
+    return libraryModel.library();
   }
 
   public StringProperty libraryNoteProperty() {
-    return libraryNote;
+    return libraryModel.libraryNoteProperty();
+  }
+
+  /** Loads the library of the board model on the bench (see {@link StageLibraryModel}). */
+  public void loadLibrary() {
+    libraryModel.loadLibrary();
   }
 
   public ObjectProperty<Stage> stageProperty() {
@@ -371,126 +243,6 @@ public final class StageViewModel {
 
   public ObjectProperty<ExpectedVolts> expectedProperty() {
     return expected;
-  }
-
-  /** Loads the library of the board model on the bench. */
-  public void loadLibrary() {
-    BoardModel model = bench.boardModelProperty().get();
-    if (model == null) {
-      library.clear();
-      libraryNote.set("Choose a unit first.");
-      return;
-    }
-    if (arriving != null) {
-      Path sheet = arriving;
-      arriving = null;
-      importSheet(sheet);
-    }
-    bench
-        .tasks()
-        .run(
-            "Reading the stage library",
-            () -> {
-              List<LibraryEntry> entries = new ArrayList<>();
-              for (LibraryStage stored : bench.casework().stageLibrary(model)) {
-                entries.add(new LibraryEntry(stored.title(), stored.stage()));
-              }
-              // The casework lists the latest version of each stage, the one saved most recently
-              // first: a stage built or edited for an earlier unit of the model is the likeliest
-              // one on the bench now.
-              return entries;
-            },
-            entries -> {
-              library.setAll(entries);
-              libraryNote.set(
-                  entries.isEmpty()
-                      ? "No stages for " + model.name() + " yet. Build one from a template."
-                      : entries.size()
-                          + " stage"
-                          + (entries.size() == 1 ? "" : "s")
-                          + " of "
-                          + model.name()
-                          + ".");
-            },
-            e ->
-                bench
-                    .problems()
-                    .failed("Could not read the stage library", e, Words.CHECK_DATABASE));
-  }
-
-  /**
-   * Keeps a stage sheet file to open when the stage screen is first shown for a unit (the app was
-   * started with it, e.g. from a file manager).
-   */
-  public void openOnArrival(Path sheet) {
-    arriving = sheet;
-  }
-
-  /**
-   * Opens a stage sheet file (from a shared folder or a USB stick, say) as the stage to work on. It
-   * is checked first; a file that is not a usable sheet is refused with what to fix and changes
-   * nothing. Like a stage built here, it joins the board model's library when it is used.
-   */
-  public void importSheet(Path file) {
-    bench
-        .tasks()
-        .run(
-            "Opening the stage sheet " + file.getFileName(),
-            () -> StageSheet.read(file),
-            opened -> {
-              setStage(opened);
-              BoardModel model = bench.boardModelProperty().get();
-              libraryNote.set(
-                  "Opened \""
-                      + opened.title()
-                      + "\" from "
-                      + file.getFileName()
-                      + (model == null
-                          ? "."
-                          : ". It joins the library of " + model.name() + " when you use it."));
-            },
-            e ->
-                bench
-                    .problems()
-                    .show(
-                        "This file is not a stage sheet that can be used",
-                        e.getMessage(),
-                        "Fix what is named above in the file, or choose another file ("
-                            + StageSheet.SUFFIX
-                            + "). Nothing was changed."));
-  }
-
-  /** Saves the chosen stage as a stage sheet file, for another bench or the shop's engineer. */
-  public void exportSheet(Path file) {
-    Stage s = stage.get();
-    if (s == null) {
-      bench
-          .problems()
-          .show(
-              "Choose a stage first", "No stage is chosen to save.", "Tap a stage in the library.");
-      return;
-    }
-    Path target =
-        file.getFileName().toString().endsWith(StageSheet.SUFFIX)
-            ? file
-            : file.resolveSibling(
-                file.getFileName().toString().replaceFirst("\\.json$", "") + StageSheet.SUFFIX);
-    bench
-        .tasks()
-        .run(
-            "Saving the stage sheet " + target.getFileName(),
-            () -> {
-              StageSheet.write(s, target);
-              return target;
-            },
-            saved -> libraryNote.set("Saved \"" + s.title() + "\" to " + saved + "."),
-            e ->
-                bench
-                    .problems()
-                    .failed(
-                        "Could not save the stage sheet",
-                        e,
-                        "Check that the folder exists, is writable and has room, then try again."));
   }
 
   /** Returns the stage editor's model. */
@@ -552,47 +304,14 @@ public final class StageViewModel {
         rows.add(
             new PartRow(
                 part,
-                valueWords(part),
+                PartRow.valueWords(part),
                 part.kind() == PartKind.DIODE || part.kind() == PartKind.LED
                     ? ""
                     : Tolerance.format(part.tolerance()),
-                leadWords(part)));
+                PartRow.leadWords(part)));
       }
     }
     parts.setAll(rows);
-  }
-
-  /**
-   * Returns a part's value as the list shows it: {@code 4.7 kΩ}, a zener's marking {@code 5V1}, a
-   * diode's class, an LED's colour, a trimmer's value and wiper ({@code 10 kΩ, wiper at 0.5}).
-   */
-  static String valueWords(Part part) {
-    return switch (part.kind()) {
-      case CAPACITOR -> SiValue.format(part.value(), "F");
-      case ZENER -> ZenerMarking.format(part.value()) + " zener";
-      case DIODE -> part.diodeClass().word() + " diode";
-      case LED -> part.colour().word() + " LED";
-      case TRIMMER, POTENTIOMETER ->
-          SiValue.format(part.value(), "Ω")
-              + ", wiper at "
-              + java.math.BigDecimal.valueOf(part.position()).stripTrailingZeros().toPlainString()
-              + (part.sealed() ? " (sealed)" : "");
-      default -> SiValue.format(part.value(), "Ω");
-    };
-  }
-
-  /**
-   * Returns a part's nets with its lead names where they matter: {@code anode OUT – cathode RECT},
-   * {@code VCC – wiper NULL – VEE}; a resistor's or capacitor's as {@code SUM – OUT}.
-   */
-  static String leadWords(Part part) {
-    if (part.kind().isJunction()) {
-      return "anode " + part.anode() + " – cathode " + part.cathode();
-    }
-    if (part.kind().isTrimmer()) {
-      return part.netA() + " – wiper " + part.wiper() + " – " + part.netB();
-    }
-    return part.netA() + " – " + part.netB();
   }
 
   private void solve() {
@@ -743,10 +462,17 @@ public final class StageViewModel {
                     // The case keeps the version it is diagnosed with; a stage built or changed
                     // here becomes the next version of its library stage, so the next unit of the
                     // model is offered it first.
-                    bench.casework().library().useForCase(caseId, s);
-                    return null;
+                    return bench.casework().library().useForCase(caseId, s);
                   },
-                  ok -> {},
+                  kept ->
+                      libraryModel
+                          .caseNoteProperty()
+                          .set(
+                              "This case is diagnosed with \""
+                                  + kept.title()
+                                  + "\", "
+                                  + LibraryEntry.of(kept).versionLine()
+                                  + "."),
                   e ->
                       bench
                           .problems()

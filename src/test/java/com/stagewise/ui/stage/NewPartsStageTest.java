@@ -60,7 +60,7 @@ class NewPartsStageTest {
     t.close();
   }
 
-  private StageViewModel.PartRow row(String ref) {
+  private PartRow row(String ref) {
     return model.parts().stream().filter(r -> r.part().ref().equals(ref)).findFirst().orElseThrow();
   }
 

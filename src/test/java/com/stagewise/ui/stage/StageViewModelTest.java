@@ -50,7 +50,7 @@ class StageViewModelTest {
   @Test
   void loadLibrary_listsTheBoardModelsStages() {
     assertThat(model.library())
-        .extracting(StageViewModel.LibraryEntry::title)
+        .extracting(LibraryEntry::title)
         .containsExactly("Inverting amplifier, test");
     assertThat(model.libraryNoteProperty().get()).isEqualTo("1 stage of Test amp board.");
   }
@@ -59,7 +59,7 @@ class StageViewModelTest {
   void choose_showsPartsAndExpectedVoltsWithTheirRange() {
     model.choose(model.library().get(0).stage());
     assertThat(model.parts())
-        .extracting(StageViewModel.PartRow::line)
+        .extracting(PartRow::line)
         .containsExactly("R1   10 kΩ  ±1%   (IN – SUM)", "R2   47 kΩ  ±1%   (SUM – OUT)");
     var expected = model.expectedProperty().get();
     // Textbook inverting gain -Rf/Rin = -4.7 for 1 V in; 1 % parts move it by about 1 % each way.
@@ -170,7 +170,7 @@ class StageViewModelTest {
   @Test
   void templateFields_speakPlainWords_offerLists_andCheckWhatIsTyped() {
     model.templateProperty().set(Templates.named("inverting"));
-    var byName = new java.util.HashMap<String, StageViewModel.ParameterEntry>();
+    var byName = new java.util.HashMap<String, ParameterEntry>();
     model.parameters().forEach(p -> byName.put(p.parameter().name(), p));
     assertThat(byName.get("r1").label()).isEqualTo("Input resistor R1 (Ω)");
     assertThat(byName.get("vac").label()).startsWith("Test signal amplitude");
@@ -220,7 +220,7 @@ class StageViewModelTest {
     Path file = temp.resolve("usb").resolve("inverting");
     file.getParent().toFile().mkdirs();
 
-    model.exportSheet(file);
+    model.libraryModel().exportSheet(file);
     Path written = temp.resolve("usb").resolve("inverting" + StageSheet.SUFFIX);
     assertThat(written).exists();
     assertThat(model.libraryNoteProperty().get()).startsWith("Saved ");
@@ -230,7 +230,7 @@ class StageViewModelTest {
     model.pad().textProperty().set("22k");
     model.applyValue();
     assertThat(model.stageProperty().get()).isNotEqualTo(chosen);
-    model.importSheet(written);
+    model.libraryModel().importSheet(written);
     // Read back from its own file, the stage is the one that was saved.
     assertThat(model.stageProperty().get()).isEqualTo(chosen);
     assertThat(model.libraryNoteProperty().get()).contains("joins the library of Test amp board");
@@ -242,7 +242,7 @@ class StageViewModelTest {
     Path file = temp.resolve("given" + StageSheet.SUFFIX);
     StageSheet.write(chosen, file);
     StageViewModel arriving = new StageViewModel(t.bench);
-    arriving.openOnArrival(file);
+    arriving.libraryModel().openOnArrival(file);
     assertThat(arriving.stageProperty().get()).isNull();
 
     arriving.loadLibrary();
@@ -260,7 +260,7 @@ class StageViewModelTest {
         StageSheet.write(chosen)
             .replaceFirst("\"value\"\\s*:\\s*\"[^\"]*\"", "\"value\": \"ten\""));
 
-    model.importSheet(broken);
+    model.libraryModel().importSheet(broken);
 
     assertThat(t.problemTexts).hasSize(1);
     assertThat(t.problemTexts.get(0))
@@ -270,7 +270,7 @@ class StageViewModelTest {
     assertThat(model.stageProperty().get()).isEqualTo(chosen);
   }
 
-  private static StageViewModel.ParameterEntry field(StageViewModel model, String name) {
+  private static ParameterEntry field(StageViewModel model, String name) {
     return model.parameters().stream()
         .filter(p -> p.parameter().name().equals(name))
         .findFirst()
