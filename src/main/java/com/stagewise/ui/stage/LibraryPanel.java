@@ -8,6 +8,8 @@ import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
+import javafx.scene.control.Tooltip;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
@@ -124,19 +126,24 @@ final class LibraryPanel {
     libraryBox.managedProperty().bind(fromLibrary.selectedProperty());
     templateBox.visibleProperty().bind(fromTemplate.selectedProperty());
     templateBox.managedProperty().bind(fromTemplate.selectedProperty());
-    Button edit = new Button("Edit stage");
+    // Short words that fit the narrow column at every window size; the tooltips say the rest.
+    Button edit = new Button("Edit");
     edit.setId("stage-edit");
+    edit.setTooltip(new Tooltip("Edit a copy of the chosen stage in the stage editor"));
     edit.disableProperty().bind(model.stageProperty().isNull());
     edit.setOnAction(e -> model.openEditor(false));
-    Button fresh = new Button("New stage");
+    Button fresh = new Button("New");
     fresh.setId("stage-new");
+    fresh.setTooltip(new Tooltip("Build a new stage from empty in the stage editor"));
     fresh.setOnAction(e -> model.openEditor(true));
     // Stage sheets as files: from a shared folder or a USB stick, and back.
-    Button open = new Button("Open file…");
+    Button open = new Button("Open…");
     open.setId("stage-open-file");
+    open.setTooltip(new Tooltip("Open a stage sheet file (from a shared folder or a USB stick)"));
     open.setOnAction(e -> chooseSheet(false).ifPresent(model.libraryModel()::importSheet));
-    Button save = new Button("Save to file…");
+    Button save = new Button("Save…");
     save.setId("stage-save-file");
+    save.setTooltip(new Tooltip("Save the chosen stage as a stage sheet file"));
     save.disableProperty().bind(model.stageProperty().isNull());
     save.setOnAction(e -> chooseSheet(true).ifPresent(model.libraryModel()::exportSheet));
     box.getChildren()
@@ -144,9 +151,15 @@ final class LibraryPanel {
             new HBox(6, fromLibrary, fromTemplate),
             libraryBox,
             templateBox,
-            new HBox(6, edit, fresh),
-            new HBox(6, open, save));
+            buttons(edit, fresh, open, save));
     return box;
+  }
+
+  /** The stage's buttons, wrapping onto as many rows as the column needs. */
+  private static FlowPane buttons(Button... buttons) {
+    FlowPane row = new FlowPane(6, 6, buttons);
+    row.setPrefWrapLength(200);
+    return row;
   }
 
   /** Asks for a stage sheet file to open, or where to save one. */
