@@ -253,7 +253,8 @@ public final class Casework {
       String caseId, Diagnoser diagnoser, ReadingSet taken, List<Reading> added, int top) {
     Diagnosis diagnosis = diagnoser.diagnose(taken, top);
     Instant now = clock.instant();
-    List<StoredReading> readings = StoredText.readings(added, taken.meter(), caseId, now);
+    List<StoredReading> readings =
+        StoredText.readings(added, taken.meter(), caseId, now, diagnoser.stage());
     SuspectListRecord list = StoredText.suspectList(diagnosis, caseId, now, version());
     store.cases().addReadings(caseId, readings, list);
     return new StoredReadings(readings, list, diagnosis);
@@ -348,7 +349,8 @@ public final class Casework {
       int top) {
     Diagnosis diagnosis = standing.readings().isEmpty() ? null : diagnoser.diagnose(standing, top);
     Instant now = clock.instant();
-    List<StoredReading> stored = StoredText.readings(added, standing.meter(), caseId, now);
+    List<StoredReading> stored =
+        StoredText.readings(added, standing.meter(), caseId, now, diagnoser.stage());
     SuspectListRecord list =
         diagnosis == null ? null : StoredText.suspectList(diagnosis, caseId, now, version());
     List<StoredReading> changed =

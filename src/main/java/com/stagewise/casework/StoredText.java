@@ -4,6 +4,7 @@ import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
+import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.diagnosis.ProbeAdvice;
 import com.stagewise.diagnosis.Suspect;
@@ -33,7 +34,7 @@ final class StoredText {
    * meter's ohms accuracy, OL as {@link Double#POSITIVE_INFINITY}.
    */
   static List<StoredReading> readings(
-      List<Reading> added, MeterSpec meter, String caseId, Instant now) {
+      List<Reading> added, MeterSpec meter, String caseId, Instant now, Stage stage) {
     List<StoredReading> stored = new ArrayList<>();
     for (Reading r : added) {
       boolean ac = r.kind() == Reading.Kind.AC;
@@ -57,7 +58,10 @@ final class StoredText {
               uncertainty,
               meterLine,
               now,
-              r.to()));
+              r.to(),
+              null,
+              now,
+              ac ? r.measureIn(stage).word() : null));
     }
     return stored;
   }

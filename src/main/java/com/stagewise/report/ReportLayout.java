@@ -1,5 +1,6 @@
 package com.stagewise.report;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
@@ -144,11 +145,11 @@ final class ReportLayout {
             List.of(
                 new Column("#", 26),
                 new Column("Test point", 84),
-                new Column("Kind", 72),
+                new Column("Kind", 120),
                 new Column("Value", 88),
                 new Column("Taken (UTC)", 80)));
     if (!oneMeter) {
-      columns.add(new Column("Meter", PageFlow.bodyWidth() - 350));
+      columns.add(new Column("Meter", PageFlow.bodyWidth() - 398));
     }
     List<List<String>> rows = new ArrayList<>();
     for (int i = 0; i < readings.size(); i++) {
@@ -160,9 +161,7 @@ final class ReportLayout {
                   r.to().isEmpty()
                       ? Wording.point(r.at())
                       : Wording.point(r.at()) + " to " + Wording.point(r.to()),
-                  r.to().isEmpty()
-                      ? r.hz() == null ? "DC" : "AC at " + Engineering.of(r.hz(), "Hz", 4)
-                      : "ohms, power off",
+                  r.to().isEmpty() ? r.hz() == null ? "DC" : acKind(r) : "ohms, power off",
                   value(r),
                   r.struck()
                       ? when(r.takenAt()) + ", struck out " + when(r.struckAt())
@@ -173,6 +172,17 @@ final class ReportLayout {
       rows.add(row);
     }
     flow.table(columns, rows);
+  }
+
+  /**
+   * Returns an AC reading's kind with its measure and frequency, as the probe call says it: "AC RMS
+   * at 1 kHz", "AC peak at 1 kHz" (every AC reading stored before measures is a peak).
+   */
+  private static String acKind(StoredReading r) {
+    return "AC "
+        + AcMeasure.of(r.measureWord()).map(AcMeasure::words).orElse(r.measureWord())
+        + " at "
+        + Engineering.of(r.hz(), "Hz", 4);
   }
 
   /** Returns a reading's value as printed: volts with the meter's digits, or ohms (OL). */

@@ -7,6 +7,8 @@ import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.demo.DemoHistory;
+import com.stagewise.history.record.ReadingKind;
+import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.IOException;
@@ -73,8 +75,9 @@ class PdfReportTest {
       assertThat(text).contains(String.format(java.util.Locale.ROOT, "TP-%03d", i));
     }
     // Reading 1 is -13.48 + 0.01 V; reading 10 is an AC reading at 1 kHz given with its own
-    // uncertainty.
-    assertThat(text).contains("-13.47 V", "AC at 1 kHz", "-13.38 V ±3 mV", "±(0.5 % + 2 counts)");
+    // uncertainty, stored as a peak (no measure), which its kind says.
+    assertThat(text)
+        .contains("-13.47 V", "AC peak at 1 kHz", "-13.38 V ±3 mV", "±(0.5 % + 2 counts)");
     // -13.48 + 3/100 is -13.450000000000001 in binary floating point; the report prints it as
     // typed.
     assertThat(text).contains("TP-003 DC -13.45 V").doesNotContain("0000");
@@ -99,6 +102,47 @@ class PdfReportTest {
     assertThat(text)
         .contains(
             "Generated 2026-03-04 05:06 UTC by Stagewise test build", "Page 1 of 2", "Page 2 of 2");
+  }
+
+  @Test
+  void acReadings_stateTheirMeasure_rmsAndPeakToPeak() throws IOException {
+    CaseReport report = ReportFixture.report(folder, 10);
+    CaseFile file = report.caseFile();
+    StoredReading peak = file.readings().get(9);
+    List<StoredReading> readings = new ArrayList<>(file.readings());
+    // The same sine stated two more ways: RMS 0.3536 V and peak-to-peak 1.000 V of a 0.5 V peak
+    // (sine RMS = peak/√2, peak-to-peak = 2 × peak; any circuits textbook).
+    for (String[] m : new String[][] {{"rms", "0.3536"}, {"pp", "1"}}) {
+      readings.add(
+          new StoredReading(
+              m[0] + "-reading",
+              peak.caseId(),
+              "OUT",
+              ReadingKind.AC,
+              Double.parseDouble(m[1]),
+              1000.0,
+              null,
+              peak.meterText(),
+              peak.takenAt(),
+              "",
+              null,
+              null,
+              m[0]));
+    }
+    CaseReport withMeasures =
+        new CaseReport(
+            report.unit(),
+            report.boardModel(),
+            new CaseFile(
+                file.repairCase(), readings, file.suspectLists(), file.actions(), file.notes()),
+            report.generatedAt(),
+            report.programVersion());
+    String text = text(ReportFixture.pdf(withMeasures));
+    assertThat(text)
+        .contains(
+            "OUT AC RMS at 1 kHz 353.6 mV",
+            "OUT AC peak-to-peak at 1 kHz 1.000 V",
+            "AC peak at 1 kHz -13.38 V ±3 mV");
   }
 
   @Test

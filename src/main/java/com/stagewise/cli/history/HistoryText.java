@@ -90,7 +90,12 @@ final class HistoryText {
                 r.kind().word(),
                 number(r.value())));
         if (r.hz() != null) {
-          text.append(" at ").append(number(r.hz())).append(" Hz");
+          // An AC reading says how it is stated: rms, peak or pp (peak for one stored earlier).
+          text.append(' ')
+              .append(r.measureWord())
+              .append(" at ")
+              .append(number(r.hz()))
+              .append(" Hz");
         }
         if (r.struck()) {
           text.append("  struck out ").append(when(r.struckAt()));

@@ -28,7 +28,7 @@ public final class Records {
       "SELECT id, serial, board_model_id, owner, updated_at FROM unit";
   public static final String READING =
       "SELECT id, case_id, at, kind, value, hz, uncertainty, meter, taken_at, to_point,"
-          + " struck_at, updated_at FROM reading";
+          + " struck_at, updated_at, measure FROM reading";
   public static final String SUSPECT_LIST =
       "SELECT id, case_id, computed_at, program_version, verdict, next_probes FROM suspect_list";
   public static final String ACTION =
@@ -96,7 +96,8 @@ public final class Records {
         time(rs, 9),
         rs.getString(10),
         time(rs, 11),
-        time(rs, 12));
+        time(rs, 12),
+        rs.getString(13));
   }
 
   public static RepairAction action(ResultSet rs) throws SQLException {

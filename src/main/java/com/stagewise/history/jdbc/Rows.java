@@ -310,7 +310,8 @@ public final class Rows implements AutoCloseable {
     int inserted =
         update(
             "INSERT INTO reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at,"
-                + " to_point, struck_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
+                + " to_point, struck_at, updated_at, measure)"
+                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
                 + " ON CONFLICT (id) DO NOTHING",
             r.id(),
             r.caseId(),
@@ -323,7 +324,8 @@ public final class Rows implements AutoCloseable {
             r.takenAt(),
             r.to(),
             r.struckAt(),
-            r.updatedAt());
+            r.updatedAt(),
+            r.measure());
     return inserted == 1;
   }
 

@@ -24,7 +24,8 @@ final class PgMigrations {
           "V3__change_numbers.sql",
           "V4__ohms_readings.sql",
           "V5__struck_readings.sql",
-          "V6__stage_versions.sql");
+          "V6__stage_versions.sql",
+          "V7__ac_measure.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

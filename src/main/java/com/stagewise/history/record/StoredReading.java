@@ -1,6 +1,7 @@
 package com.stagewise.history.record;
 
 import java.time.Instant;
+import java.util.List;
 import java.util.Objects;
 
 /**
@@ -25,6 +26,9 @@ import java.util.Objects;
  * @param to the second point of an ohms reading; empty for volts
  * @param struckAt when it was struck out, or null while it stands
  * @param updatedAt when it was taken, struck out or restored, whichever came last
+ * @param measure how an AC reading is stated: {@code rms} or {@code pp}; null for peak (the only
+ *     measure before readings had one, so every AC reading stored earlier is a peak) and for DC and
+ *     ohms
  */
 public record StoredReading(
     String id,
@@ -38,7 +42,12 @@ public record StoredReading(
     Instant takenAt,
     String to,
     Instant struckAt,
-    Instant updatedAt) {
+    Instant updatedAt,
+    String measure) {
+
+  /** The words an AC reading's measure may be, as files and the database write them. */
+  public static final List<String> MEASURES = List.of("rms", "peak", "pp");
+
   public StoredReading {
     Objects.requireNonNull(id, "id");
     Objects.requireNonNull(caseId, "caseId");
@@ -49,6 +58,47 @@ public record StoredReading(
     Times.text(to, "to");
     struckAt = Times.millis(struckAt);
     updatedAt = Times.millis(updatedAt == null ? takenAt : updatedAt);
+    // Peak is stored as null, so that a peak reading is stored and sent exactly as before.
+    measure = "peak".equals(measure) ? null : measure;
+    if (measure != null && (kind != ReadingKind.AC || !MEASURES.contains(measure))) {
+      throw new IllegalArgumentException(
+          "measure (" + measure + ") must be rms, peak or pp, and only on an ac reading");
+    }
+  }
+
+  /** Returns a reading stated in peak (or DC, or ohms); see the record description. */
+  public StoredReading(
+      String id,
+      String caseId,
+      String at,
+      ReadingKind kind,
+      double value,
+      Double hz,
+      Double uncertainty,
+      String meterText,
+      Instant takenAt,
+      String to,
+      Instant struckAt,
+      Instant updatedAt) {
+    this(
+        id,
+        caseId,
+        at,
+        kind,
+        value,
+        hz,
+        uncertainty,
+        meterText,
+        takenAt,
+        to,
+        struckAt,
+        updatedAt,
+        null);
+  }
+
+  /** Returns the measure of an AC reading ({@code rms}, {@code peak} or {@code pp}); empty else. */
+  public String measureWord() {
+    return kind != ReadingKind.AC ? "" : measure == null ? "peak" : measure;
   }
 
   /**
@@ -99,14 +149,14 @@ public record StoredReading(
   public StoredReading struckOut(Instant when) {
     Objects.requireNonNull(when, "when");
     return new StoredReading(
-        id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, when, when);
+        id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, when, when, measure);
   }
 
   /** Returns this reading standing again (its strike undone) as of {@code when}. */
   public StoredReading restored(Instant when) {
     Objects.requireNonNull(when, "when");
     return new StoredReading(
-        id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, null, when);
+        id, caseId, at, kind, value, hz, uncertainty, meterText, takenAt, to, null, when, measure);
   }
 
   /**
@@ -122,6 +172,7 @@ public record StoredReading(
         && Double.compare(value, other.value) == 0
         && Objects.equals(hz, other.hz)
         && Objects.equals(uncertainty, other.uncertainty)
+        && Objects.equals(measure, other.measure)
         && meterText.equals(other.meterText)
         && takenAt.equals(other.takenAt);
   }

@@ -29,7 +29,8 @@ final class Migrations {
           "V3__sync.sql",
           "V4__ohms_readings.sql",
           "V5__struck_readings.sql",
-          "V6__stage_versions.sql");
+          "V6__stage_versions.sql",
+          "V7__ac_measure.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

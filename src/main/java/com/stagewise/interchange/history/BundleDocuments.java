@@ -1,5 +1,6 @@
 package com.stagewise.interchange.history;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.Limits;
 import com.stagewise.circuit.Reading;
@@ -7,6 +8,7 @@ import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
 import com.stagewise.history.record.HistoryBundle;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
 import com.stagewise.history.record.StoredReading;
@@ -101,7 +103,8 @@ final class BundleDocuments {
         stored.uncertainty() == null
             ? OptionalDouble.empty()
             : OptionalDouble.of(stored.uncertainty()),
-        stored.to());
+        stored.to(),
+        measure(stored));
   }
 
   /** Returns the reader's complaint, placed at {@code at} inside the bundle {@code source}. */
@@ -122,5 +125,12 @@ final class BundleDocuments {
       problem = problem.substring(fieldPrefix.length());
     }
     return problem;
+  }
+
+  /** Returns the measure an AC reading was stored with (peak when the history says none). */
+  private static java.util.Optional<AcMeasure> measure(StoredReading stored) {
+    return stored.kind() == ReadingKind.AC
+        ? AcMeasure.of(stored.measureWord())
+        : java.util.Optional.empty();
   }
 }

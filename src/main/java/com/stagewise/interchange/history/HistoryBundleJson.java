@@ -2,7 +2,6 @@ package com.stagewise.interchange.history;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.InvalidInputException;
@@ -94,7 +93,8 @@ public final class HistoryBundleJson {
           "meter",
           "takenAt",
           "struckAt",
-          "updatedAt");
+          "updatedAt",
+          "measure");
   private static final List<String> SUSPECT_LIST =
       List.of("id", "caseId", "computedAt", "programVersion", "verdict", "suspects", "nextProbes");
   private static final List<String> SUSPECT = List.of("fault", "probability", "group", "why");
@@ -224,7 +224,8 @@ public final class HistoryBundleJson {
               time(f, "takenAt"),
               f.optionalText("to", ""),
               f.optional("struckAt").map(JsonField::time).orElse(null),
-              f.optional("updatedAt").map(JsonField::time).orElse(null)));
+              f.optional("updatedAt").map(JsonField::time).orElse(null),
+              measure(f, kind)));
     }
     List<SuspectListRecord> lists = new ArrayList<>();
     for (JsonField f : top.optionalElements("suspectLists", "suspect lists")) {
@@ -340,14 +341,14 @@ public final class HistoryBundleJson {
       json.writeNumberField("version", HistoryBundle.CURRENT_VERSION);
       json.writeStringField("exportedAt", bundle.exportedAt().toString());
       json.writeStringField("programVersion", bundle.programVersion());
-      writeArray(json, "boardModels", bundle.boardModels(), HistoryBundleJson::tree);
+      writeArray(json, "boardModels", bundle.boardModels(), BundleTrees::tree);
       writeArray(json, "stageSheets", bundle.stageSheets(), LibraryFields::tree);
-      writeArray(json, "units", bundle.units(), HistoryBundleJson::tree);
-      writeArray(json, "cases", bundle.cases(), HistoryBundleJson::tree);
-      writeArray(json, "readings", bundle.readings(), HistoryBundleJson::tree);
-      writeArray(json, "suspectLists", bundle.suspectLists(), HistoryBundleJson::tree);
-      writeArray(json, "actions", bundle.actions(), HistoryBundleJson::tree);
-      writeArray(json, "notes", bundle.notes(), HistoryBundleJson::tree);
+      writeArray(json, "units", bundle.units(), BundleTrees::tree);
+      writeArray(json, "cases", bundle.cases(), BundleTrees::tree);
+      writeArray(json, "readings", bundle.readings(), BundleTrees::tree);
+      writeArray(json, "suspectLists", bundle.suspectLists(), BundleTrees::tree);
+      writeArray(json, "actions", bundle.actions(), BundleTrees::tree);
+      writeArray(json, "notes", bundle.notes(), BundleTrees::tree);
       json.writeEndObject();
     }
   }
@@ -376,36 +377,26 @@ public final class HistoryBundleJson {
     return out.toString(java.nio.charset.StandardCharsets.UTF_8);
   }
 
-  static ObjectNode tree(BoardModel m) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", m.id()).put("name", m.name()).put("maker", m.maker()).put("notes", m.notes());
-    return o.put("updatedAt", m.updatedAt().toString());
-  }
-
-  static ObjectNode tree(Unit u) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", u.id())
-        .put("serial", u.serial())
-        .put("boardModelId", u.boardModelId())
-        .put("owner", u.owner());
-    return o.put("updatedAt", u.updatedAt().toString());
-  }
-
-  static ObjectNode tree(RepairCase c) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", c.id()).put("unitId", c.unitId()).put("openedAt", c.openedAt().toString());
-    o.put("symptom", c.symptom()).put("status", c.status().word());
-    if (c.closedAt() != null) {
-      o.put("closedAt", c.closedAt().toString());
+  /**
+   * Returns the measure of an AC reading ({@code rms} or {@code pp}; null for peak, also when the
+   * bundle says none, as bundles written before measures do).
+   */
+  private static String measure(JsonField reading, ReadingKind kind) {
+    java.util.Optional<JsonField> field = reading.optional("measure");
+    if (field.isEmpty()) {
+      return null;
     }
-    if (c.outcome() != null) {
-      o.put("outcome", c.outcome().word());
+    if (kind != ReadingKind.AC) {
+      throw field.get().error("only an ac reading has a measure (expected no \"measure\" here)");
     }
-    ArrayNode faults = o.putArray("confirmedFaults");
-    c.confirmedFaults().forEach(faults::add);
-    o.put("updatedAt", c.updatedAt().toString());
-    LibraryFields.caseStage(c, o);
-    return o;
+    return field
+        .get()
+        .word(
+            w ->
+                StoredReading.MEASURES.contains(w)
+                    ? java.util.Optional.of(w)
+                    : java.util.Optional.empty(),
+            "rms, peak or pp");
   }
 
   /**
@@ -423,72 +414,6 @@ public final class HistoryBundleJson {
       return Double.POSITIVE_INFINITY;
     }
     return value.finite("the reading's value");
-  }
-
-  static ObjectNode tree(StoredReading r) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", r.id()).put("caseId", r.caseId()).put("at", r.at());
-    if (!r.to().isEmpty()) {
-      o.put("to", r.to());
-    }
-    o.put("kind", r.kind().word());
-    if (r.isOverRange()) {
-      o.put("value", ReadingsSheet.OVER_RANGE);
-    } else {
-      o.put("value", r.value());
-    }
-    if (r.hz() != null) {
-      o.put("hz", r.hz());
-    }
-    if (r.uncertainty() != null) {
-      o.put("uncertainty", r.uncertainty());
-    }
-    o.put("meter", r.meterText()).put("takenAt", r.takenAt().toString());
-    // A reading never struck out is written as before, so that older programs still read it.
-    if (r.struckAt() != null) {
-      o.put("struckAt", r.struckAt().toString());
-    }
-    if (!r.updatedAt().equals(r.takenAt())) {
-      o.put("updatedAt", r.updatedAt().toString());
-    }
-    return o;
-  }
-
-  static ObjectNode tree(SuspectListRecord s) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", s.id()).put("caseId", s.caseId()).put("computedAt", s.computedAt().toString());
-    o.put("programVersion", s.programVersion()).put("verdict", s.verdict());
-    ArrayNode suspects = o.putArray("suspects");
-    for (StoredSuspect suspect : s.suspects()) {
-      ObjectNode n = suspects.addObject();
-      n.put("fault", suspect.fault()).put("probability", suspect.probability());
-      ArrayNode group = n.putArray("group");
-      suspect.group().forEach(group::add);
-      n.put("why", suspect.why());
-    }
-    return o.put("nextProbes", s.nextProbes());
-  }
-
-  static ObjectNode tree(RepairAction a) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", a.id())
-        .put("caseId", a.caseId())
-        .put("at", a.at().toString())
-        .put("kind", a.kind().word());
-    o.put("part", a.part())
-        .put("oldValue", a.oldValue())
-        .put("newValue", a.newValue())
-        .put("text", a.text());
-    return o.put("updatedAt", a.updatedAt().toString());
-  }
-
-  static ObjectNode tree(CaseNote n) {
-    ObjectNode o = NODES.objectNode();
-    o.put("id", n.id())
-        .put("caseId", n.caseId())
-        .put("at", n.at().toString())
-        .put("text", n.text());
-    return o.put("updatedAt", n.updatedAt().toString());
   }
 
   static ObjectMapper mapperForOutput() {

@@ -32,7 +32,7 @@ public final class HistoryJson {
   public static String boardModels(List<BoardModel> models) {
     ObjectNode root = NODES.objectNode();
     ArrayNode array = root.putArray("boardModels");
-    models.forEach(m -> array.add(HistoryBundleJson.tree(m)));
+    models.forEach(m -> array.add(BundleTrees.tree(m)));
     return text(root);
   }
 
@@ -43,7 +43,7 @@ public final class HistoryJson {
     ObjectNode root = NODES.objectNode();
     ArrayNode array = root.putArray("units");
     for (Unit unit : units) {
-      ObjectNode node = HistoryBundleJson.tree(unit);
+      ObjectNode node = BundleTrees.tree(unit);
       BoardModel model = modelsById.get(unit.boardModelId());
       node.put("boardModel", model == null ? "" : model.name());
       array.add(node);
@@ -53,24 +53,24 @@ public final class HistoryJson {
 
   /** Returns one unit (with {@code boardModel} named) as a JSON object. */
   public static String unit(Unit unit, BoardModel model) {
-    ObjectNode node = HistoryBundleJson.tree(unit);
+    ObjectNode node = BundleTrees.tree(unit);
     node.put("boardModel", model.name());
     return text(node);
   }
 
   /** Returns one case as a JSON object. */
   public static String repairCase(RepairCase repairCase) {
-    return text(HistoryBundleJson.tree(repairCase));
+    return text(BundleTrees.tree(repairCase));
   }
 
   /** Returns one note as a JSON object. */
   public static String note(CaseNote note) {
-    return text(HistoryBundleJson.tree(note));
+    return text(BundleTrees.tree(note));
   }
 
   /** Returns one action as a JSON object. */
   public static String action(RepairAction action) {
-    return text(HistoryBundleJson.tree(action));
+    return text(BundleTrees.tree(action));
   }
 
   /** Returns readings and the suspect list stored with them. */
@@ -78,9 +78,9 @@ public final class HistoryJson {
       List<StoredReading> readings, SuspectListRecord suspectListOrNull) {
     ObjectNode root = NODES.objectNode();
     ArrayNode array = root.putArray("readings");
-    readings.forEach(r -> array.add(HistoryBundleJson.tree(r)));
+    readings.forEach(r -> array.add(BundleTrees.tree(r)));
     if (suspectListOrNull != null) {
-      root.set("suspectList", HistoryBundleJson.tree(suspectListOrNull));
+      root.set("suspectList", BundleTrees.tree(suspectListOrNull));
     }
     return text(root);
   }
@@ -88,8 +88,8 @@ public final class HistoryJson {
   /** Returns a unit's history: the unit, its board model and its cases with everything in them. */
   public static String unitHistory(UnitHistory history) {
     ObjectNode root = NODES.objectNode();
-    root.set("unit", HistoryBundleJson.tree(history.unit()));
-    root.set("boardModel", HistoryBundleJson.tree(history.boardModel()));
+    root.set("unit", BundleTrees.tree(history.unit()));
+    root.set("boardModel", BundleTrees.tree(history.boardModel()));
     ArrayNode cases = root.putArray("cases");
     history.cases().forEach(c -> cases.add(caseTree(c)));
     return text(root);
@@ -101,15 +101,15 @@ public final class HistoryJson {
   }
 
   private static ObjectNode caseTree(CaseFile file) {
-    ObjectNode node = HistoryBundleJson.tree(file.repairCase());
+    ObjectNode node = BundleTrees.tree(file.repairCase());
     ArrayNode readings = node.putArray("readings");
-    file.readings().forEach(r -> readings.add(HistoryBundleJson.tree(r)));
+    file.readings().forEach(r -> readings.add(BundleTrees.tree(r)));
     ArrayNode lists = node.putArray("suspectLists");
-    file.suspectLists().forEach(s -> lists.add(HistoryBundleJson.tree(s)));
+    file.suspectLists().forEach(s -> lists.add(BundleTrees.tree(s)));
     ArrayNode actions = node.putArray("actions");
-    file.actions().forEach(a -> actions.add(HistoryBundleJson.tree(a)));
+    file.actions().forEach(a -> actions.add(BundleTrees.tree(a)));
     ArrayNode notes = node.putArray("notes");
-    file.notes().forEach(n -> notes.add(HistoryBundleJson.tree(n)));
+    file.notes().forEach(n -> notes.add(BundleTrees.tree(n)));
     return node;
   }
 

@@ -85,7 +85,7 @@ final class DraftEntries {
               name + " has an AC amplitude, so it needs a frequency above 0 Hz (e.g. 1k)"));
       ac = 0;
     }
-    return new TestInput(net, dc, ac, hz);
+    return new TestInput(net, dc, ac, hz, input.measure());
   }
 
   private static double number(

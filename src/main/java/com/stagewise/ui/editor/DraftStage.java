@@ -1,5 +1,6 @@
 package com.stagewise.ui.editor;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.DeviceClass;
 import com.stagewise.circuit.PackageType;
@@ -80,13 +81,19 @@ public record DraftStage(
    * @param ac its AC amplitude in volts ({@code 0} or empty for none)
    * @param hz the AC frequency in hertz ({@code 0} or empty for none)
    */
-  public record DraftInput(String net, Entry dc, Entry ac, Entry hz) {
+  public record DraftInput(String net, Entry dc, Entry ac, Entry hz, AcMeasure measure) {
     /** Keeps the fields; see the record description. */
     public DraftInput {
       net = net == null ? "" : net.strip();
       Objects.requireNonNull(dc, "dc");
       Objects.requireNonNull(ac, "ac");
       Objects.requireNonNull(hz, "hz");
+      Objects.requireNonNull(measure, "measure");
+    }
+
+    /** Returns an input whose AC amplitude is a peak (the stage sheet's default). */
+    public DraftInput(String net, Entry dc, Entry ac, Entry hz) {
+      this(net, dc, ac, hz, AcMeasure.PEAK);
     }
   }
 
@@ -252,7 +259,8 @@ public record DraftStage(
               input.net(),
               Entry.of(input.dc(), plain(input.dc())),
               Entry.of(input.ac(), plain(input.ac())),
-              Entry.of(input.hz(), plain(input.hz()))));
+              Entry.of(input.hz(), plain(input.hz())),
+              input.measure()));
     }
     List<DraftPart> parts = new ArrayList<>();
     for (Part part : stage.parts()) {

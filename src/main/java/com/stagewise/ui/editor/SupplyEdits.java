@@ -50,7 +50,8 @@ final class SupplyEdits {
                 .map(r -> new DraftRail(rename.apply(r.net()), r.volts(), r.tolerance()))
                 .toList(),
             draft.inputs().stream()
-                .map(i -> new DraftInput(rename.apply(i.net()), i.dc(), i.ac(), i.hz()))
+                .map(
+                    i -> new DraftInput(rename.apply(i.net()), i.dc(), i.ac(), i.hz(), i.measure()))
                 .toList(),
             draft.parts().stream()
                 .map(p -> p.withNets(p.nets().stream().map(rename).toList()))
@@ -147,7 +148,10 @@ final class SupplyEdits {
   /** Sets an input's net. */
   static Edit inputNet(DraftStage draft, int index, String net) {
     return changeInput(
-        draft, index, "set input net to " + net, i -> new DraftInput(net, i.dc(), i.ac(), i.hz()));
+        draft,
+        index,
+        "set input net to " + net,
+        i -> new DraftInput(net, i.dc(), i.ac(), i.hz(), i.measure()));
   }
 
   /** Sets an input's DC level as typed. */
@@ -156,7 +160,7 @@ final class SupplyEdits {
         draft,
         index,
         "set input DC to " + dc,
-        i -> new DraftInput(i.net(), Entry.typed(dc), i.ac(), i.hz()));
+        i -> new DraftInput(i.net(), Entry.typed(dc), i.ac(), i.hz(), i.measure()));
   }
 
   /** Sets an input's AC amplitude and frequency as typed (empty or 0 amplitude: no AC). */
@@ -165,6 +169,6 @@ final class SupplyEdits {
         draft,
         index,
         "set input AC to " + ac + " at " + hz + " Hz",
-        i -> new DraftInput(i.net(), i.dc(), Entry.typed(ac), Entry.typed(hz)));
+        i -> new DraftInput(i.net(), i.dc(), Entry.typed(ac), Entry.typed(hz), i.measure()));
   }
 }

@@ -256,7 +256,10 @@ public final class HistoryViewModel {
               + ":  "
               + Words.measured(r.value())
               + (r.kind() == ReadingKind.AC
-                  ? " AC at " + (r.hz() == null ? "?" : Words.hertz(r.hz()))
+                  ? " AC "
+                      + Words.measure(r.measureWord())
+                      + " at "
+                      + (r.hz() == null ? "?" : Words.hertz(r.hz()))
                   : "")
               + "   ("
               + Words.dateTime(r.takenAt())

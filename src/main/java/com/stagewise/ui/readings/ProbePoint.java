@@ -1,5 +1,6 @@
 package com.stagewise.ui.readings;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.PackageType;
 import com.stagewise.circuit.Part;
@@ -24,9 +25,17 @@ import java.util.Optional;
  * @param pin the pin number (0 for a lead or a net)
  * @param title what to probe, e.g. "U1 pin 8 — positive supply pin (VCC)"
  * @param why why this point now (may be empty)
+ * @param measure how an AC reading here is stated (the stage's AC input's measure)
  */
 public record ProbePoint(
-    String at, Reading.Kind kind, double hz, String packageRef, int pin, String title, String why) {
+    String at,
+    Reading.Kind kind,
+    double hz,
+    String packageRef,
+    int pin,
+    String title,
+    String why,
+    AcMeasure measure) {
 
   /** Returns whether this is a package pin. */
   public boolean isPin() {
@@ -51,14 +60,19 @@ public record ProbePoint(
 
   /** Returns a copy with another reason. */
   public ProbePoint because(String reason) {
-    return new ProbePoint(at, kind, hz, packageRef, pin, title, reason);
+    return new ProbePoint(at, kind, hz, packageRef, pin, title, reason, measure);
   }
 
-  /** Returns the short call shown large, e.g. "Probe U1 pin 8" or "Probe net OUT (AC, 1 kHz)". */
+  /**
+   * Returns the short call shown large, e.g. "Probe U1 pin 8" or "Probe net OUT (AC volts RMS at 1
+   * kHz)".
+   */
   public String call() {
     return "Probe "
         + shortName()
-        + (kind == Reading.Kind.AC ? " (AC at " + Words.hertz(hz) + ")" : "");
+        + (kind == Reading.Kind.AC
+            ? " (AC volts " + measure.words() + " at " + Words.hertz(hz) + ")"
+            : "");
   }
 
   /** Returns the DC probe point for a test point of the stage, if it names a used pin or a net. */
@@ -69,10 +83,20 @@ public record ProbePoint(
       String pkg = at.substring(0, dot);
       int pin = Integer.parseInt(at.substring(dot + 1));
       return Optional.of(
-          new ProbePoint(at, kind, hz, pkg, pin, pinTitle(stage, pkg, pin, pins.get(at)), ""));
+          new ProbePoint(
+              at,
+              kind,
+              hz,
+              pkg,
+              pin,
+              pinTitle(stage, pkg, pin, pins.get(at)),
+              "",
+              Reading.acMeasure(stage)));
     }
     if (stage.nets().contains(at)) {
-      return Optional.of(new ProbePoint(at, kind, hz, "", 0, netTitle(stage, at, pins), ""));
+      return Optional.of(
+          new ProbePoint(
+              at, kind, hz, "", 0, netTitle(stage, at, pins), "", Reading.acMeasure(stage)));
     }
     int dot = at.lastIndexOf('.');
     if (dot > 0) {
@@ -90,7 +114,8 @@ public record ProbePoint(
                 + part.get().leadNet(lead)
                 + ", "
                 + part.get().kind().name().toLowerCase(java.util.Locale.ROOT);
-        return Optional.of(new ProbePoint(at, kind, hz, ref, 0, title, ""));
+        return Optional.of(
+            new ProbePoint(at, kind, hz, ref, 0, title, "", Reading.acMeasure(stage)));
       }
     }
     return Optional.empty();

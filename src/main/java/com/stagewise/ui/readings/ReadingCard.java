@@ -1,5 +1,6 @@
 package com.stagewise.ui.readings;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Reading;
 import com.stagewise.ui.drawing.BandChart;
 import com.stagewise.ui.words.Words;
@@ -24,10 +25,13 @@ final class ReadingCard extends ListCell<ReadingsViewModel.ReadingRow> {
     setPrefWidth(0);
   }
 
-  /** Returns a reading's value as shown: "14.96 V", "0.12 V AC", "46.8 kΩ", "OL". */
+  /** Returns a reading's value as shown: "14.96 V", "0.120 V AC RMS", "46.8 kΩ", "OL". */
   static String valueText(Reading r) {
     return switch (r.kind()) {
-      case AC -> Words.measured(r.value()) + " AC";
+      case AC ->
+          Words.measured(r.value())
+              + " AC "
+              + r.measure().map(m -> m.words()).orElse(AcMeasure.PEAK.words());
       case OHMS -> Words.ohms(r.value());
       case DC -> Words.measured(r.value());
     };

@@ -399,7 +399,7 @@ public final class ReadingsViewModel {
       } else {
         reading =
             at.kind() == Reading.Kind.AC
-                ? Reading.ac(at.at(), Math.abs(value), at.hz())
+                ? Reading.ac(at.at(), Math.abs(value), at.hz(), at.measure())
                 : Reading.dc(at.at(), value);
       }
     } catch (InvalidInputException e) {

@@ -1,11 +1,13 @@
 package com.stagewise.ui.words;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.Outcome;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.StoredReading;
 import java.time.Instant;
@@ -133,6 +135,13 @@ public final class Words {
     };
   }
 
+  /**
+   * Returns an AC measure's file word in words: {@code RMS}, {@code peak}, {@code peak-to-peak}.
+   */
+  public static String measure(String word) {
+    return AcMeasure.of(word).map(AcMeasure::words).orElse(word);
+  }
+
   /** Returns the reading a stored reading stands for. */
   public static Reading reading(StoredReading stored) {
     Reading.Kind kind =
@@ -146,6 +155,14 @@ public final class Words {
         stored.uncertainty() == null
             ? OptionalDouble.empty()
             : OptionalDouble.of(stored.uncertainty());
-    return new Reading(stored.at(), kind, stored.value(), hz, uncertainty, stored.to());
+    return new Reading(
+        stored.at(), kind, stored.value(), hz, uncertainty, stored.to(), measure(stored));
+  }
+
+  /** Returns the measure an AC reading was stored with (peak when the history says none). */
+  private static java.util.Optional<AcMeasure> measure(StoredReading stored) {
+    return stored.kind() == ReadingKind.AC
+        ? AcMeasure.of(stored.measureWord())
+        : java.util.Optional.empty();
   }
 }

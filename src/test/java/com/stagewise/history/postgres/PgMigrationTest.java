@@ -134,6 +134,68 @@ class PgMigrationTest {
     }
   }
 
+  @Test
+  void version6Shop_migrates_itsAcReadingStaysAPeak_andTakesAnRmsReading() throws SQLException {
+    ServerAddress address = server.freshShop();
+    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
+    try {
+      PgMigrations.migrate(admin, 0L, 6);
+    } finally {
+      admin.close();
+    }
+    String s = address.schema();
+    server.adminSql(
+        "SET search_path TO " + s,
+        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
+        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
+        "INSERT INTO "
+            + s
+            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
+            + " VALUES ('c1', 'u1', "
+            + TAKEN
+            + ", 'no treble', 'open', "
+            + TAKEN
+            + ")",
+        "INSERT INTO "
+            + s
+            + ".reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at,"
+            + " updated_at) VALUES ('r1', 'c1', 'OUT', 'ac', 0.47, 1000, NULL, 'scope', "
+            + TAKEN
+            + ", "
+            + TAKEN
+            + ")");
+    long changeBefore = changeNumber(s);
+
+    try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
+      assertThat(shop.schemaVersion()).isEqualTo(PgMigrations.LATEST);
+      StoredReading old = shop.cases().caseFile("c1").orElseThrow().readings().get(0);
+      assertThat(old.value()).isEqualTo(0.47);
+      assertThat(old.hz()).isEqualTo(1000.0);
+      assertThat(old.measureWord()).isEqualTo("peak");
+      StoredReading rms =
+          new StoredReading(
+              "r2",
+              "c1",
+              "OUT",
+              com.stagewise.history.record.ReadingKind.AC,
+              0.332,
+              1000.0,
+              null,
+              "meter",
+              Instant.ofEpochMilli(TAKEN + 1000),
+              "",
+              null,
+              null,
+              "rms");
+      shop.cases().addReadings("c1", java.util.List.of(rms), null);
+      assertThat(shop.cases().caseFile("c1").orElseThrow().readings())
+          .extracting(StoredReading::measureWord)
+          .containsExactly("peak", "rms");
+    }
+    // Adding the column is no change for the benches to pull.
+    assertThat(changeNumber(s)).isEqualTo(changeBefore);
+  }
+
   private long maxChange(String schema, String table) throws SQLException {
     try (Connection c = server.adminConnection(TestServer.DATABASE);
         Statement st = c.createStatement();

@@ -297,6 +297,13 @@ class FileSafetyTest {
         assertThat(versions)
             .allMatch(v -> v.savedAt().equals(v.updatedAt()) && v.savedBy().isEmpty());
         assertThat(history.cases()).allMatch(c -> c.repairCase().stageSheetId() == null);
+        if (version >= 3) {
+          // Schema 7 added the AC measure: a reading stored before it is what it was then, a peak
+          // (the only measure earlier versions had), and DC readings have none.
+          assertThat(history.cases().get(0).readings())
+              .extracting(StoredReading::measureWord)
+              .containsExactly("", "peak");
+        }
         // And the migrated file takes new writes, a new version of the stage among them.
         RepairCase opened = store.cases().open(unit.id(), "new after migration");
         StageSheetRecord next =

@@ -96,12 +96,17 @@ public final class FixtureMaker {
     }
     // Stage sheets go in with the columns of version 1, which every version has. From version 5 on
     // the model has two sheets of one title (a stage saved again after an edit), which version 6
-    // numbers as versions 1 and 2 of one library stage.
+    // numbers as versions 1 and 2 of one library stage (a version-6 file has them numbered).
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + target);
         PreparedStatement insert =
             c.prepareStatement(
-                "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at)"
-                    + " VALUES (?, ?, ?, ?, ?)")) {
+                "INSERT INTO stage_sheet (id, board_model_id, title, sheet_json, updated_at"
+                    // From version 6 on each sheet is a numbered version of its stage (the
+                    // unique index of model, title and number refuses a second version 1).
+                    + (version >= 6 ? ", version, saved_by, saved_at" : "")
+                    + ") VALUES (?, ?, ?, ?, ?"
+                    + (version >= 6 ? ", ?, '', ?" : "")
+                    + ")")) {
       List<String> sheets =
           version >= 5 ? List.of(SHEETS.get(0), SHEETS.get(1)) : List.of(SHEETS.get(0));
       for (int i = 0; i < sheets.size(); i++) {
@@ -110,6 +115,10 @@ public final class FixtureMaker {
         insert.setString(3, SHEET_TITLE);
         insert.setString(4, sheets.get(i));
         insert.setLong(5, clock.millis() + i);
+        if (version >= 6) {
+          insert.setInt(6, i + 1);
+          insert.setLong(7, clock.millis() + i);
+        }
         insert.executeUpdate();
       }
     }
