@@ -215,6 +215,21 @@ class PowerOffFlowTest {
     assertThat(charted).contains("OL  outside");
     shoot("13-readings-power-off-done");
 
+    // On the schematic a part's lead is a point of its own: R1's lead on IN, tapped.
+    robot.clickOn("#show-schematic");
+    settle();
+    Node lead = robot.lookup((Node n) -> "point-R1.1".equals(n.getId())).query();
+    scrollIntoView(lead);
+    robot.clickOn(lead);
+    settle();
+    assertThat(text("#ohms-from")).isEqualTo("From:  R1 lead 1");
+    // A wire stands for its net: OUT's wire, tapped, fills the second place.
+    Node wire = robot.lookup((Node n) -> "point-OUT".equals(n.getId())).query();
+    scrollIntoView(wire);
+    robot.clickOn(wire);
+    settle();
+    assertThat(text("#ohms-to")).contains("OUT");
+
     // Back to volts: nothing is lost, the banner goes.
     scrollToTop();
     robot.clickOn("#mode-volts");
@@ -233,6 +248,30 @@ class PowerOffFlowTest {
           }
           if (node != null) {
             ((javafx.scene.control.ScrollPane) node).setVvalue(0);
+          }
+          return null;
+        });
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  /** Scrolls the screen so that a node stands in the middle of the view, as a finger would. */
+  private void scrollIntoView(Node target) throws Exception {
+    fx(
+        () -> {
+          Node node = target.getParent();
+          while (node != null && !(node instanceof javafx.scene.control.ScrollPane)) {
+            node = node.getParent();
+          }
+          if (node instanceof javafx.scene.control.ScrollPane pane) {
+            Node content = pane.getContent();
+            double y =
+                content.sceneToLocal(target.localToScene(target.getBoundsInLocal())).getCenterY();
+            double room =
+                content.getBoundsInLocal().getHeight() - pane.getViewportBounds().getHeight();
+            if (room > 0) {
+              double top = y - pane.getViewportBounds().getHeight() / 2;
+              pane.setVvalue(Math.max(0, Math.min(1, top / room)));
+            }
           }
           return null;
         });

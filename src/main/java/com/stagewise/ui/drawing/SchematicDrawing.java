@@ -50,6 +50,7 @@ public final class SchematicDrawing extends Region {
   private Map<String, String> measured = Map.of();
   private Box extent = new Box(0, 0, 1, 1);
   private Map<String, LabelPlacer.Placement> labelBoxes = Map.of();
+  private final SchematicTargets targets = new SchematicTargets();
 
   /** Creates an empty drawing; {@link #show} gives it a stage. */
   public SchematicDrawing() {
@@ -58,6 +59,12 @@ public final class SchematicDrawing extends Region {
     content.getTransforms().add(scale);
     getChildren().add(content);
     setMinSize(200, 150);
+    targets.whenChanged(this::redraw);
+  }
+
+  /** Returns the drawing's touch targets: tap a net or a part's lead; the chosen ones are lit. */
+  public SchematicTargets targets() {
+    return targets;
   }
 
   /** Shows a stage and redraws; the net labels stay as they were set. */
@@ -164,6 +171,7 @@ public final class SchematicDrawing extends Region {
     for (Caption caption : sheet.captions()) {
       content.getChildren().add(caption(caption));
     }
+    content.getChildren().add(targets.layer(sheet));
     drawLabels();
     drawLegend();
     requestLayout();

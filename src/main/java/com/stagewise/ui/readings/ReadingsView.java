@@ -5,6 +5,7 @@ import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.drawing.PackageDrawing;
+import com.stagewise.ui.drawing.SchematicDrawing;
 import com.stagewise.ui.widget.ValuePad;
 import com.stagewise.ui.words.Words;
 import java.util.List;
@@ -19,6 +20,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ProgressIndicator;
+import javafx.scene.control.Toggle;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
@@ -33,8 +35,10 @@ public final class ReadingsView {
   private final Bench bench;
   private final VBox root = new VBox(8);
   private final PackageDrawing drawing = new PackageDrawing();
+  private final SchematicDrawing schematic = new SchematicDrawing();
   private final VBox suspectsBox = new VBox(6);
   private String shownPackage = "";
+  private Stage schematicStage;
 
   /** Builds the screen bound to its model. */
   public ReadingsView(ReadingsViewModel model, Bench bench) {
@@ -122,9 +126,32 @@ public final class ReadingsView {
     // The drawing's own smallest layout keeps 48 px pins; below that height it scales to fit
     // rather than being cut off (a 14-pin package on a 800 px high window).
     drawing.setMinSize(Region.USE_COMPUTED_SIZE, 0);
-    StackPane drawingHolder = new StackPane(drawing);
+    schematic.setId("readings-schematic");
+    schematic.targets().setOnPointChosen(model::choose);
+    schematic.setMaxWidth(Double.MAX_VALUE);
+    schematic.setMinSize(0, 0);
+    schematic.setVisible(false);
+    StackPane drawingHolder = new StackPane(drawing, schematic);
     drawingHolder.setMinHeight(200);
     VBox.setVgrow(drawingHolder, Priority.ALWAYS);
+    javafx.scene.control.ToggleGroup views = new javafx.scene.control.ToggleGroup();
+    javafx.scene.control.ToggleButton onPackage = new javafx.scene.control.ToggleButton("Package");
+    onPackage.setId("show-package");
+    javafx.scene.control.ToggleButton onSchematic =
+        new javafx.scene.control.ToggleButton("Schematic");
+    onSchematic.setId("show-schematic");
+    onPackage.setToggleGroup(views);
+    onSchematic.setToggleGroup(views);
+    onPackage.setSelected(true);
+    // Pins on the package; nets and part leads (R2.1, D1.a) on the schematic.
+    onPackage.setOnAction(e -> showSchematic(false, onPackage, onSchematic));
+    onSchematic.setOnAction(e -> showSchematic(true, onPackage, onSchematic));
+    onPackage.setMinWidth(Region.USE_PREF_SIZE);
+    onSchematic.setMinWidth(Region.USE_PREF_SIZE);
+    Label tapHint = new Label("Tap a pin, a wire or a part's lead");
+    tapHint.getStyleClass().add("hint");
+    tapHint.setWrapText(true);
+    VBox viewBar = new VBox(4, new HBox(6, onPackage, onSchematic), tapHint);
     ComboBox<ProbePoint> other = new ComboBox<>(model.testPoints());
     other.setId("other-point");
     other.setMaxWidth(Double.MAX_VALUE);
@@ -181,6 +208,7 @@ public final class ReadingsView {
             PowerOffViews.modeBar(model),
             powered,
             PowerOffViews.pairHeader(model),
+            viewBar,
             drawingHolder,
             other,
             suggested);
@@ -210,8 +238,26 @@ public final class ReadingsView {
       shownPackage = pkg;
       showPinTexts();
     }
+    java.util.Set<String> lit = new java.util.HashSet<>();
+    for (ProbePoint point : new ProbePoint[] {p, q}) {
+      if (point != null && !point.isPin()) {
+        lit.add(point.at());
+      }
+    }
+    if (schematicStage != stage) {
+      schematic.show(stage);
+      schematicStage = stage;
+    }
+    schematic.targets().setChosen(lit);
     int second = q != null && q.isPin() && q.packageRef().equals(pkg) ? q.pin() : 0;
     drawing.highlight(p != null && p.isPin() ? p.pin() : 0, second);
+  }
+
+  private void showSchematic(boolean on, Toggle onPackage, Toggle onSchematic) {
+    schematic.setVisible(on);
+    drawing.setVisible(!on);
+    onPackage.setSelected(!on);
+    onSchematic.setSelected(on);
   }
 
   private void showPinTexts() {
