@@ -384,7 +384,16 @@ class BenchFlowTest {
    * here once it shows every text whole.
    */
   private static final java.util.Set<String> CHECKED_WHOLE =
-      java.util.Set.of("01-safety-caution", "02-unit", "07-suspects", "08-close-out", "09-history");
+      java.util.Set.of(
+          "01-safety-caution",
+          "02-unit",
+          "03-stage",
+          "04-stage-colour-code",
+          "05-readings-first-probe",
+          "06-readings",
+          "07-suspects",
+          "08-close-out",
+          "09-history");
 
   /**
    * Shows the screen at each window size, fails when any text on it is cut short (shown with an
@@ -468,6 +477,30 @@ class BenchFlowTest {
                     + "\" for \""
                     + labeled.getText()
                     + "\"");
+          }
+        }
+      }
+      if (child instanceof Labeled labeled
+          && labeled.isWrapText()
+          && labeled.getText() != null
+          && labeled.getWidth() > 0) {
+        // A wrapping label squeezed narrower than one of its words breaks it letter by letter.
+        double room =
+            labeled.getWidth() - labeled.snappedLeftInset() - labeled.snappedRightInset() + 0.5;
+        for (String word : labeled.getText().split("\\s+")) {
+          Text measured = new Text(word);
+          measured.setFont(labeled.getFont());
+          if (!word.isEmpty() && measured.getLayoutBounds().getWidth() > room) {
+            cut.add(
+                (labeled.getId() == null
+                        ? labeled.getClass().getSimpleName()
+                        : "#" + labeled.getId())
+                    + " is narrower than \""
+                    + word
+                    + "\" in \""
+                    + labeled.getText()
+                    + "\"");
+            break;
           }
         }
       }

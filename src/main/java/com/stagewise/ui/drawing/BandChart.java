@@ -147,7 +147,11 @@ public final class BandChart extends Region {
             haveBand ? "healthy " + bandText() : "healthy band unknown",
             Palette.font(15),
             Palette.BAND_EDGE.darker());
-    range.setX(width - SIDE - range.getLayoutBounds().getWidth());
+    if (range.getLayoutBounds().getWidth() > width - 4) {
+      // A narrow card (a 1024 px window): the words in a smaller size rather than cut.
+      range.setFont(Palette.font(12));
+    }
+    range.setX(Math.max(2, width - SIDE - range.getLayoutBounds().getWidth()));
     range.setY(12);
     getChildren().add(range);
     // The card's own line names the point: the chart's title gives way rather than overlap.

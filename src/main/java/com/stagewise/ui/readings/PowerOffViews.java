@@ -9,7 +9,6 @@ import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
-import javafx.scene.layout.HBox;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
@@ -70,8 +69,9 @@ final class PowerOffViews {
     VBox offerBox = new VBox(6, offer, take);
     offerBox.getStyleClass().add("ohms-offer");
     showWhen(offerBox, mode.leadingProperty().and(mode.activeProperty().not()));
-    HBox switches = new HBox(6, volts, ohms);
-    switches.setAlignment(Pos.CENTER_LEFT);
+    // The two switches wrap onto two rows when the column is narrow (1024 wide) rather than cut.
+    javafx.scene.layout.FlowPane switches = new javafx.scene.layout.FlowPane(6, 6, volts, ohms);
+    switches.setPrefWrapLength(280);
     // In the probe column: the value pad and its Add reading button stay where they were.
     return new VBox(8, switches, offerBox, banner(model));
   }

@@ -48,17 +48,21 @@ public final class ReadingsView {
     root.getStylesheets().add(ReadingsView.class.getResource("readings.css").toExternalForm());
     root.setId("screen-readings");
     VBox probe = probePanel();
+    // At 1024 wide the three columns share the width: the probe and the pad narrow (keys to their
+    // 48 px touch minimum) before the suspects do, so that no suspect's name is squeezed away.
     probe.setPrefWidth(380);
-    probe.setMinWidth(380);
+    probe.setMinWidth(330);
     VBox pad = new VBox(10);
     pad.getStyleClass().add("panel");
     Label padTitle = new Label("What does the meter show?");
     padTitle.getStyleClass().add("section-title");
     ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
     pad.getChildren().addAll(padTitle, correctingBar(), valuePad);
-    pad.setMinWidth(396);
+    pad.setMinWidth(342);
+    pad.setPrefWidth(396);
     pad.setMaxWidth(396);
     VBox results = resultsPanel();
+    results.setMinWidth(276);
     HBox.setHgrow(results, Priority.ALWAYS);
     HBox columns = new HBox(12, probe, pad, results);
     VBox.setVgrow(columns, Priority.ALWAYS);
@@ -192,8 +196,8 @@ public final class ReadingsView {
         .textProperty()
         .bind(
             Bindings.when(model.powerOff().activeProperty())
-                .then("Back to the suggested pair")
-                .otherwise("Back to the suggested probe"));
+                .then("Back to suggested pair")
+                .otherwise("Back to suggested probe"));
     suggested.setOnAction(e -> model.followSuggestion());
     other
         .promptTextProperty()

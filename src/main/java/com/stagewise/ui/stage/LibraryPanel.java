@@ -41,6 +41,8 @@ final class LibraryPanel {
     fromLibrary.setSelected(true);
     fromLibrary.getStyleClass().add("source-toggle");
     fromTemplate.getStyleClass().add("source-toggle");
+    fromLibrary.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+    fromTemplate.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
     source
         .selectedToggleProperty()
         .addListener(

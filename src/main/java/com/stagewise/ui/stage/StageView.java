@@ -26,6 +26,7 @@ import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import org.controlsfx.validation.ValidationResult;
@@ -55,7 +56,7 @@ public final class StageView {
     root.setId("screen-stage");
     VBox library = new LibraryPanel(model, root).build(templatePanel());
     library.setPrefWidth(250);
-    library.setMinWidth(230);
+    library.setMinWidth(250);
     VBox middle = middlePanel();
     HBox.setHgrow(middle, Priority.ALWAYS);
     VBox editor = editorPanel();
@@ -227,7 +228,9 @@ public final class StageView {
               }
             });
     ListSelection.bind(parts, model.selectedPartProperty());
-    Button use = new Button("Use this stage — go to readings");
+    Button use = new Button("Use this stage");
+    use.setTooltip(
+        new javafx.scene.control.Tooltip("Diagnose with this stage: go on to the readings"));
     use.setId("use-stage");
     use.getStyleClass().add("primary");
     use.setMaxWidth(Double.MAX_VALUE);
@@ -246,6 +249,7 @@ public final class StageView {
       schematic.setNetLabels(Map.of());
       Label problem = new Label("Cannot work out this stage: " + expected.problem());
       problem.setWrapText(true);
+      problem.setMinHeight(Region.USE_PREF_SIZE);
       expectedBox.getChildren().add(problem);
       return;
     }
@@ -269,6 +273,8 @@ public final class StageView {
     schematic.setNetLabels(labels);
     Label nets = new Label(ranges.toString());
     nets.setWrapText(true);
+    // Made after the screen was put in the window: it needs its lines' height set here.
+    nets.setMinHeight(Region.USE_PREF_SIZE);
     StringBuilder states = new StringBuilder();
     expected
         .states()
@@ -286,6 +292,8 @@ public final class StageView {
                     .append("   "));
     Label stateLine = new Label(states.toString().strip());
     stateLine.getStyleClass().add("hint");
+    stateLine.setWrapText(true);
+    stateLine.setMinHeight(Region.USE_PREF_SIZE);
     expectedBox.getChildren().addAll(nets, stateLine);
   }
 
