@@ -16,6 +16,7 @@ import com.stagewise.history.demo.DemoHistory;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairAction;
@@ -375,6 +376,17 @@ public final class Casework {
    */
   public RepairCase closeCase(String caseId, Outcome outcome, List<String> faults, String note) {
     return store.cases().close(caseId, new Cases.CloseOut(outcome, faults, note, List.of()));
+  }
+
+  /**
+   * Attaches a photo of the board (a PNG or JPEG file of at most 20 MB) to a case, named as the one
+   * who attaches it the technician of this workflow, in one transaction.
+   *
+   * @throws InvalidInputException naming the file when it is missing, too large or not a PNG or
+   *     JPEG picture, or when the case is unknown: nothing is stored then
+   */
+  public CasePhoto attachPhoto(String caseId, Path file) {
+    return CasePhotos.attach(store, caseId, file, stages.who());
   }
 
   // ---- the history as a whole -------------------------------------------------------------------

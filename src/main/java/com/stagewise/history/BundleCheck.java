@@ -8,6 +8,7 @@ import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
@@ -36,6 +37,7 @@ public final class BundleCheck {
   public static final String SUSPECT_LIST = "suspect list";
   public static final String ACTION = "action";
   public static final String NOTE = "note";
+  public static final String PHOTO = "photo";
 
   /**
    * How far after the importing bench's clock a time in a bundle may lie. Benches' clocks differ by
@@ -185,6 +187,13 @@ public final class BundleCheck {
       time(at + ".at", n.at());
       time(at + ".updatedAt", n.updatedAt());
     }
+    for (int i = 0; i < b.photos().size(); i++) {
+      StoredPhoto p = b.photos().get(i);
+      String at = "photos[" + i + "]";
+      declare(at, p.photo().id(), PHOTO);
+      Checks.photo(source, at, p);
+      time(at + ".attachedAt", p.photo().attachedAt());
+    }
   }
 
   private void repairCase(String at, RepairCase c) {
@@ -247,6 +256,9 @@ public final class BundleCheck {
     }
     for (int i = 0; i < b.notes().size(); i++) {
       refer(local, "notes[" + i + "].caseId", b.notes().get(i).caseId(), CASE);
+    }
+    for (int i = 0; i < b.photos().size(); i++) {
+      refer(local, "photos[" + i + "].caseId", b.photos().get(i).photo().caseId(), CASE);
     }
   }
 

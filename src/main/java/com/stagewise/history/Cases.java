@@ -2,9 +2,11 @@ package com.stagewise.history;
 
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.SuspectListRecord;
 import java.util.List;
@@ -84,6 +86,19 @@ public interface Cases {
   RepairAction addAction(
       String caseId, ActionKind kind, String part, String oldValue, String newValue, String text);
 
+  /**
+   * Attaches a photo of the board to a case and returns what is now listed with the case: the
+   * picture is stored exactly as given, with its file name, when and by whom it was attached.
+   *
+   * @throws com.stagewise.circuit.InvalidInputException if the case is unknown, the picture is not
+   *     a PNG or JPEG or larger than {@link Checks#MAX_PHOTO_BYTES}, or the file name is empty or
+   *     too long; nothing is then written
+   */
+  CasePhoto attachPhoto(String caseId, PhotoDraft draft);
+
+  /** Returns a photo with its picture, if there is one with this id. */
+  Optional<StoredPhoto> photo(String photoId);
+
   /** Returns everything about one case. */
   Optional<CaseFile> caseFile(String caseId);
 
@@ -129,6 +144,21 @@ public interface Cases {
       confirmedFaults = List.copyOf(confirmedFaults);
       note = note == null ? "" : note;
       actions = List.copyOf(actions);
+    }
+  }
+
+  /**
+   * A photo to be attached, before it has an id and a time.
+   *
+   * @param fileName the name of the file it came from, without its folder
+   * @param image the picture file's bytes
+   * @param attachedBy who attaches it (may be empty)
+   */
+  record PhotoDraft(String fileName, byte[] image, String attachedBy) {
+    public PhotoDraft {
+      Objects.requireNonNull(fileName, "fileName");
+      Objects.requireNonNull(image, "image");
+      attachedBy = attachedBy == null ? "" : attachedBy;
     }
   }
 

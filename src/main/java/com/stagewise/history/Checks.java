@@ -1,7 +1,9 @@
 package com.stagewise.history;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.ReadingKind;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
@@ -30,6 +32,12 @@ public final class Checks {
 
   /** Suspects in one stored suspect list, and faults in one group or one close-out. */
   public static final int MAX_LIST = 1_000;
+
+  /**
+   * The largest photo a case takes: 20 MB (20 × 1024 × 1024 bytes), several times what a phone's
+   * photo of a board takes, so that a bundle of a busy shop stays a file one can carry.
+   */
+  public static final long MAX_PHOTO_BYTES = 20L * 1024 * 1024;
 
   private static final Pattern UUID_SHAPE =
       Pattern.compile("[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}");
@@ -146,6 +154,58 @@ public final class Checks {
       finite(source, field + ".uncertainty", r.uncertainty());
     }
     text(source, field + ".meter", r.meterText(), MAX_TEXT);
+  }
+
+  /**
+   * Checks a photo before it is stored: its file name, a PNG or JPEG picture whose kind and size in
+   * pixels are what the record says, at most {@link #MAX_PHOTO_BYTES}; {@code field} names it in
+   * messages.
+   */
+  public static void photo(String source, String field, StoredPhoto p) {
+    CasePhoto about = p.photo();
+    shortText(source, field + ".fileName", about.fileName(), true);
+    shortText(source, field + ".attachedBy", about.attachedBy(), false);
+    if (p.image().length > MAX_PHOTO_BYTES) {
+      throw new InvalidInputException(
+          source,
+          field + ".image",
+          "the photo is "
+              + megabytes(p.image().length)
+              + "; at most "
+              + megabytes(MAX_PHOTO_BYTES)
+              + " are accepted");
+    }
+    PhotoFormat.Picture picture =
+        PhotoFormat.of(p.image())
+            .orElseThrow(
+                () ->
+                    new InvalidInputException(
+                        source, field + ".image", "expected a PNG or JPEG picture"));
+    if (!picture.mediaType().equals(about.mediaType())
+        || picture.width() != about.width()
+        || picture.height() != about.height()) {
+      throw new InvalidInputException(
+          source,
+          field,
+          "the picture is a "
+              + picture.mediaType()
+              + " of "
+              + picture.width()
+              + " × "
+              + picture.height()
+              + " pixels, but the photo says "
+              + quote(about.mediaType())
+              + " of "
+              + about.width()
+              + " × "
+              + about.height());
+    }
+  }
+
+  /** Returns a size in bytes as megabytes with one decimal, the same in every locale: 20.0 MB. */
+  public static String megabytes(long bytes) {
+    long tenths = Math.round(bytes / (1024.0 * 1024.0) * 10);
+    return (tenths / 10) + "." + (tenths % 10) + " MB";
   }
 
   /** Checks a suspect list before it is stored; {@code field} names it in messages. */

@@ -107,6 +107,15 @@ public final class Exporter {
           rows.query(
               Records.NOTE + " WHERE " + caseIds + byCase + "at, " + d.insertionOrder("row"),
               Records::note,
+              p),
+          rows.query(
+              Records.PHOTO_WITH_IMAGE
+                  + " WHERE "
+                  + caseIds
+                  + byCase
+                  + "attached_at, "
+                  + d.insertionOrder("row"),
+              Records::photoWithImage,
               p));
     }
   }

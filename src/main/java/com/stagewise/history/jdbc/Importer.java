@@ -9,6 +9,7 @@ import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
@@ -125,6 +126,23 @@ public final class Importer {
     }
     for (CaseNote n : b.notes()) {
       mergeNote(n, rows);
+    }
+    for (StoredPhoto p : b.photos()) {
+      // A photo is never edited once attached: a known id with the same picture is unchanged.
+      StoredPhoto here = new StoredPhoto(p.photo().withCase(mapped(p.photo().caseId())), p.image());
+      if (rows.tryInsert(here)) {
+        added++;
+      } else {
+        settleFixed(
+            BundleCheck.PHOTO,
+            here.photo().id(),
+            here,
+            rows.first(
+                    Records.PHOTO_WITH_IMAGE + " WHERE id = ?",
+                    Records::photoWithImage,
+                    here.photo().id())
+                .orElseThrow());
+      }
     }
     for (String caseId : touchedCases) {
       rows.indexParts(caseId);

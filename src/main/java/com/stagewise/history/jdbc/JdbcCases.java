@@ -7,16 +7,19 @@ import com.stagewise.history.CaseFile;
 import com.stagewise.history.Cases;
 import com.stagewise.history.Checks;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.PhotoFormat;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
@@ -300,6 +303,51 @@ public final class JdbcCases implements Cases {
   }
 
   @Override
+  public CasePhoto attachPhoto(String caseId, PhotoDraft draft) {
+    Objects.requireNonNull(draft, "draft");
+    String fileName = draft.fileName().strip();
+    Instant now = history.clock().instant();
+    // The picture's kind and size are read from its own header, so the record cannot disagree.
+    PhotoFormat.Picture picture =
+        PhotoFormat.of(draft.image()).orElse(new PhotoFormat.Picture("", 0, 0));
+    StoredPhoto photo =
+        new StoredPhoto(
+            new CasePhoto(
+                HistoryStore.newId(),
+                caseId,
+                fileName,
+                picture.mediaType(),
+                picture.width(),
+                picture.height(),
+                draft.image().length,
+                now,
+                draft.attachedBy().strip()),
+            draft.image());
+    Checks.photo(SOURCE, "photo", photo);
+    return history.write(
+        "attach a photo",
+        c -> {
+          try (Rows rows = history.rows(c)) {
+            Require.repairCase(rows, caseId);
+            rows.insert(photo);
+            return photo.photo();
+          }
+        });
+  }
+
+  @Override
+  public Optional<StoredPhoto> photo(String photoId) {
+    return history.read(
+        "read a photo",
+        c -> {
+          try (Rows rows = history.rows(c)) {
+            return rows.first(
+                Records.PHOTO_WITH_IMAGE + " WHERE id = ?", Records::photoWithImage, photoId);
+          }
+        });
+  }
+
+  @Override
   public Optional<CaseFile> caseFile(String caseId) {
     return history.read(
         "read a case",
@@ -366,6 +414,10 @@ public final class JdbcCases implements Cases {
         rows.query(
             Records.NOTE + " WHERE case_id = ? ORDER BY at, " + d.insertionOrder("row"),
             Records::note,
+            id),
+        rows.query(
+            Records.PHOTO + " WHERE case_id = ? ORDER BY attached_at, " + d.insertionOrder("row"),
+            Records::photo,
             id));
   }
 

@@ -3,12 +3,14 @@ package com.stagewise.history.jdbc;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import java.sql.ResultSet;
@@ -35,6 +37,16 @@ public final class Records {
       "SELECT id, case_id, at, kind, part, old_value, new_value, text, updated_at"
           + " FROM repair_action";
   public static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
+
+  /** Selects photos without their pictures. */
+  public static final String PHOTO =
+      "SELECT id, case_id, file_name, media_type, width, height, bytes, attached_at, attached_by"
+          + " FROM case_photo";
+
+  /** Selects photos with their pictures (column 10). */
+  public static final String PHOTO_WITH_IMAGE =
+      "SELECT id, case_id, file_name, media_type, width, height, bytes, attached_at, attached_by,"
+          + " image FROM case_photo";
 
   private Records() {}
 
@@ -116,6 +128,23 @@ public final class Records {
   public static CaseNote note(ResultSet rs) throws SQLException {
     return new CaseNote(
         rs.getString(1), rs.getString(2), time(rs, 3), rs.getString(4), time(rs, 5));
+  }
+
+  public static CasePhoto photo(ResultSet rs) throws SQLException {
+    return new CasePhoto(
+        rs.getString(1),
+        rs.getString(2),
+        rs.getString(3),
+        rs.getString(4),
+        rs.getInt(5),
+        rs.getInt(6),
+        rs.getLong(7),
+        time(rs, 8),
+        rs.getString(9));
+  }
+
+  public static StoredPhoto photoWithImage(ResultSet rs) throws SQLException {
+    return new StoredPhoto(photo(rs), rs.getBytes(10));
   }
 
   public static Instant time(ResultSet rs, int column) throws SQLException {

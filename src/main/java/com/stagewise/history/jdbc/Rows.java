@@ -3,9 +3,11 @@ package com.stagewise.history.jdbc;
 import com.stagewise.history.Checks;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
@@ -97,6 +99,8 @@ public final class Rows implements AutoCloseable {
         statement.setLong(i + 1, n);
       } else if (value instanceof Double d) {
         statement.setDouble(i + 1, d);
+      } else if (value instanceof byte[] bytes) {
+        statement.setBytes(i + 1, bytes);
       } else {
         throw new IllegalArgumentException("cannot bind " + value.getClass());
       }
@@ -175,6 +179,8 @@ public final class Rows implements AutoCloseable {
       inserted = tryInsert(a);
     } else if (record instanceof CaseNote n) {
       inserted = tryInsert(n);
+    } else if (record instanceof StoredPhoto p) {
+      inserted = tryInsert(p);
     } else {
       throw new IllegalArgumentException("not a history record: " + record.getClass());
     }
@@ -418,6 +424,26 @@ public final class Rows implements AutoCloseable {
         n.text(),
         n.updatedAt(),
         n.id());
+  }
+
+  public boolean tryInsert(StoredPhoto p) throws SQLException {
+    CasePhoto about = p.photo();
+    int inserted =
+        update(
+            "INSERT INTO case_photo (id, case_id, file_name, media_type, width, height, bytes,"
+                + " attached_at, attached_by, image) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
+                + " ON CONFLICT (id) DO NOTHING",
+            about.id(),
+            about.caseId(),
+            about.fileName(),
+            about.mediaType(),
+            about.width(),
+            about.height(),
+            about.bytes(),
+            about.attachedAt(),
+            about.attachedBy(),
+            p.image());
+    return inserted == 1;
   }
 
   /**

@@ -23,7 +23,8 @@ final class ChangeFeed {
     "reading",
     "suspect_list",
     "repair_action",
-    "case_note"
+    "case_note",
+    "case_photo"
   };
 
   private ChangeFeed() {}
@@ -42,7 +43,8 @@ final class ChangeFeed {
           "SELECT case_id FROM reading WHERE change_no > ?1"
               + " UNION SELECT case_id FROM suspect_list WHERE change_no > ?1"
               + " UNION SELECT case_id FROM repair_action WHERE change_no > ?1"
-              + " UNION SELECT case_id FROM case_note WHERE change_no > ?1";
+              + " UNION SELECT case_id FROM case_note WHERE change_no > ?1"
+              + " UNION SELECT case_id FROM case_photo WHERE change_no > ?1";
       String cases = "c.change_no > ?1 OR c.id IN (" + children + ")";
       String units =
           "change_no > ?1 OR id IN (SELECT c.unit_id FROM repair_case c WHERE " + cases + ")";
@@ -98,7 +100,11 @@ final class ChangeFeed {
                   Records::action,
                   after),
               rows.query(
-                  Records.NOTE + " WHERE change_no > ? ORDER BY change_no", Records::note, after));
+                  Records.NOTE + " WHERE change_no > ? ORDER BY change_no", Records::note, after),
+              rows.query(
+                  Records.PHOTO_WITH_IMAGE + " WHERE change_no > ? ORDER BY change_no",
+                  Records::photoWithImage,
+                  after));
       return new ShopServer.Changes(bundle, through);
     }
   }

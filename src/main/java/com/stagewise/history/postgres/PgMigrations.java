@@ -25,7 +25,8 @@ final class PgMigrations {
           "V4__ohms_readings.sql",
           "V5__struck_readings.sql",
           "V6__stage_versions.sql",
-          "V7__ac_measure.sql");
+          "V7__ac_measure.sql",
+          "V8__case_photos.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

@@ -28,6 +28,7 @@ final class PgTransfer implements Transfer {
           "suspect",
           "repair_action",
           "case_note",
+          "case_photo",
           "schema_version");
 
   private final PgHistory history;

@@ -33,7 +33,8 @@ public final class ServerCheck {
           "suspect_list",
           "suspect",
           "repair_action",
-          "case_note");
+          "case_note",
+          "case_photo");
 
   /** Tables whose rows a bench rewrites (a case's faults and parts on close-out or merge). */
   private static final List<String> REWRITTEN = List.of("confirmed_fault", "case_part");

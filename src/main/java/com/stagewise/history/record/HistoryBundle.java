@@ -13,6 +13,7 @@ import java.util.Objects;
  * @param version the bundle format version
  * @param exportedAt when it was exported
  * @param programVersion the Stagewise version that exported it
+ * @param photos the photos of the board attached to its cases, with their pictures
  */
 public record HistoryBundle(
     int version,
@@ -25,7 +26,8 @@ public record HistoryBundle(
     List<StoredReading> readings,
     List<SuspectListRecord> suspectLists,
     List<RepairAction> actions,
-    List<CaseNote> notes) {
+    List<CaseNote> notes,
+    List<StoredPhoto> photos) {
 
   /** The {@code format} word of a history bundle file. */
   public static final String FORMAT = "stagewise-history";
@@ -33,10 +35,10 @@ public record HistoryBundle(
   /**
    * The newest bundle format version this program reads and the one it writes (2: readings may be
    * ohms readings, with {@code "to"} and {@code "OL"}; 3: stage sheets carry their version number,
-   * who saved them and when, and cases the stage version they are diagnosed with). Bundles of
-   * earlier versions are read as before.
+   * who saved them and when, and cases the stage version they are diagnosed with; 4: photos of the
+   * board attached to cases). Bundles of earlier versions are read as before.
    */
-  public static final int CURRENT_VERSION = 3;
+  public static final int CURRENT_VERSION = 4;
 
   /**
    * The first bundle format version whose stage sheets carry version numbers; a sheet of an earlier
@@ -60,6 +62,35 @@ public record HistoryBundle(
     suspectLists = List.copyOf(suspectLists);
     actions = List.copyOf(actions);
     notes = List.copyOf(notes);
+    photos = List.copyOf(photos);
+  }
+
+  /** A bundle without photos (every bundle before format 4). */
+  public HistoryBundle(
+      int version,
+      Instant exportedAt,
+      String programVersion,
+      List<BoardModel> boardModels,
+      List<StageSheetRecord> stageSheets,
+      List<Unit> units,
+      List<RepairCase> cases,
+      List<StoredReading> readings,
+      List<SuspectListRecord> suspectLists,
+      List<RepairAction> actions,
+      List<CaseNote> notes) {
+    this(
+        version,
+        exportedAt,
+        programVersion,
+        boardModels,
+        stageSheets,
+        units,
+        cases,
+        readings,
+        suspectLists,
+        actions,
+        notes,
+        List.of());
   }
 
   /** Returns the number of records of every kind together. */
@@ -71,6 +102,7 @@ public record HistoryBundle(
         + readings.size()
         + suspectLists.size()
         + actions.size()
-        + notes.size();
+        + notes.size()
+        + photos.size();
   }
 }

@@ -13,6 +13,7 @@ import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.history.record.Unit;
@@ -38,7 +39,8 @@ final class Ledger implements SyncLedger {
           BundleCheck.READING, "SELECT case_id FROM reading WHERE id = ?",
           BundleCheck.SUSPECT_LIST, "SELECT case_id FROM suspect_list WHERE id = ?",
           BundleCheck.ACTION, "SELECT case_id FROM repair_action WHERE id = ?",
-          BundleCheck.NOTE, "SELECT case_id FROM case_note WHERE id = ?");
+          BundleCheck.NOTE, "SELECT case_id FROM case_note WHERE id = ?",
+          BundleCheck.PHOTO, "SELECT case_id FROM case_photo WHERE id = ?");
 
   private final SqliteHistory history;
 
@@ -123,6 +125,7 @@ final class Ledger implements SyncLedger {
     List<SuspectListRecord> lists = new ArrayList<>();
     List<RepairAction> actions = new ArrayList<>();
     List<CaseNote> notes = new ArrayList<>();
+    List<StoredPhoto> photos = new ArrayList<>();
     if (group.startsWith(BundleCheck.BOARD_MODEL + " ")) {
       models.addAll(rows.query(Records.BOARD_MODEL + " WHERE id = ?", Records::boardModel, key));
       for (StageSheetRecord s :
@@ -185,6 +188,18 @@ final class Ledger implements SyncLedger {
           notes.add(n);
         }
       }
+      for (String photoId :
+          rows.query(
+              "SELECT id FROM case_photo WHERE case_id = ? ORDER BY attached_at, row",
+              rs -> rs.getString(1),
+              key)) {
+        if (ids.contains(photoId)) {
+          photos.add(
+              rows.first(
+                      Records.PHOTO_WITH_IMAGE + " WHERE id = ?", Records::photoWithImage, photoId)
+                  .orElseThrow());
+        }
+      }
     }
     return new HistoryBundle(
         HistoryBundle.CURRENT_VERSION,
@@ -197,7 +212,8 @@ final class Ledger implements SyncLedger {
         readings,
         lists,
         actions,
-        notes);
+        notes,
+        photos);
   }
 
   @Override
@@ -250,6 +266,7 @@ final class Ledger implements SyncLedger {
     b.suspectLists().forEach(r -> ids.add(r.id()));
     b.actions().forEach(r -> ids.add(r.id()));
     b.notes().forEach(r -> ids.add(r.id()));
+    b.photos().forEach(r -> ids.add(r.photo().id()));
     return ids;
   }
 

@@ -24,7 +24,8 @@ final class Bundles {
         + b.readings().size()
         + b.suspectLists().size()
         + b.actions().size()
-        + b.notes().size();
+        + b.notes().size()
+        + b.photos().size();
   }
 
   /**
@@ -82,7 +83,8 @@ final class Bundles {
               b.readings().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
               b.suspectLists().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
               b.actions().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
-              b.notes().stream().filter(r -> caseIds.contains(r.caseId())).toList()));
+              b.notes().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
+              b.photos().stream().filter(r -> caseIds.contains(r.photo().caseId())).toList()));
     }
     return out;
   }

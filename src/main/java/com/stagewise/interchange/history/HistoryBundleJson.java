@@ -63,7 +63,8 @@ public final class HistoryBundleJson {
           "readings",
           "suspectLists",
           "actions",
-          "notes");
+          "notes",
+          "photos");
   private static final List<String> BOARD_MODEL =
       List.of("id", "name", "maker", "notes", "updatedAt");
   private static final List<String> UNIT =
@@ -289,7 +290,8 @@ public final class HistoryBundleJson {
         readings,
         lists,
         actions,
-        notes);
+        notes,
+        top.optionalElements("photos", "photos").stream().map(PhotoFields::photo).toList());
   }
 
   private static final String ACTION_KINDS = "part-replaced, reflow, adjustment or other";
@@ -349,6 +351,7 @@ public final class HistoryBundleJson {
       writeArray(json, "suspectLists", bundle.suspectLists(), BundleTrees::tree);
       writeArray(json, "actions", bundle.actions(), BundleTrees::tree);
       writeArray(json, "notes", bundle.notes(), BundleTrees::tree);
+      writeArray(json, "photos", bundle.photos(), PhotoFields::tree);
       json.writeEndObject();
     }
   }

@@ -2,6 +2,7 @@ package com.stagewise.history.postgres;
 
 import com.stagewise.history.CasesContract;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.PhotosContract;
 import com.stagewise.history.SearchContract;
 import com.stagewise.history.StageLibraryContract;
 import com.stagewise.history.StageVersionsContract;
@@ -62,6 +63,14 @@ class PgContractTest {
 
   @Nested
   class Transfers extends TransferContract {
+    @Override
+    protected HistoryStore openStore(Clock clock) {
+      return fresh(clock);
+    }
+  }
+
+  @Nested
+  class Photos extends PhotosContract {
     @Override
     protected HistoryStore openStore(Clock clock) {
       return fresh(clock);

@@ -196,6 +196,68 @@ class PgMigrationTest {
     assertThat(changeNumber(s)).isEqualTo(changeBefore);
   }
 
+  @Test
+  void version7Shop_migrates_casesHaveNoPhotos_aBenchRoleMayAddThem_withoutNewChangeNumbers()
+      throws SQLException {
+    ServerAddress address = server.freshShop();
+    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
+    try {
+      PgMigrations.migrate(admin, 0L, 7);
+    } finally {
+      admin.close();
+    }
+    String s = address.schema();
+    String bench = "bench_" + s.replaceAll("[^a-z0-9_]", "_");
+    server.adminSql(
+        "SET search_path TO " + s,
+        "CREATE ROLE " + bench + " LOGIN PASSWORD 'x'",
+        // The rights server-init gives a bench on the tables of version 7.
+        "GRANT SELECT, INSERT, UPDATE ON " + s + ".reading, " + s + ".repair_case TO " + bench,
+        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
+        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
+        "INSERT INTO "
+            + s
+            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
+            + " VALUES ('c1', 'u1', "
+            + TAKEN
+            + ", 'crackles when cold', 'open', "
+            + TAKEN
+            + ")");
+    long changeBefore = maxChange(s, "repair_case");
+
+    try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
+      assertThat(shop.schemaVersion()).isEqualTo(PgMigrations.LATEST);
+      assertThat(shop.cases().caseFile("c1").orElseThrow().photos()).isEmpty();
+      assertThat(shop.cases().caseFile("c1").orElseThrow().repairCase().symptom())
+          .isEqualTo("crackles when cold");
+      assertThat(maxChange(s, "repair_case")).isEqualTo(changeBefore);
+      byte[] png = com.stagewise.history.TestPictures.png(16, 12);
+      var photo =
+          shop.cases()
+              .attachPhoto("c1", new com.stagewise.history.Cases.PhotoDraft("a.png", png, "Ann"));
+      assertThat(shop.cases().photo(photo.id()).orElseThrow().image()).isEqualTo(png);
+      // The photo takes a change number, so that the benches pull it.
+      assertThat(maxChange(s, "case_photo")).isGreaterThan(changeBefore);
+    }
+    try (Connection c = server.adminConnection(TestServer.DATABASE);
+        Statement st = c.createStatement();
+        ResultSet rs =
+            st.executeQuery(
+                "SELECT has_table_privilege('"
+                    + bench
+                    + "', '"
+                    + s
+                    + ".case_photo', 'INSERT'), has_table_privilege('"
+                    + bench
+                    + "', '"
+                    + s
+                    + ".case_photo', 'DELETE')")) {
+      assertThat(rs.next()).isTrue();
+      assertThat(rs.getBoolean(1)).as("a bench role may add photos").isTrue();
+      assertThat(rs.getBoolean(2)).as("and may not delete them").isFalse();
+    }
+  }
+
   private long maxChange(String schema, String table) throws SQLException {
     try (Connection c = server.adminConnection(TestServer.DATABASE);
         Statement st = c.createStatement();

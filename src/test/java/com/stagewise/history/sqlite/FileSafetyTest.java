@@ -309,6 +309,25 @@ class FileSafetyTest {
         StageSheetRecord next =
             store.library().useForCase(opened.id(), FixtureMaker.SHEET_TITLE, "{}", "Ann");
         assertThat(next.version()).isEqualTo(versions.size() + 1);
+        // Schema 7: the cases of before have no photos, and the migrated file takes one, which
+        // goes to the outbox for the shop server like any new record.
+        assertThat(history.cases()).allMatch(c -> c.photos().isEmpty());
+        byte[] png = com.stagewise.history.TestPictures.png(32, 24);
+        com.stagewise.history.record.CasePhoto photo =
+            store
+                .cases()
+                .attachPhoto(
+                    opened.id(), new com.stagewise.history.Cases.PhotoDraft("top.png", png, "Ann"));
+        assertThat(store.cases().photo(photo.id()).orElseThrow().image()).isEqualTo(png);
+        assertThat(store.cases().caseFile(opened.id()).orElseThrow().photos())
+            .containsExactly(photo);
+      }
+      try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + copy);
+          PreparedStatement q =
+              c.prepareStatement("SELECT count(*) FROM outbox WHERE kind = 'photo'");
+          java.sql.ResultSet rs = q.executeQuery()) {
+        assertThat(rs.next()).isTrue();
+        assertThat(rs.getInt(1)).isEqualTo(1);
       }
       if (version >= 3) {
         // Numbering the stored sheets is no change to send to the shop server: each is in the

@@ -2,6 +2,7 @@ package com.stagewise.history.sqlite;
 
 import com.stagewise.history.CasesContract;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.PhotosContract;
 import com.stagewise.history.SearchContract;
 import com.stagewise.history.StageLibraryContract;
 import com.stagewise.history.StageVersionsContract;
@@ -64,6 +65,14 @@ class SqliteContractTest {
 
   @Nested
   class Transfers extends TransferContract {
+    @Override
+    protected HistoryStore openStore(Clock clock) {
+      return fresh(clock);
+    }
+  }
+
+  @Nested
+  class Photos extends PhotosContract {
     @Override
     protected HistoryStore openStore(Clock clock) {
       return fresh(clock);
