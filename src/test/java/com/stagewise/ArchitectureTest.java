@@ -238,6 +238,7 @@ class ArchitectureTest {
           "Cases.addReadings",
           "Cases.addNote",
           "Cases.addAction",
+          "Cases.attachPhoto",
           "StageLibrary.add",
           "StageLibrary.save",
           "StageLibrary.useForCase",
@@ -290,6 +291,7 @@ class ArchitectureTest {
             "Cases.addReadings",
             "Cases.addNote",
             "Cases.addAction",
+            "Cases.attachPhoto",
             // A stage joins the library as a version of its stage, saved or used for a case.
             "StageLibrary.save",
             "StageLibrary.useForCase",

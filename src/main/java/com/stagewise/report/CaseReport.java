@@ -4,8 +4,12 @@ import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.BoardModel;
+import com.stagewise.history.record.CasePhoto;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.Unit;
 import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 
 /**
@@ -17,14 +21,17 @@ import java.util.Objects;
  * @param caseFile the case with its readings, suspect lists, actions and notes
  * @param generatedAt when the report was made (printed in UTC)
  * @param programVersion the Stagewise version that made it
+ * @param photos the case's photos of the board with their pictures, in the order attached
  */
 public record CaseReport(
     Unit unit,
     BoardModel boardModel,
     CaseFile caseFile,
     Instant generatedAt,
-    String programVersion) {
+    String programVersion,
+    List<StoredPhoto> photos) {
   public CaseReport {
+    photos = List.copyOf(photos);
     Objects.requireNonNull(unit, "unit");
     Objects.requireNonNull(boardModel, "boardModel");
     Objects.requireNonNull(caseFile, "caseFile");
@@ -35,6 +42,16 @@ public record CaseReport(
       throw new IllegalArgumentException(
           "the case, the unit and the board model do not belong together");
     }
+  }
+
+  /** A report of a case without photos. */
+  public CaseReport(
+      Unit unit,
+      BoardModel boardModel,
+      CaseFile caseFile,
+      Instant generatedAt,
+      String programVersion) {
+    this(unit, boardModel, caseFile, generatedAt, programVersion, List.of());
   }
 
   /**
@@ -55,6 +72,10 @@ public record CaseReport(
                         "history", "case", "no case has the id '" + caseId + "'"));
     Unit unit = store.units().find(file.repairCase().unitId()).orElseThrow();
     BoardModel model = store.units().findBoardModel(unit.boardModelId()).orElseThrow();
-    return new CaseReport(unit, model, file, generatedAt, programVersion);
+    List<StoredPhoto> photos = new ArrayList<>();
+    for (CasePhoto photo : file.photos()) {
+      store.cases().photo(photo.id()).ifPresent(photos::add);
+    }
+    return new CaseReport(unit, model, file, generatedAt, programVersion, photos);
   }
 }

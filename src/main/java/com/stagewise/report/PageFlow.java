@@ -183,6 +183,22 @@ final class PageFlow {
     y += 4;
   }
 
+  /**
+   * Places a picture of {@code pixelsWide} × {@code pixelsHigh} pixels across the body, scaled to
+   * fit the body's width and a page's height less {@code reserve} points (never larger than one
+   * point per pixel), on a new page if it does not fit below the cursor; returns its height.
+   */
+  double picture(int pixelsWide, int pixelsHigh, int photo, double reserve) {
+    double fit =
+        Math.min(1.0, Math.min(bodyWidth() / pixelsWide, (BOTTOM - TOP - reserve) / pixelsHigh));
+    double width = pixelsWide * fit;
+    double height = pixelsHigh * fit;
+    ensure(height);
+    current.add(new PageItem.Picture(LEFT, y, width, height, photo));
+    y += height;
+    return height;
+  }
+
   /** Places a framed box with a bold title and wrapped text, kept whole on one page. */
   void box(String title, String text) {
     double inner = bodyWidth() - 2 * BOX_PADDING;

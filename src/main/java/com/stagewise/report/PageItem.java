@@ -16,4 +16,10 @@ sealed interface PageItem {
    * wide.
    */
   record Frame(double x, double y, double width, double height) implements PageItem {}
+
+  /**
+   * A photo of the board with its top-left corner at (x, y), scaled to {@code width} × {@code
+   * height} points; {@code photo} is its place in the report's list of photos.
+   */
+  record Picture(double x, double y, double width, double height, int photo) implements PageItem {}
 }

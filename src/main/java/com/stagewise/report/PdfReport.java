@@ -16,6 +16,7 @@ import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.font.PDType1Font;
 import org.apache.pdfbox.pdmodel.font.Standard14Fonts;
+import org.apache.pdfbox.pdmodel.graphics.image.PDImageXObject;
 
 /** Writes a repair report as a PDF (A4, the standard Helvetica fonts, nothing embedded). */
 public final class PdfReport {
@@ -42,13 +43,14 @@ public final class PdfReport {
     try (PDDocument document = new PDDocument()) {
       Fonts fonts = new Fonts();
       List<Page> pages = ReportLayout.lay(report, fonts::width);
+      Pictures pictures = new Pictures(document, report);
       for (Page page : pages) {
         PDPage pdfPage =
             new PDPage(new PDRectangle((float) PageFlow.PAGE_WIDTH, (float) PageFlow.PAGE_HEIGHT));
         document.addPage(pdfPage);
         try (PDPageContentStream content = new PDPageContentStream(document, pdfPage)) {
           for (PageItem item : page.items()) {
-            draw(content, fonts, item);
+            draw(content, fonts, pictures, item);
           }
         }
       }
@@ -64,7 +66,8 @@ public final class PdfReport {
     }
   }
 
-  private static void draw(PDPageContentStream content, Fonts fonts, PageItem item)
+  private static void draw(
+      PDPageContentStream content, Fonts fonts, Pictures pictures, PageItem item)
       throws IOException {
     // The layout measures y downwards from the top; PDF measures it upwards from the bottom.
     double height = PageFlow.PAGE_HEIGHT;
@@ -87,6 +90,54 @@ public final class PdfReport {
           (float) frame.width(),
           (float) frame.height());
       content.stroke();
+    } else if (item instanceof PageItem.Picture picture) {
+      float bottom = (float) (height - picture.y() - picture.height());
+      PDImageXObject image = pictures.image(picture.photo());
+      if (image != null) {
+        content.drawImage(
+            image, (float) picture.x(), bottom, (float) picture.width(), (float) picture.height());
+      } else {
+        // A picture that PDFBox cannot read is said so in its place; the rest of the report stands.
+        content.setLineWidth(1f);
+        content.addRect(
+            (float) picture.x(), bottom, (float) picture.width(), (float) picture.height());
+        content.stroke();
+        content.beginText();
+        content.setFont(fonts.font(Style.BODY), (float) Style.BODY.size());
+        content.newLineAtOffset((float) picture.x() + 6, bottom + (float) picture.height() - 14);
+        content.showText("This picture could not be read; it is kept in the history.");
+        content.endText();
+      }
+    }
+  }
+
+  /** The report's photos as PDF images, each made once however often it is drawn. */
+  private static final class Pictures {
+    private final PDDocument document;
+    private final CaseReport report;
+    private final java.util.Map<Integer, PDImageXObject> made = new java.util.HashMap<>();
+
+    Pictures(PDDocument document, CaseReport report) {
+      this.document = document;
+      this.report = report;
+    }
+
+    /** Returns the photo as an image of the document, or null if its picture cannot be read. */
+    PDImageXObject image(int photo) {
+      if (!made.containsKey(photo)) {
+        PDImageXObject image;
+        try {
+          image =
+              PDImageXObject.createFromByteArray(
+                  document,
+                  report.photos().get(photo).image(),
+                  report.photos().get(photo).photo().fileName());
+        } catch (IOException | RuntimeException e) {
+          image = null;
+        }
+        made.put(photo, image);
+      }
+      return made.get(photo);
     }
   }
 

@@ -6,8 +6,10 @@ import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
@@ -112,6 +114,7 @@ final class ReportLayout {
     actions();
     confirmed(c);
     notes();
+    photos();
     return flow.finish(
         "Generated "
             + whenUtc(report.generatedAt())
@@ -298,6 +301,35 @@ final class ReportLayout {
       flow.paragraph(Style.BODY_BOLD, whenUtc(note.at()));
       flow.paragraph(Style.BODY, PageFlow.LEFT + 12, PageFlow.bodyWidth() - 12, note.text());
       flow.gap(4);
+    }
+  }
+
+  private void photos() {
+    List<StoredPhoto> photos = report.photos();
+    if (photos.isEmpty()) {
+      return;
+    }
+    flow.heading("Photos of the board (" + photos.size() + ")", 2 * Style.BODY.leading());
+    for (int i = 0; i < photos.size(); i++) {
+      CasePhoto p = photos.get(i).photo();
+      String caption =
+          (i + 1)
+              + ". "
+              + p.fileName()
+              + " — attached "
+              + whenUtc(p.attachedAt())
+              + (p.attachedBy().isBlank() ? "" : " by " + p.attachedBy())
+              + " ("
+              + p.width()
+              + " × "
+              + p.height()
+              + " pixels)";
+      double reserve = 2 * Style.BODY.leading() + 8;
+      flow.gap(4);
+      flow.ensure(Style.BODY.leading() + Math.min(60, p.height()));
+      flow.paragraph(Style.BODY_BOLD, caption);
+      flow.gap(2);
+      flow.picture(p.width(), p.height(), i, reserve);
     }
   }
 

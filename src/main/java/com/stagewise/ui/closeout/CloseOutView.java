@@ -131,8 +131,36 @@ public final class CloseOutView {
     Label recorded = new Label("Recorded in this case");
     recorded.getStyleClass().add("strong");
     HBox addRow = new HBox(8, add, showKeys);
-    box.getChildren().addAll(title, kindRow, form, addRow, keypad, recorded, list);
+    box.getChildren().addAll(title, kindRow, form, addRow, keypad, recorded, list, photosBox());
     return box;
+  }
+
+  /** The photos of the board attached to the case, and the button that attaches one. */
+  private VBox photosBox() {
+    Label title = new Label("Photos of the board");
+    title.getStyleClass().add("strong");
+    VBox lines = new VBox(2);
+    lines.setId("close-photos");
+    Runnable show =
+        () -> {
+          lines.getChildren().clear();
+          if (model.photos().isEmpty()) {
+            Label none = new Label("None attached yet.");
+            none.getStyleClass().add("hint");
+            lines.getChildren().add(none);
+          }
+          for (String line : model.photos()) {
+            Label l = new Label(line);
+            l.setWrapText(true);
+            lines.getChildren().add(l);
+          }
+        };
+    model.photos().addListener((ListChangeListener<String>) c -> show.run());
+    show.run();
+    Button attach = new Button("Attach photo…");
+    attach.setId("close-attach-photo");
+    attach.setOnAction(e -> model.attachPhoto());
+    return new VBox(4, title, lines, attach);
   }
 
   private static TextField field(

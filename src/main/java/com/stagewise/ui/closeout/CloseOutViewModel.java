@@ -11,6 +11,7 @@ import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.ui.Bench;
+import com.stagewise.ui.PhotoAttaching;
 import com.stagewise.ui.ReportSaving;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.words.Words;
@@ -47,6 +48,7 @@ public final class CloseOutViewModel {
   private final StringProperty notes = new SimpleStringProperty("");
   private Consumer<String> afterClose = caseId -> {};
   private final BooleanProperty saveReport = new SimpleBooleanProperty(false);
+  private final ObservableList<String> photos = FXCollections.observableArrayList();
 
   /** Creates the close-out's model on a bench. */
   public CloseOutViewModel(Bench bench) {
@@ -102,6 +104,30 @@ public final class CloseOutViewModel {
     return saveReport;
   }
 
+  /** Returns a line for each photo of the board attached to the case, in the order attached. */
+  public ObservableList<String> photos() {
+    return photos;
+  }
+
+  /**
+   * Asks which photo of the board to attach to the case (PNG or JPEG) and stores it at once, so it
+   * is kept if the case is left open.
+   */
+  public void attachPhoto() {
+    RepairCase rc = bench.openCaseProperty().get();
+    if (rc == null) {
+      return;
+    }
+    PhotoAttaching.attach(
+        bench,
+        rc.id(),
+        photo -> {
+          if (bench.openCaseProperty().get() == rc) {
+            photos.add(Words.photoLine(photo));
+          }
+        });
+  }
+
   /** Sets what happens after a case is closed (the app shows it in the history). */
   public void setAfterClose(Consumer<String> action) {
     afterClose = action;
@@ -112,6 +138,7 @@ public final class CloseOutViewModel {
     confirmedFaults.clear();
     outcome.set(null);
     notes.set("");
+    photos.clear();
     clearForm();
     RepairCase rc = bench.openCaseProperty().get();
     if (rc != null) {
@@ -119,10 +146,11 @@ public final class CloseOutViewModel {
           .tasks()
           .run(
               "Reading the case",
-              () -> bench.store().cases().caseFile(rc.id()).map(f -> f.actions()).orElse(List.of()),
+              () -> bench.store().cases().caseFile(rc.id()),
               stored -> {
-                if (bench.openCaseProperty().get() == rc) {
-                  actions.setAll(stored);
+                if (bench.openCaseProperty().get() == rc && stored.isPresent()) {
+                  actions.setAll(stored.get().actions());
+                  photos.setAll(stored.get().photos().stream().map(Words::photoLine).toList());
                 }
               },
               e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));

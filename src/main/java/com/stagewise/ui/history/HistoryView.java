@@ -3,6 +3,7 @@ package com.stagewise.ui.history;
 import com.stagewise.history.SearchHit;
 import com.stagewise.ui.widget.Keypad;
 import com.stagewise.ui.words.Words;
+import java.io.ByteArrayInputStream;
 import java.util.List;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
@@ -14,8 +15,12 @@ import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
+import javafx.scene.image.Image;
+import javafx.scene.image.ImageView;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 
 /** The history screen: search, results, and the chosen case as it was with its unit's timeline. */
@@ -24,6 +29,12 @@ public final class HistoryView {
   private final HBox root = new HBox(12);
   private final VBox caseBox = new VBox(6);
   private final ListView<SearchHit> list;
+
+  /** The width of a thumbnail in pixels (about a thumb's width on a 13-inch touch screen). */
+  private static final double THUMB_WIDTH = 180;
+
+  /** The largest side a photo is decoded to for the large view (a full-HD screen's width). */
+  private static final double LARGE = 1920;
 
   /** Builds the screen bound to its model. */
   public HistoryView(HistoryViewModel model) {
@@ -40,11 +51,17 @@ public final class HistoryView {
     caseBox.setId("history-case");
     ScrollPane scroll = new ScrollPane(caseBox);
     scroll.setFitToWidth(true);
-    VBox.setVgrow(scroll, Priority.ALWAYS);
-    right.getChildren().add(scroll);
+    StackPane layers = new StackPane(scroll, largePhoto());
+    VBox.setVgrow(layers, Priority.ALWAYS);
+    right.getChildren().add(layers);
     HBox.setHgrow(right, Priority.ALWAYS);
     root.getChildren().addAll(left, right);
     model.shownProperty().addListener((o, was, now) -> showCase(now));
+    model
+        .photos()
+        .addListener(
+            (javafx.collections.ListChangeListener<HistoryViewModel.ShownPhoto>)
+                c -> showCase(model.shownProperty().get()));
     model
         .timeline()
         .addListener(
@@ -179,12 +196,80 @@ public final class HistoryView {
     saved.getStyleClass().add("hint");
     saved.setWrapText(true);
     saved.textProperty().bind(model.reportNoteProperty());
-    caseBox.getChildren().addAll(title, symptom, status, new HBox(8, save), saved);
+    Button attach = new Button("Attach photo…");
+    attach.setId("history-attach-photo");
+    attach.setMinHeight(48);
+    attach.setOnAction(e -> model.attachPhoto());
+    FlowPane buttons = new FlowPane(8, 8, save, attach);
+    caseBox.getChildren().addAll(title, symptom, status, buttons, saved);
+    photos();
     section("Readings", view.readings(), "No readings.");
     section("Suspects at the time", view.suspects(), "No suspect list was computed.");
     section("What was done", view.actions(), "Nothing recorded.");
     section("Notes", view.notes(), "No notes.");
     section("This unit's cases", model.timeline(), "");
+  }
+
+  /** The shown case's photos as thumbnails; tapping one shows it large. */
+  private void photos() {
+    if (model.photos().isEmpty()) {
+      return;
+    }
+    Label head = new Label("Photos of the board (tap one to see it larger)");
+    head.getStyleClass().add("case-section");
+    head.setWrapText(true);
+    FlowPane thumbs = new FlowPane(8, 8);
+    thumbs.setId("history-photos");
+    int n = 0;
+    for (HistoryViewModel.ShownPhoto photo : model.photos()) {
+      ImageView view =
+          new ImageView(
+              new Image(
+                  new ByteArrayInputStream(photo.image()), THUMB_WIDTH, THUMB_WIDTH, true, true));
+      Label caption = new Label(photo.caption());
+      caption.setWrapText(true);
+      caption.setMaxWidth(THUMB_WIDTH);
+      caption.getStyleClass().add("hint");
+      VBox content = new VBox(4, view, caption);
+      Button thumb = new Button(null, content);
+      thumb.setId("history-photo-" + (++n));
+      thumb.getStyleClass().add("photo-thumb");
+      thumb.setOnAction(e -> model.enlarge(photo));
+      thumbs.getChildren().add(thumb);
+    }
+    caseBox.getChildren().addAll(head, thumbs);
+  }
+
+  /** The layer over the case that shows one photo large, with the way back. */
+  private VBox largePhoto() {
+    VBox layer = new VBox(8);
+    layer.setId("history-photo-large");
+    layer.getStyleClass().add("photo-large");
+    ImageView view = new ImageView();
+    view.setPreserveRatio(true);
+    view.setSmooth(true);
+    view.fitWidthProperty().bind(layer.widthProperty().subtract(24));
+    view.fitHeightProperty().bind(layer.heightProperty().subtract(110));
+    Label caption = new Label();
+    caption.setWrapText(true);
+    Button back = new Button("Back to the case");
+    back.setId("history-photo-close");
+    back.getStyleClass().add("primary");
+    back.setOnAction(e -> model.closeEnlarged());
+    layer.getChildren().addAll(back, caption, view);
+    layer.setVisible(false);
+    model
+        .enlargedProperty()
+        .addListener(
+            (o, was, now) -> {
+              layer.setVisible(now != null);
+              view.setImage(
+                  now == null
+                      ? null
+                      : new Image(new ByteArrayInputStream(now.image()), LARGE, LARGE, true, true));
+              caption.setText(now == null ? "" : now.caption());
+            });
+    return layer;
   }
 
   private void section(String heading, List<String> lines, String empty) {

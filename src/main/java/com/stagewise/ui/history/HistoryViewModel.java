@@ -6,6 +6,7 @@ import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
@@ -14,6 +15,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.StoredSuspect;
 import com.stagewise.history.record.SuspectListRecord;
 import com.stagewise.ui.Bench;
+import com.stagewise.ui.PhotoAttaching;
 import com.stagewise.ui.ReportSaving;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
@@ -39,6 +41,8 @@ public final class HistoryViewModel {
   private final ObjectProperty<CaseView> shown = new SimpleObjectProperty<>();
   private final ObservableList<String> timeline = FXCollections.observableArrayList();
   private final StringProperty reportNote = new SimpleStringProperty("");
+  private final ObservableList<ShownPhoto> photos = FXCollections.observableArrayList();
+  private final ObjectProperty<ShownPhoto> enlarged = new SimpleObjectProperty<>();
   private String shownSerial = "";
 
   /** Creates the history screen's model on a bench. */
@@ -89,6 +93,46 @@ public final class HistoryViewModel {
       List<String> suspects,
       List<String> actions,
       List<String> notes) {}
+
+  /**
+   * A photo of the board as the history screen shows it.
+   *
+   * @param id the photo's id
+   * @param caption its file name, size and when and by whom it was attached
+   * @param image the picture file's bytes (PNG or JPEG)
+   */
+  public record ShownPhoto(String id, String caption, byte[] image) {}
+
+  /** Returns the shown case's photos of the board, in the order attached. */
+  public ObservableList<ShownPhoto> photos() {
+    return photos;
+  }
+
+  /** The photo shown large over the case (tapped on its thumbnail), or null. */
+  public ObjectProperty<ShownPhoto> enlargedProperty() {
+    return enlarged;
+  }
+
+  /** Shows a photo large. */
+  public void enlarge(ShownPhoto photo) {
+    enlarged.set(photo);
+  }
+
+  /** Goes back from the large photo to the case. */
+  public void closeEnlarged() {
+    enlarged.set(null);
+  }
+
+  /**
+   * Asks which photo of the board to attach to the shown case (PNG or JPEG), stores it and shows
+   * the case again with it.
+   */
+  public void attachPhoto() {
+    CaseView view = shown.get();
+    if (view != null) {
+      PhotoAttaching.attach(bench, view.caseId(), photo -> show(view.caseId()));
+    }
+  }
 
   public StringProperty queryProperty() {
     return query;
@@ -191,18 +235,31 @@ public final class HistoryViewModel {
                                   "the case " + caseId + " is not in the history"));
               UnitHistory unit =
                   bench.store().cases().unitHistory(file.repairCase().unitId()).orElseThrow();
-              return new Loaded(file, unit);
+              List<ShownPhoto> pictures = new ArrayList<>();
+              for (CasePhoto p : file.photos()) {
+                bench
+                    .store()
+                    .cases()
+                    .photo(p.id())
+                    .ifPresent(
+                        stored ->
+                            pictures.add(
+                                new ShownPhoto(p.id(), Words.photoLine(p), stored.image())));
+              }
+              return new Loaded(file, unit, pictures);
             },
             loaded -> {
               shownSerial = loaded.unit().unit().serial();
               reportNote.set("");
+              enlarged.set(null);
+              photos.setAll(loaded.photos());
               shown.set(view(loaded.file(), loaded.unit()));
               timeline.setAll(timeline(loaded.unit()));
             },
             e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
   }
 
-  private record Loaded(CaseFile file, UnitHistory unit) {}
+  private record Loaded(CaseFile file, UnitHistory unit, List<ShownPhoto> photos) {}
 
   static List<String> timeline(UnitHistory unit) {
     List<String> lines = new ArrayList<>();

@@ -5,7 +5,9 @@ import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
+import com.stagewise.history.Checks;
 import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
@@ -123,6 +125,30 @@ public final class Words {
       line.append(" — ").append(a.text());
     }
     return line.toString();
+  }
+
+  /**
+   * Returns a photo of the board in one line, e.g. "board top.jpg — 4000 × 3000, 3.1 MB, attached 4
+   * Mar 2026 10:15 by Ann".
+   */
+  public static String photoLine(CasePhoto p) {
+    return p.fileName()
+        + " — "
+        + p.width()
+        + " × "
+        + p.height()
+        + ", "
+        + size(p.bytes())
+        + ", attached "
+        + dateTime(p.attachedAt())
+        + (p.attachedBy().isBlank() ? "" : " by " + p.attachedBy());
+  }
+
+  /** Returns a file's size for people: whole kB below 1 MB, else MB with one decimal. */
+  public static String size(long bytes) {
+    return bytes < 1024 * 1024
+        ? Math.max(1, Math.round(bytes / 1024.0)) + "\u00a0kB"
+        : Checks.megabytes(bytes).replace(' ', '\u00a0');
   }
 
   /** Returns the kind of an action in a word. */
