@@ -114,6 +114,33 @@ class SyncTest {
   }
 
   @Test
+  void photoAttachedOnOneBench_reachesTheServerAndTheOther_byteForByte() {
+    ServerAddress address = server.freshShop();
+    try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
+        HistoryStore b = SqliteHistory.open(folder.resolve("b.db"));
+        PgHistory shop = shop(address)) {
+      RepairCase c = Bench.addCase(a, "A-9", 0);
+      Bench.sync(a, shop, "a");
+      Bench.sync(b, shop, "b");
+      // Attached after the case went up: the photo alone is what the next sync sends.
+      byte[] jpeg = com.stagewise.history.TestPictures.jpeg(200, 150);
+      var photo = a.cases().attachPhoto(c.id(), new Cases.PhotoDraft("under U3.jpg", jpeg, "Ann"));
+      assertThat(((SyncLedger) a).pendingCount()).isEqualTo(1);
+      Bench.sync(a, shop, "a");
+      SyncReport pulled = Bench.sync(b, shop, "b");
+
+      assertThat(pulled.conflicts()).isEmpty();
+      assertThat(((SyncLedger) a).pendingCount()).isZero();
+      assertThat(shop.cases().photo(photo.id()).orElseThrow().image()).isEqualTo(jpeg);
+      assertThat(b.cases().caseFile(c.id()).orElseThrow().photos()).containsExactly(photo);
+      assertThat(b.cases().photo(photo.id()).orElseThrow().image()).isEqualTo(jpeg);
+      // Pulled back to the bench that sent it, it merges as unchanged.
+      assertThat(Bench.sync(a, shop, "a").conflicts()).isEmpty();
+      assertThat(a.cases().caseFile(c.id()).orElseThrow().photos()).containsExactly(photo);
+    }
+  }
+
+  @Test
   void sameCaseClosedOnTwoBenches_isAConflictReported_andNeitherCopyIsLost() {
     ServerAddress address = server.freshShop();
     try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
