@@ -152,6 +152,8 @@ public final class CloseOutView {
           for (String line : model.photos()) {
             Label l = new Label(line);
             l.setWrapText(true);
+            // Wraps onto more lines rather than being cut when the window is short.
+            l.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
             lines.getChildren().add(l);
           }
         };

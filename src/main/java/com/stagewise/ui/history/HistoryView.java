@@ -51,7 +51,7 @@ public final class HistoryView {
     caseBox.setId("history-case");
     ScrollPane scroll = new ScrollPane(caseBox);
     scroll.setFitToWidth(true);
-    StackPane layers = new StackPane(scroll, largePhoto());
+    StackPane layers = new StackPane(scroll, largePhoto(scroll));
     VBox.setVgrow(layers, Priority.ALWAYS);
     right.getChildren().add(layers);
     HBox.setHgrow(right, Priority.ALWAYS);
@@ -118,6 +118,9 @@ public final class HistoryView {
     keypad.follow(field);
     list.setId("history-hits");
     VBox.setVgrow(list, Priority.ALWAYS);
+    // At least two hits stay in view: a short window scrolls the screen rather than squeezing
+    // the list under the note below it.
+    list.setMinHeight(120);
     list.setCellFactory(
         v ->
             new ListCell<>() {
@@ -229,6 +232,7 @@ public final class HistoryView {
       Label caption = new Label(photo.caption());
       caption.setWrapText(true);
       caption.setMaxWidth(THUMB_WIDTH);
+      caption.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
       caption.getStyleClass().add("hint");
       VBox content = new VBox(4, view, caption);
       Button thumb = new Button(null, content);
@@ -241,17 +245,20 @@ public final class HistoryView {
   }
 
   /** The layer over the case that shows one photo large, with the way back. */
-  private VBox largePhoto() {
+  private VBox largePhoto(ScrollPane over) {
     VBox layer = new VBox(8);
+    layer.setMinSize(0, 0);
     layer.setId("history-photo-large");
     layer.getStyleClass().add("photo-large");
     ImageView view = new ImageView();
     view.setPreserveRatio(true);
     view.setSmooth(true);
-    view.fitWidthProperty().bind(layer.widthProperty().subtract(24));
-    view.fitHeightProperty().bind(layer.heightProperty().subtract(110));
+    // Sized by the case's pane it covers, so that a large picture never widens the screen.
+    view.fitWidthProperty().bind(over.widthProperty().subtract(28));
+    view.fitHeightProperty().bind(over.heightProperty().subtract(130));
     Label caption = new Label();
     caption.setWrapText(true);
+    caption.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     Button back = new Button("Back to the case");
     back.setId("history-photo-close");
     back.getStyleClass().add("primary");
