@@ -52,7 +52,7 @@ public final class BandChart extends Region {
   /** Creates an empty chart; {@link #show} fills it. */
   public BandChart() {
     getStyleClass().add("band-chart");
-    Palette.paperAndClip(this);
+    Palette.paperAndClip(this, this::requestLayout);
     setMinHeight(130);
   }
 

@@ -41,7 +41,7 @@ public final class PackageDrawing extends Region {
   /** Creates an empty drawing; {@link #show} gives it a package. */
   public PackageDrawing() {
     getStyleClass().add("package-drawing");
-    Palette.paperAndClip(this);
+    Palette.paperAndClip(this, this::redraw);
     content.getTransforms().add(scale);
     getChildren().add(content);
     setMinSize(USE_PREF_SIZE, USE_PREF_SIZE);

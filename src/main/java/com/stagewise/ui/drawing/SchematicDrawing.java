@@ -55,7 +55,7 @@ public final class SchematicDrawing extends Region {
   /** Creates an empty drawing; {@link #show} gives it a stage. */
   public SchematicDrawing() {
     getStyleClass().add("schematic-drawing");
-    Palette.paperAndClip(this);
+    Palette.paperAndClip(this, this::redraw);
     content.getTransforms().add(scale);
     getChildren().add(content);
     setMinSize(200, 150);

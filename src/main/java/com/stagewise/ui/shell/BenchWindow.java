@@ -66,6 +66,8 @@ public final class BenchWindow {
     root.getStylesheets().add(BenchWindow.class.getResource("high-contrast.css").toExternalForm());
     showAs(bench.largeTextProperty(), "large-text");
     showAs(bench.highContrastProperty(), "high-contrast");
+    // The drawings (schematic, package, band charts) paint in code: they follow the same switch.
+    com.stagewise.ui.drawing.DrawingLook.highContrast().bind(bench.highContrastProperty());
     bench.stepProperty().addListener((o, was, now) -> show(now));
   }
 
