@@ -14,9 +14,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
@@ -45,24 +43,16 @@ public final class Diagnoser {
   private final TestPoints points;
   private final Evidence evidence;
   private final OhmsChecks ohmsChecks;
+  private final SameReadings sameReadings;
 
-  /** Ohms checks are planned over the hypotheses that hold this share of the probability. */
-  private static final double OHMS_MASS = 0.999;
-
-  /** … and at most this many of them. */
-  private static final int OHMS_HYPOTHESES = 24;
+  /** Suspects named at most as reading the same as another everywhere. */
+  private static final int SAME_LISTED = 3;
 
   private final double span;
   private final Map<Map<String, Double>, List<Hypothesis>> models;
 
   /** Whether the unit is mains-powered (then a power-off check that splits the leaders leads). */
   private final boolean mainsPowered;
-
-  /** Suspects within this factor of the first one's probability are the leading suspects. */
-  private static final double LEADING_FACTOR = 10;
-
-  /** … at most this many of them. */
-  private static final int LEADING_MOST = 6;
 
   /** Each model's readings' log-likelihoods, kept across re-ranks (by the model's identity). */
   private final Map<List<Hypothesis>, Likelihoods> likelihoods =
@@ -85,6 +75,7 @@ public final class Diagnoser {
     this.span = max;
     this.evidence = new Evidence(max);
     this.ohmsChecks = new OhmsChecks(stage);
+    this.sameReadings = new SameReadings(points, ohmsChecks);
     this.models = new ConcurrentHashMap<>();
     this.mainsPowered = false;
   }
@@ -98,6 +89,7 @@ public final class Diagnoser {
     this.span = base.span;
     this.evidence = base.evidence;
     this.ohmsChecks = base.ohmsChecks;
+    this.sameReadings = base.sameReadings;
     this.models = base.models;
     this.mainsPowered = mainsPowered;
   }
@@ -173,11 +165,8 @@ public final class Diagnoser {
     List<Suspect> suspects = suspects(ranking, bound, top, explainer);
     Verdict verdict = verdict(ranking);
     List<ProbeAdvice> probes =
-        withOhmsChecks(
-            new ProbePlanner(stage, points, evidence).plan(ranking, bound, readings.meter()),
-            ranking,
-            ohms,
-            readings.meter());
+        new NextProbes(stage, points, evidence, ohmsChecks)
+            .plan(ranking, bound, ohms, readings.meter(), mainsPowered);
     String check =
         verdict == Verdict.HEALTHY
             ? ""
@@ -208,6 +197,39 @@ public final class Diagnoser {
         probes,
         check,
         notes);
+  }
+
+  /**
+   * Returns the first suspect for these readings and those of its group that read the same as it at
+   * every point, powered or not ({@link SameReadings}), the first suspect first: the faults no
+   * further reading can tell apart from it.
+   */
+  List<String> sameAsFirst(ReadingSet readings) {
+    ReadingRules.requireSound(stage, readings, "");
+    readings = leadsOnNets(readings);
+    List<Hypothesis> hypotheses =
+        models.computeIfAbsent(measuredInputs(readings, new ArrayList<>()), this::build);
+    List<Evidence.Bound> bound = new ArrayList<>();
+    List<Reading> ohms = new ArrayList<>();
+    for (Reading r : readings.readings()) {
+      if (r.kind() == Reading.Kind.OHMS) {
+        ohms.add(r);
+      } else {
+        bound.add(Evidence.bind(points, readings, r, stage));
+      }
+    }
+    Ranking ranking = rank(hypotheses, bound, ohms, readings.meter());
+    Scored first = ranking.first();
+    List<String> same = new ArrayList<>(List.of(first.hypothesis.fault.id()));
+    for (Scored other : ranking.scored()) {
+      if (other != first
+          && Math.abs(other.logEvidence - first.logEvidence) <= Math.log(GROUP_FACTOR)
+          && other.probability >= LIST_FLOOR * first.probability
+          && sameReadings.same(first, other)) {
+        same.add(other.hypothesis.fault.id());
+      }
+    }
+    return same;
   }
 
   /** A hypothesis with its prior and the predictions of its scenarios. */
@@ -261,58 +283,6 @@ public final class Diagnoser {
 
   private List<Hypothesis> build(Map<String, Double> inputs) {
     return Hypotheses.build(stage, points, catalogue, priors, inputs);
-  }
-
-  /**
-   * Returns the volts probes with the best power-off (ohms) checks among them, all sorted by bits:
-   * an ohms check comes first only when it tells the leading suspects apart better than any volts
-   * probe.
-   */
-  private List<ProbeAdvice> withOhmsChecks(
-      List<ProbeAdvice> volts, Ranking ranking, List<Reading> ohms, MeterSpec meter) {
-    List<Scored> top = new ArrayList<>();
-    double mass = 0;
-    for (Scored s : ranking.scored()) {
-      if (mass >= OHMS_MASS || top.size() >= OHMS_HYPOTHESES) {
-        break;
-      }
-      top.add(s);
-      mass += s.probability;
-    }
-    List<ProbeAdvice> all = new ArrayList<>(volts);
-    all.addAll(ohmsChecks.plan(top, ohms, meter));
-    all.sort(Comparator.comparingDouble((ProbeAdvice a) -> -a.bits()));
-    all = new ArrayList<>(all.subList(0, Math.min(volts.size() + 2, all.size())));
-    if (mainsPowered) {
-      List<Scored> leading = new ArrayList<>();
-      for (Scored s : ranking.scored()) {
-        if (leading.size() >= LEADING_MOST
-            || s.probability < ranking.first().probability / LEADING_FACTOR) {
-          break;
-        }
-        leading.add(s);
-      }
-      Optional<ProbeAdvice> first = ohmsChecks.splitting(leading, ohms, meter);
-      if (first.isPresent()) {
-        ProbeAdvice check = first.get();
-        double bits = check.bits();
-        for (ProbeAdvice a : all) {
-          // Its bits as the other probes count them (over the same suspects), where it is listed.
-          if (a.kind() == Reading.Kind.OHMS
-              && Set.of(a.at(), a.to()).equals(Set.of(check.at(), check.to()))) {
-            bits = a.bits();
-          }
-        }
-        all.removeIf(
-            a ->
-                a.kind() == Reading.Kind.OHMS
-                    && Set.of(a.at(), a.to()).equals(Set.of(check.at(), check.to())));
-        all.add(
-            0,
-            new ProbeAdvice(check.at(), check.kind(), check.hz(), bits, check.why(), check.to()));
-      }
-    }
-    return all;
   }
 
   /** Volts readings at a part lead ({@code R2.1}) are readings at the lead's net. */
@@ -425,10 +395,14 @@ public final class Diagnoser {
     List<Suspect> suspects = new ArrayList<>();
     for (Scored s : listed) {
       List<String> group = new ArrayList<>();
+      List<String> same = new ArrayList<>();
       for (Scored other : ranking.scored()) {
         if (Math.abs(other.logEvidence - s.logEvidence) <= Math.log(GROUP_FACTOR)
             && other.probability >= LIST_FLOOR * firstProbability) {
           group.add(other.hypothesis.fault.id());
+          if (other != s && same.size() < SAME_LISTED && sameReadings.same(s, other)) {
+            same.add(other.hypothesis.fault.id());
+          }
         }
       }
       boolean consistent = bound.stream().allMatch(r -> Evidence.score(s.best, r) <= 3);
@@ -442,7 +416,8 @@ public final class Diagnoser {
               s.probability / total,
               consistent,
               group,
-              explainer.why(s.hypothesis.fault, s.best, s.estimate(), bound),
+              explainer.why(s.hypothesis.fault, s.best, s.estimate(), bound)
+                  + Explainer.sameReadings(same),
               s.estimate(),
               predicted));
     }

@@ -232,6 +232,26 @@ final class Explainer {
   }
 
   /**
+   * Returns the sentence that names the suspects reading the same as this one at every point,
+   * powered or not (see {@link SameReadings}), with a leading space; empty when there are none.
+   */
+  static String sameReadings(List<String> same) {
+    if (same.isEmpty()) {
+      return "";
+    }
+    List<String> words = new ArrayList<>();
+    for (String id : same) {
+      String w = id.equals(Fault.HEALTHY.id()) ? "a working stage" : Wording.fault(id);
+      // "Solder bridge …", "Rail … missing" mid-sentence; a part's name keeps its capital.
+      boolean word = w.length() > 1 && Character.isLowerCase(w.charAt(1));
+      words.add(word ? Character.toLowerCase(w.charAt(0)) + w.substring(1) : w);
+    }
+    return " Same readings as "
+        + String.join(", ", words)
+        + " at every point, powered or not; only a look or lifting a leg splits them.";
+  }
+
+  /**
    * A test point for a technician: a pin with what it is ("U1 pin 8 (positive supply pin)"), or a
    * net.
    */

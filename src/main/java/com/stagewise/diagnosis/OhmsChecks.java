@@ -58,6 +58,7 @@ final class OhmsChecks {
   private final Stage stage;
   private final PowerOff healthy;
   private final List<String> candidates;
+  private final List<String[]> adjacentPins;
   private final Map<String, PowerOff> networks = new HashMap<>();
 
   OhmsChecks(Stage stage) {
@@ -66,6 +67,20 @@ final class OhmsChecks {
     Set<String> points = new LinkedHashSet<>(stage.nets());
     points.addAll(stage.pinNets().keySet());
     this.candidates = List.copyOf(points);
+    List<String[]> adjacent = new ArrayList<>();
+    Map<String, String> pinNets = stage.pinNets();
+    for (String pkg : stage.packages()) {
+      for (int[] pair : stage.packageType(pkg).orElseThrow().adjacentPairs()) {
+        String a = pkg + "." + pair[0];
+        String b = pkg + "." + pair[1];
+        if (pinNets.containsKey(a)
+            && pinNets.containsKey(b)
+            && !pinNets.get(a).equals(pinNets.get(b))) {
+          adjacent.add(new String[] {a, b});
+        }
+      }
+    }
+    this.adjacentPins = List.copyOf(adjacent);
   }
 
   /** Returns whether a point names a net, package pin or part lead of the stage. */
@@ -102,7 +117,7 @@ final class OhmsChecks {
     return sum;
   }
 
-  private double logLikelihood(
+  static double logLikelihood(
       OhmsPrediction p,
       boolean overRange,
       double value,
@@ -153,27 +168,17 @@ final class OhmsChecks {
   }
 
   /**
-   * Returns the ohms checks worth taking next among the leading suspects, best first: each pair of
-   * points (nets and used pins) by its expected information gain in bits.
-   *
-   * @param top the leading hypotheses with their probabilities (summing to about 1)
-   * @param taken the ohms readings already taken
+   * Returns the pairs of points an ohms check may be taken between, less those already read: every
+   * two nets once, every used pin against its own net (which checks its joint), and every two
+   * adjacent used pins on different nets (one check across two neighbouring legs tests both joints
+   * and the gap between them: OL if either joint is open, about 0 Ω if they are bridged).
    */
-  List<ProbeAdvice> plan(List<Diagnoser.Scored> top, List<Reading> taken, MeterSpec meter) {
-    if (top.size() < 2) {
-      return List.of();
-    }
-    double mass = top.stream().mapToDouble(s -> s.probability).sum();
-    double[] prior = new double[top.size()];
-    for (int h = 0; h < prior.length; h++) {
-      prior[h] = top.get(h).probability / mass;
-    }
-    double entropy = entropy(prior);
+  List<String[]> pairs(List<Reading> taken) {
     Set<String> done = new HashSet<>();
     for (Reading r : taken) {
       done.add(pairKey(onFaulted(r.at()), onFaulted(r.to())));
     }
-    List<ProbeAdvice> advice = new ArrayList<>();
+    List<String[]> pairs = new ArrayList<>();
     Set<String> seenNets = new HashSet<>();
     for (int i = 0; i < candidates.size(); i++) {
       for (int j = i + 1; j < candidates.size(); j++) {
@@ -192,6 +197,39 @@ final class OhmsChecks {
         if (done.contains(pairKey(a, b)) || !seenNets.add(pairKey(a, b))) {
           continue;
         }
+        pairs.add(new String[] {a, b});
+      }
+    }
+    for (String[] pins : adjacentPins) {
+      if (!done.contains(pairKey(pins[0], pins[1]))) {
+        pairs.add(pins);
+      }
+    }
+    return pairs;
+  }
+
+  /**
+   * Returns the ohms checks worth taking next among the leading suspects, best first: each pair of
+   * points (nets and used pins) by its expected information gain in bits.
+   *
+   * @param top the leading hypotheses with their probabilities (summing to about 1)
+   * @param taken the ohms readings already taken
+   */
+  List<ProbeAdvice> plan(List<Diagnoser.Scored> top, List<Reading> taken, MeterSpec meter) {
+    if (top.size() < 2) {
+      return List.of();
+    }
+    double mass = top.stream().mapToDouble(s -> s.probability).sum();
+    double[] prior = new double[top.size()];
+    for (int h = 0; h < prior.length; h++) {
+      prior[h] = top.get(h).probability / mass;
+    }
+    double entropy = entropy(prior);
+    List<ProbeAdvice> advice = new ArrayList<>();
+    for (String[] pair : pairs(taken)) {
+      String a = pair[0];
+      String b = pair[1];
+      {
         OhmsPrediction[] predicted = new OhmsPrediction[top.size()];
         for (int h = 0; h < predicted.length; h++) {
           Diagnoser.Scored s = top.get(h);
@@ -206,7 +244,19 @@ final class OhmsChecks {
     advice.sort(
         Comparator.comparingDouble((ProbeAdvice x) -> -x.bits())
             .thenComparing(x -> across(x.at(), x.to()).isEmpty() ? 1 : 0));
-    return advice.subList(0, Math.min(LISTED, advice.size()));
+    // Two neighbouring pins read what their two nets read unless a joint is open: list the pins
+    // only when that promises more, else the nets (ties keep the nets, listed first above).
+    List<ProbeAdvice> listed = new ArrayList<>();
+    Set<String> nets = new HashSet<>();
+    for (ProbeAdvice a : advice) {
+      String netA = healthy.node(a.at()).orElseThrow();
+      String netB = healthy.node(a.to()).orElseThrow();
+      String key = netA.equals(netB) ? pairKey(a.at(), a.to()) : pairKey(netA, netB);
+      if (nets.add(key) && listed.size() < LISTED) {
+        listed.add(a);
+      }
+    }
+    return listed;
   }
 
   /**

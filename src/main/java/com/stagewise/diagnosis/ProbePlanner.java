@@ -150,17 +150,8 @@ final class ProbePlanner {
     double[] variance = new double[n];
     for (int c = 0; c < n; c++) {
       Prediction p = components.get(c).prediction;
-      mean[c] = ac ? (p.acMean() == null ? 0 : p.acMean()[point]) : p.dcMean()[point];
-      // The scope's figure on the value as the technician will state it, back in peak volts.
-      double u =
-          ac
-              ? measure.toPeak(
-                  ReadingSet.SCOPE_PERCENT / 100 * Math.abs(measure.fromPeak(mean[c]))
-                      + ReadingSet.SCOPE_FLOOR_VOLTS)
-              : meter.uncertainty(mean[c]);
-      Evidence.Bound probe =
-          new Evidence.Bound(point, ac, mean[c], u * u / 3, points.names.get(point));
-      variance[c] = Evidence.variance(p, probe);
+      mean[c] = mean(p, point, ac);
+      variance[c] = variance(p, point, ac, meter);
     }
     double expected = 0;
     double[] posterior = new double[prior.length];
@@ -190,6 +181,25 @@ final class ProbePlanner {
       }
     }
     return Math.max(0, (entropy - expected) / Math.log(2));
+  }
+
+  /** Returns a scenario's predicted DC level or AC amplitude (peak) at a test point. */
+  static double mean(Prediction p, int point, boolean ac) {
+    return ac ? (p.acMean() == null ? 0 : p.acMean()[point]) : p.dcMean()[point];
+  }
+
+  /** Returns the variance of a reading at a test point about a scenario's prediction. */
+  double variance(Prediction p, int point, boolean ac, MeterSpec meter) {
+    double mean = mean(p, point, ac);
+    // The scope's figure on the value as the technician will state it, back in peak volts.
+    double u =
+        ac
+            ? measure.toPeak(
+                ReadingSet.SCOPE_PERCENT / 100 * Math.abs(measure.fromPeak(mean))
+                    + ReadingSet.SCOPE_FLOOR_VOLTS)
+            : meter.uncertainty(mean);
+    Evidence.Bound probe = new Evidence.Bound(point, ac, mean, u * u / 3, points.names.get(point));
+    return Evidence.variance(p, probe);
   }
 
   private static double entropy(double[] p) {

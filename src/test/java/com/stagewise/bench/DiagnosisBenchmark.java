@@ -105,6 +105,15 @@ public class DiagnosisBenchmark {
   }
 
   /**
+   * No readings yet on a diagnoser that has seen the stage: the ranking is the priors and the next
+   * probe is chosen over every hypothesis in play, the planner's heaviest case.
+   */
+  @Benchmark
+  public Diagnosis nextProbeFromNoReadings() {
+    return warm.diagnose(new ReadingSet(MeterSpec.DEFAULT, List.of()));
+  }
+
+  /**
    * ngspice 39 solving the same fault dictionary (every fault, nominal parts) in one batch process,
    * on netlists written beforehand (in the trial's set-up), so that only ngspice is timed.
    */

@@ -44,6 +44,11 @@ public final class OhmsProbeMeasure {
     int[] within = new int[2];
     long[] probes = new long[2];
     int[] isolated = new int[2];
+    // The same counted with a group of faults that read the same everywhere (a bridge and a short
+    // between the same nets) standing in for the true fault: not the strict figure above.
+    int[] withinGrouped = new int[2];
+    long[] probesGrouped = new long[2];
+    int[] isolatedGrouped = new int[2];
     SplittableRandom rnd = new SplittableRandom(20261202L);
     // Per fault kind, with ohms allowed: units, within 3 probes, isolated by every reading of the
     // unit at once (all DC, AC and ohms between nets), and first with a group of its own but not
@@ -82,9 +87,14 @@ public final class OhmsProbeMeasure {
           List<Reading> available = new ArrayList<>(c.dc());
           available.addAll(c.ac());
           boolean done = false;
+          int grouped = -1;
           while (taken.size() <= 8) {
-            Diagnosis d = diagnoser.diagnose(new ReadingSet(stage.meter(), taken), 5);
+            ReadingSet set = new ReadingSet(stage.meter(), taken);
+            Diagnosis d = diagnoser.diagnose(set, 5);
             Suspect first = d.suspects().get(0);
+            if (grouped < 0 && aloneAsAGroup(diagnoser, set, first, c.fault())) {
+              grouped = taken.size();
+            }
             if (first.fault().equals(c.fault()) && first.group().size() == 1) {
               done = true;
               break;
@@ -117,6 +127,11 @@ public final class OhmsProbeMeasure {
             }
             taken.add(next);
           }
+          if (grouped >= 0) {
+            isolatedGrouped[mode]++;
+            probesGrouped[mode] += grouped;
+            withinGrouped[mode] += grouped <= MAX_PROBES ? 1 : 0;
+          }
           if (done) {
             isolated[mode]++;
             probes[mode] += taken.size();
@@ -126,16 +141,18 @@ public final class OhmsProbeMeasure {
           }
           if (ohmsAllowed) {
             String kind = c.fault().substring(c.fault().lastIndexOf(':') + 1);
-            int[] k = kinds.computeIfAbsent(kind, x -> new int[4]);
+            int[] k = kinds.computeIfAbsent(kind, x -> new int[6]);
             k[0]++;
             k[1] += done && taken.size() <= MAX_PROBES ? 1 : 0;
             List<Reading> everything = new ArrayList<>(c.dc());
             everything.addAll(c.ac());
             everything.addAll(c.ohms());
-            Suspect all =
-                diagnoser.diagnose(new ReadingSet(stage.meter(), everything), 5).suspects().get(0);
+            ReadingSet atOnce = new ReadingSet(stage.meter(), everything);
+            Suspect all = diagnoser.diagnose(atOnce, 5).suspects().get(0);
             k[2] += all.fault().equals(c.fault()) && all.group().size() == 1 ? 1 : 0;
             k[3] += done && taken.size() > MAX_PROBES ? 1 : 0;
+            k[4] += grouped >= 0 && grouped <= MAX_PROBES ? 1 : 0;
+            k[5] += aloneAsAGroup(diagnoser, atOnce, all, c.fault()) ? 1 : 0;
           }
         }
       }
@@ -149,11 +166,35 @@ public final class OhmsProbeMeasure {
     }
     System.out.println(
         "by fault kind (units, within 3 with ohms, isolated by every reading at once, isolated"
-            + " only after more than 3):");
+            + " only after more than 3; then counting a same-readings group as one: within 3,"
+            + " by every reading at once):");
+    int[] sum = new int[6];
     kinds.forEach(
-        (kind, k) ->
-            System.out.printf(
-                Locale.ROOT, "  %-12s %4d %4d %4d %4d%n", kind, k[0], k[1], k[2], k[3]));
+        (kind, k) -> {
+          System.out.printf(
+              Locale.ROOT,
+              "  %-12s %4d %4d %4d %4d   %4d %4d%n",
+              kind,
+              k[0],
+              k[1],
+              k[2],
+              k[3],
+              k[4],
+              k[5]);
+          for (int i = 0; i < sum.length; i++) {
+            sum[i] += k[i];
+          }
+        });
+    System.out.printf(
+        Locale.ROOT,
+        "  %-12s %4d %4d %4d %4d   %4d %4d%n",
+        "all",
+        sum[0],
+        sum[1],
+        sum[2],
+        sum[3],
+        sum[4],
+        sum[5]);
     for (int mode = 0; mode < 2; mode++) {
       System.out.printf(
           Locale.ROOT,
@@ -166,7 +207,27 @@ public final class OhmsProbeMeasure {
           100.0 * within[mode] / cases,
           isolated[mode],
           isolated[mode] == 0 ? 0.0 : (double) probes[mode] / isolated[mode]);
+      System.out.printf(
+          Locale.ROOT,
+          "  counting a same-readings group as one (not the strict figure): within %d probes in"
+              + " %d (%.1f %%); isolated at all in %d, mean %.2f probes%n",
+          MAX_PROBES,
+          withinGrouped[mode],
+          100.0 * withinGrouped[mode] / cases,
+          isolatedGrouped[mode],
+          isolatedGrouped[mode] == 0 ? 0.0 : (double) probesGrouped[mode] / isolatedGrouped[mode]);
     }
+  }
+
+  /**
+   * Whether the true fault stands first alone counting the faults that read the same as it
+   * everywhere as one: the first suspect is the truth or reads the same as it, and every other
+   * member of the first group reads the same as the first.
+   */
+  private static boolean aloneAsAGroup(
+      Diagnoser diagnoser, ReadingSet readings, Suspect first, String truth) {
+    List<String> same = diagnoser.sameAsFirst(readings);
+    return same.contains(truth) && same.containsAll(first.group());
   }
 
   /** Returns what the ohmmeter showed between two points of the simulated unit (see above). */

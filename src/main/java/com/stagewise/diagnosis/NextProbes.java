@@ -1,0 +1,102 @@
+package com.stagewise.diagnosis;
+
+import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.Stage;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * The next probes of a diagnosis: the volts probes and the power-off (ohms) checks together, sorted
+ * by expected bits (with the mains-powered rule below).
+ */
+final class NextProbes {
+  /** Ohms checks are planned over the hypotheses that hold this share of the probability. */
+  private static final double OHMS_MASS = 0.999;
+
+  /** … and at most this many of them. */
+  private static final int OHMS_HYPOTHESES = 24;
+
+  /** Suspects within this factor of the first one's probability are the leading suspects. */
+  private static final double LEADING_FACTOR = 10;
+
+  /** … at most this many of them. */
+  private static final int LEADING_MOST = 6;
+
+  private final Stage stage;
+  private final TestPoints points;
+  private final Evidence evidence;
+  private final OhmsChecks ohmsChecks;
+
+  NextProbes(Stage stage, TestPoints points, Evidence evidence, OhmsChecks ohmsChecks) {
+    this.stage = stage;
+    this.points = points;
+    this.evidence = evidence;
+    this.ohmsChecks = ohmsChecks;
+  }
+
+  /**
+   * Returns the volts probes with the best power-off (ohms) checks among them, all sorted by bits:
+   * an ohms check comes first only when it tells the leading suspects apart better than any volts
+   * probe. When the unit is mains-powered, an ohms check that splits the leading suspects comes
+   * first whatever the bits.
+   */
+  List<ProbeAdvice> plan(
+      Diagnoser.Ranking ranking,
+      List<Evidence.Bound> bound,
+      List<Reading> ohms,
+      MeterSpec meter,
+      boolean mainsPowered) {
+    ProbePlanner planner = new ProbePlanner(stage, points, evidence);
+    List<ProbeAdvice> volts = planner.plan(ranking, bound, meter);
+    List<Diagnoser.Scored> top = new ArrayList<>();
+    double mass = 0;
+    for (Diagnoser.Scored s : ranking.scored()) {
+      if (mass >= OHMS_MASS || top.size() >= OHMS_HYPOTHESES) {
+        break;
+      }
+      top.add(s);
+      mass += s.probability;
+    }
+    List<ProbeAdvice> all = new ArrayList<>(volts);
+    all.addAll(ohmsChecks.plan(top, ohms, meter));
+    all.sort(Comparator.comparingDouble((ProbeAdvice a) -> -a.bits()));
+    all = new ArrayList<>(all.subList(0, Math.min(volts.size() + 2, all.size())));
+    if (mainsPowered) {
+      List<Diagnoser.Scored> leading = new ArrayList<>();
+      for (Diagnoser.Scored s : ranking.scored()) {
+        if (leading.size() >= LEADING_MOST
+            || s.probability < ranking.first().probability / LEADING_FACTOR) {
+          break;
+        }
+        leading.add(s);
+      }
+      Optional<ProbeAdvice> first = ohmsChecks.splitting(leading, ohms, meter);
+      if (first.isPresent()) {
+        ProbeAdvice check = first.get();
+        double bits = check.bits();
+        for (ProbeAdvice a : all) {
+          // Its bits as the other probes count them (over the same suspects), where it is listed.
+          if (same(a, check)) {
+            bits = a.bits();
+          }
+        }
+        all.removeIf(a -> same(a, check));
+        all.add(
+            0,
+            new ProbeAdvice(check.at(), check.kind(), check.hz(), bits, check.why(), check.to()));
+      }
+    }
+    return all;
+  }
+
+  private static boolean same(ProbeAdvice a, ProbeAdvice b) {
+    return a.kind() == b.kind()
+        && (a.kind() == Reading.Kind.OHMS
+            ? Set.of(a.at(), a.to()).equals(Set.of(b.at(), b.to()))
+            : a.at().equals(b.at()));
+  }
+}
