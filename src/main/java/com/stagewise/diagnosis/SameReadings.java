@@ -2,6 +2,8 @@ package com.stagewise.diagnosis;
 
 import com.stagewise.solver.OhmsPrediction;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Tells when two suspects read the same everywhere a technician can probe: the same volts at every
@@ -21,6 +23,7 @@ final class SameReadings {
   private final TestPoints points;
   private final OhmsChecks ohmsChecks;
   private final List<String[]> pairs;
+  private final Map<String, double[]> byFault = new ConcurrentHashMap<>();
 
   SameReadings(TestPoints points, OhmsChecks ohmsChecks) {
     this.points = points;
@@ -42,17 +45,34 @@ final class SameReadings {
         return false;
       }
     }
-    for (String[] pair : pairs) {
-      OhmsPrediction p = ohmsChecks.predict(a.hypothesis.fault, x.value(), pair[0], pair[1]);
-      OhmsPrediction q = ohmsChecks.predict(b.hypothesis.fault, y.value(), pair[0], pair[1]);
-      if (p.connected() != q.connected()
-          || p.connected()
-              && Math.abs(p.nominal() - q.nominal())
-                  > OhmsChecks.LEAD_OHMS + SHARE * Math.max(p.nominal(), q.nominal())) {
+    double[] p = ohms(a);
+    double[] q = ohms(b);
+    for (int i = 0; i < p.length; i++) {
+      // OL (not connected) is kept as -1.
+      if ((p[i] < 0) != (q[i] < 0)
+          || Math.abs(p[i] - q[i]) > OhmsChecks.LEAD_OHMS + SHARE * Math.max(p[i], q[i])) {
         return false;
       }
     }
     return true;
+  }
+
+  /**
+   * Returns a suspect's ohms between every pair of points (-1 for OL), kept per fault and value.
+   */
+  private double[] ohms(Diagnoser.Scored s) {
+    Fault fault = s.hypothesis.fault;
+    double value = s.best.value();
+    return byFault.computeIfAbsent(
+        fault.id() + "@" + value,
+        k -> {
+          double[] out = new double[pairs.size()];
+          for (int i = 0; i < out.length; i++) {
+            OhmsPrediction p = ohmsChecks.predict(fault, value, pairs.get(i)[0], pairs.get(i)[1]);
+            out[i] = p.connected() ? p.nominal() : -1;
+          }
+          return out;
+        });
   }
 
   private static boolean close(double u, double v) {
