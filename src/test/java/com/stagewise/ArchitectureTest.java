@@ -239,6 +239,7 @@ class ArchitectureTest {
           "Cases.addNote",
           "Cases.addAction",
           "Cases.attachPhoto",
+          "Cases.addAfterRepair",
           "StageLibrary.add",
           "StageLibrary.save",
           "StageLibrary.useForCase",
@@ -292,6 +293,7 @@ class ArchitectureTest {
             "Cases.addNote",
             "Cases.addAction",
             "Cases.attachPhoto",
+            "Cases.addAfterRepair",
             // A stage joins the library as a version of its stage, saved or used for a case.
             "StageLibrary.save",
             "StageLibrary.useForCase",

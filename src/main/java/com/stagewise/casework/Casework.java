@@ -1,6 +1,7 @@
 package com.stagewise.casework;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
@@ -14,6 +15,7 @@ import com.stagewise.history.StageLibrary;
 import com.stagewise.history.Units;
 import com.stagewise.history.demo.DemoHistory;
 import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
@@ -387,6 +389,22 @@ public final class Casework {
    */
   public CasePhoto attachPhoto(String caseId, Path file) {
     return CasePhotos.attach(store, caseId, file, stages.who());
+  }
+
+  /**
+   * Stores the readings taken again after the repair, each with the healthy band of its point (see
+   * {@link AfterRepair}), read with {@code meter}, in one transaction; they never enter a
+   * diagnosis.
+   *
+   * @return the readings as stored, in the order given
+   * @throws InvalidInputException if the case is unknown or a value is not a finite number: nothing
+   *     is stored then
+   */
+  public List<AfterRepairReading> addAfterRepair(
+      String caseId, List<AfterRepair.Taken> taken, MeterSpec meter) {
+    List<AfterRepairReading> records = AfterRepair.records(caseId, taken, meter, clock.instant());
+    store.cases().addAfterRepair(caseId, records);
+    return records;
   }
 
   // ---- the history as a whole -------------------------------------------------------------------

@@ -1,6 +1,7 @@
 package com.stagewise.history;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CaseStatus;
@@ -38,6 +39,7 @@ public final class BundleCheck {
   public static final String ACTION = "action";
   public static final String NOTE = "note";
   public static final String PHOTO = "photo";
+  public static final String AFTER_REPAIR = "after-repair reading";
 
   /**
    * How far after the importing bench's clock a time in a bundle may lie. Benches' clocks differ by
@@ -194,6 +196,13 @@ public final class BundleCheck {
       Checks.photo(source, at, p);
       time(at + ".attachedAt", p.photo().attachedAt());
     }
+    for (int i = 0; i < b.afterRepair().size(); i++) {
+      AfterRepairReading r = b.afterRepair().get(i);
+      String at = "afterRepair[" + i + "]";
+      declare(at, r.id(), AFTER_REPAIR);
+      Checks.afterRepair(source, at, r);
+      time(at + ".takenAt", r.takenAt());
+    }
   }
 
   private void repairCase(String at, RepairCase c) {
@@ -259,6 +268,9 @@ public final class BundleCheck {
     }
     for (int i = 0; i < b.photos().size(); i++) {
       refer(local, "photos[" + i + "].caseId", b.photos().get(i).photo().caseId(), CASE);
+    }
+    for (int i = 0; i < b.afterRepair().size(); i++) {
+      refer(local, "afterRepair[" + i + "].caseId", b.afterRepair().get(i).caseId(), CASE);
     }
   }
 

@@ -1,5 +1,6 @@
 package com.stagewise.history;
 
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.RepairAction;
@@ -18,6 +19,8 @@ import java.util.List;
  * @param notes the notes
  * @param photos the photos of the board attached to it, in the order attached (without their
  *     pictures: {@link Cases#photo} reads one)
+ * @param afterRepair the readings taken again after the repair, in the order taken (never part of a
+ *     diagnosis)
  */
 public record CaseFile(
     RepairCase repairCase,
@@ -25,8 +28,10 @@ public record CaseFile(
     List<SuspectListRecord> suspectLists,
     List<RepairAction> actions,
     List<CaseNote> notes,
-    List<CasePhoto> photos) {
+    List<CasePhoto> photos,
+    List<AfterRepairReading> afterRepair) {
   public CaseFile {
+    afterRepair = List.copyOf(afterRepair);
     readings = List.copyOf(readings);
     suspectLists = List.copyOf(suspectLists);
     actions = List.copyOf(actions);
@@ -41,6 +46,17 @@ public record CaseFile(
       List<SuspectListRecord> suspectLists,
       List<RepairAction> actions,
       List<CaseNote> notes) {
-    this(repairCase, readings, suspectLists, actions, notes, List.of());
+    this(repairCase, readings, suspectLists, actions, notes, List.of(), List.of());
+  }
+
+  /** A case with no readings after the repair. */
+  public CaseFile(
+      RepairCase repairCase,
+      List<StoredReading> readings,
+      List<SuspectListRecord> suspectLists,
+      List<RepairAction> actions,
+      List<CaseNote> notes,
+      List<CasePhoto> photos) {
+    this(repairCase, readings, suspectLists, actions, notes, photos, List.of());
   }
 }

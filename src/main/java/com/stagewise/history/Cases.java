@@ -1,6 +1,7 @@
 package com.stagewise.history;
 
 import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.Outcome;
@@ -95,6 +96,16 @@ public interface Cases {
    *     too long; nothing is then written
    */
   CasePhoto attachPhoto(String caseId, PhotoDraft draft);
+
+  /**
+   * Stores readings taken again after the repair, each with the healthy band it was checked
+   * against, in one transaction. They are kept apart from the readings of the fault: no diagnosis
+   * counts them.
+   *
+   * @throws com.stagewise.circuit.InvalidInputException if the case is unknown, or a reading's
+   *     point, value, band or meter text is bad; nothing is then written
+   */
+  void addAfterRepair(String caseId, List<AfterRepairReading> readings);
 
   /** Returns a photo with its picture, if there is one with this id. */
   Optional<StoredPhoto> photo(String photoId);

@@ -1,6 +1,7 @@
 package com.stagewise.history;
 
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.StoredPhoto;
@@ -199,6 +200,27 @@ public final class Checks {
               + about.width()
               + " × "
               + about.height());
+    }
+  }
+
+  /** Checks a reading taken after the repair; {@code field} names it in messages. */
+  public static void afterRepair(String source, String field, AfterRepairReading r) {
+    shortText(source, field + ".at", r.at(), true);
+    finite(source, field + ".value", r.value());
+    text(source, field + ".meter", r.meterText(), MAX_TEXT);
+    if (r.hasBand()) {
+      finite(source, field + ".healthyLow", r.healthyLow());
+      finite(source, field + ".healthyHigh", r.healthyHigh());
+      if (r.healthyLow() > r.healthyHigh()) {
+        throw new InvalidInputException(
+            source,
+            field + ".healthyLow",
+            "the healthy band's low end ("
+                + r.healthyLow()
+                + ") is above its high end ("
+                + r.healthyHigh()
+                + ")");
+      }
     }
   }
 

@@ -5,6 +5,7 @@ import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.RepairAction;
@@ -111,6 +112,7 @@ final class ReportLayout {
 
     readings();
     suspects();
+    afterRepair();
     actions();
     confirmed(c);
     notes();
@@ -302,6 +304,43 @@ final class ReportLayout {
       flow.paragraph(Style.BODY, PageFlow.LEFT + 12, PageFlow.bodyWidth() - 12, note.text());
       flow.gap(4);
     }
+  }
+
+  /** The readings taken again after the repair, each against its healthy band. */
+  private void afterRepair() {
+    List<AfterRepairReading> readings = report.caseFile().afterRepair();
+    if (readings.isEmpty()) {
+      return;
+    }
+    flow.heading("After repair", 3 * Style.TABLE.leading());
+    flow.paragraph(
+        Style.BODY,
+        "The points read again after the repair, each against what a healthy stage reads there"
+            + " (the healthy band over the parts' and rails' tolerances). These readings are not"
+            + " part of the diagnosis above.");
+    flow.gap(3);
+    long inside = readings.stream().filter(AfterRepairReading::inside).count();
+    flow.paragraph(
+        Style.BODY_BOLD, inside + " of " + readings.size() + " inside the healthy band.");
+    flow.gap(2);
+    List<List<String>> rows = new ArrayList<>();
+    for (AfterRepairReading r : readings) {
+      rows.add(
+          List.of(
+              Wording.point(r.at()),
+              Engineering.reading(r.value(), MeterSpec.DEFAULT),
+              r.hasBand() ? Engineering.band(r.healthyLow(), r.healthyHigh()) : "not known",
+              !r.hasBand() ? "-" : r.inside() ? "inside" : "OUTSIDE",
+              when(r.takenAt())));
+    }
+    flow.table(
+        List.of(
+            new Column("Test point", 100),
+            new Column("Value", 80),
+            new Column("Healthy band", 150),
+            new Column("Verdict", 60),
+            new Column("Taken (UTC)", PageFlow.bodyWidth() - 390)),
+        rows);
   }
 
   private void photos() {

@@ -34,11 +34,14 @@ import org.testfx.api.FxToolkit;
 import org.testfx.util.WaitForAsyncUtils;
 
 /**
- * The close-out's photo of the board in a real (headless) window: a demo case is opened, its rails
- * read, a photo attached from the chooser (a PNG from the JDK's writer) and the case closed; the
- * history shows the photo's thumbnail, which tapped shows large. The close-out and history screens
- * are checked for cut texts at 1024×600 and 1280×800, and their pictures saved under {@code
- * target/screens/closeout-flow}.
+ * The close-out's photo of the board and check after the repair in a real (headless) window: a demo
+ * case is opened, its rails read, a photo attached from the chooser (a PNG from the JDK's writer),
+ * the rails read again after the repair — the positive one healthy, the negative one weak (−11.20 V
+ * against a −15 V rail of 5 % tolerance, which spans −15.75 V to −14.25 V) — and the case closed as
+ * fixed after the question that reading raises; the history shows the photo's thumbnail, which
+ * tapped shows large, and the readings after the repair apart from the others. The close-out and
+ * history screens are checked for cut texts at 1024×600 and 1280×800, and their pictures saved
+ * under {@code target/screens/closeout-flow}.
  */
 class CloseOutFlowTest {
   /** The demo unit worked on: a mixing-desk channel board with a line driver stage. */
@@ -121,7 +124,7 @@ class CloseOutFlowTest {
   }
 
   @Test
-  void photoAttachedAtCloseOut_isShownInTheHistory_andTapsToLarge() throws Exception {
+  void photoAndCheckAfterRepair_atCloseOut_areShownInTheHistory() throws Exception {
     robot.clickOn("#caution-ok");
     settle();
     for (char c : SERIAL.toCharArray()) {
@@ -148,21 +151,47 @@ class CloseOutFlowTest {
     byte[] png = TestPictures.png(1600, 1200);
     Files.write(photo, png);
     chooserGives(photo);
-    robot.clickOn("#close-attach-photo");
+    tap("#close-attach-photo");
     settle();
     assertThat(opened).containsExactly("Attach a photo of the board");
     assertThat(texts("#close-photos")).anyMatch(t -> t.startsWith("NF8-22019 top side.png"));
-    robot.clickOn("#action-other");
-    robot.clickOn("#action-text").write("Resoldered the cracked joint at the output connector");
-    robot.clickOn("#action-add");
+    tap("#action-other");
+    tap("#action-text");
+    robot.write("Resoldered the cracked joint at the output connector");
+    tap("#action-add");
     settle();
-    robot.clickOn("#outcome-fixed");
+    // The check after the repair: the same points, read again on the pad.
+    tap("#close-check-after-repair");
+    settle();
+    assertThat(text("#after-repair-point")).isEqualTo("Read U1 pin 8 with the meter:");
+    typeAfterRepair(VCC);
+    typeAfterRepair(-11.20);
+    assertThat(text("#after-repair-summary"))
+        .startsWith("1 of 2 readings are inside the healthy band.")
+        .contains("Outside: U1 pin 4");
+    shoot("close-out-check");
+    tap("#after-repair-done");
+    settle();
+    tap("#outcome-fixed");
     shoot("close-out");
-    robot.clickOn("#close-case");
+    tap("#close-case");
+    settle();
+    // A reading after the repair is outside its band: asked first, not closed.
+    assertThat(text("#close-question")).contains("U1 pin 4 reads", "as fixed anyway?");
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.CLOSE_OUT);
+    shoot("close-out-question");
+    tap("#close-anyway");
     settle();
 
     assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.HISTORY);
     assertThat(robot.lookup("#history-photo-1").tryQuery()).isPresent();
+    assertThat(
+            fx(
+                () ->
+                    robot.lookup(".label").queryAllAs(javafx.scene.control.Label.class).stream()
+                        .anyMatch(
+                            l -> l.getText() != null && l.getText().startsWith("After repair"))))
+        .isTrue();
     shoot("history");
     robot.clickOn("#history-photo-1");
     settle();
@@ -182,10 +211,40 @@ class CloseOutFlowTest {
             .findFirst()
             .orElseThrow()
             .caseId();
-    var photos = workshop.store().cases().caseFile(caseId).orElseThrow().photos();
+    var file = workshop.store().cases().caseFile(caseId).orElseThrow();
+    assertThat(file.afterRepair())
+        .extracting(r -> r.at() + " " + r.value() + " " + r.inside())
+        .containsExactly("U1.8 14.96 true", "U1.4 -11.2 false");
+    // Kept apart: the readings of the fault are the two rails read before the repair.
+    assertThat(file.readings()).extracting(r -> r.value()).containsExactly(VCC, VEE);
+    var photos = file.photos();
     assertThat(photos).hasSize(1);
     assertThat(workshop.store().cases().photo(photos.get(0).id()).orElseThrow().image())
         .isEqualTo(png);
+  }
+
+  /** Taps a control after scrolling the screen to it, as a finger would. */
+  private void tap(String query) throws Exception {
+    fx(
+        () -> {
+          Node node = robot.lookup(query).query();
+          Node up = node.getParent();
+          while (up != null && !(up instanceof javafx.scene.control.ScrollPane)) {
+            up = up.getParent();
+          }
+          if (up instanceof javafx.scene.control.ScrollPane scroll) {
+            Node content = scroll.getContent();
+            double y = content.sceneToLocal(node.localToScene(node.getBoundsInLocal())).getMinY();
+            double room =
+                content.getBoundsInLocal().getHeight() - scroll.getViewportBounds().getHeight();
+            if (room > 0) {
+              scroll.setVvalue(Math.max(0, Math.min(1, (y - 40) / room)));
+            }
+          }
+          return null;
+        });
+    WaitForAsyncUtils.waitForFxEvents();
+    robot.clickOn(query);
   }
 
   private List<String> texts(String box) throws Exception {
@@ -204,6 +263,29 @@ class CloseOutFlowTest {
                 (javafx.scene.control.ListCell<?> cell) ->
                     cell.getText() != null && cell.getText().startsWith(startOfText))
             .<javafx.scene.control.ListCell<?>>query());
+  }
+
+  private void typeAfterRepair(double volts) throws Exception {
+    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
+    if (volts < 0) {
+      tap("#after-repair-key-sign");
+    }
+    for (char c : text.toCharArray()) {
+      tap("#after-repair-key-" + (c == '.' ? "point" : String.valueOf(c)));
+    }
+    tap("#after-repair-enter");
+    settle();
+  }
+
+  private String text(String query) throws Exception {
+    return fx(
+        () -> {
+          var node = robot.lookup(query).query();
+          if (node instanceof javafx.scene.control.Labeled labeled) {
+            return labeled.getText();
+          }
+          throw new AssertionError(query + " is not a text node");
+        });
   }
 
   private void typeReading(double volts) throws Exception {

@@ -7,6 +7,7 @@ import com.stagewise.history.ImportReport;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.ShopMemory;
 import com.stagewise.history.UnitHistory;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
@@ -100,6 +101,28 @@ final class HistoryText {
         if (r.struck()) {
           text.append("  struck out ").append(when(r.struckAt()));
         }
+        text.append(NL);
+      }
+    }
+    if (!file.afterRepair().isEmpty()) {
+      // Read again after the repair: kept apart from the readings of the fault.
+      text.append("  After repair:").append(NL);
+      for (AfterRepairReading r : file.afterRepair()) {
+        text.append(
+            String.format(
+                Locale.ROOT,
+                "    %s  %-8s dc %s V  %s",
+                when(r.takenAt()),
+                r.at(),
+                number(r.value()),
+                !r.hasBand()
+                    ? "(no healthy band known)"
+                    : (r.inside() ? "inside" : "OUTSIDE")
+                        + " healthy "
+                        + number(r.healthyLow())
+                        + " to "
+                        + number(r.healthyHigh())
+                        + " V"));
         text.append(NL);
       }
     }

@@ -116,6 +116,15 @@ public final class Exporter {
                   + "attached_at, "
                   + d.insertionOrder("row"),
               Records::photoWithImage,
+              p),
+          rows.query(
+              Records.AFTER_REPAIR
+                  + " WHERE "
+                  + caseIds
+                  + byCase
+                  + "taken_at, "
+                  + d.insertionOrder("row"),
+              Records::afterRepair,
               p));
     }
   }

@@ -3,6 +3,7 @@ package com.stagewise.history.jdbc;
 import com.stagewise.history.BundleCheck;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.StageVersions;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.HistoryBundle;
@@ -141,6 +142,20 @@ public final class Importer {
                     Records.PHOTO_WITH_IMAGE + " WHERE id = ?",
                     Records::photoWithImage,
                     here.photo().id())
+                .orElseThrow());
+      }
+    }
+    for (AfterRepairReading r0 : b.afterRepair()) {
+      // Never edited once stored: a known id with the same reading is unchanged.
+      AfterRepairReading r = r0.withCase(mapped(r0.caseId()));
+      if (rows.tryInsert(r)) {
+        added++;
+      } else {
+        settleFixed(
+            BundleCheck.AFTER_REPAIR,
+            r.id(),
+            r,
+            rows.first(Records.AFTER_REPAIR + " WHERE id = ?", Records::afterRepair, r.id())
                 .orElseThrow());
       }
     }

@@ -12,6 +12,7 @@ import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
@@ -336,6 +337,29 @@ public final class JdbcCases implements Cases {
   }
 
   @Override
+  public void addAfterRepair(String caseId, List<AfterRepairReading> readings) {
+    Checks.list(SOURCE, "afterRepair", readings);
+    for (int i = 0; i < readings.size(); i++) {
+      AfterRepairReading r = readings.get(i);
+      Checks.afterRepair(SOURCE, "afterRepair[" + i + "]", r);
+      if (!r.caseId().equals(caseId)) {
+        throw new IllegalArgumentException("reading " + r.id() + " belongs to another case");
+      }
+    }
+    history.write(
+        "store the readings after the repair",
+        c -> {
+          try (Rows rows = history.rows(c)) {
+            Require.repairCase(rows, caseId);
+            for (AfterRepairReading r : readings) {
+              rows.insert(r);
+            }
+            return null;
+          }
+        });
+  }
+
+  @Override
   public Optional<StoredPhoto> photo(String photoId) {
     return history.read(
         "read a photo",
@@ -418,6 +442,12 @@ public final class JdbcCases implements Cases {
         rows.query(
             Records.PHOTO + " WHERE case_id = ? ORDER BY attached_at, " + d.insertionOrder("row"),
             Records::photo,
+            id),
+        rows.query(
+            Records.AFTER_REPAIR
+                + " WHERE case_id = ? ORDER BY taken_at, "
+                + d.insertionOrder("row"),
+            Records::afterRepair,
             id));
   }
 

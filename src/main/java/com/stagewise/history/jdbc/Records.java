@@ -1,6 +1,7 @@
 package com.stagewise.history.jdbc;
 
 import com.stagewise.history.record.ActionKind;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
@@ -37,6 +38,10 @@ public final class Records {
       "SELECT id, case_id, at, kind, part, old_value, new_value, text, updated_at"
           + " FROM repair_action";
   public static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
+
+  public static final String AFTER_REPAIR =
+      "SELECT id, case_id, at, value, meter, taken_at, healthy_low, healthy_high"
+          + " FROM after_repair_reading";
 
   /** Selects photos without their pictures. */
   public static final String PHOTO =
@@ -141,6 +146,18 @@ public final class Records {
         rs.getLong(7),
         time(rs, 8),
         rs.getString(9));
+  }
+
+  public static AfterRepairReading afterRepair(ResultSet rs) throws SQLException {
+    return new AfterRepairReading(
+        rs.getString(1),
+        rs.getString(2),
+        rs.getString(3),
+        rs.getDouble(4),
+        rs.getString(5),
+        time(rs, 6),
+        nullableDouble(rs, 7),
+        nullableDouble(rs, 8));
   }
 
   public static StoredPhoto photoWithImage(ResultSet rs) throws SQLException {

@@ -1,6 +1,7 @@
 package com.stagewise.history.jdbc;
 
 import com.stagewise.history.Checks;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
@@ -181,6 +182,8 @@ public final class Rows implements AutoCloseable {
       inserted = tryInsert(n);
     } else if (record instanceof StoredPhoto p) {
       inserted = tryInsert(p);
+    } else if (record instanceof AfterRepairReading r) {
+      inserted = tryInsert(r);
     } else {
       throw new IllegalArgumentException("not a history record: " + record.getClass());
     }
@@ -424,6 +427,23 @@ public final class Rows implements AutoCloseable {
         n.text(),
         n.updatedAt(),
         n.id());
+  }
+
+  public boolean tryInsert(AfterRepairReading r) throws SQLException {
+    int inserted =
+        update(
+            "INSERT INTO after_repair_reading (id, case_id, at, value, meter, taken_at,"
+                + " healthy_low, healthy_high) VALUES (?, ?, ?, ?, ?, ?, ?, ?)"
+                + " ON CONFLICT (id) DO NOTHING",
+            r.id(),
+            r.caseId(),
+            r.at(),
+            r.value(),
+            r.meterText(),
+            r.takenAt(),
+            r.healthyLow(),
+            r.healthyHigh());
+    return inserted == 1;
   }
 
   public boolean tryInsert(StoredPhoto p) throws SQLException {

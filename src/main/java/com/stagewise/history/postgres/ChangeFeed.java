@@ -24,7 +24,8 @@ final class ChangeFeed {
     "suspect_list",
     "repair_action",
     "case_note",
-    "case_photo"
+    "case_photo",
+    "after_repair_reading"
   };
 
   private ChangeFeed() {}
@@ -44,7 +45,8 @@ final class ChangeFeed {
               + " UNION SELECT case_id FROM suspect_list WHERE change_no > ?1"
               + " UNION SELECT case_id FROM repair_action WHERE change_no > ?1"
               + " UNION SELECT case_id FROM case_note WHERE change_no > ?1"
-              + " UNION SELECT case_id FROM case_photo WHERE change_no > ?1";
+              + " UNION SELECT case_id FROM case_photo WHERE change_no > ?1"
+              + " UNION SELECT case_id FROM after_repair_reading WHERE change_no > ?1";
       String cases = "c.change_no > ?1 OR c.id IN (" + children + ")";
       String units =
           "change_no > ?1 OR id IN (SELECT c.unit_id FROM repair_case c WHERE " + cases + ")";
@@ -104,6 +106,10 @@ final class ChangeFeed {
               rows.query(
                   Records.PHOTO_WITH_IMAGE + " WHERE change_no > ? ORDER BY change_no",
                   Records::photoWithImage,
+                  after),
+              rows.query(
+                  Records.AFTER_REPAIR + " WHERE change_no > ? ORDER BY change_no",
+                  Records::afterRepair,
                   after));
       return new ShopServer.Changes(bundle, through);
     }

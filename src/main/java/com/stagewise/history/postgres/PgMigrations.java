@@ -26,7 +26,8 @@ final class PgMigrations {
           "V5__struck_readings.sql",
           "V6__stage_versions.sql",
           "V7__ac_measure.sql",
-          "V8__case_photos.sql");
+          "V8__case_photos.sql",
+          "V9__after_repair_readings.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

@@ -29,6 +29,7 @@ final class PgTransfer implements Transfer {
           "repair_action",
           "case_note",
           "case_photo",
+          "after_repair_reading",
           "schema_version");
 
   private final PgHistory history;

@@ -34,7 +34,8 @@ public final class ServerCheck {
           "suspect",
           "repair_action",
           "case_note",
-          "case_photo");
+          "case_photo",
+          "after_repair_reading");
 
   /** Tables whose rows a bench rewrites (a case's faults and parts on close-out or merge). */
   private static final List<String> REWRITTEN = List.of("confirmed_fault", "case_part");

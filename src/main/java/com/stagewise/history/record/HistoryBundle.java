@@ -14,6 +14,7 @@ import java.util.Objects;
  * @param exportedAt when it was exported
  * @param programVersion the Stagewise version that exported it
  * @param photos the photos of the board attached to its cases, with their pictures
+ * @param afterRepair the readings taken again after the repair in its cases
  */
 public record HistoryBundle(
     int version,
@@ -27,7 +28,8 @@ public record HistoryBundle(
     List<SuspectListRecord> suspectLists,
     List<RepairAction> actions,
     List<CaseNote> notes,
-    List<StoredPhoto> photos) {
+    List<StoredPhoto> photos,
+    List<AfterRepairReading> afterRepair) {
 
   /** The {@code format} word of a history bundle file. */
   public static final String FORMAT = "stagewise-history";
@@ -36,9 +38,10 @@ public record HistoryBundle(
    * The newest bundle format version this program reads and the one it writes (2: readings may be
    * ohms readings, with {@code "to"} and {@code "OL"}; 3: stage sheets carry their version number,
    * who saved them and when, and cases the stage version they are diagnosed with; 4: photos of the
-   * board attached to cases). Bundles of earlier versions are read as before.
+   * board attached to cases; 5: readings taken again after the repair). Bundles of earlier versions
+   * are read as before.
    */
-  public static final int CURRENT_VERSION = 4;
+  public static final int CURRENT_VERSION = 5;
 
   /**
    * The first bundle format version whose stage sheets carry version numbers; a sheet of an earlier
@@ -63,6 +66,37 @@ public record HistoryBundle(
     actions = List.copyOf(actions);
     notes = List.copyOf(notes);
     photos = List.copyOf(photos);
+    afterRepair = List.copyOf(afterRepair);
+  }
+
+  /** A bundle without readings after the repair (every bundle before format 5). */
+  public HistoryBundle(
+      int version,
+      Instant exportedAt,
+      String programVersion,
+      List<BoardModel> boardModels,
+      List<StageSheetRecord> stageSheets,
+      List<Unit> units,
+      List<RepairCase> cases,
+      List<StoredReading> readings,
+      List<SuspectListRecord> suspectLists,
+      List<RepairAction> actions,
+      List<CaseNote> notes,
+      List<StoredPhoto> photos) {
+    this(
+        version,
+        exportedAt,
+        programVersion,
+        boardModels,
+        stageSheets,
+        units,
+        cases,
+        readings,
+        suspectLists,
+        actions,
+        notes,
+        photos,
+        List.of());
   }
 
   /** A bundle without photos (every bundle before format 4). */
@@ -90,6 +124,7 @@ public record HistoryBundle(
         suspectLists,
         actions,
         notes,
+        List.of(),
         List.of());
   }
 
@@ -103,6 +138,7 @@ public record HistoryBundle(
         + suspectLists.size()
         + actions.size()
         + notes.size()
-        + photos.size();
+        + photos.size()
+        + afterRepair.size();
   }
 }

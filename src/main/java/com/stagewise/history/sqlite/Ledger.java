@@ -7,6 +7,7 @@ import com.stagewise.history.jdbc.Importer;
 import com.stagewise.history.jdbc.Records;
 import com.stagewise.history.jdbc.Rows;
 import com.stagewise.history.jdbc.SqlDialect;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.HistoryBundle;
@@ -40,7 +41,8 @@ final class Ledger implements SyncLedger {
           BundleCheck.SUSPECT_LIST, "SELECT case_id FROM suspect_list WHERE id = ?",
           BundleCheck.ACTION, "SELECT case_id FROM repair_action WHERE id = ?",
           BundleCheck.NOTE, "SELECT case_id FROM case_note WHERE id = ?",
-          BundleCheck.PHOTO, "SELECT case_id FROM case_photo WHERE id = ?");
+          BundleCheck.PHOTO, "SELECT case_id FROM case_photo WHERE id = ?",
+          BundleCheck.AFTER_REPAIR, "SELECT case_id FROM after_repair_reading WHERE id = ?");
 
   private final SqliteHistory history;
 
@@ -126,6 +128,7 @@ final class Ledger implements SyncLedger {
     List<RepairAction> actions = new ArrayList<>();
     List<CaseNote> notes = new ArrayList<>();
     List<StoredPhoto> photos = new ArrayList<>();
+    List<AfterRepairReading> afterRepair = new ArrayList<>();
     if (group.startsWith(BundleCheck.BOARD_MODEL + " ")) {
       models.addAll(rows.query(Records.BOARD_MODEL + " WHERE id = ?", Records::boardModel, key));
       for (StageSheetRecord s :
@@ -188,6 +191,15 @@ final class Ledger implements SyncLedger {
           notes.add(n);
         }
       }
+      for (AfterRepairReading r :
+          rows.query(
+              Records.AFTER_REPAIR + " WHERE case_id = ? ORDER BY taken_at, row",
+              Records::afterRepair,
+              key)) {
+        if (ids.contains(r.id())) {
+          afterRepair.add(r);
+        }
+      }
       for (String photoId :
           rows.query(
               "SELECT id FROM case_photo WHERE case_id = ? ORDER BY attached_at, row",
@@ -213,7 +225,8 @@ final class Ledger implements SyncLedger {
         lists,
         actions,
         notes,
-        photos);
+        photos,
+        afterRepair);
   }
 
   @Override
@@ -267,6 +280,7 @@ final class Ledger implements SyncLedger {
     b.actions().forEach(r -> ids.add(r.id()));
     b.notes().forEach(r -> ids.add(r.id()));
     b.photos().forEach(r -> ids.add(r.photo().id()));
+    b.afterRepair().forEach(r -> ids.add(r.id()));
     return ids;
   }
 

@@ -25,7 +25,8 @@ final class Bundles {
         + b.suspectLists().size()
         + b.actions().size()
         + b.notes().size()
-        + b.photos().size();
+        + b.photos().size()
+        + b.afterRepair().size();
   }
 
   /**
@@ -84,7 +85,8 @@ final class Bundles {
               b.suspectLists().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
               b.actions().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
               b.notes().stream().filter(r -> caseIds.contains(r.caseId())).toList(),
-              b.photos().stream().filter(r -> caseIds.contains(r.photo().caseId())).toList()));
+              b.photos().stream().filter(r -> caseIds.contains(r.photo().caseId())).toList(),
+              b.afterRepair().stream().filter(r -> caseIds.contains(r.caseId())).toList()));
     }
     return out;
   }

@@ -64,7 +64,8 @@ public final class HistoryBundleJson {
           "suspectLists",
           "actions",
           "notes",
-          "photos");
+          "photos",
+          "afterRepair");
   private static final List<String> BOARD_MODEL =
       List.of("id", "name", "maker", "notes", "updatedAt");
   private static final List<String> UNIT =
@@ -291,7 +292,10 @@ public final class HistoryBundleJson {
         lists,
         actions,
         notes,
-        top.optionalElements("photos", "photos").stream().map(PhotoFields::photo).toList());
+        top.optionalElements("photos", "photos").stream().map(PhotoFields::photo).toList(),
+        top.optionalElements("afterRepair", "readings after the repair").stream()
+            .map(PhotoFields::afterRepair)
+            .toList());
   }
 
   private static final String ACTION_KINDS = "part-replaced, reflow, adjustment or other";
@@ -352,6 +356,7 @@ public final class HistoryBundleJson {
       writeArray(json, "actions", bundle.actions(), BundleTrees::tree);
       writeArray(json, "notes", bundle.notes(), BundleTrees::tree);
       writeArray(json, "photos", bundle.photos(), PhotoFields::tree);
+      writeArray(json, "afterRepair", bundle.afterRepair(), PhotoFields::tree);
       json.writeEndObject();
     }
   }

@@ -39,9 +39,17 @@ public final class CloseOutView {
     VBox left = actionsPanel();
     left.setPrefWidth(620);
     HBox.setHgrow(left, Priority.ALWAYS);
+    AfterRepairPanel check = new AfterRepairPanel(model.afterRepair(), model::endCheck);
+    check.setPrefWidth(620);
+    HBox.setHgrow(check, Priority.ALWAYS);
+    // The check after the repair takes the place of the actions while it is on screen.
+    check.visibleProperty().bind(model.checkingProperty());
+    check.managedProperty().bind(model.checkingProperty());
+    left.visibleProperty().bind(model.checkingProperty().not());
+    left.managedProperty().bind(model.checkingProperty().not());
     VBox right = endPanel();
     right.setPrefWidth(560);
-    root.getChildren().addAll(left, right);
+    root.getChildren().addAll(left, check, right);
     model.faultChoices().addListener((ListChangeListener<String>) c -> showFaults());
     model.confirmedFaults().addListener((ListChangeListener<String>) c -> showFaults());
     showFaults();
@@ -180,6 +188,23 @@ public final class CloseOutView {
     Label faultsTitle = new Label("Faults found (tick what was really wrong)");
     faultsTitle.getStyleClass().add("section-title");
     faultsBox.setId("close-faults");
+    Label checkTitle = new Label("Check after repair");
+    checkTitle.getStyleClass().add("section-title");
+    Label checkHint =
+        new Label(
+            "Before closing as fixed, read the same points again: each is shown against its"
+                + " healthy band.");
+    checkHint.setWrapText(true);
+    checkHint.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+    checkHint.getStyleClass().add("hint");
+    Label checkSummary = new Label();
+    checkSummary.setId("close-check-summary");
+    checkSummary.setWrapText(true);
+    checkSummary.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+    checkSummary.textProperty().bind(model.afterRepair().summaryProperty());
+    Button check = new Button("Check after repair…");
+    check.setId("close-check-after-repair");
+    check.setOnAction(e -> model.checkAfterRepair());
     Label outcomeTitle = new Label("Outcome");
     outcomeTitle.getStyleClass().add("section-title");
     ToggleGroup outcomes = new ToggleGroup();
@@ -228,13 +253,43 @@ public final class CloseOutView {
     leave.setOnAction(e -> model.leaveOpen());
     HBox buttons = new HBox(10, close, leave);
     buttons.setAlignment(Pos.CENTER_LEFT);
+    Label questionText = new Label();
+    questionText.setId("close-question");
+    questionText.setWrapText(true);
+    questionText.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+    questionText.getStyleClass().add("strong");
+    questionText.textProperty().bind(model.questionProperty());
+    Button anyway = new Button("Close as fixed anyway");
+    anyway.setId("close-anyway");
+    anyway.setOnAction(e -> model.closeAnyway());
+    Button goBack = new Button("Go back");
+    goBack.setId("close-go-back");
+    goBack.getStyleClass().add("primary");
+    goBack.setOnAction(e -> model.dontClose());
+    FlowPane answers = new FlowPane(8, 8, goBack, anyway);
+    VBox question = new VBox(6, questionText, answers);
+    question.getStyleClass().add("question");
+    question.visibleProperty().bind(model.questionProperty().isNotEmpty());
+    question.managedProperty().bind(model.questionProperty().isNotEmpty());
     CheckBox report = new CheckBox("Save the repair report (PDF) when the case is closed");
     report.setId("close-save-report");
     report.setWrapText(true);
     report.selectedProperty().bindBidirectional(model.saveReportProperty());
     box.getChildren()
         .addAll(
-            faultsTitle, faultsBox, outcomeTitle, outcomeRow, notesTitle, notes, report, buttons);
+            faultsTitle,
+            faultsBox,
+            checkTitle,
+            checkHint,
+            checkSummary,
+            check,
+            outcomeTitle,
+            outcomeRow,
+            notesTitle,
+            notes,
+            report,
+            question,
+            buttons);
     return box;
   }
 

@@ -49,10 +49,14 @@ public final class CloseOutViewModel {
   private Consumer<String> afterClose = caseId -> {};
   private final BooleanProperty saveReport = new SimpleBooleanProperty(false);
   private final ObservableList<String> photos = FXCollections.observableArrayList();
+  private final AfterRepairViewModel afterRepair;
+  private final BooleanProperty checking = new SimpleBooleanProperty(false);
+  private final StringProperty question = new SimpleStringProperty("");
 
   /** Creates the close-out's model on a bench. */
   public CloseOutViewModel(Bench bench) {
     this.bench = bench;
+    this.afterRepair = new AfterRepairViewModel(bench);
     bench.openCaseProperty().addListener((o, was, now) -> reset());
     bench.diagnosisProperty().addListener((o, was, now) -> choices(now));
   }
@@ -104,6 +108,49 @@ public final class CloseOutViewModel {
     return saveReport;
   }
 
+  /** Returns the check after the repair. */
+  public AfterRepairViewModel afterRepair() {
+    return afterRepair;
+  }
+
+  /** Whether the check after the repair is on screen (in place of the actions). */
+  public BooleanProperty checkingProperty() {
+    return checking;
+  }
+
+  /**
+   * The question asked before closing as fixed when a reading after the repair is outside its
+   * healthy band; empty when none is asked.
+   */
+  public StringProperty questionProperty() {
+    return question;
+  }
+
+  /** Starts the check after the repair: the points to read again, with their healthy bands. */
+  public void checkAfterRepair() {
+    if (bench.openCaseProperty().get() == null) {
+      return;
+    }
+    checking.set(true);
+    afterRepair.start();
+  }
+
+  /** Leaves the check (what was read is stored by the check's own button). */
+  public void endCheck() {
+    checking.set(false);
+  }
+
+  /** Closes as fixed although a reading after the repair is outside its band (asked first). */
+  public void closeAnyway() {
+    question.set("");
+    close(true);
+  }
+
+  /** Goes back from the question without closing. */
+  public void dontClose() {
+    question.set("");
+  }
+
   /** Returns a line for each photo of the board attached to the case, in the order attached. */
   public ObservableList<String> photos() {
     return photos;
@@ -139,6 +186,8 @@ public final class CloseOutViewModel {
     outcome.set(null);
     notes.set("");
     photos.clear();
+    checking.set(false);
+    question.set("");
     clearForm();
     RepairCase rc = bench.openCaseProperty().get();
     if (rc != null) {
@@ -283,6 +332,10 @@ public final class CloseOutViewModel {
    * Closes the case with the outcome, the faults found and the notes, and shows it in the history.
    */
   public void closeCase() {
+    close(false);
+  }
+
+  private void close(boolean outsideConfirmed) {
     RepairCase rc = bench.openCaseProperty().get();
     Outcome chosen = outcome.get();
     if (rc == null) {
@@ -304,6 +357,18 @@ public final class CloseOutViewModel {
               "What fixed it?",
               "A fixed case needs the fault found or the action taken, so the shop can learn from it.",
               "Tick the fault that was found, or add what was done.");
+      return;
+    }
+    if (chosen == Outcome.FIXED && !outsideConfirmed && !afterRepair.outside().isEmpty()) {
+      question.set(
+          "After the repair, "
+              + String.join("; ", afterRepair.outside())
+              + ". Close the case as fixed anyway?");
+      return;
+    }
+    if (afterRepair.hasUnsaved()) {
+      // What was read after the repair is kept with the case before it closes.
+      afterRepair.store(() -> close(true));
       return;
     }
     List<String> faults =

@@ -208,6 +208,9 @@ public final class HistoryView {
     photos();
     section("Readings", view.readings(), "No readings.");
     section("Suspects at the time", view.suspects(), "No suspect list was computed.");
+    if (!model.afterRepair().isEmpty()) {
+      section("After repair (read again, not part of the diagnosis)", model.afterRepair(), "");
+    }
     section("What was done", view.actions(), "Nothing recorded.");
     section("Notes", view.notes(), "No notes.");
     section("This unit's cases", model.timeline(), "");
@@ -281,6 +284,8 @@ public final class HistoryView {
 
   private void section(String heading, List<String> lines, String empty) {
     Label head = new Label(heading);
+    head.setWrapText(true);
+    head.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     head.getStyleClass().add("case-section");
     caseBox.getChildren().add(head);
     if (lines.isEmpty() && !empty.isEmpty()) {

@@ -5,6 +5,7 @@ import com.stagewise.history.CaseFile;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.UnitHistory;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.CaseStatus;
@@ -42,6 +43,7 @@ public final class HistoryViewModel {
   private final ObservableList<String> timeline = FXCollections.observableArrayList();
   private final StringProperty reportNote = new SimpleStringProperty("");
   private final ObservableList<ShownPhoto> photos = FXCollections.observableArrayList();
+  private final ObservableList<String> afterRepair = FXCollections.observableArrayList();
   private final ObjectProperty<ShownPhoto> enlarged = new SimpleObjectProperty<>();
   private String shownSerial = "";
 
@@ -102,6 +104,14 @@ public final class HistoryViewModel {
    * @param image the picture file's bytes (PNG or JPEG)
    */
   public record ShownPhoto(String id, String caption, byte[] image) {}
+
+  /**
+   * Returns the shown case's readings taken again after the repair, each with its healthy band and
+   * whether it is inside, in the order taken (kept apart from the readings of the fault).
+   */
+  public ObservableList<String> afterRepair() {
+    return afterRepair;
+  }
 
   /** Returns the shown case's photos of the board, in the order attached. */
   public ObservableList<ShownPhoto> photos() {
@@ -253,6 +263,7 @@ public final class HistoryViewModel {
               reportNote.set("");
               enlarged.set(null);
               photos.setAll(loaded.photos());
+              afterRepair.setAll(afterRepairLines(loaded.file()));
               shown.set(view(loaded.file(), loaded.unit()));
               timeline.setAll(timeline(loaded.unit()));
             },
@@ -260,6 +271,26 @@ public final class HistoryViewModel {
   }
 
   private record Loaded(CaseFile file, UnitHistory unit, List<ShownPhoto> photos) {}
+
+  static List<String> afterRepairLines(CaseFile file) {
+    List<String> lines = new ArrayList<>();
+    for (AfterRepairReading r : file.afterRepair()) {
+      lines.add(
+          Words.pin(r.at())
+              + ":  "
+              + Words.measured(r.value())
+              + "   "
+              + (!r.hasBand()
+                  ? "no healthy band known"
+                  : (r.inside() ? "inside" : "OUTSIDE")
+                      + " the healthy band "
+                      + Words.band(r.healthyLow(), r.healthyHigh()))
+              + "   ("
+              + Words.dateTime(r.takenAt())
+              + ")");
+    }
+    return lines;
+  }
 
   static List<String> timeline(UnitHistory unit) {
     List<String> lines = new ArrayList<>();

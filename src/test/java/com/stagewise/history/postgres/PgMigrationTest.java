@@ -258,6 +258,66 @@ class PgMigrationTest {
     }
   }
 
+  @Test
+  void version8Shop_migrates_casesHaveNoReadingsAfterRepair_aBenchRoleMayAddThem()
+      throws SQLException {
+    ServerAddress address = server.freshShop();
+    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
+    try {
+      PgMigrations.migrate(admin, 0L, 8);
+    } finally {
+      admin.close();
+    }
+    String s = address.schema();
+    String bench = "bench8_" + s.replaceAll("[^a-z0-9_]", "_");
+    server.adminSql(
+        "SET search_path TO " + s,
+        "CREATE ROLE " + bench + " LOGIN PASSWORD 'x'",
+        "GRANT SELECT, INSERT, UPDATE ON " + s + ".reading, " + s + ".repair_case TO " + bench,
+        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
+        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
+        "INSERT INTO "
+            + s
+            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
+            + " VALUES ('c1', 'u1', "
+            + TAKEN
+            + ", 'crackles when cold', 'open', "
+            + TAKEN
+            + ")");
+    long changeBefore = maxChange(s, "repair_case");
+    try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
+      assertThat(shop.schemaVersion()).isEqualTo(PgMigrations.LATEST);
+      assertThat(shop.cases().caseFile("c1").orElseThrow().afterRepair()).isEmpty();
+      assertThat(maxChange(s, "repair_case")).isEqualTo(changeBefore);
+      var after =
+          new com.stagewise.history.record.AfterRepairReading(
+              com.stagewise.history.HistoryStore.newId(),
+              "c1",
+              "OUT",
+              -4.7,
+              "m",
+              Instant.ofEpochMilli(TAKEN + 60_000),
+              -4.8,
+              -4.6);
+      shop.cases().addAfterRepair("c1", java.util.List.of(after));
+      assertThat(shop.cases().caseFile("c1").orElseThrow().afterRepair()).containsExactly(after);
+      assertThat(shop.cases().caseFile("c1").orElseThrow().readings()).isEmpty();
+      assertThat(maxChange(s, "after_repair_reading")).isGreaterThan(changeBefore);
+    }
+    try (Connection c = server.adminConnection(TestServer.DATABASE);
+        Statement st = c.createStatement();
+        ResultSet rs =
+            st.executeQuery(
+                "SELECT has_table_privilege('"
+                    + bench
+                    + "', '"
+                    + s
+                    + ".after_repair_reading', 'INSERT')")) {
+      assertThat(rs.next()).isTrue();
+      assertThat(rs.getBoolean(1)).as("a bench role may add readings after a repair").isTrue();
+    }
+  }
+
   private long maxChange(String schema, String table) throws SQLException {
     try (Connection c = server.adminConnection(TestServer.DATABASE);
         Statement st = c.createStatement();

@@ -321,10 +321,35 @@ class FileSafetyTest {
         assertThat(store.cases().photo(photo.id()).orElseThrow().image()).isEqualTo(png);
         assertThat(store.cases().caseFile(opened.id()).orElseThrow().photos())
             .containsExactly(photo);
+        // Schema 8: no case of before has readings after a repair; the migrated file takes them,
+        // apart from the readings of the fault.
+        assertThat(history.cases()).allMatch(c -> c.afterRepair().isEmpty());
+        var after =
+            new com.stagewise.history.record.AfterRepairReading(
+                com.stagewise.history.HistoryStore.newId(),
+                opened.id(),
+                "OUT",
+                -4.7,
+                "m",
+                java.time.Instant.parse("2026-01-01T00:00:00Z"),
+                -4.8,
+                -4.6);
+        store.cases().addAfterRepair(opened.id(), List.of(after));
+        assertThat(store.cases().caseFile(opened.id()).orElseThrow().afterRepair())
+            .containsExactly(after);
+        assertThat(store.cases().caseFile(opened.id()).orElseThrow().readings()).isEmpty();
       }
       try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + copy);
           PreparedStatement q =
               c.prepareStatement("SELECT count(*) FROM outbox WHERE kind = 'photo'");
+          java.sql.ResultSet rs = q.executeQuery()) {
+        assertThat(rs.next()).isTrue();
+        assertThat(rs.getInt(1)).isEqualTo(1);
+      }
+      try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + copy);
+          PreparedStatement q =
+              c.prepareStatement(
+                  "SELECT count(*) FROM outbox WHERE kind = 'after-repair reading'");
           java.sql.ResultSet rs = q.executeQuery()) {
         assertThat(rs.next()).isTrue();
         assertThat(rs.getInt(1)).isEqualTo(1);

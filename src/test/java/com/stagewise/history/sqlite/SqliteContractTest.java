@@ -1,5 +1,6 @@
 package com.stagewise.history.sqlite;
 
+import com.stagewise.history.AfterRepairContract;
 import com.stagewise.history.CasesContract;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.PhotosContract;
@@ -73,6 +74,14 @@ class SqliteContractTest {
 
   @Nested
   class Photos extends PhotosContract {
+    @Override
+    protected HistoryStore openStore(Clock clock) {
+      return fresh(clock);
+    }
+  }
+
+  @Nested
+  class AfterRepair extends AfterRepairContract {
     @Override
     protected HistoryStore openStore(Clock clock) {
       return fresh(clock);

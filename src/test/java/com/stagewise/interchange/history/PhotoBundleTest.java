@@ -75,7 +75,7 @@ class PhotoBundleTest {
     HistoryBundle bundle = exportWith(folder.resolve("a.db"), picture);
     String text = HistoryBundleJson.toJson(bundle);
     JsonNode tree = json.readTree(text);
-    assertThat(tree.get("version").asInt()).isEqualTo(4);
+    assertThat(tree.get("version").asInt()).isEqualTo(HistoryBundle.CURRENT_VERSION);
     JsonNode photo = tree.get("photos").get(0);
     assertThat(photo.get("fileName").asText()).isEqualTo("top.png");
     assertThat(photo.get("mediaType").asText()).isEqualTo("image/png");
@@ -97,6 +97,45 @@ class PhotoBundleTest {
           other.cases().caseFile(back.cases().get(0).id()).orElseThrow().photos().get(0);
       assertThat(other.cases().photo(there.id()).orElseThrow().image()).isEqualTo(picture);
     }
+  }
+
+  @Test
+  void readingsAfterRepair_writeAndRead_withTheirBands_andABandlessOne() throws Exception {
+    HistoryBundle bundle;
+    try (HistoryStore store = SqliteHistory.open(folder.resolve("a.db"), clock)) {
+      BoardModel model = store.units().boardModel("MX-8", "");
+      Unit unit = store.units().add("NF-1", model.id(), "");
+      RepairCase rc = store.cases().open(unit.id(), "hum");
+      store
+          .cases()
+          .addAfterRepair(
+              rc.id(),
+              java.util.List.of(
+                  new com.stagewise.history.record.AfterRepairReading(
+                      HistoryStore.newId(),
+                      rc.id(),
+                      "OUT",
+                      -4.71,
+                      "m",
+                      clock.instant(),
+                      -4.8,
+                      -4.6),
+                  new com.stagewise.history.record.AfterRepairReading(
+                      HistoryStore.newId(),
+                      rc.id(),
+                      "SUM",
+                      0.001,
+                      "m",
+                      clock.instant(),
+                      null,
+                      null)));
+      bundle = store.transfer().export(new ExportSelection.All(), "test");
+    }
+    String text = HistoryBundleJson.toJson(bundle);
+    JsonNode entry = json.readTree(text).get("afterRepair").get(0);
+    assertThat(entry.get("healthyLow").asDouble()).isEqualTo(-4.8);
+    assertThat(json.readTree(text).get("afterRepair").get(1).has("healthyLow")).isFalse();
+    assertThat(read(text).afterRepair()).isEqualTo(bundle.afterRepair()).hasSize(2);
   }
 
   @Test

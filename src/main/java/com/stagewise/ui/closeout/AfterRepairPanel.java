@@ -1,0 +1,104 @@
+package com.stagewise.ui.closeout;
+
+import com.stagewise.ui.widget.ValuePad;
+import javafx.collections.ListChangeListener;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/**
+ * The close-out's check after the repair: the points to read again with their healthy bands and
+ * verdicts, the value pad, and the way back to the close-out.
+ */
+final class AfterRepairPanel extends VBox {
+  AfterRepairPanel(AfterRepairViewModel model, Runnable done) {
+    super(8);
+    getStyleClass().add("panel");
+    setId("after-repair");
+    Label title = new Label("Check after repair");
+    title.getStyleClass().add("section-title");
+    Label summary = new Label();
+    summary.setId("after-repair-summary");
+    summary.setWrapText(true);
+    summary.setMinHeight(Region.USE_PREF_SIZE);
+    summary.textProperty().bind(model.summaryProperty());
+    ListView<AfterRepairViewModel.CheckRow> list = new ListView<>(model.rows());
+    list.setId("after-repair-points");
+    list.setMinHeight(150);
+    VBox.setVgrow(list, Priority.ALWAYS);
+    list.setCellFactory(
+        v ->
+            new ListCell<>() {
+              {
+                setPrefWidth(0);
+                setWrapText(true);
+              }
+
+              @Override
+              protected void updateItem(AfterRepairViewModel.CheckRow row, boolean empty) {
+                super.updateItem(row, empty);
+                getStyleClass().removeAll("outside", "inside");
+                if (empty || row == null) {
+                  setText(null);
+                  return;
+                }
+                String verdict = row.verdict();
+                setText(
+                    row.title()
+                        + "  —  "
+                        + row.band()
+                        + "\n"
+                        + (verdict.isEmpty() ? "not read yet" : verdict)
+                        + (row.value() != null && !row.saved() ? " (not stored yet)" : ""));
+                if (row.outside()) {
+                  getStyleClass().add("outside");
+                } else if (row.value() != null) {
+                  getStyleClass().add("inside");
+                }
+              }
+            });
+    list.getSelectionModel()
+        .selectedIndexProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now.intValue() >= 0 && now.intValue() != model.currentProperty().get()) {
+                model.select(now.intValue());
+              }
+            });
+    model
+        .currentProperty()
+        .addListener((o, was, now) -> list.getSelectionModel().select(now.intValue()));
+    model
+        .rows()
+        .addListener(
+            (ListChangeListener<AfterRepairViewModel.CheckRow>)
+                c -> list.getSelectionModel().select(model.currentProperty().get()));
+    Label reading = new Label();
+    reading.setId("after-repair-point");
+    reading.setWrapText(true);
+    reading.getStyleClass().add("strong");
+    Runnable showPoint =
+        () -> {
+          int i = model.currentProperty().get();
+          reading.setText(
+              i < 0 || i >= model.rows().size()
+                  ? "Every point is read. Store the check, or tap a point to read it again."
+                  : "Read " + model.rows().get(i).title() + " with the meter:");
+        };
+    model.currentProperty().addListener((o, was, now) -> showPoint.run());
+    model
+        .rows()
+        .addListener((ListChangeListener<AfterRepairViewModel.CheckRow>) c -> showPoint.run());
+    showPoint.run();
+    ValuePad pad = new ValuePad(model.pad(), "after-repair", "Record", model::enter);
+    Button back = new Button("Store the check and go back");
+    back.setId("after-repair-done");
+    back.getStyleClass().add("primary");
+    back.setOnAction(e -> model.store(done));
+    getChildren().addAll(title, summary, list, reading, pad, back);
+  }
+}
