@@ -131,7 +131,7 @@ public final class Importer {
     for (StoredPhoto p : b.photos()) {
       // A photo is never edited once attached: a known id with the same picture is unchanged.
       StoredPhoto here = new StoredPhoto(p.photo().withCase(mapped(p.photo().caseId())), p.image());
-      if (rows.tryInsert(here)) {
+      if (CaseExtraRows.tryInsert(rows, here)) {
         added++;
       } else {
         settleFixed(
@@ -148,7 +148,7 @@ public final class Importer {
     for (AfterRepairReading r0 : b.afterRepair()) {
       // Never edited once stored: a known id with the same reading is unchanged.
       AfterRepairReading r = r0.withCase(mapped(r0.caseId()));
-      if (rows.tryInsert(r)) {
+      if (CaseExtraRows.tryInsert(rows, r)) {
         added++;
       } else {
         settleFixed(

@@ -4,7 +4,6 @@ import com.stagewise.history.Checks;
 import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
-import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StageSheetRecord;
@@ -181,9 +180,9 @@ public final class Rows implements AutoCloseable {
     } else if (record instanceof CaseNote n) {
       inserted = tryInsert(n);
     } else if (record instanceof StoredPhoto p) {
-      inserted = tryInsert(p);
+      inserted = CaseExtraRows.tryInsert(this, p);
     } else if (record instanceof AfterRepairReading r) {
-      inserted = tryInsert(r);
+      inserted = CaseExtraRows.tryInsert(this, r);
     } else {
       throw new IllegalArgumentException("not a history record: " + record.getClass());
     }
@@ -427,43 +426,6 @@ public final class Rows implements AutoCloseable {
         n.text(),
         n.updatedAt(),
         n.id());
-  }
-
-  public boolean tryInsert(AfterRepairReading r) throws SQLException {
-    int inserted =
-        update(
-            "INSERT INTO after_repair_reading (id, case_id, at, value, meter, taken_at,"
-                + " healthy_low, healthy_high) VALUES (?, ?, ?, ?, ?, ?, ?, ?)"
-                + " ON CONFLICT (id) DO NOTHING",
-            r.id(),
-            r.caseId(),
-            r.at(),
-            r.value(),
-            r.meterText(),
-            r.takenAt(),
-            r.healthyLow(),
-            r.healthyHigh());
-    return inserted == 1;
-  }
-
-  public boolean tryInsert(StoredPhoto p) throws SQLException {
-    CasePhoto about = p.photo();
-    int inserted =
-        update(
-            "INSERT INTO case_photo (id, case_id, file_name, media_type, width, height, bytes,"
-                + " attached_at, attached_by, image) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
-                + " ON CONFLICT (id) DO NOTHING",
-            about.id(),
-            about.caseId(),
-            about.fileName(),
-            about.mediaType(),
-            about.width(),
-            about.height(),
-            about.bytes(),
-            about.attachedAt(),
-            about.attachedBy(),
-            p.image());
-    return inserted == 1;
   }
 
   /**
