@@ -139,8 +139,32 @@ public final class CloseOutView {
     Label recorded = new Label("Recorded in this case");
     recorded.getStyleClass().add("strong");
     HBox addRow = new HBox(8, add, showKeys);
-    box.getChildren().addAll(title, kindRow, form, addRow, keypad, recorded, list, photosBox());
+    box.getChildren()
+        .addAll(title, kindRow, form, addRow, keypad, recorded, list, photosBox(), checkBox());
     return box;
+  }
+
+  /** The check after the repair: its button, and what the check found. */
+  private VBox checkBox() {
+    Label checkTitle = new Label("Check after repair");
+    checkTitle.getStyleClass().add("strong");
+    Label checkHint =
+        new Label(
+            "Before closing as fixed, read the same points again: each is shown against its"
+                + " healthy band.");
+    checkHint.setWrapText(true);
+    checkHint.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+    checkHint.getStyleClass().add("hint");
+    Label checkSummary = new Label();
+    checkSummary.setId("close-check-summary");
+    checkSummary.setWrapText(true);
+    checkSummary.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+    checkSummary.textProperty().bind(model.afterRepair().summaryProperty());
+    Button check = new Button("Check after repair…");
+    check.setId("close-check-after-repair");
+    check.setOnAction(e -> model.checkAfterRepair());
+    checkSummary.managedProperty().bind(checkSummary.textProperty().isNotEmpty());
+    return new VBox(4, checkTitle, checkHint, checkSummary, check);
   }
 
   /** The photos of the board attached to the case, and the button that attaches one. */
@@ -188,23 +212,6 @@ public final class CloseOutView {
     Label faultsTitle = new Label("Faults found (tick what was really wrong)");
     faultsTitle.getStyleClass().add("section-title");
     faultsBox.setId("close-faults");
-    Label checkTitle = new Label("Check after repair");
-    checkTitle.getStyleClass().add("section-title");
-    Label checkHint =
-        new Label(
-            "Before closing as fixed, read the same points again: each is shown against its"
-                + " healthy band.");
-    checkHint.setWrapText(true);
-    checkHint.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
-    checkHint.getStyleClass().add("hint");
-    Label checkSummary = new Label();
-    checkSummary.setId("close-check-summary");
-    checkSummary.setWrapText(true);
-    checkSummary.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
-    checkSummary.textProperty().bind(model.afterRepair().summaryProperty());
-    Button check = new Button("Check after repair…");
-    check.setId("close-check-after-repair");
-    check.setOnAction(e -> model.checkAfterRepair());
     Label outcomeTitle = new Label("Outcome");
     outcomeTitle.getStyleClass().add("section-title");
     ToggleGroup outcomes = new ToggleGroup();
@@ -279,10 +286,6 @@ public final class CloseOutView {
         .addAll(
             faultsTitle,
             faultsBox,
-            checkTitle,
-            checkHint,
-            checkSummary,
-            check,
             outcomeTitle,
             outcomeRow,
             notesTitle,
