@@ -166,7 +166,14 @@ public final class BenchWindow {
     bar.setAlignment(Pos.CENTER_LEFT);
     Label name = new Label("Stagewise");
     name.getStyleClass().add("app-name");
-    bar.getChildren().add(name);
+    name.setMinWidth(Region.USE_PREF_SIZE);
+    // The steps wrap onto a second row where one does not hold them (larger text at 1024 wide)
+    // rather than losing their words.
+    javafx.scene.layout.FlowPane steps = new javafx.scene.layout.FlowPane(8, 6);
+    steps.setAlignment(Pos.CENTER_LEFT);
+    steps.setPrefWrapLength(600);
+    HBox.setHgrow(steps, Priority.ALWAYS);
+    bar.getChildren().addAll(name, steps);
     ToggleGroup group = new ToggleGroup();
     for (Step step : Step.values()) {
       ToggleButton button = new ToggleButton((step.ordinal() + 1) + "  " + step.title());
@@ -197,8 +204,9 @@ public final class BenchWindow {
         button.disableProperty().unbind();
         button.disableProperty().bind(bench.hasStage().not());
       }
+      button.setMinWidth(Region.USE_PREF_SIZE);
       stepButtons.put(step, button);
-      bar.getChildren().add(button);
+      steps.getChildren().add(button);
     }
     return bar;
   }

@@ -15,6 +15,7 @@ import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import javafx.util.Duration;
@@ -98,6 +99,7 @@ public final class StartView {
     search.setId("serial-search");
     search.getStyleClass().add("primary");
     search.setMinHeight(60);
+    search.setMinWidth(Region.USE_PREF_SIZE);
     search.setOnAction(e -> model.search());
     keypad = new Keypad(model.serialProperty(), "serial");
     keypad.follow(serialField);
