@@ -11,7 +11,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -57,30 +56,13 @@ final class OhmsChecks {
 
   private final Stage stage;
   private final PowerOff healthy;
-  private final List<String> candidates;
-  private final List<String[]> adjacentPins;
+  private final CheckPairs checkPairs;
   private final Map<String, PowerOff> networks = new HashMap<>();
 
   OhmsChecks(Stage stage) {
     this.stage = stage;
     this.healthy = PowerOff.of(stage);
-    Set<String> points = new LinkedHashSet<>(stage.nets());
-    points.addAll(stage.pinNets().keySet());
-    this.candidates = List.copyOf(points);
-    List<String[]> adjacent = new ArrayList<>();
-    Map<String, String> pinNets = stage.pinNets();
-    for (String pkg : stage.packages()) {
-      for (int[] pair : stage.packageType(pkg).orElseThrow().adjacentPairs()) {
-        String a = pkg + "." + pair[0];
-        String b = pkg + "." + pair[1];
-        if (pinNets.containsKey(a)
-            && pinNets.containsKey(b)
-            && !pinNets.get(a).equals(pinNets.get(b))) {
-          adjacent.add(new String[] {a, b});
-        }
-      }
-    }
-    this.adjacentPins = List.copyOf(adjacent);
+    this.checkPairs = new CheckPairs(stage, healthy);
   }
 
   /** Returns whether a point names a net, package pin or part lead of the stage. */
@@ -167,45 +149,13 @@ final class OhmsChecks {
     return z >= 0 ? (1 + erf) / 2 : (1 - erf) / 2;
   }
 
-  /**
-   * Returns the pairs of points an ohms check may be taken between, less those already read: every
-   * two nets once, every used pin against its own net (which checks its joint), and every two
-   * adjacent used pins on different nets (one check across two neighbouring legs tests both joints
-   * and the gap between them: OL if either joint is open, about 0 Ω if they are bridged).
-   */
+  /** Returns the pairs of points an ohms check may be taken between ({@link CheckPairs}). */
   List<String[]> pairs(List<Reading> taken) {
-    Set<String> done = new HashSet<>();
+    List<String[]> done = new ArrayList<>();
     for (Reading r : taken) {
-      done.add(pairKey(onFaulted(r.at()), onFaulted(r.to())));
+      done.add(new String[] {onFaulted(r.at()), onFaulted(r.to())});
     }
-    List<String[]> pairs = new ArrayList<>();
-    Set<String> seenNets = new HashSet<>();
-    for (int i = 0; i < candidates.size(); i++) {
-      for (int j = i + 1; j < candidates.size(); j++) {
-        String a = candidates.get(i);
-        String b = candidates.get(j);
-        String netA = healthy.node(a).orElseThrow();
-        String netB = healthy.node(b).orElseThrow();
-        boolean pinCheck = !a.equals(netA) || !b.equals(netB);
-        if (netA.equals(netB) && !pinCheck) {
-          continue;
-        }
-        // Between two nets one pair is enough; a pin against its own net checks its joint.
-        if (pinCheck && !netA.equals(netB)) {
-          continue;
-        }
-        if (done.contains(pairKey(a, b)) || !seenNets.add(pairKey(a, b))) {
-          continue;
-        }
-        pairs.add(new String[] {a, b});
-      }
-    }
-    for (String[] pins : adjacentPins) {
-      if (!done.contains(pairKey(pins[0], pins[1]))) {
-        pairs.add(pins);
-      }
-    }
-    return pairs;
+    return checkPairs.pairs(done);
   }
 
   /**
@@ -251,7 +201,7 @@ final class OhmsChecks {
     for (ProbeAdvice a : advice) {
       String netA = healthy.node(a.at()).orElseThrow();
       String netB = healthy.node(a.to()).orElseThrow();
-      String key = netA.equals(netB) ? pairKey(a.at(), a.to()) : pairKey(netA, netB);
+      String key = netA.equals(netB) ? CheckPairs.key(a.at(), a.to()) : CheckPairs.key(netA, netB);
       if (nets.add(key) && listed.size() < LISTED) {
         listed.add(a);
       }
@@ -291,10 +241,6 @@ final class OhmsChecks {
                 + " power off, so it comes first. "
                 + best.why(),
             best.to()));
-  }
-
-  private static String pairKey(String a, String b) {
-    return a.compareTo(b) < 0 ? a + "|" + b : b + "|" + a;
   }
 
   private double gain(OhmsPrediction[] predicted, double[] prior, double entropy, MeterSpec meter) {
