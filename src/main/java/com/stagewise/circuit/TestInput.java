@@ -58,6 +58,16 @@ public record TestInput(String net, double dc, double ac, double hz, AcMeasure m
     return new TestInput(net, volts, ac, hz, measure);
   }
 
+  /**
+   * Returns a copy with the AC signal at another frequency (the same amplitude and measure): the
+   * generator turned to {@code newHz}.
+   *
+   * @throws InvalidInputException if {@code newHz} is not above 0 while the input has AC
+   */
+  public TestInput withHz(double newHz) {
+    return new TestInput(net, dc, ac, newHz, measure);
+  }
+
   /** Returns a copy with the AC amplitude stated in another measure (the same signal). */
   public TestInput withMeasure(AcMeasure other) {
     return new TestInput(net, dc, other.fromPeak(peakAc()), hz, other);

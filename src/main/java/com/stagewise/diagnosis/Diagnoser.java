@@ -407,8 +407,12 @@ public final class Diagnoser {
       }
       boolean consistent = bound.stream().allMatch(r -> Evidence.score(s.best, r) <= 3);
       Map<String, Double> predicted = new LinkedHashMap<>();
+      Map<String, Double> predictedAc = new LinkedHashMap<>();
       for (int i = 0; i < points.size; i++) {
         predicted.put(points.names.get(i), s.best.dcMean()[i]);
+        if (s.best.acMean() != null) {
+          predictedAc.put(points.names.get(i), s.best.acMean()[i]);
+        }
       }
       suspects.add(
           new Suspect(
@@ -419,7 +423,8 @@ public final class Diagnoser {
               explainer.why(s.hypothesis.fault, s.best, s.estimate(), bound)
                   + Explainer.sameReadings(same),
               s.estimate(),
-              predicted));
+              predicted,
+              predictedAc));
     }
     return suspects;
   }

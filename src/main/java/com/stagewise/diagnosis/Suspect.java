@@ -15,6 +15,8 @@ import java.util.OptionalDouble;
  * @param estimatedValue for a drifted part, its estimated value (ohms or farads); for a low rail,
  *     its estimated volts; else empty
  * @param predicted the volts this fault predicts at every test point (its best-fitting scenario)
+ * @param predictedAc the AC amplitude (peak volts) this fault predicts at every test point at the
+ *     stage's test frequency, in the same scenario; empty when the stage has no AC input
  */
 public record Suspect(
     String fault,
@@ -23,11 +25,25 @@ public record Suspect(
     List<String> group,
     String why,
     OptionalDouble estimatedValue,
-    Map<String, Double> predicted) {
+    Map<String, Double> predicted,
+    Map<String, Double> predictedAc) {
 
   /** Copies the collections. */
   public Suspect {
     group = List.copyOf(group);
     predicted = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(predicted));
+    predictedAc = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(predictedAc));
+  }
+
+  /** Returns a suspect with no AC predictions (a stage without an AC input). */
+  public Suspect(
+      String fault,
+      double probability,
+      boolean consistent,
+      List<String> group,
+      String why,
+      OptionalDouble estimatedValue,
+      Map<String, Double> predicted) {
+    this(fault, probability, consistent, group, why, estimatedValue, predicted, Map.of());
   }
 }

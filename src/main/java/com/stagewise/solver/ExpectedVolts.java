@@ -116,7 +116,8 @@ public record ExpectedVolts(
   /** Volts added on each side for device offsets (the classic-bipolar offset range, DESIGN.md). */
   static final double OFFSET_MARGIN = 0.005;
 
-  private static List<Stage> corners(Stage stage) {
+  /** Returns the stage with each part and rail at either end of its tolerance, one at a time. */
+  static List<Stage> corners(Stage stage) {
     List<Stage> corners = new ArrayList<>();
     for (Part part : stage.parts()) {
       if (part.tolerance() > 0 && part.value() > 0) {

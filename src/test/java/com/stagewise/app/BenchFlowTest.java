@@ -8,7 +8,6 @@ import com.stagewise.history.SearchQuery;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.ui.Step;
-import com.stagewise.ui.readings.ReadingsViewModel;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -282,7 +281,7 @@ class BenchFlowTest {
         robot
             .lookup("#readings-list .list-cell")
             .match(
-                (javafx.scene.control.ListCell<ReadingsViewModel.ReadingRow> cell) ->
+                (javafx.scene.control.ListCell<com.stagewise.ui.readings.ReadingRow> cell) ->
                     cell.getItem() != null && cell.getItem().reading().value() == value)
             .<javafx.scene.control.ListCell<?>>query());
     settle();

@@ -462,7 +462,7 @@ class PowerOffFlowTest {
   /**
    * Collects every visible text its control shows shortened (its own text and the drawn differ).
    */
-  private static void cutTexts(Node node, List<String> cut) {
+  static void cutTexts(Node node, List<String> cut) {
     if (!node.isVisible()) {
       return;
     }

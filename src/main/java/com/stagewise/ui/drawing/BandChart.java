@@ -1,6 +1,7 @@
 package com.stagewise.ui.drawing;
 
 import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.value.Engineering;
 import java.util.ArrayList;
 import java.util.List;
@@ -19,7 +20,8 @@ import javafx.scene.text.Text;
  * the healthy band, a large marker for the measured value and small markers where the top suspects
  * would put the reading. Values outside the band stretch the axis; a band of zero width shows as a
  * thin bar; a missing (NaN) reading shows "no reading". Ohms go on a logarithmic axis with a zone
- * for OL (+∞, the meter's over-range) at its right end.
+ * for OL (+∞, the meter's over-range) at its right end. AC amplitudes go on their own axis from 0
+ * V, each figure stated in the reading's measure ("0.332 V RMS").
  */
 public final class BandChart extends Region {
   private static final double SIDE = 22;
@@ -37,6 +39,8 @@ public final class BandChart extends Region {
   private List<Marker> markers = List.of();
   private int labelRowCount = 1;
   private boolean ohms;
+  // The measure of an AC chart in words ("RMS"); empty for volts DC and ohms.
+  private String acMeasure = "";
 
   /**
    * Where a suspect would put the reading: its label (e.g. "R2 open") and the volts (or ohms, +∞
@@ -68,7 +72,31 @@ public final class BandChart extends Region {
       double measured,
       List<Marker> markers) {
     ohms = false;
+    acMeasure = "";
     fill(testPoint, healthyLow, healthyHigh, measured, markers);
+  }
+
+  /**
+   * Shows the chart for an AC reading: the healthy band, the reading and the suspects' markers as
+   * amplitudes in one measure (volts, never below 0), on an axis that never reaches below 0 V.
+   *
+   * @param measureWords the measure in words, e.g. "RMS", "peak", "peak-to-peak"
+   */
+  public void showAc(
+      String testPoint,
+      double healthyLow,
+      double healthyHigh,
+      double measured,
+      List<Marker> markers,
+      String measureWords) {
+    ohms = false;
+    acMeasure = Objects.requireNonNull(measureWords, "measureWords");
+    fill(testPoint, healthyLow, healthyHigh, measured, markers);
+  }
+
+  /** Returns the measure of an AC chart in words ("RMS"); empty for DC volts and ohms. */
+  public String acMeasure() {
+    return acMeasure;
   }
 
   /**
@@ -79,6 +107,7 @@ public final class BandChart extends Region {
   public void showOhms(
       String pair, double healthyLow, double healthyHigh, double measured, List<Marker> markers) {
     ohms = true;
+    acMeasure = "";
     fill(pair, healthyLow, healthyHigh, measured, markers);
   }
 
@@ -131,7 +160,9 @@ public final class BandChart extends Region {
     ChartAxis scale =
         ohms
             ? OhmsScale.fit(healthyLow, healthyHigh, measured, marks)
-            : BandScale.fit(healthyLow, healthyHigh, measured, marks);
+            : acMeasure.isEmpty()
+                ? BandScale.fit(healthyLow, healthyHigh, measured, marks)
+                : BandScale.fitAmplitude(healthyLow, healthyHigh, measured, marks);
     Rectangle paper = new Rectangle(width, computePrefHeight(width), Palette.PAPER);
     getChildren().add(paper);
 
@@ -198,7 +229,7 @@ public final class BandChart extends Region {
 
   private String bandText() {
     if (!ohms) {
-      return Engineering.band(healthyLow, healthyHigh);
+      return Engineering.band(healthyLow, healthyHigh) + measureSuffix();
     }
     if (healthyLow == Double.POSITIVE_INFINITY) {
       return "OL";
@@ -206,6 +237,23 @@ public final class BandChart extends Region {
     String low = ohmsText(healthyLow);
     String high = ohmsText(healthyHigh);
     return low.equals(high) ? low : low + " to " + high;
+  }
+
+  private String measureSuffix() {
+    return acMeasure.isEmpty() ? "" : " " + acMeasure;
+  }
+
+  /**
+   * Returns whether an AC amplitude fits a healthy range: within the range widened at each end by
+   * the reading's own uncertainty as the diagnosis takes it for an AC reading without one, ±(3 % of
+   * reading + 1 mV) ({@link ReadingSet#SCOPE_PERCENT}). False when the range is unknown (NaN).
+   */
+  public static boolean acInside(double low, double high, double measured) {
+    if (!Double.isFinite(low) || !Double.isFinite(high) || !Double.isFinite(measured)) {
+      return false;
+    }
+    double u = ReadingSet.SCOPE_PERCENT / 100 * Math.abs(measured) + ReadingSet.SCOPE_FLOOR_VOLTS;
+    return measured >= Math.min(low, high) - u && measured <= Math.max(low, high) + u;
   }
 
   /** Returns ohms as the chart prints them: "46.8 kΩ", "0.4 Ω", "OL". */
@@ -281,9 +329,11 @@ public final class BandChart extends Region {
     boolean inside =
         ohms
             ? ohmsInside(healthyLow, healthyHigh, measured)
-            : Double.isFinite(healthyLow)
-                && measured >= healthyLow - 1e-12
-                && measured <= healthyHigh + 1e-12;
+            : !acMeasure.isEmpty()
+                ? acInside(healthyLow, healthyHigh, measured)
+                : Double.isFinite(healthyLow)
+                    && measured >= healthyLow - 1e-12
+                    && measured <= healthyHigh + 1e-12;
     Color mark = inside ? Palette.BAND_EDGE : Palette.OUTSIDE;
     Line needle = new Line(x, AXIS_Y - BAND_HALF - 4, x, AXIS_Y + BAND_HALF + 2);
     needle.setStroke(mark);
@@ -300,7 +350,9 @@ public final class BandChart extends Region {
     head.setId("measured-marker");
     Text value =
         text(
-            (ohms ? ohmsText(measured) : Engineering.reading(measured, MeterSpec.DEFAULT))
+            (ohms
+                    ? ohmsText(measured)
+                    : Engineering.reading(measured, MeterSpec.DEFAULT) + measureSuffix())
                 + (inside ? "" : "  outside"),
             Palette.bold(16),
             Palette.MEASURED);

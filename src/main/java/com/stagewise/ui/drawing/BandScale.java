@@ -50,6 +50,16 @@ record BandScale(double min, double max) implements ChartAxis {
     return new BandScale(lo - 0.12 * span, hi + 0.12 * span);
   }
 
+  /**
+   * Returns an axis for amplitudes: as {@link #fit}, but never reaching below 0 V (an amplitude is
+   * never negative, so the left end stops at 0 V where the margin would pass it).
+   */
+  static BandScale fitAmplitude(
+      double healthyLow, double healthyHigh, double measured, List<Double> markers) {
+    BandScale fitted = fit(healthyLow, healthyHigh, measured, markers);
+    return fitted.min() >= 0 ? fitted : new BandScale(0, Math.max(fitted.max(), 1e-9));
+  }
+
   /** Returns the position of {@code volts} on a line of {@code length} pixels starting at 0. */
   @Override
   public double position(double volts, double length) {

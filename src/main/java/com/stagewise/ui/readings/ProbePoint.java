@@ -63,6 +63,17 @@ public record ProbePoint(
     return new ProbePoint(at, kind, hz, packageRef, pin, title, reason, measure);
   }
 
+  /** Returns a copy whose AC reading is stated in another measure. */
+  public ProbePoint withMeasure(AcMeasure other) {
+    return new ProbePoint(at, kind, hz, packageRef, pin, title, why, other);
+  }
+
+  /** Returns the same point read another way: DC, or AC at {@code acHz}. */
+  public ProbePoint readAs(Reading.Kind newKind, double acHz) {
+    return new ProbePoint(
+        at, newKind, newKind == Reading.Kind.AC ? acHz : 0, packageRef, pin, title, why, measure);
+  }
+
   /**
    * Returns the short call shown large, e.g. "Probe U1 pin 8" or "Probe net OUT (AC volts RMS at 1
    * kHz)".

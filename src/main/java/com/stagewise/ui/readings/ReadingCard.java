@@ -12,9 +12,10 @@ import javafx.scene.layout.VBox;
 
 /**
  * One reading's card: its point (or pair of points), its value, and its band chart — volts on a
- * linear axis, ohms on a logarithmic one. A struck reading shows struck out, without its chart.
+ * linear axis, AC amplitudes on their own axis from 0 V in the reading's measure, ohms on a
+ * logarithmic one. A struck reading shows struck out, without its chart.
  */
-final class ReadingCard extends ListCell<ReadingsViewModel.ReadingRow> {
+final class ReadingCard extends ListCell<ReadingRow> {
   private final BandChart chart = new BandChart();
   private final Label title = new Label();
   private final VBox box = new VBox(2, title, chart);
@@ -38,7 +39,7 @@ final class ReadingCard extends ListCell<ReadingsViewModel.ReadingRow> {
   }
 
   @Override
-  protected void updateItem(ReadingsViewModel.ReadingRow row, boolean empty) {
+  protected void updateItem(ReadingRow row, boolean empty) {
     super.updateItem(row, empty);
     if (empty || row == null) {
       setGraphic(null);
@@ -80,6 +81,14 @@ final class ReadingCard extends ListCell<ReadingsViewModel.ReadingRow> {
           row.healthyHigh(),
           r.value(),
           markers);
+    } else if (r.kind() == Reading.Kind.AC) {
+      chart.showAc(
+          Words.pin(r.at()) + ", AC",
+          row.healthyLow(),
+          row.healthyHigh(),
+          r.value(),
+          markers,
+          r.measure().orElse(AcMeasure.PEAK).words());
     } else {
       chart.show(Words.pin(r.at()), row.healthyLow(), row.healthyHigh(), r.value(), markers);
     }

@@ -1,16 +1,17 @@
 package com.stagewise.ui.readings;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Fault;
 import com.stagewise.diagnosis.PowerOffFaults;
 import com.stagewise.diagnosis.Suspect;
+import com.stagewise.solver.ExpectedAc;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.solver.OhmsPrediction;
 import com.stagewise.solver.PowerOff;
 import com.stagewise.ui.Bench;
-import com.stagewise.ui.readings.ReadingsViewModel.ReadingRow;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -23,9 +24,10 @@ import java.util.Set;
 
 /**
  * The cards of the readings screen: each reading with its healthy range and where the top suspects
- * put it. Volts come from the expected voltages and the suspects' predictions; ohms (power off)
- * from the power-off model, healthy and under each suspect's fault (the same predictions the
- * diagnosis scores them with).
+ * put it. Volts come from the expected voltages and the suspects' predictions; AC amplitudes from
+ * the expected AC and the suspects' AC predictions, in the reading's measure; ohms (power off) from
+ * the power-off model, healthy and under each suspect's fault (the same predictions the diagnosis
+ * scores them with).
  */
 final class ReadingCards {
   private final Map<String, OhmsPrediction> ohms = new HashMap<>();
@@ -33,7 +35,8 @@ final class ReadingCards {
   private PowerOff healthy;
 
   /** Returns the rows of the bench's readings: standing ones newest first, then struck ones. */
-  List<ReadingRow> rows(Stage stage, Bench bench, ExpectedVolts volts, List<Suspect> top) {
+  List<ReadingRow> rows(
+      Stage stage, Bench bench, ExpectedVolts volts, ExpectedAc signal, List<Suspect> top) {
     List<ReadingRow> list = new ArrayList<>();
     for (Reading r : bench.readings()) {
       double low = Double.NaN;
@@ -49,6 +52,19 @@ final class ReadingCards {
           OhmsPrediction p = suspectOhms(stage, s, r);
           if (p != null && !s.fault().equals("healthy")) {
             predictions.put(Words.fault(s.fault()), p.nominal());
+          }
+        }
+      } else if (r.kind() == Reading.Kind.AC) {
+        // The band and the suspects' markers in the measure the reading is stated in.
+        AcMeasure measure = stage == null ? r.measure().orElse(AcMeasure.PEAK) : r.measureIn(stage);
+        if (signal != null && signal.solved() && signal.hz() == r.hz()) {
+          low = measure.fromPeak(signal.low(r.at()));
+          high = measure.fromPeak(signal.high(r.at()));
+        }
+        for (Suspect s : top) {
+          Double v = s.predictedAc().get(r.at());
+          if (v != null && !s.fault().equals("healthy")) {
+            predictions.put(Words.fault(s.fault()), measure.fromPeak(v));
           }
         }
       } else {

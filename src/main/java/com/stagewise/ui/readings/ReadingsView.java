@@ -54,10 +54,8 @@ public final class ReadingsView {
     probe.setMinWidth(330);
     VBox pad = new VBox(10);
     pad.getStyleClass().add("panel");
-    Label padTitle = new Label("What does the meter show?");
-    padTitle.getStyleClass().add("section-title");
     ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
-    pad.getChildren().addAll(padTitle, correctingBar(), valuePad);
+    pad.getChildren().addAll(AcViews.padBar(model), correctingBar(), valuePad);
     pad.setMinWidth(342);
     pad.setPrefWidth(396);
     pad.setMaxWidth(396);
@@ -205,7 +203,7 @@ public final class ReadingsView {
             Bindings.when(model.powerOff().activeProperty())
                 .then("Or pick a point from the list …")
                 .otherwise("Or probe another point …"));
-    VBox powered = new VBox(8, heading, call, title, why);
+    VBox powered = new VBox(8, heading, call, title, why, AcViews.signalRow(model));
     PowerOffViews.showWhen(powered, model.powerOff().activeProperty().not());
     box.getChildren()
         .addAll(
@@ -309,7 +307,7 @@ public final class ReadingsView {
     chain.visibleProperty().bind(model.chainProperty().isNotEmpty());
     chain.managedProperty().bind(chain.visibleProperty());
     suspectsBox.setId("readings-suspects");
-    ListView<ReadingsViewModel.ReadingRow> list = new ListView<>(model.rows());
+    ListView<ReadingRow> list = new ListView<>(model.rows());
     list.setId("readings-list");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(v -> new ReadingCard());
@@ -317,8 +315,7 @@ public final class ReadingsView {
     model
         .rows()
         .addListener(
-            (ListChangeListener<ReadingsViewModel.ReadingRow>)
-                c -> list.getSelectionModel().clearSelection());
+            (ListChangeListener<ReadingRow>) c -> list.getSelectionModel().clearSelection());
     Label empty =
         new Label(
             "No readings yet. Put the probe where the left side says, type what the meter shows"
@@ -339,7 +336,7 @@ public final class ReadingsView {
   }
 
   /** What can be done to the reading whose card was tapped: correct it or strike it out. */
-  private Node cardActions(ListView<ReadingsViewModel.ReadingRow> list) {
+  private Node cardActions(ListView<ReadingRow> list) {
     Label what = new Label();
     what.setId("reading-chosen");
     what.setWrapText(true);

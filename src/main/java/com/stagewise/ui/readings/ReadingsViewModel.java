@@ -1,6 +1,7 @@
 package com.stagewise.ui.readings;
 
 import com.stagewise.casework.Casework;
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
@@ -11,14 +12,12 @@ import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.diagnosis.ProbeAdvice;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.history.record.BoardModel;
+import com.stagewise.solver.ExpectedAc;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.Step;
-import com.stagewise.ui.drawing.BandChart;
 import com.stagewise.ui.widget.ValuePadModel;
-import java.time.Instant;
 import java.util.List;
-import java.util.Map;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleBooleanProperty;
@@ -39,7 +38,6 @@ public final class ReadingsViewModel {
 
   private final Bench bench;
   private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
-  private final ObjectProperty<ProbePoint> probe = new SimpleObjectProperty<>();
   private final ObservableList<ProbePoint> testPoints = FXCollections.observableArrayList();
   private final ObservableList<ReadingRow> rows = FXCollections.observableArrayList();
   private final ObservableList<Suspect> topSuspects = FXCollections.observableArrayList();
@@ -50,11 +48,15 @@ public final class ReadingsViewModel {
   private final Revisions revisions;
   private final PowerOffMode powerOff = new PowerOffMode();
   private final ReadingCards cards = new ReadingCards();
+  private final AcChoice ac = new AcChoice();
+  private final PoweredProbe probe = new PoweredProbe(ac, powerOff);
+  private final ObjectProperty<ExpectedAc> expectedAc = new SimpleObjectProperty<>();
+  // True while the stage is replaced by itself at another test frequency: choices stay.
+  private boolean retuning;
   // What was typed in the other mode: switching modes loses nothing.
   private String otherModeText = "";
   private Diagnoser diagnoser;
   private Stage diagnoserStage;
-  private boolean probeChosenByHand;
 
   /** Creates the readings screen's model on a bench. */
   public ReadingsViewModel(Bench bench) {
@@ -64,39 +66,6 @@ public final class ReadingsViewModel {
     bench.stageProperty().addListener((o, was, now) -> stageChanged(now));
     if (bench.stageProperty().get() != null) {
       stageChanged(bench.stageProperty().get());
-    }
-  }
-
-  /**
-   * One reading as listed, with what a healthy stage and the top suspects would read there.
-   *
-   * @param reading the reading
-   * @param title the test point in words
-   * @param healthyLow the low end of the healthy range (NaN when unknown)
-   * @param healthyHigh the high end of the healthy range (NaN when unknown)
-   * @param predictions where the top suspects put this reading: label to volts
-   * @param struckAt when the reading was struck out (null while it stands, and while its strike is
-   *     being stored: see {@link #struck()})
-   * @param struck whether the reading is struck out (left out of the diagnosis)
-   */
-  public record ReadingRow(
-      Reading reading,
-      String title,
-      double healthyLow,
-      double healthyHigh,
-      Map<String, Double> predictions,
-      Instant struckAt,
-      boolean struck) {
-    /**
-     * Returns whether the reading lies in the healthy range (false when the range is unknown); an
-     * ohms reading within the meter's uncertainty and the test leads of it ({@link
-     * BandChart#ohmsInside}).
-     */
-    public boolean healthy() {
-      if (reading.kind() == Reading.Kind.OHMS) {
-        return BandChart.ohmsInside(healthyLow, healthyHigh, reading.value());
-      }
-      return reading.value() >= healthyLow && reading.value() <= healthyHigh;
     }
   }
 
@@ -142,8 +111,54 @@ public final class ReadingsViewModel {
     setPowerOff(true);
   }
 
+  /** Returns what the pad takes while powered: DC or AC volts, the measure, the test frequency. */
+  public AcChoice ac() {
+    return ac;
+  }
+
+  /** Returns what a healthy stage reads in AC at each point (null until worked out, or none). */
+  public ObjectProperty<ExpectedAc> expectedAcProperty() {
+    return expectedAc;
+  }
+
+  /** Switches the pad between DC and AC volts; the point to probe stays, read the other way. */
+  public void setAc(boolean on) {
+    probe.setAc(on);
+  }
+
+  /** Chooses the measure AC readings are typed in (RMS, peak, peak-to-peak). */
+  public void setMeasure(AcMeasure measure) {
+    probe.setMeasure(measure);
+  }
+
+  /**
+   * Takes the test frequency typed: the stage is the same with its test signal at that frequency,
+   * so the expected AC, the diagnosis and the next probes follow it. What was typed on the pad and
+   * the point chosen stay.
+   */
+  public void setTestFrequency() {
+    Stage stage = bench.stageProperty().get();
+    ac.retuned(stage, bench.readings()).ifPresent(this::retune);
+  }
+
+  private void retune(Stage retuned) {
+    String typed = pad.textProperty().get();
+    ProbePoint chosen = probe.chosenByHand() ? probe.property().get() : null;
+    retuning = true;
+    try {
+      bench.stageProperty().set(retuned);
+    } finally {
+      retuning = false;
+    }
+    pad.textProperty().set(typed);
+    if (chosen != null) {
+      probe.choose(chosen.readAs(chosen.kind(), ac.hzProperty().get()));
+    }
+    AcChoice.keepWithCase(bench, retuned);
+  }
+
   public ObjectProperty<ProbePoint> probeProperty() {
-    return probe;
+    return probe.property();
   }
 
   public ObservableList<ProbePoint> testPoints() {
@@ -215,8 +230,10 @@ public final class ReadingsViewModel {
     ProbePoint.of(stage, r.at(), r.kind(), r.hz())
         .ifPresent(
             p -> {
-              probeChosenByHand = true;
-              probe.set(p.because("Correcting the reading taken here."));
+              if (r.kind() == Reading.Kind.AC) {
+                r.measure().ifPresent(ac::choose);
+              }
+              probe.choose(p.because("Correcting the reading taken here."));
             });
     pad.textProperty()
         .set(java.math.BigDecimal.valueOf(r.value()).stripTrailingZeros().toPlainString());
@@ -259,12 +276,14 @@ public final class ReadingsViewModel {
   }
 
   private void stageChanged(Stage stage) {
+    ac.follow(stage, retuning);
+    expectedAc.set(null);
     pad.textProperty().set("");
     revisions.forgetUndo();
     revisions.cancelCorrection();
     diagnoser = null;
     diagnoserStage = null;
-    probeChosenByHand = false;
+    probe.release();
     powerOff.reset();
     setPowerOff(false);
     otherModeText = "";
@@ -274,11 +293,11 @@ public final class ReadingsViewModel {
     expected.set(null);
     if (stage == null) {
       testPoints.clear();
-      probe.set(null);
+      probe.show(null);
       return;
     }
     testPoints.setAll(ProbePoint.allForOhms(stage));
-    probe.set(ProbePoint.next(stage, bench.diagnosisProperty().get(), bench.readings()));
+    probe.show(ProbePoint.next(stage, bench.diagnosisProperty().get(), bench.readings()));
     BoardModel boardModel = bench.boardModelProperty().get();
     Casework casework = bench.casework();
     boolean mains = bench.mainsPoweredProperty().get();
@@ -289,16 +308,18 @@ public final class ReadingsViewModel {
             "Working out the expected voltages and the fault list",
             () -> {
               ExpectedVolts volts = ExpectedVolts.of(stage);
+              ExpectedAc signal = ExpectedAc.of(stage);
               Diagnoser d = casework.diagnoser(stage, boardModel).mainsPowered(mains);
               Diagnosis diagnosis =
                   taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
-              return new Prepared(stage, volts, d, diagnosis);
+              return new Prepared(stage, volts, signal, d, diagnosis);
             },
             prepared -> {
               if (prepared.stage() != bench.stageProperty().get()) {
                 return;
               }
               expected.set(prepared.volts());
+              expectedAc.set(prepared.signal());
               diagnoser = prepared.diagnoser();
               diagnoserStage = prepared.stage();
               if (prepared.diagnosis() != null) {
@@ -316,7 +337,11 @@ public final class ReadingsViewModel {
   }
 
   private record Prepared(
-      Stage stage, ExpectedVolts volts, Diagnoser diagnoser, Diagnosis diagnosis) {}
+      Stage stage,
+      ExpectedVolts volts,
+      ExpectedAc signal,
+      Diagnoser diagnoser,
+      Diagnosis diagnosis) {}
 
   /**
    * Makes the technician's choice the point to probe (a pin tapped on the drawing, or from the
@@ -334,12 +359,9 @@ public final class ReadingsViewModel {
     if (at.equals(stage.ground())) {
       return; // ground is the meter's reference for volts
     }
-    ProbePoint.of(stage, at, Reading.Kind.DC, 0)
-        .ifPresent(
-            p -> {
-              probeChosenByHand = true;
-              probe.set(p.because("Chosen by you."));
-            });
+    Reading.Kind kind = probe.kindForPicks();
+    ProbePoint.of(stage, at, kind, kind == Reading.Kind.AC ? ac.hzProperty().get() : 0)
+        .ifPresent(p -> probe.choose(p.because("Chosen by you.")));
   }
 
   /** Returns to the suggested probe after a hand-picked one. */
@@ -348,10 +370,10 @@ public final class ReadingsViewModel {
       powerOff.followSuggestion(bench.stageProperty().get());
       return;
     }
-    probeChosenByHand = false;
+    probe.release();
     Stage stage = bench.stageProperty().get();
     if (stage != null) {
-      probe.set(ProbePoint.next(stage, bench.diagnosisProperty().get(), bench.readings()));
+      probe.show(ProbePoint.next(stage, bench.diagnosisProperty().get(), bench.readings()));
     }
   }
 
@@ -361,7 +383,7 @@ public final class ReadingsViewModel {
    */
   public void addReading() {
     boolean ohms = powerOff.activeProperty().get();
-    ProbePoint at = ohms ? powerOff.fromProperty().get() : probe.get();
+    ProbePoint at = ohms ? powerOff.fromProperty().get() : probe.property().get();
     ProbePoint to = ohms ? powerOff.toProperty().get() : null;
     Double value = pad.valueProperty().get();
     Stage stage = bench.stageProperty().get();
@@ -410,7 +432,7 @@ public final class ReadingsViewModel {
     }
     String typed = pad.textProperty().get();
     pad.press(ValuePadModel.CLEAR);
-    probeChosenByHand = false;
+    probe.release();
     if (ohms) {
       powerOff.clear();
     }
@@ -449,10 +471,10 @@ public final class ReadingsViewModel {
     verdict.set(
         diagnosis == null || bench.readings().isEmpty() ? "" : ReadingsText.verdictLine(diagnosis));
     chain.set(bench.readings().isEmpty() ? "" : ReadingsText.chainLine(stage, top));
-    List<ReadingRow> list = cards.rows(stage, bench, volts, top);
+    List<ReadingRow> list = cards.rows(stage, bench, volts, expectedAc.get(), top);
     rows.setAll(list);
-    if (stage != null && !probeChosenByHand) {
-      probe.set(ProbePoint.next(stage, diagnosis, bench.readings()));
+    if (stage != null) {
+      probe.suggest(ProbePoint.next(stage, diagnosis, bench.readings()));
     }
     ProbeAdvice ohms = null;
     if (diagnosis != null && !bench.readings().isEmpty()) {

@@ -186,7 +186,7 @@ public final class SuspectsView {
       }
     }
     for (SuspectsViewModel.PointRow p : model.comparison()) {
-      if (!Double.isNaN(p.measured())) {
+      if (!Double.isNaN(p.measured()) && p.ac().isEmpty()) {
         measured.put(pins.getOrDefault(p.at(), p.at()), Words.measured(p.measured()));
       }
     }
@@ -213,7 +213,8 @@ public final class SuspectsView {
     }
     int row = 1;
     for (SuspectsViewModel.PointRow p : model.comparison()) {
-      table.add(new Label(Words.pin(p.at())), 0, row);
+      // An AC row names its measure: the figures beside it are amplitudes in that measure.
+      table.add(new Label(Words.pin(p.at()) + (p.ac().isEmpty() ? "" : ", " + p.ac())), 0, row);
       table.add(mono(Words.volts(p.healthy())), 1, row);
       Label measured = mono(Double.isNaN(p.measured()) ? "not read" : Words.measured(p.measured()));
       if (!Double.isNaN(p.measured())) {

@@ -1,5 +1,6 @@
 package com.stagewise.ui.suspects;
 
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Reading;
@@ -8,6 +9,7 @@ import com.stagewise.circuit.value.SiValue;
 import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.diagnosis.Observation;
 import com.stagewise.diagnosis.Suspect;
+import com.stagewise.solver.ExpectedAc;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.Step;
@@ -38,6 +40,7 @@ public final class SuspectsViewModel {
   private final StringProperty confirmingCheck = new SimpleStringProperty("");
   private final StringProperty findings = new SimpleStringProperty("");
   private final ObjectProperty<ExpectedVolts> expected = new SimpleObjectProperty<>();
+  private ExpectedAc expectedAc;
   private final ObjectProperty<Suspect> chosenForCloseOut = new SimpleObjectProperty<>();
 
   /** Creates the suspects screen's model on a bench. */
@@ -63,14 +66,21 @@ public final class SuspectsViewModel {
       Suspect suspect, int rank, String title, String group, String estimate) {}
 
   /**
-   * One test point compared: healthy, measured and under the chosen suspect.
+   * One test point compared: healthy, measured and under the chosen suspect; DC volts, or for an AC
+   * reading the amplitude of the test signal in the reading's measure.
    *
    * @param at the test point
    * @param healthy nominal volts of a healthy stage (NaN when unknown)
    * @param measured the reading (NaN when not read)
    * @param predicted the volts under the chosen suspect (NaN when unknown)
+   * @param ac for an AC row, its measure and frequency in words ("AC RMS at 1 kHz"); empty for DC
    */
-  public record PointRow(String at, double healthy, double measured, double predicted) {}
+  public record PointRow(String at, double healthy, double measured, double predicted, String ac) {
+    /** Returns a DC row. */
+    public PointRow(String at, double healthy, double measured, double predicted) {
+      this(at, healthy, measured, predicted, "");
+    }
+  }
 
   public ObservableList<SuspectRow> suspects() {
     return suspects;
@@ -112,6 +122,7 @@ public final class SuspectsViewModel {
 
   private void solve(Stage stage) {
     expected.set(null);
+    expectedAc = null;
     if (stage == null) {
       return;
     }
@@ -119,10 +130,11 @@ public final class SuspectsViewModel {
         .tasks()
         .run(
             "Working out the expected voltages",
-            () -> ExpectedVolts.of(stage),
-            volts -> {
+            () -> new Expected(ExpectedVolts.of(stage), ExpectedAc.of(stage)),
+            both -> {
               if (bench.stageProperty().get() == stage) {
-                expected.set(volts);
+                expectedAc = both.ac();
+                expected.set(both.volts());
                 compare();
               }
             },
@@ -134,6 +146,8 @@ public final class SuspectsViewModel {
                         e,
                         "Check the stage's parts on the Stage screen."));
   }
+
+  private record Expected(ExpectedVolts volts, ExpectedAc ac) {}
 
   void refresh() {
     Diagnosis d = bench.diagnosisProperty().get();
@@ -235,7 +249,31 @@ public final class SuspectsViewModel {
           row == null ? Double.NaN : row.suspect().predicted().getOrDefault(at, Double.NaN);
       rows.add(new PointRow(at, healthy, measured, predicted));
     }
+    rows.addAll(acRows(stage, row));
     comparison.setAll(rows);
+  }
+
+  /**
+   * Returns a row for each point read in AC (the last reading there in each measure): the healthy
+   * amplitude, the reading and the chosen suspect's, in the reading's measure.
+   */
+  private List<PointRow> acRows(Stage stage, SuspectRow row) {
+    java.util.Map<String, PointRow> rows = new java.util.LinkedHashMap<>();
+    for (Reading r : bench.readings()) {
+      if (r.kind() != Reading.Kind.AC) {
+        continue;
+      }
+      AcMeasure m = r.measureIn(stage);
+      ExpectedAc signal = expectedAc;
+      double healthy =
+          signal == null || signal.hz() != r.hz() ? Double.NaN : m.fromPeak(signal.at(r.at()));
+      Double peak = row == null ? null : row.suspect().predictedAc().get(r.at());
+      double predicted = peak == null ? Double.NaN : m.fromPeak(peak);
+      String how = "AC " + m.words() + " at " + Words.hertz(r.hz());
+      rows.remove(r.at() + how);
+      rows.put(r.at() + how, new PointRow(r.at(), healthy, r.value(), predicted, how));
+    }
+    return new ArrayList<>(rows.values());
   }
 
   /** Takes the chosen suspect to the close-out as the fault found. */

@@ -117,7 +117,7 @@ class PowerOffModeTest {
               assertThat(r.value()).isEqualTo(Double.POSITIVE_INFINITY);
             });
     // Its card: R2 alone across SUM–OUT, 47 kΩ ±1 % when healthy, OL read: outside.
-    ReadingsViewModel.ReadingRow card = model.rows().get(0);
+    ReadingRow card = model.rows().get(0);
     assertThat(card.reading().kind()).isEqualTo(Reading.Kind.OHMS);
     assertThat(card.title()).isEqualTo("Ohms from net SUM to net OUT, power off");
     assertThat(card.healthyLow()).isCloseTo(47_000 * 0.99, within(1e-6));
@@ -146,7 +146,7 @@ class PowerOffModeTest {
     }
     assertThat(model.pad().valueProperty().get()).isEqualTo(57_100.0);
     model.addReading();
-    ReadingsViewModel.ReadingRow card = model.rows().get(0);
+    ReadingRow card = model.rows().get(0);
     assertThat(card.healthyLow()).isCloseTo(57_000 * 0.99, within(1e-6));
     assertThat(card.healthyHigh()).isCloseTo(57_000 * 1.01, within(1e-6));
     assertThat(card.healthy()).isTrue();
@@ -172,7 +172,7 @@ class PowerOffModeTest {
     model.choose("GND");
     type("37k5");
     double closed = 110e3 * 57e3 / 167e3;
-    ReadingsViewModel.ReadingRow card = model.rows().get(0);
+    ReadingRow card = model.rows().get(0);
     assertThat(card.healthyLow()).isCloseTo(closed * 0.99, within(1e-6));
     assertThat(card.healthyHigh()).isCloseTo(closed * 1.01, within(1e-6));
     assertThat(card.healthy()).isTrue();

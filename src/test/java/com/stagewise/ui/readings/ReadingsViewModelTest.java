@@ -140,7 +140,7 @@ class ReadingsViewModelTest {
     read(-4.70);
     assertThat(railSuspected()).isTrue();
 
-    ReadingsViewModel.ReadingRow typo = model.rows().get(2);
+    ReadingRow typo = model.rows().get(2);
     assertThat(typo.reading().value()).isEqualTo(1.496);
     model.correct(typo);
     assertThat(model.probeProperty().get().at()).isEqualTo("U1.8");
@@ -184,14 +184,14 @@ class ReadingsViewModelTest {
     model.choose("U1.1");
     read(-13.47); // far from the healthy -4.7 V: the output looks stuck low
     String withIt = t.bench.diagnosisProperty().get().suspects().get(0).fault();
-    ReadingsViewModel.ReadingRow out = model.rows().get(0);
+    ReadingRow out = model.rows().get(0);
     assertThat(out.reading().at()).isEqualTo("U1.1");
 
     model.strike(out);
 
     assertThat(t.bench.readings()).extracting(Reading::at).containsExactly("U1.8", "U1.4");
     assertThat(model.rows()).hasSize(3);
-    ReadingsViewModel.ReadingRow struck = model.rows().get(2);
+    ReadingRow struck = model.rows().get(2);
     assertThat(struck.struck()).isTrue();
     assertThat(struck.struckAt()).isNotNull();
     assertThat(model.undoTextProperty().get()).startsWith("Struck out U1 pin 1");
@@ -214,7 +214,7 @@ class ReadingsViewModelTest {
     model.strike(model.rows().get(0));
     assertThat(t.bench.readings()).isEmpty();
     assertThat(t.bench.diagnosisProperty().get()).isNull();
-    assertThat(model.rows()).singleElement().matches(ReadingsViewModel.ReadingRow::struck);
+    assertThat(model.rows()).singleElement().matches(ReadingRow::struck);
     model.restore(model.rows().get(0));
     assertThat(t.bench.readings()).containsExactly(Reading.dc("U1.8", 14.96));
   }

@@ -1,0 +1,365 @@
+package com.stagewise.app;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import com.stagewise.circuit.AcMeasure;
+import com.stagewise.circuit.Reading;
+import com.stagewise.history.record.StoredReading;
+import com.stagewise.ui.Step;
+import com.stagewise.ui.readings.ReadingRow;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
+import javafx.application.Platform;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.Node;
+import javafx.scene.control.Label;
+import javafx.scene.control.Labeled;
+import javafx.scene.image.WritableImage;
+import javafx.scene.text.Text;
+import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.api.FxToolkit;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * An AC check in a real (headless) window, on the demo shop's mixing desk and its channel line
+ * driver: an inverting stage, R2/R1 = 47 kΩ/10 kΩ (1 %), fed 0.1 V peak at 1 kHz into IN.
+ *
+ * <p>Outside facts: the inverting amplifier's gain is −R2/R1 = −4.7, so a healthy output carries
+ * 0.47 V peak (any op-amp textbook); a sine's RMS value is its peak over √2 (any circuits
+ * textbook), so a meter on AC volts reads about 0.332 V there. The reading is taken in RMS, as a
+ * meter gives it, and compared with the AC expectation in RMS.
+ *
+ * <p>With {@code -Dscreenshots=true} the picture goes to src/site/screens.
+ */
+class AcFlowTest {
+  private static final String SERIAL = "NF8-22019";
+  private static final double VCC = 14.96;
+  private static final double VEE = -14.97;
+  private static final double ROOT2 = Math.sqrt(2);
+
+  @TempDir Path temp;
+
+  private Workshop workshop;
+  private BenchApp app;
+  private Stage window;
+  private final FxRobot robot = new FxRobot();
+
+  @BeforeAll
+  static void toolkit() throws Exception {
+    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
+    try {
+      Platform.startup(() -> {});
+    } catch (IllegalStateException alreadyRunning) {
+      // Another test class started the toolkit first.
+    }
+    Platform.setImplicitExit(false);
+    FxToolkit.toolkitContext().setSetupTimeoutInMillis(180_000);
+  }
+
+  @BeforeEach
+  void open() throws Exception {
+    DataFolder folder =
+        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
+    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
+    window =
+        FxToolkit.registerStage(
+            () -> {
+              Stage stage = new Stage();
+              app = BenchApp.build(workshop);
+              stage.setScene(app.scene());
+              stage.setTitle("Stagewise — bench");
+              stage.setWidth(BenchApp.WIDTH);
+              stage.setHeight(BenchApp.HEIGHT);
+              stage.show();
+              app.cautionOnFirstRun();
+              return stage;
+            });
+    settle();
+  }
+
+  @AfterEach
+  void close() throws Exception {
+    FxToolkit.cleanupStages();
+    app.close();
+    workshop.close();
+  }
+
+  @Test
+  void acRmsReading_atTheOutput_isComparedWithTheAcExpectationInRms() throws Exception {
+    robot.clickOn("#caution-ok");
+    settle();
+    for (char c : SERIAL.toCharArray()) {
+      robot.clickOn("#serial-key-" + c);
+    }
+    robot.clickOn("#serial-search");
+    settle();
+    robot.clickOn("#symptom").write("Channel 1 sounds dull and quiet");
+    robot.clickOn("#open-case");
+    settle();
+    robot.clickOn("#caution-ok");
+    settle();
+    robot.clickOn(
+        robot
+            .lookup("#stage-library .list-cell")
+            .match(
+                (javafx.scene.control.ListCell<?> cell) ->
+                    cell.getText() != null && cell.getText().startsWith("Channel line driver"))
+            .<javafx.scene.control.ListCell<?>>query());
+    settle();
+    robot.clickOn("#use-stage");
+    settle();
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
+    // The test signal and its frequency are on the screen; the pad says what it takes.
+    assertThat(text("#test-signal")).contains("IN").contains("1\u00a0kHz");
+    assertThat(selected("#pad-dc")).isTrue();
+    assertThat(visible("#pad-measure")).isFalse();
+
+    // Rails first (common practice), then the output pin tapped on the package drawing (dual-8:
+    // pin 1 is out A; DESIGN.md), read in AC on the meter's AC volts range: RMS.
+    typeValue(String.valueOf(VCC));
+    typeValue(String.valueOf(VEE));
+    robot.clickOn("#package-drawing #pin-1");
+    settle();
+    robot.clickOn("#pad-ac");
+    robot.clickOn("#measure-rms");
+    settle();
+    assertThat(text("#probe-call")).isEqualTo("Probe U1 pin 1 (AC volts RMS at 1\u00a0kHz)");
+    assertThat(text("#pad-takes")).isEqualTo("AC volts RMS at 1\u00a0kHz");
+    assertThat(selected("#pad-ac")).isTrue();
+    assertThat(selected("#measure-rms")).isTrue();
+    shoot("14-readings-ac-pad");
+    typeValue("0.332");
+
+    ReadingRow card = fx(this::acCard);
+    assertThat(card.reading().kind()).isEqualTo(Reading.Kind.AC);
+    assertThat(card.reading().measure()).contains(AcMeasure.RMS);
+    // The healthy band in RMS: 0.47 V peak × 0.99 … ÷ 0.99 (1 % resistors, one at a time), over √2.
+    assertThat(card.healthyLow()).isCloseTo(0.47 * 0.99 / ROOT2, within(1e-4));
+    assertThat(card.healthyHigh()).isCloseTo(0.47 / 0.99 / ROOT2, within(1e-4));
+    assertThat(card.healthy()).isTrue();
+    assertThat(fx(() -> labelsContaining("332.0\u00a0mV AC RMS")))
+        .anyMatch(l -> l.contains("in the healthy range"));
+    // The card's chart is an AC chart in RMS, with its band known.
+    List<String> charted = fx(this::acChartTexts);
+    assertThat(charted).contains("332.0\u00a0mV RMS");
+    assertThat(charted).anyMatch(t -> t.startsWith("healthy ") && t.endsWith(" RMS"));
+    assertThat(charted).doesNotContain("healthy band unknown");
+    shoot("14-readings-ac");
+
+    // The test frequency cannot move under an AC reading taken at 1 kHz; what was typed stays.
+    robot.clickOn("#test-frequency").write("2k");
+    robot.clickOn("#test-frequency-set");
+    settle();
+    assertThat(text("#test-frequency-problem")).contains("Strike them out");
+    assertThat(text("#test-frequency")).isEqualTo("2k");
+
+    // Stored with its measure; the suspects' table lists the AC reading in RMS.
+    String caseId = fx(() -> app.bench().openCaseProperty().get().id());
+    StoredReading stored =
+        workshop.store().cases().caseFile(caseId).orElseThrow().readings().get(2);
+    assertThat(stored.measureWord()).isEqualTo("rms");
+    assertThat(stored.hz()).isEqualTo(1000.0);
+    // The column is taller than the window now: the button is tapped as a finger would after
+    // scrolling to it.
+    fx(
+        () -> {
+          robot.lookup("#show-suspects").queryButton().fire();
+          return null;
+        });
+    settle();
+    assertThat(fx(() -> labelsContaining("U1 pin 1, AC RMS at 1\u00a0kHz"))).hasSize(1);
+  }
+
+  /** Scrolls the screen to its top, as a finger would, so that the pictures start there. */
+  private void scrollToTop() throws Exception {
+    fx(
+        () -> {
+          Node node = robot.lookup("#pad-kind").query();
+          while (node != null && !(node instanceof javafx.scene.control.ScrollPane)) {
+            node = node.getParent();
+          }
+          if (node != null) {
+            ((javafx.scene.control.ScrollPane) node).setVvalue(0);
+          }
+          return null;
+        });
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  /** Returns the row behind the card of the AC reading on the readings screen. */
+  @SuppressWarnings("unchecked")
+  private ReadingRow acCard() {
+    return robot.lookup("#readings-list .list-cell").queryAll().stream()
+        .map(n -> ((javafx.scene.control.ListCell<ReadingRow>) n).getItem())
+        .filter(r -> r != null && r.reading().kind() == Reading.Kind.AC)
+        .findFirst()
+        .orElseThrow();
+  }
+
+  /** Returns every text drawn on the band charts of AC readings' cards. */
+  private List<String> acChartTexts() {
+    List<String> texts = new ArrayList<>();
+    for (Node chart : robot.lookup("#readings-list .band-chart").queryAll()) {
+      if (chart instanceof com.stagewise.ui.drawing.BandChart band && !band.acMeasure().isEmpty()) {
+        for (Node n : band.getChildrenUnmodifiable()) {
+          if (n instanceof Text t) {
+            texts.add(t.getText());
+          }
+        }
+      }
+    }
+    return texts;
+  }
+
+  private List<String> labelsContaining(String words) {
+    return robot.lookup(".label").queryAllAs(Label.class).stream()
+        .filter(l -> l.isVisible() && l.getText() != null && l.getText().contains(words))
+        .map(Label::getText)
+        .toList();
+  }
+
+  /** Types a value on the pad's keys (a leading minus on the sign key) and adds the reading. */
+  private void typeValue(String value) throws Exception {
+    String digits = value;
+    if (value.startsWith("-")) {
+      robot.clickOn("#reading-key-sign");
+      digits = value.substring(1);
+    }
+    for (char c : digits.toCharArray()) {
+      robot.clickOn("#reading-key-" + (c == '.' ? "point" : String.valueOf(c)));
+    }
+    robot.clickOn("#reading-enter");
+    settle();
+  }
+
+  private boolean selected(String query) throws Exception {
+    return fx(
+        () -> robot.lookup(query).queryAs(javafx.scene.control.ToggleButton.class).isSelected());
+  }
+
+  private boolean visible(String query) throws Exception {
+    return fx(
+        () -> {
+          Node node = robot.lookup(query).tryQuery().orElse(null);
+          boolean shown = node != null;
+          while (node != null) {
+            shown &= node.isVisible();
+            node = node.getParent();
+          }
+          return shown;
+        });
+  }
+
+  private String text(String query) throws Exception {
+    return fx(
+        () -> {
+          Node node = robot.lookup(query).query();
+          if (node instanceof Labeled labeled) {
+            return labeled.getText();
+          }
+          if (node instanceof javafx.scene.control.TextInputControl input) {
+            return input.getText();
+          }
+          return "";
+        });
+  }
+
+  private static <T> T fx(Callable<T> work) throws Exception {
+    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
+  }
+
+  private void settle() throws Exception {
+    WaitForAsyncUtils.waitFor(
+        90,
+        TimeUnit.SECONDS,
+        () -> {
+          WaitForAsyncUtils.waitForFxEvents();
+          return fx(() -> app.idle());
+        });
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  /**
+   * Shows the readings screen at 1280×800 and 1024×600, fails when a text of its AC parts or of a
+   * reading's card is cut short (drawn with an ellipsis), and saves a picture at each size.
+   */
+  private void shoot(String name) throws Exception {
+    scrollToTop();
+    for (int[] size : new int[][] {{1280, 800}, {1024, 600}}) {
+      fx(
+          () -> {
+            window.setWidth(size[0]);
+            window.setHeight(size[1]);
+            return null;
+          });
+      WaitForAsyncUtils.waitFor(
+          30,
+          TimeUnit.SECONDS,
+          () ->
+              fx(
+                  () ->
+                      window.getScene().getWidth() == size[0]
+                          && window.getScene().getHeight() == size[1]));
+      WaitForAsyncUtils.waitForFxEvents();
+      fx(
+          () -> {
+            window.getScene().getRoot().applyCss();
+            window.getScene().getRoot().layout();
+            return null;
+          });
+      WaitForAsyncUtils.waitForFxEvents();
+      String where = size[0] + "x" + size[1];
+      boolean site = Boolean.getBoolean("screenshots") && size[0] == 1280;
+      Path file =
+          site
+              ? Path.of("src", "site", "screens", name + ".png")
+              : Path.of("target", "screens", where, name + ".png");
+      WritableImage image = fx(() -> window.getScene().snapshot(null));
+      BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
+      Files.createDirectories(file.getParent());
+      ImageIO.write(picture, "png", file.toFile());
+      for (String part :
+          new String[] {
+            "#mode-volts",
+            "#mode-ohms",
+            "#pad-kind",
+            "#pad-measure",
+            "#pad-takes",
+            "#test-signal",
+            "#probe-call",
+            "#readings-list"
+          }) {
+        List<String> cut =
+            fx(
+                () -> {
+                  List<String> found = new ArrayList<>();
+                  PowerOffFlowTest.cutTexts(robot.lookup(part).query(), found);
+                  return found;
+                });
+        assertThat(cut).as("texts cut short in %s at %s", part, where).isEmpty();
+      }
+    }
+    fx(
+        () -> {
+          window.setWidth(BenchApp.WIDTH);
+          window.setHeight(BenchApp.HEIGHT);
+          return null;
+        });
+    WaitForAsyncUtils.waitFor(
+        30, TimeUnit.SECONDS, () -> fx(() -> window.getScene().getWidth() == BenchApp.WIDTH));
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+}
