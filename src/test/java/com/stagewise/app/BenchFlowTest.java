@@ -277,14 +277,18 @@ class BenchFlowTest {
 
   /** Taps the card of the reading with this value on the readings screen. */
   private void tapReadingCard(double value) throws Exception {
-    robot.clickOn(
+    javafx.scene.control.ListCell<?> card =
         robot
             .lookup("#readings-list .list-cell")
             .match(
                 (javafx.scene.control.ListCell<com.stagewise.ui.readings.ReadingRow> cell) ->
                     cell.getItem() != null && cell.getItem().reading().value() == value)
-            .<javafx.scene.control.ListCell<?>>query());
+            .<javafx.scene.control.ListCell<?>>query();
+    ScreenScroll.intoView(card);
+    robot.clickOn(card);
     settle();
+    // The card's choices (correct, strike out) open below it: bring them into sight too.
+    ScreenScroll.intoView(robot.lookup("#reading-strike").query());
   }
 
   /** Returns the visible labels on the screen whose text contains {@code words}. */

@@ -166,6 +166,7 @@ class PowerOffFlowTest {
     assertThat(offered.kind()).isEqualTo(Reading.Kind.OHMS);
     assertThat(visible("#take-ohms")).isTrue();
     assertThat(text("#ohms-offer")).contains("power-off check");
+    ScreenScroll.intoView(robot.lookup("#take-ohms").query());
     robot.clickOn("#take-ohms");
     settle();
     assertThat(visible("#poweroff-banner")).isTrue();
@@ -219,13 +220,13 @@ class PowerOffFlowTest {
     robot.clickOn("#show-schematic");
     settle();
     Node lead = robot.lookup((Node n) -> "point-R1.1".equals(n.getId())).query();
-    scrollIntoView(lead);
+    ScreenScroll.intoView(lead);
     robot.clickOn(lead);
     settle();
     assertThat(text("#ohms-from")).isEqualTo("From:  R1 lead 1");
     // A wire stands for its net: OUT's wire, tapped, fills the second place.
     Node wire = robot.lookup((Node n) -> "point-OUT".equals(n.getId())).query();
-    scrollIntoView(wire);
+    ScreenScroll.intoView(wire);
     robot.clickOn(wire);
     settle();
     assertThat(text("#ohms-to")).contains("OUT");
@@ -248,30 +249,6 @@ class PowerOffFlowTest {
           }
           if (node != null) {
             ((javafx.scene.control.ScrollPane) node).setVvalue(0);
-          }
-          return null;
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /** Scrolls the screen so that a node stands in the middle of the view, as a finger would. */
-  private void scrollIntoView(Node target) throws Exception {
-    fx(
-        () -> {
-          Node node = target.getParent();
-          while (node != null && !(node instanceof javafx.scene.control.ScrollPane)) {
-            node = node.getParent();
-          }
-          if (node instanceof javafx.scene.control.ScrollPane pane) {
-            Node content = pane.getContent();
-            double y =
-                content.sceneToLocal(target.localToScene(target.getBoundsInLocal())).getCenterY();
-            double room =
-                content.getBoundsInLocal().getHeight() - pane.getViewportBounds().getHeight();
-            if (room > 0) {
-              double top = y - pane.getViewportBounds().getHeight() / 2;
-              pane.setVvalue(Math.max(0, Math.min(1, top / room)));
-            }
           }
           return null;
         });
