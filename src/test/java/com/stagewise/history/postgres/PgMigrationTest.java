@@ -25,27 +25,12 @@ class PgMigrationTest {
   @Test
   void version4Shop_migrates_andItsReadingsStandUnchanged_withoutNewChangeNumbers()
       throws SQLException {
-    ServerAddress address = server.freshShop();
-    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
-    try {
-      PgMigrations.migrate(admin, 0L, 4);
-    } finally {
-      admin.close();
-    }
+    ServerAddress address = shopAtVersion(4);
     String s = address.schema();
     server.adminSql(
         // The triggers of version 3 on name the change-number sequence without its schema.
         "SET search_path TO " + s,
-        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
-        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
-        "INSERT INTO "
-            + s
-            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
-            + " VALUES ('c1', 'u1', "
-            + TAKEN
-            + ", 'crackles when cold', 'open', "
-            + TAKEN
-            + ")",
+        unitWithCase(s, "crackles when cold"),
         "INSERT INTO "
             + s
             + ".reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at)"
@@ -73,13 +58,7 @@ class PgMigrationTest {
   @Test
   void version5Shop_migrates_sheetsOfOneTitleBecomeItsVersions_withoutNewChangeNumbers()
       throws SQLException {
-    ServerAddress address = server.freshShop();
-    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
-    try {
-      PgMigrations.migrate(admin, 0L, 5);
-    } finally {
-      admin.close();
-    }
+    ServerAddress address = shopAtVersion(5);
     String s = address.schema();
     server.adminSql(
         "SET search_path TO " + s,
@@ -96,15 +75,7 @@ class PgMigrationTest {
             + "), ('s3', 'm1', 'Input buffer', '{\"c\": 3}', "
             + TAKEN
             + ")",
-        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
-        "INSERT INTO "
-            + s
-            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
-            + " VALUES ('c1', 'u1', "
-            + TAKEN
-            + ", 'crackles when cold', 'open', "
-            + TAKEN
-            + ")");
+        unitAndCase(s, "crackles when cold"));
     long changeBefore = maxChange(s, "stage_sheet");
 
     try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
@@ -122,40 +93,19 @@ class PgMigrationTest {
       assertThat(shop.cases().find("c1").orElseThrow().stageSheetId()).isNotNull();
     }
     // Numbering the sheets already there is no change for the benches to pull.
-    try (Connection c = server.adminConnection(TestServer.DATABASE);
-        Statement st = c.createStatement();
-        ResultSet rs =
-            st.executeQuery(
-                "SELECT max(change_no) FROM "
-                    + s
-                    + ".stage_sheet WHERE id IN ('s1', 's2', 's3')")) {
-      assertThat(rs.next()).isTrue();
-      assertThat(rs.getLong(1)).isEqualTo(changeBefore);
-    }
+    assertThat(
+            scalar(
+                "SELECT max(change_no) FROM " + s + ".stage_sheet WHERE id IN ('s1', 's2', 's3')"))
+        .isEqualTo(changeBefore);
   }
 
   @Test
   void version6Shop_migrates_itsAcReadingStaysAPeak_andTakesAnRmsReading() throws SQLException {
-    ServerAddress address = server.freshShop();
-    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
-    try {
-      PgMigrations.migrate(admin, 0L, 6);
-    } finally {
-      admin.close();
-    }
+    ServerAddress address = shopAtVersion(6);
     String s = address.schema();
     server.adminSql(
         "SET search_path TO " + s,
-        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
-        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
-        "INSERT INTO "
-            + s
-            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
-            + " VALUES ('c1', 'u1', "
-            + TAKEN
-            + ", 'no treble', 'open', "
-            + TAKEN
-            + ")",
+        unitWithCase(s, "no treble"),
         "INSERT INTO "
             + s
             + ".reading (id, case_id, at, kind, value, hz, uncertainty, meter, taken_at,"
@@ -199,30 +149,14 @@ class PgMigrationTest {
   @Test
   void version7Shop_migrates_casesHaveNoPhotos_aBenchRoleMayAddThem_withoutNewChangeNumbers()
       throws SQLException {
-    ServerAddress address = server.freshShop();
-    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
-    try {
-      PgMigrations.migrate(admin, 0L, 7);
-    } finally {
-      admin.close();
-    }
+    ServerAddress address = shopAtVersion(7);
     String s = address.schema();
     String bench = "bench_" + s.replaceAll("[^a-z0-9_]", "_");
     server.adminSql(
         "SET search_path TO " + s,
-        "CREATE ROLE " + bench + " LOGIN PASSWORD 'x'",
         // The rights server-init gives a bench on the tables of version 7.
-        "GRANT SELECT, INSERT, UPDATE ON " + s + ".reading, " + s + ".repair_case TO " + bench,
-        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
-        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
-        "INSERT INTO "
-            + s
-            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
-            + " VALUES ('c1', 'u1', "
-            + TAKEN
-            + ", 'crackles when cold', 'open', "
-            + TAKEN
-            + ")");
+        benchRole(bench, s),
+        unitWithCase(s, "crackles when cold"));
     long changeBefore = maxChange(s, "repair_case");
 
     try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
@@ -239,51 +173,22 @@ class PgMigrationTest {
       // The photo takes a change number, so that the benches pull it.
       assertThat(maxChange(s, "case_photo")).isGreaterThan(changeBefore);
     }
-    try (Connection c = server.adminConnection(TestServer.DATABASE);
-        Statement st = c.createStatement();
-        ResultSet rs =
-            st.executeQuery(
-                "SELECT has_table_privilege('"
-                    + bench
-                    + "', '"
-                    + s
-                    + ".case_photo', 'INSERT'), has_table_privilege('"
-                    + bench
-                    + "', '"
-                    + s
-                    + ".case_photo', 'DELETE')")) {
-      assertThat(rs.next()).isTrue();
-      assertThat(rs.getBoolean(1)).as("a bench role may add photos").isTrue();
-      assertThat(rs.getBoolean(2)).as("and may not delete them").isFalse();
-    }
+    assertThat(benchMay(bench, s + ".case_photo", "INSERT"))
+        .as("a bench role may add photos")
+        .isTrue();
+    assertThat(benchMay(bench, s + ".case_photo", "DELETE"))
+        .as("and may not delete them")
+        .isFalse();
   }
 
   @Test
   void version8Shop_migrates_casesHaveNoReadingsAfterRepair_aBenchRoleMayAddThem()
       throws SQLException {
-    ServerAddress address = server.freshShop();
-    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
-    try {
-      PgMigrations.migrate(admin, 0L, 8);
-    } finally {
-      admin.close();
-    }
+    ServerAddress address = shopAtVersion(8);
     String s = address.schema();
     String bench = "bench8_" + s.replaceAll("[^a-z0-9_]", "_");
     server.adminSql(
-        "SET search_path TO " + s,
-        "CREATE ROLE " + bench + " LOGIN PASSWORD 'x'",
-        "GRANT SELECT, INSERT, UPDATE ON " + s + ".reading, " + s + ".repair_case TO " + bench,
-        "INSERT INTO " + s + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', " + TAKEN + ")",
-        "INSERT INTO " + s + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', " + TAKEN + ")",
-        "INSERT INTO "
-            + s
-            + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at)"
-            + " VALUES ('c1', 'u1', "
-            + TAKEN
-            + ", 'crackles when cold', 'open', "
-            + TAKEN
-            + ")");
+        "SET search_path TO " + s, benchRole(bench, s), unitWithCase(s, "crackles when cold"));
     long changeBefore = maxChange(s, "repair_case");
     try (PgHistory shop = PgHistory.open(address, Clock.systemUTC(), server.adminEnvironment())) {
       assertThat(shop.schemaVersion()).isEqualTo(PgMigrations.LATEST);
@@ -304,6 +209,63 @@ class PgMigrationTest {
       assertThat(shop.cases().caseFile("c1").orElseThrow().readings()).isEmpty();
       assertThat(maxChange(s, "after_repair_reading")).isGreaterThan(changeBefore);
     }
+    assertThat(benchMay(bench, s + ".after_repair_reading", "INSERT"))
+        .as("a bench role may add readings after a repair")
+        .isTrue();
+  }
+
+  /** A fresh shop's schema, migrated as far as the given version and no further. */
+  private ServerAddress shopAtVersion(int version) throws SQLException {
+    ServerAddress address = server.freshShop();
+    PgDatabase admin = PgDatabase.connect(address, server.adminEnvironment());
+    try {
+      PgMigrations.migrate(admin, 0L, version);
+    } finally {
+      admin.close();
+    }
+    return address;
+  }
+
+  /** SQL that stores a board model m1, its unit u1 and an open case c1 of it. */
+  private static String unitWithCase(String schema, String symptom) {
+    return "INSERT INTO "
+        + schema
+        + ".board_model VALUES ('m1', 'MX-8', 'Northfield', '', "
+        + TAKEN
+        + "); "
+        + unitAndCase(schema, symptom);
+  }
+
+  /** SQL that stores the unit u1 of board model m1 and an open case c1 of it. */
+  private static String unitAndCase(String schema, String symptom) {
+    return "INSERT INTO "
+        + schema
+        + ".unit VALUES ('u1', 'NF-8-0100', 'm1', '', "
+        + TAKEN
+        + "); INSERT INTO "
+        + schema
+        + ".repair_case (id, unit_id, opened_at, symptom, status, updated_at) VALUES ('c1', 'u1', "
+        + TAKEN
+        + ", '"
+        + symptom
+        + "', 'open', "
+        + TAKEN
+        + ")";
+  }
+
+  /** SQL that makes a login role with the rights a bench had on the tables of version 7. */
+  private static String benchRole(String bench, String schema) {
+    return "CREATE ROLE "
+        + bench
+        + " LOGIN PASSWORD 'x'; GRANT SELECT, INSERT, UPDATE ON "
+        + schema
+        + ".reading, "
+        + schema
+        + ".repair_case TO "
+        + bench;
+  }
+
+  private boolean benchMay(String bench, String table, String privilege) throws SQLException {
     try (Connection c = server.adminConnection(TestServer.DATABASE);
         Statement st = c.createStatement();
         ResultSet rs =
@@ -311,28 +273,29 @@ class PgMigrationTest {
                 "SELECT has_table_privilege('"
                     + bench
                     + "', '"
-                    + s
-                    + ".after_repair_reading', 'INSERT')")) {
+                    + table
+                    + "', '"
+                    + privilege
+                    + "')")) {
       assertThat(rs.next()).isTrue();
-      assertThat(rs.getBoolean(1)).as("a bench role may add readings after a repair").isTrue();
+      return rs.getBoolean(1);
+    }
+  }
+
+  private long scalar(String sql) throws SQLException {
+    try (Connection c = server.adminConnection(TestServer.DATABASE);
+        Statement st = c.createStatement();
+        ResultSet rs = st.executeQuery(sql)) {
+      assertThat(rs.next()).isTrue();
+      return rs.getLong(1);
     }
   }
 
   private long maxChange(String schema, String table) throws SQLException {
-    try (Connection c = server.adminConnection(TestServer.DATABASE);
-        Statement st = c.createStatement();
-        ResultSet rs = st.executeQuery("SELECT max(change_no) FROM " + schema + "." + table)) {
-      assertThat(rs.next()).isTrue();
-      return rs.getLong(1);
-    }
+    return scalar("SELECT max(change_no) FROM " + schema + "." + table);
   }
 
   private long changeNumber(String schema) throws SQLException {
-    try (Connection c = server.adminConnection(TestServer.DATABASE);
-        Statement st = c.createStatement();
-        ResultSet rs = st.executeQuery("SELECT change_no FROM " + schema + ".reading")) {
-      assertThat(rs.next()).isTrue();
-      return rs.getLong(1);
-    }
+    return scalar("SELECT change_no FROM " + schema + ".reading");
   }
 }
