@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Makes the class-data sharing archive of an app image: starts the image's own java exactly as its
-# launcher would, with the demo data on a fresh folder, until the unit screen shows; then ends it,
+# launcher would, with the demo data on a fresh folder, until the window is usable (the unit screen
+# laid out with the demo units listed); then ends it,
 # and the JVM writes the classes it loaded to WORK/stagewise.jsa. Needs a display (or Xvfb).
 #
 # Usage: src/package/train-cds.sh IMAGE_DIR WORK_DIR   (build-image.sh runs it)
@@ -20,7 +21,7 @@ XDG_DATA_HOME="$data" "$image/lib/runtime/bin/java" "${opts[@]}" \
   -cp "$cp" "$main" --demo >"$log" 2>&1 &
 pid=$!
 for _ in $(seq 1 600); do
-  grep -q "unit screen shown" "$log" && break
+  grep -q "usable window" "$log" && break
   kill -0 "$pid" 2>/dev/null || break
   sleep 0.1
 done

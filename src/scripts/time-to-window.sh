@@ -1,5 +1,7 @@
 #!/usr/bin/env bash
-# Measures the time from launching the bench app to its first window being shown.
+# Measures the time from launching the bench app to its first window being shown, and to the
+# window being usable (the unit screen laid out with the demo's units listed, the history open and
+# nothing left to do in the background, so that a tap is taken at once).
 #
 # Usage: src/scripts/time-to-window.sh [RUNS]      (default 5 runs; prints each and the median)
 #        JAVA_OPTIONS="..." src/scripts/time-to-window.sh   (other JVM options, e.g. " " for the defaults)
@@ -9,8 +11,9 @@
 #
 # Each run starts the app with --demo on a fresh, empty data folder (so the demo data is filled
 # on first start, as on a new machine), under a virtual X display (Xvfb; `apt-get install xvfb`)
-# unless DISPLAY is already set. The app prints the milliseconds from its process start to the
-# first window shown when started with -Dstagewise.timing=true; the run then ends the app.
+# unless DISPLAY is already set. Started with -Dstagewise.timing=true, the app prints the
+# milliseconds (and the processor time of all its threads) from its process start to the first
+# window shown and to the usable window; the run then ends the app.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 runs="${1:-5}"
@@ -36,7 +39,7 @@ if [ -n "$image" ] && [ -n "${NO_CDS:-}" ]; then
 fi
 
 one_run() {
-  local n="$1" out="$work/run-$1.log" data="$work/data-$1"
+  local n="$1" image="$2" out="$work/run-$1.log" data="$work/data-$1"
   mkdir -p "$data"
   if [ -n "$image" ]; then
     # The image's own launcher with its own options; JAVA_TOOL_OPTIONS adds the timing line.
@@ -50,34 +53,79 @@ one_run() {
   fi
   local pid=$!
   for _ in $(seq 1 600); do
-    if grep -q "first window shown" "$out"; then break; fi
+    if grep -q "usable window" "$out"; then break; fi
     if ! kill -0 "$pid" 2>/dev/null; then break; fi
     sleep 0.1
   done
   kill "$pid" 2>/dev/null || true
   wait "$pid" 2>/dev/null || true
-  local ms cpu
+  local ms cpu ums ucpu
   ms="$(sed -n 's/.*first window shown \([0-9]*\) ms.*/\1/p' "$out" | head -n 1)"
   cpu="$(sed -n 's/.*first window shown .*cpu \([0-9]*\) ms.*/\1/p' "$out" | head -n 1)"
-  if [ -z "$ms" ]; then
-    echo "run $n: no window shown; the app said:" >&2
+  ums="$(sed -n 's/.*usable window \([0-9]*\) ms.*/\1/p' "$out" | head -n 1)"
+  ucpu="$(sed -n 's/.*usable window .*cpu \([0-9]*\) ms.*/\1/p' "$out" | head -n 1)"
+  if [ -z "$ms" ] || [ -z "$ums" ]; then
+    echo "run $n: no usable window within 60 s; the app said:" >&2
     cat "$out" >&2
     exit 1
   fi
-  echo "$ms ${cpu:-?}"
+  echo "$ms ${cpu:-?} $ums ${ucpu:-?}"
+}
+
+median_of() {
+  printf '%s\n' "$@" | sort -n | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}'
+}
+
+report() {
+  local label="$1" file="$2"
+  # Each line of the file: first-window ms, its processor ms, usable ms, its processor ms.
+  echo "$label median of $(wc -l <"$file") runs: first window $(median_of $(cut -d' ' -f1 "$file")) ms" \
+    "(processor time $(median_of $(cut -d' ' -f2 "$file")) ms)," \
+    "usable window $(median_of $(cut -d' ' -f3 "$file")) ms" \
+    "(processor time $(median_of $(cut -d' ' -f4 "$file")) ms) from process start"
+}
+
+ratio() {
+  awk -v a="$1" -v b="$2" 'BEGIN {printf "%.2f", b / a}'
 }
 
 measure() {
-  local results=() cpus=()
+  local compare="${COMPARE:-}"
+  echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg)"
+  : >"$work/a.txt"
+  : >"$work/b.txt"
   for n in $(seq 1 "$runs"); do
-    read -r ms cpu <<<"$(one_run "$n")"
-    echo "run $n: first window after $ms ms (processor time $cpu ms)"
-    results+=("$ms")
-    cpus+=("$cpu")
+    local line
+    line="$(one_run "a$n" "$image")"
+    read -r ms cpu ums ucpu <<<"$line"
+    echo "run $n${compare:+ (A)}: first window after $ms ms (processor time $cpu ms), usable after $ums ms (processor time $ucpu ms)"
+    echo "$line" >>"$work/a.txt"
+    if [ -n "$compare" ]; then
+      line="$(one_run "b$n" "$compare")"
+      read -r ms cpu ums ucpu <<<"$line"
+      echo "run $n (B): first window after $ms ms (processor time $cpu ms), usable after $ums ms (processor time $ucpu ms)"
+      echo "$line" >>"$work/b.txt"
+    fi
   done
-  median="$(printf '%s\n' "${results[@]}" | sort -n | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}')"
-  cpu_median="$(printf '%s\n' "${cpus[@]}" | sort -n | awk '{a[NR]=$1} END {print a[int((NR+1)/2)]}')"
-  echo "median of $runs runs: $median ms from process start to the first window, processor time $cpu_median ms"
+  if [ -z "$compare" ]; then
+    report "" "$work/a.txt"
+  else
+    report "A ($image)" "$work/a.txt"
+    report "B ($compare)" "$work/b.txt"
+    local col
+    for col in 1 2 3 4; do
+      local a b
+      a="$(median_of $(cut -d' ' -f$col "$work/a.txt"))"
+      b="$(median_of $(cut -d' ' -f$col "$work/b.txt"))"
+      case $col in
+        1) echo -n "ratios B/A: first window $(ratio "$a" "$b")" ;;
+        2) echo -n " (processor $(ratio "$a" "$b"))" ;;
+        3) echo -n ", usable window $(ratio "$a" "$b")" ;;
+        4) echo " (processor $(ratio "$a" "$b"))" ;;
+      esac
+    done
+  fi
+  echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)"
 }
 
 measure

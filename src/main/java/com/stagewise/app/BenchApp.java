@@ -18,6 +18,9 @@ import com.stagewise.ui.start.StartView;
 import com.stagewise.ui.start.StartViewModel;
 import com.stagewise.ui.suspects.SuspectsView;
 import com.stagewise.ui.suspects.SuspectsViewModel;
+import javafx.application.Platform;
+import javafx.beans.value.ChangeListener;
+import javafx.beans.value.ObservableValue;
 import javafx.scene.Scene;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyCodeCombination;
@@ -152,6 +155,44 @@ public final class BenchApp {
   /** Returns true when no background work is queued or running (call on the FX thread). */
   boolean idle() {
     return tasks.pendingProperty().get() == 0;
+  }
+
+  /**
+   * Runs {@code then} once the background work queued so far is done and the screen has been laid
+   * out with its results (the pulse after): the window then shows what it will show and takes a
+   * tap. Call on the FX thread.
+   */
+  void whenSettled(Runnable then) {
+    if (idle()) {
+      afterNextPulse(then);
+      return;
+    }
+    tasks
+        .pendingProperty()
+        .addListener(
+            new ChangeListener<Number>() {
+              @Override
+              public void changed(ObservableValue<? extends Number> o, Number was, Number now) {
+                if (now.intValue() == 0) {
+                  tasks.pendingProperty().removeListener(this);
+                  // The task's own result is handed over just after the count drops.
+                  Platform.runLater(() -> afterNextPulse(then));
+                }
+              }
+            });
+  }
+
+  private void afterNextPulse(Runnable then) {
+    Runnable once =
+        new Runnable() {
+          @Override
+          public void run() {
+            scene.removePostLayoutPulseListener(this);
+            then.run();
+          }
+        };
+    scene.addPostLayoutPulseListener(once);
+    Platform.requestNextPulse();
   }
 
   /** Stops the background thread. */

@@ -4,7 +4,10 @@ import com.stagewise.ui.shell.Overlays;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
+import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import javafx.application.Application;
 import javafx.application.Platform;
 import javafx.geometry.Pos;
@@ -17,11 +20,13 @@ import javafx.stage.Screen;
 import javafx.stage.Stage;
 
 /**
- * Starts the bench app: shows a window at once, opens the history in the background (filling the
- * demo data with {@code --demo}), then shows the unit screen.
+ * Starts the bench app: opens the history on a thread of its own (filling the demo data with {@code
+ * --demo}) while JavaFX starts and shows a window, then shows the unit screen.
  *
- * <p>With {@code -Dstagewise.timing=true} it prints one line when the first window is shown, with
- * the milliseconds since the process started ({@code src/scripts/time-to-window.sh} reads it).
+ * <p>With {@code -Dstagewise.timing=true} it prints one line when the first window is shown and one
+ * when the window is usable (the unit screen laid out with the units listed, nothing left to do in
+ * the background), each with the milliseconds since the process started ({@code
+ * src/scripts/time-to-window.sh} reads them).
  */
 public final class DesktopLauncher extends Application {
   private BenchApp app;
@@ -31,8 +36,36 @@ public final class DesktopLauncher extends Application {
   private static final java.util.logging.Logger FX_LOG =
       java.util.logging.Logger.getLogger("javafx");
 
+  /**
+   * The history being opened (and the demo filled) on a thread of its own from the moment the
+   * process starts, while JavaFX starts its toolkit and shows the first window on the other core.
+   */
+  private static CompletableFuture<Workshop> opened;
+
+  /** Where the history is opened (for the message when it cannot be). */
+  private static DataFolder openingFolder;
+
   static void open(String[] args) {
     mark("main");
+    AppOptions options = AppOptions.parse(List.of(args));
+    openingFolder = options.folder(System.getenv(), System.getProperty("user.home"));
+    Path stages = Path.of(System.getProperty("stagewise.stages", "data/stages"));
+    opened = new CompletableFuture<>();
+    Thread opener =
+        new Thread(
+            () -> {
+              try {
+                Workshop opened = Workshop.open(openingFolder, options.demo(), stages);
+                mark("history open");
+                DesktopLauncher.opened.complete(opened);
+              } catch (RuntimeException | LinkageError e) {
+                // A linkage error: the database's native library could not be loaded.
+                DesktopLauncher.opened.completeExceptionally(e);
+              }
+            },
+            "stagewise-open");
+    opener.setDaemon(true);
+    opener.start();
     quietOnTheClassPath();
     Application.launch(DesktopLauncher.class, args);
   }
@@ -59,7 +92,6 @@ public final class DesktopLauncher extends Application {
   public void start(Stage window) {
     mark("toolkit up");
     AppOptions options = AppOptions.parse(getParameters().getRaw());
-    DataFolder folder = options.folder(System.getenv(), System.getProperty("user.home"));
     window.setTitle("Stagewise — bench");
     // From a 1024×600 touch laptop to a 1920×1080 bench screen: the window never starts larger
     // than the screen, and fills a small one.
@@ -86,25 +118,30 @@ public final class DesktopLauncher extends Application {
     window.setScene(new Scene(new StackPane(splash), width, height));
     window.setOnShown(e -> reportTiming());
     window.show();
-    Path stages = Path.of(System.getProperty("stagewise.stages", "data/stages"));
-    Thread opener =
-        new Thread(
-            () -> {
-              try {
-                Workshop opened = Workshop.open(folder, options.demo(), stages);
-                Platform.runLater(() -> showBench(window, opened, options.sheet()));
-              } catch (RuntimeException e) {
-                Platform.runLater(() -> cannotOpen(window, folder, e));
-              }
-            },
-            "stagewise-open");
-    opener.setDaemon(true);
-    opener.start();
+    opened.whenComplete(
+        (workshopOpened, failure) ->
+            Platform.runLater(
+                () -> {
+                  if (failure == null) {
+                    showBench(window, workshopOpened, options.sheet());
+                  } else {
+                    cannotOpen(window, openingFolder, unwrapped(failure));
+                  }
+                }));
+  }
+
+  private static RuntimeException unwrapped(Throwable failure) {
+    Throwable cause =
+        failure instanceof CompletionException && failure.getCause() != null
+            ? failure.getCause()
+            : failure;
+    return cause instanceof RuntimeException runtime ? runtime : new IllegalStateException(cause);
   }
 
   private void showBench(Stage window, Workshop opened, Path sheet) {
     workshop = opened;
     app = BenchApp.build(opened, sheet);
+    mark("screens built");
     Overlays overlays = app.overlays();
     Thread.setDefaultUncaughtExceptionHandler(
         (thread, e) ->
@@ -119,6 +156,7 @@ public final class DesktopLauncher extends Application {
     window.centerOnScreen();
     app.cautionOnFirstRun();
     mark("unit screen shown");
+    app.whenSettled(() -> mark("usable window"));
   }
 
   private static void cannotOpen(Stage window, DataFolder folder, RuntimeException e) {
