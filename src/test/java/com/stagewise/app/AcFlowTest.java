@@ -6,32 +6,13 @@ import static org.assertj.core.api.Assertions.within;
 import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Reading;
 import com.stagewise.history.record.StoredReading;
-import com.stagewise.ui.Step;
 import com.stagewise.ui.readings.ReadingRow;
-import java.awt.image.BufferedImage;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
-import javafx.application.Platform;
-import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Node;
-import javafx.scene.control.Label;
-import javafx.scene.control.Labeled;
-import javafx.scene.image.WritableImage;
 import javafx.scene.text.Text;
-import javafx.stage.Stage;
-import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
-import org.testfx.api.FxRobot;
-import org.testfx.api.FxToolkit;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * An AC check in a real (headless) window, on the demo shop's mixing desk and its channel line
@@ -44,84 +25,12 @@ import org.testfx.util.WaitForAsyncUtils;
  *
  * <p>With {@code -Dscreenshots=true} the picture goes to src/site/screens.
  */
-class AcFlowTest {
-  private static final String SERIAL = "NF8-22019";
-  private static final double VCC = 14.96;
-  private static final double VEE = -14.97;
+class AcFlowTest extends WindowFlow {
   private static final double ROOT2 = Math.sqrt(2);
-
-  @TempDir Path temp;
-
-  private Workshop workshop;
-  private BenchApp app;
-  private Stage window;
-  private final FxRobot robot = new FxRobot();
-
-  @BeforeAll
-  static void toolkit() throws Exception {
-    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
-    try {
-      Platform.startup(() -> {});
-    } catch (IllegalStateException alreadyRunning) {
-      // Another test class started the toolkit first.
-    }
-    Platform.setImplicitExit(false);
-    FxToolkit.toolkitContext().setSetupTimeoutInMillis(180_000);
-  }
-
-  @BeforeEach
-  void open() throws Exception {
-    DataFolder folder =
-        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
-    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
-    window =
-        FxToolkit.registerStage(
-            () -> {
-              Stage stage = new Stage();
-              app = BenchApp.build(workshop);
-              stage.setScene(app.scene());
-              stage.setTitle("Stagewise — bench");
-              stage.setWidth(BenchApp.WIDTH);
-              stage.setHeight(BenchApp.HEIGHT);
-              stage.show();
-              app.cautionOnFirstRun();
-              return stage;
-            });
-    settle();
-  }
-
-  @AfterEach
-  void close() throws Exception {
-    FxToolkit.cleanupStages();
-    app.close();
-    workshop.close();
-  }
 
   @Test
   void acRmsReading_atTheOutput_isComparedWithTheAcExpectationInRms() throws Exception {
-    robot.clickOn("#caution-ok");
-    settle();
-    for (char c : SERIAL.toCharArray()) {
-      robot.clickOn("#serial-key-" + c);
-    }
-    robot.clickOn("#serial-search");
-    settle();
-    robot.clickOn("#symptom").write("Channel 1 sounds dull and quiet");
-    robot.clickOn("#open-case");
-    settle();
-    robot.clickOn("#caution-ok");
-    settle();
-    robot.clickOn(
-        robot
-            .lookup("#stage-library .list-cell")
-            .match(
-                (javafx.scene.control.ListCell<?> cell) ->
-                    cell.getText() != null && cell.getText().startsWith("Channel line driver"))
-            .<javafx.scene.control.ListCell<?>>query());
-    settle();
-    robot.clickOn("#use-stage");
-    settle();
-    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
+    openLineDriverCase("Channel 1 sounds dull and quiet");
     // The test signal and its frequency are on the screen; the pad says what it takes.
     assertThat(text("#test-signal")).contains("IN").contains("1\u00a0kHz");
     assertThat(selected("#pad-dc")).isTrue();
@@ -135,7 +44,7 @@ class AcFlowTest {
     settle();
     // The screen is taller than the window: back to its top, as a finger scrolls, to the pad's
     // switch.
-    scrollToTop();
+    scrollToTop("#pad-kind");
     robot.clickOn("#pad-ac");
     robot.clickOn("#measure-rms");
     settle();
@@ -186,22 +95,6 @@ class AcFlowTest {
     assertThat(fx(() -> labelsContaining("U1 pin 1, AC RMS at 1\u00a0kHz"))).hasSize(1);
   }
 
-  /** Scrolls the screen to its top, as a finger would, so that the pictures start there. */
-  private void scrollToTop() throws Exception {
-    fx(
-        () -> {
-          Node node = robot.lookup("#pad-kind").query();
-          while (node != null && !(node instanceof javafx.scene.control.ScrollPane)) {
-            node = node.getParent();
-          }
-          if (node != null) {
-            ((javafx.scene.control.ScrollPane) node).setVvalue(0);
-          }
-          return null;
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
   /** Returns the row behind the card of the AC reading on the readings screen. */
   @SuppressWarnings("unchecked")
   private ReadingRow acCard() {
@@ -227,13 +120,6 @@ class AcFlowTest {
     return texts;
   }
 
-  private List<String> labelsContaining(String words) {
-    return robot.lookup(".label").queryAllAs(Label.class).stream()
-        .filter(l -> l.isVisible() && l.getText() != null && l.getText().contains(words))
-        .map(Label::getText)
-        .toList();
-  }
-
   /** Types a value on the pad's keys (a leading minus on the sign key) and adds the reading. */
   private void typeValue(String value) throws Exception {
     String digits = value;
@@ -253,116 +139,31 @@ class AcFlowTest {
         () -> robot.lookup(query).queryAs(javafx.scene.control.ToggleButton.class).isSelected());
   }
 
-  private boolean visible(String query) throws Exception {
-    return fx(
-        () -> {
-          Node node = robot.lookup(query).tryQuery().orElse(null);
-          boolean shown = node != null;
-          while (node != null) {
-            shown &= node.isVisible();
-            node = node.getParent();
-          }
-          return shown;
-        });
-  }
-
-  private String text(String query) throws Exception {
-    return fx(
-        () -> {
-          Node node = robot.lookup(query).query();
-          if (node instanceof Labeled labeled) {
-            return labeled.getText();
-          }
-          if (node instanceof javafx.scene.control.TextInputControl input) {
-            return input.getText();
-          }
-          return "";
-        });
-  }
-
-  private static <T> T fx(Callable<T> work) throws Exception {
-    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
-  }
-
-  private void settle() throws Exception {
-    WaitForAsyncUtils.waitFor(
-        90,
-        TimeUnit.SECONDS,
-        () -> {
-          WaitForAsyncUtils.waitForFxEvents();
-          return fx(() -> app.idle());
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
   /**
    * Shows the readings screen at 1280×800 and 1024×600, fails when a text of its AC parts or of a
    * reading's card is cut short (drawn with an ellipsis), and saves a picture at each size.
    */
   private void shoot(String name) throws Exception {
-    scrollToTop();
-    for (int[] size : new int[][] {{1280, 800}, {1024, 600}}) {
-      fx(
-          () -> {
-            window.setWidth(size[0]);
-            window.setHeight(size[1]);
-            return null;
-          });
-      WaitForAsyncUtils.waitFor(
-          30,
-          TimeUnit.SECONDS,
-          () ->
-              fx(
-                  () ->
-                      window.getScene().getWidth() == size[0]
-                          && window.getScene().getHeight() == size[1]));
-      WaitForAsyncUtils.waitForFxEvents();
-      fx(
-          () -> {
-            window.getScene().getRoot().applyCss();
-            window.getScene().getRoot().layout();
-            return null;
-          });
-      WaitForAsyncUtils.waitForFxEvents();
-      String where = size[0] + "x" + size[1];
-      boolean site = Boolean.getBoolean("screenshots") && size[0] == 1280;
-      Path file =
-          site
-              ? Path.of("src", "site", "screens", name + ".png")
-              : Path.of("target", "screens", where, name + ".png");
-      WritableImage image = fx(() -> window.getScene().snapshot(null));
-      BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-      Files.createDirectories(file.getParent());
-      ImageIO.write(picture, "png", file.toFile());
-      for (String part :
-          new String[] {
-            "#mode-volts",
-            "#mode-ohms",
-            "#pad-kind",
-            "#pad-measure",
-            "#pad-takes",
-            "#test-signal",
-            "#probe-call",
-            "#readings-list"
-          }) {
-        List<String> cut =
-            fx(
-                () -> {
-                  List<String> found = new ArrayList<>();
-                  PowerOffFlowTest.cutTexts(robot.lookup(part).query(), found);
-                  return found;
-                });
-        assertThat(cut).as("texts cut short in %s at %s", part, where).isEmpty();
-      }
-    }
-    fx(
-        () -> {
-          window.setWidth(BenchApp.WIDTH);
-          window.setHeight(BenchApp.HEIGHT);
-          return null;
+    scrollToTop("#pad-kind");
+    atSizes(
+        new int[][] {LAPTOP, SMALL},
+        (size, where) -> {
+          boolean site = Boolean.getBoolean("screenshots") && size == LAPTOP;
+          savePicture(
+              site
+                  ? Path.of("src", "site", "screens", name + ".png")
+                  : Path.of("target", "screens", where, name + ".png"));
+          assertNothingCut(
+              name,
+              where,
+              "#mode-volts",
+              "#mode-ohms",
+              "#pad-kind",
+              "#pad-measure",
+              "#pad-takes",
+              "#test-signal",
+              "#probe-call",
+              "#readings-list");
         });
-    WaitForAsyncUtils.waitFor(
-        30, TimeUnit.SECONDS, () -> fx(() -> window.getScene().getWidth() == BenchApp.WIDTH));
-    WaitForAsyncUtils.waitForFxEvents();
   }
 }

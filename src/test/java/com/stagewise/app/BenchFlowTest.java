@@ -8,34 +8,9 @@ import com.stagewise.history.SearchQuery;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.ui.Step;
-import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
-import java.util.Locale;
-import java.util.Map;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
-import javafx.application.Platform;
-import javafx.embed.swing.SwingFXUtils;
-import javafx.scene.Node;
-import javafx.scene.Parent;
 import javafx.scene.control.Label;
-import javafx.scene.control.Labeled;
-import javafx.scene.image.WritableImage;
-import javafx.scene.text.Text;
-import javafx.stage.Stage;
-import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
-import org.testfx.api.FxRobot;
-import org.testfx.api.FxToolkit;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * Walks the whole bench flow on the demo shop in a real (headless) window: find a unit, open a
@@ -44,65 +19,7 @@ import org.testfx.util.WaitForAsyncUtils;
  *
  * <p>With {@code -Dscreenshots=true} it also writes a picture of every screen to src/site/screens.
  */
-class BenchFlowTest {
-  /** The demo unit worked on: a mixing-desk channel board with a line driver stage. */
-  private static final String SERIAL = "NF8-22019";
-
-  /**
-   * Volts from a rail to the clamped output of a classic-bipolar op-amp (DESIGN.md, common
-   * practice).
-   */
-  private static final double HEADROOM = 1.5;
-
-  private static final double VCC = 14.96;
-  private static final double VEE = -14.97;
-
-  @TempDir Path temp;
-
-  private Workshop workshop;
-  private BenchApp app;
-  private Stage window;
-  private final FxRobot robot = new FxRobot();
-
-  @BeforeAll
-  static void toolkit() throws Exception {
-    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
-    try {
-      Platform.startup(() -> {});
-    } catch (IllegalStateException alreadyRunning) {
-      // Another test class started the toolkit first.
-    }
-    Platform.setImplicitExit(false);
-    // Building the window on a build machine shared by many jobs can take well over TestFX's
-    // default 30 s; the flow's own waits are longer too.
-    FxToolkit.toolkitContext().setSetupTimeoutInMillis(180_000);
-  }
-
-  @BeforeEach
-  void open() throws Exception {
-    DataFolder folder =
-        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
-    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
-    window =
-        FxToolkit.registerStage(
-            () -> {
-              Stage stage = new Stage();
-              app = BenchApp.build(workshop);
-              stage.setScene(app.scene());
-              stage.setTitle("Stagewise — bench");
-              stage.show();
-              app.cautionOnFirstRun();
-              return stage;
-            });
-    settle();
-  }
-
-  @AfterEach
-  void close() throws Exception {
-    FxToolkit.cleanupStages();
-    app.close();
-    workshop.close();
-  }
+class BenchFlowTest extends WindowFlow {
 
   @Test
   void wholeFlow_onDemoCase_findsOpenFeedbackResistorAndKeepsTheCase() throws Exception {
@@ -112,11 +29,7 @@ class BenchFlowTest {
     assertThat(workshop.settings().cautionAcknowledged()).isTrue();
 
     // Unit: the serial typed on the on-screen keypad.
-    for (char c : SERIAL.toCharArray()) {
-      robot.clickOn("#serial-key-" + c);
-    }
-    robot.clickOn("#serial-search");
-    settle();
+    findDemoUnit();
     assertThat(text("#unit-title")).contains(SERIAL).contains("Northfield MX-8");
     robot.clickOn("#symptom").write("Channel 1 output pinned negative, no audio");
     shoot("02-unit");
@@ -185,7 +98,7 @@ class BenchFlowTest {
     assertThat(afterRails.nextProbes()).isNotEmpty();
     for (int probe = 0; probe < 4 && !text("#probe-call").startsWith("No further"); probe++) {
       String at = fx(() -> app.bench().readings().isEmpty() ? "" : currentProbeAt());
-      typeReading(openFeedbackResistor(at));
+      typeReading(openFeedbackResistor(at, "SUM", "OUT"));
       Diagnosis now = fx(() -> app.bench().diagnosisProperty().get());
       if (now.suspects().get(0).probability() > 0.8
           && now.suspects().get(0).group().contains("R2:open")) {
@@ -265,16 +178,6 @@ class BenchFlowTest {
         .contains("Replaced and checked the output swings both ways.");
   }
 
-  private void clickCell(String list, String startOfText) {
-    robot.clickOn(
-        robot
-            .lookup(list + " .list-cell")
-            .match(
-                (javafx.scene.control.ListCell<?> cell) ->
-                    cell.getText() != null && cell.getText().startsWith(startOfText))
-            .<javafx.scene.control.ListCell<?>>query());
-  }
-
   /** Taps the card of the reading with this value on the readings screen. */
   private void tapReadingCard(double value) throws Exception {
     javafx.scene.control.ListCell<?> card =
@@ -291,14 +194,6 @@ class BenchFlowTest {
     ScreenScroll.intoView(robot.lookup("#reading-strike").query());
   }
 
-  /** Returns the visible labels on the screen whose text contains {@code words}. */
-  private List<String> labelsContaining(String words) {
-    return robot.lookup(".label").queryAllAs(Label.class).stream()
-        .filter(l -> l.isVisible() && l.getText() != null && l.getText().contains(words))
-        .map(Label::getText)
-        .toList();
-  }
-
   private String currentProbeAt() {
     var readings = app.bench().readings();
     // The probe shown is the view model's; read it from the label's words instead of guessing.
@@ -309,77 +204,6 @@ class BenchFlowTest {
             .replaceAll(" \\(AC.*", "")
         + (readings.isEmpty() ? "" : "");
   }
-
-  /**
-   * Returns what a stage with its feedback resistor R2 open reads at a test point (textbook
-   * inverting amplifier with the loop broken: no current flows in R1, so SUM follows IN; the op-amp
-   * compares 0 V with +1 V and its output clamps 1.5 V above the negative rail).
-   */
-  private static double openFeedbackResistor(String at) {
-    Map<String, Double> dc =
-        Map.ofEntries(
-            Map.entry("U1.8", VCC),
-            Map.entry("VCC", VCC),
-            Map.entry("U1.4", VEE),
-            Map.entry("VEE", VEE),
-            Map.entry("U1.1", VEE + HEADROOM),
-            Map.entry("OUT", VEE + HEADROOM),
-            Map.entry("U1.2", 1.0),
-            Map.entry("SUM", 1.0),
-            Map.entry("IN", 1.0),
-            Map.entry("U1.3", 0.0),
-            Map.entry("GND", 0.0));
-    Double volts = dc.get(at);
-    if (volts == null) {
-      throw new AssertionError("the flow asked for an unexpected test point: " + at);
-    }
-    return volts;
-  }
-
-  private void typeReading(double volts) throws Exception {
-    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
-    if (volts < 0) {
-      robot.clickOn("#reading-key-sign");
-    }
-    for (char c : text.toCharArray()) {
-      robot.clickOn("#reading-key-" + (c == '.' ? "point" : String.valueOf(c)));
-    }
-    robot.clickOn("#reading-enter");
-    settle();
-  }
-
-  private String text(String query) throws Exception {
-    return fx(
-        () -> {
-          var node = robot.lookup(query).query();
-          if (node instanceof javafx.scene.control.Labeled labeled) {
-            return labeled.getText();
-          }
-          if (node instanceof javafx.scene.control.TextInputControl input) {
-            return input.getText();
-          }
-          throw new AssertionError(query + " is not a text node");
-        });
-  }
-
-  private static <T> T fx(Callable<T> work) throws Exception {
-    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
-  }
-
-  /** Waits until the background work is done and the screen has caught up. */
-  private void settle() throws Exception {
-    WaitForAsyncUtils.waitFor(
-        90,
-        TimeUnit.SECONDS,
-        () -> {
-          WaitForAsyncUtils.waitForFxEvents();
-          return fx(() -> app.idle());
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /** The window sizes every screen must work at: a small touch laptop, a laptop, a desk screen. */
-  private static final int[][] SIZES = {{1024, 600}, {1280, 800}, {1920, 1080}};
 
   /**
    * The screens already checked for cut texts at every size. The stage and readings screens still
@@ -404,132 +228,20 @@ class BenchFlowTest {
    * folder named for their size.
    */
   private void shoot(String name) throws Exception {
-    for (int[] size : SIZES) {
-      fx(
-          () -> {
-            window.setWidth(size[0]);
-            window.setHeight(size[1]);
-            return null;
-          });
-      // The window system applies a new size asynchronously: wait until the scene has it.
-      WaitForAsyncUtils.waitFor(
-          30,
-          TimeUnit.SECONDS,
-          () ->
-              fx(
-                  () ->
-                      window.getScene().getWidth() == size[0]
-                          && window.getScene().getHeight() == size[1]));
-      WaitForAsyncUtils.waitForFxEvents();
-      fx(
-          () -> {
-            window.getScene().getRoot().applyCss();
-            window.getScene().getRoot().layout();
-            return null;
-          });
-      WaitForAsyncUtils.waitForFxEvents();
-      String where = size[0] + "x" + size[1];
-      if (CHECKED_WHOLE.contains(name)) {
-        List<String> cut = fx(() -> cutTexts(window.getScene().getRoot(), new ArrayList<>()));
-        assertThat(cut).as("texts cut short on %s at %s", name, where).isEmpty();
-      }
-      if (size[0] == 1280) {
-        save(screensFolder().resolve(name + ".png"), size);
-      } else {
-        save(Path.of("target", "screens", where, name + ".png"), size);
-      }
-      if (size[0] == 1024 && name.equals("06-readings") && Boolean.getBoolean("screenshots")) {
-        save(screensFolder().resolve("10-readings-1024x600.png"), size);
-      }
-    }
-    fx(
-        () -> {
-          window.setWidth(BenchApp.WIDTH);
-          window.setHeight(BenchApp.HEIGHT);
-          return null;
+    atSizes(
+        new int[][] {SMALL, LAPTOP, DESK},
+        (size, where) -> {
+          if (CHECKED_WHOLE.contains(name)) {
+            assertNothingCut(name, where);
+          }
+          if (size == LAPTOP) {
+            savePicture(screensFolder().resolve(name + ".png"));
+          } else {
+            savePicture(Path.of("target", "screens", where, name + ".png"));
+          }
+          if (size == SMALL && name.equals("06-readings") && Boolean.getBoolean("screenshots")) {
+            savePicture(screensFolder().resolve("10-readings-1024x600.png"));
+          }
         });
-    WaitForAsyncUtils.waitFor(
-        30, TimeUnit.SECONDS, () -> fx(() -> window.getScene().getWidth() == BenchApp.WIDTH));
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /**
-   * Returns every visible text that its control shows shortened (JavaFX then draws it with an
-   * ellipsis): the control's own text and the text it draws differ.
-   */
-  private static List<String> cutTexts(Parent parent, List<String> cut) {
-    for (Node child : parent.getChildrenUnmodifiable()) {
-      if (!child.isVisible()) {
-        continue;
-      }
-      if (child instanceof Labeled labeled
-          && labeled.getText() != null
-          && !labeled.getText().isBlank()
-          && labeled.getWidth() > 0) {
-        for (Node part : labeled.getChildrenUnmodifiable()) {
-          if (part instanceof Text shown
-              && part.isVisible()
-              && shown.getText() != null
-              && !shown.getText().equals(labeled.getText())) {
-            cut.add(
-                (labeled.getId() == null
-                        ? labeled.getClass().getSimpleName()
-                        : "#" + labeled.getId())
-                    + " shows \""
-                    + shown.getText()
-                    + "\" for \""
-                    + labeled.getText()
-                    + "\"");
-          }
-        }
-      }
-      if (child instanceof Labeled labeled
-          && labeled.isWrapText()
-          && labeled.getText() != null
-          && labeled.getWidth() > 0) {
-        // A wrapping label squeezed narrower than one of its words breaks it letter by letter.
-        double room =
-            labeled.getWidth() - labeled.snappedLeftInset() - labeled.snappedRightInset() + 0.5;
-        for (String word : labeled.getText().split("\\s+")) {
-          Text measured = new Text(word);
-          measured.setFont(labeled.getFont());
-          if (!word.isEmpty() && measured.getLayoutBounds().getWidth() > room) {
-            cut.add(
-                (labeled.getId() == null
-                        ? labeled.getClass().getSimpleName()
-                        : "#" + labeled.getId())
-                    + " is narrower than \""
-                    + word
-                    + "\" in \""
-                    + labeled.getText()
-                    + "\"");
-            break;
-          }
-        }
-      }
-      if (child instanceof Parent inner) {
-        cutTexts(inner, cut);
-      }
-    }
-    return cut;
-  }
-
-  private static Path screensFolder() {
-    return Boolean.getBoolean("screenshots")
-        ? Path.of("src", "site", "screens")
-        : Path.of("target", "screens");
-  }
-
-  private void save(Path file, int[] size) throws Exception {
-    WritableImage image = fx(() -> window.getScene().snapshot(null));
-    BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-    assertThat(picture.getWidth()).isEqualTo(size[0]);
-    assertThat(picture.getHeight()).isEqualTo(size[1]);
-    Files.createDirectories(file.getParent());
-    try {
-      ImageIO.write(picture, "png", file.toFile());
-    } catch (IOException e) {
-      throw new AssertionError("could not write the picture " + file, e);
-    }
   }
 }

@@ -5,33 +5,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.stagewise.history.TestPictures;
 import com.stagewise.ui.FilePicker;
 import com.stagewise.ui.Step;
-import java.awt.image.BufferedImage;
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
-import javafx.application.Platform;
-import javafx.embed.swing.SwingFXUtils;
-import javafx.scene.Node;
-import javafx.scene.Parent;
-import javafx.scene.control.Labeled;
-import javafx.scene.image.WritableImage;
-import javafx.scene.text.Text;
-import javafx.stage.Stage;
-import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
-import org.testfx.api.FxRobot;
-import org.testfx.api.FxToolkit;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * The close-out's photo of the board and check after the repair in a real (headless) window: a demo
@@ -43,62 +22,9 @@ import org.testfx.util.WaitForAsyncUtils;
  * history screens are checked for cut texts at 1024×600 and 1280×800, and their pictures saved
  * under {@code target/screens/closeout-flow}.
  */
-class CloseOutFlowTest {
-  /** The demo unit worked on: a mixing-desk channel board with a line driver stage. */
-  private static final String SERIAL = "NF8-22019";
+class CloseOutFlowTest extends WindowFlow {
 
-  private static final double VCC = 14.96;
-  private static final double VEE = -14.97;
-
-  private static final int[][] SIZES = {{1024, 600}, {1280, 800}};
-
-  @TempDir Path temp;
-
-  private Workshop workshop;
-  private BenchApp app;
-  private Stage window;
-  private final FxRobot robot = new FxRobot();
   private final List<String> opened = new ArrayList<>();
-
-  @BeforeAll
-  static void toolkit() throws Exception {
-    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
-    try {
-      Platform.startup(() -> {});
-    } catch (IllegalStateException alreadyRunning) {
-      // Another test class started the toolkit first.
-    }
-    Platform.setImplicitExit(false);
-    FxToolkit.toolkitContext().setSetupTimeoutInMillis(180_000);
-  }
-
-  @BeforeEach
-  void open() throws Exception {
-    DataFolder folder =
-        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
-    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
-    window =
-        FxToolkit.registerStage(
-            () -> {
-              Stage stage = new Stage();
-              app = BenchApp.build(workshop);
-              stage.setScene(app.scene());
-              stage.setTitle("Stagewise — bench");
-              stage.setWidth(BenchApp.WIDTH);
-              stage.setHeight(BenchApp.HEIGHT);
-              stage.show();
-              app.cautionOnFirstRun();
-              return stage;
-            });
-    settle();
-  }
-
-  @AfterEach
-  void close() throws Exception {
-    FxToolkit.cleanupStages();
-    app.close();
-    workshop.close();
-  }
 
   /** The chooser answers with {@code file}, as a technician picking it would. */
   private void chooserGives(Path file) throws Exception {
@@ -125,23 +51,7 @@ class CloseOutFlowTest {
 
   @Test
   void photoAndCheckAfterRepair_atCloseOut_areShownInTheHistory() throws Exception {
-    robot.clickOn("#caution-ok");
-    settle();
-    for (char c : SERIAL.toCharArray()) {
-      robot.clickOn("#serial-key-" + c);
-    }
-    robot.clickOn("#serial-search");
-    settle();
-    robot.clickOn("#symptom").write("Channel 1 dead after a fall");
-    robot.clickOn("#open-case");
-    settle();
-    robot.clickOn("#caution-ok");
-    settle();
-    clickCell("#stage-library", "Channel line driver");
-    settle();
-    robot.clickOn("#use-stage");
-    settle();
-    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
+    openLineDriverCase("Channel 1 dead after a fall");
     typeReading(VCC);
     typeReading(VEE);
 
@@ -223,30 +133,6 @@ class CloseOutFlowTest {
         .isEqualTo(png);
   }
 
-  /** Taps a control after scrolling the screen to it, as a finger would. */
-  private void tap(String query) throws Exception {
-    fx(
-        () -> {
-          Node node = robot.lookup(query).query();
-          Node up = node.getParent();
-          while (up != null && !(up instanceof javafx.scene.control.ScrollPane)) {
-            up = up.getParent();
-          }
-          if (up instanceof javafx.scene.control.ScrollPane scroll) {
-            Node content = scroll.getContent();
-            double y = content.sceneToLocal(node.localToScene(node.getBoundsInLocal())).getMinY();
-            double room =
-                content.getBoundsInLocal().getHeight() - scroll.getViewportBounds().getHeight();
-            if (room > 0) {
-              scroll.setVvalue(Math.max(0, Math.min(1, (y - 40) / room)));
-            }
-          }
-          return null;
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-    robot.clickOn(query);
-  }
-
   private List<String> texts(String box) throws Exception {
     return fx(
         () ->
@@ -255,65 +141,8 @@ class CloseOutFlowTest {
                 .toList());
   }
 
-  private void clickCell(String list, String startOfText) {
-    robot.clickOn(
-        robot
-            .lookup(list + " .list-cell")
-            .match(
-                (javafx.scene.control.ListCell<?> cell) ->
-                    cell.getText() != null && cell.getText().startsWith(startOfText))
-            .<javafx.scene.control.ListCell<?>>query());
-  }
-
   private void typeAfterRepair(double volts) throws Exception {
-    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
-    if (volts < 0) {
-      tap("#after-repair-key-sign");
-    }
-    for (char c : text.toCharArray()) {
-      tap("#after-repair-key-" + (c == '.' ? "point" : String.valueOf(c)));
-    }
-    tap("#after-repair-enter");
-    settle();
-  }
-
-  private String text(String query) throws Exception {
-    return fx(
-        () -> {
-          var node = robot.lookup(query).query();
-          if (node instanceof javafx.scene.control.Labeled labeled) {
-            return labeled.getText();
-          }
-          throw new AssertionError(query + " is not a text node");
-        });
-  }
-
-  private void typeReading(double volts) throws Exception {
-    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
-    if (volts < 0) {
-      robot.clickOn("#reading-key-sign");
-    }
-    for (char c : text.toCharArray()) {
-      robot.clickOn("#reading-key-" + (c == '.' ? "point" : String.valueOf(c)));
-    }
-    robot.clickOn("#reading-enter");
-    settle();
-  }
-
-  private static <T> T fx(Callable<T> work) throws Exception {
-    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
-  }
-
-  /** Waits until the background work is done and the screen has caught up. */
-  private void settle() throws Exception {
-    WaitForAsyncUtils.waitFor(
-        90,
-        TimeUnit.SECONDS,
-        () -> {
-          WaitForAsyncUtils.waitForFxEvents();
-          return fx(() -> app.idle());
-        });
-    WaitForAsyncUtils.waitForFxEvents();
+    typeOnPad("after-repair", volts);
   }
 
   /**
@@ -321,84 +150,11 @@ class CloseOutFlowTest {
    * and saves its picture under target/screens/closeout-flow.
    */
   private void shoot(String name) throws Exception {
-    for (int[] size : SIZES) {
-      fx(
-          () -> {
-            window.setWidth(size[0]);
-            window.setHeight(size[1]);
-            return null;
-          });
-      WaitForAsyncUtils.waitFor(
-          30,
-          TimeUnit.SECONDS,
-          () ->
-              fx(
-                  () ->
-                      window.getScene().getWidth() == size[0]
-                          && window.getScene().getHeight() == size[1]));
-      WaitForAsyncUtils.waitForFxEvents();
-      fx(
-          () -> {
-            window.getScene().getRoot().applyCss();
-            window.getScene().getRoot().layout();
-            return null;
-          });
-      WaitForAsyncUtils.waitForFxEvents();
-      String where = size[0] + "x" + size[1];
-      List<String> cut = fx(() -> cutTexts(window.getScene().getRoot(), new ArrayList<>()));
-      assertThat(cut).as("texts cut short on %s at %s", name, where).isEmpty();
-      WritableImage image = fx(() -> window.getScene().snapshot(null));
-      BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-      Path file = Path.of("target", "screens", "closeout-flow", where, name + ".png");
-      Files.createDirectories(file.getParent());
-      try {
-        ImageIO.write(picture, "png", file.toFile());
-      } catch (IOException e) {
-        throw new AssertionError("could not write the picture " + file, e);
-      }
-    }
-    fx(
-        () -> {
-          window.setWidth(BenchApp.WIDTH);
-          window.setHeight(BenchApp.HEIGHT);
-          return null;
+    atSizes(
+        new int[][] {SMALL, LAPTOP},
+        (size, where) -> {
+          assertNothingCut(name, where);
+          savePicture(Path.of("target", "screens", "closeout-flow", where, name + ".png"));
         });
-    WaitForAsyncUtils.waitFor(
-        30, TimeUnit.SECONDS, () -> fx(() -> window.getScene().getWidth() == BenchApp.WIDTH));
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /** Returns every visible text that its control shows shortened (with an ellipsis). */
-  private static List<String> cutTexts(Parent parent, List<String> cut) {
-    for (Node child : parent.getChildrenUnmodifiable()) {
-      if (!child.isVisible()) {
-        continue;
-      }
-      if (child instanceof Labeled labeled
-          && labeled.getText() != null
-          && !labeled.getText().isBlank()
-          && labeled.getWidth() > 0) {
-        for (Node part : labeled.getChildrenUnmodifiable()) {
-          if (part instanceof Text shown
-              && part.isVisible()
-              && shown.getText() != null
-              && !shown.getText().equals(labeled.getText())) {
-            cut.add(
-                (labeled.getId() == null
-                        ? labeled.getClass().getSimpleName()
-                        : "#" + labeled.getId())
-                    + " shows \""
-                    + shown.getText()
-                    + "\" for \""
-                    + labeled.getText()
-                    + "\"");
-          }
-        }
-      }
-      if (child instanceof Parent inner) {
-        cutTexts(inner, cut);
-      }
-    }
-    return cut;
   }
 }

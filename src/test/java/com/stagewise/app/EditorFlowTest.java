@@ -8,27 +8,7 @@ import com.stagewise.history.SearchQuery;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.ui.Step;
-import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.util.Locale;
-import java.util.Map;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
-import javafx.application.Platform;
-import javafx.embed.swing.SwingFXUtils;
-import javafx.scene.image.WritableImage;
-import javafx.stage.Stage;
-import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
-import org.testfx.api.FxRobot;
-import org.testfx.api.FxToolkit;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * Builds a stage from empty in the stage editor by taps alone (rails, input, a section, parts, each
@@ -37,58 +17,7 @@ import org.testfx.util.WaitForAsyncUtils;
  *
  * <p>With {@code -Dscreenshots=true} it writes the editor's pictures to src/site/screens.
  */
-class EditorFlowTest {
-  private static final String SERIAL = "NF8-22019";
-
-  /** Volts from a rail to the clamped output of a classic-bipolar op-amp (DESIGN.md). */
-  private static final double HEADROOM = 1.5;
-
-  private static final double VCC = 14.96;
-  private static final double VEE = -14.97;
-
-  @TempDir Path temp;
-
-  private Workshop workshop;
-  private BenchApp app;
-  private Stage window;
-  private final FxRobot robot = new FxRobot();
-
-  @BeforeAll
-  static void toolkit() throws Exception {
-    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
-    try {
-      Platform.startup(() -> {});
-    } catch (IllegalStateException alreadyRunning) {
-      // Another test class started the toolkit first.
-    }
-    Platform.setImplicitExit(false);
-  }
-
-  @BeforeEach
-  void open() throws Exception {
-    DataFolder folder =
-        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
-    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
-    window =
-        FxToolkit.registerStage(
-            () -> {
-              Stage stage = new Stage();
-              app = BenchApp.build(workshop);
-              stage.setScene(app.scene());
-              stage.setTitle("Stagewise — bench");
-              stage.show();
-              app.cautionOnFirstRun();
-              return stage;
-            });
-    settle();
-  }
-
-  @AfterEach
-  void close() throws Exception {
-    FxToolkit.cleanupStages();
-    app.close();
-    workshop.close();
-  }
+class EditorFlowTest extends WindowFlow {
 
   @Test
   void stageBuiltFromEmptyByTouch_diagnosesAnOpenFeedbackResistorAndClosesTheCase()
@@ -145,7 +74,7 @@ class EditorFlowTest {
 
     // Readings of an open R2, as the diagnosis asks for them (rails first).
     for (int probe = 0; probe < 8 && !text("#probe-call").startsWith("No further"); probe++) {
-      typeReading(openFeedbackResistor(currentProbeAt()));
+      typeReading(openFeedbackResistor(currentProbeAt(), "N1", "N2"));
       Diagnosis now = fx(() -> app.bench().diagnosisProperty().get());
       if (now.suspects().get(0).probability() > 0.8
           && now.suspects().get(0).group().contains("R2:open")) {
@@ -183,31 +112,6 @@ class EditorFlowTest {
         .anySatisfy(sheet -> assertThat(sheet.title()).isEqualTo("New stage"));
   }
 
-  /**
-   * Returns what the stage with R2 open reads at a test point (N1 is the inverting input's net, N2
-   * the output's, as the editor named them).
-   */
-  private static double openFeedbackResistor(String at) {
-    Map<String, Double> dc =
-        Map.ofEntries(
-            Map.entry("U1.8", VCC),
-            Map.entry("VCC", VCC),
-            Map.entry("U1.4", VEE),
-            Map.entry("VEE", VEE),
-            Map.entry("U1.1", VEE + HEADROOM),
-            Map.entry("N2", VEE + HEADROOM),
-            Map.entry("U1.2", 1.0),
-            Map.entry("N1", 1.0),
-            Map.entry("IN", 1.0),
-            Map.entry("U1.3", 0.0),
-            Map.entry("GND", 0.0));
-    Double volts = dc.get(at);
-    if (volts == null) {
-      throw new AssertionError("the flow asked for an unexpected test point: " + at);
-    }
-    return volts;
-  }
-
   private String currentProbeAt() throws Exception {
     String call = text("#probe-call");
     return call.replace("Probe ", "")
@@ -216,22 +120,13 @@ class EditorFlowTest {
         .replaceAll(" \\(AC.*", "");
   }
 
-  private void typeReading(double volts) throws Exception {
-    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
-    if (volts < 0) {
-      robot.clickOn("#reading-key-sign");
-    }
-    for (char c : text.toCharArray()) {
-      robot.clickOn("#reading-key-" + (c == '.' ? "point" : String.valueOf(c)));
-    }
-    tap("#reading-enter");
-  }
-
   /**
-   * Taps a node; when it lies outside the window (down a long panel), first swipes the panel it
-   * sits in towards it, as a finger would.
+   * Taps a node and waits for what it starts; when it lies outside the window (down a long panel),
+   * first swipes the panel it sits in towards it, as a finger would (this flow swipes rather than
+   * scrolls, to try the screens' panels by touch).
    */
-  private void tap(String query) throws Exception {
+  @Override
+  void tap(String query) throws Exception {
     try {
       swipeToAndTap(query);
     } catch (Exception | AssertionError e) {
@@ -301,47 +196,7 @@ class EditorFlowTest {
     return null;
   }
 
-  private String text(String query) throws Exception {
-    return fx(
-        () -> {
-          var node = robot.lookup(query).query();
-          if (node instanceof javafx.scene.control.Labeled labeled) {
-            return labeled.getText();
-          }
-          if (node instanceof javafx.scene.control.TextInputControl input) {
-            return input.getText();
-          }
-          throw new AssertionError(query + " is not a text node");
-        });
-  }
-
-  private static <T> T fx(Callable<T> work) throws Exception {
-    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
-  }
-
-  private void settle() throws Exception {
-    WaitForAsyncUtils.waitFor(
-        90,
-        TimeUnit.SECONDS,
-        () -> {
-          WaitForAsyncUtils.waitForFxEvents();
-          return fx(() -> app.idle());
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
   private void shoot(String name) throws Exception {
-    WritableImage image = fx(() -> window.getScene().snapshot(null));
-    BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-    Path folder =
-        Boolean.getBoolean("screenshots")
-            ? Path.of("src", "site", "screens")
-            : Path.of("target", "screens");
-    Files.createDirectories(folder);
-    try {
-      ImageIO.write(picture, "png", folder.resolve(name + ".png").toFile());
-    } catch (IOException e) {
-      throw new AssertionError("could not write the picture " + name, e);
-    }
+    savePicture(screensFolder().resolve(name + ".png"));
   }
 }

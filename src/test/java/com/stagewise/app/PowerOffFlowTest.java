@@ -8,36 +8,16 @@ import com.stagewise.diagnosis.ProbeAdvice;
 import com.stagewise.diagnosis.Suspect;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.StoredReading;
-import com.stagewise.ui.Step;
 import com.stagewise.ui.readings.ProbePoint;
-import java.awt.image.BufferedImage;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.concurrent.Callable;
-import java.util.concurrent.TimeUnit;
-import javafx.application.Platform;
-import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Node;
-import javafx.scene.Parent;
 import javafx.scene.control.ComboBox;
-import javafx.scene.control.Labeled;
-import javafx.scene.image.WritableImage;
 import javafx.scene.text.Text;
-import javafx.stage.Stage;
-import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
-import org.testfx.api.FxRobot;
-import org.testfx.api.FxToolkit;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * The readings screen's power-off mode in a real (headless) window, on the demo shop's mixing desk
@@ -53,14 +33,7 @@ import org.testfx.util.WaitForAsyncUtils;
  *
  * <p>With {@code -Dscreenshots=true} the power-off picture goes to src/site/screens.
  */
-class PowerOffFlowTest {
-  private static final String SERIAL = "NF8-22019";
-
-  /** Volts from a rail to a clamped classic-bipolar output (DESIGN.md, common practice). */
-  private static final double HEADROOM = 1.5;
-
-  private static final double VCC = 14.96;
-  private static final double VEE = -14.97;
+class PowerOffFlowTest extends WindowFlow {
 
   /** Where each test point of the line driver sits (its stage sheet in the demo shop). */
   private static final Map<String, String> NET =
@@ -75,88 +48,19 @@ class PowerOffFlowTest {
           Map.entry("R2.1", "SUM"),
           Map.entry("R2.2", "OUT"));
 
-  @TempDir Path temp;
-
-  private Workshop workshop;
-  private BenchApp app;
-  private Stage window;
-  private final FxRobot robot = new FxRobot();
-
-  @BeforeAll
-  static void toolkit() throws Exception {
-    java.util.logging.Logger.getLogger("javafx").setLevel(java.util.logging.Level.SEVERE);
-    try {
-      Platform.startup(() -> {});
-    } catch (IllegalStateException alreadyRunning) {
-      // Another test class started the toolkit first.
-    }
-    Platform.setImplicitExit(false);
-    FxToolkit.toolkitContext().setSetupTimeoutInMillis(180_000);
-  }
-
-  @BeforeEach
-  void open() throws Exception {
-    DataFolder folder =
-        new DataFolder(temp.resolve("data"), temp.resolve("data").resolve("stagewise.db"));
-    workshop = Workshop.open(folder, true, Path.of("data", "stages"));
-    window =
-        FxToolkit.registerStage(
-            () -> {
-              Stage stage = new Stage();
-              app = BenchApp.build(workshop);
-              stage.setScene(app.scene());
-              stage.setTitle("Stagewise — bench");
-              stage.setWidth(BenchApp.WIDTH);
-              stage.setHeight(BenchApp.HEIGHT);
-              stage.show();
-              app.cautionOnFirstRun();
-              return stage;
-            });
-    settle();
-  }
-
-  @AfterEach
-  void close() throws Exception {
-    FxToolkit.cleanupStages();
-    app.close();
-    workshop.close();
-  }
-
   @Test
   void ohmsProbe_followedInPowerOffMode_narrowsTheSuspectsToTheOpenFeedbackResistor()
       throws Exception {
-    robot.clickOn("#caution-ok");
-    settle();
-    for (char c : SERIAL.toCharArray()) {
-      robot.clickOn("#serial-key-" + c);
-    }
-    robot.clickOn("#serial-search");
-    settle();
-    robot.clickOn("#symptom").write("Channel 1 output pinned negative, no audio");
-    robot.clickOn("#open-case");
-    settle();
-    robot.clickOn("#caution-ok");
-    settle();
-    robot.clickOn(
-        robot
-            .lookup("#stage-library .list-cell")
-            .match(
-                (javafx.scene.control.ListCell<?> cell) ->
-                    cell.getText() != null && cell.getText().startsWith("Channel line driver"))
-            .<javafx.scene.control.ListCell<?>>query());
-    settle();
-    robot.clickOn("#use-stage");
-    settle();
-    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
+    openLineDriverCase("Channel 1 output pinned negative, no audio");
 
     // Powered: the rails, then the output and the inverting input tapped on the package drawing
     // (dual-8: pin 1 out A, pin 2 in− A; DESIGN.md), read as an open R2 gives them.
-    typeVolts(VCC);
-    typeVolts(VEE);
+    typeReading(VCC);
+    typeReading(VEE);
     robot.clickOn("#package-drawing #pin-1");
-    typeVolts(VEE + HEADROOM);
+    typeReading(VEE + HEADROOM);
     robot.clickOn("#package-drawing #pin-2");
-    typeVolts(1.0);
+    typeReading(1.0);
     Suspect first = fx(() -> app.bench().diagnosisProperty().get().suspects().get(0));
     assertThat(first.group()).contains("R2:open", "R1:short");
     assertThat(visible("#poweroff-banner")).isFalse();
@@ -232,27 +136,11 @@ class PowerOffFlowTest {
     assertThat(text("#ohms-to")).contains("OUT");
 
     // Back to volts: nothing is lost, the banner goes.
-    scrollToTop();
+    scrollToTop("#mode-volts");
     robot.clickOn("#mode-volts");
     settle();
     assertThat(visible("#poweroff-banner")).isFalse();
     assertThat(fx(() -> app.bench().readings().size())).isEqualTo(6);
-  }
-
-  /** Scrolls the screen to its top, as a finger would, to reach the mode switch. */
-  private void scrollToTop() throws Exception {
-    fx(
-        () -> {
-          Node node = robot.lookup("#mode-volts").query();
-          while (node != null && !(node instanceof javafx.scene.control.ScrollPane)) {
-            node = node.getParent();
-          }
-          if (node != null) {
-            ((javafx.scene.control.ScrollPane) node).setVvalue(0);
-          }
-          return null;
-        });
-    WaitForAsyncUtils.waitForFxEvents();
   }
 
   /** Returns every text drawn on the band charts of the ohms readings' cards. */
@@ -284,18 +172,6 @@ class PowerOffFlowTest {
       return "0.3"; // a joint against its own net: the test leads alone (common practice)
     }
     return pair.equals("IN|SUM") ? "9k98" : "OL";
-  }
-
-  private void typeVolts(double volts) throws Exception {
-    String text = String.format(Locale.ROOT, "%.2f", Math.abs(volts));
-    if (volts < 0) {
-      robot.clickOn("#reading-key-sign");
-    }
-    for (char c : text.toCharArray()) {
-      robot.clickOn("#reading-key-" + (c == '.' ? "point" : String.valueOf(c)));
-    }
-    robot.clickOn("#reading-enter");
-    settle();
   }
 
   private void typeOhms(String shown) throws Exception {
@@ -330,136 +206,23 @@ class PowerOffFlowTest {
     settle();
   }
 
-  private boolean visible(String query) throws Exception {
-    return fx(
-        () -> {
-          Node node = robot.lookup(query).tryQuery().orElse(null);
-          while (node != null) {
-            if (!node.isVisible()) {
-              return false;
-            }
-            node = node.getParent();
-          }
-          return robot.lookup(query).tryQuery().isPresent();
-        });
-  }
-
-  private String text(String query) throws Exception {
-    return fx(
-        () -> {
-          Node node = robot.lookup(query).query();
-          if (node instanceof Labeled labeled) {
-            return labeled.getText();
-          }
-          if (node instanceof javafx.scene.control.TextInputControl input) {
-            return input.getText();
-          }
-          return "";
-        });
-  }
-
-  private static <T> T fx(Callable<T> work) throws Exception {
-    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
-  }
-
-  private void settle() throws Exception {
-    WaitForAsyncUtils.waitFor(
-        90,
-        TimeUnit.SECONDS,
-        () -> {
-          WaitForAsyncUtils.waitForFxEvents();
-          return fx(() -> app.idle());
-        });
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
   /**
    * Shows the screen at 1280×800 and 1024×600, fails when a text of the power-off parts is cut
    * short (drawn with an ellipsis), and saves a picture at each size.
    */
   private void shoot(String name) throws Exception {
-    scrollToTop();
-    for (int[] size : new int[][] {{1280, 800}, {1024, 600}}) {
-      fx(
-          () -> {
-            window.setWidth(size[0]);
-            window.setHeight(size[1]);
-            return null;
-          });
-      WaitForAsyncUtils.waitFor(
-          30,
-          TimeUnit.SECONDS,
-          () ->
-              fx(
-                  () ->
-                      window.getScene().getWidth() == size[0]
-                          && window.getScene().getHeight() == size[1]));
-      WaitForAsyncUtils.waitForFxEvents();
-      fx(
-          () -> {
-            window.getScene().getRoot().applyCss();
-            window.getScene().getRoot().layout();
-            return null;
-          });
-      WaitForAsyncUtils.waitForFxEvents();
-      String where = size[0] + "x" + size[1];
-      boolean site = Boolean.getBoolean("screenshots") && size[0] == 1280 && !name.endsWith("done");
-      Path file =
-          site
-              ? Path.of("src", "site", "screens", name + ".png")
-              : Path.of("target", "screens", where, name + ".png");
-      WritableImage image = fx(() -> window.getScene().snapshot(null));
-      BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-      Files.createDirectories(file.getParent());
-      ImageIO.write(picture, "png", file.toFile());
-      for (String part :
-          new String[] {"#poweroff-banner", "#ohms-call", "#ohms-from", "#ohms-to", "#ohms-why"}) {
-        List<String> cut =
-            fx(
-                () -> {
-                  Node node = robot.lookup(part).query();
-                  List<String> found = new ArrayList<>();
-                  cutTexts(node, found);
-                  return found;
-                });
-        assertThat(cut).as("texts cut short in %s at %s", part, where).isEmpty();
-      }
-    }
-    fx(
-        () -> {
-          window.setWidth(BenchApp.WIDTH);
-          window.setHeight(BenchApp.HEIGHT);
-          return null;
+    scrollToTop("#mode-volts");
+    atSizes(
+        new int[][] {LAPTOP, SMALL},
+        (size, where) -> {
+          boolean site =
+              Boolean.getBoolean("screenshots") && size == LAPTOP && !name.endsWith("done");
+          savePicture(
+              site
+                  ? Path.of("src", "site", "screens", name + ".png")
+                  : Path.of("target", "screens", where, name + ".png"));
+          assertNothingCut(
+              name, where, "#poweroff-banner", "#ohms-call", "#ohms-from", "#ohms-to", "#ohms-why");
         });
-    WaitForAsyncUtils.waitFor(
-        30, TimeUnit.SECONDS, () -> fx(() -> window.getScene().getWidth() == BenchApp.WIDTH));
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /**
-   * Collects every visible text its control shows shortened (its own text and the drawn differ).
-   */
-  static void cutTexts(Node node, List<String> cut) {
-    if (!node.isVisible()) {
-      return;
-    }
-    if (node instanceof Labeled labeled
-        && labeled.getText() != null
-        && !labeled.getText().isBlank()
-        && labeled.getWidth() > 0) {
-      for (Node part : labeled.getChildrenUnmodifiable()) {
-        if (part instanceof Text shown
-            && part.isVisible()
-            && shown.getText() != null
-            && !shown.getText().equals(labeled.getText())) {
-          cut.add(shown.getText() + " for " + labeled.getText());
-        }
-      }
-    }
-    if (node instanceof Parent parent) {
-      for (Node child : parent.getChildrenUnmodifiable()) {
-        cutTexts(child, cut);
-      }
-    }
   }
 }

@@ -13,7 +13,10 @@ import org.testfx.util.WaitForAsyncUtils;
 final class ScreenScroll {
   private ScreenScroll() {}
 
-  /** Scrolls the nearest scrolling pane around {@code target} so that it stands in the middle. */
+  /**
+   * Scrolls the nearest scrolling pane around {@code target} so that it stands in the middle,
+   * unless it is already wholly in sight.
+   */
   static void intoView(Node target) throws Exception {
     WaitForAsyncUtils.asyncFx(
             () -> {
@@ -23,11 +26,13 @@ final class ScreenScroll {
               }
               if (node instanceof ScrollPane pane) {
                 Node content = pane.getContent();
-                double y =
-                    content
-                        .sceneToLocal(target.localToScene(target.getBoundsInLocal()))
-                        .getCenterY();
+                var place = content.sceneToLocal(target.localToScene(target.getBoundsInLocal()));
+                double y = place.getCenterY();
                 double view = pane.getViewportBounds().getHeight();
+                double top = -pane.getViewportBounds().getMinY();
+                if (place.getMinY() >= top && place.getMaxY() <= top + view) {
+                  return; // already wholly in sight: a finger taps it where it is
+                }
                 double room = content.getBoundsInLocal().getHeight() - view;
                 if (room > 0) {
                   pane.setVvalue(Math.max(0, Math.min(1, (y - view / 2) / room)));
