@@ -5,6 +5,7 @@ import com.stagewise.solver.Conditions;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.IntStream;
 
 /**
  * Builds the hypotheses of a stage: every fault of the catalogue with its prior and the predictions
@@ -47,13 +48,21 @@ final class Hypotheses {
       conditions = conditions.withDriven(e.getKey(), e.getValue());
     }
     Predictor predictor = new Predictor(points, stage);
-    List<Diagnoser.Hypothesis> hypotheses = new ArrayList<>();
-    for (Fault fault : catalogue.faults()) {
-      List<Scenario> scenarios = FaultModel.scenarios(stage, conditions, fault);
-      List<Prediction> predictions = predictAll(predictor, scenarios);
-      hypotheses.add(new Diagnoser.Hypothesis(fault, priors.get(fault.id()), predictions));
-    }
-    return hypotheses;
+    Conditions base = conditions;
+    List<Fault> faults = catalogue.faults();
+    // The hypotheses are independent of each other: each is predicted on its own (on every core
+    // the common pool offers) and the list is assembled in the catalogue's order, so the result is
+    // the same, to the last bit, whatever the number of threads.
+    return IntStream.range(0, faults.size())
+        .parallel()
+        .mapToObj(
+            i -> {
+              Fault fault = faults.get(i);
+              List<Scenario> scenarios = FaultModel.scenarios(stage, base, fault);
+              List<Prediction> predictions = predictAll(predictor, scenarios);
+              return new Diagnoser.Hypothesis(fault, priors.get(fault.id()), predictions);
+            })
+        .toList();
   }
 
   private static double mid(com.stagewise.circuit.Range range) {

@@ -41,8 +41,10 @@ final class Predictor {
 
   private final TestPoints points;
   private final double span;
+
+  /** Pin maps by list of sections; shared by the threads that predict the hypotheses. */
   private final Map<List<Amplifier>, Map<String, String>> pinCache =
-      new java.util.IdentityHashMap<>();
+      java.util.Collections.synchronizedMap(new java.util.IdentityHashMap<>());
 
   Predictor(TestPoints points, Stage base) {
     this.points = points;

@@ -22,12 +22,29 @@ final class DenseLu {
     private final double[][] lu;
     private final int[] order;
 
+    /**
+     * Per row, the columns left of the diagonal (of L) and right of it (of U) that hold a non-zero
+     * entry, in increasing order. A stage's matrix is sparse (a net meets a few parts), so the
+     * substitutions run over these alone; the terms left out are exactly zero, so every sum is the
+     * same as over the whole row.
+     */
+    private final int[][] lower;
+
+    private final int[][] upper;
+
     /** Entries of the inverse's diagonal found so far (NaN: not yet), kept for repeated tests. */
     private double[] inverseDiagonal;
 
     private Factors(double[][] lu, int[] order) {
       this.lu = lu;
       this.order = order;
+      int n = order.length;
+      this.lower = new int[n][];
+      this.upper = new int[n][];
+      for (int i = 0; i < n; i++) {
+        lower[i] = nonZero(lu[i], 0, i);
+        upper[i] = nonZero(lu[i], i + 1, n);
+      }
     }
 
     /** Returns x with {@code a·x = b} for the factorised a; b is not changed. */
@@ -37,7 +54,7 @@ final class DenseLu {
       for (int i = 0; i < n; i++) {
         double sum = b[order[i]];
         double[] row = lu[i];
-        for (int j = 0; j < i; j++) {
+        for (int j : lower[i]) {
           sum -= row[j] * y[j];
         }
         y[i] = sum;
@@ -45,7 +62,7 @@ final class DenseLu {
       for (int i = n - 1; i >= 0; i--) {
         double sum = y[i];
         double[] row = lu[i];
-        for (int j = i + 1; j < n; j++) {
+        for (int j : upper[i]) {
           sum -= row[j] * y[j];
         }
         y[i] = sum / row[i];
@@ -75,15 +92,17 @@ final class DenseLu {
       for (int i = first; i < n; i++) {
         double sum = i == first ? 1 : 0;
         double[] row = lu[i];
-        for (int j = first; j < i; j++) {
-          sum -= row[j] * y[j];
+        for (int j : lower[i]) {
+          if (j >= first) {
+            sum -= row[j] * y[j];
+          }
         }
         y[i] = sum;
       }
       for (int i = n - 1; i >= k; i--) {
         double sum = y[i];
         double[] row = lu[i];
-        for (int j = i + 1; j < n; j++) {
+        for (int j : upper[i]) {
           sum -= row[j] * y[j];
         }
         y[i] = sum / row[i];
@@ -134,12 +153,14 @@ final class DenseLu {
         order[pivot] = o;
       }
       double[] pivotRow = a[col];
+      // Only the pivot row's non-zero entries change the rows below (the rest would subtract 0).
+      int[] columns = nonZero(pivotRow, col + 1, n);
       for (int row = col + 1; row < n; row++) {
         double[] target = a[row];
         double factor = target[col] / pivotRow[col];
         target[col] = factor;
         if (factor != 0) {
-          for (int j = col + 1; j < n; j++) {
+          for (int j : columns) {
             target[j] -= factor * pivotRow[j];
           }
         }
@@ -157,10 +178,22 @@ final class DenseLu {
     private final double[][] im;
     private final int[] order;
 
+    /** Per row, the non-zero columns of L and of U, as in {@link Factors}. */
+    private final int[][] lower;
+
+    private final int[][] upper;
+
     private ComplexFactors(double[][] re, double[][] im, int[] order) {
       this.re = re;
       this.im = im;
       this.order = order;
+      int n = order.length;
+      this.lower = new int[n][];
+      this.upper = new int[n][];
+      for (int i = 0; i < n; i++) {
+        lower[i] = nonZero(re[i], im[i], 0, i);
+        upper[i] = nonZero(re[i], im[i], i + 1, n);
+      }
     }
 
     /** Returns {@code {re, im}} of x with {@code a·x = br + j·bi}; b is not changed. */
@@ -173,7 +206,7 @@ final class DenseLu {
         double si = bi[order[i]];
         double[] lr = re[i];
         double[] li = im[i];
-        for (int j = 0; j < i; j++) {
+        for (int j : lower[i]) {
           sr -= lr[j] * yr[j] - li[j] * yi[j];
           si -= lr[j] * yi[j] + li[j] * yr[j];
         }
@@ -185,7 +218,7 @@ final class DenseLu {
         double si = yi[i];
         double[] ur = re[i];
         double[] ui = im[i];
-        for (int j = i + 1; j < n; j++) {
+        for (int j : upper[i]) {
           sr -= ur[j] * yr[j] - ui[j] * yi[j];
           si -= ur[j] * yi[j] + ui[j] * yr[j];
         }
@@ -248,6 +281,7 @@ final class DenseLu {
       double pr = ar[col][col];
       double pi = ai[col][col];
       double denominator = pr * pr + pi * pi;
+      int[] columns = nonZero(ar[col], ai[col], col + 1, n);
       for (int row = col + 1; row < n; row++) {
         double fr = (ar[row][col] * pr + ai[row][col] * pi) / denominator;
         double fi = (ai[row][col] * pr - ar[row][col] * pi) / denominator;
@@ -256,7 +290,7 @@ final class DenseLu {
         if (fr == 0 && fi == 0) {
           continue;
         }
-        for (int j = col + 1; j < n; j++) {
+        for (int j : columns) {
           double xr = ar[col][j];
           double xi = ai[col][j];
           ar[row][j] -= fr * xr - fi * xi;
@@ -302,6 +336,7 @@ final class DenseLu {
       double pr = ar[col][col];
       double pi = ai[col][col];
       double denominator = pr * pr + pi * pi;
+      int[] columns = nonZero(ar[col], ai[col], col, n);
       for (int row = col + 1; row < n; row++) {
         // factor = a[row][col] / pivot, in complex arithmetic
         double fr = (ar[row][col] * pr + ai[row][col] * pi) / denominator;
@@ -309,7 +344,7 @@ final class DenseLu {
         if (fr == 0 && fi == 0) {
           continue;
         }
-        for (int j = col; j < n; j++) {
+        for (int j : columns) {
           double xr = ar[col][j];
           double xi = ai[col][j];
           ar[row][j] -= fr * xr - fi * xi;
@@ -326,7 +361,7 @@ final class DenseLu {
     for (int row = n - 1; row >= 0; row--) {
       double sr = br[row];
       double si = bi[row];
-      for (int j = row + 1; j < n; j++) {
+      for (int j : nonZero(ar[row], ai[row], row + 1, n)) {
         sr -= ar[row][j] * xr[j] - ai[row][j] * xi[j];
         si -= ar[row][j] * xi[j] + ai[row][j] * xr[j];
       }
@@ -337,6 +372,42 @@ final class DenseLu {
       xi[row] = (si * dr - sr * di) / d;
     }
     return new double[][] {xr, xi};
+  }
+
+  /** The columns from {@code from} (inclusive) to {@code to} (exclusive) where row is not 0. */
+  private static int[] nonZero(double[] row, int from, int to) {
+    int count = 0;
+    for (int j = from; j < to; j++) {
+      if (row[j] != 0) {
+        count++;
+      }
+    }
+    int[] columns = new int[count];
+    int next = 0;
+    for (int j = from; j < to; j++) {
+      if (row[j] != 0) {
+        columns[next++] = j;
+      }
+    }
+    return columns;
+  }
+
+  /** The columns from {@code from} to {@code to} (exclusive) where re or im is not 0. */
+  private static int[] nonZero(double[] re, double[] im, int from, int to) {
+    int count = 0;
+    for (int j = from; j < to; j++) {
+      if (re[j] != 0 || im[j] != 0) {
+        count++;
+      }
+    }
+    int[] columns = new int[count];
+    int next = 0;
+    for (int j = from; j < to; j++) {
+      if (re[j] != 0 || im[j] != 0) {
+        columns[next++] = j;
+      }
+    }
+    return columns;
   }
 
   private static void swap(double[][] a, double[] b, double[] scale, int i, int j) {

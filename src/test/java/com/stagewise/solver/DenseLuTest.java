@@ -118,6 +118,38 @@ class DenseLuTest {
     }
 
     @Test
+    void tridiagonalPoisson_givesTheClosedFormSolution() {
+      // The second-difference system of the textbook finite-difference Poisson problem, −x(i−1) +
+      // 2·x(i) − x(i+1) = 1 with x(0) = x(n+1) = 0, has x(i) = i·(n + 1 − i)/2 (the discrete
+      // parabola, as in numerical analysis textbooks). Sparse like a chain's nodal matrix: the
+      // factors keep only the non-zero entries, and the answer must not notice.
+      int n = 60;
+      double[][] a = new double[n][n];
+      double[] b = new double[n];
+      for (int i = 0; i < n; i++) {
+        a[i][i] = 2;
+        if (i > 0) {
+          a[i][i - 1] = -1;
+        }
+        if (i < n - 1) {
+          a[i][i + 1] = -1;
+        }
+        b[i] = 1;
+      }
+      DenseLu.Factors factors = DenseLu.factor(a);
+      double[] x = factors.solve(b);
+      for (int i = 1; i <= n; i++) {
+        assertThat(x[i - 1]).as("x(%d)", i).isCloseTo(i * (n + 1.0 - i) / 2, within(1e-9));
+      }
+      // The inverse's diagonal of the same matrix: (K⁻¹)ᵢᵢ = i·(n + 1 − i)/(n + 1).
+      for (int i = 1; i <= n; i += 7) {
+        assertThat(factors.inverseDiagonal(i - 1))
+            .as("inverse (%d, %d)", i, i)
+            .isCloseTo(i * (n + 1.0 - i) / (n + 1), within(1e-9));
+      }
+    }
+
+    @Test
     void singularMatrix_isNull() {
       double[][] dependent = {{1, 2, 3}, {2, 4, 6}, {1, 0, 1}};
       assertThat(DenseLu.factor(dependent)).isNull();
@@ -174,6 +206,53 @@ class DenseLuTest {
         checked++;
       }
       assertThat(checked).as("well-conditioned trials").isGreaterThan(150);
+    }
+
+    @Test
+    void keptFactors_agreeWithEjml() {
+      int checked = 0;
+      for (int trial = 0; trial < 100; trial++) {
+        int n = 2 + RANDOM.nextInt(40);
+        double[][] ar = stageShaped(n);
+        double[][] ai = susceptances(n);
+        double[] br = vector(n);
+        double[] bi = vector(n);
+        ZMatrixRMaj a = new ZMatrixRMaj(n, n);
+        ZMatrixRMaj b = new ZMatrixRMaj(n, 1);
+        for (int i = 0; i < n; i++) {
+          for (int j = 0; j < n; j++) {
+            a.set(i, j, ar[i][j], ai[i][j]);
+          }
+          b.set(i, 0, br[i], bi[i]);
+        }
+        ZMatrixRMaj expected = new ZMatrixRMaj(n, 1);
+        assertThat(CommonOps_ZDRM.solve(a, b, expected)).isTrue();
+        DenseLu.ComplexFactors factors = DenseLu.factorComplex(copy(ar), copy(ai));
+        assertThat(factors).as("trial %d", trial).isNotNull();
+        double[][] x = factors.solve(br, bi);
+        double[] ours = new double[2 * n];
+        double[] theirs = new double[2 * n];
+        DMatrixRMaj twice = new DMatrixRMaj(2 * n, 2 * n);
+        for (int i = 0; i < n; i++) {
+          for (int j = 0; j < n; j++) {
+            twice.set(i, j, ar[i][j]);
+            twice.set(i, n + j, -ai[i][j]);
+            twice.set(n + i, j, ai[i][j]);
+            twice.set(n + i, n + j, ar[i][j]);
+          }
+          ours[i] = x[0][i];
+          ours[n + i] = x[1][i];
+          theirs[i] = expected.getReal(i, 0);
+          theirs[n + i] = expected.getImag(i, 0);
+        }
+        double condition = rowScaledCondition(twice);
+        if (!meaningful(condition)) {
+          continue;
+        }
+        assertAgree(ours, theirs, condition, "trial " + trial);
+        checked++;
+      }
+      assertThat(checked).as("well-conditioned trials").isGreaterThan(50);
     }
 
     @Test
