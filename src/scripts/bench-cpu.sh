@@ -3,7 +3,9 @@
 # of a git revision ("before", default main) and the working tree's ("after"), alternated round by
 # round, each in a JVM of its own (DiagnosisCpuTime: warm-up, then the median of the timed runs of
 # the diagnosing thread's processor time, the wall time and the whole process's processor time).
-# Each pairing runs pinned to one core (taskset -c 0) and, where the machine has two, on two.
+# Each pairing runs pinned to one core on one thread (taskset -c 0, the common pool given no
+# workers, so the diagnosing thread's processor time is all the diagnosis's work) and, where the
+# machine has two cores, on two with the common pool as the JVM sets it up (wall time the figure).
 # Usage: src/scripts/bench-cpu.sh [REVISION] [ROUNDS] [STAGES…]   (about 5 minutes with defaults)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
@@ -22,9 +24,10 @@ find "$before/src/src/main/java" -name '*.java' > "$before/sources.txt"
 javac -nowarn -encoding UTF-8 --release 17 -cp "$deps" -d "$before/classes" @"$before/sources.txt"
 cp -r "$before/src/src/main/resources/." "$before/classes/"
 run() { # cores classes stage
-  local pin=""
+  local pin="" pool=""
   if command -v taskset >/dev/null 2>&1; then pin="taskset -c $1"; fi
-  $pin java -cp "target/test-classes:$2:$deps" com.stagewise.bench.DiagnosisCpuTime "$3" 6 40
+  if [ "$1" = "0" ]; then pool="-Djava.util.concurrent.ForkJoinPool.common.parallelism=0"; fi
+  $pin java $pool -cp "target/test-classes:$2:$deps" com.stagewise.bench.DiagnosisCpuTime "$3" 6 40
 }
 cores=("0")
 if [ "$(nproc)" -ge 2 ]; then cores+=("0,1"); fi

@@ -71,10 +71,11 @@ final class Hypotheses {
 
   private static List<Prediction> predictAll(Predictor predictor, List<Scenario> scenarios) {
     boolean grid = scenarios.size() > 1 && scenarios.stream().allMatch(Scenario::onGrid);
+    ScenarioCompiler compiler = new ScenarioCompiler();
     if (!grid) {
       List<Prediction> out = new ArrayList<>();
       for (Scenario s : scenarios) {
-        out.addAll(predictor.predict(s, true));
+        out.addAll(predictor.predict(s, true, compiler));
       }
       return out;
     }
@@ -82,7 +83,7 @@ final class Hypotheses {
     List<List<Prediction>> raw = new ArrayList<>();
     for (int i = 0; i < n; i++) {
       boolean spread = i % SPREAD_EVERY == 0 || i == n - 1;
-      raw.add(predictor.predict(scenarios.get(i), spread));
+      raw.add(predictor.predict(scenarios.get(i), spread, compiler));
     }
     // Borrow the spread of the nearest grid point that has one.
     for (int i = 0; i < n; i++) {

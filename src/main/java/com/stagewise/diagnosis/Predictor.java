@@ -55,15 +55,30 @@ final class Predictor {
     this.span = max;
   }
 
+  /** As {@link #predict(Scenario, boolean, ScenarioCompiler)}, the scenario compiled on its own. */
+  List<Prediction> predict(Scenario scenario, boolean withSpread) {
+    return predict(scenario, withSpread, new ScenarioCompiler());
+  }
+
   /**
    * Returns the predictions of a scenario: one, or two where the outcome splits.
    *
    * @param withSpread whether to compute the spread (false leaves it zero, for grid points whose
    *     spread is borrowed from a neighbour)
+   * @param compiler the compiler of this fault's scenarios (one per thread)
    */
-  List<Prediction> predict(Scenario scenario, boolean withSpread) {
+  List<Prediction> predict(Scenario scenario, boolean withSpread, ScenarioCompiler compiler) {
     Stage stage = scenario.stage();
-    Analysis cs = Analysis.of(stage, scenario.conditions());
+    Analysis cs = compiler.compile(scenario);
+    // Which net each test point reads depends only on the compiled stage's nets and sections,
+    // which the scenarios derived from one compilation share.
+    Reader reader;
+    if (compiler.attachment() instanceof Reader kept) {
+      reader = kept;
+    } else {
+      reader = reader(stage, cs);
+      compiler.attach(reader);
+    }
     if (drifting(stage)) {
       // A floating input tied to a rail stands for its bias current's drift; the current itself,
       // pushed through the tie, would move the node by hundreds of volts.
@@ -73,7 +88,6 @@ final class Predictor {
       }
       cs = cs.with(noBias.toArray(new Change[0]));
     }
-    Reader reader = reader(stage, cs);
     SolveResult outcome = cs.solve();
     if (!(outcome instanceof SolveResult.Solved settled)) {
       return List.of(unpredictable(scenario));
@@ -110,24 +124,26 @@ final class Predictor {
           perturbations.isEmpty() ? null : at.linearize(o.point).orElse(null);
       for (Perturbation p : perturbations) {
         Change change = p.change.apply(at);
-        OperatingPoint near = linear == null ? null : linear.step(change).orElse(null);
-        boolean stepped = near != null;
-        Analysis moved = null;
-        if (near == null) {
-          // A section changes state within one standard deviation: search again from this state,
-          // and solve in full only if that does not settle.
-          moved = at.with(change);
-          near = moved.settleFrom(o.point).orElse(null);
-          if (near == null) {
-            near = moved.solve() instanceof SolveResult.Solved m ? matching(m, o.point) : null;
+        double[] read = linear == null ? null : linear.stepRead(change, reader.probe);
+        if (read != null) {
+          addSquares(dcVar, reader.spread(read), dcMean);
+          // Only part values and gain move the small-signal response of a settled state.
+          if (ac && p.movesAc) {
+            addSquares(acVar, reader.ac(linear.ac(change)), acMean);
           }
+          continue;
+        }
+        // A section changes state within one standard deviation: search again from this state,
+        // and solve in full only if that does not settle.
+        Analysis moved = at.with(change);
+        OperatingPoint near = moved.settleFrom(o.point).orElse(null);
+        if (near == null) {
+          near = moved.solve() instanceof SolveResult.Solved m ? matching(m, o.point) : null;
         }
         if (near != null) {
           addSquares(dcVar, reader.dc(near), dcMean);
-          // Only part values and gain move the small-signal response of a settled state.
           if (ac && p.movesAc) {
-            Optional<AcSolution> response = stepped ? linear.ac(change) : moved.ac(near);
-            addSquares(acVar, reader.ac(response), acMean);
+            addSquares(acVar, reader.ac(moved.ac(near)), acMean);
           }
         }
       }
@@ -178,7 +194,7 @@ final class Predictor {
           : new double[points.size];
     }
 
-    private double[] spread(double[] read) {
+    double[] spread(double[] read) {
       double[] values = new double[points.size];
       for (int i = 0; i < points.size; i++) {
         // A net that the fault took every part away from reads like a bare pad: about 0 V.

@@ -112,6 +112,13 @@ public sealed interface Analysis permits CompiledStage {
     Optional<OperatingPoint> step(Change change);
 
     /**
+     * Returns the probe's nets' volts at the point {@link #step} gives (the same numbers, in the
+     * probe's order), or null where {@code step} is empty: the cheap way to read a few nets after
+     * many small changes. The probe must come from the analysis this was linearised from.
+     */
+    double[] stepRead(Change change, Probe probe);
+
+    /**
      * Returns the point that {@code with(change).settleFrom(point)} gives, found with the kept
      * factors: for a change that moves only the right-hand side of the equations (a driven voltage;
      * a section's offset, bias currents or headroom) on a stage without junctions, the one step is

@@ -277,15 +277,35 @@ final class DcEquations {
       if (o >= 0) {
         r[o] -= (x[o] - x[s]) / net.params[k].outputResistance();
       }
-      double[] coefficients = new double[3];
-      int[] terms = net.sectionTerms(k, states[k], collapsed[k], coefficients);
-      double target = net.sectionConstant(k, states[k], collapsed[k]);
-      for (int t = 0; t < terms.length; t++) {
-        target += coefficients[t] * net.volts(x, terms[t]);
-      }
-      r[s] = target - x[s];
+      r[s] = sectionTarget(k, states[k], collapsed[k], x) - x[s];
     }
     return r;
+  }
+
+  /**
+   * The value section k's state asks of its source at x: the constant of {@link
+   * Network#sectionConstant} plus the terms of {@link Network#sectionTerms}, added in the same
+   * order, without making their arrays.
+   */
+  private double sectionTarget(int k, SectionState state, boolean collapsed, double[] x) {
+    double target = net.sectionConstant(k, state, collapsed);
+    switch (state) {
+      case LINEAR -> {
+        double gain = net.params[k].gain();
+        target += gain * net.volts(x, net.inPlus[k]);
+        target += -gain * net.volts(x, net.inMinus[k]);
+      }
+      case HIGH, LOW -> {
+        if (collapsed) {
+          target += 0.5 * net.volts(x, net.vPlus[k]);
+          target += 0.5 * net.volts(x, net.vMinus[k]);
+        } else {
+          target += 1 * net.volts(x, state == SectionState.HIGH ? net.vPlus[k] : net.vMinus[k]);
+        }
+      }
+      default -> throw new IllegalStateException("a dead section has no source row");
+    }
+    return target;
   }
 
   /** Books a current from terminal t1 to terminal t2 into the residual of their rows. */

@@ -24,13 +24,17 @@ final class DenseLu {
 
     /**
      * Per row, the columns left of the diagonal (of L) and right of it (of U) that hold a non-zero
-     * entry, in increasing order. A stage's matrix is sparse (a net meets a few parts), so the
-     * substitutions run over these alone; the terms left out are exactly zero, so every sum is the
-     * same as over the whole row.
+     * entry, in increasing order; made when the factors are used a second time (a first solve runs
+     * over the whole rows, which costs what finding these costs). A stage's matrix is sparse (a net
+     * meets a few parts), so the later substitutions run over these alone; the terms left out are
+     * exactly zero, so every sum is the same as over the whole row.
      */
-    private final int[][] lower;
+    private int[][] lower;
 
-    private final int[][] upper;
+    private int[][] upper;
+
+    /** Solves done with these factors so far. */
+    private int uses;
 
     /** Entries of the inverse's diagonal found so far (NaN: not yet), kept for repeated tests. */
     private double[] inverseDiagonal;
@@ -38,17 +42,50 @@ final class DenseLu {
     private Factors(double[][] lu, int[] order) {
       this.lu = lu;
       this.order = order;
-      int n = order.length;
-      this.lower = new int[n][];
-      this.upper = new int[n][];
-      for (int i = 0; i < n; i++) {
-        lower[i] = nonZero(lu[i], 0, i);
-        upper[i] = nonZero(lu[i], i + 1, n);
+    }
+
+    private void index() {
+      if (lower == null) {
+        int n = order.length;
+        int[][] l = new int[n][];
+        int[][] u = new int[n][];
+        for (int i = 0; i < n; i++) {
+          l[i] = nonZero(lu[i], 0, i);
+          u[i] = nonZero(lu[i], i + 1, n);
+        }
+        lower = l;
+        upper = u;
       }
+    }
+
+    private double[] solveDense(double[] b) {
+      int n = order.length;
+      double[] y = new double[n];
+      for (int i = 0; i < n; i++) {
+        double sum = b[order[i]];
+        double[] row = lu[i];
+        for (int j = 0; j < i; j++) {
+          sum -= row[j] * y[j];
+        }
+        y[i] = sum;
+      }
+      for (int i = n - 1; i >= 0; i--) {
+        double sum = y[i];
+        double[] row = lu[i];
+        for (int j = i + 1; j < n; j++) {
+          sum -= row[j] * y[j];
+        }
+        y[i] = sum / row[i];
+      }
+      return y;
     }
 
     /** Returns x with {@code a·x = b} for the factorised a; b is not changed. */
     double[] solve(double[] b) {
+      if (uses++ == 0) {
+        return solveDense(b);
+      }
+      index();
       int n = order.length;
       double[] y = new double[n];
       for (int i = 0; i < n; i++) {
@@ -84,6 +121,7 @@ final class DenseLu {
       } else if (!Double.isNaN(inverseDiagonal[k])) {
         return inverseDiagonal[k];
       }
+      index();
       int first = 0;
       while (order[first] != k) {
         first++;
@@ -153,13 +191,17 @@ final class DenseLu {
         order[pivot] = o;
       }
       double[] pivotRow = a[col];
-      // Only the pivot row's non-zero entries change the rows below (the rest would subtract 0).
-      int[] columns = nonZero(pivotRow, col + 1, n);
+      // Only the pivot row's non-zero entries change the rows below (the rest would subtract 0);
+      // found when a row below needs them.
+      int[] columns = null;
       for (int row = col + 1; row < n; row++) {
         double[] target = a[row];
         double factor = target[col] / pivotRow[col];
         target[col] = factor;
         if (factor != 0) {
+          if (columns == null) {
+            columns = nonZero(pivotRow, col + 1, n);
+          }
           for (int j : columns) {
             target[j] -= factor * pivotRow[j];
           }

@@ -34,25 +34,46 @@ final class Linearization implements Analysis.Linearized {
   public Optional<OperatingPoint> step(Change change) {
     Change undo = analysis.apply(change);
     try {
-      double[] dx = system.factors().solve(network.residual(states, collapsed, x));
-      double[] moved = new double[x.length];
-      for (int i = 0; i < x.length; i++) {
-        moved[i] = x[i] + dx[i];
-      }
-      if (network.nonlinear && !chord(moved)) {
-        return Optional.empty();
-      }
-      for (int k = 0; k < states.length; k++) {
-        if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
-          return Optional.empty();
-        }
-      }
-      return analysis.search.isConsistent(states, moved)
-          ? Optional.of(analysis.pointOf(analysis.search.stateOf(states, moved)))
-          : Optional.empty();
+      // Read while the change holds: a changed driven net reads its new volts.
+      double[] moved = moved();
+      return moved == null
+          ? Optional.empty()
+          : Optional.of(analysis.pointOf(analysis.search.stateOf(states, moved)));
     } finally {
       analysis.apply(undo);
     }
+  }
+
+  @Override
+  public double[] stepRead(Change change, Probe probe) {
+    Change undo = analysis.apply(change);
+    try {
+      double[] moved = moved();
+      return moved == null ? null : probe.read(network, moved);
+    } finally {
+      analysis.apply(undo);
+    }
+  }
+
+  /**
+   * The unknowns after one step with the change applied to the network, or null when a section
+   * would change state.
+   */
+  private double[] moved() {
+    double[] dx = system.factors().solve(network.residual(states, collapsed, x));
+    double[] moved = new double[x.length];
+    for (int i = 0; i < x.length; i++) {
+      moved[i] = x[i] + dx[i];
+    }
+    if (network.nonlinear && !chord(moved)) {
+      return null;
+    }
+    for (int k = 0; k < states.length; k++) {
+      if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
+        return null;
+      }
+    }
+    return analysis.search.isConsistent(states, moved) ? moved : null;
   }
 
   /**

@@ -222,6 +222,24 @@ final class Network {
     return new double[] {low, high};
   }
 
+  /** The lower limit of section k's output at x: {@code limits(x, k)[0]} without the array. */
+  double limitLow(double[] x, int k) {
+    double plus = volts(x, vPlus[k]);
+    double minus = volts(x, vMinus[k]);
+    double high = plus - params[k].headroomHigh();
+    double low = minus + params[k].headroomLow();
+    return high < low ? (plus + minus) / 2 : low;
+  }
+
+  /** The upper limit of section k's output at x: {@code limits(x, k)[1]} without the array. */
+  double limitHigh(double[] x, int k) {
+    double plus = volts(x, vPlus[k]);
+    double minus = volts(x, vMinus[k]);
+    double high = plus - params[k].headroomHigh();
+    double low = minus + params[k].headroomLow();
+    return high < low ? (plus + minus) / 2 : high;
+  }
+
   /** Whether the limits of section k have collapsed to the mid-supply point at x. */
   boolean collapsed(double[] x, int k) {
     return volts(x, vPlus[k]) - params[k].headroomHigh()

@@ -44,6 +44,15 @@ public final class Probe {
     return out;
   }
 
+  /** Returns the probed nets' volts from a solution vector of the network they belong to. */
+  double[] read(Network network, double[] x) {
+    double[] out = new double[index.length];
+    for (int i = 0; i < index.length; i++) {
+      out[i] = network.volts(x, index[i]);
+    }
+    return out;
+  }
+
   /** Returns the AC amplitudes of the probed nets in a response. */
   public double[] acAmplitudes(AcSolution ac) {
     double[] out = new double[index.length];

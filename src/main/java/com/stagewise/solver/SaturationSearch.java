@@ -305,22 +305,23 @@ final class SaturationSearch {
   }
 
   private SectionState preferredState(double[] x, int k, SectionState now) {
-    double[] limits = network.limits(x, k);
-    double demand = network.drive(x, k);
+    double low = network.limitLow(x, k);
+    double high = network.limitHigh(x, k);
     if (now == SectionState.LINEAR) {
       double source = network.source(x, k);
-      if (source > limits[1] + SLACK) {
+      if (source > high + SLACK) {
         return SectionState.HIGH;
       }
-      if (source < limits[0] - SLACK) {
+      if (source < low - SLACK) {
         return SectionState.LOW;
       }
       return now;
     }
-    if (now == SectionState.HIGH && demand < limits[1] - SLACK) {
+    double demand = network.drive(x, k);
+    if (now == SectionState.HIGH && demand < high - SLACK) {
       return SectionState.LINEAR;
     }
-    if (now == SectionState.LOW && demand > limits[0] + SLACK) {
+    if (now == SectionState.LOW && demand > low + SLACK) {
       return SectionState.LINEAR;
     }
     return now;
@@ -331,17 +332,17 @@ final class SaturationSearch {
       if (network.forced[k] != null) {
         continue;
       }
-      double[] limits = network.limits(x, k);
-      double demand = network.drive(x, k);
-      double scale = SLACK * Math.max(1, Math.abs(limits[1]) + Math.abs(limits[0]));
+      double low = network.limitLow(x, k);
+      double high = network.limitHigh(x, k);
+      double scale = SLACK * Math.max(1, Math.abs(high) + Math.abs(low));
       boolean ok =
           switch (states[k]) {
             case LINEAR -> {
               double source = network.source(x, k);
-              yield source >= limits[0] - scale && source <= limits[1] + scale;
+              yield source >= low - scale && source <= high + scale;
             }
-            case HIGH -> demand >= limits[1] - scale;
-            case LOW -> demand <= limits[0] + scale;
+            case HIGH -> network.drive(x, k) >= high - scale;
+            case LOW -> network.drive(x, k) <= low + scale;
             case DEAD -> false;
           };
       if (!ok) {

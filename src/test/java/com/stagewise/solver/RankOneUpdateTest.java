@@ -113,6 +113,80 @@ class RankOneUpdateTest {
   }
 
   @Test
+  void stepRead_readsExactlyWhatStepGives_onEveryTemplate() {
+    int read = 0;
+    int exact = 0;
+    for (StageTemplate template : Templates.all()) {
+      Stage stage = template.build();
+      Analysis analysis = Analysis.of(stage, Conditions.NOMINAL);
+      if (!(analysis.solve() instanceof SolveResult.Solved solved)) {
+        continue;
+      }
+      List<String> nets = List.copyOf(stage.nets());
+      Probe probe = analysis.probe(nets);
+      for (OperatingPoint point : solved.points()) {
+        Analysis.Linearized linear = analysis.linearize(point).orElseThrow();
+        for (Change change : spreadChanges(stage, analysis)) {
+          Optional<OperatingPoint> stepped = linear.step(change);
+          double[] quick = linear.stepRead(change, probe);
+          assertThat(quick != null)
+              .as("%s %s", template.name(), change)
+              .isEqualTo(stepped.isPresent());
+          if (quick == null) {
+            continue;
+          }
+          for (int i = 0; i < nets.size(); i++) {
+            // The same numbers, read without making a point: equal to the last bit.
+            assertThat(quick[i])
+                .as("%s %s at %s", template.name(), change, nets.get(i))
+                .isEqualTo(stepped.get().at(nets.get(i)));
+          }
+          read++;
+          if (change instanceof Change.DrivenVolts
+              && !stage.parts().stream().anyMatch(p -> p.kind().isJunction())) {
+            // A rail's volts move only the right-hand side: the one step is the exact solution in
+            // these states, the same as searching the changed stage again.
+            OperatingPoint searched = analysis.with(change).settleFrom(point).orElseThrow();
+            for (int i = 0; i < nets.size(); i++) {
+              double expected = searched.at(nets.get(i));
+              assertThat(quick[i])
+                  .as("%s %s at %s", template.name(), change, nets.get(i))
+                  .isCloseTo(expected, within(1e-9 * (1 + Math.abs(expected))));
+            }
+            exact++;
+          }
+        }
+      }
+    }
+    assertThat(read).isGreaterThan(300);
+    assertThat(exact).isGreaterThan(20);
+  }
+
+  /** The changes of the spread: a part and a rail each way, and each section's numbers. */
+  private static List<Change> spreadChanges(Stage stage, Analysis analysis) {
+    List<Change> changes = new ArrayList<>();
+    for (Part part : stage.parts()) {
+      changes.add(new Change.PartValue(part.ref(), part.value() * 1.05));
+      changes.add(new Change.PartValue(part.ref(), part.value() * 0.95));
+    }
+    for (var rail : stage.rails()) {
+      changes.add(new Change.DrivenVolts(rail.net(), rail.volts() * 1.03));
+      changes.add(new Change.DrivenVolts(rail.net(), rail.volts() * 0.97));
+    }
+    for (Amplifier amp : stage.amplifiers()) {
+      DeviceParams p = analysis.device(amp.ref());
+      changes.add(new Change.Device(amp.ref(), p.withOffset(p.offset() + 3e-3)));
+      changes.add(new Change.Device(amp.ref(), p.withBias(p.biasPlus() + 1e-7, p.biasMinus())));
+      changes.add(
+          new Change.Device(amp.ref(), p.withHeadroom(p.headroomLow() + 0.3, p.headroomHigh())));
+      changes.add(
+          new Change.Device(amp.ref(), p.withHeadroom(p.headroomLow(), p.headroomHigh() + 0.3)));
+      changes.add(new Change.Device(amp.ref(), p.withGain(2e4)));
+    }
+    return changes;
+  }
+
+  @Test
   void settle_declinesAChangeOfTheMatrix() {
     Stage stage = Templates.named("inverting").build();
     Analysis analysis = Analysis.of(stage, Conditions.NOMINAL);
