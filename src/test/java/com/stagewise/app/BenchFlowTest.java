@@ -124,12 +124,13 @@ class BenchFlowTest extends WindowFlow {
     assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.CLOSE_OUT);
     assertThat(text("#action-part"))
         .isEqualTo(first.fault().substring(0, first.fault().indexOf(':')));
-    robot.clickOn("#action-add");
+    tap("#action-add");
     settle();
-    robot.clickOn("#outcome-fixed");
-    robot.clickOn("#close-notes").write("Replaced and checked the output swings both ways.");
+    tap("#outcome-fixed");
+    tap("#close-notes");
+    robot.write("Replaced and checked the output swings both ways.");
     shoot("08-close-out");
-    robot.clickOn("#close-case");
+    tap("#close-case");
     settle();
 
     // History: the closed case as it was, and found again by its serial.

@@ -10,6 +10,11 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import javafx.geometry.Bounds;
+import javafx.scene.Node;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -20,7 +25,11 @@ import org.junit.jupiter.api.Test;
  * fixed after the question that reading raises; the history shows the photo's thumbnail, which
  * tapped shows large, and the readings after the repair apart from the others. The close-out and
  * history screens are checked for cut texts at 1024×600 and 1280×800, and their pictures saved
- * under {@code target/screens/closeout-flow}.
+ * under {@code target/screens/closeout-flow}. With the photo and the check's summary on the
+ * close-out, at 1024×600, 1280×800 and 1920×1080 the list of what was done keeps room for two rows
+ * with its first in sight, and the close button is brought into sight by scrolling and takes a tap
+ * (issue 14: every screen works from a small touch laptop to a desk screen; rows of 48 px, the
+ * touch minimum of common practice).
  */
 class CloseOutFlowTest extends WindowFlow {
 
@@ -84,6 +93,37 @@ class CloseOutFlowTest extends WindowFlow {
     settle();
     tap("#outcome-fixed");
     shoot("close-out");
+    // At each size, with the photo and the check's summary on the left: what was done keeps its
+    // first row in sight, and the close button, scrolled to from the top of the screen as a finger
+    // would, takes the tap (the check's outside reading then asks first; Go back leaves it open).
+    atSizes(
+        new int[][] {SMALL, LAPTOP, DESK},
+        (size, where) -> {
+          scrollToTop("#action-list");
+          RecordedList recorded = fx(this::recordedList);
+          assertThat(recorded.firstRow())
+              .as("first row of what was done at %s", where)
+              .contains("Resoldered the cracked joint");
+          assertThat(recorded.firstRowInside())
+              .as("first row of what was done wholly inside its list at %s", where)
+              .isTrue();
+          assertThat(recorded.listHeight())
+              .as("room for two rows of what was done at %s", where)
+              .isGreaterThanOrEqualTo(2 * recorded.rowHeight());
+          ScreenScroll.intoView(robot.lookup("#close-case").query());
+          assertThat(fx(() -> outOfSight("#close-case")))
+              .as("close button in sight after scrolling at %s", where)
+              .isEmpty();
+          tap("#close-case");
+          settle();
+          assertThat(visible("#close-question")).as("question after the tap at %s", where).isTrue();
+          assertThat(text("#close-question")).contains("U1 pin 4 reads", "as fixed anyway?");
+          assertNothingCut("close-out-question", where);
+          tap("#close-go-back");
+          settle();
+          assertThat(visible("#close-question")).isFalse();
+          assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.CLOSE_OUT);
+        });
     tap("#close-case");
     settle();
     // A reading after the repair is outside its band: asked first, not closed.
@@ -131,6 +171,51 @@ class CloseOutFlowTest extends WindowFlow {
     assertThat(photos).hasSize(1);
     assertThat(workshop.store().cases().photo(photos.get(0).id()).orElseThrow().image())
         .isEqualTo(png);
+  }
+
+  /**
+   * What the list of what was done shows: its first row's text, whether that row lies wholly inside
+   * the list, the list's height and a row's.
+   */
+  private record RecordedList(
+      String firstRow, boolean firstRowInside, double listHeight, double rowHeight) {}
+
+  private RecordedList recordedList() {
+    ListView<?> list = robot.lookup("#action-list").queryAs(ListView.class);
+    ListCell<?> first =
+        robot.lookup("#action-list .list-cell").queryAllAs(ListCell.class).stream()
+            .filter(c -> c.getIndex() == 0 && c.isVisible())
+            .findFirst()
+            .orElse(null);
+    if (first == null) {
+      return new RecordedList("", false, list.getHeight(), 0);
+    }
+    Bounds row = first.localToScene(first.getBoundsInLocal());
+    Bounds box = list.localToScene(list.getBoundsInLocal());
+    boolean inside = row.getMinY() >= box.getMinY() - 0.5 && row.getMaxY() <= box.getMaxY() + 0.5;
+    return new RecordedList(
+        String.valueOf(first.getText()), inside, list.getHeight(), first.getHeight());
+  }
+
+  /**
+   * Returns nothing when the node lies wholly inside the part of the screen its scrolling pane
+   * shows, else where it lies and what the pane shows.
+   */
+  private String outOfSight(String query) {
+    Node node = robot.lookup(query).query();
+    Node pane = node.getParent();
+    while (pane != null && !(pane instanceof ScrollPane)) {
+      pane = pane.getParent();
+    }
+    Bounds place = node.localToScene(node.getBoundsInLocal());
+    Bounds view = pane == null ? null : pane.localToScene(pane.getLayoutBounds());
+    boolean inside =
+        view != null
+            && place.getMinY() >= view.getMinY() - 0.5
+            && place.getMaxY() <= view.getMaxY() + 0.5
+            && place.getMinX() >= view.getMinX() - 0.5
+            && place.getMaxX() <= view.getMaxX() + 0.5;
+    return inside ? "" : query + " at " + place + ", the screen shows " + view;
   }
 
   private List<String> texts(String box) throws Exception {

@@ -120,61 +120,17 @@ class EditorFlowTest extends WindowFlow {
         .replaceAll(" \\(AC.*", "");
   }
 
-  /**
-   * Taps a node and waits for what it starts; when it lies outside the window (down a long panel),
-   * first swipes the panel it sits in towards it, as a finger would (this flow swipes rather than
-   * scrolls, to try the screens' panels by touch).
-   */
+  /** Taps a node as a finger would (scrolled into sight first) and waits for what it starts. */
   @Override
   void tap(String query) throws Exception {
     try {
-      swipeToAndTap(query);
+      super.tap(query);
+      settle();
     } catch (Exception | AssertionError e) {
       // A picture of the window as it was when the tap failed, to see why.
       shoot("failed-tap-" + query.replaceAll("[^A-Za-z0-9-]", ""));
       throw e;
     }
-  }
-
-  private void swipeToAndTap(String query) throws Exception {
-    for (int swipe = 0; swipe < 40; swipe++) {
-      double[] where = fx(() -> placeInWindow(query));
-      if (where == null || where[0] == 0) {
-        break;
-      }
-      // A finger swipe: press near the panel's left edge (its margin, away from text fields,
-      // which keep a drag for selecting text) and drag the content the other way.
-      javafx.scene.control.ScrollPane pane = fx(() -> scrollPaneOf(robot.lookup(query).query()));
-      javafx.geometry.Bounds box = fx(() -> pane.localToScreen(pane.getLayoutBounds()));
-      double distance = where[0] > 0 ? -160 : 160;
-      robot
-          .drag(
-              new javafx.geometry.Point2D(box.getMinX() + 4, box.getCenterY()),
-              javafx.scene.input.MouseButton.PRIMARY)
-          .dropBy(0, distance);
-      settle();
-    }
-    robot.clickOn(query);
-    settle();
-  }
-
-  /**
-   * Returns {+1} when the node is below the window, {-1} above, {0} in view; null if unscrollable.
-   */
-  private double[] placeInWindow(String query) {
-    javafx.scene.Node node = robot.lookup(query).query();
-    javafx.scene.control.ScrollPane pane = scrollPaneOf(node);
-    if (pane == null) {
-      return null;
-    }
-    // In view means inside the panel's own window on the screen, not merely inside the scene:
-    // a row below the panel's bottom edge sits under the status bar, where a tap misses it.
-    var bounds = node.localToScene(node.getBoundsInLocal());
-    var view = pane.localToScene(pane.getLayoutBounds());
-    if (bounds.getMaxY() > view.getMaxY()) {
-      return new double[] {1};
-    }
-    return new double[] {bounds.getMinY() < view.getMinY() ? -1 : 0};
   }
 
   /** Whether a node is shown: it and every node it sits in are visible. */
@@ -185,15 +141,6 @@ class EditorFlowTest extends WindowFlow {
       }
     }
     return true;
-  }
-
-  private static javafx.scene.control.ScrollPane scrollPaneOf(javafx.scene.Node node) {
-    for (javafx.scene.Node n = node; n != null; n = n.getParent()) {
-      if (n instanceof javafx.scene.control.ScrollPane pane) {
-        return pane;
-      }
-    }
-    return null;
   }
 
   private void shoot(String name) throws Exception {

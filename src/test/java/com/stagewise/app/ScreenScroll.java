@@ -1,6 +1,7 @@
 package com.stagewise.app;
 
 import java.util.concurrent.TimeUnit;
+import javafx.geometry.Bounds;
 import javafx.scene.Node;
 import javafx.scene.control.ScrollPane;
 import org.testfx.util.WaitForAsyncUtils;
@@ -14,30 +15,42 @@ final class ScreenScroll {
   private ScreenScroll() {}
 
   /**
-   * Scrolls the nearest scrolling pane around {@code target} so that it stands in the middle,
-   * unless it is already wholly in sight.
+   * Scrolls each scrolling pane around {@code target}, the innermost first, so that it stands in
+   * the middle of that pane's view, unless it is already wholly in sight there.
    */
   static void intoView(Node target) throws Exception {
+    for (Node node = target.getParent(); node != null; node = parentOf(node)) {
+      if (node instanceof ScrollPane pane) {
+        scroll(pane, target);
+      }
+    }
+  }
+
+  private static Node parentOf(Node node) throws Exception {
+    return WaitForAsyncUtils.asyncFx(node::getParent).get(30, TimeUnit.SECONDS);
+  }
+
+  private static void scroll(ScrollPane pane, Node target) throws Exception {
     WaitForAsyncUtils.asyncFx(
             () -> {
-              Node node = target.getParent();
-              while (node != null && !(node instanceof ScrollPane)) {
-                node = node.getParent();
+              Node content = pane.getContent();
+              Bounds place = content.sceneToLocal(target.localToScene(target.getBoundsInLocal()));
+              double view = pane.getViewportBounds().getHeight();
+              double room = content.getBoundsInLocal().getHeight() - view;
+              if (room <= 0) {
+                return;
               }
-              if (node instanceof ScrollPane pane) {
-                Node content = pane.getContent();
-                var place = content.sceneToLocal(target.localToScene(target.getBoundsInLocal()));
-                double y = place.getCenterY();
-                double view = pane.getViewportBounds().getHeight();
-                double top = -pane.getViewportBounds().getMinY();
-                if (place.getMinY() >= top && place.getMaxY() <= top + view) {
-                  return; // already wholly in sight: a finger taps it where it is
-                }
-                double room = content.getBoundsInLocal().getHeight() - view;
-                if (room > 0) {
-                  pane.setVvalue(Math.max(0, Math.min(1, (y - view / 2) / room)));
-                }
+              // Where the view starts in the content, from the pane's own value (the viewport's
+              // bounds follow it only at the next layout).
+              double share =
+                  (pane.getVvalue() - pane.getVmin()) / (pane.getVmax() - pane.getVmin());
+              double top = share * room;
+              if (place.getMinY() >= top && place.getMaxY() <= top + view) {
+                return; // already wholly in sight: a finger taps it where it is
               }
+              double wanted = Math.max(0, Math.min(1, (place.getCenterY() - view / 2) / room));
+              pane.setVvalue(pane.getVmin() + wanted * (pane.getVmax() - pane.getVmin()));
+              pane.layout();
             })
         .get(30, TimeUnit.SECONDS);
     WaitForAsyncUtils.waitForFxEvents();

@@ -30,6 +30,12 @@ public final class CloseOutView {
   private final HBox root = new HBox(12);
   private final VBox faultsBox = new VBox(4);
 
+  /**
+   * The faults to tick, side by side where they fit, so that the outcome and the close button stay
+   * in a 1280×800 window.
+   */
+  private final FlowPane faultTicks = new FlowPane(14, 0);
+
   /** Builds the screen bound to its model. */
   public CloseOutView(CloseOutViewModel model) {
     this.model = model;
@@ -126,6 +132,9 @@ public final class CloseOutView {
     ListView<RepairAction> list = new ListView<>(model.actions());
     list.setId("action-list");
     list.setPrefHeight(120);
+    // Never squeezed below its first two rows (closeout.css): with a photo and the check's summary
+    // on the left, a short window scrolls instead.
+    list.getStyleClass().add("recorded-actions");
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(
         v ->
@@ -212,6 +221,7 @@ public final class CloseOutView {
     Label faultsTitle = new Label("Faults found (tick what was really wrong)");
     faultsTitle.getStyleClass().add("section-title");
     faultsBox.setId("close-faults");
+    faultTicks.setPrefWrapLength(400);
     Label outcomeTitle = new Label("Outcome");
     outcomeTitle.getStyleClass().add("section-title");
     ToggleGroup outcomes = new ToggleGroup();
@@ -249,7 +259,8 @@ public final class CloseOutView {
     notes.setWrapText(true);
     notes.setPrefRowCount(4);
     notes.textProperty().bindBidirectional(model.notesProperty());
-    VBox.setVgrow(notes, Priority.ALWAYS);
+    // The notes keep their four rows rather than growing with a tall left column, so that the
+    // close button stays under them, in sight, in a 1280×800 window.
     Button close = new Button("Close the case");
     close.setId("close-case");
     close.getStyleClass().add("primary");
@@ -298,11 +309,13 @@ public final class CloseOutView {
 
   private void showFaults() {
     faultsBox.getChildren().clear();
+    faultTicks.getChildren().clear();
     if (model.faultChoices().isEmpty()) {
       Label none = new Label("No suspects yet: take readings, or describe the repair on the left.");
       none.getStyleClass().add("hint");
       none.setWrapText(true);
       faultsBox.getChildren().add(none);
+      return;
     }
     int shown = 0;
     for (String id : model.faultChoices()) {
@@ -313,7 +326,8 @@ public final class CloseOutView {
       box.setId("fault-" + id.replaceAll("[^A-Za-z0-9]", "_"));
       box.setSelected(model.confirmedFaults().contains(id));
       box.selectedProperty().addListener((o, was, now) -> model.toggleFault(id, now));
-      faultsBox.getChildren().add(box);
+      faultTicks.getChildren().add(box);
     }
+    faultsBox.getChildren().add(faultTicks);
   }
 }
