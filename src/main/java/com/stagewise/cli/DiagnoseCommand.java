@@ -40,6 +40,9 @@ import picocli.CommandLine.Spec;
 final class DiagnoseCommand implements Callable<Integer> {
   @Spec picocli.CommandLine.Model.CommandSpec spec;
 
+  /** Where the output goes when the command was made without picocli ({@link QuickStart}). */
+  private PrintWriter plainOut;
+
   @Option(names = "--stage", paramLabel = "FILE", description = "the stage sheet (*.stage.json)")
   Path stageFile;
 
@@ -72,6 +75,34 @@ final class DiagnoseCommand implements Callable<Integer> {
               + " apart, it is proposed first")
   boolean mainsPowered;
 
+  /**
+   * Returns the command for options in their plain form ({@link QuickStart}), or null when a value
+   * needs picocli's conversion or message.
+   */
+  static DiagnoseCommand plain(Map<String, String> options, PrintWriter out) {
+    DiagnoseCommand command = new DiagnoseCommand();
+    command.plainOut = out;
+    command.stageFile = QuickStart.path(options.get("--stage"));
+    command.readingsFile = QuickStart.path(options.get("--readings"));
+    command.batchFile = QuickStart.path(options.get("--batch"));
+    command.top =
+        options.containsKey("--top")
+            ? QuickStart.count(options.get("--top"))
+            : Diagnoser.DEFAULT_TOP;
+    command.json = options.containsKey("--json");
+    command.mainsPowered = options.containsKey("--mains-powered");
+    boolean converted =
+        (command.stageFile != null || !options.containsKey("--stage"))
+            && (command.readingsFile != null || !options.containsKey("--readings"))
+            && (command.batchFile != null || !options.containsKey("--batch"))
+            && command.top >= 0;
+    return converted ? command : null;
+  }
+
+  private PrintWriter out() {
+    return spec == null ? plainOut : spec.commandLine().getOut();
+  }
+
   @Override
   public Integer call() {
     if (top < 1) {
@@ -99,7 +130,7 @@ final class DiagnoseCommand implements Callable<Integer> {
     } catch (InvalidInputException e) {
       throw e.inSource(readingsFile.toString());
     }
-    PrintWriter out = spec.commandLine().getOut();
+    PrintWriter out = out();
     if (json) {
       out.print(DiagnosisJson.write(diagnosis));
     } else {
@@ -128,7 +159,7 @@ final class DiagnoseCommand implements Callable<Integer> {
     Path folder = batchFile.toAbsolutePath().getParent();
     Map<String, Stage> stages = new HashMap<>();
     Map<Stage, Diagnoser> diagnosers = new HashMap<>();
-    PrintWriter out = spec.commandLine().getOut();
+    PrintWriter out = out();
     boolean bad = false;
     for (int i = 0; i < lines.size(); i++) {
       String line = lines.get(i);

@@ -40,6 +40,9 @@ import picocli.CommandLine.Option;
 final class SolveCommand implements Callable<Integer> {
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
+  /** Where the output goes when the command was made without picocli ({@link QuickStart}). */
+  private PrintWriter plainOut;
+
   @Option(
       names = "--stage",
       required = true,
@@ -52,6 +55,18 @@ final class SolveCommand implements Callable<Integer> {
       description = "print the solution document (format stagewise-solution) instead of a table")
   boolean json;
 
+  /**
+   * Returns the command for options in their plain form ({@link QuickStart}), or null when a value
+   * needs picocli's conversion or message.
+   */
+  static SolveCommand plain(Map<String, String> options, PrintWriter out) {
+    SolveCommand command = new SolveCommand();
+    command.plainOut = out;
+    command.stageFile = QuickStart.path(options.get("--stage"));
+    command.json = options.containsKey("--json");
+    return command.stageFile == null ? null : command;
+  }
+
   @Override
   public Integer call() {
     Stage stage = StageSheet.read(stageFile);
@@ -61,7 +76,7 @@ final class SolveCommand implements Callable<Integer> {
     }
     Optional<AcSolution> ac = StageSolver.ac(stage, solved.primary());
     ExpectedVolts healthy = ExpectedVolts.of(stage, solved);
-    PrintWriter out = spec.commandLine().getOut();
+    PrintWriter out = spec == null ? plainOut : spec.commandLine().getOut();
     if (json) {
       out.print(SolutionJson.write(solved, ac, healthy, Reading.acMeasure(stage)));
     } else {

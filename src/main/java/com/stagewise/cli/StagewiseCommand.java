@@ -7,6 +7,7 @@ import com.stagewise.cli.history.HistoryCommand;
 import com.stagewise.history.StorageException;
 import java.io.PrintWriter;
 import java.util.List;
+import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -19,23 +20,26 @@ import picocli.CommandLine.Command;
 public final class StagewiseCommand implements Runnable {
   /**
    * The commands, in the order {@code --help} lists them; {@code history} stands for its own tree
-   * ({@link HistoryCommand#commandLine}).
+   * ({@link HistoryCommand#commandLine}). In a class of their own, so that a call that starts
+   * without picocli ({@link QuickStart}) loads none of picocli's classes.
    */
-  private static final List<Class<?>> SUBCOMMANDS =
-      List.of(
-          CommandLine.HelpCommand.class,
-          SolveCommand.class,
-          DiagnoseCommand.class,
-          TemplateCommand.class,
-          HistoryCommand.class,
-          ReportCommand.class,
-          StageCommand.class);
+  private static final class Commands {
+    static final List<Class<?>> ALL =
+        List.of(
+            CommandLine.HelpCommand.class,
+            SolveCommand.class,
+            DiagnoseCommand.class,
+            TemplateCommand.class,
+            HistoryCommand.class,
+            ReportCommand.class,
+            StageCommand.class);
+  }
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
   @Override
   public void run() {
-    throw new CommandLine.ParameterException(spec.commandLine(), "Name a command, e.g. 'solve'.");
+    throw CommandTree.problem(spec.commandLine(), "Name a command, e.g. 'solve'.");
   }
 
   /**
@@ -46,6 +50,18 @@ public final class StagewiseCommand implements Runnable {
    * ExitCode#INTERNAL_ERROR}. Stack traces are never printed for bad input.
    */
   public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+    Callable<Integer> plain = QuickStart.command(args, out);
+    if (plain != null) {
+      int code;
+      try {
+        code = plain.call();
+      } catch (Exception e) {
+        code = failed(e, err);
+      }
+      out.flush();
+      err.flush();
+      return code;
+    }
     CommandLine line = commandLine(args);
     line.setOut(out);
     line.setErr(err);
@@ -55,21 +71,7 @@ public final class StagewiseCommand implements Runnable {
           err.flush();
           return ExitCode.BAD_INPUT;
         });
-    line.setExecutionExceptionHandler(
-        (ex, cmd, parseResult) -> {
-          if (ex instanceof InvalidInputException || ex instanceof StorageException) {
-            // Both messages are written for the user: the file, the field or the fault, and what to
-            // do; on one line, whatever text of the user's they quote.
-            err.println("stagewise: " + oneLine(ex.getMessage()));
-          } else {
-            err.println("stagewise: internal error: " + ex);
-          }
-          err.flush();
-          boolean badFile = ex instanceof StorageException se && se.isUnusableFile();
-          return ex instanceof InvalidInputException || badFile
-              ? ExitCode.BAD_INPUT
-              : ExitCode.INTERNAL_ERROR;
-        });
+    line.setExecutionExceptionHandler((ex, cmd, parseResult) -> failed(ex, err));
     int code = line.execute(args);
     out.flush();
     err.flush();
@@ -77,21 +79,44 @@ public final class StagewiseCommand implements Runnable {
   }
 
   /**
+   * Prints the message of a command's failure and returns its exit code: bad input (and a history
+   * file that cannot be used) names what to fix, anything else is an internal error.
+   */
+  private static int failed(Exception ex, PrintWriter err) {
+    if (ex instanceof InvalidInputException || ex instanceof StorageException) {
+      // Both messages are written for the user: the file, the field or the fault, and what to
+      // do; on one line, whatever text of the user's they quote.
+      err.println("stagewise: " + oneLine(ex.getMessage()));
+    } else {
+      err.println("stagewise: internal error: " + ex);
+    }
+    err.flush();
+    boolean badFile = ex instanceof StorageException se && se.isUnusableFile();
+    return ex instanceof InvalidInputException || badFile
+        ? ExitCode.BAD_INPUT
+        : ExitCode.INTERNAL_ERROR;
+  }
+
+  /**
    * Returns the command line for {@code args}: with only the command they name (and only the
-   * history subcommand they name), or with every command for help, a misspelt or a missing name.
-   * Picocli reads each command's options from its annotations when the command is added; reading
-   * all of them took about as long as a whole diagnosis of a demo stage.
+   * history subcommand they name), with none for the version alone, or with every command for help,
+   * a misspelt or a missing name. Picocli reads each command's options from its annotations when
+   * the command is added; reading all of them took about as long as a whole diagnosis of a demo
+   * stage.
    */
   static CommandLine commandLine(String[] args) {
     int at = CommandTree.firstWordAt(args, 0);
     String name = at < 0 ? null : args[at];
     boolean one =
         name != null
-            && SUBCOMMANDS.stream()
+            && Commands.ALL.stream()
                 .anyMatch(
                     c -> c != CommandLine.HelpCommand.class && CommandTree.nameOf(c).equals(name));
     CommandLine line = new CommandLine(new StagewiseCommand());
-    for (Class<?> command : SUBCOMMANDS) {
+    if (isVersion(args)) {
+      return line;
+    }
+    for (Class<?> command : Commands.ALL) {
       String commandName = CommandTree.nameOf(command);
       if (one && !commandName.equals(name)) {
         continue;
@@ -104,6 +129,11 @@ public final class StagewiseCommand implements Runnable {
       }
     }
     return line;
+  }
+
+  /** Returns whether {@code args} ask for the version only (it needs no command built). */
+  private static boolean isVersion(String[] args) {
+    return args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"));
   }
 
   /**

@@ -37,6 +37,14 @@ public final class CommandTree {
     return -1;
   }
 
+  /**
+   * Returns picocli's complaint about a command line (printed as bad input). Typed as a plain
+   * runtime exception so that a class that throws it need not load picocli's to be checked.
+   */
+  public static RuntimeException problem(CommandLine line, String message) {
+    return new CommandLine.ParameterException(line, message);
+  }
+
   /** Returns the name a command's annotation gives it. */
   public static String nameOf(Class<?> command) {
     return command.getAnnotation(Command.class).name();
