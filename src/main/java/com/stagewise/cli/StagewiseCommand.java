@@ -62,6 +62,11 @@ public final class StagewiseCommand implements Runnable {
       err.flush();
       return code;
     }
+    return withPicocli(args, out, err);
+  }
+
+  /** Runs {@code args} through picocli, as {@link #execute} does every call but the plain ones. */
+  static int withPicocli(String[] args, PrintWriter out, PrintWriter err) {
     CommandLine line = commandLine(args);
     line.setOut(out);
     line.setErr(err);

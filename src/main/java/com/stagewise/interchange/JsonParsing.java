@@ -4,17 +4,20 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.io.JsonEOFException;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
-import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.InvalidInputException;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.UncheckedIOException;
 
 /**
  * Turns a JSON text into the root {@link JsonField} of a document, strictly (duplicate keys and
@@ -22,12 +25,16 @@ import java.io.InputStream;
  * and column.
  */
 final class JsonParsing {
-  private static final ObjectMapper MAPPER =
-      JsonMapper.builder()
-          .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+  /**
+   * Jackson's streaming reader, strict about duplicate keys; the tree is built by {@link #tree}
+   * rather than by an {@code ObjectMapper}, whose set-up in a fresh JVM cost about as long as
+   * solving a demo stage (DEVELOPERS.md, "Start-up of the command line").
+   */
+  private static final JsonFactory FACTORY =
+      JsonFactory.builder()
+          .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
           // Read NaN and Infinity so that the complaint can name the field instead of the column.
           .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-          .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
           .build();
 
   private JsonParsing() {}
@@ -39,10 +46,12 @@ final class JsonParsing {
    */
   static JsonField root(String text, String source) {
     JsonNode root;
-    try {
-      root = MAPPER.readTree(text);
+    try (JsonParser parser = FACTORY.createParser(text)) {
+      root = document(parser);
     } catch (JsonProcessingException e) {
       throw new InvalidInputException(source, "", parseProblem(e));
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
     }
     if (root == null || root.isMissingNode()) {
       throw new InvalidInputException(source, "", "the file is empty (expected a JSON object {…})");
@@ -52,6 +61,74 @@ final class JsonParsing {
       throw field.error("expected a JSON object {…} at the top, found " + JsonField.describe(root));
     }
     return field;
+  }
+
+  /**
+   * Returns the one value of a document, or null for an empty text.
+   *
+   * @throws JsonParseException if more text follows the value
+   */
+  private static JsonNode document(JsonParser parser) throws IOException {
+    if (parser.nextToken() == null) {
+      return null;
+    }
+    JsonNode root = tree(parser);
+    JsonToken after = parser.nextToken();
+    if (after != null) {
+      throw new JsonParseException(
+          parser, "Trailing token (of type " + after + ") found after the value");
+    }
+    return root;
+  }
+
+  /**
+   * Returns the value at the parser's current token as a tree, with the node types Jackson's own
+   * tree reader gives: whole numbers as int, long or big integer nodes by size, others as doubles
+   * (NaN and the infinities included).
+   */
+  private static JsonNode tree(JsonParser parser) throws IOException {
+    JsonNodeFactory nodes = JsonNodeFactory.instance;
+    switch (parser.currentToken()) {
+      case START_OBJECT -> {
+        ObjectNode object = nodes.objectNode();
+        while (parser.nextToken() == JsonToken.FIELD_NAME) {
+          String key = parser.currentName();
+          parser.nextToken();
+          object.set(key, tree(parser));
+        }
+        return object;
+      }
+      case START_ARRAY -> {
+        ArrayNode array = nodes.arrayNode();
+        while (parser.nextToken() != JsonToken.END_ARRAY) {
+          array.add(tree(parser));
+        }
+        return array;
+      }
+      case VALUE_STRING -> {
+        return nodes.textNode(parser.getText());
+      }
+      case VALUE_NUMBER_INT -> {
+        return switch (parser.getNumberType()) {
+          case INT -> nodes.numberNode(parser.getIntValue());
+          case LONG -> nodes.numberNode(parser.getLongValue());
+          default -> nodes.numberNode(parser.getBigIntegerValue());
+        };
+      }
+      case VALUE_NUMBER_FLOAT -> {
+        return nodes.numberNode(parser.getDoubleValue());
+      }
+      case VALUE_TRUE -> {
+        return nodes.booleanNode(true);
+      }
+      case VALUE_FALSE -> {
+        return nodes.booleanNode(false);
+      }
+      case VALUE_NULL -> {
+        return nodes.nullNode();
+      }
+      default -> throw new JsonParseException(parser, "Unexpected token " + parser.currentToken());
+    }
   }
 
   private static String parseProblem(JsonProcessingException e) {
@@ -94,22 +171,19 @@ final class JsonParsing {
    * @throws InvalidInputException if the text is not JSON, exceeds the limits or is not an object
    */
   static JsonField root(InputStream in, String source, String what, int maxString, int maxDepth) {
-    ObjectMapper mapper =
-        JsonMapper.builder(
-                JsonFactory.builder()
-                    .streamReadConstraints(
-                        StreamReadConstraints.builder()
-                            .maxStringLength(maxString)
-                            .maxNestingDepth(maxDepth)
-                            .build())
+    JsonFactory factory =
+        JsonFactory.builder()
+            .streamReadConstraints(
+                StreamReadConstraints.builder()
+                    .maxStringLength(maxString)
+                    .maxNestingDepth(maxDepth)
                     .build())
-            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
             .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .build();
     JsonNode root;
-    try {
-      root = mapper.readTree(in);
+    try (JsonParser parser = factory.createParser(in)) {
+      root = document(parser);
     } catch (StreamConstraintsException e) {
       String original = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
       String problem =
