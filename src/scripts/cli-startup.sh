@@ -1,11 +1,17 @@
 #!/usr/bin/env bash
 # Times `diagnose` on a demo case from process start, in one run (rounds alternate, so that the
 # machine's load falls on every variant alike), beside ngspice computing the same stage's fault
-# dictionary in one process (netlists written beforehand). Prints the median of each.
+# dictionary in one process (netlists written beforehand). Prints the median of each, and each
+# median's ratio to the first variant's.
 #   1. java -jar target/stagewise.jar diagnose …                       (plain)
 #   2. the same with -XX:SharedArchiveFile=target/stagewise-cli.jsa     (AppCDS, made by mvn package)
-#   3. AppCDS with -XX:TieredStopAtLevel=1 -XX:+UseSerialGC            (quick-start JIT and GC)
-# Usage: src/scripts/cli-startup.sh [ROUNDS]   (needs mvn package first, and ngspice; about a minute)
+#   3. target/stagewise diagnose …: the launcher beside the jar, which adds the archive and
+#      -XX:TieredStopAtLevel=1 -XX:+UseSerialGC                        (quick-start JIT and GC)
+# With BEFORE=DIR (the target folder of another build, e.g. of an earlier commit, with its jar,
+# lib/ and archive) variants 1 and 3 of that build run in the same rounds too, for a before/after
+# ratio measured in one run.
+# Also times `--version` alone, plain and through the launcher.
+# Usage: [BEFORE=DIR] src/scripts/cli-startup.sh [ROUNDS]   (needs mvn package first, and ngspice)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 rounds="${1:-7}"
@@ -13,26 +19,45 @@ stage="data/stages/ferrowick-wb2-bridge-amp.stage.json"
 readings="data/readings/ferrowick-wb2-bridge-amp.reads-high.readings.json"
 [ -f target/stagewise.jar ] || { echo "run mvn -B package first" >&2; exit 1; }
 [ -f target/stagewise-cli.jsa ] || bash src/package/cli-cds.sh target
-variants=(
-  ""
-  "-XX:SharedArchiveFile=target/stagewise-cli.jsa"
-  "-XX:SharedArchiveFile=target/stagewise-cli.jsa -XX:TieredStopAtLevel=1 -XX:+UseSerialGC"
+names=(
+  "java -jar target/stagewise.jar diagnose"
+  "java -XX:SharedArchiveFile=target/stagewise-cli.jsa -jar target/stagewise.jar diagnose"
+  "target/stagewise diagnose"
+  "java -jar target/stagewise.jar --version"
+  "target/stagewise --version"
 )
+commands=(
+  "java -jar target/stagewise.jar diagnose --stage $stage --readings $readings"
+  "java -XX:SharedArchiveFile=target/stagewise-cli.jsa -jar target/stagewise.jar diagnose --stage $stage --readings $readings"
+  "target/stagewise diagnose --stage $stage --readings $readings"
+  "java -jar target/stagewise.jar --version"
+  "target/stagewise --version"
+)
+if [ -n "${BEFORE:-}" ]; then
+  names+=("before: java -jar $BEFORE/stagewise.jar diagnose"
+    "before: java -XX:SharedArchiveFile=… -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -jar $BEFORE/stagewise.jar diagnose")
+  commands+=("java -jar $BEFORE/stagewise.jar diagnose --stage $stage --readings $readings"
+    "java -XX:SharedArchiveFile=$BEFORE/stagewise-cli.jsa -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -jar $BEFORE/stagewise.jar diagnose --stage $stage --readings $readings")
+fi
 declare -A times
 for ((r = 0; r < rounds; r++)); do
-  for v in "${!variants[@]}"; do
+  for v in "${!commands[@]}"; do
     start=$(date +%s%N)
     # shellcheck disable=SC2086
-    java ${variants[$v]} -jar target/stagewise.jar diagnose --stage "$stage" --readings "$readings" >/dev/null
+    ${commands[$v]} >/dev/null
     end=$(date +%s%N)
     times[$v]+="$(((end - start) / 1000000)) "
   done
 done
-for v in "${!variants[@]}"; do
+first=""
+for v in "${!commands[@]}"; do
   sorted=$(echo "${times[$v]}" | tr ' ' '\n' | grep . | sort -n | paste -sd' ')
   median=$(echo "$sorted" | tr ' ' '\n' | sed -n "$((rounds / 2 + 1))p")
-  echo "diagnose, java ${variants[$v]:-(no options)}: median ${median} ms of ${rounds} [${sorted}]"
+  first="${first:-$median}"
+  ratio=$(awk -v a="$median" -v b="$first" 'BEGIN { printf "%.2f", a / b }')
+  echo "${names[$v]}: median ${median} ms of ${rounds} (ratio ${ratio}) [${sorted}]"
 done
+echo "load average at the end: $(cut -d' ' -f1-3 /proc/loadavg)"
 mvn -B -q -DskipTests test-compile
 mvn -B -q dependency:build-classpath -Dmdep.includeScope=test -Dmdep.outputFile=target/bench-classpath.txt
 java -cp "target/test-classes:target/classes:$(cat target/bench-classpath.txt)" \

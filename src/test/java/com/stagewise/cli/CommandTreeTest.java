@@ -37,7 +37,7 @@ class CommandTreeTest {
       var line = StagewiseCommand.commandLine(args);
 
       assertThat(line.getSubcommands().keySet()).as(String.join(" ", args)).containsExactly(ALL);
-      assertThat(line.getSubcommands().get("history").getSubcommands()).hasSize(21);
+      assertThat(line.getSubcommands().get("history").getSubcommands()).hasSize(22);
     }
   }
 
@@ -46,7 +46,7 @@ class CommandTreeTest {
     var line = StagewiseCommand.commandLine(new String[] {"history", "--help"});
 
     assertThat(line.getSubcommands().keySet()).containsExactly("history");
-    assertThat(line.getSubcommands().get("history").getSubcommands()).hasSize(21);
+    assertThat(line.getSubcommands().get("history").getSubcommands()).hasSize(22);
   }
 
   @Test

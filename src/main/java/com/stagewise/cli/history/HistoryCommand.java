@@ -6,7 +6,8 @@ import picocli.CommandLine.Command;
 
 /**
  * {@code stagewise history …}: the repair history from the command line: board models, units,
- * cases, readings, notes, actions, search, and moving the history between benches.
+ * cases, readings, notes, actions, photos of the board, search, and moving the history between
+ * benches.
  *
  * <p>Every subcommand takes {@code --db FILE} (else {@code STAGEWISE_DB}, else the user's data
  * folder), {@code --json} and {@code --help}. Output is readable text by default. Each subcommand
@@ -30,6 +31,7 @@ public final class HistoryCommand implements Runnable {
           StrikeReadingCommand.class,
           AddNoteCommand.class,
           AddActionCommand.class,
+          AttachPhotoCommand.class,
           ShowCommand.class,
           SearchCommand.class,
           FaultsCommand.class,

@@ -9,6 +9,7 @@ import com.stagewise.history.ShopMemory;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
@@ -32,6 +33,11 @@ final class HistoryText {
 
   static String when(Instant time) {
     return WHEN.format(time);
+  }
+
+  /** Returns a photo's size in pixels, "640 × 480 px". */
+  static String pixels(CasePhoto photo) {
+    return photo.width() + " × " + photo.height() + " px";
   }
 
   static String unitHistory(UnitHistory history) {
@@ -123,6 +129,20 @@ final class HistoryText {
                         + " to "
                         + number(r.healthyHigh())
                         + " V"));
+        text.append(NL);
+      }
+    }
+    if (!file.photos().isEmpty()) {
+      text.append("  Photos:").append(NL);
+      for (CasePhoto photo : file.photos()) {
+        text.append(
+            String.format(
+                Locale.ROOT,
+                "    %s  %s  %s%s",
+                when(photo.attachedAt()),
+                photo.fileName(),
+                pixels(photo),
+                photo.attachedBy().isEmpty() ? "" : "  by " + photo.attachedBy()));
         text.append(NL);
       }
     }

@@ -10,6 +10,7 @@ import com.stagewise.history.SearchHit;
 import com.stagewise.history.UnitHistory;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseNote;
+import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
@@ -110,7 +111,33 @@ public final class HistoryJson {
     file.actions().forEach(a -> actions.add(BundleTrees.tree(a)));
     ArrayNode notes = node.putArray("notes");
     file.notes().forEach(n -> notes.add(BundleTrees.tree(n)));
+    ArrayNode photos = node.putArray("photos");
+    file.photos().forEach(p -> photos.add(photoTree(p)));
+    ArrayNode afterRepair = node.putArray("afterRepair");
+    file.afterRepair().forEach(r -> afterRepair.add(PhotoFields.tree(r)));
     return node;
+  }
+
+  /**
+   * Returns a photo as listed with its case: {@code {"id", "caseId", "fileName", "mediaType",
+   * "width", "height", "bytes", "attachedAt", "attachedBy"}} (the picture itself is left out).
+   */
+  public static String photo(CasePhoto photo) {
+    return text(photoTree(photo));
+  }
+
+  private static ObjectNode photoTree(CasePhoto photo) {
+    return NODES
+        .objectNode()
+        .put("id", photo.id())
+        .put("caseId", photo.caseId())
+        .put("fileName", photo.fileName())
+        .put("mediaType", photo.mediaType())
+        .put("width", photo.width())
+        .put("height", photo.height())
+        .put("bytes", photo.bytes())
+        .put("attachedAt", photo.attachedAt().toString())
+        .put("attachedBy", photo.attachedBy());
   }
 
   /** Returns {@code {"hits": [...]}}. */
