@@ -1,5 +1,7 @@
 package com.stagewise.solver;
 
+import com.stagewise.circuit.Amplifier;
+import com.stagewise.circuit.Range;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.TestInput;
 import java.util.LinkedHashMap;
@@ -9,8 +11,9 @@ import java.util.Optional;
 /**
  * What a healthy stage reads in AC at each test point: the nominal amplitude of the test signal
  * there, as a peak in volts, and a healthy range from the parts' and rails' tolerances — the AC
- * counterpart of {@link ExpectedVolts}, by the same one-at-a-time corners. The app shows it on the
- * cards of AC readings, converted to the measure the reading is stated in.
+ * counterpart of {@link ExpectedVolts}, by the same one-at-a-time corners, and each op-amp
+ * section's open-loop gain at either end of its class's range. The app shows it on the cards of AC
+ * readings, converted to the measure the reading is stated in.
  *
  * <p>The analysis is the solver's small-signal AC about each corner's operating point, at the
  * frequency of the stage's AC input ({@link StageSolver#ac}); a saturated output passes no AC. A
@@ -73,28 +76,24 @@ public record ExpectedAc(
     if (hz == 0) {
       return none(0, "the stage has no AC test input");
     }
-    Optional<Map<String, Double>> nominal = amplitudes(stage);
+    Optional<Map<String, Double>> nominal = amplitudes(stage, Conditions.NOMINAL);
     if (nominal.isEmpty()) {
       return none(hz, StageSolver.solve(stage).problem());
     }
     Map<String, Double> up = new LinkedHashMap<>();
     Map<String, Double> down = new LinkedHashMap<>();
     for (Stage corner : ExpectedVolts.corners(stage)) {
-      Optional<Map<String, Double>> moved = amplitudes(corner);
-      if (moved.isEmpty()) {
-        continue;
-      }
-      for (Map.Entry<String, Double> e : nominal.get().entrySet()) {
-        Double v = moved.get().get(e.getKey());
-        if (v == null || !Double.isFinite(v)) {
-          continue;
-        }
-        double delta = v - e.getValue();
-        if (delta > 0) {
-          up.merge(e.getKey(), delta, Math::max);
-        } else {
-          down.merge(e.getKey(), -delta, Math::max);
-        }
+      spread(nominal.get(), amplitudes(corner, Conditions.NOMINAL), up, down);
+    }
+    // Each section's open-loop gain at either end of its class's range (DESIGN.md, the electrical
+    // model), one section at a time like the parts: with a large noise gain, near a corner of the
+    // feedback network, a low-gain part reads well below the nominal amplitude.
+    for (Amplifier amp : stage.amplifiers()) {
+      Range gain = amp.deviceClass().openLoopGain();
+      for (double end : new double[] {gain.low(), gain.high()}) {
+        Conditions conditions =
+            Conditions.NOMINAL.withDevice(amp.ref(), Conditions.NOMINAL.device(amp).withGain(end));
+        spread(nominal.get(), amplitudes(stage, conditions), up, down);
       }
     }
     Map<String, Double> low = new LinkedHashMap<>();
@@ -107,16 +106,39 @@ public record ExpectedAc(
     return new ExpectedAc(hz, nominal.get(), low, high, "");
   }
 
+  /** Widens the rises and falls by how far one corner's amplitudes moved from the nominal ones. */
+  private static void spread(
+      Map<String, Double> nominal,
+      Optional<Map<String, Double>> moved,
+      Map<String, Double> up,
+      Map<String, Double> down) {
+    if (moved.isEmpty()) {
+      return;
+    }
+    for (Map.Entry<String, Double> e : nominal.entrySet()) {
+      Double v = moved.get().get(e.getKey());
+      if (v == null || !Double.isFinite(v)) {
+        continue;
+      }
+      double delta = v - e.getValue();
+      if (delta > 0) {
+        up.merge(e.getKey(), delta, Math::max);
+      } else {
+        down.merge(e.getKey(), -delta, Math::max);
+      }
+    }
+  }
+
   private static ExpectedAc none(double hz, String why) {
     return new ExpectedAc(hz, Map.of(), Map.of(), Map.of(), why);
   }
 
   /** Returns the peak amplitude at every net and used pin, or empty when there is none. */
-  private static Optional<Map<String, Double>> amplitudes(Stage stage) {
-    if (!(StageSolver.solve(stage) instanceof SolveResult.Solved solved)) {
+  private static Optional<Map<String, Double>> amplitudes(Stage stage, Conditions conditions) {
+    if (!(StageSolver.solve(stage, conditions) instanceof SolveResult.Solved solved)) {
       return Optional.empty();
     }
-    Optional<AcSolution> ac = StageSolver.ac(stage, solved.primary());
+    Optional<AcSolution> ac = StageSolver.ac(stage, conditions, solved.primary());
     if (ac.isEmpty()) {
       return Optional.empty();
     }
