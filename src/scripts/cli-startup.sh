@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # Times `diagnose` on a demo case from process start, in one run (rounds alternate, so that the
 # machine's load falls on every variant alike), beside ngspice computing the same stage's fault
-# dictionary in one process (netlists written beforehand). Prints the median of each, and each
-# median's ratio to the first variant's.
+# dictionary in one process (netlists written beforehand, timed in the same rounds). Prints the
+# median of each, and each median's ratio to the first variant's.
 #   1. java -jar target/stagewise.jar diagnose …                       (plain)
 #   2. the same with -XX:SharedArchiveFile=target/stagewise-cli.jsa     (AppCDS, made by mvn package)
 #   3. target/stagewise diagnose …: the launcher beside the jar, which adds the archive and
@@ -11,7 +11,8 @@
 # lib/ and archive) variants 1 and 3 of that build run in the same rounds too, for a before/after
 # ratio measured in one run.
 # Also times `--version` alone, plain and through the launcher.
-# Usage: [BEFORE=DIR] src/scripts/cli-startup.sh [ROUNDS]   (needs mvn package first, and ngspice)
+# Usage: [BEFORE=DIR] src/scripts/cli-startup.sh [ROUNDS]   (needs mvn package first, and ngspice;
+# about two minutes)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 rounds="${1:-7}"
@@ -19,12 +20,20 @@ stage="data/stages/ferrowick-wb2-bridge-amp.stage.json"
 readings="data/readings/ferrowick-wb2-bridge-amp.reads-high.readings.json"
 [ -f target/stagewise.jar ] || { echo "run mvn -B package first" >&2; exit 1; }
 [ -f target/stagewise-cli.jsa ] || bash src/package/cli-cds.sh target
+# The fault dictionary's netlists, written (and checked once) by the test code beforehand.
+mvn -B -q -DskipTests test-compile
+mvn -B -q dependency:build-classpath -Dmdep.includeScope=test -Dmdep.outputFile=target/bench-classpath.txt
+IFS=$'\t' read -r spice_dir spice_command < <(java -cp \
+  "target/test-classes:target/classes:$(cat target/bench-classpath.txt)" \
+  com.stagewise.bench.NgspiceTime --keep "$stage")
+trap 'rm -rf "$spice_dir"' EXIT
 names=(
   "java -jar target/stagewise.jar diagnose"
   "java -XX:SharedArchiveFile=target/stagewise-cli.jsa -jar target/stagewise.jar diagnose"
   "target/stagewise diagnose"
   "java -jar target/stagewise.jar --version"
   "target/stagewise --version"
+  "ngspice, the same fault dictionary, one process"
 )
 commands=(
   "java -jar target/stagewise.jar diagnose --stage $stage --readings $readings"
@@ -32,6 +41,7 @@ commands=(
   "target/stagewise diagnose --stage $stage --readings $readings"
   "java -jar target/stagewise.jar --version"
   "target/stagewise --version"
+  "env -C $spice_dir LC_ALL=C $spice_command"
 )
 if [ -n "${BEFORE:-}" ]; then
   names+=("before: java -jar $BEFORE/stagewise.jar diagnose"
@@ -44,7 +54,7 @@ for ((r = 0; r < rounds; r++)); do
   for v in "${!commands[@]}"; do
     start=$(date +%s%N)
     # shellcheck disable=SC2086
-    ${commands[$v]} >/dev/null
+    ${commands[$v]} >/dev/null 2>&1
     end=$(date +%s%N)
     times[$v]+="$(((end - start) / 1000000)) "
   done
@@ -58,7 +68,3 @@ for v in "${!commands[@]}"; do
   echo "${names[$v]}: median ${median} ms of ${rounds} (ratio ${ratio}) [${sorted}]"
 done
 echo "load average at the end: $(cut -d' ' -f1-3 /proc/loadavg)"
-mvn -B -q -DskipTests test-compile
-mvn -B -q dependency:build-classpath -Dmdep.includeScope=test -Dmdep.outputFile=target/bench-classpath.txt
-java -cp "target/test-classes:target/classes:$(cat target/bench-classpath.txt)" \
-  com.stagewise.bench.NgspiceTime "$stage" "$rounds"

@@ -14,8 +14,18 @@ import java.util.Locale;
 public final class NgspiceTime {
   private NgspiceTime() {}
 
-  /** Arguments: the stage sheet, then the number of runs (default 5). */
+  /**
+   * Arguments: the stage sheet, then the number of runs (default 5); or {@code --keep SHEET}: writes
+   * the dictionary, runs it once to check it, and prints the folder and the command to run in it
+   * (the folder is left for the caller to time and delete).
+   */
   public static void main(String[] args) {
+    if (args[0].equals("--keep")) {
+      SpiceBatch.Written netlists = SpiceBatch.written(StageSheet.read(Path.of(args[1])));
+      netlists.run();
+      System.out.println(netlists.folder() + "\t" + netlists.command());
+      return;
+    }
     int runs = args.length > 1 ? Integer.parseInt(args[1]) : 5;
     try (SpiceBatch.Written netlists = SpiceBatch.written(StageSheet.read(Path.of(args[0])))) {
       netlists.run();

@@ -182,6 +182,16 @@ public final class SpiceBatch {
       return Duration.ofNanos(end - start);
     }
 
+    /** Returns the ngspice command that runs the dictionary from within {@link #folder()}. */
+    public String command() {
+      return "ngspice -b " + MAIN;
+    }
+
+    /** Returns the folder the netlists are written to. */
+    public java.nio.file.Path folder() {
+      return dir;
+    }
+
     /** Deletes the folder. */
     @Override
     public void close() {
