@@ -15,9 +15,9 @@ public final class NgspiceTime {
   private NgspiceTime() {}
 
   /**
-   * Arguments: the stage sheet, then the number of runs (default 5); or {@code --keep SHEET}: writes
-   * the dictionary, runs it once to check it, and prints the folder and the command to run in it
-   * (the folder is left for the caller to time and delete).
+   * Arguments: the stage sheet, then the number of runs (default 5); or {@code --keep SHEET}:
+   * writes the dictionary, runs it once to check it, and prints the folder and the command to run
+   * in it (the folder is left for the caller to time and delete).
    */
   public static void main(String[] args) {
     if (args[0].equals("--keep")) {

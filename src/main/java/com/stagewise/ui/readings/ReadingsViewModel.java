@@ -279,7 +279,7 @@ public final class ReadingsViewModel {
     ac.follow(stage, retuning);
     expectedAc.set(null);
     pad.textProperty().set("");
-    revisions.forgetUndo();
+    revisions.stageChanged(retuning, ac.hzProperty().get());
     revisions.cancelCorrection();
     diagnoser = null;
     diagnoserStage = null;

@@ -37,6 +37,8 @@ final class Revisions {
   private final StringProperty correctingText = new SimpleStringProperty("");
   private final BooleanHolder busy = new BooleanHolder();
   private Runnable undo;
+  // The readings the last undo would make stand again.
+  private List<Reading> undoBrings = List.of();
 
   /**
    * Creates the revisions of a bench.
@@ -79,7 +81,21 @@ final class Revisions {
   /** Forgets the last undo (a new reading was added, or the case changed). */
   void forgetUndo() {
     undo = null;
+    undoBrings = List.of();
     undoText.set("");
+  }
+
+  /**
+   * Forgets the last undo when the bench's stage changed, but keeps it when the stage is the same
+   * at another test frequency {@code hz} (the same case, retuned): unless undoing would bring back
+   * an AC reading taken at another frequency (the diagnosis judges every AC reading at the stage's
+   * one test frequency); then the reading stays struck and the undo is forgotten.
+   */
+  void stageChanged(boolean retuned, double hz) {
+    if (!retuned
+        || undoBrings.stream().anyMatch(r -> r.kind() == Reading.Kind.AC && r.hz() != hz)) {
+      forgetUndo();
+    }
   }
 
   /** Strikes out a standing reading: the diagnosis leaves it out from now on. */
@@ -310,6 +326,7 @@ final class Revisions {
               }
               if (undoIt != null) {
                 undo = undoIt;
+                undoBrings = List.copyOf(strike);
                 undoText.set(doneText);
               }
               refreshed.run();

@@ -198,4 +198,76 @@ class AcPadTest {
     assertThat(model.ac().frequencyProblemProperty().get()).contains("out of range");
     assertThat(t.bench.stageProperty().get().inputs().get(0).hz()).isEqualTo(1000);
   }
+
+  private ReadingRow rowAt(String at, Reading.Kind kind) {
+    return model.rows().stream()
+        .filter(r -> r.reading().at().equals(at) && r.reading().kind() == kind)
+        .findFirst()
+        .orElseThrow();
+  }
+
+  @Test
+  void testFrequency_changed_keepsTheUndoOfAStruckReading() {
+    // A rail mistyped (1.496 V for 14.96 V at U1 pin 8), struck out, then the frequency changed:
+    // the strike can still be undone, and the undone reading stands on the retuned stage.
+    type(1.496);
+    type(-14.97);
+    model.strike(rowAt("U1.8", Reading.Kind.DC));
+    assertThat(model.undoTextProperty().get()).startsWith("Struck out U1 pin 8");
+
+    model.ac().frequencyTextProperty().set("2k");
+    model.setTestFrequency();
+
+    assertThat(model.ac().frequencyProblemProperty().get()).isEmpty();
+    assertThat(t.bench.stageProperty().get().inputs().get(0).hz()).isEqualTo(2000);
+    assertThat(model.undoTextProperty().get()).startsWith("Struck out U1 pin 8");
+    model.undo();
+    assertThat(t.problems).isEmpty();
+    assertThat(t.bench.readings()).extracting(Reading::value).containsExactly(-14.97, 1.496);
+    assertThat(t.bench.struckReadings()).isEmpty();
+    assertThat(model.undoTextProperty().get()).isEmpty();
+    var file = t.store.cases().caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
+    assertThat(file.readings()).noneMatch(StoredReading::struck);
+  }
+
+  @Test
+  void testFrequency_changed_keepsTheUndoOfACorrection() {
+    type(1.496);
+    type(-14.97);
+    model.correct(rowAt("U1.8", Reading.Kind.DC));
+    model.pad().textProperty().set("14.96");
+    model.addReading();
+    assertThat(model.undoTextProperty().get()).startsWith("Corrected U1 pin 8");
+
+    model.ac().frequencyTextProperty().set("500");
+    model.setTestFrequency();
+
+    assertThat(t.bench.stageProperty().get().inputs().get(0).hz()).isEqualTo(500);
+    assertThat(model.undoTextProperty().get()).startsWith("Corrected U1 pin 8");
+    model.undo();
+    assertThat(t.problems).isEmpty();
+    assertThat(t.bench.readings()).extracting(Reading::value).containsExactly(-14.97, 1.496);
+  }
+
+  @Test
+  void testFrequency_changed_afterStrikingAnAcReading_forgetsOnlyThatUndo() {
+    // An AC reading struck at 1 kHz cannot stand again at 2 kHz (every AC reading is judged at the
+    // stage's one test frequency): the strike stays, with its undo forgotten rather than refused.
+    healthyRails();
+    model.choose("OUT");
+    model.setAc(true);
+    type(0.47);
+    model.strike(rowAt("OUT", Reading.Kind.AC));
+    assertThat(model.undoTextProperty().get()).startsWith("Struck out");
+
+    model.ac().frequencyTextProperty().set("2k");
+    model.setTestFrequency();
+
+    assertThat(t.bench.stageProperty().get().inputs().get(0).hz()).isEqualTo(2000);
+    assertThat(model.undoTextProperty().get()).isEmpty();
+    assertThat(t.bench.struckReadings())
+        .extracting(s -> s.reading().kind())
+        .containsExactly(Reading.Kind.AC);
+    assertThat(t.problems).isEmpty();
+  }
 }
