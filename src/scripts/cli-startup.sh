@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
 # Times `diagnose` on a demo case from process start, in one run (rounds alternate, so that the
 # machine's load falls on every variant alike), beside ngspice computing the same stage's fault
-# dictionary in one process (netlists written beforehand, timed in the same rounds). Prints the
-# median of each, and each median's ratio to the first variant's.
+# dictionary in one process (netlists written beforehand, timed in the same rounds). Prints each
+# one's median wall time (and its least) and median processor time, with each median's ratio to
+# the first variant's.
 #   1. java -jar target/stagewise.jar diagnose …                       (plain)
 #   2. the same with -XX:SharedArchiveFile=target/stagewise-cli.jsa     (AppCDS, made by mvn package)
 #   3. target/stagewise diagnose …: the launcher beside the jar, which adds the archive and
@@ -49,22 +50,33 @@ if [ -n "${BEFORE:-}" ]; then
   commands+=("java -jar $BEFORE/stagewise.jar diagnose --stage $stage --readings $readings"
     "java -XX:SharedArchiveFile=$BEFORE/stagewise-cli.jsa -XX:TieredStopAtLevel=1 -XX:+UseSerialGC -jar $BEFORE/stagewise.jar diagnose --stage $stage --readings $readings")
 fi
-declare -A times
+# Wall time from process start (what the user waits), and processor time (user + system, all
+# threads; it counts the work done and moves less with the machine's load than the wall time).
+declare -A times cpus
+cpu_file=$(mktemp)
 for ((r = 0; r < rounds; r++)); do
   for v in "${!commands[@]}"; do
     start=$(date +%s%N)
     # shellcheck disable=SC2086
-    ${commands[$v]} >/dev/null 2>&1
+    /usr/bin/time -o "$cpu_file" -f "%U %S" ${commands[$v]} >/dev/null 2>&1
     end=$(date +%s%N)
     times[$v]+="$(((end - start) / 1000000)) "
+    cpus[$v]+="$(awk '{ printf "%d", ($1 + $2) * 1000 }' "$cpu_file") "
   done
 done
+rm -f "$cpu_file"
+median() { echo "$1" | tr ' ' '\n' | grep . | sort -n | sed -n "$((rounds / 2 + 1))p"; }
 first=""
+first_cpu=""
 for v in "${!commands[@]}"; do
   sorted=$(echo "${times[$v]}" | tr ' ' '\n' | grep . | sort -n | paste -sd' ')
-  median=$(echo "$sorted" | tr ' ' '\n' | sed -n "$((rounds / 2 + 1))p")
-  first="${first:-$median}"
-  ratio=$(awk -v a="$median" -v b="$first" 'BEGIN { printf "%.2f", a / b }')
-  echo "${names[$v]}: median ${median} ms of ${rounds} (ratio ${ratio}) [${sorted}]"
+  wall=$(median "${times[$v]}")
+  least=$(echo "$sorted" | cut -d' ' -f1)
+  cpu=$(median "${cpus[$v]}")
+  first="${first:-$wall}"
+  first_cpu="${first_cpu:-$cpu}"
+  echo "${names[$v]}: wall median ${wall} ms (ratio $(awk -v a="$wall" -v b="$first" \
+    'BEGIN { printf "%.2f", a / b }')), least ${least} ms; processor median ${cpu} ms (ratio \
+$(awk -v a="$cpu" -v b="$first_cpu" 'BEGIN { printf "%.2f", a / b }')); ${rounds} rounds [${sorted}]"
 done
 echo "load average at the end: $(cut -d' ' -f1-3 /proc/loadavg)"
