@@ -68,7 +68,7 @@ class HistorySubcommandsTest {
   }
 
   @Test
-  void subcommands_areTheTwentyOneOfTheHistory() {
+  void subcommands_areTheTwentyTwoOfTheHistory() {
     assertThat(subcommands().toList())
         .containsExactlyInAnyOrder(
             "models",
@@ -81,6 +81,7 @@ class HistorySubcommandsTest {
             "strike-reading",
             "add-note",
             "add-action",
+            "attach-photo",
             "show",
             "search",
             "faults",
@@ -123,6 +124,21 @@ class HistorySubcommandsTest {
           .contains("reading")
           .contains("ffff0000")
           .doesNotContain("Exception");
+      assertThat(HistoryDigest.of(db)).isEqualTo(before);
+    }
+
+    @Test
+    void attachPhoto_fileThatIsNoPicture_exitsTwoAndChangesNothing() throws Exception {
+      Path db = demo();
+      String caseId = openCase(db);
+      Path notAPicture = folder.resolve("board.jpg");
+      Files.writeString(notAPicture, "GIF89a is not what this holds", StandardCharsets.UTF_8);
+      Map<String, String> before = HistoryDigest.of(db);
+
+      Run refused = history(db, "attach-photo", "--case", caseId, notAPicture.toString());
+
+      assertThat(refused.code()).isEqualTo(ExitCode.BAD_INPUT);
+      assertThat(refused.err()).contains("board.jpg", "PNG or JPEG").doesNotContain("Exception");
       assertThat(HistoryDigest.of(db)).isEqualTo(before);
     }
 
