@@ -20,6 +20,12 @@ final class Linearization implements Analysis.Linearized {
   /** The AC factors about this point, made on the first AC question. */
   private AcUpdate acUpdate;
 
+  /**
+   * The one step with no change ({@code x + M⁻¹·(b − M·x)}, x refined once), made on the first
+   * change that leaves the residual as it is: the step of every such change.
+   */
+  private double[] unmoved;
+
   Linearization(
       CompiledStage analysis, SectionState[] states, boolean[] collapsed, DcSystem system) {
     this.analysis = analysis;
@@ -30,12 +36,15 @@ final class Linearization implements Analysis.Linearized {
     this.system = system;
   }
 
+  /** A section's parameters before the change being stepped (null for other changes). */
+  private DeviceParams undone;
+
   @Override
   public Optional<OperatingPoint> step(Change change) {
-    Change undo = analysis.apply(change);
+    Change undo = apply(change);
     try {
       // Read while the change holds: a changed driven net reads its new volts.
-      double[] moved = moved();
+      double[] moved = moved(change);
       return moved == null
           ? Optional.empty()
           : Optional.of(analysis.pointOf(analysis.search.stateOf(states, moved)));
@@ -46,25 +55,28 @@ final class Linearization implements Analysis.Linearized {
 
   @Override
   public double[] stepRead(Change change, Probe probe) {
-    Change undo = analysis.apply(change);
+    Change undo = apply(change);
     try {
-      double[] moved = moved();
+      double[] moved = moved(change);
       return moved == null ? null : probe.read(network, moved);
     } finally {
       analysis.apply(undo);
     }
   }
 
+  /** Applies a change to the network, noting a section's parameters before it; returns the undo. */
+  private Change apply(Change change) {
+    Change undo = analysis.apply(change);
+    undone = undo instanceof Change.Device d ? d.params() : null;
+    return undo;
+  }
+
   /**
    * The unknowns after one step with the change applied to the network, or null when a section
    * would change state.
    */
-  private double[] moved() {
-    double[] dx = system.factors().solve(network.residual(states, collapsed, x));
-    double[] moved = new double[x.length];
-    for (int i = 0; i < x.length; i++) {
-      moved[i] = x[i] + dx[i];
-    }
+  private double[] moved(Change change) {
+    double[] moved = stepFor(change);
     if (network.nonlinear && !chord(moved)) {
       return null;
     }
@@ -74,6 +86,69 @@ final class Linearization implements Analysis.Linearized {
       }
     }
     return analysis.search.isConsistent(states, moved) ? moved : null;
+  }
+
+  /**
+   * The step for a change already applied: where the change leaves the residual as it was, the step
+   * with no change (made once, then copied), else a fresh one.
+   */
+  private double[] stepFor(Change change) {
+    if (keepsResidual(change)) {
+      // The residual would be the same numbers as with no change, so would the step.
+      if (unmoved == null) {
+        unmoved = step();
+      }
+      return unmoved.clone();
+    }
+    return step();
+  }
+
+  /** One step {@code x + M⁻¹·(b − M·x)} with the numbers as the network holds them now. */
+  private double[] step() {
+    double[] dx = system.factors().solve(network.residual(states, collapsed, x));
+    double[] moved = new double[x.length];
+    for (int i = 0; i < x.length; i++) {
+      moved[i] = x[i] + dx[i];
+    }
+    return moved;
+  }
+
+  /**
+   * Whether a change of a section's parameters leaves the DC residual at x exactly as it is, so
+   * that its step is the step with no change: the residual holds a section's bias currents and, by
+   * its state, its gain and offset (linear), its upper headroom (clamped high) or lower headroom
+   * (clamped low), none of them where its limits have collapsed or it is dead; its output
+   * resistance always. The change is compared with the parameters the network held before it.
+   */
+  private boolean keepsResidual(Change change) {
+    if (!(change instanceof Change.Device d) || network.nonlinear) {
+      return false;
+    }
+    int k = -1;
+    for (int i = 0; i < network.sections.length; i++) {
+      if (network.sections[i].ref().equals(d.section())) {
+        k = i;
+        break;
+      }
+    }
+    DeviceParams before = undone;
+    DeviceParams after = d.params();
+    if (k < 0
+        || before == null
+        || before.biasPlus() != after.biasPlus()
+        || before.biasMinus() != after.biasMinus()
+        || before.outputResistance() != after.outputResistance()) {
+      return false;
+    }
+    if (network.sourceNode[k] < 0) {
+      return true;
+    }
+    return switch (states[k]) {
+      case LINEAR -> before.gain() == after.gain() && before.offset() == after.offset();
+      case HIGH -> collapsed[k] || before.headroomHigh() == after.headroomHigh();
+      case LOW -> collapsed[k] || before.headroomLow() == after.headroomLow();
+      case DEAD -> true;
+    };
   }
 
   /**
@@ -108,15 +183,11 @@ final class Linearization implements Analysis.Linearized {
     if (network.nonlinear || !movesRightHandSideOnly(change)) {
       return Optional.empty();
     }
-    Change undo = analysis.apply(change);
+    Change undo = apply(change);
     try {
       // The matrix is the one factorised here, so one step is the exact solution with these
       // states, and each linear section's stability is as it was.
-      double[] dx = system.factors().solve(network.residual(states, collapsed, x));
-      double[] moved = new double[x.length];
-      for (int i = 0; i < x.length; i++) {
-        moved[i] = x[i] + dx[i];
-      }
+      double[] moved = stepFor(change);
       for (int k = 0; k < states.length; k++) {
         if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
           return Optional.empty();
