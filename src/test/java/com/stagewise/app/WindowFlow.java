@@ -330,6 +330,16 @@ abstract class WindowFlow {
   void atSizes(int[][] sizes, AtSize look) throws Exception {
     for (int[] size : sizes) {
       resize(size[0], size[1]);
+      relayout();
+      look.look(size, size[0] + "x" + size[1]);
+    }
+    resize(BenchApp.WIDTH, BenchApp.HEIGHT);
+  }
+
+  /** Lays the window out anew (after a change of size or of look) and lets it settle. */
+  void relayout() throws Exception {
+    for (int pass = 0; pass < 2; pass++) {
+      // Twice: a drawing that redraws for its new room may change its own size once more.
       fx(
           () -> {
             window.getScene().getRoot().applyCss();
@@ -337,9 +347,26 @@ abstract class WindowFlow {
             return null;
           });
       WaitForAsyncUtils.waitForFxEvents();
-      look.look(size, size[0] + "x" + size[1]);
     }
-    resize(BenchApp.WIDTH, BenchApp.HEIGHT);
+  }
+
+  /** The settings' switches of the screens' look. */
+  enum Look {
+    LARGER_TEXT,
+    HIGH_CONTRAST
+  }
+
+  /** Turns a switch of the screens' look on or off, as the unit screen's buttons do, and relays. */
+  void look(Look look, boolean on) throws Exception {
+    fx(
+        () -> {
+          (look == Look.LARGER_TEXT
+                  ? app.bench().largeTextProperty()
+                  : app.bench().highContrastProperty())
+              .set(on);
+          return null;
+        });
+    relayout();
   }
 
   private void resize(double width, double height) throws Exception {
@@ -378,12 +405,26 @@ abstract class WindowFlow {
 
   /**
    * Collects every visible text that its control shows shortened (JavaFX then draws it with an
-   * ellipsis: the control's own text and the text it draws differ), and every wrapping label
-   * squeezed narrower than one of its words (which it then breaks letter by letter).
+   * ellipsis: the control's own text and the text it draws differ), every wrapping label squeezed
+   * narrower than one of its words (which it then breaks letter by letter), and every text a
+   * drawing shortens with its own ellipsis.
    */
   static List<String> cutTexts(Node node, List<String> cut) {
     if (!node.isVisible()) {
       return cut;
+    }
+    if (node instanceof Text drawn
+        && !(node.getParent() instanceof Labeled)
+        && drawn.getText() != null
+        && drawn.getText().endsWith("\u2026")
+        && !insideField(node)) {
+      // A drawing (the package, the schematic, a band chart) shortens a text that does not fit
+      // its place with an ellipsis of its own.
+      cut.add(
+          (drawn.getId() == null ? "a drawn text" : "#" + drawn.getId())
+              + " shows \""
+              + drawn.getText()
+              + "\"");
     }
     if (node instanceof Labeled labeled
         && labeled.getText() != null
@@ -428,6 +469,15 @@ abstract class WindowFlow {
       }
     }
     return cut;
+  }
+
+  private static boolean insideField(Node node) {
+    for (Node up = node.getParent(); up != null; up = up.getParent()) {
+      if (up instanceof TextInputControl) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private static String name(Labeled labeled) {

@@ -146,8 +146,12 @@ public final class BenchWindow {
   private static void keepButtonsWhole(Node node) {
     if (node instanceof javafx.scene.control.ButtonBase button
         && !button.getStyleClass().contains("key")) {
-      // Keypad keys may narrow to the 48 px touch minimum instead (widgets.css).
-      button.setMinWidth(Region.USE_PREF_SIZE);
+      // Keypad keys may narrow to the 48 px touch minimum instead (widgets.css). Bound, not set:
+      // the theme's 48 px minimum width of every button (bench.css) would override a value set
+      // in code, and larger text then shortened "Search" to "Se…" in a 1024 px window.
+      button
+          .minWidthProperty()
+          .bind(new javafx.beans.property.SimpleDoubleProperty(Region.USE_PREF_SIZE));
     }
     if (node instanceof javafx.scene.control.Label label) {
       // A wrapped label gets the lines it needs.
