@@ -406,25 +406,11 @@ abstract class WindowFlow {
   /**
    * Collects every visible text that its control shows shortened (JavaFX then draws it with an
    * ellipsis: the control's own text and the text it draws differ), every wrapping label squeezed
-   * narrower than one of its words (which it then breaks letter by letter), and every text a
-   * drawing shortens with its own ellipsis.
+   * narrower than one of its words (which it then breaks letter by letter).
    */
   static List<String> cutTexts(Node node, List<String> cut) {
     if (!node.isVisible()) {
       return cut;
-    }
-    if (node instanceof Text drawn
-        && !(node.getParent() instanceof Labeled)
-        && drawn.getText() != null
-        && drawn.getText().endsWith("\u2026")
-        && !insideField(node)) {
-      // A drawing (the package, the schematic, a band chart) shortens a text that does not fit
-      // its place with an ellipsis of its own.
-      cut.add(
-          (drawn.getId() == null ? "a drawn text" : "#" + drawn.getId())
-              + " shows \""
-              + drawn.getText()
-              + "\"");
     }
     if (node instanceof Labeled labeled
         && labeled.getText() != null
@@ -469,15 +455,6 @@ abstract class WindowFlow {
       }
     }
     return cut;
-  }
-
-  private static boolean insideField(Node node) {
-    for (Node up = node.getParent(); up != null; up = up.getParent()) {
-      if (up instanceof TextInputControl) {
-        return true;
-      }
-    }
-    return false;
   }
 
   private static String name(Labeled labeled) {
