@@ -106,6 +106,8 @@ public final class StartView {
     ListView<StartViewModel.UnitRow> list = new ListView<>(model.matches());
     list.setId("unit-matches");
     list.setPrefHeight(170);
+    // Never squeezed below its first two rows (start.css): in a short window the screen scrolls.
+    list.getStyleClass().add("unit-matches");
     list.setCellFactory(
         v ->
             new ListCell<>() {
