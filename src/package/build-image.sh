@@ -7,7 +7,8 @@
 #
 # The archive is made by starting the image once with the demo data under a virtual display
 # (Xvfb; `apt-get install xvfb`) until the unit screen shows; without a display or Xvfb the image is
-# built without it and starts a little slower.
+# built without it and starts a little slower. A copied or moved image makes its own again with
+# Stagewise/lib/app/desktop/prepare-quick-start.sh (install-desktop-entry.sh runs it when needed).
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 target="$(cd "${1:-$here/../../target}" && pwd)"
@@ -28,7 +29,8 @@ for jar in "$target"/lib/*.jar; do
     *) cp "$jar" "$work/input/lib/" ;;
   esac
 done
-cp "$here/stagewise.desktop.in" "$here/stagewise-mime.xml" "$here/install-desktop-entry.sh" "$work/input/desktop/"
+cp "$here/stagewise.desktop.in" "$here/stagewise-mime.xml" "$here/install-desktop-entry.sh" \
+  "$here/prepare-quick-start.sh" "$here/train-cds.sh" "$work/input/desktop/"
 
 # JavaFX on the module path (as JavaFX expects; no "unsupported configuration" warning), ControlsFX
 # on the class path with the JavaFX internals it reaches for; the same quick-start JVM options as
@@ -60,19 +62,16 @@ cfg="$appdir/$name.cfg"
 # The JavaFX jars sit on the module path; take them off the class path jpackage wrote.
 sed -i '/^app.classpath=\$APPDIR\/javafx\//d' "$cfg"
 
-if [ -n "${DISPLAY:-}" ]; then
-  bash "$here/train-cds.sh" "$image" "$work"
-elif command -v xvfb-run >/dev/null; then
-  xvfb-run -a -s "-screen 0 1280x800x24" bash "$here/train-cds.sh" "$image" "$work"
-fi
-if [ -s "$work/stagewise.jsa" ]; then
-  cp "$work/stagewise.jsa" "$appdir/stagewise.jsa"
-  # -Xshare:auto: should the archive not fit (another runtime, a changed jar), the app starts
-  # without it instead of failing.
-  sed -i "s|^\[JavaOptions\]|[JavaOptions]\njava-options=-XX:SharedArchiveFile=\$APPDIR/stagewise.jsa\njava-options=-Xshare:auto|" "$cfg"
+# The quick start: a class-data sharing archive, made by one start of the image with the demo
+# (prepare-quick-start.sh, shipped in the image, so that a copied or moved image can make its own:
+# the JVM takes the archive only in the folder where it was made). -Xshare:auto: should the archive
+# be missing or not fit (another folder, a changed jar), the app starts without it instead of failing,
+# and says nothing.
+sed -i "s|^\[JavaOptions\]|[JavaOptions]\njava-options=-XX:SharedArchiveFile=\$APPDIR/stagewise.jsa\njava-options=-Xshare:auto|" "$cfg"
+chmod +x "$appdir/desktop/install-desktop-entry.sh" "$appdir/desktop/prepare-quick-start.sh"
+if "$appdir/desktop/prepare-quick-start.sh"; then
   echo "Class-data sharing archive: $appdir/stagewise.jsa"
 else
-  echo "No display and no Xvfb: the image is built without a class-data sharing archive." >&2
+  echo "The image is built without a class-data sharing archive (it starts a little slower)." >&2
 fi
-chmod +x "$appdir/desktop/install-desktop-entry.sh"
 echo "App image: $image  (start it with $image/bin/$name; menu entry: $appdir/desktop/install-desktop-entry.sh)"

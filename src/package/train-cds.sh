@@ -3,16 +3,25 @@
 # launcher would, with the demo data on a fresh folder, until the window is usable (the unit screen
 # laid out with the demo units listed); then ends it,
 # and the JVM writes the classes it loaded to WORK/stagewise.jsa. Needs a display (or Xvfb).
+# With --check instead of WORK, starts the image's java with the archive it has and -Xshare:on
+# (which refuses an archive that does not fit rather than starting without it) and exits 0 only
+# when the archive fits the folder the image sits in now (the JVM records the class path's folder).
 #
-# Usage: src/package/train-cds.sh IMAGE_DIR WORK_DIR   (build-image.sh runs it)
+# Usage: train-cds.sh IMAGE_DIR WORK_DIR | train-cds.sh IMAGE_DIR --check
+#   (prepare-quick-start.sh, shipped in the image beside this script, runs it)
 set -euo pipefail
 image="$1"
 work="$2"
 appdir="$image/lib/app"
 cfg="$appdir/Stagewise.cfg"
 cp="$(sed -n 's/^app.classpath=//p' "$cfg" | sed "s|\$APPDIR|$appdir|g" | paste -sd:)"
-mapfile -t opts < <(sed -n 's/^java-options=//p' "$cfg" | sed "s|\$APPDIR|$appdir|g")
 main="$(sed -n 's/^app.mainclass=//p' "$cfg")"
+if [ "$work" = "--check" ]; then
+  mapfile -t opts < <(sed -n 's/^java-options=//p' "$cfg" | grep -v '^-Xshare' | sed "s|\$APPDIR|$appdir|g")
+  exec "$image/lib/runtime/bin/java" "${opts[@]}" -Xshare:on -cp "$cp" "$main" --version >/dev/null 2>&1
+fi
+# The archive being made must not be read while it is made.
+mapfile -t opts < <(sed -n 's/^java-options=//p' "$cfg" | grep -v -e '^-Xshare' -e '^-XX:SharedArchiveFile' | sed "s|\$APPDIR|$appdir|g")
 log="$work/train.log"
 data="$work/train-data"
 mkdir -p "$data"
