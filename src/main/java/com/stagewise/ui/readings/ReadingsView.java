@@ -26,6 +26,7 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import org.controlsfx.control.SegmentedButton;
 
 /**
  * The readings screen: the pin to probe on the package, the value pad, and what the readings show.
@@ -136,14 +137,14 @@ public final class ReadingsView {
     StackPane drawingHolder = new StackPane(drawing, schematic);
     drawingHolder.setMinHeight(200);
     VBox.setVgrow(drawingHolder, Priority.ALWAYS);
-    javafx.scene.control.ToggleGroup views = new javafx.scene.control.ToggleGroup();
     javafx.scene.control.ToggleButton onPackage = new javafx.scene.control.ToggleButton("Package");
     onPackage.setId("show-package");
     javafx.scene.control.ToggleButton onSchematic =
         new javafx.scene.control.ToggleButton("Schematic");
     onSchematic.setId("show-schematic");
-    onPackage.setToggleGroup(views);
-    onSchematic.setToggleGroup(views);
+    // One control of two joined halves (ControlsFX): where the points are picked.
+    SegmentedButton views = new SegmentedButton(onPackage, onSchematic);
+    views.setId("readings-view");
     onPackage.setSelected(true);
     // Pins on the package; nets and part leads (R2.1, D1.a) on the schematic.
     onPackage.setOnAction(e -> showSchematic(false, onPackage, onSchematic));
@@ -153,7 +154,7 @@ public final class ReadingsView {
     Label tapHint = new Label("Tap a pin, a wire or a part's lead");
     tapHint.getStyleClass().add("hint");
     tapHint.setWrapText(true);
-    VBox viewBar = new VBox(4, new HBox(6, onPackage, onSchematic), tapHint);
+    VBox viewBar = new VBox(4, views, tapHint);
     ComboBox<ProbePoint> other = new ComboBox<>(model.testPoints());
     other.setId("other-point");
     other.setMaxWidth(Double.MAX_VALUE);

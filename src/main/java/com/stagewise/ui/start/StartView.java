@@ -19,12 +19,14 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import javafx.util.Duration;
+import org.controlsfx.control.textfield.TextFields;
 
 /** The unit screen: the serial search with its keypad, the unit's history and the case buttons. */
 public final class StartView {
   private final StartViewModel model;
   private final HBox root = new HBox(16);
-  private final TextField serialField = new TextField();
+  // With a clear button (ControlsFX) that empties it in one tap; the list then shows open cases.
+  private final TextField serialField = TextFields.createClearableTextField();
   private Keypad keypad;
 
   /** Builds the screen bound to its model. */

@@ -15,13 +15,13 @@ import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.ToggleButton;
-import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import org.controlsfx.control.SegmentedButton;
 
 /**
  * The suspects screen: the ranked list, and the chosen suspect's voltages beside the measured ones.
@@ -115,15 +115,16 @@ public final class SuspectsView {
     ScrollPane scroll = new ScrollPane(table);
     scroll.setFitToWidth(true);
     schematic.setId("suspect-schematic");
-    ToggleGroup views = new ToggleGroup();
     ToggleButton asDrawing = new ToggleButton("Schematic");
     asDrawing.setId("suspect-as-schematic");
     ToggleButton asTable = new ToggleButton("Table");
     asTable.setId("suspect-as-table");
-    asDrawing.setToggleGroup(views);
-    asTable.setToggleGroup(views);
+    // One control of two joined halves (ControlsFX): the suspect shown as a drawing or a table.
+    SegmentedButton viewRow = new SegmentedButton(asDrawing, asTable);
+    viewRow.setId("suspect-view");
     asDrawing.setSelected(true);
-    views
+    viewRow
+        .getToggleGroup()
         .selectedToggleProperty()
         .addListener(
             (o, was, now) -> {
@@ -135,8 +136,6 @@ public final class SuspectsView {
     scroll.visibleProperty().bind(asTable.selectedProperty());
     StackPane shown = new StackPane(schematic, scroll);
     VBox.setVgrow(shown, Priority.ALWAYS);
-    HBox viewRow = new HBox(8, asDrawing, asTable);
-    viewRow.setAlignment(Pos.CENTER_LEFT);
     Label checkTitle = new Label("To confirm the first suspect");
     checkTitle.getStyleClass().add("section-title");
     Label check = new Label();

@@ -1,0 +1,47 @@
+package com.stagewise.app;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.concurrent.TimeUnit;
+import javafx.scene.Node;
+import javafx.scene.control.ListView;
+import org.junit.jupiter.api.Test;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * The unit screen's serial field in a real (headless) window: its clear button (ControlsFX's
+ * clearable field) empties it in one tap, and the live search then lists the shop's units again.
+ */
+class SerialFieldFlowTest extends WindowFlow {
+
+  @Test
+  void clearButton_emptiesTheSerial_andTheListShowsTheUnitsAgain() throws Exception {
+    robot.clickOn("#caution-ok");
+    settle();
+    findDemoUnit();
+    assertThat(text("#serial")).isEqualTo(SERIAL);
+    assertThat(units()).isEqualTo(1);
+
+    Node clear = fx(() -> window.getScene().lookup("#serial .clear-button"));
+    assertThat(clear).as("the serial field's clear button").isNotNull();
+    // The button fades in once the field holds text; wait until it takes a tap.
+    WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> fx(() -> clear.getOpacity() > 0.9));
+    robot.clickOn(clear);
+    settle();
+
+    assertThat(text("#serial")).isEmpty();
+    // The live search runs after a short pause in the typing; the demo shop has several units.
+    WaitForAsyncUtils.waitFor(
+        30,
+        TimeUnit.SECONDS,
+        () -> {
+          settle();
+          return units() > 1;
+        });
+    assertThat(text("#unit-matches-note")).doesNotContain("1 unit found");
+  }
+
+  private int units() throws Exception {
+    return fx(() -> ((ListView<?>) window.getScene().lookup("#unit-matches")).getItems().size());
+  }
+}
