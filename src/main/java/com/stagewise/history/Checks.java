@@ -203,14 +203,41 @@ public final class Checks {
     }
   }
 
-  /** Checks a reading taken after the repair; {@code field} names it in messages. */
+  /**
+   * Checks a reading taken after the repair; {@code field} names it in messages. A volts reading's
+   * value and band are finite numbers (an AC amplitude and its band 0 or more, at a finite
+   * frequency above 0); an ohms reading's are 0 ohms or more, or OL (+∞), and it names its second
+   * point.
+   */
   public static void afterRepair(String source, String field, AfterRepairReading r) {
     shortText(source, field + ".at", r.at(), true);
-    finite(source, field + ".value", r.value());
+    boolean ohms = r.kind() == ReadingKind.OHMS;
+    if (ohms) {
+      shortText(source, field + ".to", r.to(), true);
+      ohmsValue(source, field + ".value", r.value());
+    } else {
+      finite(source, field + ".value", r.value());
+    }
+    if (r.kind() == ReadingKind.AC) {
+      finite(source, field + ".hz", r.hz());
+      if (r.hz() <= 0) {
+        throw new InvalidInputException(
+            source, field + ".hz", "expected a frequency above 0 Hz, got " + r.hz());
+      }
+      if (r.value() < 0) {
+        throw new InvalidInputException(
+            source, field + ".value", "expected an AC amplitude of 0 V or more, got " + r.value());
+      }
+    }
     text(source, field + ".meter", r.meterText(), MAX_TEXT);
     if (r.hasBand()) {
-      finite(source, field + ".healthyLow", r.healthyLow());
-      finite(source, field + ".healthyHigh", r.healthyHigh());
+      if (ohms) {
+        ohmsValue(source, field + ".healthyLow", r.healthyLow());
+        ohmsValue(source, field + ".healthyHigh", r.healthyHigh());
+      } else {
+        finite(source, field + ".healthyLow", r.healthyLow());
+        finite(source, field + ".healthyHigh", r.healthyHigh());
+      }
       if (r.healthyLow() > r.healthyHigh()) {
         throw new InvalidInputException(
             source,
@@ -220,6 +247,17 @@ public final class Checks {
                 + ") is above its high end ("
                 + r.healthyHigh()
                 + ")");
+      }
+    }
+  }
+
+  /** Checks ohms: 0 or more, or the meter's over-range (+∞, OL). */
+  private static void ohmsValue(String source, String field, double ohms) {
+    if (ohms != Double.POSITIVE_INFINITY) {
+      finite(source, field, ohms);
+      if (ohms < 0) {
+        throw new InvalidInputException(
+            source, field, "expected 0 ohms or more, or OL, got " + ohms);
       }
     }
   }

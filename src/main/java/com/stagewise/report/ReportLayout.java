@@ -8,6 +8,7 @@ import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CaseNote;
 import com.stagewise.history.record.CasePhoto;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredPhoto;
@@ -306,7 +307,10 @@ final class ReportLayout {
     }
   }
 
-  /** The readings taken again after the repair, each against its healthy band. */
+  /**
+   * The readings taken again after the repair, each in its kind (DC, AC in its measure at its
+   * frequency, ohms with the power off between two points) against its healthy band.
+   */
   private void afterRepair() {
     List<AfterRepairReading> readings = report.caseFile().afterRepair();
     if (readings.isEmpty()) {
@@ -315,9 +319,9 @@ final class ReportLayout {
     flow.heading("After repair", 3 * Style.TABLE.leading());
     flow.paragraph(
         Style.BODY,
-        "The points read again after the repair, each against what a healthy stage reads there"
-            + " (the healthy band over the parts' and rails' tolerances). These readings are not"
-            + " part of the diagnosis above.");
+        "The points read again after the repair, each in the kind it was read during the diagnosis"
+            + " and against what a healthy stage reads there (the healthy band over the parts' and"
+            + " rails' tolerances). These readings are not part of the diagnosis above.");
     flow.gap(3);
     long inside = readings.stream().filter(AfterRepairReading::inside).count();
     flow.paragraph(
@@ -327,20 +331,56 @@ final class ReportLayout {
     for (AfterRepairReading r : readings) {
       rows.add(
           List.of(
-              Wording.point(r.at()),
-              Engineering.reading(r.value(), MeterSpec.DEFAULT),
-              r.hasBand() ? Engineering.band(r.healthyLow(), r.healthyHigh()) : "not known",
+              r.to().isEmpty()
+                  ? Wording.point(r.at())
+                  : Wording.point(r.at()) + " to " + Wording.point(r.to()),
+              afterRepairKind(r),
+              afterRepairValue(r, r.value()),
+              !r.hasBand() ? "not known" : afterRepairBand(r),
               !r.hasBand() ? "-" : r.inside() ? "inside" : "OUTSIDE",
               when(r.takenAt())));
     }
     flow.table(
         List.of(
-            new Column("Test point", 100),
-            new Column("Value", 80),
-            new Column("Healthy band", 150),
-            new Column("Verdict", 60),
-            new Column("Taken (UTC)", PageFlow.bodyWidth() - 390)),
+            new Column("Test point", 85),
+            new Column("Kind", 90),
+            new Column("Value", 65),
+            new Column("Healthy band", 120),
+            new Column("Verdict", 55),
+            new Column("Taken (UTC)", PageFlow.bodyWidth() - 415)),
         rows);
+  }
+
+  /** Returns "DC", "AC RMS at 1 kHz" or "ohms, power off". */
+  private static String afterRepairKind(AfterRepairReading r) {
+    return switch (r.kind()) {
+      case DC -> "DC";
+      case AC ->
+          "AC "
+              + AcMeasure.of(r.measure()).map(AcMeasure::words).orElse(r.measure())
+              + " at "
+              + Engineering.of(r.hz(), "Hz", 4);
+      case OHMS -> "ohms, power off";
+    };
+  }
+
+  /** Returns a value as printed: volts with the meter's digits, or ohms (OL for +∞). */
+  private static String afterRepairValue(AfterRepairReading r, double value) {
+    if (r.kind() == ReadingKind.OHMS) {
+      return value == Double.POSITIVE_INFINITY ? "OL" : Engineering.of(value, "Ω", 4);
+    }
+    return Engineering.reading(value, MeterSpec.DEFAULT);
+  }
+
+  /** Returns a healthy band as printed: "-4.8 V to -4.6 V", "46.5 kΩ to 47.5 kΩ", "OL". */
+  private static String afterRepairBand(AfterRepairReading r) {
+    if (r.kind() != ReadingKind.OHMS) {
+      return Engineering.band(r.healthyLow(), r.healthyHigh());
+    }
+    if (r.healthyLow() == Double.POSITIVE_INFINITY) {
+      return "OL";
+    }
+    return afterRepairValue(r, r.healthyLow()) + " to " + afterRepairValue(r, r.healthyHigh());
   }
 
   private void photos() {

@@ -114,22 +114,7 @@ final class HistoryText {
       // Read again after the repair: kept apart from the readings of the fault.
       text.append("  After repair:").append(NL);
       for (AfterRepairReading r : file.afterRepair()) {
-        text.append(
-            String.format(
-                Locale.ROOT,
-                "    %s  %-8s dc %s V  %s",
-                when(r.takenAt()),
-                r.at(),
-                number(r.value()),
-                !r.hasBand()
-                    ? "(no healthy band known)"
-                    : (r.inside() ? "inside" : "OUTSIDE")
-                        + " healthy "
-                        + number(r.healthyLow())
-                        + " to "
-                        + number(r.healthyHigh())
-                        + " V"));
-        text.append(NL);
+        text.append("    ").append(afterRepairLine(r)).append(NL);
       }
     }
     if (!file.photos().isEmpty()) {
@@ -246,6 +231,50 @@ final class HistoryText {
   }
 
   /** Returns a number as typed, without trailing zeros or exponent, independent of the locale. */
+  /**
+   * Returns a reading after the repair in one line: "OUT dc -4.71 V inside healthy -4.8 to -4.6 V",
+   * "U1.1 ac 0.72 V rms at 1000 Hz inside healthy 0.71 to 0.76 V", "SUM to OUT ohms 46800 Ω inside
+   * healthy 46500 to 47500 Ω" (OL for the meter's over-range).
+   */
+  static String afterRepairLine(AfterRepairReading r) {
+    String unit = r.kind() == ReadingKind.OHMS ? " Ω" : " V";
+    String what =
+        switch (r.kind()) {
+          case DC -> String.format(Locale.ROOT, "%-8s dc %s V", r.at(), number(r.value()));
+          case AC ->
+              String.format(
+                  Locale.ROOT,
+                  "%-8s ac %s V %s at %s Hz",
+                  r.at(),
+                  number(r.value()),
+                  r.measure(),
+                  number(r.hz()));
+          case OHMS ->
+              String.format(
+                  Locale.ROOT, "%-8s to %-8s ohms %s", r.at(), r.to(), ohms(r.value(), unit));
+        };
+    String verdict =
+        !r.hasBand()
+            ? "(no healthy band known)"
+            : (r.inside() ? "inside" : "OUTSIDE")
+                + " healthy "
+                + (r.kind() == ReadingKind.OHMS
+                    ? bandOhms(r.healthyLow(), r.healthyHigh())
+                    : number(r.healthyLow()) + " to " + number(r.healthyHigh()) + unit);
+    return when(r.takenAt()) + "  " + what + "  " + verdict;
+  }
+
+  private static String ohms(double value, String unit) {
+    return value == Double.POSITIVE_INFINITY ? "OL" : number(value) + unit;
+  }
+
+  private static String bandOhms(double low, double high) {
+    if (low == Double.POSITIVE_INFINITY) {
+      return "OL";
+    }
+    return number(low) + " to " + ohms(high, " Ω");
+  }
+
   static String number(double value) {
     return java.math.BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
   }

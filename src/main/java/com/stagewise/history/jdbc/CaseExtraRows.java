@@ -17,7 +17,8 @@ final class CaseExtraRows {
     int inserted =
         rows.update(
             "INSERT INTO after_repair_reading (id, case_id, at, value, meter, taken_at,"
-                + " healthy_low, healthy_high) VALUES (?, ?, ?, ?, ?, ?, ?, ?)"
+                + " healthy_low, healthy_high, kind, measure, hz, to_point)"
+                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
                 + " ON CONFLICT (id) DO NOTHING",
             r.id(),
             r.caseId(),
@@ -26,7 +27,11 @@ final class CaseExtraRows {
             r.meterText(),
             r.takenAt(),
             r.healthyLow(),
-            r.healthyHigh());
+            r.healthyHigh(),
+            r.kind().word(),
+            r.measure(),
+            r.hz(),
+            r.to());
     return inserted == 1;
   }
 

@@ -40,8 +40,8 @@ public final class Records {
   public static final String NOTE = "SELECT id, case_id, at, text, updated_at FROM case_note";
 
   public static final String AFTER_REPAIR =
-      "SELECT id, case_id, at, value, meter, taken_at, healthy_low, healthy_high"
-          + " FROM after_repair_reading";
+      "SELECT id, case_id, at, value, meter, taken_at, healthy_low, healthy_high, kind,"
+          + " measure, hz, to_point FROM after_repair_reading";
 
   /** Selects photos without their pictures. */
   public static final String PHOTO =
@@ -157,7 +157,11 @@ public final class Records {
         rs.getString(5),
         time(rs, 6),
         nullableDouble(rs, 7),
-        nullableDouble(rs, 8));
+        nullableDouble(rs, 8),
+        ReadingKind.fromWord(rs.getString(9)).orElseThrow(),
+        rs.getString(10),
+        nullableDouble(rs, 11),
+        rs.getString(12));
   }
 
   public static StoredPhoto photoWithImage(ResultSet rs) throws SQLException {

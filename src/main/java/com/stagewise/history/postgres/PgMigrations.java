@@ -27,7 +27,8 @@ final class PgMigrations {
           "V6__stage_versions.sql",
           "V7__ac_measure.sql",
           "V8__case_photos.sql",
-          "V9__after_repair_readings.sql");
+          "V9__after_repair_readings.sql",
+          "V10__after_repair_kinds.sql");
 
   /** The schema version this program writes. */
   static final int LATEST = SCRIPTS.size();

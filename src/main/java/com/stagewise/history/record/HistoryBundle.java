@@ -38,10 +38,11 @@ public record HistoryBundle(
    * The newest bundle format version this program reads and the one it writes (2: readings may be
    * ohms readings, with {@code "to"} and {@code "OL"}; 3: stage sheets carry their version number,
    * who saved them and when, and cases the stage version they are diagnosed with; 4: photos of the
-   * board attached to cases; 5: readings taken again after the repair). Bundles of earlier versions
-   * are read as before.
+   * board attached to cases; 5: readings taken again after the repair; 6: those readings of every
+   * kind, AC with its measure and frequency and ohms with its second point). Bundles of earlier
+   * versions are read as before.
    */
-  public static final int CURRENT_VERSION = 5;
+  public static final int CURRENT_VERSION = 6;
 
   /**
    * The first bundle format version whose stage sheets carry version numbers; a sheet of an earlier

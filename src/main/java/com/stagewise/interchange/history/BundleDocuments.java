@@ -7,6 +7,7 @@ import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.Stage;
 import com.stagewise.circuit.StageRules;
+import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairCase;
@@ -23,7 +24,8 @@ import java.util.OptionalDouble;
  * Checks the documents a bundle carries with the same rules as the files they came from, before
  * anything of the bundle is written: every stage sheet through the stage sheet reader, every
  * reading with {@link ReadingRules} (its value within the plausible range of the rails of its board
- * model's sheets in the bundle, or of any rail when the bundle carries none). A problem is named by
+ * model's sheets in the bundle, or of any rail when the bundle carries none), and every reading
+ * taken after the repair, its value and its band's ends, by the same rules. A problem is named by
  * the bundle's file, the record's path and the path inside the document, e.g. {@code shop.json:
  * stageSheets[2].sheet.parts[1].value: …}.
  */
@@ -84,6 +86,59 @@ final class BundleDocuments {
         StageRules.Problem first = problems.get(0);
         throw new InvalidInputException(source, at + "." + first.field(), first.message());
       }
+    }
+    List<AfterRepairReading> after = bundle.afterRepair();
+    for (int i = 0; i < after.size(); i++) {
+      AfterRepairReading r = after.get(i);
+      if (r.at().isBlank() || r.kind() == ReadingKind.OHMS && r.to().isBlank()) {
+        continue; // BundleCheck names the empty point.
+      }
+      double largest =
+          largestByModel.getOrDefault(
+              modelOfCase.getOrDefault(r.caseId(), ""), Limits.RAIL_VOLTS.max());
+      checkAfterRepair(source, "afterRepair[" + i + "]", r, "value", r.value(), largest);
+      if (r.hasBand()) {
+        checkAfterRepair(
+            source, "afterRepair[" + i + "]", r, "healthyLow", r.healthyLow(), largest);
+        checkAfterRepair(
+            source, "afterRepair[" + i + "]", r, "healthyHigh", r.healthyHigh(), largest);
+      }
+    }
+  }
+
+  /**
+   * Checks one number of a reading after the repair (its value or an end of its band) as a reading
+   * of its kind at its point would be checked ({@link ReadingRules#storedProblems}): volts within
+   * the plausible range of its board model's rails, an AC frequency in range, ohms within the range
+   * of a resistor or OL. {@code key} names the number in the message.
+   */
+  private static void checkAfterRepair(
+      String source, String at, AfterRepairReading r, String key, double value, double largest) {
+    Reading reading;
+    try {
+      reading =
+          new Reading(
+              r.at(),
+              switch (r.kind()) {
+                case AC -> Reading.Kind.AC;
+                case DC -> Reading.Kind.DC;
+                case OHMS -> Reading.Kind.OHMS;
+              },
+              value,
+              r.hz() == null ? 0 : r.hz(),
+              OptionalDouble.empty(),
+              r.to(),
+              r.kind() == ReadingKind.AC ? AcMeasure.of(r.measure()) : java.util.Optional.empty());
+    } catch (InvalidInputException e) {
+      String field =
+          e.field().equals("hz") || e.field().equals("to") || e.field().equals("at")
+              ? e.field()
+              : key;
+      throw new InvalidInputException(source, at + "." + field, problemOf(e));
+    }
+    for (StageRules.Problem p : ReadingRules.storedProblems(reading, largest)) {
+      String field = p.field().equals("value") ? key : p.field();
+      throw new InvalidInputException(source, at + "." + field, p.message());
     }
   }
 

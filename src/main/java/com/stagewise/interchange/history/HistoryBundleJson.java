@@ -294,7 +294,7 @@ public final class HistoryBundleJson {
         notes,
         top.optionalElements("photos", "photos").stream().map(PhotoFields::photo).toList(),
         top.optionalElements("afterRepair", "readings after the repair").stream()
-            .map(PhotoFields::afterRepair)
+            .map(f -> AfterRepairFields.read(f, version))
             .toList());
   }
 
@@ -356,7 +356,7 @@ public final class HistoryBundleJson {
       writeArray(json, "actions", bundle.actions(), BundleTrees::tree);
       writeArray(json, "notes", bundle.notes(), BundleTrees::tree);
       writeArray(json, "photos", bundle.photos(), PhotoFields::tree);
-      writeArray(json, "afterRepair", bundle.afterRepair(), PhotoFields::tree);
+      writeArray(json, "afterRepair", bundle.afterRepair(), AfterRepairFields::tree);
       json.writeEndObject();
     }
   }

@@ -114,7 +114,7 @@ public final class HistoryJson {
     ArrayNode photos = node.putArray("photos");
     file.photos().forEach(p -> photos.add(photoTree(p)));
     ArrayNode afterRepair = node.putArray("afterRepair");
-    file.afterRepair().forEach(r -> afterRepair.add(PhotoFields.tree(r)));
+    file.afterRepair().forEach(r -> afterRepair.add(AfterRepairFields.tree(r)));
     return node;
   }
 

@@ -4,7 +4,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.history.Checks;
-import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.StoredPhoto;
 import com.stagewise.interchange.JsonField;
@@ -12,11 +11,10 @@ import java.util.Base64;
 import java.util.List;
 
 /**
- * The photos of a history bundle (format version 4) and its readings taken again after the repair
- * (format version 5, each with the healthy band it was checked against; none in earlier bundles).
- * Each photo's record and its picture in Base64 (RFC 4648), cut into pieces of at most {@link
- * #PIECE} characters so that no string in a bundle is longer than a stage sheet may be. A bundle of
- * an earlier version has none.
+ * The photos of a history bundle (format version 4; the readings taken again after the repair are
+ * {@link AfterRepairFields}). Each photo's record and its picture in Base64 (RFC 4648), cut into
+ * pieces of at most {@link #PIECE} characters so that no string in a bundle is longer than a stage
+ * sheet may be. A bundle of an earlier version has none.
  */
 final class PhotoFields {
   static final List<String> PHOTO =
@@ -73,38 +71,6 @@ final class PhotoFields {
             f.require("attachedAt", "a UTC time such as 2026-03-04T10:15:30Z").time(),
             f.optionalText("attachedBy", "")),
         image);
-  }
-
-  static final List<String> AFTER_REPAIR =
-      List.of("id", "caseId", "at", "value", "meter", "takenAt", "healthyLow", "healthyHigh");
-
-  /** Reads one entry of {@code afterRepair} (format version 5). */
-  static AfterRepairReading afterRepair(JsonField f) {
-    f.object("a reading after the repair", AFTER_REPAIR);
-    return new AfterRepairReading(
-        f.require("id", "a string").text(),
-        f.require("caseId", "a string").text(),
-        f.require("at", "a test point").text(),
-        f.require("value", "a number").finite("volts"),
-        f.optionalText("meter", ""),
-        f.require("takenAt", "a UTC time such as 2026-03-04T10:15:30Z").time(),
-        f.optional("healthyLow").map(v -> v.finite("volts")).orElse(null),
-        f.optional("healthyHigh").map(v -> v.finite("volts")).orElse(null));
-  }
-
-  /** Writes one entry of {@code afterRepair}. */
-  static ObjectNode tree(AfterRepairReading r) {
-    ObjectNode o = JsonNodeFactory.instance.objectNode();
-    o.put("id", r.id())
-        .put("caseId", r.caseId())
-        .put("at", r.at())
-        .put("value", r.value())
-        .put("meter", r.meterText())
-        .put("takenAt", r.takenAt().toString());
-    if (r.hasBand()) {
-      o.put("healthyLow", r.healthyLow()).put("healthyHigh", r.healthyHigh());
-    }
-    return o;
   }
 
   /** Writes one entry of {@code photos}. */

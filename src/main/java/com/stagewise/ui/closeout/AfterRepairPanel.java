@@ -26,7 +26,7 @@ final class AfterRepairPanel extends VBox {
     summary.setWrapText(true);
     summary.setMinHeight(Region.USE_PREF_SIZE);
     summary.textProperty().bind(model.summaryProperty());
-    ListView<AfterRepairViewModel.CheckRow> list = new ListView<>(model.rows());
+    ListView<CheckRow> list = new ListView<>(model.rows());
     list.setId("after-repair-points");
     list.setMinHeight(150);
     VBox.setVgrow(list, Priority.ALWAYS);
@@ -39,7 +39,7 @@ final class AfterRepairPanel extends VBox {
               }
 
               @Override
-              protected void updateItem(AfterRepairViewModel.CheckRow row, boolean empty) {
+              protected void updateItem(CheckRow row, boolean empty) {
                 super.updateItem(row, empty);
                 getStyleClass().removeAll("outside", "inside");
                 if (empty || row == null) {
@@ -48,9 +48,7 @@ final class AfterRepairPanel extends VBox {
                 }
                 String verdict = row.verdict();
                 setText(
-                    row.title()
-                        + "  —  "
-                        + row.band()
+                    row.label()
                         + "\n"
                         + (verdict.isEmpty() ? "not read yet" : verdict)
                         + (row.value() != null && !row.saved() ? " (not stored yet)" : ""));
@@ -75,7 +73,7 @@ final class AfterRepairPanel extends VBox {
     model
         .rows()
         .addListener(
-            (ListChangeListener<AfterRepairViewModel.CheckRow>)
+            (ListChangeListener<CheckRow>)
                 c -> list.getSelectionModel().select(model.currentProperty().get()));
     Label reading = new Label();
     reading.setId("after-repair-point");
@@ -87,18 +85,30 @@ final class AfterRepairPanel extends VBox {
           reading.setText(
               i < 0 || i >= model.rows().size()
                   ? "Every point is read. Store the check, or tap a point to read it again."
-                  : "Read " + model.rows().get(i).title() + " with the meter:");
+                  : "Read " + model.rows().get(i).title() + ":");
         };
     model.currentProperty().addListener((o, was, now) -> showPoint.run());
-    model
-        .rows()
-        .addListener((ListChangeListener<AfterRepairViewModel.CheckRow>) c -> showPoint.run());
+    model.rows().addListener((ListChangeListener<CheckRow>) c -> showPoint.run());
     showPoint.run();
+    // What the pad takes for this point (its kind, and an AC point's measure and frequency).
+    Label padLine = new Label();
+    padLine.setId("after-repair-pad-line");
+    padLine.setWrapText(true);
+    padLine.getStyleClass().add("section-title");
+    padLine.textProperty().bind(model.padLineProperty());
+    // While an ohms point is read: unplug, discharge, wait (the readings screen's caution).
+    Label caution = new Label(AfterRepairViewModel.POWER_OFF_CAUTION);
+    caution.setId("after-repair-caution");
+    caution.setWrapText(true);
+    caution.setMinHeight(Region.USE_PREF_SIZE);
+    caution.getStyleClass().add("question");
+    caution.visibleProperty().bind(model.powerOffProperty());
+    caution.managedProperty().bind(model.powerOffProperty());
     ValuePad pad = new ValuePad(model.pad(), "after-repair", "Record", model::enter);
     Button back = new Button("Store the check and go back");
     back.setId("after-repair-done");
     back.getStyleClass().add("primary");
     back.setOnAction(e -> model.store(done));
-    getChildren().addAll(title, summary, list, reading, pad, back);
+    getChildren().addAll(title, summary, list, reading, caution, padLine, pad, back);
   }
 }

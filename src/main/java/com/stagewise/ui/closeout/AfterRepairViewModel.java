@@ -7,11 +7,14 @@ import com.stagewise.circuit.Stage;
 import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.ui.Bench;
+import com.stagewise.ui.readings.PowerOffMode;
 import com.stagewise.ui.widget.ValuePadModel;
 import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.List;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.IntegerProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleIntegerProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
@@ -19,62 +22,31 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 
 /**
- * The check after the repair, on the close-out: the DC points read during the diagnosis are read
- * again on the value pad, each shown against its healthy band with a plain word whether it is
- * inside, and stored (apart from the readings of the fault, which the diagnosis keeps to).
+ * The check after the repair, on the close-out: every point read during the diagnosis is read again
+ * on the value pad in its own kind (DC volts, AC volts in its measure at the test frequency, ohms
+ * with the power off between two points), each shown against its healthy band with a plain word
+ * whether it is inside, and stored (apart from the readings of the fault, which the diagnosis keeps
+ * to). While an ohms point is read, the pad takes ohms (k, M, OL) and the power-off caution stands.
  */
 public final class AfterRepairViewModel {
+  /** The caution shown while an ohms point is read: the readings screen's power-off caution. */
+  public static final String POWER_OFF_CAUTION = PowerOffMode.CAUTION;
+
   private final Bench bench;
   private final ObservableList<CheckRow> rows = FXCollections.observableArrayList();
   private final IntegerProperty current = new SimpleIntegerProperty(-1);
   private final ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
   private final StringProperty summary = new SimpleStringProperty("");
+  private final StringProperty padLine = new SimpleStringProperty("");
+  private final BooleanProperty powerOff = new SimpleBooleanProperty(false);
   private final List<AfterRepairReading> stored = new ArrayList<>();
-
-  /**
-   * One point of the check.
-   *
-   * @param point where, with its healthy band
-   * @param title the point in words ("U1 pin 1")
-   * @param value the volts read after the repair, or null while not read
-   * @param saved whether that value is stored in the history
-   */
-  public record CheckRow(AfterRepair.CheckPoint point, String title, Double value, boolean saved) {
-    /** Returns the band in words: "healthy −4.76 V to −4.64 V", or that none is known. */
-    public String band() {
-      return point.hasBand()
-          ? "healthy " + Words.band(point.low(), point.high())
-          : "no healthy band known here";
-    }
-
-    /** Returns the verdict in plain words, or empty while not read. */
-    public String verdict() {
-      if (value == null) {
-        return "";
-      }
-      if (!point.hasBand()) {
-        return Words.measured(value) + ": no band to compare with";
-      }
-      if (point.inside(value)) {
-        return Words.measured(value) + ": inside the healthy band";
-      }
-      return Words.measured(value)
-          + ": OUTSIDE the healthy band, "
-          + (value > point.high()
-              ? Words.volts(value - point.high()) + " above its top end"
-              : Words.volts(point.low() - value) + " below its bottom end");
-    }
-
-    /** Returns whether it was read and lies outside a known band. */
-    public boolean outside() {
-      return value != null && point.hasBand() && !point.inside(value);
-    }
-  }
 
   /** Creates the check's model on a bench. */
   public AfterRepairViewModel(Bench bench) {
     this.bench = bench;
     bench.openCaseProperty().addListener((o, was, now) -> clear());
+    current.addListener((o, was, now) -> followPoint());
+    rows.addListener((javafx.collections.ListChangeListener<CheckRow>) c -> followPoint());
   }
 
   public ObservableList<CheckRow> rows() {
@@ -95,6 +67,22 @@ public final class AfterRepairViewModel {
     return summary;
   }
 
+  /**
+   * Says what the pad takes for the point being read: "DC volts", "AC volts RMS at 1 kHz", "Ohms,
+   * power off"; empty when no point is being read.
+   */
+  public StringProperty padLineProperty() {
+    return padLine;
+  }
+
+  /**
+   * Whether the point being read is an ohms point: the unit is to be unplugged and discharged, and
+   * the power-off caution ({@link #POWER_OFF_CAUTION}) stands.
+   */
+  public BooleanProperty powerOffProperty() {
+    return powerOff;
+  }
+
   private void clear() {
     rows.clear();
     stored.clear();
@@ -103,9 +91,31 @@ public final class AfterRepairViewModel {
     pad.textProperty().set("");
   }
 
+  /** Sets the pad's unit, its line and the caution for the point being read. */
+  private void followPoint() {
+    int i = current.get();
+    if (i < 0 || i >= rows.size()) {
+      padLine.set("");
+      powerOff.set(false);
+      return;
+    }
+    AfterRepair.CheckPoint p = rows.get(i).point();
+    boolean ohms = p.kind() == Reading.Kind.OHMS;
+    pad.quantityProperty()
+        .set(ohms ? ValuePadModel.Quantity.METER_OHMS : ValuePadModel.Quantity.VOLTS);
+    padLine.set(
+        switch (p.kind()) {
+          case DC -> "DC volts";
+          case AC -> Words.acVolts(p.measure().word(), p.hz());
+          case OHMS -> "Ohms, power off";
+        });
+    powerOff.set(ohms);
+  }
+
   /**
-   * Lists the points to read again (the case's DC points, each with its healthy band), with what
-   * was stored from an earlier check of this case, and puts the pad on the first point not read.
+   * Lists the points to read again (each point read during the diagnosis in its own kind, with its
+   * healthy band), with what was stored from an earlier check of this case, and puts the pad on the
+   * first point not read.
    */
   public void start() {
     RepairCase rc = bench.openCaseProperty().get();
@@ -143,16 +153,15 @@ public final class AfterRepairViewModel {
               for (AfterRepair.CheckPoint p : loaded.points()) {
                 Double last = null;
                 for (AfterRepairReading r : loaded.stored()) {
-                  if (r.at().equals(p.at())) {
+                  if (CheckRow.samePoint(p, r)) {
                     last = r.value();
                   }
                 }
-                list.add(new CheckRow(p, Words.pin(p.at()), last, last != null));
+                list.add(new CheckRow(p, CheckRow.title(p), last, last != null));
               }
               rows.setAll(list);
               if (list.isEmpty()) {
-                summary.set(
-                    "No DC readings were taken in this case: there is nothing to read again.");
+                summary.set("No readings were taken in this case: there is nothing to read again.");
               }
               moveToNext(-1);
               summarize();
@@ -179,17 +188,37 @@ public final class AfterRepairViewModel {
     if (i < 0 || i >= rows.size()) {
       return;
     }
+    CheckRow row = rows.get(i);
+    Reading.Kind kind = row.point().kind();
     if (!pad.hasValue()) {
       bench
           .problems()
           .show(
               "Type the reading",
-              "The pad holds no value in volts.",
-              "Type what the meter shows at " + rows.get(i).title() + ", e.g. -4.70.");
+              kind == Reading.Kind.OHMS
+                  ? "The pad holds no value in ohms."
+                  : "The pad holds no value in volts.",
+              "Type what the meter shows at "
+                  + row.title()
+                  + switch (kind) {
+                    case DC -> ", e.g. -4.70.";
+                    case AC -> ", e.g. 0.72 (" + row.point().measure().words() + ").";
+                    case OHMS -> ", e.g. 46k8, or tap OL for the meter's over-range.";
+                  });
       return;
     }
-    CheckRow row = rows.get(i);
-    rows.set(i, new CheckRow(row.point(), row.title(), pad.valueProperty().get(), false));
+    double value = pad.valueProperty().get();
+    if (kind == Reading.Kind.AC && value < 0) {
+      // What was typed stays on the pad, to be put right.
+      bench
+          .problems()
+          .show(
+              "An AC amplitude has no sign",
+              "The pad holds " + Words.measured(value) + ", below 0 V.",
+              "Type the amplitude the meter or scope shows, 0 V or more.");
+      return;
+    }
+    rows.set(i, new CheckRow(row.point(), row.title(), value, false));
     pad.textProperty().set("");
     moveToNext(i);
     summarize();
@@ -250,7 +279,7 @@ public final class AfterRepairViewModel {
     List<String> lines = new ArrayList<>();
     for (CheckRow r : rows) {
       if (r.outside()) {
-        lines.add(r.title() + " reads " + Words.measured(r.value()) + " (" + r.band() + ")");
+        lines.add(r.title() + " reads " + r.valueText() + " (" + r.band() + ")");
       }
     }
     return lines;
@@ -258,11 +287,16 @@ public final class AfterRepairViewModel {
 
   private void summarize() {
     long read = rows.stream().filter(r -> r.value() != null).count();
+    boolean anyOhms = rows.stream().anyMatch(r -> r.point().kind() == Reading.Kind.OHMS);
     if (rows.isEmpty() || read == 0) {
       if (!rows.isEmpty()) {
         summary.set(
-            "Read each point again with the meter, as during the diagnosis (the unit powered"
-                + " as then: keep clear of mains and high voltages).");
+            "Read each point again as during the diagnosis (the unit powered as then: keep clear"
+                + " of mains and high voltages)."
+                + (anyOhms
+                    ? " Read the ohms points with the power off: unplug the unit and discharge"
+                        + " it first."
+                    : ""));
       }
       return;
     }

@@ -1,5 +1,6 @@
 package com.stagewise.ui.drawing;
 
+import com.stagewise.circuit.BandFit;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.value.Engineering;
@@ -28,9 +29,6 @@ public final class BandChart extends Region {
   private static final double AXIS_Y = 74;
   private static final double BAND_HALF = 11;
   private static final double ROW = 17;
-
-  /** Test leads and their contact, ohms: a few tenths unless nulled (common practice). */
-  private static final double LEADS = 0.5;
 
   private String testPoint = "";
   private double healthyLow = Double.NaN;
@@ -249,11 +247,7 @@ public final class BandChart extends Region {
    * reading + 1 mV) ({@link ReadingSet#SCOPE_PERCENT}). False when the range is unknown (NaN).
    */
   public static boolean acInside(double low, double high, double measured) {
-    if (!Double.isFinite(low) || !Double.isFinite(high) || !Double.isFinite(measured)) {
-      return false;
-    }
-    double u = ReadingSet.SCOPE_PERCENT / 100 * Math.abs(measured) + ReadingSet.SCOPE_FLOOR_VOLTS;
-    return measured >= Math.min(low, high) - u && measured <= Math.max(low, high) + u;
+    return BandFit.ac(low, high, measured);
   }
 
   /** Returns ohms as the chart prints them: "46.8 kΩ", "0.4 Ω", "OL". */
@@ -267,18 +261,7 @@ public final class BandChart extends Region {
    * OL where a healthy stage reads OL. False when the range is unknown (NaN).
    */
   public static boolean ohmsInside(double low, double high, double measured) {
-    if (Double.isNaN(low) || Double.isNaN(high) || Double.isNaN(measured)) {
-      return false;
-    }
-    if (measured == Double.POSITIVE_INFINITY) {
-      // OL: a healthy stage reads OL there, or beyond the meter's top range.
-      return high > MeterSpec.DEFAULT.ohmsOverRange();
-    }
-    if (high == Double.POSITIVE_INFINITY) {
-      return false;
-    }
-    return measured >= low - MeterSpec.DEFAULT.ohmsUncertainty(low) - LEADS
-        && measured <= high + MeterSpec.DEFAULT.ohmsUncertainty(high) + LEADS;
+    return BandFit.ohms(low, high, measured);
   }
 
   private boolean drawable(double value) {

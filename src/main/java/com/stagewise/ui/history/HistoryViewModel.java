@@ -272,19 +272,34 @@ public final class HistoryViewModel {
 
   private record Loaded(CaseFile file, UnitHistory unit, List<ShownPhoto> photos) {}
 
+  /**
+   * Returns the readings after the repair as lines, each with its kind: "U1 pin 1: −4.710 V …", "U1
+   * pin 1, AC volts RMS at 1 kHz: 0.720 V …", "U1 pin 2 to SUM, power off: 46.80 kΩ …".
+   */
   static List<String> afterRepairLines(CaseFile file) {
     List<String> lines = new ArrayList<>();
     for (AfterRepairReading r : file.afterRepair()) {
+      boolean ohms = r.kind() == ReadingKind.OHMS;
+      String point =
+          switch (r.kind()) {
+            case DC -> Words.pin(r.at());
+            case AC -> Words.pin(r.at()) + ", " + Words.acVolts(r.measure(), r.hz());
+            case OHMS -> Words.pin(r.at()) + " to " + Words.pin(r.to()) + ", power off";
+          };
+      String band =
+          !r.hasBand()
+              ? ""
+              : ohms
+                  ? Words.ohmsBand(r.healthyLow(), r.healthyHigh())
+                  : Words.band(r.healthyLow(), r.healthyHigh());
       lines.add(
-          Words.pin(r.at())
+          point
               + ":  "
-              + Words.measured(r.value())
+              + (ohms ? Words.ohms(r.value()) : Words.measured(r.value()))
               + "   "
               + (!r.hasBand()
                   ? "no healthy band known"
-                  : (r.inside() ? "inside" : "OUTSIDE")
-                      + " the healthy band "
-                      + Words.band(r.healthyLow(), r.healthyHigh()))
+                  : (r.inside() ? "inside" : "OUTSIDE") + " the healthy band " + band)
               + "   ("
               + Words.dateTime(r.takenAt())
               + ")");

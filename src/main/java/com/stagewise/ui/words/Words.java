@@ -85,6 +85,32 @@ public final class Words {
     return Double.isFinite(low) && Double.isFinite(high) ? Engineering.band(low, high) : "—";
   }
 
+  /**
+   * Returns a healthy band of ohms as the ohms cards print it, e.g. {@code 46.5 kΩ to 47.5 kΩ};
+   * {@code OL} where a healthy stage reads OL, {@code 46.5 kΩ to OL} for a band that reaches it;
+   * "—" when unknown (NaN).
+   */
+  public static String ohmsBand(double low, double high) {
+    if (Double.isNaN(low) || Double.isNaN(high)) {
+      return "—";
+    }
+    String lowText = ohmsRounded(low);
+    String highText = ohmsRounded(high);
+    return lowText.equals(highText) ? lowText : lowText + " to " + highText;
+  }
+
+  private static String ohmsRounded(double ohms) {
+    return ohms == Double.POSITIVE_INFINITY ? "OL" : Engineering.of(ohms, "Ω", 3);
+  }
+
+  /**
+   * Returns what an AC reading is, as the value pad's switch says it: "AC volts RMS at 1 kHz"
+   * ({@code measure} a file word: rms, peak or pp).
+   */
+  public static String acVolts(String measure, double hz) {
+    return "AC volts " + measure(measure) + " at " + hertz(hz);
+  }
+
   /** Returns a frequency, e.g. {@code 1 kHz}, {@code 50 Hz}. */
   public static String hertz(double hz) {
     return Double.isFinite(hz) ? Engineering.of(hz, "Hz", 4) : "—";

@@ -62,7 +62,7 @@ class AfterRepairViewModelTest {
     check.start();
 
     assertThat(check.rows()).extracting(r -> r.point().at()).containsExactly("OUT", "U1.8");
-    AfterRepairViewModel.CheckRow out = check.rows().get(0);
+    CheckRow out = check.rows().get(0);
     // Textbook: −4.7 V nominal; ±1 % on each resistor moves the gain by about ±2 %.
     assertThat(out.point().nominal()).isCloseTo(-4.7, org.assertj.core.data.Offset.offset(0.01));
     assertThat(out.point().low()).isBetween(-4.85, -4.75);
