@@ -40,6 +40,13 @@ public final class FixtureMaker {
    */
   static final List<String> READINGS = List.of("U3.7 dc 13.4", "OUT ac 0.0021 at 1000 Hz");
 
+  /**
+   * The reading taken again after the repair in the fixture's closed case (from schema version 9
+   * on, when such readings were DC levels only): point, volts and its healthy band, which the
+   * migration test finds again as a DC reading with that band.
+   */
+  static final String AFTER_REPAIR = "U3.7 13.38 12.9 13.9";
+
   /** The title of the fixture's stage sheets. */
   static final String SHEET_TITLE = "Output driver";
 
@@ -146,6 +153,24 @@ public final class FixtureMaker {
           insert.setString(8, (String) row[5]);
           insert.setLong(9, clock.millis());
           insert.executeUpdate();
+        }
+        if (version >= 9) {
+          // A reading after the repair with the columns of version 9: a DC level and its band.
+          String[] after = AFTER_REPAIR.split(" ");
+          try (PreparedStatement afterRepair =
+              c.prepareStatement(
+                  "INSERT INTO after_repair_reading (id, case_id, at, value, meter, taken_at,"
+                      + " healthy_low, healthy_high) VALUES (?, ?, ?, ?, ?, ?, ?, ?)")) {
+            afterRepair.setString(1, HistoryStore.newId());
+            afterRepair.setString(2, closedCaseId);
+            afterRepair.setString(3, after[0]);
+            afterRepair.setDouble(4, Double.parseDouble(after[1]));
+            afterRepair.setString(5, "6000-count meter, ±(0.5 % + 2 counts)");
+            afterRepair.setLong(6, clock.millis());
+            afterRepair.setDouble(7, Double.parseDouble(after[2]));
+            afterRepair.setDouble(8, Double.parseDouble(after[3]));
+            afterRepair.executeUpdate();
+          }
         }
         if (version >= 5) {
           // From version 5 on a reading was last changed when it was taken; the outbox trigger is
