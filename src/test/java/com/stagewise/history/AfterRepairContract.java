@@ -103,4 +103,110 @@ public abstract class AfterRepairContract extends StoreContract {
       assertThat(again.conflicts()).isEmpty();
     }
   }
+
+  private AfterRepairReading ac(String caseId, double rms, Double lo, Double hi) {
+    return new AfterRepairReading(
+        HistoryStore.newId(),
+        caseId,
+        "OUT",
+        rms,
+        "scope",
+        clock.instant(),
+        lo,
+        hi,
+        ReadingKind.AC,
+        "rms",
+        1000.0,
+        "");
+  }
+
+  private AfterRepairReading ohms(String caseId, double value, Double lo, Double hi) {
+    return new AfterRepairReading(
+        HistoryStore.newId(),
+        caseId,
+        "SUM",
+        value,
+        "meter, ohms",
+        clock.instant(),
+        lo,
+        hi,
+        ReadingKind.OHMS,
+        null,
+        null,
+        "OUT");
+  }
+
+  @Test
+  void addAfterRepair_keepsAcAndOhmsReadings_withTheirKindMeasureFrequencyAndSecondPoint() {
+    RepairCase c = openCase();
+    AfterRepairReading dc = reading(c.id(), "OUT", -4.70, -4.80, -4.60);
+    AfterRepairReading rms = ac(c.id(), 0.333, 0.329, 0.336);
+    AfterRepairReading across = ohms(c.id(), 46_900, 46_530.0, 47_470.0);
+    AfterRepairReading open = ohms(c.id(), Double.POSITIVE_INFINITY, 46_530.0, 47_470.0);
+    AfterRepairReading toRail =
+        new AfterRepairReading(
+            HistoryStore.newId(),
+            c.id(),
+            "OUT",
+            Double.POSITIVE_INFINITY,
+            "meter, ohms",
+            clock.instant(),
+            Double.POSITIVE_INFINITY,
+            Double.POSITIVE_INFINITY,
+            ReadingKind.OHMS,
+            null,
+            null,
+            "VCC");
+    store.cases().addAfterRepair(c.id(), List.of(dc, rms, across, open, toRail));
+
+    List<AfterRepairReading> back = store.cases().caseFile(c.id()).orElseThrow().afterRepair();
+    assertThat(back).containsExactly(dc, rms, across, open, toRail);
+    assertThat(back.get(1).kind()).isEqualTo(ReadingKind.AC);
+    assertThat(back.get(1).measure()).isEqualTo("rms");
+    assertThat(back.get(1).hz()).isEqualTo(1000.0);
+    assertThat(back.get(2).to()).isEqualTo("OUT");
+    assertThat(back)
+        .extracting(AfterRepairReading::inside)
+        .containsExactly(true, true, true, false, true);
+  }
+
+  @Test
+  void addAfterRepair_refusesBadAcAndOhmsReadings_namingTheField_andStoresNone() {
+    RepairCase c = openCase();
+    AfterRepairReading good = ac(c.id(), 0.333, 0.329, 0.336);
+    assertThatThrownBy(
+            () -> store.cases().addAfterRepair(c.id(), List.of(good, ac(c.id(), -0.3, null, null))))
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("afterRepair[1].value");
+    assertThatThrownBy(
+            () -> store.cases().addAfterRepair(c.id(), List.of(ohms(c.id(), -5, null, null))))
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("afterRepair[0].value");
+    assertThatThrownBy(
+            () ->
+                store
+                    .cases()
+                    .addAfterRepair(
+                        c.id(), List.of(ohms(c.id(), 47e3, Double.POSITIVE_INFINITY, 47_470.0))))
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("afterRepair[0].healthyLow");
+    assertThat(store.cases().caseFile(c.id()).orElseThrow().afterRepair()).isEmpty();
+  }
+
+  @Test
+  void acAndOhmsReadingsAfterRepair_travelInBundles_withTheirKinds() {
+    RepairCase c = openCase();
+    AfterRepairReading rms = ac(c.id(), 0.47, 0.329, 0.336);
+    AfterRepairReading open = ohms(c.id(), Double.POSITIVE_INFINITY, 46_530.0, 47_470.0);
+    store.cases().addAfterRepair(c.id(), List.of(rms, open));
+    HistoryBundle bundle = store.transfer().export(new ExportSelection.All(), "test");
+    assertThat(bundle.afterRepair()).containsExactly(rms, open);
+    try (HistoryStore other = openStore(Clock.systemUTC())) {
+      ImportReport report = other.transfer().importBundle(bundle, "bundle.json");
+      assertThat(report.conflicts()).isEmpty();
+      assertThat(other.cases().caseFile(c.id()).orElseThrow().afterRepair())
+          .containsExactly(rms, open);
+      assertThat(other.transfer().importBundle(bundle, "bundle.json").added()).isZero();
+    }
+  }
 }
