@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.AfterRepairReading;
+import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -24,6 +25,10 @@ class PdfAfterRepairTest {
   @TempDir Path folder;
 
   private String pdfText(boolean withCheck) throws IOException {
+    return pdfText(withCheck, false);
+  }
+
+  private String pdfText(boolean withCheck, boolean acAndOhms) throws IOException {
     ReportFixture.SteppingClock clock = new ReportFixture.SteppingClock();
     CaseReport report;
     try (HistoryStore store = SqliteHistory.open(folder.resolve("history.db"), clock)) {
@@ -53,6 +58,41 @@ class PdfAfterRepairTest {
                         14.25,
                         15.75)));
       }
+      if (acAndOhms) {
+        // The textbook inverting amplifier: 0.332 V RMS out for 0.1 V peak in at gain 4.7 (a
+        // sine's peak over √2); with the power off R2 = 47 kΩ ± 1 % between SUM and OUT.
+        store
+            .cases()
+            .addAfterRepair(
+                id,
+                List.of(
+                    new AfterRepairReading(
+                        HistoryStore.newId(),
+                        id,
+                        "U1.1",
+                        0.333,
+                        "scope",
+                        clock.instant(),
+                        0.329,
+                        0.336,
+                        ReadingKind.AC,
+                        "rms",
+                        1000.0,
+                        ""),
+                    new AfterRepairReading(
+                        HistoryStore.newId(),
+                        id,
+                        "SUM",
+                        Double.POSITIVE_INFINITY,
+                        "meter, ohms",
+                        clock.instant(),
+                        46_530.0,
+                        47_470.0,
+                        ReadingKind.OHMS,
+                        null,
+                        null,
+                        "OUT")));
+      }
       report = CaseReport.read(store, id, ReportFixture.GENERATED, "test build");
     }
     try (PDDocument document = Loader.loadPDF(ReportFixture.pdf(report))) {
@@ -70,6 +110,16 @@ class PdfAfterRepairTest {
     // After the suspects, before the actions.
     assertThat(text.indexOf("After repair")).isGreaterThan(text.indexOf("Suspects as computed"));
     assertThat(text.indexOf("After repair")).isLessThan(text.lastIndexOf("Actions"));
+  }
+
+  @Test
+  void report_listsAcAndOhmsPoints_withTheirKindMeasureAndBand() throws IOException {
+    String text = pdfText(false, true);
+    assertThat(text).contains("After repair", "1 of 2 inside the healthy band.");
+    // Printable writes the no-break space as a space and Ω as "ohm" (PDF standard fonts).
+    assertThat(text).contains("U1 pin 1", "AC RMS at 1 kHz", "333.0 mV", "329 mV to 336 mV");
+    assertThat(text).contains("SUM to OUT", "ohms, power off", "OL", "46.53 kohm to 47.47 kohm");
+    assertThat(text).contains("OUTSIDE", "inside");
   }
 
   @Test

@@ -141,6 +141,60 @@ class SyncTest {
   }
 
   @Test
+  void acAndOhmsReadingsAfterRepair_reachTheServerAndTheOther_withTheirKinds() {
+    ServerAddress address = server.freshShop();
+    try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
+        HistoryStore b = SqliteHistory.open(folder.resolve("b.db"));
+        PgHistory shop = shop(address)) {
+      RepairCase c = Bench.addCase(a, "A-10", 0);
+      Bench.sync(a, shop, "a");
+      Bench.sync(b, shop, "b");
+      // The textbook inverting amplifier: 0.332 V RMS out for 0.1 V peak in at gain 4.7 (a
+      // sine's peak over √2), and R2 = 47 kΩ ± 1 % between SUM and OUT with the power off.
+      var rms =
+          new com.stagewise.history.record.AfterRepairReading(
+              HistoryStore.newId(),
+              c.id(),
+              "OUT",
+              0.333,
+              "scope",
+              java.time.Instant.now(),
+              0.329,
+              0.336,
+              com.stagewise.history.record.ReadingKind.AC,
+              "rms",
+              1000.0,
+              "");
+      var open =
+          new com.stagewise.history.record.AfterRepairReading(
+              HistoryStore.newId(),
+              c.id(),
+              "SUM",
+              Double.POSITIVE_INFINITY,
+              "meter, ohms",
+              java.time.Instant.now(),
+              46_530.0,
+              47_470.0,
+              com.stagewise.history.record.ReadingKind.OHMS,
+              null,
+              null,
+              "OUT");
+      a.cases().addAfterRepair(c.id(), List.of(rms, open));
+      assertThat(((SyncLedger) a).pendingCount()).isEqualTo(2);
+      Bench.sync(a, shop, "a");
+      SyncReport pulled = Bench.sync(b, shop, "b");
+
+      assertThat(pulled.conflicts()).isEmpty();
+      assertThat(shop.cases().caseFile(c.id()).orElseThrow().afterRepair())
+          .containsExactly(rms, open);
+      assertThat(b.cases().caseFile(c.id()).orElseThrow().afterRepair()).containsExactly(rms, open);
+      // Pulled back to the bench that sent them, they merge as unchanged.
+      assertThat(Bench.sync(a, shop, "a").conflicts()).isEmpty();
+      assertThat(a.cases().caseFile(c.id()).orElseThrow().afterRepair()).containsExactly(rms, open);
+    }
+  }
+
+  @Test
   void sameCaseClosedOnTwoBenches_isAConflictReported_andNeitherCopyIsLost() {
     ServerAddress address = server.freshShop();
     try (HistoryStore a = SqliteHistory.open(folder.resolve("a.db"));
