@@ -1,6 +1,9 @@
 package com.stagewise.ui.closeout;
 
+import com.stagewise.casework.AfterRepair;
+import com.stagewise.circuit.AcMeasure;
 import com.stagewise.ui.widget.ValuePad;
+import com.stagewise.ui.words.Words;
 import javafx.collections.ListChangeListener;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
@@ -85,7 +88,7 @@ final class AfterRepairPanel extends VBox {
           reading.setText(
               i < 0 || i >= model.rows().size()
                   ? "Every point is read. Store the check, or tap a point to read it again."
-                  : "Read " + model.rows().get(i).title() + ":");
+                  : call(model.rows().get(i)));
         };
     model.currentProperty().addListener((o, was, now) -> showPoint.run());
     model.rows().addListener((ListChangeListener<CheckRow>) c -> showPoint.run());
@@ -110,5 +113,26 @@ final class AfterRepairPanel extends VBox {
     back.getStyleClass().add("primary");
     back.setOnAction(e -> model.store(done));
     getChildren().addAll(title, summary, list, reading, caution, padLine, pad, back);
+  }
+
+  /**
+   * Returns what to do at the point: "Read U1 pin 8 with the meter:", "Read U1 pin 1, AC volts
+   * peak-to-peak at 1 kHz with the scope:", "With the power off, read ohms across R2:".
+   */
+  private static String call(CheckRow row) {
+    AfterRepair.CheckPoint p = row.point();
+    return switch (p.kind()) {
+      case DC -> "Read " + row.title() + " with the meter:";
+      case AC ->
+          "Read "
+              + row.title()
+              + (p.measure() == AcMeasure.RMS ? " with the meter:" : " with the scope:");
+      case OHMS ->
+          "With the power off, read ohms "
+              + (p.across().isEmpty()
+                  ? "from " + Words.pin(p.at()) + " to " + Words.pin(p.to())
+                  : "across " + p.across())
+              + ":";
+    };
   }
 }
