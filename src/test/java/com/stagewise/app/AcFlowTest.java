@@ -40,7 +40,7 @@ class AcFlowTest extends WindowFlow {
     // pin 1 is out A; DESIGN.md), read in AC on the meter's AC volts range: RMS.
     typeValue(String.valueOf(VCC));
     typeValue(String.valueOf(VEE));
-    robot.clickOn("#package-drawing #pin-1");
+    tap("#package-drawing #pin-1");
     settle();
     // The screen is taller than the window: back to its top, as a finger scrolls, to the pad's
     // switch.
@@ -140,8 +140,10 @@ class AcFlowTest extends WindowFlow {
   }
 
   /**
-   * Shows the readings screen at 1280×800 and 1024×600, fails when a text of its AC parts or of a
-   * reading's card is cut short (drawn with an ellipsis), and saves a picture at each size.
+   * Shows the readings screen at 1280×800 and 1024×600, in the ordinary look, with larger text and
+   * with high contrast; fails when a text of its AC parts or of a reading's card is cut short
+   * (drawn with an ellipsis) or the screen needs a sideways scroll bar, and saves a picture of
+   * each.
    */
   private void shoot(String name) throws Exception {
     scrollToTop("#pad-kind");
@@ -153,17 +155,25 @@ class AcFlowTest extends WindowFlow {
               site
                   ? Path.of("src", "site", "screens", name + ".png")
                   : Path.of("target", "screens", where, name + ".png"));
-          assertNothingCut(
+          String[] parts = {
+            "#mode-volts",
+            "#mode-ohms",
+            "#pad-kind",
+            "#pad-measure",
+            "#pad-takes",
+            "#test-signal",
+            "#probe-call",
+            "#readings-list"
+          };
+          assertNothingCut(name, where, parts);
+          assertNoSidewaysScroll(name, where);
+          inEveryLook(
               name,
               where,
-              "#mode-volts",
-              "#mode-ohms",
-              "#pad-kind",
-              "#pad-measure",
-              "#pad-takes",
-              "#test-signal",
-              "#probe-call",
-              "#readings-list");
+              look -> {
+                assertNothingCut(name + " with " + look, where, parts);
+                assertNoSidewaysScroll(name + " with " + look, where);
+              });
         });
   }
 }

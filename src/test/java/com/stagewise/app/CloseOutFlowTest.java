@@ -231,15 +231,24 @@ class CloseOutFlowTest extends WindowFlow {
   }
 
   /**
-   * Shows the screen at each size, fails when a text on it is cut short (drawn with an ellipsis),
-   * and saves its picture under target/screens/closeout-flow.
+   * Shows the screen at each size, in the ordinary look, with larger text and with high contrast;
+   * fails when a text on it is cut short (drawn with an ellipsis) or it needs a sideways scroll
+   * bar, and saves its pictures (target/screens/closeout-flow, and a folder for each look).
    */
   private void shoot(String name) throws Exception {
     atSizes(
         new int[][] {SMALL, LAPTOP},
         (size, where) -> {
           assertNothingCut(name, where);
+          assertNoSidewaysScroll(name, where);
           savePicture(Path.of("target", "screens", "closeout-flow", where, name + ".png"));
+          inEveryLook(
+              "closeout-flow-" + name,
+              where,
+              look -> {
+                assertNothingCut(name + " with " + look, where);
+                assertNoSidewaysScroll(name + " with " + look, where);
+              });
         });
   }
 }

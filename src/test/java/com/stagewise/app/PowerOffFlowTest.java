@@ -57,9 +57,9 @@ class PowerOffFlowTest extends WindowFlow {
     // (dual-8: pin 1 out A, pin 2 in− A; DESIGN.md), read as an open R2 gives them.
     typeReading(VCC);
     typeReading(VEE);
-    robot.clickOn("#package-drawing #pin-1");
+    tap("#package-drawing #pin-1");
     typeReading(VEE + HEADROOM);
-    robot.clickOn("#package-drawing #pin-2");
+    tap("#package-drawing #pin-2");
     typeReading(1.0);
     Suspect first = fx(() -> app.bench().diagnosisProperty().get().suspects().get(0));
     assertThat(first.group()).contains("R2:open", "R1:short");
@@ -87,14 +87,14 @@ class PowerOffFlowTest extends WindowFlow {
     typeOhms(ohmsWithOpenFeedback(offered.at(), offered.to()));
     if (!done.contains("IN|SUM")) {
       pickFromList("IN");
-      robot.clickOn("#package-drawing #pin-2");
+      tap("#package-drawing #pin-2");
       settle();
       assertThat(text("#ohms-call")).isEqualTo("Read ohms from net IN to U1 pin 2");
       typeOhms("9k98");
     }
     if (!done.contains("OUT|SUM")) {
-      robot.clickOn("#package-drawing #pin-2");
-      robot.clickOn("#package-drawing #pin-1");
+      tap("#package-drawing #pin-2");
+      tap("#package-drawing #pin-1");
       settle();
       assertThat(text("#ohms-call")).isEqualTo("Read ohms from U1 pin 2 to U1 pin 1");
       typeOhms("OL");
@@ -207,8 +207,9 @@ class PowerOffFlowTest extends WindowFlow {
   }
 
   /**
-   * Shows the screen at 1280×800 and 1024×600, fails when a text of the power-off parts is cut
-   * short (drawn with an ellipsis), and saves a picture at each size.
+   * Shows the screen at 1280×800 and 1024×600, in the ordinary look, with larger text and with high
+   * contrast; fails when a text of the power-off parts is cut short (drawn with an ellipsis) or the
+   * screen needs a sideways scroll bar, and saves a picture of each.
    */
   private void shoot(String name) throws Exception {
     scrollToTop("#mode-volts");
@@ -221,8 +222,18 @@ class PowerOffFlowTest extends WindowFlow {
               site
                   ? Path.of("src", "site", "screens", name + ".png")
                   : Path.of("target", "screens", where, name + ".png"));
-          assertNothingCut(
-              name, where, "#poweroff-banner", "#ohms-call", "#ohms-from", "#ohms-to", "#ohms-why");
+          String[] parts = {
+            "#poweroff-banner", "#ohms-call", "#ohms-from", "#ohms-to", "#ohms-why"
+          };
+          assertNothingCut(name, where, parts);
+          assertNoSidewaysScroll(name, where);
+          inEveryLook(
+              name,
+              where,
+              look -> {
+                assertNothingCut(name + " with " + look, where, parts);
+                assertNoSidewaysScroll(name + " with " + look, where);
+              });
         });
   }
 }

@@ -17,12 +17,16 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.application.Platform;
 import javafx.embed.swing.SwingFXUtils;
+import javafx.geometry.Bounds;
+import javafx.geometry.Orientation;
 import javafx.scene.Node;
 import javafx.scene.Parent;
+import javafx.scene.control.Control;
 import javafx.scene.control.Label;
 import javafx.scene.control.Labeled;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollBar;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextInputControl;
 import javafx.scene.image.WritableImage;
@@ -369,6 +373,29 @@ abstract class WindowFlow {
     relayout();
   }
 
+  /** What to check with the window in one look. */
+  interface InLook {
+    void check(String look) throws Exception;
+  }
+
+  /**
+   * Turns each look of the settings (larger text, high contrast) on in turn, saves a picture of the
+   * window under target/screens/LOOK/WHERE/NAME.png, runs {@code check} (given the look's name to
+   * put in its messages) and turns the look off again.
+   */
+  void inEveryLook(String name, String where, InLook check) throws Exception {
+    for (Look look : Look.values()) {
+      look(look, true);
+      String folder = look.name().toLowerCase(Locale.ROOT).replace('_', '-');
+      try {
+        savePicture(Path.of("target", "screens", folder, where, name + ".png"));
+        check.check(folder);
+      } finally {
+        look(look, false);
+      }
+    }
+  }
+
   private void resize(double width, double height) throws Exception {
     fx(
         () -> {
@@ -396,21 +423,123 @@ abstract class WindowFlow {
     if (parts.length == 0) {
       List<String> cut = fx(() -> cutTexts(window.getScene().getRoot(), new ArrayList<>()));
       assertThat(cut).as("texts cut short on %s at %s", screen, where).isEmpty();
+      List<String> out = fx(() -> spilled(window.getScene().getRoot(), new ArrayList<>()));
+      assertThat(out).as("controls out of their panels on %s at %s", screen, where).isEmpty();
     }
     for (String part : parts) {
       List<String> cut = fx(() -> cutTexts(robot.lookup(part).query(), new ArrayList<>()));
       assertThat(cut).as("texts cut short in %s on %s at %s", part, screen, where).isEmpty();
+      List<String> out = fx(() -> spilled(robot.lookup(part).query(), new ArrayList<>()));
+      assertThat(out)
+          .as("controls out of their panels in %s on %s at %s", part, screen, where)
+          .isEmpty();
     }
+  }
+
+  /**
+   * Collects every visible control that reaches sideways past the edge of the panel it sits in (a
+   * row of buttons wider than its panel draws them over the panel's border, or past the window's
+   * edge where they are out of reach).
+   */
+  static List<String> spilled(Node node, List<String> found) {
+    if (!node.isVisible()) {
+      return found;
+    }
+    if (node instanceof Control control && control.getWidth() > 0) {
+      Node panel = control.getParent();
+      while (panel != null && !panel.getStyleClass().contains("panel")) {
+        panel = panel.getParent();
+      }
+      if (panel != null) {
+        Bounds inner = panel.localToScene(panel.getLayoutBounds());
+        Bounds outer = control.localToScene(control.getLayoutBounds());
+        double past =
+            Math.max(inner.getMinX() - outer.getMinX(), outer.getMaxX() - inner.getMaxX());
+        if (past > 1) {
+          found.add(
+              (control.getId() == null ? control.getClass().getSimpleName() : "#" + control.getId())
+                  + (control instanceof Labeled l ? " \"" + l.getText() + "\"" : "")
+                  + " reaches "
+                  + Math.round(past)
+                  + " px past its panel");
+        }
+      }
+    }
+    if (node instanceof Parent parent) {
+      for (Node child : parent.getChildrenUnmodifiable()) {
+        spilled(child, found);
+      }
+    }
+    return found;
+  }
+
+  /**
+   * Fails when any scroll bar across the window shows: at 1024×600 every screen fits the window's
+   * width (it scrolls down, never sideways, which a finger on a touch laptop misses).
+   */
+  void assertNoSidewaysScroll(String screen, String where) throws Exception {
+    List<String> bars = fx(() -> sidewaysBars(window.getScene().getRoot(), new ArrayList<>()));
+    assertThat(bars).as("sideways scroll bars on %s at %s", screen, where).isEmpty();
+  }
+
+  /**
+   * Collects every horizontal scroll bar that shows (it and every node it sits in visible), named
+   * by the nearest node with an id around it.
+   */
+  static List<String> sidewaysBars(Node node, List<String> found) {
+    if (!node.isVisible()) {
+      return found;
+    }
+    if (node instanceof ScrollBar bar
+        && bar.getOrientation() == Orientation.HORIZONTAL
+        && bar.getWidth() > 0
+        && bar.getHeight() > 0) {
+      Node named = bar;
+      while (named != null && named.getId() == null) {
+        named = named.getParent();
+      }
+      found.add(
+          "a sideways scroll bar in "
+              + (named == null ? "the window" : "#" + named.getId())
+              + " (max "
+              + Math.round(bar.getMax())
+              + ", visible "
+              + Math.round(bar.getVisibleAmount())
+              + ")");
+    }
+    if (node instanceof Parent parent) {
+      for (Node child : parent.getChildrenUnmodifiable()) {
+        sidewaysBars(child, found);
+      }
+    }
+    return found;
   }
 
   /**
    * Collects every visible text that its control shows shortened (JavaFX then draws it with an
    * ellipsis: the control's own text and the text it draws differ), every wrapping label squeezed
-   * narrower than one of its words (which it then breaks letter by letter).
+   * narrower than one of its words (which it then breaks letter by letter), and every text a
+   * drawing paints shortened with its own ellipsis (a pin's value in the package drawing).
    */
   static List<String> cutTexts(Node node, List<String> cut) {
-    if (!node.isVisible()) {
+    if (!node.isVisible() || node instanceof TextInputControl) {
+      // What a field holds is the technician's own typing, scrolled within the field.
       return cut;
+    }
+    if (node instanceof Text drawn
+        && !(drawn.getParent() instanceof Labeled)
+        && drawn.getText() != null
+        && drawn.getText().indexOf('\u2026') >= 0) {
+      Node named = drawn;
+      while (named != null && named.getId() == null) {
+        named = named.getParent();
+      }
+      cut.add(
+          "a drawing's text in "
+              + (named == null ? "the window" : "#" + named.getId())
+              + " shows \""
+              + drawn.getText()
+              + "\"");
     }
     if (node instanceof Labeled labeled
         && labeled.getText() != null

@@ -139,6 +139,13 @@ public final class CloseOutView {
     list.setCellFactory(
         v ->
             new ListCell<>() {
+              {
+                // No wider than the list: a long action wraps instead of being clipped at the
+                // list's edge.
+                setPrefWidth(0);
+                setWrapText(true);
+              }
+
               @Override
               protected void updateItem(RepairAction a, boolean empty) {
                 super.updateItem(a, empty);
@@ -269,7 +276,8 @@ public final class CloseOutView {
     Button leave = new Button("Leave open for later");
     leave.setId("leave-open");
     leave.setOnAction(e -> model.leaveOpen());
-    HBox buttons = new HBox(10, close, leave);
+    // Side by side, or one under the other where larger text leaves no room for both.
+    FlowPane buttons = new FlowPane(10, 8, close, leave);
     buttons.setAlignment(Pos.CENTER_LEFT);
     Label questionText = new Label();
     questionText.setId("close-question");

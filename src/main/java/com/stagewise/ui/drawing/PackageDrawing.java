@@ -85,6 +85,9 @@ public final class PackageDrawing extends Region {
     } else {
       pinText.put(pin, text);
     }
+    // A longer text needs a wider column: laid out anew for it, never drawn shortened in the
+    // column of the text before.
+    geometry = fitted(Math.max(getWidth(), 1), Math.max(getHeight(), 1));
     requestLayout();
     redraw();
   }
@@ -120,22 +123,42 @@ public final class PackageDrawing extends Region {
   }
 
   /**
-   * Returns the geometry for a room: text columns wide enough for every pin's text at the smallest
-   * font, as long as the drawing, scaled to the room, keeps its pins 48 px (common practice for a
-   * finger); a longer text is shortened ({@link #fit}).
+   * Returns the geometry for a room: text columns wide enough for every pin's name and text whole
+   * at the smallest font. Only where narrower columns let the drawing, scaled to the room, keep its
+   * pins 48 px (common practice for a finger) are they narrowed, and a longer text shortened
+   * ({@link #fit}); a room too narrow for 48 px pins even then keeps every text whole and scales
+   * the drawing ({@link #layoutChildren}): shortening "−14.97 V" to "−14.9…" would buy no
+   * finger-sized pin and would show a wrong value.
    */
   private PackageGeometry fitted(double roomWidth, double roomHeight) {
-    double column = minColumn();
-    while (true) {
-      PackageGeometry g = PackageGeometry.of(pinCount(), roomWidth, roomHeight, column);
-      // Only the width counts here: a room too low scales every drawing alike, texts or not.
-      double s = Math.min(1, roomWidth / g.width());
-      if (column <= PackageGeometry.MIN_TEXT_COLUMN
-          || s * g.pin(1).pad().w() >= PackageGeometry.MIN_PAD) {
+    double whole = minColumn();
+    PackageGeometry g = PackageGeometry.of(pinCount(), roomWidth, roomHeight, whole);
+    if (fingerSized(g, roomWidth, roomHeight)) {
+      return g;
+    }
+    PackageGeometry narrowest =
+        PackageGeometry.of(pinCount(), roomWidth, roomHeight, PackageGeometry.MIN_TEXT_COLUMN);
+    if (!fingerSized(narrowest, roomWidth, roomHeight)) {
+      return g;
+    }
+    for (double column = whole - 4; column > PackageGeometry.MIN_TEXT_COLUMN; column -= 4) {
+      g = PackageGeometry.of(pinCount(), roomWidth, roomHeight, column);
+      if (fingerSized(g, roomWidth, roomHeight)) {
         return g;
       }
-      column -= 4;
     }
+    return narrowest;
+  }
+
+  /**
+   * Whether the drawing, scaled to the room as {@link #layoutChildren} scales it, keeps its pins at
+   * least 48 px (a room too low scales the drawing whatever its columns: narrower texts then buy
+   * nothing).
+   */
+  private static boolean fingerSized(PackageGeometry g, double roomWidth, double roomHeight) {
+    double s = Math.min(1, Math.min(roomWidth / g.width(), roomHeight / g.height()));
+    // A hair of rounding must not count as a pin too small: 47.99 px is a 48 px pin.
+    return s * g.pin(1).pad().w() >= PackageGeometry.MIN_PAD - 0.05;
   }
 
   /**
@@ -170,7 +193,9 @@ public final class PackageDrawing extends Region {
   @Override
   protected void layoutChildren() {
     PackageGeometry fitted = fitted(getWidth(), getHeight());
-    if (fitted.width() != geometry.width() || fitted.height() != geometry.height()) {
+    if (fitted.width() != geometry.width()
+        || fitted.height() != geometry.height()
+        || fitted.pin(1).text().w() != geometry.pin(1).text().w()) {
       geometry = fitted;
       redraw();
     }

@@ -93,9 +93,12 @@ public final class HistoryView {
     search.setMinHeight(60);
     search.setOnAction(e -> model.search());
     ToggleGroup fields = new ToggleGroup();
-    HBox fieldRow = new HBox(6);
+    // The fields wrap onto a second row where larger text leaves no room for them all.
+    FlowPane fieldRow = new FlowPane(6, 6);
     fieldRow.setAlignment(Pos.CENTER_LEFT);
-    fieldRow.getChildren().add(new Label("In:"));
+    Label in = new Label("In:");
+    in.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+    fieldRow.getChildren().add(in);
     for (HistoryViewModel.Field f : HistoryViewModel.Field.values()) {
       ToggleButton b = new ToggleButton(f.label());
       b.setId("history-field-" + f.name().toLowerCase(java.util.Locale.ROOT));

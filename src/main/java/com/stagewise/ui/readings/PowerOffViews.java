@@ -64,7 +64,9 @@ final class PowerOffViews {
     Button take = new Button("Take it with the power off");
     take.setId("take-ohms");
     take.getStyleClass().add("primary");
-    take.setMinWidth(Region.USE_PREF_SIZE);
+    // Its words wrap onto a second line where larger text leaves the column too narrow.
+    take.setWrapText(true);
+    take.setMinHeight(Region.USE_PREF_SIZE);
     take.setOnAction(e -> model.takeSuggestedOhmsCheck());
     VBox offerBox = new VBox(6, offer, take);
     offerBox.getStyleClass().add("ohms-offer");

@@ -50,18 +50,24 @@ public final class ReadingsView {
     root.setId("screen-readings");
     VBox probe = probePanel();
     // At 1024 wide the three columns share the width: the probe and the pad narrow (keys to their
-    // 48 px touch minimum) before the suspects do, so that no suspect's name is squeezed away.
-    probe.setPrefWidth(380);
+    // 48 px touch minimum) before the suspects do, so that no suspect's name is squeezed away. The
+    // probe column's preferred width is in em (readings.css), so that with larger text its two
+    // switches still sit side by side at 1280 wide.
+    probe.getStyleClass().add("probe-column");
     probe.setMinWidth(330);
     VBox pad = new VBox(10);
     pad.getStyleClass().add("panel");
     ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
     pad.getChildren().addAll(AcViews.padBar(model), correctingBar(), valuePad);
     pad.setMinWidth(342);
-    pad.setPrefWidth(396);
+    // Its keys need about 340 px; what is left over goes to the results.
+    pad.setPrefWidth(360);
     pad.setMaxWidth(396);
     VBox results = resultsPanel();
     results.setMinWidth(276);
+    // What is left over goes to the results: a long text in them must not take the probe column's
+    // room (HBox shrinks every column alike from its preferred width).
+    results.setPrefWidth(276);
     HBox.setHgrow(results, Priority.ALWAYS);
     HBox columns = new HBox(12, probe, pad, results);
     VBox.setVgrow(columns, Priority.ALWAYS);
@@ -198,12 +204,21 @@ public final class ReadingsView {
                 .then("Back to suggested pair")
                 .otherwise("Back to suggested probe"));
     suggested.setOnAction(e -> model.followSuggestion());
-    other
-        .promptTextProperty()
+    // Its words wrap onto a second line where larger text leaves the column too narrow.
+    suggested.setWrapText(true);
+    suggested.setMinHeight(Region.USE_PREF_SIZE);
+    other.setPromptText("Choose a point");
+    // The words above the list, where they wrap, rather than in the box, which would cut them.
+    Label otherTitle = new Label();
+    otherTitle.setId("other-point-title");
+    otherTitle.setWrapText(true);
+    otherTitle.setMinHeight(Region.USE_PREF_SIZE);
+    otherTitle
+        .textProperty()
         .bind(
             Bindings.when(model.powerOff().activeProperty())
-                .then("Or pick a point from the list …")
-                .otherwise("Or probe another point …"));
+                .then("Or pick a point from the list:")
+                .otherwise("Or probe another point:"));
     VBox powered = new VBox(8, heading, call, title, why, AcViews.signalRow(model));
     PowerOffViews.showWhen(powered, model.powerOff().activeProperty().not());
     box.getChildren()
@@ -213,7 +228,7 @@ public final class ReadingsView {
             PowerOffViews.pairHeader(model),
             viewBar,
             drawingHolder,
-            other,
+            new VBox(4, otherTitle, other),
             suggested);
     return box;
   }
@@ -440,12 +455,11 @@ public final class ReadingsView {
       HBox barRow = new HBox(0, bar, track);
       barRow.setAlignment(Pos.CENTER_LEFT);
       Label pct = new Label(Words.percent(s.probability()));
-      pct.setMinWidth(54);
-      Region spring = new Region();
-      HBox.setHgrow(spring, Priority.ALWAYS);
-      HBox row = new HBox(10, name, spring, barRow, pct);
-      row.setAlignment(Pos.CENTER_LEFT);
-      suspectsBox.getChildren().add(row);
+      pct.getStyleClass().add("suspect-pct");
+      pct.setWrapText(false);
+      HBox gauge = new HBox(10, barRow, pct);
+      gauge.setAlignment(Pos.CENTER_RIGHT);
+      suspectsBox.getChildren().add(new SuspectLine(name, gauge));
     }
   }
 }

@@ -42,6 +42,11 @@ public final class BenchWindow {
   private final HBox statusBar;
 
   /**
+   * The smallest side of a touch target, as bench.css sets it for every button (common practice).
+   */
+  private static final double TOUCH = 48;
+
+  /**
    * Builds the window's content.
    *
    * @param bench what the bench works on
@@ -144,7 +149,21 @@ public final class BenchWindow {
    * case" to "Open …".
    */
   private static void keepButtonsWhole(Node node) {
-    if (node instanceof javafx.scene.control.ButtonBase button
+    if (node instanceof javafx.scene.control.ButtonBase button && button.isWrapText()) {
+      // A button that wraps its words (a long one in a narrow column) keeps them whole on more
+      // lines instead: as tall as its lines at its width, never below the 48 px touch minimum.
+      // Bound, as below: a value set in code would lose to the theme's 48 px.
+      button
+          .minHeightProperty()
+          .bind(
+              Bindings.createDoubleBinding(
+                  () ->
+                      Math.max(
+                          TOUCH, button.prefHeight(button.getWidth() > 0 ? button.getWidth() : -1)),
+                  button.widthProperty(),
+                  button.textProperty(),
+                  button.fontProperty()));
+    } else if (node instanceof javafx.scene.control.ButtonBase button
         && !button.getStyleClass().contains("key")) {
       // Keypad keys may narrow to the 48 px touch minimum instead (widgets.css). Bound, not set:
       // the theme's 48 px minimum width of every button (bench.css) would override a value set

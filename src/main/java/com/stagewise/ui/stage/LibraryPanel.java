@@ -10,7 +10,6 @@ import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.control.Tooltip;
 import javafx.scene.layout.FlowPane;
-import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 
@@ -150,7 +149,7 @@ final class LibraryPanel {
     save.setOnAction(e -> chooseSheet(true).ifPresent(model.libraryModel()::exportSheet));
     box.getChildren()
         .addAll(
-            new HBox(6, fromLibrary, fromTemplate),
+            new FlowPane(6, 6, fromLibrary, fromTemplate),
             libraryBox,
             templateBox,
             buttons(edit, fresh, open, save));

@@ -221,6 +221,12 @@ public final class StageView {
     parts.setCellFactory(
         v ->
             new ListCell<>() {
+              {
+                // No wider than the list: a long part line wraps instead of scrolling sideways.
+                setPrefWidth(0);
+                setWrapText(true);
+              }
+
               @Override
               protected void updateItem(PartRow row, boolean empty) {
                 super.updateItem(row, empty);
@@ -319,7 +325,10 @@ public final class StageView {
     Button rename = new Button("Rename");
     rename.setId("part-rename");
     rename.setOnAction(e -> model.applyDesignator());
-    HBox renameRow = new HBox(8, new Label("Designator"), designator, rename);
+    Label designatorLabel = new Label("Designator");
+    designatorLabel.setMinWidth(Region.USE_PREF_SIZE);
+    // Rows of controls wrap onto a second line where larger text leaves them no room.
+    FlowPane renameRow = new FlowPane(8, 6, designatorLabel, designator, rename);
     renameRow.setAlignment(Pos.CENTER_LEFT);
     ToggleGroup mode = new ToggleGroup();
     ToggleButton padTab = new ToggleButton("Value pad");
@@ -356,7 +365,7 @@ public final class StageView {
                 was.setSelected(true);
               }
             });
-    VBox editing = new VBox(10, renameRow, new HBox(8, padTab, bandsTab), wiperTab, modes);
+    VBox editing = new VBox(10, renameRow, new FlowPane(8, 6, padTab, bandsTab), wiperTab, modes);
     editing.disableProperty().bind(model.selectedPartProperty().isNull());
     box.getChildren().addAll(title, editing);
     return box;
@@ -396,7 +405,7 @@ public final class StageView {
         });
     Button clear = new Button("Clear");
     clear.setOnAction(e -> decoder.clear());
-    box.getChildren().addAll(colours, new HBox(8, undo, clear), smd, result, use);
+    box.getChildren().addAll(colours, new FlowPane(8, 6, undo, clear), smd, result, use);
     return box;
   }
 }

@@ -40,6 +40,10 @@ public final class StartView {
     VBox glance = glancePanel();
     VBox add = addPanel();
     add.setVisible(false);
+    // Only the panel shown counts for the column's width: the hidden one must not widen the
+    // screen past a 1024 px window.
+    add.managedProperty().bind(add.visibleProperty());
+    glance.managedProperty().bind(glance.visibleProperty());
     right.getChildren().addAll(glance, add);
     Button addButton = new Button("Add a new unit…");
     addButton.setId("add-unit-show");
@@ -142,7 +146,7 @@ public final class StartView {
   }
 
   /** The screens' look for a dim or a bright bench: larger text, high contrast (kept). */
-  private HBox viewRow() {
+  private javafx.scene.layout.FlowPane viewRow() {
     ToggleButton larger = new ToggleButton("Larger text");
     larger.setId("view-large-text");
     larger.selectedProperty().bindBidirectional(model.largeTextProperty());
@@ -151,7 +155,10 @@ public final class StartView {
     contrast.selectedProperty().bindBidirectional(model.highContrastProperty());
     Label screen = new Label("Screen:");
     screen.getStyleClass().add("hint");
-    HBox row = new HBox(8, screen, larger, contrast);
+    screen.setMinWidth(Region.USE_PREF_SIZE);
+    // Beside each other, or wrapped onto a second row in a narrow column (1024 wide).
+    javafx.scene.layout.FlowPane row =
+        new javafx.scene.layout.FlowPane(8, 6, screen, larger, contrast);
     row.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
     return row;
   }

@@ -157,7 +157,15 @@ public final class SuspectsView {
     close.disableProperty().bind(model.selectedProperty().isNull());
     close.setOnAction(e -> model.closeOutWithSelected());
     box.getChildren()
-        .addAll(title, viewRow, shown, checkTitle, check, caution, new HBox(10, back, close));
+        .addAll(
+            title,
+            viewRow,
+            shown,
+            checkTitle,
+            check,
+            caution,
+            // Side by side, or one under the other where larger text leaves no room for both.
+            new javafx.scene.layout.FlowPane(10, 8, back, close));
     return box;
   }
 

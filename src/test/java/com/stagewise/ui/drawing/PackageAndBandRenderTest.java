@@ -185,6 +185,33 @@ class PackageAndBandRenderTest {
   }
 
   @Test
+  void packageDrawing_inALowColumn_keepsReadingValuesWhole() {
+    // Regression: in the readings screen's probe column at 1024x600 and 1280x800 (332 x 200 px of
+    // room, too low for 48 px pins at any column width) the readings on pins 1 and 4 were drawn
+    // as "−13.4…" and "−14.9…": the columns were narrowed for pins that the height shrank anyway.
+    // The texts are set after the package is shown, as the readings screen does.
+    List<String> shown =
+        Fx.call(
+            () -> {
+              PackageDrawing drawing = new PackageDrawing();
+              drawing.show(PackageType.DUAL_8, "U1", Map.of());
+              Fx.render(drawing, 332, 200);
+              drawing.setPinText(1, "\u221213.47\u00a0V");
+              drawing.setPinText(2, "1.000\u00a0V");
+              drawing.setPinText(4, "\u221214.97\u00a0V");
+              drawing.setPinText(8, "14.96\u00a0V");
+              drawing.highlight(1);
+              Fx.render(drawing, 332, 200);
+              List<String> texts = new java.util.ArrayList<>();
+              collect(drawing, texts);
+              return texts;
+            });
+    assertThat(shown)
+        .contains("\u221213.47\u00a0V", "\u221214.97\u00a0V", "14.96\u00a0V", "1.000\u00a0V");
+    assertThat(shown).noneMatch(t -> t.contains("\u2026"));
+  }
+
+  @Test
   void bandChart_ohms_onALogAxisWithOverRange() {
     // 47 kΩ ±1 % healthy (R2 alone, series–parallel rules), the meter showing OL, an open R2
     // predicting OL: the axis holds decades of ohms and an OL zone.
