@@ -23,75 +23,51 @@ final class DenseLu {
     private final int[] order;
 
     /**
-     * Per row, the columns left of the diagonal (of L) and right of it (of U) that hold a non-zero
-     * entry, in increasing order; made when the factors are used a second time (a first solve runs
-     * over the whole rows, which costs what finding these costs). A stage's matrix is sparse (a net
-     * meets a few parts), so the later substitutions run over these alone; the terms left out are
-     * exactly zero, so every sum is the same as over the whole row.
+     * Per row, the columns left of the diagonal that hold a non-zero entry of L, in increasing
+     * order: entries {@code lowerStart[i]} (inclusive) to {@code lowerEnd[i]} (exclusive) of {@code
+     * lowerColumns}, noted during elimination as each multiplier is stored. A stage's matrix is
+     * sparse (a net meets a few parts), so the substitutions run over these alone; the terms left
+     * out are exactly zero, so every sum is the same as over the whole row.
      */
-    private int[][] lower;
+    private final int[] lowerColumns;
 
-    private int[][] upper;
+    private final int[] lowerStart;
+    private final int[] lowerEnd;
 
-    /** Solves done with these factors so far. */
-    private int uses;
+    /**
+     * Per row, the columns right of the diagonal that hold a non-zero entry of U, in increasing
+     * order: the pivot row's columns that the elimination used, or (where no row below needed them)
+     * found at the end of the elimination.
+     */
+    private final int[][] upper;
 
     /** Entries of the inverse's diagonal found so far (NaN: not yet), kept for repeated tests. */
     private double[] inverseDiagonal;
 
-    private Factors(double[][] lu, int[] order) {
+    private Factors(
+        double[][] lu,
+        int[] order,
+        int[] lowerColumns,
+        int[] lowerStart,
+        int[] lowerEnd,
+        int[][] upper) {
       this.lu = lu;
       this.order = order;
-    }
-
-    private void index() {
-      if (lower == null) {
-        int n = order.length;
-        int[][] l = new int[n][];
-        int[][] u = new int[n][];
-        for (int i = 0; i < n; i++) {
-          l[i] = nonZero(lu[i], 0, i);
-          u[i] = nonZero(lu[i], i + 1, n);
-        }
-        lower = l;
-        upper = u;
-      }
-    }
-
-    private double[] solveDense(double[] b) {
-      int n = order.length;
-      double[] y = new double[n];
-      for (int i = 0; i < n; i++) {
-        double sum = b[order[i]];
-        double[] row = lu[i];
-        for (int j = 0; j < i; j++) {
-          sum -= row[j] * y[j];
-        }
-        y[i] = sum;
-      }
-      for (int i = n - 1; i >= 0; i--) {
-        double sum = y[i];
-        double[] row = lu[i];
-        for (int j = i + 1; j < n; j++) {
-          sum -= row[j] * y[j];
-        }
-        y[i] = sum / row[i];
-      }
-      return y;
+      this.lowerColumns = lowerColumns;
+      this.lowerStart = lowerStart;
+      this.lowerEnd = lowerEnd;
+      this.upper = upper;
     }
 
     /** Returns x with {@code a·x = b} for the factorised a; b is not changed. */
     double[] solve(double[] b) {
-      if (uses++ == 0) {
-        return solveDense(b);
-      }
-      index();
       int n = order.length;
       double[] y = new double[n];
       for (int i = 0; i < n; i++) {
         double sum = b[order[i]];
         double[] row = lu[i];
-        for (int j : lower[i]) {
+        for (int p = lowerStart[i], end = lowerEnd[i]; p < end; p++) {
+          int j = lowerColumns[p];
           sum -= row[j] * y[j];
         }
         y[i] = sum;
@@ -121,7 +97,6 @@ final class DenseLu {
       } else if (!Double.isNaN(inverseDiagonal[k])) {
         return inverseDiagonal[k];
       }
-      index();
       int first = 0;
       while (order[first] != k) {
         first++;
@@ -130,7 +105,8 @@ final class DenseLu {
       for (int i = first; i < n; i++) {
         double sum = i == first ? 1 : 0;
         double[] row = lu[i];
-        for (int j : lower[i]) {
+        for (int p = lowerStart[i], end = lowerEnd[i]; p < end; p++) {
+          int j = lowerColumns[p];
           if (j >= first) {
             sum -= row[j] * y[j];
           }
@@ -166,6 +142,12 @@ final class DenseLu {
       }
       rowScale[i] = 1 / max;
     }
+    // L's non-zero columns per row, noted as the multipliers are stored: row array r (by its
+    // original position, which moves with it when rows swap) keeps its columns at r·n onwards.
+    int[] lowerColumns = new int[n * n];
+    int[] lowerCount = new int[n];
+    int[] slot = order.clone();
+    int[][] upper = new int[n][];
     for (int col = 0; col < n; col++) {
       int pivot = col;
       double best = Math.abs(a[col][col]) * rowScale[col];
@@ -189,10 +171,14 @@ final class DenseLu {
         int o = order[col];
         order[col] = order[pivot];
         order[pivot] = o;
+        o = slot[col];
+        slot[col] = slot[pivot];
+        slot[pivot] = o;
       }
       double[] pivotRow = a[col];
       // Only the pivot row's non-zero entries change the rows below (the rest would subtract 0);
-      // found when a row below needs them.
+      // found when a row below needs them. The pivot row is final from here on, so they are also
+      // its columns of U.
       int[] columns = null;
       for (int row = col + 1; row < n; row++) {
         double[] target = a[row];
@@ -205,10 +191,22 @@ final class DenseLu {
           for (int j : columns) {
             target[j] -= factor * pivotRow[j];
           }
+          int s = slot[row];
+          lowerColumns[s * n + lowerCount[s]++] = col;
         }
       }
+      upper[col] = columns;
     }
-    return new Factors(a, order);
+    int[] lowerStart = new int[n];
+    int[] lowerEnd = new int[n];
+    for (int i = 0; i < n; i++) {
+      lowerStart[i] = slot[i] * n;
+      lowerEnd[i] = lowerStart[i] + lowerCount[slot[i]];
+      if (upper[i] == null) {
+        upper[i] = nonZero(a[i], i + 1, n);
+      }
+    }
+    return new Factors(a, order, lowerColumns, lowerStart, lowerEnd, upper);
   }
 
   /**
@@ -220,22 +218,21 @@ final class DenseLu {
     private final double[][] im;
     private final int[] order;
 
-    /** Per row, the non-zero columns of L and of U, as in {@link Factors}. */
+    /**
+     * Per row, the non-zero columns of L and of U, as in {@link Factors}: L's noted as the
+     * multipliers are stored, U's as the pivot row's columns that the elimination used.
+     */
     private final int[][] lower;
 
     private final int[][] upper;
 
-    private ComplexFactors(double[][] re, double[][] im, int[] order) {
+    private ComplexFactors(
+        double[][] re, double[][] im, int[] order, int[][] lower, int[][] upper) {
       this.re = re;
       this.im = im;
       this.order = order;
-      int n = order.length;
-      this.lower = new int[n][];
-      this.upper = new int[n][];
-      for (int i = 0; i < n; i++) {
-        lower[i] = nonZero(re[i], im[i], 0, i);
-        upper[i] = nonZero(re[i], im[i], i + 1, n);
-      }
+      this.lower = lower;
+      this.upper = upper;
     }
 
     /** Returns {@code {re, im}} of x with {@code a·x = br + j·bi}; b is not changed. */
@@ -293,6 +290,11 @@ final class DenseLu {
       }
       rowScale[i] = 1 / max;
     }
+    // L's non-zero columns per row, noted as in factor.
+    int[] lowerColumns = new int[n * n];
+    int[] lowerCount = new int[n];
+    int[] slot = order.clone();
+    int[][] upper = new int[n][];
     for (int col = 0; col < n; col++) {
       int pivot = col;
       double best = (Math.abs(ar[col][col]) + Math.abs(ai[col][col])) * rowScale[col];
@@ -319,11 +321,16 @@ final class DenseLu {
         int o = order[col];
         order[col] = order[pivot];
         order[pivot] = o;
+        o = slot[col];
+        slot[col] = slot[pivot];
+        slot[pivot] = o;
       }
       double pr = ar[col][col];
       double pi = ai[col][col];
       double denominator = pr * pr + pi * pi;
+      // The pivot row is final from here on: its non-zero columns are also its columns of U.
       int[] columns = nonZero(ar[col], ai[col], col + 1, n);
+      upper[col] = columns;
       for (int row = col + 1; row < n; row++) {
         double fr = (ar[row][col] * pr + ai[row][col] * pi) / denominator;
         double fi = (ai[row][col] * pr - ar[row][col] * pi) / denominator;
@@ -338,9 +345,16 @@ final class DenseLu {
           ar[row][j] -= fr * xr - fi * xi;
           ai[row][j] -= fr * xi + fi * xr;
         }
+        int s = slot[row];
+        lowerColumns[s * n + lowerCount[s]++] = col;
       }
     }
-    return new ComplexFactors(ar, ai, order);
+    int[][] lower = new int[n][];
+    for (int i = 0; i < n; i++) {
+      int start = slot[i] * n;
+      lower[i] = java.util.Arrays.copyOfRange(lowerColumns, start, start + lowerCount[slot[i]]);
+    }
+    return new ComplexFactors(ar, ai, order, lower, upper);
   }
 
   /**
@@ -360,6 +374,7 @@ final class DenseLu {
       }
       rowScale[i] = 1 / max;
     }
+    int[][] pivotColumns = new int[n][];
     for (int col = 0; col < n; col++) {
       int pivot = col;
       double best = (Math.abs(ar[col][col]) + Math.abs(ai[col][col])) * rowScale[col];
@@ -374,11 +389,14 @@ final class DenseLu {
         return null;
       }
       swap(ar, br, rowScale, col, pivot);
-      swap(ai, bi, new double[n], col, pivot);
+      swap(ai, bi, col, pivot);
       double pr = ar[col][col];
       double pi = ai[col][col];
       double denominator = pr * pr + pi * pi;
+      // The pivot row is final from here on: its non-zero columns serve the back substitution
+      // too (the first is the pivot itself, which is not zero).
       int[] columns = nonZero(ar[col], ai[col], col, n);
+      pivotColumns[col] = columns;
       for (int row = col + 1; row < n; row++) {
         // factor = a[row][col] / pivot, in complex arithmetic
         double fr = (ar[row][col] * pr + ai[row][col] * pi) / denominator;
@@ -403,7 +421,9 @@ final class DenseLu {
     for (int row = n - 1; row >= 0; row--) {
       double sr = br[row];
       double si = bi[row];
-      for (int j : nonZero(ar[row], ai[row], row + 1, n)) {
+      int[] columns = pivotColumns[row];
+      for (int c = 1; c < columns.length; c++) {
+        int j = columns[c];
         sr -= ar[row][j] * xr[j] - ai[row][j] * xi[j];
         si -= ar[row][j] * xi[j] + ai[row][j] * xr[j];
       }
@@ -418,38 +438,45 @@ final class DenseLu {
 
   /** The columns from {@code from} (inclusive) to {@code to} (exclusive) where row is not 0. */
   private static int[] nonZero(double[] row, int from, int to) {
+    int[] columns = new int[to - from];
     int count = 0;
     for (int j = from; j < to; j++) {
-      if (row[j] != 0) {
-        count++;
-      }
+      columns[count] = j;
+      count += notZero(row[j]);
     }
-    int[] columns = new int[count];
-    int next = 0;
-    for (int j = from; j < to; j++) {
-      if (row[j] != 0) {
-        columns[next++] = j;
-      }
-    }
-    return columns;
+    return count == columns.length ? columns : java.util.Arrays.copyOf(columns, count);
   }
 
   /** The columns from {@code from} to {@code to} (exclusive) where re or im is not 0. */
   private static int[] nonZero(double[] re, double[] im, int from, int to) {
+    int[] columns = new int[to - from];
     int count = 0;
     for (int j = from; j < to; j++) {
-      if (re[j] != 0 || im[j] != 0) {
-        count++;
-      }
+      columns[count] = j;
+      count += notZero(re[j]) | notZero(im[j]);
     }
-    int[] columns = new int[count];
-    int next = 0;
-    for (int j = from; j < to; j++) {
-      if (re[j] != 0 || im[j] != 0) {
-        columns[next++] = j;
-      }
+    return count == columns.length ? columns : java.util.Arrays.copyOf(columns, count);
+  }
+
+  /**
+   * 1 when {@code v != 0} (NaN included), 0 for either zero; without a branch, since which entries
+   * of a stage's matrix are zero follows no pattern a processor's branch predictor could learn.
+   */
+  private static int notZero(double v) {
+    long bits = Double.doubleToRawLongBits(v) << 1; // the sign shifted out: 0 exactly for ±0
+    return (int) ((bits | -bits) >>> 63);
+  }
+
+  private static void swap(double[][] a, double[] b, int i, int j) {
+    if (i == j) {
+      return;
     }
-    return columns;
+    double[] row = a[i];
+    a[i] = a[j];
+    a[j] = row;
+    double t = b[i];
+    b[i] = b[j];
+    b[j] = t;
   }
 
   private static void swap(double[][] a, double[] b, double[] scale, int i, int j) {
