@@ -117,11 +117,12 @@ final class Predictor {
               ? cs
               : cs.with(new Change.Device(o.section, cs.device(o.section).withOffset(o.offset)));
       double[] dcMean = reader.dc(o.point);
-      double[] acMean = ac ? reader.ac(at.ac(o.point)) : null;
-      double[] dcVar = new double[points.size];
-      double[] acVar = ac ? new double[points.size] : null;
       Analysis.Linearized linear =
           perturbations.isEmpty() ? null : at.linearize(o.point).orElse(null);
+      // The linearised point's AC factors give the response and, below, its changes.
+      double[] acMean = ac ? reader.ac(linear == null ? at.ac(o.point) : linear.ac()) : null;
+      double[] dcVar = new double[points.size];
+      double[] acVar = ac ? new double[points.size] : null;
       for (Perturbation p : perturbations) {
         Change change = p.change.apply(at);
         double[] read = linear == null ? null : linear.stepRead(change, reader.probe);

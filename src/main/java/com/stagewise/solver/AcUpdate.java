@@ -174,8 +174,8 @@ final class AcUpdate {
     return !java.util.Arrays.equals(dbr, br) || !java.util.Arrays.equals(dbi, bi);
   }
 
-  /** The response before any change, solved once and kept. */
-  private double[][] unchanged() {
+  /** The response before any change ({@code {re, im}} per unknown), solved once and kept. */
+  double[][] unchanged() {
     if (before == null) {
       before = factors.solve(br, bi);
     }

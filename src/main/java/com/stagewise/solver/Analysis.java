@@ -133,5 +133,12 @@ public sealed interface Analysis permits CompiledStage {
      * update of the kept AC factors (Sherman–Morrison); other changes are solved in full.
      */
     Optional<AcSolution> ac(Change change);
+
+    /**
+     * Returns the AC response about this point with no change: the same numbers as {@link
+     * Analysis#ac} of the point, from the AC factors that {@link #ac(Change)} keeps (made here if
+     * not yet), so that the response and its changes share one factorisation.
+     */
+    Optional<AcSolution> ac();
   }
 }

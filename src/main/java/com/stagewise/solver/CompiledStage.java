@@ -83,7 +83,7 @@ final class CompiledStage implements Analysis {
     DcSystem system = network.solveDc(states, collapsed, x);
     return system == null
         ? Optional.empty()
-        : Optional.of(new Linearization(this, states.clone(), collapsed, system));
+        : Optional.of(new Linearization(this, states.clone(), collapsed, system, x));
   }
 
   @Override

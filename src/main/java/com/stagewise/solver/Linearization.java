@@ -26,14 +26,22 @@ final class Linearization implements Analysis.Linearized {
    */
   private double[] unmoved;
 
+  /** The unknowns of the point linearised about, as it was given (before the solve refined it). */
+  private final double[] given;
+
   Linearization(
-      CompiledStage analysis, SectionState[] states, boolean[] collapsed, DcSystem system) {
+      CompiledStage analysis,
+      SectionState[] states,
+      boolean[] collapsed,
+      DcSystem system,
+      double[] given) {
     this.analysis = analysis;
     this.network = analysis.network;
     this.states = states;
     this.collapsed = collapsed;
     this.x = system.x();
     this.system = system;
+    this.given = given;
   }
 
   /** A section's parameters before the change being stepped (null for other changes). */
@@ -218,13 +226,36 @@ final class Linearization implements Analysis.Linearized {
   }
 
   @Override
+  public Optional<AcSolution> ac() {
+    if (network.acHz == 0) {
+      return Optional.empty();
+    }
+    if (network.nonlinear) {
+      // A junction's small-signal conductance is taken at the DC volts, and the kept factors are
+      // about the refined ones: the point's own volts answer, as Analysis.ac does.
+      return analysis.acAbout(states, collapsed, given);
+    }
+    // Without junctions the AC system does not depend on the DC volts, only on the states: the
+    // kept factors' response is the full solve's, pivot for pivot and sum for sum.
+    AcUpdate update = acUpdate();
+    return update == null
+        ? analysis.acAbout(states, collapsed, given)
+        : analysis.acSolution(update.unchanged());
+  }
+
+  private AcUpdate acUpdate() {
+    if (acUpdate == null) {
+      acUpdate = AcUpdate.of(network, states, collapsed, x);
+    }
+    return acUpdate;
+  }
+
+  @Override
   public Optional<AcSolution> ac(Change change) {
     if (network.acHz == 0) {
       return Optional.empty();
     }
-    if (acUpdate == null) {
-      acUpdate = AcUpdate.of(network, states, collapsed, x);
-    }
+    acUpdate();
     double[][] updated = acUpdate == null ? null : acUpdate.solve(change);
     if (updated != null) {
       return analysis.acSolution(updated);
