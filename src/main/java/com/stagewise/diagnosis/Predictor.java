@@ -101,12 +101,13 @@ final class Predictor {
                 null,
                 0,
                 scenario.weight() / settled.points().size(),
-                "settles " + describe(state)));
+                "settles " + describe(state),
+                null));
       }
     } else if (withSpread || !scenario.onGrid()) {
       outcomes.addAll(offsetCorners(stage, cs, settled.primary(), scenario.weight()));
     } else {
-      outcomes.add(new Outcome(settled.primary(), null, 0, scenario.weight(), ""));
+      outcomes.add(new Outcome(settled.primary(), null, 0, scenario.weight(), "", null));
     }
     boolean ac = cs.acHz() > 0;
     List<Perturbation> perturbations = withSpread ? perturbations(stage, cs) : List.of();
@@ -117,8 +118,11 @@ final class Predictor {
               ? cs
               : cs.with(new Change.Device(o.section, cs.device(o.section).withOffset(o.offset)));
       double[] dcMean = reader.dc(o.point);
+      // The nominal outcome's factors were made for its offset corners already: the same ones.
       Analysis.Linearized linear =
-          perturbations.isEmpty() ? null : at.linearize(o.point).orElse(null);
+          perturbations.isEmpty()
+              ? null
+              : o.linear != null ? o.linear : at.linearize(o.point).orElse(null);
       // The linearised point's AC factors give the response and, below, its changes.
       double[] acMean = ac ? reader.ac(linear == null ? at.ac(o.point) : linear.ac()) : null;
       double[] dcVar = new double[points.size];
@@ -163,11 +167,16 @@ final class Predictor {
   }
 
   /**
-   * One outcome of a scenario: a settled point, and the section whose offset was set to reach it
-   * (null when none).
+   * One outcome of a scenario: a settled point, the section whose offset was set to reach it (null
+   * when none), and the point's factorised system where one was made for it (else null).
    */
   private record Outcome(
-      OperatingPoint point, String section, double offset, double weight, String label) {}
+      OperatingPoint point,
+      String section,
+      double offset,
+      double weight,
+      String label,
+      Analysis.Linearized linear) {}
 
   /**
    * A change of one number of a stage by one standard deviation, worked out from the analysis it
@@ -262,11 +271,12 @@ final class Predictor {
       SectionState downState = down.states().get(ref);
       if (upState != downState && (upState != now || downState != now)) {
         return List.of(
-            new Outcome(up, ref, params.offset() + max, weight / 2, ref + " offset positive"),
-            new Outcome(down, ref, params.offset() - max, weight / 2, ref + " offset negative"));
+            new Outcome(up, ref, params.offset() + max, weight / 2, ref + " offset positive", null),
+            new Outcome(
+                down, ref, params.offset() - max, weight / 2, ref + " offset negative", null));
       }
     }
-    return List.of(new Outcome(nominal, null, 0, weight, ""));
+    return List.of(new Outcome(nominal, null, 0, weight, "", linear));
   }
 
   /** The point the stage settles in from {@code from}'s states, else its first point, else null. */

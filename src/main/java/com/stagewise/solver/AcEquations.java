@@ -16,7 +16,7 @@ final class AcEquations {
    */
   double[][] solve(SectionState[] states, boolean[] collapsedHint, double[] dc) {
     Equations e = assemble(states, collapsedHint, dc);
-    return DenseLu.solveComplex(e.ar, e.ai, e.br, e.bi);
+    return ComplexLu.solve(e.ar, e.ai, e.br, e.bi);
   }
 
   /** The AC system's matrix {@code ar + j·ai} and right-hand side {@code br + j·bi}. */

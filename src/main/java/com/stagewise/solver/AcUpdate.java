@@ -23,17 +23,13 @@ final class AcUpdate {
 
   private final Network network;
   private final SectionState[] states;
-  private final DenseLu.ComplexFactors factors;
+  private final ComplexLu.Factors factors;
   private final double[] br;
   private final double[] bi;
   private double[][] before;
 
   private AcUpdate(
-      Network network,
-      SectionState[] states,
-      DenseLu.ComplexFactors factors,
-      double[] br,
-      double[] bi) {
+      Network network, SectionState[] states, ComplexLu.Factors factors, double[] br, double[] bi) {
     this.network = network;
     this.states = states;
     this.factors = factors;
@@ -50,7 +46,7 @@ final class AcUpdate {
       return null;
     }
     AcEquations.Equations e = new AcEquations(network).assemble(states, collapsed, dc);
-    DenseLu.ComplexFactors factors = DenseLu.factorComplex(e.ar(), e.ai());
+    ComplexLu.Factors factors = ComplexLu.factor(e.ar(), e.ai());
     return factors == null ? null : new AcUpdate(network, states, factors, e.br(), e.bi());
   }
 

@@ -169,7 +169,7 @@ class DenseLuTest {
         double[][] ai = susceptances(n);
         double[] br = vector(n);
         double[] bi = vector(n);
-        double[][] x = DenseLu.solveComplex(copy(ar), copy(ai), br.clone(), bi.clone());
+        double[][] x = ComplexLu.solve(copy(ar), copy(ai), br.clone(), bi.clone());
         if (agreesWithEjml(ar, ai, br, bi, x, trial)) {
           checked++;
         }
@@ -186,7 +186,7 @@ class DenseLuTest {
         double[][] ai = susceptances(n);
         double[] br = vector(n);
         double[] bi = vector(n);
-        DenseLu.ComplexFactors factors = DenseLu.factorComplex(copy(ar), copy(ai));
+        ComplexLu.Factors factors = ComplexLu.factor(copy(ar), copy(ai));
         assertThat(factors).as("trial %d", trial).isNotNull();
         if (agreesWithEjml(ar, ai, br, bi, factors.solve(br, bi), trial)) {
           checked++;
@@ -207,8 +207,8 @@ class DenseLuTest {
         double[][] ai = susceptances(n);
         double[] br = vector(n);
         double[] bi = vector(n);
-        double[][] once = DenseLu.solveComplex(copy(ar), copy(ai), br.clone(), bi.clone());
-        DenseLu.ComplexFactors factors = DenseLu.factorComplex(copy(ar), copy(ai));
+        double[][] once = ComplexLu.solve(copy(ar), copy(ai), br.clone(), bi.clone());
+        ComplexLu.Factors factors = ComplexLu.factor(copy(ar), copy(ai));
         assertThat(factors == null).as("trial %d", trial).isEqualTo(once == null);
         if (once == null) {
           continue;
@@ -276,7 +276,7 @@ class DenseLuTest {
       double g = 1e-3;
       double b = 2 * Math.PI * 1000 * 159.155e-9;
       double[][] x =
-          DenseLu.solveComplex(
+          ComplexLu.solve(
               new double[][] {{g}}, new double[][] {{b}}, new double[] {g}, new double[] {0});
       Phasor p = Phasor.of(x[0][0], x[1][0]);
       assertThat(p.amplitude()).isCloseTo(1 / Math.sqrt(2), within(1e-5));
@@ -287,7 +287,7 @@ class DenseLuTest {
     void singularMatrix_isNull() {
       double[][] ar = {{1, 1}, {1, 1}};
       double[][] ai = {{1, 1}, {1, 1}};
-      assertThat(DenseLu.solveComplex(ar, ai, new double[] {1, 0}, new double[] {0, 0})).isNull();
+      assertThat(ComplexLu.solve(ar, ai, new double[] {1, 0}, new double[] {0, 0})).isNull();
     }
   }
 
