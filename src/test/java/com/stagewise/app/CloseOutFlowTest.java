@@ -21,7 +21,8 @@ import org.junit.jupiter.api.Test;
  * The close-out's photo of the board and check after the repair in a real (headless) window: a demo
  * case is opened, its rails read, a photo attached from the chooser (a PNG from the JDK's writer),
  * the rails read again after the repair — the positive one healthy, the negative one weak (−11.20 V
- * against a −15 V rail of 5 % tolerance, which spans −15.75 V to −14.25 V) — and the case closed as
+ * against a −15 V rail of 5 % tolerance, which spans −15.75 V to −14.25 V) — and the output read
+ * again in AC RMS as it was during the diagnosis (0.33 V, inside its band), and the case closed as
  * fixed after the question that reading raises; the history shows the photo's thumbnail, which
  * tapped shows large, and the readings after the repair apart from the others. The close-out and
  * history screens are checked for cut texts at 1024×600 and 1280×800, and their pictures saved
@@ -63,6 +64,16 @@ class CloseOutFlowTest extends WindowFlow {
     openLineDriverCase("Channel 1 dead after a fall");
     typeReading(VCC);
     typeReading(VEE);
+    // The output (dual-8 pin 1, DESIGN.md) read on the meter's AC volts range, RMS: 0.33 V, as a
+    // healthy gain of −R2/R1 = −4.7 gives for 0.1 V peak in (0.47 V peak, over √2 for RMS:
+    // textbook), so that the check after the repair reads it again in AC RMS.
+    robot.clickOn("#package-drawing #pin-1");
+    settle();
+    scrollToTop("#pad-kind");
+    robot.clickOn("#pad-ac");
+    robot.clickOn("#measure-rms");
+    settle();
+    typeReading(0.33);
 
     robot.clickOn("#step-close-out");
     settle();
@@ -88,6 +99,13 @@ class CloseOutFlowTest extends WindowFlow {
     assertThat(text("#after-repair-summary"))
         .startsWith("1 of 2 readings are inside the healthy band.")
         .contains("Outside: U1 pin 4");
+    // The AC point in its measure: the pad says what it takes.
+    assertThat(text("#after-repair-point"))
+        .isEqualTo("Read U1 pin 1, AC volts RMS at 1\u00a0kHz with the meter:");
+    assertThat(text("#after-repair-pad-line")).isEqualTo("AC volts RMS at 1\u00a0kHz");
+    typeAfterRepair(0.33);
+    assertThat(text("#after-repair-summary"))
+        .startsWith("2 of 3 readings are inside the healthy band.");
     shoot("close-out-check");
     tap("#after-repair-done");
     settle();
@@ -164,9 +182,11 @@ class CloseOutFlowTest extends WindowFlow {
     var file = workshop.store().cases().caseFile(caseId).orElseThrow();
     assertThat(file.afterRepair())
         .extracting(r -> r.at() + " " + r.value() + " " + r.inside())
-        .containsExactly("U1.8 14.96 true", "U1.4 -11.2 false");
-    // Kept apart: the readings of the fault are the two rails read before the repair.
-    assertThat(file.readings()).extracting(r -> r.value()).containsExactly(VCC, VEE);
+        .containsExactly("U1.8 14.96 true", "U1.4 -11.2 false", "U1.1 0.33 true");
+    assertThat(file.afterRepair().get(2).measure()).isEqualTo("rms");
+    // Kept apart: the readings of the fault are the two rails and the output read before the
+    // repair.
+    assertThat(file.readings()).extracting(r -> r.value()).containsExactly(VCC, VEE, 0.33);
     var photos = file.photos();
     assertThat(photos).hasSize(1);
     assertThat(workshop.store().cases().photo(photos.get(0).id()).orElseThrow().image())
