@@ -45,11 +45,12 @@ public final class Checks {
 
   /**
    * A fault id in the DESIGN.md grammar: {@code healthy}, or a target and a fault word, where the
-   * target is a designator ({@code R2}, {@code U1A}, a rail net such as {@code VCC}) or a package
-   * pin or pin pair ({@code U1.3}, {@code U1.6-7}).
+   * target is a designator ({@code R2}, {@code U1A}, a rail net such as {@code VCC}, {@code +15V}
+   * or {@code -15V}: rails are named by their nets, which may start with a sign or a digit) or a
+   * package pin or pin pair ({@code U1.3}, {@code U1.6-7}).
    */
   private static final Pattern FAULT_ID =
-      Pattern.compile("healthy|[A-Za-z_][A-Za-z0-9_+\\-]*(\\.[0-9]+(-[0-9]+)?)?:[a-z][a-z\\-]*");
+      Pattern.compile("healthy|[A-Za-z0-9_+\\-]+(\\.[0-9]+(-[0-9]+)?)?:[a-z][a-z\\-]*");
 
   /** An op-amp section designator: a package designator and a section letter ({@code U1A}). */
   private static final Pattern SECTION = Pattern.compile("([A-Za-z]+[0-9]+)([A-Za-z])");
