@@ -260,7 +260,7 @@ final class HistoryText {
                 + " healthy "
                 + (r.kind() == ReadingKind.OHMS
                     ? bandOhms(r.healthyLow(), r.healthyHigh())
-                    : number(r.healthyLow()) + " to " + number(r.healthyHigh()) + unit);
+                    : bandEnd(r.healthyLow()) + " to " + bandEnd(r.healthyHigh()) + unit);
     return when(r.takenAt()) + "  " + what + "  " + verdict;
   }
 
@@ -272,7 +272,18 @@ final class HistoryText {
     if (low == Double.POSITIVE_INFINITY) {
       return "OL";
     }
-    return number(low) + " to " + ohms(high, " Ω");
+    return bandEnd(low) + " to " + (high == Double.POSITIVE_INFINITY ? "OL" : bandEnd(high) + " Ω");
+  }
+
+  /**
+   * Returns an end of a computed healthy band with six significant digits (46530.00000000001 is
+   * 46530): the band comes from tolerance corners, and the digits beyond are rounding.
+   */
+  private static String bandEnd(double value) {
+    return java.math.BigDecimal.valueOf(value)
+        .round(new java.math.MathContext(6))
+        .stripTrailingZeros()
+        .toPlainString();
   }
 
   static String number(double value) {

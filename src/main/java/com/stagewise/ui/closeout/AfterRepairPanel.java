@@ -32,6 +32,8 @@ final class AfterRepairPanel extends VBox {
     ListView<CheckRow> list = new ListView<>(model.rows());
     list.setId("after-repair-points");
     list.setMinHeight(150);
+    // About four points in sight at once (two lines each, touch rows of common practice).
+    list.setPrefHeight(240);
     VBox.setVgrow(list, Priority.ALWAYS);
     list.setCellFactory(
         v ->
@@ -72,7 +74,14 @@ final class AfterRepairPanel extends VBox {
             });
     model
         .currentProperty()
-        .addListener((o, was, now) -> list.getSelectionModel().select(now.intValue()));
+        .addListener(
+            (o, was, now) -> {
+              list.getSelectionModel().select(now.intValue());
+              // The point to read next stays in sight in the list.
+              if (now.intValue() >= 0) {
+                list.scrollTo(now.intValue());
+              }
+            });
     model
         .rows()
         .addListener(
