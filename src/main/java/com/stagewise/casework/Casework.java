@@ -397,7 +397,8 @@ public final class Casework {
    * diagnosis.
    *
    * @return the readings as stored, in the order given
-   * @throws InvalidInputException if the case is unknown or a value is not a finite number: nothing
+   * @throws InvalidInputException if the case is unknown, or a value is not one its kind may be (a
+   *     finite number of volts, an AC amplitude of 0 V or more, ohms of 0 or more or OL): nothing
    *     is stored then
    */
   public List<AfterRepairReading> addAfterRepair(

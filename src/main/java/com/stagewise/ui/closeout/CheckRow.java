@@ -70,7 +70,7 @@ public record CheckRow(AfterRepair.CheckPoint point, String title, Double value,
     return title + ": " + bandWords();
   }
 
-  /** Returns the value read in words with its unit: "−4.710 V", "0.720 V RMS", "46.80 kΩ", "OL". */
+  /** Returns the value read in words with its unit: "−4.710 V", "333.0 mV RMS", "46.8 kΩ", "OL". */
   public String valueText() {
     if (value == null) {
       return "";

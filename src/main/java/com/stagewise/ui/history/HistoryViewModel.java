@@ -274,7 +274,7 @@ public final class HistoryViewModel {
 
   /**
    * Returns the readings after the repair as lines, each with its kind: "U1 pin 1: −4.710 V …", "U1
-   * pin 1, AC volts RMS at 1 kHz: 0.720 V …", "U1 pin 2 to SUM, power off: 46.80 kΩ …".
+   * pin 1, AC volts RMS at 1 kHz: 0.720 V …", "U1 pin 2 to SUM, power off: 46.8 kΩ …".
    */
   static List<String> afterRepairLines(CaseFile file) {
     List<String> lines = new ArrayList<>();
