@@ -45,7 +45,9 @@ public final class HistoryView {
     list = new ListView<>(model.hits());
     VBox left = searchPanel();
     left.setPrefWidth(640);
-    left.setMinWidth(640);
+    // Room for the keypad at the 48 px touch minimum per key; at 1024 wide the case beside it gets
+    // the rest.
+    left.setMinWidth(560);
     VBox right = new VBox(8);
     right.getStyleClass().add("panel");
     caseBox.setId("history-case");

@@ -55,6 +55,10 @@ public final class ReadingsView {
     // switches still sit side by side at 1280 wide.
     probe.getStyleClass().add("probe-column");
     probe.setMinWidth(330);
+    // A wide window (1920) gives the probe column and its drawing their share of the room too, up
+    // to a width in em (readings.css), instead of leaving them at 380 px beside a vast results
+    // column.
+    HBox.setHgrow(probe, Priority.ALWAYS);
     VBox pad = new VBox(10);
     pad.getStyleClass().add("panel");
     ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
@@ -65,9 +69,10 @@ public final class ReadingsView {
     pad.setMaxWidth(396);
     VBox results = resultsPanel();
     results.setMinWidth(276);
-    // What is left over goes to the results: a long text in them must not take the probe column's
-    // room (HBox shrinks every column alike from its preferred width).
-    results.setPrefWidth(276);
+    // A set preferred width: a long text in the results must not take the probe column's room
+    // (HBox shrinks every column alike from its preferred width); what is left over is shared
+    // with the probe column.
+    results.setPrefWidth(430);
     HBox.setHgrow(results, Priority.ALWAYS);
     HBox columns = new HBox(12, probe, pad, results);
     VBox.setVgrow(columns, Priority.ALWAYS);

@@ -231,7 +231,33 @@ public final class BenchWindow {
       stepButtons.put(step, button);
       steps.getChildren().add(button);
     }
+    giveWay(bar, name, steps);
     return bar;
+  }
+
+  /**
+   * Hides the app's name where the steps would not fit on one row beside it (larger text at 1024
+   * wide): the steps then keep one row, and every screen the height of a second one (the window's
+   * title still names the app).
+   */
+  private static void giveWay(HBox bar, Label name, javafx.scene.layout.FlowPane steps) {
+    java.util.List<javafx.beans.Observable> depends = new java.util.ArrayList<>();
+    depends.add(bar.widthProperty());
+    steps.getChildren().forEach(step -> depends.add(((Region) step).widthProperty()));
+    var room =
+        Bindings.createBooleanBinding(
+            () -> {
+              double stepsWidth = 0;
+              for (Node step : steps.getChildren()) {
+                stepsWidth += step.prefWidth(-1) + steps.getHgap();
+              }
+              double inner = bar.getWidth() - bar.snappedLeftInset() - bar.snappedRightInset();
+              return bar.getWidth() <= 0
+                  || inner >= name.prefWidth(-1) + bar.getSpacing() + stepsWidth;
+            },
+            depends.toArray(javafx.beans.Observable[]::new));
+    name.visibleProperty().bind(room);
+    name.managedProperty().bind(room);
   }
 
   private HBox caseLine() {

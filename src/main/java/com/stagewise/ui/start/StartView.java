@@ -112,6 +112,8 @@ public final class StartView {
     ListView<StartViewModel.UnitRow> list = new ListView<>(model.matches());
     list.setId("unit-matches");
     list.setPrefHeight(170);
+    // A tall window shows more of the units found instead of leaving the panel empty below them.
+    VBox.setVgrow(list, Priority.ALWAYS);
     // Never squeezed below its first two rows (start.css): in a short window the screen scrolls.
     list.getStyleClass().add("unit-matches");
     list.setCellFactory(
