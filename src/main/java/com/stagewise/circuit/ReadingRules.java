@@ -206,7 +206,7 @@ public final class ReadingRules {
    * net or a package pin; the lead itself may still be wrong ({@code R2.7}).
    */
   public static boolean isPartLead(Stage stage, String point) {
-    if (stage.nets().contains(point) || stage.pinNets().containsKey(point)) {
+    if (stage.hasNet(point) || stage.hasUsedPin(point)) {
       return false;
     }
     int dot = point.lastIndexOf('.');
@@ -226,7 +226,7 @@ public final class ReadingRules {
       return Optional.of(
           "the test point holds a control character (expected a net name or a pin such as U1.6)");
     }
-    if (stage.nets().contains(at) || stage.pinNets().containsKey(at)) {
+    if (stage.hasNet(at) || stage.hasUsedPin(at)) {
       return Optional.empty();
     }
     int dot = at.lastIndexOf('.');

@@ -63,6 +63,63 @@ public record Stage(
     return nets;
   }
 
+  /**
+   * Returns whether {@code point} is one of the stage's nets, as {@code nets().contains(point)}
+   * says, without building the set (readings are checked against it one by one).
+   */
+  public boolean hasNet(String point) {
+    if (point.equals(ground)
+        || rails.stream().anyMatch(r -> r.net().equals(point))
+        || inputs.stream().anyMatch(i -> i.net().equals(point))) {
+      return true;
+    }
+    for (Part part : parts) {
+      if (part.nets().contains(point)) {
+        return true;
+      }
+    }
+    for (Amplifier amp : amplifiers) {
+      for (Terminal terminal : Terminal.values()) {
+        if (amp.net(terminal).equals(point)) {
+          return true;
+        }
+      }
+    }
+    return false;
+  }
+
+  /**
+   * Returns whether {@code point} is a used package pin ({@code U1.6}), as {@code
+   * pinNets().containsKey(point)} says, without building the map.
+   */
+  public boolean hasUsedPin(String point) {
+    int dot = point.lastIndexOf('.');
+    if (dot <= 0 || dot == point.length() - 1 || point.length() - dot > 4) {
+      return false;
+    }
+    String digits = point.substring(dot + 1);
+    for (int i = 0; i < digits.length(); i++) {
+      if (digits.charAt(i) < '0' || digits.charAt(i) > '9') {
+        return false;
+      }
+    }
+    int pin = Integer.parseInt(digits);
+    if (!Integer.toString(pin).equals(digits)) {
+      return false;
+    }
+    String pkg = point.substring(0, dot);
+    for (Amplifier amp : amplifiers) {
+      if (amp.packageRef().equals(pkg)) {
+        for (Terminal terminal : Terminal.values()) {
+          if (amp.pin(terminal) == pin) {
+            return true;
+          }
+        }
+      }
+    }
+    return false;
+  }
+
   /** Returns whether the net is ground, a rail or a test input. */
   public boolean isDriven(String net) {
     return net.equals(ground) || rail(net).isPresent() || input(net).isPresent();
