@@ -99,16 +99,7 @@ final class AfterRepairFields {
 
   /** Returns volts, or ohms (a number, or "OL" for the meter's over-range, +∞). */
   private static double value(JsonField value, ReadingKind kind) {
-    if (kind == ReadingKind.OHMS && value.isText()) {
-      if (!value.text().equals(ReadingsSheet.OVER_RANGE)) {
-        throw value.error(
-            "expected ohms as a number or \"OL\" (the meter's over-range), found \""
-                + value.text()
-                + "\"");
-      }
-      return Double.POSITIVE_INFINITY;
-    }
-    return value.finite(kind == ReadingKind.OHMS ? "ohms" : "volts");
+    return HistoryBundleJson.readingValue(value, kind, kind == ReadingKind.OHMS ? "ohms" : "volts");
   }
 
   /** Writes one entry of {@code afterRepair}; a DC level is written as format 5 wrote it. */

@@ -219,7 +219,7 @@ public final class HistoryBundleJson {
               text(f, "caseId"),
               text(f, "at"),
               kind,
-              readingValue(f.require("value", "a number"), kind),
+              readingValue(f.require("value", "a number"), kind, "the reading's value"),
               f.optional("hz").map(h -> h.finite("a frequency in Hz")).orElse(null),
               f.optional("uncertainty").map(u -> u.finite("an uncertainty in volts")).orElse(null),
               f.optionalText("meter", ""),
@@ -409,9 +409,10 @@ public final class HistoryBundleJson {
 
   /**
    * Returns a reading's value: a finite number, or for an ohms reading also {@code "OL"}, the
-   * meter's over-range ({@link Double#POSITIVE_INFINITY}).
+   * meter's over-range ({@link Double#POSITIVE_INFINITY}); {@code what} names a number that is not
+   * finite in the message.
    */
-  private static double readingValue(JsonField value, ReadingKind kind) {
+  static double readingValue(JsonField value, ReadingKind kind, String what) {
     if (kind == ReadingKind.OHMS && value.isText()) {
       if (!value.text().equals(ReadingsSheet.OVER_RANGE)) {
         throw value.error(
@@ -421,7 +422,7 @@ public final class HistoryBundleJson {
       }
       return Double.POSITIVE_INFINITY;
     }
-    return value.finite("the reading's value");
+    return value.finite(what);
   }
 
   static ObjectMapper mapperForOutput() {
