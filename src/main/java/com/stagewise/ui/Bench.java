@@ -2,14 +2,19 @@ package com.stagewise.ui;
 
 import com.stagewise.casework.Casework;
 import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
+import com.stagewise.ui.words.Words;
 import java.time.Instant;
+import java.util.ArrayList;
 import java.util.IdentityHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
@@ -239,6 +244,50 @@ public final class Bench {
   public void startCase(RepairCase repairCase) {
     clearCase();
     openCase.set(repairCase);
+  }
+
+  /**
+   * Puts a case's readings as the history holds them on the bench, in place of the readings it
+   * held: standing ones for the diagnosis, struck ones marked, each with its id. A reading at a
+   * point that {@code stage} does not have (taken on another stage, say) is left off the bench and
+   * returned, so that the technician can be told; it stays in the history.
+   *
+   * <p>Call it before the stage arrives on the bench: the stage's arrival starts the diagnosis of
+   * the readings on it.
+   *
+   * @param stored the case's readings, in the order taken
+   * @param stage the stage they are read on
+   * @return the readings left off, in the order taken (empty when all fit)
+   */
+  public List<StoredReading> takeReadings(List<StoredReading> stored, Stage stage) {
+    readings.clear();
+    struckReadings.clear();
+    readingIds.clear();
+    diagnosis.set(null);
+    List<StoredReading> leftOff = new ArrayList<>();
+    List<Reading> standing = new ArrayList<>();
+    for (StoredReading s : stored) {
+      Reading reading = Words.reading(s);
+      if (!fits(stage, reading)) {
+        leftOff.add(s);
+        continue;
+      }
+      readingIds.put(reading, s.id());
+      if (s.struck()) {
+        struckReadings.add(new StruckReading(reading, s.id(), s.struckAt()));
+      } else {
+        standing.add(reading);
+      }
+    }
+    readings.setAll(standing);
+    return leftOff;
+  }
+
+  private static boolean fits(Stage stage, Reading reading) {
+    if (ReadingRules.testPointProblem(stage, reading.at()).isPresent()) {
+      return false;
+    }
+    return reading.to().isEmpty() || ReadingRules.testPointProblem(stage, reading.to()).isEmpty();
   }
 
   /** Clears the case, stage, readings and diagnosis from the bench (the unit stays). */

@@ -58,6 +58,16 @@ public final class CloseOutViewModel {
     this.bench = bench;
     this.afterRepair = new AfterRepairViewModel(bench);
     bench.openCaseProperty().addListener((o, was, now) -> reset());
+    // What was done and the photos may have been added from the command line meanwhile: the
+    // screen shows the history as it is each time it comes up.
+    bench
+        .stepProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == Step.CLOSE_OUT && was != Step.CLOSE_OUT) {
+                readStored();
+              }
+            });
     bench.diagnosisProperty().addListener((o, was, now) -> choices(now));
   }
 
@@ -189,6 +199,12 @@ public final class CloseOutViewModel {
     checking.set(false);
     question.set("");
     clearForm();
+    readStored();
+    choices(bench.diagnosisProperty().get());
+  }
+
+  /** Reads the open case's actions and photos from the history. */
+  private void readStored() {
     RepairCase rc = bench.openCaseProperty().get();
     if (rc != null) {
       bench
@@ -204,7 +220,6 @@ public final class CloseOutViewModel {
               },
               e -> bench.problems().failed("Could not read the case", e, Words.CHECK_DATABASE));
     }
-    choices(bench.diagnosisProperty().get());
   }
 
   private void choices(Diagnosis diagnosis) {
@@ -355,7 +370,8 @@ public final class CloseOutViewModel {
           .problems()
           .show(
               "What fixed it?",
-              "A fixed case needs the fault found or the action taken, so the shop can learn from it.",
+              "A fixed case needs the fault found or the action taken, so the shop can learn from"
+                  + " it.",
               "Tick the fault that was found, or add what was done.");
       return;
     }

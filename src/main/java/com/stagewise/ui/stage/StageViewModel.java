@@ -12,10 +12,8 @@ import com.stagewise.history.record.BoardModel;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.SafetyCaution;
-import com.stagewise.ui.Step;
 import com.stagewise.ui.editor.StageEditorModel;
 import com.stagewise.ui.widget.ValuePadModel;
-import com.stagewise.ui.words.Words;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -443,43 +441,7 @@ public final class StageViewModel {
           .show("Choose a stage first", "No stage is chosen.", "Tap a stage in the library.");
       return;
     }
-    Runnable go =
-        () -> {
-          boolean changed =
-              bench.stageProperty().get() == null || !bench.stageProperty().get().equals(s);
-          bench.stageProperty().set(s);
-          if (changed) {
-            bench.readings().clear();
-            bench.diagnosisProperty().set(null);
-          }
-          String caseId = bench.openCaseProperty().get().id();
-          bench
-              .tasks()
-              .run(
-                  "Saving the case's stage",
-                  () -> {
-                    bench.resume().saveStage(caseId, s);
-                    // The case keeps the version it is diagnosed with; a stage built or changed
-                    // here becomes the next version of its library stage, so the next unit of the
-                    // model is offered it first.
-                    return bench.casework().library().useForCase(caseId, s);
-                  },
-                  kept ->
-                      libraryModel
-                          .caseNoteProperty()
-                          .set(
-                              "This case is diagnosed with \""
-                                  + kept.title()
-                                  + "\", "
-                                  + LibraryEntry.of(kept).versionLine()
-                                  + "."),
-                  e ->
-                      bench
-                          .problems()
-                          .failed(
-                              "Could not keep the stage for this case", e, Words.CHECK_DATABASE));
-          bench.go(Step.READINGS);
-        };
+    Runnable go = () -> StageUse.use(bench, libraryModel, s);
     if (SafetyCaution.hasHighRails(s)) {
       bench.caution().show(SafetyCaution.Reason.HIGH_RAILS, go);
     } else {

@@ -1,6 +1,5 @@
 package com.stagewise.ui.start;
 
-import com.stagewise.circuit.Reading;
 import com.stagewise.history.CaseFile;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.UnitHistory;
@@ -12,9 +11,11 @@ import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.RepairAction;
 import com.stagewise.history.record.RepairCase;
+import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.CaseResume;
+import com.stagewise.ui.ReadingsLeftOff;
 import com.stagewise.ui.SafetyCaution;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.words.Words;
@@ -70,6 +71,15 @@ public final class StartViewModel {
   /** Creates the unit screen's model on a bench. */
   public StartViewModel(Bench bench) {
     this.bench = bench;
+    // The command line or another bench may have changed the unit's cases meanwhile.
+    bench
+        .stepProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (now == Step.UNIT && was != Step.UNIT) {
+                refreshSelected();
+              }
+            });
   }
 
   /**
@@ -370,21 +380,16 @@ public final class StartViewModel {
             e -> bench.problems().failed("Could not open the case", e, Words.CHECK_DATABASE));
   }
 
-  /** Resumes an open case of the selected unit where it was left. */
+  /**
+   * Resumes an open case of the selected unit where it was left. The case, its readings (struck
+   * ones marked) and its stage are read from the history as it is now, whoever wrote them (this
+   * bench, the command line, another bench through the shop server): the stage as it was left on
+   * this bench if it was, else the stage version the case is diagnosed with. Readings taken at
+   * points that stage lacks stay in the history and are named in a problem.
+   */
   public void resumeCase(String caseId) {
     UnitHistory history = selected.get();
     if (history == null) {
-      return;
-    }
-    Optional<CaseFile> file =
-        history.cases().stream().filter(c -> c.repairCase().id().equals(caseId)).findFirst();
-    if (file.isEmpty() || file.get().repairCase().status() != CaseStatus.OPEN) {
-      bench
-          .problems()
-          .show(
-              "This case is closed",
-              "Only an open case can be resumed.",
-              "Open a new case for the unit.");
       return;
     }
     CaseResume resume = bench.resume();
@@ -392,37 +397,66 @@ public final class StartViewModel {
         .tasks()
         .run(
             "Resuming the case",
-            () -> resume.load(caseId),
-            saved -> {
-              bench.showUnit(history.unit(), history.boardModel());
-              bench.startCase(file.get().repairCase());
-              Step step = Step.STAGE;
-              if (saved.isPresent() && saved.get().stage().isPresent()) {
-                // Readings first: the stage's arrival starts the diagnosis of what is on the bench.
-                for (var stored : file.get().readings()) {
-                  Reading reading = Words.reading(stored);
-                  bench.rememberId(reading, stored.id());
-                  if (stored.struck()) {
-                    bench
-                        .struckReadings()
-                        .add(new Bench.StruckReading(reading, stored.id(), stored.struckAt()));
-                  } else {
-                    bench.readings().add(reading);
-                  }
-                }
-                bench.stageProperty().set(saved.get().stage().get());
-                step = saved.get().step();
+            () -> Resumed.read(bench, history.unit().id(), caseId, resume),
+            resumed -> {
+              selected.set(resumed.history());
+              glance.setAll(glanceOf(resumed.history()));
+              Optional<CaseFile> file = resumed.file();
+              if (file.isEmpty() || file.get().repairCase().status() != CaseStatus.OPEN) {
+                bench
+                    .problems()
+                    .show(
+                        "This case is closed",
+                        "Only an open case can be resumed.",
+                        "Open a new case for the unit.");
+                return;
               }
-              Step target = step;
+              bench.showUnit(resumed.history().unit(), resumed.history().boardModel());
+              bench.startCase(file.get().repairCase());
+              List<StoredReading> leftOff = List.of();
+              if (resumed.stage().isPresent()) {
+                // Readings first: the stage's arrival starts the diagnosis of what is on the bench.
+                leftOff = bench.takeReadings(file.get().readings(), resumed.stage().get());
+                bench.stageProperty().set(resumed.stage().get());
+              }
+              Step target = resumed.step();
+              List<StoredReading> notShown = leftOff;
               afterCaution(
                   caseId,
                   () -> {
                     if (!bench.go(target)) {
                       bench.go(Step.STAGE);
                     }
+                    ReadingsLeftOff.tell(bench.problems(), notShown);
                   });
             },
             e -> bench.problems().failed("Could not resume the case", e, Words.CHECK_DATABASE));
+  }
+
+  /** Reads the unit's history again when the unit screen comes back, so that it shows the store. */
+  private void refreshSelected() {
+    UnitHistory history = selected.get();
+    if (history == null) {
+      return;
+    }
+    String unitId = history.unit().id();
+    bench
+        .tasks()
+        .run(
+            "Reading the unit's history",
+            () -> bench.store().cases().unitHistory(unitId),
+            fresh -> {
+              if (fresh.isPresent()
+                  && selected.get() != null
+                  && selected.get().unit().id().equals(unitId)) {
+                selected.set(fresh.get());
+                glance.setAll(glanceOf(fresh.get()));
+              }
+            },
+            e ->
+                bench
+                    .problems()
+                    .failed("Could not read the unit's history", e, Words.CHECK_DATABASE));
   }
 
   private void afterCaution(String caseId, Runnable then) {

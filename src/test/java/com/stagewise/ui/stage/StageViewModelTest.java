@@ -276,4 +276,39 @@ class StageViewModelTest {
         .findFirst()
         .orElseThrow();
   }
+
+  @Test
+  void useStage_readingsOfTheCaseInTheHistory_comeWithIt_andOnesTheStageLacksAreNamed() {
+    // Stored through the history (as the command line stores them), not on this bench.
+    String caseId = t.bench.openCaseProperty().get().id();
+    t.store
+        .cases()
+        .addReadings(
+            caseId, List.of(stored(caseId, "U1.8", 14.9), stored(caseId, "U7.3", 2.5)), null);
+    model.choose(model.library().get(0).stage());
+
+    model.useStage();
+
+    assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
+    assertThat(t.bench.readings()).containsExactly(com.stagewise.circuit.Reading.dc("U1.8", 14.9));
+    assertThat(t.problemTexts)
+        .singleElement()
+        .asString()
+        .startsWith("1 reading of this case is not on this stage\nIt was taken at U7.3,")
+        .contains("stays in the case's history");
+  }
+
+  private static com.stagewise.history.record.StoredReading stored(
+      String caseId, String at, double volts) {
+    return new com.stagewise.history.record.StoredReading(
+        com.stagewise.history.HistoryStore.newId(),
+        caseId,
+        at,
+        com.stagewise.history.record.ReadingKind.DC,
+        volts,
+        null,
+        null,
+        "",
+        java.time.Instant.now());
+  }
 }
