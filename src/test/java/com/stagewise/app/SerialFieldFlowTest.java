@@ -41,6 +41,35 @@ class SerialFieldFlowTest extends WindowFlow {
     assertThat(text("#unit-matches-note")).doesNotContain("1 unit found");
   }
 
+  @Test
+  void oneUnitFoundAsTyped_isOfferedOnOneBigButton_andOpensWithOneTap() throws Exception {
+    robot.clickOn("#caution-ok");
+    settle();
+    for (char c : SERIAL.toCharArray()) {
+      robot.clickOn("#serial-key-" + c);
+    }
+    // The live search runs after a short pause in the typing; nothing is opened by itself.
+    WaitForAsyncUtils.waitFor(
+        30,
+        TimeUnit.SECONDS,
+        () -> {
+          settle();
+          return visible("#open-only-match");
+        });
+    assertThat(units()).isEqualTo(1);
+    assertThat(text("#open-only-match")).isEqualTo("Open " + SERIAL);
+    assertThat(fx(() -> robot.lookup("#open-case").query().isDisabled())).isTrue();
+    assertNothingCut("unit", "one unit found", "#screen-unit");
+    savePicture(java.nio.file.Path.of("target", "screens", "unit-one-found.png"));
+
+    tap("#open-only-match");
+    settle();
+
+    assertThat(visible("#open-only-match")).isFalse();
+    assertThat(fx(() -> robot.lookup("#open-case").query().isDisabled())).isFalse();
+    assertThat(labelsContaining("Unit " + SERIAL)).isNotEmpty();
+  }
+
   private int units() throws Exception {
     return fx(() -> ((ListView<?>) window.getScene().lookup("#unit-matches")).getItems().size());
   }

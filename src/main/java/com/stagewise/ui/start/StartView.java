@@ -143,7 +143,18 @@ public final class StartView {
     note.setId("unit-matches-note");
     note.getStyleClass().add("hint");
     note.textProperty().bind(model.matchesNoteProperty());
-    box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, list, note);
+    // One unit found as the serial is typed: one big tap (or Enter) shows it; nothing moves by
+    // itself while the technician is still typing.
+    Button openOnly = new Button();
+    openOnly.setId("open-only-match");
+    openOnly.getStyleClass().add("primary");
+    openOnly.setMaxWidth(Double.MAX_VALUE);
+    openOnly.setMinHeight(60);
+    openOnly.textProperty().bind(model.onlyMatchTextProperty());
+    openOnly.visibleProperty().bind(model.onlyMatchProperty().isNotNull());
+    openOnly.managedProperty().bind(openOnly.visibleProperty());
+    openOnly.setOnAction(e -> model.openOnlyMatch());
+    box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, list, openOnly, note);
     return box;
   }
 

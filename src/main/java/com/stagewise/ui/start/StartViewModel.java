@@ -6,11 +6,8 @@ import com.stagewise.history.UnitHistory;
 import com.stagewise.history.UnitMatch;
 import com.stagewise.history.UnitQuery;
 import com.stagewise.history.Units;
-import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseStatus;
-import com.stagewise.history.record.RepairAction;
-import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
 import com.stagewise.ui.Bench;
@@ -50,6 +47,8 @@ public final class StartViewModel {
   private final ObservableList<UnitRow> matches = FXCollections.observableArrayList();
   private final StringProperty matchesNote = new SimpleStringProperty("");
   private final ObjectProperty<UnitHistory> selected = new SimpleObjectProperty<>();
+  private final ObjectProperty<UnitRow> onlyMatch = new SimpleObjectProperty<>();
+  private final StringProperty onlyMatchText = new SimpleStringProperty("");
   private final ObservableList<CaseLine> glance = FXCollections.observableArrayList();
   private final StringProperty symptom = new SimpleStringProperty("");
   private final ObservableList<String> boardModelNames = FXCollections.observableArrayList();
@@ -130,6 +129,35 @@ public final class StartViewModel {
 
   public ObjectProperty<UnitHistory> selectedProperty() {
     return selected;
+  }
+
+  /**
+   * Returns the one unit the last search found while it is not yet the unit shown (null otherwise):
+   * the screen offers it to open with one tap. A search as typed never opens it by itself, so
+   * nothing moves while the technician is still typing.
+   */
+  public ObjectProperty<UnitRow> onlyMatchProperty() {
+    return onlyMatch;
+  }
+
+  /** Returns the words of the button that opens the one unit found ("Open TA-1001"), or empty. */
+  public StringProperty onlyMatchTextProperty() {
+    return onlyMatchText;
+  }
+
+  /** Shows the one unit the last search found (the big button, or Enter in the serial field). */
+  public void openOnlyMatch() {
+    UnitRow row = onlyMatch.get();
+    if (row != null) {
+      select(row);
+    }
+  }
+
+  private void offer(UnitRow row) {
+    UnitHistory shown = selected.get();
+    boolean isShown = row != null && shown != null && shown.unit().id().equals(row.unit().id());
+    onlyMatch.set(isShown ? null : row);
+    onlyMatchText.set(onlyMatch.get() == null ? "" : "Open " + row.unit().serial());
   }
 
   public ObservableList<CaseLine> glance() {
@@ -225,6 +253,7 @@ public final class StartViewModel {
               } else {
                 matchesNote.set(rows.size() == 1 ? "1 unit found." : rows.size() + " units found.");
               }
+              offer(rows.size() == 1 ? rows.get(0) : null);
               if (rows.size() == 1 && takeSingleMatch) {
                 select(rows.get(0));
               }
@@ -257,42 +286,14 @@ public final class StartViewModel {
             () -> bench.store().cases().unitHistory(row.unit().id()).orElseThrow(),
             history -> {
               selected.set(history);
-              glance.setAll(glanceOf(history));
+              glance.setAll(Glance.of(history));
               bench.showUnit(history.unit(), history.boardModel());
+              offer(onlyMatch.get());
             },
             e ->
                 bench
                     .problems()
                     .failed("Could not read the unit's history", e, Words.CHECK_DATABASE));
-  }
-
-  static List<CaseLine> glanceOf(UnitHistory history) {
-    List<CaseLine> lines = new ArrayList<>();
-    for (CaseFile file : history.cases()) {
-      RepairCase rc = file.repairCase();
-      List<String> replaced = new ArrayList<>();
-      for (RepairAction action : file.actions()) {
-        if (action.kind() == ActionKind.PART_REPLACED) {
-          replaced.add(
-              action.part() + (action.newValue().isEmpty() ? "" : " → " + action.newValue()));
-        } else if (action.kind() == ActionKind.REFLOW) {
-          replaced.add("reflow" + (action.part().isEmpty() ? "" : " " + action.part()));
-        }
-      }
-      boolean open = rc.status() == CaseStatus.OPEN;
-      lines.add(
-          new CaseLine(
-              rc.id(),
-              Words.date(rc.openedAt()),
-              rc.symptom(),
-              open ? "open" : Words.outcome(rc.outcome()),
-              String.join(", ", rc.confirmedFaults().stream().map(Words::fault).toList()),
-              String.join(", ", replaced),
-              open));
-    }
-    // Newest first, as a technician reads a history.
-    java.util.Collections.reverse(lines);
-    return lines;
   }
 
   /**
@@ -400,7 +401,7 @@ public final class StartViewModel {
             () -> Resumed.read(bench, history.unit().id(), caseId, resume),
             resumed -> {
               selected.set(resumed.history());
-              glance.setAll(glanceOf(resumed.history()));
+              glance.setAll(Glance.of(resumed.history()));
               Optional<CaseFile> file = resumed.file();
               if (file.isEmpty() || file.get().repairCase().status() != CaseStatus.OPEN) {
                 bench
@@ -450,7 +451,7 @@ public final class StartViewModel {
                   && selected.get() != null
                   && selected.get().unit().id().equals(unitId)) {
                 selected.set(fresh.get());
-                glance.setAll(glanceOf(fresh.get()));
+                glance.setAll(Glance.of(fresh.get()));
               }
             },
             e ->

@@ -63,6 +63,46 @@ class StartViewModelTest {
   }
 
   @Test
+  void searchAsTyped_oneUnitFound_isOfferedToOpenWithOneTap_withoutOpeningItByItself() {
+    model.serialProperty().set("ta");
+    model.searchAsTyped();
+    assertThat(model.onlyMatchProperty().get()).as("two units match").isNull();
+
+    model.serialProperty().set("ta-10");
+    model.searchAsTyped();
+
+    // Still typing: the unit is offered, nothing moves.
+    assertThat(model.onlyMatchProperty().get().unit().id()).isEqualTo(unit.id());
+    assertThat(model.onlyMatchTextProperty().get()).isEqualTo("Open TA-1001");
+    assertThat(model.selectedProperty().get()).isNull();
+    assertThat(t.bench.unitProperty().get()).isNull();
+
+    model.openOnlyMatch();
+
+    assertThat(model.selectedProperty().get().unit().id()).isEqualTo(unit.id());
+    assertThat(t.bench.unitProperty().get().serial()).isEqualTo("TA-1001");
+    assertThat(model.onlyMatchProperty().get()).as("shown now, no longer offered").isNull();
+    assertThat(model.onlyMatchTextProperty().get()).isEmpty();
+
+    // Typing on to a serial that matches nothing takes the offer away.
+    model.serialProperty().set("ta-109");
+    model.searchAsTyped();
+    assertThat(model.onlyMatchProperty().get()).isNull();
+  }
+
+  @Test
+  void search_enterWithOneUnitFound_showsItAtOnce_andOffersNothingMore() {
+    model.serialProperty().set("2002");
+    model.searchAsTyped();
+    assertThat(model.onlyMatchTextProperty().get()).isEqualTo("Open TA-2002");
+
+    model.search(); // Enter in the serial field, or Search
+
+    assertThat(model.selectedProperty().get().unit().serial()).isEqualTo("TA-2002");
+    assertThat(model.onlyMatchProperty().get()).isNull();
+  }
+
+  @Test
   void search_empty_listsEveryUnit() {
     model.search();
     assertThat(model.matches()).hasSize(2);
