@@ -167,7 +167,7 @@ final class ReportLayout {
                   r.to().isEmpty()
                       ? Wording.point(r.at())
                       : Wording.point(r.at()) + " to " + Wording.point(r.to()),
-                  r.to().isEmpty() ? r.hz() == null ? "DC" : acKind(r) : "ohms, power off",
+                  r.to().isEmpty() ? r.hz() == null ? "DC" : acKind(r) : "ohms (power off)",
                   value(r),
                   r.struck()
                       ? when(r.takenAt()) + ", struck out " + when(r.struckAt())
@@ -351,7 +351,7 @@ final class ReportLayout {
         rows);
   }
 
-  /** Returns "DC", "AC RMS at 1 kHz" or "ohms, power off". */
+  /** Returns "DC", "AC RMS at 1 kHz" or "ohms (power off)", as the close-out names the kinds. */
   private static String afterRepairKind(AfterRepairReading r) {
     return switch (r.kind()) {
       case DC -> "DC";
@@ -360,7 +360,7 @@ final class ReportLayout {
               + AcMeasure.of(r.measure()).map(AcMeasure::words).orElse(r.measure())
               + " at "
               + Engineering.of(r.hz(), "Hz", 4);
-      case OHMS -> "ohms, power off";
+      case OHMS -> "ohms (power off)";
     };
   }
 

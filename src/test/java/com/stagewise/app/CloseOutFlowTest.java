@@ -101,7 +101,7 @@ class CloseOutFlowTest extends WindowFlow {
         .contains("Outside: U1 pin 4");
     // The AC point in its measure: the pad says what it takes.
     assertThat(text("#after-repair-point"))
-        .isEqualTo("Read U1 pin 1, AC volts RMS at 1\u00a0kHz with the meter:");
+        .isEqualTo("Read U1 pin 1 (AC volts RMS at 1\u00a0kHz) with the meter:");
     assertThat(text("#after-repair-pad-line")).isEqualTo("AC volts RMS at 1\u00a0kHz");
     typeAfterRepair(0.33);
     assertThat(text("#after-repair-summary"))

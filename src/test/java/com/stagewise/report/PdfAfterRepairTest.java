@@ -118,7 +118,7 @@ class PdfAfterRepairTest {
     assertThat(text).contains("After repair", "1 of 2 inside the healthy band.");
     // Printable writes the no-break space as a space and Ω as "ohm" (PDF standard fonts).
     assertThat(text).contains("U1 pin 1", "AC RMS at 1 kHz", "333.0 mV", "329 mV to 336 mV");
-    assertThat(text).contains("SUM to OUT", "ohms, power off", "OL", "46.53 kohm to 47.47 kohm");
+    assertThat(text).contains("SUM to OUT", "ohms (power off)", "OL", "46.53 kohm to 47.47 kohm");
     assertThat(text).contains("OUTSIDE", "inside");
   }
 

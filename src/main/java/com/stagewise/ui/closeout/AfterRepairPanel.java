@@ -125,8 +125,8 @@ final class AfterRepairPanel extends VBox {
   }
 
   /**
-   * Returns what to do at the point: "Read U1 pin 8 with the meter:", "Read U1 pin 1, AC volts
-   * peak-to-peak at 1 kHz with the scope:", "With the power off, read ohms across R2:".
+   * Returns what to do at the point: "Read U1 pin 8 with the meter:", "Read U1 pin 1 (AC volts
+   * peak-to-peak at 1 kHz) with the scope:", "With the power off, read ohms across R2:".
    */
   private static String call(CheckRow row) {
     AfterRepair.CheckPoint p = row.point();

@@ -107,7 +107,7 @@ public final class AfterRepairViewModel {
         switch (p.kind()) {
           case DC -> "DC volts";
           case AC -> Words.acVolts(p.measure().word(), p.hz());
-          case OHMS -> "Ohms, power off";
+          case OHMS -> "Ohms (power off)";
         });
     powerOff.set(ohms);
   }
@@ -279,7 +279,7 @@ public final class AfterRepairViewModel {
     List<String> lines = new ArrayList<>();
     for (CheckRow r : rows) {
       if (r.outside()) {
-        lines.add(r.title() + " reads " + r.valueText() + " (" + r.band() + ")");
+        lines.add(r.outsideSentence());
       }
     }
     return lines;

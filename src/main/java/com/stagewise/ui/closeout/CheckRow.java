@@ -10,23 +10,24 @@ import java.util.Objects;
  * One point of the check after the repair, as the close-out lists it.
  *
  * @param point where, in which kind, with its healthy band
- * @param title the point in words ("U1 pin 1", "U1 pin 1, AC volts RMS at 1 kHz", "R15, power off")
+ * @param title the point in words ("U1 pin 1", "U1 pin 1 (AC volts RMS at 1 kHz)", "R15 (power
+ *     off)")
  * @param value what was read after the repair (volts, AC volts in the point's measure, or ohms with
  *     +∞ for OL), or null while not read
  * @param saved whether that value is stored in the history
  */
 public record CheckRow(AfterRepair.CheckPoint point, String title, Double value, boolean saved) {
   /**
-   * Returns a point in words: "U1 pin 1"; "U1 pin 1, AC volts RMS at 1 kHz"; for ohms the resistor
-   * the two points are across, "R15, power off", else "U1 pin 2 to OUT, power off".
+   * Returns a point in words: "U1 pin 1"; "U1 pin 1 (AC volts RMS at 1 kHz)"; for ohms the resistor
+   * the two points are across, "R15 (power off)", else "U1 pin 2 to OUT (power off)".
    */
   static String title(AfterRepair.CheckPoint p) {
     return switch (p.kind()) {
       case DC -> Words.pin(p.at());
-      case AC -> Words.pin(p.at()) + ", " + Words.acVolts(p.measure().word(), p.hz());
+      case AC -> Words.pin(p.at()) + " (" + Words.acVolts(p.measure().word(), p.hz()) + ")";
       case OHMS ->
           (p.across().isEmpty() ? Words.pin(p.at()) + " to " + Words.pin(p.to()) : p.across())
-              + ", power off";
+              + " (power off)";
     };
   }
 
@@ -63,8 +64,8 @@ public record CheckRow(AfterRepair.CheckPoint point, String title, Double value,
   }
 
   /**
-   * Returns the point with its band, as listed: "U1 pin 1, AC volts RMS at 1 kHz: 0.71 V to 0.76
-   * V", "R15, power off: 46.5 kΩ to 47.5 kΩ".
+   * Returns the point with its band, as listed: "U1 pin 1 (AC volts RMS at 1 kHz): 0.71 V to 0.76
+   * V", "R15 (power off): 46.5 kΩ to 47.5 kΩ".
    */
   public String label() {
     return title + ": " + bandWords();
@@ -103,6 +104,15 @@ public record CheckRow(AfterRepair.CheckPoint point, String title, Double value,
         + ": OUTSIDE the healthy band, "
         + amount
         + (above ? "above its top end" : "below its bottom end");
+  }
+
+  /**
+   * Returns the point read outside its band as one sentence, the same for every kind: "U1 pin 1:
+   * reads −13.48 V, expected −4.76 V to −4.64 V", "U1 pin 1 (AC volts RMS at 1 kHz): reads 470.0 mV
+   * RMS, expected 325 mV to 339 mV", "R15 (power off): reads OL, expected 46.5 kΩ to 47.5 kΩ".
+   */
+  public String outsideSentence() {
+    return title + ": reads " + valueText() + ", expected " + bandWords();
   }
 
   /** Returns whether it was read and lies outside a known band. */

@@ -273,8 +273,9 @@ public final class HistoryViewModel {
   private record Loaded(CaseFile file, UnitHistory unit, List<ShownPhoto> photos) {}
 
   /**
-   * Returns the readings after the repair as lines, each with its kind: "U1 pin 1: −4.710 V …", "U1
-   * pin 1, AC volts RMS at 1 kHz: 0.720 V …", "U1 pin 2 to SUM, power off: 46.8 kΩ …".
+   * Returns the readings after the repair as lines, each with its kind as the close-out names it:
+   * "U1 pin 1: −4.710 V …", "U1 pin 1 (AC volts RMS at 1 kHz): 0.720 V …", "U1 pin 2 to SUM (power
+   * off): 46.8 kΩ …".
    */
   static List<String> afterRepairLines(CaseFile file) {
     List<String> lines = new ArrayList<>();
@@ -283,8 +284,8 @@ public final class HistoryViewModel {
       String point =
           switch (r.kind()) {
             case DC -> Words.pin(r.at());
-            case AC -> Words.pin(r.at()) + ", " + Words.acVolts(r.measure(), r.hz());
-            case OHMS -> Words.pin(r.at()) + " to " + Words.pin(r.to()) + ", power off";
+            case AC -> Words.pin(r.at()) + " (" + Words.acVolts(r.measure(), r.hz()) + ")";
+            case OHMS -> Words.pin(r.at()) + " to " + Words.pin(r.to()) + " (power off)";
           };
       String band =
           !r.hasBand()

@@ -74,9 +74,9 @@ class AfterRepairKindsViewModelTest {
     assertThat(ac.point().nominal()).isCloseTo(rms, Offset.offset(rms * 1e-3));
     assertThat(ac.point().low()).isLessThan(rms);
     assertThat(ac.point().high()).isGreaterThan(rms);
-    assertThat(ac.label()).startsWith("OUT, AC volts RMS at 1" + NBSP + "kHz: ").contains(" to ");
+    assertThat(ac.label()).startsWith("OUT (AC volts RMS at 1" + NBSP + "kHz): ").contains(" to ");
     CheckRow ohms = check.rows().get(2);
-    assertThat(ohms.label()).isEqualTo("R2, power off: 46.5" + NBSP + "kΩ to 47.5" + NBSP + "kΩ");
+    assertThat(ohms.label()).isEqualTo("R2 (power off): 46.5" + NBSP + "kΩ to 47.5" + NBSP + "kΩ");
   }
 
   @Test
@@ -93,7 +93,7 @@ class AfterRepairKindsViewModelTest {
     assertThat(check.powerOffProperty().get()).isFalse();
     type(check, "0.333");
 
-    assertThat(check.padLineProperty().get()).isEqualTo("Ohms, power off");
+    assertThat(check.padLineProperty().get()).isEqualTo("Ohms (power off)");
     assertThat(check.pad().quantityProperty().get()).isEqualTo(ValuePadModel.Quantity.METER_OHMS);
     assertThat(check.powerOffProperty().get()).isTrue();
     // Common practice before an ohms check: unplug, discharge, wait.
@@ -128,8 +128,9 @@ class AfterRepairKindsViewModelTest {
         .isEqualTo("OL: OUTSIDE the healthy band, above its top end");
     assertThat(check.summaryProperty().get())
         .startsWith("1 of 3 readings are inside the healthy band.")
-        .contains("OUT, AC volts RMS at 1" + NBSP + "kHz reads 470.0" + NBSP + "mV RMS")
-        .contains("R2, power off reads OL (healthy 46.5" + NBSP + "kΩ to 47.5" + NBSP + "kΩ)");
+        .contains(
+            "OUT (AC volts RMS at 1" + NBSP + "kHz): reads 470.0" + NBSP + "mV RMS, expected ")
+        .contains("R2 (power off): reads OL, expected 46.5" + NBSP + "kΩ to 47.5" + NBSP + "kΩ");
     check.store(closeOut::endCheck);
 
     List<AfterRepairReading> stored = t.store.cases().caseFile(caseId).orElseThrow().afterRepair();
@@ -146,8 +147,8 @@ class AfterRepairKindsViewModelTest {
     closeOut.outcomeProperty().set(Outcome.FIXED);
     closeOut.closeCase();
     assertThat(closeOut.questionProperty().get())
-        .contains("OUT, AC volts RMS at 1" + NBSP + "kHz reads 470.0" + NBSP + "mV RMS")
-        .contains("R2, power off reads OL")
+        .contains("OUT (AC volts RMS at 1" + NBSP + "kHz): reads 470.0" + NBSP + "mV RMS")
+        .contains("R2 (power off): reads OL, expected 46.5" + NBSP + "kΩ to 47.5" + NBSP + "kΩ")
         .contains("Close the case as fixed anyway?");
     assertThat(t.store.cases().find(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);
     closeOut.closeAnyway();

@@ -87,7 +87,13 @@ class AfterRepairViewModelTest {
     assertThat(check.rows().get(1).verdict()).contains("inside the healthy band");
     assertThat(check.summaryProperty().get())
         .startsWith("1 of 2 readings are inside the healthy band.")
-        .contains("Outside: " + Words.pin("OUT") + " reads " + Words.measured(-13.48));
+        .contains(
+            "Outside: "
+                + Words.pin("OUT")
+                + ": reads "
+                + Words.measured(-13.48)
+                + ", expected "
+                + check.rows().get(0).bandWords());
     check.store(closeOut::endCheck);
     assertThat(closeOut.checkingProperty().get()).isFalse();
 
@@ -96,7 +102,7 @@ class AfterRepairViewModelTest {
     closeOut.closeCase();
     // Not closed: asked first, naming the point outside its band.
     assertThat(closeOut.questionProperty().get())
-        .contains(Words.pin("OUT") + " reads", "Close the case as fixed anyway?");
+        .contains(Words.pin("OUT") + ": reads", "Close the case as fixed anyway?");
     assertThat(t.store.cases().find(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);
     closeOut.dontClose();
     assertThat(t.store.cases().find(caseId).orElseThrow().status()).isEqualTo(CaseStatus.OPEN);

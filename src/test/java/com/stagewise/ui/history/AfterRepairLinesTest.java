@@ -48,10 +48,10 @@ class AfterRepairLinesTest {
             new CaseFile(c, List.of(), List.of(), List.of(), List.of(), List.of(), readings));
     assertThat(lines.get(0)).startsWith("U1 pin 1:  ").contains("inside the healthy band");
     assertThat(lines.get(1))
-        .startsWith("U1 pin 1, AC volts RMS at 1" + NBSP + "kHz:  470.0" + NBSP + "mV")
+        .startsWith("U1 pin 1 (AC volts RMS at 1" + NBSP + "kHz):  470.0" + NBSP + "mV")
         .contains("OUTSIDE the healthy band 329" + NBSP + "mV to 336" + NBSP + "mV");
     assertThat(lines.get(2))
-        .startsWith("SUM to OUT, power off:  46.9" + NBSP + "kΩ")
+        .startsWith("SUM to OUT (power off):  46.9" + NBSP + "kΩ")
         .contains("inside the healthy band 46.5" + NBSP + "kΩ to 47.5" + NBSP + "kΩ");
   }
 }
