@@ -106,17 +106,43 @@ class CaseFromCommandLineTest {
     t.close();
   }
 
+  /** The stored stage of the board model (the case then keeps it), or a stage sheet file. */
+  private enum StageGiven {
+    STORED,
+    FILE
+  }
+
   private String openCaseWithReadingsFromTheCommandLine() throws Exception {
+    return openCaseWithReadingsFromTheCommandLine(StageGiven.STORED);
+  }
+
+  private String openCaseWithReadingsFromTheCommandLine(StageGiven given) throws Exception {
     String caseId =
         json(history("open-case", "--serial", "TA-4711", "--symptom", "No output", "--json"))
             .get("id")
             .textValue();
     Path file = folder.resolve("no-feedback.readings.json");
     Files.writeString(file, READINGS, StandardCharsets.UTF_8);
-    history("add-readings", "--case", caseId, "--readings", file.toString());
+    if (given == StageGiven.FILE) {
+      history(
+          "add-readings", "--case", caseId, "--readings", file.toString(), "--stage", "" + sheet);
+    } else {
+      history("add-readings", "--case", caseId, "--readings", file.toString());
+    }
     // The fifth reading was typed with the wrong sign: struck out, kept in the history.
     history("strike-reading", "--case", caseId, "--reading", "5");
     return caseId;
+  }
+
+  /** Returns the stage version the case keeps, as {@code history show --json} gives it. */
+  private String caseStageId(String caseId) throws Exception {
+    JsonNode id = json(history("show", "--case", caseId, "--json")).get("stageSheetId");
+    return id == null || id.isNull() ? null : id.textValue();
+  }
+
+  private String storedStageId() {
+    var model = t.store.units().findBoardModel("Test amp board").orElseThrow();
+    return t.store.library().latest(model.id()).get(0).id();
   }
 
   private void findTheUnit() {
@@ -148,15 +174,31 @@ class CaseFromCommandLineTest {
   }
 
   @Test
-  void caseStartedOnTheCommandLine_whileTheUnitIsShown_comesWithItsReadingsOnceTheStageIsChosen()
+  void caseStartedOnTheCommandLine_whileTheUnitIsShown_opensOnItsStageWithItsReadings()
       throws Exception {
     findTheUnit(); // the app shows the unit before the command line opens its case
     String caseId = openCaseWithReadingsFromTheCommandLine();
 
     start.resumeCase(caseId);
 
-    // The command line keeps no stage with the case: the technician picks it, and the readings
-    // stored on the command line come with it.
+    // The command line kept the stored stage it diagnosed with: the case opens on it.
+    assertThat(caseStageId(caseId)).isEqualTo(storedStageId());
+    assertThat(t.problems).isEmpty();
+    assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
+    assertThat(t.bench.stageProperty().get()).isEqualTo(TestBench.invertingStage("Test amp board"));
+    assertTheCaseIsOnTheBench(caseId);
+  }
+
+  @Test
+  void readingsOfAStageFile_comeWithTheStageOnceTheTechnicianChoosesIt() throws Exception {
+    findTheUnit();
+    String caseId = openCaseWithReadingsFromTheCommandLine(StageGiven.FILE);
+
+    start.resumeCase(caseId);
+
+    // A stage sheet file given on the command line is not the case's yet: the technician picks
+    // the stage, and the readings stored on the command line come with it.
+    assertThat(caseStageId(caseId)).isNull();
     assertThat(t.problems).isEmpty();
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.STAGE);
     StageViewModel stage = new StageViewModel(t.bench);
@@ -167,12 +209,13 @@ class CaseFromCommandLineTest {
     assertThat(t.problems).isEmpty();
     assertThat(t.bench.stepProperty().get()).isEqualTo(Step.READINGS);
     assertTheCaseIsOnTheBench(caseId);
+    assertThat(caseStageId(caseId)).isEqualTo(storedStageId());
   }
 
   @Test
   void caseWhoseStageVersionIsInTheHistory_resumesAtTheReadingsWithoutAFileOfThisBench()
       throws Exception {
-    String caseId = openCaseWithReadingsFromTheCommandLine();
+    String caseId = openCaseWithReadingsFromTheCommandLine(StageGiven.FILE);
     // Another program (another bench, through the shop server, say) keeps the stage the case is
     // diagnosed with; this bench has never seen the case.
     Stage used = TestBench.invertingStage("Test amp board");

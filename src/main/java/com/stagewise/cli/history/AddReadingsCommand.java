@@ -40,7 +40,8 @@ final class AddReadingsCommand extends HistorySubcommand {
       names = "--stage",
       paramLabel = "FILE",
       description =
-          "The stage sheet the readings were taken on (default: the board model's stored sheet).")
+          "The stage sheet the readings were taken on (default: the stage version the case is"
+              + " diagnosed with, else the board model's stored sheet).")
   Path stageFile;
 
   @Option(
@@ -67,6 +68,11 @@ final class AddReadingsCommand extends HistorySubcommand {
     CaseAtHand at = work.caseAtHand(target.caseId);
     Stage stage = stage(work, at);
     ReadingSet set = ReadingsSheet.read(readings, stage);
+    if (stageFile == null && at.repairCase().stageSheetId() == null) {
+      // The case keeps the stored stage it is diagnosed with (the same version, nothing new is
+      // saved), so that the app and other benches open it on that stage with these readings.
+      work.library().useForCase(at.id(), stage);
+    }
     Map<String, Integer> counts = work.shopCounts(at.boardModel());
     StoredReadings stored =
         work.addReadings(at.id(), Diagnoser.of(stage, counts).mainsPowered(mainsPowered), set, top);
@@ -88,6 +94,13 @@ final class AddReadingsCommand extends HistorySubcommand {
   private Stage stage(Casework work, CaseAtHand at) {
     if (stageFile != null) {
       return StageSheet.read(stageFile);
+    }
+    if (sheetTitle == null) {
+      // The case's own version (kept by the app or an earlier add-readings) stays its stage.
+      var kept = work.library().ofCase(at.id());
+      if (kept.isPresent()) {
+        return kept.get().used().stage();
+      }
     }
     try {
       return work.storedStage(at.boardModel(), sheetTitle).stage();
