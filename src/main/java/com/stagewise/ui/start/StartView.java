@@ -154,6 +154,9 @@ public final class StartView {
     openOnly.visibleProperty().bind(model.onlyMatchProperty().isNotNull());
     openOnly.managedProperty().bind(openOnly.visibleProperty());
     openOnly.setOnAction(e -> model.openOnlyMatch());
+    // A tap leaves the focus where it was: the button hides once the unit shows, and the focus
+    // must not fall on the next button (Enter in the serial field does the same from the keys).
+    openOnly.setFocusTraversable(false);
     box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, list, openOnly, note);
     return box;
   }
