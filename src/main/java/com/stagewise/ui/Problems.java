@@ -16,6 +16,19 @@ public interface Problems {
    */
   void show(String title, String what, String todo);
 
+  /**
+   * Shows that an AC amplitude was typed with a minus sign; what was typed stays on the pad to be
+   * put right.
+   *
+   * @param volts the value typed
+   */
+  default void negativeAmplitude(double volts) {
+    show(
+        "An AC amplitude has no sign",
+        "The pad holds " + com.stagewise.ui.words.Words.measured(volts) + ", below 0 V.",
+        "Type the amplitude the meter or scope shows, 0 V or more: take the minus sign away.");
+  }
+
   /** Shows a failed piece of work with the exception's message as "what happened". */
   default void failed(String title, Exception e, String todo) {
     String message =

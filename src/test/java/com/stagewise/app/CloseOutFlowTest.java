@@ -135,7 +135,7 @@ class CloseOutFlowTest extends WindowFlow {
           tap("#close-case");
           settle();
           assertThat(visible("#close-question")).as("question after the tap at %s", where).isTrue();
-          assertThat(text("#close-question")).contains("U1 pin 4 reads", "as fixed anyway?");
+          assertThat(text("#close-question")).contains("U1 pin 4: reads", "as fixed anyway?");
           assertNothingCut("close-out-question", where);
           tap("#close-go-back");
           settle();
@@ -145,7 +145,7 @@ class CloseOutFlowTest extends WindowFlow {
     tap("#close-case");
     settle();
     // A reading after the repair is outside its band: asked first, not closed.
-    assertThat(text("#close-question")).contains("U1 pin 4 reads", "as fixed anyway?");
+    assertThat(text("#close-question")).contains("U1 pin 4: reads", "as fixed anyway?");
     assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.CLOSE_OUT);
     shoot("close-out-question");
     tap("#close-anyway");

@@ -103,6 +103,7 @@ public final class AfterRepairViewModel {
     boolean ohms = p.kind() == Reading.Kind.OHMS;
     pad.quantityProperty()
         .set(ohms ? ValuePadModel.Quantity.METER_OHMS : ValuePadModel.Quantity.VOLTS);
+    pad.unsignedProperty().set(p.kind() == Reading.Kind.AC ? ValuePadModel.AC_AMPLITUDE : "");
     padLine.set(
         switch (p.kind()) {
           case DC -> "DC volts";
@@ -190,6 +191,10 @@ public final class AfterRepairViewModel {
     }
     CheckRow row = rows.get(i);
     Reading.Kind kind = row.point().kind();
+    if (pad.refusedNegative().isPresent()) {
+      bench.problems().negativeAmplitude(pad.refusedNegative().getAsDouble());
+      return;
+    }
     if (!pad.hasValue()) {
       bench
           .problems()
@@ -210,12 +215,7 @@ public final class AfterRepairViewModel {
     double value = pad.valueProperty().get();
     if (kind == Reading.Kind.AC && value < 0) {
       // What was typed stays on the pad, to be put right.
-      bench
-          .problems()
-          .show(
-              "An AC amplitude has no sign",
-              "The pad holds " + Words.measured(value) + ", below 0 V.",
-              "Type the amplitude the meter or scope shows, 0 V or more.");
+      bench.problems().negativeAmplitude(value);
       return;
     }
     rows.set(i, new CheckRow(row.point(), row.title(), value, false));

@@ -2,6 +2,8 @@ package com.stagewise.ui.readings;
 
 import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Reading;
+import com.stagewise.ui.widget.ValuePadModel;
+import javafx.beans.binding.Bindings;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
 
@@ -79,6 +81,18 @@ final class PoweredProbe {
     if (p != null && p.kind() == Reading.Kind.AC) {
       probe.set(p.withMeasure(measure));
     }
+  }
+
+  /**
+   * Keeps the pad's sign key off while it takes an AC amplitude (powered, AC chosen): an RMS, peak
+   * or peak-to-peak amplitude is never negative. DC keeps its sign; ohms have none.
+   */
+  void unsignWhileAc(ValuePadModel pad) {
+    pad.unsignedProperty()
+        .bind(
+            Bindings.when(ac.acProperty().and(powerOff.activeProperty().not()))
+                .then(ValuePadModel.AC_AMPLITUDE)
+                .otherwise(""));
   }
 
   /** Returns the point as the pad would take it now, for one picked at {@code point}. */

@@ -224,7 +224,8 @@ public record ProbePoint(
             .map(
                 p ->
                     p.because(
-                        "Rails first: a missing or low supply explains everything downstream, so check "
+                        "Rails first: a missing or low supply explains everything downstream, so"
+                            + " check "
                             + Words.pin(at)
                             + " before the signal pins."))
             .ifPresent(rails::add);

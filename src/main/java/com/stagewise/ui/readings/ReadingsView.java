@@ -339,8 +339,9 @@ public final class ReadingsView {
             (ListChangeListener<ReadingRow>) c -> list.getSelectionModel().clearSelection());
     Label empty =
         new Label(
-            "No readings yet. Put the probe where the left side says, type what the meter shows"
-                + " on the pad and tap Add reading. The suspects and the next probe follow each reading.");
+            "No readings yet. Put the probe where the left side says, type what the meter shows on"
+                + " the pad and tap Add reading. The suspects and the next probe follow each"
+                + " reading.");
     empty.setWrapText(true);
     empty.getStyleClass().add("hint");
     empty.setPadding(new javafx.geometry.Insets(12));

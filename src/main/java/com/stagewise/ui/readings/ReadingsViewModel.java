@@ -63,6 +63,7 @@ public final class ReadingsViewModel {
     this.bench = bench;
     this.revisions =
         new Revisions(bench, s -> diagnoserStage == s ? diagnoser : null, this::refresh);
+    probe.unsignWhileAc(pad);
     bench.stageProperty().addListener((o, was, now) -> stageChanged(now));
     if (bench.stageProperty().get() != null) {
       stageChanged(bench.stageProperty().get());
@@ -312,7 +313,7 @@ public final class ReadingsViewModel {
               Diagnoser d = casework.diagnoser(stage, boardModel).mainsPowered(mains);
               Diagnosis diagnosis =
                   taken.isEmpty() ? null : d.diagnose(new ReadingSet(MeterSpec.DEFAULT, taken));
-              return new Prepared(stage, volts, signal, d, diagnosis);
+              return new PreparedStage(stage, volts, signal, d, diagnosis);
             },
             prepared -> {
               if (prepared.stage() != bench.stageProperty().get()) {
@@ -335,13 +336,6 @@ public final class ReadingsViewModel {
                         e,
                         "Check the stage's parts and rails on the Stage screen."));
   }
-
-  private record Prepared(
-      Stage stage,
-      ExpectedVolts volts,
-      ExpectedAc signal,
-      Diagnoser diagnoser,
-      Diagnosis diagnosis) {}
 
   /**
    * Makes the technician's choice the point to probe (a pin tapped on the drawing, or from the
@@ -405,6 +399,11 @@ public final class ReadingsViewModel {
               "Tap a pin on the package, or choose a test point from the list.");
       return;
     }
+    if (pad.refusedNegative().isPresent()) {
+      // A negative AC amplitude is refused with what to fix; what was typed stays on the pad.
+      bench.problems().negativeAmplitude(pad.refusedNegative().getAsDouble());
+      return;
+    }
     if (value == null) {
       bench
           .problems()
@@ -421,7 +420,7 @@ public final class ReadingsViewModel {
       } else {
         reading =
             at.kind() == Reading.Kind.AC
-                ? Reading.ac(at.at(), Math.abs(value), at.hz(), at.measure())
+                ? Reading.ac(at.at(), value, at.hz(), at.measure())
                 : Reading.dc(at.at(), value);
       }
     } catch (InvalidInputException e) {

@@ -211,7 +211,8 @@ final class Revisions {
                   .failed(
                       "Could not take this reading",
                       e,
-                      "Check that the probe point belongs to this stage and the value is what the meter shows, then add it again.");
+                      "Check that the probe point belongs to this stage and the value is what the"
+                          + " meter shows, then add it again.");
             });
   }
 

@@ -61,7 +61,9 @@ public final class ValuePad extends VBox {
         .textProperty()
         .bind(
             javafx.beans.binding.Bindings.createStringBinding(
-                () -> legend(model.quantityProperty().get()), model.quantityProperty()));
+                () -> legend(model.quantityProperty().get(), model.unsignedProperty().get()),
+                model.quantityProperty(),
+                model.unsignedProperty()));
     getChildren().addAll(display, new HBox(12, reading, problem), hint, keys, legend, enter);
   }
 
@@ -85,7 +87,18 @@ public final class ValuePad extends VBox {
               };
         }
         if (key != null) {
-          keys.add(key(idPrefix, key, key), col, row);
+          Button button = key(idPrefix, key, key);
+          if (key.equals(ValuePadModel.SIGN)) {
+            // Kept in its place (the keys do not move), but off while no sign may be typed.
+            button
+                .disableProperty()
+                .bind(
+                    model
+                        .unsignedProperty()
+                        .isNotNull()
+                        .and(model.unsignedProperty().isNotEmpty()));
+          }
+          keys.add(button, col, row);
         }
       }
     }
@@ -103,8 +116,17 @@ public final class ValuePad extends VBox {
     return prefix.equals("u") ? "µ" : prefix;
   }
 
-  /** Returns the line that says what the letter keys mean. */
-  static String legend(ValuePadModel.Quantity quantity) {
+  /**
+   * Returns the line that says what the letter keys mean, and why ± is off while the pad takes
+   * volts that are never negative ({@code unsigned}, e.g. an AC amplitude).
+   */
+  static String legend(ValuePadModel.Quantity quantity, String unsigned) {
+    if (quantity == ValuePadModel.Quantity.VOLTS && unsigned != null && !unsigned.isEmpty()) {
+      return "m = milli (350m = 0.35 V), µ = micro. ± is off: "
+          + Character.toLowerCase(unsigned.charAt(0))
+          + unsigned.substring(1)
+          + " is never negative.";
+    }
     return switch (quantity) {
       case OHMS -> "R marks the point in ohms (4R7 = 4.7 Ω), k = kilo (4k7 = 4.7 kΩ), M = mega.";
       case METER_OHMS ->

@@ -25,7 +25,10 @@ public final class ValuePadModel {
   /** Key that clears the entry. */
   public static final String CLEAR = "Clear";
 
-  /** Key that changes the sign (volts only). */
+  /** What an AC amplitude is called where the pad refuses a sign for it. */
+  public static final String AC_AMPLITUDE = "An AC amplitude (RMS, peak or peak-to-peak)";
+
+  /** Key that changes the sign (volts only, and not while the pad is unsigned). */
   public static final String SIGN = "±";
 
   /** Key for the ohmmeter's over-range, "OL" (ohms readings only): the value is +∞. */
@@ -87,11 +90,14 @@ public final class ValuePadModel {
   private final ReadOnlyStringWrapper reading = new ReadOnlyStringWrapper("");
   private final ReadOnlyStringWrapper hint = new ReadOnlyStringWrapper("");
   private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
+  private final StringProperty unsigned = new SimpleStringProperty("");
+  private Double refusedNegative;
 
   /** Creates an empty pad for volts. */
   public ValuePadModel() {
     text.addListener((obs, old, now) -> update());
     quantity.addListener((obs, old, now) -> update());
+    unsigned.addListener((obs, old, now) -> update());
   }
 
   /** Creates an empty pad for a quantity. */
@@ -128,6 +134,23 @@ public final class ValuePadModel {
     return problem.getReadOnlyProperty();
   }
 
+  /**
+   * Returns what the pad takes that is never negative while it takes volts, e.g. {@link
+   * #AC_AMPLITUDE}; empty (the default) while a sign may be typed. While it is set the sign key
+   * does nothing and a negative entry is no value: the preview says what to fix, and what was typed
+   * stays. (An ohms reading is never negative whatever this says.)
+   */
+  public StringProperty unsignedProperty() {
+    return unsigned;
+  }
+
+  /** Returns the negative number typed that the unsigned pad refuses, if that is the entry. */
+  public java.util.OptionalDouble refusedNegative() {
+    return refusedNegative == null
+        ? java.util.OptionalDouble.empty()
+        : java.util.OptionalDouble.of(refusedNegative);
+  }
+
   /** Returns whether the entry is a value. */
   public boolean hasValue() {
     return value.get() != null;
@@ -142,10 +165,18 @@ public final class ValuePadModel {
     switch (key) {
       case BACK -> text.set(now.isEmpty() ? "" : now.substring(0, now.length() - 1));
       case CLEAR -> text.set("");
-      case SIGN -> text.set(now.startsWith("-") ? now.substring(1) : "-" + now);
+      case SIGN -> {
+        if (isSigned()) {
+          text.set(now.startsWith("-") ? now.substring(1) : "-" + now);
+        }
+      }
       case OVER_RANGE -> text.set(OVER_RANGE);
       default -> text.set(isOverRange(now) ? key : now + key);
     }
+  }
+
+  private boolean isSigned() {
+    return quantity.get() == Quantity.VOLTS && (unsigned.get() == null || unsigned.get().isEmpty());
   }
 
   private static boolean isOverRange(String typed) {
@@ -177,6 +208,7 @@ public final class ValuePadModel {
   }
 
   private void update() {
+    refusedNegative = null;
     String now = text.get() == null ? "" : text.get().strip();
     if (now.isEmpty()) {
       value.set(null);
@@ -203,6 +235,15 @@ public final class ValuePadModel {
       return;
     }
     Quantity q = quantity.get();
+    if (q == Quantity.VOLTS && !isSigned() && parsed < 0) {
+      // Keep what was typed: the technician takes the minus sign away, nothing else is lost.
+      refusedNegative = parsed;
+      value.set(null);
+      reading.set("");
+      hint.set("");
+      problem.set(unsigned.get() + " cannot be negative: type it without the minus sign.");
+      return;
+    }
     if (q != Quantity.VOLTS && parsed < 0) {
       value.set(null);
       reading.set("");

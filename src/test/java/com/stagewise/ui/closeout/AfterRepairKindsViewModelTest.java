@@ -159,9 +159,13 @@ class AfterRepairKindsViewModelTest {
   void aNegativeAcAmplitude_isRefusedPlainly_andWhatWasTypedStays() {
     AfterRepairViewModel check = new AfterRepairViewModel(t.bench);
     check.start();
+    assertThat(check.pad().unsignedProperty().get()).as("DC volts take a sign").isEmpty();
     type(check, "-4.70");
+    // An AC amplitude is a magnitude: the pad's sign key is off for the AC point.
+    assertThat(check.pad().unsignedProperty().get()).isEqualTo(ValuePadModel.AC_AMPLITUDE);
     type(check, "-0.33");
     assertThat(t.problems).containsExactly("An AC amplitude has no sign");
+    assertThat(check.pad().problemProperty().get()).contains("type it without the minus sign");
     assertThat(check.pad().textProperty().get()).isEqualTo("-0.33");
     assertThat(check.currentProperty().get()).isEqualTo(1);
     assertThat(check.rows().get(1).value()).isNull();

@@ -12,6 +12,7 @@ import com.stagewise.history.record.StoredReading;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.TestBench;
 import com.stagewise.ui.suspects.SuspectsViewModel;
+import com.stagewise.ui.widget.ValuePadModel;
 import java.nio.file.Path;
 import java.util.Locale;
 import org.junit.jupiter.api.AfterEach;
@@ -30,6 +31,7 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class AcPadTest {
   private static final double ROOT2 = Math.sqrt(2);
+  private static final String NBSP = "\u00a0";
 
   @TempDir Path temp;
   private TestBench t;
@@ -269,5 +271,43 @@ class AcPadTest {
         .extracting(s -> s.reading().kind())
         .containsExactly(Reading.Kind.AC);
     assertThat(t.problems).isEmpty();
+  }
+
+  @Test
+  void acPad_hasNoSign_aNegativeAmplitudeIsRefusedPlainly_andDcAndOhmsKeepTheirRules() {
+    healthyRails();
+    model.choose("U1.1");
+    assertThat(model.pad().unsignedProperty().get()).as("DC volts take a sign").isEmpty();
+    model.setAc(true);
+    // An RMS, peak or peak-to-peak amplitude is a magnitude (any circuits textbook).
+    assertThat(model.pad().unsignedProperty().get()).isEqualTo(ValuePadModel.AC_AMPLITUDE);
+
+    model.pad().textProperty().set("-0.332");
+    model.addReading();
+
+    assertThat(t.problems).containsExactly("An AC amplitude has no sign");
+    assertThat(t.problemTexts.get(0))
+        .contains("The pad holds −332.0" + NBSP + "mV, below 0 V.")
+        .contains("take the minus sign away");
+    assertThat(model.pad().textProperty().get()).isEqualTo("-0.332");
+    assertThat(t.bench.readings()).hasSize(2);
+    var file = t.store.cases().caseFile(t.bench.openCaseProperty().get().id()).orElseThrow();
+    assertThat(file.readings()).hasSize(2);
+
+    // Power off: the ohms pad has no sign key at all and refuses a negative value in words.
+    model.setPowerOff(true);
+    assertThat(model.pad().quantityProperty().get()).isEqualTo(ValuePadModel.Quantity.METER_OHMS);
+    assertThat(model.pad().unsignedProperty().get()).isEmpty();
+    model.pad().textProperty().set("-47k");
+    assertThat(model.pad().valueProperty().get()).isNull();
+    assertThat(model.pad().problemProperty().get()).contains("cannot be negative");
+    model.setPowerOff(false);
+
+    // Back on DC volts the sign is taken again.
+    model.setAc(false);
+    assertThat(model.pad().unsignedProperty().get()).isEmpty();
+    model.pad().textProperty().set("-13.46");
+    model.addReading();
+    assertThat(t.bench.readings()).last().isEqualTo(Reading.dc("U1.1", -13.46));
   }
 }

@@ -189,4 +189,34 @@ class ValuePadModelTest {
     volts.textProperty().set("OL");
     assertThat(volts.hasValue()).isFalse();
   }
+
+  @Test
+  void unsignedVolts_signKeyDoesNothing_andAMinusTypedIsRefusedKeepingTheText() {
+    // An AC amplitude (RMS, peak or peak-to-peak) is a magnitude: never negative.
+    ValuePadModel pad = new ValuePadModel(ValuePadModel.Quantity.VOLTS);
+    pad.unsignedProperty().set(ValuePadModel.AC_AMPLITUDE);
+    pad.press("0");
+    pad.press(".");
+    pad.press("3");
+    pad.press(ValuePadModel.SIGN);
+    assertThat(pad.textProperty().get()).isEqualTo("0.3");
+    assertThat(pad.valueProperty().get()).isEqualTo(0.3);
+
+    pad.textProperty().set("-0.33");
+
+    assertThat(pad.valueProperty().get()).isNull();
+    assertThat(pad.refusedNegative()).hasValue(-0.33);
+    assertThat(pad.problemProperty().get())
+        .isEqualTo(
+            "An AC amplitude (RMS, peak or peak-to-peak) cannot be negative: type it without the"
+                + " minus sign.");
+    assertThat(pad.textProperty().get()).isEqualTo("-0.33");
+
+    // Back to DC volts: the same entry is a value and the sign key works.
+    pad.unsignedProperty().set("");
+    assertThat(pad.valueProperty().get()).isEqualTo(-0.33);
+    assertThat(pad.refusedNegative()).isEmpty();
+    pad.press(ValuePadModel.SIGN);
+    assertThat(pad.valueProperty().get()).isEqualTo(0.33);
+  }
 }
