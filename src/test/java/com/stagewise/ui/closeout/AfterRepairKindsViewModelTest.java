@@ -1,5 +1,6 @@
 package com.stagewise.ui.closeout;
 
+import static com.stagewise.ui.closeout.AfterRepairCase.type;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.circuit.AcMeasure;
@@ -34,31 +35,23 @@ class AfterRepairKindsViewModelTest {
 
   @BeforeEach
   void setUp() {
-    t = TestBench.open(temp);
-    var board = t.store.units().boardModel("Test amp board", "");
-    var unit = t.store.units().add("TA-10", board.id(), "");
-    t.bench.showUnit(unit, board);
-    t.bench.startCase(t.store.cases().open(unit.id(), "No output"));
-    caseId = t.bench.openCaseProperty().get().id();
-    t.bench.stageProperty().set(TestBench.invertingStage(board.name()));
     // The readings of the fault: the output in DC, in AC RMS (a meter), and ohms across R2.
-    t.bench
-        .readings()
-        .addAll(
+    AfterRepairCase opened =
+        AfterRepairCase.open(
+            temp,
+            "TA-10",
+            "No output",
             List.of(
                 Reading.dc("OUT", -13.48),
                 Reading.ac("OUT", 0.0, 1000, AcMeasure.RMS),
                 Reading.ohms("SUM", "OUT", Double.POSITIVE_INFINITY)));
+    t = opened.t;
+    caseId = opened.caseId;
   }
 
   @AfterEach
   void tearDown() {
     t.close();
-  }
-
-  private static void type(AfterRepairViewModel check, String text) {
-    check.pad().textProperty().set(text);
-    check.enter();
   }
 
   @Test

@@ -1,5 +1,6 @@
 package com.stagewise.ui.closeout;
 
+import static com.stagewise.ui.closeout.AfterRepairCase.type;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.circuit.Reading;
@@ -30,16 +31,19 @@ class AfterRepairViewModelTest {
 
   @BeforeEach
   void setUp() {
-    t = TestBench.open(temp);
-    var board = t.store.units().boardModel("Test amp board", "");
-    var unit = t.store.units().add("TA-9", board.id(), "");
-    t.bench.showUnit(unit, board);
-    t.bench.startCase(t.store.cases().open(unit.id(), "Output pinned low"));
-    caseId = t.bench.openCaseProperty().get().id();
-    t.bench.stageProperty().set(TestBench.invertingStage(board.name()));
     // The readings of the fault: the output at the negative limit, the rails, one AC reading.
-    t.bench.readings().addAll(List.of(dc("OUT", -13.48), dc("U1.8", 14.96), dc("OUT", -13.47)));
-    t.bench.readings().add(Reading.ac("OUT", 0.0, 1000));
+    AfterRepairCase opened =
+        AfterRepairCase.open(
+            temp,
+            "TA-9",
+            "Output pinned low",
+            List.of(
+                dc("OUT", -13.48),
+                dc("U1.8", 14.96),
+                dc("OUT", -13.47),
+                Reading.ac("OUT", 0.0, 1000)));
+    t = opened.t;
+    caseId = opened.caseId;
   }
 
   @AfterEach
@@ -49,11 +53,6 @@ class AfterRepairViewModelTest {
 
   private static Reading dc(String at, double volts) {
     return Reading.dc(at, volts);
-  }
-
-  private static void type(AfterRepairViewModel check, String text) {
-    check.pad().textProperty().set(text);
-    check.enter();
   }
 
   @Test
