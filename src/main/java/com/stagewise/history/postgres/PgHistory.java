@@ -1,20 +1,14 @@
 package com.stagewise.history.postgres;
 
-import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
 import com.stagewise.history.ServerAddress;
 import com.stagewise.history.ShopServer;
-import com.stagewise.history.StageLibrary;
 import com.stagewise.history.StorageException;
 import com.stagewise.history.Transfer;
-import com.stagewise.history.Units;
-import com.stagewise.history.jdbc.JdbcAccess;
-import com.stagewise.history.jdbc.JdbcCases;
-import com.stagewise.history.jdbc.JdbcLibrary;
-import com.stagewise.history.jdbc.JdbcUnits;
+import com.stagewise.history.jdbc.JdbcHistory;
 import com.stagewise.history.jdbc.Rows;
 import com.stagewise.history.jdbc.SqlDialect;
 import com.stagewise.history.jdbc.SqlWork;
@@ -35,21 +29,15 @@ import java.util.Map;
  * file's); a bench role with only the rights to read and add records finds the schema ready or is
  * told to ask for {@code history server-init}. Calls from several threads run one at a time.
  */
-public final class PgHistory implements HistoryStore, ShopServer {
+public final class PgHistory extends JdbcHistory implements ShopServer {
   private final PgDatabase database;
   private final Clock clock;
-  private final JdbcUnits units;
-  private final JdbcCases cases;
-  private final JdbcLibrary library;
   private final PgTransfer transfer;
 
   private PgHistory(PgDatabase database, Clock clock) {
+    super(clock, SqlDialect.POSTGRES);
     this.database = database;
     this.clock = clock;
-    JdbcAccess access = new Access(clock);
-    this.units = new JdbcUnits(access);
-    this.cases = new JdbcCases(access);
-    this.library = new JdbcLibrary(access);
     this.transfer = new PgTransfer(this);
   }
 
@@ -77,35 +65,13 @@ public final class PgHistory implements HistoryStore, ShopServer {
   }
 
   @Override
-  public Units units() {
-    return units;
-  }
-
-  @Override
-  public Cases cases() {
-    return cases;
-  }
-
-  @Override
-  public StageLibrary library() {
-    return library;
-  }
-
-  @Override
   public Transfer transfer() {
     return transfer;
   }
 
   @Override
   public synchronized boolean isEmpty() {
-    return database.read(
-        "count records",
-        c ->
-            PgDatabase.queryInt(
-                    c,
-                    "SELECT (SELECT count(*) FROM board_model) + (SELECT count(*) FROM unit)"
-                        + " + (SELECT count(*) FROM repair_case)")
-                == 0);
+    return database.read("count records", c -> PgDatabase.queryInt(c, COUNT_RECORDS) == 0);
   }
 
   @Override
@@ -160,12 +126,11 @@ public final class PgHistory implements HistoryStore, ShopServer {
             for (Object[] row :
                 rows.query(
                     "SELECT m.name, f.fault_id, count(DISTINCT f.case_id) FROM confirmed_fault f"
-                        + " JOIN repair_case rc ON rc.id = f.case_id"
-                        + " JOIN unit u ON u.id = rc.unit_id"
-                        + " JOIN board_model m ON m.id = u.board_model_id"
-                        + " WHERE rc.status = 'closed' AND rc.outcome = 'fixed'"
-                        + " GROUP BY m.name, f.fault_id"
-                        + " ORDER BY m.name, count(DISTINCT f.case_id) DESC, f.fault_id COLLATE \"C\"",
+                        + " JOIN repair_case rc ON rc.id = f.case_id JOIN unit u ON u.id ="
+                        + " rc.unit_id JOIN board_model m ON m.id = u.board_model_id WHERE"
+                        + " rc.status = 'closed' AND rc.outcome = 'fixed' GROUP BY m.name,"
+                        + " f.fault_id ORDER BY m.name, count(DISTINCT f.case_id) DESC, f.fault_id"
+                        + " COLLATE \"C\"",
                     rs -> new Object[] {rs.getString(1), rs.getString(2), rs.getInt(3)})) {
               counts
                   .computeIfAbsent((String) row[0], k -> new LinkedHashMap<>())
@@ -199,25 +164,19 @@ public final class PgHistory implements HistoryStore, ShopServer {
     return database.write(what, work);
   }
 
-  /** The shared JDBC parts' way into this store: one transaction at a time, and its search. */
-  private final class Access extends JdbcAccess {
-    Access(Clock clock) {
-      super(clock, SqlDialect.POSTGRES);
-    }
+  @Override
+  protected <T> T readSql(String what, SqlWork<T> work) {
+    return read(what, work::run);
+  }
 
-    @Override
-    protected <T> T read(String what, SqlWork<T> work) {
-      return PgHistory.this.read(what, work::run);
-    }
+  @Override
+  protected <T> T writeSql(String what, SqlWork<T> work) {
+    return write(what, work::run);
+  }
 
-    @Override
-    protected <T> T write(String what, SqlWork<T> work) {
-      return PgHistory.this.write(what, work::run);
-    }
-
-    @Override
-    protected List<SearchHit> search(Connection connection, SearchQuery query) throws SQLException {
-      return TextSearch.run(connection, query);
-    }
+  @Override
+  protected List<SearchHit> searchText(Connection connection, SearchQuery query)
+      throws SQLException {
+    return TextSearch.run(connection, query);
   }
 }

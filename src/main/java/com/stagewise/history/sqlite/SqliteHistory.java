@@ -1,18 +1,12 @@
 package com.stagewise.history.sqlite;
 
-import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
 import com.stagewise.history.SearchHit;
 import com.stagewise.history.SearchQuery;
-import com.stagewise.history.StageLibrary;
 import com.stagewise.history.SyncLedger;
 import com.stagewise.history.Transfer;
-import com.stagewise.history.Units;
-import com.stagewise.history.jdbc.JdbcAccess;
-import com.stagewise.history.jdbc.JdbcCases;
-import com.stagewise.history.jdbc.JdbcLibrary;
-import com.stagewise.history.jdbc.JdbcUnits;
+import com.stagewise.history.jdbc.JdbcHistory;
 import com.stagewise.history.jdbc.SqlDialect;
 import com.stagewise.history.jdbc.SqlWork;
 import com.stagewise.history.record.HistoryBundle;
@@ -31,22 +25,16 @@ import java.util.Optional;
  * <p>The file may be used by several programs at once: a writer waits for another's write lock (up
  * to a timeout, then retries) instead of failing. Calls from several threads run one at a time.
  */
-public final class SqliteHistory implements HistoryStore, SyncLedger {
+public final class SqliteHistory extends JdbcHistory implements SyncLedger {
   private final Database database;
   private final Clock clock;
-  private final JdbcUnits units;
-  private final JdbcCases cases;
-  private final JdbcLibrary library;
   private final SqliteTransfer transfer;
   private final Ledger ledger;
 
   private SqliteHistory(Database database, Clock clock) {
+    super(clock, SqlDialect.SQLITE);
     this.database = database;
     this.clock = clock;
-    JdbcAccess access = new Access(clock);
-    this.units = new JdbcUnits(access);
-    this.cases = new JdbcCases(access);
-    this.library = new JdbcLibrary(access);
     this.transfer = new SqliteTransfer(this);
     this.ledger = new Ledger(this);
   }
@@ -109,34 +97,13 @@ public final class SqliteHistory implements HistoryStore, SyncLedger {
   }
 
   @Override
-  public Units units() {
-    return units;
-  }
-
-  @Override
-  public Cases cases() {
-    return cases;
-  }
-
-  @Override
-  public StageLibrary library() {
-    return library;
-  }
-
-  @Override
   public Transfer transfer() {
     return transfer;
   }
 
   @Override
   public synchronized boolean isEmpty() {
-    return database.read(
-        "count records",
-        c ->
-            database.queryInt(
-                    "SELECT (SELECT count(*) FROM board_model) + (SELECT count(*) FROM unit)"
-                        + " + (SELECT count(*) FROM repair_case)")
-                == 0);
+    return database.read("count records", c -> database.queryInt(COUNT_RECORDS) == 0);
   }
 
   @Override
@@ -232,25 +199,19 @@ public final class SqliteHistory implements HistoryStore, SyncLedger {
     return database.write(what, work);
   }
 
-  /** The shared JDBC parts' way into this store: one transaction at a time, and its search. */
-  private final class Access extends JdbcAccess {
-    Access(Clock clock) {
-      super(clock, SqlDialect.SQLITE);
-    }
+  @Override
+  protected <T> T readSql(String what, SqlWork<T> work) {
+    return read(what, work::run);
+  }
 
-    @Override
-    protected <T> T read(String what, SqlWork<T> work) {
-      return SqliteHistory.this.read(what, work::run);
-    }
+  @Override
+  protected <T> T writeSql(String what, SqlWork<T> work) {
+    return write(what, work::run);
+  }
 
-    @Override
-    protected <T> T write(String what, SqlWork<T> work) {
-      return SqliteHistory.this.write(what, work::run);
-    }
-
-    @Override
-    protected List<SearchHit> search(Connection connection, SearchQuery query) throws SQLException {
-      return Search.run(connection, query);
-    }
+  @Override
+  protected List<SearchHit> searchText(Connection connection, SearchQuery query)
+      throws SQLException {
+    return Search.run(connection, query);
   }
 }
