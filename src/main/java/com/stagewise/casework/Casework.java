@@ -3,6 +3,7 @@ package com.stagewise.casework;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.circuit.MeterSpec;
 import com.stagewise.circuit.Reading;
+import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnoser;
@@ -229,6 +230,25 @@ public final class Casework {
   /** Returns the diagnosis of a stage with the shop's counts for the board model in its priors. */
   public Diagnoser diagnoser(Stage stage, BoardModel model) {
     return Diagnoser.of(stage, shopCounts(model));
+  }
+
+  /**
+   * Returns the readings of a case that still stand (not struck out) and that {@code stage} has
+   * points for, in the order they were taken, whoever took them (the app, the command line,
+   * another bench): what a further reading is diagnosed together with.
+   */
+  public List<Reading> standingReadings(String caseId, Stage stage) {
+    List<Reading> standing = new ArrayList<>();
+    for (StoredReading s : store.cases().caseFile(caseId).map(f -> f.readings()).orElse(List.of())) {
+      Reading r = s.reading();
+      boolean fits =
+          ReadingRules.testPointProblem(stage, r.at()).isEmpty()
+              && (r.to().isEmpty() || ReadingRules.testPointProblem(stage, r.to()).isEmpty());
+      if (!s.struck() && fits) {
+        standing.add(r);
+      }
+    }
+    return standing;
   }
 
   /**

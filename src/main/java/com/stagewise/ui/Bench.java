@@ -10,7 +10,6 @@ import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.RepairCase;
 import com.stagewise.history.record.StoredReading;
 import com.stagewise.history.record.Unit;
-import com.stagewise.ui.words.Words;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.IdentityHashMap;
@@ -267,7 +266,7 @@ public final class Bench {
     List<StoredReading> leftOff = new ArrayList<>();
     List<Reading> standing = new ArrayList<>();
     for (StoredReading s : stored) {
-      Reading reading = Words.reading(s);
+      Reading reading = s.reading();
       if (!fits(stage, reading)) {
         leftOff.add(s);
         continue;

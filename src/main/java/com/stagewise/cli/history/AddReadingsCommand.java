@@ -7,6 +7,7 @@ import com.stagewise.casework.CaseAtHand;
 import com.stagewise.casework.Casework;
 import com.stagewise.casework.StoredReadings;
 import com.stagewise.circuit.InvalidInputException;
+import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnoser;
@@ -16,6 +17,8 @@ import com.stagewise.interchange.StageSheet;
 import com.stagewise.interchange.history.HistoryJson;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -25,7 +28,9 @@ import picocli.CommandLine.Option;
 @Command(
     name = "add-readings",
     mixinStandardHelpOptions = true,
-    description = "Store a readings file in a case, with the diagnosis computed from it.")
+    description =
+        "Store a readings file in a case, with the diagnosis of all the case's standing"
+            + " readings (those stored before, then the file's).")
 final class AddReadingsCommand extends HistorySubcommand {
   @Mixin CaseOption target;
 
@@ -74,8 +79,18 @@ final class AddReadingsCommand extends HistorySubcommand {
       work.library().useForCase(at.id(), stage);
     }
     Map<String, Integer> counts = work.shopCounts(at.boardModel());
+    // The diagnosis stored with the case is that of all its standing readings, as in the app: the
+    // ones stored before (whoever took them, struck ones left out), then this file's.
+    List<Reading> taken = new ArrayList<>(work.standingReadings(at.id(), stage));
+    int before = taken.size();
+    taken.addAll(set.readings());
     StoredReadings stored =
-        work.addReadings(at.id(), Diagnoser.of(stage, counts).mainsPowered(mainsPowered), set, top);
+        work.addReadings(
+            at.id(),
+            Diagnoser.of(stage, counts).mainsPowered(mainsPowered),
+            new ReadingSet(set.meter(), taken),
+            set.readings(),
+            top);
     SuspectListRecord suspects = stored.suspectList();
     if (json()) {
       out.println(HistoryJson.storedReadings(stored.readings(), suspects));
@@ -83,6 +98,12 @@ final class AddReadingsCommand extends HistorySubcommand {
     }
     out.println(
         plural(stored.readings().size(), "reading") + " stored in case " + shortId(at.id()) + ".");
+    if (before > 0) {
+      out.println(
+          "Diagnosed together with the case's "
+              + plural(before, "earlier reading")
+              + " (struck ones left out).");
+    }
     out.println("Verdict: " + suspects.verdict());
     suspects.suspects().forEach(s -> out.println(HistoryText.suspectLine(s, counts)));
     if (!suspects.nextProbes().isEmpty()) {

@@ -1,8 +1,12 @@
 package com.stagewise.history.record;
 
+import com.stagewise.circuit.AcMeasure;
+import com.stagewise.circuit.Reading;
 import java.time.Instant;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
+import java.util.OptionalDouble;
 
 /**
  * One reading as taken during a case.
@@ -99,6 +103,29 @@ public record StoredReading(
   /** Returns the measure of an AC reading ({@code rms}, {@code peak} or {@code pp}); empty else. */
   public String measureWord() {
     return kind != ReadingKind.AC ? "" : measure == null ? "peak" : measure;
+  }
+
+  /**
+   * Returns the reading this record stands for, as the diagnosis takes it: its kind, value, point
+   * (and second point), its own uncertainty when one was given, and for AC its frequency and
+   * measure (peak when the record names none).
+   */
+  public Reading reading() {
+    Reading.Kind k =
+        switch (kind) {
+          case AC -> Reading.Kind.AC;
+          case DC -> Reading.Kind.DC;
+          case OHMS -> Reading.Kind.OHMS;
+        };
+    boolean ac = kind == ReadingKind.AC;
+    return new Reading(
+        at,
+        k,
+        value,
+        ac && hz != null ? hz : 0,
+        uncertainty == null ? OptionalDouble.empty() : OptionalDouble.of(uncertainty),
+        to,
+        ac ? AcMeasure.of(measureWord()) : Optional.empty());
   }
 
   /**

@@ -2,21 +2,17 @@ package com.stagewise.ui.words;
 
 import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.MeterSpec;
-import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.value.Engineering;
 import com.stagewise.diagnosis.Wording;
 import com.stagewise.history.Checks;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.CasePhoto;
 import com.stagewise.history.record.Outcome;
-import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.record.RepairAction;
-import com.stagewise.history.record.StoredReading;
 import java.time.Instant;
 import java.time.ZoneId;
 import java.time.format.DateTimeFormatter;
 import java.util.Locale;
-import java.util.OptionalDouble;
 
 /** Text the screens share: dates, volts, outcomes and the usual "what to do" lines. */
 public final class Words {
@@ -192,29 +188,5 @@ public final class Words {
    */
   public static String measure(String word) {
     return AcMeasure.of(word).map(AcMeasure::words).orElse(word);
-  }
-
-  /** Returns the reading a stored reading stands for. */
-  public static Reading reading(StoredReading stored) {
-    Reading.Kind kind =
-        switch (stored.kind()) {
-          case AC -> Reading.Kind.AC;
-          case DC -> Reading.Kind.DC;
-          case OHMS -> Reading.Kind.OHMS;
-        };
-    double hz = kind == Reading.Kind.AC && stored.hz() != null ? stored.hz() : 0;
-    OptionalDouble uncertainty =
-        stored.uncertainty() == null
-            ? OptionalDouble.empty()
-            : OptionalDouble.of(stored.uncertainty());
-    return new Reading(
-        stored.at(), kind, stored.value(), hz, uncertainty, stored.to(), measure(stored));
-  }
-
-  /** Returns the measure an AC reading was stored with (peak when the history says none). */
-  private static java.util.Optional<AcMeasure> measure(StoredReading stored) {
-    return stored.kind() == ReadingKind.AC
-        ? AcMeasure.of(stored.measureWord())
-        : java.util.Optional.empty();
   }
 }
