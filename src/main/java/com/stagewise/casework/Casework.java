@@ -234,12 +234,13 @@ public final class Casework {
 
   /**
    * Returns the readings of a case that still stand (not struck out) and that {@code stage} has
-   * points for, in the order they were taken, whoever took them (the app, the command line,
-   * another bench): what a further reading is diagnosed together with.
+   * points for, in the order they were taken, whoever took them (the app, the command line, another
+   * bench): what a further reading is diagnosed together with.
    */
   public List<Reading> standingReadings(String caseId, Stage stage) {
     List<Reading> standing = new ArrayList<>();
-    for (StoredReading s : store.cases().caseFile(caseId).map(f -> f.readings()).orElse(List.of())) {
+    for (StoredReading s :
+        store.cases().caseFile(caseId).map(f -> f.readings()).orElse(List.of())) {
       Reading r = s.reading();
       boolean fits =
           ReadingRules.testPointProblem(stage, r.at()).isEmpty()

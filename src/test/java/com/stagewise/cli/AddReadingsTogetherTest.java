@@ -80,8 +80,7 @@ class AddReadingsTogetherTest {
   }
 
   private JsonNode add(Path file) throws Exception {
-    return json(
-        history("add-readings", "--case", caseId, "--readings", file.toString(), "--json"))
+    return json(history("add-readings", "--case", caseId, "--readings", file.toString(), "--json"))
         .get("suspectList");
   }
 
