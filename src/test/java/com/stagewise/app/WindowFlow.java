@@ -17,20 +17,14 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.application.Platform;
 import javafx.embed.swing.SwingFXUtils;
-import javafx.geometry.Bounds;
-import javafx.geometry.Orientation;
 import javafx.scene.Node;
-import javafx.scene.Parent;
-import javafx.scene.control.Control;
 import javafx.scene.control.Label;
 import javafx.scene.control.Labeled;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
-import javafx.scene.control.ScrollBar;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextInputControl;
 import javafx.scene.image.WritableImage;
-import javafx.scene.text.Text;
 import javafx.stage.Stage;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.AfterEach;
@@ -421,15 +415,19 @@ abstract class WindowFlow {
    */
   void assertNothingCut(String screen, String where, String... parts) throws Exception {
     if (parts.length == 0) {
-      List<String> cut = fx(() -> cutTexts(window.getScene().getRoot(), new ArrayList<>()));
+      List<String> cut =
+          fx(() -> ScreenFaults.cutTexts(window.getScene().getRoot(), new ArrayList<>()));
       assertThat(cut).as("texts cut short on %s at %s", screen, where).isEmpty();
-      List<String> out = fx(() -> spilled(window.getScene().getRoot(), new ArrayList<>()));
+      List<String> out =
+          fx(() -> ScreenFaults.spilled(window.getScene().getRoot(), new ArrayList<>()));
       assertThat(out).as("controls out of their panels on %s at %s", screen, where).isEmpty();
     }
     for (String part : parts) {
-      List<String> cut = fx(() -> cutTexts(robot.lookup(part).query(), new ArrayList<>()));
+      List<String> cut =
+          fx(() -> ScreenFaults.cutTexts(robot.lookup(part).query(), new ArrayList<>()));
       assertThat(cut).as("texts cut short in %s on %s at %s", part, screen, where).isEmpty();
-      List<String> out = fx(() -> spilled(robot.lookup(part).query(), new ArrayList<>()));
+      List<String> out =
+          fx(() -> ScreenFaults.spilled(robot.lookup(part).query(), new ArrayList<>()));
       assertThat(out)
           .as("controls out of their panels in %s on %s at %s", part, screen, where)
           .isEmpty();
@@ -437,157 +435,13 @@ abstract class WindowFlow {
   }
 
   /**
-   * Collects every visible control that reaches sideways past the edge of the panel it sits in (a
-   * row of buttons wider than its panel draws them over the panel's border, or past the window's
-   * edge where they are out of reach).
-   */
-  static List<String> spilled(Node node, List<String> found) {
-    if (!node.isVisible()) {
-      return found;
-    }
-    if (node instanceof Control control && control.getWidth() > 0) {
-      Node panel = control.getParent();
-      while (panel != null && !panel.getStyleClass().contains("panel")) {
-        panel = panel.getParent();
-      }
-      if (panel != null) {
-        Bounds inner = panel.localToScene(panel.getLayoutBounds());
-        Bounds outer = control.localToScene(control.getLayoutBounds());
-        double past =
-            Math.max(inner.getMinX() - outer.getMinX(), outer.getMaxX() - inner.getMaxX());
-        if (past > 1) {
-          found.add(
-              (control.getId() == null ? control.getClass().getSimpleName() : "#" + control.getId())
-                  + (control instanceof Labeled l ? " \"" + l.getText() + "\"" : "")
-                  + " reaches "
-                  + Math.round(past)
-                  + " px past its panel");
-        }
-      }
-    }
-    if (node instanceof Parent parent) {
-      for (Node child : parent.getChildrenUnmodifiable()) {
-        spilled(child, found);
-      }
-    }
-    return found;
-  }
-
-  /**
    * Fails when any scroll bar across the window shows: at 1024×600 every screen fits the window's
    * width (it scrolls down, never sideways, which a finger on a touch laptop misses).
    */
   void assertNoSidewaysScroll(String screen, String where) throws Exception {
-    List<String> bars = fx(() -> sidewaysBars(window.getScene().getRoot(), new ArrayList<>()));
+    List<String> bars =
+        fx(() -> ScreenFaults.sidewaysBars(window.getScene().getRoot(), new ArrayList<>()));
     assertThat(bars).as("sideways scroll bars on %s at %s", screen, where).isEmpty();
-  }
-
-  /**
-   * Collects every horizontal scroll bar that shows (it and every node it sits in visible), named
-   * by the nearest node with an id around it.
-   */
-  static List<String> sidewaysBars(Node node, List<String> found) {
-    if (!node.isVisible()) {
-      return found;
-    }
-    if (node instanceof ScrollBar bar
-        && bar.getOrientation() == Orientation.HORIZONTAL
-        && bar.getWidth() > 0
-        && bar.getHeight() > 0) {
-      Node named = bar;
-      while (named != null && named.getId() == null) {
-        named = named.getParent();
-      }
-      found.add(
-          "a sideways scroll bar in "
-              + (named == null ? "the window" : "#" + named.getId())
-              + " (max "
-              + Math.round(bar.getMax())
-              + ", visible "
-              + Math.round(bar.getVisibleAmount())
-              + ")");
-    }
-    if (node instanceof Parent parent) {
-      for (Node child : parent.getChildrenUnmodifiable()) {
-        sidewaysBars(child, found);
-      }
-    }
-    return found;
-  }
-
-  /**
-   * Collects every visible text that its control shows shortened (JavaFX then draws it with an
-   * ellipsis: the control's own text and the text it draws differ), every wrapping label squeezed
-   * narrower than one of its words (which it then breaks letter by letter), and every text a
-   * drawing paints shortened with its own ellipsis (a pin's value in the package drawing).
-   */
-  static List<String> cutTexts(Node node, List<String> cut) {
-    if (!node.isVisible() || node instanceof TextInputControl) {
-      // What a field holds is the technician's own typing, scrolled within the field.
-      return cut;
-    }
-    if (node instanceof Text drawn
-        && !(drawn.getParent() instanceof Labeled)
-        && drawn.getText() != null
-        && drawn.getText().indexOf('\u2026') >= 0) {
-      Node named = drawn;
-      while (named != null && named.getId() == null) {
-        named = named.getParent();
-      }
-      cut.add(
-          "a drawing's text in "
-              + (named == null ? "the window" : "#" + named.getId())
-              + " shows \""
-              + drawn.getText()
-              + "\"");
-    }
-    if (node instanceof Labeled labeled
-        && labeled.getText() != null
-        && !labeled.getText().isBlank()
-        && labeled.getWidth() > 0) {
-      for (Node part : labeled.getChildrenUnmodifiable()) {
-        if (part instanceof Text shown
-            && part.isVisible()
-            && shown.getText() != null
-            && !shown.getText().equals(labeled.getText())) {
-          cut.add(
-              name(labeled)
-                  + " shows \""
-                  + shown.getText()
-                  + "\" for \""
-                  + labeled.getText()
-                  + "\"");
-        }
-      }
-      if (labeled.isWrapText()) {
-        double room =
-            labeled.getWidth() - labeled.snappedLeftInset() - labeled.snappedRightInset() + 0.5;
-        for (String word : labeled.getText().split("\\s+")) {
-          Text measured = new Text(word);
-          measured.setFont(labeled.getFont());
-          if (!word.isEmpty() && measured.getLayoutBounds().getWidth() > room) {
-            cut.add(
-                name(labeled)
-                    + " is narrower than \""
-                    + word
-                    + "\" in \""
-                    + labeled.getText()
-                    + "\"");
-            break;
-          }
-        }
-      }
-    }
-    if (node instanceof Parent parent) {
-      for (Node child : parent.getChildrenUnmodifiable()) {
-        cutTexts(child, cut);
-      }
-    }
-    return cut;
-  }
-
-  private static String name(Labeled labeled) {
-    return labeled.getId() == null ? labeled.getClass().getSimpleName() : "#" + labeled.getId();
   }
 
   /** The folder of the README's pictures with {@code -Dscreenshots=true}, else target/screens. */
