@@ -6,10 +6,13 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
 import java.util.function.IntConsumer;
+import javafx.geometry.BoundingBox;
+import javafx.geometry.Bounds;
 import javafx.geometry.VPos;
 import javafx.scene.Cursor;
 import javafx.scene.Group;
 import javafx.scene.layout.Region;
+import javafx.scene.paint.Color;
 import javafx.scene.shape.Arc;
 import javafx.scene.shape.ArcType;
 import javafx.scene.shape.Circle;
@@ -100,6 +103,19 @@ public final class PackageDrawing extends Region {
   /** Returns the highlighted pin, 0 when none. */
   public int highlighted() {
     return highlighted;
+  }
+
+  /**
+   * Returns where the highlighted pin's touch target stands in the drawing, as drawn (scaled), in
+   * the drawing's own coordinates; null when no pin is highlighted. A scrolling panel around the
+   * drawing brings it into sight with this.
+   */
+  public Bounds highlightedBounds() {
+    if (highlighted < 1 || highlighted > geometry.pinCount()) {
+      return null;
+    }
+    Box hit = geometry.pin(highlighted).hit();
+    return content.localToParent(new BoundingBox(hit.x(), hit.y(), hit.w(), hit.h()));
   }
 
   @Override
@@ -271,6 +287,11 @@ public final class PackageDrawing extends Region {
     Group pin = new Group();
     pin.setId("pin-" + place.pin());
     pin.setCursor(Cursor.HAND);
+    // Unseen, and taller than the pad: the whole pitch takes the touch (a transparent fill still
+    // takes it, a missing one would not).
+    Box hit = place.hit();
+    Rectangle hitArea = new Rectangle(hit.x(), hit.y(), hit.w(), hit.h());
+    hitArea.setFill(Color.TRANSPARENT);
     Rectangle target = new Rectangle(pad.x(), pad.y(), pad.w(), pad.h());
     target.setArcWidth(8);
     target.setArcHeight(8);
@@ -296,7 +317,7 @@ public final class PackageDrawing extends Region {
         inner,
         area.y() + (pinText.containsKey(place.pin()) ? 16 : area.h() / 2),
         place.left());
-    pin.getChildren().addAll(target, textTarget, nameText);
+    pin.getChildren().addAll(hitArea, target, textTarget, nameText);
     String extra = pinText.get(place.pin());
     if (extra != null) {
       Text extraText = new Text(extra);

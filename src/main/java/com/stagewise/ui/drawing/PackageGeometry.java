@@ -18,7 +18,9 @@ final class PackageGeometry {
   /** Smallest side of a touch target: 48 px, about 9 mm on a laptop (common practice). */
   static final double MIN_PAD = 48;
 
-  static final double MIN_PITCH = 52;
+  // 58 px: a drawing scaled to about 0.8 in a narrow column still gives each pin a 46 px row to
+  // tap.
+  static final double MIN_PITCH = 58;
   static final double MAX_PITCH = 62;
   static final double MIN_TEXT_COLUMN = 72;
   static final double MAX_TEXT_COLUMN = 176;
@@ -46,8 +48,10 @@ final class PackageGeometry {
    * @param left whether the pin is on the left side of the top view
    * @param pad the touch target drawn as the pin
    * @param text the area beside the pad for the pin's name and text, on the outer side
+   * @param hit where a touch chooses the pin: its pad and text across the whole pitch, taller than
+   *     the pad drawn, so that a drawing scaled down a little still gives a finger its room
    */
-  record PinPlace(int pin, boolean left, Box pad, Box text) {}
+  record PinPlace(int pin, boolean left, Box pad, Box text, Box hit) {}
 
   private PackageGeometry(int pinCount, double roomWidth, double roomHeight, double minColumn) {
     if (pinCount < 2 || pinCount % 2 != 0) {
@@ -82,7 +86,10 @@ final class PackageGeometry {
           left
               ? new Box(MARGIN, cy - pad / 2, column, pad)
               : new Box(padX + pad + 8, cy - pad / 2, column, pad);
-      places.add(new PinPlace(pin, left, padBox, text));
+      double hitLeft = left ? text.x() : padBox.x();
+      double hitRight = left ? padBox.right() : text.right();
+      Box hit = new Box(hitLeft, cy - pitch / 2, hitRight - hitLeft, pitch);
+      places.add(new PinPlace(pin, left, padBox, text, hit));
     }
     pins = List.copyOf(places);
     width = 2 * (MARGIN + column + 8 + pad - 6) + bodyWidth;
@@ -141,10 +148,13 @@ final class PackageGeometry {
     return pins.get(pin - 1);
   }
 
-  /** Returns the pin whose touch target holds the point, if any (pad or its text area). */
+  /**
+   * Returns the pin whose touch target holds the point, if any (its pad, its text area and the gap
+   * to the next pin's).
+   */
   Optional<Integer> pinAt(double x, double y) {
     for (PinPlace place : pins) {
-      if (place.pad().contains(x, y) || place.text().contains(x, y)) {
+      if (place.hit().contains(x, y)) {
         return Optional.of(place.pin());
       }
     }

@@ -8,7 +8,6 @@ import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
-import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
@@ -76,29 +75,32 @@ final class AcViews {
     }
     ac.measureProperty().addListener((o, was, now) -> showMeasure.run());
     showMeasure.run();
-    PowerOffViews.showWhen(measure, ac.acProperty());
 
+    // While a reading is corrected the pad takes what that reading was (its kind stays; an AC
+    // reading's measure may still be put right), and the pad keeps its Add reading in sight.
+    PowerOffViews.showWhen(
+        kind,
+        model.powerOff().activeProperty().not().and(model.correctingTextProperty().isEmpty()));
+    PowerOffViews.showWhen(measure, ac.acProperty().and(model.powerOff().activeProperty().not()));
+    // No heading of its own: the switch says what the pad takes, and a heading's row is one the
+    // keys need in a 1024×600 window.
+    return new VBox(6, kind, measure);
+  }
+
+  /**
+   * What the pad takes in words ("AC volts RMS at 1 kHz"), shown while the pad is on AC: the first
+   * of the pad's notes below the keys (the probe call above says it too).
+   */
+  static Node padTakes(ReadingsViewModel model) {
+    AcChoice ac = model.ac();
     Label takes = new Label();
     takes.setId("pad-takes");
     takes.getStyleClass().add("pad-takes");
     takes.setWrapText(true);
     takes.setMinHeight(Region.USE_PREF_SIZE);
     takes.textProperty().bind(ac.padTitle());
-    PowerOffViews.showWhen(takes, ac.acProperty());
-    // While a reading is corrected the pad takes what that reading was (its kind stays; an AC
-    // reading's measure may still be put right), and the pad keeps its Add reading in sight.
-    PowerOffViews.showWhen(
-        kind,
-        model.powerOff().activeProperty().not().and(model.correctingTextProperty().isEmpty()));
-    VBox acParts = new VBox(6, measure, takes);
-    PowerOffViews.showWhen(acParts, ac.acProperty().and(model.powerOff().activeProperty().not()));
-    Label title = new Label("The meter shows");
-    title.getStyleClass().add("section-title");
-    title.setMinWidth(Region.USE_PREF_SIZE);
-    // The switch goes beside the heading, or below it when larger text leaves no room.
-    FlowPane head = new FlowPane(10, 6, title, kind);
-    head.setAlignment(Pos.CENTER_LEFT);
-    return new VBox(6, head, acParts);
+    PowerOffViews.showWhen(takes, ac.acProperty().and(model.powerOff().activeProperty().not()));
+    return takes;
   }
 
   /** The test signal in words, and a field to turn it to another frequency. */

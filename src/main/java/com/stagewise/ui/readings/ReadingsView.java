@@ -38,6 +38,7 @@ public final class ReadingsView {
   private final PackageDrawing drawing = new PackageDrawing();
   private final SchematicDrawing schematic = new SchematicDrawing();
   private final VBox suspectsBox = new VBox(6);
+  private final javafx.scene.control.ScrollPane probeScroll = new javafx.scene.control.ScrollPane();
   private String shownPackage = "";
   private Stage schematicStage;
 
@@ -59,9 +60,15 @@ public final class ReadingsView {
     // to a width in em (readings.css), instead of leaving them at 380 px beside a vast results
     // column.
     HBox.setHgrow(probe, Priority.ALWAYS);
-    VBox pad = new VBox(10);
+    VBox pad = new VBox(6);
     pad.getStyleClass().add("panel");
     ValuePad valuePad = new ValuePad(model.pad(), "reading", "Add reading", model::addReading);
+    // Add reading as a tall key beside the digits, the pad's notes below the keys: the keys and
+    // Add reading stand whole in a 1024×600 window, larger text too.
+    valuePad.enterInKeys();
+    valuePad.addNote(AcViews.padTakes(model));
+    valuePad.getStyleClass().add("reading-pad");
+    VBox.setVgrow(valuePad, Priority.ALWAYS);
     pad.getChildren().addAll(AcViews.padBar(model), correctingBar(), valuePad);
     pad.setMinWidth(342);
     // Its keys need about 340 px; what is left over goes to the results.
@@ -96,8 +103,6 @@ public final class ReadingsView {
   private VBox probePanel() {
     VBox box = new VBox(8);
     box.getStyleClass().add("panel");
-    Label heading = new Label("Next probe");
-    heading.getStyleClass().add("section-title");
     Label call = new Label();
     call.setId("probe-call");
     call.getStyleClass().add("probe-call");
@@ -112,6 +117,16 @@ public final class ReadingsView {
                             : "No further probe needed")
                         : model.probeProperty().get().call(),
                 model.probeProperty()));
+    // A call with its AC measure ("Probe U1 pin 1 (AC volts RMS at 1 kHz)") in a smaller size:
+    // at the large size it took four lines of a 1024 px window's narrow column.
+    call.textProperty()
+        .addListener(
+            (o, was, now) -> {
+              call.getStyleClass().remove("long");
+              if (now != null && now.contains(" (")) {
+                call.getStyleClass().add("long");
+              }
+            });
     Label title = new Label();
     title.setId("probe-title");
     title.setWrapText(true);
@@ -137,17 +152,17 @@ public final class ReadingsView {
     drawing.setId("package-drawing");
     drawing.setOnPinChosen(pin -> model.choose(shownPackage + "." + pin));
     drawing.setMaxWidth(Double.MAX_VALUE);
-    // The drawing's own smallest layout keeps 48 px pins; below that height it scales to fit
-    // rather than being cut off (a 14-pin package on a 800 px high window).
-    drawing.setMinSize(Region.USE_COMPUTED_SIZE, 0);
+    // The drawing keeps the height of its smallest layout with finger-sized pins (it scrolls in
+    // the probe column instead of shrinking); only a column too narrow for it scales it a little.
+    drawing.setMinSize(0, Region.USE_COMPUTED_SIZE);
     schematic.setId("readings-schematic");
     schematic.targets().setOnPointChosen(model::choose);
     schematic.setMaxWidth(Double.MAX_VALUE);
     schematic.setMinSize(0, 0);
     schematic.setVisible(false);
     StackPane drawingHolder = new StackPane(drawing, schematic);
-    drawingHolder.setMinHeight(200);
     VBox.setVgrow(drawingHolder, Priority.ALWAYS);
+    drawingHolder.setId("drawing-holder");
     javafx.scene.control.ToggleButton onPackage = new javafx.scene.control.ToggleButton("Package");
     onPackage.setId("show-package");
     javafx.scene.control.ToggleButton onSchematic =
@@ -165,7 +180,7 @@ public final class ReadingsView {
     Label tapHint = new Label("Tap a pin, a wire or a part's lead");
     tapHint.getStyleClass().add("hint");
     tapHint.setWrapText(true);
-    VBox viewBar = new VBox(4, views, tapHint);
+    VBox viewBar = new VBox(4, views);
     ComboBox<ProbePoint> other = new ComboBox<>(model.testPoints());
     other.setId("other-point");
     other.setMaxWidth(Double.MAX_VALUE);
@@ -224,18 +239,70 @@ public final class ReadingsView {
             Bindings.when(model.powerOff().activeProperty())
                 .then("Or pick a point from the list:")
                 .otherwise("Or probe another point:"));
-    VBox powered = new VBox(8, heading, call, title, why, AcViews.signalRow(model));
+    // In sight whatever the window: where the probe goes, in words. What may scroll within the
+    // column in a small window follows: the drawing (brought to the lit pin), the other ways to
+    // choose a point, why this point, the test signal.
+    VBox powered = new VBox(6, call, title);
     PowerOffViews.showWhen(powered, model.powerOff().activeProperty().not());
+    VBox poweredMore = new VBox(8, why, AcViews.signalRow(model));
+    PowerOffViews.showWhen(poweredMore, model.powerOff().activeProperty().not());
+    VBox more =
+        new VBox(
+            8,
+            tapHint,
+            drawingHolder,
+            viewBar,
+            new VBox(4, otherTitle, other),
+            suggested,
+            poweredMore);
+    more.getStyleClass().add("probe-more");
+    probeScroll.setContent(more);
+    probeScroll.setId("probe-scroll");
+    probeScroll.setFitToWidth(true);
+    probeScroll.setFitToHeight(true);
+    probeScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+    probeScroll.setVbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.AS_NEEDED);
+    probeScroll.setMinHeight(120);
+    VBox.setVgrow(probeScroll, Priority.ALWAYS);
+    probeScroll
+        .viewportBoundsProperty()
+        .addListener(
+            (o, was, now) -> {
+              if (was == null || was.getHeight() != now.getHeight()) {
+                javafx.application.Platform.runLater(this::bringPinIntoView);
+              }
+            });
     box.getChildren()
         .addAll(
-            PowerOffViews.modeBar(model),
-            powered,
-            PowerOffViews.pairHeader(model),
-            viewBar,
-            drawingHolder,
-            new VBox(4, otherTitle, other),
-            suggested);
+            PowerOffViews.modeBar(model), powered, PowerOffViews.pairHeader(model), probeScroll);
     return box;
+  }
+
+  /**
+   * Scrolls the probe column's lower part, where it scrolls in a small window, so that the lit pin
+   * of the drawing stands in sight.
+   */
+  private void bringPinIntoView() {
+    javafx.geometry.Bounds pin = drawing.highlightedBounds();
+    Node content = probeScroll.getContent();
+    if (pin == null || !drawing.isVisible() || content == null) {
+      return;
+    }
+    double view = probeScroll.getViewportBounds().getHeight();
+    // The whole drawing where it fits the view (its line naming the pin at the top), else the pin.
+    javafx.geometry.Bounds whole = drawing.getLayoutBounds();
+    javafx.geometry.Bounds place =
+        content.sceneToLocal(drawing.localToScene(whole.getHeight() <= view ? whole : pin));
+    double room = content.getLayoutBounds().getHeight() - view;
+    if (room <= 0 || place == null) {
+      return;
+    }
+    double top = probeScroll.getVvalue() * room;
+    if (place.getMinY() >= top && place.getMaxY() <= top + view) {
+      return;
+    }
+    double wanted = place.getMinY() < top ? place.getMinY() - 8 : place.getMaxY() - view + 8;
+    probeScroll.setVvalue(Math.max(0, Math.min(1, wanted / room)));
   }
 
   private void showProbe(ProbePoint volts) {
@@ -274,6 +341,7 @@ public final class ReadingsView {
     schematic.targets().setChosen(lit);
     int second = q != null && q.isPin() && q.packageRef().equals(pkg) ? q.pin() : 0;
     drawing.highlight(p != null && p.isPin() ? p.pin() : 0, second);
+    javafx.application.Platform.runLater(this::bringPinIntoView);
   }
 
   private void showSchematic(boolean on, Toggle onPackage, Toggle onSchematic) {
@@ -331,6 +399,11 @@ public final class ReadingsView {
     ListView<ReadingRow> list = new ListView<>(model.rows());
     list.setId("readings-list");
     VBox.setVgrow(list, Priority.ALWAYS);
+    // In a small window the cards give up their room first, down to about two rows.
+    list.setMinHeight(96);
+    // Its preferred height small too: the verdict and the suspects above take what they need
+    // first, the cards grow into what is left.
+    list.setPrefHeight(120);
     list.setCellFactory(v -> new ReadingCard());
     // Another case or stage: nothing stays chosen from the last one.
     model
@@ -352,8 +425,17 @@ public final class ReadingsView {
     all.setMaxWidth(Double.MAX_VALUE);
     all.disableProperty().bind(Bindings.isEmpty(bench.readings()));
     all.setOnAction(e -> model.showSuspects());
-    box.getChildren()
-        .addAll(head, verdict, chain, suspectsBox, list, cardActions(list), undoBar(), all);
+    // The verdict and the top suspects scroll in their own part where a small window is short of
+    // room (after the cards have given theirs), never the whole screen.
+    VBox summary = new VBox(8, verdict, chain, suspectsBox);
+    javafx.scene.control.ScrollPane summaryScroll = new javafx.scene.control.ScrollPane(summary);
+    summaryScroll.setId("readings-summary");
+    summaryScroll.setFitToWidth(true);
+    summaryScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+    summaryScroll.setVbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.AS_NEEDED);
+    summaryScroll.setMinHeight(60);
+    VBox.setVgrow(summaryScroll, Priority.SOMETIMES);
+    box.getChildren().addAll(head, summaryScroll, list, cardActions(list), undoBar(), all);
     return box;
   }
 

@@ -1,10 +1,13 @@
 package com.stagewise.ui.widget;
 
+import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 
 /** The value pad's view: a display that also takes typing, and large keys. */
@@ -13,6 +16,10 @@ public final class ValuePad extends VBox {
   private final TextField display = new TextField();
   private final GridPane keys = new GridPane();
   private final Button enter;
+  private final VBox notes;
+  private final String idPrefix;
+  private boolean enterInKeys;
+  private final VBox below = new VBox(8);
 
   /**
    * Creates the pad.
@@ -24,6 +31,7 @@ public final class ValuePad extends VBox {
    */
   public ValuePad(ValuePadModel model, String idPrefix, String enterLabel, Runnable onEnter) {
     this.model = model;
+    this.idPrefix = idPrefix;
     setSpacing(8);
     display.getStyleClass().add("value-display");
     getStylesheets().add(ValuePad.class.getResource("widgets.css").toExternalForm());
@@ -64,7 +72,43 @@ public final class ValuePad extends VBox {
                 () -> legend(model.quantityProperty().get(), model.unsignedProperty().get()),
                 model.quantityProperty(),
                 model.unsignedProperty()));
-    getChildren().addAll(display, new HBox(12, reading, problem), hint, keys, legend, enter);
+    notes = new VBox(8, new HBox(12, reading, problem), hint);
+    getChildren().addAll(display, notes, keys, legend, enter);
+  }
+
+  /**
+   * Puts the enter key into the keypad, two keys tall in the last column beside 1 2 3 and . 0 (as
+   * on a numeric keypad), and what the pad says about the entry (the value read back, a problem, a
+   * hint) and the legend below the keys, in a part of their own that scrolls when the pad's room is
+   * short. The pad is then shorter by a row, the keys and the enter key stay whole in a small
+   * window (1024×600, beside the probe), and a message that appears while typing never moves a key
+   * under the finger.
+   */
+  public void enterInKeys() {
+    enterInKeys = true;
+    setSpacing(4);
+    enter.setWrapText(true);
+    enter.setMaxHeight(Double.MAX_VALUE);
+    enter.getStyleClass().add("enter-key");
+    Node legend = getChildren().get(3);
+    below.getChildren().setAll(notes, legend);
+    ScrollPane scroll = new ScrollPane(below);
+    scroll.setId(idPrefix + "-notes");
+    scroll.setFitToWidth(true);
+    scroll.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+    scroll.setVbarPolicy(ScrollPane.ScrollBarPolicy.AS_NEEDED);
+    scroll.setMinHeight(0);
+    VBox.setVgrow(scroll, Priority.ALWAYS);
+    getChildren().setAll(display, keys, scroll);
+    layoutKeys(idPrefix);
+  }
+
+  /**
+   * Adds a line about the entry at the top of the pad's notes below the keys (with {@link
+   * #enterInKeys}), e.g. what the pad takes in words.
+   */
+  public void addNote(Node note) {
+    below.getChildren().add(0, note);
   }
 
   /** Returns the display field (to focus it). */
@@ -110,6 +154,9 @@ public final class ValuePad extends VBox {
     keys.add(key(idPrefix, ValuePadModel.BACK, ValuePadModel.BACK), 4, 0);
     Button clear = key(idPrefix, ValuePadModel.CLEAR, ValuePadModel.CLEAR);
     keys.add(clear, 4, 1);
+    if (enterInKeys) {
+      keys.add(enter, 4, 2, 1, 2);
+    }
   }
 
   private static String prefixLabel(String prefix) {

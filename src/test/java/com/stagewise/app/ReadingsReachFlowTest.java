@@ -1,0 +1,149 @@
+package com.stagewise.app;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.stagewise.ui.drawing.PackageDrawing;
+import java.util.ArrayList;
+import java.util.List;
+import javafx.scene.Node;
+import javafx.scene.control.ScrollPane;
+import org.junit.jupiter.api.Test;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * The readings screen as a technician with a probe in one hand uses it, in a real (headless) window
+ * on the demo's channel line driver: at 1024×600 and 1280×800, in the ordinary look, with larger
+ * text, with high contrast and with both, the probe call, the point to read (in words and lit on
+ * the package drawing) and the value field with its Add reading button stand in the window with the
+ * screen scrolled to its top, and at 1024×600 every pin and every control a finger taps gives it at
+ * least {@link Reach#FINGER} px each way.
+ */
+class ReadingsReachFlowTest extends WindowFlow {
+
+  /** What must be in sight without scrolling while a point is read. */
+  private static final String[] ESSENTIALS = {
+    "#probe-call", "#probe-title", "#reading-display", "#reading-enter"
+  };
+
+  @Test
+  void probeCallPadAndPoint_stayInSightWithoutScrolling_andTargetsAreFingerSized()
+      throws Exception {
+    openLineDriverCase("Channel 1 output pinned negative, no audio");
+    // The rails first (common practice); then the diagnosis asks for a signal pin, and two cards
+    // and the suspects fill the results column.
+    typeReading(VCC);
+    typeReading(VEE);
+    assertThat(text("#probe-call")).startsWith("Probe").isNotEqualTo("Probe U1 pin 4");
+    // The output pin tapped on the drawing (dual-8: pin 1 is out A; DESIGN.md): lit as the point.
+    tap("#package-drawing #pin-1");
+    settle();
+    assertThat(text("#probe-call")).isEqualTo("Probe U1 pin 1");
+    checkEveryLook("DC");
+
+    // The pad on AC volts: the measure's switch and what the pad takes join the pad column.
+    scrollToTop("#pad-kind");
+    tap("#pad-ac");
+    settle();
+    assertThat(visible("#pad-measure")).isTrue();
+    checkEveryLook("AC");
+  }
+
+  /** Runs the checks at 1024×600 and 1280×800 in each look: ordinary, each switch, both. */
+  private void checkEveryLook(String pad) throws Exception {
+    boolean[][] looks = {{false, false}, {true, false}, {false, true}, {true, true}};
+    String[] names = {
+      "ordinary look", "larger text", "high contrast", "larger text, high contrast"
+    };
+    for (int i = 0; i < looks.length; i++) {
+      look(Look.LARGER_TEXT, looks[i][0]);
+      look(Look.HIGH_CONTRAST, looks[i][1]);
+      String name = names[i] + ", pad on " + pad;
+      boolean ordinary = i == 0;
+      atSizes(
+          new int[][] {SMALL, LAPTOP},
+          (size, where) -> {
+            savePicture(
+                java.nio.file.Path.of(
+                    "target",
+                    "screens",
+                    "reach",
+                    where,
+                    name.replaceAll("[^a-zA-Z]+", "-") + ".png"));
+            assertInSightAtTop(name, where);
+            if (ordinary && size == SMALL) {
+              assertFingerSized(name, where);
+            }
+          });
+    }
+    look(Look.LARGER_TEXT, false);
+    look(Look.HIGH_CONTRAST, false);
+  }
+
+  /**
+   * Scrolls the readings screen to its top and fails unless the probe call, the point in words, the
+   * lit pin on the drawing, the value field and Add reading all stand in the window.
+   */
+  private void assertInSightAtTop(String look, String where) throws Exception {
+    fx(
+        () -> {
+          ((ScrollPane) robot.lookup("#scroll-readings").query()).setVvalue(0);
+          return null;
+        });
+    relayout();
+    double screenScroll =
+        fx(() -> ((ScrollPane) robot.lookup("#scroll-readings").query()).getVvalue());
+    assertThat(screenScroll).as("the readings screen's scroll").isZero();
+    List<String> missing = new ArrayList<>();
+    List<String> queries = new ArrayList<>(List.of(ESSENTIALS));
+    int lit =
+        fx(() -> robot.lookup("#package-drawing").queryAs(PackageDrawing.class).highlighted());
+    assertThat(lit).as("the pin to probe is lit on the drawing").isPositive();
+    queries.add("#package-drawing #pin-" + lit);
+    for (String query : queries) {
+      String why =
+          fx(
+              () -> {
+                Node node = robot.lookup(query).query();
+                return Reach.outOfSight(
+                    node, window.getScene().getWidth(), window.getScene().getHeight());
+              });
+      if (!why.isEmpty()) {
+        missing.add(query + " " + why);
+      }
+    }
+    assertThat(missing)
+        .as("out of sight without scrolling on the readings screen at %s, %s", where, look)
+        .isEmpty();
+  }
+
+  /**
+   * Fails when a pin of the package drawing or a control of the readings screen gives a finger less
+   * than {@link Reach#FINGER} px each way (about 48 px, 9 mm: common practice for touch targets).
+   */
+  private void assertFingerSized(String look, String where) throws Exception {
+    List<String> small =
+        fx(
+            () -> {
+              List<String> found = new ArrayList<>();
+              for (Node pin : pins()) {
+                if (!Reach.fingerSized(pin)) {
+                  found.add("#" + pin.getId() + " is " + Reach.size(pin));
+                }
+              }
+              return Reach.smallControls(robot.lookup("#screen-readings").query(), found);
+            });
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(fx(this::pins)).as("the dual-8's pins on the drawing").hasSize(8);
+    assertThat(small)
+        .as("touch targets under %s px on the readings screen at %s, %s", Reach.FINGER, where, look)
+        .isEmpty();
+  }
+
+  /** The pins of the package drawing, each a touch target of its own (ids pin-1, pin-2, …). */
+  private java.util.Set<Node> pins() {
+    return robot
+        .lookup("#package-drawing")
+        .lookup((Node n) -> n.getId() != null && n.getId().matches("pin-\\d+"))
+        .queryAll();
+  }
+}
