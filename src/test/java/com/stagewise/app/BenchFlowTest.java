@@ -210,9 +210,9 @@ class BenchFlowTest extends WindowFlow {
    * Shows the screen at each window size, fails when any text on it is cut short (shown with an
    * ellipsis, a label narrower than a word, a drawing's value shortened) or when it needs a
    * sideways scroll bar, and saves a picture at each size: 1280×800 under the screen's name, the
-   * others in a folder named for their size. At 1024×600 and 1280×800 the same checks run with
-   * larger text and with high contrast (the settings' switches for a dim bench), their pictures in
-   * folders named for the look.
+   * others in a folder named for their size. At every size the same checks run with larger text,
+   * with high contrast (the settings' switches for a dim bench) and with both at once, their
+   * pictures in folders named for the look.
    */
   private void shoot(String name) throws Exception {
     atSizes(
@@ -228,15 +228,13 @@ class BenchFlowTest extends WindowFlow {
           if (size == SMALL && name.equals("06-readings") && Boolean.getBoolean("screenshots")) {
             savePicture(screensFolder().resolve("10-readings-1024x600.png"));
           }
-          if (size != DESK) {
-            inEveryLook(
-                name,
-                where,
-                look -> {
-                  assertNothingCut(name + " with " + look, where);
-                  assertNoSidewaysScroll(name + " with " + look, where);
-                });
-          }
+          inEveryLook(
+              name,
+              where,
+              look -> {
+                assertNothingCut(name + " with " + look, where);
+                assertNoSidewaysScroll(name + " with " + look, where);
+              });
         });
   }
 }

@@ -67,7 +67,7 @@ class CloseOutFlowTest extends WindowFlow {
     // The output (dual-8 pin 1, DESIGN.md) read on the meter's AC volts range, RMS: 0.33 V, as a
     // healthy gain of −R2/R1 = −4.7 gives for 0.1 V peak in (0.47 V peak, over √2 for RMS:
     // textbook), so that the check after the repair reads it again in AC RMS.
-    robot.clickOn("#package-drawing #pin-1");
+    tap("#package-drawing #pin-1");
     settle();
     scrollToTop("#pad-kind");
     robot.clickOn("#pad-ac");

@@ -121,7 +121,7 @@ class PowerOffFlowTest extends WindowFlow {
     shoot("13-readings-power-off-done");
 
     // On the schematic a part's lead is a point of its own: R1's lead on IN, tapped.
-    robot.clickOn("#show-schematic");
+    tap("#show-schematic");
     settle();
     Node lead = robot.lookup((Node n) -> "point-R1.1".equals(n.getId())).query();
     ScreenScroll.intoView(lead);

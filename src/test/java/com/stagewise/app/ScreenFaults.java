@@ -96,9 +96,13 @@ final class ScreenFaults {
    * drawing paints shortened with its own ellipsis (a pin's value in the package drawing).
    */
   static List<String> cutTexts(Node node, List<String> cut) {
-    if (!node.isVisible() || node instanceof TextInputControl) {
-      // What a field holds is the technician's own typing, scrolled within the field.
+    if (!node.isVisible()) {
       return cut;
+    }
+    if (node instanceof TextInputControl field) {
+      // What a field holds is the technician's own typing, scrolled within the field; its hint
+      // (the prompt shown while it is empty) is ours, and must show whole.
+      return cutPrompt(field, cut);
     }
     if (node instanceof Text drawn
         && !(drawn.getParent() instanceof Labeled)
@@ -158,6 +162,62 @@ final class ScreenFaults {
       }
     }
     return cut;
+  }
+
+  /**
+   * Adds the field's hint when the field is empty and shows its prompt text cut: wider than the
+   * room the field gives its text (its clip, which leaves out the padding and any button inside the
+   * field, as the clearable serial field's cross).
+   */
+  static List<String> cutPrompt(TextInputControl field, List<String> cut) {
+    String prompt = field.getPromptText();
+    if (prompt == null
+        || prompt.isBlank()
+        || (field.getText() != null && !field.getText().isEmpty())
+        || field.getWidth() <= 0) {
+      return cut;
+    }
+    for (Text shown : promptNodes(field, prompt, new java.util.ArrayList<>())) {
+      Node holder = shown.getParent();
+      double room =
+          holder != null && holder.getClip() != null
+              ? holder.getClip().getLayoutBounds().getWidth()
+              : field.getWidth() - field.snappedLeftInset() - field.snappedRightInset();
+      double needs = shown.getLayoutBounds().getWidth();
+      if (field instanceof javafx.scene.control.TextArea) {
+        // A text area wraps its hint: only a word wider than the area is cut.
+        needs = 0;
+        for (String word : prompt.split("\\s+")) {
+          Text measured = new Text(word);
+          measured.setFont(shown.getFont());
+          needs = Math.max(needs, measured.getLayoutBounds().getWidth());
+        }
+      }
+      if (needs > room + 0.5) {
+        cut.add(
+            (field.getId() == null ? field.getClass().getSimpleName() : "#" + field.getId())
+                + " shows its hint \""
+                + prompt
+                + "\" cut ("
+                + Math.round(needs)
+                + " px in "
+                + Math.round(room)
+                + " px)");
+      }
+    }
+    return cut;
+  }
+
+  private static List<Text> promptNodes(Node node, String prompt, List<Text> found) {
+    if (node instanceof Text text && prompt.equals(text.getText()) && text.isVisible()) {
+      found.add(text);
+    }
+    if (node instanceof Parent parent) {
+      for (Node child : parent.getChildrenUnmodifiable()) {
+        promptNodes(child, prompt, found);
+      }
+    }
+    return found;
   }
 
   static String name(Labeled labeled) {

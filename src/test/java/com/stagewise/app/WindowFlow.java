@@ -373,19 +373,31 @@ abstract class WindowFlow {
   }
 
   /**
-   * Turns each look of the settings (larger text, high contrast) on in turn, saves a picture of the
-   * window under target/screens/LOOK/WHERE/NAME.png, runs {@code check} (given the look's name to
-   * put in its messages) and turns the look off again.
+   * Turns each look of the settings (larger text, high contrast) on in turn, then both at once,
+   * saves a picture of the window under target/screens/LOOK/WHERE/NAME.png, runs {@code check}
+   * (given the look's name to put in its messages) and turns the look off again.
    */
   void inEveryLook(String name, String where, InLook check) throws Exception {
-    for (Look look : Look.values()) {
-      look(look, true);
-      String folder = look.name().toLowerCase(Locale.ROOT).replace('_', '-');
+    List<List<Look>> looks =
+        List.of(
+            List.of(Look.LARGER_TEXT),
+            List.of(Look.HIGH_CONTRAST),
+            List.of(Look.LARGER_TEXT, Look.HIGH_CONTRAST));
+    for (List<Look> on : looks) {
+      for (Look look : on) {
+        look(look, true);
+      }
+      String folder =
+          String.join(
+              "-",
+              on.stream().map(l -> l.name().toLowerCase(Locale.ROOT).replace('_', '-')).toList());
       try {
         savePicture(Path.of("target", "screens", folder, where, name + ".png"));
         check.check(folder);
       } finally {
-        look(look, false);
+        for (Look look : on) {
+          look(look, false);
+        }
       }
     }
   }

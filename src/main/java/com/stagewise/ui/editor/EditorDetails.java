@@ -21,6 +21,7 @@ import javafx.scene.control.ToggleButton;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
 /**
@@ -413,6 +414,10 @@ final class EditorDetails {
     Button ok = new Button("OK");
     ok.setId(id + "-ok");
     ok.setOnAction(e -> commit.accept(text.getText()));
+    // OK keeps its word: bound, as a value set in code loses to the theme's 48 px minimum width,
+    // and the details are built anew after the window's own pass over the buttons.
+    ok.minWidthProperty()
+        .bind(new javafx.beans.property.SimpleDoubleProperty(Region.USE_PREF_SIZE));
     return new VBox(4, small(label), new HBox(6, text, ok));
   }
 
@@ -443,6 +448,8 @@ final class EditorDetails {
     fresh.setId(id + "-new-net");
     fresh.setOnAction(e -> choose.accept(nextNumbered("N", model.draft())));
     String now = current == null || current.isEmpty() ? "not connected" : current;
-    return new VBox(4, small(label + ": " + now), nets, new HBox(6, fresh, name, use));
+    // A flow, not a row: with larger text in a 1024 px window the three wrap rather than squeeze
+    // "New net" and "Use" to an ellipsis.
+    return new VBox(4, small(label + ": " + now), nets, new FlowPane(6, 6, fresh, name, use));
   }
 }

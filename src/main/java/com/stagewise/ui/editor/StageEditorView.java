@@ -142,13 +142,16 @@ public final class StageEditorView {
     Button empty = new Button("Start empty");
     empty.setId("editor-start-empty");
     empty.setOnAction(e -> model.startEmpty("New stage", model.draft().board()));
-    HBox spacer = new HBox();
-    HBox.setHgrow(spacer, Priority.ALWAYS);
     refusal.getStyleClass().add("editor-refusal");
     refusal.setWrapText(true);
     refusal.setId("editor-refusal");
-    HBox bar = new HBox(8, title, spacer, empty, undo, redo, save, close);
+    // The buttons flow beside the title where they fit and onto rows of their own where they do
+    // not (larger text in a 1024 px window), rather than squeezing the title or passing the edge.
+    title.setWrapText(true);
+    javafx.scene.layout.FlowPane bar =
+        new javafx.scene.layout.FlowPane(8, 6, title, empty, undo, redo, save, close);
     bar.setAlignment(Pos.CENTER_LEFT);
+    bar.prefWrapLengthProperty().bind(root.widthProperty().subtract(24));
     return new VBox(6, bar, refusal);
   }
 

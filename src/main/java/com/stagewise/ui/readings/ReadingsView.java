@@ -2,7 +2,6 @@ package com.stagewise.ui.readings;
 
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.Stage;
-import com.stagewise.diagnosis.Suspect;
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.drawing.PackageDrawing;
 import com.stagewise.ui.drawing.SchematicDrawing;
@@ -18,8 +17,6 @@ import javafx.scene.control.Button;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
-import javafx.scene.control.ListView;
-import javafx.scene.control.ProgressIndicator;
 import javafx.scene.control.Toggle;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
@@ -37,7 +34,6 @@ public final class ReadingsView {
   private final VBox root = new VBox(8);
   private final PackageDrawing drawing = new PackageDrawing();
   private final SchematicDrawing schematic = new SchematicDrawing();
-  private final VBox suspectsBox = new VBox(6);
   private final javafx.scene.control.ScrollPane probeScroll = new javafx.scene.control.ScrollPane();
   private String shownPackage = "";
   private Stage schematicStage;
@@ -74,7 +70,7 @@ public final class ReadingsView {
     // Its keys need about 340 px; what is left over goes to the results.
     pad.setPrefWidth(360);
     pad.setMaxWidth(396);
-    VBox results = resultsPanel();
+    VBox results = new ResultsColumn(model, bench).node();
     results.setMinWidth(276);
     // A set preferred width: a long text in the results must not take the probe column's room
     // (HBox shrinks every column alike from its preferred width); what is left over is shared
@@ -90,9 +86,7 @@ public final class ReadingsView {
     mode.toProperty().addListener((o, was, now) -> showProbe(model.probeProperty().get()));
     mode.activeProperty().addListener((o, was, now) -> showProbe(model.probeProperty().get()));
     bench.readings().addListener((ListChangeListener<Reading>) c -> showPinTexts());
-    model.topSuspects().addListener((ListChangeListener<Suspect>) c -> showSuspects());
     showProbe(model.probeProperty().get());
-    showSuspects();
   }
 
   /** Returns the screen's root node. */
@@ -175,8 +169,12 @@ public final class ReadingsView {
     // Pins on the package; nets and part leads (R2.1, D1.a) on the schematic.
     onPackage.setOnAction(e -> showSchematic(false, onPackage, onSchematic));
     onSchematic.setOnAction(e -> showSchematic(true, onPackage, onSchematic));
-    onPackage.setMinWidth(Region.USE_PREF_SIZE);
-    onSchematic.setMinWidth(Region.USE_PREF_SIZE);
+    // Bound, not set: the theme's 48 px minimum width would win over a value set in code, and the
+    // window's own pass over the buttons does not reach into the column's scrolling part.
+    for (javafx.scene.control.ToggleButton b : List.of(onPackage, onSchematic)) {
+      b.minWidthProperty()
+          .bind(new javafx.beans.property.SimpleDoubleProperty(Region.USE_PREF_SIZE));
+    }
     Label tapHint = new Label("Tap a pin, a wire or a part's lead");
     tapHint.getStyleClass().add("hint");
     tapHint.setWrapText(true);
@@ -256,13 +254,15 @@ public final class ReadingsView {
             suggested,
             poweredMore);
     more.getStyleClass().add("probe-more");
+    // Never squeezed below its words: where the column is short, it scrolls.
+    more.setMinHeight(Region.USE_PREF_SIZE);
     probeScroll.setContent(more);
     probeScroll.setId("probe-scroll");
     probeScroll.setFitToWidth(true);
     probeScroll.setFitToHeight(true);
     probeScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
     probeScroll.setVbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.AS_NEEDED);
-    probeScroll.setMinHeight(120);
+    probeScroll.setMinHeight(96);
     VBox.setVgrow(probeScroll, Priority.ALWAYS);
     probeScroll
         .viewportBoundsProperty()
@@ -373,135 +373,6 @@ public final class ReadingsView {
     }
   }
 
-  private VBox resultsPanel() {
-    VBox box = new VBox(8);
-    box.getStyleClass().add("panel");
-    Label heading = new Label("What the readings show");
-    heading.getStyleClass().add("section-title");
-    ProgressIndicator thinking = new ProgressIndicator();
-    thinking.setPrefSize(28, 28);
-    thinking.visibleProperty().bind(model.thinkingProperty());
-    HBox head = new HBox(10, heading, thinking);
-    head.setAlignment(Pos.CENTER_LEFT);
-    Label verdict = new Label();
-    verdict.setId("readings-verdict");
-    verdict.getStyleClass().add("verdict");
-    verdict.setWrapText(true);
-    verdict.textProperty().bind(model.verdictProperty());
-    Label chain = new Label();
-    chain.setId("readings-chain");
-    chain.setWrapText(true);
-    chain.getStyleClass().add("hint");
-    chain.textProperty().bind(model.chainProperty());
-    chain.visibleProperty().bind(model.chainProperty().isNotEmpty());
-    chain.managedProperty().bind(chain.visibleProperty());
-    suspectsBox.setId("readings-suspects");
-    ListView<ReadingRow> list = new ListView<>(model.rows());
-    list.setId("readings-list");
-    VBox.setVgrow(list, Priority.ALWAYS);
-    // In a small window the cards give up their room first, down to about two rows.
-    list.setMinHeight(96);
-    // Its preferred height small too: the verdict and the suspects above take what they need
-    // first, the cards grow into what is left.
-    list.setPrefHeight(120);
-    list.setCellFactory(v -> new ReadingCard());
-    // Another case or stage: nothing stays chosen from the last one.
-    model
-        .rows()
-        .addListener(
-            (ListChangeListener<ReadingRow>) c -> list.getSelectionModel().clearSelection());
-    Label empty =
-        new Label(
-            "No readings yet. Put the probe where the left side says, type what the meter shows on"
-                + " the pad and tap Add reading. The suspects and the next probe follow each"
-                + " reading.");
-    empty.setWrapText(true);
-    empty.getStyleClass().add("hint");
-    empty.setPadding(new javafx.geometry.Insets(12));
-    list.setPlaceholder(empty);
-    Button all = new Button("See all suspects");
-    all.setId("show-suspects");
-    all.getStyleClass().add("primary");
-    all.setMaxWidth(Double.MAX_VALUE);
-    all.disableProperty().bind(Bindings.isEmpty(bench.readings()));
-    all.setOnAction(e -> model.showSuspects());
-    // The verdict and the top suspects scroll in their own part where a small window is short of
-    // room (after the cards have given theirs), never the whole screen.
-    VBox summary = new VBox(8, verdict, chain, suspectsBox);
-    javafx.scene.control.ScrollPane summaryScroll = new javafx.scene.control.ScrollPane(summary);
-    summaryScroll.setId("readings-summary");
-    summaryScroll.setFitToWidth(true);
-    summaryScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
-    summaryScroll.setVbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.AS_NEEDED);
-    summaryScroll.setMinHeight(60);
-    VBox.setVgrow(summaryScroll, Priority.SOMETIMES);
-    box.getChildren().addAll(head, summaryScroll, list, cardActions(list), undoBar(), all);
-    return box;
-  }
-
-  /** What can be done to the reading whose card was tapped: correct it or strike it out. */
-  private Node cardActions(ListView<ReadingRow> list) {
-    Label what = new Label();
-    what.setId("reading-chosen");
-    what.setWrapText(true);
-    what.setMinHeight(Region.USE_PREF_SIZE);
-    Button correct = new Button("Correct");
-    correct.setId("reading-correct");
-    Button strike = new Button("Strike out");
-    strike.setId("reading-strike");
-    Button restore = new Button("Restore");
-    restore.setId("reading-restore");
-    var chosen = list.getSelectionModel().selectedItemProperty();
-    correct.setOnAction(e -> model.correct(chosen.get()));
-    strike.setOnAction(e -> model.strike(chosen.get()));
-    restore.setOnAction(e -> model.restore(chosen.get()));
-    for (Button b : List.of(correct, strike, restore)) {
-      b.setMinWidth(Region.USE_PREF_SIZE);
-    }
-    Region spring = new Region();
-    HBox.setHgrow(spring, Priority.ALWAYS);
-    HBox.setHgrow(what, Priority.SOMETIMES);
-    HBox bar = new HBox(8, what, spring, correct, strike, restore);
-    bar.setAlignment(Pos.CENTER_LEFT);
-    bar.getStyleClass().add("card-actions");
-    bar.visibleProperty().bind(chosen.isNotNull());
-    bar.managedProperty().bind(bar.visibleProperty());
-    chosen.addListener(
-        (o, was, row) -> {
-          boolean struck = row != null && row.struck();
-          what.setText(
-              row == null ? "" : row.title() + ":  " + ReadingCard.valueText(row.reading()));
-          correct.setVisible(!struck);
-          correct.setManaged(!struck);
-          strike.setVisible(!struck);
-          strike.setManaged(!struck);
-          restore.setVisible(struck);
-          restore.setManaged(struck);
-        });
-    return bar;
-  }
-
-  /** The last strike, restore or correction, with its undo. */
-  private Node undoBar() {
-    Label what = new Label();
-    what.setId("reading-undo-text");
-    what.setWrapText(true);
-    what.setMinHeight(Region.USE_PREF_SIZE);
-    what.textProperty().bind(model.undoTextProperty());
-    Button undo = new Button("Undo");
-    undo.setId("reading-undo");
-    undo.setMinWidth(Region.USE_PREF_SIZE);
-    undo.setOnAction(e -> model.undo());
-    Region spring = new Region();
-    HBox.setHgrow(spring, Priority.ALWAYS);
-    HBox bar = new HBox(8, what, spring, undo);
-    bar.setAlignment(Pos.CENTER_LEFT);
-    bar.getStyleClass().add("undo-bar");
-    bar.visibleProperty().bind(model.undoTextProperty().isNotEmpty());
-    bar.managedProperty().bind(bar.visibleProperty());
-    return bar;
-  }
-
   /** Says which reading the pad is correcting, with a way out. */
   private Node correctingBar() {
     Label what = new Label();
@@ -520,34 +391,5 @@ public final class ReadingsView {
     bar.visibleProperty().bind(model.correctingTextProperty().isNotEmpty());
     bar.managedProperty().bind(bar.visibleProperty());
     return bar;
-  }
-
-  private void showSuspects() {
-    suspectsBox.getChildren().clear();
-    int rank = 1;
-    for (Suspect s : model.topSuspects()) {
-      Label name = new Label(rank++ + ".  " + Words.fault(s.fault()));
-      name.getStyleClass().add("strong");
-      name.setMinWidth(0);
-      // A long name wraps rather than losing its end ("U1 pin 1 lifted (open joint)").
-      name.setWrapText(true);
-      name.setMinHeight(Region.USE_PREF_SIZE);
-      Region bar = new Region();
-      bar.getStyleClass().add("suspect-bar");
-      bar.setPrefWidth(Math.max(2, 90 * s.probability()));
-      bar.setMinWidth(Region.USE_PREF_SIZE);
-      Region track = new Region();
-      track.getStyleClass().add("suspect-bar-track");
-      track.setPrefWidth(90 * (1 - s.probability()));
-      track.setMinWidth(Region.USE_PREF_SIZE);
-      HBox barRow = new HBox(0, bar, track);
-      barRow.setAlignment(Pos.CENTER_LEFT);
-      Label pct = new Label(Words.percent(s.probability()));
-      pct.getStyleClass().add("suspect-pct");
-      pct.setWrapText(false);
-      HBox gauge = new HBox(10, barRow, pct);
-      gauge.setAlignment(Pos.CENTER_RIGHT);
-      suspectsBox.getChildren().add(new SuspectLine(name, gauge));
-    }
   }
 }

@@ -176,6 +176,11 @@ public final class BenchWindow {
       // A wrapped label gets the lines it needs.
       label.setMinHeight(Region.USE_PREF_SIZE);
     }
+    if (node instanceof ScrollPane pane && pane.getContent() != null) {
+      // A part of a screen that scrolls on its own (the readings screen's probe column): its
+      // content is not among the pane's children until the pane is first shown.
+      keepButtonsWhole(pane.getContent());
+    }
     if (node instanceof Parent parent) {
       for (Node child : parent.getChildrenUnmodifiable()) {
         keepButtonsWhole(child);

@@ -92,7 +92,7 @@ public final class StartView {
     title.getStyleClass().add("section-title");
     serialField.setId("serial");
     serialField.getStyleClass().add("big-field");
-    serialField.setPromptText("Serial, e.g. AM-2041");
+    serialField.setPromptText("e.g. AM-2041");
     serialField.textProperty().bindBidirectional(model.serialProperty());
     serialField.setOnAction(e -> model.search());
     // Live search: the list follows the typing (on-screen keypad or keyboard) after a short pause,
@@ -268,7 +268,7 @@ public final class StartView {
     symptomTitle.getStyleClass().add("section-title");
     TextField symptom = new TextField();
     symptom.setId("symptom");
-    symptom.setPromptText("e.g. no sound from the left channel");
+    symptom.setPromptText("e.g. no sound");
     symptom.textProperty().bindBidirectional(model.symptomProperty());
     symptom.setOnAction(e -> model.openCase());
     HBox.setHgrow(symptom, Priority.ALWAYS);
