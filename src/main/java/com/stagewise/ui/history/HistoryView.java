@@ -85,7 +85,7 @@ public final class HistoryView {
     TextField field = new TextField();
     field.setId("history-query");
     field.getStyleClass().add("big-field");
-    field.setPromptText("Serial, board, fault, part or words");
+    field.setPromptText("Serial, part or words");
     field.textProperty().bindBidirectional(model.queryProperty());
     field.setOnAction(e -> model.search());
     HBox.setHgrow(field, Priority.ALWAYS);

@@ -50,7 +50,8 @@ class PackageGeometryTest {
   }
 
   @ParameterizedTest
-  @CsvSource({"8, 370, 330", "14, 370, 480", "14, 350, 440", "8, 900, 700"})
+  // A 14-pin package needs 7 rows of at least 58 px plus 70 px above and below: 476 px.
+  @CsvSource({"8, 370, 330", "14, 370, 480", "14, 350, 476", "8, 900, 700"})
   void fittedToARoom_keepsTargetsAt48PixelsAndFitsWhereItCan(
       int pins, double width, double height) {
     PackageGeometry g = PackageGeometry.of(pins, width, height);
@@ -61,6 +62,25 @@ class PackageGeometryTest {
       assertThat(place.pad().right()).isLessThanOrEqualTo(g.width());
       assertThat(place.text().x()).isGreaterThanOrEqualTo(0);
       assertThat(place.text().right()).isLessThanOrEqualTo(g.width());
+    }
+  }
+
+  @ParameterizedTest
+  @EnumSource(PackageType.class)
+  void hitRows_coverTheWholePitch_soATapBetweenTwoPinsTextsChoosesOne(PackageType type) {
+    PackageGeometry g = PackageGeometry.of(type.pinCount(), 330, 200);
+    for (PackageGeometry.PinPlace a : g.pins()) {
+      // Taller than the pad drawn: a drawing scaled to 0.8 still leaves a 46 px row, above the
+      // 44 px that common practice allows for a touch target (48 px, 9 mm, preferred).
+      assertThat(a.hit().h()).isGreaterThanOrEqualTo(58);
+      assertThat(a.hit().h()).isGreaterThan(a.pad().h());
+      assertThat(g.pinAt(a.hit().cx(), a.hit().y() + 1)).contains(a.pin());
+      for (PackageGeometry.PinPlace b : g.pins()) {
+        if (a != b) {
+          Box inner = new Box(a.hit().x(), a.hit().y() + 0.5, a.hit().w(), a.hit().h() - 1);
+          assertThat(inner.overlaps(b.hit())).as("rows %d and %d", a.pin(), b.pin()).isFalse();
+        }
+      }
     }
   }
 
