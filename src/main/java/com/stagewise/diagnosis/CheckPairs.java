@@ -19,6 +19,8 @@ final class CheckPairs {
   private final PowerOff healthy;
   private final List<String> candidates;
   private final List<String[]> adjacentPins;
+  private final List<String[]> all;
+  private final List<String> keys;
 
   CheckPairs(Stage stage, PowerOff healthy) {
     this.healthy = healthy;
@@ -39,6 +41,12 @@ final class CheckPairs {
       }
     }
     this.adjacentPins = List.copyOf(adjacent);
+    this.all = every();
+    List<String> allKeys = new ArrayList<>(all.size());
+    for (String[] pair : all) {
+      allKeys.add(key(pair[0], pair[1]));
+    }
+    this.keys = List.copyOf(allKeys);
   }
 
   /** Returns one key for a pair of points whichever way round they are named. */
@@ -47,22 +55,39 @@ final class CheckPairs {
   }
 
   /**
-   * Returns the pairs, less those already read.
+   * Returns the pairs less those already read, as indices into {@link #all()} in its order.
    *
    * @param taken the pairs already read, each as its two points on the faulted stage
    */
-  List<String[]> pairs(List<String[]> taken) {
+  int[] indices(List<String[]> taken) {
     Set<String> done = new HashSet<>();
     for (String[] r : taken) {
       done.add(key(r[0], r[1]));
     }
+    int[] out = new int[all.size()];
+    int n = 0;
+    for (int k = 0; k < out.length; k++) {
+      if (!done.contains(keys.get(k))) {
+        out[n++] = k;
+      }
+    }
+    return java.util.Arrays.copyOf(out, n);
+  }
+
+  /** Returns every pair when nothing has been read yet (do not change the arrays). */
+  List<String[]> all() {
+    return all;
+  }
+
+  /** Every pair before any reading is taken, found once (a pair of one key is listed once). */
+  private List<String[]> every() {
     List<String[]> pairs = new ArrayList<>();
     Set<String> seenNets = new HashSet<>();
     for (int i = 0; i < candidates.size(); i++) {
+      String a = candidates.get(i);
+      String netA = healthy.node(a).orElseThrow();
       for (int j = i + 1; j < candidates.size(); j++) {
-        String a = candidates.get(i);
         String b = candidates.get(j);
-        String netA = healthy.node(a).orElseThrow();
         String netB = healthy.node(b).orElseThrow();
         boolean pinCheck = !a.equals(netA) || !b.equals(netB);
         if (netA.equals(netB) && !pinCheck) {
@@ -72,17 +97,13 @@ final class CheckPairs {
         if (pinCheck && !netA.equals(netB)) {
           continue;
         }
-        if (done.contains(key(a, b)) || !seenNets.add(key(a, b))) {
+        if (!seenNets.add(key(a, b))) {
           continue;
         }
         pairs.add(new String[] {a, b});
       }
     }
-    for (String[] pins : adjacentPins) {
-      if (!done.contains(key(pins[0], pins[1]))) {
-        pairs.add(pins);
-      }
-    }
-    return pairs;
+    pairs.addAll(adjacentPins);
+    return List.copyOf(pairs);
   }
 }

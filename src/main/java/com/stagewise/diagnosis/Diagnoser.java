@@ -315,6 +315,16 @@ public final class Diagnoser {
     for (int i = 0; i < figures.length; i++) {
       figures[i] = table.of(bound.get(i));
     }
+    // Every prediction's log-likelihood, reading by reading over all predictions at once: each
+    // prediction's sum still adds its terms in the readings' order, so the numbers are the same.
+    double[] sums = table.logWeights().clone();
+    for (int i = 0; i < figures.length; i++) {
+      double w = weight[i];
+      double[] f = figures[i];
+      for (int k = 0; k < sums.length; k++) {
+        sums[k] += w * f[k];
+      }
+    }
     double maxLog = Double.NEGATIVE_INFINITY;
     for (int index = 0; index < hypotheses.size(); index++) {
       Hypothesis h = hypotheses.get(index);
@@ -325,10 +335,7 @@ public final class Diagnoser {
       int bestIndex = 0;
       for (int v = 0; v < n; v++) {
         Prediction p = h.predictions.get(v);
-        double sum = Math.log(p.weight());
-        for (int i = 0; i < bound.size(); i++) {
-          sum += weight[i] * figures[i][at + v];
-        }
+        double sum = sums[at + v];
         if (!ohms.isEmpty()) {
           sum += ohmsChecks.logLikelihood(h.fault, p.value(), ohms, meter);
         }

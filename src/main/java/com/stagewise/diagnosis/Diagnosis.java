@@ -40,7 +40,13 @@ public record Diagnosis(
       requireFinite(s.probability(), "the probability of " + s.fault());
       s.estimatedValue().ifPresent(v -> requireFinite(v, "the estimated value of " + s.fault()));
       s.predicted()
-          .forEach((at, v) -> requireFinite(v, "the volts " + s.fault() + " gives at " + at));
+          .forEach(
+              (at, v) -> {
+                // The message only when it is needed: a suspect has a value at every point.
+                if (!Double.isFinite(v)) {
+                  throw notFinite("the volts " + s.fault() + " gives at " + at);
+                }
+              });
       requireText(s.why());
     }
     for (ProbeAdvice p : nextProbes) {
@@ -60,7 +66,8 @@ public record Diagnosis(
   }
 
   private static void requireText(String text) {
-    if (NOT_A_NUMBER.matcher(text).find()) {
+    // The pattern can only match where one of its words is: most texts have neither.
+    if ((text.contains("NaN") || text.contains("Infinity")) && NOT_A_NUMBER.matcher(text).find()) {
       throw notFinite("a number in the explanation");
     }
   }

@@ -201,25 +201,17 @@ final class Explainer {
       text.append(" (").append(best.label()).append(')');
     }
     text.append('.');
-    List<String> explains = new ArrayList<>();
-    List<String> misses = new ArrayList<>();
+    List<Evidence.Bound> explains = new ArrayList<>();
+    List<Evidence.Bound> misses = new ArrayList<>();
     for (Evidence.Bound r : readings) {
-      String item =
-          String.format(
-                  Locale.ROOT,
-                  "%s %s at %s, where this fault gives %s",
-                  r.ac() ? "AC" : "",
-                  acVolts(r, r.value()),
-                  pointWords(r),
-                  acVolts(r, Evidence.mean(best, r)))
-              .trim();
-      (Evidence.score(best, r) <= 3 ? explains : misses).add(item);
+      (Evidence.score(best, r) <= 3 ? explains : misses).add(r);
     }
+    // Only the readings listed are written out (formatting numbers is most of a re-rank's texts).
     if (!explains.isEmpty()) {
-      text.append(" Explains ").append(String.join("; ", limit(explains))).append('.');
+      text.append(" Explains ").append(String.join("; ", limit(explains, best))).append('.');
     }
     if (!misses.isEmpty()) {
-      text.append(" Does not explain ").append(String.join("; ", limit(misses))).append('.');
+      text.append(" Does not explain ").append(String.join("; ", limit(misses, best))).append('.');
     }
     Integer seen = shopCounts.get(fault.id());
     if (seen != null && seen > 0) {
@@ -264,13 +256,29 @@ final class Explainer {
     return Wording.point(r.at()) + " (" + role + ")";
   }
 
-  private static List<String> limit(List<String> items) {
-    if (items.size() <= 6) {
-      return items;
+  /** Returns the readings in words, the first five and a count of the rest when over six. */
+  private List<String> limit(List<Evidence.Bound> items, Prediction best) {
+    int shown = items.size() <= 6 ? items.size() : 5;
+    List<String> out = new ArrayList<>(shown + 1);
+    for (Evidence.Bound r : items.subList(0, shown)) {
+      out.add(reads(r, best));
     }
-    List<String> out = new ArrayList<>(items.subList(0, 5));
-    out.add("and " + (items.size() - 5) + " more");
+    if (shown < items.size()) {
+      out.add("and " + (items.size() - 5) + " more");
+    }
     return out;
+  }
+
+  /** Returns one reading beside what a suspect's prediction gives there, in words. */
+  private String reads(Evidence.Bound r, Prediction best) {
+    return String.format(
+            Locale.ROOT,
+            "%s %s at %s, where this fault gives %s",
+            r.ac() ? "AC" : "",
+            acVolts(r, r.value()),
+            pointWords(r),
+            acVolts(r, Evidence.mean(best, r)))
+        .trim();
   }
 
   /** Returns the fault in plain words, e.g. "R7 drifted high: reads as about 180k, marked 47k". */

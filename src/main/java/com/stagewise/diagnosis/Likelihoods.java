@@ -19,6 +19,7 @@ final class Likelihoods {
   private final Evidence evidence;
   private final int[] first;
   private final int total;
+  private final double[] logWeights;
   private final Map<Evidence.Bound, double[]> byReading = new LinkedHashMap<>(64, 0.75f, true);
 
   Likelihoods(List<Diagnoser.Hypothesis> hypotheses, Evidence evidence) {
@@ -31,6 +32,26 @@ final class Likelihoods {
       count += hypotheses.get(h).predictions.size();
     }
     this.total = count;
+    this.logWeights = new double[count];
+    int i = 0;
+    for (Diagnoser.Hypothesis h : hypotheses) {
+      for (Prediction p : h.predictions) {
+        logWeights[i++] = Math.log(p.weight());
+      }
+    }
+  }
+
+  /** Returns the number of predictions, all hypotheses together. */
+  int total() {
+    return total;
+  }
+
+  /**
+   * Returns the logarithm of every prediction's weight within its hypothesis, in the order of
+   * {@link #of}. The array is shared: do not change it.
+   */
+  double[] logWeights() {
+    return logWeights;
   }
 
   /** Returns the index of hypothesis h's first prediction in the arrays of {@link #of}. */

@@ -57,13 +57,41 @@ final class OhmsChecks {
   private final Stage stage;
   private final PowerOff healthy;
   private final CheckPairs checkPairs;
-  private final Map<String, PowerOff> networks = new HashMap<>();
+
+  /** Each fault's network (a drifted part's per value), with its readings at the check pairs. */
+  private final Map<Object, Faulted> networks = new HashMap<>();
+
+  /** The check pairs' points as found on a faulted stage, by the pair's index. */
+  private final String[][] onFaultedPairs;
+
+  /** The resistors across each check pair ("R2"), by the pair's index, found when first asked. */
+  private final String[] acrossPairs;
 
   OhmsChecks(Stage stage) {
     this.stage = stage;
     this.healthy = PowerOff.of(stage);
     this.checkPairs = new CheckPairs(stage, healthy);
+    List<String[]> all = checkPairs.all();
+    this.onFaultedPairs = new String[all.size()][];
+    for (int k = 0; k < onFaultedPairs.length; k++) {
+      onFaultedPairs[k] = new String[] {onFaulted(all.get(k)[0]), onFaulted(all.get(k)[1])};
+    }
+    this.acrossPairs = new String[all.size()];
   }
+
+  /** A fault's power-off network and what it reads at each check pair, filled as asked. */
+  private static final class Faulted {
+    final PowerOff network;
+    final OhmsPrediction[] atPair;
+
+    Faulted(PowerOff network, int pairs) {
+      this.network = network;
+      this.atPair = new OhmsPrediction[pairs];
+    }
+  }
+
+  /** A drifted part's network is one per value (the value's bits, so NaN is one value). */
+  private record Drifted(String fault, long value) {}
 
   /** Returns whether a point names a net, package pin or part lead of the stage. */
   boolean knows(String point) {
@@ -77,16 +105,56 @@ final class OhmsChecks {
 
   /** Returns the prediction between two points under a fault (value: a drifted part's value). */
   synchronized OhmsPrediction predict(Fault fault, double value, String a, String b) {
+    return faulted(fault, value).network.predict(onFaulted(a), onFaulted(b));
+  }
+
+  /**
+   * Returns the predictions at every check pair ({@link CheckPairs#all()}) under a fault (value: a
+   * drifted part's value); do not change the array.
+   */
+  synchronized OhmsPrediction[] predictAll(Fault fault, double value) {
+    Faulted f = faulted(fault, value);
+    for (int k = 0; k < f.atPair.length; k++) {
+      at(f, k);
+    }
+    return f.atPair;
+  }
+
+  /** Returns the predictions at the pairs given (indices of {@link CheckPairs#all()}), by pair. */
+  private synchronized OhmsPrediction[][] predictAt(List<Diagnoser.Scored> top, int[] pairs) {
+    Faulted[] faulted = new Faulted[top.size()];
+    for (int h = 0; h < faulted.length; h++) {
+      faulted[h] = faulted(top.get(h).hypothesis.fault, top.get(h).best.value());
+    }
+    OhmsPrediction[][] out = new OhmsPrediction[pairs.length][faulted.length];
+    for (int k = 0; k < pairs.length; k++) {
+      for (int h = 0; h < faulted.length; h++) {
+        out[k][h] = at(faulted[h], pairs[k]);
+      }
+    }
+    return out;
+  }
+
+  private OhmsPrediction at(Faulted f, int pair) {
+    OhmsPrediction p = f.atPair[pair];
+    if (p == null) {
+      p = f.network.predict(onFaultedPairs[pair][0], onFaultedPairs[pair][1]);
+      f.atPair[pair] = p;
+    }
+    return p;
+  }
+
+  private Faulted faulted(Fault fault, double value) {
     boolean drift = fault.kind() == FaultKind.HIGH || fault.kind() == FaultKind.LOW;
-    String key = fault.id() + (drift ? "@" + value : "");
-    PowerOff network =
-        networks.computeIfAbsent(
-            key,
-            k ->
+    Object key = drift ? new Drifted(fault.id(), Double.doubleToLongBits(value)) : fault.id();
+    return networks.computeIfAbsent(
+        key,
+        k ->
+            new Faulted(
                 drift && Double.isNaN(value)
                     ? healthy
-                    : PowerOffFaults.faulted(stage, fault, value));
-    return network.predict(onFaulted(a), onFaulted(b));
+                    : PowerOffFaults.faulted(stage, fault, value),
+                onFaultedPairs.length));
   }
 
   /** Returns the summed log-likelihood of the ohms readings under a fault with a drifted value. */
@@ -149,13 +217,9 @@ final class OhmsChecks {
     return z >= 0 ? (1 + erf) / 2 : (1 - erf) / 2;
   }
 
-  /** Returns the pairs of points an ohms check may be taken between ({@link CheckPairs}). */
-  List<String[]> pairs(List<Reading> taken) {
-    List<String[]> done = new ArrayList<>();
-    for (Reading r : taken) {
-      done.add(new String[] {onFaulted(r.at()), onFaulted(r.to())});
-    }
-    return checkPairs.pairs(done);
+  /** Returns every pair of points an ohms check may be taken between ({@link CheckPairs}). */
+  List<String[]> pairs() {
+    return checkPairs.all();
   }
 
   /**
@@ -175,38 +239,54 @@ final class OhmsChecks {
       prior[h] = top.get(h).probability / mass;
     }
     double entropy = entropy(prior);
-    List<ProbeAdvice> advice = new ArrayList<>();
-    for (String[] pair : pairs(taken)) {
-      String a = pair[0];
-      String b = pair[1];
-      {
-        OhmsPrediction[] predicted = new OhmsPrediction[top.size()];
-        for (int h = 0; h < predicted.length; h++) {
-          Diagnoser.Scored s = top.get(h);
-          predicted[h] = predict(s.hypothesis.fault, s.best.value(), a, b);
-        }
-        double bits = Math.round(gain(predicted, prior, entropy, meter) * 10000) / 10000.0;
-        if (bits > 0) {
-          advice.add(new ProbeAdvice(a, Reading.Kind.OHMS, 0, bits, why(a, b, top, predicted), b));
-        }
+    List<String[]> done = new ArrayList<>();
+    for (Reading r : taken) {
+      done.add(new String[] {onFaulted(r.at()), onFaulted(r.to())});
+    }
+    int[] pairs = checkPairs.indices(done);
+    OhmsPrediction[][] table = predictAt(top, pairs);
+    Gain gain = new Gain(prior, entropy, meter);
+    List<Candidate> advice = new ArrayList<>();
+    for (int k = 0; k < pairs.length; k++) {
+      double bits = Math.round(gain.of(table[k]) * 10000) / 10000.0;
+      if (bits > 0) {
+        advice.add(new Candidate(pairs[k], bits, table[k], acrossAt(pairs[k]).isEmpty()));
       }
     }
     advice.sort(
-        Comparator.comparingDouble((ProbeAdvice x) -> -x.bits())
-            .thenComparing(x -> across(x.at(), x.to()).isEmpty() ? 1 : 0));
+        Comparator.comparingDouble((Candidate x) -> -x.bits())
+            .thenComparing(x -> x.acrossNone() ? 1 : 0));
     // Two neighbouring pins read what their two nets read unless a joint is open: list the pins
     // only when that promises more, else the nets (ties keep the nets, listed first above).
+    // Only the listed checks get their why.
     List<ProbeAdvice> listed = new ArrayList<>();
     Set<String> nets = new HashSet<>();
-    for (ProbeAdvice a : advice) {
-      String netA = healthy.node(a.at()).orElseThrow();
-      String netB = healthy.node(a.to()).orElseThrow();
-      String key = netA.equals(netB) ? CheckPairs.key(a.at(), a.to()) : CheckPairs.key(netA, netB);
-      if (nets.add(key) && listed.size() < LISTED) {
-        listed.add(a);
+    for (Candidate c : advice) {
+      if (listed.size() >= LISTED) {
+        break;
+      }
+      String a = checkPairs.all().get(c.pair())[0];
+      String b = checkPairs.all().get(c.pair())[1];
+      String netA = healthy.node(a).orElseThrow();
+      String netB = healthy.node(b).orElseThrow();
+      String key = netA.equals(netB) ? CheckPairs.key(a, b) : CheckPairs.key(netA, netB);
+      if (nets.add(key)) {
+        listed.add(
+            new ProbeAdvice(a, Reading.Kind.OHMS, 0, c.bits(), why(a, b, top, c.predicted()), b));
       }
     }
     return listed;
+  }
+
+  /** An ohms check before its why is written: the pair's index, its bits, its predictions. */
+  private record Candidate(int pair, double bits, OhmsPrediction[] predicted, boolean acrossNone) {}
+
+  /** Returns the resistors across a check pair, kept once found. */
+  private synchronized String acrossAt(int pair) {
+    if (acrossPairs[pair] == null) {
+      acrossPairs[pair] = across(checkPairs.all().get(pair)[0], checkPairs.all().get(pair)[1]);
+    }
+    return acrossPairs[pair];
   }
 
   /**
@@ -243,49 +323,88 @@ final class OhmsChecks {
             best.to()));
   }
 
-  private double gain(OhmsPrediction[] predicted, double[] prior, double entropy, MeterSpec meter) {
-    int n = predicted.length;
-    double expected = 0;
-    double[] posterior = new double[n];
-    // The OL outcome.
-    double olTotal = 0;
-    for (int d = 0; d < n; d++) {
-      posterior[d] = prior[d] * Math.exp(logLikelihood(predicted[d], true, 0, meter, none()));
-      olTotal += posterior[d];
+  /**
+   * The expected information gain of an ohms check over the leading suspects, in bits: their
+   * entropy less the expected entropy after the reading (the OL outcome, and three Gauss–Hermite
+   * points about each connected suspect's nominal). Each suspect's OL chance and variance are
+   * worked out once per check rather than once per outcome (the same expressions, so the same
+   * numbers).
+   */
+  private static final class Gain {
+    private final double[] prior;
+    private final double entropy;
+    private final MeterSpec meter;
+
+    Gain(double[] prior, double entropy, MeterSpec meter) {
+      this.prior = prior;
+      this.entropy = entropy;
+      this.meter = meter;
     }
-    if (olTotal > 0) {
+
+    double of(OhmsPrediction[] predicted) {
+      int n = predicted.length;
+      double[] pOl = new double[n];
+      double[] variance = new double[n];
+      double[] norm = new double[n];
       for (int d = 0; d < n; d++) {
-        posterior[d] /= olTotal;
+        pOl[d] = overRangeChance(predicted[d], meter);
+        if (predicted[d].connected()) {
+          variance[d] = variance(predicted[d], meter, none());
+          norm[d] = Math.sqrt(2 * Math.PI * variance[d]);
+        }
       }
-      expected += olTotal * entropy(posterior);
+      double expected = 0;
+      double[] posterior = new double[n];
+      // The OL outcome.
+      double olTotal = 0;
+      for (int d = 0; d < n; d++) {
+        posterior[d] =
+            prior[d]
+                * Math.exp(
+                    Math.log((1 - Evidence.MISREAD) * pOl[d] + Evidence.MISREAD * MISREAD_OL));
+        olTotal += posterior[d];
+      }
+      if (olTotal > 0) {
+        for (int d = 0; d < n; d++) {
+          posterior[d] /= olTotal;
+        }
+        expected += olTotal * OhmsChecks.entropy(posterior);
+      }
+      // Numeric outcomes about each connected hypothesis's nominal (Gauss–Hermite, three points).
+      double[] logs = new double[n];
+      for (int c = 0; c < n; c++) {
+        if (!predicted[c].connected()) {
+          continue;
+        }
+        double shown = prior[c] * (1 - pOl[c]);
+        double sd = Math.sqrt(variance[c]);
+        for (int q = 0; q < NODES.length; q++) {
+          double x = Math.max(0, predicted[c].nominal() + NODES[q] * sd);
+          // As logLikelihood(predicted[d], false, x, meter, none()) has it.
+          double tail = (1 - MISREAD_OL) / (Math.max(x, 0.1) * Math.log(10) * MISREAD_DECADES);
+          double max = Double.NEGATIVE_INFINITY;
+          for (int d = 0; d < n; d++) {
+            double core = 0;
+            if (predicted[d].connected()) {
+              double dx = x - predicted[d].nominal();
+              core = (1 - pOl[d]) * Math.exp(-dx * dx / (2 * variance[d])) / norm[d];
+            }
+            logs[d] = Math.log((1 - Evidence.MISREAD) * core + Evidence.MISREAD * tail);
+            max = Math.max(max, logs[d]);
+          }
+          double total = 0;
+          for (int d = 0; d < n; d++) {
+            posterior[d] = prior[d] * Math.exp(logs[d] - max);
+            total += posterior[d];
+          }
+          for (int d = 0; d < n; d++) {
+            posterior[d] /= total;
+          }
+          expected += shown * NODE_WEIGHTS[q] * OhmsChecks.entropy(posterior);
+        }
+      }
+      return Math.max(0, (entropy - expected) / Math.log(2));
     }
-    // Numeric outcomes about each connected hypothesis's nominal (Gauss–Hermite, three points).
-    for (int c = 0; c < n; c++) {
-      if (!predicted[c].connected()) {
-        continue;
-      }
-      double shown = prior[c] * (1 - overRangeChance(predicted[c], meter));
-      double sd = Math.sqrt(variance(predicted[c], meter, none()));
-      for (int q = 0; q < NODES.length; q++) {
-        double x = Math.max(0, predicted[c].nominal() + NODES[q] * sd);
-        double[] logs = new double[n];
-        double max = Double.NEGATIVE_INFINITY;
-        for (int d = 0; d < n; d++) {
-          logs[d] = logLikelihood(predicted[d], false, x, meter, none());
-          max = Math.max(max, logs[d]);
-        }
-        double total = 0;
-        for (int d = 0; d < n; d++) {
-          posterior[d] = prior[d] * Math.exp(logs[d] - max);
-          total += posterior[d];
-        }
-        for (int d = 0; d < n; d++) {
-          posterior[d] /= total;
-        }
-        expected += shown * NODE_WEIGHTS[q] * entropy(posterior);
-      }
-    }
-    return Math.max(0, (entropy - expected) / Math.log(2));
   }
 
   private static java.util.OptionalDouble none() {

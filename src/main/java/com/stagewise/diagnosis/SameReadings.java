@@ -1,7 +1,6 @@
 package com.stagewise.diagnosis;
 
 import com.stagewise.solver.OhmsPrediction;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -22,13 +21,11 @@ final class SameReadings {
 
   private final TestPoints points;
   private final OhmsChecks ohmsChecks;
-  private final List<String[]> pairs;
-  private final Map<String, double[]> byFault = new ConcurrentHashMap<>();
+  private final Map<Key, double[]> byFault = new ConcurrentHashMap<>();
 
   SameReadings(TestPoints points, OhmsChecks ohmsChecks) {
     this.points = points;
     this.ohmsChecks = ohmsChecks;
-    this.pairs = ohmsChecks.pairs(List.of());
   }
 
   /** Returns whether two suspects, each at its best-fitting scenario, read the same everywhere. */
@@ -64,16 +61,19 @@ final class SameReadings {
     Fault fault = s.hypothesis.fault;
     double value = s.best.value();
     return byFault.computeIfAbsent(
-        fault.id() + "@" + value,
+        new Key(fault.id(), Double.doubleToLongBits(value)),
         k -> {
-          double[] out = new double[pairs.size()];
+          OhmsPrediction[] at = ohmsChecks.predictAll(fault, value);
+          double[] out = new double[at.length];
           for (int i = 0; i < out.length; i++) {
-            OhmsPrediction p = ohmsChecks.predict(fault, value, pairs.get(i)[0], pairs.get(i)[1]);
-            out[i] = p.connected() ? p.nominal() : -1;
+            out[i] = at[i].connected() ? at[i].nominal() : -1;
           }
           return out;
         });
   }
+
+  /** A fault at a value (the value's bits, so NaN is one value). */
+  private record Key(String fault, long value) {}
 
   private static boolean close(double u, double v) {
     return Math.abs(u - v) <= VOLTS + SHARE * Math.max(Math.abs(u), Math.abs(v));

@@ -72,8 +72,7 @@ class SameReadingsTest {
   @Test
   void neighbouringPins_areOfferedAsOneOhmsCheck_OlWhenEitherJointIsOpen() {
     OhmsChecks checks = new OhmsChecks(DiagnoserOhmsTest.STAGE);
-    List<Set<String>> pairs =
-        checks.pairs(List.of()).stream().map(p -> Set.of(p[0], p[1])).toList();
+    List<Set<String>> pairs = checks.pairs().stream().map(p -> Set.of(p[0], p[1])).toList();
     assertThat(pairs).contains(Set.of("U3.1", "U3.2"), Set.of("U3.2", "U3.3"));
     // Pins 7 and 8: pin 7 is not used by the one section, so there is no pair to check.
     assertThat(pairs).doesNotContain(Set.of("U3.7", "U3.8"));
