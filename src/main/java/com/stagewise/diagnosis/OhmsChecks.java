@@ -39,13 +39,13 @@ final class OhmsChecks {
   static final double RELATIVE_FLOOR = 0.005;
 
   /** Decades a misread may land in, log-uniform (0.1 Ω … 1 GΩ). */
-  private static final double MISREAD_DECADES = 10;
+  static final double MISREAD_DECADES = 10;
 
   /** Chance that a misread shows OL. */
-  private static final double MISREAD_OL = 0.1;
+  static final double MISREAD_OL = 0.1;
 
-  private static final double[] NODES = {0, Math.sqrt(3), -Math.sqrt(3)};
-  private static final double[] NODE_WEIGHTS = {2.0 / 3, 1.0 / 6, 1.0 / 6};
+  static final double[] NODES = {0, Math.sqrt(3), -Math.sqrt(3)};
+  static final double[] NODE_WEIGHTS = {2.0 / 3, 1.0 / 6, 1.0 / 6};
   private static final int LISTED = 3;
 
   /**
@@ -245,7 +245,7 @@ final class OhmsChecks {
     }
     int[] pairs = checkPairs.indices(done);
     OhmsPrediction[][] table = predictAt(top, pairs);
-    Gain gain = new Gain(prior, entropy, meter);
+    OhmsGain gain = new OhmsGain(prior, entropy, meter);
     List<Candidate> advice = new ArrayList<>();
     for (int k = 0; k < pairs.length; k++) {
       double bits = Math.round(gain.of(table[k]) * 10000) / 10000.0;
@@ -323,95 +323,11 @@ final class OhmsChecks {
             best.to()));
   }
 
-  /**
-   * The expected information gain of an ohms check over the leading suspects, in bits: their
-   * entropy less the expected entropy after the reading (the OL outcome, and three Gauss–Hermite
-   * points about each connected suspect's nominal). Each suspect's OL chance and variance are
-   * worked out once per check rather than once per outcome (the same expressions, so the same
-   * numbers).
-   */
-  private static final class Gain {
-    private final double[] prior;
-    private final double entropy;
-    private final MeterSpec meter;
-
-    Gain(double[] prior, double entropy, MeterSpec meter) {
-      this.prior = prior;
-      this.entropy = entropy;
-      this.meter = meter;
-    }
-
-    double of(OhmsPrediction[] predicted) {
-      int n = predicted.length;
-      double[] pOl = new double[n];
-      double[] variance = new double[n];
-      double[] norm = new double[n];
-      for (int d = 0; d < n; d++) {
-        pOl[d] = overRangeChance(predicted[d], meter);
-        if (predicted[d].connected()) {
-          variance[d] = variance(predicted[d], meter, none());
-          norm[d] = Math.sqrt(2 * Math.PI * variance[d]);
-        }
-      }
-      double expected = 0;
-      double[] posterior = new double[n];
-      // The OL outcome.
-      double olTotal = 0;
-      for (int d = 0; d < n; d++) {
-        posterior[d] =
-            prior[d]
-                * Math.exp(
-                    Math.log((1 - Evidence.MISREAD) * pOl[d] + Evidence.MISREAD * MISREAD_OL));
-        olTotal += posterior[d];
-      }
-      if (olTotal > 0) {
-        for (int d = 0; d < n; d++) {
-          posterior[d] /= olTotal;
-        }
-        expected += olTotal * OhmsChecks.entropy(posterior);
-      }
-      // Numeric outcomes about each connected hypothesis's nominal (Gauss–Hermite, three points).
-      double[] logs = new double[n];
-      for (int c = 0; c < n; c++) {
-        if (!predicted[c].connected()) {
-          continue;
-        }
-        double shown = prior[c] * (1 - pOl[c]);
-        double sd = Math.sqrt(variance[c]);
-        for (int q = 0; q < NODES.length; q++) {
-          double x = Math.max(0, predicted[c].nominal() + NODES[q] * sd);
-          // As logLikelihood(predicted[d], false, x, meter, none()) has it.
-          double tail = (1 - MISREAD_OL) / (Math.max(x, 0.1) * Math.log(10) * MISREAD_DECADES);
-          double max = Double.NEGATIVE_INFINITY;
-          for (int d = 0; d < n; d++) {
-            double core = 0;
-            if (predicted[d].connected()) {
-              double dx = x - predicted[d].nominal();
-              core = (1 - pOl[d]) * Math.exp(-dx * dx / (2 * variance[d])) / norm[d];
-            }
-            logs[d] = Math.log((1 - Evidence.MISREAD) * core + Evidence.MISREAD * tail);
-            max = Math.max(max, logs[d]);
-          }
-          double total = 0;
-          for (int d = 0; d < n; d++) {
-            posterior[d] = prior[d] * Math.exp(logs[d] - max);
-            total += posterior[d];
-          }
-          for (int d = 0; d < n; d++) {
-            posterior[d] /= total;
-          }
-          expected += shown * NODE_WEIGHTS[q] * OhmsChecks.entropy(posterior);
-        }
-      }
-      return Math.max(0, (entropy - expected) / Math.log(2));
-    }
-  }
-
-  private static java.util.OptionalDouble none() {
+  static java.util.OptionalDouble none() {
     return java.util.OptionalDouble.empty();
   }
 
-  private static double entropy(double[] p) {
+  static double entropy(double[] p) {
     double h = 0;
     for (double x : p) {
       if (x > 0) {
