@@ -144,7 +144,9 @@ public final class StartView {
     note.getStyleClass().add("hint");
     note.textProperty().bind(model.matchesNoteProperty());
     // One unit found as the serial is typed: one big tap (or Enter) shows it; nothing moves by
-    // itself while the technician is still typing.
+    // itself while the technician is still typing. It sits right under the keys, above the list,
+    // so that it stays in sight in a short window (1024×600), where the list's end is below the
+    // fold.
     Button openOnly = new Button();
     openOnly.setId("open-only-match");
     openOnly.getStyleClass().add("primary");
@@ -157,7 +159,7 @@ public final class StartView {
     // A tap leaves the focus where it was: the button hides once the unit shows, and the focus
     // must not fall on the next button (Enter in the serial field does the same from the keys).
     openOnly.setFocusTraversable(false);
-    box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, list, openOnly, note);
+    box.getChildren().addAll(title, new HBox(8, serialField, search), keypad, openOnly, list, note);
     return box;
   }
 
