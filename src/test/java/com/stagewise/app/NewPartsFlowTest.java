@@ -38,6 +38,16 @@ class NewPartsFlowTest extends WindowFlow {
     settle();
     robot.clickOn("#caution-ok");
     settle();
+    // Two stages in the mixer's library: none is chosen for the technician.
+    assertThat(
+            fx(
+                () ->
+                    robot
+                        .lookup("#stage-library")
+                        .queryAs(javafx.scene.control.ListView.class)
+                        .getSelectionModel()
+                        .isEmpty()))
+        .isTrue();
     clickCell("#stage-library", "Channel level meter");
     settle();
 
@@ -73,6 +83,23 @@ class NewPartsFlowTest extends WindowFlow {
                         .isSelected()))
         .isTrue();
     savePicture(screensFolder().resolve("12-stage-diode-and-trimmer.png"));
+    // No text cut, nothing past its panel, no sideways scroll bar on the stage screen with the
+    // diode's and the trimmer's rows and the wiper pad, at 1024×600 and 1280×800 in every look.
+    atSizes(
+        new int[][] {SMALL, LAPTOP},
+        (size, where) -> {
+          String name = "12-stage-diode-and-trimmer";
+          savePicture(Path.of("target", "screens", where, name + ".png"));
+          assertNothingCut(name, where);
+          assertNoSidewaysScroll(name, where);
+          inEveryLook(
+              name,
+              where,
+              look -> {
+                assertNothingCut(name + " with " + look, where);
+                assertNoSidewaysScroll(name + " with " + look, where);
+              });
+        });
 
     // The stage taken to the readings is the one with the wiper as set.
     // The pad's wiper row makes the panel taller: the screen scrolls to the button, as a finger

@@ -16,13 +16,22 @@ import org.testfx.util.WaitForAsyncUtils;
  * text, with high contrast and with both, the probe call, the point to read (in words and lit on
  * the package drawing) and the value field with its Add reading button stand in the window with the
  * screen scrolled to its top, and at 1024×600 every pin and every control a finger taps gives it at
- * least {@link Reach#FINGER} px each way.
+ * least {@link Reach#FINGER} px each way. With the power off (ohms), the same holds for the
+ * caution's key message, the pair of points being measured, the value field and Add reading.
  */
 class ReadingsReachFlowTest extends WindowFlow {
 
   /** What must be in sight without scrolling while a point is read. */
   private static final String[] ESSENTIALS = {
     "#probe-call", "#probe-title", "#reading-display", "#reading-enter"
+  };
+
+  /**
+   * What must be in sight without scrolling while ohms are read with the power off: the caution's
+   * key message (unplug and discharge before any ohms check), the pair and the pad.
+   */
+  private static final String[] OHMS_ESSENTIALS = {
+    "#poweroff-key", "#ohms-call", "#ohms-from", "#ohms-to", "#reading-display", "#reading-enter"
   };
 
   @Test
@@ -46,6 +55,16 @@ class ReadingsReachFlowTest extends WindowFlow {
     settle();
     assertThat(visible("#pad-measure")).isTrue();
     checkEveryLook("AC");
+
+    // Power off: the caution's key message, the pair being measured, the value field and Add
+    // reading in sight (the ohms pad replaces the volts pad).
+    scrollToTop("#mode-ohms");
+    tap("#mode-ohms");
+    settle();
+    assertThat(visible("#poweroff-banner")).isTrue();
+    assertThat(text("#poweroff-key").toLowerCase(java.util.Locale.ROOT)).contains("unplug", "discharge", "capacitors", "ohms");
+    assertThat(visible("#reading-key-ol")).isTrue();
+    checkEveryLook("ohms");
   }
 
   /** Runs the checks at 1024×600 and 1280×800 in each look: ordinary, each switch, both. */
@@ -69,7 +88,7 @@ class ReadingsReachFlowTest extends WindowFlow {
                     "reach",
                     where,
                     name.replaceAll("[^a-zA-Z]+", "-") + ".png"));
-            assertInSightAtTop(name, where);
+            assertInSightAtTop(name, where, pad.equals("ohms"));
             if (ordinary && size == SMALL) {
               assertFingerSized(name, where);
             }
@@ -83,7 +102,7 @@ class ReadingsReachFlowTest extends WindowFlow {
    * Scrolls the readings screen to its top and fails unless the probe call, the point in words, the
    * lit pin on the drawing, the value field and Add reading all stand in the window.
    */
-  private void assertInSightAtTop(String look, String where) throws Exception {
+  private void assertInSightAtTop(String look, String where, boolean ohms) throws Exception {
     fx(
         () -> {
           ((ScrollPane) robot.lookup("#scroll-readings").query()).setVvalue(0);
@@ -94,11 +113,13 @@ class ReadingsReachFlowTest extends WindowFlow {
         fx(() -> ((ScrollPane) robot.lookup("#scroll-readings").query()).getVvalue());
     assertThat(screenScroll).as("the readings screen's scroll").isZero();
     List<String> missing = new ArrayList<>();
-    List<String> queries = new ArrayList<>(List.of(ESSENTIALS));
-    int lit =
-        fx(() -> robot.lookup("#package-drawing").queryAs(PackageDrawing.class).highlighted());
-    assertThat(lit).as("the pin to probe is lit on the drawing").isPositive();
-    queries.add("#package-drawing #pin-" + lit);
+    List<String> queries = new ArrayList<>(List.of(ohms ? OHMS_ESSENTIALS : ESSENTIALS));
+    if (!ohms) {
+      int lit =
+          fx(() -> robot.lookup("#package-drawing").queryAs(PackageDrawing.class).highlighted());
+      assertThat(lit).as("the pin to probe is lit on the drawing").isPositive();
+      queries.add("#package-drawing #pin-" + lit);
+    }
     for (String query : queries) {
       String why =
           fx(

@@ -28,6 +28,11 @@ public final class PowerOffMode {
    * The caution shown for as long as the screen is in power-off mode (DESIGN.md, "Safety": the
    * usual cautions where they matter, discharging capacitors before ohms checks; common practice).
    */
+  /** The caution's key message, in sight for as long as ohms are read. */
+  public static final String KEY_CAUTION =
+      "Unplug and discharge the capacitors before any ohms check.";
+
+  /** The whole caution, one tap away from its key message. */
   public static final String CAUTION =
       "Power off before reading ohms: unplug the unit (not just its switch), discharge its"
           + " capacitors — the large ones first, through a resistor, never with a screwdriver — and"

@@ -74,8 +74,8 @@ final class PowerOffViews {
     // The two switches wrap onto two rows when the column is narrow (1024 wide) rather than cut.
     javafx.scene.layout.FlowPane switches = new javafx.scene.layout.FlowPane(6, 6, volts, ohms);
     switches.setPrefWrapLength(280);
-    // In the probe column: the value pad and its Add reading button stay where they were.
-    return new VBox(8, switches, offerBox, banner(model));
+    // In the probe column; the caution stands above the pad (banner).
+    return new VBox(8, switches, offerBox);
   }
 
   private static String offerText(ProbeAdvice advice) {
@@ -89,26 +89,43 @@ final class PowerOffViews {
         + ".";
   }
 
-  /** The caution, shown for as long as the screen is in power-off mode. */
-  private static Node banner(ReadingsViewModel model) {
-    Label title = new Label("Power off — ohms readings");
-    title.getStyleClass().add("poweroff-title");
+  /**
+   * The caution, shown for as long as the screen is in power-off mode, above the pad: its key
+   * message ({@link PowerOffMode#KEY_CAUTION}) always in sight, the whole caution one tap away
+   * ("More"), so that the caution, the pair and the pad fit a 1024×600 window together.
+   */
+  static Node banner(ReadingsViewModel model) {
+    // The key message is the banner's button: one tap shows the whole caution below it, another
+    // hides it. The whole width for its words, so that it stays short with larger text too.
+    ToggleButton key = new ToggleButton();
+    key.setId("poweroff-key");
+    key.getStyleClass().add("poweroff-key");
+    key.setWrapText(true);
+    key.setMaxWidth(Double.MAX_VALUE);
+    key.setMinHeight(Region.USE_PREF_SIZE);
+    key.setAlignment(Pos.CENTER_LEFT);
+    key.textProperty()
+        .bind(
+            Bindings.when(key.selectedProperty())
+                .then(PowerOffMode.KEY_CAUTION + "  Less \u25b4")
+                .otherwise(PowerOffMode.KEY_CAUTION + "  More \u25b8"));
     Label text = new Label(PowerOffMode.CAUTION);
     text.setId("poweroff-caution");
     text.setWrapText(true);
     text.setMinHeight(Region.USE_PREF_SIZE);
-    VBox banner = new VBox(2, title, text);
+    showWhen(text, key.selectedProperty());
+    VBox banner = new VBox(4, key, text);
     banner.setId("poweroff-banner");
     banner.getStyleClass().add("poweroff-banner");
     showWhen(banner, model.powerOff().activeProperty());
+    // Each time the power goes off the caution starts short again, its key message in sight.
+    model.powerOff().activeProperty().addListener((o, was, on) -> key.setSelected(false));
     return banner;
   }
 
-  /** What to read in power-off mode: the call, the two points (tap one to fill it), the why. */
+  /** What to read in power-off mode: the call and the two points (tap one to fill it). */
   static Node pairHeader(ReadingsViewModel model) {
     PowerOffMode mode = model.powerOff();
-    Label heading = new Label("Power-off check");
-    heading.getStyleClass().add("section-title");
     Label call = new Label();
     call.setId("ohms-call");
     call.getStyleClass().add("ohms-call");
@@ -117,6 +134,14 @@ final class PowerOffViews {
     call.textProperty().bind(mode.call());
     Button from = slot("ohms-from", "From", mode.fromProperty(), false, mode);
     Button to = slot("ohms-to", "To", mode.toProperty(), true, mode);
+    VBox box = new VBox(6, call, from, to);
+    showWhen(box, mode.activeProperty());
+    return box;
+  }
+
+  /** Why this pair, in the probe column's part that scrolls. */
+  static Node pairWhy(ReadingsViewModel model) {
+    PowerOffMode mode = model.powerOff();
     Label why = new Label();
     why.setId("ohms-why");
     why.getStyleClass().add("probe-why");
@@ -124,9 +149,8 @@ final class PowerOffViews {
     why.setMinHeight(Region.USE_PREF_SIZE);
     why.textProperty().bind(mode.whyProperty());
     why.getStyleClass().add("ohms-why");
-    VBox box = new VBox(6, heading, call, from, to, why);
-    showWhen(box, mode.activeProperty());
-    return box;
+    showWhen(why, mode.activeProperty());
+    return why;
   }
 
   private static Button slot(

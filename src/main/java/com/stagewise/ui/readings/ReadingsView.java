@@ -65,7 +65,9 @@ public final class ReadingsView {
     valuePad.addNote(AcViews.padTakes(model));
     valuePad.getStyleClass().add("reading-pad");
     VBox.setVgrow(valuePad, Priority.ALWAYS);
-    pad.getChildren().addAll(AcViews.padBar(model), correctingBar(), valuePad);
+    // With the power off, the caution's key message stands above the pad it is read on.
+    pad.getChildren()
+        .addAll(PowerOffViews.banner(model), AcViews.padBar(model), correctingBar(), valuePad);
     pad.setMinWidth(342);
     // Its keys need about 340 px; what is left over goes to the results.
     pad.setPrefWidth(360);
@@ -252,7 +254,8 @@ public final class ReadingsView {
             viewBar,
             new VBox(4, otherTitle, other),
             suggested,
-            poweredMore);
+            poweredMore,
+            PowerOffViews.pairWhy(model));
     more.getStyleClass().add("probe-more");
     // Never squeezed below its words: where the column is short, it scrolls.
     more.setMinHeight(Region.USE_PREF_SIZE);

@@ -71,10 +71,20 @@ final class LibraryPanel {
         .selectedItemProperty()
         .addListener(
             (o, was, entry) -> {
-              if (entry != null) {
+              if (entry != null && entry.stage() != model.stageProperty().get()) {
                 model.choose(entry.stage());
               }
               model.libraryModel().showVersions(entry);
+            });
+    // The only stage of the model, chosen by the model as the library loaded: selected here too.
+    model
+        .libraryModel()
+        .chosenForYouProperty()
+        .addListener(
+            (o, was, entry) -> {
+              if (entry != null && list.getItems().contains(entry)) {
+                list.getSelectionModel().select(entry);
+              }
             });
     // Every version of the stage picked, latest first, with who saved it and when.
     Label versionsTitle = new Label("Versions of this stage, latest first");

@@ -33,6 +33,8 @@ public final class StageLibraryModel {
   private final ObservableList<LibraryEntry> versions = FXCollections.observableArrayList();
   private final StringProperty libraryNote = new SimpleStringProperty("");
   private final StringProperty caseNote = new SimpleStringProperty("");
+  private final javafx.beans.property.ObjectProperty<LibraryEntry> chosenForYou =
+      new javafx.beans.property.SimpleObjectProperty<>();
   private Path arriving;
 
   /**
@@ -66,8 +68,18 @@ public final class StageLibraryModel {
     return caseNote;
   }
 
+  /**
+   * Returns the library entry chosen for the technician as the library loaded: the only stage of
+   * the board model, when the case keeps no stage version of its own and no stage was chosen yet
+   * (null otherwise). The screen selects it in its list.
+   */
+  public javafx.beans.property.ReadOnlyObjectProperty<LibraryEntry> chosenForYouProperty() {
+    return chosenForYou;
+  }
+
   /** Forgets the last board model's library (another unit is on the bench). */
   void clear() {
+    chosenForYou.set(null);
     library.clear();
     versions.clear();
     caseNote.set("");
@@ -107,6 +119,7 @@ public final class StageLibraryModel {
               return new Loaded(entries, kept);
             },
             loaded -> {
+              chosenForYou.set(null);
               library.setAll(loaded.entries());
               versions.clear();
               libraryNote.set(
@@ -120,7 +133,16 @@ public final class StageLibraryModel {
                           + ".");
               caseNote.set(loaded.kept().map(StageLibraryModel::caseWords).orElse(""));
               if (loaded.kept().isPresent() && current.get() == null) {
+                // The case's own version wins over any choice of the list.
                 use.accept(loaded.kept().get().used().stage());
+              } else if (loaded.kept().isEmpty()
+                  && current.get() == null
+                  && loaded.entries().size() == 1) {
+                // The only stage of the model: chosen, its drawing and parts shown, one tap less.
+                LibraryEntry only = loaded.entries().get(0);
+                use.accept(only.stage());
+                showVersions(only);
+                chosenForYou.set(only);
               }
             },
             e ->

@@ -94,4 +94,39 @@ class StageVersionsScreenTest {
         .contains("version 1")
         .contains("A newer version exists: version 2");
   }
+
+  @Test
+  void onlyStageOfTheModel_isChosenForANewCase_butACaseKeepsItsOwnVersion() {
+    // A new case on a model with one stage in its library: that stage is chosen, its parts listed
+    // and its expected volts worked out, without a tap.
+    RepairCase old = t.store.cases().open(first.id(), "Dead");
+    StageViewModel model = screenFor(first, old);
+    assertThat(model.library()).hasSize(1);
+    LibraryEntry only = model.library().get(0);
+    assertThat(model.stageProperty().get()).isSameAs(only.stage());
+    assertThat(model.libraryModel().chosenForYouProperty().get()).isSameAs(only);
+    assertThat(model.parts()).extracting(r -> r.part().ref()).contains("R1", "R2");
+    assertThat(model.expectedProperty().get()).isNotNull();
+    assertThat(model.libraryModel().versions()).extracting(LibraryEntry::version).containsExactly(1);
+    model.useStage();
+    Stage v1 = model.stageProperty().get();
+
+    // The next unit edits the stage: the library's only entry is now version 2.
+    RepairCase next = t.store.cases().open(second.id(), "Distorts");
+    StageViewModel nextScreen = screenFor(second, next);
+    nextScreen.openEditor(false);
+    nextScreen.editor().setPartValue("R2", "100k");
+    nextScreen.useEdited(nextScreen.editor().save().orElseThrow());
+    nextScreen.useStage();
+
+    // The old case keeps version 1: it gets THAT version, not the library's only (newer) entry,
+    // and nothing is chosen for the technician in the list.
+    StageViewModel reopened = screenFor(first, old);
+    assertThat(reopened.library()).hasSize(1);
+    assertThat(reopened.library().get(0).version()).isEqualTo(2);
+    assertThat(reopened.stageProperty().get()).isEqualTo(v1);
+    assertThat(reopened.stageProperty().get().part("R2").orElseThrow().value())
+        .isNotEqualTo(100_000.0);
+    assertThat(reopened.libraryModel().chosenForYouProperty().get()).isNull();
+  }
 }
