@@ -62,7 +62,8 @@ class ReadingsReachFlowTest extends WindowFlow {
     tap("#mode-ohms");
     settle();
     assertThat(visible("#poweroff-banner")).isTrue();
-    assertThat(text("#poweroff-key").toLowerCase(java.util.Locale.ROOT)).contains("unplug", "discharge", "capacitors", "ohms");
+    assertThat(text("#poweroff-key").toLowerCase(java.util.Locale.ROOT))
+        .contains("unplug", "discharge", "capacitors", "ohms");
     assertThat(visible("#reading-key-ol")).isTrue();
     checkEveryLook("ohms");
   }

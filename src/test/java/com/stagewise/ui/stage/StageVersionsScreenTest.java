@@ -107,7 +107,9 @@ class StageVersionsScreenTest {
     assertThat(model.libraryModel().chosenForYouProperty().get()).isSameAs(only);
     assertThat(model.parts()).extracting(r -> r.part().ref()).contains("R1", "R2");
     assertThat(model.expectedProperty().get()).isNotNull();
-    assertThat(model.libraryModel().versions()).extracting(LibraryEntry::version).containsExactly(1);
+    assertThat(model.libraryModel().versions())
+        .extracting(LibraryEntry::version)
+        .containsExactly(1);
     model.useStage();
     Stage v1 = model.stageProperty().get();
 
