@@ -281,6 +281,12 @@ public final class Diagnoser {
     }
   }
 
+  /** The hypotheses for these readings' inputs, predicted if not yet (for tests). */
+  List<Hypothesis> hypotheses(ReadingSet readings) {
+    return models.computeIfAbsent(
+        measuredInputs(leadsOnNets(readings), new ArrayList<>()), this::build);
+  }
+
   private List<Hypothesis> build(Map<String, Double> inputs) {
     return Hypotheses.build(stage, points, catalogue, priors, inputs);
   }

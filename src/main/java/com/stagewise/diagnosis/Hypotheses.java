@@ -102,8 +102,7 @@ final class Hypotheses {
                 p.weight(),
                 p.dcMean(),
                 donor.dcSd(),
-                p.acMean(),
-                donor.acSd(),
+                AcPart.borrow(compiler, p.ac(), donor.ac()),
                 p.value(),
                 p.label(),
                 p.states()));
@@ -129,7 +128,7 @@ final class Hypotheses {
             a.value() > 0 && b.value() > 0
                 ? a.value() * Math.pow(b.value() / a.value(), t)
                 : a.value() + (b.value() - a.value()) * t;
-        out.add(a.toward(b, t, 1.0 / steps, value));
+        out.add(a.toward(b, t, 1.0 / steps, value, compiler));
       }
     }
     out.add(raw.get(n - 1).get(0).withWeight(1.0 / steps));

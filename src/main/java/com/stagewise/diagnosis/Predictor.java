@@ -65,7 +65,8 @@ final class Predictor {
    *
    * @param withSpread whether to compute the spread (false leaves it zero, for grid points whose
    *     spread is borrowed from a neighbour)
-   * @param compiler the compiler of this fault's scenarios (one per thread)
+   * @param compiler the compiler of this fault's scenarios (one per thread), also the lock under
+   *     which the predictions' AC parts are worked out when first asked for
    */
   List<Prediction> predict(Scenario scenario, boolean withSpread, ScenarioCompiler compiler) {
     Stage stage = scenario.stage();
@@ -123,10 +124,10 @@ final class Predictor {
           perturbations.isEmpty()
               ? null
               : o.linear != null ? o.linear : at.linearize(o.point).orElse(null);
-      // The linearised point's AC factors give the response and, below, its changes.
-      double[] acMean = ac ? reader.ac(linear == null ? at.ac(o.point) : linear.ac()) : null;
       double[] dcVar = new double[points.size];
-      double[] acVar = ac ? new double[points.size] : null;
+      // The AC steps in the perturbations' order: the AC part is worked out from them on first
+      // need (the ranking without AC readings never asks), with the calls the eager loop made.
+      List<AcStep> acSteps = new ArrayList<>();
       for (Perturbation p : perturbations) {
         Change change = p.change.apply(at);
         double[] read = linear == null ? null : linear.stepRead(change, reader.probe);
@@ -134,7 +135,7 @@ final class Predictor {
           addSquares(dcVar, reader.spread(read), dcMean);
           // Only part values and gain move the small-signal response of a settled state.
           if (ac && p.movesAc) {
-            addSquares(acVar, reader.ac(linear.ac(change)), acMean);
+            acSteps.add(new AcStep(change, null, null));
           }
           continue;
         }
@@ -148,23 +149,51 @@ final class Predictor {
         if (near != null) {
           addSquares(dcVar, reader.dc(near), dcMean);
           if (ac && p.movesAc) {
-            addSquares(acVar, reader.ac(moved.ac(near)), acMean);
+            acSteps.add(new AcStep(null, moved, near));
           }
         }
       }
+      OperatingPoint point = o.point;
+      AcPart acPart =
+          ac ? AcPart.later(compiler, () -> ac(reader, at, linear, point, acSteps)) : null;
       predictions.add(
           new Prediction(
               o.weight,
               dcMean,
               sqrt(dcVar),
-              acMean,
-              ac ? sqrt(acVar) : null,
+              acPart,
               scenario.value(),
               join(scenario.label(), o.label),
               o.point.states()));
     }
     return predictions;
   }
+
+  /**
+   * The AC mean and spread ({@code {mean, sd}}) of an outcome: the response about its point (from
+   * the linearised point's AC factors where there are some) and each step's change in quadrature.
+   */
+  private double[][] ac(
+      Reader reader,
+      Analysis at,
+      Analysis.Linearized linear,
+      OperatingPoint point,
+      List<AcStep> steps) {
+    double[] acMean = reader.ac(linear == null ? at.ac(point) : linear.ac());
+    double[] acVar = new double[points.size];
+    for (AcStep step : steps) {
+      Optional<AcSolution> moved =
+          step.moved == null ? linear.ac(step.change) : step.moved.ac(step.near);
+      addSquares(acVar, reader.ac(moved), acMean);
+    }
+    return new double[][] {acMean, sqrt(acVar)};
+  }
+
+  /**
+   * One perturbation's AC change: a change answered with the linearised point's AC factors, or a
+   * changed analysis and the point it settled in (change null).
+   */
+  private record AcStep(Change change, Analysis moved, OperatingPoint near) {}
 
   /**
    * One outcome of a scenario: a settled point, the section whose offset was set to reach it (null
@@ -364,8 +393,7 @@ final class Predictor {
         scenario.weight(),
         mean,
         sd,
-        mean.clone(),
-        sd.clone(),
+        AcPart.of(mean.clone(), sd.clone()),
         scenario.value(),
         join(scenario.label(), "no steady state"),
         Map.of());
