@@ -86,7 +86,10 @@ final class AcPart {
     }
     return later(
         lock,
-        () -> new double[][] {meanOf == null ? null : meanOf.mean(), sdOf == null ? null : sdOf.sd()});
+        () ->
+            new double[][] {
+              meanOf == null ? null : meanOf.mean(), sdOf == null ? null : sdOf.sd()
+            });
   }
 
   /**
@@ -101,7 +104,8 @@ final class AcPart {
         lock,
         () ->
             new double[][] {
-              mix(a.mean(), b == null ? null : b.mean(), t), mix(a.sd(), b == null ? null : b.sd(), t)
+              mix(a.mean(), b == null ? null : b.mean(), t),
+              mix(a.sd(), b == null ? null : b.sd(), t)
             });
   }
 

@@ -15,9 +15,9 @@ import org.junit.jupiter.api.Test;
  * A prediction's AC part is worked out on first need. The reference is the same prediction's AC
  * worked out at once, before the next scenario is solved (the order of the eager computation): the
  * AC asked for last, after every scenario of the fault, in reverse order, must equal it to the last
- * bit, on every scenario of every template; and a diagnosis with AC readings after one without
- * must equal, every digit of its full text (as the truth-set digest writes it), the same two
- * diagnoses with every AC part worked out beforehand.
+ * bit, on every scenario of every template; and a diagnosis with AC readings after one without must
+ * equal, every digit of its full text (as the truth-set digest writes it), the same two diagnoses
+ * with every AC part worked out beforehand.
  */
 class LazyAcTest {
 
