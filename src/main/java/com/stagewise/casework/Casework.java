@@ -242,14 +242,21 @@ public final class Casework {
     for (StoredReading s :
         store.cases().caseFile(caseId).map(f -> f.readings()).orElse(List.of())) {
       Reading r = s.reading();
-      boolean fits =
-          ReadingRules.testPointProblem(stage, r.at()).isEmpty()
-              && (r.to().isEmpty() || ReadingRules.testPointProblem(stage, r.to()).isEmpty());
-      if (!s.struck() && fits) {
+      if (!s.struck() && fits(stage, r)) {
         standing.add(r);
       }
     }
     return standing;
+  }
+
+  /**
+   * Tells whether {@code stage} has the point (and the second point of an ohms reading) that a
+   * stored reading was taken at; a reading it lacks stays in the history but joins no diagnosis on
+   * this stage.
+   */
+  public static boolean fits(Stage stage, Reading reading) {
+    return ReadingRules.testPointProblem(stage, reading.at()).isEmpty()
+        && (reading.to().isEmpty() || ReadingRules.testPointProblem(stage, reading.to()).isEmpty());
   }
 
   /**

@@ -2,7 +2,6 @@ package com.stagewise.ui;
 
 import com.stagewise.casework.Casework;
 import com.stagewise.circuit.Reading;
-import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.Stage;
 import com.stagewise.diagnosis.Diagnosis;
 import com.stagewise.history.HistoryStore;
@@ -267,7 +266,7 @@ public final class Bench {
     List<Reading> standing = new ArrayList<>();
     for (StoredReading s : stored) {
       Reading reading = s.reading();
-      if (!fits(stage, reading)) {
+      if (!Casework.fits(stage, reading)) {
         leftOff.add(s);
         continue;
       }
@@ -280,13 +279,6 @@ public final class Bench {
     }
     readings.setAll(standing);
     return leftOff;
-  }
-
-  private static boolean fits(Stage stage, Reading reading) {
-    if (ReadingRules.testPointProblem(stage, reading.at()).isPresent()) {
-      return false;
-    }
-    return reading.to().isEmpty() || ReadingRules.testPointProblem(stage, reading.to()).isEmpty();
   }
 
   /** Clears the case, stage, readings and diagnosis from the bench (the unit stays). */
