@@ -58,7 +58,11 @@ final class OhmsChecks {
   private final PowerOff healthy;
   private final CheckPairs checkPairs;
 
-  /** Each fault's network (a drifted part's per value), with its readings at the check pairs. */
+  /**
+   * Each fault's network, with its readings at the check pairs: one per value where the network
+   * depends on it ({@link PowerOffFaults#takesValue}: a drifted part, a leaky junction, a misset
+   * trimmer, an open track), else one per fault.
+   */
   private final Map<Object, Faulted> networks = new HashMap<>();
 
   /** The check pairs' points as found on a faulted stage, by the pair's index. */
@@ -90,8 +94,8 @@ final class OhmsChecks {
     }
   }
 
-  /** A drifted part's network is one per value (the value's bits, so NaN is one value). */
-  private record Drifted(String fault, long value) {}
+  /** A fault at a value (the value's bits, so NaN is one value). */
+  private record AtValue(String fault, long value) {}
 
   /** Returns whether a point names a net, package pin or part lead of the stage. */
   boolean knows(String point) {
@@ -146,7 +150,13 @@ final class OhmsChecks {
 
   private Faulted faulted(Fault fault, double value) {
     boolean drift = fault.kind() == FaultKind.HIGH || fault.kind() == FaultKind.LOW;
-    Object key = drift ? new Drifted(fault.id(), Double.doubleToLongBits(value)) : fault.id();
+    // Keyed by the value wherever the network depends on it: a leaky junction's or a misset
+    // trimmer's network kept under its id alone would answer for every later value with the
+    // first one's, so that what was asked before changed the answer.
+    Object key =
+        PowerOffFaults.takesValue(fault.kind())
+            ? new AtValue(fault.id(), Double.doubleToLongBits(value))
+            : fault.id();
     return networks.computeIfAbsent(
         key,
         k ->

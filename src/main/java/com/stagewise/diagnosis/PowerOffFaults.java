@@ -93,6 +93,18 @@ public final class PowerOffFaults {
   }
 
   /**
+   * Returns whether the network {@link #apply} gives for a fault depends on the value given: a
+   * drifted part's value, a leaky junction's leak ohms, a misset trimmer's position, an open
+   * track's end. A network kept for such a fault must be kept per value.
+   */
+  static boolean takesValue(FaultKind kind) {
+    return switch (kind) {
+      case HIGH, LOW, LEAKY, MISSET, OPEN -> true;
+      default -> false;
+    };
+  }
+
+  /**
    * Returns what the ohmmeter reads between two points under a fault.
    *
    * <p>Part leads are taken on the healthy stage (an open part's leads still touch their nets);
