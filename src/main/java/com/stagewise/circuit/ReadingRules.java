@@ -38,37 +38,38 @@ public final class ReadingRules {
     double acHz = acHz(stage);
     for (int i = 0; i < list.size(); i++) {
       Reading r = list.get(i);
-      String at = "readings[" + i + "]";
+      // The field paths ("readings[2].at") are written only for a message: a sound set, the
+      // usual case on every re-rank, needs none.
       Optional<String> pointProblem = testPointProblem(stage, r.at());
       if (pointProblem.isPresent()) {
-        problems.add(new StageRules.Problem(at + ".at", pointProblem.get()));
+        problems.add(new StageRules.Problem(field(i, "at"), pointProblem.get()));
         continue;
       }
-      String valueField = at + "." + r.kind().word();
       if (r.kind() == Reading.Kind.OHMS) {
-        checkOhms(stage, r, at, problems);
+        checkOhms(stage, r, i, problems);
         continue;
       }
       double limit = r.kind() == Reading.Kind.AC ? acLimit : dcLimit;
       if (Math.abs(r.value()) > limit) {
-        problems.add(new StageRules.Problem(valueField, beyondRails(stage, r, limit)));
+        problems.add(
+            new StageRules.Problem(field(i, r.kind().word()), beyondRails(stage, r, limit)));
       }
       if (r.kind() == Reading.Kind.AC) {
         if (acHz == 0) {
           problems.add(
               new StageRules.Problem(
-                  valueField,
+                  field(i, r.kind().word()),
                   "the stage has no AC test input, so an AC reading at "
                       + r.at()
                       + " cannot be judged (expected a dc reading)"));
         } else if (!Limits.FREQUENCY_HZ.contains(r.hz())) {
           problems.add(
               new StageRules.Problem(
-                  at + ".hz", Limits.FREQUENCY_HZ.problem("the reading's frequency", r.hz())));
+                  field(i, "hz"), Limits.FREQUENCY_HZ.problem("the reading's frequency", r.hz())));
         } else if (Math.abs(r.hz() - acHz) > 1e-6 * acHz) {
           problems.add(
               new StageRules.Problem(
-                  at + ".hz",
+                  field(i, "hz"),
                   "the AC reading at "
                       + r.at()
                       + " is at "
@@ -82,7 +83,7 @@ public final class ReadingRules {
           && !Limits.UNCERTAINTY_VOLTS.contains(r.uncertainty().getAsDouble())) {
         problems.add(
             new StageRules.Problem(
-                at + ".uncertainty",
+                field(i, "uncertainty"),
                 Limits.UNCERTAINTY_VOLTS.problem(
                     "the uncertainty at " + r.at(), r.uncertainty().getAsDouble())));
       }
@@ -170,16 +171,21 @@ public final class ReadingRules {
     }
   }
 
+  /** Returns the JSON path of a reading's field, e.g. {@code readings[2].at}. */
+  private static String field(int index, String name) {
+    return "readings[" + index + "]." + name;
+  }
+
   private static void checkOhms(
-      Stage stage, Reading r, String at, List<StageRules.Problem> problems) {
+      Stage stage, Reading r, int index, List<StageRules.Problem> problems) {
     Optional<String> toProblem = testPointProblem(stage, r.to());
     if (toProblem.isPresent()) {
-      problems.add(new StageRules.Problem(at + ".to", toProblem.get()));
+      problems.add(new StageRules.Problem(field(index, "to"), toProblem.get()));
     }
     if (!r.isOverRange() && !Limits.READING_OHMS.contains(r.value())) {
       problems.add(
           new StageRules.Problem(
-              at + ".ohms",
+              field(index, "ohms"),
               "ohms reading from "
                   + r.at()
                   + " to "
@@ -194,7 +200,7 @@ public final class ReadingRules {
         && !Limits.UNCERTAINTY_OHMS.contains(r.uncertainty().getAsDouble())) {
       problems.add(
           new StageRules.Problem(
-              at + ".uncertainty",
+              field(index, "uncertainty"),
               Limits.UNCERTAINTY_OHMS.problem(
                   "the uncertainty of the ohms reading from " + r.at(),
                   r.uncertainty().getAsDouble())));
