@@ -27,11 +27,12 @@ import org.junit.jupiter.api.Test;
  * <p>Outside fact: Bayes' rule itself. The posterior over the faults is the prior times the
  * likelihood of the readings, P(fault | readings) ∝ P(fault) · P(readings | fault); it is a
  * function of the readings alone, not of the order they were taken in nor of what was asked before
- * (any probability textbook, e.g. Jaynes, Probability Theory: The Logic of Science, ch. 4, on
- * updating in any order). So is everything worked out from the posterior: the groups, the
- * estimates, the next probes by expected information and the suspects that read the same. The whole
- * diagnosis is compared as text (every double as {@link Double#toString} writes it, which tells any
- * two doubles apart), with the suspects that read the same as the first one.
+ * (the definition of Bayesian ranking, in any probability textbook; the reference is from memory:
+ * Jaynes, Probability Theory: The Logic of Science, on updating with data in any order). So is
+ * everything worked out from the posterior: the groups, the estimates, the next probes by expected
+ * information and the suspects that read the same. The whole diagnosis is compared as text (every
+ * double as {@link Double#toString} writes it, which tells any two doubles apart), with the
+ * suspects that read the same as the first one.
  *
  * <p>The readings: the fault truth set's ngspice-simulated units (every template and demo sheet:
  * DC, AC, power-off ohms), the demo sheets' own readings files, and the test sheets with readings
