@@ -215,11 +215,10 @@ class BenchFlowTest extends WindowFlow {
    * pictures in folders named for the look.
    */
   private void shoot(String name) throws Exception {
-    atSizes(
+    assertWholeInFourLooks(
+        name,
         new int[][] {SMALL, LAPTOP, DESK},
         (size, where) -> {
-          assertNothingCut(name, where);
-          assertNoSidewaysScroll(name, where);
           if (size == LAPTOP) {
             savePicture(screensFolder().resolve(name + ".png"));
           } else {
@@ -228,13 +227,6 @@ class BenchFlowTest extends WindowFlow {
           if (size == SMALL && name.equals("06-readings") && Boolean.getBoolean("screenshots")) {
             savePicture(screensFolder().resolve("10-readings-1024x600.png"));
           }
-          inEveryLook(
-              name,
-              where,
-              look -> {
-                assertNothingCut(name + " with " + look, where);
-                assertNoSidewaysScroll(name + " with " + look, where);
-              });
         });
   }
 }

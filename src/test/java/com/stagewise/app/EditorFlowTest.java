@@ -8,7 +8,6 @@ import com.stagewise.history.SearchQuery;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.Outcome;
 import com.stagewise.ui.Step;
-import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -154,19 +153,6 @@ class EditorFlowTest extends WindowFlow {
     if (name.startsWith("failed-tap")) {
       return;
     }
-    atSizes(
-        new int[][] {SMALL, LAPTOP},
-        (size, where) -> {
-          assertNothingCut(name, where);
-          assertNoSidewaysScroll(name, where);
-          savePicture(Path.of("target", "screens", where, name + ".png"));
-          inEveryLook(
-              name,
-              where,
-              look -> {
-                assertNothingCut(name + " with " + look, where);
-                assertNoSidewaysScroll(name + " with " + look, where);
-              });
-        });
+    assertWholeInFourLooks(name, new int[][] {SMALL, LAPTOP});
   }
 }

@@ -30,14 +30,7 @@ class NewPartsFlowTest extends WindowFlow {
 
   @Test
   void stageWithDiodeAndTrimmer_isShownWithLeadsAndTheWiperIsSetOnThePad() throws Exception {
-    robot.clickOn("#caution-ok");
-    settle();
-    findDemoUnit();
-    robot.clickOn("#symptom").write("Level meter reads low on every channel");
-    robot.clickOn("#open-case");
-    settle();
-    robot.clickOn("#caution-ok");
-    settle();
+    openDemoCase("Level meter reads low on every channel");
     // Two stages in the mixer's library: none is chosen for the technician.
     assertThat(
             fx(
@@ -85,21 +78,7 @@ class NewPartsFlowTest extends WindowFlow {
     savePicture(screensFolder().resolve("12-stage-diode-and-trimmer.png"));
     // No text cut, nothing past its panel, no sideways scroll bar on the stage screen with the
     // diode's and the trimmer's rows and the wiper pad, at 1024×600 and 1280×800 in every look.
-    atSizes(
-        new int[][] {SMALL, LAPTOP},
-        (size, where) -> {
-          String name = "12-stage-diode-and-trimmer";
-          savePicture(Path.of("target", "screens", where, name + ".png"));
-          assertNothingCut(name, where);
-          assertNoSidewaysScroll(name, where);
-          inEveryLook(
-              name,
-              where,
-              look -> {
-                assertNothingCut(name + " with " + look, where);
-                assertNoSidewaysScroll(name + " with " + look, where);
-              });
-        });
+    assertWholeInFourLooks("12-stage-diode-and-trimmer", new int[][] {SMALL, LAPTOP});
 
     // The stage taken to the readings is the one with the wiper as set.
     // The pad's wiper row makes the panel taller: the screen scrolls to the button, as a finger

@@ -6,7 +6,6 @@ import com.stagewise.ui.drawing.PackageDrawing;
 import java.util.ArrayList;
 import java.util.List;
 import javafx.scene.Node;
-import javafx.scene.control.ScrollPane;
 import org.junit.jupiter.api.Test;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -70,50 +69,31 @@ class ReadingsReachFlowTest extends WindowFlow {
 
   /** Runs the checks at 1024×600 and 1280×800 in each look: ordinary, each switch, both. */
   private void checkEveryLook(String pad) throws Exception {
-    boolean[][] looks = {{false, false}, {true, false}, {false, true}, {true, true}};
-    String[] names = {
-      "ordinary look", "larger text", "high contrast", "larger text, high contrast"
-    };
-    for (int i = 0; i < looks.length; i++) {
-      look(Look.LARGER_TEXT, looks[i][0]);
-      look(Look.HIGH_CONTRAST, looks[i][1]);
-      String name = names[i] + ", pad on " + pad;
-      boolean ordinary = i == 0;
-      atSizes(
-          new int[][] {SMALL, LAPTOP},
-          (size, where) -> {
-            savePicture(
-                java.nio.file.Path.of(
-                    "target",
-                    "screens",
-                    "reach",
-                    where,
-                    name.replaceAll("[^a-zA-Z]+", "-") + ".png"));
-            assertInSightAtTop(name, where, pad.equals("ohms"));
-            if (ordinary && size == SMALL) {
-              assertFingerSized(name, where);
-            }
-          });
-    }
-    look(Look.LARGER_TEXT, false);
-    look(Look.HIGH_CONTRAST, false);
+    inFourLooks(
+        "reach-" + pad,
+        new int[][] {SMALL, LAPTOP},
+        (size, where, look) -> {
+          String name = look + ", pad on " + pad;
+          savePicture(
+              java.nio.file.Path.of(
+                  "target",
+                  "screens",
+                  "reach",
+                  where,
+                  name.replaceAll("[^a-zA-Z]+", "-") + ".png"));
+          assertInSightAtTop(name, where, pad.equals("ohms"));
+          if (look.equals("ordinary look") && size == SMALL) {
+            assertFingerSized(name, where);
+          }
+        });
   }
 
   /**
    * Scrolls the readings screen to its top and fails unless the probe call, the point in words, the
-   * lit pin on the drawing, the value field and Add reading all stand in the window.
+   * lit pin on the drawing, the value field and Add reading all stand in the window (with the power
+   * off: the caution's key message, the call, the pair, the value field and Add reading).
    */
   private void assertInSightAtTop(String look, String where, boolean ohms) throws Exception {
-    fx(
-        () -> {
-          ((ScrollPane) robot.lookup("#scroll-readings").query()).setVvalue(0);
-          return null;
-        });
-    relayout();
-    double screenScroll =
-        fx(() -> ((ScrollPane) robot.lookup("#scroll-readings").query()).getVvalue());
-    assertThat(screenScroll).as("the readings screen's scroll").isZero();
-    List<String> missing = new ArrayList<>();
     List<String> queries = new ArrayList<>(List.of(ohms ? OHMS_ESSENTIALS : ESSENTIALS));
     if (!ohms) {
       int lit =
@@ -121,21 +101,10 @@ class ReadingsReachFlowTest extends WindowFlow {
       assertThat(lit).as("the pin to probe is lit on the drawing").isPositive();
       queries.add("#package-drawing #pin-" + lit);
     }
-    for (String query : queries) {
-      String why =
-          fx(
-              () -> {
-                Node node = robot.lookup(query).query();
-                return Reach.outOfSight(
-                    node, window.getScene().getWidth(), window.getScene().getHeight());
-              });
-      if (!why.isEmpty()) {
-        missing.add(query + " " + why);
-      }
-    }
-    assertThat(missing)
-        .as("out of sight without scrolling on the readings screen at %s, %s", where, look)
-        .isEmpty();
+    assertInSightAtTop(
+        "#scroll-readings",
+        "the readings screen at " + where + ", " + look,
+        queries.toArray(String[]::new));
   }
 
   /**

@@ -5,18 +5,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.stagewise.ui.Step;
 import com.stagewise.ui.stage.LibraryEntry;
 import com.stagewise.ui.stage.PartRow;
-import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 import javafx.application.Platform;
-import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
 import javafx.scene.control.Labeled;
@@ -24,24 +18,22 @@ import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextInputControl;
-import javafx.scene.image.WritableImage;
 import javafx.stage.Stage;
-import javax.imageio.ImageIO;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.io.TempDir;
-import org.testfx.api.FxRobot;
 import org.testfx.api.FxToolkit;
 import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * The bench app in a real (headless) window on the demo shop, as the app flow tests drive it: the
  * window opened on a fresh data folder before each test and closed after it, and what a technician
- * does with it — tap, type on a pad, pick a row — with the waits, the window sizes, the check for
- * cut texts and the pictures those tests share.
+ * does with it — tap, type on a pad, pick a row — with the waits those tests share. The window
+ * sizes, the looks, the checks of what is cut or out of sight and the pictures are {@link
+ * WindowChecks}'.
  */
-abstract class WindowFlow {
+abstract class WindowFlow extends WindowChecks {
   /** The demo unit the flows work on: a mixing-desk channel board with a line driver stage. */
   static final String SERIAL = "NF8-22019";
 
@@ -56,18 +48,9 @@ abstract class WindowFlow {
    */
   static final double HEADROOM = 1.5;
 
-  /** The window sizes every screen must work at: a small touch laptop, a laptop, a desk screen. */
-  static final int[] SMALL = {1024, 600};
-
-  static final int[] LAPTOP = {1280, 800};
-  static final int[] DESK = {1920, 1080};
-
   @TempDir Path temp;
 
   Workshop workshop;
-  BenchApp app;
-  Stage window;
-  final FxRobot robot = new FxRobot();
 
   @BeforeAll
   static void toolkit() throws Exception {
@@ -116,11 +99,6 @@ abstract class WindowFlow {
     workshop.close();
   }
 
-  /** Runs {@code work} on the JavaFX thread and returns its result. */
-  static <T> T fx(Callable<T> work) throws Exception {
-    return WaitForAsyncUtils.asyncFx(work).get(30, TimeUnit.SECONDS);
-  }
-
   /** Waits until the background work is done and the screen has caught up. */
   void settle() throws Exception {
     WaitForAsyncUtils.waitFor(
@@ -135,7 +113,12 @@ abstract class WindowFlow {
 
   /** Finds the demo unit by its serial typed on the unit screen's keypad, as a technician would. */
   void findDemoUnit() throws Exception {
-    for (char c : SERIAL.toCharArray()) {
+    findUnit(SERIAL);
+  }
+
+  /** Finds a unit by its serial typed on the unit screen's keypad and searched for. */
+  void findUnit(String serial) throws Exception {
+    for (char c : serial.toCharArray()) {
       robot.clickOn("#serial-key-" + c);
     }
     robot.clickOn("#serial-search");
@@ -143,10 +126,10 @@ abstract class WindowFlow {
   }
 
   /**
-   * From the first start's caution to the readings screen of a new case on the demo unit's channel
-   * line driver (the mixing desk is mains-powered: its caution comes again as the case opens).
+   * From the first start's caution to the stage screen of a new case on the demo unit (the mixing
+   * desk is mains-powered: its caution comes again as the case opens).
    */
-  void openLineDriverCase(String symptom) throws Exception {
+  void openDemoCase(String symptom) throws Exception {
     robot.clickOn("#caution-ok");
     settle();
     findDemoUnit();
@@ -155,6 +138,15 @@ abstract class WindowFlow {
     settle();
     robot.clickOn("#caution-ok");
     settle();
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.STAGE);
+  }
+
+  /**
+   * From the first start's caution to the readings screen of a new case on the demo unit's channel
+   * line driver.
+   */
+  void openLineDriverCase(String symptom) throws Exception {
+    openDemoCase(symptom);
     // The mixer's library holds one stage, and the new case keeps none: it is chosen already,
     // selected in the list with its parts listed, so Use this stage needs no tap before it.
     assertThat(
@@ -326,166 +318,5 @@ abstract class WindowFlow {
           return null;
         });
     WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /** What to look at or check with the window at one size. */
-  interface AtSize {
-    void look(int[] size, String where) throws Exception;
-  }
-
-  /**
-   * Shows the window at each size in turn (laid out anew), runs {@code look} at each, and puts the
-   * window back to its usual 1280×800.
-   */
-  void atSizes(int[][] sizes, AtSize look) throws Exception {
-    for (int[] size : sizes) {
-      resize(size[0], size[1]);
-      relayout();
-      look.look(size, size[0] + "x" + size[1]);
-    }
-    resize(BenchApp.WIDTH, BenchApp.HEIGHT);
-  }
-
-  /** Lays the window out anew (after a change of size or of look) and lets it settle. */
-  void relayout() throws Exception {
-    for (int pass = 0; pass < 2; pass++) {
-      // Twice: a drawing that redraws for its new room may change its own size once more.
-      fx(
-          () -> {
-            window.getScene().getRoot().applyCss();
-            window.getScene().getRoot().layout();
-            return null;
-          });
-      WaitForAsyncUtils.waitForFxEvents();
-    }
-  }
-
-  /** The settings' switches of the screens' look. */
-  enum Look {
-    LARGER_TEXT,
-    HIGH_CONTRAST
-  }
-
-  /** Turns a switch of the screens' look on or off, as the unit screen's buttons do, and relays. */
-  void look(Look look, boolean on) throws Exception {
-    fx(
-        () -> {
-          (look == Look.LARGER_TEXT
-                  ? app.bench().largeTextProperty()
-                  : app.bench().highContrastProperty())
-              .set(on);
-          return null;
-        });
-    relayout();
-  }
-
-  /** What to check with the window in one look. */
-  interface InLook {
-    void check(String look) throws Exception;
-  }
-
-  /**
-   * Turns each look of the settings (larger text, high contrast) on in turn, then both at once,
-   * saves a picture of the window under target/screens/LOOK/WHERE/NAME.png, runs {@code check}
-   * (given the look's name to put in its messages) and turns the look off again.
-   */
-  void inEveryLook(String name, String where, InLook check) throws Exception {
-    List<List<Look>> looks =
-        List.of(
-            List.of(Look.LARGER_TEXT),
-            List.of(Look.HIGH_CONTRAST),
-            List.of(Look.LARGER_TEXT, Look.HIGH_CONTRAST));
-    for (List<Look> on : looks) {
-      for (Look look : on) {
-        look(look, true);
-      }
-      String folder =
-          String.join(
-              "-",
-              on.stream().map(l -> l.name().toLowerCase(Locale.ROOT).replace('_', '-')).toList());
-      try {
-        savePicture(Path.of("target", "screens", folder, where, name + ".png"));
-        check.check(folder);
-      } finally {
-        for (Look look : on) {
-          look(look, false);
-        }
-      }
-    }
-  }
-
-  private void resize(double width, double height) throws Exception {
-    fx(
-        () -> {
-          window.setWidth(width);
-          window.setHeight(height);
-          return null;
-        });
-    // The window system applies a new size asynchronously: wait until the scene has it.
-    WaitForAsyncUtils.waitFor(
-        30,
-        TimeUnit.SECONDS,
-        () ->
-            fx(
-                () ->
-                    window.getScene().getWidth() == width
-                        && window.getScene().getHeight() == height));
-    WaitForAsyncUtils.waitForFxEvents();
-  }
-
-  /**
-   * Fails when a text is cut short on the whole window (no {@code parts}) or inside each of the
-   * nodes the queries name.
-   */
-  void assertNothingCut(String screen, String where, String... parts) throws Exception {
-    if (parts.length == 0) {
-      List<String> cut =
-          fx(() -> ScreenFaults.cutTexts(window.getScene().getRoot(), new ArrayList<>()));
-      assertThat(cut).as("texts cut short on %s at %s", screen, where).isEmpty();
-      List<String> out =
-          fx(() -> ScreenFaults.spilled(window.getScene().getRoot(), new ArrayList<>()));
-      assertThat(out).as("controls out of their panels on %s at %s", screen, where).isEmpty();
-    }
-    for (String part : parts) {
-      List<String> cut =
-          fx(() -> ScreenFaults.cutTexts(robot.lookup(part).query(), new ArrayList<>()));
-      assertThat(cut).as("texts cut short in %s on %s at %s", part, screen, where).isEmpty();
-      List<String> out =
-          fx(() -> ScreenFaults.spilled(robot.lookup(part).query(), new ArrayList<>()));
-      assertThat(out)
-          .as("controls out of their panels in %s on %s at %s", part, screen, where)
-          .isEmpty();
-    }
-  }
-
-  /**
-   * Fails when any scroll bar across the window shows: at 1024×600 every screen fits the window's
-   * width (it scrolls down, never sideways, which a finger on a touch laptop misses).
-   */
-  void assertNoSidewaysScroll(String screen, String where) throws Exception {
-    List<String> bars =
-        fx(() -> ScreenFaults.sidewaysBars(window.getScene().getRoot(), new ArrayList<>()));
-    assertThat(bars).as("sideways scroll bars on %s at %s", screen, where).isEmpty();
-  }
-
-  /** The folder of the README's pictures with {@code -Dscreenshots=true}, else target/screens. */
-  static Path screensFolder() {
-    return Boolean.getBoolean("screenshots")
-        ? Path.of("src", "site", "screens")
-        : Path.of("target", "screens");
-  }
-
-  /** Saves a picture of the whole window, as large as the window is. */
-  void savePicture(Path file) throws Exception {
-    WritableImage image = fx(() -> window.getScene().snapshot(null));
-    BufferedImage picture = SwingFXUtils.fromFXImage(image, null);
-    assertThat(picture.getWidth()).isEqualTo((int) Math.round(window.getScene().getWidth()));
-    assertThat(picture.getHeight()).isEqualTo((int) Math.round(window.getScene().getHeight()));
-    Files.createDirectories(file.getParent());
-    try {
-      ImageIO.write(picture, "png", file.toFile());
-    } catch (IOException e) {
-      throw new AssertionError("could not write the picture " + file, e);
-    }
   }
 }
