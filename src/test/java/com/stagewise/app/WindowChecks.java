@@ -210,6 +210,15 @@ abstract class WindowChecks {
   }
 
   /**
+   * Returns how many px of a screen's content its scroll pane cannot show at once (0 or less when
+   * the screen fits the window and shows no scroll bar).
+   */
+  double screenOverflow(String scroller) {
+    ScrollPane pane = (ScrollPane) robot.lookup(scroller).query();
+    return pane.getContent().getLayoutBounds().getHeight() - pane.getViewportBounds().getHeight();
+  }
+
+  /**
    * Fails unless every node the queries name gives a finger at least {@link Reach#FINGER} px each
    * way on the screen (about 48 px, 9 mm, is common practice for a touch target; from memory).
    */

@@ -84,7 +84,10 @@ final class AcViews {
     PowerOffViews.showWhen(measure, ac.acProperty().and(model.powerOff().activeProperty().not()));
     // No heading of its own: the switch says what the pad takes, and a heading's row is one the
     // keys need in a 1024×600 window.
-    return new VBox(6, kind, measure);
+    // No row at all where neither shows (power-off mode): its spacing is a row the keys need.
+    VBox bar = new VBox(6, kind, measure);
+    PowerOffViews.showWhen(bar, kind.visibleProperty().or(measure.visibleProperty()));
+    return bar;
   }
 
   /**

@@ -36,7 +36,7 @@ public final class PowerOffMode {
   public static final String CAUTION =
       "Power off before reading ohms: unplug the unit (not just its switch), discharge its"
           + " capacitors — the large ones first, through a resistor, never with a screwdriver — and"
-          + " wait until they read near 0 V. Then set the meter to ohms. Mains-powered equipment"
+          + " wait until they read near 0\u00a0V. Then set the meter to ohms. Mains-powered equipment"
           + " can hurt or kill even when switched off; local codes and licensed practice come"
           + " first.";
 

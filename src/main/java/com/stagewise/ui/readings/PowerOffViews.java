@@ -90,13 +90,12 @@ final class PowerOffViews {
   }
 
   /**
-   * The caution, shown for as long as the screen is in power-off mode, above the pad: its key
-   * message ({@link PowerOffMode#KEY_CAUTION}) always in sight, the whole caution one tap away
-   * ("More"), so that the caution, the pair and the pad fit a 1024×600 window together.
+   * The caution's key message ({@link PowerOffMode#KEY_CAUTION}), shown for as long as the screen
+   * is in power-off mode, above the pad: a button across the banner's width whose tap shows the
+   * whole caution ({@link #wholeCaution}) and whose second tap hides it. Each time the power goes
+   * off the caution starts short again.
    */
-  static Node banner(ReadingsViewModel model) {
-    // The key message is the banner's button: one tap shows the whole caution below it, another
-    // hides it. The whole width for its words, so that it stays short with larger text too.
+  static ToggleButton cautionKey(ReadingsViewModel model) {
     ToggleButton key = new ToggleButton();
     key.setId("poweroff-key");
     key.getStyleClass().add("poweroff-key");
@@ -107,20 +106,39 @@ final class PowerOffViews {
     key.textProperty()
         .bind(
             Bindings.when(key.selectedProperty())
-                .then(PowerOffMode.KEY_CAUTION + "  Less \u25b4")
-                .otherwise(PowerOffMode.KEY_CAUTION + "  More \u25b8"));
+                .then(PowerOffMode.KEY_CAUTION + "  Less \u25b8")
+                .otherwise(PowerOffMode.KEY_CAUTION + "  More \u25c2"));
+    model.powerOff().activeProperty().addListener((o, was, on) -> key.setSelected(false));
+    return key;
+  }
+
+  /** The banner above the pad that holds the caution's key message. */
+  static Node banner(ReadingsViewModel model, ToggleButton key) {
+    VBox banner = new VBox(4, key);
+    banner.setId("poweroff-banner");
+    banner.getStyleClass().add("poweroff-banner");
+    showWhen(banner, model.powerOff().activeProperty());
+    return banner;
+  }
+
+  /**
+   * The whole caution, shown while its key message is tapped open: laid over the top of the probe
+   * column beside the pad, so that the value field and Add reading stay where they were, in sight
+   * in a 1024×600 window (below the key message it pushed them under the window's edge). A tap on
+   * it, or on the key message again, hides it.
+   */
+  static Node wholeCaution(ReadingsViewModel model, ToggleButton key) {
     Label text = new Label(PowerOffMode.CAUTION);
     text.setId("poweroff-caution");
     text.setWrapText(true);
     text.setMinHeight(Region.USE_PREF_SIZE);
-    showWhen(text, key.selectedProperty());
-    VBox banner = new VBox(4, key, text);
-    banner.setId("poweroff-banner");
-    banner.getStyleClass().add("poweroff-banner");
-    showWhen(banner, model.powerOff().activeProperty());
-    // Each time the power goes off the caution starts short again, its key message in sight.
-    model.powerOff().activeProperty().addListener((o, was, on) -> key.setSelected(false));
-    return banner;
+    VBox whole = new VBox(text);
+    whole.setId("poweroff-whole");
+    whole.getStyleClass().addAll("poweroff-banner", "poweroff-whole");
+    whole.setMaxHeight(Region.USE_PREF_SIZE);
+    whole.setOnMouseClicked(e -> key.setSelected(false));
+    showWhen(whole, key.selectedProperty().and(model.powerOff().activeProperty()));
+    return whole;
   }
 
   /** What to read in power-off mode: the call and the two points (tap one to fill it). */

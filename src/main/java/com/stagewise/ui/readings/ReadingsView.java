@@ -65,9 +65,15 @@ public final class ReadingsView {
     valuePad.addNote(AcViews.padTakes(model));
     valuePad.getStyleClass().add("reading-pad");
     VBox.setVgrow(valuePad, Priority.ALWAYS);
-    // With the power off, the caution's key message stands above the pad it is read on.
+    // With the power off, the caution's key message stands above the pad it is read on; the
+    // whole caution opens over the probe column beside it.
+    javafx.scene.control.ToggleButton cautionKey = PowerOffViews.cautionKey(model);
     pad.getChildren()
-        .addAll(PowerOffViews.banner(model), AcViews.padBar(model), correctingBar(), valuePad);
+        .addAll(
+            PowerOffViews.banner(model, cautionKey),
+            AcViews.padBar(model),
+            correctingBar(),
+            valuePad);
     pad.setMinWidth(342);
     // Its keys need about 340 px; what is left over goes to the results.
     pad.setPrefWidth(360);
@@ -79,7 +85,12 @@ public final class ReadingsView {
     // with the probe column.
     results.setPrefWidth(430);
     HBox.setHgrow(results, Priority.ALWAYS);
-    HBox columns = new HBox(12, probe, pad, results);
+    StackPane probeSide = new StackPane(probe, PowerOffViews.wholeCaution(model, cautionKey));
+    probeSide.setAlignment(Pos.TOP_CENTER);
+    // As wide as the probe column may grow (readings.css), the rest going to the results.
+    probeSide.maxWidthProperty().bind(probe.maxWidthProperty());
+    HBox.setHgrow(probeSide, Priority.ALWAYS);
+    HBox columns = new HBox(12, probeSide, pad, results);
     VBox.setVgrow(columns, Priority.ALWAYS);
     root.getChildren().add(columns);
     model.probeProperty().addListener((o, was, now) -> showProbe(now));
@@ -265,7 +276,10 @@ public final class ReadingsView {
     probeScroll.setFitToHeight(true);
     probeScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
     probeScroll.setVbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.AS_NEEDED);
-    probeScroll.setMinHeight(96);
+    // At least a finger's 48 px and the hint above the drawing; 88, not more, so that with larger
+    // text
+    // at 1024×600 the power-off columns fit the window and the screen needs no scroll bar.
+    probeScroll.setMinHeight(88);
     VBox.setVgrow(probeScroll, Priority.ALWAYS);
     probeScroll
         .viewportBoundsProperty()

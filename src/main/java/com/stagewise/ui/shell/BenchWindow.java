@@ -25,6 +25,8 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
+import javafx.scene.text.Text;
+import javafx.scene.text.TextFlow;
 
 /**
  * The window's content: the steps of a repair on top, the unit and case in a line below, the screen
@@ -265,12 +267,19 @@ public final class BenchWindow {
     name.managedProperty().bind(room);
   }
 
+  /**
+   * The line under the steps: the unit, the case and the stage being worked on, and the mains
+   * caution first where the unit is mains-powered. One flowing paragraph, so that with larger text
+   * at 1024 wide it takes two rows where a text beside a caution of its own took three, and the
+   * screens keep that row.
+   */
   private HBox caseLine() {
-    HBox line = new HBox(18);
+    HBox line = new HBox();
     line.getStyleClass().add("case-line");
     line.setAlignment(Pos.CENTER_LEFT);
-    Label what = new Label();
+    Text what = new Text();
     what.setId("case-line");
+    what.getStyleClass().add("case-text");
     what.textProperty()
         .bind(
             Bindings.createStringBinding(
@@ -298,17 +307,17 @@ public final class BenchWindow {
                 bench.openCaseProperty(),
                 bench.stageProperty(),
                 bench.stepProperty()));
-    Label mains = new Label("Mains-powered: lethal voltages");
-    mains.getStyleClass().add("mains");
-    mains.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
-    what.setMinWidth(0);
+    Text mains = new Text("Mains-powered: lethal voltages   ");
+    mains.setId("case-mains");
+    mains.getStyleClass().addAll("case-text", "mains");
     mains
         .visibleProperty()
         .bind(bench.mainsPoweredProperty().and(bench.unitProperty().isNotNull()));
     mains.managedProperty().bind(mains.visibleProperty());
-    Region spring = new Region();
-    HBox.setHgrow(spring, Priority.ALWAYS);
-    line.getChildren().addAll(what, spring, mains);
+    TextFlow words = new TextFlow(mains, what);
+    words.setMinWidth(0);
+    HBox.setHgrow(words, Priority.ALWAYS);
+    line.getChildren().add(words);
     return line;
   }
 

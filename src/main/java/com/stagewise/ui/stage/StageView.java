@@ -242,7 +242,9 @@ public final class StageView {
     use.setMaxWidth(Double.MAX_VALUE);
     use.disableProperty().bind(model.stageProperty().isNull());
     use.setOnAction(e -> model.useStage());
-    box.getChildren().addAll(title, drawing, partsTitle, parts, use);
+    // The next action under the stage's name, at the top of the screen: in sight without
+    // scrolling in a small window (1024×600), where the value pad makes the screen taller than it.
+    box.getChildren().addAll(title, use, drawing, partsTitle, parts);
     return box;
   }
 

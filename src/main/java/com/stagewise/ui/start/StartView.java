@@ -220,7 +220,9 @@ public final class StartView {
                           : cases == 1 ? "1 case so far." : cases + " cases so far.");
                 },
                 model.selectedProperty()));
-    Label earlier = new Label("Earlier cases, newest first — tap an open one to resume it");
+    // One line in the case column of a 1024 px window with larger text; the resume button says
+    // how to resume until an open case is tapped.
+    Label earlier = new Label("Earlier cases, newest first");
     earlier.getStyleClass().add("strong");
     earlier.visibleProperty().bind(model.selectedProperty().isNotNull());
     ListView<StartViewModel.CaseLine> cases = new ListView<>(model.glance());
@@ -254,7 +256,7 @@ public final class StartView {
                 setWrapText(true);
               }
             });
-    Button resume = new Button("Resume this open case");
+    Button resume = new Button();
     resume.setId("resume-case");
     resume
         .disableProperty()
@@ -265,8 +267,15 @@ public final class StartView {
                   return line == null || !line.open();
                 },
                 cases.getSelectionModel().selectedItemProperty()));
+    resume
+        .textProperty()
+        .bind(
+            Bindings.when(resume.disableProperty())
+                .then("Tap an open case to resume it")
+                .otherwise("Resume this open case"));
     resume.setOnAction(e -> model.resumeCase(cases.getSelectionModel().getSelectedItem().caseId()));
-    Label symptomTitle = new Label("Open a new case: what is wrong, as reported?");
+    // Short enough for one line in the case column of a 1024 px window with larger text.
+    Label symptomTitle = new Label("New case: what is wrong?");
     symptomTitle.getStyleClass().add("section-title");
     TextField symptom = new TextField();
     symptom.setId("symptom");
@@ -283,8 +292,12 @@ public final class StartView {
     HBox openRow = new HBox(8, symptom, open);
     openRow.setAlignment(Pos.CENTER_LEFT);
     keypad.follow(symptom);
+    // The next action of a chosen unit first: a new case, or the resume of an open one (its
+    // button above the list it acts on). The cases' list takes what is left, so that both stand in
+    // sight at the screen's top in a small window (1024×600), where the serial keypad on the left
+    // makes the screen taller than the window.
     box.getChildren()
-        .addAll(title, owner, earlier, cases, resume, symptomTitle, openRow, viewRow());
+        .addAll(title, owner, symptomTitle, openRow, earlier, resume, cases, viewRow());
     return box;
   }
 

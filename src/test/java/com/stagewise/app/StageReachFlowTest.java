@@ -1,0 +1,98 @@
+package com.stagewise.app;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.stagewise.ui.Step;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javafx.scene.control.ListView;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInfo;
+
+/**
+ * The stage screen's next action in a real (headless) window on the demo shop: once the stage is
+ * chosen, "Use this stage" stands wholly in the window with the screen scrolled to its top, at
+ * 1024×600 (a small touch laptop) and 1280×800, in the ordinary look, with larger text, with high
+ * contrast and with both, and gives a finger at least {@link Reach#FINGER} px each way (about 48
+ * px, 9 mm, is common practice for a touch target; from memory). The stage is chosen by itself
+ * where the board model's library holds one (the demo's mixing desk), and tapped in the list where
+ * it holds two (the same desk with the level meter's sheet added).
+ */
+class StageReachFlowTest extends WindowFlow {
+  private static final String SHEET = "channel-level-meter.stage.json";
+
+  private final boolean twoStages;
+
+  StageReachFlowTest(TestInfo test) {
+    twoStages = test.getTestMethod().orElseThrow().getName().contains("TwoStages");
+  }
+
+  /** The demo's own sheets; for the test with two stages, the level meter's sheet alone. */
+  @Override
+  Path stages() throws Exception {
+    if (!twoStages) {
+      return super.stages();
+    }
+    Path stages = Files.createDirectories(temp.resolve("stages"));
+    Files.copy(Path.of("src", "test", "resources", "stages", SHEET), stages.resolve(SHEET));
+    return stages;
+  }
+
+  @Test
+  void useThisStage_oneStageChosenByItself_standsInSightAtTheTopInEveryLook() throws Exception {
+    openDemoCase("Channel 1 output pinned negative, no audio");
+    assertThat(libraryRows()).isEqualTo(1);
+    assertThat(fx(() -> robot.lookup("#use-stage").query().isDisabled())).isFalse();
+
+    assertUseThisStageInSight("one stage");
+
+    robot.clickOn("#use-stage");
+    settle();
+    assertThat(fx(() -> app.bench().stepProperty().get())).isEqualTo(Step.READINGS);
+  }
+
+  @Test
+  void useThisStage_oneOfTwoStagesTapped_standsInSightAtTheTopInEveryLook() throws Exception {
+    openDemoCase("Level meter reads low on every channel");
+    // Two stages: none is chosen for the technician, and the button waits for a choice.
+    assertThat(libraryRows()).isEqualTo(2);
+    assertThat(fx(() -> robot.lookup("#use-stage").query().isDisabled())).isTrue();
+    clickCell("#stage-library", "Channel level meter");
+    settle();
+    assertThat(fx(() -> robot.lookup("#use-stage").query().isDisabled())).isFalse();
+
+    assertUseThisStageInSight("two stages");
+
+    robot.clickOn("#use-stage");
+    settle();
+    assertThat(fx(() -> app.bench().stageProperty().get().title()))
+        .isEqualTo("Channel level meter with calibration trimmer");
+  }
+
+  /**
+   * At 1024×600 and 1280×800 in the four looks: the stage's title and Use this stage in sight with
+   * the screen at its top, the button a finger's size; a picture of each under
+   * target/screens/stage-reach.
+   */
+  private void assertUseThisStageInSight(String library) throws Exception {
+    inFourLooks(
+        "stage-reach-" + library.replace(' ', '-'),
+        new int[][] {SMALL, LAPTOP},
+        (size, where, look) -> {
+          String what = "the stage screen with " + library + " at " + where + ", " + look;
+          assertInSightAtTop("#scroll-stage", what, "#stage-title", "#use-stage");
+          savePicture(
+              Path.of(
+                  "target",
+                  "screens",
+                  "stage-reach",
+                  where,
+                  (library + " " + look).replaceAll("[^a-zA-Z]+", "-") + ".png"));
+          assertFingerSized(what, "#use-stage");
+        });
+  }
+
+  private int libraryRows() throws Exception {
+    return fx(() -> robot.lookup("#stage-library").queryAs(ListView.class).getItems().size());
+  }
+}
