@@ -271,8 +271,10 @@ public final class StartView {
         .textProperty()
         .bind(
             Bindings.when(resume.disableProperty())
-                .then("Tap an open case to resume it")
+                .then("Tap an open case to resume")
                 .otherwise("Resume this open case"));
+    // Its words wrap rather than widen the column past a 1024 px window with larger text.
+    resume.setWrapText(true);
     resume.setOnAction(e -> model.resumeCase(cases.getSelectionModel().getSelectedItem().caseId()));
     // Short enough for one line in the case column of a 1024 px window with larger text.
     Label symptomTitle = new Label("New case: what is wrong?");
