@@ -20,9 +20,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -192,7 +192,7 @@ final class DiagnoseCommand implements Callable<Integer> {
       out.println();
       out.println("What the readings show:");
       for (Observation o : d.observations()) {
-        out.printf(Locale.ROOT, "  %-10s %s%n", o.at(), o.text());
+        out.println("  " + TableText.left(o.at(), 10) + " " + o.text());
       }
     }
     out.println();
@@ -200,17 +200,18 @@ final class DiagnoseCommand implements Callable<Integer> {
     int rank = 1;
     for (Suspect s : d.suspects()) {
       int bar = (int) Math.round(s.probability() * 20);
-      out.printf(
-          Locale.ROOT,
-          "  %2d. %-18s %5.1f %%  %-20s%s%n",
-          rank++,
-          s.fault(),
-          100 * s.probability(),
-          "#".repeat(bar),
-          s.group().size() > 1
-              ? "  cannot yet be told apart from: "
-                  + String.join(", ", s.group().stream().filter(g -> !g.equals(s.fault())).toList())
-              : "");
+      out.println(
+          "  "
+              + TableText.right(rank++, 2)
+              + ". "
+              + TableText.left(s.fault(), 18)
+              + " "
+              + TableText.right(TableText.fixed(100 * s.probability(), 1), 5)
+              + " %  "
+              + TableText.left("#".repeat(bar), 20)
+              + (s.group().size() > 1
+                  ? "  cannot yet be told apart from: " + String.join(", ", others(s))
+                  : ""));
       out.println("      " + s.why());
     }
     if (!d.nextProbes().isEmpty()) {
@@ -220,9 +221,17 @@ final class DiagnoseCommand implements Callable<Integer> {
         String kind =
             p.kind().word()
                 + (p.kind() == Reading.Kind.AC ? " " + p.measure().word() : "")
-                + (p.hz() > 0 ? String.format(Locale.ROOT, " at %s Hz", trim(p.hz())) : "")
+                + (p.hz() > 0 ? " at " + trim(p.hz()) + " Hz" : "")
                 + (p.to().isEmpty() ? "" : " to " + p.to());
-        out.printf(Locale.ROOT, "  %-10s %-14s %.2f bits  %s%n", p.at(), kind, p.bits(), p.why());
+        out.println(
+            "  "
+                + TableText.left(p.at(), 10)
+                + " "
+                + TableText.left(kind, 14)
+                + " "
+                + TableText.fixed(p.bits(), 2)
+                + " bits  "
+                + p.why());
       }
     }
     if (!d.confirmingCheck().isEmpty()) {
@@ -233,6 +242,17 @@ final class DiagnoseCommand implements Callable<Integer> {
       out.println();
       out.println("Note: " + note);
     }
+  }
+
+  /** The faults of the suspect's group other than its own, in the group's order. */
+  private static List<String> others(Suspect s) {
+    List<String> others = new ArrayList<>();
+    for (String g : s.group()) {
+      if (!g.equals(s.fault())) {
+        others.add(g);
+      }
+    }
+    return others;
   }
 
   private static String trim(double hz) {
