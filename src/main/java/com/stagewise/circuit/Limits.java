@@ -223,6 +223,16 @@ public final class Limits {
         + "): split the circuit into stages";
   }
 
+  /** Returns whether the text holds an ISO control character (a tab, a line break, NUL, …). */
+  static boolean hasControlCharacter(String text) {
+    for (int i = 0; i < text.length(); i++) {
+      if (Character.isISOControl(text.charAt(i))) {
+        return true;
+      }
+    }
+    return false;
+  }
+
   /** Returns the complaint about a name or text that is too long. */
   public static String tooLong(String role, int length, int max) {
     return role + " is " + length + " characters long (expected at most " + max + ")";

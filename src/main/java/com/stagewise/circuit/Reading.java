@@ -151,11 +151,12 @@ public record Reading(
 
   /** Returns the measure of the stage's first AC input, peak when it has none. */
   public static AcMeasure acMeasure(Stage stage) {
-    return stage.inputs().stream()
-        .filter(TestInput::hasAc)
-        .map(TestInput::measure)
-        .findFirst()
-        .orElse(AcMeasure.PEAK);
+    for (TestInput input : stage.inputs()) {
+      if (input.hasAc()) {
+        return input.measure();
+      }
+    }
+    return AcMeasure.PEAK;
   }
 
   /** Returns this reading as a peak amplitude in volts (AC), or its value unchanged (DC, ohms). */

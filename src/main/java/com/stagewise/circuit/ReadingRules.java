@@ -1,6 +1,7 @@
 package com.stagewise.circuit;
 
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.List;
 import java.util.Optional;
 import java.util.TreeSet;
@@ -105,7 +106,7 @@ public final class ReadingRules {
       problems.add(
           new StageRules.Problem(
               "at", Limits.tooLong("the test point", r.at().length(), Limits.MAX_NAME_LENGTH)));
-    } else if (r.at().chars().anyMatch(Character::isISOControl)) {
+    } else if (Limits.hasControlCharacter(r.at())) {
       problems.add(
           new StageRules.Problem(
               "at",
@@ -228,7 +229,7 @@ public final class ReadingRules {
     if (at.length() > Limits.MAX_NAME_LENGTH) {
       return Optional.of(Limits.tooLong("the test point", at.length(), Limits.MAX_NAME_LENGTH));
     }
-    if (at.chars().anyMatch(Character::isISOControl)) {
+    if (Limits.hasControlCharacter(at)) {
       return Optional.of(
           "the test point holds a control character (expected a net name or a pin such as U1.6)");
     }
@@ -244,13 +245,17 @@ public final class ReadingRules {
       if (leads.contains(lead)) {
         return Optional.empty();
       }
+      List<String> points = new ArrayList<>(leads.size());
+      for (String l : leads) {
+        points.add(ref + "." + l);
+      }
       return Optional.of(
           "\""
               + lead
               + "\" is not a lead of "
               + ref
               + " (expected "
-              + String.join(" or ", leads.stream().map(l -> ref + "." + l).toList())
+              + String.join(" or ", points)
               + ")");
     }
     if (dot <= 0) {
@@ -276,7 +281,7 @@ public final class ReadingRules {
               + ")");
     }
     String pinText = at.substring(dot + 1);
-    if (!pinText.matches("[0-9]{1,3}")) {
+    if (!isPinNumber(pinText)) {
       return Optional.of(
           "\"" + pinText + "\" is not a pin number (expected e.g. " + examplePin(stage) + ")");
     }
@@ -356,14 +361,29 @@ public final class ReadingRules {
 
   /** Returns the frequency of the stage's first AC input in hertz, 0 when it has none. */
   private static double acHz(Stage stage) {
-    return stage.inputs().stream()
-        .filter(TestInput::hasAc)
-        .mapToDouble(TestInput::hz)
-        .findFirst()
-        .orElse(0);
+    for (TestInput input : stage.inputs()) {
+      if (input.hasAc()) {
+        return input.hz();
+      }
+    }
+    return 0;
+  }
+
+  /** Returns whether the text is one to three ASCII digits. */
+  private static boolean isPinNumber(String text) {
+    if (text.isEmpty() || text.length() > 3) {
+      return false;
+    }
+    for (int i = 0; i < text.length(); i++) {
+      if (text.charAt(i) < '0' || text.charAt(i) > '9') {
+        return false;
+      }
+    }
+    return true;
   }
 
   private static String examplePin(Stage stage) {
-    return stage.pinNets().keySet().stream().findFirst().orElse("U1.6");
+    Iterator<String> pins = stage.pinNets().keySet().iterator();
+    return pins.hasNext() ? pins.next() : "U1.6";
   }
 }

@@ -50,8 +50,12 @@ public record Stage(
   public Set<String> nets() {
     Set<String> nets = new LinkedHashSet<>();
     nets.add(ground);
-    rails.forEach(rail -> nets.add(rail.net()));
-    inputs.forEach(input -> nets.add(input.net()));
+    for (Rail rail : rails) {
+      nets.add(rail.net());
+    }
+    for (TestInput input : inputs) {
+      nets.add(input.net());
+    }
     for (Part part : parts) {
       nets.addAll(part.nets());
     }
@@ -68,9 +72,7 @@ public record Stage(
    * says, without building the set (readings are checked against it one by one).
    */
   public boolean hasNet(String point) {
-    if (point.equals(ground)
-        || rails.stream().anyMatch(r -> r.net().equals(point))
-        || inputs.stream().anyMatch(i -> i.net().equals(point))) {
+    if (point.equals(ground) || rail(point).isPresent() || input(point).isPresent()) {
       return true;
     }
     for (Part part : parts) {
@@ -127,22 +129,42 @@ public record Stage(
 
   /** Returns the rail on a net, if the net is a rail. */
   public Optional<Rail> rail(String net) {
-    return rails.stream().filter(r -> r.net().equals(net)).findFirst();
+    for (Rail rail : rails) {
+      if (rail.net().equals(net)) {
+        return Optional.of(rail);
+      }
+    }
+    return Optional.empty();
   }
 
   /** Returns the test input on a net, if any. */
   public Optional<TestInput> input(String net) {
-    return inputs.stream().filter(i -> i.net().equals(net)).findFirst();
+    for (TestInput input : inputs) {
+      if (input.net().equals(net)) {
+        return Optional.of(input);
+      }
+    }
+    return Optional.empty();
   }
 
   /** Returns the part with this designator, if any. */
   public Optional<Part> part(String ref) {
-    return parts.stream().filter(p -> p.ref().equals(ref)).findFirst();
+    for (Part part : parts) {
+      if (part.ref().equals(ref)) {
+        return Optional.of(part);
+      }
+    }
+    return Optional.empty();
   }
 
   /** Returns the section with this designator, if any. */
   public Optional<Amplifier> amplifier(String ref) {
-    return amplifiers.stream().filter(a -> a.ref().equals(ref)).findFirst();
+    for (Amplifier amp : amplifiers) {
+      if (amp.ref().equals(ref)) {
+        return Optional.of(amp);
+      }
+    }
+    return Optional.empty();
   }
 
   /**
@@ -152,8 +174,12 @@ public record Stage(
   public Map<String, Double> drivenVolts() {
     Map<String, Double> volts = new LinkedHashMap<>();
     volts.put(ground, 0.0);
-    rails.forEach(rail -> volts.put(rail.net(), rail.volts()));
-    inputs.forEach(input -> volts.put(input.net(), input.dc()));
+    for (Rail rail : rails) {
+      volts.put(rail.net(), rail.volts());
+    }
+    for (TestInput input : inputs) {
+      volts.put(input.net(), input.dc());
+    }
     return volts;
   }
 
@@ -170,10 +196,12 @@ public record Stage(
 
   /** Returns the package type of a package designator, if the stage has that package. */
   public Optional<PackageType> packageType(String packageRef) {
-    return amplifiers.stream()
-        .filter(a -> a.packageRef().equals(packageRef))
-        .map(Amplifier::packageType)
-        .findFirst();
+    for (Amplifier amp : amplifiers) {
+      if (amp.packageRef().equals(packageRef)) {
+        return Optional.of(amp.packageType());
+      }
+    }
+    return Optional.empty();
   }
 
   /**
@@ -191,14 +219,22 @@ public record Stage(
           }
         }
       }
-      byPin.forEach((pin, net) -> pins.put(pkg + "." + pin, net));
+      for (Map.Entry<Integer, String> pin : byPin.entrySet()) {
+        pins.put(pkg + "." + pin.getKey(), pin.getValue());
+      }
     }
     return pins;
   }
 
   /** Returns the sections that sit in one package. */
   public List<Amplifier> sectionsOf(String packageRef) {
-    return amplifiers.stream().filter(a -> a.packageRef().equals(packageRef)).toList();
+    List<Amplifier> sections = new ArrayList<>();
+    for (Amplifier amp : amplifiers) {
+      if (amp.packageRef().equals(packageRef)) {
+        sections.add(amp);
+      }
+    }
+    return List.copyOf(sections);
   }
 
   /** Returns a copy with the parts replaced. */
@@ -223,7 +259,11 @@ public record Stage(
 
   /** Returns a copy with the part of this designator changed by {@code change}. */
   public Stage withPart(String ref, UnaryOperator<Part> change) {
-    return withParts(parts.stream().map(p -> p.ref().equals(ref) ? change.apply(p) : p).toList());
+    List<Part> changed = new ArrayList<>(parts.size());
+    for (Part part : parts) {
+      changed.add(part.ref().equals(ref) ? change.apply(part) : part);
+    }
+    return withParts(changed);
   }
 
   /** Returns a copy with one more part. */
@@ -235,12 +275,21 @@ public record Stage(
 
   /** Returns a copy without the part of this designator. */
   public Stage minusPart(String ref) {
-    return withParts(parts.stream().filter(p -> !p.ref().equals(ref)).toList());
+    List<Part> kept = new ArrayList<>(parts.size());
+    for (Part part : parts) {
+      if (!part.ref().equals(ref)) {
+        kept.add(part);
+      }
+    }
+    return withParts(kept);
   }
 
   /** Returns a copy with the section of this designator changed by {@code change}. */
   public Stage withAmplifier(String ref, UnaryOperator<Amplifier> change) {
-    return withAmplifiers(
-        amplifiers.stream().map(a -> a.ref().equals(ref) ? change.apply(a) : a).toList());
+    List<Amplifier> changed = new ArrayList<>(amplifiers.size());
+    for (Amplifier amp : amplifiers) {
+      changed.add(amp.ref().equals(ref) ? change.apply(amp) : amp);
+    }
+    return withAmplifiers(changed);
   }
 }

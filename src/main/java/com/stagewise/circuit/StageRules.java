@@ -265,7 +265,7 @@ public final class StageRules {
   private static void name(List<Problem> problems, String field, String name, String role) {
     if (name.length() > Limits.MAX_NAME_LENGTH) {
       problems.add(new Problem(field, Limits.tooLong(role, name.length(), Limits.MAX_NAME_LENGTH)));
-    } else if (name.chars().anyMatch(Character::isISOControl)) {
+    } else if (Limits.hasControlCharacter(name)) {
       problems.add(
           new Problem(
               field, role + " holds a control character (expected letters, digits and signs)"));
@@ -356,12 +356,12 @@ public final class StageRules {
     for (Part part : stage.parts()) {
       // A trimmer touches its end and wiper nets once each, even when two share a net.
       for (String net : new HashSet<>(part.nets())) {
-        uses.merge(net, 1, Integer::sum);
+        uses.put(net, uses.getOrDefault(net, 0) + 1);
       }
     }
     for (Amplifier amp : stage.amplifiers()) {
       for (Terminal terminal : Terminal.values()) {
-        uses.merge(amp.net(terminal), 1, Integer::sum);
+        uses.put(amp.net(terminal), uses.getOrDefault(amp.net(terminal), 0) + 1);
       }
     }
     return uses;

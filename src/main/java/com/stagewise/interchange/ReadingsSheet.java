@@ -12,6 +12,7 @@ import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
+import com.stagewise.circuit.TestInput;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -159,8 +160,12 @@ public final class ReadingsSheet {
     if (!set.meter().ohms().equals(OhmsSpec.DEFAULT)) {
       return true;
     }
-    return set.readings().stream()
-        .anyMatch(r -> r.kind() == Reading.Kind.OHMS || r.at().indexOf('.') > 0);
+    for (Reading r : set.readings()) {
+      if (r.kind() == Reading.Kind.OHMS || r.at().indexOf('.') > 0) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private static MeterSpec meter(JsonField field, int version) {
@@ -242,7 +247,11 @@ public final class ReadingsSheet {
               "a volts reading has no \"to\" (expected \"to\" only with \"ohms\", the second"
                   + " point of a power-off reading)");
     }
-    for (JsonField volts : List.of(dc, ac).stream().flatMap(Optional::stream).toList()) {
+    for (Optional<JsonField> given : List.of(dc, ac)) {
+      if (given.isEmpty()) {
+        continue;
+      }
+      JsonField volts = given.get();
       if (volts.node().isTextual() && volts.node().asText().trim().equalsIgnoreCase(OVER_RANGE)) {
         throw volts.error(
             "\"OL\" is the ohmmeter's over-range (expected volts here, a number; OL only with"
@@ -272,15 +281,18 @@ public final class ReadingsSheet {
               .error("hz must be above 0 (the frequency of the ac reading in hertz)");
         }
       } else {
-        hz =
-            stage.inputs().stream()
-                .filter(i -> i.hasAc())
-                .mapToDouble(i -> i.hz())
-                .findFirst()
-                .orElseThrow(
-                    () ->
-                        field.error(
-                            "missing field \"hz\" (expected the frequency of the ac reading; the stage has no ac input to take it from)"));
+        boolean found = false;
+        for (TestInput input : stage.inputs()) {
+          if (input.hasAc()) {
+            hz = input.hz();
+            found = true;
+            break;
+          }
+        }
+        if (!found) {
+          throw field.error(
+              "missing field \"hz\" (expected the frequency of the ac reading; the stage has no ac input to take it from)");
+        }
       }
     } else if (hzField.isPresent()) {
       throw hzField.get().error("a dc reading has no \"hz\" (expected hz only with \"ac\")");
