@@ -25,54 +25,66 @@ public final class Connectivity {
    * driving nothing: a dead output no longer ties its net to anything.
    */
   public static List<String> floatingNets(Stage stage, java.util.Set<String> deadSections) {
-    Map<String, String> parent = new HashMap<>();
-    final String driven = "\u0000driven";
-    parent.put(driven, driven);
-    for (String net : stage.nets()) {
-      parent.put(net, stage.isDriven(net) ? driven : net);
+    // Union-find over the nets' indices; index n stands for every driven net at once.
+    List<String> nets = new ArrayList<>(stage.nets());
+    int n = nets.size();
+    Map<String, Integer> index = new HashMap<>(2 * n);
+    for (int i = 0; i < n; i++) {
+      index.put(nets.get(i), i);
+    }
+    int[] parent = new int[n + 1];
+    for (int i = 0; i <= n; i++) {
+      parent[i] = i;
+    }
+    parent[index.get(stage.ground())] = n;
+    for (Rail rail : stage.rails()) {
+      parent[index.get(rail.net())] = n;
+    }
+    for (TestInput input : stage.inputs()) {
+      parent[index.get(input.net())] = n;
     }
     for (Part part : stage.parts()) {
       // Junctions conduct at DC too (forward, or through their leakage): a net that only a
       // reverse-biased diode holds still has a defined voltage, as in ngspice.
       if (part.kind() == PartKind.RESISTOR || part.kind().isJunction()) {
-        union(parent, part.netA(), part.netB());
+        union(parent, index.get(part.netA()), index.get(part.netB()));
       } else if (part.kind().isTrimmer()) {
-        union(parent, part.netA(), part.wiper());
-        union(parent, part.wiper(), part.netB());
+        union(parent, index.get(part.netA()), index.get(part.wiper()));
+        union(parent, index.get(part.wiper()), index.get(part.netB()));
       }
     }
     for (Amplifier amp : stage.amplifiers()) {
       if (!deadSections.contains(amp.ref())) {
-        union(parent, amp.out(), driven);
+        union(parent, index.get(amp.out()), n);
       }
     }
     List<String> floating = new ArrayList<>();
-    for (String net : stage.nets()) {
-      if (!find(parent, net).equals(find(parent, driven))) {
-        floating.add(net);
+    for (int i = 0; i < n; i++) {
+      if (find(parent, i) != n) {
+        floating.add(nets.get(i));
       }
     }
     return floating;
   }
 
-  private static String find(Map<String, String> parent, String net) {
-    String root = net;
-    while (!parent.get(root).equals(root)) {
-      root = parent.get(root);
+  private static int find(int[] parent, int net) {
+    int root = net;
+    while (parent[root] != root) {
+      root = parent[root];
     }
-    parent.put(net, root);
+    parent[net] = root;
     return root;
   }
 
-  private static void union(Map<String, String> parent, String a, String b) {
-    String rootA = find(parent, a);
-    String rootB = find(parent, b);
-    if (!rootA.equals(rootB)) {
-      // Keep the driven marker as the root so that the check above stays a plain comparison.
-      if (rootA.startsWith("\u0000")) {
-        parent.put(rootB, rootA);
+  private static void union(int[] parent, int a, int b) {
+    int rootA = find(parent, a);
+    int rootB = find(parent, b);
+    if (rootA != rootB) {
+      // Keep the driven marker (the largest index) as the root, so that the check is a comparison.
+      if (rootA > rootB) {
+        parent[rootB] = rootA;
       } else {
-        parent.put(rootA, rootB);
+        parent[rootA] = rootB;
       }
     }
   }

@@ -317,10 +317,7 @@ public final class Diagnoser {
     List<Scored> scored = new ArrayList<>(hypotheses.size());
     double[] weight = readingWeights(bound);
     Likelihoods table = likelihoods.computeIfAbsent(hypotheses, l -> new Likelihoods(l, evidence));
-    double[][] figures = new double[bound.size()][];
-    for (int i = 0; i < figures.length; i++) {
-      figures[i] = table.of(bound.get(i));
-    }
+    double[][] figures = table.of(bound);
     // Every prediction's log-likelihood, reading by reading over all predictions at once: each
     // prediction's sum still adds its terms in the readings' order, so the numbers are the same.
     double[] sums = table.logWeights().clone();

@@ -51,9 +51,28 @@ final class Evidence {
 
   private final double tailDensity;
 
+  /** The misread tail's part of every likelihood, {@code MISREAD · tailDensity}. */
+  private final double misread;
+
+  /** {@code log(misread)}: the log-likelihood of a reading far outside a prediction's core. */
+  private final double logMisread;
+
+  /**
+   * An exponent of the normal core below which the core, added to {@link #misread}, is less than
+   * half the spacing of doubles at {@code misread}: the sum rounds to {@code misread} itself, so
+   * the log-likelihood is {@link #logMisread} to the last bit, and neither exp nor log is needed.
+   * The bound takes the smallest variance a reading can have (the model floor alone) and one unit
+   * of margin in the exponent for the rounding of exp, the square root and the products.
+   */
+  private final double farExponent;
+
   Evidence(double span) {
     // Uniform over [-1.2·span - 1, +1.2·span + 1] volts.
     this.tailDensity = 1 / (2 * (1.2 * span + 1));
+    this.misread = MISREAD * tailDensity;
+    this.logMisread = Math.log(misread);
+    double smallestRoot = Math.sqrt(2 * Math.PI * FLOOR_VOLTS * FLOOR_VOLTS);
+    this.farExponent = Math.log(Math.ulp(misread) / 2 * smallestRoot / (1 - MISREAD)) - 1;
   }
 
   /**
@@ -95,8 +114,14 @@ final class Evidence {
   /** Returns the log-likelihood of a value given a predicted mean and total variance. */
   double logLikelihood(double value, double mean, double variance) {
     double d = value - mean;
-    double core = Math.exp(-d * d / (2 * variance)) / Math.sqrt(2 * Math.PI * variance);
-    return Math.log((1 - MISREAD) * core + MISREAD * tailDensity);
+    double exponent = -d * d / (2 * variance);
+    if (exponent < farExponent) {
+      // Far out in the tail (most readings under most wrong hypotheses): the same number as the
+      // full formula gives, without computing it (see farExponent).
+      return logMisread;
+    }
+    double core = Math.exp(exponent) / Math.sqrt(2 * Math.PI * variance);
+    return Math.log((1 - MISREAD) * core + misread);
   }
 
   /** Returns how many standard deviations a reading lies from a prediction. */

@@ -1,5 +1,6 @@
 package com.stagewise.diagnosis;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -65,22 +66,43 @@ final class Likelihoods {
    * array is shared: do not change it.
    */
   synchronized double[] of(Evidence.Bound reading) {
-    double[] figures = byReading.get(reading);
-    if (figures != null) {
-      return figures;
+    return of(List.of(reading))[0];
+  }
+
+  /**
+   * Returns {@link #of(Evidence.Bound)} of each reading, in their order. The readings not yet kept
+   * are worked out side by side ({@link EveryCore}), each on its own, so the numbers are the same
+   * whatever the number of threads.
+   */
+  synchronized double[][] of(List<Evidence.Bound> readings) {
+    double[][] out = new double[readings.size()][];
+    List<Integer> missing = new ArrayList<>();
+    for (int r = 0; r < out.length; r++) {
+      out[r] = byReading.get(readings.get(r));
+      if (out[r] == null) {
+        missing.add(r);
+      }
     }
-    figures = new double[total];
+    EveryCore.forEach(
+        missing.size(), m -> out[missing.get(m)] = compute(readings.get(missing.get(m))));
+    for (int r : missing) {
+      byReading.put(readings.get(r), out[r]);
+    }
+    var eldest = byReading.entrySet().iterator();
+    while ((long) byReading.size() * total > MAX_FIGURES && byReading.size() > 1) {
+      eldest.next();
+      eldest.remove();
+    }
+    return out;
+  }
+
+  private double[] compute(Evidence.Bound reading) {
+    double[] figures = new double[total];
     int i = 0;
     for (Diagnoser.Hypothesis h : hypotheses) {
       for (Prediction p : h.predictions) {
         figures[i++] = evidence.logLikelihood(p, reading);
       }
-    }
-    byReading.put(reading, figures);
-    var eldest = byReading.entrySet().iterator();
-    while ((long) byReading.size() * total > MAX_FIGURES && byReading.size() > 1) {
-      eldest.next();
-      eldest.remove();
     }
     return figures;
   }
