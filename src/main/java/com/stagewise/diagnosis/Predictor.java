@@ -89,7 +89,7 @@ final class Predictor {
       }
       cs = cs.with(noBias.toArray(new Change[0]));
     }
-    SolveResult outcome = cs.solve();
+    SolveResult outcome = solve(scenario, cs, compiler);
     if (!(outcome instanceof SolveResult.Solved settled)) {
       return List.of(unpredictable(scenario));
     }
@@ -167,6 +167,41 @@ final class Predictor {
               o.point.states()));
     }
     return predictions;
+  }
+
+  /**
+   * Solves a scenario. A point of a grid (one number changed from the grid's other points) is found
+   * from the last grid point that settled with every section linear, where it settles so too (the
+   * usual case along a drift): a rank-one update of that point's factors instead of a fresh search
+   * ({@link Analysis.Linearized#solveWith}). Every other case is solved in full, and a grid point
+   * that settles that way with every section linear becomes the next ones' anchor.
+   */
+  private static SolveResult solve(Scenario scenario, Analysis cs, ScenarioCompiler compiler) {
+    if (!scenario.onGrid()) {
+      return cs.solve();
+    }
+    OperatingPoint quick = compiler.solveFromAnchor();
+    if (quick != null) {
+      return new SolveResult.Solved(List.of(quick), List.of());
+    }
+    SolveResult outcome = cs.solve();
+    if (outcome instanceof SolveResult.Solved solved
+        && solved.points().size() == 1
+        && solved.notes().isEmpty()
+        && inStartStates(cs, solved.primary())) {
+      cs.linearize(solved.primary()).ifPresent(compiler::anchor);
+    }
+    return outcome;
+  }
+
+  /** Whether every section of a point is linear, or as the scenario's fault forces it. */
+  private static boolean inStartStates(Analysis cs, OperatingPoint point) {
+    for (Map.Entry<String, SectionState> e : point.states().entrySet()) {
+      if (e.getValue() != SectionState.LINEAR && !cs.isForced(e.getKey())) {
+        return false;
+      }
+    }
+    return true;
   }
 
   /**

@@ -24,18 +24,48 @@ final class ScenarioCompiler {
   private Analysis base;
   private Object attachment;
 
+  /** The changes that made the last compiled scenario from the full compilation; null for it. */
+  private List<Change> lastChanges;
+
+  /**
+   * A factorised point of a scenario derived from the current full compilation, in the search's
+   * starting states, from which the next grid points are solved ({@link
+   * Analysis.Linearized#solveWith}); null when there is none.
+   */
+  private Analysis.Linearized anchor;
+
   /** Returns the analysis of a scenario: derived from the last full compilation where it can be. */
   Analysis compile(Scenario scenario) {
     if (base != null) {
       List<Change> changes = difference(baseScenario, scenario);
       if (changes != null) {
+        lastChanges = changes;
         return changes.isEmpty() ? base : base.with(changes.toArray(new Change[0]));
       }
     }
     baseScenario = scenario;
     base = Analysis.of(scenario.stage(), scenario.conditions());
     attachment = null;
+    lastChanges = null;
+    anchor = null;
     return base;
+  }
+
+  /**
+   * Returns the point of the last compiled scenario found from the anchor (one number changed from
+   * the anchor's scenario; see {@link Analysis.Linearized#solveWith}), or null when there is no
+   * anchor or it cannot answer (then solve in full).
+   */
+  com.stagewise.solver.OperatingPoint solveFromAnchor() {
+    if (anchor == null || lastChanges == null || lastChanges.size() != 1) {
+      return null;
+    }
+    return anchor.solveWith(lastChanges.get(0)).orElse(null);
+  }
+
+  /** Keeps a factorised point as the anchor of the next grid points. */
+  void anchor(Analysis.Linearized linearized) {
+    anchor = linearized;
   }
 
   /**

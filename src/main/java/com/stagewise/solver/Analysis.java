@@ -128,6 +128,18 @@ public sealed interface Analysis permits CompiledStage {
     Optional<OperatingPoint> settle(Change change);
 
     /**
+     * Returns the point that {@code with(change).solve()} gives when that is one point with every
+     * section in the state the saturation search starts from (linear, or as a fault forces it), and
+     * this point is in those states too: found from the kept factors, by one step for a change of
+     * the right-hand side (a driven voltage) and by the Sherman–Morrison formula for a resistor's
+     * value (its conductance is a rank-one change of the matrix), with each section's stability
+     * updated the same way. The numbers differ from a fresh solve's by rounding only. Empty
+     * otherwise (a section would leave its state or become unstable, a junction, a trimmer, a
+     * capacitor's value, a device change): then solve.
+     */
+    Optional<OperatingPoint> solveWith(Change change);
+
+    /**
      * Returns the AC response about this point's section states with the change applied; empty as
      * {@link Analysis#ac}. A two-terminal part's value or a linear section's gain is a rank-one
      * update of the kept AC factors (Sherman–Morrison); other changes are solved in full.

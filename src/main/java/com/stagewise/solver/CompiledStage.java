@@ -157,6 +157,12 @@ final class CompiledStage implements Analysis {
 
   // ---------------------------------------------------------------- changes of numbers
 
+  /** The index of a part, or -1 when the stage has no part of this designator. */
+  int partOrNone(String ref) {
+    Integer p = partIndex.get(ref);
+    return p == null ? -1 : p;
+  }
+
   private int part(String ref) {
     Integer p = partIndex.get(ref);
     if (p == null) {

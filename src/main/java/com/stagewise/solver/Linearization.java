@@ -209,6 +209,140 @@ final class Linearization implements Analysis.Linearized {
     }
   }
 
+  @Override
+  public Optional<OperatingPoint> solveWith(Change change) {
+    if (network.nonlinear || !inStartStates()) {
+      return Optional.empty();
+    }
+    int i = -1;
+    int j = -1;
+    double delta = 0;
+    if (change instanceof Change.PartValue v) {
+      int p = analysis.partOrNone(v.ref());
+      if (p < 0 || network.capacitor[p] || network.partW[p] >= 0 || network.junction[p] != null) {
+        return Optional.empty();
+      }
+      // The resistor's stamp: conductance g between its two nets, a driven end on the right.
+      delta = conductance(v.value()) - conductance(network.value[p]);
+      i = network.unknownOf[network.partA[p]];
+      j = network.unknownOf[network.partB[p]];
+    } else if (!(change instanceof Change.DrivenVolts)) {
+      return Optional.empty();
+    }
+    Change undo = apply(change);
+    try {
+      // The exact solution is x + M'⁻¹·r' with r' the residual at x after the change. With M' =
+      // M + δ·u·uᵀ (u = e_i − e_j), M'⁻¹·r' = y − z·δ·(uᵀy)/(1 + δ·uᵀz), y = M⁻¹·r', z = M⁻¹·u
+      // (Sherman and Morrison, 1950; Golub and Van Loan, Matrix Computations, 2.1.4).
+      double[] y = system.factors().solve(network.residual(states, collapsed, x));
+      double[] z = null;
+      double denominator = 1;
+      if (delta != 0) {
+        double[] u = new double[x.length];
+        if (i >= 0) {
+          u[i] = 1;
+        }
+        if (j >= 0) {
+          u[j] -= 1;
+        }
+        z = system.factors().solve(u);
+        double product = delta * (at(z, i) - at(z, j));
+        denominator = 1 + product;
+        if (!(Math.abs(denominator) >= CANCELLATION * (1 + Math.abs(product)))) {
+          return Optional.empty();
+        }
+        double scale = delta * (at(y, i) - at(y, j)) / denominator;
+        double terms = 0;
+        double result = 0;
+        for (int k = 0; k < y.length; k++) {
+          double correction = scale * z[k];
+          terms = Math.max(terms, Math.abs(y[k]) + Math.abs(correction));
+          y[k] -= correction;
+          result = Math.max(result, Math.abs(y[k]));
+        }
+        // A large change (a resistor near short or open) makes y and the correction nearly
+        // cancel: beyond GROWTH the update would lose more digits than a fresh solve.
+        if (!(terms <= GROWTH * result)) {
+          return Optional.empty();
+        }
+      }
+      double[] moved = new double[x.length];
+      for (int k = 0; k < x.length; k++) {
+        moved[k] = x[k] + y[k];
+      }
+      for (int k = 0; k < states.length; k++) {
+        if (network.sourceNode[k] >= 0 && network.collapsed(moved, k) != collapsed[k]) {
+          return Optional.empty();
+        }
+        if (network.forced[k] == null && !stableAfter(k, z, delta, denominator, i, j)) {
+          return Optional.empty();
+        }
+      }
+      return analysis.search.keepsStates(states, moved)
+          ? Optional.of(analysis.pointOf(analysis.search.stateOf(states, moved)))
+          : Optional.empty();
+    } finally {
+      analysis.apply(undo);
+    }
+  }
+
+  /**
+   * A denominator {@code 1 + δ·uᵀz} smaller than this share of its terms means the changed matrix
+   * is (nearly) singular, where the update loses its digits: a full solve decides (as {@link
+   * AcUpdate} does for AC).
+   */
+  private static final double CANCELLATION = 1e-8;
+
+  /** Largest ratio of the update's terms to its result (one digit lost per decade). */
+  private static final double GROWTH = 100;
+
+  /** Columns of M⁻¹ at each section's source node, found on first need (null: not yet). */
+  private double[][] sourceColumns;
+
+  /**
+   * Whether section k's linear state is stable after the rank-one change: entry (s, s) of the
+   * changed inverse, s the section's source node, is {@code (M⁻¹)ss − δ·z_s·(uᵀM⁻¹)_s / (1 +
+   * δ·uᵀz)} and must stay positive, as {@link DcSystem#stable} asks of a fresh solve.
+   */
+  private boolean stableAfter(int k, double[] z, double delta, double denominator, int i, int j) {
+    int s = network.sourceNode[k];
+    if (s < 0) {
+      return true;
+    }
+    double diagonal = system.factors().inverseDiagonal(s);
+    if (z == null) {
+      return diagonal > 0;
+    }
+    if (sourceColumns == null) {
+      sourceColumns = new double[states.length][];
+    }
+    if (sourceColumns[k] == null) {
+      double[] unit = new double[x.length];
+      unit[s] = 1;
+      sourceColumns[k] = system.factors().solve(unit);
+    }
+    double[] column = sourceColumns[k];
+    return diagonal - delta * z[s] * (at(column, i) - at(column, j)) / denominator > 0;
+  }
+
+  /** Whether every free section is in the state the search starts from: linear. */
+  private boolean inStartStates() {
+    for (int k = 0; k < states.length; k++) {
+      if (network.forced[k] == null && states[k] != SectionState.LINEAR) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static double conductance(double ohms) {
+    return 1 / Math.max(ohms, Network.MIN_OHMS);
+  }
+
+  private static double at(double[] vector, int index) {
+    return index < 0 ? 0 : vector[index];
+  }
+
   /**
    * Whether a change moves only the right-hand side of the DC equations: a driven voltage, or a
    * section's offset, bias currents or headroom (its gain and output resistance are in the matrix).

@@ -285,12 +285,17 @@ final class SaturationSearch {
    * #activeSetSearch} ending without a move.
    */
   boolean keepsEveryState(SectionState[] states, double[] x, DcSystem system) {
+    return keepsStates(states, x) && allLinearStable(states, system);
+  }
+
+  /** As {@link #keepsEveryState} without the stability test, which the caller makes its own way. */
+  boolean keepsStates(SectionState[] states, double[] x) {
     for (int k = 0; k < states.length; k++) {
       if (network.forced[k] == null && preferredState(x, k, states[k]) != states[k]) {
         return false;
       }
     }
-    return isConsistent(states, x) && allLinearStable(states, system);
+    return isConsistent(states, x);
   }
 
   private boolean allLinearStable(SectionState[] states, DcSystem system) {

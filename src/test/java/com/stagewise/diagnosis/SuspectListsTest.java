@@ -55,6 +55,27 @@ class SuspectListsTest {
     assertThat(differ).as("suspect lists that changed").isEmpty();
   }
 
+  @Test
+  void compare_letsOnlyTiedSuspectsTradePlaces() {
+    String before = "FAULT a=0.500000[a,b,c] b=0.200000[a,b,c] c=0.200000[a,b,c]";
+    // Tied neighbours in either order, and a tie cut by the list's end filled by a tied member.
+    assertThat(compare(before, "FAULT a=0.500001[a,b,c] c=0.200000[a,b,c] b=0.200001[a,b,c]"))
+        .isNull();
+    assertThat(compare(before, "FAULT a=0.500000[a,b,c] b=0.200000[a,b,c] d=0.200000[a,b,c,d]"))
+        .isNotNull();
+    assertThat(compare(before, "FAULT a=0.500000[a,b,c] b=0.200000[a,b,c] c=0.200000[a,b,c]"))
+        .isNull();
+    String tail = "FAULT a=0.500000[a,b,c] b=0.200000[a,b,c]";
+    assertThat(compare(tail, "FAULT a=0.500000[a,b,c] c=0.200000[a,b,c]")).isNull();
+    // Suspects of different probabilities may not trade places, nor a moved one change its own.
+    assertThat(compare(before, "FAULT b=0.500000[a,b,c] a=0.200000[a,b,c] c=0.200000[a,b,c]"))
+        .isNotNull();
+    assertThat(compare(before, "FAULT a=0.500000[a,b,c] c=0.200000[a,b,c] b=0.210000[a,b,c]"))
+        .isNotNull();
+    assertThat(compare(before, "FAULT a=0.500000[a,b] b=0.200000[a,b,c] c=0.200000[a,b,c]"))
+        .isNotNull();
+  }
+
   /** Writes the recorded lists from the current diagnosis. */
   public static void main(String[] args) throws IOException {
     Files.createDirectories(RECORDED.getParent());
@@ -131,22 +152,44 @@ class SuspectListsTest {
       Item x = Item.of(a[i]);
       Item y = Item.of(b[i]);
       if (!x.fault.equals(y.fault)) {
-        // Neighbours whose probabilities agree within the last digit may trade places.
-        boolean swapped =
-            i + 1 < a.length
-                && Item.of(a[i + 1]).fault.equals(y.fault)
-                && Item.of(b[i + 1]).fault.equals(x.fault)
-                && Math.abs(x.probability - y.probability) <= 2 * LAST_DIGIT;
-        if (!swapped) {
+        // Suspects whose probabilities agree within the last digit may trade places (a tie
+        // broken by the last bits of the arithmetic): the place keeps its probability, and the
+        // fault that moved keeps its own.
+        if (Math.abs(x.probability - y.probability) > 2 * LAST_DIGIT) {
           return "suspect " + i + " " + x.fault + " became " + y.fault;
         }
-        continue;
+        Item moved = find(a, y.fault);
+        if (moved == null) {
+          // Not listed before: a tie cut by the list's length, so every suspect from here to the
+          // end was tied with it, and it was in their group.
+          for (int j = i; j < a.length; j++) {
+            if (Math.abs(Item.of(a[j]).probability - y.probability) > 2 * LAST_DIGIT) {
+              return "suspect " + i + " " + x.fault + " became " + y.fault;
+            }
+          }
+          if (!List.of(x.group.split(",")).contains(y.fault)) {
+            return "suspect " + i + " " + x.fault + " became " + y.fault + ", not of its group";
+          }
+          continue;
+        }
+        x = moved;
       }
       if (Math.abs(x.probability - y.probability) > LAST_DIGIT) {
         return x.fault + " " + x.probability + " became " + y.probability;
       }
       if (!x.group.equals(y.group)) {
         return x.fault + " group [" + x.group + "] became [" + y.group + "]";
+      }
+    }
+    return null;
+  }
+
+  /** The item of a fault in a list's words (verdict first), or null when it is not listed. */
+  private static Item find(String[] words, String fault) {
+    for (int i = 1; i < words.length; i++) {
+      Item item = Item.of(words[i]);
+      if (item.fault.equals(fault)) {
+        return item;
       }
     }
     return null;
