@@ -114,6 +114,16 @@ public class DiagnosisBenchmark {
   }
 
   /**
+   * Our solver doing the work the ngspice benchmark below gives ngspice: one circuit per fault,
+   * nominal parts, DC and AC ({@link com.stagewise.diagnosis.NominalDictionary}), for a same-work
+   * ratio beside the full diagnosis's.
+   */
+  @Benchmark
+  public int nominalFaultDictionary() {
+    return com.stagewise.diagnosis.NominalDictionary.solveAll(stage);
+  }
+
+  /**
    * ngspice 39 solving the same fault dictionary (every fault, nominal parts) in one batch process,
    * on netlists written beforehand (in the trial's set-up), so that only ngspice is timed.
    */
