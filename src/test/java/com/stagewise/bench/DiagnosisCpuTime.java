@@ -94,7 +94,8 @@ public final class DiagnosisCpuTime {
     return new ReadingSet(MeterSpec.DEFAULT, all);
   }
 
-  private static double median(double[] values) {
+  /** The median of the values (the mean of the middle two for an even count). */
+  static double median(double[] values) {
     double[] sorted = values.clone();
     Arrays.sort(sorted);
     int n = sorted.length;

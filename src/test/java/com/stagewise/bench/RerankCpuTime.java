@@ -54,16 +54,9 @@ public final class RerankCpuTime {
         Locale.ROOT,
         "%s %.3f %.3f %.3f (%d)%n",
         name,
-        median(cpu),
+        DiagnosisCpuTime.median(cpu),
         sorted[0],
-        median(wall),
+        DiagnosisCpuTime.median(wall),
         sink % 10);
-  }
-
-  private static double median(double[] values) {
-    double[] sorted = values.clone();
-    Arrays.sort(sorted);
-    int n = sorted.length;
-    return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
   }
 }
