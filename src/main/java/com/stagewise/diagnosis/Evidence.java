@@ -47,6 +47,29 @@ final class Evidence {
     double stated(double volts) {
       return ac ? measure.fromPeak(volts) : volts;
     }
+
+    // Equality and hash written out (the generated ones' rules), as in Part: the generated ones
+    // are set up through method handles on first use, slow in a fresh command-line run.
+    @Override
+    public boolean equals(Object o) {
+      return o instanceof Bound b
+          && point == b.point
+          && ac == b.ac
+          && Double.compare(value, b.value) == 0
+          && Double.compare(variance, b.variance) == 0
+          && java.util.Objects.equals(at, b.at)
+          && measure == b.measure;
+    }
+
+    @Override
+    public int hashCode() {
+      int h = Integer.hashCode(point);
+      h = 31 * h + Boolean.hashCode(ac);
+      h = 31 * h + Double.hashCode(value);
+      h = 31 * h + Double.hashCode(variance);
+      h = 31 * h + java.util.Objects.hashCode(at);
+      return 31 * h + java.util.Objects.hashCode(measure);
+    }
   }
 
   private final double tailDensity;

@@ -94,9 +94,6 @@ final class OhmsChecks {
     }
   }
 
-  /** A fault at a value (the value's bits, so NaN is one value). */
-  private record AtValue(String fault, long value) {}
-
   /** Returns whether a point names a net, package pin or part lead of the stage. */
   boolean knows(String point) {
     return healthy.node(point).isPresent();
@@ -154,9 +151,7 @@ final class OhmsChecks {
     // trimmer's network kept under its id alone would answer for every later value with the
     // first one's, so that what was asked before changed the answer.
     Object key =
-        PowerOffFaults.takesValue(fault.kind())
-            ? new AtValue(fault.id(), Double.doubleToLongBits(value))
-            : fault.id();
+        PowerOffFaults.takesValue(fault.kind()) ? new FaultAtValue(fault.id(), value) : fault.id();
     return networks.computeIfAbsent(
         key,
         k ->

@@ -21,7 +21,7 @@ final class SameReadings {
 
   private final TestPoints points;
   private final OhmsChecks ohmsChecks;
-  private final Map<Key, double[]> byFault = new ConcurrentHashMap<>();
+  private final Map<FaultAtValue, double[]> byFault = new ConcurrentHashMap<>();
 
   SameReadings(TestPoints points, OhmsChecks ohmsChecks) {
     this.points = points;
@@ -61,7 +61,7 @@ final class SameReadings {
     Fault fault = s.hypothesis.fault;
     double value = s.best.value();
     return byFault.computeIfAbsent(
-        new Key(fault.id(), Double.doubleToLongBits(value)),
+        new FaultAtValue(fault.id(), value),
         k -> {
           OhmsPrediction[] at = ohmsChecks.predictAll(fault, value);
           double[] out = new double[at.length];
@@ -71,9 +71,6 @@ final class SameReadings {
           return out;
         });
   }
-
-  /** A fault at a value (the value's bits, so NaN is one value). */
-  private record Key(String fault, long value) {}
 
   private static boolean close(double u, double v) {
     return Math.abs(u - v) <= VOLTS + SHARE * Math.max(Math.abs(u), Math.abs(v));
