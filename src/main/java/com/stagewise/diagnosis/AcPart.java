@@ -1,7 +1,5 @@
 package com.stagewise.diagnosis;
 
-import java.util.function.Supplier;
-
 /**
  * The AC (small-signal) part of a prediction: its mean amplitude and spread per test point, worked
  * out on first need and then kept. A diagnosis without AC readings ranks by DC alone, so only the
@@ -14,10 +12,18 @@ import java.util.function.Supplier;
  * is ever held at a time per hypothesis.
  */
 final class AcPart {
+  /**
+   * What works an AC part's two arrays out ({@code {mean, sd}}). Named classes rather than lambdas:
+   * each lambda spins a class of its own on first use, which a fresh command-line run pays for.
+   */
+  interface Source {
+    double[][] work();
+  }
+
   private final Object lock;
 
-  /** What works the two arrays out ({@code {mean, sd}}); null once they are known. */
-  private Supplier<double[][]> source;
+  /** What works the two arrays out; null once they are known. */
+  private Source source;
 
   private double[] mean;
   private double[] sd;
@@ -25,7 +31,7 @@ final class AcPart {
   /** Set (after mean and sd) once they are known. */
   private volatile boolean known;
 
-  private AcPart(Object lock, Supplier<double[][]> source) {
+  private AcPart(Object lock, Source source) {
     this.lock = lock;
     this.source = source;
   }
@@ -40,7 +46,7 @@ final class AcPart {
   }
 
   /** An AC part worked out by {@code source} ({@code {mean, sd}}) on first need, under the lock. */
-  static AcPart later(Object lock, Supplier<double[][]> source) {
+  static AcPart later(Object lock, Source source) {
     return new AcPart(lock, source);
   }
 
@@ -67,7 +73,7 @@ final class AcPart {
     }
     synchronized (lock) {
       if (!known) {
-        double[][] both = source.get();
+        double[][] both = source.work();
         mean = both[0];
         sd = both[1];
         source = null;
@@ -84,12 +90,17 @@ final class AcPart {
     if (meanOf == null && sdOf == null) {
       return null;
     }
-    return later(
-        lock,
-        () ->
-            new double[][] {
-              meanOf == null ? null : meanOf.mean(), sdOf == null ? null : sdOf.sd()
-            });
+    return later(lock, new Borrowed(meanOf, sdOf));
+  }
+
+  /** One part's mean with another's spread. */
+  private record Borrowed(AcPart meanOf, AcPart sdOf) implements Source {
+    @Override
+    public double[][] work() {
+      return new double[][] {
+        meanOf == null ? null : meanOf.mean(), sdOf == null ? null : sdOf.sd()
+      };
+    }
   }
 
   /**
@@ -100,13 +111,17 @@ final class AcPart {
     if (a == null) {
       return null;
     }
-    return later(
-        lock,
-        () ->
-            new double[][] {
-              mix(a.mean(), b == null ? null : b.mean(), t),
-              mix(a.sd(), b == null ? null : b.sd(), t)
-            });
+    return later(lock, new Toward(a, b, t));
+  }
+
+  /** The part a fraction of the way from one part to another. */
+  private record Toward(AcPart a, AcPart b, double t) implements Source {
+    @Override
+    public double[][] work() {
+      return new double[][] {
+        mix(a.mean(), b == null ? null : b.mean(), t), mix(a.sd(), b == null ? null : b.sd(), t)
+      };
+    }
   }
 
   static double[] mix(double[] a, double[] b, double t) {

@@ -25,7 +25,8 @@ final class ConfirmingChecks {
 
   /** Returns a part's marking in words, or "?" for a part the stage lacks. */
   String marked(String ref) {
-    return stage.part(ref).map(this::marking).orElse("?");
+    Part part = stage.part(ref).orElse(null);
+    return part == null ? "?" : marking(part);
   }
 
   /** A part's marking in words: its value, a diode's class, an LED's colour, a trimmer's set. */
@@ -67,8 +68,7 @@ final class ConfirmingChecks {
 
   /** Returns a value in the unit of the part's kind. */
   String value(String ref, double value) {
-    PartKind kind = stage.part(ref).map(Part::kind).orElse(PartKind.RESISTOR);
-    return Units.format(value, kind.unit());
+    return Units.format(value, partKind(ref).unit());
   }
 
   /** Returns how to confirm a fault at the bench, with the power off where ohms are read. */
@@ -262,6 +262,7 @@ final class ConfirmingChecks {
 
   /** Returns the kind of a part (a resistor for a name the stage lacks). */
   PartKind partKind(String ref) {
-    return stage.part(ref).map(Part::kind).orElse(PartKind.RESISTOR);
+    Part part = stage.part(ref).orElse(null);
+    return part == null ? PartKind.RESISTOR : part.kind();
   }
 }

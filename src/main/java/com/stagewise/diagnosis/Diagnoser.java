@@ -7,7 +7,6 @@ import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingRules;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
-import com.stagewise.circuit.TestInput;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
@@ -55,8 +54,7 @@ public final class Diagnoser {
   private final boolean mainsPowered;
 
   /** Each model's readings' log-likelihoods, kept across re-ranks (by the model's identity). */
-  private final Map<List<Hypothesis>, Likelihoods> likelihoods =
-      java.util.Collections.synchronizedMap(new java.util.IdentityHashMap<>());
+  private final Map<List<Hypothesis>, Likelihoods> likelihoods = new java.util.IdentityHashMap<>();
 
   private Diagnoser(Stage stage, Map<String, Integer> shopCounts) {
     this.stage = stage;
@@ -125,7 +123,11 @@ public final class Diagnoser {
 
   /** Returns the fault ids of the catalogue, healthy first. */
   public List<String> faults() {
-    return catalogue.faults().stream().map(Fault::id).toList();
+    List<String> ids = new ArrayList<>();
+    for (Fault fault : catalogue.faults()) {
+      ids.add(fault.id());
+    }
+    return java.util.Collections.unmodifiableList(ids);
   }
 
   /** Returns the diagnosis of a set of readings, listing {@link #DEFAULT_TOP} suspects at most. */
@@ -148,8 +150,8 @@ public final class Diagnoser {
     ReadingRules.requireSound(stage, readings, "");
     readings = leadsOnNets(readings);
     List<String> notes = new ArrayList<>();
-    Map<String, Double> inputs = measuredInputs(readings, notes);
-    List<Hypothesis> hypotheses = models.computeIfAbsent(inputs, this::build);
+    Map<String, Double> inputs = MeasuredInputs.of(stage, points, readings, notes);
+    List<Hypothesis> hypotheses = model(inputs);
     List<Evidence.Bound> bound = new ArrayList<>();
     List<Reading> ohms = new ArrayList<>();
     for (Reading r : readings.readings()) {
@@ -173,16 +175,20 @@ public final class Diagnoser {
             : explainer.confirmingCheck(
                 ranking.first().hypothesis.fault, ranking.first().estimate());
     if (verdict == Verdict.HEALTHY) {
-      List<String> unseen =
-          suspects.get(0).group().stream().filter(f -> !f.equals(Fault.HEALTHY.id())).toList();
+      List<String> unseen = new ArrayList<>();
+      for (String f : suspects.get(0).group()) {
+        if (!f.equals(Fault.HEALTHY.id())) {
+          unseen.add(f);
+        }
+      }
       if (!unseen.isEmpty()) {
+        List<String> named = new ArrayList<>();
+        for (String f : unseen.subList(0, Math.min(8, unseen.size()))) {
+          named.add(Wording.fault(f));
+        }
         notes.add(
             "These readings cannot rule out: "
-                + String.join(
-                    ", ",
-                    unseen.subList(0, Math.min(8, unseen.size())).stream()
-                        .map(Wording::fault)
-                        .toList())
+                + String.join(", ", named)
                 + (unseen.size() > 8 ? " and " + (unseen.size() - 8) + " more" : "")
                 + ". The next probe, or the symptom itself, may tell them apart.");
       }
@@ -208,7 +214,7 @@ public final class Diagnoser {
     ReadingRules.requireSound(stage, readings, "");
     readings = leadsOnNets(readings);
     List<Hypothesis> hypotheses =
-        models.computeIfAbsent(measuredInputs(readings, new ArrayList<>()), this::build);
+        model(MeasuredInputs.of(stage, points, readings, new ArrayList<>()));
     List<Evidence.Bound> bound = new ArrayList<>();
     List<Reading> ohms = new ArrayList<>();
     for (Reading r : readings.readings()) {
@@ -265,6 +271,16 @@ public final class Diagnoser {
     }
   }
 
+  /** The most probable first (a named comparator: a lambda spins a class on first use). */
+  private static final Comparator<Scored> MOST_PROBABLE_FIRST = new MostProbableFirst();
+
+  private static final class MostProbableFirst implements Comparator<Scored> {
+    @Override
+    public int compare(Scored a, Scored b) {
+      return Double.compare(-a.probability, -b.probability);
+    }
+  }
+
   /** Hypotheses sorted by posterior probability, highest first. */
   record Ranking(List<Scored> scored) {
     Scored first() {
@@ -283,12 +299,23 @@ public final class Diagnoser {
 
   /** The hypotheses for these readings' inputs, predicted if not yet (for tests). */
   List<Hypothesis> hypotheses(ReadingSet readings) {
-    return models.computeIfAbsent(
-        measuredInputs(leadsOnNets(readings), new ArrayList<>()), this::build);
+    return model(MeasuredInputs.of(stage, points, leadsOnNets(readings), new ArrayList<>()));
   }
 
-  private List<Hypothesis> build(Map<String, Double> inputs) {
-    return Hypotheses.build(stage, points, catalogue, priors, inputs);
+  /** The hypotheses for these inputs, built once per inputs (a lock, not a lambda). */
+  private List<Hypothesis> model(Map<String, Double> inputs) {
+    List<Hypothesis> built = models.get(inputs);
+    if (built != null) {
+      return built;
+    }
+    synchronized (models) {
+      built = models.get(inputs);
+      if (built == null) {
+        built = Hypotheses.build(stage, points, catalogue, priors, inputs);
+        models.put(inputs, built);
+      }
+      return built;
+    }
   }
 
   /** Volts readings at a part lead ({@code R2.1}) are readings at the lead's net. */
@@ -316,7 +343,14 @@ public final class Diagnoser {
       MeterSpec meter) {
     List<Scored> scored = new ArrayList<>(hypotheses.size());
     double[] weight = readingWeights(bound);
-    Likelihoods table = likelihoods.computeIfAbsent(hypotheses, l -> new Likelihoods(l, evidence));
+    Likelihoods table;
+    synchronized (likelihoods) {
+      table = likelihoods.get(hypotheses);
+      if (table == null) {
+        table = new Likelihoods(hypotheses, evidence);
+        likelihoods.put(hypotheses, table);
+      }
+    }
     double[][] figures = table.of(bound);
     // Every prediction's log-likelihood, reading by reading over all predictions at once: each
     // prediction's sum still adds its terms in the readings' order, so the numbers are the same.
@@ -368,7 +402,7 @@ public final class Diagnoser {
     for (Scored s : scored) {
       s.probability /= sum;
     }
-    scored.sort(Comparator.comparingDouble((Scored s) -> -s.probability));
+    scored.sort(MOST_PROBABLE_FIRST);
     return new Ranking(scored);
   }
 
@@ -381,7 +415,9 @@ public final class Diagnoser {
   private double[] readingWeights(List<Evidence.Bound> bound) {
     Map<String, Integer> perNode = new HashMap<>();
     for (Evidence.Bound r : bound) {
-      perNode.merge((r.ac() ? "ac:" : "dc:") + points.netOf.get(r.point()), 1, Integer::sum);
+      String node = (r.ac() ? "ac:" : "dc:") + points.netOf.get(r.point());
+      Integer count = perNode.get(node);
+      perNode.put(node, count == null ? 1 : count + 1);
     }
     double[] weight = new double[bound.size()];
     for (int i = 0; i < weight.length; i++) {
@@ -401,7 +437,7 @@ public final class Diagnoser {
       }
       listed.add(s);
     }
-    double total = listed.stream().mapToDouble(s -> s.probability).sum();
+    double total = CompensatedSum.probability(listed);
     List<Suspect> suspects = new ArrayList<>();
     for (Scored s : listed) {
       List<String> group = new ArrayList<>();
@@ -415,7 +451,13 @@ public final class Diagnoser {
           }
         }
       }
-      boolean consistent = bound.stream().allMatch(r -> Evidence.score(s.best, r) <= 3);
+      boolean consistent = true;
+      for (Evidence.Bound r : bound) {
+        if (!(Evidence.score(s.best, r) <= 3)) {
+          consistent = false;
+          break;
+        }
+      }
       Map<String, Double> predicted = new LinkedHashMap<>();
       Map<String, Double> predictedAc = new LinkedHashMap<>();
       for (int i = 0; i < points.size; i++) {
@@ -448,38 +490,5 @@ public final class Diagnoser {
     }
     // A working stage is still in play: more readings are needed before naming a fault.
     return healthy < 0.05 ? Verdict.FAULT : Verdict.INCONCLUSIVE;
-  }
-
-  private Map<String, Double> measuredInputs(ReadingSet readings, List<String> notes) {
-    Map<String, Double> measured = new HashMap<>();
-    for (Reading r : readings.readings()) {
-      if (r.kind() != Reading.Kind.DC) {
-        continue;
-      }
-      int point = points.index.get(r.at());
-      // Only a reading on the input net itself counts: a pin on that net may be the lifted one.
-      if (points.isPin(point)) {
-        continue;
-      }
-      String net = points.netOf.get(point);
-      TestInput input = stage.input(net).orElse(null);
-      if (input == null) {
-        continue;
-      }
-      double u = readings.uncertainty(r);
-      // Off by more than the meter's uncertainty plus 1 % of the level and 2 mV.
-      if (Math.abs(r.value() - input.dc()) > u + 0.01 * Math.abs(input.dc()) + 2e-3) {
-        measured.put(net, r.value());
-        notes.add(
-            String.format(
-                java.util.Locale.ROOT,
-                "Input %s reads %s where the stage sheet says %s: the stage is judged with the"
-                    + " measured level, and the fault may be upstream of this stage.",
-                net,
-                Units.volts(r.value()),
-                Units.volts(input.dc())));
-      }
-    }
-    return measured;
   }
 }

@@ -38,15 +38,15 @@ public record Diagnosis(
     notes = List.copyOf(notes);
     for (Suspect s : suspects) {
       requireFinite(s.probability(), "the probability of " + s.fault());
-      s.estimatedValue().ifPresent(v -> requireFinite(v, "the estimated value of " + s.fault()));
-      s.predicted()
-          .forEach(
-              (at, v) -> {
-                // The message only when it is needed: a suspect has a value at every point.
-                if (!Double.isFinite(v)) {
-                  throw notFinite("the volts " + s.fault() + " gives at " + at);
-                }
-              });
+      if (s.estimatedValue().isPresent()) {
+        requireFinite(s.estimatedValue().getAsDouble(), "the estimated value of " + s.fault());
+      }
+      for (java.util.Map.Entry<String, Double> e : s.predicted().entrySet()) {
+        // The message only when it is needed: a suspect has a value at every point.
+        if (!Double.isFinite(e.getValue())) {
+          throw notFinite("the volts " + s.fault() + " gives at " + e.getKey());
+        }
+      }
       requireText(s.why());
     }
     for (ProbeAdvice p : nextProbes) {
@@ -54,8 +54,12 @@ public record Diagnosis(
       requireFinite(p.hz(), "the frequency of probing " + p.at());
       requireText(p.why());
     }
-    observations.forEach(o -> requireText(o.text()));
-    notes.forEach(Diagnosis::requireText);
+    for (Observation o : observations) {
+      requireText(o.text());
+    }
+    for (String note : notes) {
+      requireText(note);
+    }
     requireText(confirmingCheck);
   }
 

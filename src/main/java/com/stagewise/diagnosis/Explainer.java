@@ -3,7 +3,6 @@ package com.stagewise.diagnosis;
 import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.PackageType;
-import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.ReadingSet;
@@ -60,13 +59,18 @@ final class Explainer {
         continue;
       }
       Optional<Rail> rail = stage.rail(net);
-      Optional<Amplifier> output =
-          stage.amplifiers().stream().filter(a -> a.out().equals(net)).findFirst();
+      Amplifier output = null;
+      for (Amplifier a : stage.amplifiers()) {
+        if (a.out().equals(net)) {
+          output = a;
+          break;
+        }
+      }
       if (rail.isPresent()) {
-        railObservation(rail.get(), r).ifPresent(out::add);
-      } else if (output.isPresent() && !points.isPin(r.point())
-          || output.isPresent() && isOutputPin(output.get(), r.at())) {
-        outputObservation(output.get(), r, expected).ifPresent(out::add);
+        addIfAny(out, railObservation(rail.get(), r));
+      } else if (output != null && !points.isPin(r.point())
+          || output != null && isOutputPin(output, r.at())) {
+        addIfAny(out, outputObservation(output, r, expected));
       } else if (Evidence.score(expected, r) > 4) {
         out.add(
             new Observation(
@@ -78,8 +82,14 @@ final class Explainer {
                     volts(Evidence.mean(expected, r)))));
       }
     }
-    inputPairs(readings, expected).forEach(out::add);
+    out.addAll(inputPairs(readings, expected));
     return out;
+  }
+
+  private static void addIfAny(List<Observation> out, Optional<Observation> observation) {
+    if (observation.isPresent()) {
+      out.add(observation.get());
+    }
   }
 
   private boolean isOutputPin(Amplifier amp, String at) {
@@ -317,7 +327,7 @@ final class Explainer {
                   "rail %s low: about %s where %s is expected",
                   s,
                   volts(estimate.getAsDouble()),
-                  volts(stage.rail(s).map(Rail::volts).orElse(0.0)))
+                  volts(stage.rail(s).isPresent() ? stage.rail(s).get().volts() : 0.0))
               : "rail " + s + " low";
       case LEAKY ->
           s
@@ -336,7 +346,7 @@ final class Explainer {
                   "%s misset: set at about %.2f of its travel, where the sheet says %.2f",
                   s,
                   estimate.getAsDouble(),
-                  stage.part(s).map(Part::position).orElse(Double.NaN))
+                  stage.part(s).isPresent() ? stage.part(s).get().position() : Double.NaN)
               : s + " misset (" + marked(s) + ")";
     };
   }
@@ -389,14 +399,12 @@ final class Explainer {
     if (type == null) {
       return "pin " + pin;
     }
-    return type.role(pin)
-        .map(
-            role ->
-                role.terminal().words()
-                    + (role.section().isEmpty() || type.sections().size() == 1
-                        ? ""
-                        : " " + role.section()))
-        .orElse("pin " + pin);
+    var role = type.role(pin).orElse(null);
+    if (role == null) {
+      return "pin " + pin;
+    }
+    return role.terminal().words()
+        + (role.section().isEmpty() || type.sections().size() == 1 ? "" : " " + role.section());
   }
 
   private String marked(String ref) {

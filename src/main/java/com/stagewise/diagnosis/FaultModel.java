@@ -49,13 +49,31 @@ final class FaultModel {
     List<Scenario> raw = applied(base, conditions, fault);
     List<Scenario> tied = new ArrayList<>();
     // The points of a grid differ only in one value, never in which nets float: check once.
-    boolean grid = raw.size() > 1 && raw.stream().allMatch(Scenario::onGrid);
+    boolean grid = raw.size() > 1 && allOnGrid(raw);
     List<String> gridFloating = grid ? floatingNets(raw.get(0)) : null;
     for (Scenario scenario : raw) {
       tied.addAll(tieFloating(scenario, grid ? gridFloating : floatingNets(scenario)));
     }
-    double total = tied.stream().mapToDouble(Scenario::weight).sum();
-    return tied.stream().map(s -> s.withWeight(s.weight() / total)).toList();
+    CompensatedSum sum = new CompensatedSum();
+    for (Scenario s : tied) {
+      sum.add(s.weight());
+    }
+    double total = sum.total();
+    List<Scenario> out = new ArrayList<>(tied.size());
+    for (Scenario s : tied) {
+      out.add(s.withWeight(s.weight() / total));
+    }
+    return java.util.Collections.unmodifiableList(out);
+  }
+
+  /** Whether every scenario is a point of a grid. */
+  static boolean allOnGrid(List<Scenario> scenarios) {
+    for (Scenario s : scenarios) {
+      if (!s.onGrid()) {
+        return false;
+      }
+    }
+    return true;
   }
 
   /** Returns the factors tried for a part drifted high or low (above 1 for high). */
@@ -136,7 +154,8 @@ final class FaultModel {
   static final int POSITIONS = 41;
 
   private static boolean isTrimmer(Stage base, String ref) {
-    return base.part(ref).map(p -> p.kind().isTrimmer()).orElse(false);
+    Part part = base.part(ref).orElse(null);
+    return part != null && part.kind().isTrimmer();
   }
 
   /** Returns the leak resistances tried for a leaky junction, log-spaced. */
@@ -150,14 +169,15 @@ final class FaultModel {
 
   /** Returns the wiper positions tried for a misset trimmer set at {@code nominal}. */
   static double[] missetPositions(double nominal) {
-    List<Double> positions = new ArrayList<>();
+    double[] positions = new double[POSITIONS];
+    int n = 0;
     for (int i = 0; i < POSITIONS; i++) {
       double p = (double) i / (POSITIONS - 1);
       if (Math.abs(p - nominal) > SET_SPREAD + 1e-9) {
-        positions.add(p);
+        positions[n++] = p;
       }
     }
-    return positions.stream().mapToDouble(Double::doubleValue).toArray();
+    return java.util.Arrays.copyOf(positions, n);
   }
 
   private static List<Scenario> leaky(Stage base, Conditions conditions, String ref) {
@@ -174,7 +194,7 @@ final class FaultModel {
   private static Scenario wiperOpen(Stage base, Conditions conditions, String ref) {
     Part part = base.part(ref).orElseThrow();
     Part track = Part.resistor(ref, part.value(), part.tolerance(), part.netA(), part.netB());
-    return new Scenario(base.withPart(ref, p -> track), conditions, 1, Double.NaN, "");
+    return new Scenario(replaced(base, track), conditions, 1, Double.NaN, "");
   }
 
   /** The track is open: the wiper still touches one side or the other (two scenarios). */
@@ -186,7 +206,7 @@ final class FaultModel {
       Part upper = Part.resistor(ref, track[0], part.tolerance(), part.netA(), part.wiper());
       out.add(
           new Scenario(
-              base.withPart(ref, p -> upper),
+              replaced(base, upper),
               conditions,
               0.5,
               Double.NaN,
@@ -196,7 +216,7 @@ final class FaultModel {
       Part lower = Part.resistor(ref, track[1], part.tolerance(), part.wiper(), part.netB());
       out.add(
           new Scenario(
-              base.withPart(ref, p -> lower),
+              replaced(base, lower),
               conditions,
               0.5,
               Double.NaN,
@@ -213,8 +233,7 @@ final class FaultModel {
     List<Scenario> grid = new ArrayList<>();
     for (double position : missetPositions(part.position())) {
       grid.add(
-          new Scenario(
-              base.withPart(ref, p -> p.withPosition(position)), conditions, 1, position, ""));
+          new Scenario(replaced(base, part.withPosition(position)), conditions, 1, position, ""));
     }
     return grid;
   }
@@ -222,7 +241,7 @@ final class FaultModel {
   private static Stage shorted(Stage base, String ref) {
     Part part = base.part(ref).orElseThrow();
     Part link = new Part(part.ref(), PartKind.RESISTOR, 0, 0, part.netA(), part.netB());
-    return base.withPart(ref, p -> link);
+    return replaced(base, link);
   }
 
   private static List<Scenario> drifted(
@@ -235,7 +254,7 @@ final class FaultModel {
             : driftFactors(part.tolerance(), high);
     for (double factor : factors) {
       double value = part.value() * factor;
-      grid.add(new Scenario(base.withPart(ref, p -> p.withValue(value)), conditions, 1, value, ""));
+      grid.add(new Scenario(replaced(base, part.withValue(value)), conditions, 1, value, ""));
     }
     return grid;
   }
@@ -262,7 +281,8 @@ final class FaultModel {
     for (Amplifier amp : base.sectionsOf(pkg)) {
       for (Terminal terminal : Terminal.values()) {
         if (amp.pin(terminal) == pin) {
-          stage = stage.withAmplifier(amp.ref(), a -> a.withNet(terminal, pinNet));
+          stage =
+              replaced(stage, stage.amplifier(amp.ref()).orElseThrow().withNet(terminal, pinNet));
         }
       }
     }
@@ -378,16 +398,30 @@ final class FaultModel {
   /** The nets of a scenario with no DC path to a driven net; a dead output drives nothing. */
   private static List<String> floatingNets(Scenario scenario) {
     java.util.Set<String> dead = new java.util.HashSet<>();
-    scenario
-        .conditions()
-        .forced()
-        .forEach(
-            (ref, state) -> {
-              if (state == SectionState.DEAD) {
-                dead.add(ref);
-              }
-            });
+    for (Map.Entry<String, SectionState> e : scenario.conditions().forced().entrySet()) {
+      if (e.getValue() == SectionState.DEAD) {
+        dead.add(e.getKey());
+      }
+    }
     return Connectivity.floatingNets(scenario.stage(), dead);
+  }
+
+  /** Returns a copy of a stage with the part of the same designator replaced by {@code part}. */
+  static Stage replaced(Stage base, Part part) {
+    List<Part> parts = new ArrayList<>(base.parts().size());
+    for (Part p : base.parts()) {
+      parts.add(p.ref().equals(part.ref()) ? part : p);
+    }
+    return base.withParts(parts);
+  }
+
+  /** Returns a copy of a stage with the section of the same designator replaced by {@code amp}. */
+  static Stage replaced(Stage base, Amplifier amp) {
+    List<Amplifier> amps = new ArrayList<>(base.amplifiers().size());
+    for (Amplifier a : base.amplifiers()) {
+      amps.add(a.ref().equals(amp.ref()) ? amp : a);
+    }
+    return base.withAmplifiers(amps);
   }
 
   private static Amplifier inputReader(Stage stage, String net) {

@@ -65,14 +65,30 @@ final class Hypotheses {
     }
     Diagnoser.Hypothesis[] built = new Diagnoser.Hypothesis[faults.size()];
     EveryCore.forEach(
-        order.length,
-        j -> {
-          Fault fault = faults.get(order[j]);
-          List<Scenario> scenarios = FaultModel.scenarios(stage, base, fault);
-          List<Prediction> predictions = predictAll(predictor, scenarios);
-          built[order[j]] = new Diagnoser.Hypothesis(fault, priors.get(fault.id()), predictions);
-        });
+        order.length, new BuildOne(stage, base, faults, order, priors, predictor, built));
     return List.of(built);
+  }
+
+  /**
+   * Builds the hypothesis of one fault (by its place in the order) into its slot. A class rather
+   * than a lambda: each lambda spins a class of its own on first use, paid by a fresh run.
+   */
+  private record BuildOne(
+      Stage stage,
+      Conditions base,
+      List<Fault> faults,
+      int[] order,
+      Map<String, Double> priors,
+      Predictor predictor,
+      Diagnoser.Hypothesis[] built)
+      implements java.util.function.IntConsumer {
+    @Override
+    public void accept(int j) {
+      Fault fault = faults.get(order[j]);
+      List<Scenario> scenarios = FaultModel.scenarios(stage, base, fault);
+      List<Prediction> predictions = predictAll(predictor, scenarios);
+      built[order[j]] = new Diagnoser.Hypothesis(fault, priors.get(fault.id()), predictions);
+    }
   }
 
   /** Whether a fault of this kind is tried on a grid of values (a drift, a low rail, a leak). */
@@ -88,7 +104,7 @@ final class Hypotheses {
   }
 
   private static List<Prediction> predictAll(Predictor predictor, List<Scenario> scenarios) {
-    boolean grid = scenarios.size() > 1 && scenarios.stream().allMatch(Scenario::onGrid);
+    boolean grid = scenarios.size() > 1 && FaultModel.allOnGrid(scenarios);
     ScenarioCompiler compiler = new ScenarioCompiler();
     if (!grid) {
       List<Prediction> out = new ArrayList<>();
@@ -127,12 +143,25 @@ final class Hypotheses {
       }
       raw.set(i, borrowed);
     }
-    boolean simple = raw.stream().allMatch(list -> list.size() == 1);
+    boolean simple = true;
+    for (List<Prediction> list : raw) {
+      simple &= list.size() == 1;
+    }
     List<Prediction> out = new ArrayList<>();
     if (!simple) {
-      raw.forEach(out::addAll);
-      double total = out.stream().mapToDouble(Prediction::weight).sum();
-      return out.stream().map(p -> p.withWeight(p.weight() / total)).toList();
+      CompensatedSum sum = new CompensatedSum();
+      for (List<Prediction> list : raw) {
+        out.addAll(list);
+        for (Prediction p : list) {
+          sum.add(p.weight());
+        }
+      }
+      double total = sum.total();
+      List<Prediction> weighed = new ArrayList<>(out.size());
+      for (Prediction p : out) {
+        weighed.add(p.withWeight(p.weight() / total));
+      }
+      return java.util.Collections.unmodifiableList(weighed);
     }
     // A log-uniform prior over the drifted value: equal weight per interpolated step.
     int steps = (n - 1) * SUB_STEPS + 1;

@@ -83,8 +83,7 @@ final class Likelihoods {
         missing.add(r);
       }
     }
-    EveryCore.forEach(
-        missing.size(), m -> out[missing.get(m)] = compute(readings.get(missing.get(m))));
+    EveryCore.forEach(missing.size(), new ComputeMissing(readings, missing, out));
     for (int r : missing) {
       byReading.put(readings.get(r), out[r]);
     }
@@ -94,6 +93,24 @@ final class Likelihoods {
       eldest.remove();
     }
     return out;
+  }
+
+  /** Works out the missing readings' figures, one task each (a class: a lambda spins one). */
+  private final class ComputeMissing implements java.util.function.IntConsumer {
+    private final List<Evidence.Bound> readings;
+    private final List<Integer> missing;
+    private final double[][] out;
+
+    ComputeMissing(List<Evidence.Bound> readings, List<Integer> missing, double[][] out) {
+      this.readings = readings;
+      this.missing = missing;
+      this.out = out;
+    }
+
+    @Override
+    public void accept(int m) {
+      out[missing.get(m)] = compute(readings.get(missing.get(m)));
+    }
   }
 
   private double[] compute(Evidence.Bound reading) {

@@ -38,6 +38,16 @@ final class NextProbes {
     this.ohmsChecks = ohmsChecks;
   }
 
+  /** The most informative first (a named comparator: a lambda spins a class on first use). */
+  private static final Comparator<ProbeAdvice> MOST_BITS_FIRST = new MostBitsFirst();
+
+  private static final class MostBitsFirst implements Comparator<ProbeAdvice> {
+    @Override
+    public int compare(ProbeAdvice a, ProbeAdvice b) {
+      return Double.compare(-a.bits(), -b.bits());
+    }
+  }
+
   /**
    * Returns the volts probes with the best power-off (ohms) checks among them, all sorted by bits:
    * an ohms check comes first only when it tells the leading suspects apart better than any volts
@@ -63,7 +73,7 @@ final class NextProbes {
     }
     List<ProbeAdvice> all = new ArrayList<>(volts);
     all.addAll(ohmsChecks.plan(top, ohms, meter));
-    all.sort(Comparator.comparingDouble((ProbeAdvice a) -> -a.bits()));
+    all.sort(MOST_BITS_FIRST);
     all = new ArrayList<>(all.subList(0, Math.min(volts.size() + 2, all.size())));
     if (mainsPowered) {
       List<Diagnoser.Scored> leading = new ArrayList<>();
@@ -84,7 +94,11 @@ final class NextProbes {
             bits = a.bits();
           }
         }
-        all.removeIf(a -> same(a, check));
+        for (java.util.Iterator<ProbeAdvice> it = all.iterator(); it.hasNext(); ) {
+          if (same(it.next(), check)) {
+            it.remove();
+          }
+        }
         all.add(
             0,
             new ProbeAdvice(check.at(), check.kind(), check.hz(), bits, check.why(), check.to()));

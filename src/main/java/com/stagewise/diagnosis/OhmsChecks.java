@@ -152,14 +152,15 @@ final class OhmsChecks {
     // first one's, so that what was asked before changed the answer.
     Object key =
         PowerOffFaults.takesValue(fault.kind()) ? new FaultAtValue(fault.id(), value) : fault.id();
-    return networks.computeIfAbsent(
-        key,
-        k ->
-            new Faulted(
-                drift && Double.isNaN(value)
-                    ? healthy
-                    : PowerOffFaults.faulted(stage, fault, value),
-                onFaultedPairs.length));
+    Faulted kept = networks.get(key);
+    if (kept == null) {
+      kept =
+          new Faulted(
+              drift && Double.isNaN(value) ? healthy : PowerOffFaults.faulted(stage, fault, value),
+              onFaultedPairs.length);
+      networks.put(key, kept);
+    }
+    return kept;
   }
 
   /** Returns the summed log-likelihood of the ohms readings under a fault with a drifted value. */
@@ -238,7 +239,7 @@ final class OhmsChecks {
     if (top.size() < 2) {
       return List.of();
     }
-    double mass = top.stream().mapToDouble(s -> s.probability).sum();
+    double mass = CompensatedSum.probability(top);
     double[] prior = new double[top.size()];
     for (int h = 0; h < prior.length; h++) {
       prior[h] = top.get(h).probability / mass;
@@ -258,9 +259,7 @@ final class OhmsChecks {
         advice.add(new Candidate(pairs[k], bits, table[k], acrossAt(pairs[k]).isEmpty()));
       }
     }
-    advice.sort(
-        Comparator.comparingDouble((Candidate x) -> -x.bits())
-            .thenComparing(x -> x.acrossNone() ? 1 : 0));
+    advice.sort(new MostBitsFirst());
     // Two neighbouring pins read what their two nets read unless a joint is open: list the pins
     // only when that promises more, else the nets (ties keep the nets, listed first above).
     // Only the listed checks get their why.
@@ -286,6 +285,15 @@ final class OhmsChecks {
   /** An ohms check before its why is written: the pair's index, its bits, its predictions. */
   private record Candidate(int pair, double bits, OhmsPrediction[] predicted, boolean acrossNone) {}
 
+  /** The most bits first, then a pair with a resistor across it (a class: a lambda spins one). */
+  private static final class MostBitsFirst implements Comparator<Candidate> {
+    @Override
+    public int compare(Candidate x, Candidate y) {
+      int byBits = Double.compare(-x.bits(), -y.bits());
+      return byBits != 0 ? byBits : Integer.compare(x.acrossNone() ? 1 : 0, y.acrossNone() ? 1 : 0);
+    }
+  }
+
   /** Returns the resistors across a check pair, kept once found. */
   private synchronized String acrossAt(int pair) {
     if (acrossPairs[pair] == null) {
@@ -305,7 +313,7 @@ final class OhmsChecks {
     if (leading.size() < 2) {
       return Optional.empty();
     }
-    double mass = leading.stream().mapToDouble(s -> s.probability).sum();
+    double mass = CompensatedSum.probability(leading);
     double[] prior = new double[leading.size()];
     for (int h = 0; h < prior.length; h++) {
       prior[h] = leading.get(h).probability / mass;
@@ -372,7 +380,10 @@ final class OhmsChecks {
     List<OhmsPrediction> shown = new ArrayList<>();
     for (int h = 0; h < top.size() && parts.size() < 3; h++) {
       OhmsPrediction p = predicted[h];
-      boolean distinct = shown.stream().noneMatch(x -> similar(x, p));
+      boolean distinct = true;
+      for (OhmsPrediction x : shown) {
+        distinct &= !similar(x, p);
+      }
       if (!distinct) {
         continue;
       }
@@ -427,11 +438,9 @@ final class OhmsChecks {
   String ifFault(Fault fault, double value) {
     String s = fault.subject();
     boolean known = Double.isFinite(value);
-    String unit =
-        stage
-            .part(s)
-            .map(p -> p.kind() == PartKind.CAPACITOR ? "F" : p.kind() == PartKind.ZENER ? "V" : "Ω")
-            .orElse("Ω");
+    Part part = stage.part(s).orElse(null);
+    PartKind kind = part == null ? PartKind.RESISTOR : part.kind();
+    String unit = kind == PartKind.CAPACITOR ? "F" : kind == PartKind.ZENER ? "V" : "Ω";
     return switch (fault.kind()) {
       case HEALTHY -> "when healthy";
       case OPEN -> "if " + s + " is open";

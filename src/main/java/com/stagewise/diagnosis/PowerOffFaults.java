@@ -49,16 +49,17 @@ public final class PowerOffFaults {
         }
         double[] track = p.trackOhms();
         yield value == 1
-            ? base.withPart(s, x -> Part.resistor(s, track[1], p.tolerance(), p.wiper(), p.netB()))
-            : base.withPart(s, x -> Part.resistor(s, track[0], p.tolerance(), p.netA(), p.wiper()));
+            ? FaultModel.replaced(
+                base, Part.resistor(s, track[1], p.tolerance(), p.wiper(), p.netB()))
+            : FaultModel.replaced(
+                base, Part.resistor(s, track[0], p.tolerance(), p.netA(), p.wiper()));
       }
       case SHORT -> {
         Part p = part(base, s);
-        yield base.withPart(s, x -> new Part(s, PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
+        yield FaultModel.replaced(base, new Part(s, PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
       }
       case HIGH, LOW -> {
-        part(base, s);
-        yield base.withPart(s, x -> x.withValue(value));
+        yield FaultModel.replaced(base, part(base, s).withValue(value));
       }
       case LEAKY -> {
         Part p = part(base, s);
@@ -69,14 +70,15 @@ public final class PowerOffFaults {
       }
       case WIPER_OPEN -> {
         Part p = part(base, s);
-        yield base.withPart(s, x -> Part.resistor(s, p.value(), p.tolerance(), p.netA(), p.netB()));
+        yield FaultModel.replaced(
+            base, Part.resistor(s, p.value(), p.tolerance(), p.netA(), p.netB()));
       }
       case MISSET -> {
-        part(base, s);
+        Part p = part(base, s);
         if (!(value >= 0 && value <= 1)) {
           throw new IllegalArgumentException(fault.id() + " needs the wiper's position, 0 to 1");
         }
-        yield base.withPart(s, x -> x.withPosition(value));
+        yield FaultModel.replaced(base, p.withPosition(value));
       }
       case LIFTED -> lifted(base, s, fault.pin());
       case BRIDGE -> {
@@ -143,8 +145,11 @@ public final class PowerOffFaults {
   }
 
   private static Part part(Stage base, String ref) {
-    return base.part(ref)
-        .orElseThrow(() -> new IllegalArgumentException("the stage has no part " + ref));
+    Part part = base.part(ref).orElse(null);
+    if (part == null) {
+      throw new IllegalArgumentException("the stage has no part " + ref);
+    }
+    return part;
   }
 
   private static Stage lifted(Stage base, String pkg, int pin) {
@@ -153,7 +158,9 @@ public final class PowerOffFaults {
     for (Amplifier amp : base.sectionsOf(pkg)) {
       for (Terminal terminal : Terminal.values()) {
         if (amp.pin(terminal) == pin) {
-          stage = stage.withAmplifier(amp.ref(), a -> a.withNet(terminal, pinNet));
+          stage =
+              FaultModel.replaced(
+                  stage, stage.amplifier(amp.ref()).orElseThrow().withNet(terminal, pinNet));
         }
       }
     }

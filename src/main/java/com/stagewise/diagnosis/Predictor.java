@@ -1,8 +1,6 @@
 package com.stagewise.diagnosis;
 
 import com.stagewise.circuit.Amplifier;
-import com.stagewise.circuit.DeviceClass;
-import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.Stage;
 import com.stagewise.solver.AcSolution;
@@ -19,8 +17,6 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.function.Function;
-import java.util.function.UnaryOperator;
 
 /**
  * Predicts what every test point reads under one scenario, with its spread.
@@ -36,15 +32,12 @@ import java.util.function.UnaryOperator;
  * only numbers change between the solves.
  */
 final class Predictor {
-  /** Standard deviation of a uniform distribution over ±1, in units of the half-width. */
-  private static final double UNIFORM_SD = 1 / Math.sqrt(3);
-
   private final TestPoints points;
   private final double span;
 
   /** Pin maps by list of sections; shared by the threads that predict the hypotheses. */
   private final Map<List<Amplifier>, Map<String, String>> pinCache =
-      java.util.Collections.synchronizedMap(new java.util.IdentityHashMap<>());
+      new java.util.IdentityHashMap<>();
 
   Predictor(TestPoints points, Stage base) {
     this.points = points;
@@ -80,7 +73,7 @@ final class Predictor {
       reader = reader(stage, cs);
       compiler.attach(reader);
     }
-    if (drifting(stage)) {
+    if (Perturbation.drifting(stage)) {
       // A floating input tied to a rail stands for its bias current's drift; the current itself,
       // pushed through the tie, would move the node by hundreds of volts.
       List<Change> noBias = new ArrayList<>();
@@ -111,7 +104,7 @@ final class Predictor {
       outcomes.add(new Outcome(settled.primary(), null, 0, scenario.weight(), "", null));
     }
     boolean ac = cs.acHz() > 0;
-    List<Perturbation> perturbations = withSpread ? perturbations(stage, cs) : List.of();
+    List<Perturbation> perturbations = withSpread ? Perturbation.all(stage, cs) : List.of();
     List<Prediction> predictions = new ArrayList<>();
     for (Outcome o : outcomes) {
       Analysis at =
@@ -129,12 +122,12 @@ final class Predictor {
       // need (the ranking without AC readings never asks), with the calls the eager loop made.
       List<AcStep> acSteps = new ArrayList<>();
       for (Perturbation p : perturbations) {
-        Change change = p.change.apply(at);
+        Change change = p.change(at);
         double[] read = linear == null ? null : linear.stepRead(change, reader.probe);
         if (read != null) {
           addSquares(dcVar, reader.spread(read), dcMean);
           // Only part values and gain move the small-signal response of a settled state.
-          if (ac && p.movesAc) {
+          if (ac && p.movesAc()) {
             acSteps.add(new AcStep(change, null, null));
           }
           continue;
@@ -148,14 +141,14 @@ final class Predictor {
         }
         if (near != null) {
           addSquares(dcVar, reader.dc(near), dcMean);
-          if (ac && p.movesAc) {
+          if (ac && p.movesAc()) {
             acSteps.add(new AcStep(null, moved, near));
           }
         }
       }
       OperatingPoint point = o.point;
       AcPart acPart =
-          ac ? AcPart.later(compiler, () -> ac(reader, at, linear, point, acSteps)) : null;
+          ac ? AcPart.later(compiler, new AcWork(reader, at, linear, point, acSteps)) : null;
       predictions.add(
           new Prediction(
               o.weight,
@@ -189,7 +182,10 @@ final class Predictor {
         && solved.points().size() == 1
         && solved.notes().isEmpty()
         && inStartStates(cs, solved.primary())) {
-      cs.linearize(solved.primary()).ifPresent(compiler::anchor);
+      Analysis.Linearized anchor = cs.linearize(solved.primary()).orElse(null);
+      if (anchor != null) {
+        compiler.anchor(anchor);
+      }
     }
     return outcome;
   }
@@ -202,6 +198,33 @@ final class Predictor {
       }
     }
     return true;
+  }
+
+  /** An outcome's AC part, worked out on first need (see {@link #ac}). */
+  private final class AcWork implements AcPart.Source {
+    private final Reader reader;
+    private final Analysis at;
+    private final Analysis.Linearized linear;
+    private final OperatingPoint point;
+    private final List<AcStep> steps;
+
+    AcWork(
+        Reader reader,
+        Analysis at,
+        Analysis.Linearized linear,
+        OperatingPoint point,
+        List<AcStep> steps) {
+      this.reader = reader;
+      this.at = at;
+      this.linear = linear;
+      this.point = point;
+      this.steps = steps;
+    }
+
+    @Override
+    public double[][] work() {
+      return ac(reader, at, linear, point, steps);
+    }
   }
 
   /**
@@ -242,12 +265,6 @@ final class Predictor {
       String label,
       Analysis.Linearized linear) {}
 
-  /**
-   * A change of one number of a stage by one standard deviation, worked out from the analysis it
-   * applies to.
-   */
-  private record Perturbation(Function<Analysis, Change> change, boolean movesAc) {}
-
   /** Reads the test points from a scenario's points; a net the fault removed reads 0 V. */
   private final class Reader {
     private final Probe probe;
@@ -282,8 +299,14 @@ final class Predictor {
   private Reader reader(Stage stage, Analysis cs) {
     // Scenarios of one fault share their sections (a drift grid changes only a value), so the pin
     // map is kept per list of sections.
-    Map<String, String> pins =
-        pinCache.computeIfAbsent(stage.amplifiers(), amps -> stage.pinNets());
+    Map<String, String> pins;
+    synchronized (pinCache) {
+      pins = pinCache.get(stage.amplifiers());
+      if (pins == null) {
+        pins = stage.pinNets();
+        pinCache.put(stage.amplifiers(), pins);
+      }
+    }
     List<String> nets = new ArrayList<>();
     Map<String, Integer> seen = new HashMap<>();
     int[] slot = new int[points.size];
@@ -294,13 +317,13 @@ final class Predictor {
         slot[i] = -1;
         continue;
       }
-      slot[i] =
-          seen.computeIfAbsent(
-              net,
-              n -> {
-                nets.add(n);
-                return nets.size() - 1;
-              });
+      Integer known = seen.get(net);
+      if (known == null) {
+        known = nets.size();
+        nets.add(net);
+        seen.put(net, known);
+      }
+      slot[i] = known;
     }
     return new Reader(cs.probe(nets), slot);
   }
@@ -361,64 +384,6 @@ final class Predictor {
     return settled.primary();
   }
 
-  private List<Perturbation> perturbations(Stage stage, Analysis cs) {
-    List<Perturbation> list = new ArrayList<>();
-    for (Part part : stage.parts()) {
-      if (part.tolerance() > 0 && !part.ref().startsWith("~")) {
-        double moved = cs.partValue(part.ref()) * (1 + part.tolerance() * UNIFORM_SD);
-        Change change = new Change.PartValue(part.ref(), moved);
-        list.add(new Perturbation(c -> change, true));
-      }
-      if (part.kind().isTrimmer() && !part.sealed() && !part.ref().startsWith("~")) {
-        // An unsealed trimmer sits within its setting spread of the sheet's position.
-        double position = cs.partPosition(part.ref());
-        double step = FaultModel.SET_SPREAD * UNIFORM_SD;
-        double moved = position + step <= 1 ? position + step : position - step;
-        Change change = new Change.WiperPosition(part.ref(), moved);
-        list.add(new Perturbation(c -> change, true));
-      }
-    }
-    for (Rail rail : stage.rails()) {
-      double moved = cs.drivenVolts(rail.net()) * (1 + rail.tolerance() * UNIFORM_SD);
-      Change change = new Change.DrivenVolts(rail.net(), moved);
-      list.add(new Perturbation(c -> change, false));
-    }
-    boolean drifting = drifting(stage);
-    for (Amplifier amp : stage.amplifiers()) {
-      DeviceClass type = amp.deviceClass();
-      String ref = amp.ref();
-      double offsetStep = type.offset().high() * UNIFORM_SD;
-      // Uniform over the class's range: its standard deviation is the width over √12.
-      double biasStep = (type.biasCurrent().high() - type.biasCurrent().low()) / Math.sqrt(12);
-      double lowStep = (type.headroomLow().high() - type.headroomLow().low()) / Math.sqrt(12);
-      double highStep = (type.headroomHigh().high() - type.headroomHigh().low()) / Math.sqrt(12);
-      list.add(device(ref, p -> p.withOffset(p.offset() + offsetStep), false));
-      if (!drifting) {
-        // Where a floating input is tied to a rail to stand for its drift, the bias current is
-        // already what put it there; moving it again through the tie would count it twice.
-        list.add(
-            device(ref, p -> p.withBias(p.biasPlus() + biasStep, p.biasMinus() + biasStep), false));
-      }
-      list.add(
-          device(ref, p -> p.withHeadroom(p.headroomLow() + lowStep, p.headroomHigh()), false));
-      list.add(
-          device(ref, p -> p.withHeadroom(p.headroomLow(), p.headroomHigh() + highStep), false));
-      // Gain is spread over a decade or more; the low end of the class's range is the honest step.
-      double lowGain = type.openLoopGain().low();
-      list.add(device(ref, p -> p.withGain(lowGain), true));
-    }
-    return list;
-  }
-
-  private static boolean drifting(Stage stage) {
-    return stage.parts().stream().anyMatch(part -> part.ref().startsWith(FaultModel.DRIFT_TIE));
-  }
-
-  private static Perturbation device(
-      String ref, UnaryOperator<DeviceParams> change, boolean movesAc) {
-    return new Perturbation(c -> new Change.Device(ref, change.apply(c.device(ref))), movesAc);
-  }
-
   private Prediction unpredictable(Scenario scenario) {
     // No consistent state (e.g. the fault makes the stage oscillate): any reading within the rails.
     double[] mean = new double[points.size];
@@ -436,7 +401,9 @@ final class Predictor {
 
   private static String describe(OperatingPoint point) {
     List<String> parts = new ArrayList<>();
-    point.states().forEach((ref, s) -> parts.add(ref + " " + s.word()));
+    for (Map.Entry<String, SectionState> e : point.states().entrySet()) {
+      parts.add(e.getKey() + " " + e.getValue().word());
+    }
     return String.join(", ", parts);
   }
 

@@ -1,5 +1,6 @@
 package com.stagewise.diagnosis;
 
+import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Stage;
 import java.util.LinkedHashMap;
@@ -138,7 +139,8 @@ public final class Priors {
     return switch (fault.kind()) {
       case HEALTHY -> 0;
       case OPEN, SHORT, HIGH, LOW, LEAKY, WIPER_OPEN, MISSET -> {
-        PartKind kind = stage.part(s).map(p -> p.kind()).orElse(PartKind.RESISTOR);
+        Part part = stage.part(s).orElse(null);
+        PartKind kind = part == null ? PartKind.RESISTOR : part.kind();
         yield switch (kind) {
           case RESISTOR -> RESISTOR_RATE * resistorShare(fault.kind());
           case CAPACITOR -> CAPACITOR_RATE * capacitorShare(fault.kind());

@@ -76,7 +76,7 @@ final class ProbePlanner {
       for (int v = 0; v < order.length; v++) {
         order[v] = v;
       }
-      java.util.Arrays.sort(order, Comparator.comparingDouble(v -> -s.scenarioWeights[v]));
+      java.util.Arrays.sort(order, new HeaviestFirst(s.scenarioWeights));
       double kept = 0;
       int count = Math.min(SCENARIOS_PER_HYPOTHESIS, order.length);
       for (int k = 0; k < count; k++) {
@@ -94,13 +94,15 @@ final class ProbePlanner {
       taken.add((r.ac() ? "ac:" : "dc:") + r.at());
     }
     List<ProbeAdvice> advice = new ArrayList<>();
-    boolean ac = stage.inputs().stream().anyMatch(TestInput::hasAc);
-    double hz =
-        stage.inputs().stream()
-            .filter(TestInput::hasAc)
-            .mapToDouble(TestInput::hz)
-            .findFirst()
-            .orElse(0);
+    boolean ac = false;
+    double hz = 0;
+    for (TestInput input : stage.inputs()) {
+      if (input.hasAc()) {
+        ac = true;
+        hz = input.hz();
+        break;
+      }
+    }
     for (int i = 0; i < points.size; i++) {
       String name = points.names.get(i);
       if (name.equals(stage.ground())) {
@@ -117,13 +119,32 @@ final class ProbePlanner {
       }
     }
     // Best first; on a tie prefer a package pin (a technician probes the pins), then sheet order.
-    advice.sort(
-        Comparator.comparingDouble((ProbeAdvice a) -> -a.bits())
-            .thenComparing(a -> points.isPin(points.index.get(a.at())) ? 0 : 1));
+    advice.sort(new MostBitsPinsFirst());
     return advice.subList(0, Math.min(LISTED, advice.size()));
   }
 
   /** Bits to 1/10000: finer differences are quadrature noise, and equal figures should tie. */
+  /** A hypothesis's scenarios, heaviest first (classes rather than lambdas: see Perturbation). */
+  private record HeaviestFirst(double[] weights) implements Comparator<Integer> {
+    @Override
+    public int compare(Integer a, Integer b) {
+      return Double.compare(-weights[a], -weights[b]);
+    }
+  }
+
+  /** The most bits first; on a tie a package pin first. */
+  private final class MostBitsPinsFirst implements Comparator<ProbeAdvice> {
+    @Override
+    public int compare(ProbeAdvice a, ProbeAdvice b) {
+      int byBits = Double.compare(-a.bits(), -b.bits());
+      return byBits != 0 ? byBits : Integer.compare(pinLast(a), pinLast(b));
+    }
+
+    private int pinLast(ProbeAdvice a) {
+      return points.isPin(points.index.get(a.at())) ? 0 : 1;
+    }
+  }
+
   private static double round(double bits) {
     return Math.round(bits * 10000) / 10000.0;
   }
@@ -221,7 +242,10 @@ final class ProbePlanner {
       }
       double v =
           ac ? (s.best.acMean() == null ? 0 : s.best.acMean()[point]) : s.best.dcMean()[point];
-      boolean distinct = seen.stream().noneMatch(x -> Math.abs(x - v) < 0.02 + 0.01 * Math.abs(v));
+      boolean distinct = true;
+      for (double x : seen) {
+        distinct &= !(Math.abs(x - v) < 0.02 + 0.01 * Math.abs(v));
+      }
       if (distinct) {
         seen.add(v);
         parts.add(

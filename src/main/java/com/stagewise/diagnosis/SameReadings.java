@@ -60,16 +60,18 @@ final class SameReadings {
   private double[] ohms(Diagnoser.Scored s) {
     Fault fault = s.hypothesis.fault;
     double value = s.best.value();
-    return byFault.computeIfAbsent(
-        new FaultAtValue(fault.id(), value),
-        k -> {
-          OhmsPrediction[] at = ohmsChecks.predictAll(fault, value);
-          double[] out = new double[at.length];
-          for (int i = 0; i < out.length; i++) {
-            out[i] = at[i].connected() ? at[i].nominal() : -1;
-          }
-          return out;
-        });
+    FaultAtValue key = new FaultAtValue(fault.id(), value);
+    double[] kept = byFault.get(key);
+    if (kept != null) {
+      return kept;
+    }
+    OhmsPrediction[] at = ohmsChecks.predictAll(fault, value);
+    double[] out = new double[at.length];
+    for (int i = 0; i < out.length; i++) {
+      out[i] = at[i].connected() ? at[i].nominal() : -1;
+    }
+    double[] raced = byFault.putIfAbsent(key, out);
+    return raced != null ? raced : out;
   }
 
   private static boolean close(double u, double v) {

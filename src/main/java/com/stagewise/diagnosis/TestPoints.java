@@ -23,7 +23,9 @@ final class TestPoints {
     for (String net : stage.nets()) {
       add(net, net);
     }
-    stage.pinNets().forEach(this::add);
+    for (java.util.Map.Entry<String, String> pin : stage.pinNets().entrySet()) {
+      add(pin.getKey(), pin.getValue());
+    }
     size = names.size();
   }
 
