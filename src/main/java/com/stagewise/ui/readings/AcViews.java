@@ -85,7 +85,9 @@ final class AcViews {
     // No heading of its own: the switch says what the pad takes, and a heading's row is one the
     // keys need in a 1024×600 window.
     // No row at all where neither shows (power-off mode): its spacing is a row the keys need.
-    VBox bar = new VBox(6, kind, measure);
+    // Three px between the two switches (and five between the keys' rows, ValuePad): on AC at
+    // 1024×600 the readings screen fitted its window but for 6 px, which put a scroll bar on it.
+    VBox bar = new VBox(3, kind, measure);
     PowerOffViews.showWhen(bar, kind.visibleProperty().or(measure.visibleProperty()));
     return bar;
   }

@@ -52,7 +52,9 @@ public final class ValuePad extends VBox {
     hint.getStyleClass().add("hint");
     hint.setWrapText(true);
     keys.setHgap(6);
-    keys.setVgap(6);
+    // Four px between the rows (six across): on the AC pad at 1024×600, with the measure's switch
+    // above it, the readings screen needed a scroll bar for 3 px more.
+    keys.setVgap(4);
     keys.setId(idPrefix + "-keys");
     enter = new Button(enterLabel);
     enter.setId(idPrefix + "-enter");
