@@ -23,7 +23,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** Bundles carry library stage versions, and bundles written before them still import. */
 class StageVersionsBundleTest {
-  private static final String SHEET = HistoryExchangeTest.SHEET;
+  private static final String SHEET = HistoryFixtures.SHEET;
 
   /** The same stage with R1 changed from 10k to 22k: an edit, a later version. */
   private static final String EDITED = SHEET.replace("\"10k\"", "\"22k\"");
