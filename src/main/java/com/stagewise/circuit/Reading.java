@@ -146,7 +146,7 @@ public record Reading(
    * (the first input with an AC amplitude; peak when the stage has none).
    */
   public AcMeasure measureIn(Stage stage) {
-    return measure.orElseGet(() -> acMeasure(stage));
+    return measure.isPresent() ? measure.get() : acMeasure(stage);
   }
 
   /** Returns the measure of the stage's first AC input, peak when it has none. */

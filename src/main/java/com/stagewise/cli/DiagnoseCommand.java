@@ -169,7 +169,11 @@ final class DiagnoseCommand implements Callable<Integer> {
       String source = batchFile + " line " + (i + 1);
       try {
         BatchLine read = BatchLine.read(line, source, folder, stages);
-        Diagnoser diagnoser = diagnosers.computeIfAbsent(read.stage(), Diagnoser::of);
+        Diagnoser diagnoser = diagnosers.get(read.stage());
+        if (diagnoser == null) {
+          diagnoser = Diagnoser.of(read.stage());
+          diagnosers.put(read.stage(), diagnoser);
+        }
         Diagnosis diagnosis;
         try {
           diagnosis = diagnoser.diagnose(read.readings(), top);

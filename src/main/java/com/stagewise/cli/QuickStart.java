@@ -42,13 +42,32 @@ final class QuickStart {
               List.of("--stage", "--readings", "--batch", "--top"),
               List.of("--json", "--mains-powered"),
               List.of(),
-              DiagnoseCommand::plain),
+              new DiagnoseMaker()),
           new Plain(
               "solve",
               List.of("--stage"),
               List.of("--json"),
               List.of("--stage"),
-              SolveCommand::plain));
+              new SolveMaker()));
+
+  // Named classes rather than method references: a method reference's class is spun on its first
+  // call, which is the start of every command-line run this class serves.
+
+  /** Makes {@code diagnose} ({@link DiagnoseCommand#plain}). */
+  private static final class DiagnoseMaker implements Maker {
+    @Override
+    public Callable<Integer> make(Map<String, String> options, PrintWriter out) {
+      return DiagnoseCommand.plain(options, out);
+    }
+  }
+
+  /** Makes {@code solve} ({@link SolveCommand#plain}). */
+  private static final class SolveMaker implements Maker {
+    @Override
+    public Callable<Integer> make(Map<String, String> options, PrintWriter out) {
+      return SolveCommand.plain(options, out);
+    }
+  }
 
   /**
    * Returns the command {@code args} call for in its plain form, ready to run, or null when the

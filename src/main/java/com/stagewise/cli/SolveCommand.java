@@ -10,6 +10,7 @@ import com.stagewise.solver.AcSolution;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.solver.OperatingPoint;
 import com.stagewise.solver.Phasor;
+import com.stagewise.solver.SectionState;
 import com.stagewise.solver.SolveResult;
 import com.stagewise.solver.StageSolver;
 import java.io.PrintWriter;
@@ -100,9 +101,15 @@ final class SolveCommand implements Callable<Integer> {
         .append(stage.board().isEmpty() ? "" : " (" + stage.board() + ")")
         .append('\n');
     Map<String, List<String>> pinsOfNet = new LinkedHashMap<>();
-    stage
-        .pinNets()
-        .forEach((pin, net) -> pinsOfNet.computeIfAbsent(net, n -> new ArrayList<>()).add(pin));
+    // Plain loops rather than lambdas: a fresh command-line JVM spins a class for each.
+    for (Map.Entry<String, String> pin : stage.pinNets().entrySet()) {
+      List<String> pins = pinsOfNet.get(pin.getValue());
+      if (pins == null) {
+        pins = new ArrayList<>();
+        pinsOfNet.put(pin.getValue(), pins);
+      }
+      pins.add(pin.getKey());
+    }
     List<OperatingPoint> points = solved.points();
     if (points.size() > 1) {
       text.append("This stage has ")
@@ -160,9 +167,9 @@ final class SolveCommand implements Callable<Integer> {
                 + "\n");
       }
       text.append("\nsections:");
-      point
-          .states()
-          .forEach((ref, state) -> text.append(' ').append(ref).append(' ').append(state.word()));
+      for (Map.Entry<String, SectionState> state : point.states().entrySet()) {
+        text.append(' ').append(state.getKey()).append(' ').append(state.getValue().word());
+      }
       text.append('\n');
     }
     return text.toString();

@@ -40,12 +40,19 @@ public record BatchLine(
     if (stageField.isText()) {
       Path file = folder.resolve(stageField.text());
       stageSource = file.toString();
-      stage = stages.computeIfAbsent("file:" + file, k -> StageSheet.read(file));
+      stage = stages.get("file:" + file);
+      if (stage == null) {
+        stage = StageSheet.read(file);
+        stages.put("file:" + file, stage);
+      }
     } else {
       stageSource = source + ", stage";
       String json = stageField.json();
-      stage =
-          stages.computeIfAbsent("text:" + json, k -> StageSheet.read(json, source + ", stage"));
+      stage = stages.get("text:" + json);
+      if (stage == null) {
+        stage = StageSheet.read(json, stageSource);
+        stages.put("text:" + json, stage);
+      }
     }
     JsonField readingsField =
         root.require("readings", "a readings file's path or the readings document itself");

@@ -52,7 +52,9 @@ public final class DiagnosisJson {
       node.set("probability", JsonText.number(round(s.probability(), 6)));
       node.put("consistent", s.consistent());
       ArrayNode group = node.putArray("group");
-      s.group().forEach(group::add);
+      for (String member : s.group()) {
+        group.add(member);
+      }
       node.put("why", s.why());
       if (s.estimatedValue().isPresent()) {
         node.set("estimatedValue", JsonText.number(round(s.estimatedValue().getAsDouble(), 4)));
@@ -79,10 +81,10 @@ public final class DiagnosisJson {
     }
     fields.put("nextProbes", probes);
     fields.put("confirmingCheck", f.textNode(diagnosis.confirmingCheck()));
-    ArrayNode notes = f.arrayNode();
-    diagnosis.notes().forEach(notes::add);
     List<Object> noteList = new ArrayList<>();
-    diagnosis.notes().forEach(n -> noteList.add(f.textNode(n)));
+    for (String note : diagnosis.notes()) {
+      noteList.add(f.textNode(note));
+    }
     fields.put("notes", noteList);
     return JsonText.document(fields);
   }

@@ -278,14 +278,85 @@ public final class JsonField {
     return JsonParsing.root(in, source, what, maxString, maxDepth);
   }
 
+  // The optional… readers below test for the child by hand rather than through Optional.map: each
+  // lambda or method reference costs a class spun at its first call, and a command-line run reads
+  // a sheet once, in a fresh JVM (DEVELOPERS.md, "Start-up of the command line").
+
+  /** Returns an optional child field, or null when the key is missing or null. */
+  private JsonField orNull(String key) {
+    JsonNode child = node.get(key);
+    return child == null || child.isNull() ? null : new JsonField(source, at(key), child);
+  }
+
   /** Returns an optional child string, or {@code absent} when the key is missing or null. */
   public String optionalText(String key, String absent) {
-    return optional(key).map(JsonField::text).orElse(absent);
+    JsonField child = orNull(key);
+    return child == null ? absent : child.text();
+  }
+
+  /**
+   * Returns an optional child string that must not be blank (see {@link #name}), or {@code absent}
+   * when the key is missing or null.
+   */
+  public String optionalName(String key, String expected, String absent) {
+    JsonField child = orNull(key);
+    return child == null ? absent : child.name(expected);
   }
 
   /** Returns the elements of an optional child array; an absent or null key gives none. */
   public List<JsonField> optionalElements(String key, String what) {
-    return optional(key).map(f -> f.elements(what)).orElse(List.of());
+    JsonField child = orNull(key);
+    return child == null ? List.of() : child.elements(what);
+  }
+
+  /**
+   * Returns an optional child number (see {@link #number}), or {@code absent} when the key is
+   * missing or null.
+   */
+  public double optionalNumber(String key, String expected, double absent) {
+    JsonField child = orNull(key);
+    return child == null ? absent : child.number(expected);
+  }
+
+  /**
+   * Returns an optional child number of 0 or more (see {@link #nonNegative}), or {@code absent}
+   * when the key is missing or null.
+   */
+  public double optionalNonNegative(String key, String expected, double absent) {
+    JsonField child = orNull(key);
+    return child == null ? absent : child.nonNegative(expected);
+  }
+
+  /** Returns an optional child integer, or {@code absent} when the key is missing or null. */
+  public int optionalInteger(String key, String expected, int absent) {
+    JsonField child = orNull(key);
+    return child == null ? absent : child.integer(expected);
+  }
+
+  /**
+   * Returns an optional child tolerance (see {@link #tolerance}), or {@code absent} when the key is
+   * missing or null.
+   */
+  public double optionalTolerance(String key, double absent) {
+    JsonField child = orNull(key);
+    return child == null ? absent : child.tolerance();
+  }
+
+  /**
+   * Returns an optional child {@code true} or {@code false}, or {@code absent} when the key is
+   * missing or null.
+   *
+   * @throws InvalidInputException if the child is present and not a JSON boolean
+   */
+  public boolean optionalBoolean(String key, boolean absent) {
+    JsonField child = orNull(key);
+    if (child == null) {
+      return absent;
+    }
+    if (!child.node.isBoolean()) {
+      throw child.error("expected true or false, found " + describe(child.node));
+    }
+    return child.node.booleanValue();
   }
 
   /** Returns this field as an array of strings. */
@@ -316,10 +387,11 @@ public final class JsonField {
    * @param expected the words accepted, for the message, e.g. "open or closed"
    */
   public <T> T word(Function<String, Optional<T>> parse, String expected) {
-    String word = text();
-    return parse
-        .apply(word)
-        .orElseThrow(() -> error("expected " + expected + ", found " + describe(node)));
+    Optional<T> parsed = parse.apply(text());
+    if (parsed.isEmpty()) {
+      throw error("expected " + expected + ", found " + describe(node));
+    }
+    return parsed.get();
   }
 
   /** Returns this field as a UTC time such as {@code 2026-03-04T10:15:30Z}. */

@@ -73,11 +73,22 @@ final class JsonText {
       // value with all 17 digits would print as a run of more than 20 digits in plain form; it
       // keeps the exponent form then.
       String plain = BigDecimal.valueOf(value).toPlainString();
-      if (plain.chars().filter(Character::isDigit).count() <= 20) {
+      if (digits(plain) <= 20) {
         return JsonNodeFactory.instance.numberNode(new BigDecimal(plain));
       }
     }
     return JsonNodeFactory.instance.numberNode(value);
+  }
+
+  /** Returns how many digits a text has (a loop rather than a stream: see {@link #number}). */
+  private static int digits(String text) {
+    int digits = 0;
+    for (int i = 0; i < text.length(); i++) {
+      if (Character.isDigit(text.charAt(i))) {
+        digits++;
+      }
+    }
+    return digits;
   }
 
   /** Returns a JSON text printed on one line (no line breaks inside). */

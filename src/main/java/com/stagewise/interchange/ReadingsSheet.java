@@ -80,7 +80,8 @@ public final class ReadingsSheet {
     root.requireHeader(FORMAT, VERSION, "a readings file");
     root.object("a readings file", ROOT_KEYS);
     int version = root.require("version", "").integer("the version number");
-    MeterSpec meter = root.optional("meter").map(m -> meter(m, version)).orElse(MeterSpec.DEFAULT);
+    Optional<JsonField> meterField = root.optional("meter");
+    MeterSpec meter = meterField.isPresent() ? meter(meterField.get(), version) : MeterSpec.DEFAULT;
     List<JsonField> fields = root.require("readings", "an array of readings").elements("readings");
     if (fields.size() > Limits.MAX_READINGS) {
       throw root.require("readings", "")
@@ -134,8 +135,12 @@ public final class ReadingsSheet {
         node.set("hz", JsonText.number(reading.hz()));
       }
       // Only a measure the reading states is written: a version-1 file reads back byte for byte.
-      reading.measure().ifPresent(m -> node.put("measure", m.word()));
-      reading.uncertainty().ifPresent(u -> node.set("uncertainty", JsonText.number(u)));
+      if (reading.measure().isPresent()) {
+        node.put("measure", reading.measure().get().word());
+      }
+      if (reading.uncertainty().isPresent()) {
+        node.set("uncertainty", JsonText.number(reading.uncertainty().getAsDouble()));
+      }
       readings.add(node);
     }
     fields.put("readings", readings);
@@ -172,29 +177,23 @@ public final class ReadingsSheet {
     field.object("the meter", version >= 2 ? METER_KEYS : METER_KEYS.subList(0, 3));
     MeterSpec base = MeterSpec.DEFAULT;
     double percent =
-        field
-            .optional("percent")
-            .map(f -> f.nonNegative("the meter's percent of reading, e.g. 0.5"))
-            .orElse(base.percent());
-    int counts =
-        field
-            .optional("counts")
-            .map(f -> f.integer("the meter's counts, e.g. 2"))
-            .orElse(base.counts());
-    Optional<JsonField> displayField = field.optional("displayCounts");
+        field.optionalNonNegative(
+            "percent", "the meter's percent of reading, e.g. 0.5", base.percent());
+    int counts = field.optionalInteger("counts", "the meter's counts, e.g. 2", base.counts());
     int display =
-        displayField
-            .map(f -> f.integer("the display counts, e.g. 6000"))
-            .orElse(base.displayCounts());
+        field.optionalInteger(
+            "displayCounts", "the display counts, e.g. 6000", base.displayCounts());
     if (counts < 0) {
       throw field.require("counts", "").error("counts (" + counts + ") must be 0 or more");
     }
     if (display <= 0) {
-      throw displayField
+      throw field
+          .optional("displayCounts")
           .orElse(field)
           .error("displayCounts (" + display + ") must be above 0, e.g. 6000");
     }
-    OhmsSpec ohms = field.optional("ohms").map(ReadingsSheet::ohmsSpec).orElse(OhmsSpec.DEFAULT);
+    Optional<JsonField> ohmsField = field.optional("ohms");
+    OhmsSpec ohms = ohmsField.isPresent() ? ohmsSpec(ohmsField.get()) : OhmsSpec.DEFAULT;
     try {
       return new MeterSpec(percent, counts, display, ohms);
     } catch (InvalidInputException e) {
@@ -205,17 +204,12 @@ public final class ReadingsSheet {
   private static OhmsSpec ohmsSpec(JsonField field) {
     field.object("the meter's ohms accuracy", OHMS_KEYS);
     double percent =
-        field
-            .optional("percent")
-            .map(f -> f.nonNegative("the ohms percent of reading, e.g. 0.8"))
-            .orElse(OhmsSpec.DEFAULT.percent());
-    Optional<JsonField> countsField = field.optional("counts");
+        field.optionalNonNegative(
+            "percent", "the ohms percent of reading, e.g. 0.8", OhmsSpec.DEFAULT.percent());
     int counts =
-        countsField
-            .map(f -> f.integer("the ohms counts, e.g. 3"))
-            .orElse(OhmsSpec.DEFAULT.counts());
+        field.optionalInteger("counts", "the ohms counts, e.g. 3", OhmsSpec.DEFAULT.counts());
     if (counts < 0) {
-      throw countsField.get().error("counts (" + counts + ") must be 0 or more");
+      throw field.require("counts", "").error("counts (" + counts + ") must be 0 or more");
     }
     try {
       return new OhmsSpec(percent, counts);
@@ -265,7 +259,7 @@ public final class ReadingsSheet {
               : "missing field \"dc\" or \"ac\" (expected the volts read at " + at + ")");
     }
     Reading.Kind kind = dc.isPresent() ? Reading.Kind.DC : Reading.Kind.AC;
-    JsonField valueField = dc.orElseGet(ac::get);
+    JsonField valueField = dc.isPresent() ? dc.get() : ac.get();
     double value =
         kind == Reading.Kind.DC
             ? valueField.number("the DC volts read")

@@ -34,7 +34,9 @@ final class SheetParts {
 
   static ObjectNode node(Part part) {
     ArrayNode nets = JsonNodeFactory.instance.arrayNode();
-    part.nets().forEach(nets::add);
+    for (String net : part.nets()) {
+      nets.add(net);
+    }
     ObjectNode node = JsonText.object().put("ref", part.ref()).put("kind", part.kind().word());
     PartKind kind = part.kind();
     if (kind == PartKind.DIODE) {
@@ -122,7 +124,7 @@ final class SheetParts {
     double tolerance =
         kind == PartKind.DIODE || kind == PartKind.LED
             ? 0
-            : field.optional("tolerance").map(JsonField::tolerance).orElse(defaultTolerance);
+            : field.optionalTolerance("tolerance", defaultTolerance);
     int count = kind.isTrimmer() ? 3 : 2;
     String shape =
         kind.isTrimmer()
@@ -172,22 +174,9 @@ final class SheetParts {
     boolean sealed = false;
     if (kind.isTrimmer()) {
       position =
-          field
-              .optional("position")
-              .map(f -> f.number("the wiper position, from 0 to 1 (e.g. 0.5)"))
-              .orElse(DEFAULT_POSITION);
-      sealed =
-          field
-              .optional("sealed")
-              .map(
-                  f -> {
-                    if (!f.node().isBoolean()) {
-                      throw f.error(
-                          "expected true or false, found " + JsonField.describe(f.node()));
-                    }
-                    return f.node().booleanValue();
-                  })
-              .orElse(false);
+          field.optionalNumber(
+              "position", "the wiper position, from 0 to 1 (e.g. 0.5)", DEFAULT_POSITION);
+      sealed = field.optionalBoolean("sealed", false);
     }
     try {
       if (kind.isTrimmer()) {

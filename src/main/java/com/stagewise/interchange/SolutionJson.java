@@ -94,24 +94,26 @@ public final class SolutionJson {
     OperatingPoint primary = solved.primary();
     root.set("dc", dc(primary));
     root.set("sections", sections(primary));
-    ac.ifPresent(
-        solution -> {
-          ObjectNode nets = JsonText.object();
-          for (Map.Entry<String, Phasor> net : solution.nets().entrySet()) {
-            nets.set(
-                net.getKey(),
-                JsonText.object()
-                    .<ObjectNode>set(
-                        "amplitude", JsonText.number(measure.fromPeak(net.getValue().amplitude())))
-                    .set("phaseDegrees", JsonText.number(net.getValue().phaseDegrees())));
-          }
-          root.set(
-              "ac",
-              JsonText.object()
-                  .<ObjectNode>set("hz", JsonText.number(solution.hz()))
-                  .<ObjectNode>put("measure", measure.word())
-                  .set("nets", nets));
-        });
+    // Plain loops and tests here rather than lambdas: a fresh command-line JVM spins a class for
+    // each.
+    if (ac.isPresent()) {
+      AcSolution solution = ac.get();
+      ObjectNode nets = JsonText.object();
+      for (Map.Entry<String, Phasor> net : solution.nets().entrySet()) {
+        nets.set(
+            net.getKey(),
+            JsonText.object()
+                .<ObjectNode>set(
+                    "amplitude", JsonText.number(measure.fromPeak(net.getValue().amplitude())))
+                .set("phaseDegrees", JsonText.number(net.getValue().phaseDegrees())));
+      }
+      root.set(
+          "ac",
+          JsonText.object()
+              .<ObjectNode>set("hz", JsonText.number(solution.hz()))
+              .<ObjectNode>put("measure", measure.word())
+              .set("nets", nets));
+    }
     if (healthy != null && healthy.solved()) {
       root.set("healthy", healthy(primary, healthy));
     }
@@ -131,17 +133,25 @@ public final class SolutionJson {
 
   private static ObjectNode dc(OperatingPoint point) {
     ObjectNode nets = JsonText.object();
-    point.nets().forEach((net, volts) -> nets.set(net, JsonText.number(volts)));
+    for (Map.Entry<String, Double> net : point.nets().entrySet()) {
+      nets.set(net.getKey(), JsonText.number(net.getValue()));
+    }
     ObjectNode pins = JsonText.object();
-    point.pins().forEach((pin, volts) -> pins.set(pin, JsonText.number(volts)));
+    for (Map.Entry<String, Double> pin : point.pins().entrySet()) {
+      pins.set(pin.getKey(), JsonText.number(pin.getValue()));
+    }
     return JsonText.object().<ObjectNode>set("nets", nets).set("pins", pins);
   }
 
   private static ObjectNode healthy(OperatingPoint point, ExpectedVolts healthy) {
     ObjectNode nets = JsonText.object();
-    point.nets().keySet().forEach(net -> range(nets, net, healthy));
+    for (String net : point.nets().keySet()) {
+      range(nets, net, healthy);
+    }
     ObjectNode pins = JsonText.object();
-    point.pins().keySet().forEach(pin -> range(pins, pin, healthy));
+    for (String pin : point.pins().keySet()) {
+      range(pins, pin, healthy);
+    }
     return JsonText.object().<ObjectNode>set("nets", nets).set("pins", pins);
   }
 

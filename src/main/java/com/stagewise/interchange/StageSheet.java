@@ -134,16 +134,15 @@ public final class StageSheet {
     JsonField root = JsonField.parseRoot(json, source);
     root.requireHeader(FORMAT, VERSION, "a stage sheet");
     root.object("a stage sheet", ROOT_KEYS);
-    String title = root.optional("title").map(JsonField::text).orElse("");
-    String board = root.optional("board").map(JsonField::text).orElse("");
-    String ground = root.optional("ground").map(f -> f.name("the ground net's name")).orElse("GND");
+    String title = root.optionalText("title", "");
+    String board = root.optionalText("board", "");
+    String ground = root.optionalName("ground", "the ground net's name", "GND");
     List<Rail> rails = new ArrayList<>();
     for (JsonField field : root.require("rails", "an array of rails").elements("rails")) {
       rails.add(rail(field));
     }
     List<TestInput> inputs = new ArrayList<>();
-    for (JsonField field :
-        root.optional("inputs").map(f -> f.elements("inputs")).orElse(List.of())) {
+    for (JsonField field : root.optionalElements("inputs", "inputs")) {
       inputs.add(input(field));
     }
     int version = root.require("version", "the version number").integer("the version number");
@@ -242,8 +241,7 @@ public final class StageSheet {
         field
             .require("volts", "the rail's voltage, e.g. 15 or -15")
             .number("the rail's voltage in volts");
-    double tolerance =
-        field.optional("tolerance").map(JsonField::tolerance).orElse(DEFAULT_RESISTOR_TOLERANCE);
+    double tolerance = field.optionalTolerance("tolerance", DEFAULT_RESISTOR_TOLERANCE);
     try {
       return new Rail(net, volts, tolerance);
     } catch (InvalidInputException e) {
@@ -258,10 +256,8 @@ public final class StageSheet {
         field
             .require("dc", "the input's DC level in volts, e.g. 0")
             .number("the DC level in volts");
-    double ac =
-        field.optional("ac").map(f -> f.nonNegative("the AC amplitude in volts")).orElse(0.0);
-    double hz =
-        field.optional("hz").map(f -> f.nonNegative("the AC frequency in hertz")).orElse(0.0);
+    double ac = field.optionalNonNegative("ac", "the AC amplitude in volts", 0.0);
+    double hz = field.optionalNonNegative("hz", "the AC frequency in hertz", 0.0);
     if (ac > 0 && hz <= 0) {
       throw field
           .optional("hz")

@@ -76,13 +76,10 @@ public record ExpectedVolts(
     nominal.putAll(point.pins());
     Map<String, Double> up = new LinkedHashMap<>();
     Map<String, Double> down = new LinkedHashMap<>();
-    nominal
-        .keySet()
-        .forEach(
-            k -> {
-              up.put(k, 0.0);
-              down.put(k, 0.0);
-            });
+    for (String key : nominal.keySet()) {
+      up.put(key, 0.0);
+      down.put(key, 0.0);
+    }
     for (Stage corner : corners(stage)) {
       if (StageSolver.solve(corner) instanceof SolveResult.Solved c) {
         OperatingPoint p = c.primary();
@@ -93,9 +90,9 @@ public record ExpectedVolts(
           }
           double delta = v - nominal.get(key);
           if (delta > 0) {
-            up.merge(key, delta, Math::max);
+            raise(up, key, delta);
           } else {
-            down.merge(key, -delta, Math::max);
+            raise(down, key, -delta);
           }
         }
       }
@@ -109,8 +106,19 @@ public record ExpectedVolts(
       high.put(key, nominal.get(key) + up.get(key) + OFFSET_MARGIN);
     }
     Map<String, String> states = new LinkedHashMap<>();
-    point.states().forEach((ref, state) -> states.put(ref, state.word()));
+    for (Map.Entry<String, SectionState> state : point.states().entrySet()) {
+      states.put(state.getKey(), state.getValue().word());
+    }
     return new ExpectedVolts(nominal, low, high, states, "");
+  }
+
+  /**
+   * Keeps the larger of {@code key}'s value and {@code amount} (as {@code merge(key, amount,
+   * Math::max)}, without the method reference: a fresh command-line JVM spins a class for each).
+   */
+  private static void raise(Map<String, Double> extremes, String key, double amount) {
+    Double old = extremes.get(key);
+    extremes.put(key, old == null ? amount : Math.max(old, amount));
   }
 
   /** Volts added on each side for device offsets (the classic-bipolar offset range, DESIGN.md). */
@@ -123,7 +131,7 @@ public record ExpectedVolts(
       if (part.tolerance() > 0 && part.value() > 0) {
         for (int sign : new int[] {-1, 1}) {
           double value = part.value() * (1 + sign * part.tolerance());
-          corners.add(stage.withPart(part.ref(), p -> p.withValue(value)));
+          corners.add(withValue(stage, part.ref(), value));
         }
       }
     }
@@ -142,5 +150,14 @@ public record ExpectedVolts(
       }
     }
     return corners;
+  }
+
+  /** Returns the stage with the part (or parts) of designator {@code ref} at {@code value}. */
+  private static Stage withValue(Stage stage, String ref, double value) {
+    List<Part> parts = new ArrayList<>(stage.parts().size());
+    for (Part part : stage.parts()) {
+      parts.add(part.ref().equals(ref) ? part.withValue(value) : part);
+    }
+    return stage.withParts(parts);
   }
 }

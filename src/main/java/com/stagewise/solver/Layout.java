@@ -8,7 +8,6 @@ import java.util.Iterator;
 import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.Set;
-import java.util.function.IntFunction;
 
 /**
  * The names of one compiled stage (nets, sections, used pins) and their positions, shared by every
@@ -100,8 +99,24 @@ final class Layout {
 
     @Override
     public Set<Entry<String, Double>> entrySet() {
-      Pins p = layout.pins();
-      return new Entries<>(p.names.length, i -> Map.entry(p.names[i], volts[p.net[i]]));
+      return new PinEntries(layout.pins(), volts);
+    }
+  }
+
+  /** The entries of a {@link PinVolts}: each pin's name with its net's voltage. */
+  private static final class PinEntries extends Entries<Double> {
+    private final Pins pins;
+    private final double[] volts;
+
+    PinEntries(Pins pins, double[] volts) {
+      super(pins.names.length);
+      this.pins = pins;
+      this.volts = volts;
+    }
+
+    @Override
+    Map.Entry<String, Double> entry(int i) {
+      return Map.entry(pins.names[i], volts[pins.net[i]]);
     }
   }
 
@@ -169,19 +184,37 @@ final class Layout {
 
     @Override
     public Set<Entry<String, V>> entrySet() {
-      return new Entries<>(names.length, i -> Map.entry(names[i], value(i)));
+      return new ArrayEntries<>(this);
     }
   }
 
-  /** The entries of a view, in order. */
-  private static final class Entries<V> extends AbstractSet<Map.Entry<String, V>> {
-    private final int size;
-    private final IntFunction<Map.Entry<String, V>> entry;
+  /** The entries of an {@link ArrayMap}: each name with its value. */
+  private static final class ArrayEntries<V> extends Entries<V> {
+    private final ArrayMap<V> map;
 
-    Entries(int size, IntFunction<Map.Entry<String, V>> entry) {
-      this.size = size;
-      this.entry = entry;
+    ArrayEntries(ArrayMap<V> map) {
+      super(map.names.length);
+      this.map = map;
     }
+
+    @Override
+    Map.Entry<String, V> entry(int i) {
+      return Map.entry(map.names[i], map.value(i));
+    }
+  }
+
+  /**
+   * The entries of a view, in order; a subclass makes the i-th (a class rather than a lambda: a
+   * lambda's class is spun on its first call, which a fresh command-line JVM pays for).
+   */
+  private abstract static class Entries<V> extends AbstractSet<Map.Entry<String, V>> {
+    private final int size;
+
+    Entries(int size) {
+      this.size = size;
+    }
+
+    abstract Map.Entry<String, V> entry(int i);
 
     @Override
     public int size() {
@@ -203,7 +236,7 @@ final class Layout {
           if (next >= size) {
             throw new NoSuchElementException();
           }
-          return entry.apply(next++);
+          return entry(next++);
         }
       };
     }

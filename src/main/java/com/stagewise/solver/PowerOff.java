@@ -186,11 +186,12 @@ public final class PowerOff {
   }
 
   private String resolve(String point) {
-    return node(point)
-        .orElseThrow(
-            () ->
-                new IllegalArgumentException(
-                    "\"" + point + "\" is no net, package pin or part lead of the stage"));
+    Optional<String> node = node(point);
+    if (node.isEmpty()) {
+      throw new IllegalArgumentException(
+          "\"" + point + "\" is no net, package pin or part lead of the stage");
+    }
+    return node.get();
   }
 
   /**
@@ -223,8 +224,21 @@ public final class PowerOff {
         creeping.add(new OhmsPrediction.Creep(part.ref(), part.value(), seconds));
       }
     }
-    creeping.sort(Comparator.comparingDouble(OhmsPrediction.Creep::seconds).reversed());
+    creeping.sort(LONGEST_FIRST);
     return creeping;
+  }
+
+  /**
+   * Orders creeping capacitors by time constant, longest first (a named class rather than a
+   * composed comparator: each lambda costs a fresh command-line JVM a spun class).
+   */
+  private static final Comparator<OhmsPrediction.Creep> LONGEST_FIRST = new LongestFirst();
+
+  private static final class LongestFirst implements Comparator<OhmsPrediction.Creep> {
+    @Override
+    public int compare(OhmsPrediction.Creep a, OhmsPrediction.Creep b) {
+      return Double.compare(b.seconds(), a.seconds());
+    }
   }
 
   /** One resistor network (parts at nominal, lowest or highest), with answers cached per node. */
@@ -279,7 +293,12 @@ public final class PowerOff {
       if (find(i) != find(j)) {
         return Double.POSITIVE_INFINITY;
       }
-      return byReference.computeIfAbsent(j, this::toReference)[i];
+      double[] column = byReference.get(j);
+      if (column == null) {
+        column = toReference(j);
+        byReference.put(j, column);
+      }
+      return column[i];
     }
 
     /**

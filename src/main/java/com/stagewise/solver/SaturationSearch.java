@@ -3,10 +3,10 @@ package com.stagewise.solver;
 import com.stagewise.circuit.Connectivity;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Comparator;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import java.util.function.Consumer;
 
 /**
  * The saturation search of a {@link Network}: which sections are linear, clamped high or clamped
@@ -126,21 +126,18 @@ final class SaturationSearch {
     }
     List<State> found = new ArrayList<>();
     Set<String> seen = new HashSet<>();
-    forEachCombination(
-        start,
-        bistable,
-        states -> {
-          State state = activeSetSearch(states, null, bistable);
-          if (state != null && seen.add(Arrays.toString(state.states))) {
-            found.add(state);
-          }
-        });
+    for (SectionState[] states : new Combinations(start, bistable)) {
+      State state = activeSetSearch(states, null, bistable);
+      if (state != null && seen.add(Arrays.toString(state.states))) {
+        found.add(state);
+      }
+    }
     if (found.isEmpty()) {
       return fallBack(start);
     }
     // In the order of a full enumeration (first section fastest, high before low before linear),
     // so that the first state is the same whichever way it was found.
-    found.sort(SaturationSearch::enumerationOrder);
+    found.sort(ENUMERATION_ORDER);
     return new Settled(found);
   }
 
@@ -162,14 +159,24 @@ final class SaturationSearch {
     return enumerate(true);
   }
 
-  private static int enumerationOrder(State a, State b) {
-    for (int k = a.states.length - 1; k >= 0; k--) {
-      int c = Integer.compare(rank(a.states[k]), rank(b.states[k]));
-      if (c != 0) {
-        return c;
+  private static final Comparator<State> ENUMERATION_ORDER = new EnumerationOrder();
+
+  /**
+   * The order of a full enumeration: the last section slowest, high before low before linear. (A
+   * class rather than a method reference: a fresh command-line JVM spins a class for each on its
+   * first call.)
+   */
+  private static final class EnumerationOrder implements Comparator<State> {
+    @Override
+    public int compare(State a, State b) {
+      for (int k = a.states.length - 1; k >= 0; k--) {
+        int c = Integer.compare(rank(a.states[k]), rank(b.states[k]));
+        if (c != 0) {
+          return c;
+        }
       }
+      return 0;
     }
-    return 0;
   }
 
   private static int rank(SectionState state) {
@@ -399,17 +406,16 @@ final class SaturationSearch {
           "the saturation search did not settle and the stage has too many sections to try every state");
     }
     List<State> found = new ArrayList<>();
-    forEachCombination(
-        states -> {
-          DcSystem system = solveConsistently(states, null);
-          if (system == null || !isConsistent(states, system.x())) {
-            return;
-          }
-          if (stableOnly && !allLinearStable(states, system)) {
-            return;
-          }
-          found.add(stateOf(states, system.x()));
-        });
+    for (SectionState[] states : everyCombination()) {
+      DcSystem system = solveConsistently(states, null);
+      if (system == null || !isConsistent(states, system.x())) {
+        continue;
+      }
+      if (stableOnly && !allLinearStable(states, system)) {
+        continue;
+      }
+      found.add(stateOf(states, system.x()));
+    }
     if (found.isEmpty()) {
       String section = network.sections.length > 0 ? network.sections[0].ref() : "";
       return new Unsettled(
@@ -418,8 +424,8 @@ final class SaturationSearch {
     return new Settled(found);
   }
 
-  /** Calls {@code action} with every combination of states of the free sections (HIGH first). */
-  private void forEachCombination(Consumer<SectionState[]> action) {
+  /** Returns every combination of states of the free sections (HIGH first). */
+  private Combinations everyCombination() {
     int n = network.sections.length;
     SectionState[] start = new SectionState[n];
     boolean[] all = new boolean[n];
@@ -427,33 +433,7 @@ final class SaturationSearch {
       start[k] = network.forced[k] != null ? network.forced[k] : SectionState.LINEAR;
       all[k] = network.forced[k] == null;
     }
-    forEachCombination(start, all, action);
-  }
-
-  /**
-   * Calls {@code action} with {@code start} varied over every combination of states of the sections
-   * marked in {@code vary} (HIGH first, the first section fastest).
-   */
-  private void forEachCombination(
-      SectionState[] start, boolean[] vary, Consumer<SectionState[]> action) {
-    int n = network.sections.length;
-    SectionState[] choices = {SectionState.HIGH, SectionState.LOW, SectionState.LINEAR};
-    int[] digit = new int[n];
-    while (true) {
-      SectionState[] states = new SectionState[n];
-      for (int k = 0; k < n; k++) {
-        states[k] = vary[k] ? choices[digit[k]] : start[k];
-      }
-      action.accept(states);
-      int k = 0;
-      while (k < n && (!vary[k] || ++digit[k] == choices.length)) {
-        digit[k] = 0;
-        k++;
-      }
-      if (k == n) {
-        return;
-      }
-    }
+    return new Combinations(start, all);
   }
 
   State stateOf(SectionState[] states, double[] x) {
@@ -470,13 +450,12 @@ final class SaturationSearch {
    */
   List<State> enumerateConsistent() {
     List<State> found = new ArrayList<>();
-    forEachCombination(
-        states -> {
-          DcSystem system = solveConsistently(states, null);
-          if (system != null && isConsistent(states, system.x())) {
-            found.add(stateOf(states, system.x()));
-          }
-        });
+    for (SectionState[] states : everyCombination()) {
+      DcSystem system = solveConsistently(states, null);
+      if (system != null && isConsistent(states, system.x())) {
+        found.add(stateOf(states, system.x()));
+      }
+    }
     return found;
   }
 }

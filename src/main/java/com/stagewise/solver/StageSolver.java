@@ -1,6 +1,7 @@
 package com.stagewise.solver;
 
 import com.stagewise.circuit.Stage;
+import java.util.Collection;
 import java.util.List;
 import java.util.Optional;
 
@@ -41,7 +42,7 @@ public final class StageSolver {
     SolveResult result = Analysis.of(stage, conditions).solve();
     if (result instanceof SolveResult.Solved solved) {
       for (OperatingPoint point : solved.points()) {
-        if (!point.nets().values().stream().allMatch(Double::isFinite)) {
+        if (!allFinite(point.nets().values())) {
           // The edge of the result: a value the matrix could not hold never leaves the solver.
           return new SolveResult.NoConsistentState("", NOT_FINITE);
         }
@@ -65,11 +66,32 @@ public final class StageSolver {
   public static Optional<AcSolution> ac(Stage stage, Conditions conditions, OperatingPoint point) {
     Optional<AcSolution> ac = Analysis.of(stage, conditions).ac(point);
     // The edge of the result: no AC response rather than one that is not a number.
-    return ac.filter(
-        a ->
-            a.nets().values().stream()
-                .allMatch(
-                    p -> Double.isFinite(p.amplitude()) && Double.isFinite(p.phaseDegrees())));
+    if (ac.isPresent() && !allFinite(ac.get())) {
+      return Optional.empty();
+    }
+    return ac;
+  }
+
+  // Plain loops rather than streams here: a fresh command-line JVM would load the stream classes
+  // and
+  // spin a class for each lambda just for these checks.
+
+  private static boolean allFinite(Collection<Double> volts) {
+    for (Double v : volts) {
+      if (!Double.isFinite(v)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static boolean allFinite(AcSolution ac) {
+    for (Phasor p : ac.nets().values()) {
+      if (!Double.isFinite(p.amplitude()) || !Double.isFinite(p.phaseDegrees())) {
+        return false;
+      }
+    }
+    return true;
   }
 
   /**

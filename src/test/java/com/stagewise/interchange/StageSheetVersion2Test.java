@@ -118,6 +118,7 @@ class StageSheetVersion2Test {
           zener without a voltage | "value": "5V1", | | parts[5].value | 5V1
           LED without a colour | "colour": "red", | | parts[3].colour | red, orange
           trimmer position 1.7 | "position": 0.5 | "position": 1.7 | parts[7] | between 0 and 1
+          trimmer sealed not a boolean | "position": 0.5, | "position": 0.5, "sealed": "yes", | parts[7].sealed | expected true or false, found the string "yes"
           trimmer with two nets | ["REF", "FB", "GND"] | ["REF", "GND"] | parts[7].nets | [end, wiper, end]
           diode with one net | ["OUT", "RECT"] | ["OUT"] | parts[2].nets | [anode, cathode]
           zener marking unreadable | "5V1" | "5X1" | parts[5].value | 5V1

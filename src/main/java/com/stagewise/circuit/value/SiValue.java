@@ -69,10 +69,16 @@ public final class SiValue {
               + "\" is empty; expected a number with an SI prefix or RKM code "
               + EXAMPLES);
     }
-    BigDecimal exact =
-        readNumber(cleaned)
-            .or(() -> RkmCode.parse(cleaned))
-            .orElseThrow(() -> notAValue(text, cleaned));
+    // Plain tests rather than Optional.or and orElseThrow: a command-line run parses every part
+    // value once, in a fresh JVM, where each lambda costs a spun class.
+    Optional<BigDecimal> number = readNumber(cleaned);
+    if (number.isEmpty()) {
+      number = RkmCode.parse(cleaned);
+    }
+    if (number.isEmpty()) {
+      throw notAValue(text, cleaned);
+    }
+    BigDecimal exact = number.get();
     double value = exact.doubleValue();
     if (Double.isInfinite(value)) {
       throw new InvalidInputException(
