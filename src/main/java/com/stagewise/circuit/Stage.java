@@ -266,6 +266,15 @@ public record Stage(
     return withParts(changed);
   }
 
+  /** Returns a copy with the part of the same designator replaced by {@code part}. */
+  public Stage withPart(Part part) {
+    List<Part> changed = new ArrayList<>(parts.size());
+    for (Part p : parts) {
+      changed.add(p.ref().equals(part.ref()) ? part : p);
+    }
+    return withParts(changed);
+  }
+
   /** Returns a copy with one more part. */
   public Stage plusPart(Part part) {
     List<Part> more = new ArrayList<>(parts);
@@ -289,6 +298,15 @@ public record Stage(
     List<Amplifier> changed = new ArrayList<>(amplifiers.size());
     for (Amplifier amp : amplifiers) {
       changed.add(amp.ref().equals(ref) ? change.apply(amp) : amp);
+    }
+    return withAmplifiers(changed);
+  }
+
+  /** Returns a copy with the section of the same designator replaced by {@code amp}. */
+  public Stage withAmplifier(Amplifier amp) {
+    List<Amplifier> changed = new ArrayList<>(amplifiers.size());
+    for (Amplifier a : amplifiers) {
+      changed.add(a.ref().equals(amp.ref()) ? amp : a);
     }
     return withAmplifiers(changed);
   }

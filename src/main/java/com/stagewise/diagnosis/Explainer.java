@@ -3,6 +3,7 @@ package com.stagewise.diagnosis;
 import com.stagewise.circuit.AcMeasure;
 import com.stagewise.circuit.Amplifier;
 import com.stagewise.circuit.PackageType;
+import com.stagewise.circuit.Part;
 import com.stagewise.circuit.PartKind;
 import com.stagewise.circuit.Rail;
 import com.stagewise.circuit.ReadingSet;
@@ -327,7 +328,7 @@ final class Explainer {
                   "rail %s low: about %s where %s is expected",
                   s,
                   volts(estimate.getAsDouble()),
-                  volts(stage.rail(s).isPresent() ? stage.rail(s).get().volts() : 0.0))
+                  volts(railVolts(s)))
               : "rail " + s + " low";
       case LEAKY ->
           s
@@ -346,7 +347,7 @@ final class Explainer {
                   "%s misset: set at about %.2f of its travel, where the sheet says %.2f",
                   s,
                   estimate.getAsDouble(),
-                  stage.part(s).isPresent() ? stage.part(s).get().position() : Double.NaN)
+                  position(s))
               : s + " misset (" + marked(s) + ")";
     };
   }
@@ -405,6 +406,18 @@ final class Explainer {
     }
     return role.terminal().words()
         + (role.section().isEmpty() || type.sections().size() == 1 ? "" : " " + role.section());
+  }
+
+  /** A rail's volts on the sheet, 0 for a net no rail drives. */
+  private double railVolts(String net) {
+    Rail rail = stage.rail(net).orElse(null);
+    return rail == null ? 0.0 : rail.volts();
+  }
+
+  /** A trimmer's wiper position on the sheet, NaN for a part the stage lacks. */
+  private double position(String ref) {
+    Part part = stage.part(ref).orElse(null);
+    return part == null ? Double.NaN : part.position();
   }
 
   private String marked(String ref) {

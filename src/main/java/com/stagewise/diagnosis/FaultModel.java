@@ -194,7 +194,7 @@ final class FaultModel {
   private static Scenario wiperOpen(Stage base, Conditions conditions, String ref) {
     Part part = base.part(ref).orElseThrow();
     Part track = Part.resistor(ref, part.value(), part.tolerance(), part.netA(), part.netB());
-    return new Scenario(replaced(base, track), conditions, 1, Double.NaN, "");
+    return new Scenario(base.withPart(track), conditions, 1, Double.NaN, "");
   }
 
   /** The track is open: the wiper still touches one side or the other (two scenarios). */
@@ -206,7 +206,7 @@ final class FaultModel {
       Part upper = Part.resistor(ref, track[0], part.tolerance(), part.netA(), part.wiper());
       out.add(
           new Scenario(
-              replaced(base, upper),
+              base.withPart(upper),
               conditions,
               0.5,
               Double.NaN,
@@ -216,7 +216,7 @@ final class FaultModel {
       Part lower = Part.resistor(ref, track[1], part.tolerance(), part.wiper(), part.netB());
       out.add(
           new Scenario(
-              replaced(base, lower),
+              base.withPart(lower),
               conditions,
               0.5,
               Double.NaN,
@@ -233,7 +233,7 @@ final class FaultModel {
     List<Scenario> grid = new ArrayList<>();
     for (double position : missetPositions(part.position())) {
       grid.add(
-          new Scenario(replaced(base, part.withPosition(position)), conditions, 1, position, ""));
+          new Scenario(base.withPart(part.withPosition(position)), conditions, 1, position, ""));
     }
     return grid;
   }
@@ -241,7 +241,7 @@ final class FaultModel {
   private static Stage shorted(Stage base, String ref) {
     Part part = base.part(ref).orElseThrow();
     Part link = new Part(part.ref(), PartKind.RESISTOR, 0, 0, part.netA(), part.netB());
-    return replaced(base, link);
+    return base.withPart(link);
   }
 
   private static List<Scenario> drifted(
@@ -254,7 +254,7 @@ final class FaultModel {
             : driftFactors(part.tolerance(), high);
     for (double factor : factors) {
       double value = part.value() * factor;
-      grid.add(new Scenario(replaced(base, part.withValue(value)), conditions, 1, value, ""));
+      grid.add(new Scenario(base.withPart(part.withValue(value)), conditions, 1, value, ""));
     }
     return grid;
   }
@@ -282,7 +282,8 @@ final class FaultModel {
       for (Terminal terminal : Terminal.values()) {
         if (amp.pin(terminal) == pin) {
           stage =
-              replaced(stage, stage.amplifier(amp.ref()).orElseThrow().withNet(terminal, pinNet));
+              stage.withAmplifier(
+                  stage.amplifier(amp.ref()).orElseThrow().withNet(terminal, pinNet));
         }
       }
     }
@@ -404,24 +405,6 @@ final class FaultModel {
       }
     }
     return Connectivity.floatingNets(scenario.stage(), dead);
-  }
-
-  /** Returns a copy of a stage with the part of the same designator replaced by {@code part}. */
-  static Stage replaced(Stage base, Part part) {
-    List<Part> parts = new ArrayList<>(base.parts().size());
-    for (Part p : base.parts()) {
-      parts.add(p.ref().equals(part.ref()) ? part : p);
-    }
-    return base.withParts(parts);
-  }
-
-  /** Returns a copy of a stage with the section of the same designator replaced by {@code amp}. */
-  static Stage replaced(Stage base, Amplifier amp) {
-    List<Amplifier> amps = new ArrayList<>(base.amplifiers().size());
-    for (Amplifier a : base.amplifiers()) {
-      amps.add(a.ref().equals(amp.ref()) ? amp : a);
-    }
-    return base.withAmplifiers(amps);
   }
 
   private static Amplifier inputReader(Stage stage, String net) {

@@ -49,17 +49,15 @@ public final class PowerOffFaults {
         }
         double[] track = p.trackOhms();
         yield value == 1
-            ? FaultModel.replaced(
-                base, Part.resistor(s, track[1], p.tolerance(), p.wiper(), p.netB()))
-            : FaultModel.replaced(
-                base, Part.resistor(s, track[0], p.tolerance(), p.netA(), p.wiper()));
+            ? base.withPart(Part.resistor(s, track[1], p.tolerance(), p.wiper(), p.netB()))
+            : base.withPart(Part.resistor(s, track[0], p.tolerance(), p.netA(), p.wiper()));
       }
       case SHORT -> {
         Part p = part(base, s);
-        yield FaultModel.replaced(base, new Part(s, PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
+        yield base.withPart(new Part(s, PartKind.RESISTOR, 0, 0, p.netA(), p.netB()));
       }
       case HIGH, LOW -> {
-        yield FaultModel.replaced(base, part(base, s).withValue(value));
+        yield base.withPart(part(base, s).withValue(value));
       }
       case LEAKY -> {
         Part p = part(base, s);
@@ -70,15 +68,14 @@ public final class PowerOffFaults {
       }
       case WIPER_OPEN -> {
         Part p = part(base, s);
-        yield FaultModel.replaced(
-            base, Part.resistor(s, p.value(), p.tolerance(), p.netA(), p.netB()));
+        yield base.withPart(Part.resistor(s, p.value(), p.tolerance(), p.netA(), p.netB()));
       }
       case MISSET -> {
         Part p = part(base, s);
         if (!(value >= 0 && value <= 1)) {
           throw new IllegalArgumentException(fault.id() + " needs the wiper's position, 0 to 1");
         }
-        yield FaultModel.replaced(base, p.withPosition(value));
+        yield base.withPart(p.withPosition(value));
       }
       case LIFTED -> lifted(base, s, fault.pin());
       case BRIDGE -> {
@@ -159,8 +156,8 @@ public final class PowerOffFaults {
       for (Terminal terminal : Terminal.values()) {
         if (amp.pin(terminal) == pin) {
           stage =
-              FaultModel.replaced(
-                  stage, stage.amplifier(amp.ref()).orElseThrow().withNet(terminal, pinNet));
+              stage.withAmplifier(
+                  stage.amplifier(amp.ref()).orElseThrow().withNet(terminal, pinNet));
         }
       }
     }

@@ -131,7 +131,7 @@ public record ExpectedVolts(
       if (part.tolerance() > 0 && part.value() > 0) {
         for (int sign : new int[] {-1, 1}) {
           double value = part.value() * (1 + sign * part.tolerance());
-          corners.add(withValue(stage, part.ref(), value));
+          corners.add(stage.withPart(part.withValue(value)));
         }
       }
     }
@@ -150,14 +150,5 @@ public record ExpectedVolts(
       }
     }
     return corners;
-  }
-
-  /** Returns the stage with the part (or parts) of designator {@code ref} at {@code value}. */
-  private static Stage withValue(Stage stage, String ref, double value) {
-    List<Part> parts = new ArrayList<>(stage.parts().size());
-    for (Part part : stage.parts()) {
-      parts.add(part.ref().equals(ref) ? part.withValue(value) : part);
-    }
-    return stage.withParts(parts);
   }
 }
