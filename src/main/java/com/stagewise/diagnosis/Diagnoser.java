@@ -162,13 +162,16 @@ public final class Diagnoser {
       }
     }
     Ranking ranking = rank(hypotheses, bound, ohms, readings.meter());
+    // The next probes and the suspects' texts both follow from the ranking alone: the probes are
+    // planned on another core while this thread words the suspects.
+    NextProbes.Planning planning =
+        new NextProbes(stage, points, evidence, ohmsChecks)
+            .planning(ranking, bound, ohms, readings.meter(), mainsPowered);
+    planning.fork();
     notes.addAll(catalogue.notes());
     Explainer explainer = new Explainer(stage, points, span, shopCounts);
     List<Suspect> suspects = suspects(ranking, bound, top, explainer);
     Verdict verdict = verdict(ranking);
-    List<ProbeAdvice> probes =
-        new NextProbes(stage, points, evidence, ohmsChecks)
-            .plan(ranking, bound, ohms, readings.meter(), mainsPowered);
     String check =
         verdict == Verdict.HEALTHY
             ? ""
@@ -196,13 +199,8 @@ public final class Diagnoser {
           "Healthy by these readings. This does not mean the unit is safe: follow local codes and"
               + " licensed practice on powered equipment.");
     }
-    return new Diagnosis(
-        verdict,
-        explainer.observations(hypotheses.get(0), bound, readings),
-        suspects,
-        probes,
-        check,
-        notes);
+    List<Observation> observations = explainer.observations(hypotheses.get(0), bound, readings);
+    return new Diagnosis(verdict, observations, suspects, planning.join(), check, notes);
   }
 
   /**
@@ -341,7 +339,6 @@ public final class Diagnoser {
       List<Evidence.Bound> bound,
       List<Reading> ohms,
       MeterSpec meter) {
-    List<Scored> scored = new ArrayList<>(hypotheses.size());
     double[] weight = readingWeights(bound);
     Likelihoods table;
     synchronized (likelihoods) {
@@ -351,19 +348,57 @@ public final class Diagnoser {
         likelihoods.put(hypotheses, table);
       }
     }
-    double[][] figures = table.of(bound);
-    // Every prediction's log-likelihood, reading by reading over all predictions at once: each
-    // prediction's sum still adds its terms in the readings' order, so the numbers are the same.
-    double[] sums = table.logWeights().clone();
-    for (int i = 0; i < figures.length; i++) {
-      double w = weight[i];
-      double[] f = figures[i];
-      for (int k = 0; k < sums.length; k++) {
-        sums[k] += w * f[k];
-      }
-    }
+    // Every prediction's log weight and weighted log-likelihood, each prediction's terms added in
+    // the readings' order; then each hypothesis scored on its own, side by side.
+    double[] sums = table.sums(bound, weight);
+    Scored[] each = new Scored[hypotheses.size()];
+    EveryCore.forEach(each.length, new ScoreOne(hypotheses, table, sums, ohms, meter, each));
+    List<Scored> scored = new ArrayList<>(List.of(each));
     double maxLog = Double.NEGATIVE_INFINITY;
-    for (int index = 0; index < hypotheses.size(); index++) {
+    for (Scored s : scored) {
+      maxLog = Math.max(maxLog, s.logEvidence + Math.log(s.hypothesis.prior));
+    }
+    double sum = 0;
+    for (Scored s : scored) {
+      s.probability = Math.exp(s.logEvidence + Math.log(s.hypothesis.prior) - maxLog);
+      sum += s.probability;
+    }
+    for (Scored s : scored) {
+      s.probability /= sum;
+    }
+    scored.sort(MOST_PROBABLE_FIRST);
+    return new Ranking(scored);
+  }
+
+  /**
+   * Scores one hypothesis (by its place in the list) from its predictions' sums: its evidence, its
+   * best-fitting prediction and its predictions' share of it (a class: a lambda spins one).
+   */
+  private final class ScoreOne implements java.util.function.IntConsumer {
+    private final List<Hypothesis> hypotheses;
+    private final Likelihoods table;
+    private final double[] sums;
+    private final List<Reading> ohms;
+    private final MeterSpec meter;
+    private final Scored[] out;
+
+    ScoreOne(
+        List<Hypothesis> hypotheses,
+        Likelihoods table,
+        double[] sums,
+        List<Reading> ohms,
+        MeterSpec meter,
+        Scored[] out) {
+      this.hypotheses = hypotheses;
+      this.table = table;
+      this.sums = sums;
+      this.ohms = ohms;
+      this.meter = meter;
+      this.out = out;
+    }
+
+    @Override
+    public void accept(int index) {
       Hypothesis h = hypotheses.get(index);
       int at = table.first(index);
       int n = h.predictions.size();
@@ -371,10 +406,9 @@ public final class Diagnoser {
       double best = Double.NEGATIVE_INFINITY;
       int bestIndex = 0;
       for (int v = 0; v < n; v++) {
-        Prediction p = h.predictions.get(v);
         double sum = sums[at + v];
         if (!ohms.isEmpty()) {
-          sum += ohmsChecks.logLikelihood(h.fault, p.value(), ohms, meter);
+          sum += ohmsChecks.logLikelihood(h.fault, h.predictions.get(v).value(), ohms, meter);
         }
         logs[v] = sum;
         if (sum > best) {
@@ -391,19 +425,8 @@ public final class Diagnoser {
         logs[v] /= total;
       }
       double logEvidence = best + Math.log(total);
-      scored.add(new Scored(h, logEvidence, h.predictions.get(bestIndex), logs));
-      maxLog = Math.max(maxLog, logEvidence + Math.log(h.prior));
+      out[index] = new Scored(h, logEvidence, h.predictions.get(bestIndex), logs);
     }
-    double sum = 0;
-    for (Scored s : scored) {
-      s.probability = Math.exp(s.logEvidence + Math.log(s.hypothesis.prior) - maxLog);
-      sum += s.probability;
-    }
-    for (Scored s : scored) {
-      s.probability /= sum;
-    }
-    scored.sort(MOST_PROBABLE_FIRST);
-    return new Ranking(scored);
   }
 
   /**

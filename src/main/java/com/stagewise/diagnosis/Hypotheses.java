@@ -147,7 +147,7 @@ final class Hypotheses {
     for (List<Prediction> list : raw) {
       simple &= list.size() == 1;
     }
-    List<Prediction> out = new ArrayList<>();
+    List<Prediction> out = new ArrayList<>((n - 1) * SUB_STEPS + 1);
     if (!simple) {
       CompensatedSum sum = new CompensatedSum();
       for (List<Prediction> list : raw) {

@@ -16,15 +16,24 @@ final class Likelihoods {
   /** Numbers kept at most (8 bytes each: 32 MB), beyond which the least recently used go. */
   private static final long MAX_FIGURES = 4_000_000;
 
-  private final List<Diagnoser.Hypothesis> hypotheses;
+  /** Predictions per task when the missing readings are worked out. */
+  private static final int PER_TASK = 128;
+
   private final Evidence evidence;
+
+  /** Every prediction, hypothesis by hypothesis in list order, in the order of {@link #of}. */
+  private final Prediction[] all;
+
   private final int[] first;
   private final int total;
+
+  /** Every prediction's log weight, filled by the first run of {@link #sums}. */
   private final double[] logWeights;
+
+  private boolean weighed;
   private final Map<Evidence.Bound, double[]> byReading = new LinkedHashMap<>(64, 0.75f, true);
 
   Likelihoods(List<Diagnoser.Hypothesis> hypotheses, Evidence evidence) {
-    this.hypotheses = hypotheses;
     this.evidence = evidence;
     this.first = new int[hypotheses.size()];
     int count = 0;
@@ -34,10 +43,11 @@ final class Likelihoods {
     }
     this.total = count;
     this.logWeights = new double[count];
+    this.all = new Prediction[count];
     int i = 0;
     for (Diagnoser.Hypothesis h : hypotheses) {
       for (Prediction p : h.predictions) {
-        logWeights[i++] = Math.log(p.weight());
+        all[i++] = p;
       }
     }
   }
@@ -47,80 +57,99 @@ final class Likelihoods {
     return total;
   }
 
-  /**
-   * Returns the logarithm of every prediction's weight within its hypothesis, in the order of
-   * {@link #of}. The array is shared: do not change it.
-   */
-  double[] logWeights() {
-    return logWeights;
-  }
-
-  /** Returns the index of hypothesis h's first prediction in the arrays of {@link #of}. */
+  /** Returns the index of hypothesis h's first prediction in the arrays of {@link #sums}. */
   int first(int h) {
     return first[h];
   }
 
   /**
-   * Returns the log-likelihood of a reading under every prediction, hypothesis by hypothesis in
-   * list order, each hypothesis's predictions in their order ({@link Evidence#logLikelihood}). The
-   * array is shared: do not change it.
+   * Returns, for every prediction (hypothesis by hypothesis in list order, each hypothesis's
+   * predictions in their order), the logarithm of its weight plus each reading's log-likelihood
+   * under it ({@link Evidence#logLikelihood}) times the reading's weight, added in the readings'
+   * order.
+   *
+   * <p>The readings not yet kept are worked out prediction by prediction, every missing reading
+   * under one prediction before the next (its numbers are then at hand, where reading by reading
+   * would fetch every prediction once per reading), in runs of predictions side by side ({@link
+   * EveryCore}), and the sums in the same runs. Each figure and each sum is worked out on its own,
+   * in a fixed order, so the numbers are the same whatever the number of threads.
    */
-  synchronized double[] of(Evidence.Bound reading) {
-    return of(List.of(reading))[0];
-  }
-
-  /**
-   * Returns {@link #of(Evidence.Bound)} of each reading, in their order. The readings not yet kept
-   * are worked out side by side ({@link EveryCore}), each on its own, so the numbers are the same
-   * whatever the number of threads.
-   */
-  synchronized double[][] of(List<Evidence.Bound> readings) {
-    double[][] out = new double[readings.size()][];
+  synchronized double[] sums(List<Evidence.Bound> readings, double[] weight) {
+    double[][] figures = new double[readings.size()][];
     List<Integer> missing = new ArrayList<>();
-    for (int r = 0; r < out.length; r++) {
-      out[r] = byReading.get(readings.get(r));
-      if (out[r] == null) {
+    for (int r = 0; r < figures.length; r++) {
+      figures[r] = byReading.get(readings.get(r));
+      if (figures[r] == null) {
         missing.add(r);
       }
     }
-    EveryCore.forEach(missing.size(), new ComputeMissing(readings, missing, out));
-    for (int r : missing) {
-      byReading.put(readings.get(r), out[r]);
+    Evidence.Bound[] wanted = new Evidence.Bound[missing.size()];
+    double[][] worked = new double[wanted.length][];
+    for (int m = 0; m < wanted.length; m++) {
+      wanted[m] = readings.get(missing.get(m));
+      worked[m] = new double[total];
+      figures[missing.get(m)] = worked[m];
+    }
+    double[] sums = new double[total];
+    EveryCore.forEach(
+        (total + PER_TASK - 1) / PER_TASK,
+        new Run(!weighed, wanted, worked, figures, weight, sums));
+    weighed = true;
+    for (int m = 0; m < wanted.length; m++) {
+      byReading.put(wanted[m], worked[m]);
     }
     var eldest = byReading.entrySet().iterator();
     while ((long) byReading.size() * total > MAX_FIGURES && byReading.size() > 1) {
       eldest.next();
       eldest.remove();
     }
-    return out;
+    return sums;
   }
 
-  /** Works out the missing readings' figures, one task each (a class: a lambda spins one). */
-  private final class ComputeMissing implements java.util.function.IntConsumer {
-    private final List<Evidence.Bound> readings;
-    private final List<Integer> missing;
-    private final double[][] out;
+  /**
+   * One run of {@link #PER_TASK} predictions: their log weights when not yet known, the missing
+   * readings' figures, the sums (a class: a lambda spins one on first use).
+   */
+  private final class Run implements java.util.function.IntConsumer {
+    private final boolean weigh;
+    private final Evidence.Bound[] wanted;
+    private final double[][] worked;
+    private final double[][] figures;
+    private final double[] weight;
+    private final double[] sums;
 
-    ComputeMissing(List<Evidence.Bound> readings, List<Integer> missing, double[][] out) {
-      this.readings = readings;
-      this.missing = missing;
-      this.out = out;
+    Run(
+        boolean weigh,
+        Evidence.Bound[] wanted,
+        double[][] worked,
+        double[][] figures,
+        double[] weight,
+        double[] sums) {
+      this.weigh = weigh;
+      this.wanted = wanted;
+      this.worked = worked;
+      this.figures = figures;
+      this.weight = weight;
+      this.sums = sums;
     }
 
     @Override
-    public void accept(int m) {
-      out[missing.get(m)] = compute(readings.get(missing.get(m)));
-    }
-  }
-
-  private double[] compute(Evidence.Bound reading) {
-    double[] figures = new double[total];
-    int i = 0;
-    for (Diagnoser.Hypothesis h : hypotheses) {
-      for (Prediction p : h.predictions) {
-        figures[i++] = evidence.logLikelihood(p, reading);
+    public void accept(int run) {
+      int end = Math.min(total, (run + 1) * PER_TASK);
+      for (int i = run * PER_TASK; i < end; i++) {
+        Prediction p = all[i];
+        if (weigh) {
+          logWeights[i] = Math.log(p.weight());
+        }
+        for (int m = 0; m < wanted.length; m++) {
+          worked[m][i] = evidence.logLikelihood(p, wanted[m]);
+        }
+        double sum = logWeights[i];
+        for (int r = 0; r < figures.length; r++) {
+          sum += weight[r] * figures[r][i];
+        }
+        sums[i] = sum;
       }
     }
-    return figures;
   }
 }

@@ -8,6 +8,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.RecursiveTask;
 
 /**
  * The next probes of a diagnosis: the volts probes and the power-off (ohms) checks together, sorted
@@ -60,8 +61,6 @@ final class NextProbes {
       List<Reading> ohms,
       MeterSpec meter,
       boolean mainsPowered) {
-    ProbePlanner planner = new ProbePlanner(stage, points, evidence);
-    List<ProbeAdvice> volts = planner.plan(ranking, bound, meter);
     List<Diagnoser.Scored> top = new ArrayList<>();
     double mass = 0;
     for (Diagnoser.Scored s : ranking.scored()) {
@@ -71,8 +70,13 @@ final class NextProbes {
       top.add(s);
       mass += s.probability;
     }
+    // The power-off checks are planned on another core while this thread plans the volts probes.
+    OhmsPlanning ohmsPlanning = new OhmsPlanning(ohmsChecks, top, ohms, meter);
+    ohmsPlanning.fork();
+    ProbePlanner planner = new ProbePlanner(stage, points, evidence);
+    List<ProbeAdvice> volts = planner.plan(ranking, bound, meter);
     List<ProbeAdvice> all = new ArrayList<>(volts);
-    all.addAll(ohmsChecks.plan(top, ohms, meter));
+    all.addAll(ohmsPlanning.join());
     all.sort(MOST_BITS_FIRST);
     all = new ArrayList<>(all.subList(0, Math.min(volts.size() + 2, all.size())));
     if (mainsPowered) {
@@ -105,6 +109,70 @@ final class NextProbes {
       }
     }
     return all;
+  }
+
+  /**
+   * {@link #plan} as a task of the common pool, to {@code fork} and later {@code join} (a class: a
+   * lambda spins one on first use).
+   */
+  Planning planning(
+      Diagnoser.Ranking ranking,
+      List<Evidence.Bound> bound,
+      List<Reading> ohms,
+      MeterSpec meter,
+      boolean mainsPowered) {
+    return new Planning(this, ranking, bound, ohms, meter, mainsPowered);
+  }
+
+  /** The next probes of one ranking, worked out as a task; see {@link #planning}. */
+  static final class Planning extends RecursiveTask<List<ProbeAdvice>> {
+    private final NextProbes probes;
+    private final Diagnoser.Ranking ranking;
+    private final List<Evidence.Bound> bound;
+    private final List<Reading> ohms;
+    private final MeterSpec meter;
+    private final boolean mainsPowered;
+
+    private Planning(
+        NextProbes probes,
+        Diagnoser.Ranking ranking,
+        List<Evidence.Bound> bound,
+        List<Reading> ohms,
+        MeterSpec meter,
+        boolean mainsPowered) {
+      this.probes = probes;
+      this.ranking = ranking;
+      this.bound = bound;
+      this.ohms = ohms;
+      this.meter = meter;
+      this.mainsPowered = mainsPowered;
+    }
+
+    @Override
+    protected List<ProbeAdvice> compute() {
+      return probes.plan(ranking, bound, ohms, meter, mainsPowered);
+    }
+  }
+
+  /** The power-off checks over the top hypotheses, worked out as a task. */
+  private static final class OhmsPlanning extends RecursiveTask<List<ProbeAdvice>> {
+    private final OhmsChecks checks;
+    private final List<Diagnoser.Scored> top;
+    private final List<Reading> ohms;
+    private final MeterSpec meter;
+
+    OhmsPlanning(
+        OhmsChecks checks, List<Diagnoser.Scored> top, List<Reading> ohms, MeterSpec meter) {
+      this.checks = checks;
+      this.top = top;
+      this.ohms = ohms;
+      this.meter = meter;
+    }
+
+    @Override
+    protected List<ProbeAdvice> compute() {
+      return checks.plan(top, ohms, meter);
+    }
   }
 
   private static boolean same(ProbeAdvice a, ProbeAdvice b) {

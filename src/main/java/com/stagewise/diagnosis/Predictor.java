@@ -125,7 +125,7 @@ final class Predictor {
         Change change = p.change(at);
         double[] read = linear == null ? null : linear.stepRead(change, reader.probe);
         if (read != null) {
-          addSquares(dcVar, reader.spread(read), dcMean);
+          reader.addSquares(dcVar, read, dcMean);
           // Only part values and gain move the small-signal response of a settled state.
           if (ac && p.movesAc()) {
             acSteps.add(new AcStep(change, null, null));
@@ -283,6 +283,17 @@ final class Predictor {
       return response.isPresent()
           ? spread(probe.acAmplitudes(response.get()))
           : new double[points.size];
+    }
+
+    /**
+     * Adds to {@code sum}, per test point, the square of what {@code spread(read)} reads there less
+     * {@code base}: the same numbers without the array between.
+     */
+    void addSquares(double[] sum, double[] read, double[] base) {
+      for (int i = 0; i < sum.length; i++) {
+        double d = (slot[i] < 0 ? 0 : read[slot[i]]) - base[i];
+        sum[i] += d * d;
+      }
     }
 
     double[] spread(double[] read) {

@@ -3,6 +3,7 @@ package com.stagewise.diagnosis;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.circuit.MeterSpec;
+import com.stagewise.circuit.Part;
 import com.stagewise.circuit.Reading;
 import com.stagewise.circuit.ReadingSet;
 import com.stagewise.circuit.Stage;
@@ -51,12 +52,45 @@ class ParallelPredictionTest {
     }
   }
 
+  /**
+   * A few volts readings and one ohms reading on a mains-powered unit: the ranking adds the ohms
+   * figures, the suspects' same-reading test and the power-off checks' planning run side by side
+   * and share the power-off predictions. Same bits on one thread and on four.
+   */
+  @ParameterizedTest
+  @ValueSource(strings = {"instrumentation", "summing"})
+  void diagnosisWithOhmsReadings_isBitForBitTheSame_onOneThreadAndOnFour(String template)
+      throws Exception {
+    Stage stage = Templates.named(template).build();
+    List<Reading> some = new ArrayList<>(stuckHighEverywhere(stage).readings().subList(0, 3));
+    Part first = stage.parts().get(0);
+    some.add(Reading.ohms(first.netA(), first.netB(), first.value() * 1.02));
+    ReadingSet readings = new ReadingSet(MeterSpec.DEFAULT, some);
+    Diagnosis one = onThreads(1, stage, readings, true);
+    Diagnosis four = onThreads(4, stage, readings, true);
+    assertThat(four.suspects()).hasSameSizeAs(one.suspects());
+    for (int i = 0; i < one.suspects().size(); i++) {
+      assertThat(four.suspects().get(i).fault()).isEqualTo(one.suspects().get(i).fault());
+      assertThat(Double.doubleToRawLongBits(four.suspects().get(i).probability()))
+          .isEqualTo(Double.doubleToRawLongBits(one.suspects().get(i).probability()));
+      assertThat(four.suspects().get(i).why()).isEqualTo(one.suspects().get(i).why());
+    }
+    assertThat(four.nextProbes()).isEqualTo(one.nextProbes());
+    assertThat(one.nextProbes()).isNotEmpty();
+  }
+
   /** A fresh diagnoser's diagnosis, its parallel work done by a pool of the given size. */
   private static Diagnosis onThreads(int threads, Stage stage, ReadingSet readings)
       throws Exception {
+    return onThreads(threads, stage, readings, false);
+  }
+
+  private static Diagnosis onThreads(
+      int threads, Stage stage, ReadingSet readings, boolean mainsPowered) throws Exception {
     ForkJoinPool pool = new ForkJoinPool(threads);
     try {
-      return pool.submit(() -> Diagnoser.of(stage).diagnose(readings)).get();
+      return pool.submit(() -> Diagnoser.of(stage).mainsPowered(mainsPowered).diagnose(readings))
+          .get();
     } finally {
       pool.shutdown();
     }
