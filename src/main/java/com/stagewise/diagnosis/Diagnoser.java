@@ -349,10 +349,10 @@ public final class Diagnoser {
       }
     }
     // Every prediction's log weight and weighted log-likelihood, each prediction's terms added in
-    // the readings' order; then each hypothesis scored on its own, side by side.
-    double[] sums = table.sums(bound, weight);
+    // the readings' order, and each hypothesis scored from its own: one task per hypothesis.
+    double[] sums = new double[table.total()];
     Scored[] each = new Scored[hypotheses.size()];
-    EveryCore.forEach(each.length, new ScoreOne(hypotheses, table, sums, ohms, meter, each));
+    table.sums(bound, weight, sums, new ScoreOne(hypotheses, table, sums, ohms, meter, each));
     List<Scored> scored = new ArrayList<>(List.of(each));
     double maxLog = Double.NEGATIVE_INFINITY;
     for (Scored s : scored) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.IntConsumer;
 
 /**
  * Each reading's log-likelihood under every prediction of one list of hypotheses, kept per reading.
@@ -15,9 +16,6 @@ import java.util.Map;
 final class Likelihoods {
   /** Numbers kept at most (8 bytes each: 32 MB), beyond which the least recently used go. */
   private static final long MAX_FIGURES = 4_000_000;
-
-  /** Predictions per task when the missing readings are worked out. */
-  private static final int PER_TASK = 128;
 
   private final Evidence evidence;
 
@@ -63,18 +61,23 @@ final class Likelihoods {
   }
 
   /**
-   * Returns, for every prediction (hypothesis by hypothesis in list order, each hypothesis's
-   * predictions in their order), the logarithm of its weight plus each reading's log-likelihood
-   * under it ({@link Evidence#logLikelihood}) times the reading's weight, added in the readings'
-   * order.
+   * Fills {@code sums} with, for every prediction (hypothesis by hypothesis in list order, each
+   * hypothesis's predictions in their order), the logarithm of its weight plus each reading's
+   * log-likelihood under it ({@link Evidence#logLikelihood}) times the reading's weight, added in
+   * the readings' order; and calls {@code then} with each hypothesis's index once its sums are in.
    *
-   * <p>The readings not yet kept are worked out prediction by prediction, every missing reading
-   * under one prediction before the next (its numbers are then at hand, where reading by reading
-   * would fetch every prediction once per reading), in runs of predictions side by side ({@link
-   * EveryCore}), and the sums in the same runs. Each figure and each sum is worked out on its own,
-   * in a fixed order, so the numbers are the same whatever the number of threads.
+   * <p>Each hypothesis is a task of its own ({@link EveryCore}): the readings not yet kept are
+   * worked out prediction by prediction, every missing reading under one prediction before the next
+   * (its numbers are then at hand, where reading by reading would fetch every prediction once per
+   * reading), then the sums, then {@code then}, all in one pass, so that the cores are woken once
+   * for the whole ranking. Each figure and each sum is worked out on its own, in a fixed order, so
+   * the numbers are the same whatever the number of threads.
+   *
+   * @param sums one number per prediction ({@link #total})
+   * @param then called once per hypothesis, from any thread, after its sums are in
    */
-  synchronized double[] sums(List<Evidence.Bound> readings, double[] weight) {
+  synchronized void sums(
+      List<Evidence.Bound> readings, double[] weight, double[] sums, IntConsumer then) {
     double[][] figures = new double[readings.size()][];
     List<Integer> missing = new ArrayList<>();
     for (int r = 0; r < figures.length; r++) {
@@ -90,10 +93,7 @@ final class Likelihoods {
       worked[m] = new double[total];
       figures[missing.get(m)] = worked[m];
     }
-    double[] sums = new double[total];
-    EveryCore.forEach(
-        (total + PER_TASK - 1) / PER_TASK,
-        new Run(!weighed, wanted, worked, figures, weight, sums));
+    EveryCore.forEach(first.length, new Run(!weighed, wanted, worked, figures, weight, sums, then));
     weighed = true;
     for (int m = 0; m < wanted.length; m++) {
       byReading.put(wanted[m], worked[m]);
@@ -103,20 +103,20 @@ final class Likelihoods {
       eldest.next();
       eldest.remove();
     }
-    return sums;
   }
 
   /**
-   * One run of {@link #PER_TASK} predictions: their log weights when not yet known, the missing
-   * readings' figures, the sums (a class: a lambda spins one on first use).
+   * One hypothesis's predictions: their log weights when not yet known, the missing readings'
+   * figures, the sums, then the caller's step (a class: a lambda spins one on first use).
    */
-  private final class Run implements java.util.function.IntConsumer {
+  private final class Run implements IntConsumer {
     private final boolean weigh;
     private final Evidence.Bound[] wanted;
     private final double[][] worked;
     private final double[][] figures;
     private final double[] weight;
     private final double[] sums;
+    private final IntConsumer then;
 
     Run(
         boolean weigh,
@@ -124,19 +124,21 @@ final class Likelihoods {
         double[][] worked,
         double[][] figures,
         double[] weight,
-        double[] sums) {
+        double[] sums,
+        IntConsumer then) {
       this.weigh = weigh;
       this.wanted = wanted;
       this.worked = worked;
       this.figures = figures;
       this.weight = weight;
       this.sums = sums;
+      this.then = then;
     }
 
     @Override
-    public void accept(int run) {
-      int end = Math.min(total, (run + 1) * PER_TASK);
-      for (int i = run * PER_TASK; i < end; i++) {
+    public void accept(int h) {
+      int end = h + 1 < first.length ? first[h + 1] : total;
+      for (int i = first[h]; i < end; i++) {
         Prediction p = all[i];
         if (weigh) {
           logWeights[i] = Math.log(p.weight());
@@ -150,6 +152,7 @@ final class Likelihoods {
         }
         sums[i] = sum;
       }
+      then.accept(h);
     }
   }
 }

@@ -80,7 +80,13 @@ final class CompiledStage implements Analysis {
     SectionState[] states = statesOf(point);
     double[] x = vectorOf(point);
     boolean[] collapsed = collapsedAt(x);
-    DcSystem system = network.solveDc(states, collapsed, x);
+    // The search has usually just solved this very system (the point is its answer): a linear
+    // stage's system depends only on the states, the clamp rows and the numbers, so that one is
+    // taken, the same factors and unknowns a fresh solve would give to the last bit.
+    DcSystem system = network.nonlinear ? null : search.solvedAlready(states, collapsed);
+    if (system == null) {
+      system = network.solveDc(states, collapsed, x);
+    }
     return system == null
         ? Optional.empty()
         : Optional.of(new Linearization(this, states.clone(), collapsed, system, x));
@@ -189,6 +195,7 @@ final class CompiledStage implements Analysis {
 
   /** Applies a change to this analysis's own numbers; returns what undoes it. */
   Change apply(Change change) {
+    network.changes++;
     if (change instanceof Change.PartValue v) {
       int p = part(v.ref());
       double old = network.value[p];

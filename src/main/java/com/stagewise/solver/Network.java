@@ -64,6 +64,12 @@ final class Network {
   /** The junction that kept the last failed Newton iteration from settling, or "". */
   String newtonFailure = "";
 
+  /**
+   * Counts the changes of this network's numbers ({@link CompiledStage#apply}): a system solved at
+   * one count is the system of the same states at the same count.
+   */
+  int changes;
+
   final Amplifier[] sections;
   final int[] inPlus;
   final int[] inMinus;

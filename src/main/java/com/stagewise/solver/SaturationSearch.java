@@ -47,8 +47,28 @@ final class SaturationSearch {
 
   private final Network network;
 
+  /** The states, clamp rows and count of changes of the last system solved, and that system. */
+  private SectionState[] lastStates;
+
+  private boolean[] lastCollapsed;
+  private int lastChanges;
+  private DcSystem lastSystem;
+
   SaturationSearch(Network network) {
     this.network = network;
+  }
+
+  /**
+   * Returns the last system this search solved when it is the system of these states and clamp rows
+   * with the network's numbers as they are now, else null.
+   */
+  DcSystem solvedAlready(SectionState[] states, boolean[] collapsed) {
+    return lastSystem != null
+            && lastChanges == network.changes
+            && Arrays.equals(lastStates, states)
+            && Arrays.equals(lastCollapsed, collapsed)
+        ? lastSystem
+        : null;
   }
 
   /** One consistent state in index form: volts per net, state per section. */
@@ -387,6 +407,10 @@ final class SaturationSearch {
         }
       }
       if (same) {
+        lastStates = states.clone();
+        lastCollapsed = collapsed.clone();
+        lastChanges = network.changes;
+        lastSystem = system;
         return system;
       }
       guess = system.x();
