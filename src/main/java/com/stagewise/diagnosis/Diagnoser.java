@@ -352,7 +352,8 @@ public final class Diagnoser {
     // the readings' order, and each hypothesis scored from its own: one task per hypothesis.
     double[] sums = new double[table.total()];
     Scored[] each = new Scored[hypotheses.size()];
-    table.sums(bound, weight, sums, new ScoreOne(hypotheses, table, sums, ohms, meter, each));
+    table.sums(
+        bound, weight, sums, new ScoreOne(hypotheses, table, sums, ohmsChecks, ohms, meter, each));
     List<Scored> scored = new ArrayList<>(List.of(each));
     double maxLog = Double.NEGATIVE_INFINITY;
     for (Scored s : scored) {
@@ -368,65 +369,6 @@ public final class Diagnoser {
     }
     scored.sort(MOST_PROBABLE_FIRST);
     return new Ranking(scored);
-  }
-
-  /**
-   * Scores one hypothesis (by its place in the list) from its predictions' sums: its evidence, its
-   * best-fitting prediction and its predictions' share of it (a class: a lambda spins one).
-   */
-  private final class ScoreOne implements java.util.function.IntConsumer {
-    private final List<Hypothesis> hypotheses;
-    private final Likelihoods table;
-    private final double[] sums;
-    private final List<Reading> ohms;
-    private final MeterSpec meter;
-    private final Scored[] out;
-
-    ScoreOne(
-        List<Hypothesis> hypotheses,
-        Likelihoods table,
-        double[] sums,
-        List<Reading> ohms,
-        MeterSpec meter,
-        Scored[] out) {
-      this.hypotheses = hypotheses;
-      this.table = table;
-      this.sums = sums;
-      this.ohms = ohms;
-      this.meter = meter;
-      this.out = out;
-    }
-
-    @Override
-    public void accept(int index) {
-      Hypothesis h = hypotheses.get(index);
-      int at = table.first(index);
-      int n = h.predictions.size();
-      double[] logs = new double[n];
-      double best = Double.NEGATIVE_INFINITY;
-      int bestIndex = 0;
-      for (int v = 0; v < n; v++) {
-        double sum = sums[at + v];
-        if (!ohms.isEmpty()) {
-          sum += ohmsChecks.logLikelihood(h.fault, h.predictions.get(v).value(), ohms, meter);
-        }
-        logs[v] = sum;
-        if (sum > best) {
-          best = sum;
-          bestIndex = v;
-        }
-      }
-      double total = 0;
-      for (int v = 0; v < n; v++) {
-        logs[v] = Math.exp(logs[v] - best);
-        total += logs[v];
-      }
-      for (int v = 0; v < n; v++) {
-        logs[v] /= total;
-      }
-      double logEvidence = best + Math.log(total);
-      out[index] = new Scored(h, logEvidence, h.predictions.get(bestIndex), logs);
-    }
   }
 
   /**
