@@ -21,20 +21,43 @@ import org.junit.jupiter.api.TestInfo;
 class StageReachFlowTest extends WindowFlow {
   private static final String SHEET = "channel-level-meter.stage.json";
 
+  /**
+   * A title near the longest a sheet may have (200 characters; three lines at 1024×600 if it
+   * wrapped freely), for the test of a long title.
+   */
+  static final String LONG_TITLE =
+      "Channel level meter with calibration trimmer, rev C board of the early production"
+          + " run, with the service bulletin's modified gain resistor and extra decoupling on"
+          + " the meter driver's supply";
+
   private final boolean twoStages;
+  private final boolean longTitle;
 
   StageReachFlowTest(TestInfo test) {
-    twoStages = test.getTestMethod().orElseThrow().getName().contains("TwoStages");
+    String name = test.getTestMethod().orElseThrow().getName();
+    twoStages = name.contains("TwoStages");
+    longTitle = name.contains("LongTitle");
   }
 
-  /** The demo's own sheets; for the test with two stages, the level meter's sheet alone. */
+  /**
+   * The demo's own sheets; for the test with two stages, the level meter's sheet alone; for the
+   * long title, that sheet with {@link #LONG_TITLE}.
+   */
   @Override
   Path stages() throws Exception {
-    if (!twoStages) {
+    if (!twoStages && !longTitle) {
       return super.stages();
     }
     Path stages = Files.createDirectories(temp.resolve("stages"));
-    Files.copy(Path.of("src", "test", "resources", "stages", SHEET), stages.resolve(SHEET));
+    String sheet = Files.readString(Path.of("src", "test", "resources", "stages", SHEET));
+    if (longTitle) {
+      sheet =
+          sheet.replace(
+              "\"title\": \"Channel level meter with calibration trimmer\"",
+              "\"title\": \"" + LONG_TITLE + "\"");
+      assertThat(sheet).contains(LONG_TITLE);
+    }
+    Files.writeString(stages.resolve(SHEET), sheet);
     return stages;
   }
 
@@ -67,6 +90,22 @@ class StageReachFlowTest extends WindowFlow {
     settle();
     assertThat(fx(() -> app.bench().stageProperty().get().title()))
         .isEqualTo("Channel level meter with calibration trimmer");
+  }
+
+  @Test
+  void useThisStage_aStageWithALongTitle_standsInSightAtTheTopInEveryLook() throws Exception {
+    openDemoCase("Level meter reads low on every channel");
+    clickCell("#stage-library", "Channel level meter");
+    settle();
+    // The title keeps to three lines (the rest in its tooltip), so the button stays in sight.
+    assertUseThisStageInSight("long title");
+    javafx.scene.control.Label title =
+        robot.lookup("#stage-title").queryAs(javafx.scene.control.Label.class);
+    assertThat(fx(() -> title.getText())).isEqualTo(LONG_TITLE);
+    assertThat(fx(() -> title.getTooltip().getText())).isEqualTo(LONG_TITLE);
+    robot.clickOn("#use-stage");
+    settle();
+    assertThat(fx(() -> app.bench().stageProperty().get().title())).isEqualTo(LONG_TITLE);
   }
 
   /**

@@ -49,6 +49,13 @@ public final class SchematicDrawing extends Region {
   private String secondCaption = "";
   private Map<String, String> measured = Map.of();
   private Box extent = new Box(0, 0, 1, 1);
+
+  /** The least room a title is given in the legend before it is cut, layout units. */
+  private static final double MIN_TITLE_ROOM = 280;
+
+  /** The stage's title as the legend shows it ({@link Titles#fitted}). */
+  private String shownTitle = "";
+
   private Map<String, LabelPlacer.Placement> labelBoxes = Map.of();
   private final SchematicTargets targets = new SchematicTargets();
 
@@ -315,6 +322,12 @@ public final class SchematicDrawing extends Region {
         all = all.union(box);
       }
     }
+    // A long title is cut to about the sheet's width rather than widening (and so shrinking) it.
+    shownTitle =
+        Titles.fitted(
+            stage == null ? "" : stage.title(),
+            Math.max(MIN_TITLE_ROOM, all.w() * 0.6),
+            t -> measure(t, 15, true));
     extent =
         new Box(
             all.x(),
@@ -326,7 +339,7 @@ public final class SchematicDrawing extends Region {
   /** Returns the width of the legend line drawn by {@link #drawLegend}. */
   private double legendWidth() {
     double width = 0;
-    String title = stage == null ? "" : stage.title();
+    String title = shownTitle;
     if (!title.isEmpty()) {
       width += measure(title, 15, true) + 24;
     }
@@ -433,7 +446,7 @@ public final class SchematicDrawing extends Region {
   private void drawLegend() {
     double y = extent.y() + 4;
     double x = extent.x();
-    String title = stage == null ? "" : stage.title();
+    String title = shownTitle;
     if (!title.isEmpty()) {
       content.getChildren().add(text(title, Palette.bold(15), Palette.INK, x, y));
       x += measure(title, 15, true) + 24;

@@ -88,10 +88,20 @@ public final class SchematicPicture {
     }
   }
 
+  /** The least room a title is given before it is cut, layout units. */
+  private static final double MIN_TITLE_ROOM = 320;
+
+  /** The title as the picture shows it: cut to about the sheet's width ({@link Titles#fitted}). */
+  private static String title(Stage stage, Sheet sheet) {
+    return Titles.fitted(
+        stage.title(), Math.max(MIN_TITLE_ROOM, sheet.bounds().w()), t -> measure(t, TITLE, true));
+  }
+
   private static Box frame(Stage stage, Sheet sheet) {
     Box all = sheet.bounds();
-    double titleWidth = stage.title().isEmpty() ? 0 : measure(stage.title(), TITLE, true);
-    double top = all.y() - (stage.title().isEmpty() ? 0 : TITLE * 1.3 + 12);
+    String title = title(stage, sheet);
+    double titleWidth = title.isEmpty() ? 0 : measure(title, TITLE, true);
+    double top = all.y() - (title.isEmpty() ? 0 : TITLE * 1.3 + 12);
     return new Box(
         all.x() - MARGIN,
         top - MARGIN,
@@ -100,8 +110,9 @@ public final class SchematicPicture {
   }
 
   private static void draw(Stage stage, Sheet sheet, Box frame, Pen pen) {
-    if (!stage.title().isEmpty()) {
-      pen.text(frame.x() + MARGIN, frame.y() + MARGIN, stage.title(), TITLE, true, INK);
+    String title = title(stage, sheet);
+    if (!title.isEmpty()) {
+      pen.text(frame.x() + MARGIN, frame.y() + MARGIN, title, TITLE, true, INK);
     }
     for (Wire wire : sheet.wires()) {
       pen.line(wire.x1(), wire.y1(), wire.x2(), wire.y2(), 2, INK);

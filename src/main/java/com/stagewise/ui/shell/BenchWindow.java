@@ -2,6 +2,7 @@ package com.stagewise.ui.shell;
 
 import com.stagewise.ui.Bench;
 import com.stagewise.ui.Step;
+import com.stagewise.ui.widget.CappedLines;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.function.Supplier;
@@ -174,8 +175,9 @@ public final class BenchWindow {
           .minWidthProperty()
           .bind(new javafx.beans.property.SimpleDoubleProperty(Region.USE_PREF_SIZE));
     }
-    if (node instanceof javafx.scene.control.Label label) {
-      // A wrapped label gets the lines it needs.
+    if (node instanceof javafx.scene.control.Label label
+        && !label.getStyleClass().contains(CappedLines.STYLE)) {
+      // A wrapped label gets the lines it needs (unless its screen caps them on purpose).
       label.setMinHeight(Region.USE_PREF_SIZE);
     }
     if (node instanceof ScrollPane pane && pane.getContent() != null) {

@@ -3,6 +3,7 @@ package com.stagewise.ui.stage;
 import com.stagewise.solver.ExpectedVolts;
 import com.stagewise.ui.drawing.SchematicDrawing;
 import com.stagewise.ui.editor.StageEditorView;
+import com.stagewise.ui.widget.CappedLines;
 import com.stagewise.ui.widget.ListSelection;
 import com.stagewise.ui.widget.ValuePad;
 import com.stagewise.ui.words.Words;
@@ -194,6 +195,9 @@ public final class StageView {
                         ? "Choose the stage you are working on"
                         : model.stageProperty().get().title(),
                 model.stageProperty()));
+    // At most three lines, the rest in the tooltip: a long title (a sheet's may have 200
+    // characters) must not push Use this stage out of a small window.
+    CappedLines.cap(title, 3);
     VBox drawing = new VBox(4);
     drawing.getStyleClass().add("panel");
     drawing.setId("stage-drawing");
