@@ -97,7 +97,7 @@ class StageReachFlowTest extends WindowFlow {
     openDemoCase("Level meter reads low on every channel");
     clickCell("#stage-library", "Channel level meter");
     settle();
-    // The title keeps to three lines (the rest in its tooltip), so the button stays in sight.
+    // The title keeps to four lines (the rest in its tooltip), so the button stays in sight.
     assertUseThisStageInSight("long title");
     javafx.scene.control.Label title =
         robot.lookup("#stage-title").queryAs(javafx.scene.control.Label.class);

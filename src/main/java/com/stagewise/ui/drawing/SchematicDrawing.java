@@ -51,7 +51,7 @@ public final class SchematicDrawing extends Region {
   private Box extent = new Box(0, 0, 1, 1);
 
   /** The least room a title is given in the legend before it is cut, layout units. */
-  private static final double MIN_TITLE_ROOM = 280;
+  private static final double MIN_TITLE_ROOM = 480;
 
   /** The stage's title as the legend shows it ({@link Titles#fitted}). */
   private String shownTitle = "";
@@ -326,7 +326,7 @@ public final class SchematicDrawing extends Region {
     shownTitle =
         Titles.fitted(
             stage == null ? "" : stage.title(),
-            Math.max(MIN_TITLE_ROOM, all.w() * 0.6),
+            Math.max(MIN_TITLE_ROOM, all.w()),
             t -> measure(t, 15, true));
     extent =
         new Box(

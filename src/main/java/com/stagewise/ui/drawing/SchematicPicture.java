@@ -89,7 +89,7 @@ public final class SchematicPicture {
   }
 
   /** The least room a title is given before it is cut, layout units. */
-  private static final double MIN_TITLE_ROOM = 320;
+  private static final double MIN_TITLE_ROOM = 560;
 
   /** The title as the picture shows it: cut to about the sheet's width ({@link Titles#fitted}). */
   private static String title(Stage stage, Sheet sheet) {

@@ -195,9 +195,9 @@ public final class StageView {
                         ? "Choose the stage you are working on"
                         : model.stageProperty().get().title(),
                 model.stageProperty()));
-    // At most three lines, the rest in the tooltip: a long title (a sheet's may have 200
+    // At most four lines, the rest in the tooltip: a long title (a sheet's may have 200
     // characters) must not push Use this stage out of a small window.
-    CappedLines.cap(title, 3);
+    CappedLines.cap(title, 4);
     VBox drawing = new VBox(4);
     drawing.getStyleClass().add("panel");
     drawing.setId("stage-drawing");
