@@ -3,6 +3,7 @@ package com.stagewise.report;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SteppingClock;
 import com.stagewise.history.record.AfterRepairReading;
 import com.stagewise.history.record.ReadingKind;
 import com.stagewise.history.sqlite.SqliteHistory;
@@ -29,7 +30,7 @@ class PdfAfterRepairTest {
   }
 
   private String pdfText(boolean withCheck, boolean acAndOhms) throws IOException {
-    ReportFixture.SteppingClock clock = new ReportFixture.SteppingClock();
+    SteppingClock clock = ReportFixture.steppingClock();
     CaseReport report;
     try (HistoryStore store = SqliteHistory.open(folder.resolve("history.db"), clock)) {
       String id = ReportFixture.storeCase(store, clock, 3);

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.stagewise.history.Cases;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SteppingClock;
 import com.stagewise.history.TestPictures;
 import com.stagewise.history.sqlite.SqliteHistory;
 import java.io.IOException;
@@ -29,7 +30,7 @@ class PdfPhotoTest {
   @TempDir Path folder;
 
   private CaseReport reportWith(byte[]... pictures) {
-    ReportFixture.SteppingClock clock = new ReportFixture.SteppingClock();
+    SteppingClock clock = ReportFixture.steppingClock();
     try (HistoryStore store = SqliteHistory.open(folder.resolve("history.db"), clock)) {
       String id = ReportFixture.storeCase(store, clock, 3);
       for (int i = 0; i < pictures.length; i++) {

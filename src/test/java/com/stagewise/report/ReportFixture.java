@@ -1,6 +1,7 @@
 package com.stagewise.report;
 
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SteppingClock;
 import com.stagewise.history.record.ActionKind;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.Outcome;
@@ -17,8 +18,6 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Duration;
 import java.time.Instant;
-import java.time.ZoneId;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -39,27 +38,9 @@ final class ReportFixture {
 
   private ReportFixture() {}
 
-  /**
-   * A clock that moves on one minute each time it is read, so that every record has its own time.
-   */
-  static final class SteppingClock extends Clock {
-    private Instant now = Instant.parse("2026-03-01T09:00:00Z");
-
-    @Override
-    public ZoneId getZone() {
-      return ZoneOffset.UTC;
-    }
-
-    @Override
-    public Clock withZone(ZoneId zone) {
-      return this;
-    }
-
-    @Override
-    public synchronized Instant instant() {
-      now = now.plus(Duration.ofMinutes(1));
-      return now;
-    }
+  /** A clock that moves on one minute each time it is read, from 1 March 2026, 09:00 UTC. */
+  static SteppingClock steppingClock() {
+    return new SteppingClock(Instant.parse("2026-03-01T09:00:00Z"), Duration.ofMinutes(1));
   }
 
   /**
@@ -134,7 +115,7 @@ final class ReportFixture {
 
   /** Opens a new history in {@code folder}, stores the case and returns its report. */
   static CaseReport report(Path folder, int readings) {
-    SteppingClock clock = new SteppingClock();
+    SteppingClock clock = steppingClock();
     try (HistoryStore store = SqliteHistory.open(folder.resolve("history.db"), clock)) {
       String id = storeCase(store, clock, readings);
       return CaseReport.read(store, id, GENERATED, "test build");

@@ -50,9 +50,6 @@ public final class SchematicDrawing extends Region {
   private Map<String, String> measured = Map.of();
   private Box extent = new Box(0, 0, 1, 1);
 
-  /** The least room a title is given in the legend before it is cut, layout units. */
-  private static final double MIN_TITLE_ROOM = 480;
-
   /** The stage's title as the legend shows it ({@link Titles#fitted}). */
   private String shownTitle = "";
 
@@ -324,10 +321,7 @@ public final class SchematicDrawing extends Region {
     }
     // A long title is cut to about the sheet's width rather than widening (and so shrinking) it.
     shownTitle =
-        Titles.fitted(
-            stage == null ? "" : stage.title(),
-            Math.max(MIN_TITLE_ROOM, all.w()),
-            t -> measure(t, 15, true));
+        Titles.fitted(stage == null ? "" : stage.title(), all.w(), t -> measure(t, 15, true));
     extent =
         new Box(
             all.x(),
@@ -339,9 +333,8 @@ public final class SchematicDrawing extends Region {
   /** Returns the width of the legend line drawn by {@link #drawLegend}. */
   private double legendWidth() {
     double width = 0;
-    String title = shownTitle;
-    if (!title.isEmpty()) {
-      width += measure(title, 15, true) + 24;
+    if (!shownTitle.isEmpty()) {
+      width += measure(shownTitle, 15, true) + 24;
     }
     if (!first.isEmpty()) {
       width += 19 + measure("expected", 14, false) + 18;
@@ -446,10 +439,9 @@ public final class SchematicDrawing extends Region {
   private void drawLegend() {
     double y = extent.y() + 4;
     double x = extent.x();
-    String title = shownTitle;
-    if (!title.isEmpty()) {
-      content.getChildren().add(text(title, Palette.bold(15), Palette.INK, x, y));
-      x += measure(title, 15, true) + 24;
+    if (!shownTitle.isEmpty()) {
+      content.getChildren().add(text(shownTitle, Palette.bold(15), Palette.INK, x, y));
+      x += measure(shownTitle, 15, true) + 24;
     }
     if (!first.isEmpty()) {
       x = legendEntry("expected", Palette.EXPECTED, null, x, y);

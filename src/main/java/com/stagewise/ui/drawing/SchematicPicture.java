@@ -88,13 +88,9 @@ public final class SchematicPicture {
     }
   }
 
-  /** The least room a title is given before it is cut, layout units. */
-  private static final double MIN_TITLE_ROOM = 560;
-
   /** The title as the picture shows it: cut to about the sheet's width ({@link Titles#fitted}). */
   private static String title(Stage stage, Sheet sheet) {
-    return Titles.fitted(
-        stage.title(), Math.max(MIN_TITLE_ROOM, sheet.bounds().w()), t -> measure(t, TITLE, true));
+    return Titles.fitted(stage.title(), sheet.bounds().w(), t -> measure(t, TITLE, true));
   }
 
   private static Box frame(Stage stage, Sheet sheet) {

@@ -8,10 +8,20 @@ import java.util.function.ToDoubleFunction;
  * wide as the sheet's 200 characters would shrink the whole schematic to a strip.
  */
 final class Titles {
+  /**
+   * The least room a title is given before it is cut, layout units: every sheet's title we have (55
+   * characters at most) fits whole at the drawings' 15 px bold.
+   */
+  static final double LEAST_ROOM = 520;
+
   private Titles() {}
 
-  /** The title, or its longest start that fits {@code room} with "…" added. */
+  /**
+   * The title, or its longest start that fits {@code room} (at least {@link #LEAST_ROOM}) with "…"
+   * added.
+   */
   static String fitted(String title, double room, ToDoubleFunction<String> width) {
+    room = Math.max(room, LEAST_ROOM);
     if (title.isEmpty() || width.applyAsDouble(title) <= room) {
       return title;
     }

@@ -10,12 +10,14 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.stagewise.circuit.InvalidInputException;
 import com.stagewise.history.ExportSelection;
 import com.stagewise.history.HistoryStore;
+import com.stagewise.history.SteppingClock;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.HistoryBundle;
 import com.stagewise.history.record.Unit;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.time.Instant;
 import java.util.List;
 import java.util.function.Consumer;
@@ -32,8 +34,8 @@ import org.junit.jupiter.params.provider.MethodSource;
  */
 class HistoryBundleRefusalTest {
   @TempDir Path folder;
-  private final HistoryFixtures.TickingClock clock =
-      new HistoryFixtures.TickingClock(Instant.parse("2026-02-01T08:00:00Z"));
+  private final SteppingClock clock =
+      new SteppingClock(Instant.parse("2026-02-01T08:00:00Z"), Duration.ofMillis(1));
 
   static Stream<Arguments> hostileBundles() {
     return Stream.of(

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.stagewise.history.ExportSelection;
 import com.stagewise.history.HistoryStore;
 import com.stagewise.history.ImportReport;
+import com.stagewise.history.SteppingClock;
 import com.stagewise.history.record.BoardModel;
 import com.stagewise.history.record.CaseStatus;
 import com.stagewise.history.record.HistoryBundle;
@@ -14,6 +15,7 @@ import com.stagewise.history.record.Unit;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.time.Instant;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -26,8 +28,8 @@ class HistoryExchangeTest {
   static final String AWKWARD_SERIAL = HistoryFixtures.AWKWARD_SERIAL;
 
   @TempDir Path folder;
-  private final HistoryFixtures.TickingClock clock =
-      new HistoryFixtures.TickingClock(Instant.parse("2026-02-01T08:00:00Z"));
+  private final SteppingClock clock =
+      new SteppingClock(Instant.parse("2026-02-01T08:00:00Z"), Duration.ofMillis(1));
 
   @Test
   void exportThenImport_intoEmptyHistory_bringsEverythingExactly() {

@@ -15,8 +15,6 @@ import com.stagewise.history.sqlite.SqliteHistory;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
-import java.time.ZoneId;
-import java.time.ZoneOffset;
 import java.util.List;
 
 /** What the history exchange tests share: a sheet, awkward texts, a filled history, a clock. */
@@ -111,30 +109,5 @@ final class HistoryFixtures {
         b.suspectLists(),
         b.actions(),
         b.notes());
-  }
-
-  /** A clock that moves one millisecond every time it is read, so every record has its own time. */
-  static final class TickingClock extends Clock {
-    private Instant now;
-
-    TickingClock(Instant start) {
-      now = start;
-    }
-
-    @Override
-    public ZoneId getZone() {
-      return ZoneOffset.UTC;
-    }
-
-    @Override
-    public Clock withZone(ZoneId zone) {
-      return this;
-    }
-
-    @Override
-    public synchronized Instant instant() {
-      now = now.plusMillis(1);
-      return now;
-    }
   }
 }
