@@ -19,7 +19,7 @@ final class Likelihoods {
 
   private final Evidence evidence;
 
-  /** Every prediction, hypothesis by hypothesis in list order, in the order of {@link #of}. */
+  /** Every prediction, hypothesis by hypothesis in list order, in the order of {@link #sums}. */
   private final Prediction[] all;
 
   private final int[] first;
